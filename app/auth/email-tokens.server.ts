@@ -1,0 +1,59 @@
+import { createHash, randomBytes } from "node:crypto";
+import { and, eq, gt, isNull } from "drizzle-orm";
+import { db } from "~/db/client.server";
+import { emailTokens } from "~/db/schema";
+
+export type EmailTokenPurpose = "invitation" | "password-reset";
+
+export const tokenLifetimeMs: Record<EmailTokenPurpose, number> = {
+  "password-reset": 30 * 60 * 1000,
+  invitation: 7 * 24 * 60 * 60 * 1000,
+};
+
+export function hashToken(token: string): string {
+  return createHash("sha256").update(token).digest("hex");
+}
+
+/** Creates a single-use token; only its hash is stored. Earlier unused ones of the same purpose end. */
+export async function createEmailToken(
+  userId: string,
+  purpose: EmailTokenPurpose,
+): Promise<string> {
+  const token = randomBytes(32).toString("base64url");
+  const now = new Date();
+  await db.transaction(async (tx) => {
+    await tx
+      .update(emailTokens)
+      .set({ usedAt: now })
+      .where(
+        and(
+          eq(emailTokens.userId, userId),
+          eq(emailTokens.purpose, purpose),
+          isNull(emailTokens.usedAt),
+        ),
+      );
+    await tx.insert(emailTokens).values({
+      userId,
+      purpose,
+      tokenHash: hashToken(token),
+      expiresAt: new Date(now.getTime() + tokenLifetimeMs[purpose]),
+    });
+  });
+  return token;
+}
+
+/** The token's row when it is unused and unexpired, else null. Does not use it up. */
+export async function findUsableToken(token: string) {
+  const [row] = await db
+    .select()
+    .from(emailTokens)
+    .where(
+      and(
+        eq(emailTokens.tokenHash, hashToken(token)),
+        isNull(emailTokens.usedAt),
+        gt(emailTokens.expiresAt, new Date()),
+      ),
+    )
+    .limit(1);
+  return row ?? null;
+}

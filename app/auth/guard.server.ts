@@ -1,0 +1,64 @@
+/**
+ * The one guard module. Every loader, action and API route calls
+ * requireUser or requireRole first; hiding a control in the UI is not a check.
+ * Pages get a redirect to sign-in or a 403 page; API routes (/api/…) get JSON.
+ */
+import { data, redirect } from "react-router";
+import { isDatabaseUnavailable } from "~/db/database-errors";
+import { userHasRole, type Role } from "~/lib/roles";
+import { getSessionState, type SessionUser } from "./session.server";
+
+function isApiRequest(request: Request): boolean {
+  return new URL(request.url).pathname.startsWith("/api/");
+}
+
+export function databaseUnavailable(request: Request): never {
+  const message = "The database is unavailable. Try again in a moment.";
+  if (isApiRequest(request)) {
+    throw Response.json(
+      { error: { message } },
+      { status: 503, headers: { "Retry-After": "5" } },
+    );
+  }
+  throw data({ message }, { status: 503, headers: { "Retry-After": "5" } });
+}
+
+/** The signed-in user, or null; turns a database outage into a 503. */
+export async function getOptionalUser(request: Request): Promise<SessionUser | null> {
+  try {
+    return (await getSessionState(request)).user;
+  } catch (error) {
+    if (isDatabaseUnavailable(error)) databaseUnavailable(request);
+    throw error;
+  }
+}
+
+/** The signed-in user; otherwise a redirect to sign-in (pages) or 401 (API). */
+export async function requireUser(request: Request): Promise<SessionUser> {
+  const user = await getOptionalUser(request);
+  if (user) return user;
+  if (isApiRequest(request)) {
+    throw Response.json(
+      { error: { message: "Sign in first: send the session cookie or a bearer token." } },
+      { status: 401 },
+    );
+  }
+  const url = new URL(request.url);
+  const back = `${url.pathname}${url.search}`;
+  const target = back === "/" ? "/sign-in" : `/sign-in?redirectTo=${encodeURIComponent(back)}`;
+  throw redirect(target);
+}
+
+/** The signed-in user when they hold one of the roles (admins always pass); else 403. */
+export async function requireRole(
+  request: Request,
+  allowed: readonly Role[],
+): Promise<SessionUser> {
+  const user = await requireUser(request);
+  if (userHasRole(user, allowed)) return user;
+  const message = `This needs the role ${allowed.join(" or ")}.`;
+  if (isApiRequest(request)) {
+    throw Response.json({ error: { message } }, { status: 403 });
+  }
+  throw data({ message }, { status: 403 });
+}

@@ -1,0 +1,34 @@
+import { DrizzleMySQLAdapter } from "@lucia-auth/adapter-drizzle";
+import { Lucia, TimeSpan } from "lucia";
+import { db } from "~/db/client.server";
+import { sessions, users } from "~/db/schema";
+
+const adapter = new DrizzleMySQLAdapter(db, sessions, users);
+
+/** Session cookies are Secure in production unless COOKIE_SECURE=0 (plain-HTTP test rigs). */
+function cookieIsSecure(): boolean {
+  if (process.env.COOKIE_SECURE !== undefined) return process.env.COOKIE_SECURE !== "0";
+  return process.env.NODE_ENV === "production";
+}
+
+export const lucia = new Lucia(adapter, {
+  sessionExpiresIn: new TimeSpan(14, "d"),
+  sessionCookie: {
+    name: "turnledger_session",
+    attributes: { secure: cookieIsSecure(), sameSite: "lax", path: "/" },
+  },
+  getUserAttributes(attributes) {
+    return {
+      email: attributes.email,
+      name: attributes.name,
+      active: attributes.active,
+    };
+  },
+});
+
+declare module "lucia" {
+  interface Register {
+    Lucia: typeof lucia;
+    DatabaseUserAttributes: { email: string; name: string; active: boolean };
+  }
+}

@@ -1,0 +1,36 @@
+/** Helpers shared by the JSON API routes under /api/v1: one error shape everywhere. */
+import type { z } from "zod";
+
+export function apiError(
+  status: number,
+  message: string,
+  fields?: Record<string, string[]>,
+  headers?: HeadersInit,
+): Response {
+  return Response.json({ error: fields ? { message, fields } : { message } }, { status, headers });
+}
+
+/** Reads and validates a JSON body; throws a 400 answer naming each bad field. */
+export async function readJsonBody<Schema extends z.ZodType>(
+  request: Request,
+  schema: Schema,
+): Promise<z.infer<Schema>> {
+  let body: unknown;
+  try {
+    body = await request.json();
+  } catch {
+    throw apiError(400, "The body must be JSON (Content-Type: application/json).");
+  }
+  const parsed = schema.safeParse(body);
+  if (parsed.success) return parsed.data;
+  const fields: Record<string, string[]> = {};
+  for (const issue of parsed.error.issues) {
+    const key = issue.path.join(".") || "body";
+    (fields[key] ??= []).push(issue.message);
+  }
+  throw apiError(400, "Some fields are missing or wrong.", fields);
+}
+
+export function methodNotAllowed(allowed: string[]): Response {
+  return apiError(405, `Use ${allowed.join(" or ")} here.`, undefined, { Allow: allowed.join(", ") });
+}

@@ -1,0 +1,93 @@
+/**
+ * The one mailer. Every message is written to the outbox table first, then
+ * handed to SMTP; a message the SMTP server did not accept stays unsent and
+ * `npm run mail:retry` sends it later. Sending never throws to the caller.
+ */
+import { and, asc, eq, isNull, lt } from "drizzle-orm";
+import nodemailer, { type Transporter } from "nodemailer";
+import { db } from "~/db/client.server";
+import { mailOutbox } from "~/db/schema";
+
+export const defaultSmtpUrl = "smtp://127.0.0.1:2525";
+
+let transporter: Transporter | undefined;
+function smtp(): Transporter {
+  const url = new URL(process.env.SMTP_URL || defaultSmtpUrl);
+  transporter ??= nodemailer.createTransport({
+    host: url.hostname,
+    port: Number(url.port || (url.protocol === "smtps:" ? 465 : 587)),
+    secure: url.protocol === "smtps:",
+    auth: url.username
+      ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) }
+      : undefined,
+    connectionTimeout: 5_000,
+    greetingTimeout: 5_000,
+    socketTimeout: 10_000,
+  });
+  return transporter;
+}
+
+const fromAddress = () => process.env.MAIL_FROM || "Turnledger <no-reply@turnledger.test>";
+
+export interface OutgoingMail {
+  to: string;
+  subject: string;
+  text: string;
+}
+
+interface QueuedMessage {
+  id: number;
+  toAddress: string;
+  subject: string;
+  textBody: string;
+  attempts: number;
+}
+
+/** Hands one queued message to SMTP and records the outcome on its outbox row. */
+async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
+  const attempts = message.attempts + 1;
+  try {
+    await smtp().sendMail({
+      from: fromAddress(),
+      to: message.toAddress,
+      subject: message.subject,
+      text: message.textBody,
+    });
+    await db
+      .update(mailOutbox)
+      .set({ sentAt: new Date(), lastError: null, attempts })
+      .where(eq(mailOutbox.id, message.id));
+    return true;
+  } catch (error) {
+    const reason = error instanceof Error ? error.message : String(error);
+    console.warn(`[mail] message ${message.id} to ${message.toAddress} not sent: ${reason}`);
+    await db
+      .update(mailOutbox)
+      .set({ lastError: reason.slice(0, 500), attempts })
+      .where(eq(mailOutbox.id, message.id));
+    return false;
+  }
+}
+
+/** Queues a message and tries to send it at once. Returns true when SMTP accepted it. */
+export async function sendMail(mail: OutgoingMail): Promise<boolean> {
+  const queued = { toAddress: mail.to, subject: mail.subject, textBody: mail.text };
+  const [inserted] = await db.insert(mailOutbox).values(queued).$returningId();
+  if (!inserted) throw new Error("The outbox did not return the new message's id.");
+  return attemptDelivery({ ...queued, id: inserted.id, attempts: 0 });
+}
+
+/** Tries every unsent message again, oldest first. */
+export async function retryUnsentMail(maxMessages = 500): Promise<{ sent: number; failed: number }> {
+  const unsent = await db
+    .select()
+    .from(mailOutbox)
+    .where(and(isNull(mailOutbox.sentAt), lt(mailOutbox.attempts, 50)))
+    .orderBy(asc(mailOutbox.createdAt))
+    .limit(maxMessages);
+  let sent = 0;
+  for (const message of unsent) {
+    if (await attemptDelivery(message)) sent += 1;
+  }
+  return { sent, failed: unsent.length - sent };
+}

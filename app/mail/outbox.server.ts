@@ -1,0 +1,26 @@
+import { count, desc } from "drizzle-orm";
+import { db } from "~/db/client.server";
+import { mailOutbox } from "~/db/schema";
+
+export const outboxPageSize = 50;
+
+/** The outbox newest first, a page at a time, and the number of messages in all. */
+export async function listOutbox(page: number, pageSize = outboxPageSize) {
+  const [total] = await db.select({ messages: count() }).from(mailOutbox);
+  const messages = await db
+    .select({
+      id: mailOutbox.id,
+      to: mailOutbox.toAddress,
+      subject: mailOutbox.subject,
+      text: mailOutbox.textBody,
+      createdAt: mailOutbox.createdAt,
+      sentAt: mailOutbox.sentAt,
+      attempts: mailOutbox.attempts,
+      lastError: mailOutbox.lastError,
+    })
+    .from(mailOutbox)
+    .orderBy(desc(mailOutbox.createdAt), desc(mailOutbox.id))
+    .limit(pageSize)
+    .offset((page - 1) * pageSize);
+  return { total: total?.messages ?? 0, messages };
+}

@@ -1,0 +1,27 @@
+import { type RouteConfig, index, layout, prefix, route } from "@react-router/dev/routes";
+
+export default [
+  // Pages for signed-in people, inside the app shell.
+  layout("routes/app-shell.tsx", [
+    index("routes/home.tsx"),
+    route("admin/people", "routes/admin-people.tsx"),
+    route("admin/people/:userId", "routes/admin-person.tsx"),
+    route("admin/outbox", "routes/admin-outbox.tsx"),
+  ]),
+
+  // Account pages anyone can reach.
+  route("sign-in", "routes/sign-in.tsx"),
+  route("sign-out", "routes/sign-out.tsx"),
+  route("forgot-password", "routes/forgot-password.tsx"),
+  route("set-password", "routes/set-password.tsx"),
+
+  // Machine-readable routes.
+  route("healthz", "routes/healthz.ts"),
+  ...prefix("api/v1", [
+    route("sessions", "routes/api.v1.sessions.ts"),
+    route("me", "routes/api.v1.me.ts"),
+    route("outbox", "routes/api.v1.outbox.ts"),
+  ]),
+
+  route("*", "routes/not-found.tsx"),
+] satisfies RouteConfig;

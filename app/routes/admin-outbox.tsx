@@ -1,0 +1,70 @@
+import { createColumnHelper } from "@tanstack/react-table";
+import type { Route } from "./+types/admin-outbox";
+import { requireRole } from "~/auth/guard.server";
+import { DataTable } from "~/components/data-table";
+import { formatDateTime, pageFromSearch } from "~/lib/format";
+import { listOutbox, outboxPageSize } from "~/mail/outbox.server";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireRole(request, ["admin"]);
+  const page = pageFromSearch(new URL(request.url).searchParams.get("page"));
+  const { total, messages } = await listOutbox(page);
+  return { messages, page, pageCount: Math.max(1, Math.ceil(total / outboxPageSize)), total };
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Outbox · Turnledger" }];
+
+type Message = Route.ComponentProps["loaderData"]["messages"][number];
+const column = createColumnHelper<Message>();
+const columns = [
+  column.accessor("createdAt", {
+    header: "Written",
+    cell: (info) => <span className="whitespace-nowrap">{formatDateTime(info.getValue())}</span>,
+  }),
+  column.accessor("to", { header: "To" }),
+  column.display({
+    id: "message",
+    header: "Message",
+    cell: ({ row }) => (
+      <details>
+        <summary className="cursor-pointer font-medium">{row.original.subject}</summary>
+        <pre className="mt-2 whitespace-pre-wrap font-sans text-graphite-700">{row.original.text}</pre>
+      </details>
+    ),
+  }),
+  column.display({
+    id: "state",
+    header: "Sent",
+    cell: ({ row }) =>
+      row.original.sentAt ? (
+        <span className="whitespace-nowrap">{formatDateTime(row.original.sentAt)}</span>
+      ) : (
+        <span className="text-caution" title={row.original.lastError ?? undefined}>
+          Waiting ({row.original.attempts} {row.original.attempts === 1 ? "try" : "tries"})
+        </span>
+      ),
+  }),
+];
+
+export default function AdminOutbox({ loaderData }: Route.ComponentProps) {
+  return (
+    <section aria-labelledby="outbox-heading">
+      <h1 id="outbox-heading" className="text-2xl font-semibold">
+        Outbox
+      </h1>
+      <p className="mb-4 mt-1 text-graphite-500">
+        Every e-mail Turnledger has written, newest first ({loaderData.total} in all). Unsent
+        ones go out with <code>npm run mail:retry</code>.
+      </p>
+      <DataTable
+        caption="E-mail sent by Turnledger"
+        columns={columns}
+        rows={loaderData.messages}
+        page={loaderData.page}
+        pageCount={loaderData.pageCount}
+        pageHref={(page) => `?page=${page}`}
+        emptyText="No e-mail yet."
+      />
+    </section>
+  );
+}

@@ -1,0 +1,150 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { createColumnHelper } from "@tanstack/react-table";
+import { data, Form, Link, useNavigation } from "react-router";
+import type { Route } from "./+types/admin-people";
+import { requireRole } from "~/auth/guard.server";
+import { isDuplicateKey } from "~/db/database-errors";
+import { DataTable } from "~/components/data-table";
+import { RoleCheckboxes } from "~/components/role-checkboxes";
+import { FormMessages, TextField } from "~/components/text-field";
+import { appUrl } from "~/lib/app-url.server";
+import { formatDateTime, pageFromSearch } from "~/lib/format";
+import { inviteSchema } from "~/lib/people-schemas";
+import { roleLabels } from "~/lib/roles";
+import { emailIsTaken, invitePerson, listPeople, peoplePageSize } from "~/people/people.server";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireRole(request, ["admin"]);
+  const page = pageFromSearch(new URL(request.url).searchParams.get("page"));
+  const { total, people } = await listPeople(page);
+  return { people, page, pageCount: Math.max(1, Math.ceil(total / peoplePageSize)) };
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const admin = await requireRole(request, ["admin"]);
+  const submission = await parseWithZod(await request.formData(), {
+    schema: inviteSchema.superRefine(async (value, context) => {
+      if (await emailIsTaken(value.email)) {
+        context.addIssue({
+          code: "custom",
+          path: ["email"],
+          message: "Someone already has an account with this e-mail.",
+        });
+      }
+    }),
+    async: true,
+  });
+  if (submission.status !== "success") {
+    return data({ result: submission.reply(), invited: null }, { status: 400 });
+  }
+  let mailSent: boolean;
+  try {
+    ({ mailSent } = await invitePerson({
+      ...submission.value,
+      invitedBy: admin.name,
+      appUrl: appUrl(request),
+    }));
+  } catch (error) {
+    if (!isDuplicateKey(error)) throw error;
+    const result = submission.reply({
+      fieldErrors: { email: ["Someone already has an account with this e-mail."] },
+    });
+    return data({ result, invited: null }, { status: 409 });
+  }
+  return {
+    result: submission.reply({ resetForm: true }),
+    invited: { email: submission.value.email, mailSent },
+  };
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "People · Turnledger" }];
+
+type Person = Route.ComponentProps["loaderData"]["people"][number];
+const column = createColumnHelper<Person>();
+const columns = [
+  column.accessor("name", {
+    header: "Name",
+    cell: (info) => (
+      <Link
+        to={`/admin/people/${info.row.original.id}`}
+        className="font-medium text-copper-700 underline-offset-2 hover:underline"
+      >
+        {info.getValue()}
+      </Link>
+    ),
+  }),
+  column.accessor("email", { header: "E-mail" }),
+  column.accessor("roles", {
+    header: "Roles",
+    cell: (info) => info.getValue().map((role) => roleLabels[role]).join(", ") || "—",
+  }),
+  column.display({
+    id: "state",
+    header: "State",
+    cell: ({ row }) =>
+      !row.original.active ? (
+        <span className="text-danger">Deactivated</span>
+      ) : row.original.hasPassword ? (
+        "Active"
+      ) : (
+        <span className="text-caution">Invited, no password yet</span>
+      ),
+  }),
+  column.accessor("createdAt", {
+    header: "Since",
+    cell: (info) => formatDateTime(info.getValue()),
+  }),
+];
+
+export default function AdminPeople({ loaderData, actionData }: Route.ComponentProps) {
+  const navigation = useNavigation();
+  const [form, fields] = useForm({
+    id: "invite",
+    lastResult: actionData?.result,
+    constraint: getZodConstraint(inviteSchema),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+    onValidate({ formData }) {
+      return parseWithZod(formData, { schema: inviteSchema });
+    },
+  });
+  return (
+    <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
+      <section aria-labelledby="people-heading">
+        <h1 id="people-heading" className="mb-4 text-2xl font-semibold">
+          People
+        </h1>
+        <DataTable
+          caption="People with an account"
+          columns={columns}
+          rows={loaderData.people}
+          page={loaderData.page}
+          pageCount={loaderData.pageCount}
+          pageHref={(page) => `?page=${page}`}
+        />
+      </section>
+      <section aria-labelledby="invite-heading" className="panel h-fit">
+        <h2 id="invite-heading" className="mb-3 text-lg font-semibold">
+          Invite someone
+        </h2>
+        {actionData?.invited ? (
+          <p role="status" className="mb-3 rounded-md bg-ok/10 px-3 py-2 text-sm text-ok">
+            {actionData.invited.mailSent
+              ? `Invitation sent to ${actionData.invited.email}.`
+              : `Account created for ${actionData.invited.email}; the e-mail could not be sent yet and waits in the outbox.`}
+          </p>
+        ) : null}
+        <Form method="post" {...getFormProps(form)} className="space-y-4">
+          <FormMessages id={form.errorId} errors={form.errors} />
+          <TextField field={fields.name} label="Name" autoComplete="off" />
+          <TextField field={fields.email} label="E-mail" type="email" autoComplete="off" />
+          <RoleCheckboxes field={fields.roles} />
+          <button type="submit" className="button-primary w-full" disabled={navigation.state !== "idle"}>
+            Send invitation
+          </button>
+        </Form>
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,146 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { data, Form, Link, useNavigation } from "react-router";
+import type { Route } from "./+types/admin-person";
+import { createEmailToken } from "~/auth/email-tokens.server";
+import { requireRole } from "~/auth/guard.server";
+import { RoleCheckboxes } from "~/components/role-checkboxes";
+import { FormMessages } from "~/components/text-field";
+import { appUrl } from "~/lib/app-url.server";
+import { personUpdateSchema } from "~/lib/people-schemas";
+import { invitationMessage } from "~/mail/account-messages";
+import { sendMail } from "~/mail/mailer.server";
+import { countActiveAdmins, findPerson, setActive, setRoles } from "~/people/people.server";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const admin = await requireRole(request, ["admin"]);
+  const person = await findPerson(params.userId);
+  if (!person) throw data({ message: "No such person." }, { status: 404 });
+  return { person, isSelf: person.id === admin.id };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const admin = await requireRole(request, ["admin"]);
+  const person = await findPerson(params.userId);
+  if (!person) throw data({ message: "No such person." }, { status: 404 });
+  const submission = parseWithZod(await request.formData(), { schema: personUpdateSchema });
+  if (submission.status !== "success") {
+    return data({ result: submission.reply(), done: null }, { status: 400 });
+  }
+  const refuse = (message: string) =>
+    data({ result: submission.reply({ formErrors: [message] }), done: null }, { status: 409 });
+  const change = submission.value;
+  const wouldLoseAdmin =
+    person.active &&
+    person.roles.includes("admin") &&
+    (change.intent === "deactivate" ||
+      (change.intent === "save-roles" && !change.roles.includes("admin")));
+  if (wouldLoseAdmin && (await countActiveAdmins()) <= 1) {
+    return refuse("Turnledger needs at least one active admin: make someone else admin first.");
+  }
+  if (change.intent === "deactivate" && person.id === admin.id) {
+    return refuse("You cannot deactivate yourself.");
+  }
+
+  switch (change.intent) {
+    case "save-roles":
+      await setRoles(person.id, change.roles);
+      return { result: submission.reply(), done: "Roles saved." };
+    case "deactivate":
+      await setActive(person.id, false);
+      return { result: submission.reply(), done: `${person.name} is deactivated and signed out everywhere.` };
+    case "reactivate":
+      await setActive(person.id, true);
+      return { result: submission.reply(), done: `${person.name} can sign in again.` };
+    case "resend-invitation": {
+      const token = await createEmailToken(person.id, "invitation");
+      const sent = await sendMail({
+        to: person.email,
+        ...invitationMessage({
+          name: person.name,
+          invitedBy: admin.name,
+          link: `${appUrl(request)}/set-password?token=${token}`,
+        }),
+      });
+      return {
+        result: submission.reply(),
+        done: sent ? "A new link is on its way; earlier links no longer work." : "The e-mail waits in the outbox: SMTP did not accept it.",
+      };
+    }
+  }
+}
+
+export const meta: Route.MetaFunction = ({ data: loaderData }) => [
+  { title: `${loaderData?.person.name ?? "Person"} · People · Turnledger` },
+];
+
+export default function AdminPerson({ loaderData, actionData }: Route.ComponentProps) {
+  const { person, isSelf } = loaderData;
+  const navigation = useNavigation();
+  const [form, fields] = useForm({
+    id: `roles-${person.id}`,
+    lastResult: actionData?.result,
+    defaultValue: { intent: "save-roles", roles: person.roles },
+    constraint: getZodConstraint(personUpdateSchema),
+    shouldValidate: "onSubmit",
+    onValidate({ formData }) {
+      return parseWithZod(formData, { schema: personUpdateSchema });
+    },
+  });
+  return (
+    <div className="max-w-2xl space-y-6">
+      <p className="text-sm">
+        <Link to="/admin/people" className="text-copper-700 underline underline-offset-2">
+          ← People
+        </Link>
+      </p>
+      <div>
+        <h1 className="text-2xl font-semibold">{person.name}</h1>
+        <p className="text-graphite-500">
+          {person.email} · {person.active ? "active" : "deactivated"}
+        </p>
+      </div>
+      {actionData?.done ? (
+        <p role="status" className="rounded-md bg-ok/10 px-3 py-2 text-sm text-ok">
+          {actionData.done}
+        </p>
+      ) : null}
+      <FormMessages id={form.errorId} errors={form.errors} />
+      <Form method="post" {...getFormProps(form)} className="panel space-y-4">
+        <RoleCheckboxes field={fields.roles} legend="Roles" />
+        <button
+          type="submit"
+          name="intent"
+          value="save-roles"
+          className="button-primary"
+          disabled={navigation.state !== "idle"}
+        >
+          Save roles
+        </button>
+      </Form>
+      <Form method="post" className="panel flex flex-wrap items-center gap-3">
+        {person.active ? (
+          <>
+            <p className="flex-1 text-sm text-graphite-700">
+              Deactivating ends {isSelf ? "your" : "their"} sessions at once; the history they
+              made stays.
+            </p>
+            <button type="submit" name="intent" value="deactivate" className="button-quiet text-danger" disabled={isSelf}>
+              Deactivate
+            </button>
+          </>
+        ) : (
+          <>
+            <p className="flex-1 text-sm text-graphite-700">This person cannot sign in.</p>
+            <button type="submit" name="intent" value="reactivate" className="button-quiet">
+              Reactivate
+            </button>
+          </>
+        )}
+        <button type="submit" name="intent" value="resend-invitation" className="button-quiet">
+          Send a new invitation link
+        </button>
+      </Form>
+    </div>
+  );
+}

@@ -1,0 +1,74 @@
+import { data, Form, NavLink, Outlet } from "react-router";
+import type { Route } from "./+types/app-shell";
+import { requireUser } from "~/auth/guard.server";
+import { sessionHeaders } from "~/auth/session-headers.server";
+import { navigationItems } from "~/lib/navigation";
+import { roleLabels, userHasRole } from "~/lib/roles";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  return data({ user }, { headers: await sessionHeaders(request) });
+}
+
+export default function AppShell({ loaderData }: Route.ComponentProps) {
+  const { user } = loaderData;
+  const items = navigationItems.filter(
+    (item) => item.roles.length === 0 || userHasRole(user, item.roles),
+  );
+  return (
+    <div className="flex min-h-screen flex-col">
+      <header className="border-b border-graphite-800 bg-graphite-900 text-graphite-50">
+        <div className="mx-auto flex max-w-7xl items-center gap-8 px-6 py-3">
+          <a href="/" className="flex items-center gap-2 text-lg font-semibold tracking-tight">
+            <img src="/favicon.svg" alt="" className="h-7 w-7" />
+            Turnledger
+          </a>
+          <nav aria-label="Main" className="flex-1">
+            <ul className="flex flex-wrap gap-1">
+              {items.map((item) => (
+                <li key={item.to}>
+                  <NavLink
+                    to={item.to}
+                    end={item.to === "/"}
+                    className={({ isActive }) =>
+                      `rounded-md px-3 py-1.5 text-sm font-medium ${
+                        isActive
+                          ? "bg-copper-600 text-white"
+                          : "text-graphite-100 hover:bg-graphite-800"
+                      }`
+                    }
+                  >
+                    {item.label}
+                  </NavLink>
+                </li>
+              ))}
+            </ul>
+          </nav>
+          <div className="flex items-center gap-4 text-sm">
+            <span>
+              <span className="font-medium">{user.name}</span>
+              <span className="ml-2 text-graphite-300">
+                {user.roles.map((role) => roleLabels[role]).join(" · ")}
+              </span>
+            </span>
+            <Form method="post" action="/sign-out">
+              <button
+                type="submit"
+                className="rounded-md border border-graphite-500 px-3 py-1 text-graphite-100 hover:border-copper-300"
+              >
+                Sign out
+              </button>
+            </Form>
+          </div>
+        </div>
+      </header>
+      <main className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">
+        <Outlet />
+      </main>
+      <footer className="border-t border-rule py-4 text-center text-xs text-graphite-500">
+        Turnledger · figures are first-order engineering estimates; electrical safety and
+        insulation follow local codes and licensed practice.
+      </footer>
+    </div>
+  );
+}

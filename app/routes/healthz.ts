@@ -1,0 +1,20 @@
+import { sql } from "drizzle-orm";
+import { db } from "~/db/client.server";
+
+/** GET /healthz → { status, database } for load balancers: 200 when the database answers, else 503. */
+export async function loader() {
+  const started = performance.now();
+  try {
+    await db.execute(sql`SELECT 1`);
+    return Response.json(
+      { status: "ok", database: { state: "up", latencyMs: Math.round(performance.now() - started) } },
+      { headers: { "Cache-Control": "no-store" } },
+    );
+  } catch (error) {
+    const reason = error instanceof Error ? error.message : String(error);
+    return Response.json(
+      { status: "unavailable", database: { state: "down", error: reason } },
+      { status: 503, headers: { "Cache-Control": "no-store", "Retry-After": "5" } },
+    );
+  }
+}

@@ -1,0 +1,89 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { data, Form, Link, redirect, useNavigation, useSearchParams } from "react-router";
+import type { Route } from "./+types/sign-in";
+import { getOptionalUser } from "~/auth/guard.server";
+import { startSession } from "~/auth/session.server";
+import { AccountCard } from "~/components/account-card";
+import { FormMessages, TextField } from "~/components/text-field";
+import { safeRedirectPath, signInSchema, wrongCredentialsMessage } from "~/lib/account-schemas";
+import { checkSignIn } from "~/people/people.server";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await getOptionalUser(request);
+  if (user) {
+    throw redirect(safeRedirectPath(new URL(request.url).searchParams.get("redirectTo")));
+  }
+  return null;
+}
+
+export async function action({ request, context }: Route.ActionArgs) {
+  await getOptionalUser(request); // reaches the database first: a 503 when it is down
+  const formData = await request.formData();
+  const submission = parseWithZod(formData, { schema: signInSchema });
+  if (submission.status !== "success") {
+    return data(submission.reply({ hideFields: ["password"] }), { status: 400 });
+  }
+  const { email, password, redirectTo } = submission.value;
+  const result = await checkSignIn(email, password, context.clientAddress);
+  if (result.kind === "throttled") {
+    const minutes = Math.ceil(result.retryAfterSeconds / 60);
+    return data(
+      submission.reply({
+        formErrors: [
+          `Too many failed attempts. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`,
+        ],
+        hideFields: ["password"],
+      }),
+      { status: 429, headers: { "Retry-After": String(result.retryAfterSeconds) } },
+    );
+  }
+  if (result.kind === "wrong-credentials") {
+    return data(
+      submission.reply({ formErrors: [wrongCredentialsMessage], hideFields: ["password"] }),
+      { status: 401 },
+    );
+  }
+  throw redirect(safeRedirectPath(redirectTo), {
+    headers: { "Set-Cookie": await startSession(result.userId) },
+  });
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Sign in · Turnledger" }];
+
+export default function SignIn({ actionData }: Route.ComponentProps) {
+  const [searchParams] = useSearchParams();
+  const navigation = useNavigation();
+  const [form, fields] = useForm({
+    lastResult: actionData,
+    constraint: getZodConstraint(signInSchema),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+    onValidate({ formData }) {
+      return parseWithZod(formData, { schema: signInSchema });
+    },
+  });
+  return (
+    <AccountCard title="Sign in">
+      <Form method="post" {...getFormProps(form)} className="space-y-4">
+        <FormMessages id={form.errorId} errors={form.errors} />
+        <input type="hidden" name="redirectTo" value={searchParams.get("redirectTo") ?? ""} />
+        <TextField field={fields.email} label="E-mail" type="email" autoComplete="username" />
+        <TextField
+          field={fields.password}
+          label="Password"
+          type="password"
+          autoComplete="current-password"
+        />
+        <button type="submit" className="button-primary w-full" disabled={navigation.state !== "idle"}>
+          Sign in
+        </button>
+      </Form>
+      <p className="mt-4 text-sm">
+        <Link to="/forgot-password" className="text-copper-700 underline underline-offset-2">
+          Forgotten your password?
+        </Link>
+      </p>
+    </AccountCard>
+  );
+}

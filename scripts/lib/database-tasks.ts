@@ -1,0 +1,44 @@
+import path from "node:path";
+import { drizzle, type MySql2Database } from "drizzle-orm/mysql2";
+import { migrate } from "drizzle-orm/mysql2/migrator";
+import mysql from "mysql2/promise";
+import { poolOptionsFromUrl } from "~/db/connection-options";
+import * as schema from "~/db/schema";
+import { demoPassword, demoPeople } from "../../seed/demo-people";
+import { databaseIsEmpty, seedDemoData } from "../../seed/seed-demo-data";
+import { projectRoot } from "./project-paths";
+
+async function withDatabase<T>(
+  databaseUrl: string,
+  work: (db: MySql2Database<typeof schema>) => Promise<T>,
+): Promise<T> {
+  const pool = mysql.createPool({ ...poolOptionsFromUrl(databaseUrl), connectionLimit: 2 });
+  try {
+    return await work(drizzle(pool, { schema, mode: "planetscale" }));
+  } finally {
+    await pool.end();
+  }
+}
+
+/** Applies the committed migrations in drizzle/ that the database has not had yet. */
+export function migrateDatabase(databaseUrl: string): Promise<void> {
+  return withDatabase(databaseUrl, (db) =>
+    migrate(db, { migrationsFolder: path.join(projectRoot, "drizzle") }),
+  );
+}
+
+/** Seeds the demo data when the database has no people. Returns true when it seeded. */
+export function seedWhenEmpty(databaseUrl: string, options = { quiet: false }): Promise<boolean> {
+  return withDatabase(databaseUrl, async (db) => {
+    if (!(await databaseIsEmpty(db))) return false;
+    await seedDemoData(db);
+    if (!options.quiet) {
+      console.log("[turnledger] demo data seeded. Sign in with any of these:");
+      for (const person of demoPeople) {
+        console.log(`    ${person.email.padEnd(30)} ${person.roles.join(", ")}`);
+      }
+      console.log(`  password: ${demoPassword()}`);
+    }
+    return true;
+  });
+}

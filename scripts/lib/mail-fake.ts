@@ -1,0 +1,100 @@
+/**
+ * The local SMTP fake for development and tests: a real SMTP server (the
+ * smtp-server package) on 127.0.0.1 that keeps every message it accepts, and
+ * a small HTTP endpoint that lists them, so tests read what truly went
+ * through SMTP. It delivers nothing anywhere.
+ */
+import http from "node:http";
+import type { AddressInfo } from "node:net";
+import { simpleParser } from "mailparser";
+import { SMTPServer } from "smtp-server";
+
+export interface ReceivedMessage {
+  to: string[];
+  from: string;
+  subject: string;
+  text: string;
+  receivedAt: string;
+}
+
+export interface MailFake {
+  smtpPort: number;
+  httpPort: number;
+  messages: ReceivedMessage[];
+  close(): Promise<void>;
+}
+
+function addressesOf(value: unknown): string[] {
+  const list = Array.isArray(value) ? value : value ? [value] : [];
+  return list.flatMap((entry: { value?: { address?: string }[] }) =>
+    (entry.value ?? []).map((address) => address.address ?? "").filter(Boolean),
+  );
+}
+
+export async function startMailFake(options: {
+  smtpPort: number;
+  httpPort: number;
+  quiet?: boolean;
+}): Promise<MailFake> {
+  const messages: ReceivedMessage[] = [];
+  const smtp = new SMTPServer({
+    authOptional: true,
+    disabledCommands: ["STARTTLS", "AUTH"],
+    banner: "Turnledger mail fake",
+    logger: false,
+    size: 10 * 1024 * 1024,
+    onData(stream, _session, callback) {
+      simpleParser(stream)
+        .then((parsed) => {
+          const message: ReceivedMessage = {
+            to: addressesOf(parsed.to),
+            from: addressesOf(parsed.from)[0] ?? "",
+            subject: parsed.subject ?? "",
+            text: parsed.text ?? "",
+            receivedAt: new Date().toISOString(),
+          };
+          messages.unshift(message);
+          if (messages.length > 5_000) messages.length = 5_000;
+          if (!options.quiet) {
+            console.log(`[mail fake] to ${message.to.join(", ")}: ${message.subject}`);
+          }
+          callback();
+        })
+        .catch((error: Error) => callback(error));
+    },
+  });
+  await new Promise<void>((resolve, reject) => {
+    smtp.once("error", reject);
+    smtp.listen(options.smtpPort, "127.0.0.1", () => resolve());
+  });
+
+  const api = http.createServer((request, response) => {
+    if (request.url?.startsWith("/messages")) {
+      if (request.method === "DELETE") {
+        messages.length = 0;
+        response.writeHead(204).end();
+        return;
+      }
+      response.writeHead(200, { "Content-Type": "application/json" });
+      response.end(JSON.stringify(messages));
+      return;
+    }
+    response.writeHead(404, { "Content-Type": "application/json" });
+    response.end(JSON.stringify({ error: "GET or DELETE /messages" }));
+  });
+  await new Promise<void>((resolve, reject) => {
+    api.once("error", reject);
+    api.listen(options.httpPort, "127.0.0.1", () => resolve());
+  });
+
+  return {
+    smtpPort: (smtp.server.address() as AddressInfo).port,
+    httpPort: (api.address() as AddressInfo).port,
+    messages,
+    close: () =>
+      Promise.all([
+        new Promise<void>((resolve) => smtp.close(() => resolve())),
+        new Promise<void>((resolve) => api.close(() => resolve())),
+      ]).then(() => undefined),
+  };
+}

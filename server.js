@@ -1,0 +1,45 @@
+// The HTTP server: Express in front of React Router, in development (with
+// Vite's dev middleware and hot reload) and in production (the built app).
+import express from "express";
+
+const developing = process.env.NODE_ENV === "development";
+const port = Number.parseInt(process.env.PORT || "3000", 10);
+const host = process.env.HOST || "0.0.0.0";
+
+const app = express();
+app.disable("x-powered-by");
+
+if (developing) {
+  const vite = await import("vite");
+  const viteDevServer = await vite.createServer({
+    server: { middlewareMode: true },
+  });
+  app.use(viteDevServer.middlewares);
+  app.use(async (request, response, next) => {
+    try {
+      const source = await viteDevServer.ssrLoadModule("./server/app.ts");
+      return await source.app(request, response, next);
+    } catch (error) {
+      if (error instanceof Error) viteDevServer.ssrFixStacktrace(error);
+      next(error);
+    }
+  });
+} else {
+  app.use(
+    "/assets",
+    express.static("build/client/assets", { immutable: true, maxAge: "1y" }),
+  );
+  app.use(express.static("build/client", { maxAge: "1h" }));
+  app.use(await import("./build/server/index.js").then((module) => module.app));
+}
+
+const server = app.listen(port, host, () => {
+  console.log(`[turnledger] serving http://localhost:${port}`);
+});
+
+for (const signal of ["SIGINT", "SIGTERM"]) {
+  process.on(signal, () => {
+    server.close(() => process.exit(0));
+    setTimeout(() => process.exit(0), 3_000).unref();
+  });
+}
