@@ -10,6 +10,9 @@ export async function loader({ request }: Route.LoaderArgs) {
   return data({ user }, { headers: await sessionHeaders(request) });
 }
 
+/** Sends a refreshed session cookie with the page. */
+export const headers: Route.HeadersFunction = ({ loaderHeaders }) => loaderHeaders;
+
 export default function AppShell({ loaderData }: Route.ComponentProps) {
   const { user } = loaderData;
   const items = navigationItems.filter(

@@ -49,6 +49,9 @@ export async function action({ request, context }: Route.ActionArgs) {
   });
 }
 
+/** Sends the action's Retry-After (when throttled) with the page. */
+export const headers: Route.HeadersFunction = ({ actionHeaders }) => actionHeaders;
+
 export const meta: Route.MetaFunction = () => [{ title: "Sign in · Turnledger" }];
 
 export default function SignIn({ actionData }: Route.ComponentProps) {

@@ -1,0 +1,84 @@
+/**
+ * The environment the integration and browser tests run against: the private
+ * MariaDB with a fresh test database, the mail fake on test ports, and the
+ * production build served on TEST_PORT. Used by vitest's global setup.
+ */
+import { spawn, type ChildProcess } from "node:child_process";
+import path from "node:path";
+import { migrateDatabase, seedWhenEmpty } from "./database-tasks";
+import { ensureLocalMariadb, recreateDatabase, testDatabaseName } from "./local-mariadb";
+import { startMailFake, type MailFake } from "./mail-fake";
+import { projectRoot } from "./project-paths";
+import { runCommand } from "./run-command";
+
+export interface TestEnvironment {
+  baseUrl: string;
+  mailFakeUrl: string;
+  databaseUrl: string;
+  stop(): Promise<void>;
+}
+
+async function waitForHealth(baseUrl: string, server: ChildProcess): Promise<void> {
+  const started = Date.now();
+  while (Date.now() - started < 60_000) {
+    if (server.exitCode !== null) throw new Error(`the test server exited with ${server.exitCode}`);
+    try {
+      const response = await fetch(`${baseUrl}/healthz`);
+      if (response.ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+  throw new Error(`the test server did not answer at ${baseUrl}/healthz within 60 s`);
+}
+
+export async function startTestEnvironment(): Promise<TestEnvironment> {
+  let databaseUrl = process.env.TEST_DATABASE_URL;
+  if (!databaseUrl) {
+    databaseUrl = (await ensureLocalMariadb()).testUrl;
+    await recreateDatabase(testDatabaseName);
+  }
+  await migrateDatabase(databaseUrl);
+  await seedWhenEmpty(databaseUrl, { quiet: true });
+
+  const mailFake: MailFake = await startMailFake({
+    smtpPort: Number(process.env.TEST_MAIL_SMTP_PORT ?? 2535),
+    httpPort: Number(process.env.TEST_MAIL_HTTP_PORT ?? 2536),
+    quiet: true,
+  });
+
+  if (process.env.TEST_SKIP_BUILD !== "1") {
+    await runCommand(path.join(projectRoot, "node_modules", ".bin", "react-router"), ["build"], {
+      cwd: projectRoot,
+      stdio: ["ignore", "ignore", "inherit"],
+    });
+  }
+  const port = Number(process.env.TEST_PORT ?? 3100);
+  const baseUrl = `http://localhost:${port}`;
+  const server = spawn(process.execPath, [path.join(projectRoot, "server.js")], {
+    cwd: projectRoot,
+    stdio: ["ignore", "ignore", "inherit"],
+    env: {
+      ...process.env,
+      NODE_ENV: "production",
+      PORT: String(port),
+      HOST: "127.0.0.1",
+      DATABASE_URL: databaseUrl,
+      SMTP_URL: `smtp://127.0.0.1:${mailFake.smtpPort}`,
+      APP_URL: baseUrl,
+    },
+  });
+  await waitForHealth(baseUrl, server);
+
+  return {
+    baseUrl,
+    mailFakeUrl: `http://127.0.0.1:${mailFake.httpPort}`,
+    databaseUrl,
+    async stop() {
+      server.kill("SIGTERM");
+      await new Promise((resolve) => server.once("exit", resolve));
+      await mailFake.close();
+    },
+  };
+}

@@ -1,0 +1,46 @@
+import fs from "node:fs";
+import type { Browser } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { roles } from "~/lib/roles";
+import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("each demo role signs in and sees its own navigation", () => {
+  for (const role of roles) {
+    it(role, async () => {
+      const page = await signIn(browser, role);
+      const navigation = page.getByRole("navigation", { name: "Main" });
+      const links = await navigation.getByRole("link").allTextContents();
+      if (role === "admin") {
+        expect(links).toEqual(["Start", "People", "Outbox"]);
+      } else {
+        expect(links).toEqual(["Start"]);
+      }
+      // The start page speaks to the role held.
+      await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toMatch(/^Good to see you/);
+      expect(await page.locator("li[aria-label$=' work']").count()).toBe(1);
+      const file = await saveScreenshot(page, `home-${role}`);
+      expect(fs.statSync(file).size).toBeGreaterThan(10_000);
+      await page.close();
+    });
+  }
+
+  it("a wrong password shows the one message and keeps the e-mail typed", async () => {
+    const page = await browser.newPage();
+    await page.goto(`${(await import("vitest")).inject("baseUrl")}/sign-in`);
+    await page.getByLabel("E-mail").fill("buyer@turnledger.test");
+    await page.getByLabel("Password").fill("not-the-password");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await expect(page.getByRole("alert").textContent()).resolves.toContain("E-mail or password is wrong.");
+    expect(await page.getByLabel("E-mail").inputValue()).toBe("buyer@turnledger.test");
+    await saveScreenshot(page, "sign-in-wrong-password");
+    await page.close();
+  });
+});

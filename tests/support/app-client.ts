@@ -1,0 +1,76 @@
+/** Talking to the running test app over HTTP, as a browser or script would. */
+import { randomBytes } from "node:crypto";
+import { inject } from "vitest";
+
+export const baseUrl = () => inject("baseUrl");
+
+/** A fresh address for each test, so tests never share people or throttle counts. */
+export function uniqueEmail(label: string): string {
+  return `${label}-${randomBytes(5).toString("hex")}@example.test`;
+}
+
+/** The name=value part of a Set-Cookie header for the session cookie. */
+export function sessionCookieFrom(response: Response): string | null {
+  for (const header of response.headers.getSetCookie()) {
+    const [pair] = header.split(";");
+    if (pair?.startsWith("turnledger_session=")) return pair;
+  }
+  return null;
+}
+
+export function get(path: string, cookie?: string): Promise<Response> {
+  return fetch(`${baseUrl()}${path}`, {
+    redirect: "manual",
+    headers: cookie ? { Cookie: cookie } : {},
+  });
+}
+
+/** Posts an HTML form the way a browser without JavaScript does. */
+export function postForm(
+  path: string,
+  fields: Record<string, string | string[]>,
+  cookie?: string,
+): Promise<Response> {
+  const body = new URLSearchParams();
+  for (const [name, value] of Object.entries(fields)) {
+    for (const item of Array.isArray(value) ? value : [value]) body.append(name, item);
+  }
+  return fetch(`${baseUrl()}${path}`, {
+    method: "POST",
+    redirect: "manual",
+    headers: {
+      "Content-Type": "application/x-www-form-urlencoded",
+      Origin: baseUrl(),
+      ...(cookie ? { Cookie: cookie } : {}),
+    },
+    body,
+  });
+}
+
+export function sendJson(
+  method: string,
+  path: string,
+  payload: unknown,
+  cookie?: string,
+): Promise<Response> {
+  return fetch(`${baseUrl()}${path}`, {
+    method,
+    redirect: "manual",
+    headers: {
+      "Content-Type": "application/json",
+      Origin: baseUrl(),
+      ...(cookie ? { Cookie: cookie } : {}),
+    },
+    body: payload === undefined ? undefined : JSON.stringify(payload),
+  });
+}
+
+/** Signs in through the API and returns the session cookie; fails the test otherwise. */
+export async function signIn(email: string, password: string): Promise<string> {
+  const response = await sendJson("POST", "/api/v1/sessions", { email, password });
+  const cookie = sessionCookieFrom(response);
+  if (response.status !== 200 || !cookie) {
+    throw new Error(`sign-in as ${email} failed: ${response.status} ${await response.text()}`);
+  }
+  return cookie;
+}

@@ -1,0 +1,38 @@
+/** Direct access to the test database, for setting up people and reading what was stored. */
+import { hash } from "@node-rs/argon2";
+import { randomBytes } from "node:crypto";
+import mysql from "mysql2/promise";
+import { inject } from "vitest";
+import { poolOptionsFromUrl } from "~/db/connection-options";
+import type { Role } from "~/lib/roles";
+
+let pool: mysql.Pool | undefined;
+export function testDatabase(): mysql.Pool {
+  pool ??= mysql.createPool({ ...poolOptionsFromUrl(inject("databaseUrl")), connectionLimit: 3 });
+  return pool;
+}
+
+export async function closeTestDatabase(): Promise<void> {
+  await pool?.end();
+  pool = undefined;
+}
+
+/** Creates an active person with a password and roles; returns the id. */
+export async function createPerson(input: {
+  email: string;
+  password: string;
+  roles: Role[];
+  name?: string;
+}): Promise<string> {
+  const id = `test-${randomBytes(8).toString("hex")}`;
+  const passwordHash = await hash(input.password);
+  const db = testDatabase();
+  await db.query(
+    "INSERT INTO users (id, email, name, password_hash, active, created_at) VALUES (?, ?, ?, ?, 1, NOW(3))",
+    [id, input.email, input.name ?? "Test Person", passwordHash],
+  );
+  for (const role of input.roles) {
+    await db.query("INSERT INTO user_roles (user_id, role) VALUES (?, ?)", [id, role]);
+  }
+  return id;
+}

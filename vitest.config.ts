@@ -1,0 +1,30 @@
+import { defineConfig } from "vitest/config";
+
+export default defineConfig({
+  resolve: { tsconfigPaths: true },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: "unit",
+          include: ["app/**/*.test.ts", "scripts/**/*.test.ts", "seed/**/*.test.ts"],
+          environment: "node",
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: "app",
+          include: ["tests/integration/**/*.test.ts", "tests/e2e/**/*.test.ts"],
+          environment: "node",
+          globalSetup: ["tests/support/global-setup.ts"],
+          // One app, one database: files run one after another, tests inside a file in order.
+          fileParallelism: false,
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
+        },
+      },
+    ],
+  },
+});
