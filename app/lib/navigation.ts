@@ -14,26 +14,47 @@ export const navigationItems: readonly NavigationItem[] = [
   { to: "/admin/outbox", label: "Outbox", roles: ["admin"] },
 ];
 
-/** Each role's first look at Turnledger, shown on the start page. */
-export const roleStartNotes: Record<Role, { title: string; text: string }> = {
+/** What each role is trusted with (the product brief's role table), shown on the start page. */
+export const roleDuties: Record<Role, { title: string; duties: string[] }> = {
   admin: {
     title: "Admin",
-    text: "Invite people, give them roles, and read the mail the system has sent.",
+    duties: [
+      "Invite people and give them roles",
+      "Deactivate people who leave",
+      "Read every e-mail Turnledger sends",
+      "Do anything the other roles can",
+    ],
   },
   buyer: {
     title: "Buying",
-    text: "Suppliers, price lists, the metal base price and reorder points land here as they are built.",
+    duties: [
+      "Keep suppliers and import their price lists",
+      "Keep the metal base price and currency rates",
+      "Set reorder points and hear about low stock",
+    ],
   },
   builder: {
     title: "Building",
-    text: "Coil and motor designs, their bills of materials and build orders land here as they are built.",
+    duties: [
+      "Design coils and motors and their bills of materials",
+      "Release design revisions",
+      "Create build orders and reserve stock for them",
+    ],
   },
   storekeeper: {
     title: "Store",
-    text: "Receipts, issues, counts and the spool weigh-back land here as they are built.",
+    duties: [
+      "Record receipts, issues, returns, transfers and scrap",
+      "Count bins and record the difference",
+      "Weigh spools back to issue wire by mass",
+    ],
   },
   manager: {
     title: "Costs",
-    text: "Stock value, shortages and the cost per motor and per N·m land here as they are built.",
+    duties: [
+      "Read stock value and what is short",
+      "Read cost per motor and per N·m of torque",
+      "See where the money goes: active copper, end turns, magnets",
+    ],
   },
 };

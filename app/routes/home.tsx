@@ -1,41 +1,69 @@
+import { Link } from "react-router";
 import type { Route } from "./+types/home";
 import { requireUser } from "~/auth/guard.server";
-import { roleStartNotes } from "~/lib/navigation";
-import { roles } from "~/lib/roles";
+import { adminFigures } from "~/people/admin-figures.server";
+import { roleDuties } from "~/lib/navigation";
+import { roles, roleLabels } from "~/lib/roles";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  return { name: user.name, roles: roles.filter((role) => user.roles.includes(role)) };
+  const isAdmin = user.roles.includes("admin");
+  return {
+    name: user.name,
+    roles: roles.filter((role) => user.roles.includes(role)),
+    admin: isAdmin ? await adminFigures() : null,
+  };
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Start · Turnledger" }];
 
+function Figure({ label, value, to }: { label: string; value: number; to: string }) {
+  return (
+    <Link to={to} className="block rounded-md border border-rule bg-white px-4 py-3 hover:border-copper-300">
+      <span className="block text-2xl font-semibold">{value}</span>
+      <span className="text-sm text-graphite-500">{label}</span>
+    </Link>
+  );
+}
+
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { name, roles: myRoles } = loaderData;
+  const { name, roles: myRoles, admin } = loaderData;
   return (
     <div className="space-y-6">
       <div>
         <h1 className="text-2xl font-semibold">Good to see you, {name.split(" ")[0]}</h1>
         <p className="mt-1 text-graphite-500">
-          Your work in Turnledger, by the roles you hold.
+          {myRoles.length > 0
+            ? `You work here as ${myRoles.map((role) => roleLabels[role].toLowerCase()).join(" and ")}.`
+            : "You hold no role yet, so you can only read. Ask an admin to give you one."}
         </p>
       </div>
-      {myRoles.length === 0 ? (
-        <p className="panel">
-          You hold no role yet, so you can only read. Ask an admin to give you one.
-        </p>
-      ) : (
-        <ul className="grid gap-4 md:grid-cols-2 lg:grid-cols-3">
-          {myRoles.map((role) => (
-            <li key={role} className="panel" aria-label={`${roleStartNotes[role].title} work`}>
-              <h2 className="text-lg font-semibold text-copper-700">
-                {roleStartNotes[role].title}
-              </h2>
-              <p className="mt-2 text-sm text-graphite-700">{roleStartNotes[role].text}</p>
-            </li>
-          ))}
-        </ul>
-      )}
+      {admin ? (
+        <section aria-labelledby="admin-figures" className="panel">
+          <h2 id="admin-figures" className="mb-3 text-lg font-semibold">
+            Accounts and mail
+          </h2>
+          <div className="grid gap-3 sm:grid-cols-4">
+            <Figure label="people active" value={admin.activePeople} to="/admin/people" />
+            <Figure label="invited, no password yet" value={admin.pendingInvitations} to="/admin/people" />
+            <Figure label="deactivated" value={admin.deactivatedPeople} to="/admin/people" />
+            <Figure label="e-mails waiting to send" value={admin.unsentMail} to="/admin/outbox" />
+          </div>
+        </section>
+      ) : null}
+      <ul className="grid gap-4 md:grid-cols-2 lg:grid-cols-3">
+        {myRoles.map((role) => (
+          <li key={role} className="panel" aria-label={`${roleDuties[role].title} work`}>
+            <h2 className="text-lg font-semibold text-copper-700">{roleDuties[role].title}</h2>
+            <p className="mt-1 text-xs uppercase tracking-wide text-graphite-500">What you are trusted with</p>
+            <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-graphite-700">
+              {roleDuties[role].duties.map((duty) => (
+                <li key={duty}>{duty}</li>
+              ))}
+            </ul>
+          </li>
+        ))}
+      </ul>
     </div>
   );
 }

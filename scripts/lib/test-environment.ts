@@ -15,6 +15,7 @@ export interface TestEnvironment {
   baseUrl: string;
   mailFakeUrl: string;
   databaseUrl: string;
+  smtpUrl: string;
   stop(): Promise<void>;
 }
 
@@ -31,6 +32,37 @@ async function waitForHealth(baseUrl: string, server: ChildProcess): Promise<voi
     await new Promise((resolve) => setTimeout(resolve, 200));
   }
   throw new Error(`the test server did not answer at ${baseUrl}/healthz within 60 s`);
+}
+
+/** Serves the built app (build/) on a port, as `npm start` does; waits until it answers. */
+export async function startAppServer(options: {
+  port: number;
+  databaseUrl: string;
+  smtpUrl: string;
+}): Promise<{ baseUrl: string; stop(): Promise<void> }> {
+  const baseUrl = `http://localhost:${options.port}`;
+  const server = spawn(process.execPath, [path.join(projectRoot, "server.js")], {
+    cwd: projectRoot,
+    stdio: ["ignore", "ignore", "inherit"],
+    env: {
+      ...process.env,
+      NODE_ENV: "production",
+      PORT: String(options.port),
+      HOST: "127.0.0.1",
+      DATABASE_URL: options.databaseUrl,
+      SMTP_URL: options.smtpUrl,
+      APP_URL: baseUrl,
+    },
+  });
+  await waitForHealth(baseUrl, server);
+  return {
+    baseUrl,
+    async stop() {
+      if (server.exitCode !== null) return;
+      server.kill("SIGTERM");
+      await new Promise((resolve) => server.once("exit", resolve));
+    },
+  };
 }
 
 export async function startTestEnvironment(): Promise<TestEnvironment> {
@@ -55,29 +87,20 @@ export async function startTestEnvironment(): Promise<TestEnvironment> {
     });
   }
   const port = Number(process.env.TEST_PORT ?? 3100);
-  const baseUrl = `http://localhost:${port}`;
-  const server = spawn(process.execPath, [path.join(projectRoot, "server.js")], {
-    cwd: projectRoot,
-    stdio: ["ignore", "ignore", "inherit"],
-    env: {
-      ...process.env,
-      NODE_ENV: "production",
-      PORT: String(port),
-      HOST: "127.0.0.1",
-      DATABASE_URL: databaseUrl,
-      SMTP_URL: `smtp://127.0.0.1:${mailFake.smtpPort}`,
-      APP_URL: baseUrl,
-    },
+  const app = await startAppServer({
+    port,
+    databaseUrl,
+    smtpUrl: `smtp://127.0.0.1:${mailFake.smtpPort}`,
   });
-  await waitForHealth(baseUrl, server);
+  const baseUrl = app.baseUrl;
 
   return {
     baseUrl,
     mailFakeUrl: `http://127.0.0.1:${mailFake.httpPort}`,
     databaseUrl,
+    smtpUrl: `smtp://127.0.0.1:${mailFake.smtpPort}`,
     async stop() {
-      server.kill("SIGTERM");
-      await new Promise((resolve) => server.once("exit", resolve));
+      await app.stop();
       await mailFake.close();
     },
   };

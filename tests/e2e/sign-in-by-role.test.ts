@@ -44,3 +44,21 @@ describe("each demo role signs in and sees its own navigation", () => {
     await page.close();
   });
 });
+
+describe("admin pages", () => {
+  it("people list and outbox render their tables", async () => {
+    const page = await signIn(browser, "admin");
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "People" }).click();
+    await page.getByRole("heading", { name: "People" }).waitFor();
+    expect(await page.getByRole("table", { name: "People with an account" }).getByRole("row").count()).toBeGreaterThan(5);
+    await saveScreenshot(page, "admin-people");
+    await page.getByRole("link", { name: "Selma Odueke" }).click();
+    await page.getByRole("heading", { name: "Selma Odueke" }).waitFor();
+    expect(await page.getByRole("checkbox", { name: "Manager" }).isChecked()).toBe(true);
+    await saveScreenshot(page, "admin-person");
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Outbox" }).click();
+    await page.getByRole("heading", { name: "Outbox" }).waitFor();
+    await saveScreenshot(page, "admin-outbox");
+    await page.close();
+  });
+});

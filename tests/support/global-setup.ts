@@ -6,6 +6,7 @@ declare module "vitest" {
     baseUrl: string;
     mailFakeUrl: string;
     databaseUrl: string;
+    smtpUrl: string;
   }
 }
 
@@ -15,5 +16,6 @@ export default async function setup(project: TestProject) {
   project.provide("baseUrl", environment.baseUrl);
   project.provide("mailFakeUrl", environment.mailFakeUrl);
   project.provide("databaseUrl", environment.databaseUrl);
+  project.provide("smtpUrl", environment.smtpUrl);
   return () => environment.stop();
 }

@@ -1,0 +1,100 @@
+/**
+ * The database goes away and comes back: pages answer 503 "database
+ * unavailable", the API answers 503 JSON, /healthz says down, and all recover
+ * without restarting the app. A TCP relay between a second app server and the
+ * test MariaDB is cut and restored, so the other tests' server is untouched.
+ */
+import net from "node:net";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { inject } from "vitest";
+import { startAppServer } from "../../scripts/lib/test-environment";
+
+class DatabaseRelay {
+  private server: net.Server | null = null;
+  private sockets = new Set<net.Socket>();
+  constructor(
+    private target: { host: string; port: number },
+    readonly port: number,
+  ) {}
+
+  async up(): Promise<void> {
+    this.server = net.createServer((client) => {
+      const upstream = net.connect(this.target);
+      for (const socket of [client, upstream]) {
+        this.sockets.add(socket);
+        socket.on("close", () => this.sockets.delete(socket));
+        socket.on("error", () => socket.destroy());
+      }
+      client.pipe(upstream).pipe(client);
+    });
+    await new Promise<void>((resolve) => this.server!.listen(this.port, "127.0.0.1", resolve));
+  }
+
+  async down(): Promise<void> {
+    for (const socket of this.sockets) socket.destroy();
+    await new Promise<void>((resolve) => (this.server ? this.server.close(() => resolve()) : resolve()));
+    this.server = null;
+  }
+}
+
+const relayPort = 3199;
+let relay: DatabaseRelay;
+let app: { baseUrl: string; stop(): Promise<void> };
+let cookie = "";
+
+beforeAll(async () => {
+  const databaseUrl = new URL(inject("databaseUrl"));
+  relay = new DatabaseRelay({ host: databaseUrl.hostname, port: Number(databaseUrl.port) }, relayPort);
+  await relay.up();
+  const relayedUrl = new URL(databaseUrl);
+  relayedUrl.port = String(relayPort);
+  app = await startAppServer({ port: 3102, databaseUrl: relayedUrl.toString(), smtpUrl: inject("smtpUrl") });
+  const response = await fetch(`${app.baseUrl}/api/v1/sessions`, {
+    method: "POST",
+    headers: { "Content-Type": "application/json" },
+    body: JSON.stringify({ email: "manager@turnledger.test", password: process.env.DEMO_PASSWORD || "turnledger-demo" }),
+  });
+  expect(response.status).toBe(200);
+  cookie = response.headers.getSetCookie()[0]!.split(";")[0]!;
+});
+
+afterAll(async () => {
+  await app?.stop();
+  await relay?.down();
+});
+
+const get = (path: string) =>
+  fetch(`${app.baseUrl}${path}`, { headers: { Cookie: cookie }, redirect: "manual" });
+
+describe("database outage", () => {
+  it("answers normally while the database is up", async () => {
+    expect((await get("/healthz")).status).toBe(200);
+    expect((await get("/")).status).toBe(200);
+  });
+
+  it("answers 503 everywhere while it is down", async () => {
+    await relay.down();
+    const health = await get("/healthz");
+    expect(health.status).toBe(503);
+    expect(((await health.json()) as { database: { state: string } }).database.state).toBe("down");
+
+    const page = await get("/");
+    expect(page.status).toBe(503);
+    expect(await page.text()).toContain("Database unavailable");
+
+    const api = await get("/api/v1/me");
+    expect(api.status).toBe(503);
+    expect(api.headers.get("Content-Type")).toContain("application/json");
+    expect(await api.json()).toEqual({
+      error: { message: "The database is unavailable. Try again in a moment." },
+    });
+  });
+
+  it("recovers by itself when the database is back", async () => {
+    await relay.up();
+    expect((await get("/healthz")).status).toBe(200);
+    const page = await get("/");
+    expect(page.status).toBe(200);
+    expect(await page.text()).toContain("Good to see you");
+  });
+});
