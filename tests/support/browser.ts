@@ -34,6 +34,8 @@ export async function signIn(browser: Browser, role: Role): Promise<Page> {
   await page.getByLabel("Password").fill(demoPassword());
   await page.getByRole("button", { name: "Sign in" }).click();
   await page.waitForURL(`${inject("baseUrl")}/`);
+  await page.getByRole("navigation", { name: "Main" }).waitFor();
+  await page.getByRole("heading", { level: 1 }).waitFor();
   return page;
 }
 
