@@ -7,6 +7,7 @@ export default [
     route("admin/people", "routes/admin-people.tsx"),
     route("admin/people/:userId", "routes/admin-person.tsx"),
     route("admin/outbox", "routes/admin-outbox.tsx"),
+    route("account", "routes/account.tsx"),
   ]),
 
   // Account pages anyone can reach.

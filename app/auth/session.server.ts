@@ -2,6 +2,7 @@ import { eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { userRoles } from "~/db/schema";
 import type { Role } from "~/lib/roles";
+import { userFromApiToken } from "./api-tokens.server";
 import { lucia } from "./lucia.server";
 
 export interface SessionUser {
@@ -19,7 +20,18 @@ interface SessionState {
 
 const stateByRequest = new WeakMap<Request, Promise<SessionState>>();
 
+function bearerToken(request: Request): string | null {
+  const header = request.headers.get("Authorization");
+  const match = header?.match(/^Bearer\s+(\S+)$/i);
+  return match?.[1] ?? null;
+}
+
 async function readSession(request: Request): Promise<SessionState> {
+  const token = bearerToken(request);
+  if (token && new URL(request.url).pathname.startsWith("/api/")) {
+    // Scripts and tools: a personal API token stands in for the session cookie.
+    return { user: await userFromApiToken(token), setCookie: null };
+  }
   const sessionId = lucia.readSessionCookie(request.headers.get("Cookie") ?? "");
   if (!sessionId) return { user: null, setCookie: null };
   const { session, user } = await lucia.validateSession(sessionId);

@@ -5,9 +5,12 @@ import { roleLabels, roles, type Role } from "~/lib/roles";
 export function RoleCheckboxes({
   field,
   legend = "Roles",
+  choices = roles,
 }: {
   field: FieldMetadata<Role[] | undefined>;
   legend?: string;
+  /** The roles offered; all five unless narrowed (e.g. to the roles a person holds). */
+  choices?: readonly Role[];
 }) {
   const chosen = new Set(
     Array.isArray(field.initialValue)
@@ -20,7 +23,7 @@ export function RoleCheckboxes({
     <fieldset aria-describedby={field.errors ? field.errorId : undefined}>
       <legend className="field-label">{legend}</legend>
       <div className="mt-2 flex flex-wrap gap-x-5 gap-y-2">
-        {roles.map((role) => (
+        {choices.map((role) => (
           <label key={role} className="inline-flex items-center gap-2 text-sm">
             <input
               type="checkbox"

@@ -118,3 +118,32 @@ export const mailOutbox = mysqlTable(
     index("mail_outbox_unsent_idx").on(table.sentAt, table.createdAt),
   ],
 );
+
+/**
+ * Personal API tokens for scripts and other tools (Authorization: Bearer …).
+ * A token acts with the roles chosen at creation, never more than its owner
+ * holds at the time of each request.
+ */
+export const apiTokens = mysqlTable(
+  "api_tokens",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    name: varchar("name", { length: 80 }).notNull(),
+    /** SHA-256 of the token, hex; the token itself is shown once, at creation. */
+    tokenHash: varchar("token_hash", { length: 64 }).notNull(),
+    /** The first characters of the token, to tell tokens apart in lists. */
+    tokenPrefix: varchar("token_prefix", { length: 12 }).notNull(),
+    roles: varchar("roles", { length: 100 }).notNull(),
+    createdAt: createdAt(),
+    expiresAt: datetime("expires_at", { mode: "date" }),
+    lastUsedAt: datetime("last_used_at", { mode: "date" }),
+    revokedAt: datetime("revoked_at", { mode: "date" }),
+  },
+  (table) => [
+    uniqueIndex("api_tokens_hash_unique").on(table.tokenHash),
+    index("api_tokens_user_idx").on(table.userId, table.createdAt),
+  ],
+);

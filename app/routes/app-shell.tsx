@@ -48,12 +48,12 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
             </ul>
           </nav>
           <div className="flex items-center gap-4 text-sm">
-            <span>
+            <NavLink to="/account" className="hover:underline" title="Your account and API tokens">
               <span className="font-medium">{user.name}</span>
               <span className="ml-2 text-graphite-300">
                 {user.roles.map((role) => roleLabels[role]).join(" · ")}
               </span>
-            </span>
+            </NavLink>
             <Form method="post" action="/sign-out">
               <button
                 type="submit"

@@ -33,6 +33,8 @@ const table: Row[] = [
   { file: "routes/admin-person.tsx", method: "GET", path: "/admin/people/demo-05-manager", expect: adminOnly },
   { file: "routes/admin-person.tsx", method: "POST", path: "/admin/people/demo-05-manager", expect: { anonymous: 302, admin: 400, signedIn: 403 } },
   { file: "routes/admin-outbox.tsx", method: "GET", path: "/admin/outbox", expect: adminOnly },
+  { file: "routes/account.tsx", method: "GET", path: "/account", expect: { anonymous: 302, signedIn: 200 } },
+  { file: "routes/account.tsx", method: "POST", path: "/account", expect: { anonymous: 302, signedIn: 400 } },
   { file: "routes/sign-in.tsx", method: "GET", path: "/sign-in", expect: { anonymous: 200, signedIn: 302 } },
   // Signed in, the page itself sends people on to the start page.
   { file: "routes/sign-in.tsx", method: "POST", path: "/sign-in", expect: { anonymous: 400, signedIn: 302 } },

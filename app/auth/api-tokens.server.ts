@@ -1,0 +1,110 @@
+/** Personal API tokens: created by their owner, shown once, stored hashed, revocable. */
+import { randomBytes } from "node:crypto";
+import { and, desc, eq, isNull } from "drizzle-orm";
+import { db } from "~/db/client.server";
+import { apiTokens, userRoles, users } from "~/db/schema";
+import { isRole, type Role } from "~/lib/roles";
+import { hashToken } from "./email-tokens.server";
+import type { SessionUser } from "./session.server";
+
+const tokenPrefix = "tl_";
+/** last_used_at is written at most this often per token, to keep reads read-only. */
+const lastUsedResolutionMs = 60_000;
+
+function parseRoles(value: string): Role[] {
+  return value.split(",").filter(isRole);
+}
+
+/** Creates a token acting with `roles` (must be the owner's); returns the token, shown once. */
+export async function createApiToken(input: {
+  userId: string;
+  name: string;
+  roles: Role[];
+  expiresAt: Date | null;
+}): Promise<{ token: string; id: number }> {
+  const token = `${tokenPrefix}${randomBytes(32).toString("base64url")}`;
+  const [inserted] = await db
+    .insert(apiTokens)
+    .values({
+      userId: input.userId,
+      name: input.name,
+      tokenHash: hashToken(token),
+      tokenPrefix: token.slice(0, 10),
+      roles: input.roles.join(","),
+      expiresAt: input.expiresAt,
+    })
+    .$returningId();
+  if (!inserted) throw new Error("The new token's id was not returned.");
+  return { token, id: inserted.id };
+}
+
+export async function listApiTokens(userId: string) {
+  const rows = await db
+    .select({
+      id: apiTokens.id,
+      name: apiTokens.name,
+      tokenPrefix: apiTokens.tokenPrefix,
+      roles: apiTokens.roles,
+      createdAt: apiTokens.createdAt,
+      expiresAt: apiTokens.expiresAt,
+      lastUsedAt: apiTokens.lastUsedAt,
+      revokedAt: apiTokens.revokedAt,
+    })
+    .from(apiTokens)
+    .where(eq(apiTokens.userId, userId))
+    .orderBy(desc(apiTokens.createdAt))
+    .limit(200);
+  return rows.map((row) => ({ ...row, roles: parseRoles(row.roles) }));
+}
+
+/** Revokes one of the owner's tokens. Returns false when there is no such live token. */
+export async function revokeApiToken(userId: string, tokenId: number): Promise<boolean> {
+  const [result] = await db
+    .update(apiTokens)
+    .set({ revokedAt: new Date() })
+    .where(and(eq(apiTokens.id, tokenId), eq(apiTokens.userId, userId), isNull(apiTokens.revokedAt)));
+  return result.affectedRows === 1;
+}
+
+/**
+ * The person a bearer token acts for, with the token's roles cut down to the
+ * roles the owner holds now; null for an unknown, revoked or expired token or
+ * a deactivated owner.
+ */
+export async function userFromApiToken(token: string): Promise<SessionUser | null> {
+  if (!token.startsWith(tokenPrefix)) return null;
+  const [row] = await db
+    .select({
+      id: apiTokens.id,
+      roles: apiTokens.roles,
+      expiresAt: apiTokens.expiresAt,
+      revokedAt: apiTokens.revokedAt,
+      lastUsedAt: apiTokens.lastUsedAt,
+      userId: users.id,
+      email: users.email,
+      name: users.name,
+      active: users.active,
+    })
+    .from(apiTokens)
+    .innerJoin(users, eq(users.id, apiTokens.userId))
+    .where(eq(apiTokens.tokenHash, hashToken(token)))
+    .limit(1);
+  if (!row || row.revokedAt || !row.active) return null;
+  const now = Date.now();
+  if (row.expiresAt && row.expiresAt.getTime() <= now) return null;
+
+  const ownerRoles = await db
+    .select({ role: userRoles.role })
+    .from(userRoles)
+    .where(eq(userRoles.userId, row.userId));
+  const held = new Set(ownerRoles.map((entry) => entry.role));
+  if (!row.lastUsedAt || now - row.lastUsedAt.getTime() > lastUsedResolutionMs) {
+    await db.update(apiTokens).set({ lastUsedAt: new Date(now) }).where(eq(apiTokens.id, row.id));
+  }
+  return {
+    id: row.userId,
+    email: row.email,
+    name: row.name,
+    roles: parseRoles(row.roles).filter((role) => held.has(role)),
+  };
+}
