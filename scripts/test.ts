@@ -1,6 +1,7 @@
 /**
  * npm test: makes sure the Debian tools the tests use are there (Chromium for
- * the browser tests, installed as root when missing), then runs every test
+ * the browser tests, GNU units for reference checks; installed as root when
+ * missing), then runs every test
  * with Vitest: unit, integration against the private MariaDB, and browser
  * tests. The database, mail fake and app server are started by Vitest's
  * global setup. Ends with one line "Tests: N passed, N failed".
@@ -11,8 +12,12 @@ import { dataRoot, projectRoot } from "./lib/project-paths";
 import { installDebianPackages, runCommand } from "./lib/run-command";
 
 const chromiumPath = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
-if (!fs.existsSync(chromiumPath)) {
-  await installDebianPackages(["chromium"], `The browser tests need Chromium at ${chromiumPath}.`);
+const missing: string[] = [];
+if (!fs.existsSync(chromiumPath)) missing.push("chromium");
+// GNU units is the independent reference for the AWG formula (wiregauge(n)).
+if (!fs.existsSync("/usr/bin/units")) missing.push("units");
+if (missing.length > 0) {
+  await installDebianPackages(missing, `The tests need ${missing.join(" and ")} (browser tests, reference checks).`);
 }
 
 fs.mkdirSync(dataRoot, { recursive: true });

@@ -30,15 +30,29 @@ export function isEngineeringInputError(
 }
 
 /** Throws unless `value` is a finite number greater than zero. */
-export function requirePositive(value: number, field: string, label: string): void {
+export function requirePositive(
+  value: number,
+  field: string,
+  label: string,
+): void {
   if (!Number.isFinite(value) || value <= 0) {
-    throw new EngineeringInputError(field, `${label} must be a number greater than zero.`);
+    throw new EngineeringInputError(
+      field,
+      `${label} must be a number greater than zero.`,
+    );
   }
 }
 
 /** Throws unless `value` is a finite number of zero or more. */
-export function requireNonNegative(value: number, field: string, label: string): void {
+export function requireNonNegative(
+  value: number,
+  field: string,
+  label: string,
+): void {
   if (!Number.isFinite(value) || value < 0) {
-    throw new EngineeringInputError(field, `${label} must be a number of zero or more.`);
+    throw new EngineeringInputError(
+      field,
+      `${label} must be a number of zero or more.`,
+    );
   }
 }

@@ -1,0 +1,352 @@
+import { describe, expect, it } from "vitest";
+import { estimateCoil, type CoilEstimateInput } from "./coil-estimate";
+import { EngineeringInputError } from "./errors";
+import { conductorForceN, torqueNm } from "./force-and-torque";
+import { expectMatchesPrinted } from "./printed-value.test-support";
+import { IEC_NOMINAL_DIAMETERS } from "./reference-data";
+import type { WireSpec } from "./wire-geometry";
+
+/** Brief, worked check 4: l_active 50 mm, l_end 30 mm, N 40, 0.80 mm copper, one strand. */
+const CHECK_4_COIL: CoilEstimateInput = {
+  conductor: "copper",
+  wire: { standard: "IEC", diameterMm: 0.8 },
+  turns: 40,
+  activeLengthMm: 50,
+  endTurnLengthMm: 30,
+};
+
+describe("worked check 4: a coil of 0.80 mm copper (brief)", () => {
+  it("without leads: MLT 160 mm, 6.400 m, 0.21952 Ω, 28.60 g", () => {
+    const result = estimateCoil(CHECK_4_COIL);
+    expect(result.meanTurnLengthMm).toBe(160);
+    expectMatchesPrinted(result.perCoil.conductorLengthM, "6.400");
+    expectMatchesPrinted(result.perCoil.resistance20Ohm, "0.21952");
+    expectMatchesPrinted(result.perCoil.woundMassKg * 1000, "28.60");
+    expect(result.perCoil.resistanceOhm).toBe(result.perCoil.resistance20Ohm);
+    expect(result.wire.bareDiameterMm).toBe(0.8);
+    expect(result.wire.overallDiameterMm).toBeNull();
+    expect(result.copperLossW).toBeNull();
+  });
+
+  it("with two 150 mm leads: 6.700 m, 0.22981 Ω, 29.94 g", () => {
+    const result = estimateCoil({ ...CHECK_4_COIL, leadLengthMm: 150 });
+    expectMatchesPrinted(result.perCoil.conductorLengthM, "6.700");
+    expectMatchesPrinted(result.perCoil.resistance20Ohm, "0.22981");
+    expectMatchesPrinted(result.perCoil.woundMassKg * 1000, "29.94");
+  });
+
+  it("with 3 % scrap: 6.901 m and 30.84 g drawn from stock, resistance unchanged", () => {
+    const withLeads = estimateCoil({ ...CHECK_4_COIL, leadLengthMm: 150 });
+    const withScrap = estimateCoil({
+      ...CHECK_4_COIL,
+      leadLengthMm: 150,
+      scrapPercent: 3,
+    });
+    expectMatchesPrinted(withScrap.perCoil.purchasedLengthM, "6.901");
+    expectMatchesPrinted(withScrap.perCoil.purchasedMassKg * 1000, "30.84");
+    expectMatchesPrinted(withScrap.perCoil.resistance20Ohm, "0.22981");
+    expect(withScrap.perCoil.resistance20Ohm).toBe(
+      withLeads.perCoil.resistance20Ohm,
+    );
+    expect(withScrap.perCoil.conductorLengthM).toBe(
+      withLeads.perCoil.conductorLengthM,
+    );
+    expect(withScrap.perCoil.woundMassKg).toBe(withLeads.perCoil.woundMassKg);
+  });
+
+  it("splits the turn into active share 50 / (50 + 30)", () => {
+    expect(estimateCoil(CHECK_4_COIL).activeShare).toBeCloseTo(0.625, 15);
+  });
+});
+
+describe("worked check 5: copper loss of that coil without leads at 10 A (brief)", () => {
+  it("is 21.95 W at 20 °C and 30.58 W at 120 °C", () => {
+    expectMatchesPrinted(
+      estimateCoil({ ...CHECK_4_COIL, currentA: 10 }).copperLossW ?? NaN,
+      "21.95",
+    );
+    expectMatchesPrinted(
+      estimateCoil({ ...CHECK_4_COIL, currentA: 10, temperatureC: 120 })
+        .copperLossW ?? NaN,
+      "30.58",
+    );
+  });
+
+  it("counts every coil and is zero at zero current", () => {
+    const one =
+      estimateCoil({ ...CHECK_4_COIL, currentA: 10 }).copperLossW ?? NaN;
+    expect(
+      estimateCoil({ ...CHECK_4_COIL, currentA: 10, coilCount: 12 })
+        .copperLossW,
+    ).toBeCloseTo(12 * one, 10);
+    expect(estimateCoil({ ...CHECK_4_COIL, currentA: 0 }).copperLossW).toBe(0);
+  });
+});
+
+describe("worked check 8: force and torque from the active length (brief)", () => {
+  it("0.45 N per 0.05 m conductor at 0.9 T and 10 A", () => {
+    // Brief: F = B·I·L = 0.9 T · 10 A · 0.05 m = 0.45 N.
+    expect(conductorForceN(0.9, 10, 0.05)).toBeCloseTo(0.45, 12);
+  });
+
+  it("48 such conductors at r = 30 mm: 0.648 N·m, from forceLengthM, whatever the end turns", () => {
+    // 24 turns of a coil with 50 mm active sides: 2 × 24 = 48 active conductors of 0.05 m.
+    for (const endTurnLengthMm of [0, 30, 300]) {
+      const coil = estimateCoil({
+        ...CHECK_4_COIL,
+        turns: 24,
+        endTurnLengthMm,
+        leadLengthMm: 200,
+      });
+      expect(coil.perCoil.forceLengthM).toBeCloseTo(48 * 0.05, 12);
+      const force = conductorForceN(0.9, 10, coil.perCoil.forceLengthM);
+      expectMatchesPrinted(torqueNm(force, 0.03), "0.648");
+    }
+  });
+});
+
+describe("AWG wire and strands in hand", () => {
+  it("uses the formula diameter and the published overall diameter", () => {
+    const result = estimateCoil({
+      ...CHECK_4_COIL,
+      wire: { standard: "AWG", size: "18" },
+      insulation: "heavy",
+    });
+    // ASTM B258 formula: AWG 18 = 1.0237 mm (brief); NEMA MW 1000 heavy 0.0437 in (brief).
+    expect(Math.abs(result.wire.bareDiameterMm - 1.0237)).toBeLessThan(1e-4);
+    expect(result.wire.overallDiameterMm).toBeCloseTo(0.0437 * 25.4, 12);
+    expect(result.wire.overallDiameterIsEstimate).toBe(false);
+    expect(result.wire.areaMm2).toBeCloseTo(
+      (Math.PI / 4) * result.wire.bareDiameterMm ** 2,
+      15,
+    );
+  });
+
+  it("puts strands in parallel: twice the conductor, half the resistance, same force length", () => {
+    const one = estimateCoil({ ...CHECK_4_COIL, leadLengthMm: 150 });
+    const two = estimateCoil({
+      ...CHECK_4_COIL,
+      leadLengthMm: 150,
+      strandsInHand: 2,
+    });
+    expect(two.perCoil.conductorLengthM).toBeCloseTo(2 * 6.7, 12);
+    expect(two.perCoil.resistance20Ohm).toBeCloseTo(
+      one.perCoil.resistance20Ohm / 2,
+      15,
+    );
+    expect(two.perCoil.woundMassKg).toBeCloseTo(
+      2 * one.perCoil.woundMassKg,
+      15,
+    );
+    // Contract: forceLengthM = 2 × turns × active length, not multiplied by strands.
+    expect(two.perCoil.forceLengthM).toBe(one.perCoil.forceLengthM);
+  });
+
+  it("throws EngineeringInputError with the field for an unknown wire", () => {
+    const fieldOf = (
+      wire: WireSpec,
+      insulation?: CoilEstimateInput["insulation"],
+    ) => {
+      try {
+        estimateCoil({ ...CHECK_4_COIL, wire, insulation });
+      } catch (error) {
+        if (error instanceof EngineeringInputError) return error.field;
+        throw error;
+      }
+      return undefined;
+    };
+    expect(fieldOf({ standard: "AWG", size: "50" })).toBe("wire.size");
+    expect(fieldOf({ standard: "IEC", diameterMm: 0.81 })).toBe(
+      "wire.diameterMm",
+    );
+    expect(fieldOf({ standard: "IEC", diameterMm: 0.8 }, "triple")).toBe(
+      "insulation",
+    );
+  });
+});
+
+/** mulberry32: a small seeded PRNG so the random cases are the same on every run. */
+function seededRandom(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (state + 0x6d2b79f5) >>> 0;
+    let t = state;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/** A random coil with every optional field filled in. */
+type RandomCoil = Required<
+  Omit<CoilEstimateInput, "insulation" | "currentA">
+> & { currentA: number };
+
+function randomCoils(count: number, seed: number): RandomCoil[] {
+  const random = seededRandom(seed);
+  const between = (low: number, high: number) => low + (high - low) * random();
+  const integer = (low: number, high: number) =>
+    Math.floor(between(low, high + 1));
+  const pick = <T>(items: readonly T[]): T => {
+    const item = items[integer(0, items.length - 1)];
+    if (item === undefined) throw new Error("empty list");
+    return item;
+  };
+  return Array.from({ length: count }, () => ({
+    conductor: pick(["copper", "aluminium"] as const),
+    wire:
+      random() < 0.5
+        ? { standard: "AWG" as const, size: String(integer(0, 40)) }
+        : {
+            standard: "IEC" as const,
+            diameterMm: pick(IEC_NOMINAL_DIAMETERS).diameterMm,
+          },
+    turns: integer(1, 400),
+    strandsInHand: integer(1, 8),
+    activeLengthMm: between(1, 400),
+    endTurnLengthMm: between(0.5, 200),
+    leadLengthMm: between(0, 500),
+    coilCount: integer(1, 48),
+    temperatureC: between(-40, 200),
+    scrapPercent: between(0, 15),
+    currentA: between(0, 50),
+  }));
+}
+
+const relativeClose = (actual: number, expected: number, relative = 1e-12) =>
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(
+    relative * Math.abs(expected),
+  );
+
+describe("properties over 300 random coils (seeded)", () => {
+  const coils = randomCoils(300, 20260517);
+
+  it("doubling the end turns leaves forceLengthM unchanged while resistance and mass grow", () => {
+    // Brief: end turns add length, mass and resistance but no force (common practice).
+    for (const coil of coils) {
+      const base = estimateCoil(coil);
+      const longerEnds = estimateCoil({
+        ...coil,
+        endTurnLengthMm: 2 * coil.endTurnLengthMm,
+      });
+      expect(longerEnds.perCoil.forceLengthM).toBe(base.perCoil.forceLengthM);
+      expect(longerEnds.total.forceLengthM).toBe(base.total.forceLengthM);
+      expect(longerEnds.perCoil.resistanceOhm).toBeGreaterThan(
+        base.perCoil.resistanceOhm,
+      );
+      expect(longerEnds.perCoil.resistance20Ohm).toBeGreaterThan(
+        base.perCoil.resistance20Ohm,
+      );
+      expect(longerEnds.perCoil.woundMassKg).toBeGreaterThan(
+        base.perCoil.woundMassKg,
+      );
+      expect(longerEnds.activeShare).toBeLessThan(base.activeShare);
+    }
+  });
+
+  it("doubling the active length doubles forceLengthM", () => {
+    // Brief: doubling a coil's active length doubles force and EMF (common practice).
+    for (const coil of coils) {
+      const base = estimateCoil(coil);
+      const longer = estimateCoil({
+        ...coil,
+        activeLengthMm: 2 * coil.activeLengthMm,
+      });
+      relativeClose(longer.perCoil.forceLengthM, 2 * base.perCoil.forceLengthM);
+    }
+  });
+
+  it("resistance is proportional to length and inversely proportional to strands", () => {
+    // Brief: R = ρ(T) · (N · MLT + 2 · l_lead) / (strands · A).
+    for (const coil of coils) {
+      const base = estimateCoil(coil);
+      const factor = 1 + 3 * Math.abs(Math.sin(coil.turns));
+      const scaled = estimateCoil({
+        ...coil,
+        activeLengthMm: factor * coil.activeLengthMm,
+        endTurnLengthMm: factor * coil.endTurnLengthMm,
+        leadLengthMm: factor * coil.leadLengthMm,
+      });
+      relativeClose(
+        scaled.perCoil.conductorLengthM,
+        factor * base.perCoil.conductorLengthM,
+        1e-9,
+      );
+      relativeClose(
+        scaled.perCoil.resistanceOhm,
+        factor * base.perCoil.resistanceOhm,
+        1e-9,
+      );
+
+      const moreStrands = estimateCoil({
+        ...coil,
+        strandsInHand: coil.strandsInHand + 3,
+      });
+      relativeClose(
+        moreStrands.perCoil.resistanceOhm * (coil.strandsInHand + 3),
+        base.perCoil.resistanceOhm * coil.strandsInHand,
+        1e-9,
+      );
+      // Resistance per metre of wound conductor, times strands², is ρ(T)/A for every coil of this wire.
+      relativeClose(
+        (moreStrands.perCoil.resistanceOhm /
+          moreStrands.perCoil.conductorLengthM) *
+          (coil.strandsInHand + 3) ** 2,
+        (base.perCoil.resistanceOhm / base.perCoil.conductorLengthM) *
+          coil.strandsInHand ** 2,
+        1e-9,
+      );
+    }
+  });
+
+  it("keeps the contract's relations between fields", () => {
+    for (const coil of coils) {
+      const result = estimateCoil(coil);
+      const lengthOneStrandM =
+        (coil.turns * result.meanTurnLengthMm + 2 * coil.leadLengthMm) / 1000;
+      relativeClose(
+        result.perCoil.conductorLengthM,
+        coil.strandsInHand * lengthOneStrandM,
+      );
+      relativeClose(
+        result.perCoil.purchasedLengthM,
+        result.perCoil.conductorLengthM * (1 + coil.scrapPercent / 100),
+      );
+      relativeClose(
+        result.perCoil.purchasedMassKg / result.perCoil.woundMassKg,
+        1 + coil.scrapPercent / 100,
+      );
+      // α20 of IEC 60028 copper and of aluminium 1350 (brief).
+      const alpha = coil.conductor === "copper" ? 0.00393 : 0.00403;
+      relativeClose(
+        result.perCoil.resistanceOhm,
+        result.perCoil.resistance20Ohm * (1 + alpha * (coil.temperatureC - 20)),
+        1e-9,
+      );
+      relativeClose(
+        result.meanTurnLengthMm,
+        2 * coil.activeLengthMm + 2 * coil.endTurnLengthMm,
+      );
+      relativeClose(
+        result.perCoil.forceLengthM,
+        (2 * coil.turns * coil.activeLengthMm) / 1000,
+      );
+      // The active share is the force length over the turns' length.
+      relativeClose(
+        result.activeShare,
+        result.perCoil.forceLengthM /
+          ((coil.turns * result.meanTurnLengthMm) / 1000),
+        1e-9,
+      );
+      for (const key of Object.keys(
+        result.perCoil,
+      ) as (keyof typeof result.perCoil)[]) {
+        relativeClose(result.total[key], result.perCoil[key] * coil.coilCount);
+      }
+      relativeClose(
+        result.copperLossW ?? NaN,
+        coil.coilCount * coil.currentA ** 2 * result.perCoil.resistanceOhm,
+      );
+    }
+  });
+});

@@ -1,0 +1,182 @@
+/**
+ * Copper (or aluminium) length, mass, resistance and loss of a coil from its geometry:
+ * the body of POST /api/v1/coil-estimates.
+ *
+ * Formulas (brief; Bianchi, Bolognani and Frare, IEEE Trans. Energy Conversion, 2006):
+ * - mean length of turn MLT = 2 · l_active + 2 · l_end
+ * - wound length per coil = strands · (N · MLT + 2 · l_lead)
+ * - resistance between the leads, strands in parallel:
+ *   R = ρ(T) · (N · MLT + 2 · l_lead) / (strands · A), ρ(T) = ρ20 · (1 + α20 · (T − 20))
+ * - scrap adds to what is drawn from stock, not to resistance.
+ *
+ * The input is assumed validated (types, ranges, integers) by the API's schema; wire
+ * and insulation lookups that fail still throw {@link EngineeringInputError}.
+ * All outputs are plain numbers in the named units, unrounded.
+ */
+
+import type { ConductorKey, InsulationKey } from "./reference-data";
+import {
+  bareDiameterMm,
+  circleAreaMm2,
+  linearMassKgPerM,
+  overallDiameter,
+  resistancePerMetreOhm,
+  type WireSpec,
+} from "./wire-geometry";
+
+export interface CoilEstimateInput {
+  conductor: ConductorKey;
+  wire: WireSpec;
+  /** IEC grade for IEC wire, film build for AWG wire; omitted → overall diameter null. */
+  insulation?: InsulationKey | null;
+  /** Turns per coil, integer ≥ 1. */
+  turns: number;
+  /** Strands wound in hand (in parallel), integer ≥ 1; default 1. */
+  strandsInHand?: number;
+  /** Straight length of each coil side in the field, mm, > 0. */
+  activeLengthMm: number;
+  /** Length of each of the two end connections (per end), mm, ≥ 0. */
+  endTurnLengthMm: number;
+  /** Length of each of the two leads, mm, ≥ 0; default 0. */
+  leadLengthMm?: number;
+  /** Number of identical coils, integer ≥ 1; default 1. */
+  coilCount?: number;
+  /** Conductor temperature for `resistanceOhm`, °C; default 20. */
+  temperatureC?: number;
+  /** Extra conductor drawn from stock (start-up, cut-offs, test pieces), %, ≥ 0; default 0. */
+  scrapPercent?: number;
+  /** Terminal current through each coil, A, ≥ 0; omitted → copperLossW null. */
+  currentA?: number | null;
+}
+
+export interface CoilQuantities {
+  /** Conductor wound, all strands: strands × (turns × MLT + 2 × lead), m. */
+  conductorLengthM: number;
+  /** Conductor drawn from stock: conductorLengthM × (1 + scrap/100), m. */
+  purchasedLengthM: number;
+  /** Bare conductor mass of conductorLengthM, kg. */
+  woundMassKg: number;
+  /** Bare conductor mass of purchasedLengthM, kg. */
+  purchasedMassKg: number;
+  /** Resistance between the leads at 20 °C, Ω (scrap excluded). */
+  resistance20Ohm: number;
+  /** Resistance between the leads at temperatureC, Ω (scrap excluded). */
+  resistanceOhm: number;
+  /** Conductor length in the field that makes force: 2 × turns × active length, m. */
+  forceLengthM: number;
+}
+
+export interface CoilEstimate {
+  /** One strand. overallDiameterMm is null when unknown; overallDiameterIsEstimate flags a fitted estimate. */
+  wire: {
+    bareDiameterMm: number;
+    overallDiameterMm: number | null;
+    overallDiameterIsEstimate: boolean;
+    areaMm2: number;
+  };
+  /** Mean length of turn 2·active + 2·end turn, mm. */
+  meanTurnLengthMm: number;
+  /** Share of each turn that lies in the field: active ÷ (active + end turn), 0–1. */
+  activeShare: number;
+  perCoil: CoilQuantities;
+  /** perCoil × coilCount, field by field. */
+  total: CoilQuantities;
+  /** coilCount × I² × perCoil.resistanceOhm, W; null when no current is given. */
+  copperLossW: number | null;
+}
+
+/** Mean length of turn, mm: 2 · active length + 2 · end-turn length (per end). */
+export function meanTurnLengthMm(
+  activeLengthMm: number,
+  endTurnLengthMm: number,
+): number {
+  return 2 * activeLengthMm + 2 * endTurnLengthMm;
+}
+
+/** Share of a turn in the field: active ÷ (active + end turn). */
+export function activeShare(
+  activeLengthMm: number,
+  endTurnLengthMm: number,
+): number {
+  return activeLengthMm / (activeLengthMm + endTurnLengthMm);
+}
+
+function scaleQuantities(
+  quantities: CoilQuantities,
+  factor: number,
+): CoilQuantities {
+  return {
+    conductorLengthM: quantities.conductorLengthM * factor,
+    purchasedLengthM: quantities.purchasedLengthM * factor,
+    woundMassKg: quantities.woundMassKg * factor,
+    purchasedMassKg: quantities.purchasedMassKg * factor,
+    // The contract makes total = perCoil × coilCount for every field, which for
+    // resistance means all coils in series. For coils in parallel groups, use perCoil.
+    resistance20Ohm: quantities.resistance20Ohm * factor,
+    resistanceOhm: quantities.resistanceOhm * factor,
+    forceLengthM: quantities.forceLengthM * factor,
+  };
+}
+
+/** Estimates a coil's conductor length, mass, resistance and loss (see the module comment). */
+export function estimateCoil(input: CoilEstimateInput): CoilEstimate {
+  const strands = input.strandsInHand ?? 1;
+  const leadLengthMm = input.leadLengthMm ?? 0;
+  const coilCount = input.coilCount ?? 1;
+  const temperatureC = input.temperatureC ?? 20;
+  const scrapPercent = input.scrapPercent ?? 0;
+
+  const bare = bareDiameterMm(input.wire);
+  const areaMm2 = circleAreaMm2(bare);
+  const overall = overallDiameter(input.wire, input.insulation);
+
+  const mltMm = meanTurnLengthMm(input.activeLengthMm, input.endTurnLengthMm);
+  // Length of one strand from lead end to lead end, m.
+  const strandLengthM = (input.turns * mltMm + 2 * leadLengthMm) / 1000;
+  const conductorLengthM = strands * strandLengthM;
+  const purchasedLengthM = conductorLengthM * (1 + scrapPercent / 100);
+  const massPerMetreKg = linearMassKgPerM(input.conductor, areaMm2);
+
+  // Strands in parallel: one strand's length over the section of all strands.
+  const parallelAreaMm2 = strands * areaMm2;
+  const resistance20Ohm =
+    strandLengthM * resistancePerMetreOhm(input.conductor, parallelAreaMm2, 20);
+  const resistanceOhm =
+    strandLengthM *
+    resistancePerMetreOhm(input.conductor, parallelAreaMm2, temperatureC);
+
+  // Per the contract: 2 × turns × active length, NOT multiplied by strands. That is
+  // right when force is computed with the coil's terminal current (F = B · I · forceLength):
+  // the strands share that current, so each carries I/strands and the strands together
+  // make the same force as one conductor carrying I. Multiply by strands only if the
+  // current used is the current per strand.
+  const forceLengthM = (2 * input.turns * input.activeLengthMm) / 1000;
+
+  const perCoil: CoilQuantities = {
+    conductorLengthM,
+    purchasedLengthM,
+    woundMassKg: conductorLengthM * massPerMetreKg,
+    purchasedMassKg: purchasedLengthM * massPerMetreKg,
+    resistance20Ohm,
+    resistanceOhm,
+    forceLengthM,
+  };
+
+  const currentA = input.currentA;
+  return {
+    wire: {
+      bareDiameterMm: bare,
+      overallDiameterMm: overall.overallDiameterMm,
+      overallDiameterIsEstimate: overall.overallDiameterIsEstimate,
+      areaMm2,
+    },
+    meanTurnLengthMm: mltMm,
+    activeShare: activeShare(input.activeLengthMm, input.endTurnLengthMm),
+    perCoil,
+    total: scaleQuantities(perCoil, coilCount),
+    copperLossW:
+      currentA === undefined || currentA === null
+        ? null
+        : coilCount * currentA * currentA * perCoil.resistanceOhm,
+  };
+}
