@@ -22,6 +22,10 @@ export default [
     route("sessions", "routes/api.v1.sessions.ts"),
     route("me", "routes/api.v1.me.ts"),
     route("outbox", "routes/api.v1.outbox.ts"),
+    route("coil-estimates", "routes/api.v1.coil-estimates.ts"),
+    route("magnet-estimates", "routes/api.v1.magnet-estimates.ts"),
+    route("wire-sizes", "routes/api.v1.wire-sizes.ts"),
+    route("magnet-grades", "routes/api.v1.magnet-grades.ts"),
   ]),
 
   route("*", "routes/not-found.tsx"),

@@ -162,8 +162,8 @@ export interface MagnetWarning {
 }
 
 export interface MagnetEstimateInput {
-  /** Grade name or key: "N42SH", "SmCo5", "Y30" … */
-  grade: string;
+  /** Grade name or key ("N42SH", "SmCo5", "Y30" …) from the built-in table, or a grade's full properties. */
+  grade: string | MagnetGrade;
   shape: MagnetShape;
   /** Number of pieces, integer ≥ 1; default 1. */
   count?: number;
@@ -219,11 +219,11 @@ function magnetWarnings(
 
 /** Volume, mass, Br at temperature, air-gap flux density and warnings for `count` magnets. */
 export function estimateMagnet(input: MagnetEstimateInput): MagnetEstimate {
-  const grade = findMagnetGrade(input.grade);
+  const grade = typeof input.grade === "string" ? findMagnetGrade(input.grade) : input.grade;
   if (!grade) {
     throw new EngineeringInputError(
       "grade",
-      `Unknown magnet grade "${input.grade}".`,
+      `Unknown magnet grade "${String(input.grade)}".`,
     );
   }
   const count = input.count ?? 1;

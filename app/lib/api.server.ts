@@ -1,5 +1,6 @@
 /** Helpers shared by the JSON API routes under /api/v1: one error shape everywhere. */
 import type { z } from "zod";
+import { isEngineeringInputError } from "~/engineering/errors";
 
 export function apiError(
   status: number,
@@ -33,4 +34,16 @@ export async function readJsonBody<Schema extends z.ZodType>(
 
 export function methodNotAllowed(allowed: string[]): Response {
   return apiError(405, `Use ${allowed.join(" or ")} here.`, undefined, { Allow: allowed.join(", ") });
+}
+
+/** Runs a calculation; a refusal by the engineering modules becomes a 400 naming the field. */
+export function calculateOr400<T>(calculate: () => T): T {
+  try {
+    return calculate();
+  } catch (error) {
+    if (isEngineeringInputError(error)) {
+      throw apiError(400, error.message, { [error.field]: [error.message] });
+    }
+    throw error;
+  }
 }

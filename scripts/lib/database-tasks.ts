@@ -7,6 +7,7 @@ import * as schema from "~/db/schema";
 import { demoPassword, demoPeople } from "../../seed/demo-people";
 import { databaseIsEmpty, seedDemoData } from "../../seed/seed-demo-data";
 import { projectRoot } from "./project-paths";
+import { syncReferenceData } from "~/reference/reference-sync.server";
 
 async function withDatabase<T>(
   databaseUrl: string,
@@ -20,11 +21,15 @@ async function withDatabase<T>(
   }
 }
 
-/** Applies the committed migrations in drizzle/ that the database has not had yet. */
+/**
+ * Applies the committed migrations in drizzle/ that the database has not had
+ * yet, then writes the built-in engineering reference data.
+ */
 export function migrateDatabase(databaseUrl: string): Promise<void> {
-  return withDatabase(databaseUrl, (db) =>
-    migrate(db, { migrationsFolder: path.join(projectRoot, "drizzle") }),
-  );
+  return withDatabase(databaseUrl, async (db) => {
+    await migrate(db, { migrationsFolder: path.join(projectRoot, "drizzle") });
+    await syncReferenceData(db);
+  });
 }
 
 /** Seeds the demo data when the database has no people. Returns true when it seeded. */

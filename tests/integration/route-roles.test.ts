@@ -45,6 +45,12 @@ const table: Row[] = [
   { file: "routes/api.v1.sessions.ts", method: "GET", path: "/api/v1/sessions", expect: { anonymous: 405, signedIn: 405 } },
   { file: "routes/api.v1.me.ts", method: "GET", path: "/api/v1/me", expect: { anonymous: 401, signedIn: 200 } },
   { file: "routes/api.v1.outbox.ts", method: "GET", path: "/api/v1/outbox", expect: adminOnlyApi },
+  // The engineering API: every signed-in role may calculate and read reference data.
+  { file: "routes/api.v1.coil-estimates.ts", method: "GET", path: "/api/v1/coil-estimates", expect: { anonymous: 401, signedIn: 405 } },
+  { file: "routes/api.v1.coil-estimates.ts", method: "POST", path: "/api/v1/coil-estimates", expect: { anonymous: 401, signedIn: 400 } },
+  { file: "routes/api.v1.magnet-estimates.ts", method: "POST", path: "/api/v1/magnet-estimates", expect: { anonymous: 401, signedIn: 400 } },
+  { file: "routes/api.v1.wire-sizes.ts", method: "GET", path: "/api/v1/wire-sizes?standard=IEC", expect: { anonymous: 401, signedIn: 200 } },
+  { file: "routes/api.v1.magnet-grades.ts", method: "GET", path: "/api/v1/magnet-grades", expect: { anonymous: 401, signedIn: 200 } },
   { file: "routes/not-found.tsx", method: "GET", path: "/no-such-page", expect: { anonymous: 404, signedIn: 404 } },
   { file: "routes/not-found.tsx", method: "GET", path: "/api/v1/no-such-route", expect: { anonymous: 404, signedIn: 404 } },
 ];

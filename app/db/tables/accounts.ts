@@ -1,0 +1,149 @@
+import {
+  boolean,
+  datetime,
+  index,
+  int,
+  mysqlEnum,
+  mysqlTable,
+  primaryKey,
+  text,
+  uniqueIndex,
+  varchar,
+} from "drizzle-orm/mysql-core";
+import { roles } from "~/lib/roles";
+
+export const createdAt = () =>
+  datetime("created_at", { mode: "date", fsp: 3 })
+    .notNull()
+    .$defaultFn(() => new Date());
+
+/** People who sign in. `passwordHash` is null until an invited person sets one. */
+export const users = mysqlTable(
+  "users",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    email: varchar("email", { length: 254 }).notNull(),
+    name: varchar("name", { length: 120 }).notNull(),
+    passwordHash: varchar("password_hash", { length: 255 }),
+    active: boolean("active").notNull().default(true),
+    createdAt: createdAt(),
+  },
+  (table) => [
+    uniqueIndex("users_email_unique").on(table.email),
+    index("users_name_idx").on(table.name),
+  ],
+);
+
+export const userRoles = mysqlTable(
+  "user_roles",
+  {
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: mysqlEnum("role", roles).notNull(),
+  },
+  (table) => [
+    primaryKey({ columns: [table.userId, table.role] }),
+    index("user_roles_role_idx").on(table.role),
+  ],
+);
+
+/** lucia sessions: the column names lucia's Drizzle adapter expects. */
+export const sessions = mysqlTable(
+  "sessions",
+  {
+    id: varchar("id", { length: 255 }).primaryKey(),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: datetime("expires_at", { mode: "date" }).notNull(),
+  },
+  (table) => [index("sessions_user_idx").on(table.userId)],
+);
+
+/** Single-use links sent by e-mail: invitations and password resets. */
+export const emailTokens = mysqlTable(
+  "email_tokens",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    purpose: mysqlEnum("purpose", ["invitation", "password-reset"]).notNull(),
+    /** SHA-256 of the token, hex; the token itself is only in the e-mail. */
+    tokenHash: varchar("token_hash", { length: 64 }).notNull(),
+    expiresAt: datetime("expires_at", { mode: "date" }).notNull(),
+    usedAt: datetime("used_at", { mode: "date" }),
+    createdAt: createdAt(),
+  },
+  (table) => [
+    uniqueIndex("email_tokens_hash_unique").on(table.tokenHash),
+    index("email_tokens_user_idx").on(table.userId, table.purpose),
+  ],
+);
+
+/** Failed sign-ins, kept in the database so the throttle holds across app servers. */
+export const failedSignIns = mysqlTable(
+  "failed_sign_ins",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    email: varchar("email", { length: 254 }).notNull(),
+    ipAddress: varchar("ip_address", { length: 64 }).notNull(),
+    attemptedAt: datetime("attempted_at", { mode: "date", fsp: 3 }).notNull(),
+  },
+  (table) => [
+    index("failed_sign_ins_lookup_idx").on(table.email, table.ipAddress, table.attemptedAt),
+    index("failed_sign_ins_time_idx").on(table.attemptedAt),
+  ],
+);
+
+/**
+ * Every e-mail the app sends. A message is written here first and marked sent
+ * once the SMTP server has accepted it; unsent ones are retried.
+ */
+export const mailOutbox = mysqlTable(
+  "mail_outbox",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    toAddress: varchar("to_address", { length: 254 }).notNull(),
+    subject: varchar("subject", { length: 255 }).notNull(),
+    textBody: text("text_body").notNull(),
+    createdAt: createdAt(),
+    sentAt: datetime("sent_at", { mode: "date", fsp: 3 }),
+    attempts: int("attempts").notNull().default(0),
+    lastError: varchar("last_error", { length: 500 }),
+  },
+  (table) => [
+    index("mail_outbox_created_idx").on(table.createdAt),
+    index("mail_outbox_unsent_idx").on(table.sentAt, table.createdAt),
+  ],
+);
+
+/**
+ * Personal API tokens for scripts and other tools (Authorization: Bearer …).
+ * A token acts with the roles chosen at creation, never more than its owner
+ * holds at the time of each request.
+ */
+export const apiTokens = mysqlTable(
+  "api_tokens",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    name: varchar("name", { length: 80 }).notNull(),
+    /** SHA-256 of the token, hex; the token itself is shown once, at creation. */
+    tokenHash: varchar("token_hash", { length: 64 }).notNull(),
+    /** The first characters of the token, to tell tokens apart in lists. */
+    tokenPrefix: varchar("token_prefix", { length: 12 }).notNull(),
+    roles: varchar("roles", { length: 100 }).notNull(),
+    createdAt: createdAt(),
+    expiresAt: datetime("expires_at", { mode: "date" }),
+    lastUsedAt: datetime("last_used_at", { mode: "date" }),
+    revokedAt: datetime("revoked_at", { mode: "date" }),
+  },
+  (table) => [
+    uniqueIndex("api_tokens_hash_unique").on(table.tokenHash),
+    index("api_tokens_user_idx").on(table.userId, table.createdAt),
+  ],
+);

@@ -1,0 +1,9 @@
+import type { Route } from "./+types/api.v1.magnet-grades";
+import { requireUser } from "~/auth/guard.server";
+import { listMagnetGrades } from "~/reference/magnet-grades.server";
+
+/** GET /api/v1/magnet-grades → every grade with its properties and source. */
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireUser(request);
+  return Response.json(await listMagnetGrades());
+}

@@ -1,0 +1,15 @@
+import type { Route } from "./+types/api.v1.wire-sizes";
+import { requireUser } from "~/auth/guard.server";
+import { apiError } from "~/lib/api.server";
+import { listWireSizes } from "~/reference/wire-sizes.server";
+
+/** GET /api/v1/wire-sizes?standard=AWG|IEC → the sizes with bare diameter, area and published overall diameters. */
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireUser(request);
+  const standard = new URL(request.url).searchParams.get("standard") ?? "";
+  if (standard !== "AWG" && standard !== "IEC") {
+    const message = "standard must be AWG or IEC.";
+    return apiError(400, message, { standard: [message] });
+  }
+  return Response.json(await listWireSizes(standard));
+}
