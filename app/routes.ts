@@ -8,6 +8,17 @@ export default [
     route("admin/people/:userId", "routes/admin-person.tsx"),
     route("admin/outbox", "routes/admin-outbox.tsx"),
     route("account", "routes/account.tsx"),
+    route("tools/coil-estimator", "routes/coil-estimator.tsx"),
+    route("tools/magnet-estimator", "routes/magnet-estimator.tsx"),
+    route("reference", "routes/reference.tsx"),
+    ...prefix("stock", [
+      index("routes/stock.tsx"),
+      route("export.csv", "routes/stock-export.ts"),
+      route("items/new", "routes/stock-item-new.tsx"),
+      route("items/:sku", "routes/stock-item.tsx"),
+      route("record", "routes/stock-record.tsx"),
+      route("journal", "routes/stock-journal.tsx"),
+    ]),
   ]),
 
   // Account pages anyone can reach.
@@ -26,6 +37,10 @@ export default [
     route("magnet-estimates", "routes/api.v1.magnet-estimates.ts"),
     route("wire-sizes", "routes/api.v1.wire-sizes.ts"),
     route("magnet-grades", "routes/api.v1.magnet-grades.ts"),
+    route("items", "routes/api.v1.items.ts"),
+    route("items/:sku", "routes/api.v1.item.ts"),
+    route("locations", "routes/api.v1.locations.ts"),
+    route("stock-movements", "routes/api.v1.stock-movements.ts"),
   ]),
 
   route("*", "routes/not-found.tsx"),

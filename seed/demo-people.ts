@@ -17,3 +17,6 @@ export const demoPeople: { email: string; name: string; roles: Role[] }[] = [
 export function demoPassword(): string {
   return process.env.DEMO_PASSWORD || "turnledger-demo";
 }
+
+/** The id the seed gives the demo storekeeper (who records the demo store's movements). */
+export const demoStorekeeperId = "demo-04-storekeeper";

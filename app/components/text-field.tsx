@@ -20,7 +20,12 @@ export function TextField({
       <label htmlFor={field.id} className="field-label">
         {label}
       </label>
-      <input key={key} {...inputProps} autoComplete={autoComplete} className="field-input" />
+      <input
+        key={key}
+        {...inputProps}
+        autoComplete={autoComplete}
+        className="field-input"
+      />
       {hint ? <p className="mt-1 text-xs text-graphite-500">{hint}</p> : null}
       {field.errors ? (
         <p id={field.errorId} className="field-error">
@@ -32,10 +37,20 @@ export function TextField({
 }
 
 /** Messages for the whole form (not one field). */
-export function FormMessages({ id, errors }: { id?: string; errors?: string[] }) {
+export function FormMessages({
+  id,
+  errors,
+}: {
+  id?: string;
+  errors?: string[];
+}) {
   if (!errors || errors.length === 0) return null;
   return (
-    <div id={id} role="alert" className="rounded-md border border-danger/40 bg-danger/5 px-3 py-2 text-sm text-danger">
+    <div
+      id={id}
+      role="alert"
+      className="rounded-md border border-danger/40 bg-danger/5 px-3 py-2 text-sm text-danger"
+    >
       {errors.join(" ")}
     </div>
   );

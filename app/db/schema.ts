@@ -1,3 +1,5 @@
 /** Every table, for Drizzle and drizzle-kit. Each group lives in app/db/tables/. */
 export * from "./tables/accounts";
 export * from "./tables/reference";
+export * from "./tables/stock";
+export * from "./tables/stock-enums";

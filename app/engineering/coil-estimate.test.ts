@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { estimateCoil, type CoilEstimateInput } from "./coil-estimate";
+import { conductorSplit, estimateCoil, type CoilEstimateInput } from "./coil-estimate";
 import { EngineeringInputError } from "./errors";
 import { conductorForceN, torqueNm } from "./force-and-torque";
 import { expectMatchesPrinted } from "./printed-value.test-support";
@@ -348,5 +348,25 @@ describe("properties over 300 random coils (seeded)", () => {
         coil.coilCount * coil.currentA ** 2 * result.perCoil.resistanceOhm,
       );
     }
+  });
+});
+
+describe("conductorSplit", () => {
+  it("splits worked check 4 with leads into 4.0 m active, 2.4 m end turns, 0.3 m leads (brief, worked check 4)", () => {
+    const input = {
+      conductor: "copper" as const,
+      wire: { standard: "IEC" as const, diameterMm: 0.8 },
+      turns: 40,
+      activeLengthMm: 50,
+      endTurnLengthMm: 30,
+      leadLengthMm: 150,
+      strandsInHand: 2,
+    };
+    const split = conductorSplit(input);
+    // 2 strands × 40 turns × 2 sides × 50 mm = 8.0 m; × 30 mm = 4.8 m; 2 strands × 2 × 150 mm = 0.6 m.
+    expect(split.activeM).toBeCloseTo(8.0, 12);
+    expect(split.endTurnM).toBeCloseTo(4.8, 12);
+    expect(split.leadM).toBeCloseTo(0.6, 12);
+    expect(split.activeM + split.endTurnM + split.leadM).toBeCloseTo(estimateCoil(input).perCoil.conductorLengthM, 12);
   });
 });

@@ -180,3 +180,25 @@ export function estimateCoil(input: CoilEstimateInput): CoilEstimate {
         : coilCount * currentA * currentA * perCoil.resistanceOhm,
   };
 }
+
+/** Where one coil's conductor goes, m: the active sides, the end turns and the leads (all strands). */
+export interface ConductorSplit {
+  activeM: number;
+  endTurnM: number;
+  leadM: number;
+}
+
+/**
+ * Splits a coil's wound conductor into active sides (strands × turns × 2 × l_active),
+ * end turns (strands × turns × 2 × l_end) and leads (strands × 2 × l_lead); the three add
+ * up to `perCoil.conductorLengthM` of {@link estimateCoil}.
+ */
+export function conductorSplit(input: CoilEstimateInput): ConductorSplit {
+  const strands = input.strandsInHand ?? 1;
+  const perSideM = (lengthMm: number) => (strands * input.turns * 2 * lengthMm) / 1000;
+  return {
+    activeM: perSideM(input.activeLengthMm),
+    endTurnM: perSideM(input.endTurnLengthMm),
+    leadM: (strands * 2 * (input.leadLengthMm ?? 0)) / 1000,
+  };
+}

@@ -41,9 +41,11 @@ const awgWire = z.object({
     .pipe(z.string().min(1, "Give the AWG size, e.g. \"20\" or \"4/0\".")),
 });
 
+export const iecDiameterField = number("the nominal diameter").gt(0, "The nominal diameter must be more than 0 mm.");
+
 const iecWire = z.object({
   standard: z.literal("IEC"),
-  diameterMm: number("the nominal diameter").gt(0, "The nominal diameter must be more than 0 mm."),
+  diameterMm: iecDiameterField,
 });
 
 export const wireSpecSchema = z.discriminatedUnion("standard", [awgWire, iecWire], {
@@ -55,12 +57,16 @@ export const wireSpecSchema = z.discriminatedUnion("standard", [awgWire, iecWire
 
 export const insulationKeys = ["grade1", "grade2", "grade3", "single", "heavy", "triple"] as const;
 
-export const coilEstimateRequestSchema = z.object({
-  conductor: z.enum(["copper", "aluminium"], { error: "The conductor must be \"copper\" or \"aluminium\"." }),
-  wire: wireSpecSchema,
-  insulation: z
-    .enum(insulationKeys, { error: `The insulation must be one of ${insulationKeys.join(", ")}.` })
-    .nullish(),
+export const conductorSchema = z.enum(["copper", "aluminium"], {
+  error: "The conductor must be \"copper\" or \"aluminium\".",
+});
+
+export const insulationSchema = z.enum(insulationKeys, {
+  error: `The insulation must be one of ${insulationKeys.join(", ")}.`,
+});
+
+/** The coil's numeric fields, shared by the API request and the estimator form. */
+export const coilNumberFields = {
   turns: wholeNumber("turns", 1, 100_000),
   strandsInHand: wholeNumber("strands in hand", 1, 1_000).default(1),
   activeLengthMm: lengthMm("the active length", { allowZero: false }),
@@ -76,6 +82,13 @@ export const coilEstimateRequestSchema = z.object({
     .min(0, "The current cannot be negative.")
     .max(100_000, "The current must be at most 100,000 A.")
     .nullish(),
+};
+
+export const coilEstimateRequestSchema = z.object({
+  conductor: conductorSchema,
+  wire: wireSpecSchema,
+  insulation: insulationSchema.nullish(),
+  ...coilNumberFields,
 });
 
 export type CoilEstimateRequest = z.infer<typeof coilEstimateRequestSchema>;

@@ -5,11 +5,19 @@ export interface NavigationItem {
   label: string;
   /** Who sees the item; empty means everyone signed in. */
   roles: readonly Role[];
+  /** Lit only on this exact address, not on the pages below it (which have their own items). */
+  exact?: boolean;
 }
 
 /** The app shell's menu. Pages check roles themselves; this only decides what is shown. */
 export const navigationItems: readonly NavigationItem[] = [
-  { to: "/", label: "Start", roles: [] },
+  { to: "/", label: "Start", roles: [], exact: true },
+  { to: "/stock", label: "Stock", roles: [], exact: true },
+  { to: "/stock/record", label: "Record movement", roles: ["storekeeper"] },
+  { to: "/stock/journal", label: "Journal", roles: [] },
+  { to: "/tools/coil-estimator", label: "Coil estimator", roles: [] },
+  { to: "/tools/magnet-estimator", label: "Magnet estimator", roles: [] },
+  { to: "/reference", label: "Reference", roles: [] },
   { to: "/admin/people", label: "People", roles: ["admin"] },
   { to: "/admin/outbox", label: "Outbox", roles: ["admin"] },
 ];

@@ -33,6 +33,13 @@ function replaceAll(columns: string[]) {
   return Object.fromEntries(columns.map((column) => [column, sql.raw(`VALUES(\`${column}\`)`)]));
 }
 
+/** As replaceAll, but a row an admin added (built_in = 0) keeps its values. */
+function replaceBuiltIn(columns: string[]) {
+  return Object.fromEntries(
+    columns.map((column) => [column, sql.raw(`IF(\`built_in\` = 1, VALUES(\`${column}\`), \`${column}\`)`)]),
+  );
+}
+
 const text = (value: number) => String(value);
 
 export async function syncReferenceData(db: Database): Promise<void> {
@@ -131,7 +138,8 @@ export async function syncReferenceData(db: Database): Promise<void> {
         })),
       )
       .onDuplicateKeyUpdate({
-        set: replaceAll([
+        // built_in last: MariaDB evaluates the assignments in order, so the IF()s still see the old flag.
+        set: replaceBuiltIn([
           "name",
           "aliases",
           "material",

@@ -1,4 +1,4 @@
-import { data, Form, NavLink, Outlet } from "react-router";
+import { data, Form, NavLink, Outlet, type ShouldRevalidateFunctionArgs } from "react-router";
 import type { Route } from "./+types/app-shell";
 import { requireUser } from "~/auth/guard.server";
 import { sessionHeaders } from "~/auth/session-headers.server";
@@ -8,6 +8,11 @@ import { roleLabels, userHasRole } from "~/lib/roles";
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
   return data({ user }, { headers: await sessionHeaders(request) });
+}
+
+/** The estimators' live calculations change nothing on the server: the shell need not reload after them. */
+export function shouldRevalidate({ formAction, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) {
+  return formAction?.startsWith("/tools/") ? false : defaultShouldRevalidate;
 }
 
 /** Sends a refreshed session cookie with the page. */
@@ -20,7 +25,7 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
   );
   return (
     <div className="flex min-h-screen flex-col">
-      <header className="border-b border-graphite-800 bg-graphite-900 text-graphite-50">
+      <header className="border-b border-graphite-800 bg-graphite-900 text-graphite-50 print:hidden">
         <div className="mx-auto flex max-w-7xl items-center gap-8 px-6 py-3">
           <a href="/" className="flex items-center gap-2 text-lg font-semibold tracking-tight">
             <img src="/favicon.svg" alt="" className="h-7 w-7" />
@@ -32,7 +37,7 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
                 <li key={item.to}>
                   <NavLink
                     to={item.to}
-                    end={item.to === "/"}
+                    end={item.exact}
                     className={({ isActive }) =>
                       `rounded-md px-3 py-1.5 text-sm font-medium ${
                         isActive
@@ -68,7 +73,7 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
       <main className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">
         <Outlet />
       </main>
-      <footer className="border-t border-rule py-4 text-center text-xs text-graphite-500">
+      <footer className="border-t border-rule py-4 print:border-0 text-center text-xs text-graphite-500">
         Turnledger · figures are first-order engineering estimates; electrical safety and
         insulation follow local codes and licensed practice.
       </footer>

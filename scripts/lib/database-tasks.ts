@@ -4,7 +4,7 @@ import { migrate } from "drizzle-orm/mysql2/migrator";
 import mysql from "mysql2/promise";
 import { poolOptionsFromUrl } from "~/db/connection-options";
 import * as schema from "~/db/schema";
-import { demoPassword, demoPeople } from "../../seed/demo-people";
+import { demoPassword, demoPeople, demoStorekeeperId } from "../../seed/demo-people";
 import { databaseIsEmpty, seedDemoData } from "../../seed/seed-demo-data";
 import { projectRoot } from "./project-paths";
 import { syncReferenceData } from "~/reference/reference-sync.server";
@@ -37,6 +37,7 @@ export function seedWhenEmpty(databaseUrl: string, options = { quiet: false }): 
   return withDatabase(databaseUrl, async (db) => {
     if (!(await databaseIsEmpty(db))) return false;
     await seedDemoData(db);
+    await seedStockThroughTheLedger(databaseUrl);
     if (!options.quiet) {
       console.log("[turnledger] demo data seeded. Sign in with any of these:");
       for (const person of demoPeople) {
@@ -46,4 +47,22 @@ export function seedWhenEmpty(databaseUrl: string, options = { quiet: false }): 
     }
     return true;
   });
+}
+
+/**
+ * The demo store is written through the app's own catalogue and ledger code,
+ * which uses the app's database client (configured by DATABASE_URL).
+ */
+async function seedStockThroughTheLedger(databaseUrl: string): Promise<void> {
+  const previous = process.env.DATABASE_URL;
+  process.env.DATABASE_URL = databaseUrl;
+  const client = await import("~/db/client.server");
+  try {
+    const { seedDemoStock } = await import("../../seed/demo-stock");
+    await seedDemoStock(demoStorekeeperId);
+  } finally {
+    await client.pool.end();
+    delete (globalThis as { turnledgerDb?: unknown }).turnledgerDb;
+    process.env.DATABASE_URL = previous;
+  }
 }

@@ -69,7 +69,7 @@ export async function startTestEnvironment(): Promise<TestEnvironment> {
   let databaseUrl = process.env.TEST_DATABASE_URL;
   if (!databaseUrl) {
     databaseUrl = (await ensureLocalMariadb()).testUrl;
-    await recreateDatabase(testDatabaseName);
+    await recreateDatabase(testDatabaseName());
   }
   await migrateDatabase(databaseUrl);
   await seedWhenEmpty(databaseUrl, { quiet: true });

@@ -15,7 +15,7 @@ const everyone: Who[] = ["anonymous", ...roles];
 
 interface Row {
   file: string;
-  method: "GET" | "POST";
+  method: "GET" | "POST" | "PATCH";
   path: string;
   /** Expected status per caller; `signedIn` covers every role not named. */
   expect: Partial<Record<Who, number>> & { signedIn?: number };
@@ -51,6 +51,35 @@ const table: Row[] = [
   { file: "routes/api.v1.magnet-estimates.ts", method: "POST", path: "/api/v1/magnet-estimates", expect: { anonymous: 401, signedIn: 400 } },
   { file: "routes/api.v1.wire-sizes.ts", method: "GET", path: "/api/v1/wire-sizes?standard=IEC", expect: { anonymous: 401, signedIn: 200 } },
   { file: "routes/api.v1.magnet-grades.ts", method: "GET", path: "/api/v1/magnet-grades", expect: { anonymous: 401, signedIn: 200 } },
+  // Magnet estimator: every signed-in role; estimates come from the API in the browser, so the page takes no POST.
+  { file: "routes/magnet-estimator.tsx", method: "GET", path: "/tools/magnet-estimator", expect: { anonymous: 302, signedIn: 200 } },
+  { file: "routes/magnet-estimator.tsx", method: "POST", path: "/tools/magnet-estimator", expect: { anonymous: 302, signedIn: 405 } },
+  // Reference tables: every signed-in role reads; only admins add a magnet grade (an empty one gets field messages).
+  { file: "routes/reference.tsx", method: "GET", path: "/reference", expect: { anonymous: 302, signedIn: 200 } },
+  { file: "routes/reference.tsx", method: "GET", path: "/reference?table=magnet-grades", expect: { anonymous: 302, signedIn: 200 } },
+  { file: "routes/reference.tsx", method: "POST", path: "/reference", expect: { anonymous: 302, admin: 400, signedIn: 403 } },
+  // Stock pages: everyone signed in reads; buyers (and admins) add items; an unknown SKU is 404 once the role check passes.
+  { file: "routes/stock.tsx", method: "GET", path: "/stock", expect: { anonymous: 302, signedIn: 200 } },
+  { file: "routes/stock-export.ts", method: "GET", path: "/stock/export.csv", expect: { anonymous: 302, signedIn: 200 } },
+  { file: "routes/stock-item-new.tsx", method: "GET", path: "/stock/items/new", expect: { anonymous: 302, admin: 200, buyer: 200, signedIn: 403 } },
+  { file: "routes/stock-item-new.tsx", method: "POST", path: "/stock/items/new", expect: { anonymous: 302, admin: 400, buyer: 400, signedIn: 403 } },
+  { file: "routes/stock-item.tsx", method: "GET", path: "/stock/items/NO-SUCH-SKU", expect: { anonymous: 302, signedIn: 404 } },
+  { file: "routes/stock-item.tsx", method: "POST", path: "/stock/items/NO-SUCH-SKU", expect: { anonymous: 302, admin: 404, buyer: 404, storekeeper: 404, signedIn: 403 } },
+  // The coil estimator (its live figures come from the API through a clientAction).
+  { file: "routes/coil-estimator.tsx", method: "GET", path: "/tools/coil-estimator", expect: { anonymous: 302, signedIn: 200 } },
+  { file: "routes/coil-estimator.tsx", method: "POST", path: "/tools/coil-estimator", expect: { anonymous: 302, signedIn: 405 } },
+  // Recording movements is the storekeeper's (and admin's); everyone reads the journal.
+  { file: "routes/stock-record.tsx", method: "GET", path: "/stock/record", expect: { anonymous: 302, storekeeper: 200, admin: 200, signedIn: 403 } },
+  { file: "routes/stock-record.tsx", method: "POST", path: "/stock/record", expect: { anonymous: 302, storekeeper: 400, admin: 400, signedIn: 403 } },
+  { file: "routes/stock-journal.tsx", method: "GET", path: "/stock/journal", expect: { anonymous: 302, signedIn: 200 } },
+  // The stock API: everyone reads; buyers create items; storekeepers record movements.
+  { file: "routes/api.v1.items.ts", method: "GET", path: "/api/v1/items", expect: { anonymous: 401, signedIn: 200 } },
+  { file: "routes/api.v1.items.ts", method: "POST", path: "/api/v1/items", expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 } },
+  { file: "routes/api.v1.item.ts", method: "GET", path: "/api/v1/items/NO-SUCH-SKU", expect: { anonymous: 401, signedIn: 404 } },
+  { file: "routes/api.v1.item.ts", method: "PATCH", path: "/api/v1/items/NO-SUCH-SKU", expect: { anonymous: 401, buyer: 400, storekeeper: 400, admin: 400, signedIn: 403 } },
+  { file: "routes/api.v1.locations.ts", method: "GET", path: "/api/v1/locations", expect: { anonymous: 401, signedIn: 200 } },
+  { file: "routes/api.v1.stock-movements.ts", method: "GET", path: "/api/v1/stock-movements", expect: { anonymous: 401, signedIn: 200 } },
+  { file: "routes/api.v1.stock-movements.ts", method: "POST", path: "/api/v1/stock-movements", expect: { anonymous: 401, storekeeper: 400, admin: 400, signedIn: 403 } },
   { file: "routes/not-found.tsx", method: "GET", path: "/no-such-page", expect: { anonymous: 404, signedIn: 404 } },
   { file: "routes/not-found.tsx", method: "GET", path: "/api/v1/no-such-route", expect: { anonymous: 404, signedIn: 404 } },
 ];
@@ -93,11 +122,11 @@ describe("route × role table", () => {
           redirect: "manual",
           headers: {
             ...(cookie ? { Cookie: cookie } : {}),
-            ...(row.method === "POST"
+            ...(row.method !== "GET"
               ? { "Content-Type": "application/x-www-form-urlencoded", Origin: baseUrl() }
               : {}),
           },
-          body: row.method === "POST" ? "" : undefined,
+          body: row.method !== "GET" ? "" : undefined,
         });
         await response.arrayBuffer();
         actual[who] = response.status;

@@ -36,3 +36,14 @@ export async function createPerson(input: {
   }
   return id;
 }
+
+/** Creates a stock location (there is no page for locations yet); returns its code. */
+export async function createLocation(code: string, name = `Test ${code}`): Promise<string> {
+  await testDatabase().query("INSERT INTO locations (code, name, kind) VALUES (?, ?, 'bin')", [code, name]);
+  return code;
+}
+
+/** A short random suffix for SKUs, lot numbers and location codes. */
+export function uniqueCode(prefix: string): string {
+  return `${prefix}-${randomBytes(4).toString("hex").toUpperCase()}`;
+}

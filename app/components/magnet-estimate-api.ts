@@ -1,0 +1,13 @@
+/** The browser's call to POST /api/v1/magnet-estimates (see app/lib/api-request.ts). */
+import type { MagnetEstimate } from "~/engineering/magnet-estimate";
+import { postJson } from "~/lib/api-request";
+import type { EstimatedInput } from "./magnet-estimate-results";
+
+export type EstimateAnswer =
+  | { ok: true; estimate: MagnetEstimate; input: EstimatedInput }
+  | { ok: false; status: number; message: string; fields: Record<string, string[]> };
+
+export async function requestMagnetEstimate(input: EstimatedInput, signal: AbortSignal): Promise<EstimateAnswer> {
+  const answer = await postJson<MagnetEstimate>("/api/v1/magnet-estimates", input, signal);
+  return answer.ok ? { ok: true, estimate: answer.data, input } : answer;
+}

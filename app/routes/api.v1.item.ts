@@ -1,0 +1,44 @@
+import type { Route } from "./+types/api.v1.item";
+import { requireUser } from "~/auth/guard.server";
+import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
+import { userHasRole } from "~/lib/roles";
+import { updateItem } from "~/stock/catalogue.server";
+import { itemPatchSchema } from "~/stock/item-schemas";
+import { findItemBySku } from "~/stock/items.server";
+import { answerStockError } from "~/stock/stock-api.server";
+
+/** GET /api/v1/items/:sku → the item with its balances by lot and location. */
+export async function loader({ request, params }: Route.LoaderArgs) {
+  await requireUser(request);
+  const item = await findItemBySku(params.sku);
+  if (!item) return apiError(404, `No item with SKU "${params.sku}".`);
+  return Response.json(withoutId(item));
+}
+
+/**
+ * PATCH /api/v1/items/:sku: buyers and admins change name, reorder fields and
+ * archive state; storekeepers change the reorder fields only.
+ */
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireUser(request);
+  if (request.method !== "PATCH") return methodNotAllowed(["GET", "PATCH"]);
+  if (!userHasRole(user, ["buyer", "storekeeper"])) {
+    return apiError(403, "This needs the role buyer or storekeeper.");
+  }
+  const change = await readJsonBody(request, itemPatchSchema);
+  const touchesCatalogue = change.name !== undefined || change.active !== undefined;
+  if (touchesCatalogue && !userHasRole(user, ["buyer"])) {
+    return apiError(403, "Storekeepers change reorder point and quantity only; the name and archive state need the role buyer.");
+  }
+  return answerStockError(async () => {
+    await updateItem(params.sku, change);
+    return Response.json(withoutId((await findItemBySku(params.sku))!));
+  });
+}
+
+/** The item as the API shows it: the database id stays inside. */
+function withoutId<T extends { id: number }>(item: T): Omit<T, "id"> {
+  const visible: Partial<T> = { ...item };
+  delete visible.id;
+  return visible as Omit<T, "id">;
+}

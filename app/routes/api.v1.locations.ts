@@ -1,0 +1,10 @@
+import type { Route } from "./+types/api.v1.locations";
+import { requireUser } from "~/auth/guard.server";
+import { listLocations } from "~/stock/items.server";
+
+/** GET /api/v1/locations → [{ code, name }]. */
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireUser(request);
+  const locations = await listLocations();
+  return Response.json(locations.map(({ code, name }) => ({ code, name })));
+}

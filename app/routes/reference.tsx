@@ -1,0 +1,196 @@
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data, Link, redirect } from "react-router";
+import type { Route } from "./+types/reference";
+import { requireRole, requireUser } from "~/auth/guard.server";
+import { AddMagnetGradeForm } from "~/components/add-magnet-grade-form";
+import { ConductorMaterialTable } from "~/components/conductor-material-table";
+import { InsulationKindTable } from "~/components/insulation-kind-table";
+import { MagnetGradeTable } from "~/components/magnet-grade-table";
+import { ThermalClassTable } from "~/components/thermal-class-table";
+import { WireSizeTable } from "~/components/wire-size-table";
+import { userHasRole } from "~/lib/roles";
+import { addMagnetGrade } from "~/reference/magnet-grade-admin.server";
+import { magnetGradeFormSchema } from "~/reference/magnet-grade-form";
+import {
+  listConductorMaterials,
+  listInsulationKinds,
+  listMagnetGradeRows,
+  listThermalClasses,
+  listWireSizeRows,
+} from "~/reference/reference-tables.server";
+
+/** The tables of the page, in the order of the switch; `?table=` picks one. */
+const tables = [
+  { id: "wire-sizes", title: "Wire sizes" },
+  { id: "insulation", title: "Insulation" },
+  { id: "thermal-classes", title: "Thermal classes" },
+  { id: "conductors", title: "Conductors" },
+  { id: "magnet-grades", title: "Magnet grades" },
+] as const;
+
+type TableId = (typeof tables)[number]["id"];
+
+function tableFromSearch(value: string | null): TableId {
+  if (value === null || value === "") return "wire-sizes";
+  const table = tables.find((candidate) => candidate.id === value);
+  if (!table)
+    throw data(
+      { message: `There is no reference table called “${value}”.` },
+      { status: 404 },
+    );
+  return table.id;
+}
+
+async function rowsOf(table: TableId) {
+  switch (table) {
+    case "wire-sizes":
+      return { table, rows: await listWireSizeRows() };
+    case "insulation":
+      return { table, rows: await listInsulationKinds() };
+    case "thermal-classes":
+      return { table, rows: await listThermalClasses() };
+    case "conductors":
+      return { table, rows: await listConductorMaterials() };
+    case "magnet-grades":
+      return { table, rows: await listMagnetGradeRows() };
+  }
+}
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const search = new URL(request.url).searchParams;
+  const table = tableFromSearch(search.get("table"));
+  return {
+    section: await rowsOf(table),
+    canAddGrade: userHasRole(user, ["admin"]),
+    addedGrade: table === "magnet-grades" ? search.get("added") : null,
+  };
+}
+
+/** Adds a magnet grade (admins only); field messages on bad input, 409 when the name is taken. */
+export async function action({ request }: Route.ActionArgs) {
+  const admin = await requireRole(request, ["admin"]);
+  const submission = parseWithZod(await request.formData(), {
+    schema: magnetGradeFormSchema,
+  });
+  if (submission.status !== "success") {
+    return data({ result: submission.reply() }, { status: 400 });
+  }
+  const outcome = await addMagnetGrade(submission.value, admin.id);
+  if (!outcome.added) {
+    return data(
+      {
+        result: submission.reply({
+          fieldErrors: { [outcome.field]: [outcome.message] },
+        }),
+      },
+      { status: 409 },
+    );
+  }
+  return redirect(
+    `/reference?table=magnet-grades&added=${encodeURIComponent(outcome.name)}`,
+  );
+}
+
+export const meta: Route.MetaFunction = ({ loaderData }) => {
+  const title = tables.find(
+    (table) => table.id === loaderData?.section.table,
+  )?.title;
+  return [{ title: `${title ? `${title} · ` : ""}Reference · Turnledger` }];
+};
+
+function TableSwitch({ current }: { current: TableId }) {
+  return (
+    <nav aria-label="Reference tables" className="print:hidden">
+      <ul className="flex flex-wrap gap-1 border-b border-rule">
+        {tables.map((table) => {
+          const active = table.id === current;
+          return (
+            <li key={table.id}>
+              <Link
+                to={`?table=${table.id}`}
+                aria-current={active ? "page" : undefined}
+                className={`-mb-px block rounded-t-md border px-4 py-2 text-sm font-medium ${
+                  active
+                    ? "border-rule border-b-sheet bg-sheet text-copper-700"
+                    : "border-transparent text-graphite-700 hover:text-copper-700"
+                }`}
+              >
+                {table.title}
+              </Link>
+            </li>
+          );
+        })}
+      </ul>
+    </nav>
+  );
+}
+
+function Section({
+  section,
+}: {
+  section: Route.ComponentProps["loaderData"]["section"];
+}) {
+  switch (section.table) {
+    case "wire-sizes":
+      return <WireSizeTable rows={section.rows} />;
+    case "insulation":
+      return <InsulationKindTable rows={section.rows} />;
+    case "thermal-classes":
+      return <ThermalClassTable rows={section.rows} />;
+    case "conductors":
+      return <ConductorMaterialTable rows={section.rows} />;
+    case "magnet-grades":
+      return <MagnetGradeTable rows={section.rows} />;
+  }
+}
+
+export default function Reference({
+  loaderData,
+  actionData,
+}: Route.ComponentProps) {
+  const { section, canAddGrade, addedGrade } = loaderData;
+  const title = tables.find((table) => table.id === section.table)!.title;
+  return (
+    <div className="space-y-6">
+      <div>
+        <h1 className="text-2xl font-semibold">Reference tables</h1>
+        <p className="mt-1 max-w-3xl text-graphite-500">
+          The published values Turnledger calculates with. Every row names its
+          source; &ldquo;from memory&rdquo; marks a value not yet checked
+          against the printed standard, &ldquo;common practice&rdquo; a fact of
+          the trade with no published source.
+        </p>
+      </div>
+      <TableSwitch current={section.table} />
+      <section aria-labelledby="table-heading" className="space-y-4">
+        <div className="flex flex-wrap items-baseline justify-between gap-4">
+          <h2 id="table-heading" className="text-xl font-semibold">
+            {title}
+          </h2>
+          {section.table === "magnet-grades" && canAddGrade ? (
+            <a href="#add-grade-heading" className="button-quiet print:hidden">
+              Add a grade from a data sheet
+            </a>
+          ) : null}
+        </div>
+        {addedGrade ? (
+          <p
+            role="status"
+            className="rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
+          >
+            Added the grade {addedGrade}.
+          </p>
+        ) : null}
+        <Section key={section.table} section={section} />
+      </section>
+      {section.table === "magnet-grades" && canAddGrade ? (
+        // A new key after each added grade empties the form.
+        <AddMagnetGradeForm
+          key={addedGrade ?? "new"}
+          lastResult={actionData?.result}
+        />
+      ) : null}
+    </div>
+  );
+}

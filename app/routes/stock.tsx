@@ -1,0 +1,301 @@
+import { createColumnHelper } from "@tanstack/react-table";
+import { useMemo } from "react";
+import { Form, Link, redirect, useNavigate } from "react-router";
+import type { Route } from "./+types/stock";
+import { requireUser } from "~/auth/guard.server";
+import { BelowReorderMark } from "~/components/below-reorder-mark";
+import { DataTable } from "~/components/data-table";
+import { SortHeaderLink } from "~/components/sort-header-link";
+import { formatQuantity } from "~/lib/format";
+import { userHasRole } from "~/lib/roles";
+import { listItems, type ItemSortKey } from "~/stock/items.server";
+import { stockCsvRowLimit } from "~/stock/stock-csv";
+import {
+  exportSearch,
+  itemListQueryOf,
+  readStockListView,
+  sortSearch,
+  stockListPageSize,
+  stockListSearch,
+  type StockListView,
+} from "~/stock/stock-list-view";
+import {
+  formatMoney,
+  formatStockQuantity,
+  itemKindLabel,
+} from "~/stock/stock-quantity-text";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const { view, ignored } = readStockListView(
+    new URL(request.url).searchParams,
+  );
+  const { total, items } = await listItems(itemListQueryOf(view));
+  const pageCount = Math.max(1, Math.ceil(total / stockListPageSize));
+  // A page past the end (the list shrank since the link was made) shows the last one.
+  if (view.page > pageCount)
+    throw redirect(`/stock${stockListSearch(view, { page: pageCount })}`);
+  return {
+    items,
+    total,
+    pageCount,
+    view,
+    ignored,
+    canCreate: userHasRole(user, ["buyer"]),
+  };
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Stock · Turnledger" }];
+
+type Item = Route.ComponentProps["loaderData"]["items"][number];
+const column = createColumnHelper<Item>();
+
+function stockColumns(view: StockListView) {
+  const sortHeader = (label: string, key: ItemSortKey) => () => (
+    <SortHeaderLink
+      label={label}
+      href={`/stock${sortSearch(view, key)}`}
+      direction={view.sort === key ? view.order : false}
+    />
+  );
+  return [
+    column.accessor("sku", {
+      header: sortHeader("SKU", "sku"),
+      cell: (info) => (
+        <Link
+          to={`/stock/items/${encodeURIComponent(info.getValue())}`}
+          className="font-medium whitespace-nowrap text-copper-700 underline-offset-2 hover:underline"
+        >
+          {info.getValue()}
+        </Link>
+      ),
+    }),
+    column.accessor("name", {
+      header: sortHeader("Name", "name"),
+      cell: (info) => (
+        <>
+          {info.getValue()}
+          {info.row.original.active ? null : (
+            <span className="ml-2 text-xs text-graphite-500">(archived)</span>
+          )}
+        </>
+      ),
+    }),
+    column.accessor("kind", {
+      header: sortHeader("Kind", "kind"),
+      cell: (info) => itemKindLabel(info.getValue()),
+    }),
+    column.accessor("sizeOrGrade", {
+      header: "Size or grade",
+      cell: (info) => info.getValue() || "—",
+    }),
+    column.accessor("onHand", {
+      header: sortHeader("On hand", "onHand"),
+      cell: (info) => (
+        <span className="whitespace-nowrap">
+          {formatStockQuantity(info.getValue(), info.row.original.unit)}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
+    column.accessor("reserved", {
+      header: "Reserved",
+      cell: (info) => (
+        <span className="whitespace-nowrap">
+          {formatStockQuantity(info.getValue(), info.row.original.unit)}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
+    column.accessor("available", {
+      header: sortHeader("Available", "available"),
+      cell: (info) => (
+        <span className="whitespace-nowrap font-medium">
+          {formatStockQuantity(info.getValue(), info.row.original.unit)}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
+    column.accessor("reorderPoint", {
+      header: "Reorder point",
+      cell: (info) =>
+        info.getValue() > 0 ? (
+          <span className="flex flex-col items-end gap-1 whitespace-nowrap">
+            {formatStockQuantity(info.getValue(), info.row.original.unit)}
+            {info.row.original.belowReorder ? (
+              <BelowReorderMark label="Below" />
+            ) : null}
+          </span>
+        ) : (
+          <span className="text-graphite-500">not set</span>
+        ),
+      meta: { numeric: true },
+    }),
+    column.accessor("value", {
+      header: sortHeader("Value", "value"),
+      cell: (info) => (
+        <span className="whitespace-nowrap">
+          {formatMoney(info.getValue())}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
+  ];
+}
+
+export default function Stock({ loaderData }: Route.ComponentProps) {
+  const { items, total, pageCount, view, ignored, canCreate } = loaderData;
+  const columns = useMemo(() => stockColumns(view), [view]);
+  const navigate = useNavigate();
+  /** Without JavaScript the browser sends the form as it is; with it, empty fields stay out of the address. */
+  function showFiltered(event: React.FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const params = new URLSearchParams();
+    for (const [name, value] of new FormData(event.currentTarget)) {
+      if (typeof value === "string" && value.trim() !== "")
+        params.append(name, value.trim());
+    }
+    const query = params.toString();
+    void navigate(`/stock${query ? `?${query}` : ""}`);
+  }
+  const first = (view.page - 1) * stockListPageSize + 1;
+  return (
+    <div className="space-y-5">
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <div>
+          <h1 className="text-2xl font-semibold">Stock</h1>
+          <p className="mt-1 text-graphite-500">
+            Wire, magnets and other parts with what is on hand, reserved for
+            build orders and free to use.
+          </p>
+        </div>
+        <div className="flex flex-wrap gap-2">
+          <a
+            href={`/stock/export.csv${exportSearch(view)}`}
+            download
+            className="button-quiet"
+          >
+            Export CSV
+          </a>
+          {canCreate ? (
+            <Link to="/stock/items/new" className="button-primary">
+              New item
+            </Link>
+          ) : null}
+        </div>
+      </div>
+
+      <Form
+        method="get"
+        action="/stock"
+        onSubmit={showFiltered}
+        className="panel flex flex-wrap items-end gap-4 py-4"
+        aria-label="Filter the stock list"
+      >
+        <div className="w-64">
+          <label htmlFor="stock-search" className="field-label">
+            Search
+          </label>
+          <input
+            id="stock-search"
+            type="search"
+            name="search"
+            defaultValue={view.search ?? ""}
+            maxLength={80}
+            placeholder="SKU, name, size or grade"
+            className="field-input"
+          />
+        </div>
+        <div className="w-40">
+          <label htmlFor="stock-kind" className="field-label">
+            Kind
+          </label>
+          <select
+            id="stock-kind"
+            name="kind"
+            defaultValue={view.kind ?? ""}
+            className="field-input"
+          >
+            <option value="">All kinds</option>
+            <option value="wire">Wire</option>
+            <option value="magnet">Magnet</option>
+            <option value="part">Other part</option>
+          </select>
+        </div>
+        <label className="flex items-center gap-2 pb-2 text-sm">
+          <input
+            type="checkbox"
+            name="belowReorder"
+            value="1"
+            defaultChecked={view.belowReorder}
+            className="h-4 w-4 accent-copper-600"
+          />
+          Below reorder point only
+        </label>
+        <label className="flex items-center gap-2 pb-2 text-sm">
+          <input
+            type="checkbox"
+            name="archived"
+            value="1"
+            defaultChecked={view.archived}
+            className="h-4 w-4 accent-copper-600"
+          />
+          Include archived items
+        </label>
+        {view.sort !== "sku" ? (
+          <input type="hidden" name="sort" value={view.sort} />
+        ) : null}
+        {view.order !== "asc" ? (
+          <input type="hidden" name="order" value={view.order} />
+        ) : null}
+        <div className="flex gap-2 pb-px">
+          <button type="submit" className="button-quiet">
+            Show
+          </button>
+          {stockListSearch(view, { page: 1, sort: "sku", order: "asc" }) ? (
+            <Link to="/stock" className="button-quiet">
+              Clear
+            </Link>
+          ) : null}
+        </div>
+      </Form>
+
+      {ignored.length > 0 ? (
+        <p
+          role="alert"
+          className="rounded-md border border-caution/40 bg-caution/5 px-3 py-2 text-sm text-graphite-800"
+        >
+          Left out of the view because their values in the address were not
+          understood: {ignored.join(", ")}.
+        </p>
+      ) : null}
+
+      <p role="status" className="text-sm text-graphite-700">
+        {total === 0
+          ? "No item matches."
+          : `${formatQuantity(total, total === 1 ? "item" : "items")} · showing ${formatQuantity(first, "")}–${formatQuantity(first + items.length - 1, "")}`}
+        {total > stockCsvRowLimit
+          ? ` · the CSV export holds the first ${formatQuantity(stockCsvRowLimit, "")} rows of this view`
+          : ""}
+      </p>
+
+      <DataTable
+        caption="Stock items"
+        columns={columns}
+        rows={items}
+        page={view.page}
+        pageCount={pageCount}
+        pageHref={(page) => `/stock${stockListSearch(view, { page })}`}
+        emptyText={
+          view.search || view.kind || view.belowReorder
+            ? "No item matches these filters."
+            : "The catalogue is empty: add the first item."
+        }
+      />
+      <p className="text-xs text-graphite-500">
+        Available = on hand − reserved. Value = on hand × moving average cost,
+        in the company currency.
+      </p>
+    </div>
+  );
+}

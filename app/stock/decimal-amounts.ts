@@ -1,0 +1,99 @@
+/**
+ * Exact arithmetic for stock quantities and money. Quantities are kept as
+ * whole thousandths of their unit (grams for kg) and money per unit as whole
+ * ten-thousandths, so sums and balances never drift the way binary floating
+ * point does. The database stores both as DECIMAL. Pure: no I/O.
+ */
+
+export const quantityScale = 1_000n;
+export const unitCostScale = 10_000n;
+
+const decimalPattern = /^-?\d+(\.\d+)?$/;
+
+/** "12.345" → 12345n thousandths. Throws on more than 3 decimals or non-numbers. */
+export function parseQuantity(text: string): bigint {
+  return parseScaled(text, 3);
+}
+
+/** "1.2345" → 12345n ten-thousandths. */
+export function parseUnitCost(text: string): bigint {
+  return parseScaled(text, 4);
+}
+
+function parseScaled(text: string, decimals: number): bigint {
+  const trimmed = text.trim();
+  if (!decimalPattern.test(trimmed)) throw new RangeError(`"${text}" is not a decimal number`);
+  const negative = trimmed.startsWith("-");
+  const [whole, fraction = ""] = trimmed.replace("-", "").split(".");
+  if (fraction.length > decimals && /[1-9]/.test(fraction.slice(decimals))) {
+    throw new RangeError(`"${text}" has more than ${decimals} decimals`);
+  }
+  const scaled = BigInt(whole!) * 10n ** BigInt(decimals) + BigInt((fraction + "0".repeat(decimals)).slice(0, decimals) || "0");
+  return negative ? -scaled : scaled;
+}
+
+/** A JSON number from the API as thousandths; null when it has more than 3 decimals. */
+export function quantityFromNumber(value: number): bigint | null {
+  const scaled = Math.round(value * 1000);
+  if (Math.abs(scaled - value * 1000) > 1e-6 * Math.max(1, Math.abs(value))) return null;
+  return BigInt(scaled);
+}
+
+export function unitCostFromNumber(value: number): bigint | null {
+  const scaled = Math.round(value * 10_000);
+  if (Math.abs(scaled - value * 10_000) > 1e-6 * Math.max(1, Math.abs(value))) return null;
+  return BigInt(scaled);
+}
+
+/** 12345n thousandths → "12.345" (for DECIMAL columns). */
+export function formatQuantityText(thousandths: bigint): string {
+  return formatScaled(thousandths, 3);
+}
+
+export function formatUnitCostText(tenThousandths: bigint): string {
+  return formatScaled(tenThousandths, 4);
+}
+
+function formatScaled(value: bigint, decimals: number): string {
+  const negative = value < 0n;
+  const magnitude = negative ? -value : value;
+  const scale = 10n ** BigInt(decimals);
+  const whole = magnitude / scale;
+  const fraction = (magnitude % scale).toString().padStart(decimals, "0");
+  return `${negative ? "-" : ""}${whole}.${fraction}`;
+}
+
+/** Thousandths as a JSON number (exact for any stock quantity below 9 × 10¹² units). */
+export function quantityToNumber(thousandths: bigint): number {
+  return Number(thousandths) / 1000;
+}
+
+/** Divides and rounds half away from zero. */
+function divideRounded(numerator: bigint, denominator: bigint): bigint {
+  const negative = numerator < 0n !== denominator < 0n;
+  const n = numerator < 0n ? -numerator : numerator;
+  const d = denominator < 0n ? -denominator : denominator;
+  const rounded = (n * 2n + d) / (2n * d);
+  return negative ? -rounded : rounded;
+}
+
+/**
+ * Moving average cost after a receipt: (onHand · average + received · cost) / (onHand + received),
+ * to the nearest ten-thousandth. With nothing on hand before, the receipt's cost.
+ */
+export function movingAverageAfterReceipt(input: {
+  onHand: bigint;
+  averageCost: bigint;
+  received: bigint;
+  unitCost: bigint;
+}): bigint {
+  const before = input.onHand > 0n ? input.onHand : 0n;
+  const total = before + input.received;
+  if (total <= 0n) return input.unitCost;
+  return divideRounded(before * input.averageCost + input.received * input.unitCost, total);
+}
+
+/** Value of a quantity at a unit cost, in ten-thousandths of money (exact). */
+export function valueOf(thousandths: bigint, unitCost: bigint): bigint {
+  return divideRounded(thousandths * unitCost, quantityScale);
+}

@@ -1,0 +1,169 @@
+/** Reading the catalogue with its kept balances: lists (paged on the server) and one item. */
+import { and, asc, count, desc, eq, gt, like, or, sql, type SQL } from "drizzle-orm";
+import { db } from "~/db/client.server";
+import { items, locations, lots, stockBalances } from "~/db/schema";
+import type { ItemKind } from "~/db/tables/stock-enums";
+import { parseQuantity, parseUnitCost, quantityToNumber, valueOf } from "./decimal-amounts";
+
+import type { itemSortKeys } from "./item-list-query";
+
+export type ItemSortKey = (typeof itemSortKeys)[number];
+
+export interface ItemListQuery {
+  search?: string;
+  kind?: ItemKind;
+  belowReorder?: boolean;
+  includeArchived?: boolean;
+  sort?: ItemSortKey;
+  descending?: boolean;
+  page: number;
+  pageSize: number;
+}
+
+
+function itemFilters(query: ItemListQuery): SQL | undefined {
+  const conditions: SQL[] = [];
+  if (!query.includeArchived) conditions.push(eq(items.active, true));
+  if (query.kind) conditions.push(eq(items.kind, query.kind));
+  if (query.belowReorder) conditions.push(eq(items.belowReorder, true));
+  const search = query.search?.trim();
+  if (search) {
+    const escaped = search.replace(/[\\%_]/g, (character) => `\\${character}`);
+    conditions.push(
+      or(
+        like(items.sku, `${escaped}%`),
+        like(items.name, `%${escaped}%`),
+        like(items.sizeOrGrade, `%${escaped}%`),
+      )!,
+    );
+  }
+  return conditions.length > 0 ? and(...conditions) : undefined;
+}
+
+const sortColumns: Record<ItemSortKey, SQL | typeof items.sku> = {
+  sku: items.sku,
+  name: sql`${items.name}`,
+  kind: sql`${items.kind}`,
+  onHand: sql`${items.onHand}`,
+  available: sql`${items.available}`,
+  value: sql`${items.stockValue}`,
+};
+
+/** One page of items and the number matching, for the stock list, its CSV export and the API. */
+export async function listItems(query: ItemListQuery) {
+  const where = itemFilters(query);
+  const sortColumn = sortColumns[query.sort ?? "sku"];
+  const [counted] = await db.select({ total: count() }).from(items).where(where);
+  const rows = await db
+    .select({
+      sku: items.sku,
+      name: items.name,
+      kind: items.kind,
+      unit: items.unit,
+      sizeOrGrade: items.sizeOrGrade,
+      onHand: items.onHand,
+      reserved: items.reserved,
+      reorderPoint: items.reorderPoint,
+      reorderQuantity: items.reorderQuantity,
+      averageCost: items.averageCost,
+      active: items.active,
+    })
+    .from(items)
+    .where(where)
+    .orderBy(query.descending ? desc(sortColumn) : asc(sortColumn), asc(items.sku))
+    .limit(query.pageSize)
+    .offset((query.page - 1) * query.pageSize);
+  return { total: counted?.total ?? 0, items: rows.map(itemSummary) };
+}
+
+function itemSummary(row: {
+  sku: string;
+  name: string;
+  kind: ItemKind;
+  unit: string;
+  sizeOrGrade: string;
+  onHand: string;
+  reserved: string;
+  reorderPoint: string;
+  reorderQuantity: string;
+  averageCost: string;
+  active: boolean;
+}) {
+  const onHand = parseQuantity(row.onHand);
+  const reserved = parseQuantity(row.reserved);
+  const reorderPoint = parseQuantity(row.reorderPoint);
+  const averageCost = parseUnitCost(row.averageCost);
+  return {
+    sku: row.sku,
+    name: row.name,
+    kind: row.kind,
+    unit: row.unit,
+    sizeOrGrade: row.sizeOrGrade,
+    onHand: quantityToNumber(onHand),
+    reserved: quantityToNumber(reserved),
+    available: quantityToNumber(onHand - reserved),
+    reorderPoint: quantityToNumber(reorderPoint),
+    reorderQuantity: quantityToNumber(parseQuantity(row.reorderQuantity)),
+    belowReorder: reorderPoint > 0n && onHand - reserved < reorderPoint,
+    averageCost: Number(averageCost) / 10_000,
+    value: Number(valueOf(onHand, averageCost)) / 10_000,
+    active: row.active,
+  };
+}
+
+/** One item with its balances by lot and location, or null. */
+export async function findItemBySku(sku: string) {
+  const [row] = await db
+    .select({
+      id: items.id,
+      sku: items.sku,
+      name: items.name,
+      kind: items.kind,
+      unit: items.unit,
+      sizeOrGrade: items.sizeOrGrade,
+      onHand: items.onHand,
+      reserved: items.reserved,
+      reorderPoint: items.reorderPoint,
+      reorderQuantity: items.reorderQuantity,
+      averageCost: items.averageCost,
+      active: items.active,
+    })
+    .from(items)
+    .where(eq(items.sku, sku))
+    .limit(1);
+  if (!row) return null;
+  const balances = await db
+    .select({
+      lot: lots.lotNumber,
+      tareKg: lots.tareKg,
+      location: locations.code,
+      locationName: locations.name,
+      onHand: stockBalances.onHand,
+      reserved: stockBalances.reserved,
+    })
+    .from(stockBalances)
+    .innerJoin(locations, eq(locations.id, stockBalances.locationId))
+    .leftJoin(lots, eq(lots.id, stockBalances.lotId))
+    .where(and(eq(stockBalances.itemId, row.id), gt(stockBalances.onHand, "0")))
+    .orderBy(asc(locations.code), asc(lots.lotNumber));
+  return {
+    id: row.id,
+    ...itemSummary(row),
+    balances: balances.map((balance) => ({
+      lot: balance.lot,
+      location: balance.location,
+      locationName: balance.locationName,
+      tareKg: balance.tareKg === null ? null : Number(balance.tareKg),
+      onHand: quantityToNumber(parseQuantity(balance.onHand)),
+      reserved: quantityToNumber(parseQuantity(balance.reserved)),
+    })),
+  };
+}
+
+export async function listLocations() {
+  return db
+    .select({ code: locations.code, name: locations.name, kind: locations.kind })
+    .from(locations)
+    .where(eq(locations.active, true))
+    .orderBy(asc(locations.code));
+}

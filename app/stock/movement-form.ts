@@ -1,0 +1,42 @@
+/**
+ * The record-movement form: its text fields turned into the ledger's request
+ * (the same schema as POST /api/v1/stock-movements), so the page and the API
+ * accept and refuse exactly the same things. A decimal comma is accepted.
+ */
+import { z } from "zod";
+import { movementRequestSchema } from "./movement-request";
+
+const numberFields = ["quantity", "unitCost", "grossKg", "tareKg"] as const;
+
+/** "1,25" → 1.25; "" → undefined; text that is no number stays text, so the schema names it. */
+function formNumber(value: unknown): unknown {
+  if (typeof value !== "string") return value;
+  const trimmed = value.trim();
+  if (trimmed === "") return undefined;
+  const normalised = /^-?\d+,\d+$/.test(trimmed) ? trimmed.replace(",", ".") : trimmed;
+  const number = Number(normalised);
+  return /^-?(\d+\.?\d*|\.\d+)$/.test(normalised) && Number.isFinite(number) ? number : trimmed;
+}
+
+function formValuesToRequest(values: unknown): unknown {
+  if (!values || typeof values !== "object") return values;
+  const request: Record<string, unknown> = { ...(values as Record<string, unknown>) };
+  for (const field of numberFields) request[field] = formNumber(request[field]);
+  // A chosen balance row arrives as "lot|location"; an empty lot means the item is not kept in lots.
+  if (typeof request.balance === "string" && request.balance.includes("|")) {
+    const [lot, location] = request.balance.split("|");
+    request.lot = lot || undefined;
+    request.location = location;
+  }
+  delete request.balance;
+  for (const [key, value] of Object.entries(request)) if (value === "") request[key] = undefined;
+  return request;
+}
+
+export const movementFormSchema = z.preprocess(formValuesToRequest, movementRequestSchema);
+
+/** Where a ledger refusal's field shows on the form (lot and location are one choice there). */
+export function formFieldOf(field: string | undefined, type: string): string {
+  if ((field === "lot" || field === "location") && type !== "receipt") return "balance";
+  return field ?? "";
+}

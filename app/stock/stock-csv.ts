@@ -1,0 +1,74 @@
+/**
+ * The stock list as a CSV file: one row per item, quantities as plain numbers
+ * with the unit in its own column, money in the company currency. Text cells
+ * are guarded against formula injection. Pure: no I/O.
+ */
+import Papa from "papaparse";
+import { guardCell } from "./csv-formula-guard";
+
+/** The most rows one export holds; the stock page says so when a view matches more. */
+export const stockCsvRowLimit = 50_000;
+
+/** What the export needs of each item (the stock list's rows). */
+export interface StockCsvItem {
+  sku: string;
+  name: string;
+  kind: string;
+  sizeOrGrade: string;
+  unit: string;
+  onHand: number;
+  reserved: number;
+  available: number;
+  reorderPoint: number;
+  reorderQuantity: number;
+  belowReorder: boolean;
+  averageCost: number;
+  value: number;
+  active: boolean;
+}
+
+type Cell = string | number;
+
+const columns: { header: string; cell: (item: StockCsvItem) => Cell }[] = [
+  { header: "sku", cell: (item) => item.sku },
+  { header: "name", cell: (item) => item.name },
+  { header: "kind", cell: (item) => item.kind },
+  { header: "size or grade", cell: (item) => item.sizeOrGrade },
+  { header: "unit", cell: (item) => item.unit },
+  { header: "on hand", cell: (item) => item.onHand },
+  { header: "reserved", cell: (item) => item.reserved },
+  { header: "available", cell: (item) => item.available },
+  { header: "reorder point", cell: (item) => item.reorderPoint },
+  { header: "reorder quantity", cell: (item) => item.reorderQuantity },
+  {
+    header: "below reorder point",
+    cell: (item) => (item.belowReorder ? "yes" : "no"),
+  },
+  {
+    header: "average cost per unit (company currency)",
+    cell: (item) => item.averageCost,
+  },
+  {
+    header: "value (company currency)",
+    cell: (item) => Math.round(item.value * 100) / 100,
+  },
+  { header: "archived", cell: (item) => (item.active ? "no" : "yes") },
+];
+
+export const stockCsvHeaders = columns.map((column) => column.header);
+
+/**
+ * The CSV text, with a byte-order mark so spreadsheet programs read it as
+ * UTF-8 (sizes carry × and Ø) and CRLF line ends as RFC 4180 has them.
+ */
+export function stockCsv(items: readonly StockCsvItem[]): string {
+  const rows = items.map((item) =>
+    columns.map((column) => guardCell(column.cell(item))),
+  );
+  return `\uFEFF${Papa.unparse({ fields: stockCsvHeaders, data: rows }, { newline: "\r\n" })}\r\n`;
+}
+
+/** "turnledger-stock-2026-12-02.csv": the day in UTC, as every time in Turnledger. */
+export function stockCsvFilename(now: Date): string {
+  return `turnledger-stock-${now.toISOString().slice(0, 10)}.csv`;
+}

@@ -1,0 +1,295 @@
+/**
+ * Recording stock movements: the only code that writes the ledger. Each
+ * movement is one short transaction that locks the item row, then the balance
+ * rows it touches (always in that order, so concurrent movements queue rather
+ * than deadlock), checks that no balance goes below zero or below what is
+ * reserved, appends the movement and updates the kept balances.
+ */
+import { and, eq, sql } from "drizzle-orm";
+import { db } from "~/db/client.server";
+import { items, locations, lots, stockBalances, stockMovements } from "~/db/schema";
+import {
+  formatQuantityText,
+  formatUnitCostText,
+  movingAverageAfterReceipt,
+  parseQuantity,
+  parseUnitCost,
+  quantityToNumber,
+} from "./decimal-amounts";
+import { StockError } from "./stock-errors";
+import type { MovementRequest } from "./movement-request";
+
+type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
+
+export interface RecordedMovement {
+  movement: {
+    id: number;
+    type: MovementRequest["type"];
+    sku: string;
+    lot: string | null;
+    location: string;
+    toLocation: string | null;
+    quantity: number;
+    unit: string;
+    createdAt: string;
+  };
+  balance: { onHand: number; reserved: number; available: number };
+}
+
+async function lockItem(tx: Transaction, sku: string) {
+  const [item] = await tx
+    .select({
+      id: items.id,
+      sku: items.sku,
+      kind: items.kind,
+      unit: items.unit,
+      active: items.active,
+      onHand: items.onHand,
+      reserved: items.reserved,
+      averageCost: items.averageCost,
+    })
+    .from(items)
+    .where(eq(items.sku, sku))
+    .for("update")
+    .limit(1);
+  if (!item) throw new StockError(400, `No item with SKU "${sku}".`, "sku");
+  return item;
+}
+
+async function findLocation(tx: Transaction, code: string, field: string) {
+  const [location] = await tx
+    .select({ id: locations.id, code: locations.code, active: locations.active })
+    .from(locations)
+    .where(eq(locations.code, code))
+    .limit(1);
+  if (!location || !location.active) throw new StockError(400, `No location with code "${code}".`, field);
+  return location;
+}
+
+/** Locks (creating when missing) one balance row and returns its on hand and reserved, in thousandths. */
+async function lockBalance(tx: Transaction, itemId: number, lotId: number, locationId: number) {
+  await tx
+    .insert(stockBalances)
+    .values({ itemId, lotId, locationId, onHand: "0", reserved: "0", updatedAt: new Date() })
+    .onDuplicateKeyUpdate({ set: { itemId: sql`item_id` } });
+  const [row] = await tx
+    .select({ onHand: stockBalances.onHand, reserved: stockBalances.reserved })
+    .from(stockBalances)
+    .where(and(eq(stockBalances.itemId, itemId), eq(stockBalances.lotId, lotId), eq(stockBalances.locationId, locationId)))
+    .for("update");
+  return { onHand: parseQuantity(row!.onHand), reserved: parseQuantity(row!.reserved) };
+}
+
+async function setBalance(tx: Transaction, itemId: number, lotId: number, locationId: number, onHand: bigint) {
+  await tx
+    .update(stockBalances)
+    .set({ onHand: formatQuantityText(onHand), updatedAt: new Date() })
+    .where(and(eq(stockBalances.itemId, itemId), eq(stockBalances.lotId, lotId), eq(stockBalances.locationId, locationId)));
+}
+
+async function resolveLot(
+  tx: Transaction,
+  item: { id: number; kind: string },
+  request: MovementRequest,
+): Promise<{ id: number; number: string | null; tareKg: bigint | null }> {
+  if (!request.lot) {
+    if (item.kind === "wire") {
+      throw new StockError(400, "Wire is kept by spool: give the spool's lot number.", "lot");
+    }
+    return { id: 0, number: null, tareKg: null };
+  }
+  const [existing] = await tx
+    .select({ id: lots.id, tareKg: lots.tareKg })
+    .from(lots)
+    .where(and(eq(lots.itemId, item.id), eq(lots.lotNumber, request.lot)))
+    .limit(1);
+  if (existing) {
+    return { id: existing.id, number: request.lot, tareKg: existing.tareKg === null ? null : parseQuantity(existing.tareKg) };
+  }
+  if (request.type !== "receipt") {
+    throw new StockError(400, `No lot "${request.lot}" of this item. A new lot comes with a receipt.`, "lot");
+  }
+  const [created] = await tx
+    .insert(lots)
+    .values({
+      itemId: item.id,
+      lotNumber: request.lot,
+      supplierBatch: request.supplierBatch ?? null,
+      spoolType: request.spoolType ?? null,
+      tareKg: request.tareKg === undefined ? null : formatQuantityText(request.tareKg),
+      receivedOn: new Date().toISOString().slice(0, 10),
+    })
+    .$returningId();
+  return { id: created!.id, number: request.lot, tareKg: request.tareKg ?? null };
+}
+
+/**
+ * The signed change at the movement's (first) location, in thousandths,
+ * from the request and what the location holds now.
+ */
+function signedChange(
+  request: MovementRequest,
+  item: { kind: string },
+  lot: { tareKg: bigint | null },
+  balance: { onHand: bigint },
+): bigint {
+  switch (request.type) {
+    case "receipt": {
+      if (request.grossKg !== undefined) {
+        if (item.kind !== "wire") throw new StockError(400, "Gross and tare weights are for wire spools.", "grossKg");
+        const tare = request.tareKg ?? lot.tareKg;
+        if (tare === null) throw new StockError(400, "Give the spool's tare (empty spool) weight.", "tareKg");
+        const net = request.grossKg - tare;
+        if (net <= 0n) throw new StockError(400, "The gross weight must be more than the tare weight.", "grossKg");
+        if (request.quantity !== undefined && request.quantity !== net) {
+          throw new StockError(400, `Gross − tare is ${quantityToNumber(net)} kg, not ${quantityToNumber(request.quantity)} kg.`, "quantity");
+        }
+        return net;
+      }
+      return request.quantity!;
+    }
+    case "issue": {
+      if (request.grossKg !== undefined) {
+        // Spool weigh-back: what left the spool is its previous net less its net now.
+        if (lot.tareKg === null) throw new StockError(400, "This lot has no tare weight: issue by quantity.", "grossKg");
+        const netNow = request.grossKg - lot.tareKg;
+        if (netNow < 0n) throw new StockError(400, "The gross weight is below the spool's tare weight.", "grossKg");
+        const taken = balance.onHand - netNow;
+        if (taken <= 0n) {
+          throw new StockError(400, "The spool weighs as much as or more than its recorded net: nothing to issue.", "grossKg");
+        }
+        return -taken;
+      }
+      return -request.quantity!;
+    }
+    case "scrap":
+    case "transfer":
+      return -request.quantity!;
+    case "return":
+      return request.quantity!;
+    case "adjustment":
+      return request.quantity!;
+    case "count":
+      return request.quantity! - balance.onHand;
+  }
+}
+
+/** Records one movement (two rows for a transfer). Throws StockError for the user's mistakes. */
+export async function recordMovement(
+  request: MovementRequest,
+  userId: string,
+  /** When it happened; only imports and the demo seed give a time other than now. */
+  options: { at?: Date } = {},
+): Promise<RecordedMovement> {
+  return db.transaction(async (tx) => {
+    const item = await lockItem(tx, request.sku);
+    if (!item.active) throw new StockError(409, `Item ${item.sku} is archived: restore it before moving stock.`, "sku");
+    if (request.unit && request.unit !== item.unit) {
+      throw new StockError(400, `Item ${item.sku} is stocked in ${item.unit}, not ${request.unit}.`, "unit");
+    }
+    const quantities = [request.quantity, request.grossKg, request.tareKg].filter((value) => value !== undefined);
+    if (item.unit === "pcs" && quantities.some((value) => value! % 1000n !== 0n)) {
+      throw new StockError(400, `Item ${item.sku} is counted in whole pieces.`, "quantity");
+    }
+    const location = await findLocation(tx, request.location, "location");
+    const toLocation = request.type === "transfer" ? await findLocation(tx, request.toLocation!, "toLocation") : null;
+    if (toLocation && toLocation.id === location.id) {
+      throw new StockError(400, "A transfer needs two different locations.", "toLocation");
+    }
+    const lot = await resolveLot(tx, item, request);
+
+    // Lock balance rows in a fixed order (location id) so two transfers never wait on each other in a circle.
+    const locationIds = toLocation ? [location.id, toLocation.id].sort((a, b) => a - b) : [location.id];
+    const balances = new Map<number, { onHand: bigint; reserved: bigint }>();
+    for (const id of locationIds) balances.set(id, await lockBalance(tx, item.id, lot.id, id));
+    const from = balances.get(location.id)!;
+
+    const change = signedChange(request, item, lot, from);
+    const unit = item.unit;
+    if (from.onHand + change < 0n) {
+      throw new StockError(
+        409,
+        `Only ${quantityToNumber(from.onHand)} ${unit} of ${item.sku}${lot.number ? ` lot ${lot.number}` : ""} at ${location.code}; cannot take ${quantityToNumber(-change)} ${unit}.`,
+        "quantity",
+      );
+    }
+    if (change < 0n && request.type !== "count" && request.type !== "adjustment" && from.onHand + change < from.reserved) {
+      throw new StockError(
+        409,
+        `${quantityToNumber(from.reserved)} ${unit} of ${item.sku} at ${location.code} is reserved for build orders; only ${quantityToNumber(from.onHand - from.reserved)} ${unit} is free.`,
+        "quantity",
+      );
+    }
+
+    const itemOnHand = parseQuantity(item.onHand);
+    const averageCost = parseUnitCost(item.averageCost);
+    const itemChange = request.type === "transfer" ? 0n : change;
+    const itemOnHandAfter = itemOnHand + itemChange;
+    const averageAfter =
+      request.type === "receipt"
+        ? movingAverageAfterReceipt({ onHand: itemOnHand, averageCost, received: change, unitCost: request.unitCost! })
+        : averageCost;
+    const now = options.at ?? new Date();
+    const common = {
+      itemId: item.id,
+      lotId: lot.id,
+      reference: request.reference ?? null,
+      note: request.note ?? null,
+      userId,
+      createdAt: now,
+      averageCostAfter: formatUnitCostText(averageAfter),
+      itemOnHandAfter: formatQuantityText(itemOnHandAfter),
+    };
+
+    await setBalance(tx, item.id, lot.id, location.id, from.onHand + change);
+    const [inserted] = await tx
+      .insert(stockMovements)
+      .values({
+        ...common,
+        type: request.type,
+        locationId: location.id,
+        quantity: formatQuantityText(change),
+        unitCost: request.type === "receipt" ? formatUnitCostText(request.unitCost!) : null,
+        countedQuantity: request.type === "count" ? formatQuantityText(request.quantity!) : null,
+        grossKg: request.grossKg === undefined ? null : formatQuantityText(request.grossKg),
+      })
+      .$returningId();
+    const movementId = inserted!.id;
+    if (toLocation) {
+      const to = balances.get(toLocation.id)!;
+      await setBalance(tx, item.id, lot.id, toLocation.id, to.onHand - change);
+      await tx.update(stockMovements).set({ transferId: movementId }).where(eq(stockMovements.id, movementId));
+      await tx.insert(stockMovements).values({
+        ...common,
+        type: "transfer",
+        locationId: toLocation.id,
+        quantity: formatQuantityText(-change),
+        transferId: movementId,
+      });
+    }
+    await tx
+      .update(items)
+      .set({ onHand: formatQuantityText(itemOnHandAfter), averageCost: formatUnitCostText(averageAfter), updatedAt: now })
+      .where(eq(items.id, item.id));
+
+    const reserved = parseQuantity(item.reserved);
+    return {
+      movement: {
+        id: movementId,
+        type: request.type,
+        sku: item.sku,
+        lot: lot.number,
+        location: location.code,
+        toLocation: toLocation?.code ?? null,
+        quantity: quantityToNumber(change),
+        unit,
+        createdAt: now.toISOString(),
+      },
+      balance: {
+        onHand: quantityToNumber(itemOnHandAfter),
+        reserved: quantityToNumber(reserved),
+        available: quantityToNumber(itemOnHandAfter - reserved),
+      },
+    };
+  });
+}

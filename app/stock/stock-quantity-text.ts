@@ -1,0 +1,27 @@
+/** Stock quantities and money as the stock pages show them, on the one formatter. Pure. */
+import { formatQuantity } from "~/lib/format";
+
+/** Kilograms and metres to the gram and millimetre (3 decimals), pieces whole: "4.800 kg", "100 pcs". */
+export function formatStockQuantity(value: number, unit: string): string {
+  return formatQuantity(value, unit, unit === "pcs" ? 0 : 3);
+}
+
+/** Money in the company currency, to the cent: "1,234.50". */
+export function formatMoney(value: number): string {
+  return formatQuantity(value, "", 2);
+}
+
+/** Cost per unit of stock, to a hundredth of a cent: "14.2000 per kg". */
+export function formatUnitCost(value: number, unit: string): string {
+  return `${formatQuantity(value, "", 4)} per ${unit}`;
+}
+
+const kindLabels: Record<string, string> = {
+  wire: "Wire",
+  magnet: "Magnet",
+  part: "Other part",
+};
+
+export function itemKindLabel(kind: string): string {
+  return kindLabels[kind] ?? kind;
+}

@@ -1,0 +1,57 @@
+/**
+ * npm run bench: every benchmark against a production build, on the test
+ * database. Writes bench/report.json (raw samples included) and prints a summary.
+ */
+import fs from "node:fs";
+import path from "node:path";
+import { startTestEnvironment } from "../scripts/lib/test-environment";
+import { demoPassword, demoStorekeeperId } from "../seed/demo-people";
+import { benchCoilEstimateApi, benchPureCoilEstimates, type Figure } from "./coil-estimates.bench";
+import { seedBenchStock } from "./seed-bench-stock";
+import { benchStock } from "./stock.bench";
+
+// The benchmarks get their own database beside the tests'.
+process.env.TEST_DATABASE_NAME ??= "turnledger_test_bench";
+
+const figures: Figure[] = [];
+figures.push(benchPureCoilEstimates());
+
+const environment = await startTestEnvironment();
+try {
+  const signIn = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
+    method: "POST",
+    headers: { "Content-Type": "application/json" },
+    body: JSON.stringify({ email: "builder@turnledger.test", password: demoPassword() }),
+  });
+  const cookie = signIn.headers.getSetCookie()[0]?.split(";")[0] ?? "";
+  figures.push(await benchCoilEstimateApi(environment.baseUrl, cookie));
+
+  console.log("[bench] loading 20,000 items and 1,000,000 movements…");
+  const loadStarted = performance.now();
+  const { skus, locationCode } = await seedBenchStock(environment.databaseUrl, demoStorekeeperId);
+  console.log(`[bench] loaded in ${((performance.now() - loadStarted) / 1000).toFixed(1)} s`);
+  const storekeeper = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
+    method: "POST",
+    headers: { "Content-Type": "application/json" },
+    body: JSON.stringify({ email: "storekeeper@turnledger.test", password: demoPassword() }),
+  });
+  const storekeeperCookie = storekeeper.headers.getSetCookie()[0]?.split(";")[0] ?? "";
+  figures.push(...(await benchStock({ baseUrl: environment.baseUrl, databaseUrl: environment.databaseUrl, storekeeperCookie, skus, locationCode })));
+} finally {
+  await environment.stop();
+}
+
+const report = {
+  at: new Date().toISOString(),
+  machine: { node: process.version, platform: process.platform, cpus: (await import("node:os")).cpus().length },
+  figures,
+};
+fs.writeFileSync(path.join(import.meta.dirname, "report.json"), JSON.stringify(report, null, 2));
+console.log(`\n${"benchmark".padEnd(46)}${"median".padStart(9)}${"p95".padStart(9)}   target`);
+for (const figure of figures) {
+  console.log(
+    `${figure.name.padEnd(46)}${figure.median.toFixed(3).padStart(9)}${figure.p95.toFixed(3).padStart(9)}   ${figure.target.padEnd(16)} ${figure.target === "reported" ? "" : figure.passed ? "met" : "MISSED"}  (${figure.unit})`,
+  );
+}
+console.log("\nraw samples in bench/report.json");
+process.exit(figures.every((figure) => figure.passed) ? 0 : 1);
