@@ -11,7 +11,16 @@ export default defineConfig(({ isSsrBuild }) => ({
   // Pre-bundle the browser's libraries up front, so the dev server never finds one
   // mid-session and reloads with a second copy of React.
   optimizeDeps: {
-    include: ["react", "react-dom", "react-dom/client", "react-router", "@tanstack/react-table", "@conform-to/react", "@conform-to/zod/v4", "zod"],
+    include: [
+      "react",
+      "react-dom",
+      "react-dom/client",
+      "react-router",
+      "@tanstack/react-table",
+      "@conform-to/react",
+      "@conform-to/zod/v4",
+      "zod",
+    ],
   },
   plugins: [tailwindcss(), reactRouter()],
 }));

@@ -8,7 +8,11 @@ export default defineConfig({
         extends: true,
         test: {
           name: "unit",
-          include: ["app/**/*.test.ts", "scripts/**/*.test.ts", "seed/**/*.test.ts"],
+          include: [
+            "app/**/*.test.ts",
+            "scripts/**/*.test.ts",
+            "seed/**/*.test.ts",
+          ],
           environment: "node",
         },
       },

@@ -57,7 +57,8 @@ function messageOf(data: unknown): string | null {
 export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
   let status = 500;
   let title = "Something went wrong";
-  let detail = "The error has been logged. Try again, and tell an admin if it keeps happening.";
+  let detail =
+    "The error has been logged. Try again, and tell an admin if it keeps happening.";
   let stack: string | undefined;
 
   if (isRouteErrorResponse(error)) {
@@ -68,11 +69,13 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
       detail = message ?? "There is nothing at this address.";
     } else if (status === 403) {
       title = "Not allowed";
-      detail = message ?? "Your roles do not allow this. Ask an admin if you need it.";
+      detail =
+        message ?? "Your roles do not allow this. Ask an admin if you need it.";
     } else if (status === 503) {
       title = "Database unavailable";
       detail =
-        message ?? "Turnledger cannot reach its database. This page will load again by itself.";
+        message ??
+        "Turnledger cannot reach its database. This page will load again by itself.";
     } else if (message) {
       detail = message;
     }
@@ -83,7 +86,9 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
 
   return (
     <main className="mx-auto max-w-xl px-6 py-20">
-      <p className="text-sm font-semibold tracking-wide text-copper-600">Error {status}</p>
+      <p className="text-sm font-semibold tracking-wide text-copper-600">
+        Error {status}
+      </p>
       <h1 className="mt-2 text-3xl font-semibold text-graphite-900">{title}</h1>
       <p className="mt-4 text-graphite-700">{detail}</p>
       {status === 503 ? <RetryWhileUnavailable /> : null}
@@ -93,7 +98,9 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
         </a>
       </p>
       {stack ? (
-        <pre className="mt-8 overflow-x-auto rounded bg-graphite-100 p-4 text-xs">{stack}</pre>
+        <pre className="mt-8 overflow-x-auto rounded bg-graphite-100 p-4 text-xs">
+          {stack}
+        </pre>
       ) : null}
     </main>
   );

@@ -3,7 +3,10 @@
  * under 50 ms) and the API (one estimate per request, target median server
  * time under 5 ms, read from the Server-Timing header).
  */
-import { estimateCoil, type CoilEstimateInput } from "~/engineering/coil-estimate";
+import {
+  estimateCoil,
+  type CoilEstimateInput,
+} from "~/engineering/coil-estimate";
 import { IEC_NOMINAL_DIAMETERS } from "~/engineering/reference-data";
 import { summarise } from "./statistics";
 
@@ -25,7 +28,10 @@ function coilInputs(count: number): CoilEstimateInput[] {
       conductor: index % 5 === 0 ? "aluminium" : "copper",
       wire: awg
         ? { standard: "AWG", size: String(10 + (index % 30)) }
-        : { standard: "IEC", diameterMm: IEC_NOMINAL_DIAMETERS[20 + (index % 60)]!.diameterMm },
+        : {
+            standard: "IEC",
+            diameterMm: IEC_NOMINAL_DIAMETERS[20 + (index % 60)]!.diameterMm,
+          },
       insulation: awg ? "heavy" : "grade2",
       turns: 10 + (index % 200),
       strandsInHand: 1 + (index % 3),
@@ -48,10 +54,12 @@ export function benchPureCoilEstimates(batches = 30): Figure {
   let checksum = 0;
   for (let batch = 0; batch < batches; batch += 1) {
     const started = performance.now();
-    for (const input of inputs) checksum += estimateCoil(input).perCoil.resistanceOhm;
+    for (const input of inputs)
+      checksum += estimateCoil(input).perCoil.resistanceOhm;
     samples.push(performance.now() - started);
   }
-  if (!Number.isFinite(checksum)) throw new Error("a coil estimate was not finite");
+  if (!Number.isFinite(checksum))
+    throw new Error("a coil estimate was not finite");
   const summary = summarise(samples);
   return {
     name: "10,000 coil estimates, pure module",
@@ -64,7 +72,11 @@ export function benchPureCoilEstimates(batches = 30): Figure {
   };
 }
 
-export async function benchCoilEstimateApi(baseUrl: string, cookie: string, requests = 400): Promise<Figure> {
+export async function benchCoilEstimateApi(
+  baseUrl: string,
+  cookie: string,
+  requests = 400,
+): Promise<Figure> {
   const body = JSON.stringify({
     conductor: "copper",
     wire: { standard: "IEC", diameterMm: 0.8 },
@@ -86,8 +98,11 @@ export async function benchCoilEstimateApi(baseUrl: string, cookie: string, requ
       body,
     });
     await response.arrayBuffer();
-    if (response.status !== 200) throw new Error(`coil estimate answered ${response.status}`);
-    const timing = response.headers.get("Server-Timing")?.match(/dur=([\d.]+)/)?.[1];
+    if (response.status !== 200)
+      throw new Error(`coil estimate answered ${response.status}`);
+    const timing = response.headers
+      .get("Server-Timing")
+      ?.match(/dur=([\d.]+)/)?.[1];
     if (!timing) throw new Error("no Server-Timing header");
     if (index >= 50) samples.push(Number(timing)); // the first 50 warm up
   }

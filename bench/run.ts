@@ -6,7 +6,11 @@ import fs from "node:fs";
 import path from "node:path";
 import { startTestEnvironment } from "../scripts/lib/test-environment";
 import { demoPassword, demoStorekeeperId } from "../seed/demo-people";
-import { benchCoilEstimateApi, benchPureCoilEstimates, type Figure } from "./coil-estimates.bench";
+import {
+  benchCoilEstimateApi,
+  benchPureCoilEstimates,
+  type Figure,
+} from "./coil-estimates.bench";
 import { seedBenchStock } from "./seed-bench-stock";
 import { benchStock } from "./stock.bench";
 
@@ -21,33 +25,62 @@ try {
   const signIn = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
     method: "POST",
     headers: { "Content-Type": "application/json" },
-    body: JSON.stringify({ email: "builder@turnledger.test", password: demoPassword() }),
+    body: JSON.stringify({
+      email: "builder@turnledger.test",
+      password: demoPassword(),
+    }),
   });
   const cookie = signIn.headers.getSetCookie()[0]?.split(";")[0] ?? "";
   figures.push(await benchCoilEstimateApi(environment.baseUrl, cookie));
 
   console.log("[bench] loading 20,000 items and 1,000,000 movements…");
   const loadStarted = performance.now();
-  const { skus, locationCode } = await seedBenchStock(environment.databaseUrl, demoStorekeeperId);
-  console.log(`[bench] loaded in ${((performance.now() - loadStarted) / 1000).toFixed(1)} s`);
+  const { skus, locationCode } = await seedBenchStock(
+    environment.databaseUrl,
+    demoStorekeeperId,
+  );
+  console.log(
+    `[bench] loaded in ${((performance.now() - loadStarted) / 1000).toFixed(1)} s`,
+  );
   const storekeeper = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
     method: "POST",
     headers: { "Content-Type": "application/json" },
-    body: JSON.stringify({ email: "storekeeper@turnledger.test", password: demoPassword() }),
+    body: JSON.stringify({
+      email: "storekeeper@turnledger.test",
+      password: demoPassword(),
+    }),
   });
-  const storekeeperCookie = storekeeper.headers.getSetCookie()[0]?.split(";")[0] ?? "";
-  figures.push(...(await benchStock({ baseUrl: environment.baseUrl, databaseUrl: environment.databaseUrl, storekeeperCookie, skus, locationCode })));
+  const storekeeperCookie =
+    storekeeper.headers.getSetCookie()[0]?.split(";")[0] ?? "";
+  figures.push(
+    ...(await benchStock({
+      baseUrl: environment.baseUrl,
+      databaseUrl: environment.databaseUrl,
+      storekeeperCookie,
+      skus,
+      locationCode,
+    })),
+  );
 } finally {
   await environment.stop();
 }
 
 const report = {
   at: new Date().toISOString(),
-  machine: { node: process.version, platform: process.platform, cpus: (await import("node:os")).cpus().length },
+  machine: {
+    node: process.version,
+    platform: process.platform,
+    cpus: (await import("node:os")).cpus().length,
+  },
   figures,
 };
-fs.writeFileSync(path.join(import.meta.dirname, "report.json"), JSON.stringify(report, null, 2));
-console.log(`\n${"benchmark".padEnd(46)}${"median".padStart(9)}${"p95".padStart(9)}   target`);
+fs.writeFileSync(
+  path.join(import.meta.dirname, "report.json"),
+  JSON.stringify(report, null, 2),
+);
+console.log(
+  `\n${"benchmark".padEnd(46)}${"median".padStart(9)}${"p95".padStart(9)}   target`,
+);
 for (const figure of figures) {
   console.log(
     `${figure.name.padEnd(46)}${figure.median.toFixed(3).padStart(9)}${figure.p95.toFixed(3).padStart(9)}   ${figure.target.padEnd(16)} ${figure.target === "reported" ? "" : figure.passed ? "met" : "MISSED"}  (${figure.unit})`,

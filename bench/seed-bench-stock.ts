@@ -20,28 +20,57 @@ function randomSequence(seed: number) {
   };
 }
 
-export async function seedBenchStock(databaseUrl: string, userId: string): Promise<{ skus: string[]; locationCode: string }> {
-  const connection = await mysql.createConnection({ ...poolOptionsFromUrl(databaseUrl), multipleStatements: false });
+export async function seedBenchStock(
+  databaseUrl: string,
+  userId: string,
+): Promise<{ skus: string[]; locationCode: string }> {
+  const connection = await mysql.createConnection({
+    ...poolOptionsFromUrl(databaseUrl),
+    multipleStatements: false,
+  });
   const random = randomSequence(7);
   try {
-    await connection.query("INSERT INTO locations (code, name, kind) VALUES ('BENCH-STORE', 'Benchmark store', 'store'), ('BENCH-BIN', 'Benchmark bin', 'bin')");
-    const [locationRows] = await connection.query("SELECT id, code FROM locations WHERE code IN ('BENCH-STORE', 'BENCH-BIN') ORDER BY code");
-    const [binId, storeId] = (locationRows as { id: number }[]).map((row) => row.id) as [number, number];
+    await connection.query(
+      "INSERT INTO locations (code, name, kind) VALUES ('BENCH-STORE', 'Benchmark store', 'store'), ('BENCH-BIN', 'Benchmark bin', 'bin')",
+    );
+    const [locationRows] = await connection.query(
+      "SELECT id, code FROM locations WHERE code IN ('BENCH-STORE', 'BENCH-BIN') ORDER BY code",
+    );
+    const [binId, storeId] = (locationRows as { id: number }[]).map(
+      (row) => row.id,
+    ) as [number, number];
 
     const skus: string[] = [];
     for (let start = 0; start < itemCount; start += batchRows) {
       const rows: unknown[][] = [];
-      for (let index = start; index < Math.min(itemCount, start + batchRows); index += 1) {
+      for (
+        let index = start;
+        index < Math.min(itemCount, start + batchRows);
+        index += 1
+      ) {
         const sku = `BENCH-${String(index).padStart(5, "0")}`;
         skus.push(sku);
-        const kind = index % 3 === 0 ? "wire" : index % 3 === 1 ? "magnet" : "part";
-        rows.push([sku, `Bench item ${index} ${kind}`, kind, kind === "wire" ? "kg" : "pcs", kind === "wire" ? `IEC ${(0.2 + (index % 40) * 0.05).toFixed(3)} mm` : "", index % 7 === 0 ? "50.000" : "0.000"]);
+        const kind =
+          index % 3 === 0 ? "wire" : index % 3 === 1 ? "magnet" : "part";
+        rows.push([
+          sku,
+          `Bench item ${index} ${kind}`,
+          kind,
+          kind === "wire" ? "kg" : "pcs",
+          kind === "wire"
+            ? `IEC ${(0.2 + (index % 40) * 0.05).toFixed(3)} mm`
+            : "",
+          index % 7 === 0 ? "50.000" : "0.000",
+        ]);
       }
-      await connection.query("INSERT INTO items (sku, name, kind, unit, size_or_grade, reorder_point, created_at, updated_at) VALUES ?", [
-        rows.map((row) => [...row, new Date(), new Date()]),
-      ]);
+      await connection.query(
+        "INSERT INTO items (sku, name, kind, unit, size_or_grade, reorder_point, created_at, updated_at) VALUES ?",
+        [rows.map((row) => [...row, new Date(), new Date()])],
+      );
     }
-    const [itemRows] = await connection.query("SELECT id, sku, unit FROM items WHERE sku LIKE 'BENCH-%' ORDER BY id");
+    const [itemRows] = await connection.query(
+      "SELECT id, sku, unit FROM items WHERE sku LIKE 'BENCH-%' ORDER BY id",
+    );
     const benchItems = itemRows as { id: number; sku: string; unit: string }[];
 
     // Movements: receipts first in time, then issues that never take a balance below zero.
@@ -51,7 +80,11 @@ export async function seedBenchStock(databaseUrl: string, userId: string): Promi
     let written = 0;
     while (written < movementCount) {
       const rows: unknown[][] = [];
-      for (let row = 0; row < batchRows && written < movementCount; row += 1, written += 1) {
+      for (
+        let row = 0;
+        row < batchRows && written < movementCount;
+        row += 1, written += 1
+      ) {
         const item = benchItems[Math.floor(random() * benchItems.length)]!;
         const locationId = random() < 0.7 ? storeId : binId;
         const key = `${item.id}:${locationId}`;
@@ -61,10 +94,17 @@ export async function seedBenchStock(databaseUrl: string, userId: string): Promi
         let type: string;
         if (held > 0 && random() < 0.55) {
           type = "issue";
-          quantity = -Math.min(held, wire ? Math.floor(random() * 2000) + 1 : (Math.floor(random() * 10) + 1) * 1000);
+          quantity = -Math.min(
+            held,
+            wire
+              ? Math.floor(random() * 2000) + 1
+              : (Math.floor(random() * 10) + 1) * 1000,
+          );
         } else {
           type = "receipt";
-          quantity = wire ? Math.floor(random() * 20_000) + 1000 : (Math.floor(random() * 200) + 1) * 1000;
+          quantity = wire
+            ? Math.floor(random() * 20_000) + 1000
+            : (Math.floor(random() * 200) + 1) * 1000;
         }
         onHand.set(key, held + quantity);
         const after = (itemOnHand.get(item.id) ?? 0) + quantity;
@@ -90,22 +130,38 @@ export async function seedBenchStock(databaseUrl: string, userId: string): Promi
 
     const balanceRows = [...onHand.entries()].map(([key, thousandths]) => {
       const [itemId, locationId] = key.split(":").map(Number);
-      return [itemId, 0, locationId, (thousandths / 1000).toFixed(3), "0.000", new Date()];
+      return [
+        itemId,
+        0,
+        locationId,
+        (thousandths / 1000).toFixed(3),
+        "0.000",
+        new Date(),
+      ];
     });
     for (let start = 0; start < balanceRows.length; start += batchRows) {
-      await connection.query("INSERT INTO stock_balances (item_id, lot_id, location_id, on_hand, reserved, updated_at) VALUES ?", [
-        balanceRows.slice(start, start + batchRows),
-      ]);
+      await connection.query(
+        "INSERT INTO stock_balances (item_id, lot_id, location_id, on_hand, reserved, updated_at) VALUES ?",
+        [balanceRows.slice(start, start + batchRows)],
+      );
     }
     const itemUpdates = [...itemOnHand.entries()];
     for (let start = 0; start < itemUpdates.length; start += batchRows) {
       const slice = itemUpdates.slice(start, start + batchRows);
       await connection.query(
         `UPDATE items SET average_cost = '10.0000', on_hand = CASE id ${slice.map(() => "WHEN ? THEN ?").join(" ")} END WHERE id IN (?)`,
-        [...slice.flatMap(([id, thousandths]) => [id, (thousandths / 1000).toFixed(3)]), slice.map(([id]) => id)],
+        [
+          ...slice.flatMap(([id, thousandths]) => [
+            id,
+            (thousandths / 1000).toFixed(3),
+          ]),
+          slice.map(([id]) => id),
+        ],
       );
     }
-    await connection.query("ANALYZE TABLE items, stock_movements, stock_balances");
+    await connection.query(
+      "ANALYZE TABLE items, stock_movements, stock_balances",
+    );
     return { skus, locationCode: "BENCH-STORE" };
   } finally {
     await connection.end();

@@ -1,7 +1,8 @@
 /** Median, p95 and friends of a list of timings (ms). */
 export function summarise(samples: number[]) {
   const sorted = [...samples].sort((a, b) => a - b);
-  const at = (fraction: number) => sorted[Math.min(sorted.length - 1, Math.floor(fraction * sorted.length))]!;
+  const at = (fraction: number) =>
+    sorted[Math.min(sorted.length - 1, Math.floor(fraction * sorted.length))]!;
   return {
     count: sorted.length,
     median: at(0.5),

@@ -8,22 +8,45 @@ import { poolOptionsFromUrl } from "~/db/connection-options";
 import type { Figure } from "./coil-estimates.bench";
 import { summarise } from "./statistics";
 
-async function serverTimes(urls: string[], cookie: string, init: (index: number) => RequestInit = () => ({})) {
+async function serverTimes(
+  urls: string[],
+  cookie: string,
+  init: (index: number) => RequestInit = () => ({}),
+) {
   const samples: number[] = [];
   for (const [index, url] of urls.entries()) {
-    const response = await fetch(url, { ...init(index), headers: { Cookie: cookie, ...(init(index).headers ?? {}) } });
+    const response = await fetch(url, {
+      ...init(index),
+      headers: { Cookie: cookie, ...(init(index).headers ?? {}) },
+    });
     await response.arrayBuffer();
-    if (response.status >= 400) throw new Error(`${url} answered ${response.status}`);
-    const timing = response.headers.get("Server-Timing")?.match(/dur=([\d.]+)/)?.[1];
+    if (response.status >= 400)
+      throw new Error(`${url} answered ${response.status}`);
+    const timing = response.headers
+      .get("Server-Timing")
+      ?.match(/dur=([\d.]+)/)?.[1];
     if (!timing) throw new Error("no Server-Timing header");
     if (index >= 20) samples.push(Number(timing)); // the first 20 warm up
   }
   return samples;
 }
 
-function figure(name: string, unit: string, limitMs: number, samples: number[]): Figure {
+function figure(
+  name: string,
+  unit: string,
+  limitMs: number,
+  samples: number[],
+): Figure {
   const summary = summarise(samples);
-  return { name, unit, target: `p95 < ${limitMs} ms`, passed: summary.p95 < limitMs, median: summary.median, p95: summary.p95, samples };
+  return {
+    name,
+    unit,
+    target: `p95 < ${limitMs} ms`,
+    passed: summary.p95 < limitMs,
+    median: summary.median,
+    p95: summary.p95,
+    samples,
+  };
 }
 
 const listQueries = (index: number) => {
@@ -49,13 +72,33 @@ export async function benchStock(input: {
   const indexes = Array.from({ length: requests + 20 }, (_, index) => index);
   const figures: Figure[] = [];
 
-  const listPage = await serverTimes(indexes.map((index) => `${input.baseUrl}/stock?${listQueries(index)}`), input.storekeeperCookie);
-  figures.push(figure("GET /stock (list page, server render)", "ms per request", 50, listPage));
-  const listApi = await serverTimes(indexes.map((index) => `${input.baseUrl}/api/v1/items?pageSize=50&${listQueries(index)}`), input.storekeeperCookie);
-  figures.push(figure("GET /api/v1/items?page=…", "ms per request", 50, listApi));
+  const listPage = await serverTimes(
+    indexes.map((index) => `${input.baseUrl}/stock?${listQueries(index)}`),
+    input.storekeeperCookie,
+  );
+  figures.push(
+    figure(
+      "GET /stock (list page, server render)",
+      "ms per request",
+      50,
+      listPage,
+    ),
+  );
+  const listApi = await serverTimes(
+    indexes.map(
+      (index) =>
+        `${input.baseUrl}/api/v1/items?pageSize=50&${listQueries(index)}`,
+    ),
+    input.storekeeperCookie,
+  );
+  figures.push(
+    figure("GET /api/v1/items?page=…", "ms per request", 50, listApi),
+  );
 
   // The raw SQL the list wraps: the count and the page, as the app runs them.
-  const connection = await mysql.createConnection(poolOptionsFromUrl(input.databaseUrl));
+  const connection = await mysql.createConnection(
+    poolOptionsFromUrl(input.databaseUrl),
+  );
   const rawList: number[] = [];
   try {
     for (const index of indexes) {
@@ -67,15 +110,24 @@ export async function benchStock(input: {
         where.push("kind = ?");
         values.push(params.get("kind"));
       }
-      if (params.get("belowReorder")) where.push("reorder_point > 0 AND (on_hand - reserved) < reorder_point");
+      if (params.get("belowReorder"))
+        where.push(
+          "reorder_point > 0 AND (on_hand - reserved) < reorder_point",
+        );
       if (params.get("search")) {
         where.push("(sku LIKE ? OR name LIKE ? OR size_or_grade LIKE ?)");
         const search = params.get("search")!;
         values.push(`${search}%`, `%${search}%`, `%${search}%`);
       }
-      const order = params.get("sort") === "value" ? "(on_hand * average_cost) DESC, sku" : "sku";
+      const order =
+        params.get("sort") === "value"
+          ? "(on_hand * average_cost) DESC, sku"
+          : "sku";
       const started = performance.now();
-      await connection.query(`SELECT COUNT(*) FROM items WHERE ${where.join(" AND ")}`, values);
+      await connection.query(
+        `SELECT COUNT(*) FROM items WHERE ${where.join(" AND ")}`,
+        values,
+      );
       await connection.query(
         `SELECT sku, name, kind, unit, size_or_grade, on_hand, reserved, reorder_point, reorder_quantity, average_cost, active FROM items WHERE ${where.join(" AND ")} ORDER BY ${order} LIMIT 50 OFFSET ?`,
         [...values, (page - 1) * 50],
@@ -90,21 +142,39 @@ export async function benchStock(input: {
       const sku = parts[(Math.floor(index / 2) * 131) % parts.length];
       return JSON.stringify(
         index % 2 === 0
-          ? { type: "receipt", sku, location: input.locationCode, quantity: 1, unitCost: 10 }
+          ? {
+              type: "receipt",
+              sku,
+              location: input.locationCode,
+              quantity: 1,
+              unitCost: 10,
+            }
           : { type: "issue", sku, location: input.locationCode, quantity: 1 },
       );
     };
     const record = await serverTimes(
       indexes.map(() => `${input.baseUrl}/api/v1/stock-movements`),
       input.storekeeperCookie,
-      (index) => ({ method: "POST", headers: { "Content-Type": "application/json" }, body: bodyFor(index) }),
+      (index) => ({
+        method: "POST",
+        headers: { "Content-Type": "application/json" },
+        body: bodyFor(index),
+      }),
     );
-    figures.push(figure("POST /api/v1/stock-movements", "ms per request", 20, record));
+    figures.push(
+      figure("POST /api/v1/stock-movements", "ms per request", 20, record),
+    );
 
     // The raw SQL of one movement: lock the item, lock/create the balance, write, commit.
-    const [rows] = await connection.query("SELECT id FROM items WHERE sku = ?", [parts[0]]);
+    const [rows] = await connection.query(
+      "SELECT id FROM items WHERE sku = ?",
+      [parts[0]],
+    );
     const itemId = (rows as { id: number }[])[0]!.id;
-    const [locationRows] = await connection.query("SELECT id FROM locations WHERE code = ?", [input.locationCode]);
+    const [locationRows] = await connection.query(
+      "SELECT id FROM locations WHERE code = ?",
+      [input.locationCode],
+    );
     const locationId = (locationRows as { id: number }[])[0]!.id;
     const [userRows] = await connection.query("SELECT id FROM users LIMIT 1");
     const userId = (userRows as { id: string }[])[0]!.id;
@@ -112,27 +182,59 @@ export async function benchStock(input: {
     for (const index of indexes) {
       const started = performance.now();
       await connection.beginTransaction();
-      await connection.query("SELECT on_hand, reserved, average_cost FROM items WHERE sku = ? FOR UPDATE", [parts[0]]);
-      await connection.query("SELECT id FROM locations WHERE code = ?", [input.locationCode]);
+      await connection.query(
+        "SELECT on_hand, reserved, average_cost FROM items WHERE sku = ? FOR UPDATE",
+        [parts[0]],
+      );
+      await connection.query("SELECT id FROM locations WHERE code = ?", [
+        input.locationCode,
+      ]);
       await connection.query(
         "INSERT INTO stock_balances (item_id, lot_id, location_id, on_hand, reserved, updated_at) VALUES (?, 0, ?, 0, 0, NOW(3)) ON DUPLICATE KEY UPDATE item_id = item_id",
         [itemId, locationId],
       );
-      await connection.query("SELECT on_hand, reserved FROM stock_balances WHERE item_id = ? AND lot_id = 0 AND location_id = ? FOR UPDATE", [itemId, locationId]);
-      await connection.query("UPDATE stock_balances SET on_hand = on_hand + 1, updated_at = NOW(3) WHERE item_id = ? AND lot_id = 0 AND location_id = ?", [itemId, locationId]);
+      await connection.query(
+        "SELECT on_hand, reserved FROM stock_balances WHERE item_id = ? AND lot_id = 0 AND location_id = ? FOR UPDATE",
+        [itemId, locationId],
+      );
+      await connection.query(
+        "UPDATE stock_balances SET on_hand = on_hand + 1, updated_at = NOW(3) WHERE item_id = ? AND lot_id = 0 AND location_id = ?",
+        [itemId, locationId],
+      );
       await connection.query(
         "INSERT INTO stock_movements (type, item_id, lot_id, location_id, quantity, unit_cost, average_cost_after, item_on_hand_after, user_id, created_at) VALUES ('receipt', ?, 0, ?, 1, 10, 10, 1, ?, NOW(3))",
         [itemId, locationId, userId],
       );
-      await connection.query("UPDATE items SET on_hand = on_hand + 1, updated_at = NOW(3) WHERE id = ?", [itemId]);
+      await connection.query(
+        "UPDATE items SET on_hand = on_hand + 1, updated_at = NOW(3) WHERE id = ?",
+        [itemId],
+      );
       await connection.commit();
       if (index >= 20) rawRecord.push(performance.now() - started);
     }
     const rawListSummary = summarise(rawList);
     const rawRecordSummary = summarise(rawRecord);
-    figures.push({ ...figure("raw SQL of the list (count + page)", "ms per query pair", 50, rawList) });
-    figures.push({ ...figure("raw SQL of one movement (transaction)", "ms per transaction", 20, rawRecord) });
-    const ratio = (name: string, app: Figure, raw: { p95: number; median: number }) => ({
+    figures.push({
+      ...figure(
+        "raw SQL of the list (count + page)",
+        "ms per query pair",
+        50,
+        rawList,
+      ),
+    });
+    figures.push({
+      ...figure(
+        "raw SQL of one movement (transaction)",
+        "ms per transaction",
+        20,
+        rawRecord,
+      ),
+    });
+    const ratio = (
+      name: string,
+      app: Figure,
+      raw: { p95: number; median: number },
+    ) => ({
       name,
       unit: "app ÷ raw SQL",
       target: "reported",
@@ -141,8 +243,16 @@ export async function benchStock(input: {
       p95: app.p95 / raw.p95,
       samples: [],
     });
-    figures.push(ratio("ratio: GET /api/v1/items ÷ raw SQL", figures[1]!, rawListSummary));
-    figures.push(ratio("ratio: POST stock-movements ÷ raw SQL", figures[2]!, rawRecordSummary));
+    figures.push(
+      ratio("ratio: GET /api/v1/items ÷ raw SQL", figures[1]!, rawListSummary),
+    );
+    figures.push(
+      ratio(
+        "ratio: POST stock-movements ÷ raw SQL",
+        figures[2]!,
+        rawRecordSummary,
+      ),
+    );
   } finally {
     await connection.end();
   }

@@ -17,7 +17,10 @@ if (!fs.existsSync(chromiumPath)) missing.push("chromium");
 // GNU units is the independent reference for the AWG formula (wiregauge(n)).
 if (!fs.existsSync("/usr/bin/units")) missing.push("units");
 if (missing.length > 0) {
-  await installDebianPackages(missing, `The tests need ${missing.join(" and ")} (browser tests, reference checks).`);
+  await installDebianPackages(
+    missing,
+    `The tests need ${missing.join(" and ")} (browser tests, reference checks).`,
+  );
 }
 
 fs.mkdirSync(dataRoot, { recursive: true });
@@ -28,7 +31,13 @@ let failed = false;
 try {
   await runCommand(
     path.join(projectRoot, "node_modules", ".bin", "vitest"),
-    ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${reportFile}`, ...process.argv.slice(2)],
+    [
+      "run",
+      "--reporter=default",
+      "--reporter=json",
+      `--outputFile.json=${reportFile}`,
+      ...process.argv.slice(2),
+    ],
     { cwd: projectRoot },
   );
 } catch {
@@ -41,8 +50,11 @@ if (fs.existsSync(reportFile)) {
     numFailedTests: number;
     numPendingTests: number;
   };
-  const skipped = report.numPendingTests > 0 ? `, ${report.numPendingTests} skipped` : "";
-  console.log(`\nTests: ${report.numPassedTests} passed, ${report.numFailedTests} failed${skipped}`);
+  const skipped =
+    report.numPendingTests > 0 ? `, ${report.numPendingTests} skipped` : "";
+  console.log(
+    `\nTests: ${report.numPassedTests} passed, ${report.numFailedTests} failed${skipped}`,
+  );
   if (report.numPassedTests === 0) failed = true;
 }
 process.exit(failed ? 1 : 0);

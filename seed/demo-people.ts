@@ -9,9 +9,21 @@ export const demoCompany = "Harrowgate Drive Works (demo)";
 export const demoPeople: { email: string; name: string; roles: Role[] }[] = [
   { email: "admin@turnledger.test", name: "Maren Holt", roles: ["admin"] },
   { email: "buyer@turnledger.test", name: "Tobias Reyne", roles: ["buyer"] },
-  { email: "builder@turnledger.test", name: "Ines Calloway", roles: ["builder"] },
-  { email: "storekeeper@turnledger.test", name: "Piet Varga", roles: ["storekeeper"] },
-  { email: "manager@turnledger.test", name: "Selma Odueke", roles: ["manager"] },
+  {
+    email: "builder@turnledger.test",
+    name: "Ines Calloway",
+    roles: ["builder"],
+  },
+  {
+    email: "storekeeper@turnledger.test",
+    name: "Piet Varga",
+    roles: ["storekeeper"],
+  },
+  {
+    email: "manager@turnledger.test",
+    name: "Selma Odueke",
+    roles: ["manager"],
+  },
 ];
 
 export function demoPassword(): string {

@@ -18,8 +18,12 @@ export async function seedDemoData(db: Database): Promise<void> {
   await db.transaction(async (tx) => {
     for (const [index, person] of demoPeople.entries()) {
       const id = `demo-${String(index + 1).padStart(2, "0")}-${person.roles[0]}`;
-      await tx.insert(schema.users).values({ id, email: person.email, name: person.name, passwordHash });
-      await tx.insert(schema.userRoles).values(person.roles.map((role) => ({ userId: id, role })));
+      await tx
+        .insert(schema.users)
+        .values({ id, email: person.email, name: person.name, passwordHash });
+      await tx
+        .insert(schema.userRoles)
+        .values(person.roles.map((role) => ({ userId: id, role })));
     }
   });
 }

@@ -24,7 +24,10 @@ app.use(compression());
 app.use((_request, response, next) => {
   const started = process.hrtime.bigint();
   const writeHead = response.writeHead;
-  response.writeHead = function (this: typeof response, ...args: Parameters<typeof writeHead>) {
+  response.writeHead = function (
+    this: typeof response,
+    ...args: Parameters<typeof writeHead>
+  ) {
     const milliseconds = Number(process.hrtime.bigint() - started) / 1e6;
     this.setHeader("Server-Timing", `app;dur=${milliseconds.toFixed(3)}`);
     return writeHead.apply(this, args);
@@ -36,7 +39,9 @@ app.use(
   createRequestHandler({
     build: () => import("virtual:react-router/server-build"),
     getLoadContext(request) {
-      return { clientAddress: request.ip ?? request.socket.remoteAddress ?? "unknown" };
+      return {
+        clientAddress: request.ip ?? request.socket.remoteAddress ?? "unknown",
+      };
     },
   }),
 );

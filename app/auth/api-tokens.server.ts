@@ -58,11 +58,20 @@ export async function listApiTokens(userId: string) {
 }
 
 /** Revokes one of the owner's tokens. Returns false when there is no such live token. */
-export async function revokeApiToken(userId: string, tokenId: number): Promise<boolean> {
+export async function revokeApiToken(
+  userId: string,
+  tokenId: number,
+): Promise<boolean> {
   const [result] = await db
     .update(apiTokens)
     .set({ revokedAt: new Date() })
-    .where(and(eq(apiTokens.id, tokenId), eq(apiTokens.userId, userId), isNull(apiTokens.revokedAt)));
+    .where(
+      and(
+        eq(apiTokens.id, tokenId),
+        eq(apiTokens.userId, userId),
+        isNull(apiTokens.revokedAt),
+      ),
+    );
   return result.affectedRows === 1;
 }
 
@@ -71,7 +80,9 @@ export async function revokeApiToken(userId: string, tokenId: number): Promise<b
  * roles the owner holds now; null for an unknown, revoked or expired token or
  * a deactivated owner.
  */
-export async function userFromApiToken(token: string): Promise<SessionUser | null> {
+export async function userFromApiToken(
+  token: string,
+): Promise<SessionUser | null> {
   if (!token.startsWith(tokenPrefix)) return null;
   const [row] = await db
     .select({
@@ -98,8 +109,14 @@ export async function userFromApiToken(token: string): Promise<SessionUser | nul
     .from(userRoles)
     .where(eq(userRoles.userId, row.userId));
   const held = new Set(ownerRoles.map((entry) => entry.role));
-  if (!row.lastUsedAt || now - row.lastUsedAt.getTime() > lastUsedResolutionMs) {
-    await db.update(apiTokens).set({ lastUsedAt: new Date(now) }).where(eq(apiTokens.id, row.id));
+  if (
+    !row.lastUsedAt ||
+    now - row.lastUsedAt.getTime() > lastUsedResolutionMs
+  ) {
+    await db
+      .update(apiTokens)
+      .set({ lastUsedAt: new Date(now) })
+      .where(eq(apiTokens.id, row.id));
   }
   return {
     id: row.userId,

@@ -24,7 +24,9 @@ export function databaseUnavailable(request: Request): never {
 }
 
 /** The signed-in user, or null; turns a database outage into a 503. */
-export async function getOptionalUser(request: Request): Promise<SessionUser | null> {
+export async function getOptionalUser(
+  request: Request,
+): Promise<SessionUser | null> {
   try {
     return (await getSessionState(request)).user;
   } catch (error) {
@@ -39,13 +41,20 @@ export async function requireUser(request: Request): Promise<SessionUser> {
   if (user) return user;
   if (isApiRequest(request)) {
     throw Response.json(
-      { error: { message: "Sign in first: send the session cookie or a bearer token." } },
+      {
+        error: {
+          message: "Sign in first: send the session cookie or a bearer token.",
+        },
+      },
       { status: 401 },
     );
   }
   const url = new URL(request.url);
   const back = `${url.pathname}${url.search}`;
-  const target = back === "/" ? "/sign-in" : `/sign-in?redirectTo=${encodeURIComponent(back)}`;
+  const target =
+    back === "/"
+      ? "/sign-in"
+      : `/sign-in?redirectTo=${encodeURIComponent(back)}`;
   throw redirect(target);
 }
 

@@ -7,7 +7,8 @@ const adapter = new DrizzleMySQLAdapter(db, sessions, users);
 
 /** Session cookies are Secure in production unless COOKIE_SECURE=0 (plain-HTTP test rigs). */
 function cookieIsSecure(): boolean {
-  if (process.env.COOKIE_SECURE !== undefined) return process.env.COOKIE_SECURE !== "0";
+  if (process.env.COOKIE_SECURE !== undefined)
+    return process.env.COOKIE_SECURE !== "0";
   return process.env.NODE_ENV === "production";
 }
 

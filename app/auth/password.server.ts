@@ -2,13 +2,21 @@ import { hash, verify } from "@node-rs/argon2";
 
 // argon2id (the package's default algorithm) with the parameters OWASP's
 // Password Storage Cheat Sheet lists first: 19 MiB memory, 2 passes, 1 lane.
-const argon2Options = { memoryCost: 19_456, timeCost: 2, parallelism: 1, outputLen: 32 };
+const argon2Options = {
+  memoryCost: 19_456,
+  timeCost: 2,
+  parallelism: 1,
+  outputLen: 32,
+};
 
 export function hashPassword(password: string): Promise<string> {
   return hash(password, argon2Options);
 }
 
-export async function verifyPassword(passwordHash: string, password: string): Promise<boolean> {
+export async function verifyPassword(
+  passwordHash: string,
+  password: string,
+): Promise<boolean> {
   try {
     return await verify(passwordHash, password);
   } catch {

@@ -32,16 +32,24 @@ async function readSession(request: Request): Promise<SessionState> {
     // Scripts and tools: a personal API token stands in for the session cookie.
     return { user: await userFromApiToken(token), setCookie: null };
   }
-  const sessionId = lucia.readSessionCookie(request.headers.get("Cookie") ?? "");
+  const sessionId = lucia.readSessionCookie(
+    request.headers.get("Cookie") ?? "",
+  );
   if (!sessionId) return { user: null, setCookie: null };
   const { session, user } = await lucia.validateSession(sessionId);
   if (!session || !user) {
-    return { user: null, setCookie: lucia.createBlankSessionCookie().serialize() };
+    return {
+      user: null,
+      setCookie: lucia.createBlankSessionCookie().serialize(),
+    };
   }
   if (!user.active) {
     // Deactivation ends sessions at once; this is the belt to that brace.
     await lucia.invalidateUserSessions(user.id);
-    return { user: null, setCookie: lucia.createBlankSessionCookie().serialize() };
+    return {
+      user: null,
+      setCookie: lucia.createBlankSessionCookie().serialize(),
+    };
   }
   const roleRows = await db
     .select({ role: userRoles.role })
@@ -78,7 +86,9 @@ export async function startSession(userId: string): Promise<string> {
 
 /** Ends the request's session; returns the Set-Cookie header value that clears it. */
 export async function endSession(request: Request): Promise<string> {
-  const sessionId = lucia.readSessionCookie(request.headers.get("Cookie") ?? "");
+  const sessionId = lucia.readSessionCookie(
+    request.headers.get("Cookie") ?? "",
+  );
   if (sessionId) await lucia.invalidateSession(sessionId);
   return lucia.createBlankSessionCookie().serialize();
 }

@@ -5,9 +5,21 @@ import type { EstimatedInput } from "./magnet-estimate-results";
 
 export type EstimateAnswer =
   | { ok: true; estimate: MagnetEstimate; input: EstimatedInput }
-  | { ok: false; status: number; message: string; fields: Record<string, string[]> };
+  | {
+      ok: false;
+      status: number;
+      message: string;
+      fields: Record<string, string[]>;
+    };
 
-export async function requestMagnetEstimate(input: EstimatedInput, signal: AbortSignal): Promise<EstimateAnswer> {
-  const answer = await postJson<MagnetEstimate>("/api/v1/magnet-estimates", input, signal);
+export async function requestMagnetEstimate(
+  input: EstimatedInput,
+  signal: AbortSignal,
+): Promise<EstimateAnswer> {
+  const answer = await postJson<MagnetEstimate>(
+    "/api/v1/magnet-estimates",
+    input,
+    signal,
+  );
   return answer.ok ? { ok: true, estimate: answer.data, input } : answer;
 }

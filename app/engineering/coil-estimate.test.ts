@@ -1,5 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { conductorSplit, estimateCoil, type CoilEstimateInput } from "./coil-estimate";
+import {
+  conductorSplit,
+  estimateCoil,
+  type CoilEstimateInput,
+} from "./coil-estimate";
 import { EngineeringInputError } from "./errors";
 import { conductorForceN, torqueNm } from "./force-and-torque";
 import { expectMatchesPrinted } from "./printed-value.test-support";
@@ -367,6 +371,9 @@ describe("conductorSplit", () => {
     expect(split.activeM).toBeCloseTo(8.0, 12);
     expect(split.endTurnM).toBeCloseTo(4.8, 12);
     expect(split.leadM).toBeCloseTo(0.6, 12);
-    expect(split.activeM + split.endTurnM + split.leadM).toBeCloseTo(estimateCoil(input).perCoil.conductorLengthM, 12);
+    expect(split.activeM + split.endTurnM + split.leadM).toBeCloseTo(
+      estimateCoil(input).perCoil.conductorLengthM,
+      12,
+    );
   });
 });

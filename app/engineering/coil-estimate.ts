@@ -195,7 +195,8 @@ export interface ConductorSplit {
  */
 export function conductorSplit(input: CoilEstimateInput): ConductorSplit {
   const strands = input.strandsInHand ?? 1;
-  const perSideM = (lengthMm: number) => (strands * input.turns * 2 * lengthMm) / 1000;
+  const perSideM = (lengthMm: number) =>
+    (strands * input.turns * 2 * lengthMm) / 1000;
   return {
     activeM: perSideM(input.activeLengthMm),
     endTurnM: perSideM(input.endTurnLengthMm),

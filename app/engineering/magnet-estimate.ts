@@ -219,7 +219,10 @@ function magnetWarnings(
 
 /** Volume, mass, Br at temperature, air-gap flux density and warnings for `count` magnets. */
 export function estimateMagnet(input: MagnetEstimateInput): MagnetEstimate {
-  const grade = typeof input.grade === "string" ? findMagnetGrade(input.grade) : input.grade;
+  const grade =
+    typeof input.grade === "string"
+      ? findMagnetGrade(input.grade)
+      : input.grade;
   if (!grade) {
     throw new EngineeringInputError(
       "grade",

@@ -1,25 +1,41 @@
 import { describe, expect, it } from "vitest";
-import { newPasswordSchema, safeRedirectPath, signInSchema } from "./account-schemas";
+import {
+  newPasswordSchema,
+  safeRedirectPath,
+  signInSchema,
+} from "./account-schemas";
 
 describe("safeRedirectPath", () => {
   it("keeps same-site paths", () => {
-    expect(safeRedirectPath("/admin/people?page=2")).toBe("/admin/people?page=2");
+    expect(safeRedirectPath("/admin/people?page=2")).toBe(
+      "/admin/people?page=2",
+    );
   });
-  it.each(["//evil.test", "/\\evil.test", "https://evil.test/", "javascript:alert(1)", "", null])(
-    "sends %s home instead",
-    (value) => {
-      expect(safeRedirectPath(value)).toBe("/");
-    },
-  );
+  it.each([
+    "//evil.test",
+    "/\\evil.test",
+    "https://evil.test/",
+    "javascript:alert(1)",
+    "",
+    null,
+  ])("sends %s home instead", (value) => {
+    expect(safeRedirectPath(value)).toBe("/");
+  });
 });
 
 describe("signInSchema", () => {
   it("trims the e-mail and accepts a password", () => {
-    const parsed = signInSchema.parse({ email: "  buyer@turnledger.test ", password: "x" });
+    const parsed = signInSchema.parse({
+      email: "  buyer@turnledger.test ",
+      password: "x",
+    });
     expect(parsed.email).toBe("buyer@turnledger.test");
   });
   it("names the field that is wrong", () => {
-    const parsed = signInSchema.safeParse({ email: "not-an-address", password: "x" });
+    const parsed = signInSchema.safeParse({
+      email: "not-an-address",
+      password: "x",
+    });
     expect(parsed.success).toBe(false);
     expect(parsed.error?.issues[0]?.path).toEqual(["email"]);
   });
@@ -27,8 +43,14 @@ describe("signInSchema", () => {
 
 describe("newPasswordSchema", () => {
   it("needs at least 10 characters", () => {
-    const parsed = newPasswordSchema.safeParse({ token: "t", password: "short", confirmPassword: "short" });
-    expect(parsed.error?.issues.map((issue) => issue.message)).toEqual(["Use at least 10 characters."]);
+    const parsed = newPasswordSchema.safeParse({
+      token: "t",
+      password: "short",
+      confirmPassword: "short",
+    });
+    expect(parsed.error?.issues.map((issue) => issue.message)).toEqual([
+      "Use at least 10 characters.",
+    ]);
   });
   it("needs the two passwords to match", () => {
     const parsed = newPasswordSchema.safeParse({

@@ -34,7 +34,12 @@ export const forgotPasswordSchema = z.object({ email: emailField });
 
 /** Only same-site paths may be redirected to after sign-in. */
 export function safeRedirectPath(value: string | null | undefined): string {
-  if (!value || !value.startsWith("/") || value.startsWith("//") || value.startsWith("/\\")) {
+  if (
+    !value ||
+    !value.startsWith("/") ||
+    value.startsWith("//") ||
+    value.startsWith("/\\")
+  ) {
     return "/";
   }
   return value;

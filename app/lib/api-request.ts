@@ -6,14 +6,26 @@
  */
 export type ApiAnswer<T> =
   | { ok: true; data: T }
-  | { ok: false; status: number; message: string; fields: Record<string, string[]> };
+  | {
+      ok: false;
+      status: number;
+      message: string;
+      fields: Record<string, string[]>;
+    };
 
-export async function postJson<T>(path: string, body: unknown, signal: AbortSignal): Promise<ApiAnswer<T>> {
+export async function postJson<T>(
+  path: string,
+  body: unknown,
+  signal: AbortSignal,
+): Promise<ApiAnswer<T>> {
   let response: Response;
   try {
     response = await fetch(path, {
       method: "POST",
-      headers: { "Content-Type": "application/json", Accept: "application/json" },
+      headers: {
+        "Content-Type": "application/json",
+        Accept: "application/json",
+      },
       body: JSON.stringify(body),
       signal,
     });
@@ -22,7 +34,8 @@ export async function postJson<T>(path: string, body: unknown, signal: AbortSign
     return {
       ok: false,
       status: 0,
-      message: "Turnledger could not be reached. Check the connection; the figures update when you change a value.",
+      message:
+        "Turnledger could not be reached. Check the connection; the figures update when you change a value.",
       fields: {},
     };
   }
@@ -31,14 +44,18 @@ export async function postJson<T>(path: string, body: unknown, signal: AbortSign
     | { error?: { message?: string; fields?: Record<string, string[]> } }
     | null;
   if (response.ok && parsed !== null) return { ok: true, data: parsed as T };
-  const error = parsed && typeof parsed === "object" && "error" in parsed ? parsed.error : undefined;
+  const error =
+    parsed && typeof parsed === "object" && "error" in parsed
+      ? parsed.error
+      : undefined;
   return {
     ok: false,
     status: response.status,
     message:
       response.status === 401
         ? "Your session has ended: sign in again to see the figures."
-        : (error?.message ?? `The request failed (status ${response.status}). Try again in a moment.`),
+        : (error?.message ??
+          `The request failed (status ${response.status}). Try again in a moment.`),
     fields: error?.fields ?? {},
   };
 }

@@ -8,7 +8,10 @@ export function apiError(
   fields?: Record<string, string[]>,
   headers?: HeadersInit,
 ): Response {
-  return Response.json({ error: fields ? { message, fields } : { message } }, { status, headers });
+  return Response.json(
+    { error: fields ? { message, fields } : { message } },
+    { status, headers },
+  );
 }
 
 /** Reads and validates a JSON body; throws a 400 answer naming each bad field. */
@@ -20,7 +23,10 @@ export async function readJsonBody<Schema extends z.ZodType>(
   try {
     body = await request.json();
   } catch {
-    throw apiError(400, "The body must be JSON (Content-Type: application/json).");
+    throw apiError(
+      400,
+      "The body must be JSON (Content-Type: application/json).",
+    );
   }
   const parsed = schema.safeParse(body);
   if (parsed.success) return parsed.data;
@@ -33,7 +39,9 @@ export async function readJsonBody<Schema extends z.ZodType>(
 }
 
 export function methodNotAllowed(allowed: string[]): Response {
-  return apiError(405, `Use ${allowed.join(" or ")} here.`, undefined, { Allow: allowed.join(", ") });
+  return apiError(405, `Use ${allowed.join(" or ")} here.`, undefined, {
+    Allow: allowed.join(", "),
+  });
 }
 
 /** Runs a calculation; a refusal by the engineering modules becomes a 400 naming the field. */

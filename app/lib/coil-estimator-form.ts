@@ -22,24 +22,40 @@ export const coilEstimatorFormSchema = z
   })
   .superRefine((value, context) => {
     if (value.standard === "AWG" && !value.awgSize) {
-      context.addIssue({ code: "custom", path: ["awgSize"], message: "Choose the AWG size." });
+      context.addIssue({
+        code: "custom",
+        path: ["awgSize"],
+        message: "Choose the AWG size.",
+      });
     }
     if (value.standard === "IEC" && value.iecDiameterMm === undefined) {
-      context.addIssue({ code: "custom", path: ["iecDiameterMm"], message: "Choose the nominal diameter." });
+      context.addIssue({
+        code: "custom",
+        path: ["iecDiameterMm"],
+        message: "Choose the nominal diameter.",
+      });
     }
     const awgBuilds = ["single", "heavy", "triple"];
-    if (value.insulation && awgBuilds.includes(value.insulation) !== (value.standard === "AWG")) {
+    if (
+      value.insulation &&
+      awgBuilds.includes(value.insulation) !== (value.standard === "AWG")
+    ) {
       context.addIssue({
         code: "custom",
         path: ["insulation"],
-        message: value.standard === "AWG" ? "AWG wire takes a film build." : "IEC wire takes a grade.",
+        message:
+          value.standard === "AWG"
+            ? "AWG wire takes a film build."
+            : "IEC wire takes a grade.",
       });
     }
   });
 
 export type CoilEstimatorForm = z.infer<typeof coilEstimatorFormSchema>;
 
-export function coilRequestFromForm(form: CoilEstimatorForm): CoilEstimateRequest {
+export function coilRequestFromForm(
+  form: CoilEstimatorForm,
+): CoilEstimateRequest {
   const { standard, awgSize, iecDiameterMm, insulation, ...rest } = form;
   return {
     ...rest,

@@ -11,22 +11,39 @@ const maxLengthMm = 100_000; // 100 m
 function number(label: string) {
   return z.number({
     error: (issue) =>
-      issue.input === undefined ? `Give ${label}.` : `${label[0]!.toUpperCase()}${label.slice(1)} must be a number.`,
+      issue.input === undefined
+        ? `Give ${label}.`
+        : `${label[0]!.toUpperCase()}${label.slice(1)} must be a number.`,
   });
 }
 
 function wholeNumber(label: string, min: number, max: number) {
   return number(label)
     .int(`${label[0]!.toUpperCase()}${label.slice(1)} must be a whole number.`)
-    .min(min, `${label[0]!.toUpperCase()}${label.slice(1)} must be at least ${min}.`)
-    .max(max, `${label[0]!.toUpperCase()}${label.slice(1)} must be at most ${max.toLocaleString("en-GB")}.`);
+    .min(
+      min,
+      `${label[0]!.toUpperCase()}${label.slice(1)} must be at least ${min}.`,
+    )
+    .max(
+      max,
+      `${label[0]!.toUpperCase()}${label.slice(1)} must be at most ${max.toLocaleString("en-GB")}.`,
+    );
 }
 
 function lengthMm(label: string, { allowZero }: { allowZero: boolean }) {
-  const base = number(label).max(maxLengthMm, `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 100 m (100,000 mm).`);
+  const base = number(label).max(
+    maxLengthMm,
+    `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 100 m (100,000 mm).`,
+  );
   return allowZero
-    ? base.min(0, `${label[0]!.toUpperCase()}${label.slice(1)} cannot be negative.`)
-    : base.gt(0, `${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm.`);
+    ? base.min(
+        0,
+        `${label[0]!.toUpperCase()}${label.slice(1)} cannot be negative.`,
+      )
+    : base.gt(
+        0,
+        `${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm.`,
+      );
 }
 
 const temperatureC = number("the temperature")
@@ -36,29 +53,45 @@ const temperatureC = number("the temperature")
 const awgWire = z.object({
   standard: z.literal("AWG"),
   size: z
-    .union([z.string(), z.number()], { error: "Give the AWG size, e.g. \"20\" or \"4/0\"." })
+    .union([z.string(), z.number()], {
+      error: 'Give the AWG size, e.g. "20" or "4/0".',
+    })
     .transform((value) => String(value).trim())
-    .pipe(z.string().min(1, "Give the AWG size, e.g. \"20\" or \"4/0\".")),
+    .pipe(z.string().min(1, 'Give the AWG size, e.g. "20" or "4/0".')),
 });
 
-export const iecDiameterField = number("the nominal diameter").gt(0, "The nominal diameter must be more than 0 mm.");
+export const iecDiameterField = number("the nominal diameter").gt(
+  0,
+  "The nominal diameter must be more than 0 mm.",
+);
 
 const iecWire = z.object({
   standard: z.literal("IEC"),
   diameterMm: iecDiameterField,
 });
 
-export const wireSpecSchema = z.discriminatedUnion("standard", [awgWire, iecWire], {
-  error: (issue) =>
-    issue.input === undefined
-      ? "Give the wire: { standard: \"AWG\", size } or { standard: \"IEC\", diameterMm }."
-      : "The wire standard must be \"AWG\" or \"IEC\".",
-});
+export const wireSpecSchema = z.discriminatedUnion(
+  "standard",
+  [awgWire, iecWire],
+  {
+    error: (issue) =>
+      issue.input === undefined
+        ? 'Give the wire: { standard: "AWG", size } or { standard: "IEC", diameterMm }.'
+        : 'The wire standard must be "AWG" or "IEC".',
+  },
+);
 
-export const insulationKeys = ["grade1", "grade2", "grade3", "single", "heavy", "triple"] as const;
+export const insulationKeys = [
+  "grade1",
+  "grade2",
+  "grade3",
+  "single",
+  "heavy",
+  "triple",
+] as const;
 
 export const conductorSchema = z.enum(["copper", "aluminium"], {
-  error: "The conductor must be \"copper\" or \"aluminium\".",
+  error: 'The conductor must be "copper" or "aluminium".',
 });
 
 export const insulationSchema = z.enum(insulationKeys, {
@@ -95,8 +128,14 @@ export type CoilEstimateRequest = z.infer<typeof coilEstimateRequestSchema>;
 
 const dimension = (label: string) =>
   number(label)
-    .gt(0, `${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm.`)
-    .max(10_000, `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 10 m.`);
+    .gt(
+      0,
+      `${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm.`,
+    )
+    .max(
+      10_000,
+      `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 10 m.`,
+    );
 
 export const magnetShapeSchema = z.discriminatedUnion(
   "kind",
@@ -111,7 +150,9 @@ export const magnetShapeSchema = z.discriminatedUnion(
       kind: z.literal("arc"),
       innerRadiusMm: dimension("the inner radius"),
       outerRadiusMm: dimension("the outer radius"),
-      angleDeg: number("the angle").gt(0, "The angle must be more than 0°.").max(360, "The angle must be at most 360°."),
+      angleDeg: number("the angle")
+        .gt(0, "The angle must be more than 0°.")
+        .max(360, "The angle must be at most 360°."),
       axialLengthMm: dimension("the axial length"),
     }),
     z.object({
@@ -126,34 +167,62 @@ export const magnetShapeSchema = z.discriminatedUnion(
       thicknessMm: dimension("the thickness"),
     }),
   ],
-  { error: "Give the shape: kind \"block\", \"arc\", \"disc\" or \"ring\" with its dimensions in mm." },
+  {
+    error:
+      'Give the shape: kind "block", "arc", "disc" or "ring" with its dimensions in mm.',
+  },
 );
 
 /** Properties of a magnet material not in the grade table (e.g. from a maker's data sheet). */
 export const magnetPropertiesSchema = z.object({
   name: z.string().trim().min(1).max(40).default("Custom"),
-  br20T: number("Br at 20 °C").gt(0, "Br must be more than 0 T.").max(2, "Br must be at most 2 T."),
+  br20T: number("Br at 20 °C")
+    .gt(0, "Br must be more than 0 T.")
+    .max(2, "Br must be at most 2 T."),
   brTemperatureCoefficientPerK: number("the Br temperature coefficient")
-    .min(-0.01, "The Br temperature coefficient must be between −0.01 and 0 per K.")
-    .max(0, "The Br temperature coefficient must be between −0.01 and 0 per K."),
-  densityGPerCm3: number("the density").gt(0, "The density must be more than 0 g/cm³.").max(20, "The density must be at most 20 g/cm³."),
+    .min(
+      -0.01,
+      "The Br temperature coefficient must be between −0.01 and 0 per K.",
+    )
+    .max(
+      0,
+      "The Br temperature coefficient must be between −0.01 and 0 per K.",
+    ),
+  densityGPerCm3: number("the density")
+    .gt(0, "The density must be more than 0 g/cm³.")
+    .max(20, "The density must be at most 20 g/cm³."),
   recoilPermeability: number("the recoil permeability")
     .min(1, "The recoil permeability must be between 1 and 2.")
     .max(2, "The recoil permeability must be between 1 and 2.")
     .default(1.05),
-  maxWorkingTemperatureC: number("the maximum working temperature").min(-70).max(600),
+  maxWorkingTemperatureC: number("the maximum working temperature")
+    .min(-70)
+    .max(600),
 });
 
 export const magnetEstimateRequestSchema = z
   .object({
-    grade: z.string().trim().min(1, "Give a grade, e.g. \"N42SH\".").max(40).optional(),
+    grade: z
+      .string()
+      .trim()
+      .min(1, 'Give a grade, e.g. "N42SH".')
+      .max(40)
+      .optional(),
     properties: magnetPropertiesSchema.optional(),
     shape: magnetShapeSchema,
     count: wholeNumber("the count", 1, 1_000_000).default(1),
     temperatureC: temperatureC.default(20),
-    br20T: number("Br at 20 °C").gt(0, "Br must be more than 0 T.").max(2, "Br must be at most 2 T.").nullish(),
-    magnetLengthMm: dimension("the magnet length along magnetisation").nullish(),
-    airGapMm: number("the air gap").min(0, "The air gap cannot be negative.").max(1_000, "The air gap must be at most 1,000 mm.").nullish(),
+    br20T: number("Br at 20 °C")
+      .gt(0, "Br must be more than 0 T.")
+      .max(2, "Br must be at most 2 T.")
+      .nullish(),
+    magnetLengthMm: dimension(
+      "the magnet length along magnetisation",
+    ).nullish(),
+    airGapMm: number("the air gap")
+      .min(0, "The air gap cannot be negative.")
+      .max(1_000, "The air gap must be at most 1,000 mm.")
+      .nullish(),
   })
   .refine((value) => Boolean(value.grade) !== Boolean(value.properties), {
     path: ["grade"],

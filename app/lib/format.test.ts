@@ -10,7 +10,9 @@ describe("formatQuantity", () => {
 
 describe("formatDateTime", () => {
   it("shows UTC so server and browser render the same text", () => {
-    expect(formatDateTime(new Date("2026-12-02T14:05:00Z"))).toBe("2 Dec 2026, 14:05 UTC");
+    expect(formatDateTime(new Date("2026-12-02T14:05:00Z"))).toBe(
+      "2 Dec 2026, 14:05 UTC",
+    );
     expect(formatDateTime(null)).toBe("—");
   });
 });

@@ -3,7 +3,9 @@ import { isRole, userHasRole } from "./roles";
 
 describe("userHasRole", () => {
   it("passes a person holding one of the roles", () => {
-    expect(userHasRole({ roles: ["buyer", "manager"] }, ["storekeeper", "manager"])).toBe(true);
+    expect(
+      userHasRole({ roles: ["buyer", "manager"] }, ["storekeeper", "manager"]),
+    ).toBe(true);
   });
   it("refuses a person holding none of them", () => {
     expect(userHasRole({ roles: ["buyer"] }, ["storekeeper"])).toBe(false);
@@ -18,7 +20,9 @@ describe("userHasRole", () => {
 
 describe("isRole", () => {
   it("knows the five roles and nothing else", () => {
-    expect(["admin", "buyer", "builder", "storekeeper", "manager"].every(isRole)).toBe(true);
+    expect(
+      ["admin", "buyer", "builder", "storekeeper", "manager"].every(isRole),
+    ).toBe(true);
     expect(isRole("owner")).toBe(false);
   });
 });

@@ -1,5 +1,11 @@
 /** The five roles of Turnledger; a person may hold several. */
-export const roles = ["admin", "buyer", "builder", "storekeeper", "manager"] as const;
+export const roles = [
+  "admin",
+  "buyer",
+  "builder",
+  "storekeeper",
+  "manager",
+] as const;
 
 export type Role = (typeof roles)[number];
 
@@ -24,5 +30,8 @@ export function userHasRole(
   allowed: readonly Role[],
 ): boolean {
   if (!user) return false;
-  return user.roles.includes("admin") || user.roles.some((role) => allowed.includes(role));
+  return (
+    user.roles.includes("admin") ||
+    user.roles.some((role) => allowed.includes(role))
+  );
 }

@@ -12,10 +12,15 @@ export const createTokenSchema = z.object({
   roles: z
     .array(z.enum(roles), { error: "Choose at least one role." })
     .min(1, "Choose at least one role."),
-  lifetimeDays: z.enum(tokenLifetimes, { error: "Choose how long the token lives." }).default("90"),
+  lifetimeDays: z
+    .enum(tokenLifetimes, { error: "Choose how long the token lives." })
+    .default("90"),
 });
 
-export function tokenExpiry(lifetime: (typeof tokenLifetimes)[number], now = new Date()): Date | null {
+export function tokenExpiry(
+  lifetime: (typeof tokenLifetimes)[number],
+  now = new Date(),
+): Date | null {
   if (lifetime === "never") return null;
   return new Date(now.getTime() + Number(lifetime) * 24 * 60 * 60 * 1000);
 }

@@ -3,10 +3,17 @@ import { invitationMessage, passwordResetMessage } from "./account-messages";
 
 describe("account e-mails", () => {
   it("carry the link and say how long it works", () => {
-    const invitation = invitationMessage({ name: "Ana", invitedBy: "Maren", link: "http://x/set-password?token=abc" });
+    const invitation = invitationMessage({
+      name: "Ana",
+      invitedBy: "Maren",
+      link: "http://x/set-password?token=abc",
+    });
     expect(invitation.text).toContain("http://x/set-password?token=abc");
     expect(invitation.text).toContain("7 days");
-    const reset = passwordResetMessage({ name: "Ana", link: "http://x/set-password?token=def" });
+    const reset = passwordResetMessage({
+      name: "Ana",
+      link: "http://x/set-password?token=def",
+    });
     expect(reset.text).toContain("http://x/set-password?token=def");
     expect(reset.text).toContain("30 minutes");
   });

@@ -20,10 +20,10 @@ export function invitationMessage(input: {
   };
 }
 
-export function passwordResetMessage(input: {
-  name: string;
-  link: string;
-}): { subject: string; text: string } {
+export function passwordResetMessage(input: { name: string; link: string }): {
+  subject: string;
+  text: string;
+} {
   return {
     subject: "Choose a new Turnledger password",
     text: [

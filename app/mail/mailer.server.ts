@@ -18,7 +18,10 @@ function smtp(): Transporter {
     port: Number(url.port || (url.protocol === "smtps:" ? 465 : 587)),
     secure: url.protocol === "smtps:",
     auth: url.username
-      ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) }
+      ? {
+          user: decodeURIComponent(url.username),
+          pass: decodeURIComponent(url.password),
+        }
       : undefined,
     connectionTimeout: 5_000,
     greetingTimeout: 5_000,
@@ -27,7 +30,8 @@ function smtp(): Transporter {
   return transporter;
 }
 
-const fromAddress = () => process.env.MAIL_FROM || "Turnledger <no-reply@turnledger.test>";
+const fromAddress = () =>
+  process.env.MAIL_FROM || "Turnledger <no-reply@turnledger.test>";
 
 export interface OutgoingMail {
   to: string;
@@ -60,7 +64,9 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
     return true;
   } catch (error) {
     const reason = error instanceof Error ? error.message : String(error);
-    console.warn(`[mail] message ${message.id} to ${message.toAddress} not sent: ${reason}`);
+    console.warn(
+      `[mail] message ${message.id} to ${message.toAddress} not sent: ${reason}`,
+    );
     await db
       .update(mailOutbox)
       .set({ lastError: reason.slice(0, 500), attempts })
@@ -71,14 +77,21 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
 
 /** Queues a message and tries to send it at once. Returns true when SMTP accepted it. */
 export async function sendMail(mail: OutgoingMail): Promise<boolean> {
-  const queued = { toAddress: mail.to, subject: mail.subject, textBody: mail.text };
+  const queued = {
+    toAddress: mail.to,
+    subject: mail.subject,
+    textBody: mail.text,
+  };
   const [inserted] = await db.insert(mailOutbox).values(queued).$returningId();
-  if (!inserted) throw new Error("The outbox did not return the new message's id.");
+  if (!inserted)
+    throw new Error("The outbox did not return the new message's id.");
   return attemptDelivery({ ...queued, id: inserted.id, attempts: 0 });
 }
 
 /** Tries every unsent message again, oldest first. */
-export async function retryUnsentMail(maxMessages = 500): Promise<{ sent: number; failed: number }> {
+export async function retryUnsentMail(
+  maxMessages = 500,
+): Promise<{ sent: number; failed: number }> {
   const unsent = await db
     .select()
     .from(mailOutbox)

@@ -11,7 +11,10 @@ export async function adminFigures() {
       deactivated: sql<number>`SUM(${users.active} = 0)`,
     })
     .from(users);
-  const [mail] = await db.select({ unsent: count() }).from(mailOutbox).where(isNull(mailOutbox.sentAt));
+  const [mail] = await db
+    .select({ unsent: count() })
+    .from(mailOutbox)
+    .where(isNull(mailOutbox.sentAt));
   return {
     activePeople: Number(people?.active ?? 0),
     pendingInvitations: Number(people?.pending ?? 0),

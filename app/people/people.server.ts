@@ -4,14 +4,21 @@ import { and, asc, count, eq, isNull, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { emailTokens, userRoles, users } from "~/db/schema";
 import { createEmailToken, hashToken } from "~/auth/email-tokens.server";
-import { decoyPasswordHash, hashPassword, verifyPassword } from "~/auth/password.server";
+import {
+  decoyPasswordHash,
+  hashPassword,
+  verifyPassword,
+} from "~/auth/password.server";
 import { endAllSessions } from "~/auth/session.server";
 import {
   clearFailedSignIns,
   recordFailedSignIn,
   signInRetryAfterSeconds,
 } from "~/auth/sign-in-throttle.server";
-import { invitationMessage, passwordResetMessage } from "~/mail/account-messages";
+import {
+  invitationMessage,
+  passwordResetMessage,
+} from "~/mail/account-messages";
 import { sendMail } from "~/mail/mailer.server";
 import type { Role } from "~/lib/roles";
 
@@ -42,7 +49,11 @@ export async function checkSignIn(
   if (retryAfterSeconds > 0) return { kind: "throttled", retryAfterSeconds };
 
   const [user] = await db
-    .select({ id: users.id, passwordHash: users.passwordHash, active: users.active })
+    .select({
+      id: users.id,
+      passwordHash: users.passwordHash,
+      active: users.active,
+    })
     .from(users)
     .where(eq(users.email, email))
     .limit(1);
@@ -71,7 +82,9 @@ export async function listPeople(page: number) {
       active: users.active,
       hasPassword: sql<number>`${users.passwordHash} IS NOT NULL`,
       createdAt: users.createdAt,
-      roles: sql<string | null>`GROUP_CONCAT(${userRoles.role} ORDER BY ${userRoles.role})`,
+      roles: sql<
+        string | null
+      >`GROUP_CONCAT(${userRoles.role} ORDER BY ${userRoles.role})`,
     })
     .from(users)
     .leftJoin(userRoles, eq(userRoles.userId, users.id))
@@ -91,7 +104,12 @@ export async function listPeople(page: number) {
 
 export async function findPerson(userId: string) {
   const [user] = await db
-    .select({ id: users.id, email: users.email, name: users.name, active: users.active })
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      active: users.active,
+    })
     .from(users)
     .where(eq(users.id, userId))
     .limit(1);
@@ -127,7 +145,9 @@ export async function invitePerson(input: {
       name: input.name.trim(),
       passwordHash: null,
     });
-    await tx.insert(userRoles).values(input.roles.map((role) => ({ userId, role })));
+    await tx
+      .insert(userRoles)
+      .values(input.roles.map((role) => ({ userId, role })));
   });
   const token = await createEmailToken(userId, "invitation");
   const message = invitationMessage({
@@ -135,7 +155,10 @@ export async function invitePerson(input: {
     invitedBy: input.invitedBy,
     link: `${input.appUrl}/set-password?token=${token}`,
   });
-  const mailSent = await sendMail({ to: normaliseEmail(input.email), ...message });
+  const mailSent = await sendMail({
+    to: normaliseEmail(input.email),
+    ...message,
+  });
   return { userId, mailSent };
 }
 
@@ -144,7 +167,9 @@ export async function setRoles(userId: string, roles: Role[]): Promise<void> {
   await db.transaction(async (tx) => {
     await tx.delete(userRoles).where(eq(userRoles.userId, userId));
     if (roles.length > 0) {
-      await tx.insert(userRoles).values(roles.map((role) => ({ userId, role })));
+      await tx
+        .insert(userRoles)
+        .values(roles.map((role) => ({ userId, role })));
     }
   });
 }
@@ -153,19 +178,28 @@ export async function countActiveAdmins(): Promise<number> {
   const [row] = await db
     .select({ admins: count() })
     .from(users)
-    .innerJoin(userRoles, and(eq(userRoles.userId, users.id), eq(userRoles.role, "admin")))
+    .innerJoin(
+      userRoles,
+      and(eq(userRoles.userId, users.id), eq(userRoles.role, "admin")),
+    )
     .where(eq(users.active, true));
   return row?.admins ?? 0;
 }
 
 /** Deactivating ends every session of the person at once; reactivating lets them sign in again. */
-export async function setActive(userId: string, active: boolean): Promise<void> {
+export async function setActive(
+  userId: string,
+  active: boolean,
+): Promise<void> {
   await db.update(users).set({ active }).where(eq(users.id, userId));
   if (!active) await endAllSessions(userId);
 }
 
 /** Sends a reset link when the e-mail belongs to an active account; silent otherwise. */
-export async function requestPasswordReset(emailInput: string, appUrl: string): Promise<void> {
+export async function requestPasswordReset(
+  emailInput: string,
+  appUrl: string,
+): Promise<void> {
   const email = normaliseEmail(emailInput);
   const [user] = await db
     .select({ id: users.id, name: users.name, active: users.active })
@@ -185,13 +219,25 @@ export async function requestPasswordReset(emailInput: string, appUrl: string): 
  * Uses a token (once) to set a password. Ends the person's other sessions.
  * Returns the user id, or null when the token is unknown, used or expired.
  */
-export async function setPasswordWithToken(token: string, password: string): Promise<string | null> {
+export async function setPasswordWithToken(
+  token: string,
+  password: string,
+): Promise<string | null> {
   const passwordHash = await hashPassword(password);
   const userId = await db.transaction(async (tx) => {
     const [row] = await tx
-      .select({ id: emailTokens.id, userId: emailTokens.userId, expiresAt: emailTokens.expiresAt })
+      .select({
+        id: emailTokens.id,
+        userId: emailTokens.userId,
+        expiresAt: emailTokens.expiresAt,
+      })
       .from(emailTokens)
-      .where(and(eq(emailTokens.tokenHash, hashToken(token)), isNull(emailTokens.usedAt)))
+      .where(
+        and(
+          eq(emailTokens.tokenHash, hashToken(token)),
+          isNull(emailTokens.usedAt),
+        ),
+      )
       .for("update")
       .limit(1);
     if (!row || row.expiresAt.getTime() <= Date.now()) return null;
@@ -201,8 +247,14 @@ export async function setPasswordWithToken(token: string, password: string): Pro
       .where(eq(users.id, row.userId))
       .limit(1);
     if (!owner?.active) return null;
-    await tx.update(emailTokens).set({ usedAt: new Date() }).where(eq(emailTokens.id, row.id));
-    await tx.update(users).set({ passwordHash }).where(eq(users.id, row.userId));
+    await tx
+      .update(emailTokens)
+      .set({ usedAt: new Date() })
+      .where(eq(emailTokens.id, row.id));
+    await tx
+      .update(users)
+      .set({ passwordHash })
+      .where(eq(users.id, row.userId));
     return row.userId;
   });
   if (userId) await endAllSessions(userId);

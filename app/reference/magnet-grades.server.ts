@@ -30,12 +30,20 @@ export function magnetGradeFromRow(row: Row): MagnetGrade {
 
 /** Every grade, by material then name (a few dozen rows: the reference table shows them all). */
 export async function listMagnetGrades() {
-  const rows = await db.select().from(magnetGrades).orderBy(asc(magnetGrades.material), asc(magnetGrades.name));
-  return rows.map((row) => ({ ...magnetGradeFromRow(row), builtIn: row.builtIn }));
+  const rows = await db
+    .select()
+    .from(magnetGrades)
+    .orderBy(asc(magnetGrades.material), asc(magnetGrades.name));
+  return rows.map((row) => ({
+    ...magnetGradeFromRow(row),
+    builtIn: row.builtIn,
+  }));
 }
 
 /** The grade whose name, key or alias matches (case-insensitive), or null. */
-export async function findMagnetGradeByName(name: string): Promise<MagnetGrade | null> {
+export async function findMagnetGradeByName(
+  name: string,
+): Promise<MagnetGrade | null> {
   const wanted = name.trim().toLowerCase();
   const [row] = await db
     .select()

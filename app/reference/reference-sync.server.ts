@@ -30,13 +30,18 @@ type Database = MySql2Database<typeof schema>;
 
 /** Every column of the row is replaced by the incoming value on a key clash. */
 function replaceAll(columns: string[]) {
-  return Object.fromEntries(columns.map((column) => [column, sql.raw(`VALUES(\`${column}\`)`)]));
+  return Object.fromEntries(
+    columns.map((column) => [column, sql.raw(`VALUES(\`${column}\`)`)]),
+  );
 }
 
 /** As replaceAll, but a row an admin added (built_in = 0) keeps its values. */
 function replaceBuiltIn(columns: string[]) {
   return Object.fromEntries(
-    columns.map((column) => [column, sql.raw(`IF(\`built_in\` = 1, VALUES(\`${column}\`), \`${column}\`)`)]),
+    columns.map((column) => [
+      column,
+      sql.raw(`IF(\`built_in\` = 1, VALUES(\`${column}\`), \`${column}\`)`),
+    ]),
   );
 }
 
@@ -57,7 +62,13 @@ export async function syncReferenceData(db: Database): Promise<void> {
         })),
       )
       .onDuplicateKeyUpdate({
-        set: replaceAll(["name", "resistivity_20_ohm_mm2_per_m", "temperature_coefficient_20_per_k", "density_g_per_cm3", "source"]),
+        set: replaceAll([
+          "name",
+          "resistivity_20_ohm_mm2_per_m",
+          "temperature_coefficient_20_per_k",
+          "density_g_per_cm3",
+          "source",
+        ]),
       });
 
     const sizes = [
@@ -81,25 +92,44 @@ export async function syncReferenceData(db: Database): Promise<void> {
     await tx
       .insert(wireSizes)
       .values(sizes)
-      .onDuplicateKeyUpdate({ set: replaceAll(["gauge_number", "series", "bare_diameter_mm", "source"]) });
+      .onDuplicateKeyUpdate({
+        set: replaceAll([
+          "gauge_number",
+          "series",
+          "bare_diameter_mm",
+          "source",
+        ]),
+      });
 
     await tx
       .insert(insulationKinds)
-      .values(INSULATION_KINDS.map((row) => ({ key: row.key, standard: row.standard, name: row.name, source: row.source })))
-      .onDuplicateKeyUpdate({ set: replaceAll(["standard", "name", "source"]) });
+      .values(
+        INSULATION_KINDS.map((row) => ({
+          key: row.key,
+          standard: row.standard,
+          name: row.name,
+          source: row.source,
+        })),
+      )
+      .onDuplicateKeyUpdate({
+        set: replaceAll(["standard", "name", "source"]),
+      });
 
     await tx
       .insert(publishedOverallDiameters)
       .values(
         PUBLISHED_MAX_OVERALL_DIAMETERS.map((row) => ({
           standard: row.standard,
-          sizeLabel: row.standard === "IEC" ? iecSizeLabel(Number(row.size)) : row.size,
+          sizeLabel:
+            row.standard === "IEC" ? iecSizeLabel(Number(row.size)) : row.size,
           insulationKey: row.insulation,
           maxOverallDiameterMm: row.maxOverallDiameterMm.toFixed(4),
           source: row.source,
         })),
       )
-      .onDuplicateKeyUpdate({ set: replaceAll(["max_overall_diameter_mm", "source"]) });
+      .onDuplicateKeyUpdate({
+        set: replaceAll(["max_overall_diameter_mm", "source"]),
+      });
 
     await tx
       .insert(thermalClasses)
@@ -111,7 +141,9 @@ export async function syncReferenceData(db: Database): Promise<void> {
           source: row.source,
         })),
       )
-      .onDuplicateKeyUpdate({ set: replaceAll(["letter", "typical_enamels", "source"]) });
+      .onDuplicateKeyUpdate({
+        set: replaceAll(["letter", "typical_enamels", "source"]),
+      });
 
     await tx
       .insert(magnetGrades)

@@ -3,7 +3,11 @@ import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/account";
-import { createApiToken, listApiTokens, revokeApiToken } from "~/auth/api-tokens.server";
+import {
+  createApiToken,
+  listApiTokens,
+  revokeApiToken,
+} from "~/auth/api-tokens.server";
 import { requireUser } from "~/auth/guard.server";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages, TextField } from "~/components/text-field";
@@ -23,19 +27,35 @@ export async function action({ request }: Route.ActionArgs) {
   const formData = await request.formData();
   if (formData.get("intent") === "revoke") {
     const parsed = revokeSchema.safeParse({ tokenId: formData.get("tokenId") });
-    if (!parsed.success || !(await revokeApiToken(user.id, parsed.data.tokenId))) {
-      return data({ result: null, newToken: null, notice: "No such live token." }, { status: 404 });
+    if (
+      !parsed.success ||
+      !(await revokeApiToken(user.id, parsed.data.tokenId))
+    ) {
+      return data(
+        { result: null, newToken: null, notice: "No such live token." },
+        { status: 404 },
+      );
     }
-    return { result: null, newToken: null, notice: "Token revoked: it no longer works." };
+    return {
+      result: null,
+      newToken: null,
+      notice: "Token revoked: it no longer works.",
+    };
   }
   const submission = parseWithZod(formData, {
-    schema: createTokenSchema.refine((value) => value.roles.every((role) => user.roles.includes(role)), {
-      path: ["roles"],
-      message: "A token can only have roles you hold yourself.",
-    }),
+    schema: createTokenSchema.refine(
+      (value) => value.roles.every((role) => user.roles.includes(role)),
+      {
+        path: ["roles"],
+        message: "A token can only have roles you hold yourself.",
+      },
+    ),
   });
   if (submission.status !== "success") {
-    return data({ result: submission.reply(), newToken: null, notice: null }, { status: 400 });
+    return data(
+      { result: submission.reply(), newToken: null, notice: null },
+      { status: 400 },
+    );
   }
   const { token } = await createApiToken({
     userId: user.id,
@@ -43,12 +63,21 @@ export async function action({ request }: Route.ActionArgs) {
     roles: submission.value.roles,
     expiresAt: tokenExpiry(submission.value.lifetimeDays),
   });
-  return { result: submission.reply({ resetForm: true }), newToken: token, notice: null };
+  return {
+    result: submission.reply({ resetForm: true }),
+    newToken: token,
+    notice: null,
+  };
 }
 
-export const meta: Route.MetaFunction = () => [{ title: "Your account · Turnledger" }];
+export const meta: Route.MetaFunction = () => [
+  { title: "Your account · Turnledger" },
+];
 
-export default function Account({ loaderData, actionData }: Route.ComponentProps) {
+export default function Account({
+  loaderData,
+  actionData,
+}: Route.ComponentProps) {
   const { user, tokens } = loaderData;
   const navigation = useNavigation();
   const [form, fields] = useForm({
@@ -61,13 +90,16 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
       return parseWithZod(formData, { schema: createTokenSchema });
     },
   });
-  const { key: selectKey, ...selectProps } = getSelectProps(fields.lifetimeDays);
+  const { key: selectKey, ...selectProps } = getSelectProps(
+    fields.lifetimeDays,
+  );
   return (
     <div className="max-w-4xl space-y-8">
       <div>
         <h1 className="text-2xl font-semibold">Your account</h1>
         <p className="text-graphite-500">
-          {user.name} · {user.email} · {user.roles.map((role) => roleLabels[role]).join(", ") || "no role"}
+          {user.name} · {user.email} ·{" "}
+          {user.roles.map((role) => roleLabels[role]).join(", ") || "no role"}
         </p>
       </div>
 
@@ -77,13 +109,20 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
         </h2>
         <p className="text-sm text-graphite-700">
           Scripts and other tools call <code>/api/v1</code> with{" "}
-          <code>Authorization: Bearer &lt;token&gt;</code>. A token acts with the roles you give
-          it, and never with more than you hold.
+          <code>Authorization: Bearer &lt;token&gt;</code>. A token acts with
+          the roles you give it, and never with more than you hold.
         </p>
         {actionData?.newToken ? (
-          <div role="status" className="rounded-md border border-ok/40 bg-ok/5 p-4 text-sm">
-            <p className="font-medium text-ok">Copy the token now: it is shown only this once.</p>
-            <code className="mt-2 block break-all rounded bg-white p-2 text-graphite-900">{actionData.newToken}</code>
+          <div
+            role="status"
+            className="rounded-md border border-ok/40 bg-ok/5 p-4 text-sm"
+          >
+            <p className="font-medium text-ok">
+              Copy the token now: it is shown only this once.
+            </p>
+            <code className="mt-2 block break-all rounded bg-white p-2 text-graphite-900">
+              {actionData.newToken}
+            </code>
           </div>
         ) : null}
         {actionData?.notice ? (
@@ -91,9 +130,18 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
             {actionData.notice}
           </p>
         ) : null}
-        <Form method="post" {...getFormProps(form)} className="panel grid gap-4 md:grid-cols-2">
+        <Form
+          method="post"
+          {...getFormProps(form)}
+          className="panel grid gap-4 md:grid-cols-2"
+        >
           <FormMessages id={form.errorId} errors={form.errors} />
-          <TextField field={fields.name} label="Token name" autoComplete="off" hint="e.g. the scale at the winding bench" />
+          <TextField
+            field={fields.name}
+            label="Token name"
+            autoComplete="off"
+            hint="e.g. the scale at the winding bench"
+          />
           <div>
             <label htmlFor={fields.lifetimeDays.id} className="field-label">
               Lives for
@@ -106,10 +154,20 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
             </select>
           </div>
           <div className="md:col-span-2">
-            <RoleCheckboxes field={fields.roles} legend="Roles the token acts with" choices={user.roles} />
+            <RoleCheckboxes
+              field={fields.roles}
+              legend="Roles the token acts with"
+              choices={user.roles}
+            />
           </div>
           <div>
-            <button type="submit" name="intent" value="create" className="button-primary" disabled={navigation.state !== "idle"}>
+            <button
+              type="submit"
+              name="intent"
+              value="create"
+              className="button-primary"
+              disabled={navigation.state !== "idle"}
+            >
               Create token
             </button>
           </div>
@@ -133,28 +191,54 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
             <tbody>
               {tokens.length === 0 ? (
                 <tr>
-                  <td colSpan={7} className="py-6 text-center text-graphite-500">
+                  <td
+                    colSpan={7}
+                    className="py-6 text-center text-graphite-500"
+                  >
                     No tokens yet.
                   </td>
                 </tr>
               ) : (
                 tokens.map((token) => (
-                  <tr key={token.id} className={token.revokedAt ? "text-graphite-500 line-through" : undefined}>
+                  <tr
+                    key={token.id}
+                    className={
+                      token.revokedAt
+                        ? "text-graphite-500 line-through"
+                        : undefined
+                    }
+                  >
                     <td>{token.name}</td>
                     <td>
                       <code>{token.tokenPrefix}…</code>
                     </td>
-                    <td>{token.roles.map((role) => roleLabels[role]).join(", ")}</td>
+                    <td>
+                      {token.roles.map((role) => roleLabels[role]).join(", ")}
+                    </td>
                     <td>{formatDateTime(token.createdAt)}</td>
-                    <td>{token.expiresAt ? formatDateTime(token.expiresAt) : "never"}</td>
+                    <td>
+                      {token.expiresAt
+                        ? formatDateTime(token.expiresAt)
+                        : "never"}
+                    </td>
                     <td>{formatDateTime(token.lastUsedAt)}</td>
                     <td>
                       {token.revokedAt ? (
                         "revoked"
                       ) : (
                         <Form method="post">
-                          <input type="hidden" name="tokenId" value={token.id} />
-                          <button type="submit" name="intent" value="revoke" className="button-quiet" aria-label={`Revoke ${token.name}`}>
+                          <input
+                            type="hidden"
+                            name="tokenId"
+                            value={token.id}
+                          />
+                          <button
+                            type="submit"
+                            name="intent"
+                            value="revoke"
+                            className="button-quiet"
+                            aria-label={`Revoke ${token.name}`}
+                          >
                             Revoke
                           </button>
                         </Form>

@@ -9,17 +9,28 @@ export async function loader({ request }: Route.LoaderArgs) {
   await requireRole(request, ["admin"]);
   const page = pageFromSearch(new URL(request.url).searchParams.get("page"));
   const { total, messages } = await listOutbox(page);
-  return { messages, page, pageCount: Math.max(1, Math.ceil(total / outboxPageSize)), total };
+  return {
+    messages,
+    page,
+    pageCount: Math.max(1, Math.ceil(total / outboxPageSize)),
+    total,
+  };
 }
 
-export const meta: Route.MetaFunction = () => [{ title: "Outbox · Turnledger" }];
+export const meta: Route.MetaFunction = () => [
+  { title: "Outbox · Turnledger" },
+];
 
 type Message = Route.ComponentProps["loaderData"]["messages"][number];
 const column = createColumnHelper<Message>();
 const columns = [
   column.accessor("createdAt", {
     header: "Written",
-    cell: (info) => <span className="whitespace-nowrap">{formatDateTime(info.getValue())}</span>,
+    cell: (info) => (
+      <span className="whitespace-nowrap">
+        {formatDateTime(info.getValue())}
+      </span>
+    ),
   }),
   column.accessor("to", { header: "To" }),
   column.display({
@@ -27,8 +38,12 @@ const columns = [
     header: "Message",
     cell: ({ row }) => (
       <details>
-        <summary className="cursor-pointer font-medium">{row.original.subject}</summary>
-        <pre className="mt-2 whitespace-pre-wrap font-sans text-graphite-700">{row.original.text}</pre>
+        <summary className="cursor-pointer font-medium">
+          {row.original.subject}
+        </summary>
+        <pre className="mt-2 whitespace-pre-wrap font-sans text-graphite-700">
+          {row.original.text}
+        </pre>
       </details>
     ),
   }),
@@ -37,10 +52,16 @@ const columns = [
     header: "Sent",
     cell: ({ row }) =>
       row.original.sentAt ? (
-        <span className="whitespace-nowrap">{formatDateTime(row.original.sentAt)}</span>
+        <span className="whitespace-nowrap">
+          {formatDateTime(row.original.sentAt)}
+        </span>
       ) : (
-        <span className="text-caution" title={row.original.lastError ?? undefined}>
-          Waiting ({row.original.attempts} {row.original.attempts === 1 ? "try" : "tries"})
+        <span
+          className="text-caution"
+          title={row.original.lastError ?? undefined}
+        >
+          Waiting ({row.original.attempts}{" "}
+          {row.original.attempts === 1 ? "try" : "tries"})
         </span>
       ),
   }),
@@ -53,8 +74,8 @@ export default function AdminOutbox({ loaderData }: Route.ComponentProps) {
         Outbox
       </h1>
       <p className="mb-4 mt-1 text-graphite-500">
-        Every e-mail Turnledger has written, newest first ({loaderData.total} in all). Unsent
-        ones go out with <code>npm run mail:retry</code>.
+        Every e-mail Turnledger has written, newest first ({loaderData.total} in
+        all). Unsent ones go out with <code>npm run mail:retry</code>.
       </p>
       <DataTable
         caption="E-mail sent by Turnledger"

@@ -12,13 +12,22 @@ import { appUrl } from "~/lib/app-url.server";
 import { formatDateTime, pageFromSearch } from "~/lib/format";
 import { inviteSchema } from "~/lib/people-schemas";
 import { roleLabels } from "~/lib/roles";
-import { emailIsTaken, invitePerson, listPeople, peoplePageSize } from "~/people/people.server";
+import {
+  emailIsTaken,
+  invitePerson,
+  listPeople,
+  peoplePageSize,
+} from "~/people/people.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireRole(request, ["admin"]);
   const page = pageFromSearch(new URL(request.url).searchParams.get("page"));
   const { total, people } = await listPeople(page);
-  return { people, page, pageCount: Math.max(1, Math.ceil(total / peoplePageSize)) };
+  return {
+    people,
+    page,
+    pageCount: Math.max(1, Math.ceil(total / peoplePageSize)),
+  };
 }
 
 export async function action({ request }: Route.ActionArgs) {
@@ -48,7 +57,9 @@ export async function action({ request }: Route.ActionArgs) {
   } catch (error) {
     if (!isDuplicateKey(error)) throw error;
     const result = submission.reply({
-      fieldErrors: { email: ["Someone already has an account with this e-mail."] },
+      fieldErrors: {
+        email: ["Someone already has an account with this e-mail."],
+      },
     });
     return data({ result, invited: null }, { status: 409 });
   }
@@ -58,7 +69,9 @@ export async function action({ request }: Route.ActionArgs) {
   };
 }
 
-export const meta: Route.MetaFunction = () => [{ title: "People · Turnledger" }];
+export const meta: Route.MetaFunction = () => [
+  { title: "People · Turnledger" },
+];
 
 type Person = Route.ComponentProps["loaderData"]["people"][number];
 const column = createColumnHelper<Person>();
@@ -77,7 +90,11 @@ const columns = [
   column.accessor("email", { header: "E-mail" }),
   column.accessor("roles", {
     header: "Roles",
-    cell: (info) => info.getValue().map((role) => roleLabels[role]).join(", ") || "—",
+    cell: (info) =>
+      info
+        .getValue()
+        .map((role) => roleLabels[role])
+        .join(", ") || "—",
   }),
   column.display({
     id: "state",
@@ -97,7 +114,10 @@ const columns = [
   }),
 ];
 
-export default function AdminPeople({ loaderData, actionData }: Route.ComponentProps) {
+export default function AdminPeople({
+  loaderData,
+  actionData,
+}: Route.ComponentProps) {
   const navigation = useNavigation();
   const [form, fields] = useForm({
     id: "invite",
@@ -129,7 +149,10 @@ export default function AdminPeople({ loaderData, actionData }: Route.ComponentP
           Invite someone
         </h2>
         {actionData?.invited ? (
-          <p role="status" className="mb-3 rounded-md bg-ok/10 px-3 py-2 text-sm text-ok">
+          <p
+            role="status"
+            className="mb-3 rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
+          >
             {actionData.invited.mailSent
               ? `Invitation sent to ${actionData.invited.email}.`
               : `Account created for ${actionData.invited.email}; the e-mail could not be sent yet and waits in the outbox.`}
@@ -138,9 +161,18 @@ export default function AdminPeople({ loaderData, actionData }: Route.ComponentP
         <Form method="post" {...getFormProps(form)} className="space-y-4">
           <FormMessages id={form.errorId} errors={form.errors} />
           <TextField field={fields.name} label="Name" autoComplete="off" />
-          <TextField field={fields.email} label="E-mail" type="email" autoComplete="off" />
+          <TextField
+            field={fields.email}
+            label="E-mail"
+            type="email"
+            autoComplete="off"
+          />
           <RoleCheckboxes field={fields.roles} />
-          <button type="submit" className="button-primary w-full" disabled={navigation.state !== "idle"}>
+          <button
+            type="submit"
+            className="button-primary w-full"
+            disabled={navigation.state !== "idle"}
+          >
             Send invitation
           </button>
         </Form>

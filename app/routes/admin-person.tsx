@@ -10,7 +10,12 @@ import { appUrl } from "~/lib/app-url.server";
 import { personUpdateSchema } from "~/lib/people-schemas";
 import { invitationMessage } from "~/mail/account-messages";
 import { sendMail } from "~/mail/mailer.server";
-import { countActiveAdmins, findPerson, setActive, setRoles } from "~/people/people.server";
+import {
+  countActiveAdmins,
+  findPerson,
+  setActive,
+  setRoles,
+} from "~/people/people.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const admin = await requireRole(request, ["admin"]);
@@ -23,12 +28,17 @@ export async function action({ request, params }: Route.ActionArgs) {
   const admin = await requireRole(request, ["admin"]);
   const person = await findPerson(params.userId);
   if (!person) throw data({ message: "No such person." }, { status: 404 });
-  const submission = parseWithZod(await request.formData(), { schema: personUpdateSchema });
+  const submission = parseWithZod(await request.formData(), {
+    schema: personUpdateSchema,
+  });
   if (submission.status !== "success") {
     return data({ result: submission.reply(), done: null }, { status: 400 });
   }
   const refuse = (message: string) =>
-    data({ result: submission.reply({ formErrors: [message] }), done: null }, { status: 409 });
+    data(
+      { result: submission.reply({ formErrors: [message] }), done: null },
+      { status: 409 },
+    );
   const change = submission.value;
   const wouldLoseAdmin =
     person.active &&
@@ -36,7 +46,9 @@ export async function action({ request, params }: Route.ActionArgs) {
     (change.intent === "deactivate" ||
       (change.intent === "save-roles" && !change.roles.includes("admin")));
   if (wouldLoseAdmin && (await countActiveAdmins()) <= 1) {
-    return refuse("Turnledger needs at least one active admin: make someone else admin first.");
+    return refuse(
+      "Turnledger needs at least one active admin: make someone else admin first.",
+    );
   }
   if (change.intent === "deactivate" && person.id === admin.id) {
     return refuse("You cannot deactivate yourself.");
@@ -48,10 +60,16 @@ export async function action({ request, params }: Route.ActionArgs) {
       return { result: submission.reply(), done: "Roles saved." };
     case "deactivate":
       await setActive(person.id, false);
-      return { result: submission.reply(), done: `${person.name} is deactivated and signed out everywhere.` };
+      return {
+        result: submission.reply(),
+        done: `${person.name} is deactivated and signed out everywhere.`,
+      };
     case "reactivate":
       await setActive(person.id, true);
-      return { result: submission.reply(), done: `${person.name} can sign in again.` };
+      return {
+        result: submission.reply(),
+        done: `${person.name} can sign in again.`,
+      };
     case "resend-invitation": {
       const token = await createEmailToken(person.id, "invitation");
       const sent = await sendMail({
@@ -64,7 +82,9 @@ export async function action({ request, params }: Route.ActionArgs) {
       });
       return {
         result: submission.reply(),
-        done: sent ? "A new link is on its way; earlier links no longer work." : "The e-mail waits in the outbox: SMTP did not accept it.",
+        done: sent
+          ? "A new link is on its way; earlier links no longer work."
+          : "The e-mail waits in the outbox: SMTP did not accept it.",
       };
     }
   }
@@ -74,7 +94,10 @@ export const meta: Route.MetaFunction = ({ data: loaderData }) => [
   { title: `${loaderData?.person.name ?? "Person"} · People · Turnledger` },
 ];
 
-export default function AdminPerson({ loaderData, actionData }: Route.ComponentProps) {
+export default function AdminPerson({
+  loaderData,
+  actionData,
+}: Route.ComponentProps) {
   const { person, isSelf } = loaderData;
   const navigation = useNavigation();
   const [form, fields] = useForm({
@@ -90,7 +113,10 @@ export default function AdminPerson({ loaderData, actionData }: Route.ComponentP
   return (
     <div className="max-w-2xl space-y-6">
       <p className="text-sm">
-        <Link to="/admin/people" className="text-copper-700 underline underline-offset-2">
+        <Link
+          to="/admin/people"
+          className="text-copper-700 underline underline-offset-2"
+        >
           ← People
         </Link>
       </p>
@@ -101,7 +127,10 @@ export default function AdminPerson({ loaderData, actionData }: Route.ComponentP
         </p>
       </div>
       {actionData?.done ? (
-        <p role="status" className="rounded-md bg-ok/10 px-3 py-2 text-sm text-ok">
+        <p
+          role="status"
+          className="rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
+        >
           {actionData.done}
         </p>
       ) : null}
@@ -122,22 +151,40 @@ export default function AdminPerson({ loaderData, actionData }: Route.ComponentP
         {person.active ? (
           <>
             <p className="flex-1 text-sm text-graphite-700">
-              Deactivating ends {isSelf ? "your" : "their"} sessions at once; the history they
-              made stays.
+              Deactivating ends {isSelf ? "your" : "their"} sessions at once;
+              the history they made stays.
             </p>
-            <button type="submit" name="intent" value="deactivate" className="button-quiet text-danger" disabled={isSelf}>
+            <button
+              type="submit"
+              name="intent"
+              value="deactivate"
+              className="button-quiet text-danger"
+              disabled={isSelf}
+            >
               Deactivate
             </button>
           </>
         ) : (
           <>
-            <p className="flex-1 text-sm text-graphite-700">This person cannot sign in.</p>
-            <button type="submit" name="intent" value="reactivate" className="button-quiet">
+            <p className="flex-1 text-sm text-graphite-700">
+              This person cannot sign in.
+            </p>
+            <button
+              type="submit"
+              name="intent"
+              value="reactivate"
+              className="button-quiet"
+            >
               Reactivate
             </button>
           </>
         )}
-        <button type="submit" name="intent" value="resend-invitation" className="button-quiet">
+        <button
+          type="submit"
+          name="intent"
+          value="resend-invitation"
+          className="button-quiet"
+        >
           Send a new invitation link
         </button>
       </Form>

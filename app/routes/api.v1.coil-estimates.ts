@@ -1,7 +1,11 @@
 import type { Route } from "./+types/api.v1.coil-estimates";
 import { requireUser } from "~/auth/guard.server";
 import { estimateCoil } from "~/engineering/coil-estimate";
-import { calculateOr400, methodNotAllowed, readJsonBody } from "~/lib/api.server";
+import {
+  calculateOr400,
+  methodNotAllowed,
+  readJsonBody,
+} from "~/lib/api.server";
 import { coilEstimateRequestSchema } from "~/lib/estimate-requests";
 
 export async function loader({ request }: Route.LoaderArgs) {

@@ -26,9 +26,13 @@ export async function action({ request, params }: Route.ActionArgs) {
     return apiError(403, "This needs the role buyer or storekeeper.");
   }
   const change = await readJsonBody(request, itemPatchSchema);
-  const touchesCatalogue = change.name !== undefined || change.active !== undefined;
+  const touchesCatalogue =
+    change.name !== undefined || change.active !== undefined;
   if (touchesCatalogue && !userHasRole(user, ["buyer"])) {
-    return apiError(403, "Storekeepers change reorder point and quantity only; the name and archive state need the role buyer.");
+    return apiError(
+      403,
+      "Storekeepers change reorder point and quantity only; the name and archive state need the role buyer.",
+    );
   }
   return answerStockError(async () => {
     await updateItem(params.sku, change);

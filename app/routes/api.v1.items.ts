@@ -3,16 +3,26 @@ import { requireRole, requireUser } from "~/auth/guard.server";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
 import { createItem } from "~/stock/catalogue.server";
 import { itemCreateSchema } from "~/stock/item-schemas";
-import { itemListQuerySchema, searchParamsObject } from "~/stock/item-list-query";
+import {
+  itemListQuerySchema,
+  searchParamsObject,
+} from "~/stock/item-list-query";
 import { findItemBySku, listItems } from "~/stock/items.server";
 import { answerStockError } from "~/stock/stock-api.server";
 
 /** GET /api/v1/items?search=&kind=&belowReorder=1&sort=&order=&page=&pageSize= → a page of items. */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  const parsed = itemListQuerySchema.safeParse(searchParamsObject(new URL(request.url).searchParams));
+  const parsed = itemListQuerySchema.safeParse(
+    searchParamsObject(new URL(request.url).searchParams),
+  );
   if (!parsed.success) {
-    const fields = Object.fromEntries(parsed.error.issues.map((issue) => [issue.path.join("."), [issue.message]]));
+    const fields = Object.fromEntries(
+      parsed.error.issues.map((issue) => [
+        issue.path.join("."),
+        [issue.message],
+      ]),
+    );
     return apiError(400, "Some query parameters are wrong.", fields);
   }
   const query = parsed.data;
@@ -26,7 +36,12 @@ export async function loader({ request }: Route.LoaderArgs) {
     page: query.page,
     pageSize: query.pageSize,
   });
-  return Response.json({ items, page: query.page, pageSize: query.pageSize, total });
+  return Response.json({
+    items,
+    page: query.page,
+    pageSize: query.pageSize,
+    total,
+  });
 }
 
 /** POST /api/v1/items (buyer, admin) → 201 the new item. */

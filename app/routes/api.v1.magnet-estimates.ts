@@ -2,8 +2,16 @@ import type { Route } from "./+types/api.v1.magnet-estimates";
 import { requireUser } from "~/auth/guard.server";
 import { estimateMagnet } from "~/engineering/magnet-estimate";
 import type { MagnetGrade } from "~/engineering/reference-data";
-import { apiError, calculateOr400, methodNotAllowed, readJsonBody } from "~/lib/api.server";
-import { magnetEstimateRequestSchema, type MagnetEstimateRequest } from "~/lib/estimate-requests";
+import {
+  apiError,
+  calculateOr400,
+  methodNotAllowed,
+  readJsonBody,
+} from "~/lib/api.server";
+import {
+  magnetEstimateRequestSchema,
+  type MagnetEstimateRequest,
+} from "~/lib/estimate-requests";
 import { findMagnetGradeByName } from "~/reference/magnet-grades.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -12,7 +20,9 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 /** A grade made from typed properties (a maker's data sheet) rather than the grade table. */
-function gradeFromProperties(properties: NonNullable<MagnetEstimateRequest["properties"]>): MagnetGrade {
+function gradeFromProperties(
+  properties: NonNullable<MagnetEstimateRequest["properties"]>,
+): MagnetGrade {
   return {
     key: "custom",
     name: properties.name,
@@ -53,5 +63,7 @@ export async function action({ request }: Route.ActionArgs) {
   } else {
     grade = gradeFromProperties(input.properties!);
   }
-  return Response.json(calculateOr400(() => estimateMagnet({ ...input, grade })));
+  return Response.json(
+    calculateOr400(() => estimateMagnet({ ...input, grade })),
+  );
 }

@@ -8,7 +8,12 @@ export async function loader({ request }: Route.LoaderArgs) {
   const limit = Number(new URL(request.url).searchParams.get("limit") ?? 100);
   if (!Number.isInteger(limit) || limit < 1 || limit > 500) {
     return Response.json(
-      { error: { message: "limit must be a whole number from 1 to 500.", fields: { limit: ["1 to 500"] } } },
+      {
+        error: {
+          message: "limit must be a whole number from 1 to 500.",
+          fields: { limit: ["1 to 500"] },
+        },
+      },
       { status: 400 },
     );
   }

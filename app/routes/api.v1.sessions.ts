@@ -8,7 +8,10 @@ import { findPerson, checkSignIn } from "~/people/people.server";
 
 const credentialsSchema = z.object({
   email: emailField,
-  password: z.string({ error: "Enter your password." }).min(1, "Enter your password.").max(1000),
+  password: z
+    .string({ error: "Enter your password." })
+    .min(1, "Enter your password.")
+    .max(1000),
 });
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -20,21 +23,36 @@ export async function loader({ request }: Route.LoaderArgs) {
 export async function action({ request, context }: Route.ActionArgs) {
   await getOptionalUser(request); // a 503 when the database is down
   if (request.method === "DELETE") {
-    return new Response(null, { status: 204, headers: { "Set-Cookie": await endSession(request) } });
+    return new Response(null, {
+      status: 204,
+      headers: { "Set-Cookie": await endSession(request) },
+    });
   }
   if (request.method !== "POST") return methodNotAllowed(["POST", "DELETE"]);
 
   const { email, password } = await readJsonBody(request, credentialsSchema);
   const result = await checkSignIn(email, password, context.clientAddress);
   if (result.kind === "throttled") {
-    return apiError(429, "Too many failed attempts. Try again later.", undefined, {
-      "Retry-After": String(result.retryAfterSeconds),
-    });
+    return apiError(
+      429,
+      "Too many failed attempts. Try again later.",
+      undefined,
+      {
+        "Retry-After": String(result.retryAfterSeconds),
+      },
+    );
   }
-  if (result.kind === "wrong-credentials") return apiError(401, wrongCredentialsMessage);
+  if (result.kind === "wrong-credentials")
+    return apiError(401, wrongCredentialsMessage);
   const person = await findPerson(result.userId);
   return Response.json(
-    { user: { email: person?.email, name: person?.name, roles: person?.roles ?? [] } },
+    {
+      user: {
+        email: person?.email,
+        name: person?.name,
+        roles: person?.roles ?? [],
+      },
+    },
     { headers: { "Set-Cookie": await startSession(result.userId) } },
   );
 }

@@ -11,13 +11,25 @@ import { recordMovement } from "~/stock/stock-movements.server";
 /** GET /api/v1/stock-movements?type=&sku=&user=&from=&to=&page=&pageSize= → the journal, newest first. */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  const parsed = movementJournalQuerySchema.safeParse(searchParamsObject(new URL(request.url).searchParams));
+  const parsed = movementJournalQuerySchema.safeParse(
+    searchParamsObject(new URL(request.url).searchParams),
+  );
   if (!parsed.success) {
-    const fields = Object.fromEntries(parsed.error.issues.map((issue) => [issue.path.join("."), [issue.message]]));
+    const fields = Object.fromEntries(
+      parsed.error.issues.map((issue) => [
+        issue.path.join("."),
+        [issue.message],
+      ]),
+    );
     return apiError(400, "Some query parameters are wrong.", fields);
   }
   const { hasMore, movements } = await listMovements(parsed.data);
-  return Response.json({ movements, page: parsed.data.page, pageSize: parsed.data.pageSize, hasMore });
+  return Response.json({
+    movements,
+    page: parsed.data.page,
+    pageSize: parsed.data.pageSize,
+    hasMore,
+  });
 }
 
 /** POST /api/v1/stock-movements (storekeeper, admin) → 201 { movement, balance }; 409 when stock would go below zero. */
@@ -25,5 +37,7 @@ export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, ["storekeeper"]);
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const movement = await readJsonBody(request, movementRequestSchema);
-  return answerStockError(async () => Response.json(await recordMovement(movement, user.id), { status: 201 }));
+  return answerStockError(async () =>
+    Response.json(await recordMovement(movement, user.id), { status: 201 }),
+  );
 }

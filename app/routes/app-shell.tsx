@@ -1,4 +1,10 @@
-import { data, Form, NavLink, Outlet, type ShouldRevalidateFunctionArgs } from "react-router";
+import {
+  data,
+  Form,
+  NavLink,
+  Outlet,
+  type ShouldRevalidateFunctionArgs,
+} from "react-router";
 import type { Route } from "./+types/app-shell";
 import { requireUser } from "~/auth/guard.server";
 import { sessionHeaders } from "~/auth/session-headers.server";
@@ -11,12 +17,16 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 /** The estimators' live calculations change nothing on the server: the shell need not reload after them. */
-export function shouldRevalidate({ formAction, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) {
+export function shouldRevalidate({
+  formAction,
+  defaultShouldRevalidate,
+}: ShouldRevalidateFunctionArgs) {
   return formAction?.startsWith("/tools/") ? false : defaultShouldRevalidate;
 }
 
 /** Sends a refreshed session cookie with the page. */
-export const headers: Route.HeadersFunction = ({ loaderHeaders }) => loaderHeaders;
+export const headers: Route.HeadersFunction = ({ loaderHeaders }) =>
+  loaderHeaders;
 
 export default function AppShell({ loaderData }: Route.ComponentProps) {
   const { user } = loaderData;
@@ -27,7 +37,10 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
     <div className="flex min-h-screen flex-col">
       <header className="border-b border-graphite-800 bg-graphite-900 text-graphite-50 print:hidden">
         <div className="mx-auto flex max-w-7xl items-center gap-8 px-6 py-3">
-          <a href="/" className="flex items-center gap-2 text-lg font-semibold tracking-tight">
+          <a
+            href="/"
+            className="flex items-center gap-2 text-lg font-semibold tracking-tight"
+          >
             <img src="/favicon.svg" alt="" className="h-7 w-7" />
             Turnledger
           </a>
@@ -53,7 +66,11 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
             </ul>
           </nav>
           <div className="flex items-center gap-4 text-sm">
-            <NavLink to="/account" className="hover:underline" title="Your account and API tokens">
+            <NavLink
+              to="/account"
+              className="hover:underline"
+              title="Your account and API tokens"
+            >
               <span className="font-medium">{user.name}</span>
               <span className="ml-2 text-graphite-300">
                 {user.roles.map((role) => roleLabels[role]).join(" · ")}
@@ -74,8 +91,8 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
         <Outlet />
       </main>
       <footer className="border-t border-rule py-4 print:border-0 text-center text-xs text-graphite-500">
-        Turnledger · figures are first-order engineering estimates; electrical safety and
-        insulation follow local codes and licensed practice.
+        Turnledger · figures are first-order engineering estimates; electrical
+        safety and insulation follow local codes and licensed practice.
       </footer>
     </div>
   );

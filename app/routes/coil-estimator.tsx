@@ -7,7 +7,12 @@ import {
 } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { useEffect, useRef, useState } from "react";
-import { Form, useFetcher, type ShouldRevalidateFunctionArgs, data } from "react-router";
+import {
+  Form,
+  useFetcher,
+  type ShouldRevalidateFunctionArgs,
+  data,
+} from "react-router";
 import { postJson, type ApiAnswer } from "~/lib/api-request";
 import type { CoilEstimateRequest } from "~/lib/estimate-requests";
 import type { Route } from "./+types/coil-estimator";
@@ -47,20 +52,40 @@ export const meta: Route.MetaFunction = () => [
 /** Asks POST /api/v1/coil-estimates in the browser; refusals come back as answers to show beside the fields. */
 export async function clientAction({
   request,
-}: Route.ClientActionArgs): Promise<ApiAnswer<CoilEstimate> & { input: CoilEstimateRequest }> {
+}: Route.ClientActionArgs): Promise<
+  ApiAnswer<CoilEstimate> & { input: CoilEstimateRequest }
+> {
   const input = (await request.json()) as CoilEstimateRequest;
-  return { ...(await postJson<CoilEstimate>("/api/v1/coil-estimates", input, request.signal)), input };
+  return {
+    ...(await postJson<CoilEstimate>(
+      "/api/v1/coil-estimates",
+      input,
+      request.signal,
+    )),
+    input,
+  };
 }
 
 /** The page calculates in the browser (clientAction); a plain form post has nothing to do here. */
 export async function action({ request }: Route.ActionArgs) {
   await requireUser(request);
-  throw data({ message: "This page calculates in your browser. Scripts: POST /api/v1/coil-estimates." }, { status: 405 });
+  throw data(
+    {
+      message:
+        "This page calculates in your browser. Scripts: POST /api/v1/coil-estimates.",
+    },
+    { status: 405 },
+  );
 }
 
 /** Estimates change nothing on the server: the page's data need not be read again after one. */
-export function shouldRevalidate({ formAction, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) {
-  return formAction?.startsWith("/tools/coil-estimator") ? false : defaultShouldRevalidate;
+export function shouldRevalidate({
+  formAction,
+  defaultShouldRevalidate,
+}: ShouldRevalidateFunctionArgs) {
+  return formAction?.startsWith("/tools/coil-estimator")
+    ? false
+    : defaultShouldRevalidate;
 }
 
 function NumberField({
@@ -131,11 +156,14 @@ export default function CoilEstimator({ loaderData }: Route.ComponentProps) {
       schema: coilEstimatorFormSchema,
     });
     if (submission.status !== "success") return;
-    void fetcher.submit(JSON.parse(JSON.stringify(coilRequestFromForm(submission.value))), {
-      method: "post",
-      action: "/tools/coil-estimator",
-      encType: "application/json",
-    });
+    void fetcher.submit(
+      JSON.parse(JSON.stringify(coilRequestFromForm(submission.value))),
+      {
+        method: "post",
+        action: "/tools/coil-estimator",
+        encType: "application/json",
+      },
+    );
   }
 
   function onFormChange(event: React.FormEvent<HTMLFormElement>) {
@@ -159,7 +187,10 @@ export default function CoilEstimator({ loaderData }: Route.ComponentProps) {
 
   // The last good estimate stays on screen while the builder fixes a field.
   const answer = fetcher.data;
-  const [lastGood, setLastGood] = useState<{ estimate: CoilEstimate; input: CoilEstimateRequest } | null>(null);
+  const [lastGood, setLastGood] = useState<{
+    estimate: CoilEstimate;
+    input: CoilEstimateRequest;
+  } | null>(null);
   const [seenAnswer, setSeenAnswer] = useState(answer);
   if (answer !== seenAnswer) {
     setSeenAnswer(answer);
@@ -431,8 +462,7 @@ export default function CoilEstimator({ loaderData }: Route.ComponentProps) {
                   coilCount={lastGood.input.coilCount}
                   temperatureC={lastGood.input.temperatureC}
                   pending={
-                    fetcher.state !== "idle" ||
-                    Boolean(answer && !answer.ok)
+                    fetcher.state !== "idle" || Boolean(answer && !answer.ok)
                   }
                 />
               </div>

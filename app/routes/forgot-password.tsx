@@ -16,7 +16,9 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   await getOptionalUser(request);
-  const submission = parseWithZod(await request.formData(), { schema: forgotPasswordSchema });
+  const submission = parseWithZod(await request.formData(), {
+    schema: forgotPasswordSchema,
+  });
   if (submission.status !== "success") {
     return data({ result: submission.reply(), sent: false }, { status: 400 });
   }
@@ -25,7 +27,9 @@ export async function action({ request }: Route.ActionArgs) {
   return { result: submission.reply({ resetForm: true }), sent: true };
 }
 
-export const meta: Route.MetaFunction = () => [{ title: "Forgotten password · Turnledger" }];
+export const meta: Route.MetaFunction = () => [
+  { title: "Forgotten password · Turnledger" },
+];
 
 export default function ForgotPassword({ actionData }: Route.ComponentProps) {
   const navigation = useNavigation();
@@ -40,19 +44,34 @@ export default function ForgotPassword({ actionData }: Route.ComponentProps) {
   return (
     <AccountCard title="Forgotten password">
       {actionData?.sent ? (
-        <p role="status" className="mb-4 rounded-md bg-ok/10 px-3 py-2 text-sm text-ok">
-          If that address has an account, a link to choose a new password is on its way. It
-          works once, for 30 minutes.
+        <p
+          role="status"
+          className="mb-4 rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
+        >
+          If that address has an account, a link to choose a new password is on
+          its way. It works once, for 30 minutes.
         </p>
       ) : null}
       <Form method="post" {...getFormProps(form)} className="space-y-4">
-        <TextField field={fields.email} label="E-mail" type="email" autoComplete="username" />
-        <button type="submit" className="button-primary w-full" disabled={navigation.state !== "idle"}>
+        <TextField
+          field={fields.email}
+          label="E-mail"
+          type="email"
+          autoComplete="username"
+        />
+        <button
+          type="submit"
+          className="button-primary w-full"
+          disabled={navigation.state !== "idle"}
+        >
           Send me a link
         </button>
       </Form>
       <p className="mt-4 text-sm">
-        <Link to="/sign-in" className="text-copper-700 underline underline-offset-2">
+        <Link
+          to="/sign-in"
+          className="text-copper-700 underline underline-offset-2"
+        >
           Back to sign-in
         </Link>
       </p>

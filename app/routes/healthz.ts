@@ -7,14 +7,23 @@ export async function loader() {
   try {
     await db.execute(sql`SELECT 1`);
     return Response.json(
-      { status: "ok", database: { state: "up", latencyMs: Math.round(performance.now() - started) } },
+      {
+        status: "ok",
+        database: {
+          state: "up",
+          latencyMs: Math.round(performance.now() - started),
+        },
+      },
       { headers: { "Cache-Control": "no-store" } },
     );
   } catch (error) {
     const reason = error instanceof Error ? error.message : String(error);
     return Response.json(
       { status: "unavailable", database: { state: "down", error: reason } },
-      { status: 503, headers: { "Cache-Control": "no-store", "Retry-After": "5" } },
+      {
+        status: 503,
+        headers: { "Cache-Control": "no-store", "Retry-After": "5" },
+      },
     );
   }
 }

@@ -17,9 +17,20 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export const meta: Route.MetaFunction = () => [{ title: "Start · Turnledger" }];
 
-function Figure({ label, value, to }: { label: string; value: number; to: string }) {
+function Figure({
+  label,
+  value,
+  to,
+}: {
+  label: string;
+  value: number;
+  to: string;
+}) {
   return (
-    <Link to={to} className="block rounded-md border border-rule bg-white px-4 py-3 hover:border-copper-300">
+    <Link
+      to={to}
+      className="block rounded-md border border-rule bg-white px-4 py-3 hover:border-copper-300"
+    >
       <span className="block text-2xl font-semibold">{value}</span>
       <span className="text-sm text-graphite-500">{label}</span>
     </Link>
@@ -31,7 +42,9 @@ export default function Home({ loaderData }: Route.ComponentProps) {
   return (
     <div className="space-y-6">
       <div>
-        <h1 className="text-2xl font-semibold">Good to see you, {name.split(" ")[0]}</h1>
+        <h1 className="text-2xl font-semibold">
+          Good to see you, {name.split(" ")[0]}
+        </h1>
         <p className="mt-1 text-graphite-500">
           {myRoles.length > 0
             ? `You work here as ${myRoles.map((role) => roleLabels[role].toLowerCase()).join(" and ")}.`
@@ -44,18 +57,42 @@ export default function Home({ loaderData }: Route.ComponentProps) {
             Accounts and mail
           </h2>
           <div className="grid gap-3 sm:grid-cols-4">
-            <Figure label="people active" value={admin.activePeople} to="/admin/people" />
-            <Figure label="invited, no password yet" value={admin.pendingInvitations} to="/admin/people" />
-            <Figure label="deactivated" value={admin.deactivatedPeople} to="/admin/people" />
-            <Figure label="e-mails waiting to send" value={admin.unsentMail} to="/admin/outbox" />
+            <Figure
+              label="people active"
+              value={admin.activePeople}
+              to="/admin/people"
+            />
+            <Figure
+              label="invited, no password yet"
+              value={admin.pendingInvitations}
+              to="/admin/people"
+            />
+            <Figure
+              label="deactivated"
+              value={admin.deactivatedPeople}
+              to="/admin/people"
+            />
+            <Figure
+              label="e-mails waiting to send"
+              value={admin.unsentMail}
+              to="/admin/outbox"
+            />
           </div>
         </section>
       ) : null}
       <ul className="grid gap-4 md:grid-cols-2 lg:grid-cols-3">
         {myRoles.map((role) => (
-          <li key={role} className="panel" aria-label={`${roleDuties[role].title} work`}>
-            <h2 className="text-lg font-semibold text-copper-700">{roleDuties[role].title}</h2>
-            <p className="mt-1 text-xs uppercase tracking-wide text-graphite-500">What you are trusted with</p>
+          <li
+            key={role}
+            className="panel"
+            aria-label={`${roleDuties[role].title} work`}
+          >
+            <h2 className="text-lg font-semibold text-copper-700">
+              {roleDuties[role].title}
+            </h2>
+            <p className="mt-1 text-xs uppercase tracking-wide text-graphite-500">
+              What you are trusted with
+            </p>
             <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-graphite-700">
               {roleDuties[role].duties.map((duty) => (
                 <li key={duty}>{duty}</li>

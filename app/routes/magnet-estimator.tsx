@@ -1,7 +1,11 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { useRef, useState } from "react";
-import { useFetcher, type ShouldRevalidateFunctionArgs, data } from "react-router";
+import {
+  useFetcher,
+  type ShouldRevalidateFunctionArgs,
+  data,
+} from "react-router";
 import type { Route } from "./+types/magnet-estimator";
 import { requireUser } from "~/auth/guard.server";
 import {
@@ -93,7 +97,13 @@ export async function clientAction({
 /** The page calculates in the browser (clientAction); a plain form post has nothing to do here. */
 export async function action({ request }: Route.ActionArgs) {
   await requireUser(request);
-  throw data({ message: "This page calculates in your browser. Scripts: POST /api/v1/magnet-estimates." }, { status: 405 });
+  throw data(
+    {
+      message:
+        "This page calculates in your browser. Scripts: POST /api/v1/magnet-estimates.",
+    },
+    { status: 405 },
+  );
 }
 
 /** Estimates change nothing on the server, so the page's own data need not be read again after one. */

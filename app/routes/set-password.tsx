@@ -17,18 +17,30 @@ export async function loader({ request }: Route.LoaderArgs) {
   await getOptionalUser(request);
   const token = new URL(request.url).searchParams.get("token") ?? "";
   const row = token ? await findUsableToken(token) : null;
-  return { token, usable: row !== null, invitation: row?.purpose === "invitation" };
+  return {
+    token,
+    usable: row !== null,
+    invitation: row?.purpose === "invitation",
+  };
 }
 
 export async function action({ request }: Route.ActionArgs) {
   await getOptionalUser(request);
-  const submission = parseWithZod(await request.formData(), { schema: newPasswordSchema });
+  const submission = parseWithZod(await request.formData(), {
+    schema: newPasswordSchema,
+  });
   if (submission.status !== "success") {
-    return data(submission.reply({ hideFields: ["password", "confirmPassword"] }), {
-      status: 400,
-    });
+    return data(
+      submission.reply({ hideFields: ["password", "confirmPassword"] }),
+      {
+        status: 400,
+      },
+    );
   }
-  const userId = await setPasswordWithToken(submission.value.token, submission.value.password);
+  const userId = await setPasswordWithToken(
+    submission.value.token,
+    submission.value.password,
+  );
   if (!userId) {
     return data(
       submission.reply({
@@ -38,12 +50,19 @@ export async function action({ request }: Route.ActionArgs) {
       { status: 410 },
     );
   }
-  throw redirect("/", { headers: { "Set-Cookie": await startSession(userId) } });
+  throw redirect("/", {
+    headers: { "Set-Cookie": await startSession(userId) },
+  });
 }
 
-export const meta: Route.MetaFunction = () => [{ title: "Choose a password · Turnledger" }];
+export const meta: Route.MetaFunction = () => [
+  { title: "Choose a password · Turnledger" },
+];
 
-export default function SetPassword({ loaderData, actionData }: Route.ComponentProps) {
+export default function SetPassword({
+  loaderData,
+  actionData,
+}: Route.ComponentProps) {
   const navigation = useNavigation();
   const [form, fields] = useForm({
     lastResult: actionData,
@@ -59,7 +78,10 @@ export default function SetPassword({ loaderData, actionData }: Route.ComponentP
       <AccountCard title="Link not usable">
         <p className="text-sm text-graphite-700">{unusableLinkMessage}</p>
         <p className="mt-4 text-sm">
-          <Link to="/forgot-password" className="text-copper-700 underline underline-offset-2">
+          <Link
+            to="/forgot-password"
+            className="text-copper-700 underline underline-offset-2"
+          >
             Ask for a new link
           </Link>
         </p>
@@ -67,7 +89,13 @@ export default function SetPassword({ loaderData, actionData }: Route.ComponentP
     );
   }
   return (
-    <AccountCard title={loaderData.invitation ? "Welcome: choose your password" : "Choose a new password"}>
+    <AccountCard
+      title={
+        loaderData.invitation
+          ? "Welcome: choose your password"
+          : "Choose a new password"
+      }
+    >
       <Form method="post" {...getFormProps(form)} className="space-y-4">
         <FormMessages id={form.errorId} errors={form.errors} />
         <input type="hidden" name="token" value={loaderData.token} />
@@ -84,7 +112,11 @@ export default function SetPassword({ loaderData, actionData }: Route.ComponentP
           type="password"
           autoComplete="new-password"
         />
-        <button type="submit" className="button-primary w-full" disabled={navigation.state !== "idle"}>
+        <button
+          type="submit"
+          className="button-primary w-full"
+          disabled={navigation.state !== "idle"}
+        >
           Save password and sign in
         </button>
       </Form>

@@ -1,18 +1,31 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
-import { data, Form, Link, redirect, useNavigation, useSearchParams } from "react-router";
+import {
+  data,
+  Form,
+  Link,
+  redirect,
+  useNavigation,
+  useSearchParams,
+} from "react-router";
 import type { Route } from "./+types/sign-in";
 import { getOptionalUser } from "~/auth/guard.server";
 import { startSession } from "~/auth/session.server";
 import { AccountCard } from "~/components/account-card";
 import { FormMessages, TextField } from "~/components/text-field";
-import { safeRedirectPath, signInSchema, wrongCredentialsMessage } from "~/lib/account-schemas";
+import {
+  safeRedirectPath,
+  signInSchema,
+  wrongCredentialsMessage,
+} from "~/lib/account-schemas";
 import { checkSignIn } from "~/people/people.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await getOptionalUser(request);
   if (user) {
-    throw redirect(safeRedirectPath(new URL(request.url).searchParams.get("redirectTo")));
+    throw redirect(
+      safeRedirectPath(new URL(request.url).searchParams.get("redirectTo")),
+    );
   }
   return null;
 }
@@ -22,7 +35,9 @@ export async function action({ request, context }: Route.ActionArgs) {
   const formData = await request.formData();
   const submission = parseWithZod(formData, { schema: signInSchema });
   if (submission.status !== "success") {
-    return data(submission.reply({ hideFields: ["password"] }), { status: 400 });
+    return data(submission.reply({ hideFields: ["password"] }), {
+      status: 400,
+    });
   }
   const { email, password, redirectTo } = submission.value;
   const result = await checkSignIn(email, password, context.clientAddress);
@@ -35,12 +50,18 @@ export async function action({ request, context }: Route.ActionArgs) {
         ],
         hideFields: ["password"],
       }),
-      { status: 429, headers: { "Retry-After": String(result.retryAfterSeconds) } },
+      {
+        status: 429,
+        headers: { "Retry-After": String(result.retryAfterSeconds) },
+      },
     );
   }
   if (result.kind === "wrong-credentials") {
     return data(
-      submission.reply({ formErrors: [wrongCredentialsMessage], hideFields: ["password"] }),
+      submission.reply({
+        formErrors: [wrongCredentialsMessage],
+        hideFields: ["password"],
+      }),
       { status: 401 },
     );
   }
@@ -50,9 +71,12 @@ export async function action({ request, context }: Route.ActionArgs) {
 }
 
 /** Sends the action's Retry-After (when throttled) with the page. */
-export const headers: Route.HeadersFunction = ({ actionHeaders }) => actionHeaders;
+export const headers: Route.HeadersFunction = ({ actionHeaders }) =>
+  actionHeaders;
 
-export const meta: Route.MetaFunction = () => [{ title: "Sign in · Turnledger" }];
+export const meta: Route.MetaFunction = () => [
+  { title: "Sign in · Turnledger" },
+];
 
 export default function SignIn({ actionData }: Route.ComponentProps) {
   const [searchParams] = useSearchParams();
@@ -70,20 +94,36 @@ export default function SignIn({ actionData }: Route.ComponentProps) {
     <AccountCard title="Sign in">
       <Form method="post" {...getFormProps(form)} className="space-y-4">
         <FormMessages id={form.errorId} errors={form.errors} />
-        <input type="hidden" name="redirectTo" value={searchParams.get("redirectTo") ?? ""} />
-        <TextField field={fields.email} label="E-mail" type="email" autoComplete="username" />
+        <input
+          type="hidden"
+          name="redirectTo"
+          value={searchParams.get("redirectTo") ?? ""}
+        />
+        <TextField
+          field={fields.email}
+          label="E-mail"
+          type="email"
+          autoComplete="username"
+        />
         <TextField
           field={fields.password}
           label="Password"
           type="password"
           autoComplete="current-password"
         />
-        <button type="submit" className="button-primary w-full" disabled={navigation.state !== "idle"}>
+        <button
+          type="submit"
+          className="button-primary w-full"
+          disabled={navigation.state !== "idle"}
+        >
           Sign in
         </button>
       </Form>
       <p className="mt-4 text-sm">
-        <Link to="/forgot-password" className="text-copper-700 underline underline-offset-2">
+        <Link
+          to="/forgot-password"
+          className="text-copper-700 underline underline-offset-2"
+        >
           Forgotten your password?
         </Link>
       </p>

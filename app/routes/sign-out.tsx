@@ -11,5 +11,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   await getOptionalUser(request);
-  return redirect("/sign-in", { headers: { "Set-Cookie": await endSession(request) } });
+  return redirect("/sign-in", {
+    headers: { "Set-Cookie": await endSession(request) },
+  });
 }

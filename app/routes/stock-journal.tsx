@@ -11,15 +11,22 @@ import { listMovements } from "~/stock/movement-journal.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  const parsed = movementJournalQuerySchema.safeParse(searchParamsObject(new URL(request.url).searchParams));
+  const parsed = movementJournalQuerySchema.safeParse(
+    searchParamsObject(new URL(request.url).searchParams),
+  );
   if (!parsed.success) {
-    throw data({ message: parsed.error.issues.map((issue) => issue.message).join(" ") }, { status: 400 });
+    throw data(
+      { message: parsed.error.issues.map((issue) => issue.message).join(" ") },
+      { status: 400 },
+    );
   }
   const { hasMore, movements } = await listMovements(parsed.data);
   return { movements, hasMore, page: parsed.data.page, filters: parsed.data };
 }
 
-export const meta: Route.MetaFunction = () => [{ title: "Movement journal · Turnledger" }];
+export const meta: Route.MetaFunction = () => [
+  { title: "Movement journal · Turnledger" },
+];
 
 type Movement = Route.ComponentProps["loaderData"]["movements"][number];
 const column = createColumnHelper<Movement>();
@@ -27,18 +34,28 @@ const decimalsOf = (unit: string) => (unit === "pcs" ? 0 : 3);
 const columns = [
   column.accessor("createdAt", {
     header: "When",
-    cell: (info) => <span className="whitespace-nowrap">{formatDateTime(info.getValue())}</span>,
+    cell: (info) => (
+      <span className="whitespace-nowrap">
+        {formatDateTime(info.getValue())}
+      </span>
+    ),
   }),
   column.accessor("type", { header: "Type" }),
   column.accessor("sku", {
     header: "Item",
     cell: (info) => (
-      <Link to={`/stock/items/${encodeURIComponent(info.getValue())}`} className="font-medium text-copper-700 underline-offset-2 hover:underline">
+      <Link
+        to={`/stock/items/${encodeURIComponent(info.getValue())}`}
+        className="font-medium text-copper-700 underline-offset-2 hover:underline"
+      >
         {info.getValue()}
       </Link>
     ),
   }),
-  column.accessor("lot", { header: "Lot", cell: (info) => info.getValue() ?? "—" }),
+  column.accessor("lot", {
+    header: "Lot",
+    cell: (info) => info.getValue() ?? "—",
+  }),
   column.accessor("location", { header: "Location" }),
   column.accessor("quantity", {
     header: "Change",
@@ -48,7 +65,11 @@ const columns = [
       return (
         <span className={value < 0 ? "text-danger" : "text-ok"}>
           {value > 0 ? "+" : value < 0 ? "−" : ""}
-          {formatQuantity(Math.abs(value), info.row.original.unit, decimalsOf(info.row.original.unit))}
+          {formatQuantity(
+            Math.abs(value),
+            info.row.original.unit,
+            decimalsOf(info.row.original.unit),
+          )}
         </span>
       );
     },
@@ -56,7 +77,12 @@ const columns = [
   column.accessor("itemOnHandAfter", {
     header: "Item on hand after",
     meta: { numeric: true },
-    cell: (info) => formatQuantity(info.getValue(), info.row.original.unit, decimalsOf(info.row.original.unit)),
+    cell: (info) =>
+      formatQuantity(
+        info.getValue(),
+        info.row.original.unit,
+        decimalsOf(info.row.original.unit),
+      ),
   }),
   column.display({
     id: "details",
@@ -65,12 +91,20 @@ const columns = [
       const movement = row.original;
       const parts = [
         movement.reference,
-        movement.grossKg !== null ? `weighed ${formatQuantity(movement.grossKg, "kg", 3)} gross` : null,
-        movement.countedQuantity !== null ? `counted ${formatQuantity(movement.countedQuantity, movement.unit, decimalsOf(movement.unit))}` : null,
-        movement.unitCost !== null ? `at ${movement.unitCost.toFixed(4)} per ${movement.unit}` : null,
+        movement.grossKg !== null
+          ? `weighed ${formatQuantity(movement.grossKg, "kg", 3)} gross`
+          : null,
+        movement.countedQuantity !== null
+          ? `counted ${formatQuantity(movement.countedQuantity, movement.unit, decimalsOf(movement.unit))}`
+          : null,
+        movement.unitCost !== null
+          ? `at ${movement.unitCost.toFixed(4)} per ${movement.unit}`
+          : null,
         movement.note,
       ].filter(Boolean);
-      return <span className="text-graphite-700">{parts.join(" · ") || "—"}</span>;
+      return (
+        <span className="text-graphite-700">{parts.join(" · ") || "—"}</span>
+      );
     },
   }),
   column.accessor("user", { header: "By" }),
@@ -88,12 +122,23 @@ export default function StockJournal({ loaderData }: Route.ComponentProps) {
     <div className="space-y-5">
       <div>
         <h1 className="text-2xl font-semibold">Movement journal</h1>
-        <p className="mt-1 text-graphite-500">Every stock movement, newest first. Movements are never edited; a correction is a new movement.</p>
+        <p className="mt-1 text-graphite-500">
+          Every stock movement, newest first. Movements are never edited; a
+          correction is a new movement.
+        </p>
       </div>
-      <Form method="get" className="panel grid gap-3 sm:grid-cols-3 lg:grid-cols-6" aria-label="Filter the journal">
+      <Form
+        method="get"
+        className="panel grid gap-3 sm:grid-cols-3 lg:grid-cols-6"
+        aria-label="Filter the journal"
+      >
         <label className="block">
           <span className="field-label">Type</span>
-          <select name="type" defaultValue={filters.type ?? ""} className="field-input">
+          <select
+            name="type"
+            defaultValue={filters.type ?? ""}
+            className="field-input"
+          >
             <option value="">all</option>
             {movementTypes.map((type) => (
               <option key={type} value={type}>
@@ -104,19 +149,38 @@ export default function StockJournal({ loaderData }: Route.ComponentProps) {
         </label>
         <label className="block">
           <span className="field-label">Item SKU</span>
-          <input name="sku" defaultValue={filters.sku ?? ""} className="field-input" />
+          <input
+            name="sku"
+            defaultValue={filters.sku ?? ""}
+            className="field-input"
+          />
         </label>
         <label className="block">
           <span className="field-label">Person (e-mail)</span>
-          <input name="user" type="email" defaultValue={filters.user ?? ""} className="field-input" />
+          <input
+            name="user"
+            type="email"
+            defaultValue={filters.user ?? ""}
+            className="field-input"
+          />
         </label>
         <label className="block">
           <span className="field-label">From</span>
-          <input name="from" type="date" defaultValue={filters.from ?? ""} className="field-input" />
+          <input
+            name="from"
+            type="date"
+            defaultValue={filters.from ?? ""}
+            className="field-input"
+          />
         </label>
         <label className="block">
           <span className="field-label">To</span>
-          <input name="to" type="date" defaultValue={filters.to ?? ""} className="field-input" />
+          <input
+            name="to"
+            type="date"
+            defaultValue={filters.to ?? ""}
+            className="field-input"
+          />
         </label>
         <div className="flex items-end gap-2">
           <button type="submit" className="button-primary">
@@ -127,8 +191,16 @@ export default function StockJournal({ loaderData }: Route.ComponentProps) {
           </Link>
         </div>
       </Form>
-      <DataTable caption="Stock movements" columns={columns} rows={movements} emptyText="No movements match." />
-      <nav aria-label="Journal pages" className="flex items-center justify-between text-sm">
+      <DataTable
+        caption="Stock movements"
+        columns={columns}
+        rows={movements}
+        emptyText="No movements match."
+      />
+      <nav
+        aria-label="Journal pages"
+        className="flex items-center justify-between text-sm"
+      >
         <span className="text-graphite-500">Page {page}</span>
         <span className="flex gap-2">
           {page > 1 ? (

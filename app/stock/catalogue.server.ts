@@ -3,7 +3,10 @@ import { eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import { items, magnetItems, wireItems } from "~/db/schema";
-import { findAwgSize, findIecNominalDiameter } from "~/engineering/reference-data";
+import {
+  findAwgSize,
+  findIecNominalDiameter,
+} from "~/engineering/reference-data";
 import { findMagnetGradeByName } from "~/reference/magnet-grades.server";
 import { iecSizeLabel } from "~/reference/wire-size-labels";
 import type { ItemCreateInput, ItemPatchInput } from "./item-schemas";
@@ -25,7 +28,8 @@ function quantityText(value: number): string {
 
 function shapeLabel(shape: ItemCreateInput & { kind: "magnet" }): string {
   const s = shape.shape;
-  const mm = (value: number) => value.toLocaleString("en-GB", { maximumFractionDigits: 2 });
+  const mm = (value: number) =>
+    value.toLocaleString("en-GB", { maximumFractionDigits: 2 });
   switch (s.kind) {
     case "block":
       return `block ${mm(s.lengthMm)}×${mm(s.widthMm)}×${mm(s.heightMm)}`;
@@ -39,26 +43,58 @@ function shapeLabel(shape: ItemCreateInput & { kind: "magnet" }): string {
 }
 
 /** Creates an item; returns its SKU. 400 for unknown sizes or grades, 409 for a SKU in use. */
-export async function createItem(input: ItemCreateInput, _userId: string): Promise<string> {
+export async function createItem(
+  input: ItemCreateInput,
+  _userId: string,
+): Promise<string> {
   let unit: "kg" | "pcs" | "m";
   let sizeOrGrade: string;
-  let wire: { conductor: string; standard: "AWG" | "IEC"; sizeLabel: string; insulation: string; thermalClass: number; enamel: string } | null = null;
-  let magnet: { gradeKey: string; shape: "block" | "arc" | "disc" | "ring"; dimensionsMm: string; coating: string; magnetisation: string } | null = null;
+  let wire: {
+    conductor: string;
+    standard: "AWG" | "IEC";
+    sizeLabel: string;
+    insulation: string;
+    thermalClass: number;
+    enamel: string;
+  } | null = null;
+  let magnet: {
+    gradeKey: string;
+    shape: "block" | "arc" | "disc" | "ring";
+    dimensionsMm: string;
+    coating: string;
+    magnetisation: string;
+  } | null = null;
 
   if (input.kind === "wire") {
     let sizeLabel: string;
     if (input.standard === "AWG") {
       const size = findAwgSize(input.size);
-      if (!size) throw new StockError(400, `AWG ${input.size} is not a size from 4/0 to 46.`, "size");
+      if (!size)
+        throw new StockError(
+          400,
+          `AWG ${input.size} is not a size from 4/0 to 46.`,
+          "size",
+        );
       sizeLabel = size.label;
     } else {
       const diameter = findIecNominalDiameter(Number(input.size));
-      if (!diameter) throw new StockError(400, `${input.size} mm is not an IEC 60317 nominal diameter.`, "size");
+      if (!diameter)
+        throw new StockError(
+          400,
+          `${input.size} mm is not an IEC 60317 nominal diameter.`,
+          "size",
+        );
       sizeLabel = iecSizeLabel(diameter.diameterMm);
     }
     const iecInsulation = input.insulation.startsWith("grade");
     if (iecInsulation !== (input.standard === "IEC")) {
-      throw new StockError(400, input.standard === "IEC" ? "IEC wire takes grade1, grade2 or grade3." : "AWG wire takes single, heavy or triple.", "insulation");
+      throw new StockError(
+        400,
+        input.standard === "IEC"
+          ? "IEC wire takes grade1, grade2 or grade3."
+          : "AWG wire takes single, heavy or triple.",
+        "insulation",
+      );
     }
     unit = "kg";
     sizeOrGrade = `${input.standard === "AWG" ? "AWG " : ""}${sizeLabel}${input.standard === "IEC" ? " mm" : ""} ${insulationNames[input.insulation]}, class ${input.thermalClass}`;
@@ -72,7 +108,12 @@ export async function createItem(input: ItemCreateInput, _userId: string): Promi
     };
   } else if (input.kind === "magnet") {
     const grade = await findMagnetGradeByName(input.grade);
-    if (!grade) throw new StockError(400, `Unknown magnet grade "${input.grade}".`, "grade");
+    if (!grade)
+      throw new StockError(
+        400,
+        `Unknown magnet grade "${input.grade}".`,
+        "grade",
+      );
     unit = "pcs";
     sizeOrGrade = `${grade.name} ${shapeLabel(input)}`;
     const { kind: shape, ...dimensions } = input.shape;
@@ -107,19 +148,35 @@ export async function createItem(input: ItemCreateInput, _userId: string): Promi
       if (magnet) await tx.insert(magnetItems).values({ itemId, ...magnet });
     });
   } catch (error) {
-    if (isDuplicateKey(error)) throw new StockError(409, `SKU ${input.sku} is already in the catalogue.`, "sku");
+    if (isDuplicateKey(error))
+      throw new StockError(
+        409,
+        `SKU ${input.sku} is already in the catalogue.`,
+        "sku",
+      );
     throw error;
   }
   return input.sku;
 }
 
 /** Changes an item's name, reorder fields or active state. */
-export async function updateItem(sku: string, change: ItemPatchInput): Promise<void> {
-  const [item] = await db.select({ id: items.id, unit: items.unit }).from(items).where(eq(items.sku, sku)).limit(1);
+export async function updateItem(
+  sku: string,
+  change: ItemPatchInput,
+): Promise<void> {
+  const [item] = await db
+    .select({ id: items.id, unit: items.unit })
+    .from(items)
+    .where(eq(items.sku, sku))
+    .limit(1);
   if (!item) throw new StockError(404, `No item with SKU "${sku}".`, "sku");
   for (const field of ["reorderPoint", "reorderQuantity"] as const) {
     const value = change[field];
-    if (value !== undefined && item.unit === "pcs" && !Number.isInteger(value)) {
+    if (
+      value !== undefined &&
+      item.unit === "pcs" &&
+      !Number.isInteger(value)
+    ) {
       throw new StockError(400, `${sku} is counted in whole pieces.`, field);
     }
   }
@@ -127,8 +184,12 @@ export async function updateItem(sku: string, change: ItemPatchInput): Promise<v
     .update(items)
     .set({
       ...(change.name !== undefined ? { name: change.name } : {}),
-      ...(change.reorderPoint !== undefined ? { reorderPoint: quantityText(change.reorderPoint) } : {}),
-      ...(change.reorderQuantity !== undefined ? { reorderQuantity: quantityText(change.reorderQuantity) } : {}),
+      ...(change.reorderPoint !== undefined
+        ? { reorderPoint: quantityText(change.reorderPoint) }
+        : {}),
+      ...(change.reorderQuantity !== undefined
+        ? { reorderQuantity: quantityText(change.reorderQuantity) }
+        : {}),
       ...(change.active !== undefined ? { active: change.active } : {}),
       updatedAt: new Date(),
     })

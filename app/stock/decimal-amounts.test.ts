@@ -34,15 +34,34 @@ describe("moving average cost", () => {
   it("weights the old average by what is on hand (worked example)", () => {
     // 10 kg at 12.0000 + 5 kg at 15.0000 → (120 + 75) / 15 = 13.0000 per kg.
     expect(
-      movingAverageAfterReceipt({ onHand: 10_000n, averageCost: parseUnitCost("12"), received: 5_000n, unitCost: parseUnitCost("15") }),
+      movingAverageAfterReceipt({
+        onHand: 10_000n,
+        averageCost: parseUnitCost("12"),
+        received: 5_000n,
+        unitCost: parseUnitCost("15"),
+      }),
     ).toBe(parseUnitCost("13"));
   });
   it("rounds to the nearest ten-thousandth", () => {
     // 1 kg at 1.0000 + 2 kg at 2.0000 → 5/3 = 1.66666… → 1.6667.
-    expect(movingAverageAfterReceipt({ onHand: 1_000n, averageCost: 10_000n, received: 2_000n, unitCost: 20_000n })).toBe(16_667n);
+    expect(
+      movingAverageAfterReceipt({
+        onHand: 1_000n,
+        averageCost: 10_000n,
+        received: 2_000n,
+        unitCost: 20_000n,
+      }),
+    ).toBe(16_667n);
   });
   it("takes the receipt's cost when nothing was on hand", () => {
-    expect(movingAverageAfterReceipt({ onHand: 0n, averageCost: 99_999n, received: 3_000n, unitCost: 123_400n })).toBe(123_400n);
+    expect(
+      movingAverageAfterReceipt({
+        onHand: 0n,
+        averageCost: 99_999n,
+        received: 3_000n,
+        unitCost: 123_400n,
+      }),
+    ).toBe(123_400n);
   });
   it("values stock exactly: 2.500 kg at 14.2000 = 35.5000", () => {
     expect(valueOf(2_500n, 142_000n)).toBe(355_000n);

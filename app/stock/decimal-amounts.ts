@@ -22,26 +22,31 @@ export function parseUnitCost(text: string): bigint {
 
 function parseScaled(text: string, decimals: number): bigint {
   const trimmed = text.trim();
-  if (!decimalPattern.test(trimmed)) throw new RangeError(`"${text}" is not a decimal number`);
+  if (!decimalPattern.test(trimmed))
+    throw new RangeError(`"${text}" is not a decimal number`);
   const negative = trimmed.startsWith("-");
   const [whole, fraction = ""] = trimmed.replace("-", "").split(".");
   if (fraction.length > decimals && /[1-9]/.test(fraction.slice(decimals))) {
     throw new RangeError(`"${text}" has more than ${decimals} decimals`);
   }
-  const scaled = BigInt(whole!) * 10n ** BigInt(decimals) + BigInt((fraction + "0".repeat(decimals)).slice(0, decimals) || "0");
+  const scaled =
+    BigInt(whole!) * 10n ** BigInt(decimals) +
+    BigInt((fraction + "0".repeat(decimals)).slice(0, decimals) || "0");
   return negative ? -scaled : scaled;
 }
 
 /** A JSON number from the API as thousandths; null when it has more than 3 decimals. */
 export function quantityFromNumber(value: number): bigint | null {
   const scaled = Math.round(value * 1000);
-  if (Math.abs(scaled - value * 1000) > 1e-6 * Math.max(1, Math.abs(value))) return null;
+  if (Math.abs(scaled - value * 1000) > 1e-6 * Math.max(1, Math.abs(value)))
+    return null;
   return BigInt(scaled);
 }
 
 export function unitCostFromNumber(value: number): bigint | null {
   const scaled = Math.round(value * 10_000);
-  if (Math.abs(scaled - value * 10_000) > 1e-6 * Math.max(1, Math.abs(value))) return null;
+  if (Math.abs(scaled - value * 10_000) > 1e-6 * Math.max(1, Math.abs(value)))
+    return null;
   return BigInt(scaled);
 }
 
@@ -90,7 +95,10 @@ export function movingAverageAfterReceipt(input: {
   const before = input.onHand > 0n ? input.onHand : 0n;
   const total = before + input.received;
   if (total <= 0n) return input.unitCost;
-  return divideRounded(before * input.averageCost + input.received * input.unitCost, total);
+  return divideRounded(
+    before * input.averageCost + input.received * input.unitCost,
+    total,
+  );
 }
 
 /** Value of a quantity at a unit cost, in ten-thousandths of money (exact). */

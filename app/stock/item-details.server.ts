@@ -65,10 +65,8 @@ export async function listOnHandHistory(itemId: number, limit = 200) {
     .where(eq(stockMovements.itemId, itemId))
     .orderBy(desc(stockMovements.createdAt), desc(stockMovements.id))
     .limit(limit);
-  return rows
-    .reverse()
-    .map((row) => ({
-      at: row.at.toISOString(),
-      onHand: quantityToNumber(parseQuantity(row.onHand)),
-    }));
+  return rows.reverse().map((row) => ({
+    at: row.at.toISOString(),
+    onHand: quantityToNumber(parseQuantity(row.onHand)),
+  }));
 }

@@ -2,16 +2,45 @@
 import { z } from "zod";
 import { itemKinds } from "~/db/tables/stock-enums";
 
-export const itemSortKeys = ["sku", "name", "kind", "onHand", "available", "value"] as const;
+export const itemSortKeys = [
+  "sku",
+  "name",
+  "kind",
+  "onHand",
+  "available",
+  "value",
+] as const;
 
 export const itemListQuerySchema = z.object({
-  search: z.string().trim().max(80, "Search for at most 80 characters.").optional(),
-  kind: z.enum(itemKinds, { error: `kind must be one of ${itemKinds.join(", ")}.` }).optional(),
-  belowReorder: z.enum(["1", "0"]).optional().transform((value) => value === "1"),
-  archived: z.enum(["1", "0"]).optional().transform((value) => value === "1"),
-  sort: z.enum(itemSortKeys, { error: `sort must be one of ${itemSortKeys.join(", ")}.` }).default("sku"),
-  order: z.enum(["asc", "desc"], { error: "order must be asc or desc." }).default("asc"),
-  page: z.coerce.number({ error: "page must be a number." }).int("page must be a whole number.").min(1, "page starts at 1.").default(1),
+  search: z
+    .string()
+    .trim()
+    .max(80, "Search for at most 80 characters.")
+    .optional(),
+  kind: z
+    .enum(itemKinds, { error: `kind must be one of ${itemKinds.join(", ")}.` })
+    .optional(),
+  belowReorder: z
+    .enum(["1", "0"])
+    .optional()
+    .transform((value) => value === "1"),
+  archived: z
+    .enum(["1", "0"])
+    .optional()
+    .transform((value) => value === "1"),
+  sort: z
+    .enum(itemSortKeys, {
+      error: `sort must be one of ${itemSortKeys.join(", ")}.`,
+    })
+    .default("sku"),
+  order: z
+    .enum(["asc", "desc"], { error: "order must be asc or desc." })
+    .default("asc"),
+  page: z.coerce
+    .number({ error: "page must be a number." })
+    .int("page must be a whole number.")
+    .min(1, "page starts at 1.")
+    .default(1),
   pageSize: z.coerce
     .number({ error: "pageSize must be a number." })
     .int("pageSize must be a whole number.")
@@ -23,6 +52,10 @@ export const itemListQuerySchema = z.object({
 export type ItemListParams = z.output<typeof itemListQuerySchema>;
 
 /** The query string's values, empty ones dropped. */
-export function searchParamsObject(params: URLSearchParams): Record<string, string> {
-  return Object.fromEntries([...params.entries()].filter(([, value]) => value !== ""));
+export function searchParamsObject(
+  params: URLSearchParams,
+): Record<string, string> {
+  return Object.fromEntries(
+    [...params.entries()].filter(([, value]) => value !== ""),
+  );
 }

@@ -1,9 +1,25 @@
 /** Reading the catalogue with its kept balances: lists (paged on the server) and one item. */
-import { and, asc, count, desc, eq, gt, like, or, sql, type SQL } from "drizzle-orm";
+import {
+  and,
+  asc,
+  count,
+  desc,
+  eq,
+  gt,
+  like,
+  or,
+  sql,
+  type SQL,
+} from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { items, locations, lots, stockBalances } from "~/db/schema";
 import type { ItemKind } from "~/db/tables/stock-enums";
-import { parseQuantity, parseUnitCost, quantityToNumber, valueOf } from "./decimal-amounts";
+import {
+  parseQuantity,
+  parseUnitCost,
+  quantityToNumber,
+  valueOf,
+} from "./decimal-amounts";
 
 import type { itemSortKeys } from "./item-list-query";
 
@@ -19,7 +35,6 @@ export interface ItemListQuery {
   page: number;
   pageSize: number;
 }
-
 
 function itemFilters(query: ItemListQuery): SQL | undefined {
   const conditions: SQL[] = [];
@@ -53,7 +68,10 @@ const sortColumns: Record<ItemSortKey, SQL | typeof items.sku> = {
 export async function listItems(query: ItemListQuery) {
   const where = itemFilters(query);
   const sortColumn = sortColumns[query.sort ?? "sku"];
-  const [counted] = await db.select({ total: count() }).from(items).where(where);
+  const [counted] = await db
+    .select({ total: count() })
+    .from(items)
+    .where(where);
   const rows = await db
     .select({
       sku: items.sku,
@@ -70,7 +88,10 @@ export async function listItems(query: ItemListQuery) {
     })
     .from(items)
     .where(where)
-    .orderBy(query.descending ? desc(sortColumn) : asc(sortColumn), asc(items.sku))
+    .orderBy(
+      query.descending ? desc(sortColumn) : asc(sortColumn),
+      asc(items.sku),
+    )
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);
   return { total: counted?.total ?? 0, items: rows.map(itemSummary) };
@@ -162,7 +183,11 @@ export async function findItemBySku(sku: string) {
 
 export async function listLocations() {
   return db
-    .select({ code: locations.code, name: locations.name, kind: locations.kind })
+    .select({
+      code: locations.code,
+      name: locations.name,
+      kind: locations.kind,
+    })
     .from(locations)
     .where(eq(locations.active, true))
     .orderBy(asc(locations.code));

@@ -13,14 +13,20 @@ function formNumber(value: unknown): unknown {
   if (typeof value !== "string") return value;
   const trimmed = value.trim();
   if (trimmed === "") return undefined;
-  const normalised = /^-?\d+,\d+$/.test(trimmed) ? trimmed.replace(",", ".") : trimmed;
+  const normalised = /^-?\d+,\d+$/.test(trimmed)
+    ? trimmed.replace(",", ".")
+    : trimmed;
   const number = Number(normalised);
-  return /^-?(\d+\.?\d*|\.\d+)$/.test(normalised) && Number.isFinite(number) ? number : trimmed;
+  return /^-?(\d+\.?\d*|\.\d+)$/.test(normalised) && Number.isFinite(number)
+    ? number
+    : trimmed;
 }
 
 function formValuesToRequest(values: unknown): unknown {
   if (!values || typeof values !== "object") return values;
-  const request: Record<string, unknown> = { ...(values as Record<string, unknown>) };
+  const request: Record<string, unknown> = {
+    ...(values as Record<string, unknown>),
+  };
   for (const field of numberFields) request[field] = formNumber(request[field]);
   // A chosen balance row arrives as "lot|location"; an empty lot means the item is not kept in lots.
   if (typeof request.balance === "string" && request.balance.includes("|")) {
@@ -29,14 +35,19 @@ function formValuesToRequest(values: unknown): unknown {
     request.location = location;
   }
   delete request.balance;
-  for (const [key, value] of Object.entries(request)) if (value === "") request[key] = undefined;
+  for (const [key, value] of Object.entries(request))
+    if (value === "") request[key] = undefined;
   return request;
 }
 
-export const movementFormSchema = z.preprocess(formValuesToRequest, movementRequestSchema);
+export const movementFormSchema = z.preprocess(
+  formValuesToRequest,
+  movementRequestSchema,
+);
 
 /** Where a ledger refusal's field shows on the form (lot and location are one choice there). */
 export function formFieldOf(field: string | undefined, type: string): string {
-  if ((field === "lot" || field === "location") && type !== "receipt") return "balance";
+  if ((field === "lot" || field === "location") && type !== "receipt")
+    return "balance";
   return field ?? "";
 }

@@ -9,20 +9,40 @@ import type { MovementJournalQuery } from "./movement-journal-query";
  * One page of movements matching the filters. Returns `hasMore` rather than a
  * total: counting a million-row journal for every page would cost more than the page.
  */
-export async function listMovements(query: MovementJournalQuery & { itemId?: number }) {
+export async function listMovements(
+  query: MovementJournalQuery & { itemId?: number },
+) {
   const conditions: SQL[] = [];
   if (query.type) conditions.push(eq(stockMovements.type, query.type));
-  if (query.itemId !== undefined) conditions.push(eq(stockMovements.itemId, query.itemId));
+  if (query.itemId !== undefined)
+    conditions.push(eq(stockMovements.itemId, query.itemId));
   if (query.sku) {
-    const [item] = await db.select({ id: items.id }).from(items).where(eq(items.sku, query.sku)).limit(1);
+    const [item] = await db
+      .select({ id: items.id })
+      .from(items)
+      .where(eq(items.sku, query.sku))
+      .limit(1);
     conditions.push(eq(stockMovements.itemId, item?.id ?? -1));
   }
   if (query.user) {
-    const [user] = await db.select({ id: users.id }).from(users).where(eq(users.email, query.user.toLowerCase())).limit(1);
+    const [user] = await db
+      .select({ id: users.id })
+      .from(users)
+      .where(eq(users.email, query.user.toLowerCase()))
+      .limit(1);
     conditions.push(eq(stockMovements.userId, user?.id ?? ""));
   }
-  if (query.from) conditions.push(gte(stockMovements.createdAt, new Date(`${query.from}T00:00:00Z`)));
-  if (query.to) conditions.push(lt(stockMovements.createdAt, new Date(Date.parse(`${query.to}T00:00:00Z`) + 86_400_000)));
+  if (query.from)
+    conditions.push(
+      gte(stockMovements.createdAt, new Date(`${query.from}T00:00:00Z`)),
+    );
+  if (query.to)
+    conditions.push(
+      lt(
+        stockMovements.createdAt,
+        new Date(Date.parse(`${query.to}T00:00:00Z`) + 86_400_000),
+      ),
+    );
 
   const rows = await db
     .select({
@@ -54,7 +74,8 @@ export async function listMovements(query: MovementJournalQuery & { itemId?: num
     .limit(query.pageSize + 1)
     .offset((query.page - 1) * query.pageSize);
 
-  const quantity = (text: string | null) => (text === null ? null : quantityToNumber(parseQuantity(text)));
+  const quantity = (text: string | null) =>
+    text === null ? null : quantityToNumber(parseQuantity(text));
   return {
     hasMore: rows.length > query.pageSize,
     movements: rows.slice(0, query.pageSize).map((row) => ({

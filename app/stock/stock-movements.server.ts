@@ -7,7 +7,13 @@
  */
 import { and, eq, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
-import { items, locations, lots, stockBalances, stockMovements } from "~/db/schema";
+import {
+  items,
+  locations,
+  lots,
+  stockBalances,
+  stockMovements,
+} from "~/db/schema";
 import {
   formatQuantityText,
   formatUnitCostText,
@@ -58,33 +64,71 @@ async function lockItem(tx: Transaction, sku: string) {
 
 async function findLocation(tx: Transaction, code: string, field: string) {
   const [location] = await tx
-    .select({ id: locations.id, code: locations.code, active: locations.active })
+    .select({
+      id: locations.id,
+      code: locations.code,
+      active: locations.active,
+    })
     .from(locations)
     .where(eq(locations.code, code))
     .limit(1);
-  if (!location || !location.active) throw new StockError(400, `No location with code "${code}".`, field);
+  if (!location || !location.active)
+    throw new StockError(400, `No location with code "${code}".`, field);
   return location;
 }
 
 /** Locks (creating when missing) one balance row and returns its on hand and reserved, in thousandths. */
-async function lockBalance(tx: Transaction, itemId: number, lotId: number, locationId: number) {
+async function lockBalance(
+  tx: Transaction,
+  itemId: number,
+  lotId: number,
+  locationId: number,
+) {
   await tx
     .insert(stockBalances)
-    .values({ itemId, lotId, locationId, onHand: "0", reserved: "0", updatedAt: new Date() })
+    .values({
+      itemId,
+      lotId,
+      locationId,
+      onHand: "0",
+      reserved: "0",
+      updatedAt: new Date(),
+    })
     .onDuplicateKeyUpdate({ set: { itemId: sql`item_id` } });
   const [row] = await tx
     .select({ onHand: stockBalances.onHand, reserved: stockBalances.reserved })
     .from(stockBalances)
-    .where(and(eq(stockBalances.itemId, itemId), eq(stockBalances.lotId, lotId), eq(stockBalances.locationId, locationId)))
+    .where(
+      and(
+        eq(stockBalances.itemId, itemId),
+        eq(stockBalances.lotId, lotId),
+        eq(stockBalances.locationId, locationId),
+      ),
+    )
     .for("update");
-  return { onHand: parseQuantity(row!.onHand), reserved: parseQuantity(row!.reserved) };
+  return {
+    onHand: parseQuantity(row!.onHand),
+    reserved: parseQuantity(row!.reserved),
+  };
 }
 
-async function setBalance(tx: Transaction, itemId: number, lotId: number, locationId: number, onHand: bigint) {
+async function setBalance(
+  tx: Transaction,
+  itemId: number,
+  lotId: number,
+  locationId: number,
+  onHand: bigint,
+) {
   await tx
     .update(stockBalances)
     .set({ onHand: formatQuantityText(onHand), updatedAt: new Date() })
-    .where(and(eq(stockBalances.itemId, itemId), eq(stockBalances.lotId, lotId), eq(stockBalances.locationId, locationId)));
+    .where(
+      and(
+        eq(stockBalances.itemId, itemId),
+        eq(stockBalances.lotId, lotId),
+        eq(stockBalances.locationId, locationId),
+      ),
+    );
 }
 
 async function resolveLot(
@@ -94,7 +138,11 @@ async function resolveLot(
 ): Promise<{ id: number; number: string | null; tareKg: bigint | null }> {
   if (!request.lot) {
     if (item.kind === "wire") {
-      throw new StockError(400, "Wire is kept by spool: give the spool's lot number.", "lot");
+      throw new StockError(
+        400,
+        "Wire is kept by spool: give the spool's lot number.",
+        "lot",
+      );
     }
     return { id: 0, number: null, tareKg: null };
   }
@@ -104,10 +152,18 @@ async function resolveLot(
     .where(and(eq(lots.itemId, item.id), eq(lots.lotNumber, request.lot)))
     .limit(1);
   if (existing) {
-    return { id: existing.id, number: request.lot, tareKg: existing.tareKg === null ? null : parseQuantity(existing.tareKg) };
+    return {
+      id: existing.id,
+      number: request.lot,
+      tareKg: existing.tareKg === null ? null : parseQuantity(existing.tareKg),
+    };
   }
   if (request.type !== "receipt") {
-    throw new StockError(400, `No lot "${request.lot}" of this item. A new lot comes with a receipt.`, "lot");
+    throw new StockError(
+      400,
+      `No lot "${request.lot}" of this item. A new lot comes with a receipt.`,
+      "lot",
+    );
   }
   const [created] = await tx
     .insert(lots)
@@ -116,11 +172,18 @@ async function resolveLot(
       lotNumber: request.lot,
       supplierBatch: request.supplierBatch ?? null,
       spoolType: request.spoolType ?? null,
-      tareKg: request.tareKg === undefined ? null : formatQuantityText(request.tareKg),
+      tareKg:
+        request.tareKg === undefined
+          ? null
+          : formatQuantityText(request.tareKg),
       receivedOn: new Date().toISOString().slice(0, 10),
     })
     .$returningId();
-  return { id: created!.id, number: request.lot, tareKg: request.tareKg ?? null };
+  return {
+    id: created!.id,
+    number: request.lot,
+    tareKg: request.tareKg ?? null,
+  };
 }
 
 /**
@@ -136,13 +199,32 @@ function signedChange(
   switch (request.type) {
     case "receipt": {
       if (request.grossKg !== undefined) {
-        if (item.kind !== "wire") throw new StockError(400, "Gross and tare weights are for wire spools.", "grossKg");
+        if (item.kind !== "wire")
+          throw new StockError(
+            400,
+            "Gross and tare weights are for wire spools.",
+            "grossKg",
+          );
         const tare = request.tareKg ?? lot.tareKg;
-        if (tare === null) throw new StockError(400, "Give the spool's tare (empty spool) weight.", "tareKg");
+        if (tare === null)
+          throw new StockError(
+            400,
+            "Give the spool's tare (empty spool) weight.",
+            "tareKg",
+          );
         const net = request.grossKg - tare;
-        if (net <= 0n) throw new StockError(400, "The gross weight must be more than the tare weight.", "grossKg");
+        if (net <= 0n)
+          throw new StockError(
+            400,
+            "The gross weight must be more than the tare weight.",
+            "grossKg",
+          );
         if (request.quantity !== undefined && request.quantity !== net) {
-          throw new StockError(400, `Gross − tare is ${quantityToNumber(net)} kg, not ${quantityToNumber(request.quantity)} kg.`, "quantity");
+          throw new StockError(
+            400,
+            `Gross − tare is ${quantityToNumber(net)} kg, not ${quantityToNumber(request.quantity)} kg.`,
+            "quantity",
+          );
         }
         return net;
       }
@@ -151,12 +233,26 @@ function signedChange(
     case "issue": {
       if (request.grossKg !== undefined) {
         // Spool weigh-back: what left the spool is its previous net less its net now.
-        if (lot.tareKg === null) throw new StockError(400, "This lot has no tare weight: issue by quantity.", "grossKg");
+        if (lot.tareKg === null)
+          throw new StockError(
+            400,
+            "This lot has no tare weight: issue by quantity.",
+            "grossKg",
+          );
         const netNow = request.grossKg - lot.tareKg;
-        if (netNow < 0n) throw new StockError(400, "The gross weight is below the spool's tare weight.", "grossKg");
+        if (netNow < 0n)
+          throw new StockError(
+            400,
+            "The gross weight is below the spool's tare weight.",
+            "grossKg",
+          );
         const taken = balance.onHand - netNow;
         if (taken <= 0n) {
-          throw new StockError(400, "The spool weighs as much as or more than its recorded net: nothing to issue.", "grossKg");
+          throw new StockError(
+            400,
+            "The spool weighs as much as or more than its recorded net: nothing to issue.",
+            "grossKg",
+          );
         }
         return -taken;
       }
@@ -183,25 +279,55 @@ export async function recordMovement(
 ): Promise<RecordedMovement> {
   return db.transaction(async (tx) => {
     const item = await lockItem(tx, request.sku);
-    if (!item.active) throw new StockError(409, `Item ${item.sku} is archived: restore it before moving stock.`, "sku");
+    if (!item.active)
+      throw new StockError(
+        409,
+        `Item ${item.sku} is archived: restore it before moving stock.`,
+        "sku",
+      );
     if (request.unit && request.unit !== item.unit) {
-      throw new StockError(400, `Item ${item.sku} is stocked in ${item.unit}, not ${request.unit}.`, "unit");
+      throw new StockError(
+        400,
+        `Item ${item.sku} is stocked in ${item.unit}, not ${request.unit}.`,
+        "unit",
+      );
     }
-    const quantities = [request.quantity, request.grossKg, request.tareKg].filter((value) => value !== undefined);
-    if (item.unit === "pcs" && quantities.some((value) => value! % 1000n !== 0n)) {
-      throw new StockError(400, `Item ${item.sku} is counted in whole pieces.`, "quantity");
+    const quantities = [
+      request.quantity,
+      request.grossKg,
+      request.tareKg,
+    ].filter((value) => value !== undefined);
+    if (
+      item.unit === "pcs" &&
+      quantities.some((value) => value! % 1000n !== 0n)
+    ) {
+      throw new StockError(
+        400,
+        `Item ${item.sku} is counted in whole pieces.`,
+        "quantity",
+      );
     }
     const location = await findLocation(tx, request.location, "location");
-    const toLocation = request.type === "transfer" ? await findLocation(tx, request.toLocation!, "toLocation") : null;
+    const toLocation =
+      request.type === "transfer"
+        ? await findLocation(tx, request.toLocation!, "toLocation")
+        : null;
     if (toLocation && toLocation.id === location.id) {
-      throw new StockError(400, "A transfer needs two different locations.", "toLocation");
+      throw new StockError(
+        400,
+        "A transfer needs two different locations.",
+        "toLocation",
+      );
     }
     const lot = await resolveLot(tx, item, request);
 
     // Lock balance rows in a fixed order (location id) so two transfers never wait on each other in a circle.
-    const locationIds = toLocation ? [location.id, toLocation.id].sort((a, b) => a - b) : [location.id];
+    const locationIds = toLocation
+      ? [location.id, toLocation.id].sort((a, b) => a - b)
+      : [location.id];
     const balances = new Map<number, { onHand: bigint; reserved: bigint }>();
-    for (const id of locationIds) balances.set(id, await lockBalance(tx, item.id, lot.id, id));
+    for (const id of locationIds)
+      balances.set(id, await lockBalance(tx, item.id, lot.id, id));
     const from = balances.get(location.id)!;
 
     const change = signedChange(request, item, lot, from);
@@ -213,7 +339,12 @@ export async function recordMovement(
         "quantity",
       );
     }
-    if (change < 0n && request.type !== "count" && request.type !== "adjustment" && from.onHand + change < from.reserved) {
+    if (
+      change < 0n &&
+      request.type !== "count" &&
+      request.type !== "adjustment" &&
+      from.onHand + change < from.reserved
+    ) {
       throw new StockError(
         409,
         `${quantityToNumber(from.reserved)} ${unit} of ${item.sku} at ${location.code} is reserved for build orders; only ${quantityToNumber(from.onHand - from.reserved)} ${unit} is free.`,
@@ -227,7 +358,12 @@ export async function recordMovement(
     const itemOnHandAfter = itemOnHand + itemChange;
     const averageAfter =
       request.type === "receipt"
-        ? movingAverageAfterReceipt({ onHand: itemOnHand, averageCost, received: change, unitCost: request.unitCost! })
+        ? movingAverageAfterReceipt({
+            onHand: itemOnHand,
+            averageCost,
+            received: change,
+            unitCost: request.unitCost!,
+          })
         : averageCost;
     const now = options.at ?? new Date();
     const common = {
@@ -249,16 +385,28 @@ export async function recordMovement(
         type: request.type,
         locationId: location.id,
         quantity: formatQuantityText(change),
-        unitCost: request.type === "receipt" ? formatUnitCostText(request.unitCost!) : null,
-        countedQuantity: request.type === "count" ? formatQuantityText(request.quantity!) : null,
-        grossKg: request.grossKg === undefined ? null : formatQuantityText(request.grossKg),
+        unitCost:
+          request.type === "receipt"
+            ? formatUnitCostText(request.unitCost!)
+            : null,
+        countedQuantity:
+          request.type === "count"
+            ? formatQuantityText(request.quantity!)
+            : null,
+        grossKg:
+          request.grossKg === undefined
+            ? null
+            : formatQuantityText(request.grossKg),
       })
       .$returningId();
     const movementId = inserted!.id;
     if (toLocation) {
       const to = balances.get(toLocation.id)!;
       await setBalance(tx, item.id, lot.id, toLocation.id, to.onHand - change);
-      await tx.update(stockMovements).set({ transferId: movementId }).where(eq(stockMovements.id, movementId));
+      await tx
+        .update(stockMovements)
+        .set({ transferId: movementId })
+        .where(eq(stockMovements.id, movementId));
       await tx.insert(stockMovements).values({
         ...common,
         type: "transfer",
@@ -269,7 +417,11 @@ export async function recordMovement(
     }
     await tx
       .update(items)
-      .set({ onHand: formatQuantityText(itemOnHandAfter), averageCost: formatUnitCostText(averageAfter), updatedAt: now })
+      .set({
+        onHand: formatQuantityText(itemOnHandAfter),
+        averageCost: formatUnitCostText(averageAfter),
+        updatedAt: now,
+      })
       .where(eq(items.id, item.id));
 
     const reserved = parseQuantity(item.reserved);

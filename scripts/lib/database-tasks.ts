@@ -4,7 +4,11 @@ import { migrate } from "drizzle-orm/mysql2/migrator";
 import mysql from "mysql2/promise";
 import { poolOptionsFromUrl } from "~/db/connection-options";
 import * as schema from "~/db/schema";
-import { demoPassword, demoPeople, demoStorekeeperId } from "../../seed/demo-people";
+import {
+  demoPassword,
+  demoPeople,
+  demoStorekeeperId,
+} from "../../seed/demo-people";
 import { databaseIsEmpty, seedDemoData } from "../../seed/seed-demo-data";
 import { projectRoot } from "./project-paths";
 import { syncReferenceData } from "~/reference/reference-sync.server";
@@ -13,7 +17,10 @@ async function withDatabase<T>(
   databaseUrl: string,
   work: (db: MySql2Database<typeof schema>) => Promise<T>,
 ): Promise<T> {
-  const pool = mysql.createPool({ ...poolOptionsFromUrl(databaseUrl), connectionLimit: 2 });
+  const pool = mysql.createPool({
+    ...poolOptionsFromUrl(databaseUrl),
+    connectionLimit: 2,
+  });
   try {
     return await work(drizzle(pool, { schema, mode: "planetscale" }));
   } finally {
@@ -33,7 +40,10 @@ export function migrateDatabase(databaseUrl: string): Promise<void> {
 }
 
 /** Seeds the demo data when the database has no people. Returns true when it seeded. */
-export function seedWhenEmpty(databaseUrl: string, options = { quiet: false }): Promise<boolean> {
+export function seedWhenEmpty(
+  databaseUrl: string,
+  options = { quiet: false },
+): Promise<boolean> {
   return withDatabase(databaseUrl, async (db) => {
     if (!(await databaseIsEmpty(db))) return false;
     await seedDemoData(db);
@@ -41,7 +51,9 @@ export function seedWhenEmpty(databaseUrl: string, options = { quiet: false }): 
     if (!options.quiet) {
       console.log("[turnledger] demo data seeded. Sign in with any of these:");
       for (const person of demoPeople) {
-        console.log(`    ${person.email.padEnd(30)} ${person.roles.join(", ")}`);
+        console.log(
+          `    ${person.email.padEnd(30)} ${person.roles.join(", ")}`,
+        );
       }
       console.log(`  password: ${demoPassword()}`);
     }

@@ -28,7 +28,10 @@ export const appDatabaseName = "turnledger";
 /** The test database: turnledger_test, or TEST_DATABASE_NAME (turnledger_test_…) for a second run beside it. */
 export function testDatabaseName(): string {
   const name = process.env.TEST_DATABASE_NAME ?? "turnledger_test";
-  if (!/^turnledger_test(_\w+)?$/.test(name)) throw new Error("TEST_DATABASE_NAME must be turnledger_test or turnledger_test_<suffix>.");
+  if (!/^turnledger_test(_\w+)?$/.test(name))
+    throw new Error(
+      "TEST_DATABASE_NAME must be turnledger_test or turnledger_test_<suffix>.",
+    );
   return name;
 }
 const appUser = "turnledger";
@@ -43,7 +46,10 @@ function serverUserArgs(): string[] {
   return isRoot() ? ["--user=root"] : [`--user=${os.userInfo().username}`];
 }
 
-async function ensureInstalled(): Promise<{ server: string; installer: string }> {
+async function ensureInstalled(): Promise<{
+  server: string;
+  installer: string;
+}> {
   let server = findProgram("mariadbd");
   if (!server) {
     await installDebianPackages(
@@ -54,7 +60,9 @@ async function ensureInstalled(): Promise<{ server: string; installer: string }>
   }
   const installer = findProgram("mariadb-install-db");
   if (!server || !installer) {
-    throw new Error("mariadbd or mariadb-install-db is still missing after the install.");
+    throw new Error(
+      "mariadbd or mariadb-install-db is still missing after the install.",
+    );
   }
   return { server, installer };
 }
@@ -97,7 +105,10 @@ async function portAnswers(): Promise<boolean> {
   });
 }
 
-async function waitUntilReady(password: string, timeoutMs = 60_000): Promise<void> {
+async function waitUntilReady(
+  password: string,
+  timeoutMs = 60_000,
+): Promise<void> {
   const started = Date.now();
   let lastError: unknown;
   while (Date.now() - started < timeoutMs) {
@@ -222,7 +233,10 @@ export async function ensureLocalMariadb(): Promise<{
       ]);
       // The test databases: turnledger_test, and others named turnledger_test_… for parallel runs.
       for (const pattern of [appDatabaseName, "turnledger\\_test%"]) {
-        await connection.query(`GRANT ALL PRIVILEGES ON \`${pattern}\`.* TO ?@?`, [appUser, host]);
+        await connection.query(
+          `GRANT ALL PRIVILEGES ON \`${pattern}\`.* TO ?@?`,
+          [appUser, host],
+        );
       }
     }
   } finally {

@@ -56,7 +56,9 @@ export async function startMailFake(options: {
           messages.unshift(message);
           if (messages.length > 5_000) messages.length = 5_000;
           if (!options.quiet) {
-            console.log(`[mail fake] to ${message.to.join(", ")}: ${message.subject}`);
+            console.log(
+              `[mail fake] to ${message.to.join(", ")}: ${message.subject}`,
+            );
           }
           callback();
         })

@@ -10,7 +10,9 @@ import { runCommand } from "./run-command";
  * What `npm start` and `npm run dev` share: the database (started, migrated,
  * seeded when empty), the mail fake unless SMTP_URL is set, then the server.
  */
-export async function serveApp(mode: "production" | "development"): Promise<void> {
+export async function serveApp(
+  mode: "production" | "development",
+): Promise<void> {
   const databaseUrl = await resolveDatabaseUrl();
   await migrateDatabase(databaseUrl);
   await seedWhenEmpty(databaseUrl);
@@ -29,34 +31,45 @@ export async function serveApp(mode: "production" | "development"): Promise<void
       );
     }
     smtpUrl = `smtp://127.0.0.1:${mailFake.smtpPort}`;
-    console.log(`[turnledger] mail fake on ${smtpUrl}; every message shows in the admin's Outbox.`);
+    console.log(
+      `[turnledger] mail fake on ${smtpUrl}; every message shows in the admin's Outbox.`,
+    );
   }
 
-  const bin = (name: string) => path.join(projectRoot, "node_modules", ".bin", name);
+  const bin = (name: string) =>
+    path.join(projectRoot, "node_modules", ".bin", name);
   if (mode === "production") {
     console.log("[turnledger] building the app…");
     await runCommand(bin("react-router"), ["build"], { cwd: projectRoot });
   }
 
-  const server = spawn(process.execPath, [path.join(projectRoot, "server.js")], {
-    cwd: projectRoot,
-    stdio: "inherit",
-    env: {
-      ...process.env,
-      NODE_ENV: mode,
-      DATABASE_URL: databaseUrl,
-      SMTP_URL: smtpUrl,
-      PORT: process.env.PORT ?? "3000",
+  const server = spawn(
+    process.execPath,
+    [path.join(projectRoot, "server.js")],
+    {
+      cwd: projectRoot,
+      stdio: "inherit",
+      env: {
+        ...process.env,
+        NODE_ENV: mode,
+        DATABASE_URL: databaseUrl,
+        SMTP_URL: smtpUrl,
+        PORT: process.env.PORT ?? "3000",
+      },
     },
-  });
+  );
 
   const stop = () => {
     server.kill("SIGTERM");
   };
   process.on("SIGINT", stop);
   process.on("SIGTERM", stop);
-  const code = await new Promise<number>((resolve) => server.on("exit", (exitCode) => resolve(exitCode ?? 0)));
+  const code = await new Promise<number>((resolve) =>
+    server.on("exit", (exitCode) => resolve(exitCode ?? 0)),
+  );
   await mailFake?.close();
-  console.log("[turnledger] stopped. MariaDB keeps running: `npm run db:stop` stops it.");
+  console.log(
+    "[turnledger] stopped. MariaDB keeps running: `npm run db:stop` stops it.",
+  );
   process.exit(code);
 }

@@ -6,7 +6,11 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
 import { migrateDatabase, seedWhenEmpty } from "./database-tasks";
-import { ensureLocalMariadb, recreateDatabase, testDatabaseName } from "./local-mariadb";
+import {
+  ensureLocalMariadb,
+  recreateDatabase,
+  testDatabaseName,
+} from "./local-mariadb";
 import { startMailFake, type MailFake } from "./mail-fake";
 import { projectRoot } from "./project-paths";
 import { runCommand } from "./run-command";
@@ -19,10 +23,14 @@ export interface TestEnvironment {
   stop(): Promise<void>;
 }
 
-async function waitForHealth(baseUrl: string, server: ChildProcess): Promise<void> {
+async function waitForHealth(
+  baseUrl: string,
+  server: ChildProcess,
+): Promise<void> {
   const started = Date.now();
   while (Date.now() - started < 60_000) {
-    if (server.exitCode !== null) throw new Error(`the test server exited with ${server.exitCode}`);
+    if (server.exitCode !== null)
+      throw new Error(`the test server exited with ${server.exitCode}`);
     try {
       const response = await fetch(`${baseUrl}/healthz`);
       if (response.ok) return;
@@ -31,7 +39,9 @@ async function waitForHealth(baseUrl: string, server: ChildProcess): Promise<voi
     }
     await new Promise((resolve) => setTimeout(resolve, 200));
   }
-  throw new Error(`the test server did not answer at ${baseUrl}/healthz within 60 s`);
+  throw new Error(
+    `the test server did not answer at ${baseUrl}/healthz within 60 s`,
+  );
 }
 
 /** Serves the built app (build/) on a port, as `npm start` does; waits until it answers. */
@@ -41,19 +51,23 @@ export async function startAppServer(options: {
   smtpUrl: string;
 }): Promise<{ baseUrl: string; stop(): Promise<void> }> {
   const baseUrl = `http://localhost:${options.port}`;
-  const server = spawn(process.execPath, [path.join(projectRoot, "server.js")], {
-    cwd: projectRoot,
-    stdio: ["ignore", "ignore", "inherit"],
-    env: {
-      ...process.env,
-      NODE_ENV: "production",
-      PORT: String(options.port),
-      HOST: "127.0.0.1",
-      DATABASE_URL: options.databaseUrl,
-      SMTP_URL: options.smtpUrl,
-      APP_URL: baseUrl,
+  const server = spawn(
+    process.execPath,
+    [path.join(projectRoot, "server.js")],
+    {
+      cwd: projectRoot,
+      stdio: ["ignore", "ignore", "inherit"],
+      env: {
+        ...process.env,
+        NODE_ENV: "production",
+        PORT: String(options.port),
+        HOST: "127.0.0.1",
+        DATABASE_URL: options.databaseUrl,
+        SMTP_URL: options.smtpUrl,
+        APP_URL: baseUrl,
+      },
     },
-  });
+  );
   await waitForHealth(baseUrl, server);
   return {
     baseUrl,
@@ -81,10 +95,14 @@ export async function startTestEnvironment(): Promise<TestEnvironment> {
   });
 
   if (process.env.TEST_SKIP_BUILD !== "1") {
-    await runCommand(path.join(projectRoot, "node_modules", ".bin", "react-router"), ["build"], {
-      cwd: projectRoot,
-      stdio: ["ignore", "ignore", "inherit"],
-    });
+    await runCommand(
+      path.join(projectRoot, "node_modules", ".bin", "react-router"),
+      ["build"],
+      {
+        cwd: projectRoot,
+        stdio: ["ignore", "ignore", "inherit"],
+      },
+    );
   }
   const port = Number(process.env.TEST_PORT ?? 3100);
   const app = await startAppServer({

@@ -19,14 +19,41 @@ describe("each demo role signs in and sees its own navigation", () => {
       const navigation = page.getByRole("navigation", { name: "Main" });
       const links = await navigation.getByRole("link").allTextContents();
       if (role === "admin") {
-        expect(links).toEqual(["Start", "Stock", "Record movement", "Journal", "Coil estimator", "Magnet estimator", "Reference", "People", "Outbox"]);
+        expect(links).toEqual([
+          "Start",
+          "Stock",
+          "Record movement",
+          "Journal",
+          "Coil estimator",
+          "Magnet estimator",
+          "Reference",
+          "People",
+          "Outbox",
+        ]);
       } else if (role === "storekeeper") {
-        expect(links).toEqual(["Start", "Stock", "Record movement", "Journal", "Coil estimator", "Magnet estimator", "Reference"]);
+        expect(links).toEqual([
+          "Start",
+          "Stock",
+          "Record movement",
+          "Journal",
+          "Coil estimator",
+          "Magnet estimator",
+          "Reference",
+        ]);
       } else {
-        expect(links).toEqual(["Start", "Stock", "Journal", "Coil estimator", "Magnet estimator", "Reference"]);
+        expect(links).toEqual([
+          "Start",
+          "Stock",
+          "Journal",
+          "Coil estimator",
+          "Magnet estimator",
+          "Reference",
+        ]);
       }
       // The start page speaks to the role held.
-      await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toMatch(/^Good to see you/);
+      await expect(
+        page.getByRole("heading", { level: 1 }).textContent(),
+      ).resolves.toMatch(/^Good to see you/);
       expect(await page.locator("li[aria-label$=' work']").count()).toBe(1);
       const file = await saveScreenshot(page, `home-${role}`);
       expect(fs.statSync(file).size).toBeGreaterThan(10_000);
@@ -40,8 +67,12 @@ describe("each demo role signs in and sees its own navigation", () => {
     await page.getByLabel("E-mail").fill("buyer@turnledger.test");
     await page.getByLabel("Password").fill("not-the-password");
     await page.getByRole("button", { name: "Sign in" }).click();
-    await expect(page.getByRole("alert").textContent()).resolves.toContain("E-mail or password is wrong.");
-    expect(await page.getByLabel("E-mail").inputValue()).toBe("buyer@turnledger.test");
+    await expect(page.getByRole("alert").textContent()).resolves.toContain(
+      "E-mail or password is wrong.",
+    );
+    expect(await page.getByLabel("E-mail").inputValue()).toBe(
+      "buyer@turnledger.test",
+    );
     await saveScreenshot(page, "sign-in-wrong-password");
     await page.close();
   });
@@ -50,15 +81,28 @@ describe("each demo role signs in and sees its own navigation", () => {
 describe("admin pages", () => {
   it("people list and outbox render their tables", async () => {
     const page = await signIn(browser, "admin");
-    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "People" }).click();
+    await page
+      .getByRole("navigation", { name: "Main" })
+      .getByRole("link", { name: "People" })
+      .click();
     await page.getByRole("heading", { name: "People" }).waitFor();
-    expect(await page.getByRole("table", { name: "People with an account" }).getByRole("row").count()).toBeGreaterThan(5);
+    expect(
+      await page
+        .getByRole("table", { name: "People with an account" })
+        .getByRole("row")
+        .count(),
+    ).toBeGreaterThan(5);
     await saveScreenshot(page, "admin-people");
     await page.getByRole("link", { name: "Selma Odueke" }).click();
     await page.getByRole("heading", { name: "Selma Odueke" }).waitFor();
-    expect(await page.getByRole("checkbox", { name: "Manager" }).isChecked()).toBe(true);
+    expect(
+      await page.getByRole("checkbox", { name: "Manager" }).isChecked(),
+    ).toBe(true);
     await saveScreenshot(page, "admin-person");
-    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Outbox" }).click();
+    await page
+      .getByRole("navigation", { name: "Main" })
+      .getByRole("link", { name: "Outbox" })
+      .click();
     await page.getByRole("heading", { name: "Outbox" }).waitFor();
     await saveScreenshot(page, "admin-outbox");
     await page.close();

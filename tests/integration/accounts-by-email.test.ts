@@ -1,7 +1,17 @@
 import { afterAll, describe, expect, it } from "vitest";
-import { get, postForm, sessionCookieFrom, signIn, uniqueEmail } from "../support/app-client";
+import {
+  get,
+  postForm,
+  sessionCookieFrom,
+  signIn,
+  uniqueEmail,
+} from "../support/app-client";
 import { linkIn, waitForMessage } from "../support/mail-fake-client";
-import { closeTestDatabase, createPerson, testDatabase } from "../support/test-database";
+import {
+  closeTestDatabase,
+  createPerson,
+  testDatabase,
+} from "../support/test-database";
 
 afterAll(closeTestDatabase);
 
@@ -14,7 +24,11 @@ function pathOf(link: string): string {
 describe("password reset", () => {
   it("mails a link through SMTP that sets a new password once", async () => {
     const email = uniqueEmail("reset");
-    await createPerson({ email, password: "the-old-password", roles: ["buyer"] });
+    await createPerson({
+      email,
+      password: "the-old-password",
+      roles: ["buyer"],
+    });
 
     const request = await postForm("/forgot-password", { email });
     expect(request.status).toBe(200);
@@ -24,7 +38,10 @@ describe("password reset", () => {
     const token = new URL(link, "http://x").searchParams.get("token")!;
 
     // Only the hash is stored, never the token itself.
-    const [rows] = await testDatabase().query("SELECT token_hash FROM email_tokens WHERE token_hash = ?", [token]);
+    const [rows] = await testDatabase().query(
+      "SELECT token_hash FROM email_tokens WHERE token_hash = ?",
+      [token],
+    );
     expect(rows).toHaveLength(0);
 
     expect(await (await get(link)).text()).toContain("Choose a new password");
@@ -43,15 +60,23 @@ describe("password reset", () => {
       confirmPassword: "a-third-password",
     });
     expect(second.status).toBe(410);
-    expect(await (await get(link)).text()).toContain("has been used or has expired");
+    expect(await (await get(link)).text()).toContain(
+      "has been used or has expired",
+    );
     await signIn(email, "the-new-password");
   });
 
   it("refuses an expired link", async () => {
     const email = uniqueEmail("expired");
-    const userId = await createPerson({ email, password: "the-old-password", roles: ["buyer"] });
+    const userId = await createPerson({
+      email,
+      password: "the-old-password",
+      roles: ["buyer"],
+    });
     await postForm("/forgot-password", { email });
-    const token = new URL(linkIn(await waitForMessage(email, /new Turnledger password/))).searchParams.get("token")!;
+    const token = new URL(
+      linkIn(await waitForMessage(email, /new Turnledger password/)),
+    ).searchParams.get("token")!;
     await testDatabase().query(
       "UPDATE email_tokens SET expires_at = NOW() - INTERVAL 1 MINUTE WHERE user_id = ?",
       [userId],
@@ -67,7 +92,11 @@ describe("password reset", () => {
 
   it("expires reset links after 30 minutes", async () => {
     const email = uniqueEmail("lifetime");
-    const userId = await createPerson({ email, password: "the-old-password", roles: ["buyer"] });
+    const userId = await createPerson({
+      email,
+      password: "the-old-password",
+      roles: ["buyer"],
+    });
     await postForm("/forgot-password", { email });
     await waitForMessage(email, /new Turnledger password/);
     const [rows] = await testDatabase().query(
@@ -101,7 +130,11 @@ describe("password reset", () => {
 describe("invitation", () => {
   it("lets an admin invite a person who sets a password from the e-mail and signs in", async () => {
     const adminEmail = uniqueEmail("inviter");
-    await createPerson({ email: adminEmail, password: "admin-password-1", roles: ["admin"] });
+    await createPerson({
+      email: adminEmail,
+      password: "admin-password-1",
+      roles: ["admin"],
+    });
     const adminCookie = await signIn(adminEmail, "admin-password-1");
 
     const email = uniqueEmail("newcomer");
@@ -125,11 +158,15 @@ describe("invitation", () => {
     });
     expect(set.status).toBe(302);
     const cookie = await signIn(email, "newcomer-password");
-    const me = (await (await get("/api/v1/me", cookie)).json()) as { user: { roles: string[] } };
+    const me = (await (await get("/api/v1/me", cookie)).json()) as {
+      user: { roles: string[] };
+    };
     expect(me.user.roles).toEqual(["builder", "manager"]);
 
     // The outbox shows the invitation as sent.
-    const outbox = (await (await get("/api/v1/outbox", adminCookie)).json()) as {
+    const outbox = (await (
+      await get("/api/v1/outbox", adminCookie)
+    ).json()) as {
       to: string;
       subject: string;
       sentAt: string | null;
@@ -141,7 +178,11 @@ describe("invitation", () => {
 
   it("refuses a second account with the same e-mail and needs a role", async () => {
     const adminEmail = uniqueEmail("inviter");
-    await createPerson({ email: adminEmail, password: "admin-password-1", roles: ["admin"] });
+    await createPerson({
+      email: adminEmail,
+      password: "admin-password-1",
+      roles: ["admin"],
+    });
     const adminCookie = await signIn(adminEmail, "admin-password-1");
     const response = await postForm(
       "/admin/people",
@@ -156,9 +197,17 @@ describe("invitation", () => {
 
   it("does not let an admin deactivate themselves", async () => {
     const email = uniqueEmail("selfadmin");
-    const ownId = await createPerson({ email, password: "admin-password-1", roles: ["admin"] });
+    const ownId = await createPerson({
+      email,
+      password: "admin-password-1",
+      roles: ["admin"],
+    });
     const cookie = await signIn(email, "admin-password-1");
-    const self = await postForm(`/admin/people/${ownId}`, { intent: "deactivate" }, cookie);
+    const self = await postForm(
+      `/admin/people/${ownId}`,
+      { intent: "deactivate" },
+      cookie,
+    );
     expect(self.status).toBe(409);
     expect(await self.text()).toContain("You cannot deactivate yourself.");
     expect((await get("/api/v1/me", cookie)).status).toBe(200);

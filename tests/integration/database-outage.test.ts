@@ -27,12 +27,16 @@ class DatabaseRelay {
       }
       client.pipe(upstream).pipe(client);
     });
-    await new Promise<void>((resolve) => this.server!.listen(this.port, "127.0.0.1", resolve));
+    await new Promise<void>((resolve) =>
+      this.server!.listen(this.port, "127.0.0.1", resolve),
+    );
   }
 
   async down(): Promise<void> {
     for (const socket of this.sockets) socket.destroy();
-    await new Promise<void>((resolve) => (this.server ? this.server.close(() => resolve()) : resolve()));
+    await new Promise<void>((resolve) =>
+      this.server ? this.server.close(() => resolve()) : resolve(),
+    );
     this.server = null;
   }
 }
@@ -44,15 +48,25 @@ let cookie = "";
 
 beforeAll(async () => {
   const databaseUrl = new URL(inject("databaseUrl"));
-  relay = new DatabaseRelay({ host: databaseUrl.hostname, port: Number(databaseUrl.port) }, relayPort);
+  relay = new DatabaseRelay(
+    { host: databaseUrl.hostname, port: Number(databaseUrl.port) },
+    relayPort,
+  );
   await relay.up();
   const relayedUrl = new URL(databaseUrl);
   relayedUrl.port = String(relayPort);
-  app = await startAppServer({ port: 3102, databaseUrl: relayedUrl.toString(), smtpUrl: inject("smtpUrl") });
+  app = await startAppServer({
+    port: 3102,
+    databaseUrl: relayedUrl.toString(),
+    smtpUrl: inject("smtpUrl"),
+  });
   const response = await fetch(`${app.baseUrl}/api/v1/sessions`, {
     method: "POST",
     headers: { "Content-Type": "application/json" },
-    body: JSON.stringify({ email: "manager@turnledger.test", password: process.env.DEMO_PASSWORD || "turnledger-demo" }),
+    body: JSON.stringify({
+      email: "manager@turnledger.test",
+      password: process.env.DEMO_PASSWORD || "turnledger-demo",
+    }),
   });
   expect(response.status).toBe(200);
   cookie = response.headers.getSetCookie()[0]!.split(";")[0]!;
@@ -64,7 +78,10 @@ afterAll(async () => {
 });
 
 const get = (path: string) =>
-  fetch(`${app.baseUrl}${path}`, { headers: { Cookie: cookie }, redirect: "manual" });
+  fetch(`${app.baseUrl}${path}`, {
+    headers: { Cookie: cookie },
+    redirect: "manual",
+  });
 
 describe("database outage", () => {
   it("answers normally while the database is up", async () => {
@@ -76,7 +93,9 @@ describe("database outage", () => {
     await relay.down();
     const health = await get("/healthz");
     expect(health.status).toBe(503);
-    expect(((await health.json()) as { database: { state: string } }).database.state).toBe("down");
+    expect(
+      ((await health.json()) as { database: { state: string } }).database.state,
+    ).toBe("down");
 
     const page = await get("/");
     expect(page.status).toBe(503);

@@ -7,7 +7,8 @@ beforeAll(async () => {
   cookie = await signIn("builder@turnledger.test", demoPassword());
 });
 
-const post = (path: string, body: unknown) => sendJson("POST", path, body, cookie);
+const post = (path: string, body: unknown) =>
+  sendJson("POST", path, body, cookie);
 
 /** Worked check 4 of the engineering brief: 0.80 mm copper, N 40, active 50 mm, end 30 mm. */
 const workedCoil = {
@@ -55,8 +56,18 @@ describe("POST /api/v1/coil-estimates", () => {
     expectClose(body.perCoil.purchasedLengthM, 6.901, 1e-4);
     expectClose(body.perCoil.purchasedMassKg, 0.03084, 2e-3);
     // Source: worked check 3 ratio 3.0580/2.1952 for 20 → 120 °C copper (IEC 60028 α20 0.00393).
-    expectClose(body.perCoil.resistanceOhm / body.perCoil.resistance20Ohm, 3.058 / 2.1952, 1e-4);
-    for (const field of ["conductorLengthM", "purchasedLengthM", "woundMassKg", "resistanceOhm", "forceLengthM"]) {
+    expectClose(
+      body.perCoil.resistanceOhm / body.perCoil.resistance20Ohm,
+      3.058 / 2.1952,
+      1e-4,
+    );
+    for (const field of [
+      "conductorLengthM",
+      "purchasedLengthM",
+      "woundMassKg",
+      "resistanceOhm",
+      "forceLengthM",
+    ]) {
       expectClose(body.total[field], 12 * body.perCoil[field], 1e-12);
     }
     expectClose(body.copperLossW, 12 * 100 * body.perCoil.resistanceOhm, 1e-12);
@@ -72,7 +83,9 @@ describe("POST /api/v1/coil-estimates", () => {
     const body = await response.json();
     // Source: engineering brief, worked check 1 (ASTM B258 formula).
     expectClose(body.wire.bareDiameterMm, 0.81182, 1e-5);
-    expect(body.wire.overallDiameterMm).toBeGreaterThan(body.wire.bareDiameterMm);
+    expect(body.wire.overallDiameterMm).toBeGreaterThan(
+      body.wire.bareDiameterMm,
+    );
   });
 
   it.each([
@@ -91,28 +104,41 @@ describe("POST /api/v1/coil-estimates", () => {
     ["insulation", { insulation: "heavy" }],
     ["scrapPercent", { scrapPercent: -2 }],
   ])("refuses a bad %s with 400 naming the field", async (field, change) => {
-    const response = await post("/api/v1/coil-estimates", { ...workedCoil, ...change });
+    const response = await post("/api/v1/coil-estimates", {
+      ...workedCoil,
+      ...change,
+    });
     expect(response.status).toBe(400);
-    const body = (await response.json()) as { error: { message: string; fields: Record<string, string[]> } };
+    const body = (await response.json()) as {
+      error: { message: string; fields: Record<string, string[]> };
+    };
     expect(Object.keys(body.error.fields)).toContain(field);
     expect(body.error.fields[field]![0]!.length).toBeGreaterThan(5);
   });
 
   it("refuses Infinity and NaN spelt in JSON", async () => {
     for (const raw of ['{"turns": 1e999}', '{"turns": NaN}']) {
-      const body = JSON.stringify(workedCoil).replace('"turns":40', raw.slice(1, -1));
-      const response = await fetch(`${(await import("../support/app-client")).baseUrl()}/api/v1/coil-estimates`, {
-        method: "POST",
-        headers: { "Content-Type": "application/json", Cookie: cookie },
-        body,
-      });
+      const body = JSON.stringify(workedCoil).replace(
+        '"turns":40',
+        raw.slice(1, -1),
+      );
+      const response = await fetch(
+        `${(await import("../support/app-client")).baseUrl()}/api/v1/coil-estimates`,
+        {
+          method: "POST",
+          headers: { "Content-Type": "application/json", Cookie: cookie },
+          body,
+        },
+      );
       expect(response.status).toBe(400);
-      expect(await response.text()).not.toContain("NaN\"");
+      expect(await response.text()).not.toContain('NaN"');
     }
   });
 
   it("needs a signed-in caller and POST", async () => {
-    expect((await sendJson("POST", "/api/v1/coil-estimates", workedCoil)).status).toBe(401);
+    expect(
+      (await sendJson("POST", "/api/v1/coil-estimates", workedCoil)).status,
+    ).toBe(401);
     expect((await get("/api/v1/coil-estimates", cookie)).status).toBe(405);
   });
 });
@@ -133,24 +159,36 @@ describe("POST /api/v1/magnet-estimates", () => {
     // Volume 20 × 10 × 4 mm = 800 mm³; NdFeB about 7.5 g/cm³ (brief) → 6.0 g.
     expectClose(body.massPerPieceKg, 0.006, 1e-9);
 
-    const at100 = await (await post("/api/v1/magnet-estimates", {
-      grade: "N42",
-      br20T: 1.3,
-      temperatureC: 100,
-      shape: { kind: "disc", diameterMm: 10, thicknessMm: 2 },
-    })).json();
+    const at100 = await (
+      await post("/api/v1/magnet-estimates", {
+        grade: "N42",
+        br20T: 1.3,
+        temperatureC: 100,
+        shape: { kind: "disc", diameterMm: 10, thicknessMm: 2 },
+      })
+    ).json();
     expectClose(at100.brT, 1.1752, 5e-5);
     // 100 °C is above N42's 80 °C working limit (brief: no suffix → 80 °C).
-    expect(at100.warnings.map((warning: { code: string }) => warning.code)).toContain("above-max-working-temperature");
+    expect(
+      at100.warnings.map((warning: { code: string }) => warning.code),
+    ).toContain("above-max-working-temperature");
   });
 
   it("refuses an unknown grade, both grade and properties, and impossible shapes", async () => {
-    const unknown = await post("/api/v1/magnet-estimates", { grade: "N99", shape: { kind: "disc", diameterMm: 5, thicknessMm: 1 } });
+    const unknown = await post("/api/v1/magnet-estimates", {
+      grade: "N99",
+      shape: { kind: "disc", diameterMm: 5, thicknessMm: 1 },
+    });
     expect(unknown.status).toBe(400);
     expect((await unknown.json()).error.fields.grade).toBeTruthy();
     const ring = await post("/api/v1/magnet-estimates", {
       grade: "N42SH",
-      shape: { kind: "ring", outerDiameterMm: 10, innerDiameterMm: 12, thicknessMm: 2 },
+      shape: {
+        kind: "ring",
+        outerDiameterMm: 10,
+        innerDiameterMm: 12,
+        thicknessMm: 2,
+      },
     });
     expect(ring.status).toBe(400);
   });
@@ -158,19 +196,27 @@ describe("POST /api/v1/magnet-estimates", () => {
 
 describe("reference lists", () => {
   it("lists AWG 0000–46 and the IEC diameters, and needs a standard", async () => {
-    const awg = (await (await get("/api/v1/wire-sizes?standard=AWG", cookie)).json()) as { size: string }[];
+    const awg = (await (
+      await get("/api/v1/wire-sizes?standard=AWG", cookie)
+    ).json()) as { size: string }[];
     expect(awg).toHaveLength(50);
     expect(awg[0]!.size).toBe("0000");
-    const iec = (await (await get("/api/v1/wire-sizes?standard=IEC", cookie)).json()) as { size: string }[];
+    const iec = (await (
+      await get("/api/v1/wire-sizes?standard=IEC", cookie)
+    ).json()) as { size: string }[];
     expect(iec.map((row) => row.size)).toContain("0.800");
     expect((await get("/api/v1/wire-sizes", cookie)).status).toBe(400);
   });
 
   it("lists magnet grades with their working temperature (brief: SH → 150 °C)", async () => {
-    const grades = (await (await get("/api/v1/magnet-grades", cookie)).json()) as {
+    const grades = (await (
+      await get("/api/v1/magnet-grades", cookie)
+    ).json()) as {
       name: string;
       maxWorkingTemperatureC: number;
     }[];
-    expect(grades.find((grade) => grade.name === "N42SH")?.maxWorkingTemperatureC).toBe(150);
+    expect(
+      grades.find((grade) => grade.name === "N42SH")?.maxWorkingTemperatureC,
+    ).toBe(150);
   });
 });

@@ -8,7 +8,11 @@ import {
   signIn,
   uniqueEmail,
 } from "../support/app-client";
-import { closeTestDatabase, createPerson, testDatabase } from "../support/test-database";
+import {
+  closeTestDatabase,
+  createPerson,
+  testDatabase,
+} from "../support/test-database";
 
 afterAll(closeTestDatabase);
 
@@ -18,7 +22,11 @@ describe("sign-in page", () => {
   it("signs a person in and sends them to the page they asked for", async () => {
     const email = uniqueEmail("form");
     await createPerson({ email, password, roles: ["admin"] });
-    const response = await postForm("/sign-in", { email, password, redirectTo: "/admin/people" });
+    const response = await postForm("/sign-in", {
+      email,
+      password,
+      redirectTo: "/admin/people",
+    });
     expect(response.status).toBe(302);
     expect(response.headers.get("Location")).toBe("/admin/people");
     const cookie = sessionCookieFrom(response);
@@ -32,27 +40,39 @@ describe("sign-in page", () => {
   it("never redirects off-site after sign-in", async () => {
     const email = uniqueEmail("offsite");
     await createPerson({ email, password, roles: ["buyer"] });
-    const response = await postForm("/sign-in", { email, password, redirectTo: "//evil.test/x" });
+    const response = await postForm("/sign-in", {
+      email,
+      password,
+      redirectTo: "//evil.test/x",
+    });
     expect(response.headers.get("Location")).toBe("/");
   });
 
   it("answers a wrong password and an unknown e-mail with the same message", async () => {
     const email = uniqueEmail("wrong");
     await createPerson({ email, password, roles: ["buyer"] });
-    const wrongPassword = await postForm("/sign-in", { email, password: "not-the-password" });
+    const wrongPassword = await postForm("/sign-in", {
+      email,
+      password: "not-the-password",
+    });
     const unknownEmail = await postForm("/sign-in", {
       email: uniqueEmail("nobody"),
       password: "whatever-it-is",
     });
     expect(wrongPassword.status).toBe(401);
     expect(unknownEmail.status).toBe(401);
-    expect(await wrongPassword.text()).toContain("E-mail or password is wrong.");
+    expect(await wrongPassword.text()).toContain(
+      "E-mail or password is wrong.",
+    );
     expect(await unknownEmail.text()).toContain("E-mail or password is wrong.");
     expect(sessionCookieFrom(wrongPassword)).toBeNull();
   });
 
   it("gives field messages for a malformed e-mail and keeps nothing", async () => {
-    const response = await postForm("/sign-in", { email: "not-an-address", password: "" });
+    const response = await postForm("/sign-in", {
+      email: "not-an-address",
+      password: "",
+    });
     expect(response.status).toBe(400);
     const html = await response.text();
     expect(html).toContain("Enter a valid e-mail address.");
@@ -63,8 +83,16 @@ describe("sign-in page", () => {
 describe("API sign-in", () => {
   it("answers 200 with the person and sets the session cookie", async () => {
     const email = uniqueEmail("api");
-    await createPerson({ email, password, roles: ["builder", "storekeeper"], name: "Api Person" });
-    const response = await sendJson("POST", "/api/v1/sessions", { email, password });
+    await createPerson({
+      email,
+      password,
+      roles: ["builder", "storekeeper"],
+      name: "Api Person",
+    });
+    const response = await sendJson("POST", "/api/v1/sessions", {
+      email,
+      password,
+    });
     expect(response.status).toBe(200);
     expect(await response.json()).toEqual({
       user: { email, name: "Api Person", roles: ["builder", "storekeeper"] },
@@ -80,12 +108,19 @@ describe("API sign-in", () => {
       password: "x",
     });
     expect(wrong.status).toBe(401);
-    expect(await wrong.json()).toEqual({ error: { message: "E-mail or password is wrong." } });
+    expect(await wrong.json()).toEqual({
+      error: { message: "E-mail or password is wrong." },
+    });
 
     const bad = await sendJson("POST", "/api/v1/sessions", { email: "nope" });
     expect(bad.status).toBe(400);
-    const body = (await bad.json()) as { error: { fields: Record<string, string[]> } };
-    expect(Object.keys(body.error.fields).sort()).toEqual(["email", "password"]);
+    const body = (await bad.json()) as {
+      error: { fields: Record<string, string[]> };
+    };
+    expect(Object.keys(body.error.fields).sort()).toEqual([
+      "email",
+      "password",
+    ]);
 
     const notJson = await fetch(`${baseUrl()}/api/v1/sessions`, {
       method: "POST",
@@ -99,7 +134,12 @@ describe("API sign-in", () => {
     const email = uniqueEmail("signout");
     await createPerson({ email, password, roles: ["manager"] });
     const cookie = await signIn(email, password);
-    const response = await sendJson("DELETE", "/api/v1/sessions", undefined, cookie);
+    const response = await sendJson(
+      "DELETE",
+      "/api/v1/sessions",
+      undefined,
+      cookie,
+    );
     expect(response.status).toBe(204);
     expect((await get("/api/v1/me", cookie)).status).toBe(401);
   });
@@ -110,10 +150,16 @@ describe("throttle", () => {
     const email = uniqueEmail("throttle");
     await createPerson({ email, password, roles: ["buyer"] });
     for (let attempt = 1; attempt <= 5; attempt += 1) {
-      const response = await sendJson("POST", "/api/v1/sessions", { email, password: `wrong-${attempt}` });
+      const response = await sendJson("POST", "/api/v1/sessions", {
+        email,
+        password: `wrong-${attempt}`,
+      });
       expect(response.status).toBe(401);
     }
-    const sixth = await sendJson("POST", "/api/v1/sessions", { email, password });
+    const sixth = await sendJson("POST", "/api/v1/sessions", {
+      email,
+      password,
+    });
     expect(sixth.status).toBe(429);
     const retryAfter = Number(sixth.headers.get("Retry-After"));
     expect(retryAfter).toBeGreaterThan(0);
@@ -142,17 +188,30 @@ describe("deactivated person", () => {
     const adminCookie = await signIn(adminEmail, password);
 
     const email = uniqueEmail("leaver");
-    const userId = await createPerson({ email, password, roles: ["storekeeper"] });
+    const userId = await createPerson({
+      email,
+      password,
+      roles: ["storekeeper"],
+    });
     const cookie = await signIn(email, password);
     expect((await get("/api/v1/me", cookie)).status).toBe(200);
 
-    const deactivate = await postForm(`/admin/people/${userId}`, { intent: "deactivate" }, adminCookie);
+    const deactivate = await postForm(
+      `/admin/people/${userId}`,
+      { intent: "deactivate" },
+      adminCookie,
+    );
     expect(deactivate.status).toBe(200);
 
     expect((await get("/api/v1/me", cookie)).status).toBe(401);
     expect((await get("/", cookie)).status).toBe(302);
-    const again = await sendJson("POST", "/api/v1/sessions", { email, password });
+    const again = await sendJson("POST", "/api/v1/sessions", {
+      email,
+      password,
+    });
     expect(again.status).toBe(401);
-    expect(await again.json()).toEqual({ error: { message: "E-mail or password is wrong." } });
+    expect(await again.json()).toEqual({
+      error: { message: "E-mail or password is wrong." },
+    });
   });
 });

@@ -1,7 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
 import { get, sendJson, signIn } from "../support/app-client";
-import { closeTestDatabase, createLocation, testDatabase, uniqueCode } from "../support/test-database";
+import {
+  closeTestDatabase,
+  createLocation,
+  testDatabase,
+  uniqueCode,
+} from "../support/test-database";
 
 let buyer = "";
 let storekeeper = "";
@@ -58,7 +63,8 @@ async function createMagnet(sku = uniqueCode("MG")): Promise<string> {
   return sku;
 }
 
-const move = (body: Record<string, unknown>, cookie = storekeeper) => sendJson("POST", "/api/v1/stock-movements", body, cookie);
+const move = (body: Record<string, unknown>, cookie = storekeeper) =>
+  sendJson("POST", "/api/v1/stock-movements", body, cookie);
 
 async function itemBalance(sku: string) {
   return (await (await get(`/api/v1/items/${sku}`, storekeeper)).json()) as {
@@ -71,7 +77,9 @@ async function itemBalance(sku: string) {
 }
 
 async function movementCount(): Promise<number> {
-  const [rows] = await testDatabase().query("SELECT COUNT(*) AS n FROM stock_movements");
+  const [rows] = await testDatabase().query(
+    "SELECT COUNT(*) AS n FROM stock_movements",
+  );
   return Number((rows as { n: number }[])[0]!.n);
 }
 
@@ -79,14 +87,34 @@ describe("receipts, weigh-back issues, transfers and counts", () => {
   it("receives a spool by gross and tare and issues by weighing it back", async () => {
     const sku = await createWire();
     // Spool gross 5.40 kg, tare 0.60 kg → net 4.80 kg (engineering brief, worked check 6).
-    const receipt = await move({ type: "receipt", sku, lot: "SP-1", location: mainStore, grossKg: 5.4, tareKg: 0.6, unitCost: 14.2, spoolType: "DIN 250" });
+    const receipt = await move({
+      type: "receipt",
+      sku,
+      lot: "SP-1",
+      location: mainStore,
+      grossKg: 5.4,
+      tareKg: 0.6,
+      unitCost: 14.2,
+      spoolType: "DIN 250",
+    });
     expect(receipt.status).toBe(201);
     const received = await receipt.json();
     expect(received.movement.quantity).toBe(4.8);
-    expect(received.balance).toEqual({ onHand: 4.8, reserved: 0, available: 4.8 });
+    expect(received.balance).toEqual({
+      onHand: 4.8,
+      reserved: 0,
+      available: 4.8,
+    });
 
     // Weighed back at 4.15 kg gross: net now 3.55 kg, so 1.25 kg left the spool.
-    const issue = await move({ type: "issue", sku, lot: "SP-1", location: mainStore, grossKg: 4.15, reference: "BO-1001" });
+    const issue = await move({
+      type: "issue",
+      sku,
+      lot: "SP-1",
+      location: mainStore,
+      grossKg: 4.15,
+      reference: "BO-1001",
+    });
     expect(issue.status).toBe(201);
     const issued = await issue.json();
     expect(issued.movement.quantity).toBe(-1.25);
@@ -95,34 +123,79 @@ describe("receipts, weigh-back issues, transfers and counts", () => {
 
   it("values stock at the moving average cost", async () => {
     const sku = await createWire();
-    await move({ type: "receipt", sku, lot: "A", location: mainStore, quantity: 10, unitCost: 12 });
-    await move({ type: "receipt", sku, lot: "B", location: mainStore, quantity: 5, unitCost: 15 });
+    await move({
+      type: "receipt",
+      sku,
+      lot: "A",
+      location: mainStore,
+      quantity: 10,
+      unitCost: 12,
+    });
+    await move({
+      type: "receipt",
+      sku,
+      lot: "B",
+      location: mainStore,
+      quantity: 5,
+      unitCost: 15,
+    });
     // (10 kg × 12 + 5 kg × 15) / 15 kg = 13 per kg (moving average, worked by hand).
     const item = await itemBalance(sku);
     expect(item.averageCost).toBe(13);
-    await move({ type: "issue", sku, lot: "A", location: mainStore, quantity: 4 });
+    await move({
+      type: "issue",
+      sku,
+      lot: "A",
+      location: mainStore,
+      quantity: 4,
+    });
     expect((await itemBalance(sku)).averageCost).toBe(13);
   });
 
   it("moves stock between locations in two legs and records a count's difference", async () => {
     const sku = await createMagnet();
-    await move({ type: "receipt", sku, location: mainStore, quantity: 200, unitCost: 0.85 });
-    const transfer = await move({ type: "transfer", sku, location: mainStore, toLocation: benchBin, quantity: 50 });
+    await move({
+      type: "receipt",
+      sku,
+      location: mainStore,
+      quantity: 200,
+      unitCost: 0.85,
+    });
+    const transfer = await move({
+      type: "transfer",
+      sku,
+      location: mainStore,
+      toLocation: benchBin,
+      quantity: 50,
+    });
     expect(transfer.status).toBe(201);
     const [legs] = await testDatabase().query(
       "SELECT m.quantity, l.code FROM stock_movements m JOIN locations l ON l.id = m.location_id WHERE m.transfer_id = ? ORDER BY m.id",
       [(await transfer.json()).movement.id],
     );
-    expect((legs as { quantity: string; code: string }[]).map((leg) => [leg.code, Number(leg.quantity)])).toEqual([
+    expect(
+      (legs as { quantity: string; code: string }[]).map((leg) => [
+        leg.code,
+        Number(leg.quantity),
+      ]),
+    ).toEqual([
       [mainStore, -50],
       [benchBin, 50],
     ]);
-    const count = await move({ type: "count", sku, location: benchBin, quantity: 47, note: "three chipped, set aside" });
+    const count = await move({
+      type: "count",
+      sku,
+      location: benchBin,
+      quantity: 47,
+      note: "three chipped, set aside",
+    });
     expect(count.status).toBe(201);
     expect((await count.json()).movement.quantity).toBe(-3);
     const item = await itemBalance(sku);
     expect(item.onHand).toBe(197);
-    expect(item.balances.map((balance) => [balance.location, balance.onHand]).sort()).toEqual(
+    expect(
+      item.balances.map((balance) => [balance.location, balance.onHand]).sort(),
+    ).toEqual(
       [
         [mainStore, 150],
         [benchBin, 47],
@@ -134,10 +207,25 @@ describe("receipts, weigh-back issues, transfers and counts", () => {
 describe("never below zero", () => {
   it("lets exactly 20 of 50 concurrent 1 kg issues through a 20 kg lot", async () => {
     const sku = await createWire();
-    await move({ type: "receipt", sku, lot: "RACE", location: mainStore, quantity: 20, unitCost: 10 });
+    await move({
+      type: "receipt",
+      sku,
+      lot: "RACE",
+      location: mainStore,
+      quantity: 20,
+      unitCost: 10,
+    });
     const before = await movementCount();
     const answers = await Promise.all(
-      Array.from({ length: 50 }, () => move({ type: "issue", sku, lot: "RACE", location: mainStore, quantity: 1 })),
+      Array.from({ length: 50 }, () =>
+        move({
+          type: "issue",
+          sku,
+          lot: "RACE",
+          location: mainStore,
+          quantity: 1,
+        }),
+      ),
     );
     const statuses = answers.map((answer) => answer.status);
     expect(statuses.filter((status) => status === 201)).toHaveLength(20);
@@ -145,19 +233,27 @@ describe("never below zero", () => {
     const item = await itemBalance(sku);
     expect(item.onHand).toBe(0);
     expect(await movementCount()).toBe(before + 20);
-    const refused = await answers.find((answer) => answer.status === 409)!.json();
+    const refused = await answers
+      .find((answer) => answer.status === 409)!
+      .json();
     expect(refused.error.message).toMatch(/cannot take 1 kg/);
   });
 
   it("keeps every balance equal to the sum of its movements over 2,000 random movements", async () => {
-    const skus = [await createWire(), await createWire(), await createMagnet(), await createMagnet()];
+    const skus = [
+      await createWire(),
+      await createWire(),
+      await createMagnet(),
+      await createMagnet(),
+    ];
     const places = [mainStore, benchBin];
     let seed = 20261202;
     const random = () => {
       seed = (seed * 1103515245 + 12345) % 2147483648;
       return seed / 2147483648;
     };
-    const pick = <T,>(list: readonly T[]) => list[Math.floor(random() * list.length)]!;
+    const pick = <T>(list: readonly T[]) =>
+      list[Math.floor(random() * list.length)]!;
     let created = 0;
     let refused = 0;
     for (let batch = 0; batch < 100; batch += 1) {
@@ -165,23 +261,48 @@ describe("never below zero", () => {
         const sku = pick(skus);
         const wire = sku.startsWith("CU");
         const lot = wire ? pick(["L1", "L2", "L3"]) : undefined;
-        const quantity = wire ? Math.round(random() * 3000) / 1000 + 0.001 : 1 + Math.floor(random() * 20);
-        const type = pick(["receipt", "receipt", "issue", "issue", "transfer", "scrap", "return", "count", "adjustment"] as const);
+        const quantity = wire
+          ? Math.round(random() * 3000) / 1000 + 0.001
+          : 1 + Math.floor(random() * 20);
+        const type = pick([
+          "receipt",
+          "receipt",
+          "issue",
+          "issue",
+          "transfer",
+          "scrap",
+          "return",
+          "count",
+          "adjustment",
+        ] as const);
         const location = pick(places);
-        const body: Record<string, unknown> = { type, sku, lot, location, quantity };
+        const body: Record<string, unknown> = {
+          type,
+          sku,
+          lot,
+          location,
+          quantity,
+        };
         if (type === "receipt") body.unitCost = 5 + Math.floor(random() * 10);
-        if (type === "transfer") body.toLocation = places.find((place) => place !== location);
+        if (type === "transfer")
+          body.toLocation = places.find((place) => place !== location);
         if (type === "adjustment") {
           body.quantity = random() < 0.5 ? quantity : -quantity;
           body.note = "property test";
         }
-        if (type === "count") body.quantity = wire ? Math.round(random() * 5000) / 1000 : Math.floor(random() * 30);
+        if (type === "count")
+          body.quantity = wire
+            ? Math.round(random() * 5000) / 1000
+            : Math.floor(random() * 30);
         return move(body);
       });
       for (const answer of await Promise.all(requests)) {
         if (answer.status === 201) created += 1;
         else if (answer.status === 409 || answer.status === 400) refused += 1;
-        else throw new Error(`unexpected ${answer.status}: ${await answer.text()}`);
+        else
+          throw new Error(
+            `unexpected ${answer.status}: ${await answer.text()}`,
+          );
       }
     }
     expect(created + refused).toBe(2000);
@@ -209,26 +330,67 @@ describe("who may record, and bad input", () => {
     const before = await movementCount();
     for (const role of ["buyer", "builder", "manager"]) {
       const cookie = await signIn(`${role}@turnledger.test`, demoPassword());
-      const answer = await move({ type: "receipt", sku, location: mainStore, quantity: 5, unitCost: 1 }, cookie);
+      const answer = await move(
+        { type: "receipt", sku, location: mainStore, quantity: 5, unitCost: 1 },
+        cookie,
+      );
       expect(answer.status).toBe(403);
     }
     expect(await movementCount()).toBe(before);
   });
 
   it.each([
-    ["unknown SKU", { type: "receipt", sku: "NO-SUCH-SKU", quantity: 1, unitCost: 1 }, 400, "sku"],
-    ["wrong unit", { type: "receipt", quantity: 1, unit: "kg", unitCost: 1 }, 400, "unit"],
-    ["negative receipt", { type: "receipt", quantity: -5, unitCost: 1 }, 400, "quantity"],
-    ["fractional pieces", { type: "receipt", quantity: 1.5, unitCost: 1 }, 400, "quantity"],
-    ["non-numeric quantity", { type: "receipt", quantity: "ten", unitCost: 1 }, 400, "quantity"],
-    ["transfer to the same location", { type: "transfer", quantity: 1, toLocation: "SAME" }, 400, "toLocation"],
-    ["unknown location", { type: "receipt", quantity: 1, unitCost: 1, location: "NOWHERE" }, 400, "location"],
+    [
+      "unknown SKU",
+      { type: "receipt", sku: "NO-SUCH-SKU", quantity: 1, unitCost: 1 },
+      400,
+      "sku",
+    ],
+    [
+      "wrong unit",
+      { type: "receipt", quantity: 1, unit: "kg", unitCost: 1 },
+      400,
+      "unit",
+    ],
+    [
+      "negative receipt",
+      { type: "receipt", quantity: -5, unitCost: 1 },
+      400,
+      "quantity",
+    ],
+    [
+      "fractional pieces",
+      { type: "receipt", quantity: 1.5, unitCost: 1 },
+      400,
+      "quantity",
+    ],
+    [
+      "non-numeric quantity",
+      { type: "receipt", quantity: "ten", unitCost: 1 },
+      400,
+      "quantity",
+    ],
+    [
+      "transfer to the same location",
+      { type: "transfer", quantity: 1, toLocation: "SAME" },
+      400,
+      "toLocation",
+    ],
+    [
+      "unknown location",
+      { type: "receipt", quantity: 1, unitCost: 1, location: "NOWHERE" },
+      400,
+      "location",
+    ],
     ["receipt without cost", { type: "receipt", quantity: 1 }, 400, "unitCost"],
     ["unknown type", { type: "gift", quantity: 1 }, 400, "type"],
   ])("refuses %s and writes nothing", async (_label, change, status, field) => {
     const sku = await createMagnet();
     const before = await movementCount();
-    const body = { sku, location: mainStore, ...change } as Record<string, unknown>;
+    const body = { sku, location: mainStore, ...change } as Record<
+      string,
+      unknown
+    >;
     if (body.toLocation === "SAME") body.toLocation = mainStore;
     const answer = await move(body);
     expect(answer.status).toBe(status);
@@ -239,12 +401,34 @@ describe("who may record, and bad input", () => {
 
   it("refuses a gross weight below the tare on a receipt and on a weigh-back", async () => {
     const sku = await createWire();
-    const receipt = await move({ type: "receipt", sku, lot: "T1", location: mainStore, grossKg: 0.5, tareKg: 0.6, unitCost: 10 });
+    const receipt = await move({
+      type: "receipt",
+      sku,
+      lot: "T1",
+      location: mainStore,
+      grossKg: 0.5,
+      tareKg: 0.6,
+      unitCost: 10,
+    });
     expect(receipt.status).toBe(400);
     expect((await receipt.json()).error.fields.grossKg).toBeTruthy();
-    await move({ type: "receipt", sku, lot: "T1", location: mainStore, grossKg: 3.6, tareKg: 0.6, unitCost: 10 });
+    await move({
+      type: "receipt",
+      sku,
+      lot: "T1",
+      location: mainStore,
+      grossKg: 3.6,
+      tareKg: 0.6,
+      unitCost: 10,
+    });
     const before = await movementCount();
-    const weighBack = await move({ type: "issue", sku, lot: "T1", location: mainStore, grossKg: 0.4 });
+    const weighBack = await move({
+      type: "issue",
+      sku,
+      lot: "T1",
+      location: mainStore,
+      grossKg: 0.4,
+    });
     expect(weighBack.status).toBe(400);
     expect(await movementCount()).toBe(before);
   });
@@ -253,32 +437,93 @@ describe("who may record, and bad input", () => {
 describe("items API", () => {
   it("creates, reads, lists and changes items with the role rules", async () => {
     const sku = await createWire();
-    expect((await sendJson("POST", "/api/v1/items", { kind: "part", sku, name: "dup", unit: "pcs" }, buyer)).status).toBe(409);
+    expect(
+      (
+        await sendJson(
+          "POST",
+          "/api/v1/items",
+          { kind: "part", sku, name: "dup", unit: "pcs" },
+          buyer,
+        )
+      ).status,
+    ).toBe(409);
     const unknownSize = await sendJson(
       "POST",
       "/api/v1/items",
-      { kind: "wire", sku: uniqueCode("CU"), name: "x", conductor: "copper", standard: "AWG", size: "99", insulation: "heavy", thermalClass: 155, enamel: "polyester" },
+      {
+        kind: "wire",
+        sku: uniqueCode("CU"),
+        name: "x",
+        conductor: "copper",
+        standard: "AWG",
+        size: "99",
+        insulation: "heavy",
+        thermalClass: 155,
+        enamel: "polyester",
+      },
       buyer,
     );
     expect(unknownSize.status).toBe(400);
     expect((await unknownSize.json()).error.fields.size).toBeTruthy();
-    expect((await sendJson("POST", "/api/v1/items", { kind: "part", sku: uniqueCode("P"), name: "x", unit: "pcs" }, storekeeper)).status).toBe(403);
+    expect(
+      (
+        await sendJson(
+          "POST",
+          "/api/v1/items",
+          { kind: "part", sku: uniqueCode("P"), name: "x", unit: "pcs" },
+          storekeeper,
+        )
+      ).status,
+    ).toBe(403);
 
-    const patchReorder = await sendJson("PATCH", `/api/v1/items/${sku}`, { reorderPoint: 3.5 }, storekeeper);
+    const patchReorder = await sendJson(
+      "PATCH",
+      `/api/v1/items/${sku}`,
+      { reorderPoint: 3.5 },
+      storekeeper,
+    );
     expect(patchReorder.status).toBe(200);
     expect((await patchReorder.json()).reorderPoint).toBe(3.5);
-    expect((await sendJson("PATCH", `/api/v1/items/${sku}`, { name: "renamed" }, storekeeper)).status).toBe(403);
+    expect(
+      (
+        await sendJson(
+          "PATCH",
+          `/api/v1/items/${sku}`,
+          { name: "renamed" },
+          storekeeper,
+        )
+      ).status,
+    ).toBe(403);
     const builder = await signIn("builder@turnledger.test", demoPassword());
-    expect((await sendJson("PATCH", `/api/v1/items/${sku}`, { reorderPoint: 1 }, builder)).status).toBe(403);
+    expect(
+      (
+        await sendJson(
+          "PATCH",
+          `/api/v1/items/${sku}`,
+          { reorderPoint: 1 },
+          builder,
+        )
+      ).status,
+    ).toBe(403);
 
-    const list = (await (await get(`/api/v1/items?search=${sku}&pageSize=5`, builder)).json()) as {
+    const list = (await (
+      await get(`/api/v1/items?search=${sku}&pageSize=5`, builder)
+    ).json()) as {
       items: { sku: string; unit: string; belowReorder: boolean }[];
       total: number;
     };
     expect(list.total).toBe(1);
-    expect(list.items[0]).toMatchObject({ sku, unit: "kg", belowReorder: true });
-    expect((await get("/api/v1/items?pageSize=9999", builder)).status).toBe(400);
-    const locationsList = (await (await get("/api/v1/locations", builder)).json()) as { code: string }[];
+    expect(list.items[0]).toMatchObject({
+      sku,
+      unit: "kg",
+      belowReorder: true,
+    });
+    expect((await get("/api/v1/items?pageSize=9999", builder)).status).toBe(
+      400,
+    );
+    const locationsList = (await (
+      await get("/api/v1/locations", builder)
+    ).json()) as { code: string }[];
     expect(locationsList.map((location) => location.code)).toContain(mainStore);
   });
 });

@@ -33,7 +33,8 @@ export function postForm(
 ): Promise<Response> {
   const body = new URLSearchParams();
   for (const [name, value] of Object.entries(fields)) {
-    for (const item of Array.isArray(value) ? value : [value]) body.append(name, item);
+    for (const item of Array.isArray(value) ? value : [value])
+      body.append(name, item);
   }
   return fetch(`${baseUrl()}${path}`, {
     method: "POST",
@@ -67,10 +68,15 @@ export function sendJson(
 
 /** Signs in through the API and returns the session cookie; fails the test otherwise. */
 export async function signIn(email: string, password: string): Promise<string> {
-  const response = await sendJson("POST", "/api/v1/sessions", { email, password });
+  const response = await sendJson("POST", "/api/v1/sessions", {
+    email,
+    password,
+  });
   const cookie = sessionCookieFrom(response);
   if (response.status !== 200 || !cookie) {
-    throw new Error(`sign-in as ${email} failed: ${response.status} ${await response.text()}`);
+    throw new Error(
+      `sign-in as ${email} failed: ${response.status} ${await response.text()}`,
+    );
   }
   return cookie;
 }

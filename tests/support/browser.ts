@@ -6,7 +6,12 @@ import { inject } from "vitest";
 import type { Role } from "~/lib/roles";
 import { demoPassword, demoPeople } from "../../seed/demo-people";
 
-export const screenshotFolder = path.resolve(import.meta.dirname, "..", "e2e", "screenshots");
+export const screenshotFolder = path.resolve(
+  import.meta.dirname,
+  "..",
+  "e2e",
+  "screenshots",
+);
 
 export function launchBrowser(): Promise<Browser> {
   return chromium.launch({
@@ -28,7 +33,9 @@ export function launchBrowser(): Promise<Browser> {
 export async function signIn(browser: Browser, role: Role): Promise<Page> {
   const person = demoPeople.find((candidate) => candidate.roles.includes(role));
   if (!person) throw new Error(`no demo person holds the role ${role}`);
-  const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+  const page = await browser.newPage({
+    viewport: { width: 1280, height: 800 },
+  });
   await page.goto(`${inject("baseUrl")}/sign-in`);
   await page.getByLabel("E-mail").fill(person.email);
   await page.getByLabel("Password").fill(demoPassword());
@@ -39,7 +46,10 @@ export async function signIn(browser: Browser, role: Role): Promise<Page> {
   return page;
 }
 
-export async function saveScreenshot(page: Page, name: string): Promise<string> {
+export async function saveScreenshot(
+  page: Page,
+  name: string,
+): Promise<string> {
   fs.mkdirSync(screenshotFolder, { recursive: true });
   const file = path.join(screenshotFolder, `${name}.png`);
   await page.screenshot({ path: file, fullPage: true });

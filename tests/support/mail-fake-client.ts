@@ -28,7 +28,9 @@ export async function waitForMessage(
     if (found) return found;
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
-  throw new Error(`no message to ${to} matching ${subject} within ${timeoutMs} ms`);
+  throw new Error(
+    `no message to ${to} matching ${subject} within ${timeoutMs} ms`,
+  );
 }
 
 /** The first https?:// link in a message's text. */

@@ -8,7 +8,10 @@ import type { Role } from "~/lib/roles";
 
 let pool: mysql.Pool | undefined;
 export function testDatabase(): mysql.Pool {
-  pool ??= mysql.createPool({ ...poolOptionsFromUrl(inject("databaseUrl")), connectionLimit: 3 });
+  pool ??= mysql.createPool({
+    ...poolOptionsFromUrl(inject("databaseUrl")),
+    connectionLimit: 3,
+  });
   return pool;
 }
 
@@ -32,14 +35,23 @@ export async function createPerson(input: {
     [id, input.email, input.name ?? "Test Person", passwordHash],
   );
   for (const role of input.roles) {
-    await db.query("INSERT INTO user_roles (user_id, role) VALUES (?, ?)", [id, role]);
+    await db.query("INSERT INTO user_roles (user_id, role) VALUES (?, ?)", [
+      id,
+      role,
+    ]);
   }
   return id;
 }
 
 /** Creates a stock location (there is no page for locations yet); returns its code. */
-export async function createLocation(code: string, name = `Test ${code}`): Promise<string> {
-  await testDatabase().query("INSERT INTO locations (code, name, kind) VALUES (?, ?, 'bin')", [code, name]);
+export async function createLocation(
+  code: string,
+  name = `Test ${code}`,
+): Promise<string> {
+  await testDatabase().query(
+    "INSERT INTO locations (code, name, kind) VALUES (?, ?, 'bin')",
+    [code, name],
+  );
   return code;
 }
 

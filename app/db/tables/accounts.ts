@@ -92,7 +92,11 @@ export const failedSignIns = mysqlTable(
     attemptedAt: datetime("attempted_at", { mode: "date", fsp: 3 }).notNull(),
   },
   (table) => [
-    index("failed_sign_ins_lookup_idx").on(table.email, table.ipAddress, table.attemptedAt),
+    index("failed_sign_ins_lookup_idx").on(
+      table.email,
+      table.ipAddress,
+      table.attemptedAt,
+    ),
     index("failed_sign_ins_time_idx").on(table.attemptedAt),
   ],
 );

@@ -23,9 +23,15 @@ export const conductorMaterials = mysqlTable("conductor_materials", {
   key: varchar("material_key", { length: 20 }).primaryKey(),
   name: varchar("name", { length: 80 }).notNull(),
   /** Ω·mm²/m at 20 °C. */
-  resistivity20: decimal("resistivity_20_ohm_mm2_per_m", { precision: 12, scale: 9 }).notNull(),
+  resistivity20: decimal("resistivity_20_ohm_mm2_per_m", {
+    precision: 12,
+    scale: 9,
+  }).notNull(),
   /** 1/K at 20 °C. */
-  temperatureCoefficient20: decimal("temperature_coefficient_20_per_k", { precision: 10, scale: 7 }).notNull(),
+  temperatureCoefficient20: decimal("temperature_coefficient_20_per_k", {
+    precision: 10,
+    scale: 7,
+  }).notNull(),
   /** g/cm³. */
   density: decimal("density_g_per_cm3", { precision: 8, scale: 4 }).notNull(),
   source: source(),
@@ -43,11 +49,17 @@ export const wireSizes = mysqlTable(
     /** "r20" or "r40" (IEC only). */
     series: varchar("series", { length: 4 }),
     /** Bare diameter, mm (AWG by the formula, unrounded to 1e-6 mm). */
-    bareDiameterMm: decimal("bare_diameter_mm", { precision: 10, scale: 6 }).notNull(),
+    bareDiameterMm: decimal("bare_diameter_mm", {
+      precision: 10,
+      scale: 6,
+    }).notNull(),
     source: source(),
   },
   (table) => [
-    uniqueIndex("wire_sizes_standard_label_unique").on(table.standard, table.label),
+    uniqueIndex("wire_sizes_standard_label_unique").on(
+      table.standard,
+      table.label,
+    ),
     index("wire_sizes_diameter_idx").on(table.standard, table.bareDiameterMm),
   ],
 );
@@ -67,11 +79,18 @@ export const publishedOverallDiameters = mysqlTable(
     standard: mysqlEnum("standard", ["AWG", "IEC"]).notNull(),
     sizeLabel: varchar("size_label", { length: 12 }).notNull(),
     insulationKey: varchar("insulation_key", { length: 12 }).notNull(),
-    maxOverallDiameterMm: decimal("max_overall_diameter_mm", { precision: 10, scale: 4 }).notNull(),
+    maxOverallDiameterMm: decimal("max_overall_diameter_mm", {
+      precision: 10,
+      scale: 4,
+    }).notNull(),
     source: source(),
   },
   (table) => [
-    uniqueIndex("published_overall_unique").on(table.standard, table.sizeLabel, table.insulationKey),
+    uniqueIndex("published_overall_unique").on(
+      table.standard,
+      table.sizeLabel,
+      table.insulationKey,
+    ),
   ],
 );
 
@@ -101,20 +120,45 @@ export const magnetGrades = mysqlTable(
     temperatureSuffix: varchar("temperature_suffix", { length: 3 }),
     brMinT: decimal("br_min_t", { precision: 6, scale: 4 }).notNull(),
     brMaxT: decimal("br_max_t", { precision: 6, scale: 4 }).notNull(),
-    hcbMinKAm: decimal("hcb_min_ka_per_m", { precision: 8, scale: 1 }).notNull(),
-    hcjMinKAm: decimal("hcj_min_ka_per_m", { precision: 8, scale: 1 }).notNull(),
-    bhMaxMinKJm3: decimal("bh_max_min_kj_per_m3", { precision: 7, scale: 1 }).notNull(),
-    bhMaxMaxKJm3: decimal("bh_max_max_kj_per_m3", { precision: 7, scale: 1 }).notNull(),
+    hcbMinKAm: decimal("hcb_min_ka_per_m", {
+      precision: 8,
+      scale: 1,
+    }).notNull(),
+    hcjMinKAm: decimal("hcj_min_ka_per_m", {
+      precision: 8,
+      scale: 1,
+    }).notNull(),
+    bhMaxMinKJm3: decimal("bh_max_min_kj_per_m3", {
+      precision: 7,
+      scale: 1,
+    }).notNull(),
+    bhMaxMaxKJm3: decimal("bh_max_max_kj_per_m3", {
+      precision: 7,
+      scale: 1,
+    }).notNull(),
     maxWorkingTemperatureC: smallint("max_working_temperature_c").notNull(),
     /** 1/K (−0.0012 = −0.12 %/K). */
-    brTemperatureCoefficientPerK: decimal("br_temperature_coefficient_per_k", { precision: 9, scale: 6 }).notNull(),
-    densityGPerCm3: decimal("density_g_per_cm3", { precision: 6, scale: 3 }).notNull(),
-    recoilPermeability: decimal("recoil_permeability", { precision: 5, scale: 3 }).notNull(),
-    coercivityFallsWhenCold: boolean("coercivity_falls_when_cold").notNull().default(false),
+    brTemperatureCoefficientPerK: decimal("br_temperature_coefficient_per_k", {
+      precision: 9,
+      scale: 6,
+    }).notNull(),
+    densityGPerCm3: decimal("density_g_per_cm3", {
+      precision: 6,
+      scale: 3,
+    }).notNull(),
+    recoilPermeability: decimal("recoil_permeability", {
+      precision: 5,
+      scale: 3,
+    }).notNull(),
+    coercivityFallsWhenCold: boolean("coercivity_falls_when_cold")
+      .notNull()
+      .default(false),
     source: source(),
     /** Built-in rows are re-synced from the data module at start; added rows are the admins'. */
     builtIn: boolean("built_in").notNull().default(false),
-    addedBy: varchar("added_by", { length: 40 }).references(() => users.id, { onDelete: "set null" }),
+    addedBy: varchar("added_by", { length: 40 }).references(() => users.id, {
+      onDelete: "set null",
+    }),
     createdAt: createdAt(),
   },
   (table) => [

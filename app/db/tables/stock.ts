@@ -22,7 +22,12 @@ import {
 import { sql } from "drizzle-orm";
 import { createdAt, users } from "./accounts";
 
-import { itemKinds, magnetShapes, movementTypes, stockUnits } from "./stock-enums";
+import {
+  itemKinds,
+  magnetShapes,
+  movementTypes,
+  stockUnits,
+} from "./stock-enums";
 
 /** Quantities: 3 decimals (kg to the gram); whole numbers for pieces are enforced in code. */
 const quantity = (name: string) => decimal(name, { precision: 14, scale: 3 });
@@ -63,11 +68,22 @@ export const items = mysqlTable(
     /** Moving average cost per unit, updated on receipts. */
     averageCost: unitMoney("average_cost").notNull().default("0"),
     /** Kept by the database from the columns above, so lists sort and filter on an index. */
-    available: decimal("available", { precision: 14, scale: 3 }).generatedAlwaysAs(sql`on_hand - reserved`, { mode: "stored" }),
-    stockValue: decimal("stock_value", { precision: 20, scale: 4 }).generatedAlwaysAs(sql`on_hand * average_cost`, { mode: "stored" }),
-    belowReorder: boolean("below_reorder").generatedAlwaysAs(sql`reorder_point > 0 AND on_hand - reserved < reorder_point`, { mode: "stored" }),
+    available: decimal("available", {
+      precision: 14,
+      scale: 3,
+    }).generatedAlwaysAs(sql`on_hand - reserved`, { mode: "stored" }),
+    stockValue: decimal("stock_value", {
+      precision: 20,
+      scale: 4,
+    }).generatedAlwaysAs(sql`on_hand * average_cost`, { mode: "stored" }),
+    belowReorder: boolean("below_reorder").generatedAlwaysAs(
+      sql`reorder_point > 0 AND on_hand - reserved < reorder_point`,
+      { mode: "stored" },
+    ),
     createdAt: createdAt(),
-    updatedAt: datetime("updated_at", { mode: "date", fsp: 3 }).notNull().$defaultFn(() => new Date()),
+    updatedAt: datetime("updated_at", { mode: "date", fsp: 3 })
+      .notNull()
+      .$defaultFn(() => new Date()),
   },
   (table) => [
     uniqueIndex("items_sku_unique").on(table.sku),
@@ -76,7 +92,11 @@ export const items = mysqlTable(
     index("items_active_idx").on(table.active, table.sku),
     index("items_value_idx").on(table.active, table.stockValue),
     index("items_available_idx").on(table.active, table.available),
-    index("items_below_reorder_idx").on(table.active, table.belowReorder, table.sku),
+    index("items_below_reorder_idx").on(
+      table.active,
+      table.belowReorder,
+      table.sku,
+    ),
     index("items_on_hand_idx").on(table.active, table.onHand),
     check("items_on_hand_not_negative", sql`${table.onHand} >= 0`),
     check("items_reserved_not_negative", sql`${table.reserved} >= 0`),
@@ -122,7 +142,9 @@ export const lots = mysqlTable(
     receivedOn: date("received_on", { mode: "string" }),
     createdAt: createdAt(),
   },
-  (table) => [uniqueIndex("lots_item_number_unique").on(table.itemId, table.lotNumber)],
+  (table) => [
+    uniqueIndex("lots_item_number_unique").on(table.itemId, table.lotNumber),
+  ],
 );
 
 export const stockMovements = mysqlTable(
