@@ -15,11 +15,14 @@ function parseRoles(value: string): Role[] {
   return value.split(",").filter(isRole);
 }
 
-/** Creates a token acting with `roles` (must be the owner's); returns the token, shown once. */
+/** The roles column's value for a token that follows its owner's roles. */
+export const followsOwnerRoles = "*";
+
+/** Creates a token acting with `roles` (must be the owner's), or with the owner's roles at each use when null. */
 export async function createApiToken(input: {
   userId: string;
   name: string;
-  roles: Role[];
+  roles: Role[] | null;
   expiresAt: Date | null;
 }): Promise<{ token: string; id: number }> {
   const token = `${tokenPrefix}${randomBytes(32).toString("base64url")}`;
@@ -30,7 +33,7 @@ export async function createApiToken(input: {
       name: input.name,
       tokenHash: hashToken(token),
       tokenPrefix: token.slice(0, 10),
-      roles: input.roles.join(","),
+      roles: input.roles === null ? followsOwnerRoles : input.roles.join(","),
       expiresAt: input.expiresAt,
     })
     .$returningId();
@@ -54,7 +57,11 @@ export async function listApiTokens(userId: string) {
     .where(eq(apiTokens.userId, userId))
     .orderBy(desc(apiTokens.createdAt))
     .limit(200);
-  return rows.map((row) => ({ ...row, roles: parseRoles(row.roles) }));
+  return rows.map((row) => ({
+    ...row,
+    followsOwner: row.roles === followsOwnerRoles,
+    roles: parseRoles(row.roles),
+  }));
 }
 
 /** Revokes one of the owner's tokens. Returns false when there is no such live token. */
@@ -122,6 +129,9 @@ export async function userFromApiToken(
     id: row.userId,
     email: row.email,
     name: row.name,
-    roles: parseRoles(row.roles).filter((role) => held.has(role)),
+    roles:
+      row.roles === followsOwnerRoles
+        ? [...held]
+        : parseRoles(row.roles).filter((role) => held.has(role)),
   };
 }

@@ -44,13 +44,11 @@ export async function recordFailedSignIn(
   email: string,
   ipAddress: string,
 ): Promise<void> {
-  await db
-    .insert(failedSignIns)
-    .values({
-      email: normalise(email).slice(0, 254),
-      ipAddress,
-      attemptedAt: new Date(),
-    });
+  await db.insert(failedSignIns).values({
+    email: normalise(email).slice(0, 254),
+    ipAddress,
+    attemptedAt: new Date(),
+  });
   // Keep the table small: rows older than the window never count again.
   await db
     .delete(failedSignIns)

@@ -44,7 +44,9 @@ export async function action({ request }: Route.ActionArgs) {
   }
   const submission = parseWithZod(formData, {
     schema: createTokenSchema.refine(
-      (value) => value.roles.every((role) => user.roles.includes(role)),
+      (value) =>
+        value.scope === "all" ||
+        value.roles.every((role) => user.roles.includes(role)),
       {
         path: ["roles"],
         message: "A token can only have roles you hold yourself.",
@@ -60,7 +62,7 @@ export async function action({ request }: Route.ActionArgs) {
   const { token } = await createApiToken({
     userId: user.id,
     name: submission.value.name,
-    roles: submission.value.roles,
+    roles: submission.value.scope === "all" ? null : submission.value.roles,
     expiresAt: tokenExpiry(submission.value.lifetimeDays),
   });
   return {
@@ -83,7 +85,7 @@ export default function Account({
   const [form, fields] = useForm({
     id: "new-token",
     lastResult: actionData?.result,
-    defaultValue: { roles: user.roles, lifetimeDays: "90" },
+    defaultValue: { scope: "all", roles: user.roles, lifetimeDays: "90" },
     constraint: getZodConstraint(createTokenSchema),
     shouldValidate: "onBlur",
     onValidate({ formData }) {
@@ -153,13 +155,33 @@ export default function Account({
               <option value="never">until revoked</option>
             </select>
           </div>
-          <div className="md:col-span-2">
+          <fieldset className="space-y-3 md:col-span-2">
+            <legend className="field-label">Roles the token acts with</legend>
+            <label className="flex items-center gap-2 text-sm">
+              <input
+                type="radio"
+                name={fields.scope.name}
+                value="all"
+                defaultChecked
+                className="h-4 w-4 accent-copper-600"
+              />
+              All my roles, as they are each time it is used
+            </label>
+            <label className="flex items-center gap-2 text-sm">
+              <input
+                type="radio"
+                name={fields.scope.name}
+                value="chosen"
+                className="h-4 w-4 accent-copper-600"
+              />
+              Only the roles ticked below (never more than I hold)
+            </label>
             <RoleCheckboxes
               field={fields.roles}
-              legend="Roles the token acts with"
+              legend="Roles for “only these”"
               choices={user.roles}
             />
-          </div>
+          </fieldset>
           <div>
             <button
               type="submit"
@@ -213,7 +235,11 @@ export default function Account({
                       <code>{token.tokenPrefix}…</code>
                     </td>
                     <td>
-                      {token.roles.map((role) => roleLabels[role]).join(", ")}
+                      {token.followsOwner
+                        ? "all of yours"
+                        : token.roles
+                            .map((role) => roleLabels[role])
+                            .join(", ")}
                     </td>
                     <td>{formatDateTime(token.createdAt)}</td>
                     <td>

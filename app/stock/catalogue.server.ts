@@ -7,6 +7,7 @@ import {
   findAwgSize,
   findIecNominalDiameter,
 } from "~/engineering/reference-data";
+import { magnetVolumeMm3 } from "~/engineering/magnet-estimate";
 import { findMagnetGradeByName } from "~/reference/magnet-grades.server";
 import { iecSizeLabel } from "~/reference/wire-size-labels";
 import type { ItemCreateInput, ItemPatchInput } from "./item-schemas";
@@ -114,6 +115,7 @@ export async function createItem(
         `Unknown magnet grade "${input.grade}".`,
         "grade",
       );
+    magnetVolumeMm3(input.shape); // refuses impossible shapes (a ring whose hole is wider than the ring …)
     unit = "pcs";
     sizeOrGrade = `${grade.name} ${shapeLabel(input)}`;
     const { kind: shape, ...dimensions } = input.shape;
@@ -127,6 +129,17 @@ export async function createItem(
   } else {
     unit = input.unit;
     sizeOrGrade = "";
+  }
+
+  if (unit === "pcs") {
+    for (const field of ["reorderPoint", "reorderQuantity"] as const) {
+      if (!Number.isInteger(input[field]))
+        throw new StockError(
+          400,
+          `${input.sku} is counted in whole pieces.`,
+          field,
+        );
+    }
   }
 
   try {

@@ -8,9 +8,7 @@ import {
 } from "~/engineering/wire-geometry";
 
 /** The wire item's geometry (bare diameter, linear mass, metres per kg …), or null for other items. */
-export async function wireItemProperties(
-  itemId: number,
-): Promise<
+export async function wireItemProperties(itemId: number): Promise<
   | (WireProperties & {
       conductor: string;
       standard: string;

@@ -22,7 +22,7 @@ async function createToken(
 ): Promise<string> {
   const response = await postForm(
     "/account",
-    { intent: "create", lifetimeDays: "90", ...fields },
+    { intent: "create", lifetimeDays: "90", scope: "chosen", ...fields },
     cookie,
   );
   expect(response.status).toBe(200);
@@ -71,7 +71,13 @@ describe("personal API tokens", () => {
     const cookie = await signIn(email, password);
     const response = await postForm(
       "/account",
-      { intent: "create", name: "x", roles: ["admin"], lifetimeDays: "30" },
+      {
+        intent: "create",
+        name: "x",
+        scope: "chosen",
+        roles: ["admin"],
+        lifetimeDays: "30",
+      },
       cookie,
     );
     expect(response.status).toBe(400);
@@ -111,6 +117,37 @@ describe("personal API tokens", () => {
       cookie,
     );
     expect(revoke.status).toBe(200);
+    expect((await withToken("/api/v1/me", token)).status).toBe(401);
+  });
+
+  it("by default act with the owner's roles at the time of use", async () => {
+    const email = uniqueEmail("follows");
+    const userId = await createPerson({ email, password, roles: ["buyer"] });
+    const cookie = await signIn(email, password);
+    const token = await createToken(cookie, {
+      name: "follows me",
+      scope: "all",
+    });
+    expect(
+      (
+        (await (await withToken("/api/v1/me", token)).json()) as {
+          user: { roles: string[] };
+        }
+      ).user.roles,
+    ).toEqual(["buyer"]);
+    await testDatabase().query(
+      "INSERT INTO user_roles (user_id, role) VALUES (?, 'storekeeper')",
+      [userId],
+    );
+    const roles = (
+      (await (await withToken("/api/v1/me", token)).json()) as {
+        user: { roles: string[] };
+      }
+    ).user.roles;
+    expect(roles.sort()).toEqual(["buyer", "storekeeper"]);
+    await testDatabase().query("UPDATE users SET active = 0 WHERE id = ?", [
+      userId,
+    ]);
     expect((await withToken("/api/v1/me", token)).status).toBe(401);
   });
 

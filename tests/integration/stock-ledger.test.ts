@@ -527,3 +527,45 @@ describe("items API", () => {
     expect(locationsList.map((location) => location.code)).toContain(mainStore);
   });
 });
+
+describe("items API refuses impossible items", () => {
+  it("refuses a ring whose hole is wider than the ring and a fractional piece count", async () => {
+    const ring = await sendJson(
+      "POST",
+      "/api/v1/items",
+      {
+        kind: "magnet",
+        sku: uniqueCode("MG"),
+        name: "bad ring",
+        grade: "N42SH",
+        shape: {
+          kind: "ring",
+          outerDiameterMm: 10,
+          innerDiameterMm: 12,
+          thicknessMm: 2,
+        },
+        coating: "NiCuNi",
+        magnetisation: "axial",
+      },
+      buyer,
+    );
+    expect(ring.status).toBe(400);
+    expect(Object.keys((await ring.json()).error.fields)[0]).toMatch(
+      /^shape\./,
+    );
+    const fractional = await sendJson(
+      "POST",
+      "/api/v1/items",
+      {
+        kind: "part",
+        sku: uniqueCode("P"),
+        name: "bearing",
+        unit: "pcs",
+        reorderPoint: 2.5,
+      },
+      buyer,
+    );
+    expect(fractional.status).toBe(400);
+    expect((await fractional.json()).error.fields.reorderPoint).toBeTruthy();
+  });
+});

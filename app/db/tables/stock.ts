@@ -76,6 +76,11 @@ export const items = mysqlTable(
       precision: 20,
       scale: 4,
     }).generatedAlwaysAs(sql`on_hand * average_cost`, { mode: "stored" }),
+    /** What the stock list's search box looks in: SKU, name and size, lower case (binary collation: fast LIKE). */
+    searchText: varchar("search_text", { length: 300 }).generatedAlwaysAs(
+      sql`LOWER(CONCAT_WS(' ', sku, name, size_or_grade))`,
+      { mode: "stored" },
+    ),
     belowReorder: boolean("below_reorder").generatedAlwaysAs(
       sql`reorder_point > 0 AND on_hand - reserved < reorder_point`,
       { mode: "stored" },
@@ -91,6 +96,12 @@ export const items = mysqlTable(
     index("items_kind_idx").on(table.kind, table.sku),
     index("items_active_idx").on(table.active, table.sku),
     index("items_value_idx").on(table.active, table.stockValue),
+    index("items_kind_value_idx").on(
+      table.active,
+      table.kind,
+      table.stockValue,
+    ),
+    index("items_search_idx").on(table.active, table.searchText),
     index("items_available_idx").on(table.active, table.available),
     index("items_below_reorder_idx").on(
       table.active,
