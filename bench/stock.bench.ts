@@ -117,7 +117,7 @@ export async function benchStock(input: {
         values.push(`%${search.toLowerCase()}%`);
       }
       const order =
-        params.get("sort") === "value" ? "stock_value DESC, sku" : "sku";
+        params.get("sort") === "value" ? "stock_value DESC, id DESC" : "sku";
       const started = performance.now();
       await connection.query(
         `SELECT COUNT(*) FROM items WHERE ${where.join(" AND ")}`,

@@ -68,10 +68,13 @@ const sortColumns: Record<ItemSortKey, SQL | typeof items.sku> = {
 export async function listItems(query: ItemListQuery) {
   const where = itemFilters(query);
   const sortColumn = sortColumns[query.sort ?? "sku"];
-  const order = [
-    query.descending ? desc(sortColumn) : asc(sortColumn),
-    asc(items.sku),
-  ];
+  // Ties break on the id in the same direction: every index ends with the id, so the
+  // page is read in index order without sorting (the SKU is unique, so it needs no tie-break).
+  const direction = query.descending ? desc : asc;
+  const order =
+    query.sort === undefined || query.sort === "sku"
+      ? [direction(items.sku)]
+      : [direction(sortColumn), direction(items.id)];
   const [counted] = await db
     .select({ total: count() })
     .from(items)

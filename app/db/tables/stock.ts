@@ -101,7 +101,7 @@ export const items = mysqlTable(
       table.kind,
       table.stockValue,
     ),
-    index("items_search_idx").on(table.active, table.searchText),
+    index("items_search_idx").on(table.active, table.searchText, table.sku),
     index("items_available_idx").on(table.active, table.available),
     index("items_below_reorder_idx").on(
       table.active,
