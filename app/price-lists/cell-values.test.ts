@@ -1,0 +1,171 @@
+import { describe, expect, it } from "vitest";
+import {
+  moneyRules,
+  quantityRules,
+  readDate,
+  readDecimal,
+  readDiameterMm,
+  readInsulation,
+  readKind,
+  readThermalClass,
+  readUnit,
+  readWireStandard,
+} from "./cell-values";
+
+const money = { ...moneyRules, decimalComma: false };
+const moneyWithComma = { ...moneyRules, decimalComma: true };
+
+describe("decimal numbers", () => {
+  it("reads prices exactly to 4 places", () => {
+    expect(readDecimal("12.5", money)).toEqual({
+      ok: true,
+      text: "12.5000",
+      isZero: false,
+    });
+    expect(readDecimal("0012.34560", money)).toMatchObject({ text: "12.3456" });
+    expect(readDecimal("0", money)).toEqual({
+      ok: true,
+      text: "0.0000",
+      isZero: true,
+    });
+    expect(readDecimal("7", { ...quantityRules, decimalComma: false })).toEqual(
+      { ok: true, text: "7.000", isZero: false },
+    );
+  });
+
+  it("reads a decimal comma only when allowed", () => {
+    expect(readDecimal("12,5", moneyWithComma)).toMatchObject({
+      text: "12.5000",
+    });
+    expect(readDecimal("12.5", moneyWithComma)).toMatchObject({
+      text: "12.5000",
+    });
+    expect(readDecimal("12,5", money)).toEqual({
+      ok: false,
+      problem: "comma-not-allowed",
+    });
+    expect(readDecimal("1,234.50", money)).toEqual({
+      ok: false,
+      problem: "comma-not-allowed",
+    });
+  });
+
+  it("reads points between thousands in decimal-comma files, but not a lone 1.234", () => {
+    expect(readDecimal("1.234,50", moneyWithComma)).toMatchObject({
+      text: "1234.5000",
+    });
+    expect(readDecimal("1.234.567", moneyWithComma)).toMatchObject({
+      text: "1234567.0000",
+    });
+    expect(readDecimal("1.234", moneyWithComma)).toEqual({
+      ok: false,
+      problem: "ambiguous-point",
+    });
+    expect(readDecimal("0.125", moneyWithComma)).toMatchObject({
+      text: "0.1250",
+    });
+    expect(readDecimal("1234.500", moneyWithComma)).toMatchObject({
+      text: "1234.5000",
+    });
+    expect(readDecimal("1.234", money)).toMatchObject({ text: "1.2340" });
+    expect(readDecimal("1.234,50", money)).toMatchObject({ ok: false });
+  });
+
+  it("names what is wrong", () => {
+    expect(readDecimal("-3", money)).toEqual({
+      ok: false,
+      problem: "negative",
+    });
+    expect(readDecimal("abc", money)).toEqual({
+      ok: false,
+      problem: "not-a-number",
+    });
+    for (const cell of ["1,234.50", "1e3", "€12", "12 50", "", "+1", "1."]) {
+      expect(readDecimal(cell, moneyWithComma)).toMatchObject({ ok: false });
+    }
+    expect(readDecimal("1.23456", money)).toEqual({
+      ok: false,
+      problem: "too-many-decimals",
+    });
+    expect(readDecimal("12345678901", money)).toEqual({
+      ok: false,
+      problem: "too-large",
+    });
+  });
+});
+
+describe("dates", () => {
+  it("reads ISO, dotted and slashed day-first dates", () => {
+    expect(readDate("2025-03-01")).toEqual({ ok: true, isoDate: "2025-03-01" });
+    expect(readDate("01.03.2025")).toEqual({ ok: true, isoDate: "2025-03-01" });
+    expect(readDate("1.3.2025")).toEqual({ ok: true, isoDate: "2025-03-01" });
+    expect(readDate("01/03/2025")).toEqual({ ok: true, isoDate: "2025-03-01" });
+    expect(readDate("25/03/2025")).toEqual({ ok: true, isoDate: "2025-03-25" });
+  });
+
+  it("refuses month-first dates, impossible days and other spellings", () => {
+    expect(readDate("03/25/2025")).toEqual({
+      ok: false,
+      problem: "month-first",
+    });
+    expect(readDate("2025-02-29")).toEqual({
+      ok: false,
+      problem: "no-such-day",
+    });
+    expect(readDate("31.04.2025")).toEqual({
+      ok: false,
+      problem: "no-such-day",
+    });
+    expect(readDate("2024-02-29")).toMatchObject({ ok: true });
+    expect(readDate("0025-01-01")).toEqual({
+      ok: false,
+      problem: "unlikely-year",
+    });
+    for (const cell of ["1 March 2025", "2025/03/01", "01.03.25", "45717"]) {
+      expect(readDate(cell)).toEqual({ ok: false, problem: "not-a-date" });
+    }
+  });
+});
+
+describe("words", () => {
+  it("reads kinds, units and standards", () => {
+    expect(readKind("Magnet wire")).toBe("wire");
+    expect(readKind("MAGNETS")).toBe("magnet");
+    expect(readKind("other")).toBe("part");
+    expect(readKind("spool")).toBeUndefined();
+    expect(readKind("constructor")).toBeUndefined();
+    expect(readUnit("Kg")).toBe("kg");
+    expect(readUnit("pc.")).toBe("pcs");
+    expect(readUnit("metres")).toBe("m");
+    expect(readUnit("box")).toBeUndefined();
+    expect(readWireStandard("awg")).toBe("AWG");
+    expect(readWireStandard("IEC 60317-0-1")).toBe("IEC");
+    expect(readWireStandard("SWG")).toBeUndefined();
+  });
+
+  it("reads insulation spellings", () => {
+    expect(readInsulation("grade 2")).toBe("grade2");
+    expect(readInsulation("G2")).toBe("grade2");
+    expect(readInsulation("Gr. 3")).toBe("grade3");
+    expect(readInsulation("heavy build")).toBe("heavy");
+    expect(readInsulation("Single")).toBe("single");
+    expect(readInsulation("TB")).toBe("triple");
+    expect(readInsulation("grade 4")).toBeUndefined();
+  });
+
+  it("reads thermal classes as numbers or letters", () => {
+    expect(readThermalClass("155")).toBe(155);
+    expect(readThermalClass("180 °C")).toBe(180);
+    expect(readThermalClass("Class F")).toBe(155);
+    expect(readThermalClass("h")).toBe(180);
+    expect(readThermalClass("170")).toBeUndefined();
+  });
+
+  it("reads IEC diameters with units and signs around them", () => {
+    expect(readDiameterMm("0.5", false)).toBe(0.5);
+    expect(readDiameterMm("Ø 0,50 mm", true)).toBe(0.5);
+    expect(readDiameterMm("0,5", false)).toBeUndefined();
+    expect(readDiameterMm("1.250", true)).toBe(1.25);
+    expect(readDiameterMm("thin", false)).toBeUndefined();
+  });
+});

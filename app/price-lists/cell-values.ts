@@ -1,0 +1,327 @@
+/**
+ * Reads single cells of a price list: decimal numbers, dates, and the words
+ * suppliers use for kinds, units, wire standards, insulation and thermal
+ * classes. Each reader returns the value or a short problem code; the row
+ * reader turns codes into sentences that name the field and quote the cell.
+ *
+ * Pure: runs in Node and in the browser.
+ */
+import {
+  THERMAL_CLASSES,
+  type InsulationKey,
+  type ThermalClass,
+  type WireStandard,
+} from "~/engineering/reference-data";
+import type { ItemKind, StockUnit } from "~/db/tables/stock-enums";
+
+// ---------------------------------------------------------------------------
+// Decimal numbers
+// ---------------------------------------------------------------------------
+
+export interface DecimalRules {
+  /** Decimal places kept; more non-zero decimals are refused. */
+  decimals: number;
+  /** Digits allowed before the decimal separator. */
+  maxWholeDigits: number;
+  /** "12,5" is read as 12.5 (semicolon-separated files only). */
+  decimalComma: boolean;
+}
+
+export type DecimalProblem =
+  | "not-a-number"
+  | "comma-not-allowed"
+  | "ambiguous-point"
+  | "negative"
+  | "too-many-decimals"
+  | "too-large";
+
+export type DecimalReading =
+  | {
+      ok: true;
+      /** The value as decimal text with exactly `decimals` places: "12.5000". */
+      text: string;
+      isZero: boolean;
+    }
+  | { ok: false; problem: DecimalProblem };
+
+/** Money per unit: 4 decimals, like the DECIMAL(14,4) columns of the stock tables. */
+export const moneyRules = { decimals: 4, maxWholeDigits: 10 } as const;
+/** Quantities: 3 decimals, like the DECIMAL(14,3) columns of the stock tables. */
+export const quantityRules = { decimals: 3, maxWholeDigits: 11 } as const;
+
+/** "12", "12.5", "12,5". */
+const plainDecimal = /^(\d+)(?:([.,])(\d+))?$/;
+/** "1.234,50", "1.234.567": points between groups of thousands, as decimal-comma spreadsheets write them. */
+const pointGroupedDecimal = /^(\d{1,3}(?:\.\d{3})+)(?:,(\d+))?$/;
+/** "1,234.50", "1,234,567". */
+const commaGroupedDecimal = /^\d{1,3}(?:,\d{3})+(?:\.\d+)?$/;
+
+/**
+ * Reads "12.5", "0.1250" and, with `decimalComma`, "12,5" and "1.234,50"
+ * exactly, without floating point. Refused: a leading minus (reported as
+ * negative), exponents, currency signs, commas in files without decimal
+ * commas, and "1.234" in a decimal-comma file, where it could mean 1.234 or
+ * 1234.
+ */
+export function readDecimal(cell: string, rules: DecimalRules): DecimalReading {
+  const negative = cell.startsWith("-");
+  const parts = splitDecimal(
+    negative ? cell.slice(1) : cell,
+    rules.decimalComma,
+  );
+  if ("problem" in parts) return { ok: false, problem: parts.problem };
+  const whole = parts.whole.replace(/^0+(?=\d)/, "");
+  const fraction = parts.fraction.replace(/0+$/, "");
+  const isZero = /^0*$/.test(whole) && fraction === "";
+  if (negative && !isZero) return { ok: false, problem: "negative" };
+  if (fraction.length > rules.decimals) {
+    return { ok: false, problem: "too-many-decimals" };
+  }
+  if (whole.length > rules.maxWholeDigits) {
+    return { ok: false, problem: "too-large" };
+  }
+  const places = fraction.padEnd(rules.decimals, "0");
+  return {
+    ok: true,
+    text: rules.decimals > 0 ? `${whole}.${places}` : whole,
+    isZero,
+  };
+}
+
+function splitDecimal(
+  text: string,
+  decimalComma: boolean,
+): { whole: string; fraction: string } | { problem: DecimalProblem } {
+  const plain = plainDecimal.exec(text);
+  if (plain) {
+    const [, whole = "", separator, fraction = ""] = plain;
+    if (separator === "," && !decimalComma) {
+      return { problem: "comma-not-allowed" };
+    }
+    const pointMayGroupThousands =
+      separator === "." && fraction.length === 3 && !/^0+$/.test(whole);
+    if (decimalComma && pointMayGroupThousands && whole.length <= 3) {
+      return { problem: "ambiguous-point" };
+    }
+    return { whole, fraction };
+  }
+  if (decimalComma) {
+    const grouped = pointGroupedDecimal.exec(text);
+    if (grouped) {
+      return {
+        whole: grouped[1]!.replaceAll(".", ""),
+        fraction: grouped[2] ?? "",
+      };
+    }
+  } else if (commaGroupedDecimal.test(text)) {
+    return { problem: "comma-not-allowed" };
+  }
+  return { problem: "not-a-number" };
+}
+
+// ---------------------------------------------------------------------------
+// Dates
+// ---------------------------------------------------------------------------
+
+export type DateReading =
+  | { ok: true; isoDate: string }
+  | {
+      ok: false;
+      problem: "not-a-date" | "month-first" | "no-such-day" | "unlikely-year";
+    };
+
+const isoDate = /^(\d{4})-(\d{2})-(\d{2})$/;
+const dayFirstDate = /^(\d{1,2})([./])(\d{1,2})\2(\d{4})$/;
+
+/** Years outside this range are taken for typing mistakes. */
+const earliestYear = 1900;
+const latestYear = 2999;
+
+/**
+ * Reads 2025-03-01, 01.03.2025 and 01/03/2025 (day first) as "2025-03-01".
+ * Slashes are always read day first; a date that only makes sense month first
+ * (03/25/2025) is refused rather than guessed.
+ */
+export function readDate(cell: string): DateReading {
+  const iso = isoDate.exec(cell);
+  if (iso) return checkedDate(+iso[1]!, +iso[2]!, +iso[3]!);
+  const dayFirst = dayFirstDate.exec(cell);
+  if (!dayFirst) return { ok: false, problem: "not-a-date" };
+  const [, day, separator, month, year] = dayFirst;
+  if (separator === "/" && +month! > 12 && +day! <= 12) {
+    return { ok: false, problem: "month-first" };
+  }
+  return checkedDate(+year!, +month!, +day!);
+}
+
+function checkedDate(year: number, month: number, day: number): DateReading {
+  if (year < earliestYear || year > latestYear) {
+    return { ok: false, problem: "unlikely-year" };
+  }
+  const date = new Date(Date.UTC(year, month - 1, day));
+  if (
+    date.getUTCFullYear() !== year ||
+    date.getUTCMonth() !== month - 1 ||
+    date.getUTCDate() !== day
+  ) {
+    return { ok: false, problem: "no-such-day" };
+  }
+  return {
+    ok: true,
+    isoDate: `${year}-${String(month).padStart(2, "0")}-${String(day).padStart(2, "0")}`,
+  };
+}
+
+/** True for a YYYY-MM-DD text that is a real day. */
+export function isIsoDate(text: string): boolean {
+  return isoDate.test(text) && readDate(text).ok;
+}
+
+// ---------------------------------------------------------------------------
+// Words
+// ---------------------------------------------------------------------------
+
+/** "Heavy build" → "heavybuild", "G-2" → "g2", "155 °C" → "155c". */
+function compact(cell: string): string {
+  return cell
+    .normalize("NFD")
+    .replace(/\p{M}/gu, "")
+    .toLowerCase()
+    .replace(/[^\p{L}\p{N}]+/gu, "");
+}
+
+function lookUp<Value>(
+  words: Readonly<Record<string, Value>>,
+  cell: string,
+): Value | undefined {
+  const key = compact(cell);
+  return Object.hasOwn(words, key) ? words[key] : undefined;
+}
+
+const kindWords: Readonly<Record<string, ItemKind>> = {
+  wire: "wire",
+  magnetwire: "wire",
+  windingwire: "wire",
+  enamelledwire: "wire",
+  enameledwire: "wire",
+  copperwire: "wire",
+  aluminiumwire: "wire",
+  aluminumwire: "wire",
+  magnet: "magnet",
+  magnets: "magnet",
+  permanentmagnet: "magnet",
+  part: "part",
+  parts: "part",
+  other: "part",
+  component: "part",
+};
+
+/** "wire", "Magnet wire", "magnets", "part", "other" … */
+export function readKind(cell: string): ItemKind | undefined {
+  return lookUp(kindWords, cell);
+}
+
+const unitWords: Readonly<Record<string, StockUnit>> = {
+  kg: "kg",
+  kgs: "kg",
+  kilo: "kg",
+  kilogram: "kg",
+  kilograms: "kg",
+  kilogramme: "kg",
+  pcs: "pcs",
+  pc: "pcs",
+  piece: "pcs",
+  pieces: "pcs",
+  ea: "pcs",
+  each: "pcs",
+  stk: "pcs",
+  st: "pcs",
+  stuck: "pcs",
+  m: "m",
+  metre: "m",
+  metres: "m",
+  meter: "m",
+  meters: "m",
+};
+
+/** "kg", "pcs", "pc", "each", "m", "metre" … */
+export function readUnit(cell: string): StockUnit | undefined {
+  return lookUp(unitWords, cell);
+}
+
+/** "AWG", "NEMA MW 1000" → AWG; "IEC", "IEC 60317", "metric" → IEC. */
+export function readWireStandard(cell: string): WireStandard | undefined {
+  const key = compact(cell);
+  if (key === "awg" || key.startsWith("nema")) return "AWG";
+  if (key.startsWith("iec") || key === "metric") return "IEC";
+  return undefined;
+}
+
+const insulationWords: Readonly<Record<string, InsulationKey>> = {
+  grade1: "grade1",
+  grad1: "grade1",
+  gr1: "grade1",
+  g1: "grade1",
+  grade2: "grade2",
+  grad2: "grade2",
+  gr2: "grade2",
+  g2: "grade2",
+  grade3: "grade3",
+  grad3: "grade3",
+  gr3: "grade3",
+  g3: "grade3",
+  single: "single",
+  singlebuild: "single",
+  sb: "single",
+  heavy: "heavy",
+  heavybuild: "heavy",
+  hb: "heavy",
+  double: "heavy",
+  doublebuild: "heavy",
+  triple: "triple",
+  triplebuild: "triple",
+  tb: "triple",
+};
+
+/** "grade 2", "Grade2", "G2", "gr. 2", "heavy build", "HB", "double" … */
+export function readInsulation(cell: string): InsulationKey | undefined {
+  return lookUp(insulationWords, cell);
+}
+
+/** The standard an insulation key belongs to: grades are IEC, builds are AWG. */
+export function insulationStandard(key: InsulationKey): WireStandard {
+  return key.startsWith("grade") ? "IEC" : "AWG";
+}
+
+/** "155", "155 °C", "class 155", "F", "Class F" → 155. */
+export function readThermalClass(cell: string): ThermalClass | undefined {
+  const key = compact(cell)
+    .replace(/^class/, "")
+    .replace(/c$/, "");
+  const row = THERMAL_CLASSES.find(
+    (thermal) =>
+      String(thermal.classC) === key || thermal.letter.toLowerCase() === key,
+  );
+  return row?.classC;
+}
+
+/**
+ * An IEC size cell as a number of mm: "0.5", "0.500", "0,5" (with
+ * `decimalComma`), "0.5 mm", "Ø 0.5". Undefined when it is not a number.
+ */
+export function readDiameterMm(
+  cell: string,
+  decimalComma: boolean,
+): number | undefined {
+  const bare = cell
+    .replace(/^[Ø⌀ø]\s*/, "")
+    .replace(/\s*mm$/i, "")
+    .trim();
+  // Diameters never group thousands, so a point is always a decimal point.
+  const reading = readDecimal(decimalComma ? bare.replace(",", ".") : bare, {
+    decimals: 6,
+    maxWholeDigits: 3,
+    decimalComma: false,
+  });
+  return reading.ok ? Number(reading.text) : undefined;
+}

@@ -1,0 +1,59 @@
+/**
+ * The currencies a supplier price list may quote in: ISO 4217 three-letter
+ * codes. The list covers the countries magnet wire and magnets are commonly
+ * bought from; codes and names are from memory of ISO 4217. Pure: no I/O.
+ */
+
+export const CURRENCIES = [
+  { code: "EUR", name: "Euro" },
+  { code: "USD", name: "US dollar" },
+  { code: "GBP", name: "Pound sterling" },
+  { code: "CHF", name: "Swiss franc" },
+  { code: "SEK", name: "Swedish krona" },
+  { code: "NOK", name: "Norwegian krone" },
+  { code: "DKK", name: "Danish krone" },
+  { code: "PLN", name: "Polish złoty" },
+  { code: "CZK", name: "Czech koruna" },
+  { code: "HUF", name: "Hungarian forint" },
+  { code: "RON", name: "Romanian leu" },
+  { code: "TRY", name: "Turkish lira" },
+  { code: "JPY", name: "Japanese yen" },
+  { code: "CNY", name: "Chinese yuan renminbi" },
+  { code: "KRW", name: "South Korean won" },
+  { code: "TWD", name: "New Taiwan dollar" },
+  { code: "HKD", name: "Hong Kong dollar" },
+  { code: "SGD", name: "Singapore dollar" },
+  { code: "INR", name: "Indian rupee" },
+  { code: "THB", name: "Thai baht" },
+  { code: "MYR", name: "Malaysian ringgit" },
+  { code: "VND", name: "Vietnamese dong" },
+  { code: "CAD", name: "Canadian dollar" },
+  { code: "AUD", name: "Australian dollar" },
+  { code: "NZD", name: "New Zealand dollar" },
+  { code: "MXN", name: "Mexican peso" },
+  { code: "BRL", name: "Brazilian real" },
+  { code: "ZAR", name: "South African rand" },
+  { code: "ILS", name: "Israeli new shekel" },
+  { code: "AED", name: "UAE dirham" },
+] as const;
+
+export type CurrencyCode = (typeof CURRENCIES)[number]["code"];
+
+/** The codes alone, for select lists and schemas. */
+export const currencyCodes: readonly CurrencyCode[] = CURRENCIES.map(
+  (currency) => currency.code,
+);
+
+const knownCodes: ReadonlySet<string> = new Set(currencyCodes);
+
+/** The code for a cell like "EUR", "eur" or " Eur ", or undefined when it is not in the list. */
+export function findCurrencyCode(text: string): CurrencyCode | undefined {
+  const code = text.trim().toUpperCase();
+  return knownCodes.has(code) ? (code as CurrencyCode) : undefined;
+}
+
+/** Symbols people type instead of a code, with the one code each stands for (used for hints only). */
+export const currencySymbolHints: Readonly<Record<string, CurrencyCode>> = {
+  "€": "EUR",
+  "£": "GBP",
+};

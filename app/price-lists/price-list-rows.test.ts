@@ -1,0 +1,431 @@
+import { describe, expect, it } from "vitest";
+import type { FieldColumns, PriceListField } from "./column-mapping";
+import {
+  PriceListRowCollector,
+  readPriceListRow,
+  type PriceListRowContext,
+  type PriceListRowReading,
+} from "./price-list-rows";
+
+/** The columns of the test file, in this order. */
+const testFields: readonly PriceListField[] = [
+  "supplierSku",
+  "description",
+  "kind",
+  "standard",
+  "size",
+  "grade",
+  "insulation",
+  "thermalClass",
+  "unit",
+  "price",
+  "adderPerKg",
+  "currency",
+  "minQuantity",
+  "validFrom",
+];
+const allColumns: FieldColumns = Object.fromEntries(
+  testFields.map((field, index) => [field, index]),
+);
+
+const context: PriceListRowContext = {
+  columns: allColumns,
+  decimalComma: false,
+  importDay: "2025-06-02",
+  knownGrades: new Set(["n42sh", "n52", "y30", "c5 (y30)"]),
+};
+
+/** A data row from the fields given; the rest are blank cells. */
+function dataRow(
+  line: number,
+  values: Partial<Record<PriceListField, string>>,
+) {
+  return { line, cells: testFields.map((field) => values[field] ?? "") };
+}
+
+function read(
+  values: Partial<Record<PriceListField, string>>,
+  overrides: Partial<PriceListRowContext> = {},
+): PriceListRowReading {
+  return readPriceListRow(dataRow(14, values), { ...context, ...overrides });
+}
+
+function messageOf(reading: PriceListRowReading): string {
+  if (reading.ok) throw new Error("expected an error");
+  return reading.error.message;
+}
+
+const awgWire = {
+  supplierSku: "CU-20H",
+  standard: "AWG",
+  size: "20",
+  price: "14.20",
+  currency: "USD",
+};
+const magnet = {
+  supplierSku: "BLK-20-10-5",
+  grade: "N42SH",
+  price: "1.85",
+  currency: "EUR",
+};
+
+describe("good rows", () => {
+  it("reads an AWG wire row with defaults for unit, quantity and day", () => {
+    expect(
+      read({ ...awgWire, insulation: "heavy build", thermalClass: "F" }),
+    ).toEqual({
+      ok: true,
+      row: {
+        line: 14,
+        supplierSku: "CU-20H",
+        description: "",
+        kind: "wire",
+        unit: "kg",
+        standard: "AWG",
+        size: "20",
+        insulation: "heavy",
+        thermalClass: 155,
+        price: "14.2000",
+        adderPerKg: null,
+        currency: "USD",
+        minQuantity: "1.000",
+        validFrom: "2025-06-02",
+      },
+    });
+  });
+
+  it("reads an IEC wire row priced as an adder on the metal base", () => {
+    const reading = read(
+      {
+        supplierSku: "CU-0500-G2",
+        description: "  Enamelled copper Ø0,5 mm  ",
+        standard: "IEC",
+        size: "0,5",
+        insulation: "G2",
+        thermalClass: "180",
+        adderPerKg: "3,15",
+        currency: "eur",
+        minQuantity: "25,5",
+        validFrom: "01.07.2025",
+      },
+      { decimalComma: true },
+    );
+    expect(reading).toMatchObject({
+      ok: true,
+      row: {
+        kind: "wire",
+        description: "Enamelled copper Ø0,5 mm",
+        size: "0.500",
+        insulation: "grade2",
+        thermalClass: 180,
+        price: null,
+        adderPerKg: "3.1500",
+        currency: "EUR",
+        minQuantity: "25.500",
+        validFrom: "2025-07-01",
+      },
+    });
+  });
+
+  it("reads the aught AWG sizes as the reference tables label them", () => {
+    expect(read({ ...awgWire, size: "4/0" })).toMatchObject({
+      row: { size: "0000" },
+    });
+    expect(read({ ...awgWire, size: "AWG 46" })).toMatchObject({
+      row: { size: "46" },
+    });
+  });
+
+  it("reads a magnet row with a quantity break, and a part row", () => {
+    expect(read({ ...magnet, minQuantity: "500", unit: "pcs" })).toMatchObject({
+      ok: true,
+      row: {
+        kind: "magnet",
+        unit: "pcs",
+        grade: "N42SH",
+        gradeMatch: "n42sh",
+        minQuantity: "500.000",
+      },
+    });
+    expect(
+      read({ supplierSku: "6204-2RS", price: "2.10", currency: "EUR" }),
+    ).toMatchObject({ ok: true, row: { kind: "part", unit: "pcs" } });
+    expect(
+      read({ supplierSku: "SLEEVE", unit: "m", price: "0.4", currency: "EUR" }),
+    ).toMatchObject({ ok: true, row: { kind: "part", unit: "m" } });
+  });
+
+  it("takes the supplier's currency when the row has none", () => {
+    expect(
+      read({ ...magnet, currency: "" }, { supplierCurrency: "CHF" }),
+    ).toMatchObject({ ok: true, row: { currency: "CHF" } });
+  });
+
+  it("follows the kind column over the inference", () => {
+    expect(read({ ...magnet, kind: "part", grade: "anything" })).toMatchObject({
+      ok: true,
+      row: { kind: "part" },
+    });
+    // A magnet list with a dimension column mapped to size is still magnets.
+    expect(read({ ...magnet, size: "20x10x5" })).toMatchObject({
+      ok: true,
+      row: { kind: "magnet" },
+    });
+  });
+});
+
+describe("bad prices and quantities", () => {
+  it("refuses a negative price", () => {
+    expect(messageOf(read({ ...magnet, price: "-3" }))).toBe(
+      'Line 14: the price "-3" is negative.',
+    );
+  });
+
+  it("refuses a price that is not a number", () => {
+    expect(messageOf(read({ ...magnet, price: "on request" }))).toBe(
+      'Line 14: the price "on request" is not a number.',
+    );
+    expect(messageOf(read({ ...magnet, price: "1,85" }))).toBe(
+      'Line 14: the price "1,85" has a comma; in a file separated by commas or tabs, write numbers with a decimal point and no thousands separator (1234.50).',
+    );
+    expect(
+      messageOf(read({ ...magnet, price: "1.850" }, { decimalComma: true })),
+    ).toBe(
+      'Line 14: the price "1.850" could mean 1,850 or 1850; in a file separated by semicolons, write it with a decimal comma and no thousands separator.',
+    );
+  });
+
+  it("refuses more than 4 decimals, an empty price, and both a price and an adder", () => {
+    expect(messageOf(read({ ...magnet, price: "1.23456" }))).toBe(
+      'Line 14: the price "1.23456" has more than 4 decimals.',
+    );
+    expect(messageOf(read({ ...magnet, price: "" }))).toBe(
+      "Line 14: the price and the adder per kg are both empty.",
+    );
+    expect(messageOf(read({ ...awgWire, adderPerKg: "3" }))).toBe(
+      "Line 14: the row gives both a price and an adder per kg; give one of them.",
+    );
+  });
+
+  it("refuses an adder per kg on a magnet", () => {
+    expect(messageOf(read({ ...magnet, price: "", adderPerKg: "2" }))).toBe(
+      "Line 14: an adder per kg is for wire priced on the metal base, and this row is a magnet.",
+    );
+  });
+
+  it("refuses a minimum quantity that is not a number, zero, or part of a piece", () => {
+    expect(messageOf(read({ ...magnet, minQuantity: "ten" }))).toBe(
+      'Line 14: the minimum quantity "ten" is not a number.',
+    );
+    expect(messageOf(read({ ...magnet, minQuantity: "0" }))).toBe(
+      'Line 14: the minimum quantity "0" must be more than zero.',
+    );
+    expect(messageOf(read({ ...magnet, minQuantity: "2.5" }))).toBe(
+      'Line 14: the minimum quantity "2.5" is not a whole number of pieces.',
+    );
+    expect(read({ ...awgWire, minQuantity: "2.5" })).toMatchObject({
+      ok: true,
+    });
+  });
+});
+
+describe("bad currencies, dates and text", () => {
+  it("refuses an unknown currency", () => {
+    expect(messageOf(read({ ...magnet, currency: "EUX" }))).toBe(
+      'Line 14: the currency "EUX" is not a currency code we know (use a three-letter ISO 4217 code such as EUR or USD).',
+    );
+    expect(messageOf(read({ ...magnet, currency: "€" }))).toBe(
+      'Line 14: the currency "€" is a sign, not a code; write EUR.',
+    );
+    expect(messageOf(read({ ...magnet, currency: "" }))).toBe(
+      "Line 14: the currency is empty and the supplier has no default currency.",
+    );
+  });
+
+  it("refuses a month-first date and impossible days", () => {
+    expect(messageOf(read({ ...magnet, validFrom: "03/25/2025" }))).toBe(
+      'Line 14: the date "03/25/2025" is written month first, which is not accepted because it is easily misread; write it as YYYY-MM-DD.',
+    );
+    expect(messageOf(read({ ...magnet, validFrom: "2025-02-30" }))).toBe(
+      'Line 14: the date "2025-02-30" does not exist.',
+    );
+  });
+
+  it("refuses an empty or overlong SKU and a description over 200 characters", () => {
+    expect(messageOf(read({ ...magnet, supplierSku: "" }))).toBe(
+      "Line 14: the supplier SKU is empty.",
+    );
+    expect(messageOf(read({ ...magnet, supplierSku: "S".repeat(61) }))).toBe(
+      `Line 14: the supplier SKU "${"S".repeat(39)}…" is longer than 60 characters.`,
+    );
+    expect(messageOf(read({ ...magnet, description: "x".repeat(201) }))).toBe(
+      "Line 14: the description has 201 characters; the limit is 200.",
+    );
+    expect(read({ ...magnet, description: "µ".repeat(200) })).toMatchObject({
+      ok: true,
+    });
+  });
+
+  it("lists every problem of a row in one message", () => {
+    expect(messageOf(read({ ...magnet, price: "-3", currency: "EUX" }))).toBe(
+      'Line 14: the price "-3" is negative; the currency "EUX" is not a currency code we know (use a three-letter ISO 4217 code such as EUR or USD).',
+    );
+  });
+});
+
+describe("bad wire and magnet details", () => {
+  it("refuses an unknown AWG size", () => {
+    expect(messageOf(read({ ...awgWire, size: "47" }))).toBe(
+      'Line 14: the AWG size "47" is not an AWG size from 4/0 to 46.',
+    );
+    expect(messageOf(read({ ...awgWire, size: "0.5" }))).toBe(
+      'Line 14: the AWG size "0.5" is not an AWG size from 4/0 to 46.',
+    );
+  });
+
+  it("refuses an IEC size that is not a nominal diameter", () => {
+    expect(
+      messageOf(read({ ...awgWire, standard: "IEC", size: "0.333" })),
+    ).toBe(
+      'Line 14: the IEC size "0.333" is not an IEC 60317 nominal diameter in mm (0.020 to 5.000, such as 0.500).',
+    );
+  });
+
+  it("refuses an unknown magnet grade", () => {
+    expect(messageOf(read({ ...magnet, grade: "N99XX" }))).toBe(
+      'Line 14: the magnet grade "N99XX" is not a grade we know; check the spelling, or have an admin add the grade first.',
+    );
+    expect(read({ ...magnet, grade: "C5  (Y30)" })).toMatchObject({
+      ok: true,
+      row: { gradeMatch: "c5 (y30)" },
+    });
+  });
+
+  it("refuses an unknown insulation grade and one from the other standard", () => {
+    expect(messageOf(read({ ...awgWire, insulation: "grade 4" }))).toBe(
+      'Line 14: the insulation "grade 4" is not one we know (grade 1, 2 or 3 for IEC wire; single, heavy or triple build for AWG wire).',
+    );
+    expect(messageOf(read({ ...awgWire, insulation: "grade 2" }))).toBe(
+      'Line 14: the insulation "grade 2" is an IEC grade; AWG wire takes single, heavy or triple build.',
+    );
+    expect(
+      messageOf(
+        read({ ...awgWire, standard: "IEC", size: "0.5", insulation: "heavy" }),
+      ),
+    ).toBe(
+      'Line 14: the insulation "heavy" is an AWG film build; IEC wire takes grade 1, 2 or 3.',
+    );
+  });
+
+  it("refuses an unknown thermal class, standard and unit", () => {
+    expect(messageOf(read({ ...awgWire, thermalClass: "170" }))).toBe(
+      'Line 14: the thermal class "170" is not 130, 155, 180, 200 or 220.',
+    );
+    expect(messageOf(read({ ...awgWire, standard: "SWG" }))).toBe(
+      'Line 14: the wire standard "SWG" is not AWG or IEC.',
+    );
+    expect(messageOf(read({ ...awgWire, unit: "pcs" }))).toBe(
+      'Line 14: wire is priced per kg, not per "pcs".',
+    );
+    expect(messageOf(read({ ...magnet, unit: "kg" }))).toBe(
+      'Line 14: magnets are priced per piece, not per "kg".',
+    );
+    expect(messageOf(read({ ...magnet, unit: "box" }))).toBe(
+      'Line 14: the unit "box" is not kg, pcs or m.',
+    );
+  });
+
+  it("asks for the kind when a row looks like both wire and a magnet", () => {
+    expect(messageOf(read({ ...awgWire, grade: "N42SH" }))).toBe(
+      "Line 14: the row has a wire standard and size and also a magnet grade; say in the kind column whether it is wire or a magnet.",
+    );
+    expect(messageOf(read({ ...magnet, kind: "coil" }))).toBe(
+      'Line 14: the kind "coil" is not wire, magnet or part.',
+    );
+  });
+
+  it("reports a wire standard without a size instead of making the row a part", () => {
+    expect(messageOf(read({ ...awgWire, size: "" }))).toBe(
+      "Line 14: wire needs a size.",
+    );
+  });
+});
+
+describe("across rows", () => {
+  function collect(rows: ReturnType<typeof dataRow>[]): PriceListRowCollector {
+    const collector = new PriceListRowCollector(context);
+    rows.forEach((row) => collector.add(row));
+    return collector;
+  }
+
+  it("reports a repeated row with another price on the later line, naming the earlier", () => {
+    const collector = collect([
+      dataRow(2, { ...magnet, minQuantity: "100" }),
+      dataRow(3, { ...magnet, minQuantity: "500", price: "1.60" }),
+      dataRow(9, { ...magnet, minQuantity: "100", price: "1.90" }),
+    ]);
+    expect(collector.rows.map((row) => row.line)).toEqual([2, 3]);
+    expect(collector.errors).toEqual([
+      {
+        line: 9,
+        message:
+          'Line 9: the supplier SKU "BLK-20-10-5" (minimum quantity 100, valid from 2025-06-02) is already on line 2 with another price (1.85 EUR there, 1.9 EUR here).',
+      },
+    ]);
+  });
+
+  it("drops exact repeats silently, also when spelt differently", () => {
+    const collector = collect([
+      dataRow(2, magnet),
+      dataRow(3, magnet),
+      dataRow(4, {
+        ...magnet,
+        price: "1.8500",
+        currency: "eur",
+        minQuantity: "1",
+      }),
+    ]);
+    expect(collector.rows.map((row) => row.line)).toEqual([2]);
+    expect(collector.errors).toEqual([]);
+  });
+
+  it("compares SKUs without regard to letter case", () => {
+    const collector = collect([
+      dataRow(2, magnet),
+      dataRow(3, { ...magnet, supplierSku: "blk-20-10-5", price: "2" }),
+    ]);
+    expect(collector.errors.map((error) => error.line)).toEqual([3]);
+  });
+
+  it("keeps the same SKU at other quantities and days, but only as the same item", () => {
+    const collector = collect([
+      dataRow(2, awgWire),
+      dataRow(3, { ...awgWire, minQuantity: "100", price: "13.90" }),
+      dataRow(4, { ...awgWire, validFrom: "2025-09-01", price: "15" }),
+      dataRow(5, { ...awgWire, size: "22", minQuantity: "500" }),
+    ]);
+    expect(collector.rows.map((row) => row.line)).toEqual([2, 3, 4]);
+    expect(collector.errors).toEqual([
+      {
+        line: 5,
+        message:
+          'Line 5: the supplier SKU "CU-20H" is wire AWG 22 here but wire AWG 20 on line 2; one SKU must always be the same item.',
+      },
+    ]);
+  });
+
+  it("keeps the rows with errors out of the comparison", () => {
+    const collector = collect([
+      dataRow(2, { ...magnet, price: "x" }),
+      dataRow(3, magnet),
+    ]);
+    expect(collector.rows.map((row) => row.line)).toEqual([3]);
+    expect(collector.errors.map((error) => error.line)).toEqual([2]);
+  });
+
+  it("throws on an import day that is not a day (a programming error)", () => {
+    expect(
+      () => new PriceListRowCollector({ ...context, importDay: "today" }),
+    ).toThrow(/importDay/);
+  });
+});

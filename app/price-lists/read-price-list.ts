@@ -1,0 +1,76 @@
+/**
+ * The whole reading of a price list, from uploaded bytes to typed rows:
+ * decode → find separator and header → check the column mapping → read and
+ * check each row as the CSV reader produces it. Nothing is written anywhere;
+ * the caller previews the result or commits it all at once.
+ *
+ * File-level problems come back as `{ ok: false, messages }`; per-line
+ * problems as `errors`, in file order. Pure: runs in Node and in the browser.
+ */
+import { checkColumnMapping, type ColumnMapping } from "./column-mapping";
+import type { CurrencyCode } from "./currencies";
+import { decodePriceListBytes } from "./decode-csv";
+import {
+  openPriceListCsv,
+  type CsvLayout,
+  type LineError,
+} from "./parse-price-list";
+import { PriceListRowCollector, type PriceListRow } from "./price-list-rows";
+
+export interface PriceListReadOptions {
+  mapping: ColumnMapping;
+  /** The day of the import, YYYY-MM-DD: the start of prices without a date. */
+  importDay: string;
+  /** Magnet grade names and aliases in lower case. */
+  knownGrades: ReadonlySet<string>;
+  /** The supplier's default currency, for rows without one. */
+  supplierCurrency?: CurrencyCode | null;
+}
+
+export type PriceListReading =
+  | {
+      ok: true;
+      layout: CsvLayout;
+      rows: PriceListRow[];
+      errors: LineError[];
+    }
+  | { ok: false; messages: string[] };
+
+/** Reads an uploaded file: decoding first, then {@link readPriceListText}. */
+export function readPriceListFile(
+  bytes: Uint8Array,
+  options: PriceListReadOptions,
+): PriceListReading {
+  const decoded = decodePriceListBytes(bytes);
+  if (!decoded.ok) return { ok: false, messages: [decoded.message] };
+  return readPriceListText(decoded.text, options);
+}
+
+/** Reads price-list text with a mapping into typed rows and per-line errors. */
+export function readPriceListText(
+  text: string,
+  options: PriceListReadOptions,
+): PriceListReading {
+  const opened = openPriceListCsv(text);
+  if (!opened.ok) return { ok: false, messages: [opened.message] };
+
+  const mapping = checkColumnMapping(options.mapping, opened.layout.headers, {
+    supplierCurrency: options.supplierCurrency,
+  });
+  if (!mapping.ok) return { ok: false, messages: mapping.messages };
+
+  const collector = new PriceListRowCollector({
+    columns: mapping.columns,
+    decimalComma: opened.layout.decimalComma,
+    importDay: options.importDay,
+    knownGrades: options.knownGrades,
+    supplierCurrency: options.supplierCurrency,
+  });
+  const outcome = opened.forEachRow((row) => collector.add(row));
+  if (!outcome.ok) return { ok: false, messages: [outcome.message] };
+
+  const errors = [...outcome.errors, ...collector.errors].sort(
+    (a, b) => a.line - b.line,
+  );
+  return { ok: true, layout: opened.layout, rows: collector.rows, errors };
+}
