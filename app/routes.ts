@@ -47,6 +47,9 @@ export default [
     route("items/:sku", "routes/api.v1.item.ts"),
     route("locations", "routes/api.v1.locations.ts"),
     route("stock-movements", "routes/api.v1.stock-movements.ts"),
+    route("suppliers", "routes/api.v1.suppliers.ts"),
+    route("price-lists", "routes/api.v1.price-lists.ts"),
+    route("metal-base", "routes/api.v1.metal-base.ts"),
   ]),
 
   route("*", "routes/not-found.tsx"),

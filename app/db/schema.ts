@@ -3,3 +3,4 @@ export * from "./tables/accounts";
 export * from "./tables/reference";
 export * from "./tables/stock";
 export * from "./tables/stock-enums";
+export * from "./tables/purchasing";

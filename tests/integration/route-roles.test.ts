@@ -15,7 +15,7 @@ const everyone: Who[] = ["anonymous", ...roles];
 
 interface Row {
   file: string;
-  method: "GET" | "POST" | "PATCH";
+  method: "GET" | "POST" | "PATCH" | "PUT";
   path: string;
   /** Expected status per caller; `signedIn` covers every role not named. */
   expect: Partial<Record<Who, number>> & { signedIn?: number };
@@ -321,6 +321,37 @@ const table: Row[] = [
     method: "POST",
     path: "/api/v1/stock-movements",
     expect: { anonymous: 401, storekeeper: 400, admin: 400, signedIn: 403 },
+  },
+  // Suppliers and prices: everyone reads; buyers (and admins) keep them and import price lists.
+  {
+    file: "routes/api.v1.suppliers.ts",
+    method: "GET",
+    path: "/api/v1/suppliers",
+    expect: { anonymous: 401, signedIn: 200 },
+  },
+  {
+    file: "routes/api.v1.suppliers.ts",
+    method: "POST",
+    path: "/api/v1/suppliers",
+    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+  },
+  {
+    file: "routes/api.v1.price-lists.ts",
+    method: "POST",
+    path: "/api/v1/price-lists",
+    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+  },
+  {
+    file: "routes/api.v1.metal-base.ts",
+    method: "GET",
+    path: "/api/v1/metal-base",
+    expect: { anonymous: 401, signedIn: 200 },
+  },
+  {
+    file: "routes/api.v1.metal-base.ts",
+    method: "PUT",
+    path: "/api/v1/metal-base",
+    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
   },
   {
     file: "routes/not-found.tsx",

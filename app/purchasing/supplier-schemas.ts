@@ -1,0 +1,67 @@
+/** Suppliers, metal base and currency rates: request schemas shared by pages and API. */
+import { z } from "zod";
+
+const isoCurrency = z
+  .string({ error: "Give the currency as a 3-letter ISO 4217 code, e.g. EUR." })
+  .trim()
+  .toUpperCase()
+  .regex(
+    /^[A-Z]{3}$/,
+    "Give the currency as a 3-letter ISO 4217 code, e.g. EUR.",
+  );
+
+const day = z
+  .string({ error: "Give the date as YYYY-MM-DD." })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "Give the date as YYYY-MM-DD.")
+  .refine(
+    (value) => !Number.isNaN(Date.parse(`${value}T00:00:00Z`)),
+    "That is not a real date.",
+  );
+
+const price = (label: string, decimals: number) =>
+  z
+    .number({ error: `Give the ${label} as a number.` })
+    .positive(`The ${label} must be more than 0.`)
+    .max(1_000_000, `The ${label} is out of range.`)
+    .refine(
+      (value) =>
+        Math.abs(Math.round(value * 10 ** decimals) - value * 10 ** decimals) <
+        1e-6,
+      `The ${label} has at most ${decimals} decimals.`,
+    );
+
+export const supplierSchema = z.object({
+  name: z
+    .string({ error: "Give the supplier's name." })
+    .trim()
+    .min(1, "Give the supplier's name.")
+    .max(120),
+  email: z.email({ error: "Give a valid e-mail address." }).max(254).optional(),
+  currency: isoCurrency,
+  leadTimeDays: z
+    .number({ error: "Give the lead time in days." })
+    .int("Give the lead time in whole days.")
+    .min(0, "The lead time cannot be negative.")
+    .max(730, "The lead time is at most 730 days.")
+    .optional(),
+  notes: z.string().trim().max(1000, "Use at most 1000 characters.").optional(),
+});
+
+export const metalBaseSchema = z.object({
+  conductor: z.enum(["copper", "aluminium"], {
+    error: "The conductor must be copper or aluminium.",
+  }),
+  currency: isoCurrency,
+  pricePerKg: price("price per kg", 4),
+  validFrom: day,
+});
+
+export const currencyRateSchema = z.object({
+  currency: isoCurrency,
+  rate: price("rate", 6),
+  validFrom: day,
+});
+
+export type SupplierInput = z.output<typeof supplierSchema>;
+export type MetalBaseInput = z.output<typeof metalBaseSchema>;
+export type CurrencyRateInput = z.output<typeof currencyRateSchema>;

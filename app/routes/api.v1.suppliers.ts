@@ -1,0 +1,34 @@
+import type { Route } from "./+types/api.v1.suppliers";
+import { requireRole, requireUser } from "~/auth/guard.server";
+import { methodNotAllowed, readJsonBody } from "~/lib/api.server";
+import { supplierSchema } from "~/purchasing/supplier-schemas";
+import { createSupplier, listSuppliers } from "~/purchasing/suppliers.server";
+import { answerStockError } from "~/stock/stock-api.server";
+
+/** GET /api/v1/suppliers → [{ name, email, currency, leadTimeDays, notes }]. */
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireUser(request);
+  return Response.json(
+    (await listSuppliers()).map(({ id: _id, ...supplier }) => supplier),
+  );
+}
+
+/** POST /api/v1/suppliers (buyer, admin) → 201 the supplier; 409 when the name is taken. */
+export async function action({ request }: Route.ActionArgs) {
+  await requireRole(request, ["buyer"]);
+  if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
+  const input = await readJsonBody(request, supplierSchema);
+  return answerStockError(async () => {
+    await createSupplier(input);
+    return Response.json(
+      {
+        name: input.name,
+        email: input.email ?? null,
+        currency: input.currency,
+        leadTimeDays: input.leadTimeDays ?? null,
+        notes: input.notes ?? null,
+      },
+      { status: 201 },
+    );
+  });
+}

@@ -1,0 +1,272 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { demoPassword } from "../../seed/demo-people";
+import { baseUrl, sendJson, signIn } from "../support/app-client";
+import {
+  closeTestDatabase,
+  testDatabase,
+  uniqueCode,
+} from "../support/test-database";
+
+let buyer = "";
+let supplier = "";
+beforeAll(async () => {
+  buyer = await signIn("buyer@turnledger.test", demoPassword());
+  supplier = `Test wire mill ${uniqueCode("S")}`;
+  const created = await sendJson(
+    "POST",
+    "/api/v1/suppliers",
+    { name: supplier, currency: "EUR", leadTimeDays: 21 },
+    buyer,
+  );
+  expect(created.status).toBe(201);
+});
+afterAll(closeTestDatabase);
+
+const mapping = {
+  supplierSku: "Art. no",
+  description: "Description",
+  standard: "Standard",
+  size: "Size",
+  insulation: "Insulation",
+  grade: "Grade",
+  price: "Price",
+  adderPerKg: "Adder per kg",
+  currency: "Currency",
+  minQuantity: "Min qty",
+  validFrom: "Valid from",
+};
+
+function priceList(rows: string[]): string {
+  return [
+    "Art. no,Description,Standard,Size,Insulation,Grade,Price,Adder per kg,Currency,Min qty,Valid from",
+    ...rows,
+  ].join("\n");
+}
+
+async function upload(
+  csv: string | Uint8Array,
+  options: {
+    dryRun?: boolean;
+    cookie?: string;
+    fields?: Record<string, string>;
+  } = {},
+) {
+  const form = new FormData();
+  form.set("file", new Blob([csv as BlobPart]), "prices.csv");
+  form.set("supplier", supplier);
+  form.set("mapping", JSON.stringify(mapping));
+  for (const [key, value] of Object.entries(options.fields ?? {}))
+    form.set(key, value);
+  return fetch(
+    `${baseUrl()}/api/v1/price-lists${options.dryRun ? "?dryRun=1" : ""}`,
+    {
+      method: "POST",
+      headers: { Cookie: options.cookie ?? buyer, Origin: baseUrl() },
+      body: form,
+    },
+  );
+}
+
+async function tableCounts() {
+  const [rows] = await testDatabase().query(
+    "SELECT (SELECT COUNT(*) FROM price_lines) AS line_count, (SELECT COUNT(*) FROM price_imports) AS import_count, (SELECT COUNT(*) FROM items) AS item_count, (SELECT COUNT(*) FROM supplier_items) AS sku_count",
+  );
+  return (rows as Record<string, number>[])[0];
+}
+
+const good = () => {
+  const sku = uniqueCode("A");
+  return priceList([
+    `${sku}-1,Enamelled copper 0.50 mm grade 2,IEC,0.5,grade 2,,,3.50,EUR,25,2026-11-01`,
+    `${sku}-1,Enamelled copper 0.50 mm grade 2,IEC,0.5,grade 2,,,3.20,EUR,100,2026-11-01`,
+    `${sku}-2,Copper AWG 20 heavy,AWG,20,heavy,,15.80,,EUR,1,2026-11-01`,
+    `${sku}-3,Sm2Co17 disc,,,,Sm2Co17,2.35,,EUR,100,2026-11-01`,
+  ]);
+};
+
+describe("price-list import", () => {
+  it("previews without writing, then commits all rows, and a second import of the file changes nothing", async () => {
+    const csv = good();
+    const before = await tableCounts();
+    const preview = await upload(csv, { dryRun: true });
+    expect(preview.status).toBe(200);
+    const body = await preview.json();
+    expect(body.valid).toBe(4);
+    expect(body.invalid).toEqual([]);
+    expect(body.rows).toHaveLength(4);
+    expect(await tableCounts()).toEqual(before);
+
+    const committed = await upload(csv);
+    expect(committed.status).toBe(201);
+    expect((await committed.json()).rows).toBe(4);
+    const after = await tableCounts();
+    expect(after!.line_count! - before!.line_count!).toBe(4);
+    expect(after!.import_count! - before!.import_count!).toBe(1);
+
+    const again = await upload(csv);
+    expect(again.status).toBe(200);
+    expect((await again.json()).alreadyImported).toBe(true);
+    expect(await tableCounts()).toEqual(after);
+  });
+
+  it.each([
+    [
+      "an unknown currency",
+      (sku: string) => `${sku},x,,,,,1.00,,XYZ,1,2026-11-01`,
+    ],
+    ["a negative price", (sku: string) => `${sku},x,,,,,-3,,EUR,1,2026-11-01`],
+    [
+      "a non-numeric minimum quantity",
+      (sku: string) => `${sku},x,,,,,1.00,,EUR,ten,2026-11-01`,
+    ],
+    [
+      "an unknown AWG size",
+      (sku: string) => `${sku},x,AWG,99,heavy,,1.00,,EUR,1,2026-11-01`,
+    ],
+    [
+      "an unknown grade",
+      (sku: string) => `${sku},x,,,,N99,1.00,,EUR,1,2026-11-01`,
+    ],
+    ["a row with too few columns", (sku: string) => `${sku},x,,`],
+  ])(
+    "refuses a file with %s with 422, its line number, and writes nothing",
+    async (_label, badRow) => {
+      const sku = uniqueCode("B");
+      const before = await tableCounts();
+      const answer = await upload(
+        priceList([
+          `${sku}-ok,fine,,,,,1.00,,EUR,1,2026-11-01`,
+          badRow(`${sku}-bad`),
+        ]),
+      );
+      expect(answer.status).toBe(422);
+      const body = await answer.json();
+      expect(body.invalid).toHaveLength(1);
+      expect(body.invalid[0].line).toBe(3);
+      expect(body.invalid[0].message.length).toBeGreaterThan(10);
+      expect(await tableCounts()).toEqual(before);
+    },
+  );
+
+  it("refuses duplicate rows with different prices", async () => {
+    const sku = uniqueCode("D");
+    const answer = await upload(
+      priceList([
+        `${sku},x,,,,,1.00,,EUR,1,2026-11-01`,
+        `${sku},x,,,,,1.10,,EUR,1,2026-11-01`,
+      ]),
+    );
+    expect(answer.status).toBe(422);
+    expect((await answer.json()).invalid[0].line).toBe(3);
+  });
+
+  it.each([
+    ["an empty file", ""],
+    ["a header only", priceList([])],
+    [
+      "a binary file renamed .csv",
+      new Uint8Array([0x50, 0x4b, 0x03, 0x04, 0, 0, 0, 0, 0x14, 0, 0, 0]),
+    ],
+    [
+      "unclosed quotes",
+      priceList([`"X1,"unclosed,,,,,1.00,,EUR,1,2026-11-01`]),
+    ],
+  ])(
+    "refuses %s with a clear message and writes nothing",
+    async (_label, csv) => {
+      const before = await tableCounts();
+      const answer = await upload(csv);
+      expect([400, 422]).toContain(answer.status);
+      const body = await answer.json();
+      expect(JSON.stringify(body).length).toBeGreaterThan(30);
+      expect(await tableCounts()).toEqual(before);
+    },
+  );
+
+  it("refuses a mapping without the price column, and a 25 MB file", async () => {
+    const withoutPrice = { ...mapping } as Record<string, string>;
+    delete withoutPrice.price;
+    delete withoutPrice.adderPerKg;
+    const noPrice = await upload(good(), {
+      fields: { mapping: JSON.stringify(withoutPrice) },
+    });
+    expect(noPrice.status).toBe(400);
+    expect((await noPrice.json()).error.message).toMatch(/price/);
+    const huge = await upload(new Uint8Array(25 * 1024 * 1024).fill(0x41));
+    expect(huge.status).toBe(413);
+    expect((await huge.json()).error.message).toBe(
+      "The file is larger than 20 MB.",
+    );
+  });
+
+  it("lets only buyers and admins import", async () => {
+    for (const role of ["storekeeper", "builder", "manager"]) {
+      const cookie = await signIn(`${role}@turnledger.test`, demoPassword());
+      expect((await upload(good(), { cookie })).status).toBe(403);
+    }
+  });
+});
+
+describe("metal base", () => {
+  it("is kept by buyers and read by everyone", async () => {
+    const put = await sendJson(
+      "PUT",
+      "/api/v1/metal-base",
+      {
+        conductor: "copper",
+        currency: "EUR",
+        pricePerKg: 9,
+        validFrom: "2026-11-01",
+      },
+      buyer,
+    );
+    expect(put.status).toBe(200);
+    const storekeeper = await signIn(
+      "storekeeper@turnledger.test",
+      demoPassword(),
+    );
+    expect(
+      (
+        await sendJson(
+          "PUT",
+          "/api/v1/metal-base",
+          {
+            conductor: "copper",
+            currency: "EUR",
+            pricePerKg: 1,
+            validFrom: "2026-11-02",
+          },
+          storekeeper,
+        )
+      ).status,
+    ).toBe(403);
+    const bad = await sendJson(
+      "PUT",
+      "/api/v1/metal-base",
+      {
+        conductor: "gold",
+        currency: "EURO",
+        pricePerKg: -1,
+        validFrom: "soon",
+      },
+      buyer,
+    );
+    expect(bad.status).toBe(400);
+    expect(Object.keys((await bad.json()).error.fields).sort()).toEqual([
+      "conductor",
+      "currency",
+      "pricePerKg",
+      "validFrom",
+    ]);
+    const list = (await (
+      await fetch(`${baseUrl()}/api/v1/metal-base`, {
+        headers: { Cookie: storekeeper },
+      })
+    ).json()) as { conductor: string; pricePerKg: number; validFrom: string }[];
+    expect(
+      list.find(
+        (row) => row.conductor === "copper" && row.validFrom === "2026-11-01",
+      )?.pricePerKg,
+    ).toBe(9);
+  });
+});
