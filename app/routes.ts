@@ -17,6 +17,12 @@ export default [
     route("tools/coil-estimator", "routes/coil-estimator.tsx"),
     route("tools/magnet-estimator", "routes/magnet-estimator.tsx"),
     route("reference", "routes/reference.tsx"),
+    ...prefix("suppliers", [
+      index("routes/suppliers.tsx"),
+      route("import", "routes/price-import.tsx"),
+      route("imports", "routes/price-imports.tsx"),
+    ]),
+    route("prices", "routes/prices.tsx"),
     ...prefix("stock", [
       index("routes/stock.tsx"),
       route("export.csv", "routes/stock-export.ts"),
@@ -50,6 +56,8 @@ export default [
     route("suppliers", "routes/api.v1.suppliers.ts"),
     route("price-lists", "routes/api.v1.price-lists.ts"),
     route("metal-base", "routes/api.v1.metal-base.ts"),
+    route("currency-rates", "routes/api.v1.currency-rates.ts"),
+    route("items/:sku/prices", "routes/api.v1.item-prices.ts"),
   ]),
 
   route("*", "routes/not-found.tsx"),

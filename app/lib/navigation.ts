@@ -15,6 +15,8 @@ export const navigationItems: readonly NavigationItem[] = [
   { to: "/stock", label: "Stock", roles: [], exact: true },
   { to: "/stock/record", label: "Record movement", roles: ["storekeeper"] },
   { to: "/stock/journal", label: "Journal", roles: [] },
+  { to: "/suppliers", label: "Suppliers", roles: [] },
+  { to: "/prices", label: "Prices", roles: [] },
   { to: "/tools/coil-estimator", label: "Coil estimator", roles: [] },
   { to: "/tools/magnet-estimator", label: "Magnet estimator", roles: [] },
   { to: "/reference", label: "Reference", roles: [] },

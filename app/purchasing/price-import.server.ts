@@ -79,7 +79,11 @@ function typicalEnamel(thermalClass: number): string {
 async function matchRows(
   supplierId: number,
   rows: PriceListRow[],
-): Promise<{ matched: MatchedRow[]; errors: LineError[] }> {
+): Promise<{
+  matched: MatchedRow[];
+  errors: LineError[];
+  conductorOf: Map<number, string>;
+}> {
   const known = new Map<string, number>();
   for (const mapping of await db
     .select({
@@ -96,6 +100,7 @@ async function matchRows(
       standard: wireItems.standard,
       size: wireItems.sizeLabel,
       insulation: wireItems.insulation,
+      conductor: wireItems.conductor,
     })
     .from(wireItems)
     .innerJoin(
@@ -175,7 +180,11 @@ async function matchRows(
       });
     }
   }
-  return { matched, errors };
+  return {
+    matched,
+    errors,
+    conductorOf: new Map(wires.map((wire) => [wire.id, wire.conductor])),
+  };
 }
 
 export async function importPriceList(input: {
@@ -221,10 +230,11 @@ export async function importPriceList(input: {
   });
   if (!reading.ok) return { kind: "refused", messages: reading.messages };
 
-  const { matched, errors: matchErrors } = await matchRows(
-    supplier.id,
-    reading.rows,
-  );
+  const {
+    matched,
+    errors: matchErrors,
+    conductorOf,
+  } = await matchRows(supplier.id, reading.rows);
   const invalid = [...reading.errors, ...matchErrors].sort(
     (a, b) => a.line - b.line,
   );
@@ -333,7 +343,11 @@ export async function importPriceList(input: {
         currency: entry.row.currency,
         unitPrice: entry.row.price,
         adderPerKg: entry.row.adderPerKg,
-        conductor: entry.row.adderPerKg !== null ? "copper" : null,
+        // An adder prices on the base of the wire's own metal (new wire items are copper).
+        conductor:
+          entry.row.adderPerKg !== null
+            ? (conductorOf.get(entry.itemId!) ?? "copper")
+            : null,
         minQuantity: entry.row.minQuantity,
         validFrom: entry.row.validFrom,
         importId,

@@ -20,6 +20,8 @@ export interface TestEnvironment {
   mailFakeUrl: string;
   databaseUrl: string;
   smtpUrl: string;
+  /** The app server's process id (the benchmarks read its memory). */
+  serverPid: number;
   stop(): Promise<void>;
 }
 
@@ -49,7 +51,7 @@ export async function startAppServer(options: {
   port: number;
   databaseUrl: string;
   smtpUrl: string;
-}): Promise<{ baseUrl: string; stop(): Promise<void> }> {
+}): Promise<{ baseUrl: string; pid: number; stop(): Promise<void> }> {
   const baseUrl = `http://localhost:${options.port}`;
   const server = spawn(
     process.execPath,
@@ -71,6 +73,7 @@ export async function startAppServer(options: {
   await waitForHealth(baseUrl, server);
   return {
     baseUrl,
+    pid: server.pid ?? 0,
     async stop() {
       if (server.exitCode !== null) return;
       server.kill("SIGTERM");
@@ -117,6 +120,7 @@ export async function startTestEnvironment(): Promise<TestEnvironment> {
     mailFakeUrl: `http://127.0.0.1:${mailFake.httpPort}`,
     databaseUrl,
     smtpUrl: `smtp://127.0.0.1:${mailFake.smtpPort}`,
+    serverPid: app.pid,
     async stop() {
       await app.stop();
       await mailFake.close();

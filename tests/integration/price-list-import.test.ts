@@ -270,3 +270,127 @@ describe("metal base", () => {
     ).toBe(9);
   });
 });
+
+describe("best price per item", () => {
+  it("prices adder lines on the metal base, converts currencies, picks the break, and follows a new base", async () => {
+    const sku = uniqueCode("BP");
+    const other = `Second mill ${uniqueCode("S")}`;
+    expect(
+      (
+        await sendJson(
+          "POST",
+          "/api/v1/suppliers",
+          { name: other, currency: "USD" },
+          buyer,
+        )
+      ).status,
+    ).toBe(201);
+    const csv = priceList([
+      `${sku}-1,Enamelled copper 0.71 mm grade 1,IEC,0.71,grade 1,,,3.50,EUR,25,2026-11-01`,
+      `${sku}-1,Enamelled copper 0.71 mm grade 1,IEC,0.71,grade 1,,,3.20,EUR,100,2026-11-01`,
+    ]);
+    expect((await upload(csv)).status).toBe(201);
+    const [rows] = await testDatabase().query(
+      "SELECT i.sku FROM supplier_items si JOIN items i ON i.id = si.item_id WHERE si.supplier_sku = ?",
+      [`${sku}-1`],
+    );
+    const itemSku = (rows as { sku: string }[])[0]!.sku;
+
+    const usd = new FormData();
+    usd.set(
+      "file",
+      new Blob([
+        priceList([
+          `${sku}-9,Same wire from the USA,IEC,0.71,grade 1,,14.00,,USD,1,2026-11-01`,
+        ]),
+      ]),
+      "usd.csv",
+    );
+    usd.set("supplier", other);
+    usd.set("mapping", JSON.stringify(mapping));
+    expect(
+      (
+        await fetch(`${baseUrl()}/api/v1/price-lists`, {
+          method: "POST",
+          headers: { Cookie: buyer, Origin: baseUrl() },
+          body: usd,
+        })
+      ).status,
+    ).toBe(201);
+
+    await sendJson(
+      "PUT",
+      "/api/v1/metal-base",
+      {
+        conductor: "copper",
+        currency: "EUR",
+        pricePerKg: 9,
+        validFrom: "2026-11-01",
+      },
+      buyer,
+    );
+    await sendJson(
+      "PUT",
+      "/api/v1/currency-rates",
+      { currency: "USD", rate: 0.92, validFrom: "2026-11-01" },
+      buyer,
+    );
+    const pricesAt = async (quantity: number) =>
+      (await (
+        await fetch(
+          `${baseUrl()}/api/v1/items/${encodeURIComponent(itemSku)}/prices?quantity=${quantity}&date=2026-12-01`,
+          { headers: { Cookie: buyer } },
+        )
+      ).json()) as {
+        prices: {
+          supplier: string;
+          unitPrice: number;
+          currency: string;
+          quotedUnitPrice: number;
+        }[];
+        cannotPrice: { supplier: string; reasons: string[] }[];
+      };
+
+    // Worked example in the price-list issue: adder 3.50/kg + copper base 9.00/kg = 12.50/kg.
+    const at30 = await pricesAt(30);
+    expect(
+      at30.prices.find((price) => price.supplier === supplier)?.unitPrice,
+    ).toBe(12.5);
+    // 14.00 USD × 0.92 EUR/USD = 12.88 EUR (worked by hand): dearer than 12.50, so second.
+    expect(at30.prices.map((price) => price.unitPrice)).toEqual([12.5, 12.88]);
+    // From 100 kg the 3.20 break applies: 3.20 + 9.00 = 12.20 (worked by hand).
+    expect((await pricesAt(100)).prices[0]!.unitPrice).toBe(12.2);
+    // Below the smallest break (25 kg) the EUR supplier cannot price 10 kg, and says why.
+    expect(
+      (await pricesAt(10)).cannotPrice.map((offer) => offer.supplier),
+    ).toContain(supplier);
+
+    // A new copper base moves every adder price: 3.50 + 10.00 = 13.50.
+    await sendJson(
+      "PUT",
+      "/api/v1/metal-base",
+      {
+        conductor: "copper",
+        currency: "EUR",
+        pricePerKg: 10,
+        validFrom: "2026-11-15",
+      },
+      buyer,
+    );
+    expect(
+      (await pricesAt(30)).prices.find((price) => price.supplier === supplier)
+        ?.unitPrice,
+    ).toBe(13.5);
+    await sendJson(
+      "PUT",
+      "/api/v1/metal-base",
+      {
+        conductor: "copper",
+        currency: "EUR",
+        pricePerKg: 9,
+        validFrom: "2026-11-15",
+      },
+      buyer,
+    );
+  });
+});

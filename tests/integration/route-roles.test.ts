@@ -342,6 +342,25 @@ const table: Row[] = [
     expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
   },
   {
+    file: "routes/api.v1.item-prices.ts",
+    method: "GET",
+    path: "/api/v1/items/NO-SUCH-SKU/prices",
+    expect: { anonymous: 401, signedIn: 404 },
+  },
+  {
+    file: "routes/price-import.tsx",
+    method: "GET",
+    path: "/suppliers/import",
+    expect: { anonymous: 302, buyer: 200, admin: 200, signedIn: 403 },
+  },
+  // The import page works in the browser; a plain form post is refused (405) after the role check.
+  {
+    file: "routes/price-import.tsx",
+    method: "POST",
+    path: "/suppliers/import",
+    expect: { anonymous: 302, buyer: 405, admin: 405, signedIn: 403 },
+  },
+  {
     file: "routes/api.v1.metal-base.ts",
     method: "GET",
     path: "/api/v1/metal-base",
@@ -352,6 +371,49 @@ const table: Row[] = [
     method: "PUT",
     path: "/api/v1/metal-base",
     expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+  },
+  {
+    file: "routes/api.v1.currency-rates.ts",
+    method: "GET",
+    path: "/api/v1/currency-rates",
+    expect: { anonymous: 401, signedIn: 200 },
+  },
+  {
+    file: "routes/api.v1.currency-rates.ts",
+    method: "PUT",
+    path: "/api/v1/currency-rates",
+    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+  },
+  {
+    file: "routes/suppliers.tsx",
+    method: "GET",
+    path: "/suppliers",
+    expect: { anonymous: 302, signedIn: 200 },
+  },
+  // An empty new supplier: refused before anything is written; buyers get field messages.
+  {
+    file: "routes/suppliers.tsx",
+    method: "POST",
+    path: "/suppliers",
+    expect: { anonymous: 302, buyer: 400, admin: 400, signedIn: 403 },
+  },
+  {
+    file: "routes/prices.tsx",
+    method: "GET",
+    path: "/prices",
+    expect: { anonymous: 302, signedIn: 200 },
+  },
+  {
+    file: "routes/prices.tsx",
+    method: "POST",
+    path: "/prices",
+    expect: { anonymous: 302, buyer: 400, admin: 400, signedIn: 403 },
+  },
+  {
+    file: "routes/price-imports.tsx",
+    method: "GET",
+    path: "/suppliers/imports",
+    expect: { anonymous: 302, signedIn: 200 },
   },
   {
     file: "routes/not-found.tsx",

@@ -1,0 +1,159 @@
+/**
+ * Step 2 of a price-list import: one row per column of the file, each with a
+ * choice of our fields, and what the mapping still lacks, checked live.
+ */
+import {
+  PRICE_LIST_FIELDS,
+  type PriceListField,
+  type PriceListFieldInfo,
+} from "~/price-lists/column-mapping";
+
+export interface MappedColumn {
+  header: string;
+  /** Our field, or "" when the column is left out. */
+  field: PriceListField | "";
+  /** Where the choice came from: the supplier's last import, a guess from the header, or the buyer. */
+  source: "saved" | "guessed" | "chosen" | "none";
+}
+
+const sourceText: Record<MappedColumn["source"], string> = {
+  saved: "from this supplier's last import",
+  guessed: "guessed from the header — check it",
+  chosen: "your choice",
+  none: "",
+};
+
+function requirementText(
+  info: PriceListFieldInfo,
+  supplierCurrency: string | null,
+): string {
+  switch (info.requirement) {
+    case "required":
+      return "required";
+    case "priceOrAdder":
+      return "this or the other price field";
+    case "unlessSupplierCurrency":
+      return supplierCurrency
+        ? `optional, default ${supplierCurrency}`
+        : "required";
+    default:
+      return "";
+  }
+}
+
+export function ColumnMappingEditor({
+  columns,
+  sampleRow,
+  supplierCurrency,
+  messages,
+  onChange,
+}: {
+  columns: MappedColumn[];
+  /** The first data row's cells, to help tell the columns apart. */
+  sampleRow: string[];
+  supplierCurrency: string | null;
+  /** What checkColumnMapping says about the current choice; empty when it is complete. */
+  messages: string[];
+  onChange: (index: number, field: PriceListField | "") => void;
+}) {
+  const hintOf = (field: PriceListField | "") =>
+    PRICE_LIST_FIELDS.find((info) => info.key === field)?.hint;
+  return (
+    <div className="space-y-4">
+      <div className="panel overflow-x-auto p-0">
+        <table className="data-table">
+          <caption className="sr-only">
+            Columns of the file and the fields they feed
+          </caption>
+          <thead>
+            <tr>
+              <th scope="col">Column in the file</th>
+              <th scope="col">First value</th>
+              <th scope="col">Feeds the field</th>
+            </tr>
+          </thead>
+          <tbody>
+            {columns.map((column, index) => (
+              <tr key={`${index}-${column.header}`}>
+                <th
+                  scope="row"
+                  className="pt-4 align-top font-medium text-graphite-900"
+                >
+                  {column.header || (
+                    <em className="text-graphite-500">(no heading)</em>
+                  )}
+                </th>
+                <td className="max-w-64 truncate pt-4 text-graphite-700">
+                  {sampleRow[index] || "—"}
+                </td>
+                <td className="min-w-72">
+                  <label htmlFor={`map-column-${index}`} className="sr-only">
+                    Field for the column “{column.header}”
+                  </label>
+                  <select
+                    id={`map-column-${index}`}
+                    value={column.field}
+                    onChange={(event) =>
+                      onChange(index, event.target.value as PriceListField | "")
+                    }
+                    aria-describedby={`map-column-${index}-note`}
+                    className="field-input mt-0"
+                  >
+                    <option value="">Leave out</option>
+                    {PRICE_LIST_FIELDS.map((info) => {
+                      const requirement = requirementText(
+                        info,
+                        supplierCurrency,
+                      );
+                      return (
+                        <option key={info.key} value={info.key}>
+                          {info.label}
+                          {requirement ? ` (${requirement})` : ""}
+                        </option>
+                      );
+                    })}
+                  </select>
+                  <p
+                    id={`map-column-${index}-note`}
+                    className="mt-1 text-xs text-graphite-500"
+                  >
+                    {column.field ? hintOf(column.field) : "Not imported."}
+                    {sourceText[column.source] ? (
+                      <span
+                        className={
+                          column.source === "guessed"
+                            ? "ml-1 font-medium text-caution"
+                            : "ml-1 font-medium text-field"
+                        }
+                      >
+                        · {sourceText[column.source]}
+                      </span>
+                    ) : null}
+                  </p>
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <div role="status" aria-live="polite">
+        {messages.length > 0 ? (
+          <div className="rounded-md border border-danger/40 bg-danger/5 px-4 py-3">
+            <p className="font-medium text-danger">
+              The mapping is not complete yet:
+            </p>
+            <ul className="mt-1 list-disc pl-5 text-sm text-danger">
+              {messages.map((message) => (
+                <li key={message}>{message}</li>
+              ))}
+            </ul>
+          </div>
+        ) : (
+          <p className="rounded-md border border-ok/40 bg-ok/10 px-4 py-3 text-ok">
+            Every needed field has a column.
+          </p>
+        )}
+      </div>
+    </div>
+  );
+}

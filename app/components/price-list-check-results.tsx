@@ -1,0 +1,137 @@
+/**
+ * Step 3 of a price-list import: what the dry run found — the counts, the
+ * first rows as they will be stored, and every row that cannot be imported.
+ */
+import type { ColumnDef } from "@tanstack/react-table";
+import { DataTable } from "~/components/data-table";
+import { formatQuantity } from "~/lib/format";
+import type { LineError } from "~/price-lists/parse-price-list";
+import type { PriceListRow } from "~/price-lists/price-list-rows";
+import type { PriceListCheck } from "./price-list-upload";
+
+function sizeOrGrade(row: PriceListRow): string {
+  if (row.kind === "wire")
+    return row.standard === "AWG" ? `AWG ${row.size}` : `${row.size} mm`;
+  if (row.kind === "magnet") return row.grade;
+  return "—";
+}
+
+/** "14.2000" → "14.20": at least two places, the rest only where they count. */
+function money(decimal: string): string {
+  return Number(decimal).toLocaleString("en-GB", {
+    minimumFractionDigits: 2,
+    maximumFractionDigits: 4,
+    useGrouping: false,
+  });
+}
+
+const rowColumns: ColumnDef<PriceListRow, unknown>[] = [
+  { accessorKey: "line", header: "Line", meta: { numeric: true } },
+  { accessorKey: "supplierSku", header: "Supplier SKU" },
+  { accessorKey: "description", header: "Description" },
+  { accessorKey: "kind", header: "Kind" },
+  { id: "sizeOrGrade", header: "Size or grade", accessorFn: sizeOrGrade },
+  {
+    id: "price",
+    header: "Price",
+    meta: { numeric: true },
+    accessorFn: (row) =>
+      row.price !== null
+        ? `${money(row.price)} ${row.currency}/${row.unit}`
+        : `adder ${money(row.adderPerKg ?? "0")} ${row.currency}/kg`,
+  },
+  {
+    id: "minQuantity",
+    header: "From quantity",
+    meta: { numeric: true },
+    accessorFn: (row) => `${Number(row.minQuantity)}\u00a0${row.unit}`,
+  },
+  { accessorKey: "validFrom", header: "Valid from" },
+];
+
+const invalidColumns: ColumnDef<LineError, unknown>[] = [
+  { accessorKey: "line", header: "Line", meta: { numeric: true } },
+  {
+    accessorKey: "message",
+    header: "Why it cannot be imported",
+    cell: ({ row }) => row.original.message.replace(/^Line \d+:\s*/, ""),
+  },
+];
+
+function Count({
+  label,
+  value,
+  tone,
+}: {
+  label: string;
+  value: number;
+  tone?: "danger";
+}) {
+  return (
+    <div className="rounded-md border border-rule bg-white px-4 py-3">
+      <dt className="text-sm text-graphite-500">{label}</dt>
+      <dd
+        className={`text-2xl font-semibold ${tone === "danger" && value > 0 ? "text-danger" : "text-graphite-900"}`}
+      >
+        {formatQuantity(value, "")}
+      </dd>
+    </div>
+  );
+}
+
+export function InvalidRowsTable({ invalid }: { invalid: LineError[] }) {
+  return (
+    <section aria-labelledby="invalid-rows-heading" className="space-y-2">
+      <h3 id="invalid-rows-heading" className="font-semibold text-danger">
+        {invalid.length === 1
+          ? "1 row cannot be imported"
+          : `${invalid.length} rows cannot be imported`}
+      </h3>
+      <div
+        className="max-h-96 overflow-y-auto rounded-lg"
+        tabIndex={0}
+        role="region"
+        aria-label="Rows that cannot be imported (scrolls)"
+      >
+        <DataTable
+          caption="Rows that cannot be imported"
+          columns={invalidColumns}
+          rows={invalid}
+        />
+      </div>
+    </section>
+  );
+}
+
+export function PriceListCheckResults({ check }: { check: PriceListCheck }) {
+  return (
+    <div className="space-y-5">
+      <dl className="grid gap-3 sm:grid-cols-4">
+        <Count label="Rows to import" value={check.valid} />
+        <Count label="Matched to catalogue items" value={check.matched} />
+        <Count label="New catalogue items" value={check.newItems} />
+        <Count
+          label="Rows with problems"
+          value={check.invalid.length}
+          tone="danger"
+        />
+      </dl>
+      {check.invalid.length > 0 ? (
+        <InvalidRowsTable invalid={check.invalid} />
+      ) : null}
+      <section aria-labelledby="first-rows-heading" className="space-y-2">
+        <h3 id="first-rows-heading" className="font-semibold">
+          {check.valid > check.rows.length
+            ? `The first ${check.rows.length} rows as they will be stored`
+            : "The rows as they will be stored"}
+        </h3>
+        <DataTable
+          caption="Rows as they will be stored"
+          columns={rowColumns}
+          rows={check.rows}
+          emptyText="No row of the file can be imported."
+        />
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,104 @@
+/** Past price-list imports and the price lines each one wrote, a page at a time. */
+import { asc, count, desc, eq } from "drizzle-orm";
+import { db } from "~/db/client.server";
+import { items, priceImports, priceLines, suppliers, users } from "~/db/schema";
+
+export const importPageSize = 25;
+export const importLinePageSize = 50;
+
+export async function listPriceImports(page: number) {
+  const [rows, [total]] = await Promise.all([
+    db
+      .select({
+        id: priceImports.id,
+        supplier: suppliers.name,
+        fileName: priceImports.fileName,
+        rowCount: priceImports.rowCount,
+        createdItems: priceImports.createdItems,
+        user: users.name,
+        createdAt: priceImports.createdAt,
+      })
+      .from(priceImports)
+      .innerJoin(suppliers, eq(suppliers.id, priceImports.supplierId))
+      .innerJoin(users, eq(users.id, priceImports.userId))
+      .orderBy(desc(priceImports.createdAt), desc(priceImports.id))
+      .limit(importPageSize)
+      .offset((page - 1) * importPageSize),
+    db.select({ total: count() }).from(priceImports),
+  ]);
+  return { imports: rows, total: total?.total ?? 0 };
+}
+
+/** Reads a stored mapping (our field → the file's header) as pairs; bad JSON shows as nothing. */
+export function mappingPairs(mapping: string): [string, string][] {
+  try {
+    const parsed: unknown = JSON.parse(mapping);
+    if (!parsed || typeof parsed !== "object") return [];
+    return Object.entries(parsed as Record<string, unknown>)
+      .filter(([, header]) => typeof header === "string" && header !== "")
+      .map(([field, header]) => [field, header as string]);
+  } catch {
+    return [];
+  }
+}
+
+export async function findPriceImport(id: number) {
+  const [row] = await db
+    .select({
+      id: priceImports.id,
+      supplier: suppliers.name,
+      fileName: priceImports.fileName,
+      fileSha256: priceImports.fileSha256,
+      rowCount: priceImports.rowCount,
+      createdItems: priceImports.createdItems,
+      mapping: priceImports.mapping,
+      user: users.name,
+      createdAt: priceImports.createdAt,
+    })
+    .from(priceImports)
+    .innerJoin(suppliers, eq(suppliers.id, priceImports.supplierId))
+    .innerJoin(users, eq(users.id, priceImports.userId))
+    .where(eq(priceImports.id, id))
+    .limit(1);
+  if (!row) return null;
+  const { mapping, ...rest } = row;
+  return { ...rest, mapping: mappingPairs(mapping) };
+}
+
+export async function listImportLines(importId: number, page: number) {
+  const [rows, [total]] = await Promise.all([
+    db
+      .select({
+        id: priceLines.id,
+        supplierSku: priceLines.supplierSku,
+        itemSku: items.sku,
+        unit: items.unit,
+        minQuantity: priceLines.minQuantity,
+        unitPrice: priceLines.unitPrice,
+        adderPerKg: priceLines.adderPerKg,
+        conductor: priceLines.conductor,
+        currency: priceLines.currency,
+        validFrom: priceLines.validFrom,
+        line: priceLines.line,
+      })
+      .from(priceLines)
+      .innerJoin(items, eq(items.id, priceLines.itemId))
+      .where(eq(priceLines.importId, importId))
+      .orderBy(asc(priceLines.line), asc(priceLines.id))
+      .limit(importLinePageSize)
+      .offset((page - 1) * importLinePageSize),
+    db
+      .select({ total: count() })
+      .from(priceLines)
+      .where(eq(priceLines.importId, importId)),
+  ]);
+  return {
+    lines: rows.map((row) => ({
+      ...row,
+      minQuantity: Number(row.minQuantity),
+      unitPrice: row.unitPrice === null ? null : Number(row.unitPrice),
+      adderPerKg: row.adderPerKg === null ? null : Number(row.adderPerKg),
+    })),
+    total: total?.total ?? 0,
+  };
+}

@@ -1,0 +1,152 @@
+import { createColumnHelper } from "@tanstack/react-table";
+import { data, Link } from "react-router";
+import type { Route } from "./+types/price-imports";
+import { requireUser } from "~/auth/guard.server";
+import { DataTable } from "~/components/data-table";
+import { PriceImportDetail } from "~/components/price-import-detail";
+import { formatDateTime, formatQuantity, pageFromSearch } from "~/lib/format";
+import { userHasRole } from "~/lib/roles";
+import {
+  findPriceImport,
+  importLinePageSize,
+  importPageSize,
+  listImportLines,
+  listPriceImports,
+} from "~/purchasing/import-history.server";
+
+const pageCountOf = (total: number, size: number) =>
+  Math.max(1, Math.ceil(total / size));
+
+async function openedImport(value: string, page: number) {
+  const id = Number(value);
+  const found =
+    Number.isInteger(id) && id > 0 ? await findPriceImport(id) : null;
+  if (!found) {
+    throw data(
+      { message: `There is no price-list import number ${value}.` },
+      { status: 404 },
+    );
+  }
+  const { lines, total } = await listImportLines(found.id, page);
+  return {
+    ...found,
+    lines,
+    page,
+    pageCount: pageCountOf(total, importLinePageSize),
+  };
+}
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const search = new URL(request.url).searchParams;
+  const page = pageFromSearch(search.get("page"));
+  const importParam = search.get("import");
+  if (importParam !== null) {
+    return {
+      opened: await openedImport(importParam, page),
+      list: null,
+      canImport: userHasRole(user, ["buyer"]),
+    };
+  }
+  const { imports, total } = await listPriceImports(page);
+  return {
+    opened: null,
+    list: { imports, page, pageCount: pageCountOf(total, importPageSize) },
+    canImport: userHasRole(user, ["buyer"]),
+  };
+}
+
+export const meta: Route.MetaFunction = ({ data: loaderData }) => [
+  {
+    title: loaderData?.opened
+      ? `${loaderData.opened.fileName} · Past imports · Turnledger`
+      : "Past imports · Turnledger",
+  },
+];
+
+type PriceImport = NonNullable<
+  Route.ComponentProps["loaderData"]["list"]
+>["imports"][number];
+const column = createColumnHelper<PriceImport>();
+const columns = [
+  column.accessor("createdAt", {
+    header: "When",
+    cell: (info) => (
+      <span className="whitespace-nowrap">
+        {formatDateTime(info.getValue())}
+      </span>
+    ),
+  }),
+  column.accessor("supplier", { header: "Supplier" }),
+  column.accessor("fileName", {
+    header: "File",
+    cell: (info) => (
+      <Link
+        to={`?import=${info.row.original.id}`}
+        className="font-medium text-copper-700 underline-offset-2 hover:underline"
+      >
+        {info.getValue()}
+      </Link>
+    ),
+  }),
+  column.accessor("rowCount", {
+    header: "Rows",
+    meta: { numeric: true },
+    cell: (info) => formatQuantity(info.getValue(), ""),
+  }),
+  column.accessor("createdItems", {
+    header: "New items",
+    meta: { numeric: true },
+    cell: (info) => formatQuantity(info.getValue(), ""),
+  }),
+  column.accessor("user", { header: "By" }),
+];
+
+export default function PriceImports({ loaderData }: Route.ComponentProps) {
+  const { opened, list, canImport } = loaderData;
+  return (
+    <div>
+      <div className="mb-4 flex flex-wrap items-baseline justify-between gap-3">
+        <h1 className="text-2xl font-semibold">
+          {opened ? `Import of ${opened.fileName}` : "Past imports"}
+        </h1>
+        <nav aria-label="Price lists" className="flex gap-4 text-sm">
+          <Link
+            to="/suppliers"
+            className="font-medium text-copper-700 underline-offset-2 hover:underline"
+          >
+            Suppliers
+          </Link>
+          {opened ? (
+            <Link
+              to="/suppliers/imports"
+              className="font-medium text-copper-700 underline-offset-2 hover:underline"
+            >
+              All past imports
+            </Link>
+          ) : null}
+          {canImport ? (
+            <Link
+              to="/suppliers/import"
+              className="font-medium text-copper-700 underline-offset-2 hover:underline"
+            >
+              Import a price list
+            </Link>
+          ) : null}
+        </nav>
+      </div>
+      {opened ? <PriceImportDetail opened={opened} /> : null}
+      {list ? (
+        <DataTable
+          caption="Committed price-list files, newest first"
+          columns={columns}
+          rows={list.imports}
+          page={list.page}
+          pageCount={list.pageCount}
+          pageHref={(page) => `?page=${page}`}
+          emptyText="No price list has been imported yet."
+        />
+      ) : null}
+    </div>
+  );
+}

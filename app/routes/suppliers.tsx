@@ -1,0 +1,217 @@
+import {
+  getFormProps,
+  useForm,
+  type SubmissionResult,
+} from "@conform-to/react";
+import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { createColumnHelper } from "@tanstack/react-table";
+import { data, Form, Link, redirect, useNavigation } from "react-router";
+import type { Route } from "./+types/suppliers";
+import { requireRole, requireUser } from "~/auth/guard.server";
+import { DataTable } from "~/components/data-table";
+import { QuantityField } from "~/components/quantity-field";
+import { TextAreaField } from "~/components/text-area-field";
+import { FormMessages, TextField } from "~/components/text-field";
+import { formatDateTime, formatQuantity } from "~/lib/format";
+import { userHasRole } from "~/lib/roles";
+import { supplierSchema } from "~/purchasing/supplier-schemas";
+import { listSupplierOverview } from "~/purchasing/supplier-overview.server";
+import { companyCurrency, createSupplier } from "~/purchasing/suppliers.server";
+import { isStockError } from "~/stock/stock-errors";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const [suppliers, currency] = await Promise.all([
+    listSupplierOverview(),
+    companyCurrency(),
+  ]);
+  return {
+    suppliers,
+    companyCurrency: currency,
+    created: new URL(request.url).searchParams.get("created"),
+    canKeep: userHasRole(user, ["buyer"]),
+  };
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  await requireRole(request, ["buyer"]);
+  const submission = parseWithZod(await request.formData(), {
+    schema: supplierSchema,
+  });
+  if (submission.status !== "success") {
+    return data({ result: submission.reply() }, { status: 400 });
+  }
+  try {
+    await createSupplier(submission.value);
+  } catch (error) {
+    if (!isStockError(error)) throw error;
+    const result = submission.reply({
+      fieldErrors: { [error.field ?? "name"]: [error.message] },
+    });
+    return data({ result }, { status: error.status });
+  }
+  return redirect(
+    `/suppliers?created=${encodeURIComponent(submission.value.name)}`,
+  );
+}
+
+export const meta: Route.MetaFunction = () => [
+  { title: "Suppliers · Turnledger" },
+];
+
+type Supplier = Route.ComponentProps["loaderData"]["suppliers"][number];
+const column = createColumnHelper<Supplier>();
+const columns = [
+  column.accessor("name", {
+    header: "Supplier",
+    cell: (info) => <span className="font-medium">{info.getValue()}</span>,
+  }),
+  column.accessor("email", {
+    header: "E-mail",
+    cell: (info) => info.getValue() ?? "—",
+  }),
+  column.accessor("currency", { header: "Quotes in" }),
+  column.accessor("leadTimeDays", {
+    header: "Lead time",
+    meta: { numeric: true },
+    cell: (info) => {
+      const days = info.getValue();
+      return days === null
+        ? "—"
+        : formatQuantity(days, days === 1 ? "day" : "days");
+    },
+  }),
+  column.accessor("priceLines", {
+    header: "Price lines",
+    meta: { numeric: true },
+    cell: (info) => formatQuantity(info.getValue(), ""),
+  }),
+  column.accessor("lastImportAt", {
+    header: "Last import",
+    cell: (info) => (
+      <span className="whitespace-nowrap">
+        {info.getValue() ? formatDateTime(info.getValue()) : "never"}
+      </span>
+    ),
+  }),
+  column.accessor("notes", {
+    header: "Notes",
+    cell: (info) => (
+      <span className="text-graphite-500">{info.getValue() ?? ""}</span>
+    ),
+  }),
+];
+
+export default function Suppliers({
+  loaderData,
+  actionData,
+}: Route.ComponentProps) {
+  const { suppliers, canKeep, created } = loaderData;
+  return (
+    <div
+      className={canKeep ? "grid gap-8 lg:grid-cols-[1fr_22rem]" : undefined}
+    >
+      <section aria-labelledby="suppliers-heading">
+        <div className="mb-4 flex flex-wrap items-baseline justify-between gap-3">
+          <h1 id="suppliers-heading" className="text-2xl font-semibold">
+            Suppliers
+          </h1>
+          <nav aria-label="Price lists" className="flex gap-4 text-sm">
+            {canKeep ? (
+              <Link
+                to="/suppliers/import"
+                className="font-medium text-copper-700 underline-offset-2 hover:underline"
+              >
+                Import a price list
+              </Link>
+            ) : null}
+            <Link
+              to="/suppliers/imports"
+              className="font-medium text-copper-700 underline-offset-2 hover:underline"
+            >
+              Past imports
+            </Link>
+          </nav>
+        </div>
+        {created ? (
+          <p
+            role="status"
+            className="mb-3 rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
+          >
+            Added the supplier {created}.
+          </p>
+        ) : null}
+        <DataTable
+          caption="Suppliers, their price lines and last price-list import"
+          columns={columns}
+          rows={suppliers}
+          sortable
+          emptyText="No suppliers yet."
+        />
+      </section>
+      {canKeep ? (
+        <NewSupplierForm
+          lastResult={actionData?.result}
+          companyCurrency={loaderData.companyCurrency}
+        />
+      ) : null}
+    </div>
+  );
+}
+
+function NewSupplierForm({
+  lastResult,
+  companyCurrency,
+}: {
+  lastResult?: SubmissionResult<string[]>;
+  companyCurrency: string;
+}) {
+  const navigation = useNavigation();
+  const [form, fields] = useForm({
+    id: "new-supplier",
+    lastResult,
+    defaultValue: { currency: companyCurrency },
+    constraint: getZodConstraint(supplierSchema),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+    onValidate({ formData }) {
+      return parseWithZod(formData, { schema: supplierSchema });
+    },
+  });
+  return (
+    <section aria-labelledby="new-supplier-heading" className="panel h-fit">
+      <h2 id="new-supplier-heading" className="mb-3 text-lg font-semibold">
+        New supplier
+      </h2>
+      <Form method="post" {...getFormProps(form)} className="space-y-4">
+        <FormMessages id={form.errorId} errors={form.errors} />
+        <TextField field={fields.name} label="Name" autoComplete="off" />
+        <TextField
+          field={fields.email}
+          label="E-mail for orders"
+          type="email"
+          autoComplete="off"
+        />
+        <TextField
+          field={fields.currency}
+          label="Quotes in (currency)"
+          autoComplete="off"
+          hint="3-letter ISO 4217 code, e.g. EUR, USD, CNY."
+        />
+        <QuantityField
+          field={fields.leadTimeDays}
+          label="Lead time"
+          unit="days"
+        />
+        <TextAreaField field={fields.notes} label="Notes" />
+        <button
+          type="submit"
+          className="button-primary w-full"
+          disabled={navigation.state !== "idle"}
+        >
+          Add supplier
+        </button>
+      </Form>
+    </section>
+  );
+}
