@@ -43,24 +43,6 @@ try {
   console.log(
     `[bench] loaded in ${((performance.now() - loadStarted) / 1000).toFixed(1)} s`,
   );
-  const buyer = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
-    method: "POST",
-    headers: { "Content-Type": "application/json" },
-    body: JSON.stringify({
-      email: "buyer@turnledger.test",
-      password: demoPassword(),
-    }),
-  });
-  const buyerCookie = buyer.headers.getSetCookie()[0]?.split(";")[0] ?? "";
-  console.log("[bench] importing a 100,000-row price list…");
-  figures.push(
-    ...(await benchPriceImport({
-      baseUrl: environment.baseUrl,
-      databaseUrl: environment.databaseUrl,
-      buyerCookie,
-      serverPid: environment.serverPid,
-    })),
-  );
   const storekeeper = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
     method: "POST",
     headers: { "Content-Type": "application/json" },
@@ -78,6 +60,24 @@ try {
       storekeeperCookie,
       skus,
       locationCode,
+    })),
+  );
+  const buyer = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
+    method: "POST",
+    headers: { "Content-Type": "application/json" },
+    body: JSON.stringify({
+      email: "buyer@turnledger.test",
+      password: demoPassword(),
+    }),
+  });
+  const buyerCookie = buyer.headers.getSetCookie()[0]?.split(";")[0] ?? "";
+  console.log("[bench] importing a 100,000-row price list…");
+  figures.push(
+    ...(await benchPriceImport({
+      baseUrl: environment.baseUrl,
+      databaseUrl: environment.databaseUrl,
+      buyerCookie,
+      serverPid: environment.serverPid,
     })),
   );
 } finally {

@@ -6,7 +6,7 @@
  * same supplier changes nothing.
  */
 import { createHash } from "node:crypto";
-import { and, eq, sql } from "drizzle-orm";
+import { and, eq, inArray, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import {
@@ -245,7 +245,11 @@ export async function importPriceList(input: {
       preview: {
         ...preview,
         matched: matched.filter((entry) => entry.itemId !== null).length,
-        newItems: matched.filter((entry) => entry.newItem !== null).length,
+        newItems: new Set(
+          matched.flatMap((entry) =>
+            entry.newItem ? [entry.newItem.sku] : [],
+          ),
+        ).size,
       },
     };
   }
@@ -265,7 +269,14 @@ export async function importPriceList(input: {
     .limit(1);
   if (previous) return { kind: "already-imported", importId: previous.id };
 
-  const newItems = matched.filter((entry) => entry.newItem !== null);
+  const newItemRows = new Map<string, MatchedRow[]>();
+  for (const entry of matched) {
+    if (!entry.newItem) continue;
+    const same = newItemRows.get(entry.newItem.sku);
+    if (same) same.push(entry);
+    else newItemRows.set(entry.newItem.sku, [entry]);
+  }
+  const newItemSkus = [...newItemRows.keys()];
   try {
     const importId = await db.transaction(async (tx) => {
       const [created] = await tx
@@ -275,48 +286,72 @@ export async function importPriceList(input: {
           fileName: input.fileName.slice(0, 200),
           fileSha256,
           rowCount: matched.length,
-          createdItems: newItems.length,
+          createdItems: newItemSkus.length,
           mapping: JSON.stringify(columnMappingToFields(input.mapping)),
           userId: input.userId,
         })
         .$returningId();
       const importId = created!.id;
 
-      for (const entry of newItems) {
-        const row = entry.row;
-        const [item] = await tx
+      // One new item per supplier SKU (a SKU's breaks are several rows), written in batches.
+      for (let first = 0; first < newItemSkus.length; first += batchSize) {
+        const batch = newItemSkus
+          .slice(first, first + batchSize)
+          .map((sku) => newItemRows.get(sku)![0]!);
+        await tx
           .insert(items)
-          .values({
-            sku: entry.newItem!.sku,
-            name: entry.newItem!.name.slice(0, 160),
-            kind: row.kind,
-            unit: row.unit,
-            sizeOrGrade:
-              row.kind === "wire"
-                ? `${row.standard === "AWG" ? "AWG " : ""}${row.size}${row.standard === "IEC" ? " mm" : ""}`
-                : "",
-          })
-          .onDuplicateKeyUpdate({ set: { sku: sql`sku` } })
-          .$returningId();
-        const [existing] = await tx
-          .select({ id: items.id })
+          .values(
+            batch.map(({ row, newItem }) => ({
+              sku: newItem!.sku,
+              name: newItem!.name.slice(0, 160),
+              kind: row.kind,
+              unit: row.unit,
+              sizeOrGrade:
+                row.kind === "wire"
+                  ? `${row.standard === "AWG" ? "AWG " : ""}${row.size}${row.standard === "IEC" ? " mm" : ""}`
+                  : "",
+            })),
+          )
+          .onDuplicateKeyUpdate({ set: { sku: sql`sku` } });
+        const ids = await tx
+          .select({ id: items.id, sku: items.sku })
           .from(items)
-          .where(eq(items.sku, entry.newItem!.sku))
-          .limit(1);
-        entry.itemId = item?.id || existing!.id;
-        if (row.kind === "wire") {
-          const thermalClass = row.thermalClass ?? 155;
+          .where(
+            inArray(
+              items.sku,
+              batch.map(({ newItem }) => newItem!.sku),
+            ),
+          );
+        const idBySku = new Map(
+          ids.map((row) => [row.sku.toLowerCase(), row.id]),
+        );
+        for (const entry of batch) {
+          const itemId = idBySku.get(entry.newItem!.sku.toLowerCase())!;
+          for (const same of newItemRows.get(entry.newItem!.sku)!)
+            same.itemId = itemId;
+        }
+        const wires = batch.filter((entry) => entry.row.kind === "wire");
+        if (wires.length > 0) {
           await tx
             .insert(wireItems)
-            .values({
-              itemId: entry.itemId,
-              conductor: "copper",
-              standard: row.standard,
-              sizeLabel: row.size,
-              insulation: row.insulation,
-              thermalClass,
-              enamel: typicalEnamel(thermalClass),
-            })
+            .values(
+              wires.map((entry) => {
+                const row = entry.row as Extract<
+                  PriceListRow,
+                  { kind: "wire" }
+                >;
+                const thermalClass = row.thermalClass ?? 155;
+                return {
+                  itemId: entry.itemId!,
+                  conductor: "copper",
+                  standard: row.standard,
+                  sizeLabel: row.size,
+                  insulation: row.insulation,
+                  thermalClass,
+                  enamel: typicalEnamel(thermalClass),
+                };
+              }),
+            )
             .onDuplicateKeyUpdate({ set: { itemId: sql`item_id` } });
         }
       }
@@ -389,7 +424,7 @@ export async function importPriceList(input: {
       kind: "imported",
       importId,
       rows: matched.length,
-      newItems: newItems.length,
+      newItems: newItemSkus.length,
       supplier: supplier.name,
       fileName: input.fileName,
     };
