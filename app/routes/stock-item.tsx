@@ -35,6 +35,9 @@ import {
 } from "~/stock/item-details.server";
 import { findItemBySku } from "~/stock/items.server";
 import { listMovements } from "~/stock/movement-journal.server";
+import { ItemBestPricesPanel } from "~/components/item-best-prices";
+import { itemPrices } from "~/purchasing/item-prices.server";
+import { quantityFromNumber } from "~/stock/decimal-amounts";
 import { isStockError } from "~/stock/stock-errors";
 import {
   formatMoney,
@@ -131,7 +134,17 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     ],
   );
   const saved = url.searchParams.get("saved");
+  // Prices for the reorder quantity (one unit when none is set), today.
+  const priceQuantity =
+    quantityFromNumber(item.reorderQuantity > 0 ? item.reorderQuantity : 1) ??
+    1000n;
+  const prices = await itemPrices(
+    item.sku,
+    priceQuantity,
+    new Date().toISOString().slice(0, 10),
+  );
   return {
+    prices,
     item,
     attributes,
     history,
@@ -360,6 +373,7 @@ export default function StockItem({
     movementCount,
     done,
     can,
+    prices,
   } = loaderData;
   const navigation = useNavigation();
   const busy = navigation.state !== "idle";
@@ -506,6 +520,8 @@ export default function StockItem({
               emptyText="Nothing on hand."
             />
           </section>
+
+          {prices ? <ItemBestPricesPanel prices={prices} /> : null}
 
           <section aria-labelledby="chart-heading" className="panel">
             <h2 id="chart-heading" className="mb-3 text-lg font-semibold">
