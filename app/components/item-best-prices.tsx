@@ -1,4 +1,4 @@
-import { formatQuantity } from "~/lib/format";
+import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export interface ItemBestPrices {
   quantity: number;
@@ -23,11 +23,10 @@ const money = (value: number, currency: string, decimals = 4) =>
 
 /** The suppliers' current prices for the reorder quantity, cheapest first, in the company currency. */
 export function ItemBestPricesPanel({ prices }: { prices: ItemBestPrices }) {
-  const decimals = prices.unit === "pcs" ? 0 : 3;
   return (
     <section aria-labelledby="prices-heading" className="panel space-y-3">
       <h2 id="prices-heading" className="text-lg font-semibold">
-        Best prices for {formatQuantity(prices.quantity, prices.unit, decimals)}
+        Best prices for {formatStockQuantity(prices.quantity, prices.unit)}
       </h2>
       {prices.prices.length === 0 && prices.cannotPrice.length === 0 ? (
         <p className="text-sm text-graphite-500">

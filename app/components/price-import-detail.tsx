@@ -1,6 +1,7 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import { DataTable } from "~/components/data-table";
 import { formatDateTime, formatQuantity } from "~/lib/format";
+import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 interface ImportLine {
   id: number;
@@ -71,11 +72,7 @@ const columns = [
     header: "From quantity",
     meta: { numeric: true },
     cell: (info) =>
-      formatQuantity(
-        info.getValue(),
-        info.row.original.unit,
-        info.row.original.unit === "pcs" ? 0 : 3,
-      ),
+      formatStockQuantity(info.getValue(), info.row.original.unit),
   }),
   column.display({
     id: "price",

@@ -1,5 +1,6 @@
 /** Helpers shared by the JSON API routes under /api/v1: one error shape everywhere. */
 import type { z } from "zod";
+import { searchParamsObject } from "./search-params";
 import { isEngineeringInputError } from "~/engineering/errors";
 
 export function apiError(
@@ -30,12 +31,40 @@ export async function readJsonBody<Schema extends z.ZodType>(
   }
   const parsed = schema.safeParse(body);
   if (parsed.success) return parsed.data;
+  throw apiError(
+    400,
+    "Some fields are missing or wrong.",
+    fieldsOf(parsed.error.issues, "body"),
+  );
+}
+
+/** Reads and validates a request's query string (empty values dropped); throws a 400 naming each bad parameter. */
+export function readSearchParams<Schema extends z.ZodType>(
+  request: Request,
+  schema: Schema,
+): z.infer<Schema> {
+  const parsed = schema.safeParse(
+    searchParamsObject(new URL(request.url).searchParams),
+  );
+  if (parsed.success) return parsed.data;
+  throw apiError(
+    400,
+    "Some query parameters are wrong.",
+    fieldsOf(parsed.error.issues, "query"),
+  );
+}
+
+/** Zod issues as the API's `fields`: messages by dotted path. */
+function fieldsOf(
+  issues: readonly z.core.$ZodIssue[],
+  whole: string,
+): Record<string, string[]> {
   const fields: Record<string, string[]> = {};
-  for (const issue of parsed.error.issues) {
-    const key = issue.path.join(".") || "body";
+  for (const issue of issues) {
+    const key = issue.path.join(".") || whole;
     (fields[key] ??= []).push(issue.message);
   }
-  throw apiError(400, "Some fields are missing or wrong.", fields);
+  return fields;
 }
 
 export function methodNotAllowed(allowed: string[]): Response {

@@ -1,31 +1,20 @@
 import type { Route } from "./+types/api.v1.items";
 import { requireRole, requireUser } from "~/auth/guard.server";
-import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
+import {
+  methodNotAllowed,
+  readJsonBody,
+  readSearchParams,
+} from "~/lib/api.server";
 import { createItem } from "~/stock/catalogue.server";
 import { itemCreateSchema } from "~/stock/item-schemas";
-import {
-  itemListQuerySchema,
-  searchParamsObject,
-} from "~/stock/item-list-query";
+import { itemListQuerySchema } from "~/stock/item-list-query";
 import { findItemBySku, listItems } from "~/stock/items.server";
 import { answerStockError } from "~/stock/stock-api.server";
 
 /** GET /api/v1/items?search=&kind=&belowReorder=1&sort=&order=&page=&pageSize= → a page of items. */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  const parsed = itemListQuerySchema.safeParse(
-    searchParamsObject(new URL(request.url).searchParams),
-  );
-  if (!parsed.success) {
-    const fields = Object.fromEntries(
-      parsed.error.issues.map((issue) => [
-        issue.path.join("."),
-        [issue.message],
-      ]),
-    );
-    return apiError(400, "Some query parameters are wrong.", fields);
-  }
-  const query = parsed.data;
+  const query = readSearchParams(request, itemListQuerySchema);
   const { total, items } = await listItems({
     search: query.search,
     kind: query.kind,

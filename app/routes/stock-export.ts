@@ -1,9 +1,7 @@
 import type { Route } from "./+types/stock-export";
+import { searchParamsObject } from "~/lib/search-params";
 import { requireUser } from "~/auth/guard.server";
-import {
-  itemListQuerySchema,
-  searchParamsObject,
-} from "~/stock/item-list-query";
+import { itemListQuerySchema } from "~/stock/item-list-query";
 import { listItems } from "~/stock/items.server";
 import {
   stockCsv,

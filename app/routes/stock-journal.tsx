@@ -5,7 +5,8 @@ import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { movementTypes } from "~/db/tables/stock-enums";
 import { formatDateTime, formatQuantity } from "~/lib/format";
-import { searchParamsObject } from "~/stock/item-list-query";
+import { formatStockQuantity } from "~/stock/stock-quantity-text";
+import { searchParamsObject } from "~/lib/search-params";
 import { movementJournalQuerySchema } from "~/stock/movement-journal-query";
 import { listMovements } from "~/stock/movement-journal.server";
 
@@ -30,7 +31,6 @@ export const meta: Route.MetaFunction = () => [
 
 type Movement = Route.ComponentProps["loaderData"]["movements"][number];
 const column = createColumnHelper<Movement>();
-const decimalsOf = (unit: string) => (unit === "pcs" ? 0 : 3);
 const columns = [
   column.accessor("createdAt", {
     header: "When",
@@ -65,11 +65,7 @@ const columns = [
       return (
         <span className={value < 0 ? "text-danger" : "text-ok"}>
           {value > 0 ? "+" : value < 0 ? "−" : ""}
-          {formatQuantity(
-            Math.abs(value),
-            info.row.original.unit,
-            decimalsOf(info.row.original.unit),
-          )}
+          {formatStockQuantity(Math.abs(value), info.row.original.unit)}
         </span>
       );
     },
@@ -78,11 +74,7 @@ const columns = [
     header: "Item on hand after",
     meta: { numeric: true },
     cell: (info) =>
-      formatQuantity(
-        info.getValue(),
-        info.row.original.unit,
-        decimalsOf(info.row.original.unit),
-      ),
+      formatStockQuantity(info.getValue(), info.row.original.unit),
   }),
   column.display({
     id: "details",
@@ -95,7 +87,7 @@ const columns = [
           ? `weighed ${formatQuantity(movement.grossKg, "kg", 3)} gross`
           : null,
         movement.countedQuantity !== null
-          ? `counted ${formatQuantity(movement.countedQuantity, movement.unit, decimalsOf(movement.unit))}`
+          ? `counted ${formatStockQuantity(movement.countedQuantity, movement.unit)}`
           : null,
         movement.unitCost !== null
           ? `at ${movement.unitCost.toFixed(4)} per ${movement.unit}`

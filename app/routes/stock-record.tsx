@@ -7,6 +7,7 @@ import { requireRole } from "~/auth/guard.server";
 import { FormMessages } from "~/components/text-field";
 import { movementTypes, type MovementType } from "~/db/tables/stock-enums";
 import { formatQuantity } from "~/lib/format";
+import { formatStockQuantity } from "~/stock/stock-quantity-text";
 import { findItemBySku, listLocations } from "~/stock/items.server";
 import { formFieldOf, movementFormSchema } from "~/stock/movement-form";
 import { isStockError } from "~/stock/stock-errors";
@@ -93,7 +94,7 @@ export async function action({ request }: Route.ActionArgs) {
   try {
     const recorded = await recordMovement(submission.value, user.id);
     const { movement, balance } = recorded;
-    const summary = `${typeLabels[movement.type].label} recorded: ${formatQuantity(Math.abs(movement.quantity), movement.unit, movement.unit === "pcs" ? 0 : 3)} of ${movement.sku}${movement.lot ? ` lot ${movement.lot}` : ""} at ${movement.location}${movement.toLocation ? ` → ${movement.toLocation}` : ""}. On hand now ${formatQuantity(balance.onHand, movement.unit, movement.unit === "pcs" ? 0 : 3)}.`;
+    const summary = `${typeLabels[movement.type].label} recorded: ${formatStockQuantity(Math.abs(movement.quantity), movement.unit)} of ${movement.sku}${movement.lot ? ` lot ${movement.lot}` : ""} at ${movement.location}${movement.toLocation ? ` → ${movement.toLocation}` : ""}. On hand now ${formatStockQuantity(balance.onHand, movement.unit)}.`;
     const params = new URLSearchParams({
       type: movement.type,
       sku: movement.sku,
@@ -188,7 +189,6 @@ export default function StockRecord({
   const [gross, setGross] = useState("");
   const [counted, setCounted] = useState("");
   const unit = item?.unit ?? "";
-  const decimals = unit === "pcs" ? 0 : 3;
   const step = unit === "pcs" ? "1" : "0.001";
   const chosen = item?.balances.find(
     (balance) => `${balance.lot ?? ""}|${balance.location}` === balanceKey,
@@ -291,8 +291,8 @@ export default function StockRecord({
             </p>
             <p className="text-sm text-graphite-500">
               {item.sizeOrGrade ? `${item.sizeOrGrade} · ` : ""}on hand{" "}
-              {formatQuantity(item.onHand, unit, decimals)}, available{" "}
-              {formatQuantity(item.available, unit, decimals)}
+              {formatStockQuantity(item.onHand, unit)}, available{" "}
+              {formatStockQuantity(item.available, unit)}
             </p>
           </div>
 
@@ -428,7 +428,7 @@ export default function StockRecord({
                             ) : null}
                           </span>
                           <span className="font-medium">
-                            {formatQuantity(balance.onHand, unit, decimals)}
+                            {formatStockQuantity(balance.onHand, unit)}
                           </span>
                         </label>
                       );
@@ -563,7 +563,7 @@ export default function StockRecord({
                   Difference to the books:{" "}
                   <strong>
                     {countDifference > 0 ? "+" : ""}
-                    {formatQuantity(countDifference, unit, decimals)}
+                    {formatStockQuantity(countDifference, unit)}
                   </strong>
                 </p>
               ) : null}

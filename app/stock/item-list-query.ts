@@ -50,12 +50,3 @@ export const itemListQuerySchema = z.object({
 });
 
 export type ItemListParams = z.output<typeof itemListQuerySchema>;
-
-/** The query string's values, empty ones dropped. */
-export function searchParamsObject(
-  params: URLSearchParams,
-): Record<string, string> {
-  return Object.fromEntries(
-    [...params.entries()].filter(([, value]) => value !== ""),
-  );
-}

@@ -51,6 +51,21 @@ function itemFilters(query: ItemListQuery): SQL | undefined {
   return conditions.length > 0 ? and(...conditions) : undefined;
 }
 
+/** The columns an item summary (list row, API answer) is made from. */
+const summaryColumns = {
+  sku: items.sku,
+  name: items.name,
+  kind: items.kind,
+  unit: items.unit,
+  sizeOrGrade: items.sizeOrGrade,
+  onHand: items.onHand,
+  reserved: items.reserved,
+  reorderPoint: items.reorderPoint,
+  reorderQuantity: items.reorderQuantity,
+  averageCost: items.averageCost,
+  active: items.active,
+};
+
 const sortColumns: Record<ItemSortKey, SQL | typeof items.sku> = {
   sku: items.sku,
   name: sql`${items.name}`,
@@ -93,19 +108,7 @@ export async function listItems(query: ItemListQuery) {
     .offset((query.page - 1) * query.pageSize)
     .as("page_ids");
   const rows = await db
-    .select({
-      sku: items.sku,
-      name: items.name,
-      kind: items.kind,
-      unit: items.unit,
-      sizeOrGrade: items.sizeOrGrade,
-      onHand: items.onHand,
-      reserved: items.reserved,
-      reorderPoint: items.reorderPoint,
-      reorderQuantity: items.reorderQuantity,
-      averageCost: items.averageCost,
-      active: items.active,
-    })
+    .select(summaryColumns)
     .from(items)
     .innerJoin(pageIds, eq(items.id, pageIds.id))
     .orderBy(...order);
@@ -150,20 +153,7 @@ function itemSummary(row: {
 /** One item with its balances by lot and location, or null. */
 export async function findItemBySku(sku: string) {
   const [row] = await db
-    .select({
-      id: items.id,
-      sku: items.sku,
-      name: items.name,
-      kind: items.kind,
-      unit: items.unit,
-      sizeOrGrade: items.sizeOrGrade,
-      onHand: items.onHand,
-      reserved: items.reserved,
-      reorderPoint: items.reorderPoint,
-      reorderQuantity: items.reorderQuantity,
-      averageCost: items.averageCost,
-      active: items.active,
-    })
+    .select({ id: items.id, ...summaryColumns })
     .from(items)
     .where(eq(items.sku, sku))
     .limit(1);

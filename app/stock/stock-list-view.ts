@@ -1,14 +1,11 @@
+import { searchParamsObject } from "~/lib/search-params";
 /**
  * The stock list's view (filters, sort, page) in the page's address, so a
  * link reproduces what someone sees. Reads a query string with the list
  * query schema the API uses, and writes the links for sort headers, pages
  * and the CSV export. Pure: no I/O.
  */
-import {
-  itemListQuerySchema,
-  searchParamsObject,
-  type ItemListParams,
-} from "./item-list-query";
+import { itemListQuerySchema, type ItemListParams } from "./item-list-query";
 import type { ItemListQuery, ItemSortKey } from "./items.server";
 
 export const stockListPageSize = 50;
