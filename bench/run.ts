@@ -18,8 +18,12 @@ import { benchStock } from "./stock.bench";
 // The benchmarks get their own database beside the tests'.
 process.env.TEST_DATABASE_NAME ??= "turnledger_test_bench";
 
+// BENCH_ONLY=price-import (or coil, stock) runs one group while working on it.
+const only = process.env.BENCH_ONLY;
+const runs = (group: string) => !only || only === group;
+
 const figures: Figure[] = [];
-figures.push(benchPureCoilEstimates());
+if (runs("coil")) figures.push(benchPureCoilEstimates());
 
 const environment = await startTestEnvironment();
 try {
@@ -32,36 +36,39 @@ try {
     }),
   });
   const cookie = signIn.headers.getSetCookie()[0]?.split(";")[0] ?? "";
-  figures.push(await benchCoilEstimateApi(environment.baseUrl, cookie));
+  if (runs("coil"))
+    figures.push(await benchCoilEstimateApi(environment.baseUrl, cookie));
 
-  console.log("[bench] loading 20,000 items and 1,000,000 movements…");
-  const loadStarted = performance.now();
-  const { skus, locationCode } = await seedBenchStock(
-    environment.databaseUrl,
-    demoStorekeeperId,
-  );
-  console.log(
-    `[bench] loaded in ${((performance.now() - loadStarted) / 1000).toFixed(1)} s`,
-  );
-  const storekeeper = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
-    method: "POST",
-    headers: { "Content-Type": "application/json" },
-    body: JSON.stringify({
-      email: "storekeeper@turnledger.test",
-      password: demoPassword(),
-    }),
-  });
-  const storekeeperCookie =
-    storekeeper.headers.getSetCookie()[0]?.split(";")[0] ?? "";
-  figures.push(
-    ...(await benchStock({
-      baseUrl: environment.baseUrl,
-      databaseUrl: environment.databaseUrl,
-      storekeeperCookie,
-      skus,
-      locationCode,
-    })),
-  );
+  if (runs("stock")) {
+    console.log("[bench] loading 20,000 items and 1,000,000 movements…");
+    const loadStarted = performance.now();
+    const { skus, locationCode } = await seedBenchStock(
+      environment.databaseUrl,
+      demoStorekeeperId,
+    );
+    console.log(
+      `[bench] loaded in ${((performance.now() - loadStarted) / 1000).toFixed(1)} s`,
+    );
+    const storekeeper = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
+      method: "POST",
+      headers: { "Content-Type": "application/json" },
+      body: JSON.stringify({
+        email: "storekeeper@turnledger.test",
+        password: demoPassword(),
+      }),
+    });
+    const storekeeperCookie =
+      storekeeper.headers.getSetCookie()[0]?.split(";")[0] ?? "";
+    figures.push(
+      ...(await benchStock({
+        baseUrl: environment.baseUrl,
+        databaseUrl: environment.databaseUrl,
+        storekeeperCookie,
+        skus,
+        locationCode,
+      })),
+    );
+  }
   const buyer = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
     method: "POST",
     headers: { "Content-Type": "application/json" },
@@ -71,15 +78,17 @@ try {
     }),
   });
   const buyerCookie = buyer.headers.getSetCookie()[0]?.split(";")[0] ?? "";
-  console.log("[bench] importing a 100,000-row price list…");
-  figures.push(
-    ...(await benchPriceImport({
-      baseUrl: environment.baseUrl,
-      databaseUrl: environment.databaseUrl,
-      buyerCookie,
-      serverPid: environment.serverPid,
-    })),
-  );
+  if (runs("price-import")) {
+    console.log("[bench] importing a 100,000-row price list…");
+    figures.push(
+      ...(await benchPriceImport({
+        baseUrl: environment.baseUrl,
+        databaseUrl: environment.databaseUrl,
+        buyerCookie,
+        serverPid: environment.serverPid,
+      })),
+    );
+  }
 } finally {
   await environment.stop();
 }
@@ -94,7 +103,7 @@ const report = {
   figures,
 };
 fs.writeFileSync(
-  path.join(import.meta.dirname, "report.json"),
+  path.join(import.meta.dirname, only ? `report-${only}.json` : "report.json"),
   JSON.stringify(report, null, 2),
 );
 console.log(

@@ -189,3 +189,34 @@ describe("large files", () => {
     expect(last?.cells[0]).toBe("CU-99999");
   }, 60_000);
 });
+
+describe("reading in batches", () => {
+  // Every awkward case at once: a "sep=" line, blank lines before and between rows, a quoted
+  // value over two lines, a row with too few columns, CR LF ends, no newline at the end.
+  const samples = [
+    'SKU,Price\nA-1,1\n\nA-2,2\n"A\n3",3\nA-4\nA-5,5\nA-6,6',
+    "sep=;\r\n\r\nSKU;Price\r\nB-1;1,5\r\nB-2;2\r\n\r\nB-3;3\r\n",
+    'SKU,Price\nC-1,1\n"C-2,2\nC-3,3\n',
+  ];
+
+  it.each(samples)(
+    "hands over the same rows and errors as one pass, whatever the batch size (%#)",
+    async (text) => {
+      const whole = parsed(text);
+      for (const batchRows of [1, 2, 3, 1_000]) {
+        const opened = openPriceListCsv(text);
+        if (!opened.ok) throw new Error(opened.message);
+        const rows: CsvDataRow[] = [];
+        const batchSizes: number[] = [];
+        const outcome = await opened.forEachBatch(batchRows, async (batch) => {
+          batchSizes.push(batch.length);
+          rows.push(...batch);
+        });
+        if (!outcome.ok) throw new Error(outcome.message);
+        expect(rows).toEqual(whole.rows);
+        expect(outcome.errors).toEqual(whole.errors);
+        expect(Math.max(...batchSizes)).toBeLessThanOrEqual(batchRows);
+      }
+    },
+  );
+});

@@ -67,6 +67,14 @@ export interface OpenedPriceListCsv {
   layout: CsvLayout;
   /** Calls `onRow` for each well-formed data row, in file order; broken rows become errors. */
   forEachRow(onRow: (row: CsvDataRow) => void): CsvRowsOutcome;
+  /**
+   * The same rows handed over in batches of up to `batchRows` file rows, each
+   * awaited before the next is parsed: a large file is never a whole array of rows.
+   */
+  forEachBatch(
+    batchRows: number,
+    onBatch: (rows: CsvDataRow[], lineErrorsSoFar: number) => Promise<void>,
+  ): Promise<CsvRowsOutcome>;
 }
 
 export const noDataRowsMessage =
@@ -136,6 +144,8 @@ export function openPriceListCsv(
     ok: true,
     layout,
     forEachRow: (onRow) => readDataRows(normalised, layout, onRow),
+    forEachBatch: (batchRows, onBatch) =>
+      readDataRowsInBatches(normalised, layout, batchRows, onBatch),
   };
 }
 
@@ -157,50 +167,126 @@ export function parsePriceList(
 // Reading the data rows
 // ---------------------------------------------------------------------------
 
+/**
+ * Turns Papa Parse's steps into data rows and line errors. Fed by one parse of
+ * the whole text, or by several parses of consecutive slices of it
+ * (`rowStart` is always an offset in the whole text).
+ */
+class DataRowReader {
+  readonly errors: LineError[] = [];
+  dataRowCount = 0;
+  /** A quotation mark that is never closed swallows the rest of the file: stop there. */
+  stopped = false;
+  private readonly lines: LineCounter;
+
+  constructor(
+    text: string,
+    private readonly layout: CsvLayout,
+  ) {
+    this.lines = new LineCounter(text);
+  }
+
+  /** Reads one parsed row that starts at `rowStart`; answers the data row, or null. */
+  step(
+    result: Papa.ParseStepResult<string[]>,
+    rowStart: number,
+  ): CsvDataRow | null {
+    const line = this.lines.lineAt(rowStart);
+    if (line <= this.layout.headerLine) return null;
+    const cells = result.data;
+    if (isBlankRow(cells) && result.errors.length === 0) return null;
+    this.dataRowCount += 1;
+
+    const quoteProblem = describeQuoteErrors(result.errors);
+    if (quoteProblem) {
+      this.errors.push(lineError(line, quoteProblem.message));
+      if (quoteProblem.readsToEnd) this.stopped = true;
+      return null;
+    }
+    const fitted = fitToHeader(cells, this.layout.headers.length);
+    if (!fitted) {
+      this.errors.push(
+        lineError(
+          line,
+          `the row has ${columnCount(cells)} but the header has ${this.layout.headers.length}.`,
+        ),
+      );
+      return null;
+    }
+    return { line, cells: fitted };
+  }
+
+  outcome(): CsvRowsOutcome {
+    if (this.dataRowCount === 0)
+      return { ok: false, message: noDataRowsMessage };
+    return { ok: true, dataRowCount: this.dataRowCount, errors: this.errors };
+  }
+}
+
+/**
+ * Parses up to `maxRows` rows of `text` from `offset`, handing each data row
+ * to `onRow`; answers the offset after the last row read, or null at the end.
+ */
+function parseRowsFrom(
+  text: string,
+  offset: number,
+  maxRows: number,
+  reader: DataRowReader,
+  onRow: (row: CsvDataRow) => void,
+  delimiter: CsvDelimiter,
+): number | null {
+  let rowStart = offset;
+  let steps = 0;
+  Papa.parse<string[]>(offset === 0 ? text : text.slice(offset), {
+    delimiter,
+    newline: "\n",
+    skipEmptyLines: false,
+    // A batch must not make Papa Parse split the whole rest of the file into lines (its
+    // fast mode does, before looking at `preview`): parse character by character instead.
+    ...(Number.isFinite(maxRows) ? { preview: maxRows, fastMode: false } : {}),
+    step: (result, parser) => {
+      steps += 1;
+      const row = reader.step(result, rowStart);
+      rowStart = offset + result.meta.cursor;
+      if (reader.stopped) parser.abort();
+      else if (row) onRow(row);
+    },
+  });
+  if (reader.stopped || steps < maxRows || rowStart >= text.length) return null;
+  return rowStart;
+}
+
 function readDataRows(
   text: string,
   layout: CsvLayout,
   onRow: (row: CsvDataRow) => void,
 ): CsvRowsOutcome {
-  const errors: LineError[] = [];
-  const lines = new LineCounter(text);
-  let rowStart = 0;
-  let dataRowCount = 0;
+  const reader = new DataRowReader(text, layout);
+  parseRowsFrom(text, 0, Infinity, reader, onRow, layout.delimiter);
+  return reader.outcome();
+}
 
-  Papa.parse<string[]>(text, {
-    delimiter: layout.delimiter,
-    newline: "\n",
-    skipEmptyLines: false,
-    step: (result, parser) => {
-      const line = lines.lineAt(rowStart);
-      rowStart = result.meta.cursor;
-      if (line <= layout.headerLine) return;
-      const cells = result.data;
-      if (isBlankRow(cells) && result.errors.length === 0) return;
-      dataRowCount += 1;
-
-      const quoteProblem = describeQuoteErrors(result.errors);
-      if (quoteProblem) {
-        errors.push(lineError(line, quoteProblem.message));
-        if (quoteProblem.readsToEnd) parser.abort();
-        return;
-      }
-      const fitted = fitToHeader(cells, layout.headers.length);
-      if (!fitted) {
-        errors.push(
-          lineError(
-            line,
-            `the row has ${columnCount(cells)} but the header has ${layout.headers.length}.`,
-          ),
-        );
-        return;
-      }
-      onRow({ line, cells: fitted });
-    },
-  });
-
-  if (dataRowCount === 0) return { ok: false, message: noDataRowsMessage };
-  return { ok: true, dataRowCount, errors };
+async function readDataRowsInBatches(
+  text: string,
+  layout: CsvLayout,
+  batchRows: number,
+  onBatch: (rows: CsvDataRow[], lineErrorsSoFar: number) => Promise<void>,
+): Promise<CsvRowsOutcome> {
+  const reader = new DataRowReader(text, layout);
+  let offset: number | null = 0;
+  while (offset !== null) {
+    const batch: CsvDataRow[] = [];
+    offset = parseRowsFrom(
+      text,
+      offset,
+      batchRows,
+      reader,
+      (row) => batch.push(row),
+      layout.delimiter,
+    );
+    if (batch.length > 0) await onBatch(batch, reader.errors.length);
+  }
+  return reader.outcome();
 }
 
 /**

@@ -18,15 +18,32 @@ export interface PriceListPreview {
   invalid: LineError[];
 }
 
+/** Builds a preview row by row, keeping only the rows it shows. */
+export class PriceListPreviewCollector {
+  private readonly shown: PriceListRow[] = [];
+  private counted = 0;
+
+  add(row: PriceListRow): void {
+    if (this.shown.length < previewRowCount) this.shown.push(row);
+    this.counted += 1;
+  }
+
+  preview(errors: readonly LineError[]): PriceListPreview {
+    return {
+      rows: this.shown,
+      valid: this.counted,
+      invalid: [...errors]
+        .sort((a, b) => a.line - b.line)
+        .map(({ line, message }) => ({ line, message })),
+    };
+  }
+}
+
 export function summarisePreview(
   rows: readonly PriceListRow[],
   errors: readonly LineError[],
 ): PriceListPreview {
-  return {
-    rows: rows.slice(0, previewRowCount),
-    valid: rows.length,
-    invalid: [...errors]
-      .sort((a, b) => a.line - b.line)
-      .map(({ line, message }) => ({ line, message })),
-  };
+  const collector = new PriceListPreviewCollector();
+  for (const row of rows) collector.add(row);
+  return collector.preview(errors);
 }

@@ -133,7 +133,9 @@ export function readPriceListRow(
   }
 
   const description = cell("description");
-  const descriptionLength = [...description].length;
+  // Characters as a person counts them (code points); only counted when it could matter.
+  const descriptionLength =
+    description.length > maxDescriptionLength ? [...description].length : 0;
   if (descriptionLength > maxDescriptionLength) {
     problems.push(
       `the description has ${descriptionLength} characters; the limit is ${maxDescriptionLength}`,
@@ -524,14 +526,41 @@ function assertImportDay(importDay: string): void {
  * good ones and the errors. Rows are compared by supplier SKU (ignoring
  * letter case, as the database compares text), minimum quantity and start day.
  */
+/** What a kept row is compared by; smaller than the row, so a 100,000-row file stays light. */
+interface RowFingerprint {
+  line: number;
+  price: string;
+  item: string;
+  description: string;
+}
+
+function fingerprintOf(row: PriceListRow): RowFingerprint {
+  return {
+    line: row.line,
+    price: describePrice(row),
+    item: describeItem(row),
+    description: row.description,
+  };
+}
+
 export class PriceListRowCollector {
-  readonly rows: PriceListRow[] = [];
+  /** Good rows not yet taken, in file order. */
+  rows: PriceListRow[] = [];
   readonly errors: LineError[] = [];
-  private readonly rowsByPriceKey = new Map<string, PriceListRow>();
-  private readonly firstRowBySku = new Map<string, PriceListRow>();
+  /** Good rows seen so far, exact repeats counted once. */
+  goodRowCount = 0;
+  private readonly rowsByPriceKey = new Map<string, RowFingerprint>();
+  private readonly firstRowBySku = new Map<string, RowFingerprint>();
 
   constructor(private readonly context: PriceListRowContext) {
     assertImportDay(context.importDay);
+  }
+
+  /** The good rows collected since the last call; the collector forgets them (it still knows their keys). */
+  takeRows(): PriceListRow[] {
+    const taken = this.rows;
+    this.rows = [];
+    return taken;
   }
 
   add(data: CsvDataRow): void {
@@ -543,10 +572,11 @@ export class PriceListRowCollector {
     const row = reading.row;
     const skuKey = row.supplierSku.toLowerCase();
     const priceKey = `${skuKey}\u0000${row.minQuantity}\u0000${row.validFrom}`;
+    const fingerprint = fingerprintOf(row);
 
     const earlier = this.rowsByPriceKey.get(priceKey);
     if (earlier) {
-      const difference = describeDifference(earlier, row);
+      const difference = describeDifference(earlier, fingerprint);
       if (difference) {
         this.errors.push(
           lineError(
@@ -559,36 +589,33 @@ export class PriceListRowCollector {
     }
 
     const first = this.firstRowBySku.get(skuKey);
-    if (first && describeItem(first) !== describeItem(row)) {
+    if (first && first.item !== fingerprint.item) {
       this.errors.push(
         lineError(
           row.line,
-          `the supplier SKU ${quote(row.supplierSku)} is ${describeItem(row)} here but ${describeItem(first)} on line ${first.line}; one SKU must always be the same item.`,
+          `the supplier SKU ${quote(row.supplierSku)} is ${fingerprint.item} here but ${first.item} on line ${first.line}; one SKU must always be the same item.`,
         ),
       );
       return;
     }
 
-    this.rowsByPriceKey.set(priceKey, row);
-    if (!first) this.firstRowBySku.set(skuKey, row);
+    this.rowsByPriceKey.set(priceKey, fingerprint);
+    if (!first) this.firstRowBySku.set(skuKey, fingerprint);
+    this.goodRowCount += 1;
     this.rows.push(row);
   }
 }
 
 /** What differs between two rows with the same SKU, quantity and day; null when they are the same. */
 function describeDifference(
-  earlier: PriceListRow,
-  later: PriceListRow,
+  earlier: RowFingerprint,
+  later: RowFingerprint,
 ): string | null {
-  const earlierPrice = describePrice(earlier);
-  const laterPrice = describePrice(later);
-  if (earlierPrice !== laterPrice) {
-    return `another price (${earlierPrice} there, ${laterPrice} here)`;
+  if (earlier.price !== later.price) {
+    return `another price (${earlier.price} there, ${later.price} here)`;
   }
-  const earlierItem = describeItem(earlier);
-  const laterItem = describeItem(later);
-  if (earlierItem !== laterItem) {
-    return `another item (${earlierItem} there, ${laterItem} here)`;
+  if (earlier.item !== later.item) {
+    return `another item (${earlier.item} there, ${later.item} here)`;
   }
   if (earlier.description !== later.description) {
     return "another description";

@@ -1,6 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { suggestMapping, type ColumnMapping } from "./column-mapping";
-import { readPriceListFile, readPriceListText } from "./read-price-list";
+import {
+  readPriceListFile,
+  readPriceListInBatches,
+  readPriceListText,
+} from "./read-price-list";
 
 const knownGrades = new Set(["n42sh", "n52"]);
 const importDay = "2025-06-02";
@@ -158,4 +162,39 @@ describe("reading a whole price list", () => {
       minQuantity: "76.000",
     });
   }, 60_000);
+});
+
+describe("reading a price list in batches", () => {
+  it("hands over the same good rows and errors as a whole reading, a batch at a time", async () => {
+    const text = [
+      "SKU;Description;Standard;Size;Price;Currency;Min qty",
+      "CU-050;Wire;IEC;0,50;14,25;EUR;25",
+      "CU-050;Wire;IEC;0,50;13,90;EUR;100",
+      "CU-050;Wire;IEC;0,50;13,90;EUR;100",
+      "CU-050;Wire;IEC;0,50;13,80;EUR;100",
+      "CU-051;Wire;IEC;0,56;-1;EUR;1",
+      "CU-052;Wire;IEC;0,63;12;EUR;1",
+    ].join("\n");
+    const mapping = mappingFor(text);
+    const whole = readPriceListText(text, { mapping, importDay, knownGrades });
+    if (!whole.ok) throw new Error(whole.messages.join(" "));
+
+    const batches: number[][] = [];
+    const batched = await readPriceListInBatches(
+      new TextEncoder().encode(text),
+      { mapping, importDay, knownGrades },
+      2,
+      async (rows) => {
+        batches.push(rows.map((row) => row.line));
+      },
+    );
+    if (!batched.ok) throw new Error(batched.messages.join(" "));
+    // Two file rows a batch, the header included: [1, 2], [3, 4], [5, 6], [7]. Line 4 repeats
+    // line 3 exactly (kept once); line 5 gives line 3's break another price and line 6 a
+    // negative price (errors, so that batch hands over nothing); line 7 is good.
+    expect(batches).toEqual([[2], [3], [7]]);
+    expect(batched.goodRows).toBe(whole.rows.length);
+    expect(batched.errors).toEqual(whole.errors);
+    expect(batched.errors.map((error) => error.line)).toEqual([5, 6]);
+  });
 });

@@ -14,6 +14,7 @@ import {
   openPriceListCsv,
   type CsvLayout,
   type LineError,
+  type OpenedPriceListCsv,
 } from "./parse-price-list";
 import { PriceListRowCollector, type PriceListRow } from "./price-list-rows";
 
@@ -46,11 +47,17 @@ export function readPriceListFile(
   return readPriceListText(decoded.text, options);
 }
 
-/** Reads price-list text with a mapping into typed rows and per-line errors. */
-export function readPriceListText(
+/** Opens the text and checks the mapping: a row collector ready to be fed, or file-level problems. */
+function openReading(
   text: string,
   options: PriceListReadOptions,
-): PriceListReading {
+):
+  | {
+      ok: true;
+      opened: OpenedPriceListCsv;
+      collector: PriceListRowCollector;
+    }
+  | { ok: false; messages: string[] } {
   const opened = openPriceListCsv(text);
   if (!opened.ok) return { ok: false, messages: [opened.message] };
 
@@ -66,6 +73,17 @@ export function readPriceListText(
     knownGrades: options.knownGrades,
     supplierCurrency: options.supplierCurrency,
   });
+  return { ok: true, opened, collector };
+}
+
+/** Reads price-list text with a mapping into typed rows and per-line errors. */
+export function readPriceListText(
+  text: string,
+  options: PriceListReadOptions,
+): PriceListReading {
+  const reading = openReading(text, options);
+  if (!reading.ok) return reading;
+  const { opened, collector } = reading;
   const outcome = opened.forEachRow((row) => collector.add(row));
   if (!outcome.ok) return { ok: false, messages: [outcome.message] };
 
@@ -73,4 +91,45 @@ export function readPriceListText(
     (a, b) => a.line - b.line,
   );
   return { ok: true, layout: opened.layout, rows: collector.rows, errors };
+}
+
+/**
+ * Reads an uploaded file and hands its good rows over in batches (each awaited
+ * before the next is read), keeping none of them: for imports of large files.
+ * Each batch comes with the number of bad lines found so far; the errors of
+ * every line come back at the end, in file order.
+ */
+export async function readPriceListInBatches(
+  bytes: Uint8Array,
+  options: PriceListReadOptions,
+  batchRows: number,
+  onBatch: (rows: PriceListRow[], lineErrorsSoFar: number) => Promise<void>,
+): Promise<
+  | { ok: true; layout: CsvLayout; goodRows: number; errors: LineError[] }
+  | { ok: false; messages: string[] }
+> {
+  const decoded = decodePriceListBytes(bytes);
+  if (!decoded.ok) return { ok: false, messages: [decoded.message] };
+  const reading = openReading(decoded.text, options);
+  if (!reading.ok) return reading;
+  const { opened, collector } = reading;
+  const outcome = await opened.forEachBatch(
+    batchRows,
+    async (batch, csvErrorsSoFar) => {
+      for (const row of batch) collector.add(row);
+      const rows = collector.takeRows();
+      if (rows.length > 0)
+        await onBatch(rows, csvErrorsSoFar + collector.errors.length);
+    },
+  );
+  if (!outcome.ok) return { ok: false, messages: [outcome.message] };
+  const errors = [...outcome.errors, ...collector.errors].sort(
+    (a, b) => a.line - b.line,
+  );
+  return {
+    ok: true,
+    layout: opened.layout,
+    goodRows: collector.goodRowCount,
+    errors,
+  };
 }
