@@ -23,6 +23,22 @@ export default [
       route("imports", "routes/price-imports.tsx"),
     ]),
     route("prices", "routes/prices.tsx"),
+    ...prefix("designs", [
+      index("routes/designs.tsx"),
+      route(":designId/revisions/:revision", "routes/design-revision.tsx"),
+      route(
+        ":designId/revisions/:revision/bom.csv",
+        "routes/design-bom-export.ts",
+      ),
+      route(
+        ":designId/revisions/:revision/print",
+        "routes/design-bom-print.tsx",
+      ),
+    ]),
+    ...prefix("build-orders", [
+      index("routes/build-orders.tsx"),
+      route(":orderId", "routes/build-order.tsx"),
+    ]),
     ...prefix("stock", [
       index("routes/stock.tsx"),
       route("export.csv", "routes/stock-export.ts"),
@@ -58,6 +74,24 @@ export default [
     route("metal-base", "routes/api.v1.metal-base.ts"),
     route("currency-rates", "routes/api.v1.currency-rates.ts"),
     route("items/:sku/prices", "routes/api.v1.item-prices.ts"),
+    route("designs", "routes/api.v1.designs.ts"),
+    route("designs/:designId", "routes/api.v1.design.ts"),
+    route("designs/:designId/revisions", "routes/api.v1.design-revisions.ts"),
+    route(
+      "designs/:designId/revisions/:revision",
+      "routes/api.v1.design-revision.ts",
+    ),
+    route(
+      "designs/:designId/revisions/:revision/release",
+      "routes/api.v1.design-revision-release.ts",
+    ),
+    route(
+      "designs/:designId/revisions/:revision/costing",
+      "routes/api.v1.design-costing.ts",
+    ),
+    route("build-orders", "routes/api.v1.build-orders.ts"),
+    route("build-orders/:orderId", "routes/api.v1.build-order.ts"),
+    route("build-orders/:orderId/:step", "routes/api.v1.build-order-step.ts"),
   ]),
 
   route("*", "routes/not-found.tsx"),

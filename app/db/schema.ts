@@ -4,3 +4,5 @@ export * from "./tables/reference";
 export * from "./tables/stock";
 export * from "./tables/stock-enums";
 export * from "./tables/purchasing";
+export * from "./tables/designs";
+export * from "./tables/build-orders";

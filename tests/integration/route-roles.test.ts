@@ -6,25 +6,23 @@
 import type { RouteConfigEntry } from "@react-router/dev/routes";
 import { beforeAll, describe, expect, it } from "vitest";
 import routes from "~/routes";
-import { roles, type Role } from "~/lib/roles";
+import { roles } from "~/lib/roles";
 import { demoPassword, demoPeople } from "../../seed/demo-people";
 import { baseUrl, signIn } from "../support/app-client";
 
-type Who = "anonymous" | Role;
-const everyone: Who[] = ["anonymous", ...roles];
+import { buildOrderRouteRows } from "./route-roles.build-orders";
+import { designRouteRows } from "./route-roles.designs";
+import type { RouteRoleRow as Row, Who } from "../support/route-role-row";
 
-interface Row {
-  file: string;
-  method: "GET" | "POST" | "PATCH" | "PUT";
-  path: string;
-  /** Expected status per caller; `signedIn` covers every role not named. */
-  expect: Partial<Record<Who, number>> & { signedIn?: number };
-}
+const everyone: Who[] = ["anonymous", ...roles];
 
 const adminOnly = { anonymous: 302, admin: 200, signedIn: 403 };
 const adminOnlyApi = { anonymous: 401, admin: 200, signedIn: 403 };
 
+// Rows of the design and build-order routes live beside this file.
 const table: Row[] = [
+  ...designRouteRows,
+  ...buildOrderRouteRows,
   {
     file: "routes/app-shell.tsx",
     method: "GET",

@@ -1,0 +1,131 @@
+/**
+ * Build orders: N motors of a released design revision. Each line is one item
+ * with the quantity required, reserved (held on particular balances, see
+ * `build_order_reservations`) and issued. Every status change is recorded.
+ */
+import { sql } from "drizzle-orm";
+import {
+  bigint,
+  check,
+  datetime,
+  decimal,
+  index,
+  int,
+  mysqlEnum,
+  mysqlTable,
+  primaryKey,
+  varchar,
+} from "drizzle-orm/mysql-core";
+import { createdAt, users } from "./accounts";
+import { designRevisions, designs } from "./designs";
+import { items, locations } from "./stock";
+
+export const buildOrderStatuses = [
+  "draft",
+  "reserved",
+  "in_progress",
+  "complete",
+  "cancelled",
+] as const;
+
+const quantity = (name: string) => decimal(name, { precision: 14, scale: 3 });
+
+export const buildOrders = mysqlTable(
+  "build_orders",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    designId: int("design_id")
+      .notNull()
+      .references(() => designs.id),
+    revisionId: int("revision_id")
+      .notNull()
+      .references(() => designRevisions.id),
+    /** Motors to build. */
+    quantity: int("quantity").notNull(),
+    status: mysqlEnum("status", buildOrderStatuses).notNull().default("draft"),
+    note: varchar("note", { length: 500 }).notNull().default(""),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    updatedAt: datetime("updated_at", { mode: "date", fsp: 3 }).notNull(),
+  },
+  (table) => [
+    index("build_orders_status_idx").on(table.status, table.id),
+    index("build_orders_revision_idx").on(table.revisionId),
+    check("build_orders_quantity_positive", sql`${table.quantity} > 0`),
+  ],
+);
+
+export const buildOrderLines = mysqlTable(
+  "build_order_lines",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    orderId: int("order_id")
+      .notNull()
+      .references(() => buildOrders.id),
+    itemId: int("item_id")
+      .notNull()
+      .references(() => items.id),
+    /** Per-motor quantity × motors (wire in kg including scrap), rounded up to the unit's step. */
+    required: quantity("required").notNull(),
+    reserved: quantity("reserved").notNull().default("0"),
+    issued: quantity("issued").notNull().default("0"),
+    /** Planned cost of the line at creation (company currency), for planned vs actual. */
+    plannedUnitCost: decimal("planned_unit_cost", { precision: 14, scale: 4 }),
+  },
+  (table) => [
+    index("build_order_lines_order_idx").on(table.orderId, table.itemId),
+    index("build_order_lines_item_idx").on(table.itemId),
+    check("build_order_lines_required", sql`${table.required} > 0`),
+    check("build_order_lines_reserved", sql`${table.reserved} >= 0`),
+    check("build_order_lines_issued", sql`${table.issued} >= 0`),
+  ],
+);
+
+/** What one order line holds on one balance (item × lot × location). */
+export const buildOrderReservations = mysqlTable(
+  "build_order_reservations",
+  {
+    lineId: int("line_id")
+      .notNull()
+      .references(() => buildOrderLines.id),
+    itemId: int("item_id")
+      .notNull()
+      .references(() => items.id),
+    lotId: int("lot_id").notNull().default(0),
+    locationId: int("location_id")
+      .notNull()
+      .references(() => locations.id),
+    quantity: quantity("quantity").notNull(),
+  },
+  (table) => [
+    primaryKey({
+      columns: [table.lineId, table.itemId, table.lotId, table.locationId],
+    }),
+    index("build_order_reservations_balance_idx").on(
+      table.itemId,
+      table.lotId,
+      table.locationId,
+    ),
+    check("build_order_reservations_positive", sql`${table.quantity} > 0`),
+  ],
+);
+
+export const buildOrderEvents = mysqlTable(
+  "build_order_events",
+  {
+    id: bigint("id", { mode: "number" }).autoincrement().primaryKey(),
+    orderId: int("order_id")
+      .notNull()
+      .references(() => buildOrders.id),
+    fromStatus: mysqlEnum("from_status", buildOrderStatuses),
+    toStatus: mysqlEnum("to_status", buildOrderStatuses).notNull(),
+    note: varchar("note", { length: 500 }).notNull().default(""),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (table) => [index("build_order_events_order_idx").on(table.orderId)],
+);
