@@ -1,0 +1,172 @@
+/**
+ * Reading design revisions from the database as the pure design modules take
+ * them: the revision's figures and its lines (coil, magnet, part) joined to
+ * their catalogue items.
+ */
+import { and, asc, eq, inArray } from "drizzle-orm";
+import { db } from "~/db/client.server";
+import {
+  designLines,
+  designRevisions,
+  designs,
+  items,
+  magnetGrades,
+  magnetItems,
+  wireItems,
+} from "~/db/schema";
+import type { ConductorKey } from "~/engineering/reference-data";
+import { parseExactDecimal } from "~/pricing/money";
+import { magnetGradeFromRow } from "~/reference/magnet-grades.server";
+import {
+  magnetShapeOf,
+  magnetStockFigures,
+  wireSpecOf,
+} from "~/stock/stocked-item-figures";
+import type { DesignLine } from "./design-lines";
+
+export type RevisionRow = typeof designRevisions.$inferSelect;
+
+/** A design line as stored, with its id and position (for editing). */
+export type StoredDesignLine = DesignLine & {
+  id: number;
+  position: number;
+  itemName: string;
+};
+
+/** The revision of a design by its number, with the design's name; null when either is missing. */
+export async function findRevision(designId: number, revision: number) {
+  const [found] = await db
+    .select({
+      design: {
+        id: designs.id,
+        name: designs.name,
+        description: designs.description,
+        motorType: designs.motorType,
+      },
+      revision: designRevisions,
+    })
+    .from(designRevisions)
+    .innerJoin(designs, eq(designs.id, designRevisions.designId))
+    .where(
+      and(
+        eq(designRevisions.designId, designId),
+        eq(designRevisions.revision, revision),
+      ),
+    )
+    .limit(1);
+  return found ?? null;
+}
+
+const optionalNumber = (value: string | null): number | null =>
+  value === null ? null : Number(value);
+
+/** The lines of a revision in their order, as the design calculations take them. */
+export async function loadRevisionLines(
+  revisionId: number,
+): Promise<StoredDesignLine[]> {
+  const [revision] = await db
+    .select({
+      slotAreaMm2: designRevisions.slotAreaMm2,
+      coilSidesPerSlot: designRevisions.coilSidesPerSlot,
+    })
+    .from(designRevisions)
+    .where(eq(designRevisions.id, revisionId))
+    .limit(1);
+  if (!revision) return [];
+  const rows = await db
+    .select({
+      line: designLines,
+      item: {
+        sku: items.sku,
+        name: items.name,
+        unit: items.unit,
+      },
+      wire: wireItems,
+      magnet: magnetItems,
+    })
+    .from(designLines)
+    .innerJoin(items, eq(items.id, designLines.itemId))
+    .leftJoin(wireItems, eq(wireItems.itemId, designLines.itemId))
+    .leftJoin(magnetItems, eq(magnetItems.itemId, designLines.itemId))
+    .where(eq(designLines.revisionId, revisionId))
+    .orderBy(asc(designLines.position));
+
+  const gradeKeys = [
+    ...new Set(
+      rows.flatMap((row) => (row.magnet ? [row.magnet.gradeKey] : [])),
+    ),
+  ];
+  const grades = new Map(
+    (gradeKeys.length === 0
+      ? []
+      : await db
+          .select()
+          .from(magnetGrades)
+          .where(inArray(magnetGrades.key, gradeKeys))
+    ).map((row) => [row.key, magnetGradeFromRow(row)]),
+  );
+  const slotArea = optionalNumber(revision.slotAreaMm2);
+
+  return rows.map(({ line, item, wire, magnet }): StoredDesignLine => {
+    const common = {
+      id: line.id,
+      position: line.position,
+      itemName: item.name,
+    };
+    const ref = { itemId: line.itemId, sku: item.sku };
+    if (line.kind === "coil" && wire) {
+      return {
+        ...common,
+        kind: "coil",
+        wire: {
+          ...ref,
+          conductor: wire.conductor as ConductorKey,
+          size: wireSpecOf(wire.standard, wire.sizeLabel),
+          enamelledLinearMassKgPerM: null,
+          thermalClassC: wire.thermalClass,
+        },
+        turns: line.turns!,
+        strandsInHand: line.strandsInHand!,
+        activeLengthMm: Number(line.activeLengthMm),
+        endTurnLengthMm: Number(line.endTurnLengthMm),
+        leadLengthMm: Number(line.leadLengthMm),
+        coilsPerMotor: line.coilsPerMotor!,
+        scrapPercent: Number(line.scrapPercent),
+        operatingTemperatureC: Number(line.operatingTemperatureC),
+        slot:
+          slotArea === null
+            ? null
+            : {
+                areaMm2: slotArea,
+                coilSidesPerSlot: revision.coilSidesPerSlot,
+              },
+      };
+    }
+    if (line.kind === "magnet" && magnet) {
+      const grade = grades.get(magnet.gradeKey);
+      const shape = magnetShapeOf(magnet.shape, magnet.dimensionsMm);
+      const massPerPieceKg =
+        grade && shape
+          ? magnetStockFigures({ grade, shape, pieces: 1 }).massPerPieceKg
+          : 0;
+      return {
+        ...common,
+        kind: "magnet",
+        magnet: {
+          ...ref,
+          gradeName: grade?.name ?? magnet.gradeKey,
+          massPerPieceKg,
+          maxWorkingTemperatureC: grade?.maxWorkingTemperatureC ?? Infinity,
+        },
+        piecesPerMotor: line.piecesPerMotor!,
+        operatingTemperatureC: optionalNumber(line.operatingTemperatureC),
+      };
+    }
+    return {
+      ...common,
+      kind: "part",
+      part: { ...ref, unit: item.unit },
+      quantityPerMotor: parseExactDecimal(line.quantityPerMotor ?? "0"),
+    };
+  });
+}
