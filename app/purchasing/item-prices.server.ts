@@ -1,4 +1,8 @@
-/** The best current prices of one item for a quantity, from the stored price lines (app/pricing does the sums). */
+/**
+ * One item's prices from the stored price lines: the best current prices for a quantity
+ * and the price history for the same quantity (app/pricing does the sums). Both read the
+ * same inputs, loaded once by `loadItemPricing`.
+ */
 import { eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import {
@@ -10,38 +14,74 @@ import {
 } from "~/db/schema";
 import type { ConductorKey } from "~/engineering/reference-data";
 import { bestPrices } from "~/pricing/best-price";
-import { parseMoney, parseRate } from "~/pricing/money";
+import type { CalendarDate } from "~/pricing/calendar-date";
+import type { ExchangeRateEntry } from "~/pricing/currency";
+import type { MetalBasePrice } from "~/pricing/metal-base";
+import { parseMoney, parseRate, type CurrencyCode } from "~/pricing/money";
+import { priceHistory } from "~/pricing/price-history";
 import type { PriceLine } from "~/pricing/price-line";
 import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
 import { companyCurrency } from "./suppliers.server";
 
 const money = (amount: bigint) => Number(amount) / 10_000;
 
-export async function itemPrices(sku: string, quantity: bigint, date: string) {
+/** Everything an item's prices depend on. */
+export interface ItemPricing {
+  sku: string;
+  itemId: number;
+  unit: string;
+  lines: PriceLine[];
+  bases: MetalBasePrice[];
+  rates: ExchangeRateEntry[];
+  companyCurrency: CurrencyCode;
+}
+
+/** The item's price lines, every metal base and currency rate, and the company currency; null for an unknown SKU. */
+export async function loadItemPricing(
+  sku: string,
+): Promise<ItemPricing | null> {
   const [item] = await db
     .select({ id: items.id, unit: items.unit })
     .from(items)
     .where(eq(items.sku, sku))
     .limit(1);
   if (!item) return null;
-  const rows = await db
-    .select({
-      supplier: suppliers.name,
-      leadTimeDays: suppliers.leadTimeDays,
-      supplierSku: priceLines.supplierSku,
-      currency: priceLines.currency,
-      unitPrice: priceLines.unitPrice,
-      adderPerKg: priceLines.adderPerKg,
-      conductor: priceLines.conductor,
-      minQuantity: priceLines.minQuantity,
-      validFrom: priceLines.validFrom,
-      importId: priceLines.importId,
-      line: priceLines.line,
-    })
-    .from(priceLines)
-    .innerJoin(suppliers, eq(suppliers.id, priceLines.supplierId))
-    .where(eq(priceLines.itemId, item.id))
-    .limit(5_000);
+  const [rows, baseRows, rateRows, currency] = await Promise.all([
+    db
+      .select({
+        supplier: suppliers.name,
+        leadTimeDays: suppliers.leadTimeDays,
+        supplierSku: priceLines.supplierSku,
+        currency: priceLines.currency,
+        unitPrice: priceLines.unitPrice,
+        adderPerKg: priceLines.adderPerKg,
+        conductor: priceLines.conductor,
+        minQuantity: priceLines.minQuantity,
+        validFrom: priceLines.validFrom,
+        importId: priceLines.importId,
+        line: priceLines.line,
+      })
+      .from(priceLines)
+      .innerJoin(suppliers, eq(suppliers.id, priceLines.supplierId))
+      .where(eq(priceLines.itemId, item.id))
+      .limit(5_000),
+    db
+      .select({
+        conductor: metalBasePrices.conductor,
+        currency: metalBasePrices.currency,
+        pricePerKg: metalBasePrices.pricePerKg,
+        validFrom: metalBasePrices.validFrom,
+      })
+      .from(metalBasePrices),
+    db
+      .select({
+        currency: currencyRates.currency,
+        rate: currencyRates.rate,
+        validFrom: currencyRates.validFrom,
+      })
+      .from(currencyRates),
+    companyCurrency(),
+  ]);
   const lines: PriceLine[] = rows.map((row) => {
     const common = {
       itemId: String(item.id),
@@ -66,33 +106,47 @@ export async function itemPrices(sku: string, quantity: bigint, date: string) {
           unitPrice: parseMoney(row.unitPrice ?? "0"),
         };
   });
-  const bases = (await db.select().from(metalBasePrices)).map((base) => ({
-    conductor: base.conductor as ConductorKey,
-    currency: base.currency,
-    pricePerKg: parseMoney(base.pricePerKg),
-    validFrom: base.validFrom,
-  }));
-  const rates = (await db.select().from(currencyRates)).map((rate) => ({
-    currency: rate.currency,
-    date: rate.validFrom,
-    rate: parseRate(rate.rate),
-  }));
-  const currency = await companyCurrency();
-  const result = bestPrices({
-    itemId: String(item.id),
-    quantity,
+  return {
+    sku,
+    itemId: item.id,
+    unit: item.unit,
     lines,
-    bases,
-    rates,
+    bases: baseRows.map((base) => ({
+      conductor: base.conductor as ConductorKey,
+      currency: base.currency,
+      pricePerKg: parseMoney(base.pricePerKg),
+      validFrom: base.validFrom,
+    })),
+    rates: rateRows.map((rate) => ({
+      currency: rate.currency,
+      date: rate.validFrom,
+      rate: parseRate(rate.rate),
+    })),
     companyCurrency: currency,
+  };
+}
+
+/** The suppliers' prices for `quantity` (thousandths of the item's unit) on `date`, cheapest first. */
+export function bestPricesOf(
+  pricing: ItemPricing,
+  quantity: bigint,
+  date: CalendarDate,
+) {
+  const result = bestPrices({
+    itemId: String(pricing.itemId),
+    quantity,
+    lines: pricing.lines,
+    bases: pricing.bases,
+    rates: pricing.rates,
+    companyCurrency: pricing.companyCurrency,
     date,
   });
   return {
-    sku,
-    unit: item.unit,
+    sku: pricing.sku,
+    unit: pricing.unit,
     quantity: quantityToNumber(quantity),
     date,
-    companyCurrency: currency,
+    companyCurrency: pricing.companyCurrency,
     prices: result.candidates.map((candidate) => ({
       supplier: candidate.supplier,
       supplierSku: candidate.supplierSku,
@@ -114,6 +168,60 @@ export async function itemPrices(sku: string, quantity: bigint, date: string) {
       supplier: offer.supplier,
       supplierSku: offer.supplierSku,
       reasons: offer.problems.map((problem) => problem.message),
+    })),
+  };
+}
+
+/** How far back the item page and the API chart prices. */
+export const priceHistoryDays = 365;
+
+/** The day `days` days before `date`: ("2026-12-02", 365) → "2025-12-02". */
+function daysBefore(date: CalendarDate, days: number): CalendarDate {
+  const day = new Date(`${date}T00:00:00Z`);
+  day.setUTCDate(day.getUTCDate() - days);
+  return day.toISOString().slice(0, 10);
+}
+
+/**
+ * The unit price of `quantity` over the `priceHistoryDays` days up to `to`, in the company
+ * currency, one series per offer (supplier and supplier SKU). Each point's price stands
+ * until the next point; `unitPrice: null` is a day with no price, with the reasons.
+ */
+export function priceHistoryOf(
+  pricing: ItemPricing,
+  quantity: bigint,
+  to: CalendarDate,
+) {
+  const from = daysBefore(to, priceHistoryDays);
+  const series = priceHistory({
+    itemId: String(pricing.itemId),
+    quantity,
+    lines: pricing.lines,
+    bases: pricing.bases,
+    rates: pricing.rates,
+    companyCurrency: pricing.companyCurrency,
+    from,
+    to,
+  });
+  return {
+    unit: pricing.unit,
+    quantity: quantityToNumber(quantity),
+    companyCurrency: pricing.companyCurrency,
+    from,
+    to,
+    /** Price lines stored for the item, charted or not (0: nothing imported yet). */
+    lineCount: pricing.lines.length,
+    series: series.map((offer) => ({
+      supplier: offer.supplier,
+      supplierSku: offer.supplierSku,
+      currency: offer.currency,
+      points: offer.points.map((point) => ({
+        date: point.date,
+        unitPrice: point.unitPrice === null ? null : money(point.unitPrice),
+        quotedUnitPrice:
+          point.quotedUnitPrice === null ? null : money(point.quotedUnitPrice),
+        problems: point.problems.map((problem) => problem.message),
+      })),
     })),
   };
 }

@@ -36,7 +36,12 @@ import {
 import { findItemBySku } from "~/stock/items.server";
 import { listMovements } from "~/stock/movement-journal.server";
 import { ItemBestPricesPanel } from "~/components/item-best-prices";
-import { itemPrices } from "~/purchasing/item-prices.server";
+import { PriceHistoryChart } from "~/components/price-history-chart";
+import {
+  bestPricesOf,
+  loadItemPricing,
+  priceHistoryOf,
+} from "~/purchasing/item-prices.server";
 import { quantityFromNumber } from "~/stock/decimal-amounts";
 import { isStockError } from "~/stock/stock-errors";
 import {
@@ -134,17 +139,15 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     ],
   );
   const saved = url.searchParams.get("saved");
-  // Prices for the reorder quantity (one unit when none is set), today.
+  // Prices for the reorder quantity (one unit when none is set): today's and the last year's.
   const priceQuantity =
     quantityFromNumber(item.reorderQuantity > 0 ? item.reorderQuantity : 1) ??
     1000n;
-  const prices = await itemPrices(
-    item.sku,
-    priceQuantity,
-    new Date().toISOString().slice(0, 10),
-  );
+  const today = new Date().toISOString().slice(0, 10);
+  const pricing = await loadItemPricing(item.sku);
   return {
-    prices,
+    prices: pricing && bestPricesOf(pricing, priceQuantity, today),
+    priceHistory: pricing && priceHistoryOf(pricing, priceQuantity, today),
     item,
     attributes,
     history,
@@ -162,6 +165,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     can: {
       reorder: userHasRole(user, ["buyer", "storekeeper"]),
       catalogue: userHasRole(user, ["buyer"]),
+      importPrices: userHasRole(user, ["buyer"]),
       record: userHasRole(user, ["storekeeper"]),
     },
   };
@@ -374,6 +378,7 @@ export default function StockItem({
     done,
     can,
     prices,
+    priceHistory,
   } = loaderData;
   const navigation = useNavigation();
   const busy = navigation.state !== "idle";
@@ -522,6 +527,12 @@ export default function StockItem({
           </section>
 
           {prices ? <ItemBestPricesPanel prices={prices} /> : null}
+          {priceHistory ? (
+            <PriceHistoryChart
+              history={priceHistory}
+              canImport={can.importPrices}
+            />
+          ) : null}
 
           <section aria-labelledby="chart-heading" className="panel">
             <h2 id="chart-heading" className="mb-3 text-lg font-semibold">

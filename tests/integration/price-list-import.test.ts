@@ -398,13 +398,25 @@ describe("best price per item", () => {
 describe("item page prices", () => {
   it("shows the suppliers' prices on the item page, cheapest first", async () => {
     const sku = uniqueCode("IP");
-    expect((await upload(priceList([`${sku},Deep-groove bearing 6203-2RS,,,,,2.15,,EUR,1,2026-11-01`]))).status).toBe(201);
+    expect(
+      (
+        await upload(
+          priceList([
+            `${sku},Deep-groove bearing 6203-2RS,,,,,2.15,,EUR,1,2026-11-01`,
+          ]),
+        )
+      ).status,
+    ).toBe(201);
     const [rows] = await testDatabase().query(
       "SELECT i.sku FROM supplier_items si JOIN items i ON i.id = si.item_id WHERE si.supplier_sku = ?",
       [sku],
     );
     const itemSku = (rows as { sku: string }[])[0]!.sku;
-    const page = await (await fetch(`${baseUrl()}/stock/items/${encodeURIComponent(itemSku)}`, { headers: { Cookie: buyer } })).text();
+    const page = await (
+      await fetch(`${baseUrl()}/stock/items/${encodeURIComponent(itemSku)}`, {
+        headers: { Cookie: buyer },
+      })
+    ).text();
     expect(page).toContain("Best prices for");
     expect(page).toContain(supplier);
     expect(page).toMatch(/2\.1500\s*EUR/);
