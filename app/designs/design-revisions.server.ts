@@ -170,3 +170,69 @@ export async function loadRevisionLines(
     };
   });
 }
+
+/** A stored line as the API and the editor show it (the same fields the line schemas take). */
+export function lineView(line: StoredDesignLine) {
+  switch (line.kind) {
+    case "coil":
+      return {
+        kind: line.kind,
+        sku: line.wire.sku,
+        itemName: line.itemName,
+        turns: line.turns,
+        strandsInHand: line.strandsInHand,
+        activeLengthMm: line.activeLengthMm,
+        endTurnLengthMm: line.endTurnLengthMm,
+        leadLengthMm: line.leadLengthMm,
+        coilsPerMotor: line.coilsPerMotor,
+        scrapPercent: line.scrapPercent,
+        operatingTemperatureC: line.operatingTemperatureC,
+      };
+    case "magnet":
+      return {
+        kind: line.kind,
+        sku: line.magnet.sku,
+        itemName: line.itemName,
+        piecesPerMotor: line.piecesPerMotor,
+        operatingTemperatureC: line.operatingTemperatureC,
+      };
+    case "part":
+      return {
+        kind: line.kind,
+        sku: line.part.sku,
+        itemName: line.itemName,
+        unit: line.part.unit,
+        quantityPerMotor: Number(
+          `${line.quantityPerMotor.digits}e-${line.quantityPerMotor.decimals}`,
+        ),
+      };
+  }
+}
+
+/** A revision's fields as the API shows them (DECIMAL text → numbers). */
+export function revisionView(
+  design: { id: number; name: string; description: string; motorType: string },
+  revision: RevisionRow,
+) {
+  return {
+    designId: design.id,
+    name: design.name,
+    description: design.description,
+    motorType: design.motorType,
+    revision: revision.revision,
+    status: revision.status,
+    poles: revision.poles,
+    slots: revision.slots,
+    ratedCurrentA: Number(revision.ratedCurrentA),
+    ratedTorqueNm: optionalNumber(revision.ratedTorqueNm),
+    torqueBasis: revision.torqueBasis,
+    insulationClassC: revision.insulationClassC,
+    slotAreaMm2: optionalNumber(revision.slotAreaMm2),
+    coilSidesPerSlot: revision.coilSidesPerSlot,
+    airGapRadiusMm: optionalNumber(revision.airGapRadiusMm),
+    airGapFluxDensityT: optionalNumber(revision.airGapFluxDensityT),
+    poleCoverage: optionalNumber(revision.poleCoverage),
+    notes: revision.notes,
+    releasedAt: revision.releasedAt?.toISOString() ?? null,
+  };
+}

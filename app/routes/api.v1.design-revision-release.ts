@@ -1,9 +1,23 @@
-import { data } from "react-router";
 import type { Route } from "./+types/api.v1.design-revision-release";
-import { requireUser } from "~/auth/guard.server";
+import { requireRole } from "~/auth/guard.server";
+import { designParams } from "~/designs/design-params";
+import { releaseRevision } from "~/designs/designs.server";
+import { apiError, methodNotAllowed } from "~/lib/api.server";
+import { answerStockError } from "~/stock/stock-api.server";
 
-// Placeholder while the route is being built (issue #6).
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireUser(request);
-  throw data({ message: "Not built yet." }, { status: 404 });
+  await requireRole(request, ["builder"]);
+  return methodNotAllowed(["POST"]);
+}
+
+/** POST …/revisions/:revision/release (builder, admin): locks the draft → 200 { revision, status }; 409 when released or empty. */
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireRole(request, ["builder"]);
+  if (request.method !== "POST") return methodNotAllowed(["POST"]);
+  const ids = designParams(params);
+  if (!ids) return apiError(404, "No such revision.");
+  return answerStockError(async () => {
+    await releaseRevision(ids.designId, ids.revision, user.id);
+    return Response.json({ revision: ids.revision, status: "released" });
+  });
 }

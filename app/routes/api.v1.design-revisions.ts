@@ -1,9 +1,22 @@
-import { data } from "react-router";
 import type { Route } from "./+types/api.v1.design-revisions";
-import { requireUser } from "~/auth/guard.server";
+import { requireRole } from "~/auth/guard.server";
+import { designParams } from "~/designs/design-params";
+import { startNewRevision } from "~/designs/designs.server";
+import { apiError, methodNotAllowed } from "~/lib/api.server";
+import { answerStockError } from "~/stock/stock-api.server";
 
-// Placeholder while the route is being built (issue #6).
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireUser(request);
-  throw data({ message: "Not built yet." }, { status: 404 });
+  await requireRole(request, ["builder"]);
+  return methodNotAllowed(["POST"]);
+}
+
+/** POST /api/v1/designs/:designId/revisions (builder, admin): the next revision, a draft copy of the latest → 201 { revision }. */
+export async function action({ request, params }: Route.ActionArgs) {
+  await requireRole(request, ["builder"]);
+  if (request.method !== "POST") return methodNotAllowed(["POST"]);
+  const ids = designParams(params);
+  if (!ids) return apiError(404, `No design ${params.designId}.`);
+  return answerStockError(async () =>
+    Response.json(await startNewRevision(ids.designId), { status: 201 }),
+  );
 }

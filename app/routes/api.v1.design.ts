@@ -1,9 +1,14 @@
-import { data } from "react-router";
 import type { Route } from "./+types/api.v1.design";
 import { requireUser } from "~/auth/guard.server";
+import { designParams } from "~/designs/design-params";
+import { listDesignRevisions } from "~/designs/designs.server";
+import { apiError } from "~/lib/api.server";
 
-// Placeholder while the route is being built (issue #6).
-export async function loader({ request }: Route.LoaderArgs) {
+/** GET /api/v1/designs/:designId → { id, name, description, motorType, revisions }. */
+export async function loader({ request, params }: Route.LoaderArgs) {
   await requireUser(request);
-  throw data({ message: "Not built yet." }, { status: 404 });
+  const ids = designParams(params);
+  const design = ids ? await listDesignRevisions(ids.designId) : null;
+  if (!design) return apiError(404, `No design ${params.designId}.`);
+  return Response.json(design);
 }

@@ -1,9 +1,51 @@
-import { data } from "react-router";
 import type { Route } from "./+types/api.v1.designs";
-import { requireUser } from "~/auth/guard.server";
+import { requireRole, requireUser } from "~/auth/guard.server";
+import { newDesignSchema } from "~/designs/design-schemas";
+import { createDesign, listDesigns } from "~/designs/designs.server";
+import {
+  methodNotAllowed,
+  readJsonBody,
+  readSearchParams,
+} from "~/lib/api.server";
+import { answerStockError } from "~/stock/stock-api.server";
+import { z } from "zod";
 
-// Placeholder while the route is being built (issue #6).
+const listQuery = z.object({
+  page: z.coerce
+    .number()
+    .int()
+    .min(1, "The page is a whole number from 1.")
+    .default(1),
+  perPage: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(200, "At most 200 designs a page.")
+    .default(50),
+});
+
+/** GET /api/v1/designs → [{ id, name, revisions: [{ revision, status, ratedTorqueNm }] }], paged (X-Total-Count). */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  throw data({ message: "Not built yet." }, { status: 404 });
+  const query = readSearchParams(request, listQuery);
+  const { total, designs } = await listDesigns(query);
+  return Response.json(
+    designs.map(({ id, name, motorType, revisions }) => ({
+      id,
+      name,
+      motorType,
+      revisions,
+    })),
+    { headers: { "X-Total-Count": String(total) } },
+  );
+}
+
+/** POST /api/v1/designs (builder, admin): the design with revision 1 as a draft → 201 { id, revision }. */
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireRole(request, ["builder"]);
+  if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
+  const input = await readJsonBody(request, newDesignSchema);
+  return answerStockError(async () =>
+    Response.json(await createDesign(input, user.id), { status: 201 }),
+  );
 }

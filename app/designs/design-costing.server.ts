@@ -1,0 +1,234 @@
+/**
+ * The costing of a design revision for a number of motors: every line priced
+ * from the best current supplier price for the quantity the build needs, or
+ * from the moving average cost of stock (the builder chooses), plus the coil
+ * figures, the first-order torque estimate and the design's checks.
+ */
+import { inArray } from "drizzle-orm";
+import { db } from "~/db/client.server";
+import { items } from "~/db/schema";
+import { bestPrices } from "~/pricing/best-price";
+import { formatMoneyText, type MoneyAmount } from "~/pricing/money";
+import { loadItemPricing } from "~/purchasing/item-prices.server";
+import { companyCurrency } from "~/purchasing/suppliers.server";
+import { parseUnitCost, quantityToNumber } from "~/stock/decimal-amounts";
+import { coilLineFigures } from "./coil-line-figures";
+import { designWarnings } from "./design-checks";
+import {
+  costDesign,
+  designCostingJson,
+  requiredStockQuantity,
+  type ItemUnitPrice,
+} from "./design-costing";
+import type { RevisionRow, StoredDesignLine } from "./design-revisions.server";
+import { estimateTorque, TORQUE_ESTIMATE_LABEL } from "./torque-estimate";
+
+export const costingBases = ["best-price", "stock-average"] as const;
+export type CostingBasis = (typeof costingBases)[number];
+
+const optionalNumber = (value: string | null) =>
+  value === null ? null : Number(value);
+
+/** Stock needed per item for `motors` motors, thousandths of the item's unit. */
+function quantitiesPerItem(
+  lines: readonly StoredDesignLine[],
+  motors: number,
+): Map<number, { sku: string; quantity: bigint }> {
+  const perMotor = costDesign({
+    lines,
+    quantity: 1,
+    currency: "",
+    prices: new Map(),
+    ratedTorqueNm: null,
+  }).lines;
+  const needed = new Map<number, { sku: string; quantity: bigint }>();
+  for (const line of perMotor) {
+    const entry = needed.get(line.itemId) ?? { sku: line.sku, quantity: 0n };
+    entry.quantity += requiredStockQuantity(line.perMotorQuantity, motors);
+    needed.set(line.itemId, entry);
+  }
+  return needed;
+}
+
+/**
+ * The cheapest landed price of an item for the quantity a build needs. Below
+ * every supplier's smallest break the item is priced at the smallest minimum
+ * order (the buyer would have to buy that much), and the source says so.
+ */
+async function bestPriceFor(
+  sku: string,
+  quantity: bigint,
+  motors: number,
+  date: string,
+): Promise<ItemUnitPrice | null> {
+  const pricing = await loadItemPricing(sku);
+  if (!pricing) return null;
+  const cheapestAt = (amount: bigint) =>
+    bestPrices({
+      itemId: String(pricing.itemId),
+      quantity: amount,
+      lines: pricing.lines,
+      bases: pricing.bases,
+      rates: pricing.rates,
+      companyCurrency: pricing.companyCurrency,
+      date,
+    }).candidates[0];
+  let best = cheapestAt(quantity);
+  let note = "";
+  if (!best && pricing.lines.length > 0) {
+    const smallestBreak = pricing.lines
+      .map((line) => line.minQuantity)
+      .reduce((a, b) => (b < a ? b : a));
+    if (smallestBreak > quantity) {
+      best = cheapestAt(smallestBreak);
+      note = `, priced at the minimum order of ${quantityToNumber(smallestBreak)} ${pricing.unit}`;
+    }
+  }
+  if (!best) return null;
+  const adder =
+    best.adderPerKg === null
+      ? ""
+      : ` (adder ${formatMoneyText(best.adderPerKg)} + ${best.metalBase?.conductor ?? "metal"} base ${formatMoneyText(best.metalBase?.pricePerKg ?? 0n)} ${best.currency}/kg)`;
+  return {
+    unitPrice: best.landedUnitPrice,
+    source: `best price for ${quantityToNumber(quantity)} ${pricing.unit} (${motors} motors${note}): ${best.supplier} ${best.supplierSku}${adder}, import ${best.sourceLine.importId} line ${best.sourceLine.line}`,
+  };
+}
+
+async function stockAveragePrices(
+  itemIds: number[],
+): Promise<Map<number, ItemUnitPrice>> {
+  const rows =
+    itemIds.length === 0
+      ? []
+      : await db
+          .select({ id: items.id, averageCost: items.averageCost })
+          .from(items)
+          .where(inArray(items.id, itemIds));
+  const prices = new Map<number, ItemUnitPrice>();
+  for (const row of rows) {
+    const unitPrice: MoneyAmount = parseUnitCost(row.averageCost);
+    if (unitPrice > 0n)
+      prices.set(row.id, {
+        unitPrice,
+        source: "moving average cost of stock",
+      });
+  }
+  return prices;
+}
+
+/** The whole costing of a revision as the API and the design page show it. */
+export async function costRevision(input: {
+  revision: RevisionRow;
+  lines: StoredDesignLine[];
+  quantity: number;
+  basis: CostingBasis;
+  date: string;
+}) {
+  const { revision, lines } = input;
+  const needed = quantitiesPerItem(lines, input.quantity);
+  const prices =
+    input.basis === "stock-average"
+      ? await stockAveragePrices([...needed.keys()])
+      : new Map(
+          (
+            await Promise.all(
+              [...needed].map(
+                async ([itemId, { sku, quantity }]) =>
+                  [
+                    itemId,
+                    await bestPriceFor(
+                      sku,
+                      quantity,
+                      input.quantity,
+                      input.date,
+                    ),
+                  ] as const,
+              ),
+            )
+          ).filter(
+            (entry): entry is [number, ItemUnitPrice] => entry[1] !== null,
+          ),
+        );
+  const ratedTorqueNm = optionalNumber(revision.ratedTorqueNm);
+  const ratedCurrentA = Number(revision.ratedCurrentA);
+  const costing = costDesign({
+    lines,
+    quantity: input.quantity,
+    currency: await companyCurrency(),
+    prices,
+    ratedTorqueNm,
+  });
+
+  const coils = lines.flatMap((line, index) =>
+    line.kind === "coil"
+      ? [
+          {
+            index,
+            sku: line.wire.sku,
+            figures: coilLineFigures(line, ratedCurrentA),
+          },
+        ]
+      : [],
+  );
+  const copperLossW = coils.reduce(
+    (sum, coil) => sum + (coil.figures.copperLossW ?? 0),
+    0,
+  );
+  const airGapRadiusMm = optionalNumber(revision.airGapRadiusMm);
+  const fluxDensityT = optionalNumber(revision.airGapFluxDensityT);
+  const torqueEstimate =
+    airGapRadiusMm !== null && fluxDensityT !== null && coils.length > 0
+      ? estimateTorque({
+          lines,
+          fluxDensity: { source: "typed", fluxDensityT },
+          ratedCurrentA,
+          airGapRadiusMm,
+          poleCoverage: optionalNumber(revision.poleCoverage),
+        })
+      : null;
+
+  return {
+    ...designCostingJson(costing),
+    basis: input.basis,
+    torqueBasis: revision.torqueBasis,
+    copperLossW,
+    copperLossPerNm:
+      ratedTorqueNm !== null && ratedTorqueNm > 0
+        ? copperLossW / ratedTorqueNm
+        : null,
+    torqueEstimate: torqueEstimate ?? {
+      label: TORQUE_ESTIMATE_LABEL,
+      missing:
+        "Give the air-gap radius and flux density (and at least one coil line) for a first-order torque estimate.",
+    },
+    coils: coils.map(({ index, sku, figures }) => ({
+      line: index + 1,
+      sku,
+      copperLengthM: figures.copperLengthM,
+      drawnMassKg: figures.drawnMassKg,
+      massBasis: figures.massBasis,
+      resistance20PerCoilOhm: figures.resistance20PerCoilOhm,
+      resistancePerCoilOhm: figures.resistancePerCoilOhm,
+      operatingTemperatureC: figures.operatingTemperatureC,
+      activeShare: figures.activeShare,
+      copperLossW: figures.copperLossW,
+      forceLengthM: figures.forceLengthM,
+    })),
+    warnings: designWarnings({
+      lines,
+      insulationClassC: revision.insulationClassC,
+    }).map(({ code, lineIndex, sku, message }) => ({
+      code,
+      line: lineIndex + 1,
+      sku,
+      message,
+    })),
+    itemsNeeded: [...needed.values()].map(({ sku, quantity }) => ({
+      sku,
+      quantity: quantityToNumber(quantity),
+    })),
+  };
+}
+
+export type RevisionCosting = Awaited<ReturnType<typeof costRevision>>;

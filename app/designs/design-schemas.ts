@@ -1,0 +1,167 @@
+/**
+ * What a builder may send for a design revision and its lines: one set of Zod
+ * schemas for the pages (Conform) and the API. Numbers arrive as text from
+ * forms and as numbers from JSON; both are read here.
+ */
+import { z } from "zod";
+
+const number = (label: string) =>
+  z.preprocess(
+    (value) =>
+      typeof value === "string" && value.trim() !== ""
+        ? Number(value.trim().replace(",", "."))
+        : value === ""
+          ? undefined
+          : value,
+    z
+      .number({ error: `Give the ${label} as a number.` })
+      .refine(Number.isFinite, `Give the ${label} as a number.`),
+  );
+
+const whole = (label: string, min: number, max: number) =>
+  number(label).pipe(
+    z
+      .number()
+      .int(`The ${label} must be a whole number.`)
+      .min(min, `The ${label} must be at least ${min}.`)
+      .max(max, `The ${label} must be at most ${max}.`),
+  );
+
+const ranged = (label: string, min: number, max: number, unit: string) =>
+  number(label).pipe(
+    z
+      .number()
+      .min(min, `The ${label} must be at least ${min} ${unit}.`)
+      .max(max, `The ${label} must be at most ${max} ${unit}.`),
+  );
+
+const positive = (label: string, max: number, unit: string) =>
+  number(label).pipe(
+    z
+      .number()
+      .positive(`The ${label} must be more than 0 ${unit}.`)
+      .max(max, `The ${label} must be at most ${max} ${unit}.`),
+  );
+
+/** IEC 60085 thermal classes a motor's insulation system is rated in, °C. */
+export const insulationClasses = [105, 120, 130, 155, 180, 200, 220] as const;
+
+export const revisionFieldsSchema = z.object({
+  poles: whole("pole count", 2, 500).refine(
+    (poles) => poles % 2 === 0,
+    "A motor has an even number of poles.",
+  ),
+  slots: whole("slot count", 1, 1000),
+  ratedCurrentA: positive("rated current", 10_000, "A"),
+  ratedTorqueNm: z.preprocess(
+    (value) => (value === "" || value === null ? undefined : value),
+    positive("rated torque", 100_000, "N·m").optional(),
+  ),
+  torqueBasis: z.enum(["measured", "estimated"], {
+    error: "Say whether the torque is measured or estimated.",
+  }),
+  insulationClassC: number("insulation class").pipe(
+    z
+      .number()
+      .refine(
+        (value) => (insulationClasses as readonly number[]).includes(value),
+        `Choose an insulation class: ${insulationClasses.join(", ")} °C.`,
+      ),
+  ),
+  slotAreaMm2: z.preprocess(
+    (value) => (value === "" || value === null ? undefined : value),
+    positive("slot area", 100_000, "mm²").optional(),
+  ),
+  coilSidesPerSlot: whole("coil sides per slot", 1, 2).default(2),
+  airGapRadiusMm: z.preprocess(
+    (value) => (value === "" || value === null ? undefined : value),
+    positive("air-gap radius", 10_000, "mm").optional(),
+  ),
+  airGapFluxDensityT: z.preprocess(
+    (value) => (value === "" || value === null ? undefined : value),
+    positive("air-gap flux density", 3, "T").optional(),
+  ),
+  poleCoverage: z.preprocess(
+    (value) => (value === "" || value === null ? undefined : value),
+    positive("fraction of conductors under the poles", 1, "").optional(),
+  ),
+  notes: z
+    .string()
+    .trim()
+    .max(1000, "Notes are at most 1,000 characters.")
+    .default(""),
+});
+
+export const newDesignSchema = revisionFieldsSchema.extend({
+  name: z
+    .string({ error: "Give the design a name." })
+    .trim()
+    .min(1, "Give the design a name.")
+    .max(120, "A name is at most 120 characters."),
+  description: z
+    .string()
+    .trim()
+    .max(1000, "A description is at most 1,000 characters.")
+    .default(""),
+  motorType: z
+    .string()
+    .trim()
+    .max(60, "The motor type is at most 60 characters.")
+    .default(""),
+});
+
+const sku = z
+  .string({ error: "Choose the item (its SKU)." })
+  .trim()
+  .min(1, "Choose the item (its SKU).")
+  .max(40);
+
+export const coilLineSchema = z.object({
+  kind: z.literal("coil"),
+  sku,
+  turns: whole("number of turns", 1, 100_000),
+  strandsInHand: whole("number of strands in hand", 1, 200),
+  activeLengthMm: positive("active length", 10_000, "mm"),
+  endTurnLengthMm: ranged("end-turn length", 0, 10_000, "mm"),
+  leadLengthMm: ranged("lead length", 0, 100_000, "mm"),
+  coilsPerMotor: whole("number of coils per motor", 1, 1000),
+  scrapPercent: ranged("scrap", 0, 100, "%"),
+  operatingTemperatureC: ranged("operating temperature", -60, 400, "°C"),
+});
+
+export const magnetLineSchema = z.object({
+  kind: z.literal("magnet"),
+  sku,
+  piecesPerMotor: whole("number of pieces per motor", 1, 10_000),
+  operatingTemperatureC: z.preprocess(
+    (value) => (value === "" || value === null ? undefined : value),
+    ranged("magnet temperature", -60, 400, "°C").optional(),
+  ),
+});
+
+export const partLineSchema = z.object({
+  kind: z.literal("part"),
+  sku,
+  quantityPerMotor: positive("quantity per motor", 1_000_000, "").refine(
+    (value) => Math.abs(value * 1000 - Math.round(value * 1000)) < 1e-6,
+    "Give the quantity to at most 3 decimals.",
+  ),
+});
+
+export const designLineSchema = z.discriminatedUnion(
+  "kind",
+  [coilLineSchema, magnetLineSchema, partLineSchema],
+  { error: "A line is a coil, magnet or part line." },
+);
+
+export type RevisionFields = z.infer<typeof revisionFieldsSchema>;
+export type NewDesign = z.infer<typeof newDesignSchema>;
+export type DesignLineInput = z.infer<typeof designLineSchema>;
+
+/** A whole revision as the API's PUT takes it: the fields, and the lines when given. */
+export const revisionUpdateSchema = revisionFieldsSchema.partial().extend({
+  lines: z
+    .array(designLineSchema)
+    .max(200, "A revision has at most 200 lines.")
+    .optional(),
+});
