@@ -169,3 +169,28 @@ describe("words", () => {
     expect(readDiameterMm("thin", false)).toBeUndefined();
   });
 });
+
+describe("the quick reading of plain numbers", () => {
+  it("reads every plain number as the general reading does (a leading zero sends a cell there)", () => {
+    // Property check: "12.50" takes the quick path, "012.50" the general one; both must agree.
+    let seed = 7;
+    const random = (below: number) => {
+      seed = (seed * 1_103_515_245 + 12_345) % 2_147_483_648;
+      return seed % below;
+    };
+    const digits = (count: number) =>
+      Array.from({ length: count }, () => String(random(10))).join("");
+    for (let index = 0; index < 2_000; index += 1) {
+      const whole =
+        random(4) === 0 ? "0" : `${1 + random(9)}${digits(random(12))}`;
+      const cell =
+        random(3) === 0 ? whole : `${whole}.${digits(1 + random(6))}`;
+      for (const rules of [moneyRules, quantityRules]) {
+        const plain = { ...rules, decimalComma: false };
+        expect(readDecimal(cell, plain), cell).toEqual(
+          readDecimal(`0${cell}`, plain),
+        );
+      }
+    }
+  });
+});

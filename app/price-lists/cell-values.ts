@@ -63,7 +63,30 @@ const commaGroupedDecimal = /^\d{1,3}(?:,\d{3})+(?:\.\d+)?$/;
  * commas, and "1.234" in a decimal-comma file, where it could mean 1.234 or
  * 1234.
  */
+/** A plain number with a decimal point or none ("12", "12.50", "0.5"): the common case, read with one test. */
+const simpleDecimal = /^(?:[1-9]\d*|0)(?:\.\d+)?$/;
+
 export function readDecimal(cell: string, rules: DecimalRules): DecimalReading {
+  if (!rules.decimalComma && simpleDecimal.test(cell)) {
+    const point = cell.indexOf(".");
+    const whole = point === -1 ? cell : cell.slice(0, point);
+    let end = cell.length;
+    while (point !== -1 && end > point + 1 && cell.charCodeAt(end - 1) === 48)
+      end -= 1;
+    const fraction = point === -1 ? "" : cell.slice(point + 1, end);
+    if (fraction.length > rules.decimals)
+      return { ok: false, problem: "too-many-decimals" };
+    if (whole.length > rules.maxWholeDigits)
+      return { ok: false, problem: "too-large" };
+    return {
+      ok: true,
+      text:
+        rules.decimals > 0
+          ? `${whole}.${fraction.padEnd(rules.decimals, "0")}`
+          : whole,
+      isZero: whole === "0" && fraction === "",
+    };
+  }
   const negative = cell.startsWith("-");
   const parts = splitDecimal(
     negative ? cell.slice(1) : cell,
@@ -142,7 +165,19 @@ const latestYear = 2999;
  * Slashes are always read day first; a date that only makes sense month first
  * (03/25/2025) is refused rather than guessed.
  */
+// Most price lists give every row the same day: the last reading is kept.
+let lastDateCell: string | null = null;
+let lastDateReading: DateReading | null = null;
+
 export function readDate(cell: string): DateReading {
+  if (cell === lastDateCell) return lastDateReading!;
+  const reading = readDateAfresh(cell);
+  lastDateCell = cell;
+  lastDateReading = reading;
+  return reading;
+}
+
+function readDateAfresh(cell: string): DateReading {
   const iso = isoDate.exec(cell);
   if (iso) return checkedDate(+iso[1]!, +iso[2]!, +iso[3]!);
   const dayFirst = dayFirstDate.exec(cell);

@@ -296,6 +296,12 @@ async function readDataRowsInBatches(
  */
 function fitToHeader(cells: string[], width: number): string[] | null {
   if (cells.length < width) return null;
+  if (cells.length === width) {
+    // The parser's own array, trimmed in place: one array less per row.
+    for (let index = 0; index < width; index += 1)
+      cells[index] = cells[index]!.trim();
+    return cells;
+  }
   if (cells.slice(width).some((cell) => cell.trim() !== "")) return null;
   return cells.slice(0, width).map((cell) => cell.trim());
 }

@@ -509,8 +509,14 @@ function quote(cellText: string): string {
   return `"${shown}"`;
 }
 
+let lastCheckedImportDay = "";
+
+/** Refuses a context whose import day is not a real YYYY-MM-DD day (checked once per day given). */
 function assertImportDay(importDay: string): void {
+  if (importDay === lastCheckedImportDay) return;
+  lastCheckedImportDay = importDay;
   if (!isIsoDate(importDay)) {
+    lastCheckedImportDay = "";
     throw new Error(
       `importDay must be a YYYY-MM-DD day, got ${JSON.stringify(importDay)}`,
     );

@@ -127,6 +127,19 @@ async function loadRowMatcher(supplierId: number): Promise<RowMatcher> {
     ]);
   }
 
+  // A SKU's breaks usually follow each other: its new item is worked out once.
+  let lastNewItem: { supplierSku: string; sku: string; name: string } | null =
+    null;
+  function newItemFor(row: PriceListRow, name: string) {
+    if (lastNewItem?.supplierSku !== row.supplierSku)
+      lastNewItem = {
+        supplierSku: row.supplierSku,
+        sku: newItemSku(supplierId, row.supplierSku),
+        name,
+      };
+    return { sku: lastNewItem.sku, name: lastNewItem.name };
+  }
+
   function match(row: PriceListRow): MatchedRow | LineError {
     const mapped = known.get(row.supplierSku.toLowerCase());
     if (mapped !== undefined) return { row, itemId: mapped, newItem: null };
@@ -142,10 +155,10 @@ async function loadRowMatcher(supplierId: number): Promise<RowMatcher> {
         : {
             row,
             itemId: null,
-            newItem: {
-              sku: newItemSku(supplierId, row.supplierSku),
-              name: row.description || `${row.standard} ${row.size} wire`,
-            },
+            newItem: newItemFor(
+              row,
+              row.description || `${row.standard} ${row.size} wire`,
+            ),
           };
     }
     if (row.kind === "magnet") {
@@ -161,10 +174,7 @@ async function loadRowMatcher(supplierId: number): Promise<RowMatcher> {
     return {
       row,
       itemId: null,
-      newItem: {
-        sku: newItemSku(supplierId, row.supplierSku),
-        name: row.description || row.supplierSku,
-      },
+      newItem: newItemFor(row, row.description || row.supplierSku),
     };
   }
   return {
