@@ -6,3 +6,4 @@ export * from "./tables/stock-enums";
 export * from "./tables/purchasing";
 export * from "./tables/designs";
 export * from "./tables/build-orders";
+export * from "./tables/alerts";

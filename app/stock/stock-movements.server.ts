@@ -4,10 +4,21 @@
  * rows it touches (always in that order, so concurrent movements queue rather
  * than deadlock), checks that no balance goes below zero or below what is
  * reserved, appends the movement and updates the kept balances.
+ *
+ * An issue to a build order (`options.reservation`) takes stock the order holds: the
+ * order row is locked before the item (the build-order modules lock in the same order:
+ * order, then items by id, then balances), the taken quantity may come out of the
+ * reserved stock, and the same transaction lowers what the order line holds on that
+ * balance and raises what it has been issued.
  */
+import { checkStockAlertsOfSkus } from "~/alerts/stock-alerts.server";
 import { and, eq, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import {
+  buildOrderIssues,
+  buildOrderLines,
+  buildOrderReservations,
+  buildOrders,
   items,
   locations,
   lots,
@@ -26,6 +37,21 @@ import { StockError } from "./stock-errors";
 import type { MovementRequest } from "./movement-request";
 
 type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
+/** A transaction of the one database client, for callers that record a movement inside their own. */
+export type LedgerTransaction = Transaction;
+
+export interface MovementOptions {
+  /** When it happened; only imports and the demo seed give a time other than now. */
+  at?: Date;
+  /**
+   * An issue of stock reserved for a build order line. The issue may take only what
+   * the line holds on this lot and location; it lowers that reservation (balance, item,
+   * order line) and raises the line's issued quantity, all in the movement's transaction.
+   */
+  reservation?: { orderId: number; lineId: number };
+  /** Low-stock alerts are checked after the movement unless false (the demo seed checks once at the end). */
+  checkAlerts?: boolean;
+}
 
 export interface RecordedMovement {
   movement: {
@@ -118,10 +144,17 @@ async function setBalance(
   lotId: number,
   locationId: number,
   onHand: bigint,
+  reserved?: bigint,
 ) {
   await tx
     .update(stockBalances)
-    .set({ onHand: formatQuantityText(onHand), updatedAt: new Date() })
+    .set({
+      onHand: formatQuantityText(onHand),
+      ...(reserved === undefined
+        ? {}
+        : { reserved: formatQuantityText(reserved) }),
+      updatedAt: new Date(),
+    })
     .where(
       and(
         eq(stockBalances.itemId, itemId),
@@ -270,178 +303,316 @@ function signedChange(
   }
 }
 
+/**
+ * Locks the build order (first, before the item: the lock order of every build-order
+ * transaction) and checks it exists. Re-locking an order the caller already holds is free.
+ */
+async function lockReservingOrder(tx: Transaction, orderId: number) {
+  const [order] = await tx
+    .select({ id: buildOrders.id })
+    .from(buildOrders)
+    .where(eq(buildOrders.id, orderId))
+    .for("update");
+  if (!order)
+    throw new StockError(404, `No build order BO-${orderId}.`, "orderId");
+}
+
+/**
+ * What the order line holds on the balance the issue takes from, locked; refuses an
+ * issue of another item, of something other than an issue, or of more than is held.
+ */
+async function lockReservation(
+  tx: Transaction,
+  reservation: { orderId: number; lineId: number },
+  request: MovementRequest,
+  item: { id: number; sku: string; unit: string },
+  lot: { id: number; number: string | null },
+  location: { id: number; code: string },
+  taken: bigint,
+) {
+  if (request.type !== "issue")
+    throw new StockError(
+      400,
+      "Only an issue takes stock reserved for a build order.",
+      "type",
+    );
+  const [line] = await tx
+    .select({
+      orderId: buildOrderLines.orderId,
+      itemId: buildOrderLines.itemId,
+      reserved: buildOrderLines.reserved,
+      issued: buildOrderLines.issued,
+    })
+    .from(buildOrderLines)
+    .where(eq(buildOrderLines.id, reservation.lineId))
+    .for("update");
+  if (!line || line.orderId !== reservation.orderId || line.itemId !== item.id)
+    throw new StockError(
+      400,
+      `BO-${reservation.orderId} has no line for ${item.sku}.`,
+      "sku",
+    );
+  const where = and(
+    eq(buildOrderReservations.lineId, reservation.lineId),
+    eq(buildOrderReservations.itemId, item.id),
+    eq(buildOrderReservations.lotId, lot.id),
+    eq(buildOrderReservations.locationId, location.id),
+  );
+  const [held] = await tx
+    .select({ quantity: buildOrderReservations.quantity })
+    .from(buildOrderReservations)
+    .where(where)
+    .for("update");
+  const heldQuantity = held ? parseQuantity(held.quantity) : 0n;
+  const place = `${lot.number ? `lot ${lot.number} ` : ""}at ${location.code}`;
+  if (taken > heldQuantity) {
+    throw new StockError(
+      409,
+      heldQuantity === 0n
+        ? `BO-${reservation.orderId} holds no ${item.sku} ${place}.`
+        : `BO-${reservation.orderId} holds only ${quantityToNumber(heldQuantity)} ${item.unit} of ${item.sku} ${place}; cannot issue ${quantityToNumber(taken)} ${item.unit}.`,
+      "quantity",
+    );
+  }
+  return {
+    where,
+    held: heldQuantity,
+    lineReserved: parseQuantity(line.reserved),
+    lineIssued: parseQuantity(line.issued),
+  };
+}
+
 /** Records one movement (two rows for a transfer). Throws StockError for the user's mistakes. */
 export async function recordMovement(
   request: MovementRequest,
   userId: string,
-  /** When it happened; only imports and the demo seed give a time other than now. */
-  options: { at?: Date } = {},
+  options: MovementOptions = {},
 ): Promise<RecordedMovement> {
-  return db.transaction(async (tx) => {
-    const item = await lockItem(tx, request.sku);
-    if (!item.active)
-      throw new StockError(
-        409,
-        `Item ${item.sku} is archived: restore it before moving stock.`,
-        "sku",
-      );
-    if (request.unit && request.unit !== item.unit) {
-      throw new StockError(
-        400,
-        `Item ${item.sku} is stocked in ${item.unit}, not ${request.unit}.`,
-        "unit",
-      );
-    }
-    const quantities = [
-      request.quantity,
-      request.grossKg,
-      request.tareKg,
-    ].filter((value) => value !== undefined);
-    if (
-      item.unit === "pcs" &&
-      quantities.some((value) => value! % 1000n !== 0n)
-    ) {
-      throw new StockError(
-        400,
-        `Item ${item.sku} is counted in whole pieces.`,
-        "quantity",
-      );
-    }
-    const location = await findLocation(tx, request.location, "location");
-    const toLocation =
-      request.type === "transfer"
-        ? await findLocation(tx, request.toLocation!, "toLocation")
-        : null;
-    if (toLocation && toLocation.id === location.id) {
-      throw new StockError(
-        400,
-        "A transfer needs two different locations.",
-        "toLocation",
-      );
-    }
-    const lot = await resolveLot(tx, item, request);
+  const recorded = await db.transaction((tx) =>
+    recordMovementIn(tx, request, userId, options),
+  );
+  // After the commit, in the same request: a drop below the reorder point opens an alert.
+  if (options.checkAlerts !== false)
+    await checkStockAlertsOfSkus([recorded.movement.sku]);
+  return recorded;
+}
 
-    // Lock balance rows in a fixed order (location id) so two transfers never wait on each other in a circle.
-    const locationIds = toLocation
-      ? [location.id, toLocation.id].sort((a, b) => a - b)
-      : [location.id];
-    const balances = new Map<number, { onHand: bigint; reserved: bigint }>();
-    for (const id of locationIds)
-      balances.set(id, await lockBalance(tx, item.id, lot.id, id));
-    const from = balances.get(location.id)!;
+/**
+ * The same inside the caller's transaction, for a caller that locks its build order
+ * first and changes the order's state in the same transaction.
+ */
+export async function recordMovementIn(
+  tx: Transaction,
+  request: MovementRequest,
+  userId: string,
+  options: MovementOptions = {},
+): Promise<RecordedMovement> {
+  if (options.reservation)
+    await lockReservingOrder(tx, options.reservation.orderId);
+  const item = await lockItem(tx, request.sku);
+  if (!item.active)
+    throw new StockError(
+      409,
+      `Item ${item.sku} is archived: restore it before moving stock.`,
+      "sku",
+    );
+  if (request.unit && request.unit !== item.unit) {
+    throw new StockError(
+      400,
+      `Item ${item.sku} is stocked in ${item.unit}, not ${request.unit}.`,
+      "unit",
+    );
+  }
+  const quantities = [request.quantity, request.grossKg, request.tareKg].filter(
+    (value) => value !== undefined,
+  );
+  if (
+    item.unit === "pcs" &&
+    quantities.some((value) => value! % 1000n !== 0n)
+  ) {
+    throw new StockError(
+      400,
+      `Item ${item.sku} is counted in whole pieces.`,
+      "quantity",
+    );
+  }
+  const location = await findLocation(tx, request.location, "location");
+  const toLocation =
+    request.type === "transfer"
+      ? await findLocation(tx, request.toLocation!, "toLocation")
+      : null;
+  if (toLocation && toLocation.id === location.id) {
+    throw new StockError(
+      400,
+      "A transfer needs two different locations.",
+      "toLocation",
+    );
+  }
+  const lot = await resolveLot(tx, item, request);
 
-    const change = signedChange(request, item, lot, from);
-    const unit = item.unit;
-    if (from.onHand + change < 0n) {
-      throw new StockError(
-        409,
-        `Only ${quantityToNumber(from.onHand)} ${unit} of ${item.sku}${lot.number ? ` lot ${lot.number}` : ""} at ${location.code}; cannot take ${quantityToNumber(-change)} ${unit}.`,
-        "quantity",
-      );
-    }
-    if (
-      change < 0n &&
-      request.type !== "count" &&
-      request.type !== "adjustment" &&
-      from.onHand + change < from.reserved
-    ) {
-      throw new StockError(
-        409,
-        `${quantityToNumber(from.reserved)} ${unit} of ${item.sku} at ${location.code} is reserved for build orders; only ${quantityToNumber(from.onHand - from.reserved)} ${unit} is free.`,
-        "quantity",
-      );
-    }
+  // Lock balance rows in a fixed order (location id) so two transfers never wait on each other in a circle.
+  const locationIds = toLocation
+    ? [location.id, toLocation.id].sort((a, b) => a - b)
+    : [location.id];
+  const balances = new Map<number, { onHand: bigint; reserved: bigint }>();
+  for (const id of locationIds)
+    balances.set(id, await lockBalance(tx, item.id, lot.id, id));
+  const from = balances.get(location.id)!;
 
-    const itemOnHand = parseQuantity(item.onHand);
-    const averageCost = parseUnitCost(item.averageCost);
-    const itemChange = request.type === "transfer" ? 0n : change;
-    const itemOnHandAfter = itemOnHand + itemChange;
-    const averageAfter =
-      request.type === "receipt"
-        ? movingAverageAfterReceipt({
-            onHand: itemOnHand,
-            averageCost,
-            received: change,
-            unitCost: request.unitCost!,
-          })
-        : averageCost;
-    const now = options.at ?? new Date();
-    const common = {
-      itemId: item.id,
-      lotId: lot.id,
-      reference: request.reference ?? null,
-      note: request.note ?? null,
-      userId,
-      createdAt: now,
-      averageCostAfter: formatUnitCostText(averageAfter),
-      itemOnHandAfter: formatQuantityText(itemOnHandAfter),
-    };
+  const change = signedChange(request, item, lot, from);
+  const unit = item.unit;
+  // An issue to a build order takes what the order holds here: that much reserved stock goes with it.
+  const held = options.reservation
+    ? await lockReservation(
+        tx,
+        options.reservation,
+        request,
+        item,
+        lot,
+        location,
+        -change,
+      )
+    : null;
+  const reservedTaken = held ? -change : 0n;
+  if (from.onHand + change < 0n) {
+    throw new StockError(
+      409,
+      `Only ${quantityToNumber(from.onHand)} ${unit} of ${item.sku}${lot.number ? ` lot ${lot.number}` : ""} at ${location.code}; cannot take ${quantityToNumber(-change)} ${unit}.`,
+      "quantity",
+    );
+  }
+  if (
+    change < 0n &&
+    request.type !== "count" &&
+    request.type !== "adjustment" &&
+    from.onHand + change < from.reserved - reservedTaken
+  ) {
+    throw new StockError(
+      409,
+      `${quantityToNumber(from.reserved - reservedTaken)} ${unit} of ${item.sku} at ${location.code} is reserved for build orders; only ${quantityToNumber(from.onHand - from.reserved + reservedTaken)} ${unit} is free.`,
+      "quantity",
+    );
+  }
 
-    await setBalance(tx, item.id, lot.id, location.id, from.onHand + change);
-    const [inserted] = await tx
-      .insert(stockMovements)
-      .values({
-        ...common,
-        type: request.type,
-        locationId: location.id,
-        quantity: formatQuantityText(change),
-        unitCost:
-          request.type === "receipt"
-            ? formatUnitCostText(request.unitCost!)
-            : null,
-        countedQuantity:
-          request.type === "count"
-            ? formatQuantityText(request.quantity!)
-            : null,
-        grossKg:
-          request.grossKg === undefined
-            ? null
-            : formatQuantityText(request.grossKg),
-      })
-      .$returningId();
-    const movementId = inserted!.id;
-    if (toLocation) {
-      const to = balances.get(toLocation.id)!;
-      await setBalance(tx, item.id, lot.id, toLocation.id, to.onHand - change);
+  const itemOnHand = parseQuantity(item.onHand);
+  const averageCost = parseUnitCost(item.averageCost);
+  const itemChange = request.type === "transfer" ? 0n : change;
+  const itemOnHandAfter = itemOnHand + itemChange;
+  const averageAfter =
+    request.type === "receipt"
+      ? movingAverageAfterReceipt({
+          onHand: itemOnHand,
+          averageCost,
+          received: change,
+          unitCost: request.unitCost!,
+        })
+      : averageCost;
+  const now = options.at ?? new Date();
+  const common = {
+    itemId: item.id,
+    lotId: lot.id,
+    reference: request.reference ?? null,
+    note: request.note ?? null,
+    userId,
+    createdAt: now,
+    averageCostAfter: formatUnitCostText(averageAfter),
+    itemOnHandAfter: formatQuantityText(itemOnHandAfter),
+  };
+
+  await setBalance(
+    tx,
+    item.id,
+    lot.id,
+    location.id,
+    from.onHand + change,
+    held ? from.reserved - reservedTaken : undefined,
+  );
+  const [inserted] = await tx
+    .insert(stockMovements)
+    .values({
+      ...common,
+      type: request.type,
+      locationId: location.id,
+      quantity: formatQuantityText(change),
+      unitCost:
+        request.type === "receipt"
+          ? formatUnitCostText(request.unitCost!)
+          : null,
+      countedQuantity:
+        request.type === "count" ? formatQuantityText(request.quantity!) : null,
+      grossKg:
+        request.grossKg === undefined
+          ? null
+          : formatQuantityText(request.grossKg),
+    })
+    .$returningId();
+  const movementId = inserted!.id;
+  if (toLocation) {
+    const to = balances.get(toLocation.id)!;
+    await setBalance(tx, item.id, lot.id, toLocation.id, to.onHand - change);
+    await tx
+      .update(stockMovements)
+      .set({ transferId: movementId })
+      .where(eq(stockMovements.id, movementId));
+    await tx.insert(stockMovements).values({
+      ...common,
+      type: "transfer",
+      locationId: toLocation.id,
+      quantity: formatQuantityText(-change),
+      transferId: movementId,
+    });
+  }
+  const reserved = parseQuantity(item.reserved) - reservedTaken;
+  await tx
+    .update(items)
+    .set({
+      onHand: formatQuantityText(itemOnHandAfter),
+      ...(held ? { reserved: formatQuantityText(reserved) } : {}),
+      averageCost: formatUnitCostText(averageAfter),
+      updatedAt: now,
+    })
+    .where(eq(items.id, item.id));
+  if (held && options.reservation) {
+    const { lineId } = options.reservation;
+    if (held.held === reservedTaken) {
+      await tx.delete(buildOrderReservations).where(held.where);
+    } else {
       await tx
-        .update(stockMovements)
-        .set({ transferId: movementId })
-        .where(eq(stockMovements.id, movementId));
-      await tx.insert(stockMovements).values({
-        ...common,
-        type: "transfer",
-        locationId: toLocation.id,
-        quantity: formatQuantityText(-change),
-        transferId: movementId,
-      });
+        .update(buildOrderReservations)
+        .set({ quantity: formatQuantityText(held.held - reservedTaken) })
+        .where(held.where);
     }
     await tx
-      .update(items)
+      .update(buildOrderLines)
       .set({
-        onHand: formatQuantityText(itemOnHandAfter),
-        averageCost: formatUnitCostText(averageAfter),
-        updatedAt: now,
+        reserved: formatQuantityText(held.lineReserved - reservedTaken),
+        issued: formatQuantityText(held.lineIssued + reservedTaken),
       })
-      .where(eq(items.id, item.id));
+      .where(eq(buildOrderLines.id, lineId));
+    await tx.insert(buildOrderIssues).values({
+      movementId,
+      lineId,
+      quantity: formatQuantityText(reservedTaken),
+      unitCost: formatUnitCostText(averageAfter),
+    });
+  }
 
-    const reserved = parseQuantity(item.reserved);
-    return {
-      movement: {
-        id: movementId,
-        type: request.type,
-        sku: item.sku,
-        lot: lot.number,
-        location: location.code,
-        toLocation: toLocation?.code ?? null,
-        quantity: quantityToNumber(change),
-        unit,
-        createdAt: now.toISOString(),
-      },
-      balance: {
-        onHand: quantityToNumber(itemOnHandAfter),
-        reserved: quantityToNumber(reserved),
-        available: quantityToNumber(itemOnHandAfter - reserved),
-      },
-    };
-  });
+  return {
+    movement: {
+      id: movementId,
+      type: request.type,
+      sku: item.sku,
+      lot: lot.number,
+      location: location.code,
+      toLocation: toLocation?.code ?? null,
+      quantity: quantityToNumber(change),
+      unit,
+      createdAt: now.toISOString(),
+    },
+    balance: {
+      onHand: quantityToNumber(itemOnHandAfter),
+      reserved: quantityToNumber(reserved),
+      available: quantityToNumber(itemOnHandAfter - reserved),
+    },
+  };
 }

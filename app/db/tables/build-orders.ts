@@ -14,11 +14,12 @@ import {
   mysqlEnum,
   mysqlTable,
   primaryKey,
+  uniqueIndex,
   varchar,
 } from "drizzle-orm/mysql-core";
 import { createdAt, users } from "./accounts";
 import { designRevisions, designs } from "./designs";
-import { items, locations } from "./stock";
+import { items, locations, stockMovements } from "./stock";
 
 export const buildOrderStatuses = [
   "draft",
@@ -75,7 +76,11 @@ export const buildOrderLines = mysqlTable(
     plannedUnitCost: decimal("planned_unit_cost", { precision: 14, scale: 4 }),
   },
   (table) => [
-    index("build_order_lines_order_idx").on(table.orderId, table.itemId),
+    // One line per item: the design's lines of one item are added together.
+    uniqueIndex("build_order_lines_order_item_unique").on(
+      table.orderId,
+      table.itemId,
+    ),
     index("build_order_lines_item_idx").on(table.itemId),
     check("build_order_lines_required", sql`${table.required} > 0`),
     check("build_order_lines_reserved", sql`${table.reserved} >= 0`),
@@ -128,4 +133,27 @@ export const buildOrderEvents = mysqlTable(
     createdAt: createdAt(),
   },
   (table) => [index("build_order_events_order_idx").on(table.orderId)],
+);
+
+/**
+ * What was issued to an order line: one row per issue movement, with the item's
+ * moving average cost at that moment (the actual cost of the build).
+ */
+export const buildOrderIssues = mysqlTable(
+  "build_order_issues",
+  {
+    movementId: bigint("movement_id", { mode: "number" })
+      .primaryKey()
+      .references(() => stockMovements.id),
+    lineId: int("line_id")
+      .notNull()
+      .references(() => buildOrderLines.id),
+    quantity: quantity("quantity").notNull(),
+    /** The item's moving average cost when it was issued, per unit. */
+    unitCost: decimal("unit_cost", { precision: 14, scale: 4 }).notNull(),
+  },
+  (table) => [
+    index("build_order_issues_line_idx").on(table.lineId),
+    check("build_order_issues_positive", sql`${table.quantity} > 0`),
+  ],
 );

@@ -1,0 +1,131 @@
+/**
+ * Cancelling, completing and re-sizing a build order. Each is one short transaction that
+ * locks the order first and gives back whatever stock it still holds (see
+ * `releaseHeldStock`). Stock already issued stays issued: a storekeeper returns what was
+ * not used with a return movement.
+ */
+import { checkStockAlertsOfOrder } from "~/alerts/stock-alerts.server";
+import { and, eq } from "drizzle-orm";
+import { db } from "~/db/client.server";
+import { buildOrderLines, buildOrders } from "~/db/schema";
+import { formatQuantityText } from "~/stock/decimal-amounts";
+import { BuildOrderError } from "./build-order-errors";
+import {
+  changeStatus,
+  inBuildOrderTransaction,
+  lockOrder,
+} from "./build-order-locks.server";
+import {
+  releaseHeldStock,
+  type HeldStock,
+} from "./build-order-reservations.server";
+import {
+  buildOrderReference,
+  canCancel,
+  canChangeQuantity,
+  canComplete,
+  refusalFor,
+  type BuildOrderStatus,
+} from "./build-order-status";
+import { requirementsForRevision } from "./build-orders.server";
+
+export interface CloseResult {
+  id: number;
+  status: BuildOrderStatus;
+  /** What the order held and gave back. */
+  released: HeldStock[];
+}
+
+export async function cancelBuildOrder(
+  orderId: number,
+  userId: string,
+  note?: string,
+): Promise<CloseResult> {
+  const result = await inBuildOrderTransaction(async (tx) => {
+    const order = await lockOrder(tx, orderId);
+    if (!canCancel(order.status))
+      throw new BuildOrderError(409, refusalFor("cancel", order.status));
+    const released = await releaseHeldStock(tx, order);
+    await changeStatus(tx, order, "cancelled", userId, note);
+    return { id: order.id, status: order.status, released };
+  });
+  await checkStockAlertsOfOrder(orderId);
+  return result;
+}
+
+/** Completes a build in progress; what it still holds is released. Planned versus actual is read from the order afterwards. */
+export async function completeBuildOrder(
+  orderId: number,
+  userId: string,
+  note?: string,
+): Promise<CloseResult> {
+  const result = await inBuildOrderTransaction(async (tx) => {
+    const order = await lockOrder(tx, orderId);
+    if (!canComplete(order.status))
+      throw new BuildOrderError(409, refusalFor("complete", order.status));
+    const released = await releaseHeldStock(tx, order);
+    await changeStatus(tx, order, "complete", userId, note);
+    return { id: order.id, status: order.status, released };
+  });
+  await checkStockAlertsOfOrder(orderId);
+  return result;
+}
+
+/**
+ * Changes the number of motors of an order nothing has been issued to: releases what it
+ * holds, works out the lines again for the new number and goes back to draft.
+ */
+export async function changeBuildOrderQuantity(
+  orderId: number,
+  quantity: number,
+  userId: string,
+): Promise<CloseResult> {
+  // A released revision never changes: its requirements are worked out before the transaction.
+  const [found] = await db
+    .select({ revisionId: buildOrders.revisionId })
+    .from(buildOrders)
+    .where(eq(buildOrders.id, orderId));
+  if (!found)
+    throw new BuildOrderError(
+      404,
+      `No build order ${buildOrderReference(orderId)}.`,
+    );
+  const requirements = await requirementsForRevision(
+    found.revisionId,
+    quantity,
+  );
+  const result = await inBuildOrderTransaction(async (tx) => {
+    const order = await lockOrder(tx, orderId);
+    if (!canChangeQuantity(order.status))
+      throw new BuildOrderError(409, refusalFor("quantity", order.status));
+    if (quantity === order.quantity)
+      return { id: order.id, status: order.status, released: [] };
+    const released = await releaseHeldStock(tx, order);
+    for (const requirement of requirements) {
+      await tx
+        .update(buildOrderLines)
+        .set({ required: formatQuantityText(requirement.required) })
+        .where(
+          and(
+            eq(buildOrderLines.orderId, order.id),
+            eq(buildOrderLines.itemId, requirement.itemId),
+          ),
+        );
+    }
+    const before = order.quantity;
+    await tx
+      .update(buildOrders)
+      .set({ quantity })
+      .where(eq(buildOrders.id, order.id));
+    await changeStatus(
+      tx,
+      order,
+      "draft",
+      userId,
+      `Motors ${before} → ${quantity}${released.length > 0 ? "; held stock released" : ""}.`,
+    );
+    return { id: order.id, status: order.status, released };
+  });
+  await checkStockAlertsOfOrder(orderId);
+  return result;
+}

@@ -1,0 +1,74 @@
+/**
+ * The life of a build order: draft → reserved → in progress → complete, or cancelled
+ * from any state before complete. Pure: shared by the server and the pages.
+ */
+import type { buildOrderStatuses } from "~/db/tables/build-orders";
+
+export type BuildOrderStatus = (typeof buildOrderStatuses)[number];
+
+export const buildOrderStatusLabels: Record<BuildOrderStatus, string> = {
+  draft: "Draft",
+  reserved: "Stock held",
+  in_progress: "Being built",
+  complete: "Built",
+  cancelled: "Cancelled",
+};
+
+/** The order reference people write on labels and movements: "BO-12". */
+export function buildOrderReference(id: number): string {
+  return `BO-${id}`;
+}
+
+/** Stock can be (further) reserved until the build is complete or cancelled. */
+export function canReserve(status: BuildOrderStatus): boolean {
+  return (
+    status === "draft" || status === "reserved" || status === "in_progress"
+  );
+}
+
+/** Reserved stock is issued once something is held, until the build is closed. */
+export function canIssue(status: BuildOrderStatus): boolean {
+  return status === "reserved" || status === "in_progress";
+}
+
+export function canCancel(status: BuildOrderStatus): boolean {
+  return (
+    status === "draft" || status === "reserved" || status === "in_progress"
+  );
+}
+
+/** A build is completed once stock has been issued to it. */
+export function canComplete(status: BuildOrderStatus): boolean {
+  return status === "in_progress";
+}
+
+/** The quantity of motors can change until the first issue; it releases what is held. */
+export function canChangeQuantity(status: BuildOrderStatus): boolean {
+  return status === "draft" || status === "reserved";
+}
+
+/** Why a step is refused in the order's current state, for a 409 answer. */
+export function refusalFor(
+  step: "reserve" | "issue" | "cancel" | "complete" | "quantity",
+  status: BuildOrderStatus,
+): string {
+  const state = buildOrderStatusLabels[status].toLowerCase();
+  switch (step) {
+    case "reserve":
+      return `The build order is ${state}: nothing more can be reserved.`;
+    case "issue":
+      return status === "draft"
+        ? "Reserve stock for the build order before issuing to it."
+        : `The build order is ${state}: nothing more can be issued.`;
+    case "cancel":
+      return `The build order is ${state} and can no longer be cancelled.`;
+    case "complete":
+      return status === "draft" || status === "reserved"
+        ? "Nothing has been issued to the build order yet: issue stock before completing it."
+        : `The build order is already ${state}.`;
+    case "quantity":
+      return status === "in_progress"
+        ? "Stock has been issued to the build order: the number of motors can no longer change."
+        : `The build order is ${state}: the number of motors can no longer change.`;
+  }
+}
