@@ -35,6 +35,8 @@ export default [
         "routes/design-bom-print.tsx",
       ),
     ]),
+    route("alerts", "routes/alerts.tsx"),
+    route("alerts/purchase-request.csv", "routes/alerts-purchase-request.ts"),
     ...prefix("build-orders", [
       index("routes/build-orders.tsx"),
       route(":orderId", "routes/build-order.tsx"),
@@ -89,6 +91,7 @@ export default [
       "designs/:designId/revisions/:revision/costing",
       "routes/api.v1.design-costing.ts",
     ),
+    route("alerts", "routes/api.v1.alerts.ts"),
     route("build-orders", "routes/api.v1.build-orders.ts"),
     route("build-orders/:orderId", "routes/api.v1.build-order.ts"),
     route("build-orders/:orderId/:step", "routes/api.v1.build-order-step.ts"),

@@ -5,8 +5,9 @@
  * code, so the demo's balances obey the same rules as real ones. Prices and
  * quantities are invented for the demo.
  */
+import { checkStockAlerts } from "~/alerts/stock-alerts.server";
 import { db } from "~/db/client.server";
-import { locations } from "~/db/schema";
+import { items, locations } from "~/db/schema";
 import { createItem } from "~/stock/catalogue.server";
 import type { ItemCreateInput } from "~/stock/item-schemas";
 import { movementRequestSchema } from "~/stock/movement-request";
@@ -365,6 +366,7 @@ export async function seedDemoStock(storekeeperId: string): Promise<void> {
     try {
       await recordMovement(movementRequestSchema.parse(body), storekeeperId, {
         at,
+        checkAlerts: false,
       });
     } catch (error) {
       if (!isStockError(error)) throw error; // a demo issue larger than the spool is simply skipped
@@ -540,4 +542,8 @@ export async function seedDemoStock(storekeeperId: string): Promise<void> {
       );
     }
   }
+
+  // Alerts once at the end: demo items left below their reorder point open theirs now.
+  const allItems = await db.select({ id: items.id }).from(items);
+  await checkStockAlerts(allItems.map((item) => item.id));
 }

@@ -75,8 +75,10 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
   }
 }
 
-/** Queues a message and tries to send it at once. Returns true when SMTP accepted it. */
-export async function sendMail(mail: OutgoingMail): Promise<boolean> {
+/** Queues a message and tries to send it at once: its outbox id, and whether SMTP accepted it. */
+export async function queueMail(
+  mail: OutgoingMail,
+): Promise<{ outboxId: number; sent: boolean }> {
   const queued = {
     toAddress: mail.to,
     subject: mail.subject,
@@ -85,7 +87,17 @@ export async function sendMail(mail: OutgoingMail): Promise<boolean> {
   const [inserted] = await db.insert(mailOutbox).values(queued).$returningId();
   if (!inserted)
     throw new Error("The outbox did not return the new message's id.");
-  return attemptDelivery({ ...queued, id: inserted.id, attempts: 0 });
+  const sent = await attemptDelivery({
+    ...queued,
+    id: inserted.id,
+    attempts: 0,
+  });
+  return { outboxId: inserted.id, sent };
+}
+
+/** Queues a message and tries to send it at once. Returns true when SMTP accepted it. */
+export async function sendMail(mail: OutgoingMail): Promise<boolean> {
+  return (await queueMail(mail)).sent;
 }
 
 /** Tries every unsent message again, oldest first. */

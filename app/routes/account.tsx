@@ -12,19 +12,68 @@ import { requireUser } from "~/auth/guard.server";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages, TextField } from "~/components/text-field";
 import { formatDateTime } from "~/lib/format";
-import { roleLabels } from "~/lib/roles";
+import { roleLabels, userHasRole } from "~/lib/roles";
+import {
+  alertPreferenceOf,
+  setAlertPreference,
+} from "~/alerts/alert-preferences.server";
+import { alertMailModes, alertModeOf } from "~/alerts/low-stock";
 import { createTokenSchema, tokenExpiry } from "~/lib/token-schemas";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  return { user, tokens: await listApiTokens(user.id) };
+  const hearsAlerts = userHasRole(user, ["buyer"]);
+  return {
+    user,
+    tokens: await listApiTokens(user.id),
+    alertMode: hearsAlerts
+      ? alertModeOf({
+          ...user,
+          mode: await alertPreferenceOf(user.id),
+        })
+      : null,
+  };
 }
+
+const alertModeSchema = z.object({
+  mode: z.enum(alertMailModes, {
+    error: "Choose each alert, a daily digest or none.",
+  }),
+});
 
 const revokeSchema = z.object({ tokenId: z.coerce.number().int().positive() });
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireUser(request);
   const formData = await request.formData();
+  if (formData.get("intent") === "alert-mode") {
+    // Buyers (and admins, who opt in) choose how they hear about low stock.
+    if (!userHasRole(user, ["buyer"]))
+      return data(
+        {
+          result: null,
+          newToken: null,
+          notice: "Only buyers and admins get low-stock e-mails.",
+        },
+        { status: 403 },
+      );
+    const parsed = alertModeSchema.safeParse({ mode: formData.get("mode") });
+    if (!parsed.success)
+      return data(
+        {
+          result: null,
+          newToken: null,
+          notice: parsed.error.issues[0]!.message,
+        },
+        { status: 400 },
+      );
+    await setAlertPreference(user.id, parsed.data.mode);
+    return {
+      result: null,
+      newToken: null,
+      notice: "Low-stock e-mail choice saved.",
+    };
+  }
   if (formData.get("intent") === "revoke") {
     const parsed = revokeSchema.safeParse({ tokenId: formData.get("tokenId") });
     if (
@@ -80,7 +129,7 @@ export default function Account({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { user, tokens } = loaderData;
+  const { user, tokens, alertMode } = loaderData;
   const navigation = useNavigation();
   const [form, fields] = useForm({
     id: "new-token",
@@ -104,6 +153,42 @@ export default function Account({
           {user.roles.map((role) => roleLabels[role]).join(", ") || "no role"}
         </p>
       </div>
+
+      {alertMode ? (
+        <section aria-labelledby="alerts-heading" className="space-y-3">
+          <h2 id="alerts-heading" className="text-lg font-semibold">
+            Low-stock e-mails
+          </h2>
+          <Form method="post" className="space-y-2">
+            <input type="hidden" name="intent" value="alert-mode" />
+            <fieldset className="space-y-1 text-sm">
+              <legend className="mb-1 text-graphite-700">
+                When an item falls below its reorder point, tell me:
+              </legend>
+              {(
+                [
+                  ["each", "by e-mail, for each new alert"],
+                  ["digest", "once a day, in a digest of every open alert"],
+                  ["none", "not by e-mail (I read the Alerts page)"],
+                ] as const
+              ).map(([mode, label]) => (
+                <label key={mode} className="flex items-center gap-2">
+                  <input
+                    type="radio"
+                    name="mode"
+                    value={mode}
+                    defaultChecked={alertMode === mode}
+                  />
+                  {label}
+                </label>
+              ))}
+            </fieldset>
+            <button type="submit" className="button-quiet">
+              Save
+            </button>
+          </Form>
+        </section>
+      ) : null}
 
       <section aria-labelledby="tokens-heading" className="space-y-4">
         <h2 id="tokens-heading" className="text-lg font-semibold">

@@ -3,6 +3,11 @@
  * smtp-server package) on 127.0.0.1 that keeps every message it accepts, and
  * a small HTTP endpoint that lists them, so tests read what truly went
  * through SMTP. It delivers nothing anywhere.
+ *
+ * Tests can make it refuse some recipients, as a server that is down would
+ * (421 "service not available"): PUT /refusals ["text in the address", …];
+ * DELETE /refusals lifts them. Other recipients are not affected, so tests
+ * running at the same time keep their mail.
  */
 import http from "node:http";
 import type { AddressInfo } from "node:net";
@@ -37,12 +42,24 @@ export async function startMailFake(options: {
   quiet?: boolean;
 }): Promise<MailFake> {
   const messages: ReceivedMessage[] = [];
+  let refusals: string[] = [];
   const smtp = new SMTPServer({
     authOptional: true,
     disabledCommands: ["STARTTLS", "AUTH"],
     banner: "Turnledger mail fake",
     logger: false,
     size: 10 * 1024 * 1024,
+    onRcptTo(address, _session, callback) {
+      if (refusals.some((text) => address.address.includes(text))) {
+        const refused = new Error(
+          "Service not available (the mail fake was told to refuse this recipient)",
+        ) as Error & { responseCode: number };
+        refused.responseCode = 421;
+        callback(refused);
+        return;
+      }
+      callback();
+    },
     onData(stream, _session, callback) {
       simpleParser(stream)
         .then((parsed) => {
@@ -71,6 +88,31 @@ export async function startMailFake(options: {
   });
 
   const api = http.createServer((request, response) => {
+    if (request.url?.startsWith("/refusals")) {
+      if (request.method === "DELETE") {
+        refusals = [];
+        response.writeHead(204).end();
+        return;
+      }
+      let body = "";
+      request.on("data", (chunk: Buffer) => (body += chunk.toString()));
+      request.on("end", () => {
+        try {
+          const parsed = JSON.parse(body) as unknown;
+          if (
+            !Array.isArray(parsed) ||
+            !parsed.every((entry) => typeof entry === "string" && entry)
+          )
+            throw new Error("not a list of texts");
+          refusals = parsed;
+          response.writeHead(204).end();
+        } catch {
+          response.writeHead(400, { "Content-Type": "application/json" });
+          response.end(JSON.stringify({ error: "PUT a JSON list of texts" }));
+        }
+      });
+      return;
+    }
     if (request.url?.startsWith("/messages")) {
       if (request.method === "DELETE") {
         messages.length = 0;

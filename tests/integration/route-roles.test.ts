@@ -24,6 +24,25 @@ const table: Row[] = [
   ...designRouteRows,
   ...buildOrderRouteRows,
   {
+    file: "routes/alerts.tsx",
+    method: "GET",
+    path: "/alerts",
+    expect: { anonymous: 302, signedIn: 200 },
+  },
+  // Buyers only; a supplier that quotes no alerted item answers 404.
+  {
+    file: "routes/alerts-purchase-request.ts",
+    method: "GET",
+    path: "/alerts/purchase-request.csv?supplier=Nobody%20at%20all",
+    expect: { anonymous: 302, buyer: 404, admin: 404, signedIn: 403 },
+  },
+  {
+    file: "routes/api.v1.alerts.ts",
+    method: "GET",
+    path: "/api/v1/alerts",
+    expect: { anonymous: 401, signedIn: 200 },
+  },
+  {
     file: "routes/app-shell.tsx",
     method: "GET",
     path: "/",

@@ -39,3 +39,12 @@ export function linkIn(message: ReceivedMessage): string {
   if (!match) throw new Error(`no link in message "${message.subject}"`);
   return match[0];
 }
+
+/** Makes the SMTP fake refuse recipients whose address contains one of the texts (421), until lifted. */
+export async function refuseRecipients(texts: string[]): Promise<void> {
+  const response = await fetch(`${inject("mailFakeUrl")}/refusals`, {
+    method: texts.length === 0 ? "DELETE" : "PUT",
+    body: texts.length === 0 ? undefined : JSON.stringify(texts),
+  });
+  if (!response.ok) throw new Error(`refusals: ${response.status}`);
+}

@@ -1,0 +1,211 @@
+/**
+ * Low-stock rules and the words of their e-mails. An item with a reorder
+ * point above zero is low while its available stock (on hand − reserved) is
+ * below that point; an alert opens on the drop and closes when available is
+ * back at or above the point. Pure: quantities in thousandths of the unit.
+ */
+import Papa from "papaparse";
+import {
+  amountForQuantity,
+  formatExactDecimal,
+  formatMoneyText,
+  fromThousandths,
+  rescale,
+  type MoneyAmount,
+} from "~/pricing/money";
+import { guardCell } from "~/stock/csv-formula-guard";
+import { quantityToNumber } from "~/stock/decimal-amounts";
+import { formatStockQuantity } from "~/stock/stock-quantity-text";
+
+export type AlertChange = "open" | "close" | "none";
+
+/** How a person hears about low stock: an e-mail per alert, a daily digest, or none. */
+export const alertMailModes = ["each", "digest", "none"] as const;
+export type AlertMailMode = (typeof alertMailModes)[number];
+
+/** What happens to an item's alert after its available stock changed. */
+export function alertChange(input: {
+  available: bigint;
+  reorderPoint: bigint;
+  alertOpen: boolean;
+}): AlertChange {
+  const low = input.reorderPoint > 0n && input.available < input.reorderPoint;
+  if (low && !input.alertOpen) return "open";
+  if (!low && input.alertOpen) return "close";
+  return "none";
+}
+
+/** What to order: the reorder quantity, or more when that would still leave stock below the point. */
+export function suggestedOrderQuantity(input: {
+  available: bigint;
+  reorderPoint: bigint;
+  reorderQuantity: bigint;
+}): bigint {
+  const shortfall = input.reorderPoint - input.available;
+  return input.reorderQuantity > shortfall
+    ? input.reorderQuantity
+    : shortfall > 0n
+      ? shortfall
+      : 0n;
+}
+
+export interface AlertPerson {
+  id: string;
+  email: string;
+  roles: readonly string[];
+  /** The person's choice; null when never chosen. */
+  mode: AlertMailMode | null;
+}
+
+/** How a person hears about alerts: buyers each alert unless they chose otherwise; admins only when they opted in. */
+export function alertModeOf(person: AlertPerson): AlertMailMode {
+  if (person.mode) {
+    const allowed =
+      person.roles.includes("buyer") || person.roles.includes("admin");
+    return allowed ? person.mode : "none";
+  }
+  return person.roles.includes("buyer") ? "each" : "none";
+}
+
+export interface AlertMailFacts {
+  sku: string;
+  name: string;
+  unit: string;
+  available: bigint;
+  reorderPoint: bigint;
+  reorderQuantity: bigint;
+  /** The cheapest supplier for the order quantity, or null when nobody quotes it. */
+  bestOffer: {
+    supplier: string;
+    supplierSku: string;
+    unitPrice: number;
+    currency: string;
+  } | null;
+  /** Open build orders that need the item. */
+  buildOrders: { id: number; status: string; stillNeeded: bigint }[];
+  /** Link to the item page. */
+  itemUrl: string;
+}
+
+/** "2.500 kg" with a plain space: e-mail text is read and searched as typed. */
+const quantityText = (thousandths: bigint, unit: string) =>
+  formatStockQuantity(quantityToNumber(thousandths), unit).replace(
+    /\u00a0/g,
+    " ",
+  );
+
+/** The e-mail sent to each person told about a newly opened alert. */
+export function alertMail(facts: AlertMailFacts): {
+  subject: string;
+  text: string;
+} {
+  const order = suggestedOrderQuantity(facts);
+  const lines = [
+    `${facts.sku} ${facts.name} is below its reorder point.`,
+    "",
+    `Available now: ${quantityText(facts.available, facts.unit)} (on hand less reserved)`,
+    `Reorder point: ${quantityText(facts.reorderPoint, facts.unit)}`,
+    `Suggested order: ${quantityText(order, facts.unit)} (reorder quantity ${quantityText(facts.reorderQuantity, facts.unit)})`,
+    facts.bestOffer
+      ? `Best price for that quantity: ${facts.bestOffer.supplier}, their SKU ${facts.bestOffer.supplierSku}, ${facts.bestOffer.unitPrice.toFixed(4)} ${facts.bestOffer.currency} per ${facts.unit}`
+      : "No supplier quotes a price for that quantity yet.",
+    "",
+    facts.buildOrders.length === 0
+      ? "No open build order needs it."
+      : `Open build orders that need it: ${facts.buildOrders
+          .map(
+            (order) =>
+              `#${order.id} (${order.status.replace("_", " ")}, ${quantityText(order.stillNeeded, facts.unit)} still to issue)`,
+          )
+          .join(", ")}`,
+    "",
+    `Item: ${facts.itemUrl}`,
+    "",
+    "You get this because you buy for Turnledger; choose each alert, a daily digest or none on your account page.",
+  ];
+  return {
+    subject: `Low stock: ${facts.sku} ${facts.name}`.slice(0, 255),
+    text: lines.join("\n"),
+  };
+}
+
+export interface DigestLine {
+  sku: string;
+  name: string;
+  unit: string;
+  available: bigint;
+  reorderPoint: bigint;
+  openedAt: Date;
+}
+
+/** The daily digest of every open alert. */
+export function digestMail(
+  alerts: readonly DigestLine[],
+  alertsUrl: string,
+): { subject: string; text: string } {
+  const lines = alerts.map(
+    (alert) =>
+      `- ${alert.sku} ${alert.name}: ${quantityText(alert.available, alert.unit)} available, reorder point ${quantityText(alert.reorderPoint, alert.unit)} (low since ${alert.openedAt.toISOString().slice(0, 10)})`,
+  );
+  return {
+    subject: `Low stock digest: ${alerts.length} item${alerts.length === 1 ? "" : "s"} below reorder point`,
+    text: [
+      `${alerts.length} item${alerts.length === 1 ? " is" : "s are"} below the reorder point:`,
+      "",
+      ...lines,
+      "",
+      `All alerts: ${alertsUrl}`,
+    ].join("\n"),
+  };
+}
+
+export interface PurchaseRequestLine {
+  sku: string;
+  name: string;
+  supplierSku: string;
+  quantity: bigint;
+  unit: string;
+  /** Ten-thousandths of the supplier's currency per unit. */
+  unitPrice: MoneyAmount;
+  currency: string;
+}
+
+export const purchaseRequestHeaders = [
+  "our_sku",
+  "description",
+  "supplier_sku",
+  "quantity",
+  "unit",
+  "unit_price",
+  "currency",
+  "line_total",
+] as const;
+
+/** A draft purchase request for one supplier as CSV (formula-like text neutralised). */
+export function purchaseRequestCsv(
+  lines: readonly PurchaseRequestLine[],
+): string {
+  const rows = lines.map((line) => {
+    const total = amountForQuantity(
+      fromThousandths(line.quantity),
+      line.unitPrice,
+    );
+    return [
+      guardCell(line.sku),
+      guardCell(line.name),
+      guardCell(line.supplierSku),
+      quantityToNumber(line.quantity),
+      line.unit,
+      Number(formatMoneyText(line.unitPrice)),
+      line.currency,
+      // To the cent, half away from zero.
+      Number(
+        formatExactDecimal({
+          digits: rescale({ digits: total, decimals: 4 }, 2),
+          decimals: 2,
+        }),
+      ),
+    ];
+  });
+  return `\uFEFF${Papa.unparse({ fields: [...purchaseRequestHeaders], data: rows }, { newline: "\r\n" })}\r\n`;
+}

@@ -1,0 +1,409 @@
+/**
+ * Low-stock alerts kept after every movement and reservation: each touched
+ * item is checked once its transaction has committed; a drop below the
+ * reorder point opens an alert and e-mails the people who want each alert,
+ * a return to the point closes it. Mail goes through the outbox, so an SMTP
+ * failure never fails the stock work; `npm run mail:retry` sends it later.
+ */
+import {
+  and,
+  asc,
+  desc,
+  eq,
+  inArray,
+  isNotNull,
+  isNull,
+  sql,
+} from "drizzle-orm";
+import { db } from "~/db/client.server";
+import { isDuplicateKey } from "~/db/database-errors";
+import {
+  alertPreferences,
+  buildOrderLines,
+  buildOrders,
+  items,
+  stockAlertNotices,
+  stockAlerts,
+  userRoles,
+  users,
+} from "~/db/schema";
+import { queueMail } from "~/mail/mailer.server";
+import { bestPrices } from "~/pricing/best-price";
+import { loadItemPricing } from "~/purchasing/item-prices.server";
+import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
+import {
+  alertChange,
+  alertMail,
+  alertModeOf,
+  digestMail,
+  suggestedOrderQuantity,
+  type AlertPerson,
+} from "./low-stock";
+
+/** The app's address for links in e-mails sent outside a request. */
+function appBaseUrl(): string {
+  return (
+    process.env.APP_URL?.replace(/\/+$/, "") ||
+    `http://localhost:${process.env.PORT ?? 3000}`
+  );
+}
+
+/** Active buyers and admins with their alert choice. */
+async function alertPeople(): Promise<AlertPerson[]> {
+  const rows = await db
+    .select({
+      id: users.id,
+      email: users.email,
+      role: userRoles.role,
+      mode: alertPreferences.mode,
+    })
+    .from(users)
+    .innerJoin(userRoles, eq(userRoles.userId, users.id))
+    .leftJoin(alertPreferences, eq(alertPreferences.userId, users.id))
+    .where(
+      and(eq(users.active, true), inArray(userRoles.role, ["buyer", "admin"])),
+    );
+  const people = new Map<string, AlertPerson>();
+  for (const row of rows) {
+    const person = people.get(row.id) ?? {
+      id: row.id,
+      email: row.email,
+      roles: [],
+      mode: row.mode ?? null,
+    };
+    people.set(row.id, { ...person, roles: [...person.roles, row.role] });
+  }
+  return [...people.values()];
+}
+
+async function bestOfferFor(sku: string, quantity: bigint) {
+  const pricing = await loadItemPricing(sku);
+  if (!pricing || quantity <= 0n) return null;
+  const [best] = bestPrices({
+    itemId: String(pricing.itemId),
+    quantity,
+    lines: pricing.lines,
+    bases: pricing.bases,
+    rates: pricing.rates,
+    companyCurrency: pricing.companyCurrency,
+    date: new Date().toISOString().slice(0, 10),
+  }).candidates;
+  return best
+    ? {
+        supplier: best.supplier,
+        supplierSku: best.supplierSku,
+        unitPrice: Number(best.landedUnitPrice) / 10_000,
+        currency: pricing.companyCurrency,
+      }
+    : null;
+}
+
+/** Open build orders that still need an item, with what is still to issue. */
+async function openBuildOrdersNeeding(itemId: number) {
+  const rows = await db
+    .select({
+      id: buildOrders.id,
+      status: buildOrders.status,
+      required: buildOrderLines.required,
+      issued: buildOrderLines.issued,
+    })
+    .from(buildOrderLines)
+    .innerJoin(buildOrders, eq(buildOrders.id, buildOrderLines.orderId))
+    .where(
+      and(
+        eq(buildOrderLines.itemId, itemId),
+        inArray(buildOrders.status, ["draft", "reserved", "in_progress"]),
+      ),
+    )
+    .orderBy(asc(buildOrders.id))
+    .limit(20);
+  return rows
+    .map((row) => ({
+      id: row.id,
+      status: row.status,
+      stillNeeded: parseQuantity(row.required) - parseQuantity(row.issued),
+    }))
+    .filter((row) => row.stillNeeded > 0n);
+}
+
+async function tellAboutNewAlert(
+  alertId: number,
+  item: {
+    id: number;
+    sku: string;
+    name: string;
+    unit: string;
+    available: bigint;
+    reorderPoint: bigint;
+    reorderQuantity: bigint;
+  },
+) {
+  const recipients = (await alertPeople()).filter(
+    (person) => alertModeOf(person) === "each",
+  );
+  if (recipients.length === 0) return;
+  const mail = alertMail({
+    ...item,
+    bestOffer: await bestOfferFor(item.sku, suggestedOrderQuantity(item)),
+    buildOrders: await openBuildOrdersNeeding(item.id),
+    itemUrl: `${appBaseUrl()}/stock/items/${encodeURIComponent(item.sku)}`,
+  });
+  for (const person of recipients) {
+    const { outboxId } = await queueMail({ to: person.email, ...mail });
+    await db.insert(stockAlertNotices).values({
+      alertId,
+      userId: person.id,
+      kind: "alert",
+      outboxId,
+      createdAt: new Date(),
+    });
+  }
+}
+
+/**
+ * Checks the items after their stock changed: opens, keeps or closes each
+ * one's alert. Call it after the stock transaction has committed. Errors are
+ * logged, never thrown: the stock work has already been done.
+ */
+export async function checkStockAlerts(itemIds: readonly number[]) {
+  const ids = [...new Set(itemIds)];
+  if (ids.length === 0) return;
+  try {
+    const rows = await db
+      .select({
+        id: items.id,
+        sku: items.sku,
+        name: items.name,
+        unit: items.unit,
+        onHand: items.onHand,
+        reserved: items.reserved,
+        reorderPoint: items.reorderPoint,
+        reorderQuantity: items.reorderQuantity,
+        openAlertId: stockAlerts.id,
+      })
+      .from(items)
+      .leftJoin(stockAlerts, eq(stockAlerts.openItemId, items.id))
+      .where(inArray(items.id, ids));
+    for (const row of rows) {
+      const item = {
+        id: row.id,
+        sku: row.sku,
+        name: row.name,
+        unit: row.unit,
+        available: parseQuantity(row.onHand) - parseQuantity(row.reserved),
+        reorderPoint: parseQuantity(row.reorderPoint),
+        reorderQuantity: parseQuantity(row.reorderQuantity),
+      };
+      const change = alertChange({
+        available: item.available,
+        reorderPoint: item.reorderPoint,
+        alertOpen: row.openAlertId !== null,
+      });
+      const text = (thousandths: bigint) =>
+        quantityToNumber(thousandths).toFixed(3);
+      if (change === "close") {
+        await db
+          .update(stockAlerts)
+          .set({
+            closedAt: new Date(),
+            availableAtClose: text(item.available),
+          })
+          .where(
+            and(
+              eq(stockAlerts.id, row.openAlertId!),
+              isNull(stockAlerts.closedAt),
+            ),
+          );
+      } else if (change === "open") {
+        let alertId: number;
+        try {
+          const [created] = await db
+            .insert(stockAlerts)
+            .values({
+              itemId: item.id,
+              availableAtOpen: text(item.available),
+              reorderPoint: text(item.reorderPoint),
+              reorderQuantity: text(item.reorderQuantity),
+              openedAt: new Date(),
+            })
+            .$returningId();
+          alertId = created!.id;
+        } catch (error) {
+          // Another request opened it a moment ago (one open alert per item): it tells people.
+          if (isDuplicateKey(error)) continue;
+          throw error;
+        }
+        await tellAboutNewAlert(alertId, item);
+      }
+    }
+  } catch (error) {
+    console.error("[alerts] low-stock check failed:", error);
+  }
+}
+
+/** Sends the digest of every open alert to the people who chose it; answers how many were sent. */
+export async function sendAlertDigest(): Promise<{
+  people: number;
+  alerts: number;
+}> {
+  const open = await db
+    .select({
+      id: stockAlerts.id,
+      openedAt: stockAlerts.openedAt,
+      sku: items.sku,
+      name: items.name,
+      unit: items.unit,
+      onHand: items.onHand,
+      reserved: items.reserved,
+      reorderPoint: items.reorderPoint,
+    })
+    .from(stockAlerts)
+    .innerJoin(items, eq(items.id, stockAlerts.itemId))
+    .where(isNotNull(stockAlerts.openItemId))
+    .orderBy(asc(items.sku));
+  if (open.length === 0) return { people: 0, alerts: 0 };
+  const recipients = (await alertPeople()).filter(
+    (person) => alertModeOf(person) === "digest",
+  );
+  const mail = digestMail(
+    open.map((alert) => ({
+      sku: alert.sku,
+      name: alert.name,
+      unit: alert.unit,
+      available: parseQuantity(alert.onHand) - parseQuantity(alert.reserved),
+      reorderPoint: parseQuantity(alert.reorderPoint),
+      openedAt: alert.openedAt,
+    })),
+    `${appBaseUrl()}/alerts`,
+  );
+  for (const person of recipients) {
+    const { outboxId } = await queueMail({ to: person.email, ...mail });
+    await db.insert(stockAlertNotices).values(
+      open.map((alert) => ({
+        alertId: alert.id,
+        userId: person.id,
+        kind: "digest" as const,
+        outboxId,
+        createdAt: new Date(),
+      })),
+    );
+  }
+  return { people: recipients.length, alerts: open.length };
+}
+
+export const alertsPageSize = 50;
+
+/** Alerts newest first (open, closed or all), with who was told and when. */
+export async function listAlerts(options: {
+  status: "open" | "closed" | "all";
+  page: number;
+  perPage?: number;
+}) {
+  const perPage = options.perPage ?? alertsPageSize;
+  const where =
+    options.status === "open"
+      ? isNull(stockAlerts.closedAt)
+      : options.status === "closed"
+        ? isNotNull(stockAlerts.closedAt)
+        : undefined;
+  const [{ total }] = (await db
+    .select({ total: sql<number>`COUNT(*)` })
+    .from(stockAlerts)
+    .where(where)) as [{ total: number }];
+  const alerts = await db
+    .select({
+      id: stockAlerts.id,
+      sku: items.sku,
+      name: items.name,
+      unit: items.unit,
+      onHand: items.onHand,
+      reserved: items.reserved,
+      availableAtOpen: stockAlerts.availableAtOpen,
+      reorderPoint: stockAlerts.reorderPoint,
+      reorderQuantity: stockAlerts.reorderQuantity,
+      openedAt: stockAlerts.openedAt,
+      closedAt: stockAlerts.closedAt,
+      availableAtClose: stockAlerts.availableAtClose,
+    })
+    .from(stockAlerts)
+    .innerJoin(items, eq(items.id, stockAlerts.itemId))
+    .where(where)
+    .orderBy(desc(stockAlerts.openedAt), desc(stockAlerts.id))
+    .limit(perPage)
+    .offset((options.page - 1) * perPage);
+  const notices =
+    alerts.length === 0
+      ? []
+      : await db
+          .select({
+            alertId: stockAlertNotices.alertId,
+            kind: stockAlertNotices.kind,
+            createdAt: stockAlertNotices.createdAt,
+            email: users.email,
+            name: users.name,
+          })
+          .from(stockAlertNotices)
+          .innerJoin(users, eq(users.id, stockAlertNotices.userId))
+          .where(
+            inArray(
+              stockAlertNotices.alertId,
+              alerts.map((alert) => alert.id),
+            ),
+          )
+          .orderBy(asc(stockAlertNotices.createdAt));
+  return {
+    total: Number(total),
+    alerts: alerts.map((alert) => ({
+      id: alert.id,
+      sku: alert.sku,
+      name: alert.name,
+      unit: alert.unit,
+      status: alert.closedAt ? ("closed" as const) : ("open" as const),
+      availableNow: quantityToNumber(
+        parseQuantity(alert.onHand) - parseQuantity(alert.reserved),
+      ),
+      availableAtOpen: Number(alert.availableAtOpen),
+      reorderPoint: Number(alert.reorderPoint),
+      reorderQuantity: Number(alert.reorderQuantity),
+      openedAt: alert.openedAt.toISOString(),
+      closedAt: alert.closedAt?.toISOString() ?? null,
+      availableAtClose:
+        alert.availableAtClose === null ? null : Number(alert.availableAtClose),
+      told: notices
+        .filter((notice) => notice.alertId === alert.id)
+        .map(({ kind, createdAt, email, name }) => ({
+          kind,
+          name,
+          email,
+          at: createdAt.toISOString(),
+        })),
+    })),
+  };
+}
+
+/** Checks the items of a build order after its reservations or issues changed. */
+export async function checkStockAlertsOfOrder(orderId: number) {
+  try {
+    const lines = await db
+      .select({ itemId: buildOrderLines.itemId })
+      .from(buildOrderLines)
+      .where(eq(buildOrderLines.orderId, orderId));
+    await checkStockAlerts(lines.map((line) => line.itemId));
+  } catch (error) {
+    console.error("[alerts] low-stock check failed:", error);
+  }
+}
+
+/** Checks the items with these SKUs (after a movement). */
+export async function checkStockAlertsOfSkus(skus: readonly string[]) {
+  try {
+    if (skus.length === 0) return;
+    const found = await db
+      .select({ id: items.id })
+      .from(items)
+      .where(inArray(items.sku, [...skus]));
+    await checkStockAlerts(found.map((item) => item.id));
+  } catch (error) {
+    console.error("[alerts] low-stock check failed:", error);
+  }
+}

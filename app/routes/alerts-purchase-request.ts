@@ -1,0 +1,27 @@
+import { data } from "react-router";
+import type { Route } from "./+types/alerts-purchase-request";
+import { purchaseRequestCsv } from "~/alerts/low-stock";
+import { purchaseRequestsBySupplier } from "~/alerts/purchase-requests.server";
+import { requireRole } from "~/auth/guard.server";
+
+/** GET /alerts/purchase-request.csv?supplier=Name (buyer, admin): the supplier's draft purchase request. */
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireRole(request, ["buyer"]);
+  const supplier = new URL(request.url).searchParams.get("supplier") ?? "";
+  const lines = (await purchaseRequestsBySupplier()).get(supplier);
+  if (!lines)
+    throw data(
+      {
+        message: `No item with an open alert is quoted by "${supplier}".`,
+      },
+      { status: 404 },
+    );
+  const fileName = `purchase-request-${supplier.replace(/[^A-Za-z0-9-]+/g, "-").slice(0, 60)}-${new Date().toISOString().slice(0, 10)}.csv`;
+  return new Response(purchaseRequestCsv(lines), {
+    headers: {
+      "Content-Type": "text/csv; charset=utf-8",
+      "Content-Disposition": `attachment; filename="${fileName}"`,
+      "X-Content-Type-Options": "nosniff",
+    },
+  });
+}

@@ -1,0 +1,213 @@
+import { createColumnHelper } from "@tanstack/react-table";
+import { Link } from "react-router";
+import type { Route } from "./+types/alerts";
+import { purchaseRequestsBySupplier } from "~/alerts/purchase-requests.server";
+import { alertsPageSize, listAlerts } from "~/alerts/stock-alerts.server";
+import { requireUser } from "~/auth/guard.server";
+import { DataTable } from "~/components/data-table";
+import { formatDateTime, pageFromSearch } from "~/lib/format";
+import { userHasRole } from "~/lib/roles";
+import { formatStockQuantity } from "~/stock/stock-quantity-text";
+
+const statuses = ["open", "closed", "all"] as const;
+type Status = (typeof statuses)[number];
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const search = new URL(request.url).searchParams;
+  const asked = search.get("status");
+  const status: Status = (statuses as readonly string[]).includes(asked ?? "")
+    ? (asked as Status)
+    : "open";
+  const page = pageFromSearch(search.get("page"));
+  const { alerts, total } = await listAlerts({ status, page });
+  const canBuy = userHasRole(user, ["buyer"]);
+  const requests = canBuy
+    ? [...(await purchaseRequestsBySupplier())].map(([supplier, lines]) => ({
+        supplier,
+        items: lines.length,
+      }))
+    : [];
+  return {
+    status,
+    alerts,
+    page,
+    pageCount: Math.max(1, Math.ceil(total / alertsPageSize)),
+    total,
+    canBuy,
+    requests,
+  };
+}
+
+export const meta: Route.MetaFunction = () => [
+  { title: "Low-stock alerts · Turnledger" },
+];
+
+type Alert = Route.ComponentProps["loaderData"]["alerts"][number];
+const column = createColumnHelper<Alert>();
+const columns = [
+  column.accessor("sku", {
+    header: "Item",
+    cell: (info) => (
+      <span>
+        <Link
+          to={`/stock/items/${encodeURIComponent(info.getValue())}`}
+          className="font-medium text-copper-700 underline-offset-2 hover:underline"
+        >
+          {info.getValue()}
+        </Link>{" "}
+        <span className="text-graphite-500">{info.row.original.name}</span>
+      </span>
+    ),
+  }),
+  column.accessor("status", {
+    header: "State",
+    cell: (info) =>
+      info.getValue() === "open" ? (
+        <span className="rounded border border-copper-700 px-1.5 py-0.5 text-xs font-semibold text-copper-700">
+          Open
+        </span>
+      ) : (
+        <span className="text-xs text-graphite-500">Closed</span>
+      ),
+  }),
+  column.accessor("availableAtOpen", {
+    header: "Available when opened",
+    meta: { numeric: true },
+    cell: (info) =>
+      formatStockQuantity(info.getValue(), info.row.original.unit),
+  }),
+  column.accessor("availableNow", {
+    header: "Available now",
+    meta: { numeric: true },
+    cell: (info) =>
+      formatStockQuantity(info.getValue(), info.row.original.unit),
+  }),
+  column.accessor("reorderPoint", {
+    header: "Reorder point",
+    meta: { numeric: true },
+    cell: (info) =>
+      formatStockQuantity(info.getValue(), info.row.original.unit),
+  }),
+  column.accessor("openedAt", {
+    header: "Opened",
+    cell: (info) => (
+      <span className="whitespace-nowrap">
+        {formatDateTime(info.getValue())}
+      </span>
+    ),
+  }),
+  column.accessor("closedAt", {
+    header: "Closed",
+    cell: (info) => {
+      const value = info.getValue();
+      return value ? (
+        <span className="whitespace-nowrap">{formatDateTime(value)}</span>
+      ) : (
+        "—"
+      );
+    },
+  }),
+  column.accessor("told", {
+    header: "Who was told",
+    enableSorting: false,
+    cell: (info) => {
+      const told = info.getValue();
+      if (told.length === 0)
+        return <span className="text-graphite-500">nobody</span>;
+      return (
+        <ul className="text-xs">
+          {told.map((notice) => (
+            <li key={`${notice.email}-${notice.at}`}>
+              {notice.name} ({notice.kind === "digest" ? "digest" : "e-mail"},{" "}
+              {formatDateTime(notice.at)})
+            </li>
+          ))}
+        </ul>
+      );
+    },
+  }),
+];
+
+export default function Alerts({ loaderData }: Route.ComponentProps) {
+  const { status, alerts, page, pageCount, total, canBuy, requests } =
+    loaderData;
+  return (
+    <div>
+      <div className="mb-4 flex flex-wrap items-baseline justify-between gap-3">
+        <h1 className="text-2xl font-semibold">Low-stock alerts</h1>
+        <nav aria-label="Which alerts" className="flex gap-4 text-sm">
+          {statuses.map((choice) => (
+            <Link
+              key={choice}
+              to={`?status=${choice}`}
+              aria-current={choice === status ? "page" : undefined}
+              className={
+                choice === status
+                  ? "font-semibold text-graphite-900 underline underline-offset-4"
+                  : "font-medium text-copper-700 underline-offset-2 hover:underline"
+              }
+            >
+              {choice === "open"
+                ? "Open"
+                : choice === "closed"
+                  ? "Closed"
+                  : "All"}
+            </Link>
+          ))}
+        </nav>
+      </div>
+      <p className="mb-4 max-w-3xl text-sm text-graphite-700">
+        An alert opens when an item&apos;s available stock (on hand less
+        reserved) falls below its reorder point, and closes by itself when it is
+        back at or above it. Buyers get an e-mail for each new alert, or a daily
+        digest, as chosen on their account page.
+      </p>
+      {canBuy ? (
+        <section
+          aria-labelledby="purchase-requests"
+          className="mb-6 panel"
+        >
+          <h2 id="purchase-requests" className="mb-2 text-lg font-semibold">
+            Draft purchase requests
+          </h2>
+          {requests.length === 0 ? (
+            <p className="text-sm text-graphite-700">
+              No supplier quotes an item with an open alert.
+            </p>
+          ) : (
+            <ul className="space-y-1 text-sm">
+              {requests.map((request) => (
+                <li key={request.supplier}>
+                  <a
+                    href={`/alerts/purchase-request.csv?supplier=${encodeURIComponent(request.supplier)}`}
+                    className="font-medium text-copper-700 underline-offset-2 hover:underline"
+                    download
+                  >
+                    {request.supplier}
+                  </a>{" "}
+                  <span className="tabular-nums text-graphite-500">
+                    · {request.items} item{request.items === 1 ? "" : "s"} (CSV)
+                  </span>
+                </li>
+              ))}
+            </ul>
+          )}
+        </section>
+      ) : null}
+      <DataTable
+        caption={`${total} ${status === "all" ? "" : `${status} `}alert${total === 1 ? "" : "s"}, newest first`}
+        columns={columns}
+        rows={alerts}
+        page={page}
+        pageCount={pageCount}
+        pageHref={(next) => `?status=${status}&page=${next}`}
+        emptyText={
+          status === "open"
+            ? "No item is below its reorder point."
+            : "No alerts here."
+        }
+      />
+    </div>
+  );
+}

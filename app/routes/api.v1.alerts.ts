@@ -1,0 +1,28 @@
+import { z } from "zod";
+import type { Route } from "./+types/api.v1.alerts";
+import { listAlerts } from "~/alerts/stock-alerts.server";
+import { requireUser } from "~/auth/guard.server";
+import { readSearchParams } from "~/lib/api.server";
+
+const query = z.object({
+  status: z
+    .enum(["open", "closed", "all"], {
+      error: "The status is open, closed or all.",
+    })
+    .default("open"),
+  page: z.coerce
+    .number()
+    .int()
+    .min(1, "The page is a whole number from 1.")
+    .default(1),
+  perPage: z.coerce.number().int().min(1).max(200).default(50),
+});
+
+/** GET /api/v1/alerts?status=open|closed|all → [{ sku, status, availableAtOpen, …, told }], paged (X-Total-Count). */
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireUser(request);
+  const { total, alerts } = await listAlerts(readSearchParams(request, query));
+  return Response.json(alerts, {
+    headers: { "X-Total-Count": String(total) },
+  });
+}
