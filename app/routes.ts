@@ -35,6 +35,7 @@ export default [
         "routes/design-bom-print.tsx",
       ),
     ]),
+    route("insight", "routes/insight.tsx"),
     route("alerts", "routes/alerts.tsx"),
     route("alerts/purchase-request.csv", "routes/alerts-purchase-request.ts"),
     ...prefix("build-orders", [
@@ -92,6 +93,8 @@ export default [
       "routes/api.v1.design-costing.ts",
     ),
     route("alerts", "routes/api.v1.alerts.ts"),
+    route("insight/designs", "routes/api.v1.insight-designs.ts"),
+    route("insight/stock-value", "routes/api.v1.insight-stock-value.ts"),
     route("build-orders", "routes/api.v1.build-orders.ts"),
     route("build-orders/:orderId", "routes/api.v1.build-order.ts"),
     route("build-orders/:orderId/:step", "routes/api.v1.build-order-step.ts"),

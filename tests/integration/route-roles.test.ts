@@ -12,6 +12,7 @@ import { baseUrl, signIn } from "../support/app-client";
 
 import { buildOrderRouteRows } from "./route-roles.build-orders";
 import { designRouteRows } from "./route-roles.designs";
+import { insightRouteRows } from "./route-roles.insight";
 import type { RouteRoleRow as Row, Who } from "../support/route-role-row";
 
 const everyone: Who[] = ["anonymous", ...roles];
@@ -23,6 +24,7 @@ const adminOnlyApi = { anonymous: 401, admin: 200, signedIn: 403 };
 const table: Row[] = [
   ...designRouteRows,
   ...buildOrderRouteRows,
+  ...insightRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",

@@ -1,0 +1,9 @@
+import { data } from "react-router";
+import type { Route } from "./+types/api.v1.insight-stock-value";
+import { requireUser } from "~/auth/guard.server";
+
+// Placeholder while the route is being built (issue #7).
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireUser(request);
+  throw data({ message: "Not built yet." }, { status: 404 });
+}
