@@ -1,4 +1,103 @@
 /** Route × role rows of the design pages and API (see route-roles.test.ts). */
 import type { RouteRoleRow } from "../support/route-role-row";
 
-export const designRouteRows: RouteRoleRow[] = [];
+/**
+ * The table runs against the demo data, which has no design: the routes of one design are
+ * asked for a design that does not exist. Signed-in readers get 404 (after the role check:
+ * anonymous callers are sent to sign in, or get 401 from the API); an empty POST from a
+ * builder is refused as bad input (400) before any design is looked up. The pages with a
+ * real design, per role, are in design-pages.test.ts.
+ */
+const missing = "/designs/999999/revisions/1";
+const builders = { builder: 400, admin: 400, signedIn: 403 };
+
+export const designRouteRows: RouteRoleRow[] = [
+  {
+    file: "routes/designs.tsx",
+    method: "GET",
+    path: "/designs",
+    expect: { anonymous: 302, signedIn: 200 },
+  },
+  // An empty new design: field messages for builders, nothing written.
+  {
+    file: "routes/designs.tsx",
+    method: "POST",
+    path: "/designs",
+    expect: { anonymous: 302, ...builders },
+  },
+  {
+    file: "routes/design-revision.tsx",
+    method: "GET",
+    path: missing,
+    expect: { anonymous: 302, signedIn: 404 },
+  },
+  // No intent: refused before the revision is looked up.
+  {
+    file: "routes/design-revision.tsx",
+    method: "POST",
+    path: missing,
+    expect: { anonymous: 302, ...builders },
+  },
+  {
+    file: "routes/design-bom-export.ts",
+    method: "GET",
+    path: `${missing}/bom.csv`,
+    expect: { anonymous: 302, signedIn: 404 },
+  },
+  {
+    file: "routes/design-bom-print.tsx",
+    method: "GET",
+    path: `${missing}/print`,
+    expect: { anonymous: 302, signedIn: 404 },
+  },
+
+  // The API.
+  {
+    file: "routes/api.v1.designs.ts",
+    method: "GET",
+    path: "/api/v1/designs",
+    expect: { anonymous: 401, signedIn: 200 },
+  },
+  {
+    file: "routes/api.v1.designs.ts",
+    method: "POST",
+    path: "/api/v1/designs",
+    expect: { anonymous: 401, builder: 400, admin: 400, signedIn: 403 },
+  },
+  {
+    file: "routes/api.v1.design.ts",
+    method: "GET",
+    path: "/api/v1/designs/999999",
+    expect: { anonymous: 401, signedIn: 404 },
+  },
+  {
+    file: "routes/api.v1.design-revisions.ts",
+    method: "POST",
+    path: "/api/v1/designs/999999/revisions",
+    expect: { anonymous: 401, builder: 404, admin: 404, signedIn: 403 },
+  },
+  {
+    file: "routes/api.v1.design-revision.ts",
+    method: "GET",
+    path: "/api/v1/designs/999999/revisions/1",
+    expect: { anonymous: 401, signedIn: 404 },
+  },
+  {
+    file: "routes/api.v1.design-revision.ts",
+    method: "PUT",
+    path: "/api/v1/designs/999999/revisions/1",
+    expect: { anonymous: 401, builder: 400, admin: 400, signedIn: 403 },
+  },
+  {
+    file: "routes/api.v1.design-revision-release.ts",
+    method: "POST",
+    path: "/api/v1/designs/999999/revisions/1/release",
+    expect: { anonymous: 401, builder: 404, admin: 404, signedIn: 403 },
+  },
+  {
+    file: "routes/api.v1.design-costing.ts",
+    method: "GET",
+    path: "/api/v1/designs/999999/revisions/1/costing",
+    expect: { anonymous: 401, signedIn: 404 },
+  },
+];

@@ -1,0 +1,331 @@
+import { createColumnHelper } from "@tanstack/react-table";
+import { useMemo } from "react";
+import { Form } from "react-router";
+import type {
+  DesignPageData,
+  DesignPageLine,
+} from "~/designs/design-page.server";
+import { costBasisLabels, type CostQuery } from "~/designs/design-page";
+import { formatQuantity } from "~/lib/format";
+import { formatMass } from "~/reference/quantity-display";
+import { DataTable } from "./data-table";
+import { DesignCostSplit } from "./design-cost-split";
+
+type Costing = DesignPageData["costing"];
+type CostLine = Costing["lines"][number];
+
+const kindNames = { coil: "Coil", magnet: "Magnet", part: "Part" } as const;
+
+/** A line's quantity per motor with its unit: wire as the mass drawn, scrap included. */
+export function perMotorText(line: CostLine): string {
+  if (line.unit === "kg" && line.kind === "coil")
+    return `${formatMass(line.perMotorQuantity)} drawn${line.massBasis === "bare" ? " (bare conductor)" : ""}`;
+  return formatQuantity(
+    line.perMotorQuantity,
+    line.unit,
+    Number.isInteger(line.perMotorQuantity) ? 0 : 3,
+  );
+}
+
+/** Money in the company currency, to the cent (the costing carries 0.0001). */
+export function money(value: number | null, currency: string, per?: string) {
+  if (value === null) return "—";
+  return formatQuantity(value, per ? `${currency}/${per}` : currency, 2);
+}
+
+interface PriceRow {
+  line: CostLine;
+  position: number;
+  itemName: string;
+}
+const priceColumn = createColumnHelper<PriceRow>();
+
+/** Every line's price and where it comes from. */
+export function DesignPriceTable({
+  costing,
+  lines,
+}: {
+  costing: Costing;
+  lines: DesignPageLine[];
+}) {
+  const currency = costing.currency;
+  const rows: PriceRow[] = costing.lines.map((line, index) => ({
+    line,
+    position: index + 1,
+    itemName: lines[index]?.itemName ?? "",
+  }));
+  const columns = useMemo(
+    () => [
+      priceColumn.accessor("position", {
+        header: "Line",
+        meta: { numeric: true },
+      }),
+      priceColumn.display({
+        id: "item",
+        header: "Item",
+        cell: ({ row }) => (
+          <div className="min-w-36">
+            <div className="font-medium">{row.original.itemName}</div>
+            <div className="text-xs text-graphite-500">
+              {kindNames[row.original.line.kind as keyof typeof kindNames] ??
+                row.original.line.kind}{" "}
+              · {row.original.line.sku}
+            </div>
+          </div>
+        ),
+      }),
+      priceColumn.display({
+        id: "perMotor",
+        header: "Per motor",
+        meta: { numeric: true },
+        cell: ({ row }) => perMotorText(row.original.line),
+      }),
+      priceColumn.display({
+        id: "unitPrice",
+        header: "Unit price",
+        meta: { numeric: true },
+        cell: ({ row }) =>
+          money(row.original.line.unitPrice, currency, row.original.line.unit),
+      }),
+      priceColumn.display({
+        id: "cost",
+        header: "Cost per motor",
+        meta: { numeric: true },
+        cell: ({ row }) =>
+          row.original.line.cost === null ? (
+            <span className="font-medium text-caution">no price</span>
+          ) : (
+            money(row.original.line.cost, currency)
+          ),
+      }),
+      priceColumn.display({
+        id: "source",
+        header: "Price source",
+        cell: ({ row }) => (
+          <span className="block min-w-56 text-xs text-graphite-700">
+            {row.original.line.priceSource ??
+              "No price: import a supplier price list, or receive stock with a unit cost."}
+          </span>
+        ),
+      }),
+    ],
+    [currency],
+  );
+  return (
+    <DataTable
+      caption="Each line's price per motor and where the price comes from"
+      columns={columns}
+      rows={rows}
+      emptyText="No lines to price yet."
+    />
+  );
+}
+
+function Figure({
+  label,
+  value,
+  wide = false,
+  children,
+}: {
+  label: string;
+  value: React.ReactNode;
+  /** Across the whole row (a figure with a longer explanation). */
+  wide?: boolean;
+  children?: React.ReactNode;
+}) {
+  return (
+    <div
+      role="group"
+      aria-label={label}
+      className={`rounded-md border border-rule bg-white/60 px-4 py-3 ${wide ? "sm:col-span-2 xl:col-span-4" : ""}`}
+    >
+      <dt className="text-xs font-medium uppercase tracking-wide text-graphite-500">
+        {label}
+      </dt>
+      <dd className="mt-1 text-xl font-semibold tabular-nums">{value}</dd>
+      {children ? (
+        <dd className="mt-1 text-xs text-graphite-500">{children}</dd>
+      ) : null}
+    </div>
+  );
+}
+
+/** The costing's headline figures: cost per motor and per N·m, copper loss and the torque estimate. */
+export function DesignCostFigures({
+  costing,
+  ratedTorqueNm,
+  torqueBasis,
+}: {
+  costing: Costing;
+  ratedTorqueNm: number | null;
+  torqueBasis: string;
+}) {
+  const currency = costing.currency;
+  const estimate = costing.torqueEstimate;
+  const unpriced = costing.unpriced.length;
+  return (
+    <dl className="grid items-start gap-3 sm:grid-cols-2 xl:grid-cols-4">
+      <Figure
+        label="Cost per motor"
+        value={money(costing.costPerMotor, currency)}
+      >
+        {costing.complete ? (
+          `${formatQuantity(costing.quantity, costing.quantity === 1 ? "motor" : "motors")} · ${costBasisLabels[costing.basis].toLowerCase()}`
+        ) : (
+          <span className="font-medium text-caution">
+            {`Incomplete: ${formatQuantity(unpriced, unpriced === 1 ? "line" : "lines")} without a price ${unpriced === 1 ? "is" : "are"} left out.`}
+          </span>
+        )}
+      </Figure>
+      <Figure
+        label="Cost per N·m"
+        value={money(costing.costPerNm, currency, "N·m")}
+      >
+        {ratedTorqueNm === null
+          ? "Give the rated torque to see it."
+          : `rated torque ${formatQuantity(ratedTorqueNm, "N·m", 3)}, ${torqueBasis}`}
+      </Figure>
+      <Figure
+        label="Copper loss"
+        value={formatQuantity(costing.copperLossW, "W", 2)}
+      >
+        every coil at the rated current, hot
+      </Figure>
+      <Figure
+        label="Copper loss per N·m"
+        value={
+          costing.copperLossPerNm === null
+            ? "—"
+            : formatQuantity(costing.copperLossPerNm, "W/(N·m)", 2)
+        }
+      >
+        {ratedTorqueNm === null
+          ? "Give the rated torque to see it."
+          : "copper loss ÷ rated torque"}
+      </Figure>
+      <Figure
+        wide
+        label="Torque, first-order estimate"
+        value={
+          "torqueNm" in estimate
+            ? formatQuantity(estimate.torqueNm, "N·m", 3)
+            : "—"
+        }
+      >
+        {"torqueNm" in estimate ? (
+          <>
+            {estimate.label} k = {formatQuantity(estimate.poleCoverage, "", 2)}
+            {estimate.poleCoverageSource === "given"
+              ? " (given)"
+              : ` (${estimate.poleCoverageSource})`}
+            , B_g = {formatQuantity(estimate.fluxDensityT, "T", 3)}, active
+            conductor {formatQuantity(estimate.forceLengthM, "m", 3)}.
+          </>
+        ) : (
+          <>
+            {estimate.label} {estimate.missing}
+          </>
+        )}
+      </Figure>
+    </dl>
+  );
+}
+
+/** The build quantity and price basis of the costing (a GET form: the address keeps them). */
+export function CostQueryForm({ query }: { query: CostQuery }) {
+  return (
+    <Form
+      method="get"
+      preventScrollReset
+      replace
+      className="flex flex-wrap items-end gap-4 print:hidden"
+      aria-label="Build quantity and price basis"
+    >
+      <div>
+        <label htmlFor="cost-quantity" className="field-label">
+          Motors in the build
+        </label>
+        <input
+          id="cost-quantity"
+          name="quantity"
+          inputMode="numeric"
+          defaultValue={query.typed.quantity || String(query.quantity)}
+          aria-invalid={query.errors.quantity ? true : undefined}
+          aria-describedby={
+            query.errors.quantity ? "cost-quantity-error" : undefined
+          }
+          className="field-input w-32 text-right tabular-nums"
+        />
+        {query.errors.quantity ? (
+          <p id="cost-quantity-error" className="field-error">
+            {query.errors.quantity} Showing 1 motor.
+          </p>
+        ) : null}
+      </div>
+      <div>
+        <label htmlFor="cost-basis" className="field-label">
+          Price lines by
+        </label>
+        <select
+          id="cost-basis"
+          name="basis"
+          defaultValue={query.basis}
+          aria-invalid={query.errors.basis ? true : undefined}
+          className="field-input"
+        >
+          {Object.entries(costBasisLabels).map(([basis, label]) => (
+            <option key={basis} value={basis}>
+              {label}
+            </option>
+          ))}
+        </select>
+        {query.errors.basis ? (
+          <p className="field-error">{query.errors.basis}</p>
+        ) : null}
+      </div>
+      <button type="submit" className="button-quiet">
+        Update costs
+      </button>
+    </Form>
+  );
+}
+
+/** Cost per motor: the build quantity form, the headline figures, the split and every price. */
+export function DesignCostPanel({
+  costing,
+  query,
+  lines,
+  ratedTorqueNm,
+  torqueBasis,
+}: {
+  costing: Costing;
+  query: CostQuery;
+  lines: DesignPageLine[];
+  ratedTorqueNm: number | null;
+  torqueBasis: string;
+}) {
+  return (
+    <section aria-labelledby="cost-heading" className="panel space-y-5">
+      <div className="flex flex-wrap items-baseline justify-between gap-3">
+        <h2 id="cost-heading" className="text-lg font-semibold">
+          Cost per motor
+        </h2>
+        <p className="text-sm text-graphite-500">
+          In {costing.currency}, rounded to the cent for display; prices as of
+          today (UTC).
+        </p>
+      </div>
+      <CostQueryForm query={query} />
+      <DesignCostFigures
+        costing={costing}
+        ratedTorqueNm={ratedTorqueNm}
+        torqueBasis={torqueBasis}
+      />
+      <DesignCostSplit split={costing.split} currency={costing.currency} />
+      <div className="space-y-2">
+        <h3 className="text-sm font-semibold">Prices of the lines</h3>
+        <DesignPriceTable costing={costing} lines={lines} />
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,225 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { useState } from "react";
+import { useFetcher } from "react-router";
+import type { DesignPageData } from "~/designs/design-page.server";
+import { thermalClassName } from "~/designs/design-checks";
+import {
+  insulationClasses,
+  revisionFieldsSchema,
+} from "~/designs/design-schemas";
+import {
+  DEFAULT_POLE_COVERAGE,
+  DEFAULT_POLE_COVERAGE_SOURCE,
+} from "~/designs/torque-estimate";
+import { formatQuantity } from "~/lib/format";
+import type { DesignActionAnswer } from "./design-action-answer";
+import { QuantityField } from "./quantity-field";
+import { SelectField } from "./select-field";
+import { TextAreaField } from "./text-area-field";
+import { FormMessages } from "./text-field";
+
+type Revision = DesignPageData["revision"];
+
+/** "155 °C (F)": an IEC 60085 class with its letter when it has one. */
+export function insulationClassLabel(classC: number): string {
+  return thermalClassName(classC).replace(/^(\d+)/, "$1\u00a0°C");
+}
+
+const text = (value: number | null) => (value === null ? "" : String(value));
+
+/** The revision's motor figures, editable while it is a draft; each save goes through a fetcher. */
+export function DesignFieldsForm({ revision }: { revision: Revision }) {
+  const fetcher = useFetcher<DesignActionAnswer>();
+  // A change after a save is not saved yet: the "Saved" note goes until the next save.
+  const [changedSinceSave, setChangedSinceSave] = useState(false);
+  const [form, fields] = useForm({
+    id: `design-fields-${revision.designId}-${revision.revision}`,
+    lastResult: fetcher.data?.result,
+    defaultValue: {
+      poles: String(revision.poles),
+      slots: String(revision.slots),
+      ratedCurrentA: String(revision.ratedCurrentA),
+      ratedTorqueNm: text(revision.ratedTorqueNm),
+      torqueBasis: revision.torqueBasis,
+      insulationClassC: String(revision.insulationClassC),
+      slotAreaMm2: text(revision.slotAreaMm2),
+      coilSidesPerSlot: String(revision.coilSidesPerSlot),
+      airGapRadiusMm: text(revision.airGapRadiusMm),
+      airGapFluxDensityT: text(revision.airGapFluxDensityT),
+      poleCoverage: text(revision.poleCoverage),
+      notes: revision.notes,
+    },
+    constraint: getZodConstraint(revisionFieldsSchema),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+    onValidate: ({ formData }) =>
+      parseWithZod(formData, { schema: revisionFieldsSchema }),
+    onSubmit: () => setChangedSinceSave(false),
+  });
+  const busy = fetcher.state !== "idle";
+  // The schema reads numbers from text (z.preprocess), so Conform types these fields as unknown;
+  // the inputs only need each field's name, id and errors.
+  const number = fields as unknown as Record<
+    keyof typeof fields,
+    Parameters<typeof QuantityField>[0]["field"]
+  >;
+  const saved = !busy && fetcher.data?.ok === true && !changedSinceSave;
+
+  return (
+    <section aria-labelledby="motor-heading" className="panel">
+      <h2 id="motor-heading" className="mb-3 text-lg font-semibold">
+        Motor
+      </h2>
+      <fetcher.Form
+        method="post"
+        {...getFormProps(form)}
+        className="space-y-4"
+        onChange={() => setChangedSinceSave(true)}
+      >
+        <input type="hidden" name="intent" value="fields" />
+        <FormMessages id={form.errorId} errors={form.errors} />
+        <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
+          <QuantityField field={number.poles} label="Poles" />
+          <QuantityField field={number.slots} label="Slots" />
+          <QuantityField
+            field={number.ratedCurrentA}
+            label="Rated current"
+            unit="A"
+            hint="Through each coil at the rated point"
+          />
+          <SelectField
+            field={fields.insulationClassC}
+            label="Insulation class"
+            hint="IEC 60085; every wire must be at least this class"
+          >
+            {insulationClasses.map((classC) => (
+              <option key={classC} value={classC}>
+                {insulationClassLabel(classC)}
+              </option>
+            ))}
+          </SelectField>
+          <QuantityField
+            field={number.ratedTorqueNm}
+            label="Rated torque"
+            unit="N·m"
+            hint="For cost per N·m; empty when not known"
+          />
+          <SelectField field={fields.torqueBasis} label="Rated torque is">
+            <option value="measured">measured (test data)</option>
+            <option value="estimated">estimated</option>
+          </SelectField>
+          <QuantityField
+            field={number.slotAreaMm2}
+            label="Slot area"
+            unit="mm²"
+            hint="Inside the liner; gives each coil's fill factor"
+          />
+          <SelectField
+            field={fields.coilSidesPerSlot}
+            label="Coil sides per slot"
+          >
+            <option value="1">1 (single layer)</option>
+            <option value="2">2 (double layer)</option>
+          </SelectField>
+          <QuantityField
+            field={number.airGapRadiusMm}
+            label="Air-gap radius"
+            unit="mm"
+            hint="For the first-order torque estimate"
+          />
+          <QuantityField
+            field={number.airGapFluxDensityT}
+            label="Air-gap flux density"
+            unit="T"
+            hint="Typed, or from the magnet estimator"
+          />
+          <QuantityField
+            field={number.poleCoverage}
+            label="Conductors under the poles, k"
+            hint={`Empty for ${DEFAULT_POLE_COVERAGE}: ${DEFAULT_POLE_COVERAGE_SOURCE}`}
+          />
+        </div>
+        <TextAreaField field={fields.notes} label="Notes" rows={2} />
+        <div className="flex flex-wrap items-center gap-3">
+          <button type="submit" className="button-quiet" disabled={busy}>
+            {busy ? "Saving…" : "Save motor figures"}
+          </button>
+          <p role="status" className="text-sm text-ok">
+            {saved ? "Saved. The figures below are up to date." : ""}
+          </p>
+        </div>
+      </fetcher.Form>
+    </section>
+  );
+}
+
+function Term({
+  label,
+  children,
+}: {
+  label: string;
+  children: React.ReactNode;
+}) {
+  return (
+    <div className="border-b border-graphite-100 py-1.5">
+      <dt className="text-xs uppercase tracking-wide text-graphite-500">
+        {label}
+      </dt>
+      <dd className="tabular-nums">{children}</dd>
+    </div>
+  );
+}
+
+const optional = (value: number | null, unit: string, decimals: number) =>
+  value === null ? "not given" : formatQuantity(value, unit, decimals);
+
+/** The revision's motor figures as text, for a released revision and for readers. */
+export function DesignFieldsSummary({ revision }: { revision: Revision }) {
+  return (
+    <section aria-labelledby="motor-heading" className="panel">
+      <h2 id="motor-heading" className="mb-2 text-lg font-semibold">
+        Motor
+      </h2>
+      <dl className="grid grid-cols-2 gap-x-6 lg:grid-cols-4">
+        <Term label="Poles">{formatQuantity(revision.poles, "")}</Term>
+        <Term label="Slots">{formatQuantity(revision.slots, "")}</Term>
+        <Term label="Rated current">
+          {formatQuantity(revision.ratedCurrentA, "A", 2)}
+        </Term>
+        <Term label="Insulation class">
+          {insulationClassLabel(revision.insulationClassC)}
+        </Term>
+        <Term label="Rated torque">
+          {revision.ratedTorqueNm === null
+            ? "not given"
+            : `${formatQuantity(revision.ratedTorqueNm, "N·m", 3)} (${revision.torqueBasis})`}
+        </Term>
+        <Term label="Slot area">
+          {optional(revision.slotAreaMm2, "mm²", 1)}
+        </Term>
+        <Term label="Coil sides per slot">
+          {revision.coilSidesPerSlot === 1
+            ? "1 (single layer)"
+            : "2 (double layer)"}
+        </Term>
+        <Term label="Air-gap radius">
+          {optional(revision.airGapRadiusMm, "mm", 1)}
+        </Term>
+        <Term label="Air-gap flux density">
+          {optional(revision.airGapFluxDensityT, "T", 3)}
+        </Term>
+        <Term label="Conductors under the poles, k">
+          {revision.poleCoverage === null
+            ? `${DEFAULT_POLE_COVERAGE} (default)`
+            : formatQuantity(revision.poleCoverage, "", 3)}
+        </Term>
+      </dl>
+      {revision.notes ? (
+        <p className="mt-3 whitespace-pre-line text-sm text-graphite-700">
+          {revision.notes}
+        </p>
+      ) : null}
+    </section>
+  );
+}

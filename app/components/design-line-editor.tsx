@@ -1,0 +1,279 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { useEffect, useState } from "react";
+import { useFetcher } from "react-router";
+import type { DesignPageLine } from "~/designs/design-page.server";
+import {
+  coilLineSchema,
+  magnetLineSchema,
+  partLineSchema,
+} from "~/designs/design-schemas";
+import type { DesignActionAnswer } from "./design-action-answer";
+import { CoilDrawing } from "./coil-drawing";
+import { DesignItemPicker } from "./design-item-picker";
+import { EndTurnHelper } from "./end-turn-helper";
+import { QuantityField } from "./quantity-field";
+import { FormMessages } from "./text-field";
+
+export type LineKind = "coil" | "magnet" | "part";
+
+const schemas = {
+  coil: coilLineSchema,
+  magnet: magnetLineSchema,
+  part: partLineSchema,
+} as const;
+
+const kindNames: Record<LineKind, string> = {
+  coil: "coil line",
+  magnet: "magnet line",
+  part: "part line",
+};
+
+/** A typed number as the drawing takes it; NaN (no drawing) for anything else. */
+function typedNumber(value: unknown): number {
+  return typeof value === "string" && value.trim() !== ""
+    ? Number(value.trim().replace(",", "."))
+    : Number.NaN;
+}
+
+/** What the fields start with: the line's values, or a new line's few sensible defaults. */
+function startingValues(kind: LineKind, line: DesignPageLine | null) {
+  const values: Record<string, string> = { kind };
+  if (line) {
+    for (const [name, value] of Object.entries(line.input))
+      if (value !== null && value !== undefined) values[name] = String(value);
+    return values;
+  }
+  if (kind === "coil") {
+    values.strandsInHand = "1";
+    // Common practice (engineering brief): 2–5 % in production.
+    values.scrapPercent = "3";
+  }
+  return values;
+}
+
+/**
+ * Adds or changes one line of a draft revision. Each save goes to the page's
+ * action through a fetcher: the page's figures update without a reload, and
+ * the fields stay as typed. A new line, once added, stays open for changes.
+ */
+export function DesignLineEditor({
+  formId,
+  kind,
+  line,
+  figures,
+  onAdded,
+  onClose,
+}: {
+  /** Stable for one editing session, so the typed values survive each save. */
+  formId: string;
+  kind: LineKind;
+  /** The line as stored now (its id changes with every save of the list); null for a new line. */
+  line: DesignPageLine | null;
+  /** The line's figures as last saved, shown beside the fields. */
+  figures?: React.ReactNode;
+  onAdded: (position: number) => void;
+  onClose: () => void;
+}) {
+  const fetcher = useFetcher<DesignActionAnswer>();
+  const schema = schemas[kind];
+  // A change after a save is not saved yet: the "Saved" note goes until the next save.
+  const [changedSinceSave, setChangedSinceSave] = useState(false);
+  const [form, fields] = useForm({
+    id: formId,
+    lastResult: fetcher.data?.result,
+    defaultValue: startingValues(kind, line),
+    constraint: getZodConstraint(schema),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+    onValidate: ({ formData }) => parseWithZod(formData, { schema }),
+    onSubmit: () => setChangedSinceSave(false),
+  });
+  const busy = fetcher.state !== "idle";
+  const answer = fetcher.state === "idle" ? fetcher.data : undefined;
+
+  // A new line, once added, is edited in place from then on.
+  useEffect(() => {
+    if (line === null && answer?.ok && answer.position)
+      onAdded(answer.position);
+  }, [answer, line, onAdded]);
+
+  const title = line
+    ? `Change ${kindNames[kind]} ${line.position}`
+    : `New ${kindNames[kind]}`;
+  const headingId = `${formId}-heading`;
+  // Conform types each field by the union of the three schemas; the inputs only need name, id and errors.
+  const field = fields as unknown as Record<
+    string,
+    Parameters<typeof QuantityField>[0]["field"]
+  >;
+  const skuField = fields.sku as unknown as Parameters<
+    typeof DesignItemPicker
+  >[0]["field"];
+
+  return (
+    <section
+      aria-labelledby={headingId}
+      className="panel border-copper-300 bg-copper-50/40"
+    >
+      <div className="mb-3 flex flex-wrap items-baseline justify-between gap-3">
+        <h3 id={headingId} className="text-base font-semibold">
+          {title}
+        </h3>
+        <button type="button" className="button-quiet" onClick={onClose}>
+          Close
+        </button>
+      </div>
+      <div className="grid gap-5 xl:grid-cols-[1fr_18rem]">
+        <fetcher.Form
+          method="post"
+          {...getFormProps(form)}
+          aria-labelledby={headingId}
+          className="space-y-4"
+          onChange={() => setChangedSinceSave(true)}
+        >
+          <input type="hidden" name="intent" value="save-line" />
+          <input type="hidden" name="kind" value={kind} />
+          {line ? <input type="hidden" name="lineId" value={line.id} /> : null}
+          <FormMessages id={form.errorId} errors={form.errors} />
+          <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
+            <div className="sm:col-span-2">
+              <DesignItemPicker
+                field={skuField}
+                label={
+                  kind === "coil"
+                    ? "Wire"
+                    : kind === "magnet"
+                      ? "Magnet"
+                      : "Item"
+                }
+                kind={
+                  kind === "coil"
+                    ? "wire"
+                    : kind === "magnet"
+                      ? "magnet"
+                      : undefined
+                }
+                hint={
+                  kind === "coil"
+                    ? "Only magnet-wire items: type part of the name or SKU."
+                    : kind === "magnet"
+                      ? "Only magnet items: type part of the grade, name or SKU."
+                      : "Any catalogue item: bearing, shaft, lamination stack …"
+                }
+                knownItem={
+                  line
+                    ? { sku: line.input.sku, name: line.itemName }
+                    : undefined
+                }
+              />
+            </div>
+            {kind === "coil" ? (
+              <>
+                <QuantityField field={field.turns!} label="Turns" />
+                <QuantityField
+                  field={field.strandsInHand!}
+                  label="Strands in hand"
+                />
+                <QuantityField
+                  field={field.activeLengthMm!}
+                  label="Active length"
+                  unit="mm"
+                  hint="Each coil side in the field"
+                />
+                <QuantityField
+                  field={field.endTurnLengthMm!}
+                  label="End-turn length"
+                  unit="mm"
+                  hint="Each of the two ends; or estimate it below"
+                />
+                <QuantityField
+                  field={field.leadLengthMm!}
+                  label="Lead length"
+                  unit="mm"
+                  hint="Each of the two leads"
+                />
+                <QuantityField
+                  field={field.coilsPerMotor!}
+                  label="Coils per motor"
+                />
+                <QuantityField
+                  field={field.scrapPercent!}
+                  label="Scrap"
+                  unit="%"
+                  hint="Drawn beyond the wound length; 2–5 % in production"
+                />
+                <QuantityField
+                  field={field.operatingTemperatureC!}
+                  label="Operating temperature"
+                  unit="°C"
+                  hint="Of the copper at the rated point"
+                  allowNegative
+                />
+              </>
+            ) : kind === "magnet" ? (
+              <>
+                <QuantityField
+                  field={field.piecesPerMotor!}
+                  label="Pieces per motor"
+                />
+                <QuantityField
+                  field={field.operatingTemperatureC!}
+                  label="Magnet temperature"
+                  unit="°C"
+                  hint="At the rated point; empty when not known (not checked)"
+                  allowNegative
+                />
+              </>
+            ) : (
+              <QuantityField
+                field={field.quantityPerMotor!}
+                label="Quantity per motor"
+                hint="In the item's unit (pcs, kg, m)"
+              />
+            )}
+          </div>
+          <div className="flex flex-wrap items-center gap-3">
+            <button type="submit" className="button-primary" disabled={busy}>
+              {busy ? "Saving…" : line ? "Save line" : "Add line"}
+            </button>
+            <p role="status" className="text-sm text-ok">
+              {answer?.ok && line && !changedSinceSave
+                ? "Saved: the figures are up to date."
+                : ""}
+            </p>
+          </div>
+        </fetcher.Form>
+        {figures || kind === "coil" ? (
+          <div className="space-y-3 text-sm">
+            {figures ? <div aria-live="polite">{figures}</div> : null}
+            {kind === "coil" ? (
+              <div className="rounded-md border border-rule bg-white/70 p-3">
+                <p className="text-xs font-semibold uppercase tracking-wide text-graphite-500">
+                  One coil to scale, as typed
+                </p>
+                <CoilDrawing
+                  activeLengthMm={typedNumber(field.activeLengthMm!.value)}
+                  endTurnLengthMm={typedNumber(field.endTurnLengthMm!.value)}
+                />
+              </div>
+            ) : null}
+          </div>
+        ) : null}
+      </div>
+      {kind === "coil" ? (
+        <div className="mt-4">
+          <EndTurnHelper
+            onUse={(lengthMm) => {
+              form.update({
+                name: field.endTurnLengthMm!.name,
+                value: String(lengthMm),
+              });
+              setChangedSinceSave(true);
+            }}
+          />
+        </div>
+      ) : null}
+    </section>
+  );
+}
