@@ -11,6 +11,7 @@ import {
   benchPureCoilEstimates,
   type Figure,
 } from "./coil-estimates.bench";
+import { benchDesignCosting } from "./design-costing.bench";
 import { benchPriceImport } from "./price-import.bench";
 import { seedBenchStock } from "./seed-bench-stock";
 import { benchStock } from "./stock.bench";
@@ -78,6 +79,17 @@ try {
     }),
   });
   const buyerCookie = buyer.headers.getSetCookie()[0]?.split(";")[0] ?? "";
+  if (runs("design")) {
+    console.log("[bench] costing a 60-line design for 500 motors…");
+    figures.push(
+      ...(await benchDesignCosting({
+        baseUrl: environment.baseUrl,
+        databaseUrl: environment.databaseUrl,
+        buyerCookie,
+        builderCookie: cookie,
+      })),
+    );
+  }
   if (runs("price-import")) {
     console.log("[bench] importing a 100,000-row price list…");
     figures.push(

@@ -9,7 +9,10 @@ import { db } from "~/db/client.server";
 import { items } from "~/db/schema";
 import { bestPrices } from "~/pricing/best-price";
 import { formatMoneyText, type MoneyAmount } from "~/pricing/money";
-import { loadItemPricing } from "~/purchasing/item-prices.server";
+import {
+  loadItemsPricing,
+  type ItemPricing,
+} from "~/purchasing/item-prices.server";
 import { companyCurrency } from "~/purchasing/suppliers.server";
 import { parseUnitCost, quantityToNumber } from "~/stock/decimal-amounts";
 import { coilLineFigures } from "./coil-line-figures";
@@ -55,14 +58,12 @@ function quantitiesPerItem(
  * every supplier's smallest break the item is priced at the smallest minimum
  * order (the buyer would have to buy that much), and the source says so.
  */
-async function bestPriceFor(
-  sku: string,
+function bestPriceFor(
+  pricing: ItemPricing,
   quantity: bigint,
   motors: number,
   date: string,
-): Promise<ItemUnitPrice | null> {
-  const pricing = await loadItemPricing(sku);
-  if (!pricing) return null;
+): ItemUnitPrice | null {
   const cheapestAt = (amount: bigint) =>
     bestPrices({
       itemId: String(pricing.itemId),
@@ -93,6 +94,26 @@ async function bestPriceFor(
     unitPrice: best.landedUnitPrice,
     source: `best price for ${quantityToNumber(quantity)} ${pricing.unit} (${motors} motors${note}): ${best.supplier} ${best.supplierSku}${adder}, import ${best.sourceLine.importId} line ${best.sourceLine.line}`,
   };
+}
+
+/** The best price of every needed item, all items' price lines read at once. */
+async function bestPricesFor(
+  needed: Map<number, { sku: string; quantity: bigint }>,
+  motors: number,
+  date: string,
+): Promise<Map<number, ItemUnitPrice>> {
+  const pricings = await loadItemsPricing(
+    [...needed.values()].map((entry) => entry.sku),
+  );
+  const prices = new Map<number, ItemUnitPrice>();
+  for (const [itemId, { sku, quantity }] of needed) {
+    const pricing = pricings.get(sku);
+    const price = pricing
+      ? bestPriceFor(pricing, quantity, motors, date)
+      : null;
+    if (price) prices.set(itemId, price);
+  }
+  return prices;
 }
 
 async function stockAveragePrices(
@@ -127,35 +148,18 @@ export async function costRevision(input: {
 }) {
   const { revision, lines } = input;
   const needed = quantitiesPerItem(lines, input.quantity);
-  const prices =
+  const [prices, currency] = await Promise.all([
     input.basis === "stock-average"
-      ? await stockAveragePrices([...needed.keys()])
-      : new Map(
-          (
-            await Promise.all(
-              [...needed].map(
-                async ([itemId, { sku, quantity }]) =>
-                  [
-                    itemId,
-                    await bestPriceFor(
-                      sku,
-                      quantity,
-                      input.quantity,
-                      input.date,
-                    ),
-                  ] as const,
-              ),
-            )
-          ).filter(
-            (entry): entry is [number, ItemUnitPrice] => entry[1] !== null,
-          ),
-        );
+      ? stockAveragePrices([...needed.keys()])
+      : bestPricesFor(needed, input.quantity, input.date),
+    companyCurrency(),
+  ]);
   const ratedTorqueNm = optionalNumber(revision.ratedTorqueNm);
   const ratedCurrentA = Number(revision.ratedCurrentA);
   const costing = costDesign({
     lines,
     quantity: input.quantity,
-    currency: await companyCurrency(),
+    currency,
     prices,
     ratedTorqueNm,
   });

@@ -3,7 +3,7 @@
  * them: the revision's figures and its lines (coil, magnet, part) joined to
  * their catalogue items.
  */
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import {
   designLines,
@@ -63,47 +63,43 @@ const optionalNumber = (value: string | null): number | null =>
 /** The lines of a revision in their order, as the design calculations take them. */
 export async function loadRevisionLines(
   revisionId: number,
+  /** The revision's slot figures when the caller has them (saves a query). */
+  known?: Pick<RevisionRow, "slotAreaMm2" | "coilSidesPerSlot">,
 ): Promise<StoredDesignLine[]> {
-  const [revision] = await db
-    .select({
-      slotAreaMm2: designRevisions.slotAreaMm2,
-      coilSidesPerSlot: designRevisions.coilSidesPerSlot,
-    })
-    .from(designRevisions)
-    .where(eq(designRevisions.id, revisionId))
-    .limit(1);
+  const [revision] = known
+    ? [known]
+    : await db
+        .select({
+          slotAreaMm2: designRevisions.slotAreaMm2,
+          coilSidesPerSlot: designRevisions.coilSidesPerSlot,
+        })
+        .from(designRevisions)
+        .where(eq(designRevisions.id, revisionId))
+        .limit(1);
   if (!revision) return [];
-  const rows = await db
-    .select({
-      line: designLines,
-      item: {
-        sku: items.sku,
-        name: items.name,
-        unit: items.unit,
-      },
-      wire: wireItems,
-      magnet: magnetItems,
-    })
-    .from(designLines)
-    .innerJoin(items, eq(items.id, designLines.itemId))
-    .leftJoin(wireItems, eq(wireItems.itemId, designLines.itemId))
-    .leftJoin(magnetItems, eq(magnetItems.itemId, designLines.itemId))
-    .where(eq(designLines.revisionId, revisionId))
-    .orderBy(asc(designLines.position));
-
-  const gradeKeys = [
-    ...new Set(
-      rows.flatMap((row) => (row.magnet ? [row.magnet.gradeKey] : [])),
-    ),
-  ];
+  // The lines and every magnet grade at once (a few dozen grades): two queries side by side.
+  const [rows, gradeRows] = await Promise.all([
+    db
+      .select({
+        line: designLines,
+        item: {
+          sku: items.sku,
+          name: items.name,
+          unit: items.unit,
+        },
+        wire: wireItems,
+        magnet: magnetItems,
+      })
+      .from(designLines)
+      .innerJoin(items, eq(items.id, designLines.itemId))
+      .leftJoin(wireItems, eq(wireItems.itemId, designLines.itemId))
+      .leftJoin(magnetItems, eq(magnetItems.itemId, designLines.itemId))
+      .where(eq(designLines.revisionId, revisionId))
+      .orderBy(asc(designLines.position)),
+    db.select().from(magnetGrades),
+  ]);
   const grades = new Map(
-    (gradeKeys.length === 0
-      ? []
-      : await db
-          .select()
-          .from(magnetGrades)
-          .where(inArray(magnetGrades.key, gradeKeys))
-    ).map((row) => [row.key, magnetGradeFromRow(row)]),
+    gradeRows.map((row) => [row.key, magnetGradeFromRow(row)]),
   );
   const slotArea = optionalNumber(revision.slotAreaMm2);
 

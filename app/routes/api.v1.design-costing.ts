@@ -48,7 +48,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     Response.json(
       await costRevision({
         revision: found.revision,
-        lines: await loadRevisionLines(found.revision.id),
+        lines: await loadRevisionLines(found.revision.id, found.revision),
         quantity: query.quantity,
         basis: query.basis,
         date: query.date ?? new Date().toISOString().slice(0, 10),
