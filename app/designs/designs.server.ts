@@ -243,11 +243,36 @@ function lineColumns(line: DesignLineInput) {
 export async function updateDraftRevision(
   designId: number,
   revision: number,
-  change: Partial<RevisionFields> & { lines?: DesignLineInput[] },
+  change: Partial<RevisionFields> & {
+    lines?: DesignLineInput[];
+    /** The line ids the caller read: 409 when the lines changed since (every save gives new ids). */
+    expectLineIds?: number[];
+  },
 ): Promise<void> {
   await db.transaction(async (tx) => {
     const draft = await lockDraft(tx, designId, revision);
-    const { lines, ...fields } = change;
+    const { lines, expectLineIds, ...fields } = change;
+    if (expectLineIds) {
+      const now = await tx
+        .select({ id: designLines.id })
+        .from(designLines)
+        .where(eq(designLines.revisionId, draft.id));
+      const same = (a: number[], b: number[]) =>
+        a.length === b.length &&
+        [...a]
+          .sort((x, y) => x - y)
+          .every((id, i) => id === [...b].sort((x, y) => x - y)[i]);
+      if (
+        !same(
+          now.map((row) => row.id),
+          expectLineIds,
+        )
+      )
+        throw new StockError(
+          409,
+          "The lines were changed by someone else meanwhile: reload the page and make your change again.",
+        );
+    }
     const columns = revisionColumns(fields);
     if (Object.keys(columns).length > 0)
       await tx

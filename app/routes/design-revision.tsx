@@ -201,18 +201,25 @@ export async function action({ request, params }: Route.ActionArgs) {
           { intent, ok: false, message: "There is no such design revision." },
           404,
         );
+      const current = await storedLineInputs(found.revision.id);
       const change = applyLineChange(
-        await storedLineInputs(found.revision.id),
+        current,
         submission?.status === "success"
           ? { kind: "save", lineId, line: submission.value }
           : { kind: "remove", lineId: lineId! },
       );
       try {
         // With no change to make, this still refuses a released revision with the data layer's message.
+        // The lines are replaced only if nobody changed them since they were read here.
         await updateDraftRevision(
           ids.designId,
           ids.revision,
-          change ? { lines: change.lines } : {},
+          change
+            ? {
+                lines: change.lines,
+                expectLineIds: current.map((line) => line.id),
+              }
+            : {},
         );
       } catch (error) {
         return submission
