@@ -36,7 +36,8 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
   return (
     <div className="flex min-h-screen flex-col">
       <header className="border-b border-graphite-800 bg-graphite-900 text-graphite-50 print:hidden">
-        <div className="mx-auto flex max-w-7xl items-center gap-8 px-6 py-3">
+        {/* Two rows: the name and the person on top, the menu below with the whole width to itself. */}
+        <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-x-8 gap-y-2 px-4 pt-3 sm:px-6">
           <a
             href="/"
             className="flex items-center gap-2 text-lg font-semibold tracking-tight"
@@ -44,28 +45,7 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
             <img src="/favicon.svg" alt="" className="h-7 w-7" />
             Turnledger
           </a>
-          <nav aria-label="Main" className="flex-1">
-            <ul className="flex flex-wrap gap-1">
-              {items.map((item) => (
-                <li key={item.to}>
-                  <NavLink
-                    to={item.to}
-                    end={item.exact}
-                    className={({ isActive }) =>
-                      `rounded-md px-3 py-1.5 text-sm font-medium ${
-                        isActive
-                          ? "bg-copper-600 text-white"
-                          : "text-graphite-100 hover:bg-graphite-800"
-                      }`
-                    }
-                  >
-                    {item.label}
-                  </NavLink>
-                </li>
-              ))}
-            </ul>
-          </nav>
-          <div className="flex items-center gap-4 text-sm">
+          <div className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
             <NavLink
               to="/account"
               className="hover:underline"
@@ -86,6 +66,30 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
             </Form>
           </div>
         </div>
+        <nav
+          aria-label="Main"
+          className="mx-auto max-w-7xl px-2 pt-2 pb-2 sm:px-4"
+        >
+          <ul className="flex flex-wrap gap-0.5">
+            {items.map((item) => (
+              <li key={item.to}>
+                <NavLink
+                  to={item.to}
+                  end={item.exact}
+                  className={({ isActive }) =>
+                    `block rounded-md px-2.5 py-1.5 text-sm font-medium ${
+                      isActive
+                        ? "bg-copper-600 text-white"
+                        : "text-graphite-100 hover:bg-graphite-800"
+                    }`
+                  }
+                >
+                  {item.label}
+                </NavLink>
+              </li>
+            ))}
+          </ul>
+        </nav>
       </header>
       <main className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">
         <Outlet />
