@@ -4,6 +4,8 @@
  * p95 under 30 ms (issue #6). Items, prices and the design are made through
  * the API as a buyer and a builder would.
  */
+import mysql from "mysql2/promise";
+import { poolOptionsFromUrl } from "~/db/connection-options";
 import { summarise } from "./statistics";
 import type { Figure } from "./coil-estimates.bench";
 
@@ -34,7 +36,7 @@ export async function benchDesignCosting(input: {
   databaseUrl: string;
   buyerCookie: string;
   builderCookie: string;
-}): Promise<Figure[]> {
+}): Promise<{ figures: Figure[]; costingPath: string; revisionId: number }> {
   const { baseUrl, buyerCookie, builderCookie } = input;
   const run = Date.now().toString(36).toUpperCase();
   const lines: Record<string, unknown>[] = [];
@@ -113,8 +115,6 @@ export async function benchDesignCosting(input: {
     adderPerKg: "Adder per kg",
     validFrom: "Valid from",
   };
-  const { default: mysql } = await import("mysql2/promise");
-  const { poolOptionsFromUrl } = await import("~/db/connection-options");
   const connection = await mysql.createConnection(
     poolOptionsFromUrl(input.databaseUrl),
   );
@@ -192,7 +192,15 @@ export async function benchDesignCosting(input: {
     if (index >= 5) samples.push(elapsed); // the first few warm the server up
   }
   const stats = summarise(samples);
-  return [
+  const check = await mysql.createConnection(
+    poolOptionsFromUrl(input.databaseUrl),
+  );
+  const [[revisionRow]] = (await check.query(
+    "SELECT id FROM design_revisions WHERE design_id = ? AND revision = 1",
+    [created.id],
+  )) as unknown as [[{ id: number }]];
+  await check.end();
+  const figures: Figure[] = [
     {
       name: "design costing API, 60 lines × 500 motors",
       unit: "ms",
@@ -203,4 +211,5 @@ export async function benchDesignCosting(input: {
       samples,
     },
   ];
+  return { figures, costingPath: path, revisionId: revisionRow.id };
 }
