@@ -473,7 +473,8 @@ export async function seedDemoStock(storekeeperId: string): Promise<void> {
 
   // About four months of work at the bench: weigh-back issues, magnets and parts to builds, a few counts and scrap.
   for (let day = 0; day < 110 && clock < Date.now() - 2 * dayMs; day += 1) {
-    const buildOrder = `BO-${1000 + day}`;
+    // Workshop jobs before build orders were kept in the app: "JOB-…", not "BO-…".
+    const buildOrder = `JOB-${1000 + day}`;
     for (let job = 0; job < 3; job += 1) {
       const spool = spools[Math.floor(random() * spools.length)]!;
       const takenKg =

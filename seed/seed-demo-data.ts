@@ -3,6 +3,7 @@ import type { MySql2Database } from "drizzle-orm/mysql2";
 import { hashPassword } from "~/auth/password.server";
 import * as schema from "~/db/schema";
 import { demoPassword, demoPeople } from "./demo-people";
+import { demoPersonId } from "./demo-person-ids";
 
 type Database = MySql2Database<typeof schema>;
 
@@ -16,8 +17,8 @@ export async function databaseIsEmpty(db: Database): Promise<boolean> {
 export async function seedDemoData(db: Database): Promise<void> {
   const passwordHash = await hashPassword(demoPassword());
   await db.transaction(async (tx) => {
-    for (const [index, person] of demoPeople.entries()) {
-      const id = `demo-${String(index + 1).padStart(2, "0")}-${person.roles[0]}`;
+    for (const person of demoPeople) {
+      const id = demoPersonId(person.roles[0]!);
       await tx
         .insert(schema.users)
         .values({ id, email: person.email, name: person.name, passwordHash });

@@ -72,6 +72,8 @@ async function seedStockThroughTheLedger(databaseUrl: string): Promise<void> {
   try {
     const { seedDemoStock } = await import("../../seed/demo-stock");
     await seedDemoStock(demoStorekeeperId);
+    const { seedDemoWorkshop } = await import("../../seed/demo-workshop");
+    await seedDemoWorkshop();
   } finally {
     await client.pool.end();
     delete (globalThis as { turnledgerDb?: unknown }).turnledgerDb;

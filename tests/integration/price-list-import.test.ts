@@ -318,6 +318,8 @@ describe("best price per item", () => {
       ).status,
     ).toBe(201);
 
+    // The base and rate are dated years ahead (priced on a day after them), clear of the
+    // demo data's bases and rates over the last months and of the other tests' days.
     await sendJson(
       "PUT",
       "/api/v1/metal-base",
@@ -325,20 +327,20 @@ describe("best price per item", () => {
         conductor: "copper",
         currency: "EUR",
         pricePerKg: 9,
-        validFrom: "2026-11-01",
+        validFrom: "2032-11-01",
       },
       buyer,
     );
     await sendJson(
       "PUT",
       "/api/v1/currency-rates",
-      { currency: "USD", rate: 0.92, validFrom: "2026-11-01" },
+      { currency: "USD", rate: 0.92, validFrom: "2032-11-01" },
       buyer,
     );
     const pricesAt = async (quantity: number) =>
       (await (
         await fetch(
-          `${baseUrl()}/api/v1/items/${encodeURIComponent(itemSku)}/prices?quantity=${quantity}&date=2026-12-01`,
+          `${baseUrl()}/api/v1/items/${encodeURIComponent(itemSku)}/prices?quantity=${quantity}&date=2032-12-01`,
           { headers: { Cookie: buyer } },
         )
       ).json()) as {
@@ -373,7 +375,7 @@ describe("best price per item", () => {
         conductor: "copper",
         currency: "EUR",
         pricePerKg: 10,
-        validFrom: "2026-11-15",
+        validFrom: "2032-11-15",
       },
       buyer,
     );
@@ -388,7 +390,7 @@ describe("best price per item", () => {
         conductor: "copper",
         currency: "EUR",
         pricePerKg: 9,
-        validFrom: "2026-11-15",
+        validFrom: "2032-11-15",
       },
       buyer,
     );
