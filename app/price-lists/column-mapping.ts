@@ -12,6 +12,7 @@ import { z } from "zod";
 
 export const priceListFieldKeys = [
   "supplierSku",
+  "itemSku",
   "description",
   "kind",
   "standard",
@@ -53,6 +54,12 @@ export const PRICE_LIST_FIELDS: readonly PriceListFieldInfo[] = [
     label: "Supplier SKU",
     requirement: "required",
     hint: "The supplier's own article number for the item.",
+  },
+  {
+    key: "itemSku",
+    label: "Our SKU",
+    requirement: "optional",
+    hint: "Our own catalogue SKU, when the file has a column for it: the row then prices that item (its kind must match) and the supplier's SKU is tied to it.",
   },
   {
     key: "description",
@@ -290,6 +297,17 @@ export interface SuggestedColumn extends ColumnMappingEntry {
  * German, French and Italian words common in European supplier files.
  */
 const headerSpellings: Readonly<Record<PriceListField, readonly string[]>> = {
+  itemSku: [
+    "our sku",
+    "our item",
+    "our article",
+    "our part number",
+    "catalogue sku",
+    "catalog sku",
+    "turnledger sku",
+    "internal sku",
+    "internal code",
+  ],
   supplierSku: [
     "sku",
     "supplier sku",

@@ -6,6 +6,7 @@ function partRow(line: number): PriceListRow {
   return {
     line,
     supplierSku: `P-${line}`,
+    itemSku: null,
     description: "",
     kind: "part",
     unit: "pcs",

@@ -78,6 +78,7 @@ describe("good rows", () => {
       row: {
         line: 14,
         supplierSku: "CU-20H",
+        itemSku: null,
         description: "",
         kind: "wire",
         unit: "kg",

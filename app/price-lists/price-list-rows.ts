@@ -49,11 +49,15 @@ import { lineError, type CsvDataRow, type LineError } from "./parse-price-list";
 /** Matches the supplier SKU column planned for the purchasing tables. */
 export const maxSupplierSkuLength = 60;
 export const maxDescriptionLength = 200;
+/** Our item SKUs (items.sku). */
+export const maxItemSkuLength = 40;
 
 interface PriceListRowBase {
   /** The line the row starts on in the file. */
   line: number;
   supplierSku: string;
+  /** Our catalogue SKU when the file names it (the "Our SKU" column), else null. */
+  itemSku: string | null;
   /** The supplier's description, trimmed; "" when there is none. */
   description: string;
   /** Price per unit as decimal text with 4 places, or null when the row gives an adder. */
@@ -132,6 +136,13 @@ export function readPriceListRow(
     );
   }
 
+  const itemSkuCell = cell("itemSku");
+  if (itemSkuCell.length > maxItemSkuLength)
+    problems.push(
+      `our SKU ${quote(itemSkuCell)} is longer than ${maxItemSkuLength} characters`,
+    );
+  const itemSku = itemSkuCell === "" ? null : itemSkuCell;
+
   const description = cell("description");
   // Characters as a person counts them (code points); only counted when it could matter.
   const descriptionLength =
@@ -172,6 +183,7 @@ export function readPriceListRow(
     row: {
       line: data.line,
       supplierSku,
+      itemSku,
       description,
       ...prices,
       currency,
@@ -638,6 +650,11 @@ function describePrice(row: PriceListRow): string {
 
 /** "wire AWG 20 heavy class 155", "magnet N42SH", "part per pcs". */
 function describeItem(row: PriceListRow): string {
+  const kindText = describeItemKind(row);
+  return row.itemSku ? `${kindText} (our SKU ${row.itemSku})` : kindText;
+}
+
+function describeItemKind(row: PriceListRow): string {
   switch (row.kind) {
     case "wire":
       return [

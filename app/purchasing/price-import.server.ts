@@ -6,7 +6,7 @@
  * same supplier changes nothing.
  */
 import { createHash } from "node:crypto";
-import { and, eq } from "drizzle-orm";
+import { and, eq, inArray } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import {
@@ -63,6 +63,8 @@ function newItemSku(supplierId: number, supplierSku: string): string {
 
 /** Matches one row to its catalogue item, or says why it cannot be imported. */
 interface RowMatcher {
+  /** Looks up the batch's "our SKU" items (one query a batch); call before matching its rows. */
+  prepare(rows: readonly PriceListRow[]): Promise<void>;
   match(row: PriceListRow): MatchedRow | LineError;
   /** Conductor of each catalogue wire item, for adder lines. */
   conductorOf: Map<number, string>;
@@ -140,7 +142,50 @@ async function loadRowMatcher(supplierId: number): Promise<RowMatcher> {
     return { sku: lastNewItem.sku, name: lastNewItem.name };
   }
 
+  // Items named in the "Our SKU" column, looked up a batch at a time.
+  const ourItems = new Map<
+    string,
+    { id: number; kind: string; active: boolean } | null
+  >();
+  async function prepare(rows: readonly PriceListRow[]) {
+    const missing = [
+      ...new Set(
+        rows.flatMap((row) =>
+          row.itemSku && !ourItems.has(row.itemSku.toLowerCase())
+            ? [row.itemSku.toLowerCase()]
+            : [],
+        ),
+      ),
+    ];
+    if (missing.length === 0) return;
+    const found = await db
+      .select({
+        id: items.id,
+        sku: items.sku,
+        kind: items.kind,
+        active: items.active,
+      })
+      .from(items)
+      .where(inArray(items.sku, missing));
+    for (const sku of missing) ourItems.set(sku, null);
+    for (const item of found) ourItems.set(item.sku.toLowerCase(), item);
+  }
+
   function match(row: PriceListRow): MatchedRow | LineError {
+    if (row.itemSku) {
+      const item = ourItems.get(row.itemSku.toLowerCase());
+      if (!item || !item.active)
+        return {
+          line: row.line,
+          message: `Line ${row.line}: our SKU "${row.itemSku}" is not an active item in the catalogue.`,
+        };
+      if (item.kind !== row.kind)
+        return {
+          line: row.line,
+          message: `Line ${row.line}: our SKU "${row.itemSku}" is a ${item.kind} item, but the row is ${row.kind}.`,
+        };
+      return { row, itemId: item.id, newItem: null };
+    }
     const mapped = known.get(row.supplierSku.toLowerCase());
     if (mapped !== undefined) return { row, itemId: mapped, newItem: null };
     if (row.kind === "wire") {
@@ -178,6 +223,7 @@ async function loadRowMatcher(supplierId: number): Promise<RowMatcher> {
     };
   }
   return {
+    prepare,
     match,
     conductorOf: new Map(wires.map((wire) => [wire.id, wire.conductor])),
   };
@@ -243,6 +289,7 @@ export async function importPriceList(input: {
       readOptions,
       rowsPerBatch,
       async (rows) => {
+        await matcher.prepare(rows);
         for (const row of rows) {
           const result = matcher.match(row);
           if (isLineError(result)) {
@@ -298,6 +345,7 @@ export async function importPriceList(input: {
       readOptions,
       rowsPerBatch,
       async (rows, lineErrorsSoFar) => {
+        await matcher.prepare(rows);
         const matched: MatchedRow[] = [];
         for (const row of rows) {
           const result = matcher.match(row);
