@@ -7,7 +7,7 @@
  */
 import { and, eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
-import { items, magnetItems, wireItems } from "~/db/schema";
+import { items, wireItems } from "~/db/schema";
 import { findAwgSize } from "~/engineering/reference-data";
 import type { ColumnMapping } from "~/price-lists/column-mapping";
 import { companyCurrencyRateRefusal } from "~/purchasing/currency-rate-rules";
@@ -302,46 +302,17 @@ const marrowfieldMagnets: {
   },
 ];
 
-/** The catalogue magnets by grade: a price list's magnet row finds its item by grade alone. */
-async function magnetGradesInCatalogue(): Promise<Map<string, string[]>> {
-  const rows = await db
-    .select({ sku: items.sku, grade: magnetItems.gradeKey })
-    .from(magnetItems)
-    .innerJoin(
-      items,
-      and(eq(items.id, magnetItems.itemId), eq(items.active, true)),
-    );
-  const byGrade = new Map<string, string[]>();
-  for (const row of rows)
-    byGrade.set(row.grade.toLowerCase(), [
-      ...(byGrade.get(row.grade.toLowerCase()) ?? []),
-      row.sku,
-    ]);
-  return byGrade;
-}
-
-/**
- * A price list's magnet row finds its catalogue item by grade, so only grades the
- * catalogue holds exactly one magnet of are quoted (there is no way yet to tie a
- * supplier SKU to one of two magnets of the same grade).
- */
-function quotable<Row extends { sku: string; grade: string }>(
-  rows: Row[],
-  byGrade: Map<string, string[]>,
-): Row[] {
-  return rows.filter((row) => {
-    const skus = byGrade.get(row.grade.toLowerCase()) ?? [];
-    return skus.length === 1 && skus[0] === row.sku;
-  });
-}
-
-function marrowfieldCsv(byGrade: Map<string, string[]>, validFrom: string) {
-  const lines = ["Part Number,Description,Grade,Min Qty,Unit Price,Effective"];
-  for (const magnet of quotable(marrowfieldMagnets, byGrade)) {
+/** The buyer added our SKU beside the supplier's part number, so each row prices its catalogue magnet. */
+function marrowfieldCsv(validFrom: string) {
+  const lines = [
+    "Part Number,Our SKU,Description,Grade,Min Qty,Unit Price,Effective",
+  ];
+  for (const magnet of marrowfieldMagnets) {
     magnet.prices.forEach((price, index) => {
       lines.push(
         [
           magnet.code,
+          magnet.sku,
           `"${magnet.text}"`,
           magnet.grade,
           String([1, 100, 500][index]),
@@ -356,6 +327,7 @@ function marrowfieldCsv(byGrade: Map<string, string[]>, validFrom: string) {
 
 const marrowfieldMapping: ColumnMapping = [
   { header: "Part Number", field: "supplierSku" },
+  { header: "Our SKU", field: "itemSku" },
   { header: "Description", field: "description" },
   { header: "Grade", field: "grade" },
   { header: "Min Qty", field: "minQuantity" },
@@ -471,26 +443,17 @@ const corbelRows: {
   },
 ];
 
-function corbelCsv(byGrade: Map<string, string[]>, validFrom: string) {
+/** New parts have no SKU of ours yet (the import adds them); the magnets carry ours. */
+function corbelCsv(validFrom: string) {
   const lines = [
-    "Item code,Description,Grade,Unit,From qty,Price EUR,Valid from",
+    "Item code,Our SKU,Description,Grade,Unit,From qty,Price EUR,Valid from",
   ];
-  const magnets = quotable(
-    corbelRows.filter((row) => row.grade && row.sku) as {
-      code: string;
-      text: string;
-      grade: string;
-      sku: string;
-      unit: "pcs" | "m";
-      breaks: [number, number][];
-    }[],
-    byGrade,
-  );
-  for (const row of [...corbelRows.filter((row) => !row.grade), ...magnets]) {
+  for (const row of corbelRows) {
     for (const [minQuantity, price] of row.breaks) {
       lines.push(
         [
           row.code,
+          row.grade ? (row.sku ?? "") : "",
           `"${row.text}"`,
           row.grade ?? "",
           row.unit,
@@ -506,6 +469,7 @@ function corbelCsv(byGrade: Map<string, string[]>, validFrom: string) {
 
 const corbelMapping: ColumnMapping = [
   { header: "Item code", field: "supplierSku" },
+  { header: "Our SKU", field: "itemSku" },
   { header: "Description", field: "description" },
   { header: "Grade", field: "grade" },
   { header: "Unit", field: "unit" },
@@ -597,7 +561,6 @@ export async function seedDemoPurchasing(): Promise<DemoPurchasing> {
     );
 
   const wires = await catalogueWires();
-  const byGrade = await magnetGradesInCatalogue();
   await importDemoList(
     quillan.name,
     `quillan-preisliste-${daysAgo(105)}.csv`,
@@ -608,7 +571,7 @@ export async function seedDemoPurchasing(): Promise<DemoPurchasing> {
   await importDemoList(
     marrowfield.name,
     "marrowfield-magnet-quote.csv",
-    marrowfieldCsv(byGrade, daysAgo(90)),
+    marrowfieldCsv(daysAgo(90)),
     marrowfieldMapping,
     buyerId,
   );
@@ -622,7 +585,7 @@ export async function seedDemoPurchasing(): Promise<DemoPurchasing> {
   await importDemoList(
     corbel.name,
     "corbel-parts-prices.csv",
-    corbelCsv(byGrade, daysAgo(45)),
+    corbelCsv(daysAgo(45)),
     corbelMapping,
     buyerId,
   );
