@@ -10,6 +10,11 @@ import { items } from "~/db/schema";
 import { bestPrices } from "~/pricing/best-price";
 import { formatMoneyText, type MoneyAmount } from "~/pricing/money";
 import {
+  metalBasesWithWhatIf,
+  scaleEndTurns,
+  type CostingWhatIf,
+} from "~/insight/what-if";
+import {
   loadItemsPricing,
   type ItemPricing,
 } from "~/purchasing/item-prices.server";
@@ -96,18 +101,36 @@ function bestPriceFor(
   };
 }
 
-/** The best price of every needed item, all items' price lines read at once. */
+/**
+ * The best price of every needed item, all items' price lines read at once; with a
+ * what-if metal base standing in for the stored bases in the company currency.
+ */
 async function bestPricesFor(
   needed: Map<number, { sku: string; quantity: bigint }>,
   motors: number,
   date: string,
+  options: {
+    loadPricing: (skus: readonly string[]) => Promise<Map<string, ItemPricing>>;
+    metalBasePerKg: CostingWhatIf["metalBasePerKg"];
+  },
 ): Promise<Map<number, ItemUnitPrice>> {
-  const pricings = await loadItemsPricing(
+  const pricings = await options.loadPricing(
     [...needed.values()].map((entry) => entry.sku),
   );
   const prices = new Map<number, ItemUnitPrice>();
   for (const [itemId, { sku, quantity }] of needed) {
-    const pricing = pricings.get(sku);
+    const stored = pricings.get(sku);
+    const pricing =
+      stored && options.metalBasePerKg
+        ? {
+            ...stored,
+            bases: metalBasesWithWhatIf(
+              stored.bases,
+              options.metalBasePerKg,
+              stored.companyCurrency,
+            ),
+          }
+        : stored;
     const price = pricing
       ? bestPriceFor(pricing, quantity, motors, date)
       : null;
@@ -138,21 +161,40 @@ async function stockAveragePrices(
   return prices;
 }
 
-/** The whole costing of a revision as the API and the design page show it. */
+/**
+ * The whole costing of a revision as the API and the design page show it.
+ *
+ * `whatIf` (optional, nothing saved) stands in for the metal base in the company currency
+ * and scales the end-turn length of every coil line (see `~/insight/what-if`); without it
+ * the costing is the stored design at stored prices. `loadPricing` and `currency` let a
+ * caller costing many revisions or days read each item's prices and the company currency
+ * once (by default they are read here).
+ */
 export async function costRevision(input: {
   revision: RevisionRow;
   lines: StoredDesignLine[];
   quantity: number;
   basis: CostingBasis;
   date: string;
+  whatIf?: CostingWhatIf;
+  loadPricing?: (skus: readonly string[]) => Promise<Map<string, ItemPricing>>;
+  /** The company currency when the caller has read it already (costing many revisions). */
+  currency?: string;
 }) {
-  const { revision, lines } = input;
+  const { revision, whatIf } = input;
+  const lines =
+    whatIf?.endTurnScale === undefined
+      ? input.lines
+      : scaleEndTurns(input.lines, whatIf.endTurnScale);
   const needed = quantitiesPerItem(lines, input.quantity);
   const [prices, currency] = await Promise.all([
     input.basis === "stock-average"
       ? stockAveragePrices([...needed.keys()])
-      : bestPricesFor(needed, input.quantity, input.date),
-    companyCurrency(),
+      : bestPricesFor(needed, input.quantity, input.date, {
+          loadPricing: input.loadPricing ?? loadItemsPricing,
+          metalBasePerKg: whatIf?.metalBasePerKg,
+        }),
+    input.currency ?? companyCurrency(),
   ]);
   const ratedTorqueNm = optionalNumber(revision.ratedTorqueNm);
   const ratedCurrentA = Number(revision.ratedCurrentA);

@@ -18,6 +18,7 @@ export const navigationItems: readonly NavigationItem[] = [
   { to: "/suppliers", label: "Suppliers", roles: [] },
   { to: "/prices", label: "Prices", roles: [] },
   { to: "/alerts", label: "Alerts", roles: [] },
+  { to: "/insight", label: "Cost insight", roles: [] },
   { to: "/designs", label: "Designs", roles: [] },
   { to: "/build-orders", label: "Build orders", roles: [] },
   { to: "/tools/coil-estimator", label: "Coil estimator", roles: [] },

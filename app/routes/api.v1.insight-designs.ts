@@ -1,9 +1,34 @@
-import { data } from "react-router";
 import type { Route } from "./+types/api.v1.insight-designs";
 import { requireUser } from "~/auth/guard.server";
+import { designInsight } from "~/insight/design-insight.server";
+import { insightQuerySchema } from "~/insight/what-if";
+import { readSearchParams } from "~/lib/api.server";
+import { answerStockError } from "~/stock/stock-api.server";
 
-// Placeholder while the route is being built (issue #7).
+/**
+ * GET /api/v1/insight/designs → [{ designId, name, revision, ratedTorqueNm, torqueBasis,
+ * costPerMotor, costPerNm, split, splitPerNm, copperLossPerNm, currency, … }]: the latest
+ * released revision of each design (newest design first, paged: `page`, `perPage` ≤ 50,
+ * X-Total-Count), costed at the best price for `quantity` motors on `date` (today).
+ *
+ * Read-only what-if (nothing is saved): `copperBase` / `aluminiumBase` per kg in the
+ * company currency, `endTurn.<designId>` a factor on that design's end-turn lengths;
+ * each design then also carries `asStored`, its figures without them. `history=1` adds
+ * `costHistory`: the cost per motor a month apart over the last year, stored prices only.
+ *
+ * Every signed-in role may read: the product's role table lets everyone read designs and
+ * costs, and the same figures are on the design costing route.
+ */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  throw data({ message: "Not built yet." }, { status: 404 });
+  const query = readSearchParams(request, insightQuerySchema);
+  return answerStockError(async () => {
+    const insight = await designInsight(query, {
+      today: new Date().toISOString().slice(0, 10),
+      history: query.history === "1",
+    });
+    return Response.json(insight.designs, {
+      headers: { "X-Total-Count": String(insight.total) },
+    });
+  });
 }

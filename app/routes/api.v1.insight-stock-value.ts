@@ -1,9 +1,17 @@
-import { data } from "react-router";
 import type { Route } from "./+types/api.v1.insight-stock-value";
 import { requireUser } from "~/auth/guard.server";
+import { stockValueInsight } from "~/insight/stock-value.server";
 
-// Placeholder while the route is being built (issue #7).
+/**
+ * GET /api/v1/insight/stock-value → { currency, total, byKind, byLocation, otherLocations,
+ * reservedValue, belowReorderPoint, openAlerts, trend: [{ week, value, complete }] }:
+ * on hand × moving average cost, each item (or balance) to 0.0001, summed exactly; the
+ * trend is the value at the end of each of the last 26 weeks (Monday-started, UTC), the
+ * running week's value being the value now.
+ *
+ * Every signed-in role may read: everyone reads stock (the product's role table).
+ */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  throw data({ message: "Not built yet." }, { status: 404 });
+  return Response.json(await stockValueInsight({ trend: true }));
 }

@@ -1,6 +1,9 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/home";
 import { requireUser } from "~/auth/guard.server";
+import { InsightDesigns } from "~/components/insight-designs";
+import { StockHeadline } from "~/components/insight-stock";
+import { loadInsight } from "~/insight/insight-page.server";
 import { adminFigures } from "~/people/admin-figures.server";
 import { roleDuties } from "~/lib/navigation";
 import { roles, roleLabels } from "~/lib/roles";
@@ -8,10 +11,18 @@ import { roles, roleLabels } from "~/lib/roles";
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
   const isAdmin = user.roles.includes("admin");
+  // Managers start on the cost insight (designs with the what-if, stock value); the
+  // trends and breakdowns are on /insight.
+  const isManager = user.roles.includes("manager");
+  const [admin, insight] = await Promise.all([
+    isAdmin ? adminFigures() : null,
+    isManager ? loadInsight(request, { page: "start" }) : null,
+  ]);
   return {
     name: user.name,
     roles: roles.filter((role) => user.roles.includes(role)),
-    admin: isAdmin ? await adminFigures() : null,
+    admin,
+    insight,
   };
 }
 
@@ -38,7 +49,7 @@ function Figure({
 }
 
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { name, roles: myRoles, admin } = loaderData;
+  const { name, roles: myRoles, admin, insight } = loaderData;
   return (
     <div className="space-y-6">
       <div>
@@ -79,6 +90,24 @@ export default function Home({ loaderData }: Route.ComponentProps) {
             />
           </div>
         </section>
+      ) : null}
+      {insight ? (
+        <div className="space-y-8">
+          <InsightDesigns data={insight} action="/" />
+          <StockHeadline stock={insight.stock} />
+          <p>
+            <Link
+              to="/insight"
+              className="font-medium text-copper-700 underline underline-offset-2"
+            >
+              Open the cost insight
+            </Link>{" "}
+            <span className="text-graphite-500">
+              for the cost per motor over the last year and the stock value by
+              kind, location and week.
+            </span>
+          </p>
+        </div>
       ) : null}
       <ul className="grid gap-4 md:grid-cols-2 lg:grid-cols-3">
         {myRoles.map((role) => (

@@ -1,0 +1,524 @@
+/**
+ * The stock half of the cost insight: the headline figures (value, reserved value, items
+ * below their reorder point), value by kind and by location, and the weekly trend; plus
+ * the cost per motor of each design month by month. Every chart has its figures in a
+ * table beside it.
+ */
+import { createColumnHelper } from "@tanstack/react-table";
+import { Link } from "react-router";
+import { DataTable } from "~/components/data-table";
+import type { DesignInsight } from "~/insight/design-insight.server";
+import { costHistoryChange, moneyFromJson } from "~/insight/design-insight";
+import type { StockValueInsight } from "~/insight/stock-value.server";
+import { formatDateTime } from "~/lib/format";
+import { formatMoney } from "~/pricing/money";
+import { kindParts, palette, Swatch, type FillPart } from "./insight-patterns";
+import { InsightTrendChart, TrendSample } from "./insight-trend-chart";
+import { InsightValueBars } from "./insight-value-bars";
+
+function money(value: number, currency: string): string {
+  return formatMoney(moneyFromJson(value), currency, { decimals: 2 });
+}
+
+function dayText(date: string): string {
+  return formatDateTime(`${date}T00:00:00Z`).split(", ")[0] ?? date;
+}
+
+const monthHeader = new Intl.DateTimeFormat("en-GB", {
+  month: "short",
+  year: "2-digit",
+  timeZone: "UTC",
+});
+
+function Figure({
+  label,
+  value,
+  to,
+  note,
+}: {
+  label: string;
+  value: string;
+  to?: string;
+  note?: string;
+}) {
+  const body = (
+    <>
+      <span className="block text-2xl font-semibold tabular-nums">{value}</span>
+      <span className="text-sm text-graphite-500">{label}</span>
+      {note ? (
+        <span className="block text-xs text-graphite-500">{note}</span>
+      ) : null}
+    </>
+  );
+  return to ? (
+    <Link
+      to={to}
+      className="block rounded-md border border-rule bg-white px-4 py-3 hover:border-copper-300"
+    >
+      {body}
+    </Link>
+  ) : (
+    <div className="rounded-md border border-rule bg-white px-4 py-3">
+      {body}
+    </div>
+  );
+}
+
+/** Value, reserved value and what is short, as four figures. */
+export function StockHeadline({ stock }: { stock: StockValueInsight }) {
+  return (
+    <section aria-labelledby="stock-headline-heading" className="space-y-3">
+      <h2
+        id="stock-headline-heading"
+        className="break-after-avoid text-lg font-semibold"
+      >
+        Stock value
+      </h2>
+      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+        <Figure
+          label="in stock (on hand × average cost)"
+          value={money(stock.total, stock.currency)}
+          to="/stock"
+        />
+        <Figure
+          label="reserved for build orders"
+          value={money(stock.reservedValue, stock.currency)}
+          to="/build-orders"
+        />
+        <Figure
+          label="items below their reorder point"
+          value={String(stock.belowReorderPoint)}
+          to="/alerts"
+          note={`${stock.openAlerts} open alert${stock.openAlerts === 1 ? "" : "s"} — see Alerts`}
+        />
+        <Figure
+          label="kinds of item holding value"
+          value={String(stock.byKind.filter((kind) => kind.value !== 0).length)}
+          note={stock.byKind
+            .map(
+              (kind) =>
+                `${kindParts.find((part) => part.key === kind.kind)?.label ?? kind.kind}: ${kind.items} item${kind.items === 1 ? "" : "s"}`,
+            )
+            .join(", ")}
+        />
+      </div>
+    </section>
+  );
+}
+
+type LocationRow = StockValueInsight["byLocation"][number];
+
+const locationPart: FillPart<string> = {
+  key: "location",
+  label: "Location",
+  detail: "",
+  patternName: "solid",
+  style: { kind: "solid", color: palette.graphite500 },
+};
+
+/** Value by kind of item and by location, each as bars with a table beside. */
+export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
+  const currency = stock.currency;
+  const kinds = kindParts.map((part) => ({
+    part,
+    row: stock.byKind.find((kind) => kind.kind === part.key) ?? {
+      kind: part.key,
+      value: 0,
+      items: 0,
+    },
+  }));
+  const kindColumn = createColumnHelper<(typeof kinds)[number]>();
+  const locationColumn = createColumnHelper<LocationRow>();
+  const shownLocations = stock.byLocation.slice(0, 10);
+  return (
+    <section aria-labelledby="stock-breakdown-heading" className="space-y-4">
+      <h2
+        id="stock-breakdown-heading"
+        className="break-after-avoid text-lg font-semibold"
+      >
+        Where the stock value is
+      </h2>
+      <div className="grid gap-6 xl:grid-cols-2">
+        <div className="panel space-y-3 break-inside-avoid">
+          <h3 className="text-sm font-semibold">By kind of item</h3>
+          <InsightValueBars
+            currency={currency}
+            label={`Stock value by kind of item, in ${currency}`}
+            bars={kinds.map(({ part, row }) => ({
+              key: part.key,
+              label: part.label,
+              value: row.value,
+              part,
+            }))}
+          />
+          <DataTable
+            caption={`Stock value by kind of item, in ${currency}`}
+            rows={kinds}
+            columns={[
+              kindColumn.display({
+                id: "kind",
+                header: "Kind",
+                cell: ({ row }) => (
+                  <span className="inline-flex items-center gap-2">
+                    <Swatch part={row.original.part} />
+                    {row.original.part.label}
+                    <span className="text-xs text-graphite-500">
+                      ({row.original.part.patternName})
+                    </span>
+                  </span>
+                ),
+              }),
+              kindColumn.display({
+                id: "items",
+                header: "Items valued",
+                cell: ({ row }) => row.original.row.items,
+                meta: { numeric: true },
+              }),
+              kindColumn.display({
+                id: "value",
+                header: "Value",
+                cell: ({ row }) => (
+                  <span className="whitespace-nowrap">
+                    {money(row.original.row.value, currency)}
+                  </span>
+                ),
+                meta: { numeric: true },
+              }),
+            ]}
+          />
+          <p className="text-sm">
+            Total{" "}
+            <span className="font-semibold">
+              {money(stock.total, currency)}
+            </span>
+          </p>
+        </div>
+        <div className="panel space-y-3 break-inside-avoid">
+          <h3 className="text-sm font-semibold">By location</h3>
+          {stock.byLocation.length === 0 ? (
+            <p className="text-sm text-graphite-500">
+              No stock on hand anywhere.
+            </p>
+          ) : (
+            <>
+              <InsightValueBars
+                currency={currency}
+                label={`Stock value of the ${shownLocations.length} most valuable locations, in ${currency}`}
+                bars={shownLocations.map((location) => ({
+                  key: String(location.locationId),
+                  label: location.code,
+                  value: location.value,
+                  part: locationPart,
+                }))}
+              />
+              <DataTable
+                caption={`Stock value by location, in ${currency}`}
+                rows={stock.byLocation}
+                columns={[
+                  locationColumn.display({
+                    id: "location",
+                    header: "Location",
+                    cell: ({ row }) => (
+                      <span>
+                        <span className="font-medium">{row.original.code}</span>
+                        <span className="block text-xs text-graphite-500">
+                          {row.original.name}
+                        </span>
+                      </span>
+                    ),
+                  }),
+                  locationColumn.accessor("items", {
+                    header: "Items",
+                    meta: { numeric: true },
+                  }),
+                  locationColumn.display({
+                    id: "value",
+                    header: "Value",
+                    cell: ({ row }) => (
+                      <span className="whitespace-nowrap">
+                        {money(row.original.value, currency)}
+                      </span>
+                    ),
+                    meta: { numeric: true },
+                  }),
+                ]}
+              />
+              <p className="text-xs text-graphite-500">
+                Each balance at its item's average cost, to 0.0001 before adding
+                up, so the locations can differ from the total by a few
+                ten-thousandths.
+                {stock.byLocation.length > shownLocations.length
+                  ? ` The chart shows the ${shownLocations.length} most valuable locations.`
+                  : ""}
+                {stock.otherLocations
+                  ? ` ${stock.otherLocations.locations} more locations hold ${money(stock.otherLocations.value, currency)}.`
+                  : ""}
+              </p>
+            </>
+          )}
+        </div>
+      </div>
+    </section>
+  );
+}
+
+type TrendPoint = { week: string; value: number; complete: boolean };
+
+/** The stock value at the end of each of the last 26 weeks. */
+export function StockTrend({
+  trend,
+  currency,
+}: {
+  trend: TrendPoint[];
+  currency: string;
+}) {
+  const column = createColumnHelper<TrendPoint>();
+  const first = trend[0];
+  const last = trend.at(-1);
+  return (
+    <div className="grid gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+      <div className="panel break-inside-avoid">
+        <InsightTrendChart
+          monthly={false}
+          unit={currency}
+          label={`Stock value at the end of each week, in ${currency}`}
+          summary={
+            first && last
+              ? `Stock value ${money(first.value, currency)} at the end of the week of ${dayText(first.week)}, ${money(last.value, currency)} now; lowest ${money(Math.min(...trend.map((point) => point.value)), currency)}, highest ${money(Math.max(...trend.map((point) => point.value)), currency)}.`
+              : "No weeks to show."
+          }
+          series={[
+            {
+              key: "stock",
+              label: "Stock value",
+              points: trend.map((point) => ({
+                date: point.week,
+                value: point.value,
+              })),
+            },
+          ]}
+        />
+        <p className="mt-1 text-xs text-graphite-500">
+          Each point is the week starting on that Monday, valued at its end (the
+          running week: now), from the on hand and average cost after each
+          movement.
+        </p>
+      </div>
+      <div className="max-h-[28rem] overflow-y-auto print:max-h-none print:overflow-visible">
+        <DataTable
+          caption={`Stock value at the end of each week, in ${currency}`}
+          rows={[...trend].reverse()}
+          columns={[
+            column.accessor("week", {
+              header: "Week of",
+              cell: (info) => (
+                <span className="whitespace-nowrap">
+                  {dayText(info.getValue())}
+                  {info.row.original.complete ? "" : " (so far)"}
+                </span>
+              ),
+            }),
+            column.accessor("value", {
+              header: "Value at its end",
+              cell: (info) => (
+                <span className="whitespace-nowrap">
+                  {money(info.getValue(), currency)}
+                </span>
+              ),
+              meta: { numeric: true },
+            }),
+          ]}
+        />
+      </div>
+    </div>
+  );
+}
+
+function changeColumns(currency: string) {
+  const column = createColumnHelper<DesignInsight>();
+  const changeOf = (design: DesignInsight) =>
+    costHistoryChange(design.costHistory ?? []);
+  return [
+    column.display({
+      id: "design",
+      header: "Design",
+      cell: ({ row }) => row.original.name,
+    }),
+    column.display({
+      id: "from",
+      header: "First priced",
+      cell: ({ row }) => {
+        const change = changeOf(row.original);
+        return change ? (
+          <span className="whitespace-nowrap">
+            {money(change.from.costPerMotor, currency)}
+            <span className="block text-xs text-graphite-500">
+              {dayText(change.from.date)}
+            </span>
+          </span>
+        ) : (
+          "—"
+        );
+      },
+      meta: { numeric: true },
+    }),
+    column.display({
+      id: "to",
+      header: "Latest",
+      cell: ({ row }) => {
+        const change = changeOf(row.original);
+        return change ? (
+          <span className="whitespace-nowrap">
+            {money(change.to.costPerMotor, currency)}
+            <span className="block text-xs text-graphite-500">
+              {dayText(change.to.date)}
+            </span>
+          </span>
+        ) : (
+          "—"
+        );
+      },
+      meta: { numeric: true },
+    }),
+    column.display({
+      id: "change",
+      header: "Change",
+      cell: ({ row }) => {
+        const change = changeOf(row.original);
+        if (!change)
+          return (
+            <span className="text-graphite-500">
+              fewer than two priced months
+            </span>
+          );
+        const sign = change.change > 0 ? "+" : change.change < 0 ? "−" : "±";
+        return (
+          <span className="whitespace-nowrap font-semibold">
+            {sign}
+            {money(Math.abs(change.change), currency)}
+            {change.percent === null ? null : (
+              <span className="block text-xs font-normal text-graphite-500">
+                {sign}
+                {Math.abs(change.percent).toFixed(1)} %
+              </span>
+            )}
+          </span>
+        );
+      },
+      meta: { numeric: true },
+    }),
+  ];
+}
+
+/** Cost per motor of each design a month apart over the last year. */
+export function CostHistory({
+  designs,
+  currency,
+  quantity,
+}: {
+  designs: DesignInsight[];
+  currency: string;
+  quantity: number;
+}) {
+  const withHistory = designs.filter((design) => design.costHistory);
+  const dates = withHistory[0]?.costHistory?.map((point) => point.date) ?? [];
+  const column = createColumnHelper<DesignInsight>();
+  if (withHistory.length === 0) return null;
+  return (
+    <section aria-labelledby="cost-history-heading" className="space-y-3">
+      <div>
+        <h2
+          id="cost-history-heading"
+          className="break-after-avoid text-lg font-semibold"
+        >
+          Cost per motor over the last year
+        </h2>
+        <p className="text-sm text-graphite-500">
+          Each released design costed on the same day of each month, at the
+          prices and metal base stored for that day, for {quantity} motor
+          {quantity === 1 ? "" : "s"} (the what-if does not apply here). A gap
+          is a month with a line that had no price.
+        </p>
+      </div>
+      <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <div className="panel break-inside-avoid">
+          <InsightTrendChart
+            monthly
+            unit={`${currency} per motor`}
+            label={`Cost per motor by month, in ${currency}`}
+            summary={withHistory
+              .map((design) => {
+                const points = design.costHistory!;
+                const priced = points.filter((point) => point.complete);
+                return priced.length === 0
+                  ? `${design.name}: not fully priced in any month.`
+                  : `${design.name}: ${money(priced[0]!.costPerMotor, currency)} on ${dayText(priced[0]!.date)}, ${money(priced.at(-1)!.costPerMotor, currency)} on ${dayText(priced.at(-1)!.date)}.`;
+              })
+              .join(" ")}
+            series={withHistory.map((design) => ({
+              key: String(design.designId),
+              label: `${design.name} · rev ${design.revision}`,
+              points: design.costHistory!.map((point) => ({
+                date: point.date,
+                value: point.complete ? point.costPerMotor : null,
+              })),
+            }))}
+          />
+        </div>
+        <DataTable
+          caption={`Change in cost per motor over the year, in ${currency}`}
+          rows={withHistory}
+          columns={changeColumns(currency)}
+        />
+      </div>
+      <DataTable
+        caption={`Cost per motor by month, in ${currency}; — where a line had no price`}
+        rows={withHistory}
+        columns={[
+          column.display({
+            id: "design",
+            header: "Design",
+            cell: ({ row }) => (
+              <span className="inline-flex items-center gap-2 whitespace-nowrap">
+                <TrendSample index={withHistory.indexOf(row.original)} />
+                {row.original.name}
+                <span className="text-xs text-graphite-500">
+                  rev {row.original.revision}
+                </span>
+              </span>
+            ),
+          }),
+          ...dates.map((date, index) =>
+            column.display({
+              id: date,
+              header: () => (
+                <span className="whitespace-nowrap" title={dayText(date)}>
+                  {monthHeader.format(new Date(`${date}T00:00:00Z`))}
+                </span>
+              ),
+              cell: ({ row }) => {
+                const point = row.original.costHistory?.[index];
+                return point && point.complete ? (
+                  <span className="whitespace-nowrap">
+                    {
+                      formatMoney(moneyFromJson(point.costPerMotor), currency, {
+                        decimals: 2,
+                      }).split("\u00a0")[0]
+                    }
+                  </span>
+                ) : (
+                  "—"
+                );
+              },
+              meta: { numeric: true },
+            }),
+          ),
+        ]}
+      />
+      <p className="text-xs text-graphite-500">
+        In {currency} per motor; beside each design, the dash and marker of its
+        line in the chart.
+      </p>
+    </section>
+  );
+}
