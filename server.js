@@ -25,12 +25,15 @@ if (developing) {
     }
   });
 } else {
+  const built = await import("./build/server/index.js");
+  // The security headers (docs/decisions/012) go on the static files too.
+  app.use(built.securityHeaders);
   app.use(
     "/assets",
     express.static("build/client/assets", { immutable: true, maxAge: "1y" }),
   );
   app.use(express.static("build/client", { maxAge: "1h" }));
-  app.use(await import("./build/server/index.js").then((module) => module.app));
+  app.use(built.app);
 }
 
 const server = app.listen(port, host, () => {

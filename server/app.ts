@@ -1,12 +1,160 @@
 import "react-router";
+import { randomBytes } from "node:crypto";
 import { createRequestHandler } from "@react-router/express";
 import compression from "compression";
-import express from "express";
+import express, {
+  type NextFunction,
+  type Request as ExpressRequest,
+  type Response as ExpressResponse,
+} from "express";
+import { lucia } from "~/auth/lucia.server";
 
 declare module "react-router" {
   interface AppLoadContext {
     /** The client's IP address (from X-Forwarded-For only when TRUST_PROXY is set). */
     clientAddress: string;
+    /** This answer's Content-Security-Policy nonce, for React Router's inline scripts. */
+    cspNonce: string;
+  }
+}
+
+/**
+ * Vite's dev server (`npm run dev`, the same condition as in server.js). Read
+ * at run time: a build made with NODE_ENV unset or "test" must still get the
+ * strict policy when served by `npm start`.
+ */
+const servedByViteDevServer = process.env.NODE_ENV === "development";
+
+/**
+ * The Content-Security-Policy of an answer (docs/decisions/012). Scripts only
+ * from our own origin or inline with this request's nonce; style attributes
+ * are allowed because charts and bars set widths and colours through them.
+ * Under Vite's dev server hot reload injects scripts and opens a web socket,
+ * so that policy allows inline scripts and eval; a production server never does.
+ */
+export function contentSecurityPolicy(nonce: string): string {
+  const scripts = servedByViteDevServer
+    ? "'self' 'unsafe-inline' 'unsafe-eval'"
+    : `'self' 'nonce-${nonce}'`;
+  return [
+    "default-src 'self'",
+    `script-src ${scripts}`,
+    "style-src 'self' 'unsafe-inline'",
+    "img-src 'self' data:",
+    "font-src 'self' data:",
+    `connect-src 'self'${servedByViteDevServer ? " ws: wss:" : ""}`,
+    "object-src 'none'",
+    "base-uri 'self'",
+    "form-action 'self'",
+    "frame-ancestors 'none'",
+  ].join("; ");
+}
+
+/**
+ * Security headers on every answer (pages, API, CSV downloads and, through
+ * server.js, the static files), and a fresh nonce for each request in
+ * `res.locals.cspNonce`. A header a route sets itself is kept. Safe to run
+ * twice on one request: the second run does nothing.
+ */
+export function securityHeaders(
+  _request: ExpressRequest,
+  response: ExpressResponse,
+  next: NextFunction,
+) {
+  if (response.locals.cspNonce) return next();
+  const nonce = randomBytes(16).toString("base64");
+  response.locals.cspNonce = nonce;
+  const defaults: Record<string, string> = {
+    "Content-Security-Policy": contentSecurityPolicy(nonce),
+    "X-Content-Type-Options": "nosniff",
+    "Referrer-Policy": "same-origin",
+    "X-Frame-Options": "DENY",
+    "Cross-Origin-Opener-Policy": "same-origin",
+    "Cross-Origin-Resource-Policy": "same-origin",
+  };
+  const writeHead = response.writeHead;
+  response.writeHead = function (
+    this: typeof response,
+    ...args: Parameters<typeof writeHead>
+  ) {
+    for (const [name, value] of Object.entries(defaults)) {
+      if (!this.hasHeader(name)) this.setHeader(name, value);
+    }
+    return writeHead.apply(this, args);
+  } as typeof writeHead;
+  next();
+}
+
+/** The origin the app is served at: APP_URL's when set, else the request's own (TRUST_PROXY decides whether X-Forwarded-Proto/-Host count). */
+function appOrigin(request: ExpressRequest): string | null {
+  try {
+    const configured = process.env.APP_URL?.trim();
+    if (configured) return new URL(configured).origin;
+    return new URL(`${request.protocol}://${request.host}`).origin;
+  } catch {
+    return null;
+  }
+}
+
+function originOf(value: string | undefined): string | null {
+  if (!value) return null;
+  try {
+    const origin = new URL(value).origin;
+    return origin === "null" ? null : origin;
+  } catch {
+    return null;
+  }
+}
+
+function carriesSessionCookie(request: ExpressRequest): boolean {
+  const cookies = request.get("Cookie");
+  return (
+    !!cookies &&
+    cookies
+      .split(";")
+      .some((pair) =>
+        pair.trimStart().startsWith(`${lucia.sessionCookieName}=`),
+      )
+  );
+}
+
+function usesBearerToken(request: ExpressRequest): boolean {
+  return (
+    request.path.startsWith("/api/") &&
+    /^Bearer\s+\S+$/i.test(request.get("Authorization") ?? "")
+  );
+}
+
+/** Why a request that changes something is refused as cross-site, or null when it may go on. */
+export function crossSiteRefusal(request: ExpressRequest): string | null {
+  if (request.method === "GET" || request.method === "HEAD") return null;
+  const expected = appOrigin(request);
+  const origin = request.get("Origin");
+  if (origin !== undefined) {
+    return origin !== "" && originOf(origin) === expected
+      ? null
+      : "This request came from another site and was refused. Open Turnledger at its own address and try again.";
+  }
+  // Browsers send Origin with every POST, PUT, PATCH and DELETE. Without it, a
+  // request riding on the session cookie must at least come from one of our pages.
+  if (!carriesSessionCookie(request) || usesBearerToken(request)) return null;
+  if (originOf(request.get("Referer")) === expected) return null;
+  return "A request signed in with the session cookie needs an Origin or Referer header from Turnledger's own address. Scripts: use a personal API token (Authorization: Bearer).";
+}
+
+/** Refuses cross-site writes with 403 before any route code runs (docs/decisions/012). */
+export function refuseCrossSiteRequests(
+  request: ExpressRequest,
+  response: ExpressResponse,
+  next: NextFunction,
+) {
+  const refusal = crossSiteRefusal(request);
+  if (!refusal) return next();
+  response.status(403);
+  if (request.path.startsWith("/api/")) {
+    response.json({ error: { message: refusal } });
+  } else {
+    response.type("text/plain; charset=utf-8").send(`${refusal}\n`);
   }
 }
 
@@ -18,6 +166,7 @@ if (process.env.TRUST_PROXY) {
   const hops = Number(process.env.TRUST_PROXY);
   app.set("trust proxy", Number.isNaN(hops) ? process.env.TRUST_PROXY : hops);
 }
+app.use(securityHeaders);
 app.use(compression());
 
 // Server-Timing: how long the app took for each answer (read by `npm run bench` and browsers' dev tools).
@@ -35,12 +184,15 @@ app.use((_request, response, next) => {
   next();
 });
 
+app.use(refuseCrossSiteRequests);
+
 app.use(
   createRequestHandler({
     build: () => import("virtual:react-router/server-build"),
-    getLoadContext(request) {
+    getLoadContext(request, response) {
       return {
         clientAddress: request.ip ?? request.socket.remoteAddress ?? "unknown",
+        cspNonce: String(response.locals.cspNonce),
       };
     },
   }),

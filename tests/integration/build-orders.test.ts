@@ -605,7 +605,11 @@ describe("bad input and roles", () => {
     expect(unknown.status).toBe(404);
     const notJson = await fetch(`${baseUrl()}/api/v1/build-orders`, {
       method: "POST",
-      headers: { Cookie: builder, "Content-Type": "application/json" },
+      headers: {
+        Cookie: builder,
+        "Content-Type": "application/json",
+        Origin: baseUrl(),
+      },
       body: "{",
     });
     expect(notJson.status).toBe(400);

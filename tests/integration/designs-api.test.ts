@@ -124,7 +124,7 @@ beforeAll(async () => {
   );
   const imported = await fetch(`${baseUrl()}/api/v1/price-lists`, {
     method: "POST",
-    headers: { Cookie: buyer },
+    headers: { Cookie: buyer, Origin: baseUrl() },
     body: form,
   });
   expect(imported.status, await imported.clone().text()).toBe(201);

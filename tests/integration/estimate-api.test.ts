@@ -122,14 +122,16 @@ describe("POST /api/v1/coil-estimates", () => {
         '"turns":40',
         raw.slice(1, -1),
       );
-      const response = await fetch(
-        `${(await import("../support/app-client")).baseUrl()}/api/v1/coil-estimates`,
-        {
-          method: "POST",
-          headers: { "Content-Type": "application/json", Cookie: cookie },
-          body,
+      const base = (await import("../support/app-client")).baseUrl();
+      const response = await fetch(`${base}/api/v1/coil-estimates`, {
+        method: "POST",
+        headers: {
+          "Content-Type": "application/json",
+          Cookie: cookie,
+          Origin: base,
         },
-      );
+        body,
+      });
       expect(response.status).toBe(400);
       expect(await response.text()).not.toContain('NaN"');
     }

@@ -114,17 +114,19 @@ describe("adding a magnet grade on /reference", () => {
     ]);
 
     // The estimate API takes the new grade at once: 1000 mm³ at 7.55 g/cm³ = 7.55 g.
-    const estimate = await fetch(
-      `${(await import("../support/app-client")).baseUrl()}/api/v1/magnet-estimates`,
-      {
-        method: "POST",
-        headers: { "Content-Type": "application/json", Cookie: buyerCookie },
-        body: JSON.stringify({
-          grade: grade.name,
-          shape: { kind: "block", lengthMm: 20, widthMm: 10, heightMm: 5 },
-        }),
+    const base = (await import("../support/app-client")).baseUrl();
+    const estimate = await fetch(`${base}/api/v1/magnet-estimates`, {
+      method: "POST",
+      headers: {
+        "Content-Type": "application/json",
+        Cookie: buyerCookie,
+        Origin: base,
       },
-    );
+      body: JSON.stringify({
+        grade: grade.name,
+        shape: { kind: "block", lengthMm: 20, widthMm: 10, heightMm: 5 },
+      }),
+    });
     expect(estimate.status).toBe(200);
     expect((await estimate.json()).massPerPieceKg).toBeCloseTo(0.00755, 12);
   });

@@ -1,7 +1,12 @@
 /** Debian's Chromium driven by playwright-core, and a signIn(role) helper for browser tests. */
 import fs from "node:fs";
 import path from "node:path";
-import { chromium, type Browser, type Page } from "playwright-core";
+import {
+  chromium,
+  type Browser,
+  type BrowserContext,
+  type Page,
+} from "playwright-core";
 import { inject } from "vitest";
 import type { Role } from "~/lib/roles";
 import { demoPassword, demoPeople } from "../../seed/demo-people";
@@ -13,7 +18,58 @@ export const screenshotFolder = path.resolve(
   "screenshots",
 );
 
-export function launchBrowser(): Promise<Browser> {
+/**
+ * Content-Security-Policy violations seen in any page of a browser from
+ * launchBrowser(): Chromium's console report and the page's
+ * `securitypolicyviolation` events. Closing the browser fails when there are
+ * any, so every browser test also proves the pages run under the policy.
+ */
+export function cspViolations(browser: Browser): string[] {
+  return violationsByBrowser.get(browser) ?? [];
+}
+
+const violationsByBrowser = new WeakMap<Browser, string[]>();
+
+function watchForCspViolations(context: BrowserContext, seen: string[]) {
+  const watch = (page: Page) => {
+    page.on("console", (message) => {
+      if (/Content Security Policy/i.test(message.text()))
+        seen.push(`${page.url()}: ${message.text()}`);
+    });
+  };
+  context.on("page", watch);
+  for (const page of context.pages()) watch(page);
+  return context.addInitScript(() => {
+    document.addEventListener("securitypolicyviolation", (event) => {
+      console.error(
+        `Content Security Policy violation: ${event.violatedDirective} blocked ${event.blockedURI || "inline code"}`,
+      );
+    });
+  });
+}
+
+export async function launchBrowser(): Promise<Browser> {
+  const browser = await launchChromium();
+  const seen: string[] = [];
+  violationsByBrowser.set(browser, seen);
+  const newContext = browser.newContext.bind(browser);
+  browser.newContext = async (...args) => {
+    const context = await newContext(...args);
+    await watchForCspViolations(context, seen);
+    return context;
+  };
+  const close = browser.close.bind(browser);
+  browser.close = async (...args) => {
+    await close(...args);
+    if (seen.length > 0)
+      throw new Error(
+        `Content-Security-Policy violations in the browser:\n${seen.join("\n")}`,
+      );
+  };
+  return browser;
+}
+
+function launchChromium(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     args: [
