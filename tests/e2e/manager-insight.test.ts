@@ -114,29 +114,11 @@ afterAll(async () => {
   await closeTestDatabase();
 });
 
-/**
- * A hydration report whose every difference is a `nonce` attribute. Browsers hide a
- * nonce after parsing (the DOM reads nonce=""), so React reports the Content-Security-
- * Policy nonce on the document's <link>/<script> tags (root.tsx, decision 012) although
- * nothing differs; any other difference still fails the test.
- */
-function onlyNonceDiffers(text: string): boolean {
-  if (!text.includes("hydration-mismatch")) return false;
-  const differences = text
-    .split("\n")
-    .filter((line) => /^[+-] {2,}\S/.test(line));
-  return (
-    differences.length > 0 &&
-    differences.every((line) => /^[+-]\s+nonce=/.test(line))
-  );
-}
-
 /** Console errors and page errors (a failed hydration shows here). */
 function collectErrors(page: Page): string[] {
   const errors: string[] = [];
   page.on("console", (message) => {
-    if (message.type() === "error" && !onlyNonceDiffers(message.text()))
-      errors.push(message.text());
+    if (message.type() === "error") errors.push(message.text());
   });
   page.on("pageerror", (error) => errors.push(error.message));
   return errors;
