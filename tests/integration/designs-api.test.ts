@@ -335,6 +335,36 @@ describe("designs API", () => {
     };
     expect(revision.ratedCurrentA).toBe(10);
     expect(revision.lines).toEqual([]);
+
+    // A magnet item on a coil line, and zero turns: refused field by field, nothing written.
+    const magnetCoil = await sendJson(
+      "PUT",
+      `/api/v1/designs/${id}/revisions/1`,
+      { lines: [{ ...workedCoil(), sku: magnetSku }] },
+      builder,
+    );
+    expect(magnetCoil.status).toBe(400);
+    expect(
+      ((await magnetCoil.json()) as { error: { message: string } }).error
+        .message,
+    ).toContain("is not a magnet wire item");
+    const zeroTurns = await sendJson(
+      "PUT",
+      `/api/v1/designs/${id}/revisions/1`,
+      { lines: [{ ...workedCoil(), turns: 0 }] },
+      builder,
+    );
+    expect(zeroTurns.status).toBe(400);
+    expect(
+      Object.keys(
+        ((await zeroTurns.json()) as { error: { fields: object } }).error
+          .fields,
+      ),
+    ).toEqual(["lines.0.turns"]);
+    const after = (await (
+      await get(`/api/v1/designs/${id}/revisions/1`, builder)
+    ).json()) as { lines: unknown[] };
+    expect(after.lines).toEqual([]);
   });
 
   it("locks a released revision; a new revision starts as a copy", async () => {
