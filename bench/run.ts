@@ -28,6 +28,18 @@ const figures: Figure[] = [];
 if (runs("coil")) figures.push(benchPureCoilEstimates());
 
 const environment = await startTestEnvironment();
+// The app refuses cookie-signed writes without its own Origin (decision 012), as a browser
+// sends it; the benchmarks' requests say where they come from the same way.
+const plainFetch = globalThis.fetch;
+globalThis.fetch = (input, init = {}) => {
+  const url = String(input instanceof Request ? input.url : input);
+  const method = (init.method ?? "GET").toUpperCase();
+  if (method === "GET" || !url.startsWith(environment.baseUrl))
+    return plainFetch(input, init);
+  const headers = new Headers(init.headers);
+  headers.set("Origin", environment.baseUrl);
+  return plainFetch(input, { ...init, headers });
+};
 try {
   const signIn = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
     method: "POST",

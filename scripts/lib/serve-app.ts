@@ -15,8 +15,8 @@ export async function serveApp(
 ): Promise<void> {
   const databaseUrl = await resolveDatabaseUrl();
   await migrateDatabase(databaseUrl);
-  await seedWhenEmpty(databaseUrl);
 
+  // The mail fake first: the demo seed's low-stock alerts are e-mailed through it.
   let mailFake: MailFake | null = null;
   let smtpUrl = process.env.SMTP_URL;
   if (!smtpUrl) {
@@ -35,6 +35,8 @@ export async function serveApp(
       `[turnledger] mail fake on ${smtpUrl}; every message shows in the admin's Outbox.`,
     );
   }
+  process.env.SMTP_URL ??= smtpUrl;
+  await seedWhenEmpty(databaseUrl);
 
   const bin = (name: string) =>
     path.join(projectRoot, "node_modules", ".bin", name);
