@@ -33,8 +33,7 @@ function load(
         connections,
         duration: durationSeconds,
         headers,
-        // Bounded in count too, whatever the speed of the machine.
-        amount: 200_000,
+        // Bounded by time (autocannon's `amount` would override the duration).
       },
       (error, result) => {
         if (error) return reject(error);
