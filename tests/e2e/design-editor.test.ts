@@ -1,7 +1,9 @@
 /**
  * The builder's design screens in Chromium: create a design, add a coil line,
  * watch its copper figures and the cost per motor change as the end-turn
- * length changes (no page reload), release it and find it read-only.
+ * length changes (no page reload), release it and find it read-only, then
+ * build two motors of it and hold their stock (the storekeeper's issue is in
+ * build-order-journey.test.ts).
  */
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -72,6 +74,20 @@ beforeAll(async () => {
     storekeeper,
   );
   expect(receipt.status, await receipt.clone().text()).toBe(201);
+  // Magnets on hand too, so the build order at the end can hold everything it needs.
+  const magnets = await sendJson(
+    "POST",
+    "/api/v1/stock-movements",
+    {
+      type: "receipt",
+      sku: magnetSku,
+      quantity: 100,
+      location: await createLocation(uniqueCode("EM")),
+      unitCost: 0.9,
+    },
+    storekeeper,
+  );
+  expect(magnets.status, await magnets.clone().text()).toBe(201);
   page = await signIn(browser, "builder");
 });
 afterAll(async () => {
@@ -342,5 +358,35 @@ describe("design editor", () => {
       await page.waitForURL(/page=\d+/);
     }
     await saveScreenshot(page, "designs-list");
+  });
+
+  it("builds two motors of the released revision and holds their stock", async () => {
+    await page
+      .getByRole("navigation", { name: "Main" })
+      .getByRole("link", { name: "Build orders" })
+      .click();
+    await page
+      .getByRole("heading", { name: "Build orders", level: 1 })
+      .waitFor();
+    await page
+      .getByLabel("Design revision")
+      .selectOption({ label: `${designName} · rev. 1` });
+    await page.getByLabel("Motors to build").fill("2");
+    await page.getByRole("button", { name: "Create build order" }).click();
+    await page
+      .getByRole("heading", { level: 1, name: new RegExp(designName) })
+      .waitFor();
+    // 14 magnets per motor × 2 motors (the magnet line above).
+    expect(
+      await page
+        .getByRole("row", { name: new RegExp(magnetSku) })
+        .textContent(),
+    ).toContain("28");
+    await page.getByRole("button", { name: "Reserve stock" }).click();
+    const held = page.getByRole("status").filter({ hasText: "Held for" });
+    await held.waitFor();
+    expect(await held.textContent()).toContain(magnetSku);
+    expect(await page.getByText("Stock held").first().isVisible()).toBe(true);
+    await saveScreenshot(page, "design-editor-build-order");
   });
 });
