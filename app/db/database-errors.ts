@@ -1,15 +1,29 @@
-/** Error codes mysql2 reports when the database cannot be reached. */
+/**
+ * Telling "the database is down or unreachable" apart from every other
+ * database error. Such an error is answered with 503 "database unavailable"
+ * (JSON for /api/…, the error page otherwise), never with 500: see
+ * docs/decisions/013-database-and-mail-faults.md.
+ */
+
+/** What the user reads while the database cannot be reached. */
+export const databaseUnavailableMessage =
+  "The database is unavailable. Try again in a moment.";
+
+/** Error codes mysql2 reports when the database cannot be reached or went away. */
 const unavailableCodes = new Set([
   "ECONNREFUSED",
   "ECONNRESET",
+  "ECONNABORTED",
   "ETIMEDOUT",
   "EPIPE",
-  "PROTOCOL_CONNECTION_LOST",
-  "ER_SERVER_SHUTDOWN",
-  "ER_CON_COUNT_ERROR",
-  "PROTOCOL_SEQUENCE_TIMEOUT",
   "ENOTFOUND",
   "EHOSTUNREACH",
+  "PROTOCOL_CONNECTION_LOST",
+  "PROTOCOL_SEQUENCE_TIMEOUT",
+  // The server is shutting down, or ended this connection on its way down.
+  "ER_SERVER_SHUTDOWN",
+  "ER_CONNECTION_KILLED",
+  "ER_CON_COUNT_ERROR",
 ]);
 
 /** True when an error means "the database is down or unreachable". */
@@ -18,10 +32,29 @@ export function isDatabaseUnavailable(error: unknown): boolean {
   for (let depth = 0; current && depth < 5; depth += 1) {
     const code = (current as { code?: unknown }).code;
     if (typeof code === "string" && unavailableCodes.has(code)) return true;
+    // mysql2 marks errors that end the connection (network, protocol) as fatal.
     if ((current as { fatal?: unknown }).fatal === true) return true;
     current = (current as { cause?: unknown }).cause;
   }
   return false;
+}
+
+/**
+ * A short account of why the database is unavailable, for the log: the code and
+ * message of the driver's error, never the (possibly huge) query the
+ * query builder wraps around it.
+ */
+export function unavailableReason(error: unknown): string {
+  let current: unknown = error;
+  for (let depth = 0; current && depth < 5; depth += 1) {
+    const code = (current as { code?: unknown }).code;
+    if (typeof code === "string" || (current as { fatal?: unknown }).fatal) {
+      const message = (current as { message?: unknown }).message;
+      return `${typeof code === "string" ? code : "fatal"}: ${String(message).slice(0, 200)}`;
+    }
+    current = (current as { cause?: unknown }).cause;
+  }
+  return "unknown";
 }
 
 /** True when an insert or update broke a unique key. */

@@ -1,6 +1,7 @@
 /** Helpers shared by the JSON API routes under /api/v1: one error shape everywhere. */
 import type { z } from "zod";
 import { searchParamsObject } from "./search-params";
+import { databaseUnavailableMessage } from "~/db/database-errors";
 import { isEngineeringInputError } from "~/engineering/errors";
 
 export function apiError(
@@ -13,6 +14,13 @@ export function apiError(
     { error: fields ? { message, fields } : { message } },
     { status, headers },
   );
+}
+
+/** 503 "database unavailable" with Retry-After, for an API request made while the database is down. */
+export function databaseUnavailableAnswer(): Response {
+  return apiError(503, databaseUnavailableMessage, undefined, {
+    "Retry-After": "5",
+  });
 }
 
 /** Reads and validates a JSON body; throws a 400 answer naming each bad field. */

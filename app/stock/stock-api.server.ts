@@ -1,9 +1,16 @@
-import { isDuplicateKey } from "~/db/database-errors";
+import {
+  isDatabaseUnavailable,
+  isDuplicateKey,
+  unavailableReason,
+} from "~/db/database-errors";
 import { isEngineeringInputError } from "~/engineering/errors";
-import { apiError } from "~/lib/api.server";
+import { apiError, databaseUnavailableAnswer } from "~/lib/api.server";
 import { isStockError } from "./stock-errors";
 
-/** Runs stock work for an API route; the ledger's refusals become 400/404/409 JSON answers. */
+/**
+ * Runs stock work for an API route; the ledger's refusals become 400/404/409 JSON answers,
+ * and a database lost on the way (its transaction rolled back) a 503 JSON answer.
+ */
 export async function answerStockError(
   work: () => Promise<Response>,
 ): Promise<Response> {
@@ -21,6 +28,10 @@ export async function answerStockError(
       return apiError(400, error.message, { [error.field]: [error.message] });
     }
     if (isDuplicateKey(error)) return apiError(409, "That already exists.");
+    if (isDatabaseUnavailable(error)) {
+      console.warn(`[db] database unavailable: ${unavailableReason(error)}`);
+      return databaseUnavailableAnswer();
+    }
     throw error;
   }
 }

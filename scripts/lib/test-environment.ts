@@ -31,8 +31,10 @@ async function waitForHealth(
 ): Promise<void> {
   const started = Date.now();
   while (Date.now() - started < 60_000) {
-    if (server.exitCode !== null)
-      throw new Error(`the test server exited with ${server.exitCode}`);
+    if (server.exitCode !== null || server.signalCode !== null)
+      throw new Error(
+        `the test server exited with ${server.exitCode ?? server.signalCode}`,
+      );
     try {
       const response = await fetch(`${baseUrl}/healthz`);
       if (response.ok) return;
@@ -46,12 +48,21 @@ async function waitForHealth(
   );
 }
 
+/** An app server started by `startAppServer`. */
+export interface AppServer {
+  baseUrl: string;
+  pid: number;
+  /** True while the process has not exited. */
+  running(): boolean;
+  stop(): Promise<void>;
+}
+
 /** Serves the built app (build/) on a port, as `npm start` does; waits until it answers. */
 export async function startAppServer(options: {
   port: number;
   databaseUrl: string;
   smtpUrl: string;
-}): Promise<{ baseUrl: string; pid: number; stop(): Promise<void> }> {
+}): Promise<AppServer> {
   const baseUrl = `http://localhost:${options.port}`;
   const server = spawn(
     process.execPath,
@@ -70,16 +81,22 @@ export async function startAppServer(options: {
       },
     },
   );
-  await waitForHealth(baseUrl, server);
-  return {
-    baseUrl,
-    pid: server.pid ?? 0,
-    async stop() {
-      if (server.exitCode !== null) return;
-      server.kill("SIGTERM");
-      await new Promise((resolve) => server.once("exit", resolve));
-    },
+  const running = () => server.exitCode === null && server.signalCode === null;
+  const exited = new Promise<void>((resolve) =>
+    server.once("exit", () => resolve()),
+  );
+  const stop = async () => {
+    if (!running()) return;
+    server.kill("SIGTERM");
+    await exited;
   };
+  try {
+    await waitForHealth(baseUrl, server);
+  } catch (error) {
+    await stop();
+    throw error;
+  }
+  return { baseUrl, pid: server.pid ?? 0, running, stop };
 }
 
 export async function startTestEnvironment(): Promise<TestEnvironment> {

@@ -1,0 +1,91 @@
+/**
+ * One place that turns "the database went away" into 503 for every route.
+ *
+ * The guard already answers 503 when the database is down before a request
+ * starts (its first query is the session check). This covers the rest: the
+ * database lost in the middle of a loader or action, after the guard. Every
+ * route module's `loader` and `action` in the server build is wrapped; an
+ * error that `isDatabaseUnavailable` recognises (the transaction it ended has
+ * been rolled back by MariaDB) is thrown again as
+ *
+ * - `/api/…` and other resource routes: a JSON 503
+ *   `{ error: { message: "The database is unavailable. Try again in a moment." } }`;
+ * - pages: a 503 route error, which `app/root.tsx`'s error boundary shows as
+ *   "Database unavailable" (and which looks again every few seconds).
+ *
+ * Every other error passes through untouched. React Router's own hooks cannot
+ * do this: `handleError` only logs, and without middleware nothing else sees a
+ * loader's error before it becomes a 500. See
+ * docs/decisions/013-database-and-mail-faults.md.
+ *
+ * Hook (server/app.ts):
+ *   build: () => import("virtual:react-router/server-build").then(answerDatabaseOutages),
+ */
+import { data, type ServerBuild } from "react-router";
+import {
+  databaseUnavailableMessage,
+  isDatabaseUnavailable,
+  unavailableReason,
+} from "~/db/database-errors";
+
+type RouteEntry = ServerBuild["routes"][string];
+type RouteModule = NonNullable<RouteEntry>["module"];
+type Handler = NonNullable<RouteModule["loader"]>;
+
+const headers = { "Retry-After": "5", "Cache-Control": "no-store" };
+
+/** What a request gets when the database was lost while answering it. */
+export function databaseUnavailableError(
+  request: Request,
+  resourceRoute: boolean,
+): unknown {
+  const { pathname } = new URL(request.url);
+  if (resourceRoute || pathname.startsWith("/api/")) {
+    return Response.json(
+      { error: { message: databaseUnavailableMessage } },
+      { status: 503, headers },
+    );
+  }
+  return data(
+    { message: databaseUnavailableMessage },
+    { status: 503, headers },
+  );
+}
+
+function answering503(handler: Handler, resourceRoute: boolean): Handler {
+  return async (args) => {
+    try {
+      return await handler(args);
+    } catch (error) {
+      // Responses and route errors (redirects, 4xx, the guard's own 503) carry no code.
+      if (!isDatabaseUnavailable(error)) throw error;
+      console.warn(
+        `[db] database unavailable during ${args.request.method} ${new URL(args.request.url).pathname}: ${unavailableReason(error)}`,
+      );
+      throw databaseUnavailableError(args.request, resourceRoute);
+    }
+  };
+}
+
+const wrapped = new WeakMap<ServerBuild, ServerBuild>();
+
+/** The server build with every loader and action answering 503 when the database is lost. */
+export function answerDatabaseOutages(build: ServerBuild): ServerBuild {
+  const known = wrapped.get(build);
+  if (known) return known;
+  const routes: ServerBuild["routes"] = {};
+  for (const [id, route] of Object.entries(build.routes)) {
+    if (!route) continue;
+    const resourceRoute =
+      route.module.default == null && route.module.ErrorBoundary == null;
+    const module: RouteModule = { ...route.module };
+    if (module.loader)
+      module.loader = answering503(module.loader, resourceRoute);
+    if (module.action)
+      module.action = answering503(module.action, resourceRoute);
+    routes[id] = { ...route, module };
+  }
+  const answering: ServerBuild = { ...build, routes };
+  wrapped.set(build, answering);
+  return answering;
+}
