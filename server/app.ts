@@ -8,6 +8,7 @@ import express, {
   type Response as ExpressResponse,
 } from "express";
 import { lucia } from "~/auth/lucia.server";
+import { answerDatabaseOutages } from "./database-unavailable";
 
 declare module "react-router" {
   interface AppLoadContext {
@@ -188,7 +189,8 @@ app.use(refuseCrossSiteRequests);
 
 app.use(
   createRequestHandler({
-    build: () => import("virtual:react-router/server-build"),
+    build: () =>
+      import("virtual:react-router/server-build").then(answerDatabaseOutages),
     getLoadContext(request, response) {
       return {
         clientAddress: request.ip ?? request.socket.remoteAddress ?? "unknown",

@@ -121,6 +121,8 @@ export async function startTestEnvironment(): Promise<TestEnvironment> {
       {
         cwd: projectRoot,
         stdio: ["ignore", "ignore", "inherit"],
+        // Vitest sets NODE_ENV=test; the app under test is the production build.
+        env: { ...process.env, NODE_ENV: "production" },
       },
     );
   }

@@ -280,6 +280,53 @@ describe("MariaDB stops during a reservation", () => {
     orderId = ((await order.json()) as { id: number }).id;
   });
 
+  /**
+   * Sends a reservation, waits until it has written every balance and
+   * reservation row and waits on its last insert, then stops MariaDB cleanly
+   * (SHUTDOWN as root) under it; the answer must come within 5 s. Another
+   * session holds the builder's user row: the order's event names the builder
+   * (a foreign key, so a shared lock on that row) and waits for it.
+   */
+  async function stopMariadbDuring(reserve: () => Promise<Response>) {
+    const blocker = await database.connect();
+    const root = await database.root();
+    try {
+      await blocker.beginTransaction();
+      await blocker.query(
+        "SELECT id FROM users WHERE id = 'demo-03-builder' FOR UPDATE",
+      );
+      let answered = false;
+      const answer = timed(reserve()).finally(() => (answered = true));
+      const waiting = await waitForTransaction(
+        root,
+        { rowsModified: 2 * places, lockWait: true },
+        () => answered,
+      );
+      expect(waiting.rowsModified).toBeGreaterThanOrEqual(2 * places);
+      const stoppedAt = performance.now();
+      await root.query("SHUTDOWN");
+      const result = await answer;
+      expect(performance.now() - stoppedAt).toBeLessThan(5_000);
+      return result;
+    } finally {
+      blocker.destroy();
+      root.destroy();
+    }
+  }
+
+  it("the order page's 'Hold stock' form answers a 503 page when stopped mid-write; nothing is held once MariaDB is back", async () => {
+    const before = await heldFigures();
+    const { response, body } = await stopMariadbDuring(() =>
+      http.postForm(`/build-orders/${orderId}`, { intent: "reserve" }, builder),
+    );
+    expect(response.status, body).toBe(503);
+    expect(body).toContain("Database unavailable");
+    await database.shutdown();
+    await database.restart();
+    await expectRecoveredWithoutRestart();
+    expect(await heldFigures()).toEqual(before);
+  });
+
   it("answers 503 when stopped after its writes, and 503 within seconds while down; nothing is held once MariaDB is back", async () => {
     const before = await heldFigures();
     expect(before).toMatchObject({
@@ -290,43 +337,11 @@ describe("MariaDB stops during a reservation", () => {
       status: "draft",
     });
 
-    // Another session holds the builder's user row. The reservation writes every
-    // balance, reservation row, item and line, then waits at its last insert (the
-    // order's event names the builder: a foreign key, so a shared lock on that row).
-    const blocker = await database.connect();
-    const root = await database.root();
-    try {
-      await blocker.beginTransaction();
-      await blocker.query(
-        "SELECT id FROM users WHERE id = 'demo-03-builder' FOR UPDATE",
-      );
-      let answered = false;
-      const reserve = timed(
-        http.send(
-          "POST",
-          `/api/v1/build-orders/${orderId}/reserve`,
-          {},
-          builder,
-        ),
-      ).finally(() => (answered = true));
-      const waiting = await waitForTransaction(
-        root,
-        { rowsModified: 2 * places, lockWait: true },
-        () => answered,
-      );
-      expect(waiting.rowsModified).toBeGreaterThanOrEqual(2 * places);
-
-      // Now stop MariaDB cleanly (SHUTDOWN as root) under the waiting reservation.
-      const stoppedAt = performance.now();
-      await root.query("SHUTDOWN");
-      const { response, body } = await reserve;
-      expect(response.status, body).toBe(503);
-      expect(JSON.parse(body)).toEqual(unavailable);
-      expect(performance.now() - stoppedAt).toBeLessThan(5_000);
-    } finally {
-      blocker.destroy();
-      root.destroy();
-    }
+    const { response, body } = await stopMariadbDuring(() =>
+      http.send("POST", `/api/v1/build-orders/${orderId}/reserve`, {}, builder),
+    );
+    expect(response.status, body).toBe(503);
+    expect(JSON.parse(body)).toEqual(unavailable);
     await database.shutdown(); // waits until mariadbd has exited
     expect(database.running()).toBe(false);
 

@@ -225,6 +225,24 @@ export class AppClient {
     });
   }
 
+  /** Posts an HTML form the way a browser without JavaScript does. */
+  postForm(
+    path: string,
+    fields: Record<string, string>,
+    cookie?: string,
+  ): Promise<Response> {
+    return fetch(`${this.baseUrl}${path}`, {
+      method: "POST",
+      redirect: "manual",
+      headers: {
+        "Content-Type": "application/x-www-form-urlencoded",
+        Origin: this.baseUrl,
+        ...(cookie ? { Cookie: cookie } : {}),
+      },
+      body: new URLSearchParams(fields),
+    });
+  }
+
   /** Signs in through the API; the session cookie's name=value. */
   async signIn(email: string, password: string): Promise<string> {
     const response = await this.send("POST", "/api/v1/sessions", {
