@@ -25,14 +25,19 @@ if (developing) {
     }
   });
 } else {
-  const built = await import("./build/server/index.js");
+  // BUILD_DIRECTORY as in react-router.config.ts.
+  const buildDirectory = process.env.BUILD_DIRECTORY ?? "build";
+  const built = await import(`./${buildDirectory}/server/index.js`);
   // The security headers (docs/decisions/012) go on the static files too.
   app.use(built.securityHeaders);
   app.use(
     "/assets",
-    express.static("build/client/assets", { immutable: true, maxAge: "1y" }),
+    express.static(`${buildDirectory}/client/assets`, {
+      immutable: true,
+      maxAge: "1y",
+    }),
   );
-  app.use(express.static("build/client", { maxAge: "1h" }));
+  app.use(express.static(`${buildDirectory}/client`, { maxAge: "1h" }));
   app.use(built.app);
 }
 

@@ -139,13 +139,15 @@ function Figure({
       aria-label={label}
       className={`rounded-md border border-rule bg-white/60 px-4 py-3 ${wide ? "sm:col-span-2 xl:col-span-4" : ""}`}
     >
-      <dt className="text-xs font-medium uppercase tracking-wide text-graphite-500">
-        {label}
-      </dt>
-      <dd className="mt-1 text-xl font-semibold tabular-nums">{value}</dd>
-      {children ? (
-        <dd className="mt-1 text-xs text-graphite-500">{children}</dd>
-      ) : null}
+      <dl>
+        <dt className="text-xs font-medium uppercase tracking-wide text-graphite-500">
+          {label}
+        </dt>
+        <dd className="mt-1 text-xl font-semibold tabular-nums">{value}</dd>
+        {children ? (
+          <dd className="mt-1 text-xs text-graphite-500">{children}</dd>
+        ) : null}
+      </dl>
     </div>
   );
 }
@@ -164,7 +166,7 @@ export function DesignCostFigures({
   const estimate = costing.torqueEstimate;
   const unpriced = costing.unpriced.length;
   return (
-    <dl className="grid items-start gap-3 sm:grid-cols-2 xl:grid-cols-4">
+    <div className="grid items-start gap-3 sm:grid-cols-2 xl:grid-cols-4">
       <Figure
         label="Cost per motor"
         value={money(costing.costPerMotor, currency)}
@@ -227,7 +229,7 @@ export function DesignCostFigures({
           </>
         )}
       </Figure>
-    </dl>
+    </div>
   );
 }
 

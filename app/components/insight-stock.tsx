@@ -304,7 +304,13 @@ export function StockTrend({
           movement.
         </p>
       </div>
-      <div className="max-h-[28rem] overflow-y-auto print:max-h-none print:overflow-visible">
+      {/* Scrolls on its own: reachable by keyboard (Tab, then the arrow keys). */}
+      <div
+        tabIndex={0}
+        role="region"
+        aria-label="Stock value by week, table"
+        className="max-h-[28rem] overflow-y-auto print:max-h-none print:overflow-visible"
+      >
         <DataTable
           caption={`Stock value at the end of each week, in ${currency}`}
           rows={[...trend].reverse()}

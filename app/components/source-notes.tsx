@@ -32,7 +32,7 @@ export function SourceRef({
   return (
     <a
       href={`#${noteId(prefix, number)}`}
-      className="text-copper-700 underline-offset-2 hover:underline"
+      className="text-copper-700 underline underline-offset-2 hover:decoration-2"
       aria-label={`Source ${number}`}
       title={source}
     >

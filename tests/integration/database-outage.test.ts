@@ -41,7 +41,9 @@ class DatabaseRelay {
   }
 }
 
-const relayPort = 3199;
+// Ports follow the run's own TEST_PORT, so a second run beside this one gets others.
+const testPort = Number(process.env.TEST_PORT ?? 3100);
+const relayPort = testPort + 99;
 let relay: DatabaseRelay;
 let app: { baseUrl: string; stop(): Promise<void> };
 let cookie = "";
@@ -56,7 +58,7 @@ beforeAll(async () => {
   const relayedUrl = new URL(databaseUrl);
   relayedUrl.port = String(relayPort);
   app = await startAppServer({
-    port: 3102,
+    port: testPort + 2,
     databaseUrl: relayedUrl.toString(),
     smtpUrl: inject("smtpUrl"),
   });
