@@ -1,0 +1,88 @@
+/**
+ * Using a page by keyboard alone, for browser tests: focus moves only by Tab
+ * (never by clicking or `locator.focus()`), fields are typed into, choices made
+ * with the arrow keys and buttons pressed with Enter or Space. A control that
+ * Tab never reaches fails the test, so a form that needs a mouse cannot pass.
+ */
+import type { Locator, Page } from "playwright-core";
+
+/** How many Tab presses to try before deciding a control cannot be reached. */
+const maxTabs = 200;
+
+/** Presses Tab (Shift+Tab with `backwards`) until `target` has the focus; throws when it never does. */
+export async function tabTo(
+  page: Page,
+  target: Locator,
+  options: { backwards?: boolean } = {},
+): Promise<void> {
+  const handle = await target.elementHandle();
+  if (!handle) throw new Error(`tabTo: ${target} is not on the page`);
+  for (let presses = 0; presses < maxTabs; presses += 1) {
+    const focused = await handle.evaluate(
+      (element) => element === document.activeElement,
+    );
+    if (focused) return;
+    await page.keyboard.press(options.backwards ? "Shift+Tab" : "Tab");
+  }
+  throw new Error(
+    `tabTo: ${maxTabs} presses of Tab never reached ${target}: it cannot be used by keyboard`,
+  );
+}
+
+/** Tabs to a text field, selects what is in it and types `text` in its place. */
+export async function typeInto(
+  page: Page,
+  field: Locator,
+  text: string,
+): Promise<void> {
+  await tabTo(page, field);
+  await page.keyboard.press("ControlOrMeta+A");
+  await page.keyboard.press("Delete");
+  if (text !== "") await page.keyboard.type(text);
+}
+
+/**
+ * Tabs to a <select> and picks the option whose label is `label` with the
+ * arrow keys (Home first, then Down until it is chosen).
+ */
+export async function chooseOption(
+  page: Page,
+  select: Locator,
+  label: string,
+): Promise<void> {
+  await tabTo(page, select);
+  const labels = await select
+    .locator("option")
+    .evaluateAll((options) =>
+      options.map((option) => (option.textContent ?? "").trim()),
+    );
+  const index = labels.indexOf(label);
+  if (index < 0)
+    throw new Error(
+      `chooseOption: no option "${label}" (there are: ${labels.join(", ")})`,
+    );
+  await page.keyboard.press("Home");
+  for (let step = 0; step < index; step += 1)
+    await page.keyboard.press("ArrowDown");
+  const chosen = await select.evaluate(
+    (element) =>
+      (element as HTMLSelectElement).selectedOptions[0]?.textContent?.trim() ??
+      "",
+  );
+  if (chosen !== label)
+    throw new Error(
+      `chooseOption: the arrow keys chose "${chosen}", not "${label}"`,
+    );
+}
+
+/** Tabs to a button (or link) and presses Enter on it. */
+export async function press(page: Page, control: Locator): Promise<void> {
+  await tabTo(page, control);
+  await page.keyboard.press("Enter");
+}
+
+/** Tabs to a checkbox or radio button and toggles it with Space. */
+export async function toggle(page: Page, control: Locator): Promise<void> {
+  await tabTo(page, control);
+  await page.keyboard.press("Space");
+}
