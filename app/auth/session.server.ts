@@ -1,8 +1,10 @@
 import { eq } from "drizzle-orm";
+import { generateIdFromEntropySize } from "lucia";
 import { db } from "~/db/client.server";
 import { userRoles } from "~/db/schema";
 import type { Role } from "~/lib/roles";
 import { userFromApiToken } from "./api-tokens.server";
+import { hashToken } from "./email-tokens.server";
 import { lucia } from "./lucia.server";
 
 export interface SessionUser {
@@ -20,6 +22,25 @@ interface SessionState {
 
 const stateByRequest = new WeakMap<Request, Promise<SessionState>>();
 
+/**
+ * The cookie carries a random token; lucia's sessions table keys the session by
+ * the token's SHA-256 only. Whoever reads the table (a backup, a copy, a leaked
+ * query) learns no cookie that signs anyone in, and a stored id sent back as a
+ * cookie is hashed again and found nowhere.
+ */
+function sessionIdOf(token: string): string {
+  return hashToken(token);
+}
+
+/** 200 random bits, base32: what lucia itself makes a session id from. */
+function newSessionToken(): string {
+  return generateIdFromEntropySize(25);
+}
+
+function sessionTokenFrom(request: Request): string | null {
+  return lucia.readSessionCookie(request.headers.get("Cookie") ?? "");
+}
+
 function bearerToken(request: Request): string | null {
   const header = request.headers.get("Authorization");
   const match = header?.match(/^Bearer\s+(\S+)$/i);
@@ -32,11 +53,11 @@ async function readSession(request: Request): Promise<SessionState> {
     // Scripts and tools: a personal API token stands in for the session cookie.
     return { user: await userFromApiToken(token), setCookie: null };
   }
-  const sessionId = lucia.readSessionCookie(
-    request.headers.get("Cookie") ?? "",
+  const sessionToken = sessionTokenFrom(request);
+  if (!sessionToken) return { user: null, setCookie: null };
+  const { session, user } = await lucia.validateSession(
+    sessionIdOf(sessionToken),
   );
-  if (!sessionId) return { user: null, setCookie: null };
-  const { session, user } = await lucia.validateSession(sessionId);
   if (!session || !user) {
     return {
       user: null,
@@ -62,8 +83,9 @@ async function readSession(request: Request): Promise<SessionState> {
       name: user.name,
       roles: roleRows.map((row) => row.role),
     },
+    // Extended: the same token again, with the new expiry (session.id is its hash).
     setCookie: session.fresh
-      ? lucia.createSessionCookie(session.id).serialize()
+      ? lucia.createSessionCookie(sessionToken).serialize()
       : null,
   };
 }
@@ -80,16 +102,19 @@ export function getSessionState(request: Request): Promise<SessionState> {
 
 /** Starts a session for the user; returns the Set-Cookie header value. */
 export async function startSession(userId: string): Promise<string> {
-  const session = await lucia.createSession(userId, {});
-  return lucia.createSessionCookie(session.id).serialize();
+  const sessionToken = newSessionToken();
+  await lucia.createSession(
+    userId,
+    {},
+    { sessionId: sessionIdOf(sessionToken) },
+  );
+  return lucia.createSessionCookie(sessionToken).serialize();
 }
 
 /** Ends the request's session; returns the Set-Cookie header value that clears it. */
 export async function endSession(request: Request): Promise<string> {
-  const sessionId = lucia.readSessionCookie(
-    request.headers.get("Cookie") ?? "",
-  );
-  if (sessionId) await lucia.invalidateSession(sessionId);
+  const sessionToken = sessionTokenFrom(request);
+  if (sessionToken) await lucia.invalidateSession(sessionIdOf(sessionToken));
   return lucia.createBlankSessionCookie().serialize();
 }
 

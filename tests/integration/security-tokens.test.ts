@@ -2,14 +2,17 @@
  * E-mailed links, personal API tokens and sessions, beyond what the account
  * tests check: links are single-use (invitations too), a newer link ends the
  * older one, an expired or deactivated one is refused, a new password ends
- * every session, a token is shown once, and no token is kept in clear text in
- * any table that holds it. See docs/decisions/003 and 012.
+ * every session, a token is shown once, no token is kept in clear text in
+ * any table that holds it, and a session id read from the table signs no one
+ * in. See docs/decisions/003, 012 and 015.
  */
+import { createHash } from "node:crypto";
 import { afterAll, describe, expect, it } from "vitest";
 import {
   baseUrl,
   get,
   postForm,
+  sendJson,
   sessionCookieFrom,
   signIn,
   uniqueEmail,
@@ -56,6 +59,21 @@ function setPassword(token: string, password: string) {
     password,
     confirmPassword: password,
   });
+}
+
+const sessionCookieName = "turnledger_session";
+
+function sha256Hex(text: string): string {
+  return createHash("sha256").update(text).digest("hex");
+}
+
+/** The ids of the person's rows in lucia's sessions table. */
+async function storedSessionIds(userId: string): Promise<string[]> {
+  const [rows] = await testDatabase().query(
+    "SELECT id FROM sessions WHERE user_id = ?",
+    [userId],
+  );
+  return (rows as { id: string }[]).map((row) => row.id);
 }
 
 /** Every text column of every table in the test database. */
@@ -266,15 +284,21 @@ describe("no token in clear text", () => {
     ]);
   });
 
-  it("anywhere but lucia's session table, for a session cookie", async () => {
+  it("in any table, sessions included, for a session cookie: the table holds its SHA-256", async () => {
     const email = uniqueEmail("session-scan");
-    await createPerson({ email, password: "token-password", roles: ["buyer"] });
+    const userId = await createPerson({
+      email,
+      password: "token-password",
+      roles: ["buyer"],
+    });
     const cookie = await signIn(email, "token-password");
-    const value = cookie.slice("turnledger_session=".length);
+    const value = cookie.slice(`${sessionCookieName}=`.length);
     expect(value.length).toBeGreaterThanOrEqual(20);
-    // lucia 3 keeps the session id, which is the cookie's value, as the row's key
-    // (docs/decisions/003); see docs/decisions/012 for this open point.
-    expect(await placesHolding(value)).toEqual(["sessions.id"]);
+    // The session row is keyed by the SHA-256 of the cookie's token (docs/decisions/015).
+    expect(await placesHolding(value)).toEqual([]);
+    expect(await storedSessionIds(userId)).toEqual([sha256Hex(value)]);
+    // The scan does find what is there.
+    expect(await placesHolding(sha256Hex(value))).toEqual(["sessions.id"]);
   });
 
   it("in the token table or anywhere else but the mail outbox, for a reset link", async () => {
@@ -295,5 +319,86 @@ describe("no token in clear text", () => {
     const stored = (rows as { token_hash: string }[])[0]!.token_hash;
     expect(stored).toMatch(/^[0-9a-f]{64}$/);
     expect(stored).not.toContain(token);
+  });
+});
+
+describe("session cookies", () => {
+  it("are refused when their value is a stored session id (someone who read the table)", async () => {
+    const email = uniqueEmail("session-forged");
+    const userId = await createPerson({
+      email,
+      password: "token-password",
+      roles: ["manager"],
+    });
+    const cookie = await signIn(email, "token-password");
+    const [storedId] = await storedSessionIds(userId);
+    expect(storedId).toMatch(/^[0-9a-f]{64}$/);
+    const forged = `${sessionCookieName}=${storedId}`;
+
+    expect((await get("/api/v1/me", forged)).status).toBe(401);
+    const page = await get("/account", forged);
+    expect(page.status).toBe(302);
+    expect(page.headers.get("Location")).toBe("/sign-in?redirectTo=%2Faccount");
+    // The real cookie still works, and its session was not touched.
+    expect((await get("/api/v1/me", cookie)).status).toBe(200);
+    expect(await storedSessionIds(userId)).toEqual([storedId]);
+  });
+
+  it("are extended with the same token once half their life has passed", async () => {
+    const email = uniqueEmail("session-extend");
+    const userId = await createPerson({
+      email,
+      password: "token-password",
+      roles: ["buyer"],
+    });
+    const cookie = await signIn(email, "token-password");
+    // 14-day sessions are extended when fewer than 7 days are left (lucia 3).
+    await testDatabase().query(
+      "UPDATE sessions SET expires_at = UTC_TIMESTAMP() + INTERVAL 1 DAY WHERE user_id = ?",
+      [userId],
+    );
+    const page = await get("/account", cookie);
+    expect(page.status).toBe(200);
+    expect(sessionCookieFrom(page)).toBe(cookie);
+    const [rows] = await testDatabase().query(
+      "SELECT TIMESTAMPDIFF(HOUR, UTC_TIMESTAMP(), expires_at) AS hours FROM sessions WHERE user_id = ?",
+      [userId],
+    );
+    const hoursLeft = (rows as { hours: number }[]).map((row) =>
+      Number(row.hours),
+    );
+    expect(hoursLeft).toHaveLength(1);
+    expect(hoursLeft[0]).toBeGreaterThanOrEqual(14 * 24 - 1);
+    expect(hoursLeft[0]).toBeLessThanOrEqual(14 * 24);
+    expect((await get("/api/v1/me", cookie)).status).toBe(200);
+    expect(await storedSessionIds(userId)).toEqual([
+      sha256Hex(cookie.slice(`${sessionCookieName}=`.length)),
+    ]);
+  });
+
+  it("end by their hash on sign-out, leaving the person's other sessions", async () => {
+    const email = uniqueEmail("session-sign-out");
+    const userId = await createPerson({
+      email,
+      password: "token-password",
+      roles: ["buyer"],
+    });
+    const laptop = await signIn(email, "token-password");
+    const phone = await signIn(email, "token-password");
+    const valueOf = (cookie: string) =>
+      cookie.slice(`${sessionCookieName}=`.length);
+    expect((await storedSessionIds(userId)).sort()).toEqual(
+      [sha256Hex(valueOf(laptop)), sha256Hex(valueOf(phone))].sort(),
+    );
+    const signOut = await sendJson(
+      "DELETE",
+      "/api/v1/sessions",
+      undefined,
+      laptop,
+    );
+    expect(signOut.status).toBe(204);
+    expect((await get("/api/v1/me", laptop)).status).toBe(401);
+    expect((await get("/api/v1/me", phone)).status).toBe(200);
+    expect(await storedSessionIds(userId)).toEqual([sha256Hex(valueOf(phone))]);
   });
 });

@@ -48,7 +48,10 @@ export const userRoles = mysqlTable(
   ],
 );
 
-/** lucia sessions: the column names lucia's Drizzle adapter expects. */
+/**
+ * lucia sessions: the column names lucia's Drizzle adapter expects. The id is
+ * the SHA-256 (hex) of the cookie's token, never the token (app/auth/session.server.ts).
+ */
 export const sessions = mysqlTable(
   "sessions",
   {
