@@ -338,7 +338,10 @@ export async function importPriceList(input: {
 
   // Rows are written as they are read; after the first bad line nothing more is
   // written, the rest is only checked, and the transaction is rolled back.
+  // One batch's statements run in MariaDB while the next batch is read and
+  // matched here (never more than one write in flight: the writer keeps order).
   let goodRows = 0;
+  let writing: Promise<void> = Promise.resolve();
   try {
     const reading = await readPriceListInBatches(
       input.bytes,
@@ -353,10 +356,15 @@ export async function importPriceList(input: {
           else matched.push(result);
         }
         goodRows += matched.length;
-        if (lineErrorsSoFar === 0 && matchErrors.length === 0)
-          await writer.write(matched);
+        await writing;
+        if (lineErrorsSoFar === 0 && matchErrors.length === 0) {
+          writing = writer.write(matched);
+          // Handled: a failure is thrown by the next `await writing`, not reported as unhandled.
+          writing.catch(() => undefined);
+        }
       },
     );
+    await writing;
     if (!reading.ok) {
       await writer.abandon();
       return { kind: "refused", messages: reading.messages };
@@ -381,6 +389,7 @@ export async function importPriceList(input: {
       fileName: input.fileName,
     };
   } catch (error) {
+    await writing.catch(() => undefined);
     await writer.abandon();
     throw error;
   }

@@ -3,6 +3,7 @@ import path from "node:path";
 import { migrateDatabase, seedWhenEmpty } from "./database-tasks";
 import { resolveDatabaseUrl } from "./database-url";
 import { startMailFake, type MailFake } from "./mail-fake";
+import { appServerArguments } from "./app-server-process";
 import { projectRoot } from "./project-paths";
 import { runCommand } from "./run-command";
 
@@ -45,21 +46,17 @@ export async function serveApp(
     await runCommand(bin("react-router"), ["build"], { cwd: projectRoot });
   }
 
-  const server = spawn(
-    process.execPath,
-    [path.join(projectRoot, "server.js")],
-    {
-      cwd: projectRoot,
-      stdio: "inherit",
-      env: {
-        ...process.env,
-        NODE_ENV: mode,
-        DATABASE_URL: databaseUrl,
-        SMTP_URL: smtpUrl,
-        PORT: process.env.PORT ?? "3000",
-      },
+  const server = spawn(process.execPath, appServerArguments(), {
+    cwd: projectRoot,
+    stdio: "inherit",
+    env: {
+      ...process.env,
+      NODE_ENV: mode,
+      DATABASE_URL: databaseUrl,
+      SMTP_URL: smtpUrl,
+      PORT: process.env.PORT ?? "3000",
     },
-  );
+  });
 
   const stop = () => {
     server.kill("SIGTERM");

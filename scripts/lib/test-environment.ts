@@ -12,6 +12,7 @@ import {
   testDatabaseName,
 } from "./local-mariadb";
 import { startMailFake, type MailFake } from "./mail-fake";
+import { appServerArguments } from "./app-server-process";
 import { projectRoot } from "./project-paths";
 import { runCommand } from "./run-command";
 
@@ -64,23 +65,19 @@ export async function startAppServer(options: {
   smtpUrl: string;
 }): Promise<AppServer> {
   const baseUrl = `http://localhost:${options.port}`;
-  const server = spawn(
-    process.execPath,
-    [path.join(projectRoot, "server.js")],
-    {
-      cwd: projectRoot,
-      stdio: ["ignore", "ignore", "inherit"],
-      env: {
-        ...process.env,
-        NODE_ENV: "production",
-        PORT: String(options.port),
-        HOST: "127.0.0.1",
-        DATABASE_URL: options.databaseUrl,
-        SMTP_URL: options.smtpUrl,
-        APP_URL: baseUrl,
-      },
+  const server = spawn(process.execPath, appServerArguments(), {
+    cwd: projectRoot,
+    stdio: ["ignore", "ignore", "inherit"],
+    env: {
+      ...process.env,
+      NODE_ENV: "production",
+      PORT: String(options.port),
+      HOST: "127.0.0.1",
+      DATABASE_URL: options.databaseUrl,
+      SMTP_URL: options.smtpUrl,
+      APP_URL: baseUrl,
     },
-  );
+  });
   const running = () => server.exitCode === null && server.signalCode === null;
   const exited = new Promise<void>((resolve) =>
     server.once("exit", () => resolve()),

@@ -1,0 +1,22 @@
+/**
+ * How the app server process is started, by `npm start`, `npm run dev`, the
+ * tests and the bench alike: Node running server.js under a heap ceiling.
+ *
+ * The ceiling (APP_HEAP_MB, default 1024 MB) is not a limit the app is expected
+ * to reach. V8 sizes its garbage collection to the ceiling: under Node's default
+ * (about 4 GB on this machine) it let a 100,000-row price-list import leave
+ * 150–300 MB of garbage before collecting; under 1 GB it collects as it goes
+ * and the process grows by about 50 MB. See docs/decisions/016-app-server-heap.md.
+ */
+import path from "node:path";
+import { projectRoot } from "./project-paths";
+
+export const appServerHeapMb = Number(process.env.APP_HEAP_MB ?? 1024);
+
+/** Node's arguments for the app server process. */
+export function appServerArguments(): string[] {
+  return [
+    `--max-old-space-size=${appServerHeapMb}`,
+    path.join(projectRoot, "server.js"),
+  ];
+}
