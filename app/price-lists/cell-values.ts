@@ -225,12 +225,25 @@ function compact(cell: string): string {
     .replace(/[^\p{L}\p{N}]+/gu, "");
 }
 
+/** What each cell text was last looked up as, per word table: most files repeat a few words. */
+const lookUpsByWords = new WeakMap<object, Map<string, unknown>>();
+const maxRememberedLookUps = 1_000;
+
 function lookUp<Value>(
   words: Readonly<Record<string, Value>>,
   cell: string,
 ): Value | undefined {
+  let remembered = lookUpsByWords.get(words);
+  if (!remembered) {
+    remembered = new Map();
+    lookUpsByWords.set(words, remembered);
+  }
+  if (remembered.has(cell)) return remembered.get(cell) as Value | undefined;
   const key = compact(cell);
-  return Object.hasOwn(words, key) ? words[key] : undefined;
+  const value = Object.hasOwn(words, key) ? words[key] : undefined;
+  if (remembered.size >= maxRememberedLookUps) remembered.clear();
+  remembered.set(cell, value);
+  return value;
 }
 
 const kindWords: Readonly<Record<string, ItemKind>> = {

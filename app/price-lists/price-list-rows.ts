@@ -37,6 +37,7 @@ import {
   readUnit,
   readWireStandard,
   type DecimalProblem,
+  type DecimalRules,
 } from "./cell-values";
 import type { FieldColumns, PriceListField } from "./column-mapping";
 import {
@@ -496,10 +497,10 @@ function readAmount(
   context: PriceListRowContext,
   problems: string[],
 ): string | undefined {
-  const reading = readDecimal(amountCell, {
-    ...rules,
-    decimalComma: context.decimalComma,
-  });
+  const reading = readDecimal(
+    amountCell,
+    decimalRulesOf(rules, context.decimalComma),
+  );
   if (reading.ok) return reading.text;
   const quoted = quote(amountCell);
   const messages: Record<DecimalProblem, string> = {
@@ -512,6 +513,26 @@ function readAmount(
   };
   problems.push(messages[reading.problem]);
   return undefined;
+}
+
+/** The rules with the file's decimal separator, made once per rules and separator (read per row). */
+const decimalRulesByRules = new WeakMap<
+  object,
+  { point: DecimalRules; comma: DecimalRules }
+>();
+function decimalRulesOf(
+  rules: { decimals: number; maxWholeDigits: number },
+  decimalComma: boolean,
+): DecimalRules {
+  let both = decimalRulesByRules.get(rules);
+  if (!both) {
+    both = {
+      point: { ...rules, decimalComma: false },
+      comma: { ...rules, decimalComma: true },
+    };
+    decimalRulesByRules.set(rules, both);
+  }
+  return decimalComma ? both.comma : both.point;
 }
 
 /** A cell in double quotes for a message, shortened when long. */
