@@ -36,35 +36,43 @@ export interface CloseResult {
   released: HeldStock[];
 }
 
-export async function cancelBuildOrder(
+export function cancelBuildOrder(
   orderId: number,
   userId: string,
   note?: string,
 ): Promise<CloseResult> {
-  const result = await inBuildOrderTransaction(async (tx) => {
-    const order = await lockOrder(tx, orderId);
-    if (!canCancel(order.status))
-      throw new BuildOrderError(409, refusalFor("cancel", order.status));
-    const released = await releaseHeldStock(tx, order);
-    await changeStatus(tx, order, "cancelled", userId, note);
-    return { id: order.id, status: order.status, released };
-  });
-  await checkStockAlertsOfOrder(orderId);
-  return result;
+  return closeBuildOrder(orderId, userId, "cancel", note);
 }
 
 /** Completes a build in progress; what it still holds is released. Planned versus actual is read from the order afterwards. */
-export async function completeBuildOrder(
+export function completeBuildOrder(
   orderId: number,
   userId: string,
   note?: string,
 ): Promise<CloseResult> {
+  return closeBuildOrder(orderId, userId, "complete", note);
+}
+
+/** Cancels or completes: the order locked, its held stock released, its status changed, in one transaction. */
+async function closeBuildOrder(
+  orderId: number,
+  userId: string,
+  step: "cancel" | "complete",
+  note?: string,
+): Promise<CloseResult> {
+  const allowed = step === "cancel" ? canCancel : canComplete;
   const result = await inBuildOrderTransaction(async (tx) => {
     const order = await lockOrder(tx, orderId);
-    if (!canComplete(order.status))
-      throw new BuildOrderError(409, refusalFor("complete", order.status));
+    if (!allowed(order.status))
+      throw new BuildOrderError(409, refusalFor(step, order.status));
     const released = await releaseHeldStock(tx, order);
-    await changeStatus(tx, order, "complete", userId, note);
+    await changeStatus(
+      tx,
+      order,
+      step === "cancel" ? "cancelled" : "complete",
+      userId,
+      note,
+    );
     return { id: order.id, status: order.status, released };
   });
   await checkStockAlertsOfOrder(orderId);

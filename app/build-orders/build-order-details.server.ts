@@ -11,8 +11,6 @@ import {
   buildOrderLines,
   buildOrderReservations,
   buildOrders,
-  designRevisions,
-  designs,
   items,
   locations,
   lots,
@@ -28,6 +26,7 @@ import {
 } from "~/stock/decimal-amounts";
 import { orderCosts } from "./build-order-costs";
 import { buildOrderReference, canReserve } from "./build-order-status";
+import { selectBuildOrderSummaries } from "./build-orders.server";
 import { compareOldestFirst } from "./stock-allocation";
 
 const money = (tenThousandths: bigint) => Number(tenThousandths) / 10_000;
@@ -35,23 +34,7 @@ const quantity = (text: string) => quantityToNumber(parseQuantity(text));
 
 /** The order with everything its page shows; null when there is no such order. */
 export async function findBuildOrder(orderId: number) {
-  const [order] = await db
-    .select({
-      id: buildOrders.id,
-      status: buildOrders.status,
-      quantity: buildOrders.quantity,
-      note: buildOrders.note,
-      createdAt: buildOrders.createdAt,
-      updatedAt: buildOrders.updatedAt,
-      designId: designs.id,
-      designName: designs.name,
-      revision: designRevisions.revision,
-      createdBy: users.name,
-    })
-    .from(buildOrders)
-    .innerJoin(designs, eq(designs.id, buildOrders.designId))
-    .innerJoin(designRevisions, eq(designRevisions.id, buildOrders.revisionId))
-    .innerJoin(users, eq(users.id, buildOrders.userId))
+  const [order] = await selectBuildOrderSummaries()
     .where(eq(buildOrders.id, orderId))
     .limit(1);
   if (!order) return null;

@@ -162,14 +162,9 @@ export interface BuildOrderListQuery {
   pageSize: number;
 }
 
-/** A page of build orders, newest first (on the status index when filtered). */
-export async function listBuildOrders(query: BuildOrderListQuery) {
-  const where = query.status ? eq(buildOrders.status, query.status) : undefined;
-  const [counted] = await db
-    .select({ total: count() })
-    .from(buildOrders)
-    .where(where);
-  const rows = await db
+/** Build orders with their design, revision and who created them: what the list and the order page both show. */
+export function selectBuildOrderSummaries() {
+  return db
     .select({
       id: buildOrders.id,
       status: buildOrders.status,
@@ -185,7 +180,17 @@ export async function listBuildOrders(query: BuildOrderListQuery) {
     .from(buildOrders)
     .innerJoin(designs, eq(designs.id, buildOrders.designId))
     .innerJoin(designRevisions, eq(designRevisions.id, buildOrders.revisionId))
-    .innerJoin(users, eq(users.id, buildOrders.userId))
+    .innerJoin(users, eq(users.id, buildOrders.userId));
+}
+
+/** A page of build orders, newest first (on the status index when filtered). */
+export async function listBuildOrders(query: BuildOrderListQuery) {
+  const where = query.status ? eq(buildOrders.status, query.status) : undefined;
+  const [counted] = await db
+    .select({ total: count() })
+    .from(buildOrders)
+    .where(where);
+  const rows = await selectBuildOrderSummaries()
     .where(where)
     .orderBy(desc(buildOrders.id))
     .limit(query.pageSize)
