@@ -6,6 +6,7 @@ export default tseslint.config(
   {
     ignores: [
       "build/",
+      "build-*/",
       ".react-router/",
       ".data/",
       "node_modules/",

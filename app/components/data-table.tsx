@@ -12,7 +12,7 @@ import {
   type RowData,
   type SortingState,
 } from "@tanstack/react-table";
-import { useId, useMemo, useState } from "react";
+import { useEffect, useId, useMemo, useRef, useState } from "react";
 import { Link } from "react-router";
 
 declare module "@tanstack/react-table" {
@@ -113,6 +113,8 @@ export function DataTable<Row>({
     pageCount: pageCount ?? 1,
   });
   const shown = table.getRowModel().rows;
+  const scrollBox = useRef<HTMLDivElement>(null);
+  const scrollsSideways = useScrollsSideways(scrollBox);
   return (
     <div className="space-y-2">
       {filtering ? (
@@ -128,7 +130,14 @@ export function DataTable<Row>({
           totalCount={rows.length}
         />
       ) : null}
-      <div className="panel overflow-x-auto p-0">
+      <div
+        ref={scrollBox}
+        className="panel overflow-x-auto p-0"
+        // A table wider than its panel scrolls: keyboard users reach it with Tab and scroll with the arrow keys.
+        {...(scrollsSideways
+          ? { tabIndex: 0, role: "region", "aria-label": caption }
+          : {})}
+      >
         <table className="data-table">
           <caption className="sr-only">{caption}</caption>
           <thead>
@@ -325,4 +334,20 @@ function TableFilters<Row>({
       </p>
     </div>
   );
+}
+
+/** Whether the element is wider inside than it shows (it scrolls sideways), kept up to date as it or its content resizes. */
+function useScrollsSideways(ref: React.RefObject<HTMLElement | null>) {
+  const [scrolls, setScrolls] = useState(false);
+  useEffect(() => {
+    const element = ref.current;
+    if (!element) return;
+    const check = () => setScrolls(element.scrollWidth > element.clientWidth);
+    check();
+    const observer = new ResizeObserver(check);
+    observer.observe(element);
+    if (element.firstElementChild) observer.observe(element.firstElementChild);
+    return () => observer.disconnect();
+  }, [ref]);
+  return scrolls;
 }

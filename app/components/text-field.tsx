@@ -14,7 +14,11 @@ export function TextField({
   autoComplete?: string;
   hint?: string;
 }) {
-  const { key, ...inputProps } = getInputProps(field, { type });
+  const { key, ...inputProps } = getInputProps(field, {
+    type,
+    // The hint is read with the field, before any error.
+    ariaDescribedBy: hint ? field.descriptionId : undefined,
+  });
   return (
     <div>
       <label htmlFor={field.id} className="field-label">
@@ -26,7 +30,11 @@ export function TextField({
         autoComplete={autoComplete}
         className="field-input"
       />
-      {hint ? <p className="mt-1 text-xs text-graphite-500">{hint}</p> : null}
+      {hint ? (
+        <p id={field.descriptionId} className="mt-1 text-xs text-graphite-500">
+          {hint}
+        </p>
+      ) : null}
       {field.errors ? (
         <p id={field.errorId} className="field-error">
           {field.errors.join(" ")}

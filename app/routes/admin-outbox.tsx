@@ -56,12 +56,15 @@ const columns = [
           {formatDateTime(row.original.sentAt)}
         </span>
       ) : (
-        <span
-          className="text-caution"
-          title={row.original.lastError ?? undefined}
-        >
+        <span className="text-caution">
           Waiting ({row.original.attempts}{" "}
           {row.original.attempts === 1 ? "try" : "tries"})
+          {/* Shown, not a hover title: keyboard and touch users read it too. */}
+          {row.original.lastError ? (
+            <span className="block max-w-56 text-xs break-words text-graphite-700">
+              {row.original.lastError}
+            </span>
+          ) : null}
         </span>
       ),
   }),

@@ -164,10 +164,7 @@ export default function Alerts({ loaderData }: Route.ComponentProps) {
         digest, as chosen on their account page.
       </p>
       {canBuy ? (
-        <section
-          aria-labelledby="purchase-requests"
-          className="mb-6 panel"
-        >
+        <section aria-labelledby="purchase-requests" className="mb-6 panel">
           <h2 id="purchase-requests" className="mb-2 text-lg font-semibold">
             Draft purchase requests
           </h2>

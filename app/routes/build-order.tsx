@@ -1036,10 +1036,18 @@ function IssueField({
         autoComplete="off"
         className="field-input min-h-12 text-lg tabular-nums"
         aria-invalid={errors ? true : undefined}
-        aria-describedby={errors ? `${id}-error` : undefined}
+        aria-describedby={
+          [hint ? `${id}-hint` : null, errors ? `${id}-error` : null]
+            .filter(Boolean)
+            .join(" ") || undefined
+        }
         {...input}
       />
-      {hint ? <p className="mt-1 text-xs text-graphite-500">{hint}</p> : null}
+      {hint ? (
+        <p id={`${id}-hint`} className="mt-1 text-xs text-graphite-500">
+          {hint}
+        </p>
+      ) : null}
       {errors ? (
         <p id={`${id}-error`} className="field-error">
           {errors.join(" ")}

@@ -159,11 +159,22 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
 
   const supplier = suppliers.find((entry) => String(entry.id) === supplierId);
 
-  function suggestColumns(headers: string[], forSupplier: string) {
+  /**
+   * Offers a field for each column: what the buyer chose for a column of the
+   * same header before (a corrected file chosen again keeps those choices),
+   * else the supplier's saved mapping or a match on the header's words.
+   */
+  function suggestColumns(
+    headers: string[],
+    forSupplier: string,
+    chosenBefore: readonly MappedColumn[] = [],
+  ) {
     const saved = savedMappings[Number(forSupplier)] ?? null;
     const suggested = suggestMapping(headers, saved);
     setColumns(
       headers.map((header) => {
+        const chosen = chosenBefore.find((entry) => entry.header === header);
+        if (chosen) return chosen;
         const hit = suggested.find((entry) => entry.header === header);
         return hit
           ? { header, field: hit.field, source: hit.source }
@@ -179,6 +190,7 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
 
   async function chooseFile(file: File | undefined) {
     const token = ++readToken.current;
+    const chosenBefore = columns.filter((column) => column.source === "chosen");
     setColumns([]);
     if (!file) return setReading({ state: "none" });
     const tooLarge = fileSizeProblem(file.size);
@@ -192,7 +204,7 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
       return;
     }
     setReading({ state: "read", token, file, ...result });
-    suggestColumns(result.headers, supplierId);
+    suggestColumns(result.headers, supplierId, chosenBefore);
   }
 
   function chooseField(index: number, field: PriceListField | "") {
@@ -430,7 +442,7 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
               >
                 {importFetcher.state !== "idle"
                   ? "Importing…"
-                  : `Import ${formatQuantity(check.valid, "")} rows`}
+                  : `Import ${formatQuantity(check.valid, "")} ${check.valid === 1 ? "row" : "rows"}`}
               </button>
               <p id="import-note" className="text-sm text-graphite-500">
                 {check.invalid.length > 0

@@ -46,6 +46,7 @@ import { quantityFromNumber } from "~/stock/decimal-amounts";
 import { isStockError } from "~/stock/stock-errors";
 import {
   formatMoney,
+  formatSignedStockQuantity,
   formatStockQuantity,
   formatUnitCost,
   itemKindLabel,
@@ -229,11 +230,6 @@ const movementTypeLabels: Record<string, string> = {
   scrap: "Scrap",
 };
 
-function signedQuantity(value: number, unit: string): string {
-  const sign = value > 0 ? "+" : value < 0 ? "−" : "";
-  return `${sign}${formatStockQuantity(Math.abs(value), unit)}`;
-}
-
 function balanceColumns(unit: string, isWire: boolean) {
   const column = createColumnHelper<Balance>();
   return [
@@ -301,7 +297,7 @@ function movementColumns(unit: string) {
       header: "Change",
       cell: (info) => (
         <span className="whitespace-nowrap">
-          {signedQuantity(info.getValue(), unit)}
+          {formatSignedStockQuantity(info.getValue(), unit)}
         </span>
       ),
       meta: { numeric: true },

@@ -7,7 +7,10 @@ import { requireRole } from "~/auth/guard.server";
 import { FormMessages } from "~/components/text-field";
 import { movementTypes, type MovementType } from "~/db/tables/stock-enums";
 import { formatQuantity } from "~/lib/format";
-import { formatStockQuantity } from "~/stock/stock-quantity-text";
+import {
+  formatSignedStockQuantity,
+  formatStockQuantity,
+} from "~/stock/stock-quantity-text";
 import { findItemBySku, listLocations } from "~/stock/items.server";
 import { formFieldOf, movementFormSchema } from "~/stock/movement-form";
 import { isStockError } from "~/stock/stock-errors";
@@ -149,10 +152,18 @@ function Field({
         name={name}
         className={bigInput}
         aria-invalid={errors ? true : undefined}
-        aria-describedby={errors ? `${id}-error` : undefined}
+        aria-describedby={
+          [hint ? `${id}-hint` : null, errors ? `${id}-error` : null]
+            .filter(Boolean)
+            .join(" ") || undefined
+        }
         {...input}
       />
-      {hint ? <p className="mt-1 text-xs text-graphite-500">{hint}</p> : null}
+      {hint ? (
+        <p id={`${id}-hint`} className="mt-1 text-xs text-graphite-500">
+          {hint}
+        </p>
+      ) : null}
       {errors ? (
         <p id={`${id}-error`} className="field-error">
           {errors.join(" ")}
@@ -162,10 +173,14 @@ function Field({
   );
 }
 
-export default function StockRecord({
-  loaderData,
-  actionData,
-}: Route.ComponentProps) {
+export default function StockRecord(props: Route.ComponentProps) {
+  const { type, sku, done } = props.loaderData;
+  // Another type, item or a movement just recorded starts the form afresh:
+  // the first balance chosen again, no weight or count left from before.
+  return <MovementForm key={`${type}|${sku}|${done ?? ""}`} {...props} />;
+}
+
+function MovementForm({ loaderData, actionData }: Route.ComponentProps) {
   const { type, item, sku, locations, done, metresPerKg } = loaderData;
   const navigation = useNavigation();
   const busy = navigation.state !== "idle";
@@ -283,7 +298,7 @@ export default function StockRecord({
             <p className="text-lg font-semibold">
               <Link
                 to={`/stock/items/${encodeURIComponent(item.sku)}`}
-                className="text-copper-700 underline-offset-2 hover:underline"
+                className="text-copper-700 underline underline-offset-2"
               >
                 {item.sku}
               </Link>{" "}
@@ -334,7 +349,8 @@ export default function StockRecord({
                     type="number"
                     step="0.001"
                     inputMode="decimal"
-                    errors={errors.grossKg}
+                    // A spool's quantity is its weight: "no quantity" is said here, the form has no quantity field.
+                    errors={errors.grossKg ?? errors.quantity}
                     hint="Spool with wire, on the scale"
                   />
                   <Field
@@ -562,8 +578,7 @@ export default function StockRecord({
                 >
                   Difference to the books:{" "}
                   <strong>
-                    {countDifference > 0 ? "+" : ""}
-                    {formatStockQuantity(countDifference, unit)}
+                    {formatSignedStockQuantity(countDifference, unit)}
                   </strong>
                 </p>
               ) : null}

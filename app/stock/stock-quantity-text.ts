@@ -6,6 +6,12 @@ export function formatStockQuantity(value: number, unit: string): string {
   return formatQuantity(value, unit, unit === "pcs" ? 0 : 3);
 }
 
+/** A change of stock with its sign, a true minus for less: "+4.800 kg", "−2 pcs". */
+export function formatSignedStockQuantity(value: number, unit: string): string {
+  const sign = value > 0 ? "+" : value < 0 ? "−" : "";
+  return `${sign}${formatStockQuantity(Math.abs(value), unit)}`;
+}
+
 /** Money in the company currency, to the cent: "1,234.50". */
 export function formatMoney(value: number): string {
   return formatQuantity(value, "", 2);

@@ -103,13 +103,16 @@ export async function startTestEnvironment(): Promise<TestEnvironment> {
     await recreateDatabase(testDatabaseName());
   }
   await migrateDatabase(databaseUrl);
-  await seedWhenEmpty(databaseUrl, { quiet: true });
 
   const mailFake: MailFake = await startMailFake({
     smtpPort: Number(process.env.TEST_MAIL_SMTP_PORT ?? 2535),
     httpPort: Number(process.env.TEST_MAIL_HTTP_PORT ?? 2536),
     quiet: true,
   });
+  // The demo seed's low-stock alerts are e-mailed to this run's own fake, as
+  // `npm start` sends them to its own: never to another run's or a developer's.
+  process.env.SMTP_URL = `smtp://127.0.0.1:${mailFake.smtpPort}`;
+  await seedWhenEmpty(databaseUrl, { quiet: true });
 
   if (process.env.TEST_SKIP_BUILD !== "1") {
     await runCommand(

@@ -10,6 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
 import { sendJson, signIn as signInApi } from "../support/app-client";
 import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
+import { readable, waitForText } from "../support/page-text";
 import {
   closeTestDatabase,
   createLocation,
@@ -21,9 +22,6 @@ let page: Page;
 let wireSku = "";
 let magnetSku = "";
 const designName = `E2E outrunner ${uniqueCode("D")}`;
-
-/** Text with the no-break spaces between numbers and units as plain spaces. */
-const readable = (text: string | null) => (text ?? "").replace(/\u00a0/g, " ");
 
 beforeAll(async () => {
   browser = await launchBrowser();
@@ -110,21 +108,6 @@ const torqueEstimate = () =>
 const costPerMotor = () =>
   page.getByRole("group", { name: "Cost per motor" }).locator("dd").first();
 
-async function waitForText(
-  read: () => Promise<string>,
-  expected: RegExp,
-  timeoutMs = 10_000,
-): Promise<string> {
-  const started = Date.now();
-  let last = "";
-  while (Date.now() - started < timeoutMs) {
-    last = readable(await read().catch(() => ""));
-    if (expected.test(last)) return last;
-    await page.waitForTimeout(100);
-  }
-  throw new Error(`expected ${expected}, last saw "${last}"`);
-}
-
 describe("design editor", () => {
   it("creates a design from the designs page", async () => {
     await page
@@ -163,6 +146,7 @@ describe("design editor", () => {
     await wire.fill(wireSku.slice(0, 5));
     // The choices come from the catalogue as the builder types: only wire items.
     await waitForText(
+      page,
       () =>
         page
           .locator(`datalist option[value="${wireSku}"]`)
@@ -179,12 +163,12 @@ describe("design editor", () => {
     await page.getByRole("button", { name: "Add line" }).click();
 
     // Engineering brief, worked check 4: 6.700 m per coil with its leads; 12 coils → 80.400 m.
-    await waitForText(() => copperCell().innerText(), /^80\.400 m$/);
+    await waitForText(page, () => copperCell().innerText(), /^80\.400 m$/);
     // 3 % scrap: 12 × 30.84 g = 370.05 g of bare copper × 14.20 per kg = 5.2548 → 5.25.
     expect(readable(await coilCell(3).innerText())).toMatch(
       /370 g\s+bare conductor/,
     );
-    await waitForText(() => costPerMotor().innerText(), /^5\.25 EUR$/);
+    await waitForText(page, () => costPerMotor().innerText(), /^5\.25 EUR$/);
     expect(
       readable(
         await page.getByRole("group", { name: "Cost per N·m" }).innerText(),
@@ -207,7 +191,7 @@ describe("design editor", () => {
     await page.getByText("Saved. The figures below are up to date.").waitFor();
     // T = k · B · I · Σ active conductor length · r = 0.8 × 0.9 T × 10 A × (2 × 40 × 0.050 m × 12) × 0.030 m
     //   = 10.368 N·m (by hand, from the brief's F = B·I·L and T = F·r; k = 0.8 by default).
-    await waitForText(() => torqueEstimate().innerText(), /10\.368 N·m/);
+    await waitForText(page, () => torqueEstimate().innerText(), /10\.368 N·m/);
     expect(readable(await torqueEstimate().innerText())).toContain(
       "First-order estimate",
     );
@@ -220,9 +204,9 @@ describe("design editor", () => {
     await page.getByLabel("End-turn length").fill("60");
     await page.getByRole("button", { name: "Save line" }).click();
     // 40 × (2 × 50 + 2 × 60) mm + 2 × 150 mm = 9.100 m per coil; 12 coils → 109.200 m.
-    await waitForText(() => copperCell().innerText(), /^109\.200 m$/);
+    await waitForText(page, () => copperCell().innerText(), /^109\.200 m$/);
     // 12 × 9.373 m × 0.5027 mm² × 8.89 g/cm³ = 502.61 g × 14.20 per kg = 7.14.
-    await waitForText(() => costPerMotor().innerText(), /^7\.14 EUR$/);
+    await waitForText(page, () => costPerMotor().innerText(), /^7\.14 EUR$/);
     // End turns lie outside the field: the torque estimate does not move.
     expect(readable(await torqueEstimate().innerText())).toMatch(/10\.368 N·m/);
     // Longer end turns: a smaller share of each turn in the field, 100 / 220 = 45.5 %.
@@ -244,8 +228,8 @@ describe("design editor", () => {
     expect(await page.getByLabel("End-turn length").inputValue()).toBe("14.1");
     await page.getByRole("button", { name: "Save line" }).click();
     // 40 × (100 + 28.2) mm + 300 mm = 5.428 m per coil; 12 coils → 65.136 m.
-    await waitForText(() => copperCell().innerText(), /^65\.136 m$/);
-    await waitForText(() => costPerMotor().innerText(), /^4\.26 EUR$/);
+    await waitForText(page, () => copperCell().innerText(), /^65\.136 m$/);
+    await waitForText(page, () => costPerMotor().innerText(), /^4\.26 EUR$/);
     expect(
       await page.evaluate(
         () => (window as unknown as { stayedHere?: boolean }).stayedHere,
@@ -263,6 +247,7 @@ describe("design editor", () => {
       name: "Magnet lines with their mass per motor",
     });
     await waitForText(
+      page,
       () => magnets.innerText(),
       /Check: Hotter than the grade's working temperature/,
     );

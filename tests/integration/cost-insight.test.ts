@@ -7,7 +7,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, get, sendJson, signIn } from "../support/app-client";
+import { get, sendJson, signIn } from "../support/app-client";
 import {
   createMagnetItem,
   createPartItem,
@@ -15,6 +15,7 @@ import {
   receive,
 } from "../support/build-order-fixtures";
 import { createDesign, type FixtureLine } from "../support/design-fixtures";
+import { quoteDesignItems } from "../support/price-list-fixtures";
 import {
   closeTestDatabase,
   createLocation,
@@ -145,54 +146,15 @@ beforeAll(async () => {
   magnet = await createMagnetItem(buyer);
   part = await createPartItem(buyer);
 
-  // One supplier quoting our three items: wire at a 3.50/kg adder on the copper base,
-  // magnets at 2.00 a piece, bearings at 1.50 (the prices of designs-api.test.ts).
-  const supplier = `Insight test supplier ${uniqueCode("S")}`;
-  const made = await sendJson(
-    "POST",
-    "/api/v1/suppliers",
-    { name: supplier, currency: "EUR" },
-    buyer,
-  );
-  expect(made.status, await made.clone().text()).toBe(201);
-  const [[supplierRow]] = (await testDatabase().query(
-    "SELECT id FROM suppliers WHERE name = ?",
-    [supplier],
-  )) as unknown as [[{ id: number }]];
-  for (const item of [wire, magnet, part])
-    await testDatabase().query(
-      "INSERT INTO supplier_items (supplier_id, supplier_sku, item_id) VALUES (?, ?, ?)",
-      [supplierRow.id, `I-${item.sku}`, item.id],
-    );
-  const csv = [
-    "Art. no,Kind,Standard,Size,Grade,Price,Adder per kg,Currency,Valid from",
-    `I-${wire.sku},wire,IEC,0.8,,,3.50,EUR,2033-01-01`,
-    `I-${magnet.sku},magnet,,,N42SH,2.00,,EUR,2033-01-01`,
-    `I-${part.sku},part,,,,1.50,,EUR,2033-01-01`,
-  ].join("\n");
-  const form = new FormData();
-  form.set("file", new Blob([csv]), "insight-prices.csv");
-  form.set("supplier", supplier);
-  form.set(
-    "mapping",
-    JSON.stringify({
-      supplierSku: "Art. no",
-      kind: "Kind",
-      standard: "Standard",
-      size: "Size",
-      grade: "Grade",
-      price: "Price",
-      adderPerKg: "Adder per kg",
-      currency: "Currency",
-      validFrom: "Valid from",
-    }),
-  );
-  const imported = await fetch(`${baseUrl()}/api/v1/price-lists`, {
-    method: "POST",
-    headers: { Cookie: buyer, Origin: baseUrl() },
-    body: form,
+  // One supplier quoting our three items at the prices of designs-api.test.ts.
+  await quoteDesignItems(buyer, {
+    supplier: `Insight test supplier ${uniqueCode("S")}`,
+    fileName: "insight-prices.csv",
+    validFrom: "2033-01-01",
+    wireSku: wire.sku,
+    magnetSku: magnet.sku,
+    partSku: part.sku,
   });
-  expect(imported.status, await imported.clone().text()).toBe(201);
   // Copper at 9.00/kg from 1 Jan 2033, 10.00/kg from 1 Sep 2033.
   for (const [pricePerKg, validFrom] of [
     [9, "2033-01-01"],

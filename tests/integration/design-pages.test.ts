@@ -8,6 +8,11 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
 import { get, postForm, sendJson, signIn } from "../support/app-client";
 import {
+  createMagnetItem,
+  createPartItem,
+  createWireItem,
+} from "../support/build-order-fixtures";
+import {
   closeTestDatabase,
   createLocation,
   testDatabase,
@@ -25,61 +30,14 @@ let currency = "";
 /** A part whose name a spreadsheet would run as a formula. */
 const trickyName = '=HYPERLINK("http://example.test","open me")';
 
-async function created(response: Response) {
-  expect(response.status, await response.clone().text()).toBe(201);
-  return response.json();
-}
-
 beforeAll(async () => {
   buyer = await signIn("buyer@turnledger.test", demoPassword());
   builder = await signIn("builder@turnledger.test", demoPassword());
   storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
   manager = await signIn("manager@turnledger.test", demoPassword());
-  wireSku = uniqueCode("PW");
-  magnetSku = uniqueCode("PM");
-  trickySku = uniqueCode("PP");
-  await created(
-    await sendJson(
-      "POST",
-      "/api/v1/items",
-      {
-        kind: "wire",
-        sku: wireSku,
-        name: "Enamelled copper 0.80 mm grade 2",
-        conductor: "copper",
-        standard: "IEC",
-        size: "0.8",
-        insulation: "grade2",
-        thermalClass: 155,
-        enamel: "polyesterimide",
-      },
-      buyer,
-    ),
-  );
-  await created(
-    await sendJson(
-      "POST",
-      "/api/v1/items",
-      {
-        kind: "magnet",
-        sku: magnetSku,
-        name: "N42SH block 20 × 10 × 5",
-        grade: "N42SH",
-        shape: { kind: "block", lengthMm: 20, widthMm: 10, heightMm: 5 },
-        coating: "NiCuNi",
-        magnetisation: "through 5 mm",
-      },
-      buyer,
-    ),
-  );
-  await created(
-    await sendJson(
-      "POST",
-      "/api/v1/items",
-      { kind: "part", sku: trickySku, name: trickyName, unit: "pcs" },
-      buyer,
-    ),
-  );
+  wireSku = (await createWireItem(buyer)).sku;
+  magnetSku = (await createMagnetItem(buyer)).sku;
+  trickySku = (await createPartItem(buyer, "pcs", trickyName)).sku;
   // 5 kg of the wire at 14.20 per kg: the moving average cost the stock basis prices it at.
   const store = await createLocation(uniqueCode("DS"));
   const receipt = await sendJson(

@@ -6,7 +6,13 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, get, sendJson, signIn } from "../support/app-client";
+import { get, sendJson, signIn } from "../support/app-client";
+import {
+  createMagnetItem,
+  createPartItem,
+  createWireItem,
+} from "../support/build-order-fixtures";
+import { quoteDesignItems } from "../support/price-list-fixtures";
 import {
   closeTestDatabase,
   testDatabase,
@@ -30,104 +36,17 @@ beforeAll(async () => {
   buyer = await signIn("buyer@turnledger.test", demoPassword());
   builder = await signIn("builder@turnledger.test", demoPassword());
   storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
-  wireSku = uniqueCode("DW");
-  magnetSku = uniqueCode("DM");
-  partSku = uniqueCode("DP");
-  await created(
-    await sendJson(
-      "POST",
-      "/api/v1/items",
-      {
-        kind: "wire",
-        sku: wireSku,
-        name: "Enamelled copper 0.80 mm grade 2",
-        conductor: "copper",
-        standard: "IEC",
-        size: "0.8",
-        insulation: "grade2",
-        thermalClass: 155,
-        enamel: "polyesterimide",
-      },
-      buyer,
-    ),
-  );
-  await created(
-    await sendJson(
-      "POST",
-      "/api/v1/items",
-      {
-        kind: "magnet",
-        sku: magnetSku,
-        name: "N42SH block 20 × 10 × 5",
-        grade: "N42SH",
-        shape: { kind: "block", lengthMm: 20, widthMm: 10, heightMm: 5 },
-        coating: "NiCuNi",
-        magnetisation: "through 5 mm",
-      },
-      buyer,
-    ),
-  );
-  await created(
-    await sendJson(
-      "POST",
-      "/api/v1/items",
-      { kind: "part", sku: partSku, name: "Bearing 608-2RS", unit: "pcs" },
-      buyer,
-    ),
-  );
-  const supplier = `Design test supplier ${uniqueCode("S")}`;
-  await created(
-    await sendJson(
-      "POST",
-      "/api/v1/suppliers",
-      { name: supplier, currency: "EUR" },
-      buyer,
-    ),
-  );
-  const csv = [
-    "Art. no,Kind,Standard,Size,Grade,Price,Adder per kg,Currency,Valid from",
-    `W-${wireSku},wire,IEC,0.8,,,3.50,EUR,2031-01-01`,
-    `M-${magnetSku},magnet,,,N42SH,2.00,,EUR,2031-01-01`,
-    `P-${partSku},part,,,,1.50,,EUR,2031-01-01`,
-  ].join("\n");
-  // Map the supplier's SKUs to our items first, so the import prices these items (other
-  // tests keep wire of the same size and magnets of the same grade).
-  const [[supplierRow]] = (await testDatabase().query(
-    "SELECT id FROM suppliers WHERE name = ?",
-    [supplier],
-  )) as unknown as [[{ id: number }]];
-  for (const [supplierSku, sku] of [
-    [`W-${wireSku}`, wireSku],
-    [`M-${magnetSku}`, magnetSku],
-    [`P-${partSku}`, partSku],
-  ])
-    await testDatabase().query(
-      "INSERT INTO supplier_items (supplier_id, supplier_sku, item_id) SELECT ?, ?, id FROM items WHERE sku = ?",
-      [supplierRow.id, supplierSku, sku],
-    );
-  const form = new FormData();
-  form.set("file", new Blob([csv]), "design-prices.csv");
-  form.set("supplier", supplier);
-  form.set(
-    "mapping",
-    JSON.stringify({
-      supplierSku: "Art. no",
-      kind: "Kind",
-      standard: "Standard",
-      size: "Size",
-      grade: "Grade",
-      price: "Price",
-      adderPerKg: "Adder per kg",
-      currency: "Currency",
-      validFrom: "Valid from",
-    }),
-  );
-  const imported = await fetch(`${baseUrl()}/api/v1/price-lists`, {
-    method: "POST",
-    headers: { Cookie: buyer, Origin: baseUrl() },
-    body: form,
+  wireSku = (await createWireItem(buyer)).sku;
+  magnetSku = (await createMagnetItem(buyer)).sku;
+  partSku = (await createPartItem(buyer, "pcs", "Bearing 608-2RS")).sku;
+  await quoteDesignItems(buyer, {
+    supplier: `Design test supplier ${uniqueCode("S")}`,
+    fileName: "design-prices.csv",
+    validFrom: "2031-01-01",
+    wireSku,
+    magnetSku,
+    partSku,
   });
-  expect(imported.status, await imported.clone().text()).toBe(201);
   const base = await sendJson(
     "PUT",
     "/api/v1/metal-base",

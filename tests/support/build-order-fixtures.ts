@@ -52,13 +52,17 @@ export async function createMagnetItem(buyer: string) {
   return { sku, id: await itemIdOf(sku) };
 }
 
-export async function createPartItem(buyer: string, unit = "pcs") {
+export async function createPartItem(
+  buyer: string,
+  unit = "pcs",
+  name = "Bearing 6001-2RS",
+) {
   const sku = uniqueCode("BRG");
   await created(
     await sendJson(
       "POST",
       "/api/v1/items",
-      { kind: "part", sku, name: "Bearing 6001-2RS", unit },
+      { kind: "part", sku, name, unit },
       buyer,
     ),
   );

@@ -86,3 +86,39 @@ export async function toggle(page: Page, control: Locator): Promise<void> {
   await tabTo(page, control);
   await page.keyboard.press("Space");
 }
+
+/**
+ * Picks a radio button as a keyboard user does: Tab stops once on its group
+ * (at the checked button, or the first), then the arrow keys move the choice
+ * until `radio` is checked.
+ */
+export async function chooseRadio(page: Page, radio: Locator): Promise<void> {
+  const handle = await radio.elementHandle();
+  if (!handle) throw new Error(`chooseRadio: ${radio} is not on the page`);
+  const inGroup = () =>
+    handle.evaluate((element) => {
+      const focused = document.activeElement;
+      return (
+        focused instanceof HTMLInputElement &&
+        focused.type === "radio" &&
+        focused.name === (element as HTMLInputElement).name &&
+        focused.form === (element as HTMLInputElement).form
+      );
+    });
+  for (let presses = 0; !(await inGroup()); presses += 1) {
+    if (presses >= maxTabs)
+      throw new Error(
+        `chooseRadio: ${maxTabs} presses of Tab never reached the group of ${radio}`,
+      );
+    await page.keyboard.press("Tab");
+  }
+  const groupSize = await handle.evaluate(
+    (element) =>
+      document.getElementsByName((element as HTMLInputElement).name).length,
+  );
+  for (let step = 0; step <= groupSize; step += 1) {
+    if (await radio.isChecked()) return;
+    await page.keyboard.press("ArrowDown");
+  }
+  throw new Error(`chooseRadio: the arrow keys never checked ${radio}`);
+}
