@@ -16,7 +16,7 @@ export function TextField({
 }) {
   const { key, ...inputProps } = getInputProps(field, {
     type,
-    // The hint is read with the field, before any error.
+    // The hint is read with the field (after any error, in Conform's order).
     ariaDescribedBy: hint ? field.descriptionId : undefined,
   });
   return (

@@ -339,7 +339,8 @@ export async function importPriceList(input: {
   // Rows are written as they are read; after the first bad line nothing more is
   // written, the rest is only checked, and the transaction is rolled back.
   // One batch's statements run in MariaDB while the next batch is read and
-  // matched here (never more than one write in flight: the writer keeps order).
+  // matched here. Never more than one write in flight: each batch waits for the
+  // previous write first (PriceImportWriter.write must not run twice at once).
   let goodRows = 0;
   let writing: Promise<void> = Promise.resolve();
   try {

@@ -349,8 +349,13 @@ function MovementForm({ loaderData, actionData }: Route.ComponentProps) {
                     type="number"
                     step="0.001"
                     inputMode="decimal"
-                    // A spool's quantity is its weight: "no quantity" is said here, the form has no quantity field.
-                    errors={errors.grossKg ?? errors.quantity}
+                    // A spool's quantity is its weight: the form has no quantity field, so a missing one is asked for here.
+                    errors={
+                      errors.grossKg ??
+                      (errors.quantity
+                        ? ["Give the spool's gross weight."]
+                        : undefined)
+                    }
                     hint="Spool with wire, on the scale"
                   />
                   <Field

@@ -80,12 +80,7 @@ export const movementRequestSchema = z
       value.quantity === undefined &&
       !(weighed && (value.type === "receipt" || value.type === "issue"))
     ) {
-      problem(
-        "quantity",
-        value.type === "receipt" || value.type === "issue"
-          ? "Give the quantity, or the spool's gross weight."
-          : "Give the quantity.",
-      );
+      problem("quantity", "Give the quantity.");
     }
     if (value.quantity !== undefined) {
       if (value.type === "adjustment" && value.quantity === 0n)

@@ -11,7 +11,17 @@
 import path from "node:path";
 import { projectRoot } from "./project-paths";
 
-export const appServerHeapMb = Number(process.env.APP_HEAP_MB ?? 1024);
+export const appServerHeapMb = heapCeilingMb(process.env.APP_HEAP_MB);
+
+function heapCeilingMb(setting: string | undefined): number {
+  if (setting === undefined || setting.trim() === "") return 1024;
+  const megabytes = Number(setting);
+  if (!Number.isInteger(megabytes) || megabytes < 128)
+    throw new Error(
+      `APP_HEAP_MB must be a whole number of megabytes, 128 or more (got "${setting}").`,
+    );
+  return megabytes;
+}
 
 /** Node's arguments for the app server process. */
 export function appServerArguments(): string[] {

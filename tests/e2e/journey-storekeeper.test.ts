@@ -189,9 +189,7 @@ describe("the storekeeper's journey", () => {
       tareKg: "0.6",
       unitCost: "14.2",
     });
-    await page
-      .getByText("Give the quantity, or the spool's gross weight.")
-      .waitFor();
+    await page.getByText("Give the spool's gross weight.").waitFor();
     expect(
       await page.getByLabel("Gross weight").getAttribute("aria-invalid"),
     ).toBe("true");
