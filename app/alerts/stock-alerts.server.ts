@@ -27,7 +27,7 @@ import {
   userRoles,
   users,
 } from "~/db/schema";
-import { queueMail } from "~/mail/mailer.server";
+import { queueMail, queueMailForLater } from "~/mail/mailer.server";
 import { bestPrices } from "~/pricing/best-price";
 import { loadItemPricing } from "~/purchasing/item-prices.server";
 import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
@@ -148,16 +148,19 @@ async function tellAboutNewAlert(
     buildOrders: await openBuildOrdersNeeding(item.id),
     itemUrl: `${appBaseUrl()}/stock/items/${encodeURIComponent(item.sku)}`,
   });
-  for (const person of recipients) {
-    const { outboxId } = await queueMail({ to: person.email, ...mail });
-    await db.insert(stockAlertNotices).values({
+  // Written now, sent after the request has been answered (see queueMailForLater).
+  const outboxIds = await queueMailForLater(
+    recipients.map((person) => ({ to: person.email, ...mail })),
+  );
+  await db.insert(stockAlertNotices).values(
+    recipients.map((person, index) => ({
       alertId,
       userId: person.id,
-      kind: "alert",
-      outboxId,
+      kind: "alert" as const,
+      outboxId: outboxIds[index]!,
       createdAt: new Date(),
-    });
-  }
+    })),
+  );
 }
 
 /**

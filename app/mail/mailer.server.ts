@@ -95,6 +95,49 @@ export async function queueMail(
   return { outboxId: inserted.id, sent };
 }
 
+/** Deliveries started by `queueMailForLater` and not yet finished. */
+const deliveriesUnderWay = new Set<Promise<void>>();
+
+/**
+ * Queues messages in the outbox now and hands them to SMTP after the caller
+ * has moved on (all at once, not one after another): for mail a request sends
+ * on the side, such as low-stock alerts, so a slow or stopped SMTP server never
+ * delays the stock work that caused it. The outbox rows exist when this
+ * returns; a message SMTP does not take stays unsent for `npm run mail:retry`.
+ */
+export async function queueMailForLater(
+  mails: readonly OutgoingMail[],
+): Promise<number[]> {
+  const queued: QueuedMessage[] = [];
+  for (const mail of mails) {
+    const message = {
+      toAddress: mail.to,
+      subject: mail.subject,
+      textBody: mail.text,
+    };
+    const [inserted] = await db
+      .insert(mailOutbox)
+      .values(message)
+      .$returningId();
+    if (!inserted)
+      throw new Error("The outbox did not return the new message's id.");
+    queued.push({ ...message, id: inserted.id, attempts: 0 });
+  }
+  const delivery = Promise.all(queued.map(attemptDelivery)).then(
+    () => undefined,
+    (error: unknown) => console.error("[mail] delivery failed:", error),
+  );
+  deliveriesUnderWay.add(delivery);
+  void delivery.finally(() => deliveriesUnderWay.delete(delivery));
+  return queued.map((message) => message.id);
+}
+
+/** Waits until every delivery `queueMailForLater` started has been tried (scripts, before they close the database). */
+export async function deliveriesFinished(): Promise<void> {
+  while (deliveriesUnderWay.size > 0)
+    await Promise.all([...deliveriesUnderWay]);
+}
+
 /** Queues a message and tries to send it at once. Returns true when SMTP accepted it. */
 export async function sendMail(mail: OutgoingMail): Promise<boolean> {
   return (await queueMail(mail)).sent;

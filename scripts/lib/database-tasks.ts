@@ -75,6 +75,9 @@ async function seedStockThroughTheLedger(databaseUrl: string): Promise<void> {
     const { seedDemoWorkshop } = await import("../../seed/demo-workshop");
     await seedDemoWorkshop();
   } finally {
+    // The demo's low-stock e-mails are sent after the work that opened them.
+    const { deliveriesFinished } = await import("~/mail/mailer.server");
+    await deliveriesFinished();
     await client.pool.end();
     delete (globalThis as { turnledgerDb?: unknown }).turnledgerDb;
     process.env.DATABASE_URL = previous;

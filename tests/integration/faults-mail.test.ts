@@ -1,10 +1,12 @@
 /**
- * The SMTP server goes away: stock work goes on, the mail waits in the outbox,
- * and `scripts/mail-retry.ts` delivers it once SMTP is back. A second app
+ * The SMTP server goes away or hangs: stock work goes on without waiting for
+ * it (alert mail is sent after the answer), the mail waits in the outbox, and
+ * `scripts/mail-retry.ts` delivers it once SMTP is back. A second app
  * server (on the shared test database) sends through an SMTP fake of this
  * file's own, which the test stops and starts; the shared fake is untouched.
  */
 import { execFile } from "node:child_process";
+import net from "node:net";
 import { promisify } from "node:util";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
@@ -138,7 +140,12 @@ describe("the SMTP server is stopped", () => {
     ).toBe(201);
     expect((await move({ type: "issue", sku, quantity: 2 })).status).toBe(201);
     expect(await waitUntil(() => arrived(sku).length === 1)).toBe(true);
-    expect((await outboxRowsFor(sku))[0]?.sentAt).not.toBeNull();
+    // Marked sent once SMTP has taken it, a moment after the fake received it.
+    await expect
+      .poll(async () => (await outboxRowsFor(sku))[0]?.sentAt ?? null, {
+        timeout: 10_000,
+      })
+      .not.toBeNull();
   });
 
   it("records the movement and opens the alert at once while SMTP is down; the retry delivers the mail once it is back", async () => {
@@ -163,6 +170,12 @@ describe("the SMTP server is stopped", () => {
       [item.id],
     );
     expect(alerts).toEqual([{ closedAt: null }]);
+    // The mail is tried after the movement has been answered: wait for that try.
+    await expect
+      .poll(async () => (await outboxRowsFor(sku))[0]?.attempts ?? 0, {
+        timeout: 10_000,
+      })
+      .toBe(1);
     const waiting = await outboxRowsFor(sku);
     expect(waiting).toHaveLength(1);
     expect(waiting[0]).toMatchObject({ sentAt: null, attempts: 1 });
@@ -192,5 +205,41 @@ describe("the SMTP server is stopped", () => {
     expect(sent).toHaveLength(1);
     expect(sent[0]!.sentAt).not.toBeNull();
     expect(sent[0]!.attempts).toBe(2);
+  });
+
+  it("answers movements at once while the SMTP server takes connections but never speaks; the mail waits for the retry", async () => {
+    const sku = await newPart(10);
+    expect(
+      (await move({ type: "receipt", sku, quantity: 12, unitCost: 2 })).status,
+    ).toBe(201);
+
+    // A server on the SMTP port that accepts and then says nothing: the
+    // mailer's greeting timeout (5 s) runs out only after the answer.
+    await fake?.close();
+    fake = null;
+    const held: net.Socket[] = [];
+    const silent = net.createServer((socket) => held.push(socket));
+    await new Promise<void>((resolve) =>
+      silent.listen(faultPorts.mailSmtp, "127.0.0.1", resolve),
+    );
+    try {
+      const issue = await move({ type: "issue", sku, quantity: 5 });
+      expect(issue.status, issue.text).toBe(201);
+      // Before, the request waited for SMTP: 5 s or more here.
+      expect(issue.ms).toBeLessThan(2_500);
+      expect(await outboxRowsFor(sku)).toMatchObject([
+        { sentAt: null, attempts: 0 },
+      ]);
+      await expect
+        .poll(async () => (await outboxRowsFor(sku))[0]?.attempts ?? 0, {
+          timeout: 15_000,
+        })
+        .toBe(1);
+      expect((await outboxRowsFor(sku))[0]).toMatchObject({ sentAt: null });
+    } finally {
+      for (const socket of held) socket.destroy();
+      await new Promise((resolve) => silent.close(resolve));
+    }
+    fake = await startFake();
   });
 });

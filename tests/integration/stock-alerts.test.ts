@@ -68,10 +68,10 @@ async function move(body: Record<string, unknown>) {
 /** Alert e-mails queued for an item (the outbox is written before SMTP is tried). */
 async function queuedAlertMails(sku: string, to?: string) {
   const [rows] = await testDatabase().query(
-    `SELECT to_address AS \`to\`, sent_at AS sentAt FROM mail_outbox WHERE subject LIKE ? ${to ? "AND to_address = ?" : ""} ORDER BY id`,
+    `SELECT to_address AS \`to\`, sent_at AS sentAt, attempts FROM mail_outbox WHERE subject LIKE ? ${to ? "AND to_address = ?" : ""} ORDER BY id`,
     to ? [`Low stock: ${sku} %`, to] : [`Low stock: ${sku} %`],
   );
-  return rows as { to: string; sentAt: Date | null }[];
+  return rows as { to: string; sentAt: Date | null; attempts: number }[];
 }
 
 async function alertsOf(sku: string) {
@@ -188,6 +188,14 @@ describe("low-stock alerts", () => {
     )) as unknown as [[{ onHand: string }]];
     expect(item.onHand).toBe("2.000");
     expect(await alertsOf(sku)).toMatchObject([{ status: "open" }]);
+    // SMTP is tried after the movement has been answered: wait for that try.
+    await expect
+      .poll(
+        async () =>
+          (await queuedAlertMails(sku, unlucky.email))[0]?.attempts ?? 0,
+        { timeout: 10_000 },
+      )
+      .toBe(1);
     const waiting = await queuedAlertMails(sku, unlucky.email);
     expect(waiting).toHaveLength(1);
     expect(waiting[0]!.sentAt).toBeNull();
