@@ -10,6 +10,8 @@ import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { z } from "zod";
 import type { Route } from "./+types/build-order";
 import { requireRole, requireUser } from "~/auth/guard.server";
+import { MeasureField } from "~/components/measure-field";
+import { SummaryFigure } from "~/components/summary-figure";
 import {
   cancelBuildOrder,
   changeBuildOrderQuantity,
@@ -260,27 +262,6 @@ export const meta: Route.MetaFunction = ({ data: loaderData }) => [
 type Order = Route.ComponentProps["loaderData"]["order"];
 type Line = Order["lines"][number];
 type Issue = Line["issues"][number] & { sku: string; unit: string };
-
-function Figure({
-  label,
-  value,
-  emphasis = false,
-}: {
-  label: string;
-  value: React.ReactNode;
-  emphasis?: boolean;
-}) {
-  return (
-    <div>
-      <dt className="text-xs font-medium uppercase tracking-wide text-graphite-500">
-        {label}
-      </dt>
-      <dd className={`mt-0.5 text-lg ${emphasis ? "font-semibold" : ""}`}>
-        {value}
-      </dd>
-    </div>
-  );
-}
 
 function place(row: { lot: string | null; location: string }) {
   return row.lot ? `lot ${row.lot} · ${row.location}` : row.location;
@@ -577,13 +558,16 @@ export default function BuildOrder({
       ) : null}
 
       <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-4">
-        <Figure
+        <SummaryFigure
           label="Motors"
           value={formatQuantity(order.quantity, "motors")}
           emphasis
         />
-        <Figure label="Status" value={buildOrderStatusLabels[order.status]} />
-        <Figure
+        <SummaryFigure
+          label="Status"
+          value={buildOrderStatusLabels[order.status]}
+        />
+        <SummaryFigure
           label="Planned cost per motor"
           value={
             <>
@@ -596,7 +580,7 @@ export default function BuildOrder({
             </>
           }
         />
-        <Figure
+        <SummaryFigure
           label={
             order.status === "complete"
               ? "Actual cost per motor"
@@ -1006,54 +990,16 @@ function IssuePanel({
   );
 }
 
-function IssueField({
-  name,
-  label,
-  unit,
-  errors,
-  hint,
-  ...input
-}: {
-  name: string;
-  label: string;
-  unit?: string;
-  errors?: string[];
-  hint?: string;
-} & React.InputHTMLAttributes<HTMLInputElement>) {
-  const id = `issue-${name}`;
+function IssueField(
+  props: Omit<React.ComponentProps<typeof MeasureField>, "id">,
+) {
   return (
-    <div>
-      <label htmlFor={id} className="field-label">
-        {label}
-        {unit ? (
-          <span className="font-normal text-graphite-500"> ({unit})</span>
-        ) : null}
-      </label>
-      <input
-        id={id}
-        name={name}
-        inputMode="decimal"
-        autoComplete="off"
-        className="field-input min-h-12 text-lg tabular-nums"
-        aria-invalid={errors ? true : undefined}
-        aria-describedby={
-          [hint ? `${id}-hint` : null, errors ? `${id}-error` : null]
-            .filter(Boolean)
-            .join(" ") || undefined
-        }
-        {...input}
-      />
-      {hint ? (
-        <p id={`${id}-hint`} className="mt-1 text-xs text-graphite-500">
-          {hint}
-        </p>
-      ) : null}
-      {errors ? (
-        <p id={`${id}-error`} className="field-error">
-          {errors.join(" ")}
-        </p>
-      ) : null}
-    </div>
+    <MeasureField
+      id={`issue-${props.name}`}
+      inputMode="decimal"
+      autoComplete="off"
+      {...props}
+    />
   );
 }
 

@@ -4,6 +4,7 @@ import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-item";
 import { requireRole, requireUser } from "~/auth/guard.server";
+import { SummaryFigure } from "~/components/summary-figure";
 import { BelowReorderMark } from "~/components/below-reorder-mark";
 import { DataTable } from "~/components/data-table";
 import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
@@ -337,27 +338,6 @@ function movementColumns(unit: string) {
   ];
 }
 
-function Figure({
-  label,
-  value,
-  emphasis = false,
-}: {
-  label: string;
-  value: React.ReactNode;
-  emphasis?: boolean;
-}) {
-  return (
-    <div>
-      <dt className="text-xs font-medium uppercase tracking-wide text-graphite-500">
-        {label}
-      </dt>
-      <dd className={`mt-0.5 text-lg ${emphasis ? "font-semibold" : ""}`}>
-        {value}
-      </dd>
-    </div>
-  );
-}
-
 export default function StockItem({
   loaderData,
   actionData,
@@ -462,21 +442,21 @@ export default function StockItem({
       <FormMessages errors={otherErrors ?? undefined} />
 
       <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-3 lg:grid-cols-6">
-        <Figure
+        <SummaryFigure
           label="On hand"
           value={formatStockQuantity(item.onHand, unit)}
           emphasis
         />
-        <Figure
+        <SummaryFigure
           label="Reserved"
           value={formatStockQuantity(item.reserved, unit)}
         />
-        <Figure
+        <SummaryFigure
           label="Available"
           value={formatStockQuantity(item.available, unit)}
           emphasis
         />
-        <Figure
+        <SummaryFigure
           label="Reorder point"
           value={
             item.reorderPoint > 0
@@ -484,11 +464,11 @@ export default function StockItem({
               : "not set"
           }
         />
-        <Figure
+        <SummaryFigure
           label="Average cost"
           value={formatUnitCost(item.averageCost, unit)}
         />
-        <Figure label="Value" value={formatMoney(item.value)} />
+        <SummaryFigure label="Value" value={formatMoney(item.value)} />
       </dl>
 
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">

@@ -4,6 +4,7 @@ import { useState } from "react";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-record";
 import { requireRole } from "~/auth/guard.server";
+import { MeasureField } from "~/components/measure-field";
 import { FormMessages } from "~/components/text-field";
 import { movementTypes, type MovementType } from "~/db/tables/stock-enums";
 import { formatQuantity } from "~/lib/format";
@@ -124,53 +125,8 @@ export const meta: Route.MetaFunction = () => [
 
 const bigInput = "field-input text-lg min-h-12";
 
-function Field({
-  name,
-  label,
-  unit,
-  errors,
-  hint,
-  ...input
-}: {
-  name: string;
-  label: string;
-  unit?: string;
-  errors?: string[];
-  hint?: string;
-} & React.InputHTMLAttributes<HTMLInputElement>) {
-  const id = `movement-${name}`;
-  return (
-    <div>
-      <label htmlFor={id} className="field-label">
-        {label}
-        {unit ? (
-          <span className="font-normal text-graphite-500"> ({unit})</span>
-        ) : null}
-      </label>
-      <input
-        id={id}
-        name={name}
-        className={bigInput}
-        aria-invalid={errors ? true : undefined}
-        aria-describedby={
-          [hint ? `${id}-hint` : null, errors ? `${id}-error` : null]
-            .filter(Boolean)
-            .join(" ") || undefined
-        }
-        {...input}
-      />
-      {hint ? (
-        <p id={`${id}-hint`} className="mt-1 text-xs text-graphite-500">
-          {hint}
-        </p>
-      ) : null}
-      {errors ? (
-        <p id={`${id}-error`} className="field-error">
-          {errors.join(" ")}
-        </p>
-      ) : null}
-    </div>
-  );
+function Field(props: Omit<React.ComponentProps<typeof MeasureField>, "id">) {
+  return <MeasureField id={`movement-${props.name}`} {...props} />;
 }
 
 export default function StockRecord(props: Route.ComponentProps) {
