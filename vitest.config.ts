@@ -27,6 +27,10 @@ export default defineConfig({
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,
+          // expect.poll waits on pages and the app as long as Playwright's own
+          // waits do (30 s); Vitest's default of 1 s is shorter than one page
+          // round trip on a busy 2-core machine.
+          expect: { poll: { timeout: 30_000 } },
         },
       },
     ],

@@ -453,7 +453,8 @@ export default function CoilEstimator({ loaderData }: Route.ComponentProps) {
               );
             }}
           />
-          <div className="panel">
+          {/* Busy until the first estimate is back; the results then say when a newer one is being worked out. */}
+          <div className="panel" aria-busy={lastGood ? undefined : true}>
             {lastGood ? (
               <div className="space-y-6">
                 <ConductorSplitBar split={conductorSplit(lastGood.input)} />
@@ -461,8 +462,12 @@ export default function CoilEstimator({ loaderData }: Route.ComponentProps) {
                   estimate={lastGood.estimate}
                   coilCount={lastGood.input.coilCount}
                   temperatureC={lastGood.input.temperatureC}
+                  // Dimmed (and busy) while the estimate is worked out; once it
+                  // is back the figures are final, though the root and layout
+                  // loaders are still read again after it ("loading").
                   pending={
-                    fetcher.state !== "idle" || Boolean(answer && !answer.ok)
+                    fetcher.state === "submitting" ||
+                    Boolean(answer && !answer.ok)
                   }
                 />
               </div>

@@ -7,7 +7,12 @@ import {
   createWireItem,
   receive,
 } from "../support/build-order-fixtures";
-import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
+import {
+  launchBrowser,
+  saveScreenshot,
+  signIn,
+  waitForHydration,
+} from "../support/browser";
 import { createDesign } from "../support/design-fixtures";
 import {
   closeTestDatabase,
@@ -163,6 +168,7 @@ describe("a build order from the builder to the store", () => {
   it("the builder completes the build and sees planned against used", async () => {
     const page = await signIn(browser, "builder");
     await page.goto(new URL(orderPath, page.url()).toString());
+    await waitForHydration(page);
     await page.getByRole("button", { name: "Complete build" }).click();
     await page.getByRole("status").filter({ hasText: "built" }).waitFor();
     await page.getByRole("heading", { name: "Planned and used" }).waitFor();
@@ -176,6 +182,7 @@ describe("a build order from the builder to the store", () => {
   it("a builder sees what is short, nothing is held, and cancels", async () => {
     const page = await signIn(browser, "builder");
     await page.goto(new URL("/build-orders", page.url()).toString());
+    await waitForHydration(page);
     await page
       .getByLabel("Design revision")
       .selectOption({ label: `${designName} · rev. 1` });

@@ -334,13 +334,14 @@ describe("design editor", () => {
       .click();
     await page.getByRole("heading", { name: "Designs", level: 1 }).waitFor();
     // Designs are listed by name, a page at a time: find this one's page.
-    for (;;) {
+    for (let shown = 1; ; shown += 1) {
       const link = page.getByRole("link", {
         name: `${designName} revision 1, released`,
       });
       if ((await link.count()) > 0) break;
       await page.getByRole("link", { name: "Next" }).click();
-      await page.waitForURL(/page=\d+/);
+      // The address changes before the next page is drawn: wait for its number.
+      await page.getByText(new RegExp(`^Page ${shown + 1} of \\d+$`)).waitFor();
     }
     await saveScreenshot(page, "designs-list");
   });

@@ -10,7 +10,11 @@ import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { baseUrl, uniqueEmail } from "../support/app-client";
 import { scanPage } from "../support/accessibility";
-import { launchBrowser, saveScreenshot } from "../support/browser";
+import {
+  launchBrowser,
+  saveScreenshot,
+  waitForHydration,
+} from "../support/browser";
 import { followLink, mainLink, signInByKeyboard } from "../support/journey";
 import { press, toggle, typeInto } from "../support/keyboard";
 import { linkIn, waitForMessage } from "../support/mail-fake-client";
@@ -130,6 +134,7 @@ describe("the admin's journey", () => {
     await page
       .getByRole("heading", { level: 1, name: "Welcome: choose your password" })
       .waitFor();
+    await waitForHydration(page);
     expect(await descriptionOf(page.getByLabel("New password"))).toBe(
       "At least 10 characters.",
     );

@@ -7,7 +7,7 @@
  * the alert, and the admin reads the same e-mail in the outbox. Every page is
  * scanned with axe-core.
  */
-import type { Browser, Locator, Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
 import { sendJson, signIn as signInApi } from "../support/app-client";
@@ -130,19 +130,6 @@ async function bestPriceRows(page: Page): Promise<string[]> {
   return (await rows.allTextContents()).slice(1).map(readable);
 }
 
-/** Waits until React has hydrated an element (it carries React's props), so its handlers answer keys. */
-async function waitForHydration(element: Locator): Promise<void> {
-  await element.evaluate(
-    (node) =>
-      new Promise<void>((resolve) => {
-        const hydrated = () =>
-          Object.keys(node).some((key) => key.startsWith("__reactProps"));
-        const wait = () => (hydrated() ? resolve() : setTimeout(wait, 50));
-        wait();
-      }),
-  );
-}
-
 /** Step 1 and 2 of the import: the file chosen by keyboard, "Customer ref" mapped to our SKU by keyboard (kept when the file is chosen again). */
 async function chooseListAndMapIt(
   page: Page,
@@ -215,9 +202,12 @@ describe("the buyer's journey", () => {
       "Import a price list",
       found,
     );
-    const supplierSelect = page.getByLabel("Supplier", { exact: true });
-    await waitForHydration(supplierSelect);
-    await chooseOption(page, supplierSelect, `${newcomer} (EUR)`);
+    // followLink has waited for React to hydrate the page: the supplier chosen is the page's own.
+    await chooseOption(
+      page,
+      page.getByLabel("Supplier", { exact: true }),
+      `${newcomer} (EUR)`,
+    );
     await chooseListAndMapIt(page, newcomerList("borealis-draft.csv", "-1.80"));
     await scanPage(page, found);
     await saveScreenshot(page, "journey-buyer-3-mapping");

@@ -18,12 +18,7 @@ import {
   createWireItem,
 } from "../support/build-order-fixtures";
 import { createDesign } from "../support/design-fixtures";
-import {
-  followLink,
-  mainLink,
-  nextFrames,
-  signInByKeyboard,
-} from "../support/journey";
+import { followLink, mainLink, signInByKeyboard } from "../support/journey";
 import {
   chooseOption,
   chooseRadio,
@@ -350,7 +345,10 @@ describe("the storekeeper's journey", () => {
         .getByRole("link", { name: "Count" }),
     );
     await page.waitForURL(/type=count/);
-    await nextFrames(page);
+    // The address changes before React draws the count form: wait for its help.
+    await page
+      .getByText("What you found in a bin; the difference is recorded.")
+      .waitFor();
     await scanPage(page, found);
     await findItem(magnetSku);
     // The bin's one balance is chosen; the storekeeper types what is in it.

@@ -4,11 +4,19 @@
  * its line number and the import held back, then import the fixed file and
  * see the result — and that the same file twice changes nothing.
  */
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
 import { sendJson, signIn as signInApi } from "../support/app-client";
-import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
+import {
+  launchBrowser,
+  saveScreenshot,
+  signIn,
+  waitForHydration,
+} from "../support/browser";
 import { closeTestDatabase, uniqueCode } from "../support/test-database";
 
 let browser: Browser;
@@ -53,6 +61,15 @@ function fieldFor(page: Page, column: string) {
   return page.getByLabel(`Field for the column “${column}”`);
 }
 
+/** Opens the import page as a document and waits for React to take it over: the page works only in the browser. */
+async function openImportPage(page: Page) {
+  await page.goto(`${new URL(page.url()).origin}/suppliers/import`);
+  await page
+    .getByRole("heading", { name: "Import a price list", level: 1 })
+    .waitFor();
+  await waitForHydration(page);
+}
+
 async function chooseFile(page: Page, file: ReturnType<typeof csvFile>) {
   await page.getByLabel("Price list (CSV, up to 20 MB)").setInputFiles(file);
   await page.getByText(`${file.name}:`).waitFor();
@@ -61,10 +78,7 @@ async function chooseFile(page: Page, file: ReturnType<typeof csvFile>) {
 describe("price-list import in the browser", () => {
   it("holds back a file with a bad row, then imports the fixed file once", async () => {
     const page = await signIn(browser, "buyer");
-    await page.goto(`${new URL(page.url()).origin}/suppliers/import`);
-    await page
-      .getByRole("heading", { name: "Import a price list", level: 1 })
-      .waitFor();
+    await openImportPage(page);
     expect(
       await page.getByRole("heading", { level: 2 }).allTextContents(),
     ).toEqual([
@@ -170,7 +184,7 @@ describe("price-list import in the browser", () => {
 
   it("shows the upload's progress while a larger file is sent", async () => {
     const page = await signIn(browser, "buyer");
-    await page.goto(`${new URL(page.url()).origin}/suppliers/import`);
+    await openImportPage(page);
     await page
       .getByLabel("Supplier", { exact: true })
       .selectOption({ label: `${supplier} (EUR)` });
@@ -212,19 +226,26 @@ describe("price-list import in the browser", () => {
   });
 
   it("refuses a file over 20 MB in the browser before sending it", async () => {
-    const page = await signIn(browser, "buyer");
-    await page.goto(`${new URL(page.url()).origin}/suppliers/import`);
-    await page.getByLabel("Price list (CSV, up to 20 MB)").setInputFiles({
-      name: "huge.csv",
-      mimeType: "text/csv",
-      buffer: Buffer.alloc(20 * 1024 * 1024 + 1, 0x41),
-    });
-    await page.getByText(/a price list can be at most 20 MB/).waitFor();
-    expect(
+    // Handed to Chromium as a file on disk: 20 MB as a buffer crosses the
+    // DevTools connection (base64) and takes many seconds on a busy machine.
+    const folder = fs.mkdtempSync(path.join(os.tmpdir(), "turnledger-e2e-"));
+    const huge = path.join(folder, "huge.csv");
+    fs.writeFileSync(huge, Buffer.alloc(20 * 1024 * 1024 + 1, 0x41));
+    try {
+      const page = await signIn(browser, "buyer");
+      await openImportPage(page);
       await page
         .getByLabel("Price list (CSV, up to 20 MB)")
-        .getAttribute("aria-invalid"),
-    ).toBe("true");
-    await page.close();
+        .setInputFiles(huge);
+      await page.getByText(/a price list can be at most 20 MB/).waitFor();
+      expect(
+        await page
+          .getByLabel("Price list (CSV, up to 20 MB)")
+          .getAttribute("aria-invalid"),
+      ).toBe("true");
+      await page.close();
+    } finally {
+      fs.rmSync(folder, { recursive: true, force: true });
+    }
   });
 });

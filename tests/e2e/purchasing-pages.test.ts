@@ -1,7 +1,12 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { baseUrl } from "../support/app-client";
-import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
+import {
+  launchBrowser,
+  saveScreenshot,
+  signIn,
+  waitForHydration,
+} from "../support/browser";
 import {
   closeTestDatabase,
   testDatabase,
@@ -79,6 +84,7 @@ describe("suppliers and prices in the browser", () => {
     const page = await signIn(browser, "buyer");
     await page.goto(`${baseUrl()}/suppliers`);
     await page.getByRole("heading", { name: "Suppliers", level: 1 }).waitFor();
+    await waitForHydration(page);
 
     const name = `Enamel works ${uniqueCode("E")}`;
     const form = page.getByRole("region", { name: "New supplier" });
@@ -105,6 +111,7 @@ describe("suppliers and prices in the browser", () => {
     await saveScreenshot(page, "purchasing-suppliers");
 
     await page.goto(`${baseUrl()}/prices`);
+    await waitForHydration(page);
     const base = page.getByRole("region", { name: "Set a new base" });
     await base.getByLabel("Conductor").selectOption("copper");
     await base.getByLabel("Currency").fill("EUR");

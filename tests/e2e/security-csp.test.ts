@@ -9,7 +9,12 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { roles } from "~/lib/roles";
-import { cspViolations, launchBrowser, signIn } from "../support/browser";
+import {
+  cspViolations,
+  launchBrowser,
+  signIn,
+  waitForHydration,
+} from "../support/browser";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -23,17 +28,7 @@ declare global {
   interface Window {
     __sameDocument?: boolean;
     __injected?: boolean;
-    __reactRouterRouteModules?: unknown;
   }
-}
-
-/** Waits until React Router's client has loaded the page's route modules (hydration started). */
-async function waitForHydration(page: Page) {
-  await page.waitForFunction(
-    () => window.__reactRouterRouteModules !== undefined,
-    undefined,
-    { timeout: 10_000 },
-  );
 }
 
 async function menuLinks(page: Page): Promise<string[]> {
@@ -59,8 +54,9 @@ describe("every page of the menu runs under the Content-Security-Policy", () => 
           "content-security-policy",
         ))!;
         expect(policy).toMatch(/script-src 'self' 'nonce-[^']+'(;|$)/);
+        // React has taken the page over: its scripts ran under the policy, and
+        // the menu link below is followed by the client router, not the browser.
         await waitForHydration(page);
-        await page.getByRole("heading", { level: 1 }).waitFor();
 
         // A menu link followed by the client router keeps this document.
         const next = hrefs[(index + 1) % hrefs.length]!;
@@ -121,10 +117,14 @@ describe("the policy", () => {
         script.textContent = "window.__injected = true; alert(2);";
         document.body.append(script);
       });
-      await page.waitForFunction(() =>
-        document.querySelector('img[src="/no-such-image.png"]'),
+      // A broken image is complete once its error event has fired: the
+      // inline handler has had its chance to run by then.
+      await page.waitForFunction(
+        () =>
+          document.querySelector<HTMLImageElement>(
+            'img[src="/no-such-image.png"]',
+          )?.complete === true,
       );
-      await page.waitForTimeout(500);
       expect(await page.evaluate(() => window.__injected === true)).toBe(false);
       expect(dialogs).toBe(0);
       const seen = cspViolations(own);

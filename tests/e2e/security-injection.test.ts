@@ -136,6 +136,10 @@ describe("hostile text in the browser", () => {
       .getByRole("link", { name: "Journal" })
       .click();
     await page.waitForURL(`${base}/stock/journal`);
+    // The address changes before React draws the journal; the stock list before it shows the text too.
+    await page
+      .getByRole("heading", { level: 1, name: "Movement journal" })
+      .waitFor();
     await expectShownAsText(page, dialogs);
 
     await page.goto(`${base}/designs/${designId}/revisions/1`);

@@ -51,7 +51,13 @@ function describe(url: string, violation: Result): string {
 /**
  * Scans the page and collects what it finds into `found`, so one journey can
  * visit many pages and assert once at the end that nothing serious was seen.
+ * A page that says part of it is busy (aria-busy: figures dimmed while they
+ * are worked out) is scanned once that part is done, so what is checked is
+ * the page as it settles, not whichever moment of the update the scan meets.
  */
 export async function scanPage(page: Page, found: string[]): Promise<void> {
+  await page.waitForFunction(
+    () => document.querySelector('[aria-busy="true"]') === null,
+  );
   found.push(...(await seriousAccessibilityViolations(page)));
 }

@@ -48,6 +48,22 @@ function watchForCspViolations(context: BrowserContext, seen: string[]) {
   });
 }
 
+/**
+ * Has every page of the context hand its file choosers to the test from the
+ * start. Playwright asks Chromium to intercept file choosers only when a test
+ * begins to listen for one, and does not wait for Chromium's answer: a key
+ * pressed right after page.waitForEvent("filechooser") can reach the page
+ * first, and the chooser it opens is then never reported (13 of 100 new
+ * pages in a loop). A listener that lives as long as the page keeps the
+ * interception on before any key is pressed.
+ */
+function interceptFileChoosers(context: BrowserContext) {
+  const keepIntercepting = (page: Page) =>
+    page.on("filechooser", () => undefined);
+  context.on("page", keepIntercepting);
+  for (const page of context.pages()) keepIntercepting(page);
+}
+
 export async function launchBrowser(): Promise<Browser> {
   const browser = await launchChromium();
   const seen: string[] = [];
@@ -55,6 +71,7 @@ export async function launchBrowser(): Promise<Browser> {
   const newContext = browser.newContext.bind(browser);
   browser.newContext = async (...args) => {
     const context = await newContext(...args);
+    interceptFileChoosers(context);
     await watchForCspViolations(context, seen);
     return context;
   };
@@ -85,7 +102,26 @@ function launchChromium(): Promise<Browser> {
   });
 }
 
-/** Opens a new page signed in as the demo person of a role, on the start page. */
+/**
+ * Waits until React has hydrated the page in view: its level-1 heading carries
+ * React's props. A page loaded as a document (page.goto, or a link or form
+ * used before the page it was on had hydrated) shows the server's HTML at
+ * once, but a click, key or file choice made before React has taken the page
+ * over is lost, and a value typed or chosen in a field React controls stays
+ * unknown to React. From this point on React answers every event (an early
+ * one makes it finish hydrating first).
+ */
+export async function waitForHydration(page: Page): Promise<void> {
+  await page.waitForFunction(() => {
+    const heading = document.querySelector("h1");
+    return (
+      heading !== null &&
+      Object.keys(heading).some((key) => key.startsWith("__reactProps"))
+    );
+  });
+}
+
+/** Opens a new page signed in as the demo person of a role, on the start page (hydrated). */
 export async function signIn(browser: Browser, role: Role): Promise<Page> {
   const person = demoPeople.find((candidate) => candidate.roles.includes(role));
   if (!person) throw new Error(`no demo person holds the role ${role}`);
@@ -93,12 +129,14 @@ export async function signIn(browser: Browser, role: Role): Promise<Page> {
     viewport: { width: 1280, height: 800 },
   });
   await page.goto(`${inject("baseUrl")}/sign-in`);
+  await waitForHydration(page);
   await page.getByLabel("E-mail").fill(person.email);
   await page.getByLabel("Password").fill(demoPassword());
   await page.getByRole("button", { name: "Sign in" }).click();
   await page.waitForURL(`${inject("baseUrl")}/`);
   await page.getByRole("navigation", { name: "Main" }).waitFor();
   await page.getByRole("heading", { level: 1 }).waitFor();
+  await waitForHydration(page);
   return page;
 }
 

@@ -8,6 +8,7 @@ import { inject } from "vitest";
 import type { Role } from "~/lib/roles";
 import { demoPassword, demoPeople } from "../../seed/demo-people";
 import { scanPage } from "./accessibility";
+import { waitForHydration } from "./browser";
 import { press, typeInto } from "./keyboard";
 
 /**
@@ -26,6 +27,7 @@ export async function signInByKeyboard(
   });
   await page.goto(`${inject("baseUrl")}/sign-in`);
   await page.getByRole("heading", { level: 1 }).waitFor();
+  await waitForHydration(page);
   await scanPage(page, found);
   await typeInto(page, page.getByLabel("E-mail"), person.email);
   await typeInto(page, page.getByLabel("Password"), demoPassword());
@@ -33,6 +35,7 @@ export async function signInByKeyboard(
   await page.waitForURL(`${inject("baseUrl")}/`);
   await page.getByRole("navigation", { name: "Main" }).waitFor();
   await page.getByRole("heading", { level: 1 }).waitFor();
+  await waitForHydration(page);
   await scanPage(page, found);
   return page;
 }
@@ -45,8 +48,10 @@ export function mainLink(page: Page, name: string): Locator {
 }
 
 /**
- * Follows a link by keyboard (Tab to it, Enter), waits for the page it leads
- * to and its level-1 heading, and scans that page into `found`.
+ * Follows a link by keyboard (Tab to it, Enter), waits for the address it
+ * leads to and for that page's level-1 heading (a text heading is matched
+ * whole, so the page before cannot pass for it), lets the page finish
+ * hydrating, and scans it into `found`.
  */
 export async function followLink(
   page: Page,
@@ -59,17 +64,9 @@ export async function followLink(
   );
   await press(page, link);
   await page.waitForURL(href);
-  await nextFrames(page);
-  await page.getByRole("heading", { level: 1, name: heading }).waitFor();
+  await page
+    .getByRole("heading", { level: 1, name: heading, exact: true })
+    .waitFor();
+  await waitForHydration(page);
   await scanPage(page, found);
-}
-
-/** Waits two animation frames: a page whose address has changed has drawn the new content. */
-export function nextFrames(page: Page): Promise<unknown> {
-  return page.evaluate(
-    () =>
-      new Promise((done) =>
-        requestAnimationFrame(() => requestAnimationFrame(done)),
-      ),
-  );
 }

@@ -1,7 +1,9 @@
 /**
  * Files in and out of a page by keyboard alone, for browser tests: a file
  * input is reached by Tab and opened with Space (the test answers the file
- * chooser), a download link is reached by Tab and followed with Enter.
+ * chooser), a download link is reached by Tab and followed with Enter. Pages
+ * from launchBrowser() intercept file choosers from the start, so the chooser
+ * a key opens is always reported (tests/support/browser.ts).
  */
 import fs from "node:fs";
 import type { Locator, Page } from "playwright-core";

@@ -9,16 +9,19 @@ import type { Locator, Page } from "playwright-core";
 /** How many Tab presses to try before deciding a control cannot be reached. */
 const maxTabs = 200;
 
-/** Presses Tab (Shift+Tab with `backwards`) until `target` has the focus; throws when it never does. */
+/**
+ * Presses Tab (Shift+Tab with `backwards`) until `target` has the focus; throws
+ * when it never does. The target is looked up afresh before each press, so an
+ * element React puts in place of another while the page re-renders is the one
+ * tabbed to, never the one it replaced.
+ */
 export async function tabTo(
   page: Page,
   target: Locator,
   options: { backwards?: boolean } = {},
 ): Promise<void> {
-  const handle = await target.elementHandle();
-  if (!handle) throw new Error(`tabTo: ${target} is not on the page`);
   for (let presses = 0; presses < maxTabs; presses += 1) {
-    const focused = await handle.evaluate(
+    const focused = await target.evaluate(
       (element) => element === document.activeElement,
     );
     if (focused) return;
@@ -29,7 +32,11 @@ export async function tabTo(
   );
 }
 
-/** Tabs to a text field, selects what is in it and types `text` in its place. */
+/**
+ * Tabs to a text field, selects what is in it and types `text` in its place;
+ * throws when the field does not hold `text` afterwards (the keys went
+ * elsewhere: the field lost the focus while it was typed into).
+ */
 export async function typeInto(
   page: Page,
   field: Locator,
@@ -39,6 +46,11 @@ export async function typeInto(
   await page.keyboard.press("ControlOrMeta+A");
   await page.keyboard.press("Delete");
   if (text !== "") await page.keyboard.type(text);
+  const value = await field.inputValue();
+  if (value !== text)
+    throw new Error(
+      `typeInto: ${field} holds "${value}" after typing "${text}": it lost the keyboard focus`,
+    );
 }
 
 /**
@@ -93,10 +105,8 @@ export async function toggle(page: Page, control: Locator): Promise<void> {
  * until `radio` is checked.
  */
 export async function chooseRadio(page: Page, radio: Locator): Promise<void> {
-  const handle = await radio.elementHandle();
-  if (!handle) throw new Error(`chooseRadio: ${radio} is not on the page`);
   const inGroup = () =>
-    handle.evaluate((element) => {
+    radio.evaluate((element) => {
       const focused = document.activeElement;
       return (
         focused instanceof HTMLInputElement &&
@@ -112,7 +122,7 @@ export async function chooseRadio(page: Page, radio: Locator): Promise<void> {
       );
     await page.keyboard.press("Tab");
   }
-  const groupSize = await handle.evaluate(
+  const groupSize = await radio.evaluate(
     (element) =>
       document.getElementsByName((element as HTMLInputElement).name).length,
   );
