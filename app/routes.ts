@@ -98,6 +98,8 @@ export default [
     route("build-orders", "routes/api.v1.build-orders.ts"),
     route("build-orders/:orderId", "routes/api.v1.build-order.ts"),
     route("build-orders/:orderId/:step", "routes/api.v1.build-order-step.ts"),
+    // Any other path under /api/v1: a JSON 404 for every method.
+    route("*", "routes/api.v1.not-found.ts"),
   ]),
 
   route("*", "routes/not-found.tsx"),

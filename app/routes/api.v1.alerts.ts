@@ -2,7 +2,7 @@ import { z } from "zod";
 import type { Route } from "./+types/api.v1.alerts";
 import { listAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
-import { readSearchParams } from "~/lib/api.server";
+import { methodNotAllowed, readSearchParams } from "~/lib/api.server";
 
 const query = z.object({
   status: z
@@ -25,4 +25,10 @@ export async function loader({ request }: Route.LoaderArgs) {
   return Response.json(alerts, {
     headers: { "X-Total-Count": String(total) },
   });
+}
+
+/** Any other method: 405 in the API's error shape, after the same check as GET. */
+export async function action({ request }: Route.ActionArgs) {
+  await requireUser(request);
+  return methodNotAllowed(["GET"]);
 }

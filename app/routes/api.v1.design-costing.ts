@@ -7,7 +7,7 @@ import {
   findRevision,
   loadRevisionLines,
 } from "~/designs/design-revisions.server";
-import { apiError, readSearchParams } from "~/lib/api.server";
+import { apiError, methodNotAllowed, readSearchParams } from "~/lib/api.server";
 import { answerStockError } from "~/stock/stock-api.server";
 
 const costingQuery = z.object({
@@ -55,4 +55,10 @@ export async function loader({ request, params }: Route.LoaderArgs) {
       }),
     ),
   );
+}
+
+/** Any other method: 405 in the API's error shape, after the same check as GET. */
+export async function action({ request }: Route.ActionArgs) {
+  await requireUser(request);
+  return methodNotAllowed(["GET"]);
 }

@@ -2,7 +2,7 @@ import type { Route } from "./+types/api.v1.insight-designs";
 import { requireUser } from "~/auth/guard.server";
 import { designInsight } from "~/insight/design-insight.server";
 import { insightQuerySchema } from "~/insight/what-if";
-import { readSearchParams } from "~/lib/api.server";
+import { methodNotAllowed, readSearchParams } from "~/lib/api.server";
 import { answerStockError } from "~/stock/stock-api.server";
 
 /**
@@ -31,4 +31,10 @@ export async function loader({ request }: Route.LoaderArgs) {
       headers: { "X-Total-Count": String(insight.total) },
     });
   });
+}
+
+/** Any other method: 405 in the API's error shape, after the same check as GET. */
+export async function action({ request }: Route.ActionArgs) {
+  await requireUser(request);
+  return methodNotAllowed(["GET"]);
 }

@@ -1,5 +1,6 @@
 import type { Route } from "./+types/api.v1.insight-stock-value";
 import { requireUser } from "~/auth/guard.server";
+import { methodNotAllowed } from "~/lib/api.server";
 import { stockValueInsight } from "~/insight/stock-value.server";
 
 /**
@@ -14,4 +15,10 @@ import { stockValueInsight } from "~/insight/stock-value.server";
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
   return Response.json(await stockValueInsight({ trend: true }));
+}
+
+/** Any other method: 405 in the API's error shape, after the same check as GET. */
+export async function action({ request }: Route.ActionArgs) {
+  await requireUser(request);
+  return methodNotAllowed(["GET"]);
 }

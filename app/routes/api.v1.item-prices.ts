@@ -1,7 +1,7 @@
 import { z } from "zod";
 import type { Route } from "./+types/api.v1.item-prices";
 import { requireUser } from "~/auth/guard.server";
-import { apiError, readSearchParams } from "~/lib/api.server";
+import { apiError, methodNotAllowed, readSearchParams } from "~/lib/api.server";
 import { isCalendarDate } from "~/pricing/calendar-date";
 import {
   bestPricesOf,
@@ -55,4 +55,10 @@ export async function loader({ request, params }: Route.LoaderArgs) {
       ? { history: priceHistoryOf(pricing, quantity, date) }
       : {}),
   });
+}
+
+/** Any other method: 405 in the API's error shape, after the same check as GET. */
+export async function action({ request }: Route.ActionArgs) {
+  await requireUser(request);
+  return methodNotAllowed(["GET"]);
 }

@@ -1,5 +1,6 @@
 import type { Route } from "./+types/api.v1.outbox";
 import { requireRole } from "~/auth/guard.server";
+import { methodNotAllowed } from "~/lib/api.server";
 import { listOutbox } from "~/mail/outbox.server";
 
 /** GET /api/v1/outbox?limit=100 → [{ to, subject, text, sentAt }], newest first. Admins only. */
@@ -26,4 +27,10 @@ export async function loader({ request }: Route.LoaderArgs) {
       sentAt: message.sentAt?.toISOString() ?? null,
     })),
   );
+}
+
+/** Any other method: 405 in the API's error shape, after the same check as GET. */
+export async function action({ request }: Route.ActionArgs) {
+  await requireRole(request, ["admin"]);
+  return methodNotAllowed(["GET"]);
 }

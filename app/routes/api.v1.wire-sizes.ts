@@ -1,6 +1,6 @@
 import type { Route } from "./+types/api.v1.wire-sizes";
 import { requireUser } from "~/auth/guard.server";
-import { apiError } from "~/lib/api.server";
+import { apiError, methodNotAllowed } from "~/lib/api.server";
 import { listWireSizes } from "~/reference/wire-sizes.server";
 
 /** GET /api/v1/wire-sizes?standard=AWG|IEC → the sizes with bare diameter, area and published overall diameters. */
@@ -12,4 +12,10 @@ export async function loader({ request }: Route.LoaderArgs) {
     return apiError(400, message, { standard: [message] });
   }
   return Response.json(await listWireSizes(standard));
+}
+
+/** Any other method: 405 in the API's error shape, after the same check as GET. */
+export async function action({ request }: Route.ActionArgs) {
+  await requireUser(request);
+  return methodNotAllowed(["GET"]);
 }

@@ -441,7 +441,7 @@ const table: Row[] = [
     expect: { anonymous: 404, signedIn: 404 },
   },
   {
-    file: "routes/not-found.tsx",
+    file: "routes/api.v1.not-found.ts",
     method: "GET",
     path: "/api/v1/no-such-route",
     expect: { anonymous: 404, signedIn: 404 },
