@@ -8,7 +8,11 @@ import express, {
   type Response as ExpressResponse,
 } from "express";
 import { lucia } from "~/auth/lucia.server";
+import { expectedOrigin, servesHost } from "~/lib/app-address";
+import { appAddress } from "~/lib/app-url.server";
 import { answerDatabaseOutages } from "./database-unavailable";
+
+export { deploymentProblems } from "./deployment-checks";
 
 declare module "react-router" {
   interface AppLoadContext {
@@ -73,6 +77,11 @@ export function securityHeaders(
     "Cross-Origin-Opener-Policy": "same-origin",
     "Cross-Origin-Resource-Policy": "same-origin",
   };
+  // HSTS only where the public address is HTTPS (a deployment behind TLS);
+  // browsers ignore it over plain HTTP, and a laptop's localhost has none.
+  if (appAddress().protocol === "https:")
+    defaults["Strict-Transport-Security"] =
+      "max-age=31536000; includeSubDomains";
   const writeHead = response.writeHead;
   response.writeHead = function (
     this: typeof response,
@@ -86,15 +95,31 @@ export function securityHeaders(
   next();
 }
 
-/** The origin the app is served at: APP_URL's when set, else the request's own (TRUST_PROXY decides whether X-Forwarded-Proto/-Host count). */
-function appOrigin(request: ExpressRequest): string | null {
+/**
+ * The path React Router will route the request by: the request's target
+ * resolved as a URL (`/api/../stock` is `/stock`, `%2e%2e` and `\\` likewise),
+ * exactly as @react-router/express builds its Request. Every check here
+ * judges this path, never Express's raw `request.path`, so a check and the
+ * route that answers always see the same page.
+ */
+export function routedPath(request: ExpressRequest): string {
   try {
-    const configured = process.env.APP_URL?.trim();
-    if (configured) return new URL(configured).origin;
-    return new URL(`${request.protocol}://${request.host}`).origin;
+    return new URL(`http://localhost${request.originalUrl}`).pathname;
   } catch {
-    return null;
+    return request.path;
   }
+}
+
+function isApiPath(request: ExpressRequest): boolean {
+  return routedPath(request).startsWith("/api/");
+}
+
+/**
+ * The origin a page of ours sends with its forms: APP_URL's (on loopback, the
+ * same machine by the name the request used); null for a host we do not serve.
+ */
+function appOrigin(request: ExpressRequest): string | null {
+  return expectedOrigin(appAddress(), request.host);
 }
 
 function originOf(value: string | undefined): string | null {
@@ -121,7 +146,7 @@ function carriesSessionCookie(request: ExpressRequest): boolean {
 
 function usesBearerToken(request: ExpressRequest): boolean {
   return (
-    request.path.startsWith("/api/") &&
+    isApiPath(request) &&
     /^Bearer\s+\S+$/i.test(request.get("Authorization") ?? "")
   );
 }
@@ -152,11 +177,56 @@ export function refuseCrossSiteRequests(
   const refusal = crossSiteRefusal(request);
   if (!refusal) return next();
   response.status(403);
-  if (request.path.startsWith("/api/")) {
+  if (isApiPath(request)) {
     response.json({ error: { message: refusal } });
   } else {
     response.type("text/plain; charset=utf-8").send(`${refusal}\n`);
   }
+}
+
+/**
+ * Serves only requests for APP_URL's host (on loopback: localhost, 127.0.0.1
+ * and [::1] on its port). A request naming another host is answered 421
+ * before any route: no page, link or e-mail is ever made for a host an
+ * attacker chose. /healthz answers any host, for load balancers that probe
+ * by address; it tells nothing but up or down.
+ */
+export function refuseUnknownHosts(
+  request: ExpressRequest,
+  response: ExpressResponse,
+  next: NextFunction,
+) {
+  if (
+    servesHost(appAddress(), request.host) ||
+    routedPath(request) === "/healthz"
+  )
+    return next();
+  const message = `This server answers for ${appAddress().origin} only.`;
+  response.status(421);
+  if (isApiPath(request)) response.json({ error: { message } });
+  else response.type("text/plain; charset=utf-8").send(`${message}\n`);
+}
+
+/**
+ * Answers from the app (pages, their .data, JSON, CSV) are never stored by a
+ * browser or proxy unless a route says otherwise: most are one person's view
+ * of the stock. The static assets (server.js) keep their own long caching.
+ */
+export function noStoreByDefault(
+  _request: ExpressRequest,
+  response: ExpressResponse,
+  next: NextFunction,
+) {
+  const writeHead = response.writeHead;
+  response.writeHead = function (
+    this: typeof response,
+    ...args: Parameters<typeof writeHead>
+  ) {
+    if (!this.hasHeader("Cache-Control"))
+      this.setHeader("Cache-Control", "no-store");
+    return writeHead.apply(this, args);
+  } as typeof writeHead;
+  next();
 }
 
 export const app = express();
@@ -168,6 +238,8 @@ if (process.env.TRUST_PROXY) {
   app.set("trust proxy", Number.isNaN(hops) ? process.env.TRUST_PROXY : hops);
 }
 app.use(securityHeaders);
+app.use(noStoreByDefault);
+app.use(refuseUnknownHosts);
 app.use(compression());
 
 // Server-Timing: how long the app took for each answer (read by `npm run bench` and browsers' dev tools).

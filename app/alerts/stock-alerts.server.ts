@@ -16,6 +16,7 @@ import {
   sql,
 } from "drizzle-orm";
 import { db } from "~/db/client.server";
+import { appUrl } from "~/lib/app-url.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import {
   alertPreferences,
@@ -40,13 +41,6 @@ import {
   type AlertPerson,
 } from "./low-stock";
 
-/** The app's address for links in e-mails sent outside a request. */
-function appBaseUrl(): string {
-  return (
-    process.env.APP_URL?.replace(/\/+$/, "") ||
-    `http://localhost:${process.env.PORT ?? 3000}`
-  );
-}
 
 /** Active buyers and admins with their alert choice. */
 async function alertPeople(): Promise<AlertPerson[]> {
@@ -146,7 +140,7 @@ async function tellAboutNewAlert(
     ...item,
     bestOffer: await bestOfferFor(item.sku, suggestedOrderQuantity(item)),
     buildOrders: await openBuildOrdersNeeding(item.id),
-    itemUrl: `${appBaseUrl()}/stock/items/${encodeURIComponent(item.sku)}`,
+    itemUrl: `${appUrl()}/stock/items/${encodeURIComponent(item.sku)}`,
   });
   // Written now, sent after the request has been answered (see queueMailForLater).
   const outboxIds = await queueMailForLater(
@@ -277,7 +271,7 @@ export async function sendAlertDigest(): Promise<{
       reorderPoint: parseQuantity(alert.reorderPoint),
       openedAt: alert.openedAt,
     })),
-    `${appBaseUrl()}/alerts`,
+    `${appUrl()}/alerts`,
   );
   for (const person of recipients) {
     const { outboxId } = await queueMail({ to: person.email, ...mail });

@@ -52,7 +52,7 @@ export async function action({ request }: Route.ActionArgs) {
     ({ mailSent } = await invitePerson({
       ...submission.value,
       invitedBy: admin.name,
-      appUrl: appUrl(request),
+      appUrl: appUrl(),
     }));
   } catch (error) {
     if (!isDuplicateKey(error)) throw error;

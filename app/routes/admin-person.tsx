@@ -77,7 +77,7 @@ export async function action({ request, params }: Route.ActionArgs) {
         ...invitationMessage({
           name: person.name,
           invitedBy: admin.name,
-          link: `${appUrl(request)}/set-password?token=${token}`,
+          link: `${appUrl()}/set-password?token=${token}`,
         }),
       });
       return {

@@ -22,7 +22,7 @@ export async function action({ request }: Route.ActionArgs) {
   if (submission.status !== "success") {
     return data({ result: submission.reply(), sent: false }, { status: 400 });
   }
-  await requestPasswordReset(submission.value.email, appUrl(request));
+  await requestPasswordReset(submission.value.email, appUrl());
   // The same answer whether or not the address has an account.
   return { result: submission.reply({ resetForm: true }), sent: true };
 }

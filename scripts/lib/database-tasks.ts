@@ -1,4 +1,5 @@
 import path from "node:path";
+import { and, count, eq, isNotNull } from "drizzle-orm";
 import { drizzle, type MySql2Database } from "drizzle-orm/mysql2";
 import { migrate } from "drizzle-orm/mysql2/migrator";
 import mysql from "mysql2/promise";
@@ -36,6 +37,22 @@ export function migrateDatabase(databaseUrl: string): Promise<void> {
   return withDatabase(databaseUrl, async (db) => {
     await migrate(db, { migrationsFolder: path.join(projectRoot, "drizzle") });
     await syncReferenceData(db);
+  });
+}
+
+/** True when no active account has a password: nobody can sign in yet. */
+export function nobodyCanSignIn(databaseUrl: string): Promise<boolean> {
+  return withDatabase(databaseUrl, async (db) => {
+    const [row] = await db
+      .select({ people: count() })
+      .from(schema.users)
+      .where(
+        and(
+          eq(schema.users.active, true),
+          isNotNull(schema.users.passwordHash),
+        ),
+      );
+    return (row?.people ?? 0) === 0;
   });
 }
 

@@ -69,7 +69,7 @@ export function testDatabaseName(): string {
     );
   return name;
 }
-const appUser = "turnledger";
+export const appUser = "turnledger";
 
 interface Credentials {
   rootPassword: string;
@@ -201,6 +201,111 @@ async function waitUntilReady(
 }
 
 /**
+ * Starts the instance's mariadbd in the background; returns a function that
+ * tells whether it has exited. `socketOnly` starts it with no TCP port at all.
+ */
+function startServer(
+  server: string,
+  instance: MariadbInstance,
+  options: { socketOnly?: boolean } = {},
+): () => boolean {
+  const network = options.socketOnly
+    ? ["--skip-networking"]
+    : [`--port=${instance.port}`, "--bind-address=127.0.0.1"];
+  const child = spawn(
+    server,
+    [
+      "--no-defaults",
+      `--datadir=${instance.dataDir}`,
+      `--socket=${instance.socketPath}`,
+      ...network,
+      `--pid-file=${instance.pidFile}`,
+      `--log-error=${instance.logFile}`,
+      ...serverUserArgs(),
+      "--character-set-server=utf8mb4",
+      "--collation-server=utf8mb4_unicode_ci",
+      "--innodb-buffer-pool-size=256M",
+      "--max-connections=300",
+    ],
+    { detached: true, stdio: "ignore" },
+  );
+  let childExited = false;
+  child.once("exit", () => (childExited = true));
+  child.unref();
+  return () => childExited;
+}
+
+/**
+ * A new data folder's root accounts have no password. They get one while the
+ * server listens on its socket only (no TCP port), so there is never a moment
+ * when anyone on the machine could connect to 127.0.0.1:port as root without
+ * a password; then that server is shut down.
+ */
+async function setRootPasswordBeforeListening(
+  server: string,
+  instance: MariadbInstance,
+  credentials: Credentials,
+): Promise<void> {
+  const exited = startServer(server, instance, { socketOnly: true });
+  await waitUntilReady(instance, "", exited);
+  const rootPassword = randomBytes(18).toString("base64url");
+  const connection = await rootConnection(instance, "");
+  try {
+    const [rows] = await connection.query(
+      "SELECT Host AS host FROM mysql.user WHERE User = 'root'",
+    );
+    for (const { host } of rows as { host: string }[]) {
+      await connection.query("ALTER USER 'root'@? IDENTIFIED BY ?", [
+        host,
+        rootPassword,
+      ]);
+    }
+    credentials.rootPassword = rootPassword;
+    writeCredentials(instance, credentials);
+    await connection.query("SHUTDOWN");
+  } finally {
+    await connection.end().catch(() => undefined);
+  }
+  const started = Date.now();
+  while (!exited() && Date.now() - started < 30_000)
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  if (!exited())
+    throw new Error("MariaDB did not stop after root's password was set.");
+}
+
+/**
+ * What the application user may do, on its own databases only: read and
+ * write rows, and the schema changes migrations make. No global privilege,
+ * no GRANT, no FILE, PROCESS, SUPER or access to mysql.*.
+ */
+export const appUserPrivileges = [
+  "SELECT",
+  "INSERT",
+  "UPDATE",
+  "DELETE",
+  "CREATE",
+  "DROP",
+  "ALTER",
+  "INDEX",
+  "REFERENCES",
+];
+
+/** The rest of a database's privileges (MariaDB 10.11), never given to the application user. */
+const privilegesNotNeeded = [
+  "CREATE TEMPORARY TABLES",
+  "LOCK TABLES",
+  "EXECUTE",
+  "CREATE VIEW",
+  "SHOW VIEW",
+  "CREATE ROUTINE",
+  "ALTER ROUTINE",
+  "EVENT",
+  "TRIGGER",
+  "DELETE HISTORY",
+  "GRANT OPTION",
+];
+
+/**
  * Makes sure the private MariaDB is installed, initialised and running, and
  * that both databases (or the ones asked for) and the application user exist.
  * Returns the database URLs for the application and for the tests, and how to
@@ -243,6 +348,7 @@ export async function ensureLocalMariadb(
       appPassword: randomBytes(18).toString("base64url"),
     };
     writeCredentials(instance, credentials);
+    await setRootPasswordBeforeListening(server, instance, credentials);
   }
   const credentials = readCredentials(instance);
   if (!credentials) {
@@ -261,47 +367,16 @@ export async function ensureLocalMariadb(
       );
     }
     console.log(`[turnledger] starting MariaDB on 127.0.0.1:${port}`);
-    const child = spawn(
-      server,
-      [
-        "--no-defaults",
-        `--datadir=${dataDir}`,
-        `--socket=${socketPath}`,
-        `--port=${port}`,
-        "--bind-address=127.0.0.1",
-        `--pid-file=${pidFile}`,
-        `--log-error=${logFile}`,
-        ...serverUserArgs(),
-        "--character-set-server=utf8mb4",
-        "--collation-server=utf8mb4_unicode_ci",
-        "--innodb-buffer-pool-size=256M",
-        "--max-connections=300",
-      ],
-      { detached: true, stdio: "ignore" },
-    );
-    let childExited = false;
-    child.once("exit", () => (childExited = true));
-    exited = () => childExited;
-    child.unref();
+    exited = startServer(server, instance);
   }
   await waitUntilReady(instance, credentials.rootPassword, exited);
 
   const connection = await rootConnection(instance, credentials.rootPassword);
   try {
     if (!credentials.rootPassword) {
-      // The installer leaves root without a password: give every root account one.
-      const rootPassword = randomBytes(18).toString("base64url");
-      const [rows] = await connection.query(
-        "SELECT Host AS host FROM mysql.user WHERE User = 'root'",
+      throw new Error(
+        `${credentialsFile} has no root password. Remove .data/ to start afresh.`,
       );
-      for (const { host } of rows as { host: string }[]) {
-        await connection.query("ALTER USER 'root'@? IDENTIFIED BY ?", [
-          host,
-          rootPassword,
-        ]);
-      }
-      credentials.rootPassword = rootPassword;
-      writeCredentials(instance, credentials);
     }
     for (const name of options.databases ?? [
       appDatabaseName,
@@ -320,7 +395,13 @@ export async function ensureLocalMariadb(
       // The test databases: turnledger_test, and others named turnledger_test_… for parallel runs.
       for (const pattern of [appDatabaseName, "turnledger\\_test%"]) {
         await connection.query(
-          `GRANT ALL PRIVILEGES ON \`${pattern}\`.* TO ?@?`,
+          `GRANT ${appUserPrivileges.join(", ")} ON \`${pattern}\`.* TO ?@?`,
+          [appUser, host],
+        );
+        // What an older version granted beyond them (ALL PRIVILEGES), taken
+        // back after the grant so the user is never without its own.
+        await connection.query(
+          `REVOKE ${privilegesNotNeeded.join(", ")} ON \`${pattern}\`.* FROM ?@?`,
           [appUser, host],
         );
       }

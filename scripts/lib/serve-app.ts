@@ -1,7 +1,16 @@
 import { spawn } from "node:child_process";
 import path from "node:path";
-import { migrateDatabase, seedWhenEmpty } from "./database-tasks";
+import {
+  migrateDatabase,
+  nobodyCanSignIn,
+  seedWhenEmpty,
+} from "./database-tasks";
 import { resolveDatabaseUrl } from "./database-url";
+import {
+  demoDataWanted,
+  firstAdminHint,
+  usesPrivateDatabase,
+} from "./demo-data";
 import { startMailFake, type MailFake } from "./mail-fake";
 import { appServerArguments } from "./app-server-process";
 import { projectRoot } from "./project-paths";
@@ -9,11 +18,19 @@ import { runCommand } from "./run-command";
 
 /**
  * What `npm start` and `npm run dev` share: the database (started, migrated,
- * seeded when empty), the mail fake unless SMTP_URL is set, then the server.
+ * seeded with the demo when it is the private one or when asked), the mail
+ * fake unless SMTP_URL is set, then the server on APP_URL (by default this
+ * machine's http://localhost:PORT).
  */
 export async function serveApp(
   mode: "production" | "development",
 ): Promise<void> {
+  const demo = demoDataWanted({
+    privateDatabase: usesPrivateDatabase(process.env),
+    argv: process.argv.slice(2),
+    env: process.env,
+  });
+  const port = process.env.PORT ?? "3000";
   const databaseUrl = await resolveDatabaseUrl();
   await migrateDatabase(databaseUrl);
 
@@ -37,7 +54,9 @@ export async function serveApp(
     );
   }
   process.env.SMTP_URL ??= smtpUrl;
-  await seedWhenEmpty(databaseUrl);
+  if (demo) await seedWhenEmpty(databaseUrl);
+  else if (await nobodyCanSignIn(databaseUrl))
+    console.log(`[turnledger] ${firstAdminHint}`);
 
   const bin = (name: string) =>
     path.join(projectRoot, "node_modules", ".bin", name);
@@ -54,7 +73,12 @@ export async function serveApp(
       NODE_ENV: mode,
       DATABASE_URL: databaseUrl,
       SMTP_URL: smtpUrl,
-      PORT: process.env.PORT ?? "3000",
+      PORT: port,
+      // On a laptop the app is this machine (localhost, 127.0.0.1, [::1]).
+      APP_URL: process.env.APP_URL || `http://localhost:${port}`,
+      // The demo's published password is allowed on a demo server only
+      // (server/deployment-checks.ts).
+      ...(demo ? { DEMO_DATA: "1" } : {}),
     },
   });
 

@@ -76,6 +76,8 @@ export async function startAppServer(options: {
       DATABASE_URL: options.databaseUrl,
       SMTP_URL: options.smtpUrl,
       APP_URL: baseUrl,
+      // The test database holds the demo company, published password and all.
+      DEMO_DATA: "1",
     },
   });
   const running = () => server.exitCode === null && server.signalCode === null;

@@ -95,9 +95,13 @@ describe("database outage", () => {
     await relay.down();
     const health = await get("/healthz");
     expect(health.status).toBe(503);
-    expect(
-      ((await health.json()) as { database: { state: string } }).database.state,
-    ).toBe("down");
+    // Down, and nothing more: the driver's message (hosts, users, databases)
+    // goes to the server's log, never to an anonymous caller.
+    expect(await health.json()).toEqual({
+      status: "unavailable",
+      database: { state: "down" },
+    });
+    expect(health.headers.get("Cache-Control")).toBe("no-store");
 
     const page = await get("/");
     expect(page.status).toBe(503);

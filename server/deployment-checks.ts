@@ -1,0 +1,97 @@
+/**
+ * What a production server checks before it listens: it refuses to start
+ * where a real shop would be unsafe, and says how to fix it.
+ *
+ * - APP_URL is set and well-formed: every e-mailed link and the Host check
+ *   come from it (app/lib/app-address.ts).
+ * - No demo account signs in with the published demo password, unless the
+ *   server is a demo (DEMO_DATA=1, which `npm start` sets on its private
+ *   MariaDB and the tests set for theirs).
+ */
+import { inArray, isNotNull, like, or, and } from "drizzle-orm";
+import { verifyPassword } from "~/auth/password.server";
+import { db } from "~/db/client.server";
+import { users } from "~/db/schema";
+import { parseAppUrl } from "~/lib/app-address";
+import { demoPeople } from "../seed/demo-people";
+
+/** The password the README publishes for the demo accounts. */
+export const publishedDemoPassword = "turnledger-demo";
+
+/** True when this server is a demo on purpose (DEMO_DATA=1). */
+export function isDemoServer(env: NodeJS.ProcessEnv = process.env): boolean {
+  return env.DEMO_DATA === "1";
+}
+
+function appUrlProblem(env: NodeJS.ProcessEnv): string | null {
+  const setting = env.APP_URL?.trim();
+  if (!setting)
+    return (
+      "APP_URL is not set. A production server needs the public address people open, " +
+      "e.g. APP_URL=https://turnledger.example.com: e-mailed links are built from it and " +
+      "requests for any other host are refused. (`npm start` on a laptop sets it to " +
+      "http://localhost:PORT itself.)"
+    );
+  try {
+    parseAppUrl(setting);
+    return null;
+  } catch (error) {
+    return (error as Error).message;
+  }
+}
+
+/** The demo accounts (by e-mail or seeded id) that still sign in with a demo password. */
+async function accountsWithDemoPassword(
+  env: NodeJS.ProcessEnv,
+): Promise<string[]> {
+  const candidates = await db
+    .select({ email: users.email, passwordHash: users.passwordHash })
+    .from(users)
+    .where(
+      and(
+        isNotNull(users.passwordHash),
+        or(
+          inArray(
+            users.email,
+            demoPeople.map((person) => person.email),
+          ),
+          like(users.id, "demo-%"),
+        ),
+      ),
+    )
+    .limit(100);
+  const passwords = [
+    ...new Set([publishedDemoPassword, env.DEMO_PASSWORD].filter(Boolean)),
+  ] as string[];
+  const found: string[] = [];
+  for (const candidate of candidates) {
+    for (const password of passwords) {
+      if (await verifyPassword(candidate.passwordHash!, password)) {
+        found.push(candidate.email);
+        break;
+      }
+    }
+  }
+  return found;
+}
+
+/** Why this production server must not start; empty when it may. */
+export async function deploymentProblems(
+  env: NodeJS.ProcessEnv = process.env,
+): Promise<string[]> {
+  if (env.NODE_ENV !== "production") return [];
+  const problems: string[] = [];
+  const appUrl = appUrlProblem(env);
+  if (appUrl) problems.push(appUrl);
+  if (!isDemoServer(env)) {
+    const demoAccounts = await accountsWithDemoPassword(env);
+    if (demoAccounts.length > 0)
+      problems.push(
+        `${demoAccounts.join(", ")} still sign${demoAccounts.length === 1 ? "s" : ""} in with the published demo password. ` +
+          "Give each a new password (`npm run admin:create -- <e-mail>` prints a link to set one) " +
+          "or deactivate it on the People page, then start again. " +
+          "Only a demo server may keep them: start it with DEMO_DATA=1.",
+      );
+  }
+  return problems;
+}
