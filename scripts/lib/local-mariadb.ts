@@ -323,8 +323,7 @@ export async function ensureLocalMariadb(
   urlFor(database: string): string;
 }> {
   const instance = options.instance ?? projectMariadb;
-  const { dataDir, port, socketPath, pidFile, logFile, credentialsFile } =
-    instance;
+  const { dataDir, port, credentialsFile } = instance;
   fs.mkdirSync(dataRoot, { recursive: true });
   const { server, installer } = await ensureInstalled();
 
