@@ -11,15 +11,34 @@ describe("safeRedirectPath", () => {
       "/admin/people?page=2",
     );
   });
+  it("keeps the query and fragment, normalised as a browser reads them", () => {
+    expect(safeRedirectPath("/stock/../prices?q=a b#top")).toBe(
+      "/prices?q=a%20b#top",
+    );
+  });
   it.each([
     "//evil.test",
     "/\\evil.test",
+    "\\\\evil.test",
     "https://evil.test/",
     "javascript:alert(1)",
+    // Browsers drop tabs and newlines anywhere in an address, and controls
+    // and spaces at either end: each of these is "//evil.example" to them.
+    "/\t/evil.example",
+    "/\n/evil.example",
+    "/\r\n/evil.example",
+    "\u0001//evil.example",
+    " //evil.example",
+    // Dot segments that collapse into a leading "//".
+    "/.//evil.example",
+    "/a/..//evil.example",
     "",
     null,
-  ])("sends %s home instead", (value) => {
+  ])("sends %j home instead", (value) => {
     expect(safeRedirectPath(value)).toBe("/");
+  });
+  it("keeps a control character inside a path harmless (percent-encoded, same site)", () => {
+    expect(safeRedirectPath("/stock\u0000x")).toBe("/stock%00x");
   });
 });
 

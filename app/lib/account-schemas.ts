@@ -32,17 +32,30 @@ export const newPasswordSchema = z
 
 export const forgotPasswordSchema = z.object({ email: emailField });
 
-/** Only same-site paths may be redirected to after sign-in. */
+/**
+ * Stands in for the app's own origin when a redirect target is resolved: the
+ * answer is only ever a path, so which host the app really has does not matter.
+ */
+const ownOrigin = "http://turnledger.invalid";
+
+/**
+ * Only same-site paths may be redirected to after sign-in. The value is
+ * resolved as a browser would (tabs and newlines dropped, backslashes read as
+ * slashes, dot segments collapsed) and kept only when it stays on our origin;
+ * the path is sent back re-written, never as it came in.
+ */
 export function safeRedirectPath(value: string | null | undefined): string {
-  if (
-    !value ||
-    !value.startsWith("/") ||
-    value.startsWith("//") ||
-    value.startsWith("/\\")
-  ) {
+  if (!value) return "/";
+  let resolved: URL;
+  try {
+    resolved = new URL(value, ownOrigin);
+  } catch {
     return "/";
   }
-  return value;
+  // "//host" as a path would be read as another host by the browser.
+  if (resolved.origin !== ownOrigin || resolved.pathname.startsWith("//"))
+    return "/";
+  return `${resolved.pathname}${resolved.search}${resolved.hash}`;
 }
 
 /** The one answer to a failed sign-in, whatever the cause (no account enumeration). */

@@ -48,6 +48,28 @@ describe("sign-in page", () => {
     expect(response.headers.get("Location")).toBe("/");
   });
 
+  it.each(["/\t/evil.example", "/\\evil.example", "/.//evil.example"])(
+    "sends %j home: a browser would read it as another host",
+    async (redirectTo) => {
+      const email = uniqueEmail("offsite-tab");
+      await createPerson({ email, password, roles: ["buyer"] });
+      const response = await postForm("/sign-in", {
+        email,
+        password,
+        redirectTo,
+      });
+      expect(response.status).toBe(302);
+      expect(response.headers.get("Location")).toBe("/");
+      // Signed in already, the sign-in page sends them on by the same rule.
+      const again = await get(
+        `/sign-in?redirectTo=${encodeURIComponent(redirectTo)}`,
+        sessionCookieFrom(response)!,
+      );
+      expect(again.status).toBe(302);
+      expect(again.headers.get("Location")).toBe("/");
+    },
+  );
+
   it("answers a wrong password and an unknown e-mail with the same message", async () => {
     const email = uniqueEmail("wrong");
     await createPerson({ email, password, roles: ["buyer"] });
