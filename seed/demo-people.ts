@@ -26,9 +26,8 @@ export const demoPeople: { email: string; name: string; roles: Role[] }[] = [
   },
 ];
 
-export function demoPassword(): string {
-  return process.env.DEMO_PASSWORD || "turnledger-demo";
-}
+/** The demo people's password (one rule for the seed, the tests and the app's refusal of it). */
+export { demoPassword } from "~/auth/demo-password.server";
 
 /** The id the seed gives the demo storekeeper (who records the demo store's movements). */
 export const demoStorekeeperId = "demo-04-storekeeper";

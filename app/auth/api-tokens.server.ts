@@ -1,7 +1,7 @@
 /** Personal API tokens: created by their owner, shown once, stored hashed, revocable. */
 import { randomBytes } from "node:crypto";
 import { and, desc, eq, isNull } from "drizzle-orm";
-import { db } from "~/db/client.server";
+import { db, type Transaction } from "~/db/client.server";
 import { apiTokens, userRoles, users } from "~/db/schema";
 import { isRole, type Role } from "~/lib/roles";
 import { hashToken } from "./email-tokens.server";
@@ -80,6 +80,21 @@ export async function revokeApiToken(
       ),
     );
   return result.affectedRows === 1;
+}
+
+/**
+ * Revokes every live token of the person: a password reset, deactivation or a
+ * change of roles ends what the person's tokens could do (docs/decisions/017).
+ * Revoked, not suspended: reactivation does not bring them back.
+ */
+export async function revokeAllApiTokens(
+  tx: Transaction,
+  userId: string,
+): Promise<void> {
+  await tx
+    .update(apiTokens)
+    .set({ revokedAt: new Date() })
+    .where(and(eq(apiTokens.userId, userId), isNull(apiTokens.revokedAt)));
 }
 
 /**

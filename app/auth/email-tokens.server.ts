@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from "node:crypto";
 import { and, eq, gt, isNull } from "drizzle-orm";
-import { db } from "~/db/client.server";
+import { db, type Transaction } from "~/db/client.server";
 import { emailTokens } from "~/db/schema";
 
 export type EmailTokenPurpose = "invitation" | "password-reset";
@@ -14,7 +14,19 @@ export function hashToken(token: string): string {
   return createHash("sha256").update(token).digest("hex");
 }
 
-/** Creates a single-use token; only its hash is stored. Earlier unused ones of the same purpose end. */
+/**
+ * Whether a new link of the purpose ends the person's earlier unused ones. An
+ * admin sends a new invitation on purpose (the first went astray), so it
+ * replaces the old; anyone can ask for a reset link for anyone, so asking must
+ * not void the link the person holds. Either way, setting a password with one
+ * link ends all the others (`endUnusedEmailTokens`).
+ */
+const newTokenEndsEarlier: Record<EmailTokenPurpose, boolean> = {
+  invitation: true,
+  "password-reset": false,
+};
+
+/** Creates a single-use token; only its hash is stored. */
 export async function createEmailToken(
   userId: string,
   purpose: EmailTokenPurpose,
@@ -22,16 +34,18 @@ export async function createEmailToken(
   const token = randomBytes(32).toString("base64url");
   const now = new Date();
   await db.transaction(async (tx) => {
-    await tx
-      .update(emailTokens)
-      .set({ usedAt: now })
-      .where(
-        and(
-          eq(emailTokens.userId, userId),
-          eq(emailTokens.purpose, purpose),
-          isNull(emailTokens.usedAt),
-        ),
-      );
+    if (newTokenEndsEarlier[purpose]) {
+      await tx
+        .update(emailTokens)
+        .set({ usedAt: now })
+        .where(
+          and(
+            eq(emailTokens.userId, userId),
+            eq(emailTokens.purpose, purpose),
+            isNull(emailTokens.usedAt),
+          ),
+        );
+    }
     await tx.insert(emailTokens).values({
       userId,
       purpose,
@@ -40,6 +54,17 @@ export async function createEmailToken(
     });
   });
   return token;
+}
+
+/** Ends every unused link of the person, of any purpose (a password has just been set). */
+export async function endUnusedEmailTokens(
+  tx: Transaction,
+  userId: string,
+): Promise<void> {
+  await tx
+    .update(emailTokens)
+    .set({ usedAt: new Date() })
+    .where(and(eq(emailTokens.userId, userId), isNull(emailTokens.usedAt)));
 }
 
 /** The token's row when it is unused and unexpired, else null. Does not use it up. */

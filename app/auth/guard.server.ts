@@ -39,6 +39,9 @@ export async function getOptionalUser(
 export async function requireUser(request: Request): Promise<SessionUser> {
   const user = await getOptionalUser(request);
   if (user) return user;
+  // A session that ended (expired, 30 days old, deactivated) clears its cookie.
+  const { setCookie } = await getSessionState(request);
+  const headers = setCookie ? { "Set-Cookie": setCookie } : undefined;
   if (isApiRequest(request)) {
     throw Response.json(
       {
@@ -46,7 +49,7 @@ export async function requireUser(request: Request): Promise<SessionUser> {
           message: "Sign in first: send the session cookie or a bearer token.",
         },
       },
-      { status: 401 },
+      { status: 401, headers },
     );
   }
   const url = new URL(request.url);
@@ -55,7 +58,7 @@ export async function requireUser(request: Request): Promise<SessionUser> {
     back === "/"
       ? "/sign-in"
       : `/sign-in?redirectTo=${encodeURIComponent(back)}`;
-  throw redirect(target);
+  throw redirect(target, { headers });
 }
 
 /** The signed-in user when they hold one of the roles (admins always pass); else 403. */

@@ -6,17 +6,26 @@ import { sessions, users } from "~/db/schema";
 const adapter = new DrizzleMySQLAdapter(db, sessions, users);
 
 /** Session cookies are Secure in production unless COOKIE_SECURE=0 (plain-HTTP test rigs). */
-function cookieIsSecure(): boolean {
+export function cookieIsSecure(): boolean {
   if (process.env.COOKIE_SECURE !== undefined)
     return process.env.COOKIE_SECURE !== "0";
   return process.env.NODE_ENV === "production";
 }
+
+/**
+ * A session ends after 14 days unused (extended when used), and 30 days after
+ * sign-in however much it is used (app/auth/session.server.ts).
+ */
+export const sessionAbsoluteLifetimeMs = 30 * 24 * 60 * 60 * 1000;
 
 export const lucia = new Lucia(adapter, {
   sessionExpiresIn: new TimeSpan(14, "d"),
   sessionCookie: {
     name: "turnledger_session",
     attributes: { secure: cookieIsSecure(), sameSite: "lax", path: "/" },
+  },
+  getSessionAttributes(attributes) {
+    return { startedAt: attributes.startedAt };
   },
   getUserAttributes(attributes) {
     return {
@@ -31,5 +40,6 @@ declare module "lucia" {
   interface Register {
     Lucia: typeof lucia;
     DatabaseUserAttributes: { email: string; name: string; active: boolean };
+    DatabaseSessionAttributes: { startedAt: Date };
   }
 }

@@ -1,11 +1,11 @@
 import { eq } from "drizzle-orm";
 import { generateIdFromEntropySize } from "lucia";
 import { db } from "~/db/client.server";
-import { userRoles } from "~/db/schema";
+import { sessions, userRoles } from "~/db/schema";
 import type { Role } from "~/lib/roles";
 import { userFromApiToken } from "./api-tokens.server";
 import { hashToken } from "./email-tokens.server";
-import { lucia } from "./lucia.server";
+import { lucia, sessionAbsoluteLifetimeMs } from "./lucia.server";
 
 export interface SessionUser {
   id: string;
@@ -64,6 +64,22 @@ async function readSession(request: Request): Promise<SessionState> {
       setCookie: lucia.createBlankSessionCookie().serialize(),
     };
   }
+  const absoluteEnd = session.startedAt.getTime() + sessionAbsoluteLifetimeMs;
+  if (absoluteEnd <= Date.now()) {
+    // 30 days after sign-in the session ends, however often it was extended.
+    await lucia.invalidateSession(session.id);
+    return {
+      user: null,
+      setCookie: lucia.createBlankSessionCookie().serialize(),
+    };
+  }
+  if (session.fresh && session.expiresAt.getTime() > absoluteEnd) {
+    // Extended by lucia just now: no further than the absolute end.
+    await db
+      .update(sessions)
+      .set({ expiresAt: new Date(absoluteEnd) })
+      .where(eq(sessions.id, session.id));
+  }
   if (!user.active) {
     // Deactivation ends sessions at once; this is the belt to that brace.
     await lucia.invalidateUserSessions(user.id);
@@ -105,7 +121,7 @@ export async function startSession(userId: string): Promise<string> {
   const sessionToken = newSessionToken();
   await lucia.createSession(
     userId,
-    {},
+    { startedAt: new Date() },
     { sessionId: sessionIdOf(sessionToken) },
   );
   return lucia.createSessionCookie(sessionToken).serialize();
@@ -118,7 +134,7 @@ export async function endSession(request: Request): Promise<string> {
   return lucia.createBlankSessionCookie().serialize();
 }
 
-/** Ends every session of a user (deactivation, password change). */
+/** Ends every session of a user (deactivation, role change, password change). */
 export function endAllSessions(userId: string): Promise<void> {
   return lucia.invalidateUserSessions(userId);
 }

@@ -5,6 +5,9 @@ import * as schema from "./schema";
 
 export type Database = MySql2Database<typeof schema>;
 
+/** A transaction's handle, for helpers that take part in their caller's transaction. */
+export type Transaction = Parameters<Parameters<Database["transaction"]>[0]>[0];
+
 function createDatabase(): { db: Database; pool: mysql.Pool } {
   const databaseUrl = process.env.DATABASE_URL;
   if (!databaseUrl) {

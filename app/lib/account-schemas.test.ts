@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import {
   newPasswordSchema,
   safeRedirectPath,
+  signInPausedMessage,
   signInSchema,
 } from "./account-schemas";
 
@@ -78,5 +79,16 @@ describe("newPasswordSchema", () => {
       confirmPassword: "long-enough-2",
     });
     expect(parsed.error?.issues[0]?.path).toEqual(["confirmPassword"]);
+  });
+});
+
+describe("signInPausedMessage", () => {
+  it("says what is paused, for how many whole minutes, and how a person lifts a pause on their account", () => {
+    expect(signInPausedMessage("account", 61)).toBe(
+      "Too many wrong passwords for this account: sign-in to it is paused for 2 minutes. If they were not yours, choose a new password through “Forgotten your password?”; that ends the pause at once.",
+    );
+    expect(signInPausedMessage("address", 5)).toBe(
+      "Too many failed sign-ins from your network address: sign-in from it is paused for 1 minute.",
+    );
   });
 });

@@ -60,3 +60,44 @@ export function safeRedirectPath(value: string | null | undefined): string {
 
 /** The one answer to a failed sign-in, whatever the cause (no account enumeration). */
 export const wrongCredentialsMessage = "E-mail or password is wrong.";
+
+/** "3 minutes": a wait in whole minutes, at least one. */
+export function minutesText(seconds: number): string {
+  const minutes = Math.max(1, Math.ceil(seconds / 60));
+  return `${minutes} minute${minutes === 1 ? "" : "s"}`;
+}
+
+/** What a person is told when the sign-in throttle refuses to check a password (docs/decisions/017). */
+export function signInPausedMessage(
+  scope: "account" | "address",
+  retryAfterSeconds: number,
+): string {
+  const wait = minutesText(retryAfterSeconds);
+  return scope === "account"
+    ? `Too many wrong passwords for this account: sign-in to it is paused for ${wait}. If they were not yours, choose a new password through “Forgotten your password?”; that ends the pause at once.`
+    : `Too many failed sign-ins from your network address: sign-in from it is paused for ${wait}.`;
+}
+
+/** What a person is told when too many password checks are under way to take theirs (answered 503). */
+export const passwordWorkBusyMessage =
+  "The server is busy checking passwords. Try again in a few seconds.";
+
+/** The answer to a sign-in that was refused before its password was checked. */
+export function signInRefusal(
+  result:
+    | {
+        kind: "paused";
+        scope: "account" | "address";
+        retryAfterSeconds: number;
+      }
+    | { kind: "busy"; retryAfterSeconds: number },
+): { status: 429 | 503; message: string; headers: Record<string, string> } {
+  return {
+    status: result.kind === "paused" ? 429 : 503,
+    message:
+      result.kind === "paused"
+        ? signInPausedMessage(result.scope, result.retryAfterSeconds)
+        : passwordWorkBusyMessage,
+    headers: { "Retry-After": String(result.retryAfterSeconds) },
+  };
+}

@@ -22,11 +22,30 @@ export const createTokenSchema = z
     lifetimeDays: z
       .enum(tokenLifetimes, { error: "Choose how long the token lives." })
       .default("90"),
+    /** Asked again, so a session left open is not enough to make a token. */
+    currentPassword: z
+      .string({ error: "Enter your current password." })
+      .max(1000),
   })
   .refine((value) => value.scope === "all" || value.roles.length > 0, {
     path: ["roles"],
     message: "Choose at least one role.",
   });
+
+/**
+ * Tokens live a year at most; only admins may make one that never expires, for
+ * themselves (a token acts for its owner only). Changing an admin's roles
+ * revokes every token they have, so a never-expiring one ends with the role.
+ */
+export function lifetimeAllowed(
+  lifetime: (typeof tokenLifetimes)[number],
+  ownerIsAdmin: boolean,
+): boolean {
+  return lifetime !== "never" || ownerIsAdmin;
+}
+
+export const lifetimeTooLongMessage =
+  "A token lives a year at most; only admins may make one that never expires.";
 
 export function tokenExpiry(
   lifetime: (typeof tokenLifetimes)[number],

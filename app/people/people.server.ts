@@ -3,23 +3,37 @@ import { randomBytes } from "node:crypto";
 import { and, asc, count, eq, isNull, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { emailTokens, userRoles, users } from "~/db/schema";
-import { createEmailToken, hashToken } from "~/auth/email-tokens.server";
+import { revokeAllApiTokens } from "~/auth/api-tokens.server";
+import {
+  createEmailToken,
+  endUnusedEmailTokens,
+  findUsableToken,
+  hashToken,
+} from "~/auth/email-tokens.server";
 import {
   decoyPasswordHash,
   hashPassword,
+  isPasswordWorkBusy,
+  passwordWorkRetryAfterSeconds,
   verifyPassword,
 } from "~/auth/password.server";
+import {
+  countResetRequest,
+  type ResetRequestRefusal,
+} from "~/auth/reset-request-limit.server";
 import { endAllSessions } from "~/auth/session.server";
 import {
-  clearFailedSignIns,
-  recordFailedSignIn,
-  signInRetryAfterSeconds,
+  cancelSignInGuess,
+  endSignInPause,
+  reserveSignInGuess,
+  signInSucceeded,
+  type SignInPause,
 } from "~/auth/sign-in-throttle.server";
 import {
   invitationMessage,
   passwordResetMessage,
 } from "~/mail/account-messages";
-import { sendMail } from "~/mail/mailer.server";
+import { queueMailForLater, sendMail } from "~/mail/mailer.server";
 import type { Role } from "~/lib/roles";
 
 export function normaliseEmail(email: string): string {
@@ -30,23 +44,34 @@ export function newUserId(): string {
   return randomBytes(15).toString("base64url");
 }
 
+/** The password checks were too busy to take this one: try again after a moment (answer 503). */
+export type PasswordWorkBusy = { kind: "busy"; retryAfterSeconds: number };
+
 export type SignInResult =
   | { kind: "signed-in"; userId: string }
   | { kind: "wrong-credentials" }
-  | { kind: "throttled"; retryAfterSeconds: number };
+  | SignInPause
+  | PasswordWorkBusy;
+
+const passwordWorkBusy: PasswordWorkBusy = {
+  kind: "busy",
+  retryAfterSeconds: passwordWorkRetryAfterSeconds,
+};
 
 /**
- * Checks an e-mail and password. Unknown e-mail, wrong password, no password
- * yet and deactivated account all answer the same "wrong-credentials".
+ * Checks an e-mail and password under the sign-in throttle (signing in, and
+ * confirming the password again before an API token is made). Unknown e-mail,
+ * wrong password, no password yet and deactivated account all answer the
+ * same "wrong-credentials".
  */
 export async function checkSignIn(
   emailInput: string,
   password: string,
-  ipAddress: string,
+  clientAddress: string,
 ): Promise<SignInResult> {
   const email = normaliseEmail(emailInput);
-  const retryAfterSeconds = await signInRetryAfterSeconds(email, ipAddress);
-  if (retryAfterSeconds > 0) return { kind: "throttled", retryAfterSeconds };
+  const guess = await reserveSignInGuess(email, clientAddress);
+  if (guess.kind === "paused") return guess;
 
   const [user] = await db
     .select({
@@ -57,15 +82,21 @@ export async function checkSignIn(
     .from(users)
     .where(eq(users.email, email))
     .limit(1);
-  const passwordMatches = await verifyPassword(
-    user?.passwordHash ?? (await decoyPasswordHash()),
-    password,
-  );
-  if (!user || !user.passwordHash || !user.active || !passwordMatches) {
-    await recordFailedSignIn(email, ipAddress);
-    return { kind: "wrong-credentials" };
+  let passwordMatches: boolean;
+  try {
+    passwordMatches = await verifyPassword(
+      user?.passwordHash ?? (await decoyPasswordHash()),
+      password,
+    );
+  } catch (error) {
+    if (!isPasswordWorkBusy(error)) throw error;
+    await cancelSignInGuess(guess);
+    return passwordWorkBusy;
   }
-  await clearFailedSignIns(email, ipAddress);
+  // A failure keeps its reserved guess: that is what the throttle counts.
+  if (!user || !user.passwordHash || !user.active || !passwordMatches)
+    return { kind: "wrong-credentials" };
+  await signInSucceeded(guess);
   return { kind: "signed-in", userId: user.id };
 }
 
@@ -162,7 +193,10 @@ export async function invitePerson(input: {
   return { userId, mailSent };
 }
 
-/** Replaces a person's roles in one transaction. */
+/**
+ * Replaces a person's roles in one transaction, revokes their API tokens and
+ * ends their sessions: what they could do before must not outlive the change.
+ */
 export async function setRoles(userId: string, roles: Role[]): Promise<void> {
   await db.transaction(async (tx) => {
     await tx.delete(userRoles).where(eq(userRoles.userId, userId));
@@ -171,7 +205,9 @@ export async function setRoles(userId: string, roles: Role[]): Promise<void> {
         .insert(userRoles)
         .values(roles.map((role) => ({ userId, role })));
     }
+    await revokeAllApiTokens(tx, userId);
   });
+  await endAllSessions(userId);
 }
 
 export async function countActiveAdmins(): Promise<number> {
@@ -186,45 +222,75 @@ export async function countActiveAdmins(): Promise<number> {
   return row?.admins ?? 0;
 }
 
-/** Deactivating ends every session of the person at once; reactivating lets them sign in again. */
+/**
+ * Deactivating ends every session of the person and revokes their API tokens
+ * at once; reactivating lets them sign in again (with new tokens only).
+ */
 export async function setActive(
   userId: string,
   active: boolean,
 ): Promise<void> {
-  await db.update(users).set({ active }).where(eq(users.id, userId));
+  await db.transaction(async (tx) => {
+    await tx.update(users).set({ active }).where(eq(users.id, userId));
+    if (!active) await revokeAllApiTokens(tx, userId);
+  });
   if (!active) await endAllSessions(userId);
 }
 
-/** Sends a reset link when the e-mail belongs to an active account; silent otherwise. */
+export type PasswordResetRequest = { kind: "accepted" } | ResetRequestRefusal;
+
+/**
+ * Queues a reset link when the e-mail belongs to an active account; silent
+ * otherwise. Limited per e-mail and per client address. The answer does not
+ * wait for SMTP (the mail is handed over after it), so it comes as soon for
+ * an account as for no account; earlier links stay valid.
+ */
 export async function requestPasswordReset(
   emailInput: string,
+  clientAddress: string,
   appUrl: string,
-): Promise<void> {
+): Promise<PasswordResetRequest> {
   const email = normaliseEmail(emailInput);
+  const refusal = await countResetRequest(email, clientAddress);
+  if (refusal) return refusal;
   const [user] = await db
     .select({ id: users.id, name: users.name, active: users.active })
     .from(users)
     .where(eq(users.email, email))
     .limit(1);
-  if (!user || !user.active) return;
-  const token = await createEmailToken(user.id, "password-reset");
-  const message = passwordResetMessage({
-    name: user.name,
-    link: `${appUrl}/set-password?token=${token}`,
-  });
-  await sendMail({ to: email, ...message });
+  if (user?.active) {
+    const token = await createEmailToken(user.id, "password-reset");
+    const message = passwordResetMessage({
+      name: user.name,
+      link: `${appUrl}/set-password?token=${token}`,
+    });
+    await queueMailForLater([{ to: email, ...message }]);
+  }
+  return { kind: "accepted" };
 }
 
+export type SetPasswordResult =
+  { kind: "set"; userId: string } | { kind: "unusable" } | PasswordWorkBusy;
+
 /**
- * Uses a token (once) to set a password. Ends the person's other sessions.
- * Returns the user id, or null when the token is unknown, used or expired.
+ * Uses a link (once) to set a password. The link is looked up before the
+ * password is hashed, so an unknown one costs a query, not argon2. Setting
+ * the password ends the person's other links, sessions, API tokens and any
+ * pause of sign-in to their account.
  */
 export async function setPasswordWithToken(
   token: string,
   password: string,
-): Promise<string | null> {
-  const passwordHash = await hashPassword(password);
-  const userId = await db.transaction(async (tx) => {
+): Promise<SetPasswordResult> {
+  if (!(await findUsableToken(token))) return { kind: "unusable" };
+  let passwordHash: string;
+  try {
+    passwordHash = await hashPassword(password);
+  } catch (error) {
+    if (isPasswordWorkBusy(error)) return passwordWorkBusy;
+    throw error;
+  }
+  const owner = await db.transaction(async (tx) => {
     const [row] = await tx
       .select({
         id: emailTokens.id,
@@ -241,22 +307,22 @@ export async function setPasswordWithToken(
       .for("update")
       .limit(1);
     if (!row || row.expiresAt.getTime() <= Date.now()) return null;
-    const [owner] = await tx
-      .select({ active: users.active })
+    const [person] = await tx
+      .select({ email: users.email, active: users.active })
       .from(users)
       .where(eq(users.id, row.userId))
       .limit(1);
-    if (!owner?.active) return null;
-    await tx
-      .update(emailTokens)
-      .set({ usedAt: new Date() })
-      .where(eq(emailTokens.id, row.id));
+    if (!person?.active) return null;
+    await endUnusedEmailTokens(tx, row.userId);
     await tx
       .update(users)
       .set({ passwordHash })
       .where(eq(users.id, row.userId));
-    return row.userId;
+    await revokeAllApiTokens(tx, row.userId);
+    return { userId: row.userId, email: person.email };
   });
-  if (userId) await endAllSessions(userId);
-  return userId;
+  if (!owner) return { kind: "unusable" };
+  await endAllSessions(owner.userId);
+  await endSignInPause(owner.email);
+  return { kind: "set", userId: owner.userId };
 }

@@ -18,7 +18,14 @@ import {
   setAlertPreference,
 } from "~/alerts/alert-preferences.server";
 import { alertMailModes, alertModeOf } from "~/alerts/low-stock";
-import { createTokenSchema, tokenExpiry } from "~/lib/token-schemas";
+import { signInRefusal } from "~/lib/account-schemas";
+import {
+  createTokenSchema,
+  lifetimeAllowed,
+  lifetimeTooLongMessage,
+  tokenExpiry,
+} from "~/lib/token-schemas";
+import { checkSignIn } from "~/people/people.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -43,7 +50,7 @@ const alertModeSchema = z.object({
 
 const revokeSchema = z.object({ tokenId: z.coerce.number().int().positive() });
 
-export async function action({ request }: Route.ActionArgs) {
+export async function action({ request, context }: Route.ActionArgs) {
   const user = await requireUser(request);
   const formData = await request.formData();
   if (formData.get("intent") === "alert-mode") {
@@ -92,20 +99,55 @@ export async function action({ request }: Route.ActionArgs) {
     };
   }
   const submission = parseWithZod(formData, {
-    schema: createTokenSchema.refine(
-      (value) =>
-        value.scope === "all" ||
-        value.roles.every((role) => user.roles.includes(role)),
-      {
-        path: ["roles"],
-        message: "A token can only have roles you hold yourself.",
-      },
-    ),
+    schema: createTokenSchema
+      .refine(
+        (value) =>
+          value.scope === "all" ||
+          value.roles.every((role) => user.roles.includes(role)),
+        {
+          path: ["roles"],
+          message: "A token can only have roles you hold yourself.",
+        },
+      )
+      .refine(
+        (value) =>
+          lifetimeAllowed(value.lifetimeDays, user.roles.includes("admin")),
+        { path: ["lifetimeDays"], message: lifetimeTooLongMessage },
+      ),
   });
+  const hideFields = ["currentPassword"];
   if (submission.status !== "success") {
     return data(
-      { result: submission.reply(), newToken: null, notice: null },
+      {
+        result: submission.reply({ hideFields }),
+        newToken: null,
+        notice: null,
+      },
       { status: 400 },
+    );
+  }
+  // The password again, under the sign-in throttle: a session left open is
+  // not enough to make a token that outlives it.
+  const check = await checkSignIn(
+    user.email,
+    submission.value.currentPassword,
+    context.clientAddress,
+  );
+  if (check.kind !== "signed-in") {
+    const refusal =
+      check.kind === "wrong-credentials"
+        ? { status: 400, message: "Your password is wrong.", headers: {} }
+        : signInRefusal(check);
+    return data(
+      {
+        result: submission.reply({
+          fieldErrors: { currentPassword: [refusal.message] },
+          hideFields,
+        }),
+        newToken: null,
+        notice: null,
+      },
+      { status: refusal.status, headers: refusal.headers },
     );
   }
   const { token } = await createApiToken({
@@ -143,7 +185,9 @@ export default function Account({
   });
   const { key: selectKey, ...selectProps } = getSelectProps(
     fields.lifetimeDays,
+    { ariaDescribedBy: fields.lifetimeDays.descriptionId },
   );
+  const isAdmin = user.roles.includes("admin");
   return (
     <div className="max-w-4xl space-y-8">
       <div>
@@ -237,9 +281,29 @@ export default function Account({
               <option value="30">30 days</option>
               <option value="90">90 days</option>
               <option value="365">a year</option>
-              <option value="never">until revoked</option>
+              {isAdmin ? <option value="never">until revoked</option> : null}
             </select>
+            <p
+              id={fields.lifetimeDays.descriptionId}
+              className="mt-1 text-xs text-graphite-500"
+            >
+              {isAdmin
+                ? "A year at most, or until revoked for an admin's own tokens."
+                : "A year at most."}
+            </p>
+            {fields.lifetimeDays.errors ? (
+              <p id={fields.lifetimeDays.errorId} className="field-error">
+                {fields.lifetimeDays.errors.join(" ")}
+              </p>
+            ) : null}
           </div>
+          <TextField
+            field={fields.currentPassword}
+            label="Your password"
+            type="password"
+            autoComplete="current-password"
+            hint="Asked again before a token is made."
+          />
           <fieldset className="space-y-3 md:col-span-2">
             <legend className="field-label">Roles the token acts with</legend>
             <label className="flex items-center gap-2 text-sm">

@@ -57,12 +57,15 @@ export async function action({ request, params }: Route.ActionArgs) {
   switch (change.intent) {
     case "save-roles":
       await setRoles(person.id, change.roles);
-      return { result: submission.reply(), done: "Roles saved." };
+      return {
+        result: submission.reply(),
+        done: `Roles saved. ${person.name} is signed out everywhere and their API tokens are revoked.`,
+      };
     case "deactivate":
       await setActive(person.id, false);
       return {
         result: submission.reply(),
-        done: `${person.name} is deactivated and signed out everywhere.`,
+        done: `${person.name} is deactivated, signed out everywhere, and their API tokens are revoked.`,
       };
     case "reactivate":
       await setActive(person.id, true);
@@ -137,6 +140,10 @@ export default function AdminPerson({
       <FormMessages id={form.errorId} errors={form.errors} />
       <Form method="post" {...getFormProps(form)} className="panel space-y-4">
         <RoleCheckboxes field={fields.roles} legend="Roles" />
+        <p className="text-sm text-graphite-700">
+          Saving new roles signs {isSelf ? "you" : "them"} out everywhere and
+          revokes {isSelf ? "your" : "their"} API tokens.
+        </p>
         <button
           type="submit"
           name="intent"
@@ -151,8 +158,9 @@ export default function AdminPerson({
         {person.active ? (
           <>
             <p className="flex-1 text-sm text-graphite-700">
-              Deactivating ends {isSelf ? "your" : "their"} sessions at once;
-              the history they made stays.
+              Deactivating ends {isSelf ? "your" : "their"} sessions and revokes{" "}
+              {isSelf ? "your" : "their"} API tokens at once; the history they
+              made stays.
             </p>
             <button
               type="submit"

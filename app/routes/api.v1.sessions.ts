@@ -2,7 +2,11 @@ import { z } from "zod";
 import type { Route } from "./+types/api.v1.sessions";
 import { getOptionalUser } from "~/auth/guard.server";
 import { endSession, startSession } from "~/auth/session.server";
-import { emailField, wrongCredentialsMessage } from "~/lib/account-schemas";
+import {
+  emailField,
+  signInRefusal,
+  wrongCredentialsMessage,
+} from "~/lib/account-schemas";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
 import { findPerson, checkSignIn } from "~/people/people.server";
 
@@ -32,14 +36,13 @@ export async function action({ request, context }: Route.ActionArgs) {
 
   const { email, password } = await readJsonBody(request, credentialsSchema);
   const result = await checkSignIn(email, password, context.clientAddress);
-  if (result.kind === "throttled") {
+  if (result.kind === "paused" || result.kind === "busy") {
+    const refusal = signInRefusal(result);
     return apiError(
-      429,
-      "Too many failed attempts. Try again later.",
+      refusal.status,
+      refusal.message,
       undefined,
-      {
-        "Retry-After": String(result.retryAfterSeconds),
-      },
+      refusal.headers,
     );
   }
   if (result.kind === "wrong-credentials")

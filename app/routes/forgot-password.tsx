@@ -4,8 +4,8 @@ import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/forgot-password";
 import { getOptionalUser } from "~/auth/guard.server";
 import { AccountCard } from "~/components/account-card";
-import { TextField } from "~/components/text-field";
-import { forgotPasswordSchema } from "~/lib/account-schemas";
+import { FormMessages, TextField } from "~/components/text-field";
+import { forgotPasswordSchema, minutesText } from "~/lib/account-schemas";
 import { appUrl } from "~/lib/app-url.server";
 import { requestPasswordReset } from "~/people/people.server";
 
@@ -14,7 +14,15 @@ export async function loader({ request }: Route.LoaderArgs) {
   return null;
 }
 
-export async function action({ request }: Route.ActionArgs) {
+/** Why a request for a link was refused (the same whether or not the address has an account). */
+function limitMessage(scope: "account" | "address", retryAfterSeconds: number) {
+  const wait = minutesText(retryAfterSeconds);
+  return scope === "account"
+    ? `Several links have been sent to this address in the last hour; each works for 30 minutes. Use the newest, or ask again in ${wait}.`
+    : `Too many requests for links from your network address: ask again in ${wait}.`;
+}
+
+export async function action({ request, context }: Route.ActionArgs) {
   await getOptionalUser(request);
   const submission = parseWithZod(await request.formData(), {
     schema: forgotPasswordSchema,
@@ -22,10 +30,32 @@ export async function action({ request }: Route.ActionArgs) {
   if (submission.status !== "success") {
     return data({ result: submission.reply(), sent: false }, { status: 400 });
   }
-  await requestPasswordReset(submission.value.email, appUrl());
+  const outcome = await requestPasswordReset(
+    submission.value.email,
+    context.clientAddress,
+    appUrl(),
+  );
+  if (outcome.kind === "limited") {
+    return data(
+      {
+        result: submission.reply({
+          formErrors: [limitMessage(outcome.scope, outcome.retryAfterSeconds)],
+        }),
+        sent: false,
+      },
+      {
+        status: 429,
+        headers: { "Retry-After": String(outcome.retryAfterSeconds) },
+      },
+    );
+  }
   // The same answer whether or not the address has an account.
   return { result: submission.reply({ resetForm: true }), sent: true };
 }
+
+/** Sends the action's Retry-After (when limited) with the page. */
+export const headers: Route.HeadersFunction = ({ actionHeaders }) =>
+  actionHeaders;
 
 export const meta: Route.MetaFunction = () => [
   { title: "Forgotten password · Turnledger" },
@@ -53,6 +83,7 @@ export default function ForgotPassword({ actionData }: Route.ComponentProps) {
         </p>
       ) : null}
       <Form method="post" {...getFormProps(form)} className="space-y-4">
+        <FormMessages id={form.errorId} errors={form.errors} />
         <TextField
           field={fields.email}
           label="E-mail"

@@ -2,12 +2,20 @@ import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/set-password";
+import {
+  isPublishedDemoPassword,
+  publishedDemoPasswordMessage,
+} from "~/auth/demo-password.server";
 import { findUsableToken } from "~/auth/email-tokens.server";
 import { getOptionalUser } from "~/auth/guard.server";
 import { startSession } from "~/auth/session.server";
 import { AccountCard } from "~/components/account-card";
 import { FormMessages, TextField } from "~/components/text-field";
-import { newPasswordSchema, passwordMinimum } from "~/lib/account-schemas";
+import {
+  newPasswordSchema,
+  passwordMinimum,
+  passwordWorkBusyMessage,
+} from "~/lib/account-schemas";
 import { setPasswordWithToken } from "~/people/people.server";
 
 const unusableLinkMessage =
@@ -37,11 +45,30 @@ export async function action({ request }: Route.ActionArgs) {
       },
     );
   }
-  const userId = await setPasswordWithToken(
-    submission.value.token,
-    submission.value.password,
-  );
-  if (!userId) {
+  const { token, password } = submission.value;
+  if (isPublishedDemoPassword(password)) {
+    return data(
+      submission.reply({
+        fieldErrors: { password: [publishedDemoPasswordMessage] },
+        hideFields: ["password", "confirmPassword"],
+      }),
+      { status: 400 },
+    );
+  }
+  const result = await setPasswordWithToken(token, password);
+  if (result.kind === "busy") {
+    return data(
+      submission.reply({
+        formErrors: [passwordWorkBusyMessage],
+        hideFields: ["password", "confirmPassword"],
+      }),
+      {
+        status: 503,
+        headers: { "Retry-After": String(result.retryAfterSeconds) },
+      },
+    );
+  }
+  if (result.kind === "unusable") {
     return data(
       submission.reply({
         formErrors: [unusableLinkMessage],
@@ -51,9 +78,13 @@ export async function action({ request }: Route.ActionArgs) {
     );
   }
   throw redirect("/", {
-    headers: { "Set-Cookie": await startSession(userId) },
+    headers: { "Set-Cookie": await startSession(result.userId) },
   });
 }
+
+/** Sends the action's Retry-After (when busy) with the page. */
+export const headers: Route.HeadersFunction = ({ actionHeaders }) =>
+  actionHeaders;
 
 export const meta: Route.MetaFunction = () => [
   { title: "Choose a password · Turnledger" },

@@ -15,6 +15,7 @@ import { AccountCard } from "~/components/account-card";
 import { FormMessages, TextField } from "~/components/text-field";
 import {
   safeRedirectPath,
+  signInRefusal,
   signInSchema,
   wrongCredentialsMessage,
 } from "~/lib/account-schemas";
@@ -41,19 +42,14 @@ export async function action({ request, context }: Route.ActionArgs) {
   }
   const { email, password, redirectTo } = submission.value;
   const result = await checkSignIn(email, password, context.clientAddress);
-  if (result.kind === "throttled") {
-    const minutes = Math.ceil(result.retryAfterSeconds / 60);
+  if (result.kind === "paused" || result.kind === "busy") {
+    const refusal = signInRefusal(result);
     return data(
       submission.reply({
-        formErrors: [
-          `Too many failed attempts. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`,
-        ],
+        formErrors: [refusal.message],
         hideFields: ["password"],
       }),
-      {
-        status: 429,
-        headers: { "Retry-After": String(result.retryAfterSeconds) },
-      },
+      { status: refusal.status, headers: refusal.headers },
     );
   }
   if (result.kind === "wrong-credentials") {
@@ -70,7 +66,7 @@ export async function action({ request, context }: Route.ActionArgs) {
   });
 }
 
-/** Sends the action's Retry-After (when throttled) with the page. */
+/** Sends the action's Retry-After (when paused or busy) with the page. */
 export const headers: Route.HeadersFunction = ({ actionHeaders }) =>
   actionHeaders;
 

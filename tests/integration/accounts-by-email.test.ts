@@ -6,6 +6,7 @@ import {
   signIn,
   uniqueEmail,
 } from "../support/app-client";
+import { demoPassword } from "../../seed/demo-people";
 import { linkIn, waitForMessage } from "../support/mail-fake-client";
 import {
   closeTestDatabase,
@@ -114,6 +115,37 @@ describe("password reset", () => {
     expect(response.status).toBe(200);
     expect(await response.text()).toContain("If that address has an account");
     await expect(waitForMessage(email, /./, 1_000)).rejects.toThrow();
+  });
+
+  it("refuses the published demo password as a new password, with a field message, and keeps the link", async () => {
+    const email = uniqueEmail("demo-password");
+    await createPerson({
+      email,
+      password: "the-old-password",
+      roles: ["buyer"],
+    });
+    await postForm("/forgot-password", { email });
+    const token = new URL(
+      linkIn(await waitForMessage(email, /new Turnledger password/)),
+    ).searchParams.get("token")!;
+    for (const published of new Set(["turnledger-demo", demoPassword()])) {
+      const refused = await postForm("/set-password", {
+        token,
+        password: published,
+        confirmPassword: published,
+      });
+      expect(refused.status).toBe(400);
+      expect(await refused.text()).toContain(
+        "This password is published with the Turnledger demo; choose another.",
+      );
+    }
+    await expect(signIn(email, "turnledger-demo")).rejects.toThrow();
+    const set = await postForm("/set-password", {
+      token,
+      password: "a-private-password",
+      confirmPassword: "a-private-password",
+    });
+    expect(set.status).toBe(302);
   });
 
   it("rejects mismatched passwords with a field message", async () => {

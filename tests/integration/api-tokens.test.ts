@@ -3,9 +3,11 @@ import {
   baseUrl,
   get,
   postForm,
+  sessionCookieFrom,
   signIn,
   uniqueEmail,
 } from "../support/app-client";
+import { linkIn, waitForMessage } from "../support/mail-fake-client";
 import {
   closeTestDatabase,
   createPerson,
@@ -22,7 +24,13 @@ async function createToken(
 ): Promise<string> {
   const response = await postForm(
     "/account",
-    { intent: "create", lifetimeDays: "90", scope: "chosen", ...fields },
+    {
+      intent: "create",
+      lifetimeDays: "90",
+      scope: "chosen",
+      currentPassword: password,
+      ...fields,
+    },
     cookie,
   );
   expect(response.status).toBe(200);
@@ -77,6 +85,7 @@ describe("personal API tokens", () => {
         scope: "chosen",
         roles: ["admin"],
         lifetimeDays: "30",
+        currentPassword: password,
       },
       cookie,
     );
@@ -169,5 +178,183 @@ describe("personal API tokens", () => {
       401,
     );
     expect((await get("/api/v1/me")).status).toBe(401);
+  });
+});
+
+/** The person's tokens as stored: whether each is revoked, and its lifetime in days (null: never expires). */
+async function storedTokens(userId: string) {
+  const [rows] = await testDatabase().query(
+    `SELECT revoked_at IS NOT NULL AS revoked,
+            ROUND(TIMESTAMPDIFF(SECOND, created_at, expires_at) / 86400) AS lifetimeDays
+       FROM api_tokens WHERE user_id = ? ORDER BY id`,
+    [userId],
+  );
+  return (rows as { revoked: number; lifetimeDays: number | null }[]).map(
+    (row) => ({
+      revoked: Boolean(Number(row.revoked)),
+      lifetimeDays: row.lifetimeDays === null ? null : Number(row.lifetimeDays),
+    }),
+  );
+}
+
+describe("creating a token", () => {
+  it("asks for the current password again: a wrong one is a field message and makes no token", async () => {
+    const email = uniqueEmail("token-password");
+    const userId = await createPerson({ email, password, roles: ["buyer"] });
+    const cookie = await signIn(email, password);
+    const wrong = await postForm(
+      "/account",
+      {
+        intent: "create",
+        name: "stolen laptop",
+        scope: "all",
+        lifetimeDays: "30",
+        currentPassword: "not-my-password",
+      },
+      cookie,
+    );
+    expect(wrong.status).toBe(400);
+    const html = await wrong.text();
+    expect(html).toContain("Your password is wrong.");
+    expect(html).not.toMatch(/tl_[A-Za-z0-9_-]{43}/);
+    const missing = await postForm(
+      "/account",
+      { intent: "create", name: "x", scope: "all", lifetimeDays: "30" },
+      cookie,
+    );
+    expect(missing.status).toBe(400);
+    expect(await missing.text()).toContain("Enter your current password.");
+    expect(await storedTokens(userId)).toEqual([]);
+    // Still signed in, and the right password makes the token.
+    await createToken(cookie, { name: "bench scale", scope: "all" });
+    expect(await storedTokens(userId)).toHaveLength(1);
+  });
+
+  it("lives a year at most, unless an admin makes one for themselves", async () => {
+    const email = uniqueEmail("token-lifetime");
+    const userId = await createPerson({ email, password, roles: ["buyer"] });
+    const cookie = await signIn(email, password);
+    const forever = await postForm(
+      "/account",
+      {
+        intent: "create",
+        name: "forever",
+        scope: "all",
+        lifetimeDays: "never",
+        currentPassword: password,
+      },
+      cookie,
+    );
+    expect(forever.status).toBe(400);
+    expect(await forever.text()).toContain(
+      "A token lives a year at most; only admins may make one that never expires.",
+    );
+    await createToken(cookie, {
+      name: "yearly",
+      scope: "all",
+      lifetimeDays: "365",
+    });
+    expect(await storedTokens(userId)).toEqual([
+      { revoked: false, lifetimeDays: 365 },
+    ]);
+
+    const adminEmail = uniqueEmail("token-admin");
+    const adminId = await createPerson({
+      email: adminEmail,
+      password,
+      roles: ["admin"],
+    });
+    const admin = await signIn(adminEmail, password);
+    await createToken(admin, {
+      name: "monitoring",
+      scope: "all",
+      lifetimeDays: "never",
+    });
+    expect(await storedTokens(adminId)).toEqual([
+      { revoked: false, lifetimeDays: null },
+    ]);
+  });
+});
+
+describe("a person's tokens", () => {
+  async function adminCookie(): Promise<string> {
+    const email = uniqueEmail("token-admin");
+    await createPerson({ email, password, roles: ["admin"] });
+    return signIn(email, password);
+  }
+
+  async function personWithToken(roles: ("buyer" | "storekeeper")[]) {
+    const email = uniqueEmail("token-holder");
+    const userId = await createPerson({ email, password, roles });
+    const cookie = await signIn(email, password);
+    const token = await createToken(cookie, { name: "script", scope: "all" });
+    expect((await withToken("/api/v1/me", token)).status).toBe(200);
+    return { email, userId, cookie, token };
+  }
+
+  it("are revoked, and the sessions ended, by a password reset", async () => {
+    const { email, userId, cookie, token } = await personWithToken(["buyer"]);
+    expect((await postForm("/forgot-password", { email })).status).toBe(200);
+    const resetToken = new URL(
+      linkIn(await waitForMessage(email, /new Turnledger password/)),
+    ).searchParams.get("token")!;
+    const set = await postForm("/set-password", {
+      token: resetToken,
+      password: "a-brand-new-password",
+      confirmPassword: "a-brand-new-password",
+    });
+    expect(set.status).toBe(302);
+    expect((await withToken("/api/v1/me", token)).status).toBe(401);
+    expect((await get("/api/v1/me", cookie)).status).toBe(401);
+    expect((await get("/api/v1/me", sessionCookieFrom(set)!)).status).toBe(200);
+    expect(await storedTokens(userId)).toEqual([
+      { revoked: true, lifetimeDays: 90 },
+    ]);
+  });
+
+  it("are revoked by an admin's deactivation, and stay revoked when the person is reactivated", async () => {
+    const admin = await adminCookie();
+    const { userId, token } = await personWithToken(["buyer"]);
+    expect(
+      (
+        await postForm(
+          `/admin/people/${userId}`,
+          { intent: "deactivate" },
+          admin,
+        )
+      ).status,
+    ).toBe(200);
+    expect((await withToken("/api/v1/me", token)).status).toBe(401);
+    expect(
+      (
+        await postForm(
+          `/admin/people/${userId}`,
+          { intent: "reactivate" },
+          admin,
+        )
+      ).status,
+    ).toBe(200);
+    expect((await withToken("/api/v1/me", token)).status).toBe(401);
+    expect(await storedTokens(userId)).toEqual([
+      { revoked: true, lifetimeDays: 90 },
+    ]);
+  });
+
+  it("are revoked, and the sessions ended, when an admin changes the person's roles", async () => {
+    const admin = await adminCookie();
+    const { userId, cookie, token } = await personWithToken(["buyer"]);
+    const saved = await postForm(
+      `/admin/people/${userId}`,
+      { intent: "save-roles", roles: ["buyer", "storekeeper"] },
+      admin,
+    );
+    expect(saved.status).toBe(200);
+    expect((await withToken("/api/v1/me", token)).status).toBe(401);
+    expect((await get("/api/v1/me", cookie)).status).toBe(401);
+    expect(await storedTokens(userId)).toEqual([
+      { revoked: true, lifetimeDays: 90 },
+    ]);
+    // The admin's own session goes on.
+    expect((await get("/api/v1/me", admin)).status).toBe(200);
   });
 });

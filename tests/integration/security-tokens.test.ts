@@ -1,10 +1,11 @@
 /**
  * E-mailed links, personal API tokens and sessions, beyond what the account
- * tests check: links are single-use (invitations too), a newer link ends the
- * older one, an expired or deactivated one is refused, a new password ends
- * every session, a token is shown once, no token is kept in clear text in
- * any table that holds it, and a session id read from the table signs no one
- * in. See docs/decisions/003, 012 and 015.
+ * tests check: links are single-use (invitations too), a newer reset link
+ * leaves the older one valid until one is used, an expired or deactivated one
+ * is refused, a new password ends every session, a token is shown once, no
+ * token is kept in clear text in any table that holds it, a session id read
+ * from the table signs no one in, and no session outlives 30 days. See
+ * docs/decisions/003, 012, 015 and 017.
  */
 import { createHash } from "node:crypto";
 import { afterAll, describe, expect, it } from "vitest";
@@ -102,7 +103,7 @@ async function placesHolding(text: string): Promise<string[]> {
 }
 
 describe("password-reset links", () => {
-  it("end the earlier link when a new one is asked for", async () => {
+  it("leave the earlier link valid when a new one is asked for; using either ends the other", async () => {
     const email = uniqueEmail("two-links");
     await createPerson({
       email,
@@ -112,11 +113,11 @@ describe("password-reset links", () => {
     const first = await requestReset(email);
     const second = await requestReset(email);
     expect(second).not.toBe(first);
-    expect((await setPassword(first, "first-link-password")).status).toBe(410);
+    expect((await setPassword(first, "first-link-password")).status).toBe(302);
     expect((await setPassword(second, "second-link-password")).status).toBe(
-      302,
+      410,
     );
-    await signIn(email, "second-link-password");
+    await signIn(email, "first-link-password");
   });
 
   it("end every session of the person when used, and work once", async () => {
@@ -238,6 +239,7 @@ describe("personal API tokens", () => {
         name: "shown once",
         scope: "all",
         lifetimeDays: "30",
+        currentPassword: "token-password",
       },
       cookie,
     );
@@ -268,7 +270,13 @@ describe("no token in clear text", () => {
     const cookie = await signIn(email, "token-password");
     const created = await postForm(
       "/account",
-      { intent: "create", name: "scanned", scope: "all", lifetimeDays: "30" },
+      {
+        intent: "create",
+        name: "scanned",
+        scope: "all",
+        lifetimeDays: "30",
+        currentPassword: "token-password",
+      },
       cookie,
     );
     const token = (await created.text()).match(/tl_[A-Za-z0-9_-]{43}/)![0];
@@ -374,6 +382,63 @@ describe("session cookies", () => {
     expect(await storedSessionIds(userId)).toEqual([
       sha256Hex(cookie.slice(`${sessionCookieName}=`.length)),
     ]);
+  });
+
+  it("end 30 days after sign-in even when extended since: the cookie is cleared and the row removed", async () => {
+    const email = uniqueEmail("session-absolute");
+    const userId = await createPerson({
+      email,
+      password: "token-password",
+      roles: ["buyer"],
+    });
+    const cookie = await signIn(email, "token-password");
+    // Used every day since: extended 13 days ago, 13 days of idle life left.
+    await testDatabase().query(
+      `UPDATE sessions
+          SET started_at = UTC_TIMESTAMP() - INTERVAL 30 DAY - INTERVAL 1 MINUTE,
+              expires_at = UTC_TIMESTAMP() + INTERVAL 13 DAY
+        WHERE user_id = ?`,
+      [userId],
+    );
+    const page = await get("/account", cookie);
+    expect(page.status).toBe(302);
+    expect(page.headers.get("Location")).toBe("/sign-in?redirectTo=%2Faccount");
+    const cleared = page.headers
+      .getSetCookie()
+      .find((header) => header.startsWith(`${sessionCookieName}=`));
+    expect(cleared).toMatch(/^turnledger_session=;.*Max-Age=0/i);
+    expect(await storedSessionIds(userId)).toEqual([]);
+    expect((await get("/api/v1/me", cookie)).status).toBe(401);
+  });
+
+  it("are not extended past their 30th day", async () => {
+    const email = uniqueEmail("session-near-end");
+    const userId = await createPerson({
+      email,
+      password: "token-password",
+      roles: ["buyer"],
+    });
+    const cookie = await signIn(email, "token-password");
+    // Started 28 days ago, 1 day of idle life left: an extension by 14 days
+    // would end on day 42; it ends on day 30 instead.
+    await testDatabase().query(
+      `UPDATE sessions
+          SET started_at = UTC_TIMESTAMP() - INTERVAL 28 DAY,
+              expires_at = UTC_TIMESTAMP() + INTERVAL 1 DAY
+        WHERE user_id = ?`,
+      [userId],
+    );
+    expect((await get("/account", cookie)).status).toBe(200);
+    const [rows] = await testDatabase().query(
+      "SELECT TIMESTAMPDIFF(MINUTE, started_at, expires_at) AS minutes FROM sessions WHERE user_id = ?",
+      [userId],
+    );
+    const minutes = (rows as { minutes: number }[]).map((row) =>
+      Number(row.minutes),
+    );
+    expect(minutes).toHaveLength(1);
+    expect(minutes[0]).toBeLessThanOrEqual(30 * 24 * 60);
+    expect(minutes[0]).toBeGreaterThanOrEqual(30 * 24 * 60 - 1);
   });
 
   it("end by their hash on sign-out, leaving the person's other sessions", async () => {

@@ -8,6 +8,7 @@ import {
   signIn,
   uniqueEmail,
 } from "../support/app-client";
+import { linkIn, waitForMessage } from "../support/mail-fake-client";
 import {
   closeTestDatabase,
   createPerson,
@@ -167,6 +168,26 @@ describe("API sign-in", () => {
   });
 });
 
+/** Removes every count of one throttle rule, so a test that fills it leaves the next a clean start. */
+async function clearCounts(rule: string): Promise<void> {
+  await testDatabase().query("DELETE FROM attempt_counters WHERE rule = ?", [
+    rule,
+  ]);
+}
+
+/** The count of one throttle rule for one subject (e-mail or address), 0 when there is none. */
+async function countOf(rule: string, subject: string): Promise<number> {
+  const [rows] = await testDatabase().query(
+    "SELECT attempts FROM attempt_counters WHERE rule = ? AND subject = ? AND window_ends_at > UTC_TIMESTAMP(3)",
+    [rule, subject],
+  );
+  return Number((rows as { attempts: number }[])[0]?.attempts ?? 0);
+}
+
+interface ApiError {
+  error: { message: string };
+}
+
 describe("throttle", () => {
   it("refuses the 6th attempt within 15 minutes with 429 and Retry-After, even with the right password", async () => {
     const email = uniqueEmail("throttle");
@@ -192,14 +213,114 @@ describe("throttle", () => {
     expect(page.headers.get("Retry-After")).toBeTruthy();
   });
 
-  it("counts failures in the database, so they hold for any app server", async () => {
-    const email = uniqueEmail("counted");
-    await sendJson("POST", "/api/v1/sessions", { email, password: "wrong" });
-    const [rows] = await testDatabase().query(
-      "SELECT COUNT(*) AS failures FROM failed_sign_ins WHERE email = ?",
-      [email],
+  it("lets 50 parallel wrong passwords for one account have 5 checked, no more, and then refuses the right one with a message that says why", async () => {
+    const email = uniqueEmail("parallel");
+    await createPerson({ email, password, roles: ["buyer"] });
+    const answers = await Promise.all(
+      Array.from({ length: 50 }, (_, attempt) =>
+        sendJson("POST", "/api/v1/sessions", {
+          email,
+          password: `wrong-${attempt}`,
+        }),
+      ),
     );
-    expect((rows as { failures: number }[])[0]!.failures).toBe(1);
+    const statuses = answers.map((answer) => answer.status);
+    // 401: the password was checked and was wrong; 429: refused unchecked.
+    expect(statuses.filter((status) => status === 401)).toHaveLength(5);
+    expect(statuses.filter((status) => status === 429)).toHaveLength(45);
+
+    const right = await sendJson("POST", "/api/v1/sessions", {
+      email,
+      password,
+    });
+    expect(right.status).toBe(429);
+    expect(sessionCookieFrom(right)).toBeNull();
+    const message = ((await right.json()) as ApiError).error.message;
+    expect(message).toMatch(
+      /^Too many wrong passwords for this account: sign-in to it is paused for \d+ minutes?\./,
+    );
+    expect(message).toContain("Forgotten your password?");
+
+    const page = await postForm("/sign-in", { email, password });
+    expect(page.status).toBe(429);
+    expect(await page.text()).toContain(
+      "Too many wrong passwords for this account",
+    );
+  });
+
+  it("counts failures in the database, per account and per address; a right password counts none and clears the account's", async () => {
+    await clearCounts("sign-in-address");
+    const email = uniqueEmail("counted");
+    await createPerson({ email, password, roles: ["buyer"] });
+    await sendJson("POST", "/api/v1/sessions", { email, password: "wrong" });
+    expect(await countOf("sign-in-account", email)).toBe(1);
+    expect(await countOf("sign-in-address", "127.0.0.1")).toBe(1);
+
+    const other = uniqueEmail("counted-other");
+    await createPerson({ email: other, password, roles: ["buyer"] });
+    for (let time = 0; time < 3; time += 1) await signIn(other, password);
+    await signIn(email, password);
+    expect(await countOf("sign-in-account", email)).toBe(0);
+    expect(await countOf("sign-in-address", "127.0.0.1")).toBe(1);
+  });
+
+  it("lifts an account's pause when the person sets a new password from an e-mailed link", async () => {
+    const email = uniqueEmail("paused");
+    await createPerson({ email, password, roles: ["buyer"] });
+    for (let attempt = 1; attempt <= 5; attempt += 1) {
+      await sendJson("POST", "/api/v1/sessions", {
+        email,
+        password: `wrong-${attempt}`,
+      });
+    }
+    expect(
+      (await sendJson("POST", "/api/v1/sessions", { email, password })).status,
+    ).toBe(429);
+    expect((await postForm("/forgot-password", { email })).status).toBe(200);
+    const token = new URL(
+      linkIn(await waitForMessage(email, /new Turnledger password/)),
+    ).searchParams.get("token")!;
+    const set = await postForm("/set-password", {
+      token,
+      password: "a-fresh-password",
+      confirmPassword: "a-fresh-password",
+    });
+    expect(set.status).toBe(302);
+    await signIn(email, "a-fresh-password");
+  });
+
+  it("pauses sign-in from one address after 100 failures on any accounts, and says so", async () => {
+    await clearCounts("sign-in-address");
+    try {
+      for (let batch = 0; batch < 10; batch += 1) {
+        const answers = await Promise.all(
+          Array.from({ length: 10 }, () =>
+            sendJson("POST", "/api/v1/sessions", {
+              email: uniqueEmail("spray"),
+              password: "a-common-password",
+            }),
+          ),
+        );
+        expect(answers.map((answer) => answer.status)).toEqual(
+          Array(10).fill(401),
+        );
+      }
+      const email = uniqueEmail("behind-proxy");
+      await createPerson({ email, password, roles: ["buyer"] });
+      const refused = await sendJson("POST", "/api/v1/sessions", {
+        email,
+        password,
+      });
+      expect(refused.status).toBe(429);
+      expect(Number(refused.headers.get("Retry-After"))).toBeGreaterThan(0);
+      expect(((await refused.json()) as ApiError).error.message).toMatch(
+        /^Too many failed sign-ins from your network address: sign-in from it is paused for \d+ minutes?\./,
+      );
+      // The person's own account was never counted against.
+      expect(await countOf("sign-in-account", email)).toBe(0);
+    } finally {
+      await clearCounts("sign-in-address");
+    }
   });
 });
 

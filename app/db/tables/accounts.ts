@@ -60,6 +60,8 @@ export const sessions = mysqlTable(
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
     expiresAt: datetime("expires_at", { mode: "date" }).notNull(),
+    /** When the person signed in: no extension keeps a session past 30 days from here. */
+    startedAt: datetime("started_at", { mode: "date" }).notNull(),
   },
   (table) => [index("sessions_user_idx").on(table.userId)],
 );
@@ -85,22 +87,33 @@ export const emailTokens = mysqlTable(
   ],
 );
 
-/** Failed sign-ins, kept in the database so the throttle holds across app servers. */
-export const failedSignIns = mysqlTable(
-  "failed_sign_ins",
+/** What the attempt counters count (app/auth/attempt-counters.server.ts). */
+export const attemptRules = [
+  "sign-in-account",
+  "sign-in-address",
+  "reset-account",
+  "reset-address",
+] as const;
+
+/**
+ * Attempts per rule and subject (an e-mail or a client address) in a fixed
+ * window, counted with one atomic upsert so parallel requests never see the
+ * same count; kept in the database so the limits hold across app servers.
+ */
+export const attemptCounters = mysqlTable(
+  "attempt_counters",
   {
-    id: int("id").autoincrement().primaryKey(),
-    email: varchar("email", { length: 254 }).notNull(),
-    ipAddress: varchar("ip_address", { length: 64 }).notNull(),
-    attemptedAt: datetime("attempted_at", { mode: "date", fsp: 3 }).notNull(),
+    rule: mysqlEnum("rule", attemptRules).notNull(),
+    subject: varchar("subject", { length: 254 }).notNull(),
+    attempts: int("attempts").notNull(),
+    windowEndsAt: datetime("window_ends_at", {
+      mode: "date",
+      fsp: 3,
+    }).notNull(),
   },
   (table) => [
-    index("failed_sign_ins_lookup_idx").on(
-      table.email,
-      table.ipAddress,
-      table.attemptedAt,
-    ),
-    index("failed_sign_ins_time_idx").on(table.attemptedAt),
+    primaryKey({ columns: [table.rule, table.subject] }),
+    index("attempt_counters_window_idx").on(table.windowEndsAt),
   ],
 );
 
