@@ -1,7 +1,7 @@
 /**
  * Limits on asking for password-reset links (docs/decisions/017): 3 an hour
  * per e-mail asked for (whether or not it has an account, so a refusal tells
- * nothing), and 30 an hour per client address (IPv6 by its /64). Every
+ * nothing), and 50 an hour per client address (IPv6 by its /64). Every
  * request counts, answered or refused.
  */
 import { addressGroup } from "./address-group";
@@ -11,7 +11,7 @@ const oneHour = 60 * 60 * 1000;
 
 export const resetRequestLimits = {
   account: { rule: "reset-account", limit: 3, windowMs: oneHour },
-  address: { rule: "reset-address", limit: 30, windowMs: oneHour },
+  address: { rule: "reset-address", limit: 50, windowMs: oneHour },
 } as const satisfies Record<string, AttemptLimit>;
 
 export type ResetRequestRefusal = {
