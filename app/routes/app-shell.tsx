@@ -8,12 +8,18 @@ import {
 import type { Route } from "./+types/app-shell";
 import { requireUser } from "~/auth/guard.server";
 import { sessionHeaders } from "~/auth/session-headers.server";
+import { FlashMessage } from "~/components/flash-message";
+import { takeFlash } from "~/lib/flash.server";
 import { navigationItems } from "~/lib/navigation";
 import { roleLabels, userHasRole } from "~/lib/roles";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  return data({ user }, { headers: await sessionHeaders(request) });
+  // The one-time message after an action: taken here, for whichever page comes next.
+  const { flash, setCookie } = await takeFlash(request);
+  const headers = new Headers(await sessionHeaders(request));
+  if (setCookie) headers.append("Set-Cookie", setCookie);
+  return data({ user, flash }, { headers });
 }
 
 /** The estimators' live calculations change nothing on the server: the shell need not reload after them. */
@@ -24,12 +30,12 @@ export function shouldRevalidate({
   return formAction?.startsWith("/tools/") ? false : defaultShouldRevalidate;
 }
 
-/** Sends a refreshed session cookie with the page. */
+/** Sends a refreshed session cookie (and the cleared message cookie) with the page. */
 export const headers: Route.HeadersFunction = ({ loaderHeaders }) =>
   loaderHeaders;
 
 export default function AppShell({ loaderData }: Route.ComponentProps) {
-  const { user } = loaderData;
+  const { user, flash } = loaderData;
   const items = navigationItems.filter(
     (item) => item.roles.length === 0 || userHasRole(user, item.roles),
   );
@@ -92,6 +98,7 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
         </nav>
       </header>
       <main className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">
+        <FlashMessage flash={flash} />
         <Outlet />
       </main>
       <footer className="border-t border-rule py-4 print:border-0 text-center text-xs text-graphite-500">

@@ -6,7 +6,7 @@ import {
 import { parseWithZod } from "@conform-to/zod/v4";
 import { createColumnHelper } from "@tanstack/react-table";
 import { useState } from "react";
-import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { data, Form, Link, useNavigation } from "react-router";
 import type { z } from "zod";
 import type { Route } from "./+types/build-order";
 import { requireRole, requireUser } from "~/auth/guard.server";
@@ -47,6 +47,8 @@ import { BuildOrderStatusBadge } from "~/components/build-order-status-badge";
 import { DataTable } from "~/components/data-table";
 import { QuantityField } from "~/components/quantity-field";
 import { FormMessages } from "~/components/text-field";
+import type { FlashNote } from "~/lib/flash-messages";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
 import { isStockError } from "~/stock/stock-errors";
@@ -73,19 +75,11 @@ async function orderOr404(id: number): Promise<BuildOrderDetails> {
   return order;
 }
 
-/** The message after a step: the new-order page sends a code, the steps here their own words. */
-function doneMessage(done: string | null): string | null {
-  if (done === "created")
-    return "Build order made. Reserve its stock when the build is due.";
-  return done;
-}
-
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
   const order = await orderOr404(orderIdOf(params.orderId));
   return {
     order,
-    done: doneMessage(new URL(request.url).searchParams.get("done")),
     can: {
       build: userHasRole(user, ["builder"]),
       issue: userHasRole(user, ["storekeeper"]),
@@ -117,27 +111,9 @@ function stepRefused(
   return data<StepAnswer>({ intent, result, shortages }, { status });
 }
 
-function done(orderId: number, message: string): never {
-  throw redirect(
-    `/build-orders/${orderId}?${new URLSearchParams({ done: message })}`,
-  );
-}
-
-function listHeld(
-  held: { sku: string; quantity: number; unit: string }[],
-): string {
-  const bySku = new Map<string, { quantity: number; unit: string }>();
-  for (const row of held) {
-    const found = bySku.get(row.sku);
-    if (found) found.quantity += row.quantity;
-    else bySku.set(row.sku, { quantity: row.quantity, unit: row.unit });
-  }
-  return [...bySku]
-    .map(
-      ([sku, { quantity, unit }]) =>
-        `${formatStockQuantity(Math.round(quantity * 1000) / 1000, unit)} of ${sku}`,
-    )
-    .join(", ");
+/** Back to the order's page, with the message of the step taken. */
+async function done(orderId: number, note: FlashNote): Promise<never> {
+  throw await redirectWithFlash(`/build-orders/${orderId}`, note);
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -153,7 +129,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       { status: 403 },
     );
   }
-  const order = await orderOr404(id);
+  await orderOr404(id);
   if (!isBuildOrderIntent(intent)) {
     return stepRefused(
       "",
@@ -170,7 +146,6 @@ export async function action({ request, params }: Route.ActionArgs) {
   });
   if (submission.status !== "success")
     return stepRefused(intent, submission.reply(), 400);
-  const reference = order.reference;
   const value = submission.value;
   try {
     switch (value.intent) {
@@ -178,42 +153,25 @@ export async function action({ request, params }: Route.ActionArgs) {
         const reserved = await reserveBuildOrderStock(id, user.id, {
           partial: value.partial,
         });
-        if (reserved.reserved.length === 0)
-          done(id, `Everything ${reference} still needs is already held.`);
-        const short =
-          reserved.shortages.length > 0
-            ? ` Still short: ${reserved.shortages.map((shortage) => `${formatStockQuantity(shortage.short, shortage.unit)} of ${shortage.sku}`).join(", ")}.`
-            : "";
-        done(
+        return done(id, {
+          code:
+            reserved.reserved.length === 0
+              ? "order-already-held"
+              : "order-reserved",
           id,
-          `Held for ${reference}: ${listHeld(reserved.reserved)}.${short}`,
-        );
-        break;
+        });
       }
       case "issue": {
-        const issued = await issueToBuildOrder(id, value, user.id);
-        const { movement } = issued;
-        done(
-          id,
-          `Issued ${formatStockQuantity(-movement.quantity, movement.unit)} of ${movement.sku}${movement.lot ? ` lot ${movement.lot}` : ""} at ${movement.location} to ${reference}. Issued so far ${formatStockQuantity(issued.line.issued, issued.line.unit)} of ${formatStockQuantity(issued.line.required, issued.line.unit)}.`,
-        );
-        break;
+        const { movement } = await issueToBuildOrder(id, value, user.id);
+        return done(id, { code: "order-issued", id: movement.id });
       }
       case "cancel": {
-        const cancelled = await cancelBuildOrder(id, user.id, value.note);
-        done(
-          id,
-          `${reference} cancelled.${cancelled.released.length > 0 ? ` Released ${listHeld(cancelled.released)}.` : ""}`,
-        );
-        break;
+        await cancelBuildOrder(id, user.id, value.note);
+        return done(id, { code: "order-cancelled", id });
       }
       case "complete": {
-        const completed = await completeBuildOrder(id, user.id, value.note);
-        done(
-          id,
-          `${reference} built.${completed.released.length > 0 ? ` Released what was still held: ${listHeld(completed.released)}.` : ""}`,
-        );
-        break;
+        await completeBuildOrder(id, user.id, value.note);
+        return done(id, { code: "order-built", id });
       }
       case "quantity": {
         const changed = await changeBuildOrderQuantity(
@@ -221,11 +179,13 @@ export async function action({ request, params }: Route.ActionArgs) {
           value.quantity,
           user.id,
         );
-        done(
+        return done(id, {
+          code:
+            changed.released.length > 0
+              ? "order-quantity-changed-released"
+              : "order-quantity-changed",
           id,
-          `${reference} is now for ${formatQuantity(value.quantity, "motors")}.${changed.released.length > 0 ? " What it held was released: reserve again." : ""}`,
-        );
-        break;
+        });
       }
     }
   } catch (error) {
@@ -490,7 +450,7 @@ export default function BuildOrder({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { order, done, can } = loaderData;
+  const { order, can } = loaderData;
   const answer = actionData as StepAnswer | null | undefined;
   const primary = primaryStepOf(order, can);
   const resultFor = (intent: BuildOrderIntent) =>
@@ -545,14 +505,6 @@ export default function BuildOrder({
         </Link>
       </div>
 
-      {done ? (
-        <p
-          role="status"
-          className="rounded-md border border-ok/40 bg-ok/10 px-4 py-3 text-ok"
-        >
-          {done}
-        </p>
-      ) : null}
       {answer && answer.intent === "" ? (
         <FormMessages errors={answer.result.error?.[""] ?? undefined} />
       ) : null}

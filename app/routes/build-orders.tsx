@@ -30,6 +30,7 @@ import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
 import { buildOrderStatuses } from "~/db/tables/build-orders";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime, formatQuantity, pageFromSearch } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
 
@@ -82,7 +83,9 @@ export async function action({ request }: Route.ActionArgs) {
   }
   try {
     const created = await createBuildOrder(submission.value, user.id);
-    return redirect(`/build-orders/${created.id}?done=created`);
+    return redirectWithFlash(`/build-orders/${created.id}`, {
+      code: "order-created",
+    });
   } catch (error) {
     if (!isBuildOrderError(error)) throw error;
     const field = createFormFieldOf(error.field);

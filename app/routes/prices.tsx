@@ -1,11 +1,12 @@
 import { parseWithZod } from "@conform-to/zod/v4";
 import { createColumnHelper } from "@tanstack/react-table";
-import { data, redirect, useLocation } from "react-router";
+import { data, useLocation } from "react-router";
 import type { Route } from "./+types/prices";
 import { requireRole, requireUser } from "~/auth/guard.server";
 import { CurrencyRateForm } from "~/components/currency-rate-form";
 import { DataTable } from "~/components/data-table";
 import { MetalBaseForm } from "~/components/metal-base-form";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { formatQuantity } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
 import { companyCurrencyRateRefusal } from "~/purchasing/currency-rate-rules";
@@ -30,7 +31,6 @@ export async function loader({ request }: Route.LoaderArgs) {
     listCurrencyRates(200),
   ]);
   const today = todayUtc();
-  const saved = new URL(request.url).searchParams.get("saved");
   return {
     companyCurrency: currency,
     today,
@@ -42,7 +42,6 @@ export async function loader({ request }: Route.LoaderArgs) {
     ),
     rates,
     currentRates: entriesInForce(rates, (entry) => entry.currency, today),
-    saved: saved === "metal-base" || saved === "currency-rate" ? saved : null,
     canKeep: userHasRole(user, ["buyer"]),
   };
 }
@@ -57,7 +56,7 @@ export async function action({ request }: Route.ActionArgs) {
       return data({ intent, result: submission.reply() }, { status: 400 });
     }
     await setMetalBase(submission.value, user.id);
-    return redirect("/prices?saved=metal-base");
+    return redirectWithFlash("/prices", { code: "metal-base-saved" });
   }
   if (intent === "currency-rate") {
     const submission = parseWithZod(formData, { schema: currencyRateSchema });
@@ -75,7 +74,7 @@ export async function action({ request }: Route.ActionArgs) {
       return data({ intent, result }, { status: 400 });
     }
     await setCurrencyRate(submission.value, user.id);
-    return redirect("/prices?saved=currency-rate");
+    return redirectWithFlash("/prices", { code: "currency-rate-saved" });
   }
   return data(
     { intent: null, result: undefined },
@@ -133,17 +132,6 @@ function rateColumns(company: string) {
   ];
 }
 
-function SavedNote({ children }: { children: React.ReactNode }) {
-  return (
-    <p
-      role="status"
-      className="mb-3 rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
-    >
-      {children}
-    </p>
-  );
-}
-
 function InForce({
   label,
   items,
@@ -176,7 +164,7 @@ export default function Prices({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { companyCurrency: company, today, canKeep, saved } = loaderData;
+  const { companyCurrency: company, today, canKeep } = loaderData;
   // A new key after each save starts the forms afresh instead of keeping the saved values.
   const { key: visit } = useLocation();
   const twoColumns = canKeep
@@ -198,9 +186,6 @@ export default function Prices({
         <h2 id="metal-base-heading" className="mb-3 text-lg font-semibold">
           Metal base
         </h2>
-        {saved === "metal-base" ? (
-          <SavedNote>Metal base saved.</SavedNote>
-        ) : null}
         <div className={twoColumns}>
           <div>
             <InForce
@@ -238,9 +223,6 @@ export default function Prices({
         <h2 id="currency-rates-heading" className="mb-3 text-lg font-semibold">
           Currency rates
         </h2>
-        {saved === "currency-rate" ? (
-          <SavedNote>Currency rate saved.</SavedNote>
-        ) : null}
         <div className={twoColumns}>
           <div>
             <InForce

@@ -1,16 +1,21 @@
 import { parseWithZod } from "@conform-to/zod/v4";
-import { data, Link, redirect } from "react-router";
+import { data, Link } from "react-router";
 import type { Route } from "./+types/reference";
 import { requireRole, requireUser } from "~/auth/guard.server";
 import { AddMagnetGradeForm } from "~/components/add-magnet-grade-form";
 import { ConductorMaterialTable } from "~/components/conductor-material-table";
+import { useFlash } from "~/components/flash-message";
 import { InsulationKindTable } from "~/components/insulation-kind-table";
 import { MagnetGradeTable } from "~/components/magnet-grade-table";
 import { ThermalClassTable } from "~/components/thermal-class-table";
 import { WireSizeTable } from "~/components/wire-size-table";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { userHasRole } from "~/lib/roles";
 import { addMagnetGrade } from "~/reference/magnet-grade-admin.server";
-import { magnetGradeFormSchema } from "~/reference/magnet-grade-form";
+import {
+  magnetGradeFormSchema,
+  magnetGradeKey,
+} from "~/reference/magnet-grade-form";
 import {
   listConductorMaterials,
   listInsulationKinds,
@@ -63,7 +68,6 @@ export async function loader({ request }: Route.LoaderArgs) {
   return {
     section: await rowsOf(table),
     canAddGrade: userHasRole(user, ["admin"]),
-    addedGrade: table === "magnet-grades" ? search.get("added") : null,
   };
 }
 
@@ -87,9 +91,10 @@ export async function action({ request }: Route.ActionArgs) {
       { status: 409 },
     );
   }
-  return redirect(
-    `/reference?table=magnet-grades&added=${encodeURIComponent(outcome.name)}`,
-  );
+  return redirectWithFlash("/reference?table=magnet-grades", {
+    code: "grade-added",
+    id: magnetGradeKey(outcome.name),
+  });
 }
 
 export const meta: Route.MetaFunction = ({ loaderData }) => {
@@ -149,7 +154,9 @@ export default function Reference({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { section, canAddGrade, addedGrade } = loaderData;
+  const { section, canAddGrade } = loaderData;
+  // A new key after each added grade (its message) empties the form.
+  const added = useFlash()?.key ?? "new";
   const title = tables.find((table) => table.id === section.table)!.title;
   return (
     <div className="space-y-6">
@@ -174,22 +181,10 @@ export default function Reference({
             </a>
           ) : null}
         </div>
-        {addedGrade ? (
-          <p
-            role="status"
-            className="rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
-          >
-            Added the grade {addedGrade}.
-          </p>
-        ) : null}
         <Section key={section.table} section={section} />
       </section>
       {section.table === "magnet-grades" && canAddGrade ? (
-        // A new key after each added grade empties the form.
-        <AddMagnetGradeForm
-          key={addedGrade ?? "new"}
-          lastResult={actionData?.result}
-        />
+        <AddMagnetGradeForm key={added} lastResult={actionData?.result} />
       ) : null}
     </div>
   );

@@ -5,7 +5,7 @@ import {
   type FieldMetadata,
 } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
-import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-item-new";
 import { requireRole } from "~/auth/guard.server";
 import { MagnetItemFields } from "~/components/magnet-item-fields";
@@ -14,6 +14,7 @@ import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
 import { WireItemFields } from "~/components/wire-item-fields";
 import { itemKinds } from "~/db/tables/stock-enums";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { listMagnetGrades } from "~/reference/magnet-grades.server";
 import { listWireSizes } from "~/reference/wire-sizes.server";
 import { createItem } from "~/stock/catalogue.server";
@@ -65,7 +66,9 @@ export async function action({ request }: Route.ActionArgs) {
       : submission.reply({ formErrors: [error.message] });
     return data({ result }, { status: error.status });
   }
-  return redirect(`/stock/items/${encodeURIComponent(sku)}?saved=created`);
+  return redirectWithFlash(`/stock/items/${encodeURIComponent(sku)}`, {
+    code: "item-created",
+  });
 }
 
 export const meta: Route.MetaFunction = () => [

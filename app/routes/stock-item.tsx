@@ -1,7 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { createColumnHelper } from "@tanstack/react-table";
-import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-item";
 import { requireRole, requireUser } from "~/auth/guard.server";
 import { SummaryFigure } from "~/components/summary-figure";
@@ -18,11 +18,11 @@ import {
 } from "~/components/stock-item-attributes";
 import { FormMessages, TextField } from "~/components/text-field";
 import type { ConductorKey } from "~/engineering/reference-data";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime, formatQuantity, pageFromSearch } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
 import { updateItem } from "~/stock/catalogue.server";
 import {
-  changeDoneMessages,
   changesCatalogue,
   itemChangeSchema,
   itemPatchOf,
@@ -51,6 +51,7 @@ import {
   formatStockQuantity,
   formatUnitCost,
   itemKindLabel,
+  movementTypeLabels,
 } from "~/stock/stock-quantity-text";
 import {
   magnetShapeOf,
@@ -140,7 +141,6 @@ export async function loader({ request, params }: Route.LoaderArgs) {
       listMovements({ itemId: id, page, pageSize: movementPageSize }),
     ],
   );
-  const saved = url.searchParams.get("saved");
   // Prices for the reorder quantity (one unit when none is set): today's and the last year's.
   const priceQuantity =
     quantityFromNumber(item.reorderQuantity > 0 ? item.reorderQuantity : 1) ??
@@ -158,12 +158,6 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     page,
     pageCount: Math.max(1, Math.ceil(movementCount / movementPageSize)),
     movementCount,
-    done:
-      saved === "created"
-        ? "Added to the catalogue."
-        : saved && saved in changeDoneMessages
-          ? changeDoneMessages[saved as keyof typeof changeDoneMessages]
-          : null,
     can: {
       reorder: userHasRole(user, ["buyer", "storekeeper"]),
       catalogue: userHasRole(user, ["buyer"]),
@@ -206,9 +200,9 @@ export async function action({ request, params }: Route.ActionArgs) {
       { status: error.status },
     );
   }
-  return redirect(
-    `/stock/items/${encodeURIComponent(params.sku)}?saved=${submission.value.intent}`,
-  );
+  return redirectWithFlash(`/stock/items/${encodeURIComponent(params.sku)}`, {
+    code: `item-${submission.value.intent}`,
+  });
 }
 
 export const meta: Route.MetaFunction = ({ data: loaderData }) => [
@@ -220,16 +214,6 @@ export const meta: Route.MetaFunction = ({ data: loaderData }) => [
 type LoaderData = Route.ComponentProps["loaderData"];
 type Balance = LoaderData["item"]["balances"][number];
 type Movement = LoaderData["movements"][number];
-
-const movementTypeLabels: Record<string, string> = {
-  receipt: "Receipt",
-  issue: "Issue",
-  return: "Return",
-  transfer: "Transfer",
-  adjustment: "Adjustment",
-  count: "Count",
-  scrap: "Scrap",
-};
 
 function balanceColumns(unit: string, isWire: boolean) {
   const column = createColumnHelper<Balance>();
@@ -351,7 +335,6 @@ export default function StockItem({
     page,
     pageCount,
     movementCount,
-    done,
     can,
     prices,
     priceHistory,
@@ -431,14 +414,6 @@ export default function StockItem({
         </div>
       </div>
 
-      {done ? (
-        <p
-          role="status"
-          className="rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
-        >
-          {done}
-        </p>
-      ) : null}
       <FormMessages errors={otherErrors ?? undefined} />
 
       <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-3 lg:grid-cols-6">

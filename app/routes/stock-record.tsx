@@ -1,12 +1,14 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { useState } from "react";
-import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-record";
 import { requireRole } from "~/auth/guard.server";
+import { useFlash } from "~/components/flash-message";
 import { MeasureField } from "~/components/measure-field";
 import { FormMessages } from "~/components/text-field";
 import { movementTypes, type MovementType } from "~/db/tables/stock-enums";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { formatQuantity } from "~/lib/format";
 import {
   formatSignedStockQuantity,
@@ -73,7 +75,6 @@ export async function loader({ request }: Route.LoaderArgs) {
   const item = sku ? await findItemBySku(sku) : null;
   const metresPerKg =
     item?.kind === "wire" ? await wireMetresPerKg(item.id) : null;
-  const done = url.searchParams.get("done");
   return {
     type,
     sku,
@@ -81,7 +82,6 @@ export async function loader({ request }: Route.LoaderArgs) {
     metresPerKg,
     notFound: Boolean(sku) && !item,
     locations: await listLocations(),
-    done,
   };
 }
 
@@ -96,15 +96,15 @@ export async function action({ request }: Route.ActionArgs) {
     return data(submission.reply(), { status: 400 });
   }
   try {
-    const recorded = await recordMovement(submission.value, user.id);
-    const { movement, balance } = recorded;
-    const summary = `${typeLabels[movement.type].label} recorded: ${formatStockQuantity(Math.abs(movement.quantity), movement.unit)} of ${movement.sku}${movement.lot ? ` lot ${movement.lot}` : ""} at ${movement.location}${movement.toLocation ? ` → ${movement.toLocation}` : ""}. On hand now ${formatStockQuantity(balance.onHand, movement.unit)}.`;
+    const { movement } = await recordMovement(submission.value, user.id);
     const params = new URLSearchParams({
       type: movement.type,
       sku: movement.sku,
-      done: summary,
     });
-    throw redirect(`/stock/record?${params}`);
+    throw await redirectWithFlash(`/stock/record?${params}`, {
+      code: "movement-recorded",
+      id: movement.id,
+    });
   } catch (error) {
     if (!isStockError(error)) throw error;
     const field = formFieldOf(error.field, submission.value.type);
@@ -130,14 +130,15 @@ function Field(props: Omit<React.ComponentProps<typeof MeasureField>, "id">) {
 }
 
 export default function StockRecord(props: Route.ComponentProps) {
-  const { type, sku, done } = props.loaderData;
-  // Another type, item or a movement just recorded starts the form afresh:
-  // the first balance chosen again, no weight or count left from before.
-  return <MovementForm key={`${type}|${sku}|${done ?? ""}`} {...props} />;
+  const { type, sku } = props.loaderData;
+  // Another type, item or a movement just recorded (its message) starts the form
+  // afresh: the first balance chosen again, no weight or count left from before.
+  const recorded = useFlash()?.key ?? "";
+  return <MovementForm key={`${type}|${sku}|${recorded}`} {...props} />;
 }
 
 function MovementForm({ loaderData, actionData }: Route.ComponentProps) {
-  const { type, item, sku, locations, done, metresPerKg } = loaderData;
+  const { type, item, sku, locations, metresPerKg } = loaderData;
   const navigation = useNavigation();
   const busy = navigation.state !== "idle";
   const [form] = useForm({
@@ -209,15 +210,6 @@ function MovementForm({ loaderData, actionData }: Route.ComponentProps) {
         </ul>
       </nav>
       <p className="text-graphite-700">{typeLabels[type].help}</p>
-
-      {done ? (
-        <p
-          role="status"
-          className="rounded-md border border-ok/40 bg-ok/10 px-4 py-3 text-ok"
-        >
-          {done}
-        </p>
-      ) : null}
 
       <Form method="get" className="panel flex flex-wrap items-end gap-3">
         <input type="hidden" name="type" value={type} />

@@ -5,13 +5,14 @@ import {
 } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { createColumnHelper } from "@tanstack/react-table";
-import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/suppliers";
 import { requireRole, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { QuantityField } from "~/components/quantity-field";
 import { TextAreaField } from "~/components/text-area-field";
 import { FormMessages, TextField } from "~/components/text-field";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
@@ -28,7 +29,6 @@ export async function loader({ request }: Route.LoaderArgs) {
   return {
     suppliers,
     companyCurrency: currency,
-    created: new URL(request.url).searchParams.get("created"),
     canKeep: userHasRole(user, ["buyer"]),
   };
 }
@@ -41,8 +41,9 @@ export async function action({ request }: Route.ActionArgs) {
   if (submission.status !== "success") {
     return data({ result: submission.reply() }, { status: 400 });
   }
+  let id: number;
   try {
-    await createSupplier(submission.value);
+    id = await createSupplier(submission.value);
   } catch (error) {
     if (!isStockError(error)) throw error;
     const result = submission.reply({
@@ -50,9 +51,7 @@ export async function action({ request }: Route.ActionArgs) {
     });
     return data({ result }, { status: error.status });
   }
-  return redirect(
-    `/suppliers?created=${encodeURIComponent(submission.value.name)}`,
-  );
+  return redirectWithFlash("/suppliers", { code: "supplier-added", id });
 }
 
 export const meta: Route.MetaFunction = () => [
@@ -106,7 +105,7 @@ export default function Suppliers({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { suppliers, canKeep, created } = loaderData;
+  const { suppliers, canKeep } = loaderData;
   return (
     <div
       className={canKeep ? "grid gap-8 lg:grid-cols-[1fr_22rem]" : undefined}
@@ -133,14 +132,6 @@ export default function Suppliers({
             </Link>
           </nav>
         </div>
-        {created ? (
-          <p
-            role="status"
-            className="mb-3 rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
-          >
-            Added the supplier {created}.
-          </p>
-        ) : null}
         <DataTable
           caption="Suppliers, their price lines and last price-list import"
           columns={columns}

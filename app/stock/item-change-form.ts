@@ -53,12 +53,3 @@ export function itemPatchOf(change: ItemChange): ItemPatchInput {
       return { active: true };
   }
 }
-
-/** What the page says after a change, by intent. */
-export const changeDoneMessages: Record<ItemChange["intent"], string> = {
-  reorder: "Reorder point and quantity saved.",
-  rename: "Name saved.",
-  archive:
-    "Archived: the item no longer shows in the stock list unless archived items are included.",
-  restore: "Restored to the stock list.",
-};

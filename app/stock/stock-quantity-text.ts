@@ -1,4 +1,5 @@
 /** Stock quantities and money as the stock pages show them, on the one formatter. Pure. */
+import type { MovementType } from "~/db/tables/stock-enums";
 import { formatQuantity } from "~/lib/format";
 
 /** Kilograms and metres to the gram and millimetre (3 decimals), pieces whole: "4.800 kg", "100 pcs". */
@@ -31,3 +32,14 @@ const kindLabels: Record<string, string> = {
 export function itemKindLabel(kind: string): string {
   return kindLabels[kind] ?? kind;
 }
+
+/** The name of each kind of movement, as the journal and the pages show it. */
+export const movementTypeLabels: Record<MovementType, string> = {
+  receipt: "Receipt",
+  issue: "Issue",
+  return: "Return",
+  transfer: "Transfer",
+  adjustment: "Adjustment",
+  count: "Count",
+  scrap: "Scrap",
+};

@@ -80,3 +80,24 @@ export async function signIn(email: string, password: string): Promise<string> {
   }
   return cookie;
 }
+
+/** The name=value part of a Set-Cookie header for the one-time message cookie. */
+export function flashCookieFrom(response: Response): string | null {
+  for (const header of response.headers.getSetCookie()) {
+    const [pair] = header.split(";");
+    if (pair?.startsWith("turnledger_flash=")) return pair;
+  }
+  return null;
+}
+
+/** Follows a redirect as a browser does: to its Location, with the cookies it set (the one-time message). */
+export function followRedirect(
+  response: Response,
+  cookie?: string,
+): Promise<Response> {
+  const location = response.headers.get("location");
+  if (!location) throw new Error(`no redirect: ${response.status}`);
+  const flash = flashCookieFrom(response);
+  const cookies = [cookie, flash].filter(Boolean).join("; ");
+  return get(location, cookies || undefined);
+}

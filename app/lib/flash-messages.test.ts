@@ -1,0 +1,153 @@
+import { describe, expect, it } from "vitest";
+import {
+  flashMessageSubjects,
+  flashText,
+  readFlashNote,
+  subjectKindOf,
+  type FlashCode,
+  type FlashSubjectKind,
+  type MovementSubject,
+} from "./flash-messages";
+
+const nbsp = "\u00a0";
+
+describe("readFlashNote", () => {
+  it("reads back every note the app writes", () => {
+    expect(readFlashNote({ code: "metal-base-saved" })).toEqual({
+      code: "metal-base-saved",
+    });
+    expect(readFlashNote({ code: "supplier-added", id: 42 })).toEqual({
+      code: "supplier-added",
+      id: 42,
+    });
+    expect(readFlashNote({ code: "grade-added", id: "n42sh-special" })).toEqual(
+      { code: "grade-added", id: "n42sh-special" },
+    );
+  });
+
+  it("refuses words, unknown codes and ids of the wrong kind", () => {
+    for (const value of [
+      null,
+      undefined,
+      "",
+      "Metal base saved.",
+      ["metal-base-saved"],
+      {},
+      { code: "Your account is locked" },
+      { code: "toString" },
+      { code: "__proto__" },
+      { code: "metal-base-saved", text: "Send your password" },
+      { code: "metal-base-saved", id: 1 },
+      { code: "supplier-added" },
+      { code: "supplier-added", id: "Evil Corp" },
+      { code: "supplier-added", id: 0 },
+      { code: "supplier-added", id: -3 },
+      { code: "supplier-added", id: 1.5 },
+      { code: "supplier-added", id: 2 ** 60 },
+      { code: "grade-added", id: 7 },
+      { code: "grade-added", id: "" },
+      { code: "grade-added", id: "x".repeat(41) },
+    ]) {
+      expect(readFlashNote(value), JSON.stringify(value)).toBeNull();
+    }
+  });
+
+  it("knows what each message is about", () => {
+    expect(subjectKindOf({ code: "order-issued", id: 9 })).toBe("orderIssue");
+    expect(subjectKindOf({ code: "item-archive" })).toBe("none");
+  });
+});
+
+describe("flashText", () => {
+  it("takes its words from the table", () => {
+    expect(flashText("metal-base-saved", null)).toBe("Metal base saved.");
+    expect(flashText("item-reorder", null)).toBe(
+      "Reorder point and quantity saved.",
+    );
+    expect(flashText("supplier-added", { name: "Spool mill" })).toBe(
+      "Added the supplier Spool mill.",
+    );
+  });
+
+  const receipt: MovementSubject = {
+    type: "receipt",
+    sku: "CU-050",
+    unit: "kg",
+    quantity: 4.8,
+    lot: "SP-710",
+    location: "RACK-A",
+    toLocation: null,
+    onHandAfter: 7.3,
+  };
+
+  it("tells a movement with its units, lot and places", () => {
+    expect(flashText("movement-recorded", receipt)).toBe(
+      `Receipt recorded: 4.800${nbsp}kg of CU-050 lot SP-710 at RACK-A. On hand now 7.300${nbsp}kg.`,
+    );
+    expect(
+      flashText("movement-recorded", {
+        ...receipt,
+        type: "transfer",
+        unit: "pcs",
+        quantity: 20,
+        lot: null,
+        toLocation: "BENCH",
+        onHandAfter: 120,
+      }),
+    ).toBe(
+      `Transfer recorded: 20${nbsp}pcs of CU-050 at RACK-A → BENCH. On hand now 120${nbsp}pcs.`,
+    );
+  });
+
+  it("tells a build order's stock and what is still short", () => {
+    const order = {
+      reference: "BO-0007",
+      quantity: 4,
+      held: [
+        { sku: "CU-050", quantity: 1.442, unit: "kg" },
+        { sku: "N42SH-B", quantity: 56, unit: "pcs" },
+      ],
+      short: [],
+    };
+    expect(flashText("order-reserved", order)).toBe(
+      `Held for BO-0007: 1.442${nbsp}kg of CU-050, 56${nbsp}pcs of N42SH-B.`,
+    );
+    expect(
+      flashText("order-reserved", {
+        ...order,
+        short: [{ sku: "N42SH-B", quantity: 76, unit: "pcs" }],
+      }),
+    ).toMatch(/\. Still short: 76\u00a0pcs of N42SH-B\.$/);
+    expect(flashText("order-quantity-changed", order)).toBe(
+      `BO-0007 is now for 4${nbsp}motors.`,
+    );
+    expect(
+      flashText("order-issued", {
+        ...receipt,
+        type: "issue",
+        quantity: 0.8,
+        reference: "BO-0007",
+        issued: 0.8,
+        required: 1.442,
+      }),
+    ).toBe(
+      `Issued 0.800${nbsp}kg of CU-050 lot SP-710 at RACK-A to BO-0007. Issued so far 0.800${nbsp}kg of 1.442${nbsp}kg.`,
+    );
+  });
+
+  it("has a sentence for every code, whatever its subject", () => {
+    const order = { reference: "BO-0001", quantity: 2, held: [], short: [] };
+    const subjects: Record<FlashSubjectKind, unknown> = {
+      none: null,
+      supplier: { name: "Spool mill" },
+      grade: { name: "N42SH" },
+      movement: receipt,
+      order,
+      orderIssue: { ...receipt, reference: "BO-0001", issued: 1, required: 2 },
+    };
+    for (const code of Object.keys(flashMessageSubjects) as FlashCode[]) {
+      const subject = subjects[flashMessageSubjects[code]];
+      expect(flashText(code, subject as never), code).toMatch(/^[A-Z].*\.$/);
+    }
+  });
+});

@@ -1,0 +1,206 @@
+/**
+ * The one-time messages a page shows after an action ("Metal base saved.").
+ * An action leaves a note naming its message by a code, with at most the id of
+ * what it made or changed; the words come from this table, filled in with what
+ * the server looks up by that id. Nothing the address or the cookie says is
+ * ever shown, so no link can make the app claim what it did not do. Pure.
+ */
+import { formatQuantity } from "./format";
+import {
+  formatStockQuantity,
+  movementTypeLabels,
+} from "~/stock/stock-quantity-text";
+import type { MovementType } from "~/db/tables/stock-enums";
+
+interface StockAmount {
+  sku: string;
+  quantity: number;
+  unit: string;
+}
+
+/** A movement as its message tells it. */
+export interface MovementSubject {
+  type: MovementType;
+  sku: string;
+  unit: string;
+  /** How much moved, without its sign. */
+  quantity: number;
+  lot: string | null;
+  location: string;
+  /** Where a transfer went. */
+  toLocation: string | null;
+  /** The item's stock after the movement, all lots and locations. */
+  onHandAfter: number;
+}
+
+/** What each kind of message is about, as the server looks it up from the note's id. */
+export interface FlashSubjects {
+  none: null;
+  supplier: { name: string };
+  grade: { name: string };
+  movement: MovementSubject;
+  order: {
+    reference: string;
+    /** Motors to build. */
+    quantity: number;
+    held: StockAmount[];
+    short: StockAmount[];
+  };
+  /** An issue to a build order: the movement, the order and its line so far. */
+  orderIssue: MovementSubject & {
+    reference: string;
+    issued: number;
+    required: number;
+  };
+}
+
+export type FlashSubjectKind = keyof FlashSubjects;
+
+/** Each message and what it is about. */
+export const flashMessageSubjects = {
+  "metal-base-saved": "none",
+  "currency-rate-saved": "none",
+  "supplier-added": "supplier",
+  "grade-added": "grade",
+  "item-created": "none",
+  "item-reorder": "none",
+  "item-rename": "none",
+  "item-archive": "none",
+  "item-restore": "none",
+  "movement-recorded": "movement",
+  "order-created": "none",
+  "order-reserved": "order",
+  "order-already-held": "order",
+  "order-issued": "orderIssue",
+  "order-cancelled": "order",
+  "order-built": "order",
+  "order-quantity-changed": "order",
+  "order-quantity-changed-released": "order",
+} as const satisfies Record<string, FlashSubjectKind>;
+
+export type FlashCode = keyof typeof flashMessageSubjects;
+type SubjectOf<Code extends FlashCode> =
+  FlashSubjects[(typeof flashMessageSubjects)[Code]];
+
+/**
+ * How the note names its subject: a database id (a positive whole number) or a
+ * magnet grade's key; messages about nothing in particular carry no id.
+ */
+const idKinds = {
+  none: "none",
+  supplier: "number",
+  grade: "key",
+  movement: "number",
+  order: "number",
+  orderIssue: "number",
+} as const satisfies Record<FlashSubjectKind, "none" | "number" | "key">;
+
+type IdOf<Kind extends FlashSubjectKind> = {
+  none: undefined;
+  number: number;
+  key: string;
+}[(typeof idKinds)[Kind]];
+
+/** The note an action leaves for the next page: the code, and the id of its subject when it has one. */
+export type FlashNote = {
+  [Code in FlashCode]: IdOf<
+    (typeof flashMessageSubjects)[Code]
+  > extends undefined
+    ? { code: Code }
+    : { code: Code; id: IdOf<(typeof flashMessageSubjects)[Code]> };
+}[FlashCode];
+
+/** A message read from the note, ready to show; `key` is new for every note read. */
+export interface ShownFlash {
+  text: string;
+  key: string;
+}
+
+const heldList = (amounts: StockAmount[]) =>
+  amounts
+    .map(
+      (amount) =>
+        `${formatStockQuantity(amount.quantity, amount.unit)} of ${amount.sku}`,
+    )
+    .join(", ");
+
+const place = (movement: MovementSubject) =>
+  `${movement.lot ? ` lot ${movement.lot}` : ""} at ${movement.location}`;
+
+const texts: {
+  [Code in FlashCode]: (subject: SubjectOf<Code>) => string;
+} = {
+  "metal-base-saved": () => "Metal base saved.",
+  "currency-rate-saved": () => "Currency rate saved.",
+  "supplier-added": (supplier) => `Added the supplier ${supplier.name}.`,
+  "grade-added": (grade) => `Added the grade ${grade.name}.`,
+  "item-created": () => "Added to the catalogue.",
+  "item-reorder": () => "Reorder point and quantity saved.",
+  "item-rename": () => "Name saved.",
+  "item-archive": () =>
+    "Archived: the item no longer shows in the stock list unless archived items are included.",
+  "item-restore": () => "Restored to the stock list.",
+  "movement-recorded": (movement) =>
+    `${movementTypeLabels[movement.type]} recorded: ${formatStockQuantity(movement.quantity, movement.unit)} of ${movement.sku}${place(movement)}${movement.toLocation ? ` → ${movement.toLocation}` : ""}. On hand now ${formatStockQuantity(movement.onHandAfter, movement.unit)}.`,
+  "order-created": () =>
+    "Build order made. Reserve its stock when the build is due.",
+  "order-reserved": (order) =>
+    `Held for ${order.reference}: ${heldList(order.held)}.${order.short.length > 0 ? ` Still short: ${heldList(order.short)}.` : ""}`,
+  "order-already-held": (order) =>
+    `Everything ${order.reference} still needs is already held.`,
+  "order-issued": (issue) =>
+    `Issued ${formatStockQuantity(issue.quantity, issue.unit)} of ${issue.sku}${place(issue)} to ${issue.reference}. Issued so far ${formatStockQuantity(issue.issued, issue.unit)} of ${formatStockQuantity(issue.required, issue.unit)}.`,
+  "order-cancelled": (order) =>
+    `${order.reference} cancelled. Whatever it held is free again.`,
+  "order-built": (order) =>
+    `${order.reference} built. Whatever it still held is free again.`,
+  "order-quantity-changed": (order) =>
+    `${order.reference} is now for ${formatQuantity(order.quantity, "motors")}.`,
+  "order-quantity-changed-released": (order) =>
+    `${order.reference} is now for ${formatQuantity(order.quantity, "motors")}. What it held was released: reserve again.`,
+};
+
+/** The words of a message, from the table and the subject the server looked up. */
+export function flashText<Code extends FlashCode>(
+  code: Code,
+  subject: SubjectOf<Code>,
+): string {
+  return texts[code](subject);
+}
+
+/** What a note's message is about. */
+export function subjectKindOf(note: FlashNote): FlashSubjectKind {
+  return flashMessageSubjects[note.code];
+}
+
+const gradeKeyLength = 40;
+
+function isFlashCode(value: unknown): value is FlashCode {
+  return (
+    typeof value === "string" && Object.hasOwn(flashMessageSubjects, value)
+  );
+}
+
+/**
+ * A note read back from the cookie, or null when it is not one the app writes:
+ * an unknown code, an id of the wrong kind, or any other field.
+ */
+export function readFlashNote(value: unknown): FlashNote | null {
+  if (!value || typeof value !== "object" || Array.isArray(value)) return null;
+  const { code, id, ...rest } = value as Record<string, unknown>;
+  if (Object.keys(rest).length > 0 || !isFlashCode(code)) return null;
+  switch (idKinds[flashMessageSubjects[code]]) {
+    case "none":
+      return id === undefined ? ({ code } as FlashNote) : null;
+    case "number":
+      return typeof id === "number" && Number.isSafeInteger(id) && id > 0
+        ? ({ code, id } as FlashNote)
+        : null;
+    case "key":
+      return typeof id === "string" &&
+        id.length > 0 &&
+        id.length <= gradeKeyLength
+        ? ({ code, id } as FlashNote)
+        : null;
+  }
+}

@@ -1,0 +1,98 @@
+/**
+ * The one-time message after an action, in Chromium: the form is submitted by
+ * the client router (a fetch of the route's .data), the message is shown once,
+ * a reload or the next page shows it no more, and a crafted link shows no text.
+ */
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { baseUrl } from "../support/app-client";
+import { launchBrowser, signIn, waitForHydration } from "../support/browser";
+import { closeTestDatabase, testDatabase } from "../support/test-database";
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await closeTestDatabase();
+});
+
+const saved = (page: Page) =>
+  page.getByRole("status").filter({ hasText: "Metal base saved." });
+
+async function saveCopperBase(page: Page, price: string) {
+  const base = page.getByRole("region", { name: "Set a new base" });
+  await base.getByLabel("Conductor").selectOption("copper");
+  await base.getByLabel("Currency").fill("EUR");
+  await base.getByLabel("Base price").fill(price);
+  await base.getByLabel("Valid from (YYYY-MM-DD)").fill("2026-03-01");
+  await base.getByRole("button", { name: "Save metal base" }).click();
+}
+
+describe("one-time messages in the browser", () => {
+  it("appear once after a client-router submission, and not after a reload or on the next page", async () => {
+    const page = await signIn(browser, "buyer");
+    const dataPosts: string[] = [];
+    page.on("request", (request) => {
+      if (request.method() === "POST") dataPosts.push(request.url());
+    });
+    await page.goto(`${baseUrl()}/prices`);
+    await waitForHydration(page);
+
+    await saveCopperBase(page, "9.4321");
+    await saved(page).waitFor();
+    expect(await saved(page).count()).toBe(1);
+    // Submitted by the client router, not as a document.
+    expect(
+      dataPosts.some((url) => new URL(url).pathname === "/prices.data"),
+    ).toBe(true);
+    expect(new URL(page.url()).search).toBe("");
+
+    await page.reload();
+    await waitForHydration(page);
+    await page
+      .getByRole("table", { name: /Metal base history/ })
+      .getByText("9.4321")
+      .first()
+      .waitFor();
+    expect(await saved(page).count()).toBe(0);
+
+    // Shown again after the next save, then gone on the next page reached in the app.
+    await saveCopperBase(page, "9.5432");
+    await saved(page).waitFor();
+    await page
+      .getByRole("navigation", { name: "Main" })
+      .getByRole("link", { name: "Suppliers" })
+      .click();
+    await page.getByRole("heading", { level: 1, name: "Suppliers" }).waitFor();
+    expect(await saved(page).count()).toBe(0);
+    await page.goBack();
+    await page.getByRole("heading", { level: 1, name: /Metal base/ }).waitFor();
+    expect(await saved(page).count()).toBe(0);
+    await page.close();
+  });
+
+  it("a crafted link shows none of its words", async () => {
+    const crafted = "Your account is locked: call +1 555 0100 now";
+    const text = encodeURIComponent(crafted);
+    const [orders] = await testDatabase().query(
+      "SELECT MIN(id) AS id FROM build_orders",
+    );
+    const orderId = (orders as { id: number }[])[0]!.id;
+    const page = await signIn(browser, "buyer");
+    for (const path of [
+      `/suppliers?created=${text}`,
+      `/prices?saved=metal-base`,
+      `/reference?table=magnet-grades&added=${text}`,
+      `/build-orders/${orderId}?done=${text}`,
+    ]) {
+      await page.goto(`${baseUrl()}${path}`);
+      await waitForHydration(page);
+      const body = await page.locator("body").innerText();
+      expect(body, path).not.toContain(crafted);
+      expect(body, path).not.toContain("Metal base saved.");
+    }
+    await page.close();
+  });
+});
