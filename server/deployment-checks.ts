@@ -9,14 +9,12 @@
  *   MariaDB and the tests set for theirs).
  */
 import { inArray, isNotNull, like, or, and } from "drizzle-orm";
+import { defaultDemoPassword, demoPassword } from "~/auth/demo-password.server";
 import { verifyPassword } from "~/auth/password.server";
 import { db } from "~/db/client.server";
 import { users } from "~/db/schema";
 import { parseAppUrl } from "~/lib/app-address";
 import { demoPeople } from "../seed/demo-people";
-
-/** The password the README publishes for the demo accounts. */
-export const publishedDemoPassword = "turnledger-demo";
 
 /** True when this server is a demo on purpose (DEMO_DATA=1). */
 export function isDemoServer(env: NodeJS.ProcessEnv = process.env): boolean {
@@ -41,9 +39,7 @@ function appUrlProblem(env: NodeJS.ProcessEnv): string | null {
 }
 
 /** The demo accounts (by e-mail or seeded id) that still sign in with a demo password. */
-async function accountsWithDemoPassword(
-  env: NodeJS.ProcessEnv,
-): Promise<string[]> {
+async function accountsWithDemoPassword(): Promise<string[]> {
   const candidates = await db
     .select({ email: users.email, passwordHash: users.passwordHash })
     .from(users)
@@ -60,9 +56,8 @@ async function accountsWithDemoPassword(
       ),
     )
     .limit(100);
-  const passwords = [
-    ...new Set([publishedDemoPassword, env.DEMO_PASSWORD].filter(Boolean)),
-  ] as string[];
+  // The published default, and this installation's DEMO_PASSWORD.
+  const passwords = [...new Set([defaultDemoPassword, demoPassword()])];
   const found: string[] = [];
   for (const candidate of candidates) {
     for (const password of passwords) {
@@ -84,7 +79,7 @@ export async function deploymentProblems(
   const appUrl = appUrlProblem(env);
   if (appUrl) problems.push(appUrl);
   if (!isDemoServer(env)) {
-    const demoAccounts = await accountsWithDemoPassword(env);
+    const demoAccounts = await accountsWithDemoPassword();
     if (demoAccounts.length > 0)
       problems.push(
         `${demoAccounts.join(", ")} still sign${demoAccounts.length === 1 ? "s" : ""} in with the published demo password. ` +
