@@ -4,6 +4,7 @@
  * into the same values. Quantities become thousandths of their unit.
  */
 import { z } from "zod";
+import { formNumber } from "~/lib/number-text";
 import { quantityFromNumber } from "~/stock/decimal-amounts";
 import { maxMotorsPerOrder } from "./build-order-requirements";
 
@@ -121,20 +122,6 @@ export const closeRequestSchema = z.object({ note });
 export const quantityChangeSchema = z.object({ quantity: motors });
 
 // ——— The pages' forms: text fields turned into the API's values ———
-
-/** "1,25" → 1.25; "" → undefined; text that is no number stays text, so the schema names it. */
-export function formNumber(value: unknown): unknown {
-  if (typeof value !== "string") return value;
-  const trimmed = value.trim();
-  if (trimmed === "") return undefined;
-  const normalised = /^-?\d+,\d+$/.test(trimmed)
-    ? trimmed.replace(",", ".")
-    : trimmed;
-  const number = Number(normalised);
-  return /^-?(\d+\.?\d*|\.\d+)$/.test(normalised) && Number.isFinite(number)
-    ? number
-    : trimmed;
-}
 
 function withoutEmpty(values: Record<string, unknown>) {
   for (const [key, value] of Object.entries(values))

@@ -4,15 +4,11 @@
  * forms and as numbers from JSON; both are read here.
  */
 import { z } from "zod";
+import { formNumber } from "~/lib/number-text";
 
 const number = (label: string) =>
   z.preprocess(
-    (value) =>
-      typeof value === "string" && value.trim() !== ""
-        ? Number(value.trim().replace(",", "."))
-        : value === ""
-          ? undefined
-          : value,
+    formNumber,
     z
       .number({ error: `Give the ${label} as a number.` })
       .refine(Number.isFinite, `Give the ${label} as a number.`),

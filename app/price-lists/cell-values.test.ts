@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import {
   moneyRules,
   quantityRules,
+  readAwgSize,
   readDate,
   readDecimal,
   readDiameterMm,
@@ -92,6 +93,51 @@ describe("decimal numbers", () => {
       problem: "too-large",
     });
   });
+});
+
+describe("cells longer than any value", () => {
+  it("refuses a number cell of more than 40 characters before reading it", () => {
+    const zeros = `1.${"0".repeat(38)}`; // 40 characters: still a number
+    expect(readDecimal(zeros, money)).toMatchObject({
+      ok: true,
+      text: "1.0000",
+    });
+    expect(readDecimal(`${zeros}0`, money)).toEqual({
+      ok: false,
+      problem: "too-long",
+    });
+    expect(readDecimal("1".repeat(41), moneyWithComma)).toEqual({
+      ok: false,
+      problem: "too-long",
+    });
+    expect(readDiameterMm(`0.5${" ".repeat(40)}mm`, false)).toBeUndefined();
+    expect(readDate(`01.03.2025${" ".repeat(10)}`)).toEqual({
+      ok: false,
+      problem: "not-a-date",
+    });
+    expect(readUnit(`${"k".repeat(100)}g`)).toBeUndefined();
+  });
+});
+
+describe("AWG sizes", () => {
+  it.each([
+    ["20", "20"],
+    ["#20", "20"],
+    ["# 20", "20"],
+    ["20 AWG", "20"],
+    ["20awg", "20"],
+    ["4/0", "0000"],
+    ["0000", "0000"],
+  ])("reads %s as %s", (cell, label) => {
+    expect(readAwgSize(cell)).toBe(label);
+  });
+
+  it.each(["99", "20 mm", "AWG", "", `20${" ".repeat(40)}AWG`])(
+    "does not read %j",
+    (cell) => {
+      expect(readAwgSize(cell)).toBeUndefined();
+    },
+  );
 });
 
 describe("dates", () => {

@@ -3,16 +3,25 @@
  * suppliers use for kinds, units, wire standards, insulation and thermal
  * classes. Each reader returns the value or a short problem code; the row
  * reader turns codes into sentences that name the field and quote the cell.
+ * A cell longer than any value it could hold is refused before it is matched,
+ * and every pattern here reads in time proportional to the cell.
  *
  * Pure: runs in Node and in the browser.
  */
 import {
+  findAwgSize,
   THERMAL_CLASSES,
   type InsulationKey,
   type ThermalClass,
   type WireStandard,
 } from "~/engineering/reference-data";
 import type { ItemKind, StockUnit } from "~/db/tables/stock-enums";
+import {
+  isTooLongForNumber,
+  maxNumberTextLength,
+  withoutSuffix,
+  withoutTrailingZeros,
+} from "~/lib/number-text";
 
 // ---------------------------------------------------------------------------
 // Decimal numbers
@@ -29,6 +38,7 @@ export interface DecimalRules {
 
 export type DecimalProblem =
   | "not-a-number"
+  | "too-long"
   | "comma-not-allowed"
   | "ambiguous-point"
   | "negative"
@@ -67,13 +77,12 @@ const commaGroupedDecimal = /^\d{1,3}(?:,\d{3})+(?:\.\d+)?$/;
 const simpleDecimal = /^(?:[1-9]\d*|0)(?:\.\d+)?$/;
 
 export function readDecimal(cell: string, rules: DecimalRules): DecimalReading {
+  if (isTooLongForNumber(cell)) return { ok: false, problem: "too-long" };
   if (!rules.decimalComma && simpleDecimal.test(cell)) {
     const point = cell.indexOf(".");
     const whole = point === -1 ? cell : cell.slice(0, point);
-    let end = cell.length;
-    while (point !== -1 && end > point + 1 && cell.charCodeAt(end - 1) === 48)
-      end -= 1;
-    const fraction = point === -1 ? "" : cell.slice(point + 1, end);
+    const fraction =
+      point === -1 ? "" : withoutTrailingZeros(cell.slice(point + 1));
     if (fraction.length > rules.decimals)
       return { ok: false, problem: "too-many-decimals" };
     if (whole.length > rules.maxWholeDigits)
@@ -94,7 +103,7 @@ export function readDecimal(cell: string, rules: DecimalRules): DecimalReading {
   );
   if ("problem" in parts) return { ok: false, problem: parts.problem };
   const whole = parts.whole.replace(/^0+(?=\d)/, "");
-  const fraction = parts.fraction.replace(/0+$/, "");
+  const fraction = withoutTrailingZeros(parts.fraction);
   const isZero = /^0*$/.test(whole) && fraction === "";
   if (negative && !isZero) return { ok: false, problem: "negative" };
   if (fraction.length > rules.decimals) {
@@ -178,6 +187,8 @@ export function readDate(cell: string): DateReading {
 }
 
 function readDateAfresh(cell: string): DateReading {
+  // "2025-03-01" and "01.03.2025" are ten characters; nothing longer is a date.
+  if (cell.length > 10) return { ok: false, problem: "not-a-date" };
   const iso = isoDate.exec(cell);
   if (iso) return checkedDate(+iso[1]!, +iso[2]!, +iso[3]!);
   const dayFirst = dayFirstDate.exec(cell);
@@ -216,8 +227,12 @@ export function isIsoDate(text: string): boolean {
 // Words
 // ---------------------------------------------------------------------------
 
-/** "Heavy build" → "heavybuild", "G-2" → "g2", "155 °C" → "155c". */
+/** Words in a cell ("Enamelled copper wire", "class 155") are never longer than this. */
+const maxWordCellLength = 100;
+
+/** "Heavy build" → "heavybuild", "G-2" → "g2", "155 °C" → "155c"; "" for a cell longer than any word we know. */
 function compact(cell: string): string {
+  if (cell.length > maxWordCellLength) return "";
   return cell
     .normalize("NFD")
     .replace(/\p{M}/gu, "")
@@ -238,6 +253,7 @@ function lookUp<Value>(
     remembered = new Map();
     lookUpsByWords.set(words, remembered);
   }
+  if (cell.length > maxWordCellLength) return undefined;
   if (remembered.has(cell)) return remembered.get(cell) as Value | undefined;
   const key = compact(cell);
   const value = Object.hasOwn(words, key) ? words[key] : undefined;
@@ -343,9 +359,9 @@ export function insulationStandard(key: InsulationKey): WireStandard {
 
 /** "155", "155 °C", "class 155", "F", "Class F" → 155. */
 export function readThermalClass(cell: string): ThermalClass | undefined {
-  const key = compact(cell)
-    .replace(/^class/, "")
-    .replace(/c$/, "");
+  let key = compact(cell);
+  if (key.startsWith("class")) key = key.slice("class".length);
+  if (key.endsWith("c")) key = key.slice(0, -1);
   const row = THERMAL_CLASSES.find(
     (thermal) =>
       String(thermal.classC) === key || thermal.letter.toLowerCase() === key,
@@ -361,10 +377,8 @@ export function readDiameterMm(
   cell: string,
   decimalComma: boolean,
 ): number | undefined {
-  const bare = cell
-    .replace(/^[Ø⌀ø]\s*/, "")
-    .replace(/\s*mm$/i, "")
-    .trim();
+  if (cell.length > maxNumberTextLength) return undefined;
+  const bare = withoutSuffix(cell.replace(/^[Ø⌀ø]\s*/, ""), "mm").trim();
   // Diameters never group thousands, so a point is always a decimal point.
   const reading = readDecimal(decimalComma ? bare.replace(",", ".") : bare, {
     decimals: 6,
@@ -372,4 +386,14 @@ export function readDiameterMm(
     decimalComma: false,
   });
   return reading.ok ? Number(reading.text) : undefined;
+}
+
+/**
+ * An AWG size cell as the reference tables label it: "20", "#20", "20 AWG", "4/0",
+ * "0000". Undefined when it is not an AWG size from 0000 (4/0) to 46.
+ */
+export function readAwgSize(cell: string): string | undefined {
+  if (cell.length > maxNumberTextLength) return undefined;
+  const bare = withoutSuffix(cell.replace(/^#\s*/, ""), "awg");
+  return findAwgSize(bare)?.label;
 }

@@ -15,6 +15,7 @@
  * is also the rule of `valueOf` in the stock ledger. Floating point is never used.
  */
 
+import { isTooLongForNumber } from "~/lib/number-text";
 import {
   formatUnitCostText,
   parseUnitCost,
@@ -82,8 +83,8 @@ export function formatRateText(rate: ExchangeRate): string {
 /** "0.0299396" → { digits: 299396n, decimals: 7 }. Throws RangeError on a non-number. */
 export function parseExactDecimal(text: string): ExactDecimal {
   const trimmed = text.trim();
-  if (!decimalPattern.test(trimmed)) {
-    throw new RangeError(`"${text}" is not a decimal number`);
+  if (isTooLongForNumber(trimmed) || !decimalPattern.test(trimmed)) {
+    throw new RangeError(`"${text.slice(0, 40)}" is not a decimal number`);
   }
   const negative = trimmed.startsWith("-");
   const [whole = "0", fraction = ""] = trimmed.replace("-", "").split(".");
@@ -174,6 +175,15 @@ export interface MoneyFormat {
   per?: string;
 }
 
+/** "1234567" → "1,234,567": commas between groups of three digits, from the right. */
+function groupThousands(digits: string): string {
+  const first = digits.length % 3 || 3;
+  let grouped = digits.slice(0, first);
+  for (let index = first; index < digits.length; index += 3)
+    grouped += `,${digits.slice(index, index + 3)}`;
+  return grouped;
+}
+
 /**
  * Money for people: thousands grouped with commas, the currency beside the number after a
  * no-break space, "12.5000 EUR/kg", "1,234.50 EUR". Exact: never passes through a float.
@@ -192,7 +202,7 @@ export function formatMoney(
   const [signedWhole = "", fraction] = text.split(".");
   const negative = signedWhole.startsWith("-");
   const whole = negative ? signedWhole.slice(1) : signedWhole;
-  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+  const grouped = groupThousands(whole);
   const number = `${negative ? "-" : ""}${grouped}${fraction === undefined ? "" : `.${fraction}`}`;
   const unit = format.per ? `${currency}/${format.per}` : currency;
   return `${number}\u00a0${unit}`;

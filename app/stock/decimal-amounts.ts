@@ -4,6 +4,7 @@
  * ten-thousandths, so sums and balances never drift the way binary floating
  * point does. The database stores both as DECIMAL. Pure: no I/O.
  */
+import { isTooLongForNumber } from "~/lib/number-text";
 
 export const quantityScale = 1_000n;
 export const unitCostScale = 10_000n;
@@ -22,8 +23,8 @@ export function parseUnitCost(text: string): bigint {
 
 function parseScaled(text: string, decimals: number): bigint {
   const trimmed = text.trim();
-  if (!decimalPattern.test(trimmed))
-    throw new RangeError(`"${text}" is not a decimal number`);
+  if (isTooLongForNumber(trimmed) || !decimalPattern.test(trimmed))
+    throw new RangeError(`"${text.slice(0, 40)}" is not a decimal number`);
   const negative = trimmed.startsWith("-");
   const [whole, fraction = ""] = trimmed.replace("-", "").split(".");
   if (fraction.length > decimals && /[1-9]/.test(fraction.slice(decimals))) {

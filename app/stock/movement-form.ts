@@ -4,23 +4,10 @@
  * accept and refuse exactly the same things. A decimal comma is accepted.
  */
 import { z } from "zod";
+import { formNumber } from "~/lib/number-text";
 import { movementRequestSchema } from "./movement-request";
 
 const numberFields = ["quantity", "unitCost", "grossKg", "tareKg"] as const;
-
-/** "1,25" → 1.25; "" → undefined; text that is no number stays text, so the schema names it. */
-function formNumber(value: unknown): unknown {
-  if (typeof value !== "string") return value;
-  const trimmed = value.trim();
-  if (trimmed === "") return undefined;
-  const normalised = /^-?\d+,\d+$/.test(trimmed)
-    ? trimmed.replace(",", ".")
-    : trimmed;
-  const number = Number(normalised);
-  return /^-?(\d+\.?\d*|\.\d+)$/.test(normalised) && Number.isFinite(number)
-    ? number
-    : trimmed;
-}
 
 function formValuesToRequest(values: unknown): unknown {
   if (!values || typeof values !== "object") return values;

@@ -1,0 +1,285 @@
+import { describe, expect, it } from "vitest";
+import {
+  createFormSchema,
+  issueFormSchema,
+  quantityFormSchema,
+} from "~/build-orders/build-order-forms";
+import { coilLineSchema, partLineSchema } from "~/designs/design-schemas";
+import { insightQuerySchema } from "~/insight/what-if";
+import { isCalendarDate } from "~/pricing/calendar-date";
+import { parseExactDecimal, parseMoney, parseRate } from "~/pricing/money";
+import {
+  moneyRules,
+  quantityRules,
+  readDate,
+  readDecimal,
+  readDiameterMm,
+  readInsulation,
+  readThermalClass,
+  readUnit,
+} from "~/price-lists/cell-values";
+import type { PriceListField } from "~/price-lists/column-mapping";
+import { readPriceListRow } from "~/price-lists/price-list-rows";
+import { parseQuantity, parseUnitCost } from "~/stock/decimal-amounts";
+import { movementFormSchema } from "~/stock/movement-form";
+import {
+  formNumber,
+  maxNumberTextLength,
+  plainDecimalText,
+  withoutSuffix,
+  withoutTrailingZeros,
+} from "./number-text";
+
+describe("a form's number field", () => {
+  it.each([
+    ["12", 12],
+    ["-3", -3],
+    [" 1,25 ", 1.25],
+    ["12.", 12],
+    [".5", 0.5],
+    ["", undefined],
+    ["   ", undefined],
+    ["1e3", "1e3"],
+    ["0x10", "0x10"],
+    ["1,234.5", "1,234.5"],
+    ["12 kg", "12 kg"],
+    ["Infinity", "Infinity"],
+  ])("reads %j as %j", (text, value) => {
+    expect(formNumber(text)).toBe(value);
+  });
+
+  it("leaves text longer than any number as text, so the schema names the field", () => {
+    const long = "1".repeat(maxNumberTextLength + 1);
+    expect(formNumber(long)).toBe(long);
+    expect(formNumber("1".repeat(maxNumberTextLength))).toBe(
+      Number("1".repeat(maxNumberTextLength)),
+    );
+  });
+
+  it("passes other values through", () => {
+    expect(formNumber(5)).toBe(5);
+    expect(formNumber(undefined)).toBeUndefined();
+  });
+});
+
+describe("decimal text without patterns", () => {
+  it("drops trailing zeros", () => {
+    expect(withoutTrailingZeros("1.2500")).toBe("1.25");
+    expect(withoutTrailingZeros("000")).toBe("");
+    expect(plainDecimalText("12.5000")).toBe("12.5");
+    expect(plainDecimalText("1.000")).toBe("1");
+    expect(plainDecimalText("0.000")).toBe("0");
+    expect(plainDecimalText("120")).toBe("120");
+  });
+
+  it("drops a unit at the end, any letter case, with the spaces before it", () => {
+    expect(withoutSuffix("0.5 mm", "mm")).toBe("0.5");
+    expect(withoutSuffix("0.5MM", "mm")).toBe("0.5");
+    expect(withoutSuffix("20 AWG", "awg")).toBe("20");
+    expect(withoutSuffix("0.5", "mm")).toBe("0.5");
+    expect(withoutSuffix("m", "mm")).toBe("m");
+  });
+});
+
+// ---------------------------------------------------------------------------
+// Every reader of number text answers a megabyte at once
+// ---------------------------------------------------------------------------
+
+const megabyte = 1_000_000;
+
+/**
+ * Texts of about 1 MB shaped to make a backtracking pattern try every split:
+ * digits that end in a letter, a decimal whose zeros run to the last digit,
+ * spaces before a unit that is not quite there.
+ */
+const longTexts: Record<string, string> = {
+  digits: "1".repeat(megabyte),
+  "digits then a letter": `${"1".repeat(megabyte)}x`,
+  "digits with a decimal comma then a letter": `1,${"1".repeat(megabyte)}x`,
+  "a fraction of zeros ending in 1": `0.${"0".repeat(megabyte)}1`,
+  "a comma fraction of zeros ending in 1": `0,${"0".repeat(megabyte)}1`,
+  "1 and zeros in mm": `1${"0".repeat(megabyte)}mm`,
+  "spaces before an unfinished mm": `1${" ".repeat(megabyte)}m`,
+  "spaces before an unfinished awg": `#1${" ".repeat(megabyte)}aw`,
+  "1 and zeros in awg": `1${"0".repeat(megabyte)}awg`,
+  "spaces between digits": `1${" ".repeat(megabyte)}1`,
+};
+
+/** Runs `read` on each long text; each answer must come in well under a second. */
+function expectQuickOnLongTexts(read: (text: string) => unknown) {
+  for (const [shape, text] of Object.entries(longTexts)) {
+    const started = performance.now();
+    try {
+      read(text);
+    } catch (error) {
+      // A refusal by throwing is an answer too, as long as it is not a time-out.
+      if (!(error instanceof RangeError)) throw error;
+    }
+    const elapsedMs = performance.now() - started;
+    expect(elapsedMs, `${shape}: ${elapsedMs.toFixed(0)} ms`).toBeLessThan(250);
+  }
+}
+
+const priceListFields: readonly PriceListField[] = [
+  "supplierSku",
+  "kind",
+  "standard",
+  "size",
+  "thermalClass",
+  "unit",
+  "price",
+  "currency",
+  "minQuantity",
+  "validFrom",
+];
+
+function priceListRow(values: Partial<Record<PriceListField, string>>) {
+  return readPriceListRow(
+    {
+      line: 2,
+      cells: priceListFields.map((field) => values[field] ?? ""),
+    },
+    {
+      columns: Object.fromEntries(
+        priceListFields.map((field, index) => [field, index]),
+      ),
+      decimalComma: true,
+      importDay: "2025-06-02",
+      knownGrades: new Set(["n42sh"]),
+    },
+  );
+}
+
+describe("number readers given a megabyte", () => {
+  it("the record-movement form answers quickly and names the field", () => {
+    expectQuickOnLongTexts((text) => {
+      const parsed = movementFormSchema.safeParse({
+        type: "receipt",
+        sku: "CU-050",
+        location: "MAIN",
+        quantity: text,
+        unitCost: text,
+        grossKg: text,
+        tareKg: text,
+      });
+      expect(parsed.success).toBe(false);
+      if (!parsed.success)
+        expect(
+          parsed.error.issues.map((issue) => issue.path.join(".")),
+        ).toContain("quantity");
+    });
+  });
+
+  it("the build-order forms answer quickly", () => {
+    expectQuickOnLongTexts((text) => {
+      expect(
+        createFormSchema.safeParse({ designRevision: "1/1", quantity: text })
+          .success,
+      ).toBe(false);
+      expect(
+        issueFormSchema.safeParse({
+          intent: "issue",
+          spot: "CU|L1|MAIN",
+          quantity: text,
+          grossKg: text,
+        }).success,
+      ).toBe(false);
+      expect(
+        quantityFormSchema.safeParse({ intent: "quantity", quantity: text })
+          .success,
+      ).toBe(false);
+    });
+  });
+
+  it("the design line forms answer quickly", () => {
+    expectQuickOnLongTexts((text) => {
+      expect(
+        coilLineSchema.safeParse({
+          kind: "coil",
+          sku: "CU-050",
+          turns: text,
+          strandsInHand: text,
+          activeLengthMm: text,
+          endTurnLengthMm: text,
+          leadLengthMm: text,
+          coilsPerMotor: text,
+          scrapPercent: text,
+          operatingTemperatureC: text,
+        }).success,
+      ).toBe(false);
+      expect(
+        partLineSchema.safeParse({
+          kind: "part",
+          sku: "BRG",
+          quantityPerMotor: text,
+        }).success,
+      ).toBe(false);
+    });
+  });
+
+  it("the insight what-if answers quickly", () => {
+    expectQuickOnLongTexts((text) => {
+      const parsed = insightQuerySchema.safeParse({
+        quantity: text,
+        copperBase: text,
+        aluminiumBase: text,
+        date: text,
+        page: text,
+        perPage: text,
+        "endTurn.1": text,
+      });
+      expect(parsed.success).toBe(false);
+    });
+  });
+
+  it("the exact decimal readers answer quickly", () => {
+    expectQuickOnLongTexts((text) => parseQuantity(text));
+    expectQuickOnLongTexts((text) => parseUnitCost(text));
+    expectQuickOnLongTexts((text) => parseMoney(text));
+    expectQuickOnLongTexts((text) => parseRate(text));
+    expectQuickOnLongTexts((text) => parseExactDecimal(text));
+    expectQuickOnLongTexts((text) => isCalendarDate(text));
+  });
+
+  it("the price-list cell readers answer quickly", () => {
+    for (const decimalComma of [false, true]) {
+      expectQuickOnLongTexts((text) => {
+        const money = readDecimal(text, { ...moneyRules, decimalComma });
+        const quantity = readDecimal(text, { ...quantityRules, decimalComma });
+        expect(money.ok && quantity.ok).toBe(false);
+      });
+      expectQuickOnLongTexts((text) =>
+        expect(readDiameterMm(text, decimalComma)).toBeUndefined(),
+      );
+    }
+    expectQuickOnLongTexts((text) => readDate(text));
+    expectQuickOnLongTexts((text) => readThermalClass(text));
+    expectQuickOnLongTexts((text) => readUnit(text));
+    expectQuickOnLongTexts((text) => readInsulation(text));
+  });
+
+  it("a price-list row of long cells answers quickly with one message per cell", () => {
+    expectQuickOnLongTexts((text) => {
+      for (const standard of ["AWG", "IEC"]) {
+        const reading = priceListRow({
+          supplierSku: "CU-1",
+          kind: "wire",
+          standard,
+          size: text,
+          thermalClass: text,
+          price: text,
+          currency: "EUR",
+          minQuantity: text,
+          validFrom: text,
+        });
+        expect(reading.ok).toBe(false);
+        if (!reading.ok) {
+          expect(reading.error.message).toContain("size");
+          expect(reading.error.message).toContain("price");
+          // The message quotes a shortened cell, never the megabyte.
+          expect(reading.error.message.length).toBeLessThan(2_000);
+        }
+      }
+    });
+  });
+});
