@@ -1,10 +1,12 @@
 /**
  * Step 3 of a price-list import: what the dry run found — the counts, the
- * first rows as they will be stored, and every row that cannot be imported.
+ * first rows as they will be stored, and the rows that cannot be imported
+ * (the first 1,000 of them, with how many more there are).
  */
 import type { ColumnDef } from "@tanstack/react-table";
 import { DataTable } from "~/components/data-table";
 import { formatQuantity } from "~/lib/format";
+import { moreLineErrorsText } from "~/price-lists/line-errors";
 import type { LineError } from "~/price-lists/parse-price-list";
 import type { PriceListRow } from "~/price-lists/price-list-rows";
 import type { PriceListCheck } from "./price-list-upload";
@@ -79,13 +81,22 @@ function Count({
   );
 }
 
-export function InvalidRowsTable({ invalid }: { invalid: LineError[] }) {
+export function InvalidRowsTable({
+  invalid,
+  invalidCount = invalid.length,
+}: {
+  /** The first lines that cannot be imported (the API lists 1,000 at most). */
+  invalid: LineError[];
+  /** How many lines cannot be imported in all. */
+  invalidCount?: number;
+}) {
+  const more = moreLineErrorsText(invalid.length, invalidCount);
   return (
     <section aria-labelledby="invalid-rows-heading" className="space-y-2">
       <h3 id="invalid-rows-heading" className="font-semibold text-danger">
-        {invalid.length === 1
+        {invalidCount === 1
           ? "1 row cannot be imported"
-          : `${invalid.length} rows cannot be imported`}
+          : `${formatQuantity(invalidCount, "")} rows cannot be imported`}
       </h3>
       <div
         className="max-h-96 overflow-y-auto rounded-lg"
@@ -99,6 +110,12 @@ export function InvalidRowsTable({ invalid }: { invalid: LineError[] }) {
           rows={invalid}
         />
       </div>
+      {more ? (
+        <p className="text-sm text-graphite-700">
+          {more}. The first {formatQuantity(invalid.length, "")} are listed: fix
+          them in the file, choose it again and check again to see the next.
+        </p>
+      ) : null}
     </section>
   );
 }
@@ -112,12 +129,15 @@ export function PriceListCheckResults({ check }: { check: PriceListCheck }) {
         <Count label="New catalogue items" value={check.newItems} />
         <Count
           label="Rows with problems"
-          value={check.invalid.length}
+          value={check.invalidCount}
           tone="danger"
         />
       </dl>
-      {check.invalid.length > 0 ? (
-        <InvalidRowsTable invalid={check.invalid} />
+      {check.invalidCount > 0 ? (
+        <InvalidRowsTable
+          invalid={check.invalid}
+          invalidCount={check.invalidCount}
+        />
       ) : null}
       <section aria-labelledby="first-rows-heading" className="space-y-2">
         <h3 id="first-rows-heading" className="font-semibold">

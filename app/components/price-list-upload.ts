@@ -12,7 +12,10 @@ import type { PriceListRow } from "~/price-lists/price-list-rows";
 export interface PriceListCheck {
   rows: PriceListRow[];
   valid: number;
+  /** The first 1,000 lines that cannot be imported. */
   invalid: LineError[];
+  /** Every line that cannot be imported. */
+  invalidCount: number;
   matched: number;
   newItems: number;
 }
@@ -29,9 +32,10 @@ export type PriceListImport =
     }
   | { alreadyImported: true; importId: number; message: string };
 
-/** A 422 on commit carries the invalid rows beside the message. */
+/** A 422 on commit carries the invalid rows (the first 1,000) and their count beside the message. */
 export type PriceListAnswer<T> = ApiAnswer<T> & {
   invalid?: LineError[];
+  invalidCount?: number;
 };
 
 export type UploadProgress =
@@ -107,6 +111,7 @@ function readAnswer<T>(request: XMLHttpRequest): PriceListAnswer<T> {
   const body = (parsed ?? {}) as {
     error?: { message?: string; fields?: Record<string, string[]> };
     invalid?: LineError[];
+    invalidCount?: number;
   };
   return {
     ok: false,
@@ -118,5 +123,6 @@ function readAnswer<T>(request: XMLHttpRequest): PriceListAnswer<T> {
           `The upload failed (status ${request.status}). Try again in a moment.`),
     fields: body.error?.fields ?? {},
     invalid: body.invalid,
+    invalidCount: body.invalidCount,
   };
 }

@@ -183,7 +183,12 @@ describe("large files", () => {
       count += 1;
       last = row;
     });
-    expect(outcome).toEqual({ ok: true, dataRowCount: 100_000, errors: [] });
+    expect(outcome).toEqual({
+      ok: true,
+      dataRowCount: 100_000,
+      errors: [],
+      errorCount: 0,
+    });
     expect(count).toBe(100_000);
     expect(last?.line).toBe(100_001);
     expect(last?.cells[0]).toBe("CU-99999");

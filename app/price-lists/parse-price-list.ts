@@ -5,7 +5,8 @@
  * (the header is line 1 in a plain file).
  *
  * Broken rows (a quotation mark that is never closed, a row with more or fewer
- * columns than the header) come back as per-line errors; problems with the file
+ * columns than the header) come back as per-line errors (the first 1,000
+ * listed, all counted: see line-errors.ts); problems with the file
  * as a whole (no header, header only, one column) as one file-level message.
  * Nothing here throws for bad data.
  *
@@ -17,6 +18,7 @@
  */
 import Papa, { type ParseError } from "papaparse";
 import { emptyFileMessage } from "./decode-csv";
+import { LineErrorList } from "./line-errors";
 
 export type CsvDelimiter = "," | ";" | "\t";
 
@@ -57,7 +59,10 @@ export type CsvRowsOutcome =
       ok: true;
       /** Data rows read, the good ones and the ones with errors. */
       dataRowCount: number;
+      /** The first broken rows (see line-errors.ts), in file order. */
       errors: LineError[];
+      /** Every broken row, listed or not. */
+      errorCount: number;
     }
   | FileProblem;
 
@@ -150,17 +155,27 @@ export function openPriceListCsv(
 }
 
 /** Parses the whole file and collects its rows: for previews, small files and tests. */
-export function parsePriceList(
-  text: string,
-):
-  | { ok: true; layout: CsvLayout; rows: CsvDataRow[]; errors: LineError[] }
+export function parsePriceList(text: string):
+  | {
+      ok: true;
+      layout: CsvLayout;
+      rows: CsvDataRow[];
+      errors: LineError[];
+      errorCount: number;
+    }
   | FileProblem {
   const opened = openPriceListCsv(text);
   if (!opened.ok) return opened;
   const rows: CsvDataRow[] = [];
   const outcome = opened.forEachRow((row) => rows.push(row));
   if (!outcome.ok) return outcome;
-  return { ok: true, layout: opened.layout, rows, errors: outcome.errors };
+  return {
+    ok: true,
+    layout: opened.layout,
+    rows,
+    errors: outcome.errors,
+    errorCount: outcome.errorCount,
+  };
 }
 
 // ---------------------------------------------------------------------------
@@ -173,7 +188,7 @@ export function parsePriceList(
  * (`rowStart` is always an offset in the whole text).
  */
 class DataRowReader {
-  readonly errors: LineError[] = [];
+  readonly errors = new LineErrorList();
   dataRowCount = 0;
   /** A quotation mark that is never closed swallows the rest of the file: stop there. */
   stopped = false;
@@ -199,13 +214,13 @@ class DataRowReader {
 
     const quoteProblem = describeQuoteErrors(result.errors);
     if (quoteProblem) {
-      this.errors.push(lineError(line, quoteProblem.message));
+      this.errors.add(lineError(line, quoteProblem.message));
       if (quoteProblem.readsToEnd) this.stopped = true;
       return null;
     }
     const fitted = fitToHeader(cells, this.layout.headers.length);
     if (!fitted) {
-      this.errors.push(
+      this.errors.add(
         lineError(
           line,
           `the row has ${columnCount(cells)} but the header has ${this.layout.headers.length}.`,
@@ -219,7 +234,12 @@ class DataRowReader {
   outcome(): CsvRowsOutcome {
     if (this.dataRowCount === 0)
       return { ok: false, message: noDataRowsMessage };
-    return { ok: true, dataRowCount: this.dataRowCount, errors: this.errors };
+    return {
+      ok: true,
+      dataRowCount: this.dataRowCount,
+      errors: this.errors.errors,
+      errorCount: this.errors.errorCount,
+    };
   }
 }
 
@@ -284,7 +304,7 @@ async function readDataRowsInBatches(
       (row) => batch.push(row),
       layout.delimiter,
     );
-    if (batch.length > 0) await onBatch(batch, reader.errors.length);
+    if (batch.length > 0) await onBatch(batch, reader.errors.errorCount);
   }
   return reader.outcome();
 }

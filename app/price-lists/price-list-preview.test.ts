@@ -33,7 +33,15 @@ describe("the dry-run preview", () => {
       { line: 50, message: "Line 50: a." },
       { line: 60, message: "Line 60: b." },
     ]);
-    expect(Object.keys(preview)).toEqual(["rows", "valid", "invalid"]);
+    expect(preview.invalidCount).toBe(2);
+    expect(preview.invalidTruncated).toBe(false);
+    expect(Object.keys(preview)).toEqual([
+      "rows",
+      "valid",
+      "invalid",
+      "invalidCount",
+      "invalidTruncated",
+    ]);
   });
 
   it("works with no rows at all", () => {
@@ -41,6 +49,21 @@ describe("the dry-run preview", () => {
       rows: [],
       valid: 0,
       invalid: [],
+      invalidCount: 0,
+      invalidTruncated: false,
     });
+  });
+
+  it("lists the first 1,000 lines with errors and says how many there were", () => {
+    const errors = Array.from({ length: 1_500 }, (_, index) => ({
+      line: 1_501 - index,
+      message: `Line ${1_501 - index}: bad.`,
+    }));
+    const preview = summarisePreview([], errors);
+    expect(preview.invalid).toHaveLength(1_000);
+    expect(preview.invalid[0]!.line).toBe(2);
+    expect(preview.invalid.at(-1)!.line).toBe(1_001);
+    expect(preview.invalidCount).toBe(1_500);
+    expect(preview.invalidTruncated).toBe(true);
   });
 });

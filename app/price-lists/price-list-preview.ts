@@ -1,8 +1,9 @@
 /**
  * The dry-run answer of a price-list import: what the buyer sees before
  * committing. It is also the JSON body of the API's dry run:
- * `{ rows, valid, invalid: [{ line, message }] }`. Pure.
+ * `{ rows, valid, invalid: [{ line, message }], invalidCount, invalidTruncated }`. Pure.
  */
+import { mergeLineErrors, type ListedLineErrors } from "./line-errors";
 import type { LineError } from "./parse-price-list";
 import type { PriceListRow } from "./price-list-rows";
 
@@ -14,8 +15,12 @@ export interface PriceListPreview {
   rows: PriceListRow[];
   /** How many rows would be imported (exact repeats counted once). */
   valid: number;
-  /** Every line that would not be imported, in file order. */
+  /** The first 1,000 lines that would not be imported, in file order. */
   invalid: LineError[];
+  /** Every line that would not be imported, listed or not. */
+  invalidCount: number;
+  /** True when `invalid` lists only the first of them. */
+  invalidTruncated: boolean;
 }
 
 /** Builds a preview row by row, keeping only the rows it shows. */
@@ -28,13 +33,14 @@ export class PriceListPreviewCollector {
     this.counted += 1;
   }
 
-  preview(errors: readonly LineError[]): PriceListPreview {
+  preview(lineErrors: ListedLineErrors): PriceListPreview {
+    const { errors, errorCount } = mergeLineErrors(lineErrors);
     return {
       rows: this.shown,
       valid: this.counted,
-      invalid: [...errors]
-        .sort((a, b) => a.line - b.line)
-        .map(({ line, message }) => ({ line, message })),
+      invalid: errors.map(({ line, message }) => ({ line, message })),
+      invalidCount: errorCount,
+      invalidTruncated: errorCount > errors.length,
     };
   }
 }
@@ -45,5 +51,5 @@ export function summarisePreview(
 ): PriceListPreview {
   const collector = new PriceListPreviewCollector();
   for (const row of rows) collector.add(row);
-  return collector.preview(errors);
+  return collector.preview({ errors, errorCount: errors.length });
 }

@@ -182,6 +182,12 @@ describe("bad prices and quantities", () => {
     );
   });
 
+  it("refuses a price longer than any number before reading it", () => {
+    expect(messageOf(read({ ...magnet, price: "1".repeat(50_000) }))).toBe(
+      `Line 14: the price "${"1".repeat(39)}…" is longer than 40 characters, more than any number can be.`,
+    );
+  });
+
   it("refuses a price that is not a number", () => {
     expect(messageOf(read({ ...magnet, price: "on request" }))).toBe(
       'Line 14: the price "on request" is not a number.',

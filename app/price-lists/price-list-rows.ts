@@ -15,19 +15,20 @@
  * Pure: runs in Node and in the browser.
  */
 import {
-  findAwgSize,
   findIecNominalDiameter,
   type InsulationKey,
   type ThermalClass,
   type WireStandard,
 } from "~/engineering/reference-data";
 import type { ItemKind, StockUnit } from "~/db/tables/stock-enums";
+import { maxNumberTextLength, plainDecimalText } from "~/lib/number-text";
 import { iecSizeLabel } from "~/reference/wire-size-labels";
 import {
   insulationStandard,
   isIsoDate,
   moneyRules,
   quantityRules,
+  readAwgSize,
   readDate,
   readDecimal,
   readDiameterMm,
@@ -45,6 +46,7 @@ import {
   findCurrencyCode,
   type CurrencyCode,
 } from "./currencies";
+import { LineErrorList } from "./line-errors";
 import { lineError, type CsvDataRow, type LineError } from "./parse-price-list";
 
 /** Matches the supplier SKU column planned for the purchasing tables. */
@@ -294,9 +296,7 @@ function readWire(
 
   let size: string | undefined;
   if (standard === "AWG" && sizeCell !== "") {
-    size = findAwgSize(
-      sizeCell.replace(/^#\s*/, "").replace(/\s*awg$/i, ""),
-    )?.label;
+    size = readAwgSize(sizeCell);
     if (!size) {
       problems.push(
         `the AWG size ${quote(sizeCell)} is not an AWG size from 4/0 to 46`,
@@ -505,6 +505,7 @@ function readAmount(
   const quoted = quote(amountCell);
   const messages: Record<DecimalProblem, string> = {
     "not-a-number": `the ${label} ${quoted} is not a number`,
+    "too-long": `the ${label} ${quoted} is longer than ${maxNumberTextLength} characters, more than any number can be`,
     "comma-not-allowed": `the ${label} ${quoted} has a comma; in a file separated by commas or tabs, write numbers with a decimal point and no thousands separator (1234.50)`,
     "ambiguous-point": `the ${label} ${quoted} could mean ${amountCell.replace(".", ",")} or ${amountCell.replace(".", "")}; in a file separated by semicolons, write it with a decimal comma and no thousands separator`,
     negative: `the ${label} ${quoted} is negative`,
@@ -585,7 +586,8 @@ function fingerprintOf(row: PriceListRow): RowFingerprint {
 export class PriceListRowCollector {
   /** Good rows not yet taken, in file order. */
   rows: PriceListRow[] = [];
-  readonly errors: LineError[] = [];
+  /** The rows with errors: the first ones listed, all counted. */
+  private readonly lineErrors = new LineErrorList();
   /** Good rows seen so far, exact repeats counted once. */
   goodRowCount = 0;
   private readonly rowsByPriceKey = new Map<string, RowFingerprint>();
@@ -593,6 +595,16 @@ export class PriceListRowCollector {
 
   constructor(private readonly context: PriceListRowContext) {
     assertImportDay(context.importDay);
+  }
+
+  /** The first rows with errors, in file order. */
+  get errors(): readonly LineError[] {
+    return this.lineErrors.errors;
+  }
+
+  /** Every row with an error, listed or not. */
+  get errorCount(): number {
+    return this.lineErrors.errorCount;
   }
 
   /** The good rows collected since the last call; the collector forgets them (it still knows their keys). */
@@ -605,7 +617,7 @@ export class PriceListRowCollector {
   add(data: CsvDataRow): void {
     const reading = readPriceListRow(data, this.context);
     if (!reading.ok) {
-      this.errors.push(reading.error);
+      this.lineErrors.add(reading.error);
       return;
     }
     const row = reading.row;
@@ -617,10 +629,10 @@ export class PriceListRowCollector {
     if (earlier) {
       const difference = describeDifference(earlier, fingerprint);
       if (difference) {
-        this.errors.push(
+        this.lineErrors.add(
           lineError(
             row.line,
-            `the supplier SKU ${quote(row.supplierSku)} (minimum quantity ${plainNumber(row.minQuantity)}, valid from ${row.validFrom}) is already on line ${earlier.line} with ${difference}.`,
+            `the supplier SKU ${quote(row.supplierSku)} (minimum quantity ${plainDecimalText(row.minQuantity)}, valid from ${row.validFrom}) is already on line ${earlier.line} with ${difference}.`,
           ),
         );
       }
@@ -629,7 +641,7 @@ export class PriceListRowCollector {
 
     const first = this.firstRowBySku.get(skuKey);
     if (first && first.item !== fingerprint.item) {
-      this.errors.push(
+      this.lineErrors.add(
         lineError(
           row.line,
           `the supplier SKU ${quote(row.supplierSku)} is ${fingerprint.item} here but ${first.item} on line ${first.line}; one SKU must always be the same item.`,
@@ -665,8 +677,8 @@ function describeDifference(
 /** "12.5 EUR", or "adder 3.2 EUR per kg". */
 function describePrice(row: PriceListRow): string {
   return row.price !== null
-    ? `${plainNumber(row.price)} ${row.currency}`
-    : `adder ${plainNumber(row.adderPerKg ?? "0")} ${row.currency} per kg`;
+    ? `${plainDecimalText(row.price)} ${row.currency}`
+    : `adder ${plainDecimalText(row.adderPerKg ?? "0")} ${row.currency} per kg`;
 }
 
 /** "wire AWG 20 heavy class 155", "magnet N42SH", "part per pcs". */
@@ -692,11 +704,4 @@ function describeItemKind(row: PriceListRow): string {
     case "part":
       return `part per ${row.unit}`;
   }
-}
-
-/** "12.5000" → "12.5", "1.000" → "1". */
-function plainNumber(decimalText: string): string {
-  return decimalText.includes(".")
-    ? decimalText.replace(/\.?0+$/, "")
-    : decimalText;
 }

@@ -198,3 +198,56 @@ describe("reading a price list in batches", () => {
     expect(batched.errors.map((error) => error.line)).toEqual([5, 6]);
   });
 });
+
+describe("a file of bad lines", () => {
+  /** A header of four columns, then `count` lines of one column each (every one an error). */
+  function oneColumnLines(count: number): string {
+    const lines = ["SKU,Grade,Price,Currency"];
+    for (let index = 0; index < count; index += 1) lines.push(`bad-${index}`);
+    return lines.join("\n");
+  }
+
+  it("keeps the first 1,000 lines with errors and counts the rest", () => {
+    const text = oneColumnLines(250_000);
+    const result = readPriceListText(text, {
+      mapping: mappingFor(text),
+      importDay,
+      knownGrades,
+    });
+    if (!result.ok) throw new Error(result.messages.join(" "));
+    expect(result.errors).toHaveLength(1_000);
+    expect(result.errors[0]!.line).toBe(2);
+    expect(result.errors.at(-1)!.line).toBe(1_001);
+    expect(result.errorCount).toBe(250_000);
+    expect(result.rows).toEqual([]);
+  }, 60_000);
+
+  it("keeps the first 1,000 across broken rows and bad values, in file order", async () => {
+    // Odd lines have one column (the CSV reader's error), even lines a bad price (the row reader's).
+    const lines = ["SKU,Grade,Price,Currency"];
+    for (let index = 0; index < 5_000; index += 1)
+      lines.push(index % 2 === 0 ? `bad-${index}` : `M-${index},N52,-1,EUR`);
+    const text = lines.join("\n");
+    const options = { mapping: mappingFor(text), importDay, knownGrades };
+
+    const whole = readPriceListText(text, options);
+    if (!whole.ok) throw new Error(whole.messages.join(" "));
+    expect(whole.errorCount).toBe(5_000);
+    expect(whole.errors.map((error) => error.line)).toEqual(
+      Array.from({ length: 1_000 }, (_, index) => index + 2),
+    );
+
+    const errorsSoFar: number[] = [];
+    const batched = await readPriceListInBatches(
+      new TextEncoder().encode(text),
+      options,
+      700,
+      async (_rows, lineErrorsSoFar) => {
+        errorsSoFar.push(lineErrorsSoFar);
+      },
+    );
+    if (!batched.ok) throw new Error(batched.messages.join(" "));
+    expect(batched.errorCount).toBe(5_000);
+    expect(batched.errors).toEqual(whole.errors);
+  });
+});

@@ -5,11 +5,14 @@
  * the caller previews the result or commits it all at once.
  *
  * File-level problems come back as `{ ok: false, messages }`; per-line
- * problems as `errors`, in file order. Pure: runs in Node and in the browser.
+ * problems as `errors`, in file order: the first 1,000 lines with errors, and
+ * `errorCount` for all of them (line-errors.ts). Pure: runs in Node and in the
+ * browser.
  */
 import { checkColumnMapping, type ColumnMapping } from "./column-mapping";
 import type { CurrencyCode } from "./currencies";
 import { decodePriceListBytes } from "./decode-csv";
+import { mergeLineErrors } from "./line-errors";
 import {
   openPriceListCsv,
   type CsvLayout,
@@ -34,6 +37,7 @@ export type PriceListReading =
       layout: CsvLayout;
       rows: PriceListRow[];
       errors: LineError[];
+      errorCount: number;
     }
   | { ok: false; messages: string[] };
 
@@ -87,17 +91,19 @@ export function readPriceListText(
   const outcome = opened.forEachRow((row) => collector.add(row));
   if (!outcome.ok) return { ok: false, messages: [outcome.message] };
 
-  const errors = [...outcome.errors, ...collector.errors].sort(
-    (a, b) => a.line - b.line,
-  );
-  return { ok: true, layout: opened.layout, rows: collector.rows, errors };
+  return {
+    ok: true,
+    layout: opened.layout,
+    rows: collector.rows,
+    ...mergeLineErrors(outcome, collector),
+  };
 }
 
 /**
  * Reads an uploaded file and hands its good rows over in batches (each awaited
  * before the next is read), keeping none of them: for imports of large files.
- * Each batch comes with the number of bad lines found so far; the errors of
- * every line come back at the end, in file order.
+ * Each batch comes with the number of bad lines found so far; the errors come
+ * back at the end, in file order (the first 1,000 lines, and the count of all).
  */
 export async function readPriceListInBatches(
   bytes: Uint8Array,
@@ -105,7 +111,13 @@ export async function readPriceListInBatches(
   batchRows: number,
   onBatch: (rows: PriceListRow[], lineErrorsSoFar: number) => Promise<void>,
 ): Promise<
-  | { ok: true; layout: CsvLayout; goodRows: number; errors: LineError[] }
+  | {
+      ok: true;
+      layout: CsvLayout;
+      goodRows: number;
+      errors: LineError[];
+      errorCount: number;
+    }
   | { ok: false; messages: string[] }
 > {
   const decoded = decodePriceListBytes(bytes);
@@ -119,17 +131,14 @@ export async function readPriceListInBatches(
       for (const row of batch) collector.add(row);
       const rows = collector.takeRows();
       if (rows.length > 0)
-        await onBatch(rows, csvErrorsSoFar + collector.errors.length);
+        await onBatch(rows, csvErrorsSoFar + collector.errorCount);
     },
   );
   if (!outcome.ok) return { ok: false, messages: [outcome.message] };
-  const errors = [...outcome.errors, ...collector.errors].sort(
-    (a, b) => a.line - b.line,
-  );
   return {
     ok: true,
     layout: opened.layout,
     goodRows: collector.goodRowCount,
-    errors,
+    ...mergeLineErrors(outcome, collector),
   };
 }

@@ -22,6 +22,7 @@ import {
   columnMappingToFields,
   type ColumnMapping,
 } from "~/price-lists/column-mapping";
+import { LineErrorList, mergeLineErrors } from "~/price-lists/line-errors";
 import type { LineError } from "~/price-lists/parse-price-list";
 import {
   PriceListPreviewCollector,
@@ -37,7 +38,14 @@ import {
 
 export type ImportOutcome =
   | { kind: "refused"; messages: string[] }
-  | { kind: "invalid"; valid: number; invalid: LineError[] }
+  | {
+      kind: "invalid";
+      valid: number;
+      /** The first 1,000 lines with errors, in file order. */
+      invalid: LineError[];
+      /** Every line with an error. */
+      invalidCount: number;
+    }
   | {
       kind: "preview";
       preview: PriceListPreview & {
@@ -278,7 +286,8 @@ export async function importPriceList(input: {
     ),
     supplierCurrency: supplier.currency as never,
   };
-  const matchErrors: LineError[] = [];
+  // Rows that read well but match no catalogue item: listed up to 1,000, all counted.
+  const matchErrors = new LineErrorList();
 
   if (input.dryRun) {
     const preview = new PriceListPreviewCollector();
@@ -293,7 +302,7 @@ export async function importPriceList(input: {
         for (const row of rows) {
           const result = matcher.match(row);
           if (isLineError(result)) {
-            matchErrors.push(result);
+            matchErrors.add(result);
             continue;
           }
           preview.add(row);
@@ -306,7 +315,7 @@ export async function importPriceList(input: {
     return {
       kind: "preview",
       preview: {
-        ...preview.preview([...reading.errors, ...matchErrors]),
+        ...preview.preview(mergeLineErrors(reading, matchErrors)),
         matched: matchedRows,
         newItems: newItemSkus.size,
       },
@@ -353,12 +362,12 @@ export async function importPriceList(input: {
         const matched: MatchedRow[] = [];
         for (const row of rows) {
           const result = matcher.match(row);
-          if (isLineError(result)) matchErrors.push(result);
+          if (isLineError(result)) matchErrors.add(result);
           else matched.push(result);
         }
         goodRows += matched.length;
         await writing;
-        if (lineErrorsSoFar === 0 && matchErrors.length === 0) {
+        if (lineErrorsSoFar === 0 && matchErrors.errorCount === 0) {
           writing = writer.write(matched);
           // Handled: a failure is thrown by the next `await writing`, not reported as unhandled.
           writing.catch(() => undefined);
@@ -370,12 +379,15 @@ export async function importPriceList(input: {
       await writer.abandon();
       return { kind: "refused", messages: reading.messages };
     }
-    const invalid = [...reading.errors, ...matchErrors].sort(
-      (a, b) => a.line - b.line,
-    );
-    if (invalid.length > 0) {
+    const invalid = mergeLineErrors(reading, matchErrors);
+    if (invalid.errorCount > 0) {
       await writer.abandon();
-      return { kind: "invalid", valid: goodRows, invalid };
+      return {
+        kind: "invalid",
+        valid: goodRows,
+        invalid: invalid.errors,
+        invalidCount: invalid.errorCount,
+      };
     }
     const written = await writer.finish({
       headerSignature: input.mapping.map((entry) => entry.header).join("\t"),

@@ -16,8 +16,9 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 /**
  * POST /api/v1/price-lists (buyer, admin), multipart: file, supplier, mapping (JSON: our field → the
- * file's header). ?dryRun=1 → 200 { rows, valid, invalid }; otherwise 201 with the import's summary,
- * or 422 with the invalid rows and nothing written.
+ * file's header). ?dryRun=1 → 200 { rows, valid, invalid, invalidCount, invalidTruncated }; otherwise
+ * 201 with the import's summary, or 422 with the invalid rows and nothing written. `invalid` lists
+ * the first 1,000 lines with errors; `invalidCount` counts them all.
  */
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, ["buyer"]);
@@ -95,17 +96,23 @@ export async function action({ request }: Route.ActionArgs) {
         });
       case "preview":
         return Response.json(outcome.preview);
-      case "invalid":
+      case "invalid": {
+        // At most 1,000 lines are listed; the count and the flag say when there were more.
+        const truncated = outcome.invalidCount > outcome.invalid.length;
+        const count = (lines: number) => lines.toLocaleString("en-GB");
         return Response.json(
           {
             error: {
-              message: `${outcome.invalid.length} rows are invalid; nothing was imported.`,
+              message: `${count(outcome.invalidCount)} rows are invalid; nothing was imported.${truncated ? ` The first ${count(outcome.invalid.length)} are listed.` : ""}`,
             },
             valid: outcome.valid,
             invalid: outcome.invalid,
+            invalidCount: outcome.invalidCount,
+            invalidTruncated: truncated,
           },
           { status: 422 },
         );
+      }
       case "already-imported":
         return Response.json({
           importId: outcome.importId,

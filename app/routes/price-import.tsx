@@ -264,7 +264,7 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
 
   const check = checked?.ok ? checked.data : null;
   const canImport =
-    check !== null && check.invalid.length === 0 && check.valid > 0 && !busy;
+    check !== null && check.invalidCount === 0 && check.valid > 0 && !busy;
 
   return (
     <div className="mx-auto max-w-5xl space-y-6">
@@ -428,8 +428,8 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
           <>
             <p className="text-sm text-graphite-700">
               The import is all or nothing: every row is stored, or none.
-              {check.invalid.length > 0
-                ? ` Fix the ${check.invalid.length === 1 ? "row" : `${check.invalid.length} rows`} listed above in the file, choose it again and check again.`
+              {check.invalidCount > 0
+                ? ` Fix the ${check.invalidCount === 1 ? "row" : `${formatQuantity(check.invalidCount, "")} rows`} with problems in the file, choose it again and check again.`
                 : ""}
             </p>
             <div className="flex flex-wrap items-center gap-3">
@@ -445,7 +445,7 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
                   : `Import ${formatQuantity(check.valid, "")} ${check.valid === 1 ? "row" : "rows"}`}
               </button>
               <p id="import-note" className="text-sm text-graphite-500">
-                {check.invalid.length > 0
+                {check.invalidCount > 0
                   ? "Not possible while rows have problems."
                   : `For ${supplier?.name ?? "the supplier"}; ${check.newItems === 1 ? "1 new catalogue item" : `${check.newItems} new catalogue items`} will be created.`}
               </p>
@@ -459,7 +459,10 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
               <div role="alert" className="space-y-3">
                 <p className="field-error">{imported.message}</p>
                 {imported.invalid ? (
-                  <InvalidRowsTable invalid={imported.invalid} />
+                  <InvalidRowsTable
+                    invalid={imported.invalid}
+                    invalidCount={imported.invalidCount}
+                  />
                 ) : null}
               </div>
             ) : null}

@@ -199,6 +199,51 @@ describe("price-list import", () => {
     );
   });
 
+  it("lists the first 1,000 bad lines of a file of 30,000, says how many there were, and writes nothing", async () => {
+    const sku = uniqueCode("E");
+    // One good line, then lines of one column (a broken row each) and bad prices, mixed.
+    const lines = [`${sku}-ok,fine,,,,,1.00,,EUR,1,2026-11-01`];
+    for (let index = 0; index < 30_000; index += 1)
+      lines.push(
+        index % 3 === 0
+          ? `${sku}-${index},x,,,,,-3,,EUR,1,2026-11-01`
+          : `${sku}-${index}`,
+      );
+    const csv = priceList(lines);
+    const before = await tableCounts();
+
+    const preview = await upload(csv, { dryRun: true });
+    expect(preview.status).toBe(200);
+    const checked = await preview.json();
+    expect(checked.valid).toBe(1);
+    expect(checked.invalid).toHaveLength(1_000);
+    expect(checked.invalid[0].line).toBe(3);
+    expect(checked.invalid.at(-1).line).toBe(1_002);
+    expect(checked.invalidCount).toBe(30_000);
+    expect(checked.invalidTruncated).toBe(true);
+
+    const committed = await upload(csv);
+    expect(committed.status).toBe(422);
+    const refused = await committed.json();
+    expect(refused.error.message).toBe(
+      "30,000 rows are invalid; nothing was imported. The first 1,000 are listed.",
+    );
+    expect(refused.invalid).toHaveLength(1_000);
+    expect(refused.invalidCount).toBe(30_000);
+    expect(refused.invalidTruncated).toBe(true);
+    expect(await tableCounts()).toEqual(before);
+
+    // A file with a few bad lines lists them all and says the list is whole.
+    const few = await upload(
+      priceList([`${sku}-a,x,,,,,-3,,EUR,1,2026-11-01`, `${sku}-b`]),
+      { dryRun: true },
+    );
+    expect(await few.json()).toMatchObject({
+      invalidCount: 2,
+      invalidTruncated: false,
+    });
+  });
+
   it("lets only buyers and admins import", async () => {
     for (const role of ["storekeeper", "builder", "manager"]) {
       const cookie = await signIn(`${role}@turnledger.test`, demoPassword());
