@@ -2,6 +2,7 @@
 import { z } from "zod";
 import { buildOrderStatuses } from "~/db/tables/build-orders";
 import { apiError } from "~/lib/api.server";
+import { idFromText, pageParam, pageSizeParam } from "~/lib/search-params";
 import { answerStockError } from "~/stock/stock-api.server";
 import { isBuildOrderError } from "./build-order-errors";
 
@@ -35,9 +36,8 @@ export async function answerBuildOrderError(
 
 /** The order id of the path, or a 404 answer when it is not a whole number. */
 export function orderIdFrom(value: string | undefined): number {
-  const id = Number(value);
-  if (!/^\d{1,9}$/.test(value ?? "") || !Number.isSafeInteger(id) || id < 1)
-    throw apiError(404, `No build order "${value ?? ""}".`);
+  const id = idFromText(value);
+  if (id === null) throw apiError(404, `No build order "${value ?? ""}".`);
   return id;
 }
 
@@ -47,17 +47,8 @@ export const buildOrderListQuerySchema = z.object({
       error: `status must be one of ${buildOrderStatuses.join(", ")}.`,
     })
     .optional(),
-  page: z.coerce
-    .number({ error: "page must be a number." })
-    .int("page must be a whole number.")
-    .min(1, "page starts at 1.")
-    .default(1),
-  pageSize: z.coerce
-    .number({ error: "pageSize must be a number." })
-    .int("pageSize must be a whole number.")
-    .min(1, "pageSize must be 1 to 200.")
-    .max(200, "pageSize must be 1 to 200.")
-    .default(50),
+  page: pageParam,
+  pageSize: pageSizeParam("pageSize", 200, 50),
 });
 
 /** Reads an optional JSON body (none, or an empty one, reads as {}) and validates it; throws a 400 naming each bad field. */

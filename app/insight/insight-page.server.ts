@@ -5,7 +5,7 @@
  * the stock figures. The page also gets the weekly stock-value trend, as a promise the
  * page streams in when it is ready.
  */
-import { searchParamsObject } from "~/lib/search-params";
+import { readPageOrLast, searchParamsObject } from "~/lib/search-params";
 import { moneyToJson } from "./design-insight";
 import { designInsight, storedMetalBases } from "./design-insight.server";
 import {
@@ -40,7 +40,10 @@ export async function loadInsight(
   const fullPage = options.page === "insight";
   if (!fullPage) prepareStockValueTrend();
   const [designs, bases, stock] = await Promise.all([
-    designInsight(query, { today, history: fullPage }),
+    // A page past the end (a typed address, or designs withdrawn since) shows the last one.
+    readPageOrLast(query.page, query.perPage, (page) =>
+      designInsight({ ...query, page }, { today, history: fullPage }),
+    ),
     storedMetalBases(query.date ?? today),
     stockValueInsight({ trend: false }),
   ]);

@@ -19,7 +19,13 @@ import type { ConductorKey } from "~/engineering/reference-data";
 import type { DesignLine } from "~/designs/design-lines";
 import type { MetalBasePrice } from "~/pricing/metal-base";
 import type { CurrencyCode, MoneyAmount } from "~/pricing/money";
-import { isCalendarDate } from "~/pricing/calendar-date";
+import {
+  dayParam,
+  pageParam,
+  pageSizeParam,
+  readSearchLeniently,
+  wholeNumberParam,
+} from "~/lib/search-params";
 import { parseUnitCost } from "~/stock/decimal-amounts";
 
 /** Stand-ins for one costing; every field optional, nothing saved. */
@@ -29,6 +35,12 @@ export interface CostingWhatIf {
   /** Factor on every coil line's end-turn length (1 = as designed). */
   endTurnScale?: number;
 }
+
+/**
+ * Designs costed per page at most. With `history` each is costed 13 times (now and
+ * twelve months back), so a page is at most 650 costings however the address is written.
+ */
+export const maxDesignsPerPage = 50;
 
 /** The largest end-turn factor the what-if takes: five times as long. */
 export const maxEndTurnScale = 5;
@@ -58,16 +70,12 @@ const endTurnScale = z.coerce
 export const insightQuerySchema = z.preprocess(
   gatherEndTurnKeys,
   z.object({
-    quantity: z.coerce
-      .number({ error: "The quantity is a number of motors." })
-      .int("The quantity is a whole number of motors.")
-      .min(1, "The quantity is at least 1 motor.")
-      .max(1_000_000, "The quantity is at most 1,000,000 motors.")
-      .default(1),
-    date: z
-      .string()
-      .refine(isCalendarDate, "The date is a day in YYYY-MM-DD form.")
-      .optional(),
+    quantity: wholeNumberParam("quantity", {
+      min: 1,
+      max: 1_000_000,
+      message: "The quantity is a whole number of motors from 1 to 1,000,000.",
+    }).default(1),
+    date: dayParam("date", "The date is a day in YYYY-MM-DD form.").optional(),
     copperBase: moneyText.optional(),
     aluminiumBase: moneyText.optional(),
     endTurn: z
@@ -76,17 +84,8 @@ export const insightQuerySchema = z.preprocess(
         endTurnScale,
       )
       .default({}),
-    page: z.coerce
-      .number({ error: "The page is a whole number from 1." })
-      .int("The page is a whole number from 1.")
-      .min(1, "The page is a whole number from 1.")
-      .default(1),
-    perPage: z.coerce
-      .number({ error: "At most 50 designs a page." })
-      .int("At most 50 designs a page.")
-      .min(1, "At least 1 design a page.")
-      .max(50, "At most 50 designs a page.")
-      .default(20),
+    page: pageParam,
+    perPage: pageSizeParam("perPage", maxDesignsPerPage, 20),
     history: z.enum(["0", "1"]).optional(),
   }),
 );
@@ -175,18 +174,5 @@ export function readInsightSearch(params: Record<string, string>): {
   query: InsightQuery;
   errors: Record<string, string[]>;
 } {
-  const errors: Record<string, string[]> = {};
-  let kept = { ...params };
-  for (let attempt = 0; attempt < 3; attempt += 1) {
-    const parsed = insightQuerySchema.safeParse(kept);
-    if (parsed.success) return { query: parsed.data, errors };
-    for (const issue of parsed.error.issues) {
-      const field = issue.path.join(".") || "query";
-      (errors[field] ??= []).push(issue.message);
-      kept = Object.fromEntries(
-        Object.entries(kept).filter(([key]) => key !== field),
-      );
-    }
-  }
-  return { query: insightQuerySchema.parse({}), errors };
+  return readSearchLeniently(insightQuerySchema, params);
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatDateTime, formatQuantity, pageFromSearch } from "./format";
+import { formatDateTime, formatQuantity } from "./format";
 
 describe("formatQuantity", () => {
   it("puts the unit beside the number, with a no-break space", () => {
@@ -14,18 +14,5 @@ describe("formatDateTime", () => {
       "2 Dec 2026, 14:05 UTC",
     );
     expect(formatDateTime(null)).toBe("—");
-  });
-});
-
-describe("pageFromSearch", () => {
-  it.each([
-    ["3", 3],
-    [null, 1],
-    ["0", 1],
-    ["-2", 1],
-    ["2.5", 1],
-    ["abc", 1],
-  ])("reads %s as page %d", (value, page) => {
-    expect(pageFromSearch(value)).toBe(page);
   });
 });

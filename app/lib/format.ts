@@ -27,9 +27,3 @@ export function formatQuantity(
   });
   return unit ? `${number}\u00a0${unit}` : number;
 }
-
-/** Reads a 1-based page number from a query string value. */
-export function pageFromSearch(value: string | null): number {
-  const page = Number(value);
-  return Number.isInteger(page) && page >= 1 ? page : 1;
-}

@@ -2,19 +2,18 @@ import { createColumnHelper } from "@tanstack/react-table";
 import type { Route } from "./+types/admin-outbox";
 import { requireRole } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
-import { formatDateTime, pageFromSearch } from "~/lib/format";
+import { formatDateTime } from "~/lib/format";
+import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { listOutbox, outboxPageSize } from "~/mail/outbox.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireRole(request, ["admin"]);
-  const page = pageFromSearch(new URL(request.url).searchParams.get("page"));
-  const { total, messages } = await listOutbox(page);
-  return {
-    messages,
-    page,
-    pageCount: Math.max(1, Math.ceil(total / outboxPageSize)),
-    total,
-  };
+  const { total, messages, page, pageCount } = await readPageOrLast(
+    pageFromSearch(new URL(request.url).searchParams.get("page")),
+    outboxPageSize,
+    (page) => listOutbox(page),
+  );
+  return { messages, page, pageCount, total };
 }
 
 export const meta: Route.MetaFunction = () => [

@@ -9,7 +9,8 @@ import { DataTable } from "~/components/data-table";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages, TextField } from "~/components/text-field";
 import { appUrl } from "~/lib/app-url.server";
-import { formatDateTime, pageFromSearch } from "~/lib/format";
+import { formatDateTime } from "~/lib/format";
+import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { inviteSchema } from "~/lib/people-schemas";
 import { roleLabels } from "~/lib/roles";
 import {
@@ -21,13 +22,12 @@ import {
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireRole(request, ["admin"]);
-  const page = pageFromSearch(new URL(request.url).searchParams.get("page"));
-  const { total, people } = await listPeople(page);
-  return {
-    people,
-    page,
-    pageCount: Math.max(1, Math.ceil(total / peoplePageSize)),
-  };
+  const { people, page, pageCount } = await readPageOrLast(
+    pageFromSearch(new URL(request.url).searchParams.get("page")),
+    peoplePageSize,
+    (page) => listPeople(page),
+  );
+  return { people, page, pageCount };
 }
 
 export async function action({ request }: Route.ActionArgs) {

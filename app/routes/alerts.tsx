@@ -5,8 +5,9 @@ import { purchaseRequestsBySupplier } from "~/alerts/purchase-requests.server";
 import { alertsPageSize, listAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
-import { formatDateTime, pageFromSearch } from "~/lib/format";
+import { formatDateTime } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
+import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 const statuses = ["open", "closed", "all"] as const;
@@ -19,8 +20,11 @@ export async function loader({ request }: Route.LoaderArgs) {
   const status: Status = (statuses as readonly string[]).includes(asked ?? "")
     ? (asked as Status)
     : "open";
-  const page = pageFromSearch(search.get("page"));
-  const { alerts, total } = await listAlerts({ status, page });
+  const { alerts, total, page, pageCount } = await readPageOrLast(
+    pageFromSearch(search.get("page")),
+    alertsPageSize,
+    (page) => listAlerts({ status, page }),
+  );
   const canBuy = userHasRole(user, ["buyer"]);
   const requests = canBuy
     ? [...(await purchaseRequestsBySupplier())].map(([supplier, lines]) => ({
@@ -32,7 +36,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     status,
     alerts,
     page,
-    pageCount: Math.max(1, Math.ceil(total / alertsPageSize)),
+    pageCount,
     total,
     canBuy,
     requests,

@@ -3,6 +3,7 @@ import type { Route } from "./+types/api.v1.alerts";
 import { listAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
 import { methodNotAllowed, readSearchParams } from "~/lib/api.server";
+import { pageParam, pageSizeParam } from "~/lib/search-params";
 
 const query = z.object({
   status: z
@@ -10,12 +11,8 @@ const query = z.object({
       error: "The status is open, closed or all.",
     })
     .default("open"),
-  page: z.coerce
-    .number()
-    .int()
-    .min(1, "The page is a whole number from 1.")
-    .default(1),
-  perPage: z.coerce.number().int().min(1).max(200).default(50),
+  page: pageParam,
+  perPage: pageSizeParam("perPage", 200, 50),
 });
 
 /** GET /api/v1/alerts?status=open|closed|all → [{ sku, status, availableAtOpen, …, told }], paged (X-Total-Count). */

@@ -7,31 +7,26 @@ import {
   findRevision,
   loadRevisionLines,
 } from "~/designs/design-revisions.server";
+import { maxBuildQuantity } from "~/designs/design-page";
 import { apiError, methodNotAllowed, readSearchParams } from "~/lib/api.server";
+import { dayParam, wholeNumberParam } from "~/lib/search-params";
 import { answerStockError } from "~/stock/stock-api.server";
 
 const costingQuery = z.object({
-  quantity: z.coerce
-    .number({ error: "The quantity is a number of motors." })
-    .int("The quantity is a whole number of motors.")
-    .min(1, "The quantity is at least 1 motor.")
-    .max(1_000_000, "The quantity is at most 1,000,000 motors.")
-    .default(1),
+  quantity: wholeNumberParam("quantity", {
+    min: 1,
+    max: maxBuildQuantity,
+    message: "The quantity is a whole number of motors from 1 to 1,000,000.",
+  }).default(1),
   basis: z
     .enum(costingBases, {
       error: "The basis is best-price or stock-average.",
     })
     .default("best-price"),
-  date: z
-    .string()
-    .regex(/^\d{4}-\d{2}-\d{2}$/, "The date is YYYY-MM-DD.")
-    .refine((day) => {
-      const parsed = new Date(`${day}T00:00:00Z`);
-      return (
-        !Number.isNaN(parsed.getTime()) && parsed.toISOString().startsWith(day)
-      );
-    }, "That day is not in the calendar.")
-    .optional(),
+  date: dayParam(
+    "date",
+    "The date is YYYY-MM-DD, a day on the calendar.",
+  ).optional(),
 });
 
 /**

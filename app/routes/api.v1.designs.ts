@@ -7,21 +7,13 @@ import {
   readJsonBody,
   readSearchParams,
 } from "~/lib/api.server";
+import { pageParam, pageSizeParam } from "~/lib/search-params";
 import { answerStockError } from "~/stock/stock-api.server";
 import { z } from "zod";
 
 const listQuery = z.object({
-  page: z.coerce
-    .number()
-    .int()
-    .min(1, "The page is a whole number from 1.")
-    .default(1),
-  perPage: z.coerce
-    .number()
-    .int()
-    .min(1)
-    .max(200, "At most 200 designs a page.")
-    .default(50),
+  page: pageParam,
+  perPage: pageSizeParam("perPage", 200, 50),
 });
 
 /** GET /api/v1/designs → [{ id, name, revisions: [{ revision, status, ratedTorqueNm }] }], paged (X-Total-Count). */

@@ -2,32 +2,21 @@ import { z } from "zod";
 import type { Route } from "./+types/api.v1.item-prices";
 import { requireUser } from "~/auth/guard.server";
 import { apiError, methodNotAllowed, readSearchParams } from "~/lib/api.server";
-import { isCalendarDate } from "~/pricing/calendar-date";
+import { dayParam, positiveDecimalParam } from "~/lib/search-params";
 import {
   bestPricesOf,
   loadItemPricing,
   priceHistoryOf,
 } from "~/purchasing/item-prices.server";
 import { quantityFromNumber } from "~/stock/decimal-amounts";
-
-const quantityMessage =
-  "quantity must be a number above 0 with at most 3 decimals.";
+import { maxStockQuantity } from "~/stock/movement-request";
 
 const itemPricesQuerySchema = z.object({
-  quantity: z.coerce
-    .number({ error: quantityMessage })
-    .refine(
-      (value) =>
-        Number.isFinite(value) &&
-        value > 0 &&
-        quantityFromNumber(value) !== null,
-      quantityMessage,
-    )
-    .default(1),
-  date: z
-    .string()
-    .refine(isCalendarDate, "date must be YYYY-MM-DD.")
-    .optional(),
+  quantity: positiveDecimalParam("quantity", {
+    max: maxStockQuantity,
+    decimals: 3,
+  }).default(1),
+  date: dayParam("date", "date must be YYYY-MM-DD.").optional(),
   history: z
     .enum(["1", "0"], { error: "history must be 1 or 0." })
     .optional()

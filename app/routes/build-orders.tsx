@@ -31,7 +31,8 @@ import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
 import { buildOrderStatuses } from "~/db/tables/build-orders";
 import { redirectWithFlash } from "~/lib/flash.server";
-import { formatDateTime, formatQuantity, pageFromSearch } from "~/lib/format";
+import { formatDateTime, formatQuantity } from "~/lib/format";
+import { pageFromSearch } from "~/lib/search-params";
 import { userHasRole } from "~/lib/roles";
 
 const pageSize = 25;

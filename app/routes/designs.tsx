@@ -16,28 +16,26 @@ import { TextAreaField } from "~/components/text-area-field";
 import { FormMessages, TextField } from "~/components/text-field";
 import { insulationClasses, newDesignSchema } from "~/designs/design-schemas";
 import { createDesign, listDesigns } from "~/designs/designs.server";
-import { formatQuantity, pageFromSearch } from "~/lib/format";
+import { formatQuantity } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
+import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { isStockError } from "~/stock/stock-errors";
 
 const designsPerPage = 25;
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  const requested = pageFromSearch(
-    new URL(request.url).searchParams.get("page"),
-  );
-  let listed = await listDesigns({ page: requested, perPage: designsPerPage });
-  const pageCount = Math.max(1, Math.ceil(listed.total / designsPerPage));
   // A page past the end (designs were removed, or a typed address) shows the last one.
-  const page = Math.min(requested, pageCount);
-  if (page !== requested)
-    listed = await listDesigns({ page, perPage: designsPerPage });
+  const listed = await readPageOrLast(
+    pageFromSearch(new URL(request.url).searchParams.get("page")),
+    designsPerPage,
+    (page) => listDesigns({ page, perPage: designsPerPage }),
+  );
   return {
     designs: listed.designs,
     total: listed.total,
-    page,
-    pageCount,
+    page: listed.page,
+    pageCount: listed.pageCount,
     canCreate: userHasRole(user, ["builder"]),
   };
 }

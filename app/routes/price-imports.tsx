@@ -4,8 +4,13 @@ import type { Route } from "./+types/price-imports";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { PriceImportDetail } from "~/components/price-import-detail";
-import { formatDateTime, formatQuantity, pageFromSearch } from "~/lib/format";
+import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
+import {
+  idFromText,
+  pageFromSearch,
+  readPageOrLast,
+} from "~/lib/search-params";
 import {
   findPriceImport,
   importLinePageSize,
@@ -14,25 +19,25 @@ import {
   listPriceImports,
 } from "~/purchasing/import-history.server";
 
-const pageCountOf = (total: number, size: number) =>
-  Math.max(1, Math.ceil(total / size));
-
 async function openedImport(value: string, page: number) {
-  const id = Number(value);
-  const found =
-    Number.isInteger(id) && id > 0 ? await findPriceImport(id) : null;
+  const id = idFromText(value);
+  const found = id === null ? null : await findPriceImport(id);
   if (!found) {
     throw data(
       { message: `There is no price-list import number ${value}.` },
       { status: 404 },
     );
   }
-  const { lines, total } = await listImportLines(found.id, page);
+  const { lines, ...paging } = await readPageOrLast(
+    page,
+    importLinePageSize,
+    (page) => listImportLines(found.id, page),
+  );
   return {
     ...found,
     lines,
-    page,
-    pageCount: pageCountOf(total, importLinePageSize),
+    page: paging.page,
+    pageCount: paging.pageCount,
   };
 }
 
@@ -48,10 +53,14 @@ export async function loader({ request }: Route.LoaderArgs) {
       canImport: userHasRole(user, ["buyer"]),
     };
   }
-  const { imports, total } = await listPriceImports(page);
+  const { imports, ...paging } = await readPageOrLast(
+    page,
+    importPageSize,
+    listPriceImports,
+  );
   return {
     opened: null,
-    list: { imports, page, pageCount: pageCountOf(total, importPageSize) },
+    list: { imports, page: paging.page, pageCount: paging.pageCount },
     canImport: userHasRole(user, ["buyer"]),
   };
 }

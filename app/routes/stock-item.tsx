@@ -18,8 +18,9 @@ import {
 } from "~/components/stock-item-attributes";
 import { FormMessages, TextField } from "~/components/text-field";
 import type { ConductorKey } from "~/engineering/reference-data";
+import { formatDateTime, formatQuantity } from "~/lib/format";
+import { pageCountOf, pageFromSearch } from "~/lib/search-params";
 import { redirectWithFlash } from "~/lib/flash.server";
-import { formatDateTime, formatQuantity, pageFromSearch } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
 import { updateItem } from "~/stock/catalogue.server";
 import {
@@ -132,15 +133,22 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   if (!found) notFound(params.sku);
   const { id, ...item } = found;
   const url = new URL(request.url);
-  const page = pageFromSearch(url.searchParams.get("page"));
-  const [attributes, movementCount, history, { movements }] = await Promise.all(
-    [
-      attributesOf(found),
-      countItemMovements(id),
-      listOnHandHistory(id),
-      listMovements({ itemId: id, page, pageSize: movementPageSize }),
-    ],
+  const [attributes, movementCount, history] = await Promise.all([
+    attributesOf(found),
+    countItemMovements(id),
+    listOnHandHistory(id),
+  ]);
+  // A page past the end (a typed address) shows the last one.
+  const pageCount = pageCountOf(movementCount, movementPageSize);
+  const page = Math.min(
+    pageFromSearch(url.searchParams.get("page")),
+    pageCount,
   );
+  const { movements } = await listMovements({
+    itemId: id,
+    page,
+    pageSize: movementPageSize,
+  });
   // Prices for the reorder quantity (one unit when none is set): today's and the last year's.
   const priceQuantity =
     quantityFromNumber(item.reorderQuantity > 0 ? item.reorderQuantity : 1) ??
@@ -156,7 +164,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     now: new Date().toISOString(),
     movements,
     page,
-    pageCount: Math.max(1, Math.ceil(movementCount / movementPageSize)),
+    pageCount,
     movementCount,
     can: {
       reorder: userHasRole(user, ["buyer", "storekeeper"]),

@@ -1,28 +1,30 @@
 import { createColumnHelper } from "@tanstack/react-table";
-import { data, Form, Link, useSearchParams } from "react-router";
+import { Form, Link, useSearchParams } from "react-router";
 import type { Route } from "./+types/stock-journal";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { movementTypes } from "~/db/tables/stock-enums";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
-import { searchParamsObject } from "~/lib/search-params";
+import { readSearchLeniently, searchParamsObject } from "~/lib/search-params";
 import { movementJournalQuerySchema } from "~/stock/movement-journal-query";
 import { listMovements } from "~/stock/movement-journal.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  const parsed = movementJournalQuerySchema.safeParse(
+  // Filters the page cannot use are left out and named; a page that is no page is corrected.
+  const { query, errors } = readSearchLeniently(
+    movementJournalQuerySchema,
     searchParamsObject(new URL(request.url).searchParams),
   );
-  if (!parsed.success) {
-    throw data(
-      { message: parsed.error.issues.map((issue) => issue.message).join(" ") },
-      { status: 400 },
-    );
-  }
-  const { hasMore, movements } = await listMovements(parsed.data);
-  return { movements, hasMore, page: parsed.data.page, filters: parsed.data };
+  const { hasMore, movements } = await listMovements(query);
+  return {
+    movements,
+    hasMore,
+    page: query.page,
+    filters: query,
+    ignored: Object.values(errors).flat(),
+  };
 }
 
 export const meta: Route.MetaFunction = () => [
@@ -103,7 +105,7 @@ const columns = [
 ];
 
 export default function StockJournal({ loaderData }: Route.ComponentProps) {
-  const { movements, hasMore, page, filters } = loaderData;
+  const { movements, hasMore, page, filters, ignored } = loaderData;
   const [searchParams] = useSearchParams();
   const pageLink = (target: number) => {
     const next = new URLSearchParams(searchParams);
@@ -183,6 +185,15 @@ export default function StockJournal({ loaderData }: Route.ComponentProps) {
           </Link>
         </div>
       </Form>
+      {ignored.length > 0 ? (
+        <p
+          role="alert"
+          className="rounded-md border border-caution/40 bg-caution/5 px-3 py-2 text-sm text-graphite-800"
+        >
+          Left out of the filter because their values in the address were not
+          understood: {ignored.join(" ")}
+        </p>
+      ) : null}
       <DataTable
         caption="Stock movements"
         columns={columns}

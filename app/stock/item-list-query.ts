@@ -1,6 +1,7 @@
 /** Reading the stock list's filters, sort and page from a query string (page and API share it). */
 import { z } from "zod";
 import { itemKinds } from "~/db/tables/stock-enums";
+import { pageParam, pageSizeParam } from "~/lib/search-params";
 
 export const itemSortKeys = [
   "sku",
@@ -36,17 +37,8 @@ export const itemListQuerySchema = z.object({
   order: z
     .enum(["asc", "desc"], { error: "order must be asc or desc." })
     .default("asc"),
-  page: z.coerce
-    .number({ error: "page must be a number." })
-    .int("page must be a whole number.")
-    .min(1, "page starts at 1.")
-    .default(1),
-  pageSize: z.coerce
-    .number({ error: "pageSize must be a number." })
-    .int("pageSize must be a whole number.")
-    .min(1, "pageSize must be 1 to 500.")
-    .max(500, "pageSize must be 1 to 500.")
-    .default(50),
+  page: pageParam,
+  pageSize: pageSizeParam("pageSize", 500, 50),
 });
 
 export type ItemListParams = z.output<typeof itemListQuerySchema>;

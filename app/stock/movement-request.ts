@@ -7,7 +7,9 @@ import { z } from "zod";
 import { movementTypes } from "~/db/tables/stock-enums";
 import { quantityFromNumber, unitCostFromNumber } from "./decimal-amounts";
 
-const maxQuantity = 1_000_000_000;
+/** The largest quantity (or unit cost) a movement may carry; also the largest a price is asked for. */
+export const maxStockQuantity = 1_000_000_000;
+const maxQuantity = maxStockQuantity;
 
 function amount(
   label: string,

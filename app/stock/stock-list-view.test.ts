@@ -33,15 +33,21 @@ describe("stock list view in the address", () => {
     });
   });
 
-  it("leaves out values it cannot use and names them", () => {
+  it("leaves out values it cannot use and names them; a page is corrected", () => {
     const { view, ignored } = read(
       "kind=spring&sort=colour&page=0&search=copper",
     );
-    expect(ignored).toEqual(["kind", "sort", "page"]);
+    expect(ignored).toEqual(["kind", "sort"]);
     expect(view.kind).toBeUndefined();
     expect(view.sort).toBe("sku");
     expect(view.page).toBe(1);
     expect(view.search).toBe("copper");
+  });
+
+  it("reads a page beyond every list as the last possible page (the page then shows its last)", () => {
+    expect(read("page=1e300").view.page).toBe(1_000_000);
+    expect(read("page=99999999999999999999").view.page).toBe(1_000_000);
+    expect(read("page=abc").view.page).toBe(1);
   });
 
   it("ignores a page size in the address: the page shows 50 rows", () => {

@@ -1,4 +1,4 @@
-import { searchParamsObject } from "~/lib/search-params";
+import { readSearchLeniently, searchParamsObject } from "~/lib/search-params";
 /**
  * The stock list's view (filters, sort, page) in the page's address, so a
  * link reproduces what someone sees. Reads a query string with the list
@@ -21,9 +21,9 @@ export interface StockListView {
 }
 
 /**
- * The view in a query string. Values the schema refuses (an unknown sort, a
- * page of "x") are left out rather than failing the page; `ignored` names them
- * so the page can say so.
+ * The view in a query string. Values the schema refuses (an unknown sort or
+ * kind) are left out rather than failing the page; `ignored` names them so the
+ * page can say so. A page that is no page ("x", "1e300") is corrected instead.
  */
 export function readStockListView(searchParams: URLSearchParams): {
   view: StockListView;
@@ -31,20 +31,8 @@ export function readStockListView(searchParams: URLSearchParams): {
 } {
   const values = searchParamsObject(searchParams);
   delete values.pageSize;
-  const ignored: string[] = [];
-  let parsed = itemListQuerySchema.safeParse(values);
-  if (!parsed.success) {
-    for (const issue of parsed.error.issues) {
-      const key = String(issue.path[0] ?? "");
-      if (key && !ignored.includes(key)) ignored.push(key);
-      delete values[key];
-    }
-    parsed = itemListQuerySchema.safeParse(values);
-  }
-  return {
-    view: viewOf(parsed.success ? parsed.data : itemListQuerySchema.parse({})),
-    ignored,
-  };
+  const { query, errors } = readSearchLeniently(itemListQuerySchema, values);
+  return { view: viewOf(query), ignored: Object.keys(errors) };
 }
 
 /** The view of query parameters the list query schema has checked. */
