@@ -55,6 +55,13 @@ export const buildOrderRouteRows: RouteRoleRow[] = [
     path: `/api/v1${noOrder}`,
     expect: { anonymous: 401, signedIn: 404 },
   },
+  // The order API takes GET and PATCH: a POST is 405 once the role check passes.
+  {
+    file: "routes/api.v1.build-order.ts",
+    method: "POST",
+    path: `/api/v1${noOrder}`,
+    expect: { anonymous: 401, builder: 405, admin: 405, signedIn: 403 },
+  },
   {
     file: "routes/api.v1.build-order.ts",
     method: "PATCH",

@@ -10,6 +10,8 @@ import type { RouteRoleRow } from "../support/route-role-row";
  */
 const missing = "/designs/999999/revisions/1";
 const builders = { builder: 400, admin: 400, signedIn: 403 };
+/** A method the path does not take: 405 once the role check passes. */
+const buildersOnly405 = { builder: 405, admin: 405, signedIn: 403 };
 
 export const designRouteRows: RouteRoleRow[] = [
   {
@@ -71,6 +73,18 @@ export const designRouteRows: RouteRoleRow[] = [
     expect: { anonymous: 401, signedIn: 404 },
   },
   {
+    file: "routes/api.v1.design.ts",
+    method: "POST",
+    path: "/api/v1/designs/999999",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.design-revisions.ts",
+    method: "GET",
+    path: "/api/v1/designs/999999/revisions",
+    expect: { anonymous: 401, ...buildersOnly405 },
+  },
+  {
     file: "routes/api.v1.design-revisions.ts",
     method: "POST",
     path: "/api/v1/designs/999999/revisions",
@@ -89,6 +103,24 @@ export const designRouteRows: RouteRoleRow[] = [
     expect: { anonymous: 401, builder: 400, admin: 400, signedIn: 403 },
   },
   {
+    file: "routes/api.v1.design-revision.ts",
+    method: "PATCH",
+    path: "/api/v1/designs/999999/revisions/1",
+    expect: { anonymous: 401, builder: 400, admin: 400, signedIn: 403 },
+  },
+  {
+    file: "routes/api.v1.design-revision.ts",
+    method: "POST",
+    path: "/api/v1/designs/999999/revisions/1",
+    expect: { anonymous: 401, ...buildersOnly405 },
+  },
+  {
+    file: "routes/api.v1.design-revision-release.ts",
+    method: "GET",
+    path: "/api/v1/designs/999999/revisions/1/release",
+    expect: { anonymous: 401, ...buildersOnly405 },
+  },
+  {
     file: "routes/api.v1.design-revision-release.ts",
     method: "POST",
     path: "/api/v1/designs/999999/revisions/1/release",
@@ -99,5 +131,11 @@ export const designRouteRows: RouteRoleRow[] = [
     method: "GET",
     path: "/api/v1/designs/999999/revisions/1/costing",
     expect: { anonymous: 401, signedIn: 404 },
+  },
+  {
+    file: "routes/api.v1.design-costing.ts",
+    method: "POST",
+    path: "/api/v1/designs/999999/revisions/1/costing",
+    expect: { anonymous: 401, signedIn: 405 },
   },
 ];

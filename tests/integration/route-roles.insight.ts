@@ -39,4 +39,17 @@ export const insightRouteRows: RouteRoleRow[] = [
     path: "/api/v1/insight/stock-value",
     expect: { anonymous: 401, signedIn: 200 },
   },
+  // Read-only: other methods answer 405 after the sign-in check.
+  {
+    file: "routes/api.v1.insight-designs.ts",
+    method: "POST",
+    path: "/api/v1/insight/designs",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.insight-stock-value.ts",
+    method: "POST",
+    path: "/api/v1/insight/stock-value",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
 ];

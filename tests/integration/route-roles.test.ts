@@ -1,24 +1,41 @@
 /**
- * Every route, for anonymous and each role: the status the server answers.
- * A route added to app/routes.ts without a row here fails the first test,
- * so no route ships without its access being checked.
+ * Every route handler, for anonymous callers, each role, people with two roles
+ * and (under /api/) personal API tokens: the status the server answers.
+ * Which handlers there are is read from the source (each file of
+ * app/routes.ts, its exported loader and action, and the methods the action
+ * branches to), so a route, export or method added without a row here fails
+ * the first test and nothing ships without its access being checked.
  */
+import { createHash, randomBytes } from "node:crypto";
+import { matchRoutes, type RouteObject } from "react-router";
 import type { RouteConfigEntry } from "@react-router/dev/routes";
-import { beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import routes from "~/routes";
 import { roles } from "~/lib/roles";
 import { demoPassword, demoPeople } from "../../seed/demo-people";
-import { baseUrl, signIn } from "../support/app-client";
+import { baseUrl, signIn, uniqueEmail } from "../support/app-client";
+import { handlersOf, routeFilesOf } from "../support/route-handlers";
+import {
+  closeTestDatabase,
+  createPerson,
+  testDatabase,
+} from "../support/test-database";
 
 import { buildOrderRouteRows } from "./route-roles.build-orders";
 import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
-import type { RouteRoleRow as Row, Who } from "../support/route-role-row";
-
-const everyone: Who[] = ["anonymous", ...roles];
+import {
+  expectedStatus,
+  rolePairs,
+  rolesOf,
+  type Caller,
+  type RouteRoleRow as Row,
+} from "../support/route-role-row";
 
 const adminOnly = { anonymous: 302, admin: 200, signedIn: 403 };
 const adminOnlyApi = { anonymous: 401, admin: 200, signedIn: 403 };
+const adminOnlyApi405 = { anonymous: 401, admin: 405, signedIn: 403 };
+const buyersApi405 = { anonymous: 401, buyer: 405, admin: 405, signedIn: 403 };
 
 // Rows of the design and build-order routes live beside this file.
 const table: Row[] = [
@@ -118,17 +135,38 @@ const table: Row[] = [
     path: "/sign-out",
     expect: { anonymous: 302, signedIn: 302 },
   },
+  // Signing out ends the session it is sent with: each caller signs in afresh for it.
+  {
+    file: "routes/sign-out.tsx",
+    method: "POST",
+    path: "/sign-out",
+    expect: { anonymous: 302, signedIn: 302 },
+    endsSession: true,
+  },
   {
     file: "routes/forgot-password.tsx",
     method: "GET",
     path: "/forgot-password",
     expect: { anonymous: 200, signedIn: 200 },
   },
+  // An empty form: field messages, whoever sends it; nothing is sent or changed.
+  {
+    file: "routes/forgot-password.tsx",
+    method: "POST",
+    path: "/forgot-password",
+    expect: { anonymous: 400, signedIn: 400 },
+  },
   {
     file: "routes/set-password.tsx",
     method: "GET",
     path: "/set-password?token=none",
     expect: { anonymous: 200, signedIn: 200 },
+  },
+  {
+    file: "routes/set-password.tsx",
+    method: "POST",
+    path: "/set-password",
+    expect: { anonymous: 400, signedIn: 400 },
   },
   {
     file: "routes/healthz.ts",
@@ -141,6 +179,63 @@ const table: Row[] = [
     method: "GET",
     path: "/api/v1/sessions",
     expect: { anonymous: 405, signedIn: 405 },
+  },
+  // Signing in without a JSON body is bad input; DELETE signs out the session it is sent with.
+  {
+    file: "routes/api.v1.sessions.ts",
+    method: "POST",
+    path: "/api/v1/sessions",
+    expect: { anonymous: 400, signedIn: 400 },
+  },
+  {
+    file: "routes/api.v1.sessions.ts",
+    method: "DELETE",
+    path: "/api/v1/sessions",
+    expect: { anonymous: 204, signedIn: 204 },
+    endsSession: true,
+  },
+  // Read-only API paths answer other methods 405, after the same check as their GET.
+  {
+    file: "routes/api.v1.me.ts",
+    method: "POST",
+    path: "/api/v1/me",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.wire-sizes.ts",
+    method: "POST",
+    path: "/api/v1/wire-sizes",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.magnet-grades.ts",
+    method: "POST",
+    path: "/api/v1/magnet-grades",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.locations.ts",
+    method: "POST",
+    path: "/api/v1/locations",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.alerts.ts",
+    method: "POST",
+    path: "/api/v1/alerts",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.item-prices.ts",
+    method: "POST",
+    path: "/api/v1/items/NO-SUCH-SKU/prices",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.outbox.ts",
+    method: "POST",
+    path: "/api/v1/outbox",
+    expect: adminOnlyApi405,
   },
   {
     file: "routes/api.v1.me.ts",
@@ -166,6 +261,12 @@ const table: Row[] = [
     method: "POST",
     path: "/api/v1/coil-estimates",
     expect: { anonymous: 401, signedIn: 400 },
+  },
+  {
+    file: "routes/api.v1.magnet-estimates.ts",
+    method: "GET",
+    path: "/api/v1/magnet-estimates",
+    expect: { anonymous: 401, signedIn: 405 },
   },
   {
     file: "routes/api.v1.magnet-estimates.ts",
@@ -313,6 +414,12 @@ const table: Row[] = [
   },
   {
     file: "routes/api.v1.item.ts",
+    method: "POST",
+    path: "/api/v1/items/NO-SUCH-SKU",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.item.ts",
     method: "PATCH",
     path: "/api/v1/items/NO-SUCH-SKU",
     expect: {
@@ -356,6 +463,12 @@ const table: Row[] = [
   },
   {
     file: "routes/api.v1.price-lists.ts",
+    method: "GET",
+    path: "/api/v1/price-lists",
+    expect: buyersApi405,
+  },
+  {
+    file: "routes/api.v1.price-lists.ts",
     method: "POST",
     path: "/api/v1/price-lists",
     expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
@@ -387,6 +500,12 @@ const table: Row[] = [
   },
   {
     file: "routes/api.v1.metal-base.ts",
+    method: "POST",
+    path: "/api/v1/metal-base",
+    expect: buyersApi405,
+  },
+  {
+    file: "routes/api.v1.metal-base.ts",
     method: "PUT",
     path: "/api/v1/metal-base",
     expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
@@ -396,6 +515,12 @@ const table: Row[] = [
     method: "GET",
     path: "/api/v1/currency-rates",
     expect: { anonymous: 401, signedIn: 200 },
+  },
+  {
+    file: "routes/api.v1.currency-rates.ts",
+    method: "POST",
+    path: "/api/v1/currency-rates",
+    expect: buyersApi405,
   },
   {
     file: "routes/api.v1.currency-rates.ts",
@@ -441,71 +566,197 @@ const table: Row[] = [
     expect: { anonymous: 404, signedIn: 404 },
   },
   {
+    file: "routes/not-found.tsx",
+    method: "POST",
+    path: "/no-such-page",
+    expect: { anonymous: 404, signedIn: 404 },
+  },
+  // Unknown API paths: a JSON 404 for everyone, whatever the method.
+  {
     file: "routes/api.v1.not-found.ts",
     method: "GET",
     path: "/api/v1/no-such-route",
     expect: { anonymous: 404, signedIn: 404 },
   },
+  {
+    file: "routes/api.v1.not-found.ts",
+    method: "POST",
+    path: "/api/v1/no-such-route",
+    expect: { anonymous: 404, signedIn: 404 },
+  },
 ];
 
-function routeFiles(entries: RouteConfigEntry[]): string[] {
-  return entries.flatMap((entry) => [
-    entry.file,
-    ...routeFiles(entry.children ?? []),
-  ]);
+const handlers = routeFilesOf(routes).flatMap(handlersOf);
+
+/** The route config as React Router matches it, each route known by its file. */
+function routeObjects(entries: RouteConfigEntry[]): RouteObject[] {
+  return entries.map((entry) =>
+    entry.index
+      ? { index: true, path: entry.path, id: entry.file }
+      : {
+          path: entry.path,
+          id: entry.file,
+          children: routeObjects(entry.children ?? []),
+        },
+  );
+}
+const routeTree = routeObjects(routes);
+
+/** The callers every row is asked as: signed out, each role, each pair of roles. */
+const callers: Caller[] = ["anonymous", ...roles, ...rolePairs];
+const pairPassword = "route-role-pair-password";
+
+interface Person {
+  email: string;
+  password: string;
+  cookie: string;
+  token: string;
+}
+const people = new Map<Exclude<Caller, "anonymous">, Person>();
+
+/** A personal API token of the person, following their roles, as the account page makes it. */
+async function createApiToken(email: string): Promise<string> {
+  const token = `tl_${randomBytes(32).toString("base64url")}`;
+  await testDatabase().query(
+    `INSERT INTO api_tokens (user_id, name, token_hash, token_prefix, roles, created_at, expires_at)
+     SELECT id, 'route × role table', ?, ?, '*', UTC_TIMESTAMP(3), UTC_TIMESTAMP() + INTERVAL 1 DAY
+     FROM users WHERE email = ?`,
+    [
+      createHash("sha256").update(token).digest("hex"),
+      token.slice(0, 10),
+      email,
+    ],
+  );
+  return token;
 }
 
-function expected(row: Row, who: Who): number {
-  const status =
-    row.expect[who] ?? (who === "anonymous" ? undefined : row.expect.signedIn);
-  if (status === undefined)
-    throw new Error(`no expectation for ${who} on ${row.method} ${row.path}`);
-  return status;
+async function addPerson(
+  caller: Exclude<Caller, "anonymous">,
+  email: string,
+  password: string,
+) {
+  people.set(caller, {
+    email,
+    password,
+    cookie: await signIn(email, password),
+    token: await createApiToken(email),
+  });
 }
-
-const cookies = new Map<Who, string | undefined>();
 
 beforeAll(async () => {
-  cookies.set("anonymous", undefined);
   for (const role of roles) {
     const person = demoPeople.find((candidate) =>
       candidate.roles.includes(role),
     )!;
-    cookies.set(role, await signIn(person.email, demoPassword()));
+    await addPerson(role, person.email, demoPassword());
+  }
+  for (const pair of rolePairs) {
+    const email = uniqueEmail(pair.replace("+", "-"));
+    await createPerson({
+      email,
+      password: pairPassword,
+      roles: rolesOf(pair),
+      name: `Holds ${pair}`,
+    });
+    await addPerson(pair, email, pairPassword);
   }
 });
+afterAll(closeTestDatabase);
+
+interface Credentials {
+  cookie?: string;
+  token?: string;
+}
+
+/** Asks a row's request as a browser (session cookie, same-origin form post) or a script (bearer token). */
+async function statusOf(row: Row, { cookie, token }: Credentials) {
+  const sendsBody = row.method !== "GET";
+  const response = await fetch(`${baseUrl()}${row.path}`, {
+    method: row.method,
+    redirect: "manual",
+    headers: {
+      ...(cookie ? { Cookie: cookie } : {}),
+      ...(token ? { Authorization: `Bearer ${token}` } : {}),
+      ...(sendsBody
+        ? { "Content-Type": "application/x-www-form-urlencoded" }
+        : {}),
+      ...(sendsBody && !token ? { Origin: baseUrl() } : {}),
+    },
+    body: sendsBody ? "" : undefined,
+  });
+  await response.arrayBuffer();
+  return response.status;
+}
+
+/** The credentials of each caller for a row: a fresh session when the row ends it. */
+async function credentialsFor(row: Row): Promise<[string, Credentials][]> {
+  const asked: [string, Credentials][] = [];
+  for (const caller of callers) {
+    if (caller === "anonymous") {
+      asked.push([caller, {}]);
+      continue;
+    }
+    const person = people.get(caller)!;
+    const cookie = row.endsSession
+      ? await signIn(person.email, person.password)
+      : person.cookie;
+    asked.push([caller, { cookie }]);
+    if (row.path.startsWith("/api/"))
+      asked.push([`${caller} (token)`, { token: person.token }]);
+  }
+  return asked;
+}
 
 describe("route × role table", () => {
-  it("covers every route in app/routes.ts", () => {
-    const covered = new Set(table.map((row) => row.file));
-    const missing = routeFiles(routes).filter((file) => !covered.has(file));
+  it("has a row for every route file × exported loader or action × method", () => {
+    const missing = handlers
+      .filter(
+        (handler) =>
+          !table.some(
+            (row) => row.file === handler.file && row.method === handler.method,
+          ),
+      )
+      .map((handler) => `${handler.file} ${handler.export} ${handler.method}`);
     expect(missing).toEqual([]);
+  });
+
+  it("has no row for a handler the route file does not export", () => {
+    const known = new Set(
+      handlers.map((handler) => `${handler.file} ${handler.method}`),
+    );
+    const stale = table
+      .filter((row) => !known.has(`${row.file} ${row.method}`))
+      .map((row) => `${row.file} ${row.method} ${row.path}`);
+    expect(stale).toEqual([]);
+  });
+
+  it("asks each row's path of the route file it names", () => {
+    const elsewhere = table
+      .filter((row) => {
+        const pathname = new URL(row.path, "http://localhost").pathname;
+        const matched = (matchRoutes(routeTree, pathname) ?? []).map(
+          (match) => match.route.id,
+        );
+        return !matched.includes(row.file);
+      })
+      .map((row) => `${row.file} ${row.method} ${row.path}`);
+    expect(elsewhere).toEqual([]);
   });
 
   for (const row of table) {
     it(`${row.method} ${row.path}`, async () => {
+      const asked = await credentialsFor(row);
       const actual: Record<string, number> = {};
       const wanted: Record<string, number> = {};
-      for (const who of everyone) {
-        const cookie = cookies.get(who);
-        const response = await fetch(`${baseUrl()}${row.path}`, {
-          method: row.method,
-          redirect: "manual",
-          headers: {
-            ...(cookie ? { Cookie: cookie } : {}),
-            ...(row.method !== "GET"
-              ? {
-                  "Content-Type": "application/x-www-form-urlencoded",
-                  Origin: baseUrl(),
-                }
-              : {}),
-          },
-          body: row.method !== "GET" ? "" : undefined,
-        });
-        await response.arrayBuffer();
-        actual[who] = response.status;
-        wanted[who] = expected(row, who);
-      }
+      await Promise.all(
+        asked.map(async ([who, credentials]) => {
+          actual[who] = await statusOf(row, credentials);
+          wanted[who] = expectedStatus(
+            row,
+            who.replace(" (token)", "") as Caller,
+          );
+        }),
+      );
       expect(actual).toEqual(wanted);
     });
   }
