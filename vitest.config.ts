@@ -12,6 +12,7 @@ export default defineConfig({
             "app/**/*.test.ts",
             "scripts/**/*.test.ts",
             "seed/**/*.test.ts",
+            "server/**/*.test.ts",
           ],
           environment: "node",
         },

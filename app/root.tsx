@@ -79,6 +79,10 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
       title = "Not allowed";
       detail =
         message ?? "Your roles do not allow this. Ask an admin if you need it.";
+    } else if (status === 413) {
+      // Answered before React Router by server/request-size-limits.ts.
+      title = "Too much sent";
+      detail = message ?? "The form is larger than Turnledger takes.";
     } else if (status === 503) {
       title = "Database unavailable";
       detail =

@@ -11,6 +11,7 @@ import { lucia } from "~/auth/lucia.server";
 import { expectedOrigin, servesHost } from "~/lib/app-address";
 import { appAddress } from "~/lib/app-url.server";
 import { answerDatabaseOutages } from "./database-unavailable";
+import { limitRequestBodies } from "./request-size-limits";
 
 export { deploymentProblems } from "./deployment-checks";
 
@@ -258,6 +259,7 @@ app.use((_request, response, next) => {
 });
 
 app.use(refuseCrossSiteRequests);
+app.use(limitRequestBodies);
 
 app.use(
   createRequestHandler({

@@ -1,3 +1,10 @@
+import {
+  FormDataParseError,
+  MaxFileSizeExceededError,
+  MaxTotalSizeExceededError,
+  MultipartParseError,
+  parseFormData,
+} from "@remix-run/form-data-parser";
 import type { Route } from "./+types/api.v1.price-lists";
 import { requireRole } from "~/auth/guard.server";
 import { apiError, methodNotAllowed } from "~/lib/api.server";
@@ -6,12 +13,40 @@ import {
   columnMappingFromFields,
   isPriceListField,
 } from "~/price-lists/column-mapping";
-import { maxPriceListBytes } from "~/price-lists/decode-csv";
+import {
+  fileTooLargeMessage,
+  maxPriceListBytes,
+} from "~/price-lists/decode-csv";
 import { answerStockError } from "~/stock/stock-api.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireRole(request, ["buyer"]);
   return methodNotAllowed(["POST"]);
+}
+
+/**
+ * Reads the upload's form as it arrives: the file is refused (MaxFileSizeExceededError) as soon
+ * as it passes 20 MB, before the rest is read; the other fields are a few short texts.
+ */
+function readUploadForm(request: Request): Promise<FormData> {
+  return parseFormData(request, {
+    maxFiles: 1,
+    maxFileSize: maxPriceListBytes,
+    maxParts: 20,
+    maxTotalSize: maxPriceListBytes + 64 * 1024,
+  });
+}
+
+/**
+ * The file's name as the sender chose it. Browsers and fetch send `"`, CR and LF in a
+ * multipart file name as %22, %0D and %0A (HTML Standard, multipart/form-data encoding);
+ * the parser leaves them so, and a name is stored and shown as it was chosen.
+ */
+function uploadedFileName(file: File): string {
+  return file.name
+    .replaceAll("%22", '"')
+    .replaceAll("%0D", "\r")
+    .replaceAll("%0A", "\n");
 }
 
 /**
@@ -23,20 +58,27 @@ export async function loader({ request }: Route.LoaderArgs) {
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, ["buyer"]);
   if (request.method !== "POST") return methodNotAllowed(["POST"]);
-  const declared = Number(request.headers.get("Content-Length") ?? 0);
-  if (declared > maxPriceListBytes + 1_000_000) {
-    return apiError(413, "The file is larger than 20 MB.", {
-      file: ["The file is larger than 20 MB."],
-    });
-  }
+  // The body's size as a whole is bounded before this runs (server/request-size-limits.ts).
   let form: FormData;
   try {
-    form = await request.formData();
-  } catch {
-    return apiError(
-      400,
-      "Send the price list as multipart/form-data with file, supplier and mapping.",
-    );
+    form = await readUploadForm(request);
+  } catch (error) {
+    if (
+      error instanceof MaxFileSizeExceededError ||
+      error instanceof MaxTotalSizeExceededError
+    )
+      return apiError(413, fileTooLargeMessage, {
+        file: [fileTooLargeMessage],
+      });
+    if (
+      error instanceof FormDataParseError ||
+      error instanceof MultipartParseError
+    )
+      return apiError(
+        400,
+        "Send the price list as multipart/form-data with file, supplier and mapping.",
+      );
+    throw error;
   }
   const file = form.get("file");
   const supplier = String(form.get("supplier") ?? "").trim();
@@ -73,17 +115,12 @@ export async function action({ request }: Route.ActionArgs) {
   if (Object.keys(fields).length > 0)
     return apiError(400, "Some fields are missing or wrong.", fields);
   const upload = file as File;
-  if (upload.size > maxPriceListBytes) {
-    return apiError(413, "The file is larger than 20 MB.", {
-      file: ["The file is larger than 20 MB."],
-    });
-  }
 
   const dryRun = new URL(request.url).searchParams.get("dryRun") === "1";
   return answerStockError(async () => {
     const outcome = await importPriceList({
       supplierName: supplier,
-      fileName: upload.name || "price-list.csv",
+      fileName: uploadedFileName(upload) || "price-list.csv",
       bytes: new Uint8Array(await upload.arrayBuffer()),
       mapping: columnMappingFromFields(mappingObject as Record<string, string>),
       dryRun,
