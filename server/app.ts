@@ -11,6 +11,7 @@ import { lucia } from "~/auth/lucia.server";
 import { expectedOrigin, servesHost } from "~/lib/app-address";
 import { appAddress } from "~/lib/app-url.server";
 import { answerDatabaseOutages } from "./database-unavailable";
+import { routedPath } from "./routed-path";
 import { limitRequestBodies } from "./request-size-limits";
 
 export { deploymentProblems } from "./deployment-checks";
@@ -94,21 +95,6 @@ export function securityHeaders(
     return writeHead.apply(this, args);
   } as typeof writeHead;
   next();
-}
-
-/**
- * The path React Router will route the request by: the request's target
- * resolved as a URL (`/api/../stock` is `/stock`, `%2e%2e` and `\\` likewise),
- * exactly as @react-router/express builds its Request. Every check here
- * judges this path, never Express's raw `request.path`, so a check and the
- * route that answers always see the same page.
- */
-export function routedPath(request: ExpressRequest): string {
-  try {
-    return new URL(`http://localhost${request.originalUrl}`).pathname;
-  } catch {
-    return request.path;
-  }
 }
 
 function isApiPath(request: ExpressRequest): boolean {
