@@ -28,15 +28,14 @@ if (developing) {
   // BUILD_DIRECTORY as in react-router.config.ts.
   const buildDirectory = process.env.BUILD_DIRECTORY ?? "build";
   const built = await import(`./${buildDirectory}/server/index.js`);
-  // A production server refuses to start where a shop would be unsafe
+  // A built app is served as in production (whatever NODE_ENV says) and
+  // refuses to start where a shop would be unsafe
   // (server/deployment-checks.ts): it says what to fix and exits.
-  if (process.env.NODE_ENV === "production") {
-    const problems = await built.deploymentProblems();
-    if (problems.length > 0) {
-      console.error("[turnledger] not starting:");
-      for (const problem of problems) console.error(`  - ${problem}`);
-      process.exit(1);
-    }
+  const problems = await built.deploymentProblems();
+  if (problems.length > 0) {
+    console.error("[turnledger] not starting:");
+    for (const problem of problems) console.error(`  - ${problem}`);
+    process.exit(1);
   }
   // The security headers (docs/decisions/012) go on the static files too.
   app.use(built.securityHeaders);

@@ -102,5 +102,8 @@ export default [
     route("*", "routes/api.v1.not-found.ts"),
   ]),
 
+  // /api, /api/ and other versions than v1: the API's 404 too, never the HTML page.
+  route("api/*", "routes/api.v1.not-found.ts", { id: "api-not-found" }),
+
   route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

@@ -9,7 +9,7 @@
 import { parseArgs } from "node:util";
 import { z } from "zod";
 import { migrateDatabase } from "./lib/database-tasks";
-import { resolveDatabaseUrl } from "./lib/database-url";
+import { requireAppUrlForLinks, resolveDatabaseUrl } from "./lib/database-url";
 
 const usage =
   'Usage: npm run admin:create -- you@example.com [--name "Your Name"]';
@@ -24,6 +24,7 @@ if (!email.success || positionals.length !== 1) {
   process.exit(2);
 }
 
+requireAppUrlForLinks();
 const databaseUrl = await resolveDatabaseUrl();
 await migrateDatabase(databaseUrl);
 process.env.DATABASE_URL = databaseUrl;

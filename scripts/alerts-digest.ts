@@ -1,7 +1,8 @@
-import { resolveDatabaseUrl } from "./lib/database-url";
+import { requireAppUrlForLinks, resolveDatabaseUrl } from "./lib/database-url";
 
 // The daily low-stock digest: one e-mail listing every open alert to each person who chose the
 // digest on their account page. A scheduler (cron, a systemd timer) calls `npm run alerts:digest`.
+requireAppUrlForLinks();
 process.env.DATABASE_URL = await resolveDatabaseUrl();
 const { sendAlertDigest } = await import("~/alerts/stock-alerts.server");
 const { pool } = await import("~/db/client.server");

@@ -171,6 +171,40 @@ export function refuseCrossSiteRequests(
   }
 }
 
+/** The methods the app's routes answer; any other is refused before them. */
+const answeredMethods = [
+  "GET",
+  "HEAD",
+  "POST",
+  "PUT",
+  "PATCH",
+  "DELETE",
+  "OPTIONS",
+];
+
+/**
+ * Refuses what no route can answer, before any route sees it: a method
+ * outside {@link answeredMethods} (TRACE, PROPFIND, …) gets 405 with Allow,
+ * and a request target that is not a path (`GET http://other.example/` in
+ * absolute form, `*`) gets 400 — the answers of the API's JSON error shape
+ * under /api/, plain text elsewhere, instead of a framework's 500.
+ */
+export function refuseOddRequests(
+  request: ExpressRequest,
+  response: ExpressResponse,
+  next: NextFunction,
+) {
+  const pathTarget = request.originalUrl.startsWith("/");
+  if (pathTarget && answeredMethods.includes(request.method)) return next();
+  const message = pathTarget
+    ? `The method ${request.method} is not answered here.`
+    : "The request target must be a path on this server.";
+  response.status(pathTarget ? 405 : 400);
+  if (pathTarget) response.set("Allow", answeredMethods.join(", "));
+  if (pathTarget && isApiPath(request)) response.json({ error: { message } });
+  else response.type("text/plain; charset=utf-8").send(`${message}\n`);
+}
+
 /**
  * Serves only requests for APP_URL's host (on loopback: localhost, 127.0.0.1
  * and [::1] on its port). A request naming another host is answered 421
@@ -226,6 +260,7 @@ if (process.env.TRUST_PROXY) {
 }
 app.use(securityHeaders);
 app.use(noStoreByDefault);
+app.use(refuseOddRequests);
 app.use(refuseUnknownHosts);
 app.use(compression());
 

@@ -74,7 +74,9 @@ async function accountsWithDemoPassword(): Promise<string[]> {
 export async function deploymentProblems(
   env: NodeJS.ProcessEnv = process.env,
 ): Promise<string[]> {
-  if (env.NODE_ENV !== "production") return [];
+  // Vite's dev server (`npm run dev`) is a developer's machine; a built app
+  // is checked whatever NODE_ENV says ("staging", unset, …).
+  if (env.NODE_ENV === "development") return [];
   const problems: string[] = [];
   const appUrl = appUrlProblem(env);
   if (appUrl) problems.push(appUrl);

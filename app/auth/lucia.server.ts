@@ -5,11 +5,14 @@ import { sessions, users } from "~/db/schema";
 
 const adapter = new DrizzleMySQLAdapter(db, sessions, users);
 
-/** Session cookies are Secure in production unless COOKIE_SECURE=0 (plain-HTTP test rigs). */
+/** Session cookies are Secure in production and behind an https:// APP_URL, unless COOKIE_SECURE=0 (plain-HTTP test rigs). */
 export function cookieIsSecure(): boolean {
   if (process.env.COOKIE_SECURE !== undefined)
     return process.env.COOKIE_SECURE !== "0";
-  return process.env.NODE_ENV === "production";
+  return (
+    process.env.NODE_ENV === "production" ||
+    process.env.APP_URL?.trim().startsWith("https://") === true
+  );
 }
 
 /**

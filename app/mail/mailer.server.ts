@@ -132,7 +132,22 @@ export async function queueMailForLater(
   return queued.map((message) => message.id);
 }
 
-/** Waits until every delivery `queueMailForLater` started has been tried (scripts, before they close the database). */
+/**
+ * Work a request starts and does not wait for (it is done after the answer):
+ * tracked with the deliveries, so `deliveriesFinished` waits for it too, and
+ * a failure is logged, never thrown at a caller that has gone.
+ */
+export function afterTheAnswer(work: Promise<unknown>): void {
+  const tracked = work.then(
+    () => undefined,
+    (error: unknown) =>
+      console.error("[turnledger] work after an answer failed:", error),
+  );
+  deliveriesUnderWay.add(tracked);
+  void tracked.finally(() => deliveriesUnderWay.delete(tracked));
+}
+
+/** Waits until every delivery `queueMailForLater` started (and all work `afterTheAnswer` was given) has been tried (scripts, before they close the database). */
 export async function deliveriesFinished(): Promise<void> {
   while (deliveriesUnderWay.size > 0)
     await Promise.all([...deliveriesUnderWay]);

@@ -33,7 +33,11 @@ import {
   invitationMessage,
   passwordResetMessage,
 } from "~/mail/account-messages";
-import { queueMailForLater, sendMail } from "~/mail/mailer.server";
+import {
+  afterTheAnswer,
+  queueMailForLater,
+  sendMail,
+} from "~/mail/mailer.server";
 import type { Role } from "~/lib/roles";
 
 export function normaliseEmail(email: string): string {
@@ -240,10 +244,11 @@ export async function setActive(
 export type PasswordResetRequest = { kind: "accepted" } | ResetRequestRefusal;
 
 /**
- * Queues a reset link when the e-mail belongs to an active account; silent
- * otherwise. Limited per e-mail and per client address. The answer does not
- * wait for SMTP (the mail is handed over after it), so it comes as soon for
- * an account as for no account; earlier links stay valid.
+ * Accepts a request for a reset link: limited per e-mail and per client
+ * address, then answered at once. Whether the e-mail belongs to an active
+ * account is looked up after the answer (with the link and the outbox row
+ * made then), so the answer does the same work, and takes the same time,
+ * for an account as for no account; earlier links stay valid.
  */
 export async function requestPasswordReset(
   emailInput: string,
@@ -253,20 +258,27 @@ export async function requestPasswordReset(
   const email = normaliseEmail(emailInput);
   const refusal = await countResetRequest(email, clientAddress);
   if (refusal) return refusal;
+  afterTheAnswer(sendResetLinkIfAccount(email, appUrl));
+  return { kind: "accepted" };
+}
+
+/** Queues a reset link when the e-mail belongs to an active account; nothing otherwise. */
+async function sendResetLinkIfAccount(
+  email: string,
+  appUrl: string,
+): Promise<void> {
   const [user] = await db
     .select({ id: users.id, name: users.name, active: users.active })
     .from(users)
     .where(eq(users.email, email))
     .limit(1);
-  if (user?.active) {
-    const token = await createEmailToken(user.id, "password-reset");
-    const message = passwordResetMessage({
-      name: user.name,
-      link: `${appUrl}/set-password?token=${token}`,
-    });
-    await queueMailForLater([{ to: email, ...message }]);
-  }
-  return { kind: "accepted" };
+  if (!user?.active) return;
+  const token = await createEmailToken(user.id, "password-reset");
+  const message = passwordResetMessage({
+    name: user.name,
+    link: `${appUrl}/set-password?token=${token}`,
+  });
+  await queueMailForLater([{ to: email, ...message }]);
 }
 
 export type SetPasswordResult =

@@ -72,6 +72,18 @@ describe("unknown API paths", () => {
     });
   }
 
+  it("outside v1 too: /api, /api/ and another version answer 404 in JSON", async () => {
+    for (const path of ["/api", "/api/", "/api/v2/items"]) {
+      for (const method of ["GET", "POST"]) {
+        await expectJsonError(
+          await ask(method, path),
+          `${method} ${path}`,
+          404,
+        );
+      }
+    }
+  });
+
   it("names the path it did not find", async () => {
     const response = await ask("GET", "/api/v1/no-such-thing");
     expect(await response.json()).toEqual({

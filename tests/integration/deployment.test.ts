@@ -196,6 +196,35 @@ describe("the Host header", () => {
   });
 });
 
+describe("a request no route can answer", () => {
+  it("is refused in the API's shape: a method no route takes 405, a target that is not a path 400", async () => {
+    const propfind = await rawRequest({
+      connectTo: baseUrl(),
+      method: "PROPFIND",
+      path: "/api/v1/no-such-thing",
+    });
+    expect(propfind.status).toBe(405);
+    expect(propfind.headers.allow).toBe(
+      "GET, HEAD, POST, PUT, PATCH, DELETE, OPTIONS",
+    );
+    expect(JSON.parse(propfind.body)).toEqual({
+      error: { message: "The method PROPFIND is not answered here." },
+    });
+    const trace = await rawRequest({
+      connectTo: baseUrl(),
+      method: "TRACE",
+      path: "/sign-in",
+    });
+    expect(trace.status).toBe(405);
+    const absolute = await rawRequest({
+      connectTo: baseUrl(),
+      path: "http://evil.example/sign-in",
+    });
+    expect(absolute.status).toBe(400);
+    expect(absolute.body).toMatch(/must be a path/);
+  });
+});
+
 describe("answers for signed-in people", () => {
   it("are never stored by a browser or proxy", async () => {
     const cookie = await signIn("storekeeper@turnledger.test", demoPassword());
@@ -215,6 +244,17 @@ describe("a production server", () => {
 
   it("refuses to start without APP_URL, and says so", async () => {
     const server = startServer({ DEMO_DATA: "1" }, serverPort());
+    const outcome = await server.outcome;
+    await server.stop();
+    expect(outcome.listening, outcome.output).toBe(false);
+    expect(outcome.output).toMatch(/APP_URL is not set/);
+  });
+
+  it("is checked whatever NODE_ENV says: a built app is a production server", async () => {
+    const server = startServer(
+      { NODE_ENV: "staging", DEMO_DATA: "1" },
+      serverPort(),
+    );
     const outcome = await server.outcome;
     await server.stop();
     expect(outcome.listening, outcome.output).toBe(false);
@@ -334,6 +374,20 @@ describe("npm run admin:create", () => {
     expect((rows as { role: string }[]).map((row) => row.role)).toEqual([
       "admin",
     ]);
+  });
+
+  it("against DATABASE_URL asks for APP_URL, so the link is not a localhost one", async () => {
+    const refused = await runScript(
+      "admin-create.ts",
+      [uniqueEmail("no-app-url")],
+      {
+        DATABASE_URL: inject("databaseUrl"),
+        APP_URL: "",
+      },
+    );
+    expect(refused.code).toBe(2);
+    expect(refused.output).toMatch(/APP_URL is not set/);
+    expect(refused.output).not.toMatch(/set-password\?token=/);
   });
 
   it("asks for one e-mail address", async () => {
