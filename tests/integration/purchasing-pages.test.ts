@@ -35,17 +35,24 @@ const rateCount = (currency: string) =>
   ]);
 
 /** A made-up ISO-shaped code per test, so tests never see each other's rates. */
-function testCurrency(): string {
+/**
+ * A three-letter code no rate uses yet: random codes meet the demo's and other
+ * tests' currencies now and then, and a test that counts rows must start at none.
+ */
+async function testCurrency(): Promise<string> {
   const letters = "ABCDEFGHIJKLMNOPQRSTUVWXYZ";
-  return Array.from(
-    { length: 3 },
-    () => letters[Math.floor(Math.random() * letters.length)],
-  ).join("");
+  for (;;) {
+    const code = Array.from(
+      { length: 3 },
+      () => letters[Math.floor(Math.random() * letters.length)],
+    ).join("");
+    if ((await rateCount(code)) === 0) return code;
+  }
 }
 
 describe("/api/v1/currency-rates", () => {
   it("a buyer sets a rate; everyone signed in reads it with the company currency", async () => {
-    const currency = testCurrency();
+    const currency = await testCurrency();
     const put = await sendJson(
       "PUT",
       "/api/v1/currency-rates",
@@ -80,7 +87,7 @@ describe("/api/v1/currency-rates", () => {
   });
 
   it("the same currency and day again replaces the rate", async () => {
-    const currency = testCurrency();
+    const currency = await testCurrency();
     for (const rate of [1.5, 1.25]) {
       const put = await sendJson(
         "PUT",
@@ -141,7 +148,7 @@ describe("/api/v1/currency-rates", () => {
   });
 
   it("refuses a storekeeper (403) and an anonymous caller (401), writing nothing", async () => {
-    const currency = testCurrency();
+    const currency = await testCurrency();
     const payload = { currency, rate: 2, validFrom: "2026-03-01" };
     const storekeeper = await sendJson(
       "PUT",
@@ -258,7 +265,7 @@ describe("/prices", () => {
     expect(
       await (await followRedirect(copper, cookies.buyer)).text(),
     ).toContain("Metal base saved.");
-    const currency = testCurrency();
+    const currency = await testCurrency();
     const rate = await postForm(
       "/prices",
       {
@@ -320,7 +327,7 @@ describe("/prices", () => {
   });
 
   it("refuses a storekeeper with 403, writing nothing", async () => {
-    const currency = testCurrency();
+    const currency = await testCurrency();
     const response = await postForm(
       "/prices",
       { intent: "currency-rate", currency, rate: "2", validFrom: "2026-01-05" },

@@ -244,6 +244,8 @@ describe("low-stock alerts", () => {
           ...process.env,
           DATABASE_URL: inject("databaseUrl"),
           SMTP_URL: inject("smtpUrl"),
+          // With DATABASE_URL the digest's links need the public address.
+          APP_URL: inject("baseUrl"),
         },
       },
     );
