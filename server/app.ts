@@ -57,6 +57,33 @@ export function contentSecurityPolicy(nonce: string): string {
   ].join("; ");
 }
 
+/** Runs `addHeaders` just before the answer's headers go out, after the route has set its own. */
+function beforeHeadersGoOut(
+  response: ExpressResponse,
+  addHeaders: (response: ExpressResponse) => void,
+) {
+  const writeHead = response.writeHead;
+  response.writeHead = function (
+    this: typeof response,
+    ...args: Parameters<typeof writeHead>
+  ) {
+    addHeaders(this);
+    return writeHead.apply(this, args);
+  } as typeof writeHead;
+}
+
+/** Sets each header the answer does not carry by then: a header a route sets itself is kept. */
+function setHeadersByDefault(
+  response: ExpressResponse,
+  defaults: Record<string, string>,
+) {
+  beforeHeadersGoOut(response, (answer) => {
+    for (const [name, value] of Object.entries(defaults)) {
+      if (!answer.hasHeader(name)) answer.setHeader(name, value);
+    }
+  });
+}
+
 /**
  * Security headers on every answer (pages, API, CSV downloads and, through
  * server.js, the static files), and a fresh nonce for each request in
@@ -84,16 +111,7 @@ export function securityHeaders(
   if (appAddress().protocol === "https:")
     defaults["Strict-Transport-Security"] =
       "max-age=31536000; includeSubDomains";
-  const writeHead = response.writeHead;
-  response.writeHead = function (
-    this: typeof response,
-    ...args: Parameters<typeof writeHead>
-  ) {
-    for (const [name, value] of Object.entries(defaults)) {
-      if (!this.hasHeader(name)) this.setHeader(name, value);
-    }
-    return writeHead.apply(this, args);
-  } as typeof writeHead;
+  setHeadersByDefault(response, defaults);
   next();
 }
 
@@ -238,15 +256,7 @@ export function noStoreByDefault(
   response: ExpressResponse,
   next: NextFunction,
 ) {
-  const writeHead = response.writeHead;
-  response.writeHead = function (
-    this: typeof response,
-    ...args: Parameters<typeof writeHead>
-  ) {
-    if (!this.hasHeader("Cache-Control"))
-      this.setHeader("Cache-Control", "no-store");
-    return writeHead.apply(this, args);
-  } as typeof writeHead;
+  setHeadersByDefault(response, { "Cache-Control": "no-store" });
   next();
 }
 
@@ -267,15 +277,10 @@ app.use(compression());
 // Server-Timing: how long the app took for each answer (read by `npm run bench` and browsers' dev tools).
 app.use((_request, response, next) => {
   const started = process.hrtime.bigint();
-  const writeHead = response.writeHead;
-  response.writeHead = function (
-    this: typeof response,
-    ...args: Parameters<typeof writeHead>
-  ) {
+  beforeHeadersGoOut(response, (answer) => {
     const milliseconds = Number(process.hrtime.bigint() - started) / 1e6;
-    this.setHeader("Server-Timing", `app;dur=${milliseconds.toFixed(3)}`);
-    return writeHead.apply(this, args);
-  } as typeof writeHead;
+    answer.setHeader("Server-Timing", `app;dur=${milliseconds.toFixed(3)}`);
+  });
   next();
 });
 
