@@ -1,12 +1,16 @@
-/** The texts of account e-mails (invitation, password reset). Pure: no I/O. */
+/**
+ * The texts of account e-mails (invitation, password reset), each with its
+ * one-time link named so the mailer keeps it out of the outbox. Pure: no I/O.
+ */
 
 export function invitationMessage(input: {
   name: string;
   invitedBy: string;
   link: string;
-}): { subject: string; text: string } {
+}): { subject: string; text: string; oneTimeLink: string } {
   return {
     subject: "You are invited to Turnledger",
+    oneTimeLink: input.link,
     text: [
       `Hello ${input.name},`,
       "",
@@ -23,9 +27,11 @@ export function invitationMessage(input: {
 export function passwordResetMessage(input: { name: string; link: string }): {
   subject: string;
   text: string;
+  oneTimeLink: string;
 } {
   return {
     subject: "Choose a new Turnledger password",
+    oneTimeLink: input.link,
     text: [
       `Hello ${input.name},`,
       "",

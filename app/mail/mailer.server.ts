@@ -2,11 +2,14 @@
  * The one mailer. Every message is written to the outbox table first, then
  * handed to SMTP; a message the SMTP server did not accept stays unsent and
  * `npm run mail:retry` sends it later. Sending never throws to the caller.
+ * A message's one-time link is stored apart from its text and dropped once
+ * SMTP has taken it (app/mail/one-time-link.ts).
  */
 import { and, asc, eq, isNull, lt } from "drizzle-orm";
 import nodemailer, { type Transporter } from "nodemailer";
 import { db } from "~/db/client.server";
 import { mailOutbox } from "~/db/schema";
+import { textToSend, textWithoutLink } from "./one-time-link";
 
 export const defaultSmtpUrl = "smtp://127.0.0.1:2525";
 
@@ -37,6 +40,8 @@ export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
+  /** A link that must reach the recipient only (it appears in `text`). */
+  oneTimeLink?: string;
 }
 
 interface QueuedMessage {
@@ -44,7 +49,20 @@ interface QueuedMessage {
   toAddress: string;
   subject: string;
   textBody: string;
+  oneTimeLink: string | null;
   attempts: number;
+}
+
+/** The outbox row for a message: its one-time link kept apart from the text. */
+function outboxRow(mail: OutgoingMail) {
+  return {
+    toAddress: mail.to,
+    subject: mail.subject,
+    textBody: mail.oneTimeLink
+      ? textWithoutLink(mail.text, mail.oneTimeLink)
+      : mail.text,
+    oneTimeLink: mail.oneTimeLink ?? null,
+  };
 }
 
 /** Hands one queued message to SMTP and records the outcome on its outbox row. */
@@ -55,11 +73,12 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
       from: fromAddress(),
       to: message.toAddress,
       subject: message.subject,
-      text: message.textBody,
+      text: textToSend(message.textBody, message.oneTimeLink),
     });
+    // Sent: the link has reached its recipient and is kept nowhere else.
     await db
       .update(mailOutbox)
-      .set({ sentAt: new Date(), lastError: null, attempts })
+      .set({ sentAt: new Date(), lastError: null, attempts, oneTimeLink: null })
       .where(eq(mailOutbox.id, message.id));
     return true;
   } catch (error) {
@@ -79,11 +98,7 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
 export async function queueMail(
   mail: OutgoingMail,
 ): Promise<{ outboxId: number; sent: boolean }> {
-  const queued = {
-    toAddress: mail.to,
-    subject: mail.subject,
-    textBody: mail.text,
-  };
+  const queued = outboxRow(mail);
   const [inserted] = await db.insert(mailOutbox).values(queued).$returningId();
   if (!inserted)
     throw new Error("The outbox did not return the new message's id.");
@@ -110,11 +125,7 @@ export async function queueMailForLater(
 ): Promise<number[]> {
   const queued: QueuedMessage[] = [];
   for (const mail of mails) {
-    const message = {
-      toAddress: mail.to,
-      subject: mail.subject,
-      textBody: mail.text,
-    };
+    const message = outboxRow(mail);
     const [inserted] = await db
       .insert(mailOutbox)
       .values(message)

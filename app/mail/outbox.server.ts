@@ -1,10 +1,14 @@
 import { count, desc } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { mailOutbox } from "~/db/schema";
+import { textForOutbox } from "./one-time-link";
 
 export const outboxPageSize = 50;
 
-/** The outbox newest first, a page at a time, and the number of messages in all. */
+/**
+ * The outbox newest first, a page at a time, and the number of messages in
+ * all. One-time links are never read: admins see a note in their place.
+ */
 export async function listOutbox(page: number, pageSize = outboxPageSize) {
   const [total] = await db.select({ messages: count() }).from(mailOutbox);
   const messages = await db
@@ -22,5 +26,11 @@ export async function listOutbox(page: number, pageSize = outboxPageSize) {
     .orderBy(desc(mailOutbox.createdAt), desc(mailOutbox.id))
     .limit(pageSize)
     .offset((page - 1) * pageSize);
-  return { total: total?.messages ?? 0, messages };
+  return {
+    total: total?.messages ?? 0,
+    messages: messages.map((message) => ({
+      ...message,
+      text: textForOutbox(message.text, message.sentAt !== null),
+    })),
+  };
 }

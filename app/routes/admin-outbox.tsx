@@ -78,6 +78,8 @@ export default function AdminOutbox({ loaderData }: Route.ComponentProps) {
       <p className="mb-4 mt-1 text-graphite-500">
         Every e-mail Turnledger has written, newest first ({loaderData.total} in
         all). Unsent ones go out with <code>npm run mail:retry</code>.
+        Invitation and password links reach their recipient only: they are never
+        shown here and are removed once a message is sent.
       </p>
       <DataTable
         caption="E-mail sent by Turnledger"

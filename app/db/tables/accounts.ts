@@ -119,7 +119,8 @@ export const attemptCounters = mysqlTable(
 
 /**
  * Every e-mail the app sends. A message is written here first and marked sent
- * once the SMTP server has accepted it; unsent ones are retried.
+ * once the SMTP server has accepted it; unsent ones are retried. A one-time
+ * link is kept apart from the text and dropped once the message is sent.
  */
 export const mailOutbox = mysqlTable(
   "mail_outbox",
@@ -127,7 +128,10 @@ export const mailOutbox = mysqlTable(
     id: int("id").autoincrement().primaryKey(),
     toAddress: varchar("to_address", { length: 254 }).notNull(),
     subject: varchar("subject", { length: 255 }).notNull(),
+    /** The text as sent, except that a one-time link is replaced by a note (app/mail/one-time-link.ts). */
     textBody: text("text_body").notNull(),
+    /** The message's one-time link, kept only until SMTP has accepted it. */
+    oneTimeLink: varchar("one_time_link", { length: 2048 }),
     createdAt: createdAt(),
     sentAt: datetime("sent_at", { mode: "date", fsp: 3 }),
     attempts: int("attempts").notNull().default(0),
