@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import {
+  changePasswordSchema,
   newPasswordSchema,
   safeRedirectPath,
   signInPausedMessage,
@@ -79,6 +80,44 @@ describe("newPasswordSchema", () => {
       confirmPassword: "long-enough-2",
     });
     expect(parsed.error?.issues[0]?.path).toEqual(["confirmPassword"]);
+  });
+});
+
+describe("changePasswordSchema", () => {
+  it("needs the current password and a new one by the set-password rules", () => {
+    const parsed = changePasswordSchema.safeParse({
+      currentPassword: "",
+      password: "short",
+      confirmPassword: "other",
+    });
+    expect(
+      parsed.error?.issues.map((issue) => [issue.path[0], issue.message]),
+    ).toEqual([
+      ["currentPassword", "Enter your current password."],
+      ["password", "Use at least 10 characters."],
+      ["confirmPassword", "The two passwords differ."],
+    ]);
+    const differ = changePasswordSchema.safeParse({
+      currentPassword: "the-old-one",
+      password: "long-enough-1",
+      confirmPassword: "long-enough-2",
+    });
+    expect(differ.error?.issues[0]?.path).toEqual(["confirmPassword"]);
+  });
+  it("refuses the password one has now as the new one", () => {
+    const parsed = changePasswordSchema.safeParse({
+      currentPassword: "long-enough-1",
+      password: "long-enough-1",
+      confirmPassword: "long-enough-1",
+    });
+    expect(parsed.error?.issues[0]?.path).toEqual(["password"]);
+    expect(
+      changePasswordSchema.safeParse({
+        currentPassword: "the-old-one",
+        password: "long-enough-1",
+        confirmPassword: "long-enough-1",
+      }).success,
+    ).toBe(true);
   });
 });
 

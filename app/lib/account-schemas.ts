@@ -16,18 +16,44 @@ export const signInSchema = z.object({
 
 export const passwordMinimum = 10;
 
+/** A new password and its confirmation: the one rule for every way of choosing one. */
+const chosenPasswordFields = {
+  password: z
+    .string({ error: "Choose a password." })
+    .min(passwordMinimum, `Use at least ${passwordMinimum} characters.`)
+    .max(200, "Use at most 200 characters."),
+  confirmPassword: z.string({ error: "Type the password again." }),
+};
+
+const confirmationMatches = (value: {
+  password: string;
+  confirmPassword: string;
+}) => value.password === value.confirmPassword;
+const confirmationDiffers = {
+  path: ["confirmPassword"],
+  message: "The two passwords differ.",
+};
+
 export const newPasswordSchema = z
   .object({
     token: z.string({ error: "The link is incomplete." }),
-    password: z
-      .string({ error: "Choose a password." })
-      .min(passwordMinimum, `Use at least ${passwordMinimum} characters.`)
-      .max(200, "Use at most 200 characters."),
-    confirmPassword: z.string({ error: "Type the password again." }),
+    ...chosenPasswordFields,
   })
-  .refine((value) => value.password === value.confirmPassword, {
-    path: ["confirmPassword"],
-    message: "The two passwords differ.",
+  .refine(confirmationMatches, confirmationDiffers);
+
+/** Changing one's own password on the account page. */
+export const changePasswordSchema = z
+  .object({
+    currentPassword: z
+      .string({ error: "Enter your current password." })
+      .min(1, "Enter your current password.")
+      .max(1000),
+    ...chosenPasswordFields,
+  })
+  .refine(confirmationMatches, confirmationDiffers)
+  .refine((value) => value.password !== value.currentPassword, {
+    path: ["password"],
+    message: "Choose a password other than the one you have now.",
   });
 
 export const forgotPasswordSchema = z.object({ email: emailField });

@@ -76,6 +76,7 @@ export const flashMessageSubjects = {
   "order-built": "order",
   "order-quantity-changed": "order",
   "order-quantity-changed-released": "order",
+  "password-changed": "none",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -158,6 +159,8 @@ const texts: {
     `${order.reference} is now for ${formatQuantity(order.quantity, "motors")}.`,
   "order-quantity-changed-released": (order) =>
     `${order.reference} is now for ${formatQuantity(order.quantity, "motors")}. What it held was released: reserve again.`,
+  "password-changed": () =>
+    "Password changed. You stay signed in here; every other session has ended and your API tokens are revoked.",
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

@@ -9,6 +9,8 @@ import {
   revokeApiToken,
 } from "~/auth/api-tokens.server";
 import { requireUser } from "~/auth/guard.server";
+import { changePasswordAction } from "~/components/account/change-password-action.server";
+import { ChangePasswordForm } from "~/components/account/change-password-form";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages, TextField } from "~/components/text-field";
 import { formatDateTime } from "~/lib/format";
@@ -53,6 +55,12 @@ const revokeSchema = z.object({ tokenId: z.coerce.number().int().positive() });
 export async function action({ request, context }: Route.ActionArgs) {
   const user = await requireUser(request);
   const formData = await request.formData();
+  if (formData.get("intent") === "change-password")
+    return changePasswordAction({
+      formData,
+      user,
+      clientAddress: context.clientAddress,
+    });
   if (formData.get("intent") === "alert-mode") {
     // Buyers (and admins, who opt in) choose how they hear about low stock.
     if (!userHasRole(user, ["buyer"]))
@@ -163,6 +171,10 @@ export async function action({ request, context }: Route.ActionArgs) {
   };
 }
 
+/** Sends an action's Retry-After (sign-in paused, or the password queue busy) with the page. */
+export const headers: Route.HeadersFunction = ({ actionHeaders }) =>
+  actionHeaders;
+
 export const meta: Route.MetaFunction = () => [
   { title: "Your account · Turnledger" },
 ];
@@ -188,6 +200,10 @@ export default function Account({
     { ariaDescribedBy: fields.lifetimeDays.descriptionId },
   );
   const isAdmin = user.roles.includes("admin");
+  const passwordResult =
+    actionData && "passwordResult" in actionData
+      ? actionData.passwordResult
+      : null;
   return (
     <div className="max-w-4xl space-y-8">
       <div>
@@ -197,6 +213,11 @@ export default function Account({
           {user.roles.map((role) => roleLabels[role]).join(", ") || "no role"}
         </p>
       </div>
+
+      <ChangePasswordForm
+        lastResult={passwordResult}
+        liveTokens={tokens.filter((token) => !token.revokedAt).length}
+      />
 
       {alertMode ? (
         <section aria-labelledby="alerts-heading" className="space-y-3">
