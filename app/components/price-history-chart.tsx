@@ -202,7 +202,7 @@ export function PriceHistoryChart({
               {history.series.map((offer) => (
                 <li key={offerName(offer)}>
                   {offerName(offer)}:{" "}
-                  {offer.points.at(-1)?.problems.join(" ") || "no price"}
+                  {offer.points.at(-1)?.problems.join("; ") || "no price"}
                 </li>
               ))}
             </ul>
@@ -375,8 +375,8 @@ export function PriceHistoryChart({
                         {last?.unitPrice != null
                           ? `now ${price(last.unitPrice)}`
                           : layout.markers.length === 0
-                            ? `no price on these days: ${last?.problems.join(" ") ?? ""}`
-                            : `no price now: ${last?.problems.join(" ") ?? ""}`}
+                            ? `no price on these days: ${last?.problems.join("; ") ?? ""}`
+                            : `no price now: ${last?.problems.join("; ") ?? ""}`}
                         {offer.currency !== currency
                           ? `, quoted in ${offer.currency}`
                           : ""}
@@ -460,7 +460,7 @@ function figureColumns(companyCurrency: string, unit: string) {
     }),
     column.accessor("problems", {
       header: "Why no price",
-      cell: (info) => info.getValue().join(" ") || "—",
+      cell: (info) => info.getValue().join("; ") || "—",
     }),
   ];
 }

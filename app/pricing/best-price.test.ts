@@ -266,7 +266,10 @@ describe("best price for wire priced on the metal base", () => {
       currency: "USD",
     });
     const yen = adderLine("480", { supplier: "Kiso Wire", currency: "JPY" });
-    const result = bestPrices(wireRequest({ lines: [dollars, yen] }));
+    // No copper base in any currency: nothing to derive a USD base from either.
+    const result = bestPrices(
+      wireRequest({ lines: [dollars, yen], bases: [] }),
+    );
     expect(result.candidates).toEqual([]);
     expect(
       result.cannotPrice.map((offer) => [

@@ -11,7 +11,12 @@ import {
   type ExchangeRateEntry,
   type RateDay,
 } from "./currency";
-import { wirePricePerKgOn, type MetalBasePrice } from "./metal-base";
+import { deriveMetalBase } from "./derived-metal-base";
+import {
+  fullWirePricePerKg,
+  wirePricePerKgOn,
+  type MetalBasePrice,
+} from "./metal-base";
 import type { CurrencyCode, MoneyAmount } from "./money";
 import type { PriceLine } from "./price-line";
 import type { PricingProblem } from "./pricing-problems";
@@ -40,7 +45,10 @@ export type LinePrice =
       convertedUnitPrice: MoneyAmount;
       /** The rate used; null when the line is in the company currency. */
       rate: ExchangeRateEntry | null;
-      /** The metal base used; null for a fixed unit price. */
+      /**
+       * The metal base used; null for a fixed unit price. A base derived from the company
+       * currency's base and the rate (none kept in the line's currency) carries `derivedFrom`.
+       */
       metalBase: MetalBasePrice | null;
     }
   /** Every problem found at once (base and rate both missing → both), so all can be fixed. */
@@ -51,13 +59,33 @@ export function priceLine(line: PriceLine, context: PricingContext): LinePrice {
   const problems: PricingProblem[] = [];
   let quotedUnitPrice: MoneyAmount | undefined;
   let metalBase: MetalBasePrice | null = null;
+  const rateDate = rateDayFor(
+    context.rateDay ?? "pricing-date",
+    line.validFrom,
+    context.date,
+  );
   if (line.pricing === "unit-price") {
     quotedUnitPrice = line.unitPrice;
   } else {
     const wirePrice = wirePricePerKgOn(line, context.bases, context.date);
+    // No base kept in the line's currency: the company currency's base at the rate, named as such.
+    const derived = wirePrice.ok
+      ? null
+      : deriveMetalBase({
+          conductor: line.conductor,
+          currency: line.currency,
+          companyCurrency: context.companyCurrency,
+          bases: context.bases,
+          rates: context.rates,
+          date: context.date,
+          rateDate,
+        });
     if (wirePrice.ok) {
       quotedUnitPrice = wirePrice.pricePerKg;
       metalBase = wirePrice.base;
+    } else if (derived) {
+      quotedUnitPrice = fullWirePricePerKg(line.adderPerKg, derived.pricePerKg);
+      metalBase = derived;
     } else {
       problems.push(wirePrice.problem);
     }
@@ -66,11 +94,7 @@ export function priceLine(line: PriceLine, context: PricingContext): LinePrice {
   const conversion = toCompanyCurrency(quotedUnitPrice ?? 0n, line.currency, {
     companyCurrency: context.companyCurrency,
     rates: context.rates,
-    date: rateDayFor(
-      context.rateDay ?? "pricing-date",
-      line.validFrom,
-      context.date,
-    ),
+    date: rateDate,
   });
   if (!conversion.ok) problems.push(conversion.problem);
   if (quotedUnitPrice === undefined || !conversion.ok)

@@ -108,10 +108,15 @@ function changeDays(
     days.add(line.validFrom);
     if (line.validTo !== undefined) days.add(dayAfter(line.validTo));
     if (line.pricing === "metal-base-adder") {
+      // A base in the line's currency, or in the company currency, from which a missing one
+      // is derived (see derived-metal-base.ts).
+      const derivesFromCompanyBase = line.currency !== request.companyCurrency;
       for (const base of request.bases) {
         if (
           base.conductor === line.conductor &&
-          base.currency === line.currency
+          (base.currency === line.currency ||
+            (derivesFromCompanyBase &&
+              base.currency === request.companyCurrency))
         ) {
           days.add(base.validFrom);
         }

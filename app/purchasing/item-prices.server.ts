@@ -14,6 +14,7 @@ import {
 } from "~/db/schema";
 import type { ConductorKey } from "~/engineering/reference-data";
 import { bestPrices } from "~/pricing/best-price";
+import { isDerivedMetalBase } from "~/pricing/derived-metal-base";
 import type { CalendarDate } from "~/pricing/calendar-date";
 import type { ExchangeRateEntry } from "~/pricing/currency";
 import type { MetalBasePrice } from "~/pricing/metal-base";
@@ -153,7 +154,12 @@ export async function loadItemsPricing(
   );
 }
 
-/** The suppliers' prices for `quantity` (thousandths of the item's unit) on `date`, cheapest first. */
+/**
+ * The suppliers' prices for `quantity` (thousandths of the item's unit) on `date`, cheapest
+ * first, and the offers that cannot be priced with each reason apart. The one way an item is
+ * priced for buying: the item page, the best-prices list, the API and the low-stock e-mail
+ * all read it (with the quantity of `quantityToPrice` unless the buyer chose one).
+ */
 export function bestPricesOf(
   pricing: ItemPricing,
   quantity: bigint,
@@ -184,6 +190,16 @@ export function bestPricesOf(
         candidate.adderPerKg === null ? null : money(candidate.adderPerKg),
       metalBasePerKg: candidate.metalBase
         ? money(candidate.metalBase.pricePerKg)
+        : null,
+      /** Set when no base is kept in the supplier's currency: the company base and rate it came from. */
+      metalBaseDerivedFrom: isDerivedMetalBase(candidate.metalBase)
+        ? {
+            pricePerKg: money(candidate.metalBase.derivedFrom.base.pricePerKg),
+            currency: candidate.metalBase.derivedFrom.base.currency,
+            validFrom: candidate.metalBase.derivedFrom.base.validFrom,
+            rate: Number(candidate.metalBase.derivedFrom.rate.rate) / 1_000_000,
+            rateFrom: candidate.metalBase.derivedFrom.rate.date,
+          }
         : null,
       rate: candidate.rate ? Number(candidate.rate.rate) / 1_000_000 : null,
       unitPrice: money(candidate.landedUnitPrice),
