@@ -6,6 +6,7 @@ import {
   alertModeOf,
   digestMail,
   purchaseRequestCsv,
+  quantityToPrice,
   suggestedOrderQuantity,
 } from "./low-stock";
 
@@ -61,6 +62,35 @@ describe("when an alert opens and closes", () => {
   });
 });
 
+describe("the quantity an item is priced at", () => {
+  it("is the suggested order, or one unit when nothing is to be ordered", () => {
+    // Low by 3 kg with no reorder quantity: the shortfall, 3 kg.
+    expect(
+      quantityToPrice({
+        available: 7_000n,
+        reorderPoint: 10_000n,
+        reorderQuantity: 0n,
+      }),
+    ).toBe(3_000n);
+    // Low by half a kilogram with a 25 kg reorder quantity: the reorder quantity.
+    expect(
+      quantityToPrice({
+        available: 9_500n,
+        reorderPoint: 10_000n,
+        reorderQuantity: 25_000n,
+      }),
+    ).toBe(25_000n);
+    // Not low, no reorder quantity: one unit, not nothing.
+    expect(
+      quantityToPrice({
+        available: 40_000n,
+        reorderPoint: 10_000n,
+        reorderQuantity: 0n,
+      }),
+    ).toBe(1_000n);
+  });
+});
+
 describe("who hears about alerts", () => {
   const person = (
     roles: string[],
@@ -96,6 +126,7 @@ describe("the e-mails", () => {
         unitPrice: 12.5,
         currency: "EUR",
       },
+      unpricedOffers: [],
       buildOrders: [{ id: 7, status: "in_progress", stillNeeded: 1_200n }],
       itemUrl: "http://localhost:3000/stock/items/CU-050",
     });
@@ -107,6 +138,37 @@ describe("the e-mails", () => {
       "Aster Wire, their SKU AW-050, 12.5000 EUR per kg",
     );
     expect(mail.text).toContain("#7 (in progress, 1.200 kg still to issue)");
+  });
+
+  it("lists each reason an offer cannot be priced on a line of its own", () => {
+    const mail = alertMail({
+      sku: "CU-050",
+      name: "Enamelled copper 0.50 mm",
+      unit: "kg",
+      available: 9_500n,
+      reorderPoint: 10_000n,
+      reorderQuantity: 0n,
+      bestOffer: null,
+      unpricedOffers: [
+        {
+          supplier: "Kiso Wire",
+          supplierSku: "KW-050",
+          reasons: [
+            "no copper base price in JPY on or before 2026-01-20",
+            "no JPY to EUR rate on or before 2026-01-20",
+          ],
+        },
+      ],
+      buildOrders: [],
+      itemUrl: "http://localhost:3000/stock/items/CU-050",
+    });
+    expect(mail.text).toContain(
+      "No supplier's price can be worked out for that quantity.",
+    );
+    expect(mail.text).not.toContain("No supplier quotes");
+    expect(mail.text).toContain(
+      "- Kiso Wire, their SKU KW-050: no copper base price in JPY on or before 2026-01-20\n- Kiso Wire, their SKU KW-050: no JPY to EUR rate on or before 2026-01-20",
+    );
   });
 
   it("lists every open alert in the digest", () => {

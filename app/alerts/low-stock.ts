@@ -49,6 +49,20 @@ export function suggestedOrderQuantity(input: {
       : 0n;
 }
 
+/**
+ * The quantity an item is priced at for buying, one rule for its page, the best-prices list
+ * and its low-stock e-mail: the suggested order ({@link suggestedOrderQuantity}), or one unit
+ * (1000 thousandths) when nothing is to be ordered (no reorder quantity, not low).
+ */
+export function quantityToPrice(input: {
+  available: bigint;
+  reorderPoint: bigint;
+  reorderQuantity: bigint;
+}): bigint {
+  const order = suggestedOrderQuantity(input);
+  return order > 0n ? order : 1_000n;
+}
+
 export interface AlertPerson {
   id: string;
   email: string;
@@ -74,13 +88,19 @@ export interface AlertMailFacts {
   available: bigint;
   reorderPoint: bigint;
   reorderQuantity: bigint;
-  /** The cheapest supplier for the order quantity, or null when nobody quotes it. */
+  /** The cheapest supplier for the order quantity, or null when nobody's price can be worked out. */
   bestOffer: {
     supplier: string;
     supplierSku: string;
     unitPrice: number;
     currency: string;
   } | null;
+  /** Offers quoted for the item that cannot be priced for that quantity, each reason apart. */
+  unpricedOffers: {
+    supplier: string;
+    supplierSku: string;
+    reasons: string[];
+  }[];
   /** Open build orders that need the item. */
   buildOrders: { id: number; status: string; stillNeeded: bigint }[];
   /** Link to the item page. */
@@ -108,7 +128,20 @@ export function alertMail(facts: AlertMailFacts): {
     `Suggested order: ${quantityText(order, facts.unit)} (reorder quantity ${quantityText(facts.reorderQuantity, facts.unit)})`,
     facts.bestOffer
       ? `Best price for that quantity: ${facts.bestOffer.supplier}, their SKU ${facts.bestOffer.supplierSku}, ${facts.bestOffer.unitPrice.toFixed(4)} ${facts.bestOffer.currency} per ${facts.unit}`
-      : "No supplier quotes a price for that quantity yet.",
+      : facts.unpricedOffers.length > 0
+        ? "No supplier's price can be worked out for that quantity."
+        : "No supplier quotes a price for that quantity yet.",
+    ...(facts.unpricedOffers.length > 0
+      ? [
+          `Quoted but not priced for that quantity:`,
+          ...facts.unpricedOffers.flatMap((offer) =>
+            offer.reasons.map(
+              (reason) =>
+                `- ${offer.supplier}, their SKU ${offer.supplierSku}: ${reason}`,
+            ),
+          ),
+        ]
+      : []),
     "",
     facts.buildOrders.length === 0
       ? "No open build order needs it."

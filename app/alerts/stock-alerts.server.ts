@@ -29,18 +29,18 @@ import {
   users,
 } from "~/db/schema";
 import { queueMail, queueMailForLater } from "~/mail/mailer.server";
-import { bestPrices } from "~/pricing/best-price";
-import { loadItemPricing } from "~/purchasing/item-prices.server";
+import { todayUtc } from "~/purchasing/current-entries";
+import { bestPricesOf, loadItemPricing } from "~/purchasing/item-prices.server";
 import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
 import {
   alertChange,
   alertMail,
   alertModeOf,
   digestMail,
-  suggestedOrderQuantity,
+  quantityToPrice,
+  type AlertMailFacts,
   type AlertPerson,
 } from "./low-stock";
-
 
 /** Active buyers and admins with their alert choice. */
 async function alertPeople(): Promise<AlertPerson[]> {
@@ -70,26 +70,31 @@ async function alertPeople(): Promise<AlertPerson[]> {
   return [...people.values()];
 }
 
-async function bestOfferFor(sku: string, quantity: bigint) {
-  const pricing = await loadItemPricing(sku);
-  if (!pricing || quantity <= 0n) return null;
-  const [best] = bestPrices({
-    itemId: String(pricing.itemId),
-    quantity,
-    lines: pricing.lines,
-    bases: pricing.bases,
-    rates: pricing.rates,
-    companyCurrency: pricing.companyCurrency,
-    date: new Date().toISOString().slice(0, 10),
-  }).candidates;
-  return best
-    ? {
-        supplier: best.supplier,
-        supplierSku: best.supplierSku,
-        unitPrice: Number(best.landedUnitPrice) / 10_000,
-        currency: pricing.companyCurrency,
-      }
-    : null;
+/**
+ * The item's prices for the e-mail: the same function and quantity rule as its page
+ * (`bestPricesOf`, `quantityToPrice`), so the two never disagree about who quotes it.
+ */
+async function offersFor(item: {
+  sku: string;
+  available: bigint;
+  reorderPoint: bigint;
+  reorderQuantity: bigint;
+}): Promise<Pick<AlertMailFacts, "bestOffer" | "unpricedOffers">> {
+  const pricing = await loadItemPricing(item.sku);
+  if (!pricing) return { bestOffer: null, unpricedOffers: [] };
+  const prices = bestPricesOf(pricing, quantityToPrice(item), todayUtc());
+  const [best] = prices.prices;
+  return {
+    bestOffer: best
+      ? {
+          supplier: best.supplier,
+          supplierSku: best.supplierSku,
+          unitPrice: best.unitPrice,
+          currency: prices.companyCurrency,
+        }
+      : null,
+    unpricedOffers: prices.cannotPrice,
+  };
 }
 
 /** Open build orders that still need an item, with what is still to issue. */
@@ -138,7 +143,7 @@ async function tellAboutNewAlert(
   if (recipients.length === 0) return;
   const mail = alertMail({
     ...item,
-    bestOffer: await bestOfferFor(item.sku, suggestedOrderQuantity(item)),
+    ...(await offersFor(item)),
     buildOrders: await openBuildOrdersNeeding(item.id),
     itemUrl: `${appUrl()}/stock/items/${encodeURIComponent(item.sku)}`,
   });
@@ -286,6 +291,15 @@ export async function sendAlertDigest(): Promise<{
     );
   }
   return { people: recipients.length, alerts: open.length };
+}
+
+/** How many alerts are open now (one per item at most), for the start page. */
+export async function countOpenAlerts(): Promise<number> {
+  const [row] = await db
+    .select({ total: sql<number>`COUNT(*)` })
+    .from(stockAlerts)
+    .where(isNotNull(stockAlerts.openItemId));
+  return Number(row?.total ?? 0);
 }
 
 export const alertsPageSize = 50;

@@ -1,3 +1,4 @@
+import { Form } from "react-router";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export interface ItemBestPrices {
@@ -11,23 +12,114 @@ export interface ItemBestPrices {
     quotedUnitPrice: number;
     adderPerKg: number | null;
     metalBasePerKg: number | null;
+    metalBaseDerivedFrom: {
+      pricePerKg: number;
+      currency: string;
+      rate: number;
+    } | null;
     rate: number | null;
     unitPrice: number;
+    total: number;
     leadTimeDays: number | null;
   }[];
   cannotPrice: { supplier: string; supplierSku: string; reasons: string[] }[];
 }
 
+/** The quantity the prices are for: the one the buyer typed, or the item's own rule. */
+export interface PriceQuantityChoice {
+  /** What the field shows: the typed text, or empty for the item's own quantity. */
+  text: string;
+  /** Why the typed quantity was not used. */
+  error?: string;
+  /** Said beside the heading when the buyer chose nothing, e.g. "the suggested order". */
+  defaultNote: string;
+}
+
 const money = (value: number, currency: string, decimals = 4) =>
   `${value.toLocaleString("en-GB", { minimumFractionDigits: decimals, maximumFractionDigits: decimals })}\u00a0${currency}`;
 
-/** The suppliers' current prices for the reorder quantity, cheapest first, in the company currency. */
-export function ItemBestPricesPanel({ prices }: { prices: ItemBestPrices }) {
+/** "9.0000 EUR/kg at 0.92 EUR/USD": where a base the supplier's currency lacks came from. */
+export function derivedBaseText(
+  derived: NonNullable<
+    ItemBestPrices["prices"][number]["metalBaseDerivedFrom"]
+  >,
+  supplierCurrency: string,
+) {
+  return `base derived from ${money(derived.pricePerKg, `${derived.currency}/kg`)} at the rate ${derived.rate}\u00a0${derived.currency}/${supplierCurrency}`;
+}
+
+/** Why an offer has no price: one line per reason, never run together. */
+export function UnpricedReasons({ reasons }: { reasons: string[] }) {
+  return (
+    <ul className="list-disc space-y-0.5 pl-4 text-sm text-caution">
+      {reasons.map((reason) => (
+        <li key={reason}>{reason}</li>
+      ))}
+    </ul>
+  );
+}
+
+/** The suppliers' current prices for a quantity, cheapest first, in the company currency. */
+export function ItemBestPricesPanel({
+  prices,
+  quantityChoice,
+}: {
+  prices: ItemBestPrices;
+  quantityChoice?: PriceQuantityChoice;
+}) {
   return (
     <section aria-labelledby="prices-heading" className="panel space-y-3">
-      <h2 id="prices-heading" className="text-lg font-semibold">
-        Best prices for {formatStockQuantity(prices.quantity, prices.unit)}
-      </h2>
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <h2 id="prices-heading" className="text-lg font-semibold">
+          Best prices for {formatStockQuantity(prices.quantity, prices.unit)}
+          {quantityChoice && quantityChoice.text === "" ? (
+            <>
+              {" "}
+              <span className="text-sm font-normal text-graphite-500">
+                ({quantityChoice.defaultNote})
+              </span>
+            </>
+          ) : null}
+        </h2>
+        {quantityChoice ? (
+          <Form
+            method="get"
+            preventScrollReset
+            className="flex items-end gap-2"
+            aria-label="Price another quantity"
+          >
+            <div>
+              <label htmlFor="price-quantity" className="field-label">
+                Quantity{" "}
+                <span className="font-normal text-graphite-500">
+                  ({prices.unit})
+                </span>
+              </label>
+              <input
+                id="price-quantity"
+                name="quantity"
+                inputMode="decimal"
+                autoComplete="off"
+                defaultValue={quantityChoice.text}
+                placeholder={String(prices.quantity)}
+                className="field-input w-32"
+                aria-invalid={quantityChoice.error ? true : undefined}
+                aria-describedby={
+                  quantityChoice.error ? "price-quantity-error" : undefined
+                }
+              />
+            </div>
+            <button type="submit" className="button-quiet">
+              Price it
+            </button>
+          </Form>
+        ) : null}
+      </div>
+      {quantityChoice?.error ? (
+        <p id="price-quantity-error" className="text-sm text-caution">
+          {quantityChoice.error}
+        </p>
+      ) : null}
       {prices.prices.length === 0 && prices.cannotPrice.length === 0 ? (
         <p className="text-sm text-graphite-500">
           No supplier has quoted this item yet. Import a price list to see
@@ -41,6 +133,9 @@ export function ItemBestPricesPanel({ prices }: { prices: ItemBestPrices }) {
               <th scope="col">Supplier</th>
               <th scope="col" className="text-right">
                 Per {prices.unit} in {prices.companyCurrency}
+              </th>
+              <th scope="col" className="text-right">
+                Total
               </th>
               <th scope="col">As quoted</th>
             </tr>
@@ -60,6 +155,9 @@ export function ItemBestPricesPanel({ prices }: { prices: ItemBestPrices }) {
                 <td className="text-right font-medium">
                   {money(price.unitPrice, prices.companyCurrency)}
                 </td>
+                <td className="text-right">
+                  {money(price.total, prices.companyCurrency, 2)}
+                </td>
                 <td className="text-sm text-graphite-700">
                   {price.adderPerKg !== null && price.metalBasePerKg !== null
                     ? `${money(price.adderPerKg, price.currency)} adder + ${money(price.metalBasePerKg, price.currency)} metal base`
@@ -68,6 +166,15 @@ export function ItemBestPricesPanel({ prices }: { prices: ItemBestPrices }) {
                   price.currency !== prices.companyCurrency
                     ? ` at ${price.rate} ${prices.companyCurrency}/${price.currency}`
                     : ""}
+                  {price.metalBaseDerivedFrom ? (
+                    <span className="block text-xs text-caution">
+                      {derivedBaseText(
+                        price.metalBaseDerivedFrom,
+                        price.currency,
+                      )}{" "}
+                      (no {price.currency} base kept)
+                    </span>
+                  ) : null}
                 </td>
               </tr>
             ))}
@@ -80,8 +187,9 @@ export function ItemBestPricesPanel({ prices }: { prices: ItemBestPrices }) {
                   </span>
                 </td>
                 <td className="text-right text-graphite-500">—</td>
-                <td className="text-sm text-caution">
-                  {offer.reasons.join(" ")}
+                <td className="text-right text-graphite-500">—</td>
+                <td>
+                  <UnpricedReasons reasons={offer.reasons} />
                 </td>
               </tr>
             ))}

@@ -1,12 +1,13 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/home";
+import { countOpenAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
 import { InsightDesigns } from "~/components/insight-designs";
 import { StockHeadline } from "~/components/insight-stock";
 import { loadInsight } from "~/insight/insight-page.server";
 import { adminFigures } from "~/people/admin-figures.server";
 import { roleDuties } from "~/lib/navigation";
-import { roles, roleLabels } from "~/lib/roles";
+import { roles, roleLabels, userHasRole } from "~/lib/roles";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -14,15 +15,19 @@ export async function loader({ request }: Route.LoaderArgs) {
   // Managers start on the cost insight (designs with the what-if, stock value); the
   // trends and breakdowns are on /insight.
   const isManager = user.roles.includes("manager");
-  const [admin, insight] = await Promise.all([
+  // Buyers (and admins) start from what is low: the open alerts, linked to the alerts page.
+  const isBuyer = userHasRole(user, ["buyer"]);
+  const [admin, insight, openAlerts] = await Promise.all([
     isAdmin ? adminFigures() : null,
     isManager ? loadInsight(request, { page: "start" }) : null,
+    isBuyer ? countOpenAlerts() : null,
   ]);
   return {
     name: user.name,
     roles: roles.filter((role) => user.roles.includes(role)),
     admin,
     insight,
+    openAlerts,
   };
 }
 
@@ -49,7 +54,7 @@ function Figure({
 }
 
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { name, roles: myRoles, admin, insight } = loaderData;
+  const { name, roles: myRoles, admin, insight, openAlerts } = loaderData;
   return (
     <div className="space-y-6">
       <div>
@@ -62,6 +67,24 @@ export default function Home({ loaderData }: Route.ComponentProps) {
             : "You hold no role yet, so you can only read. Ask an admin to give you one."}
         </p>
       </div>
+      {openAlerts !== null ? (
+        <section aria-labelledby="low-stock-figures" className="panel">
+          <h2 id="low-stock-figures" className="mb-3 text-lg font-semibold">
+            Low stock
+          </h2>
+          <div className="grid gap-3 sm:grid-cols-4">
+            <Figure
+              label={
+                openAlerts === 1
+                  ? "open low-stock alert"
+                  : "open low-stock alerts"
+              }
+              value={openAlerts}
+              to="/alerts"
+            />
+          </div>
+        </section>
+      ) : null}
       {admin ? (
         <section aria-labelledby="admin-figures" className="panel">
           <h2 id="admin-figures" className="mb-3 text-lg font-semibold">

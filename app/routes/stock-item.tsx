@@ -44,6 +44,9 @@ import {
   loadItemPricing,
   priceHistoryOf,
 } from "~/purchasing/item-prices.server";
+import { quantityToPrice } from "~/alerts/low-stock";
+import { todayUtc } from "~/purchasing/current-entries";
+import { readItemPriceQuantity } from "~/purchasing/price-quantity-query";
 import { quantityFromNumber } from "~/stock/decimal-amounts";
 import { isStockError } from "~/stock/stock-errors";
 import {
@@ -149,14 +152,21 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     page,
     pageSize: movementPageSize,
   });
-  // Prices for the reorder quantity (one unit when none is set): today's and the last year's.
+  // Prices for the quantity the buyer asks (?quantity=), else the item's own rule, the one
+  // its low-stock e-mail uses: today's and the last year's.
+  const asked = readItemPriceQuantity(url.searchParams);
   const priceQuantity =
-    quantityFromNumber(item.reorderQuantity > 0 ? item.reorderQuantity : 1) ??
-    1000n;
-  const today = new Date().toISOString().slice(0, 10);
+    asked.quantity ??
+    quantityToPrice({
+      available: quantityFromNumber(item.available) ?? 0n,
+      reorderPoint: quantityFromNumber(item.reorderPoint) ?? 0n,
+      reorderQuantity: quantityFromNumber(item.reorderQuantity) ?? 0n,
+    });
+  const today = todayUtc();
   const pricing = await loadItemPricing(item.sku);
   return {
     prices: pricing && bestPricesOf(pricing, priceQuantity, today),
+    priceQuantity: { text: asked.text, error: asked.error },
     priceHistory: pricing && priceHistoryOf(pricing, priceQuantity, today),
     item,
     attributes,
@@ -345,6 +355,7 @@ export default function StockItem({
     movementCount,
     can,
     prices,
+    priceQuantity,
     priceHistory,
   } = loaderData;
   const navigation = useNavigation();
@@ -485,7 +496,18 @@ export default function StockItem({
             />
           </section>
 
-          {prices ? <ItemBestPricesPanel prices={prices} /> : null}
+          {prices ? (
+            <ItemBestPricesPanel
+              prices={prices}
+              quantityChoice={{
+                ...priceQuantity,
+                defaultNote:
+                  item.belowReorder || item.reorderQuantity > 0
+                    ? "the suggested order"
+                    : "one unit",
+              }}
+            />
+          ) : null}
           {priceHistory ? (
             <PriceHistoryChart
               history={priceHistory}
@@ -619,7 +641,9 @@ export default function StockItem({
           rows={movements}
           page={page}
           pageCount={pageCount}
-          pageHref={(target) => `/stock/items/${sku}?page=${target}`}
+          pageHref={(target) =>
+            `/stock/items/${sku}?page=${target}${priceQuantity.text ? `&quantity=${encodeURIComponent(priceQuantity.text)}` : ""}`
+          }
           emptyText="No movements yet."
         />
       </section>
