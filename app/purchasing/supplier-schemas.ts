@@ -65,3 +65,22 @@ export const currencyRateSchema = z.object({
 export type SupplierInput = z.output<typeof supplierSchema>;
 export type MetalBaseInput = z.output<typeof metalBaseSchema>;
 export type CurrencyRateInput = z.output<typeof currencyRateSchema>;
+
+/**
+ * A change to a supplier through the API (PATCH): only the fields sent change; null clears
+ * an optional one (e-mail, lead time, notes).
+ */
+export const supplierPatchSchema = z
+  .object({
+    name: supplierSchema.shape.name.optional(),
+    email: supplierSchema.shape.email.nullable(),
+    currency: isoCurrency.optional(),
+    leadTimeDays: supplierSchema.shape.leadTimeDays.nullable(),
+    notes: supplierSchema.shape.notes.nullable(),
+  })
+  .strict()
+  .refine((patch) => Object.keys(patch).length > 0, {
+    message: "Send at least one of name, email, currency, leadTimeDays, notes.",
+  });
+
+export type SupplierPatch = z.output<typeof supplierPatchSchema>;

@@ -5,23 +5,22 @@ import { supplierSchema } from "~/purchasing/supplier-schemas";
 import { createSupplier, listSuppliers } from "~/purchasing/suppliers.server";
 import { answerStockError } from "~/stock/stock-api.server";
 
-/** GET /api/v1/suppliers → [{ name, email, currency, leadTimeDays, notes }]. */
+/** GET /api/v1/suppliers → [{ id, name, email, currency, leadTimeDays, notes }] (the id for /api/v1/suppliers/:id). */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  return Response.json(
-    (await listSuppliers()).map(({ id: _id, ...supplier }) => supplier),
-  );
+  return Response.json(await listSuppliers());
 }
 
-/** POST /api/v1/suppliers (buyer, admin) → 201 the supplier; 409 when the name is taken. */
+/** POST /api/v1/suppliers (buyer, admin) → 201 the supplier with its id; 409 when the name is taken. */
 export async function action({ request }: Route.ActionArgs) {
   await requireRole(request, ["buyer"]);
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const input = await readJsonBody(request, supplierSchema);
   return answerStockError(async () => {
-    await createSupplier(input);
+    const id = await createSupplier(input);
     return Response.json(
       {
+        id,
         name: input.name,
         email: input.email ?? null,
         currency: input.currency,

@@ -9,26 +9,27 @@ import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/suppliers";
 import { requireRole, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
-import { QuantityField } from "~/components/quantity-field";
-import { TextAreaField } from "~/components/text-area-field";
-import { FormMessages, TextField } from "~/components/text-field";
+import { SupplierFields } from "~/components/suppliers/supplier-fields";
+import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
+import type { CurrencyCoverage } from "~/purchasing/supplier-currency-warnings";
+import { currencyCoverage } from "~/purchasing/supplier-details.server";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
 import { listSupplierOverview } from "~/purchasing/supplier-overview.server";
-import { companyCurrency, createSupplier } from "~/purchasing/suppliers.server";
+import { createSupplier } from "~/purchasing/suppliers.server";
 import { isStockError } from "~/stock/stock-errors";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  const [suppliers, currency] = await Promise.all([
+  const [suppliers, coverage] = await Promise.all([
     listSupplierOverview(),
-    companyCurrency(),
+    currencyCoverage(),
   ]);
   return {
     suppliers,
-    companyCurrency: currency,
+    coverage,
     canKeep: userHasRole(user, ["buyer"]),
   };
 }
@@ -63,7 +64,14 @@ const column = createColumnHelper<Supplier>();
 const columns = [
   column.accessor("name", {
     header: "Supplier",
-    cell: (info) => <span className="font-medium">{info.getValue()}</span>,
+    cell: (info) => (
+      <Link
+        to={`/suppliers/${info.row.original.id}`}
+        className="font-medium text-copper-700 underline-offset-2 hover:underline"
+      >
+        {info.getValue()}
+      </Link>
+    ),
   }),
   column.accessor("email", {
     header: "E-mail",
@@ -143,7 +151,7 @@ export default function Suppliers({
       {canKeep ? (
         <NewSupplierForm
           lastResult={actionData?.result}
-          companyCurrency={loaderData.companyCurrency}
+          coverage={loaderData.coverage}
         />
       ) : null}
     </div>
@@ -152,16 +160,16 @@ export default function Suppliers({
 
 function NewSupplierForm({
   lastResult,
-  companyCurrency,
+  coverage,
 }: {
   lastResult?: SubmissionResult<string[]>;
-  companyCurrency: string;
+  coverage: CurrencyCoverage;
 }) {
   const navigation = useNavigation();
   const [form, fields] = useForm({
     id: "new-supplier",
     lastResult,
-    defaultValue: { currency: companyCurrency },
+    defaultValue: { currency: coverage.companyCurrency },
     constraint: getZodConstraint(supplierSchema),
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
@@ -176,25 +184,7 @@ function NewSupplierForm({
       </h2>
       <Form method="post" {...getFormProps(form)} className="space-y-4">
         <FormMessages id={form.errorId} errors={form.errors} />
-        <TextField field={fields.name} label="Name" autoComplete="off" />
-        <TextField
-          field={fields.email}
-          label="E-mail for orders"
-          type="email"
-          autoComplete="off"
-        />
-        <TextField
-          field={fields.currency}
-          label="Quotes in (currency)"
-          autoComplete="off"
-          hint="3-letter ISO 4217 code, e.g. EUR, USD, CNY."
-        />
-        <QuantityField
-          field={fields.leadTimeDays}
-          label="Lead time"
-          unit="days"
-        />
-        <TextAreaField field={fields.notes} label="Notes" />
+        <SupplierFields fields={fields} coverage={coverage} />
         <button
           type="submit"
           className="button-primary w-full"
