@@ -3,6 +3,8 @@
  * writer, `recordMovementIn`, inside a transaction that has locked the order first. The
  * movement takes what the order line holds on that lot and location (by quantity, or by
  * weighing the spool back), and the first issue moves the order to "in progress".
+ * The record-movement page and POST /api/v1/stock-movements with a `buildOrderId` come
+ * here too (`issueMovementToBuildOrder`): there is one way to issue to an order.
  */
 import { checkStockAlertsOfOrder } from "~/alerts/stock-alerts.server";
 import { and, eq } from "drizzle-orm";
@@ -13,6 +15,8 @@ import {
   type RecordedMovement,
 } from "~/stock/stock-movements.server";
 import { BuildOrderError } from "./build-order-errors";
+import type { MovementRequest } from "~/stock/movement-request";
+import { StockError } from "~/stock/stock-errors";
 import type { IssueRequest } from "./build-order-forms";
 import {
   changeStatus,
@@ -55,12 +59,21 @@ export async function issueToBuildOrder(
         and(eq(buildOrderLines.orderId, order.id), eq(items.sku, request.sku)),
       )
       .limit(1);
-    if (!line)
+    if (!line) {
+      // A real item the order has no line for is a conflict with the order; an unknown SKU is bad input.
+      const [item] = await tx
+        .select({ id: items.id })
+        .from(items)
+        .where(eq(items.sku, request.sku))
+        .limit(1);
       throw new BuildOrderError(
-        400,
-        `${buildOrderReference(order.id)} needs no ${request.sku}.`,
+        item ? 409 : 400,
+        item
+          ? `${buildOrderReference(order.id)} needs no ${request.sku}.`
+          : `No item with SKU "${request.sku}".`,
         "sku",
       );
+    }
     const recorded = await recordMovementIn(
       tx,
       {
@@ -104,4 +117,51 @@ export async function issueToBuildOrder(
   });
   await checkStockAlertsOfOrder(orderId);
   return result;
+}
+
+/** What POST /api/v1/stock-movements answers for an issue to a build order: the movement's answer and the order. */
+export interface MovementIssueResult {
+  movement: RecordedMovement["movement"];
+  balance: RecordedMovement["balance"];
+  buildOrder: {
+    id: number;
+    reference: string;
+    status: BuildOrderStatus;
+    line: IssueResult["line"];
+  };
+}
+
+/** A stock-movement request naming its build order (`buildOrderId`), issued through the order. */
+export async function issueMovementToBuildOrder(
+  request: MovementRequest & { buildOrderId: number },
+  userId: string,
+): Promise<MovementIssueResult> {
+  if (request.type !== "issue")
+    throw new StockError(
+      400,
+      "Stock goes to a build order by an issue: buildOrderId is only for issues.",
+      "buildOrderId",
+    );
+  const issued = await issueToBuildOrder(
+    request.buildOrderId,
+    {
+      sku: request.sku,
+      lot: request.lot,
+      location: request.location,
+      quantity: request.quantity,
+      grossKg: request.grossKg,
+      note: request.note,
+    },
+    userId,
+  );
+  return {
+    movement: issued.movement,
+    balance: issued.balance,
+    buildOrder: {
+      id: issued.id,
+      reference: buildOrderReference(issued.id),
+      status: issued.status,
+      line: issued.line,
+    },
+  };
 }

@@ -1,6 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { buildOrderStatuses } from "~/db/tables/build-orders";
 import {
+  buildOrderIdInReference,
+  buildOrderReference,
   canCancel,
   canChangeQuantity,
   canComplete,
@@ -30,5 +32,34 @@ describe("build order states", () => {
       complete: [false, false, false, false, false],
       cancelled: [false, false, false, false, false],
     });
+  });
+});
+
+describe("buildOrderIdInReference", () => {
+  it("reads the order a reference names, with or without the dash and spaces, in any case", () => {
+    expect(buildOrderIdInReference("BO-12")).toBe(12);
+    expect(buildOrderIdInReference("bo-12")).toBe(12);
+    expect(buildOrderIdInReference("BO 12")).toBe(12);
+    expect(buildOrderIdInReference("BO12")).toBe(12);
+    expect(buildOrderIdInReference("BO – 0007")).toBe(7);
+    expect(buildOrderIdInReference("for BO-4, coil 3")).toBe(4);
+    // A part of an order is still that order.
+    expect(buildOrderIdInReference("BO-12a")).toBe(12);
+    // The page's own reference round-trips.
+    expect(buildOrderIdInReference(buildOrderReference(4321))).toBe(4321);
+  });
+
+  it("leaves other references alone", () => {
+    for (const reference of [
+      "",
+      undefined,
+      "JOB-12",
+      "ROBO-3",
+      "BOX-12",
+      "BO-",
+      "BO-0",
+      "DN-3100",
+    ])
+      expect(buildOrderIdInReference(reference), String(reference)).toBe(null);
   });
 });

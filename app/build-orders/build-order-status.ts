@@ -19,6 +19,22 @@ export function buildOrderReference(id: number): string {
   return `BO-${id}`;
 }
 
+/**
+ * The build order a free-text reference names, or null: "BO-12", "bo 12", "BO12" and a
+ * reference that holds one ("for BO-12") all name order 12. A reference like this on a
+ * plain issue would lower the stock but not what the order holds, so the ledger refuses it.
+ */
+export function buildOrderIdInReference(
+  reference: string | null | undefined,
+): number | null {
+  const match = /(?<![\p{L}\p{N}])BO\s*[-‐‑–—]?\s*0*(\d{1,9})(?!\p{N})/iu.exec(
+    reference ?? "",
+  );
+  if (!match) return null;
+  const id = Number(match[1]);
+  return id >= 1 ? id : null;
+}
+
 /** Stock can be (further) reserved until the build is complete or cancelled. */
 export function canReserve(status: BuildOrderStatus): boolean {
   return (

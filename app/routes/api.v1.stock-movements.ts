@@ -5,6 +5,8 @@ import {
   readJsonBody,
   readSearchParams,
 } from "~/lib/api.server";
+import { answerBuildOrderError } from "~/build-orders/build-order-api.server";
+import { issueMovementToBuildOrder } from "~/build-orders/build-order-issues.server";
 import { movementJournalQuerySchema } from "~/stock/movement-journal-query";
 import { listMovements } from "~/stock/movement-journal.server";
 import { movementRequestSchema } from "~/stock/movement-request";
@@ -24,11 +26,24 @@ export async function loader({ request }: Route.LoaderArgs) {
   });
 }
 
-/** POST /api/v1/stock-movements (storekeeper, admin) → 201 { movement, balance }; 409 when stock would go below zero. */
+/**
+ * POST /api/v1/stock-movements (storekeeper, admin) → 201 { movement, balance }; 409 when stock would go below zero.
+ * An issue with `buildOrderId` goes through the build order's own issue → 201 { movement, balance, buildOrder };
+ * 404 for no such order, 409 when the order is not open or does not need the item. A plain issue whose
+ * reference names a build order ("BO-12") is refused with 400 on `reference`.
+ */
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, ["storekeeper"]);
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const movement = await readJsonBody(request, movementRequestSchema);
+  const { buildOrderId } = movement;
+  if (buildOrderId !== undefined)
+    return answerBuildOrderError(async () =>
+      Response.json(
+        await issueMovementToBuildOrder({ ...movement, buildOrderId }, user.id),
+        { status: 201 },
+      ),
+    );
   return answerStockError(async () =>
     Response.json(await recordMovement(movement, user.id), { status: 201 }),
   );

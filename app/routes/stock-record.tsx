@@ -4,12 +4,22 @@ import { useState } from "react";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-record";
 import { requireRole } from "~/auth/guard.server";
+import { listOrdersToIssueItem } from "~/build-orders/build-order-issue-choices.server";
+import { isBuildOrderError } from "~/build-orders/build-order-errors";
+import { issueMovementToBuildOrder } from "~/build-orders/build-order-issues.server";
 import { useFlash } from "~/components/flash-message";
 import { MeasureField } from "~/components/measure-field";
+import { BalanceChoice, balanceKeyOf } from "~/components/stock/balance-choice";
+import {
+  BuildOrderPicker,
+  heldOnBalance,
+} from "~/components/stock/build-order-picker";
+import { ReceiptFields } from "~/components/stock/receipt-fields";
 import { FormMessages } from "~/components/text-field";
 import { movementTypes, type MovementType } from "~/db/tables/stock-enums";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatQuantity } from "~/lib/format";
+import { companyCurrency } from "~/purchasing/suppliers.server";
 import {
   formatSignedStockQuantity,
   formatStockQuantity,
@@ -18,6 +28,7 @@ import { findItemBySku, listLocations } from "~/stock/items.server";
 import { formFieldOf, movementFormSchema } from "~/stock/movement-form";
 import { isStockError } from "~/stock/stock-errors";
 import { recordMovement } from "~/stock/stock-movements.server";
+import { usualLocationOf } from "~/stock/usual-location.server";
 import { wireMetresPerKg } from "~/stock/wire-length.server";
 
 const typeLabels: Record<
@@ -61,6 +72,12 @@ const typeLabels: Record<
   },
 };
 
+const referenceLabels: Partial<Record<MovementType, string>> = {
+  issue: "Reference",
+  return: "Build order",
+  scrap: "Reason or reference",
+};
+
 function chosenType(value: string | null): MovementType {
   return (movementTypes as readonly string[]).includes(value ?? "")
     ? (value as MovementType)
@@ -73,15 +90,24 @@ export async function loader({ request }: Route.LoaderArgs) {
   const type = chosenType(url.searchParams.get("type"));
   const sku = url.searchParams.get("sku")?.trim() ?? "";
   const item = sku ? await findItemBySku(sku) : null;
-  const metresPerKg =
-    item?.kind === "wire" ? await wireMetresPerKg(item.id) : null;
+  const [metresPerKg, locations, usualLocation, currency, orders] =
+    await Promise.all([
+      item?.kind === "wire" ? wireMetresPerKg(item.id) : null,
+      listLocations(),
+      item && type === "receipt" ? usualLocationOf(item.id) : null,
+      companyCurrency(),
+      item && type === "issue" ? listOrdersToIssueItem(item.id) : [],
+    ]);
   return {
     type,
     sku,
     item: item ? { ...item, id: undefined } : null,
     metresPerKg,
     notFound: Boolean(sku) && !item,
-    locations: await listLocations(),
+    locations,
+    usualLocation,
+    currency,
+    orders,
   };
 }
 
@@ -95,19 +121,33 @@ export async function action({ request }: Route.ActionArgs) {
   if (submission.status !== "success") {
     return data(submission.reply(), { status: 400 });
   }
+  const { buildOrderId } = submission.value;
   try {
-    const { movement } = await recordMovement(submission.value, user.id);
+    // An issue to a build order goes through the order's own issue: one way to issue to it.
+    const { movement } =
+      buildOrderId === undefined
+        ? await recordMovement(submission.value, user.id)
+        : await issueMovementToBuildOrder(
+            { ...submission.value, buildOrderId },
+            user.id,
+          );
     const params = new URLSearchParams({
       type: movement.type,
       sku: movement.sku,
     });
-    throw await redirectWithFlash(`/stock/record?${params}`, {
-      code: "movement-recorded",
-      id: movement.id,
-    });
+    throw await redirectWithFlash(
+      `/stock/record?${params}`,
+      buildOrderId === undefined
+        ? { code: "movement-recorded", id: movement.id }
+        : { code: "order-issued", id: movement.id },
+    );
   } catch (error) {
-    if (!isStockError(error)) throw error;
-    const field = formFieldOf(error.field, submission.value.type);
+    if (!isStockError(error) && !isBuildOrderError(error)) throw error;
+    const field = formFieldOf(
+      error.field,
+      submission.value.type,
+      buildOrderId !== undefined,
+    );
     return data(
       submission.reply(
         field
@@ -138,7 +178,7 @@ export default function StockRecord(props: Route.ComponentProps) {
 }
 
 function MovementForm({ loaderData, actionData }: Route.ComponentProps) {
-  const { type, item, sku, locations, metresPerKg } = loaderData;
+  const { type, item, sku, locations, metresPerKg, orders } = loaderData;
   const navigation = useNavigation();
   const busy = navigation.state !== "idle";
   const [form] = useForm({
@@ -153,17 +193,27 @@ function MovementForm({ loaderData, actionData }: Route.ComponentProps) {
     },
   });
   const errors = (form.allErrors ?? {}) as Record<string, string[] | undefined>;
+  // The oldest lot first (the server lists them so): where a reservation sits.
   const [balanceKey, setBalanceKey] = useState(() =>
-    item?.balances[0]
-      ? `${item.balances[0].lot ?? ""}|${item.balances[0].location}`
-      : "",
+    item?.balances[0] ? balanceKeyOf(item.balances[0]) : "",
   );
+  const [orderId, setOrderId] = useState("");
+  const order = orders.find((candidate) => String(candidate.id) === orderId);
+  const chooseOrder = (value: string) => {
+    setOrderId(value);
+    // The chosen order's oldest held lot, if this item holds stock there.
+    const first = orders
+      .find((candidate) => String(candidate.id) === value)
+      ?.held.map(balanceKeyOf)
+      .find((key) => item?.balances.some((b) => balanceKeyOf(b) === key));
+    if (first) setBalanceKey(first);
+  };
   const [gross, setGross] = useState("");
   const [counted, setCounted] = useState("");
   const unit = item?.unit ?? "";
   const step = unit === "pcs" ? "1" : "0.001";
   const chosen = item?.balances.find(
-    (balance) => `${balance.lot ?? ""}|${balance.location}` === balanceKey,
+    (balance) => balanceKeyOf(balance) === balanceKey,
   );
   const isWire = item?.kind === "wire";
 
@@ -260,154 +310,42 @@ function MovementForm({ loaderData, actionData }: Route.ComponentProps) {
           </div>
 
           {type === "receipt" ? (
-            <div className="grid gap-4 sm:grid-cols-2">
-              <div>
-                <label htmlFor="movement-location" className="field-label">
-                  Into location
-                </label>
-                <select
-                  id="movement-location"
-                  name="location"
-                  className={bigInput}
-                  defaultValue={locations[0]?.code}
-                >
-                  {locations.map((location) => (
-                    <option key={location.code} value={location.code}>
-                      {location.code} · {location.name}
-                    </option>
-                  ))}
-                </select>
-                {errors.location ? (
-                  <p className="field-error">{errors.location.join(" ")}</p>
-                ) : null}
-              </div>
-              <Field
-                name="lot"
-                label={isWire ? "Spool lot number" : "Lot (optional)"}
-                errors={errors.lot}
-                autoComplete="off"
-                required={isWire}
-              />
-              {isWire ? (
-                <>
-                  <Field
-                    name="grossKg"
-                    label="Gross weight"
-                    unit="kg"
-                    type="number"
-                    step="0.001"
-                    inputMode="decimal"
-                    // A spool's quantity is its weight: the form has no quantity field, so a missing one is asked for here.
-                    errors={
-                      errors.grossKg ??
-                      (errors.quantity
-                        ? ["Give the spool's gross weight."]
-                        : undefined)
-                    }
-                    hint="Spool with wire, on the scale"
-                  />
-                  <Field
-                    name="tareKg"
-                    label="Tare weight"
-                    unit="kg"
-                    type="number"
-                    step="0.001"
-                    inputMode="decimal"
-                    errors={errors.tareKg}
-                    hint="The empty spool"
-                  />
-                  <Field
-                    name="spoolType"
-                    label="Spool type"
-                    errors={errors.spoolType}
-                    placeholder="e.g. DIN 250"
-                  />
-                </>
-              ) : (
-                <Field
-                  name="quantity"
-                  label="Quantity"
-                  unit={unit}
-                  type="number"
-                  step={step}
-                  inputMode="decimal"
-                  errors={errors.quantity}
-                />
-              )}
-              <Field
-                name="unitCost"
-                label={`Unit cost per ${unit}`}
-                type="number"
-                step="0.0001"
-                inputMode="decimal"
-                errors={errors.unitCost}
-              />
-              <Field
-                name="supplierBatch"
-                label="Supplier batch"
-                errors={errors.supplierBatch}
-                autoComplete="off"
-              />
-              <Field
-                name="reference"
-                label="Delivery note"
-                errors={errors.reference}
-                autoComplete="off"
-              />
-            </div>
+            <ReceiptFields
+              unit={unit}
+              isWire={isWire}
+              locations={locations}
+              usualLocation={loaderData.usualLocation}
+              currency={loaderData.currency}
+              errors={errors}
+              inputClassName={bigInput}
+            />
           ) : (
             <div className="space-y-4">
-              <fieldset>
-                <legend className="field-label">
-                  {type === "transfer" ? "From" : "Lot and location"}
-                </legend>
-                {item.balances.length === 0 ? (
-                  <p className="mt-2 text-sm text-graphite-500">
-                    Nothing of this item is in stock.
-                  </p>
-                ) : (
-                  <div className="mt-2 grid gap-2">
-                    {item.balances.map((balance) => {
-                      const key = `${balance.lot ?? ""}|${balance.location}`;
-                      return (
-                        <label
-                          key={key}
-                          className="flex min-h-12 cursor-pointer items-center gap-3 rounded-md border border-graphite-300 bg-white px-3 has-checked:border-copper-500 has-checked:bg-copper-50"
-                        >
-                          <input
-                            type="radio"
-                            name="balance"
-                            value={key}
-                            checked={balanceKey === key}
-                            onChange={() => setBalanceKey(key)}
-                            className="h-5 w-5 accent-copper-600"
-                          />
-                          <span className="flex-1">
-                            {balance.lot ? (
-                              <strong>lot {balance.lot}</strong>
-                            ) : (
-                              <strong>no lot</strong>
-                            )}{" "}
-                            at {balance.location}
-                            {balance.tareKg !== null ? (
-                              <span className="text-sm text-graphite-500">
-                                {" "}
-                                · tare {formatQuantity(balance.tareKg, "kg", 3)}
-                              </span>
-                            ) : null}
-                          </span>
-                          <span className="font-medium">
-                            {formatStockQuantity(balance.onHand, unit)}
-                          </span>
-                        </label>
-                      );
-                    })}
-                  </div>
-                )}
-                {errors.balance ? (
-                  <p className="field-error">{errors.balance.join(" ")}</p>
-                ) : null}
-              </fieldset>
+              {type === "issue" ? (
+                <BuildOrderPicker
+                  orders={orders}
+                  unit={unit}
+                  value={orderId}
+                  onChange={chooseOrder}
+                  errors={errors.buildOrderId}
+                />
+              ) : null}
+              <BalanceChoice
+                legend={type === "transfer" ? "From" : "Lot and location"}
+                balances={item.balances}
+                unit={unit}
+                value={balanceKey}
+                onChange={setBalanceKey}
+                heldFor={
+                  order
+                    ? {
+                        reference: order.reference,
+                        heldOn: (key) => heldOnBalance(order, key),
+                      }
+                    : undefined
+                }
+                errors={errors.balance}
+              />
 
               <div className="grid gap-4 sm:grid-cols-2">
                 {type === "issue" && isWire ? (
@@ -483,11 +421,16 @@ function MovementForm({ loaderData, actionData }: Route.ComponentProps) {
                     ) : null}
                   </div>
                 ) : null}
-                {type === "issue" || type === "return" || type === "scrap" ? (
+                {(type === "issue" && !order) ||
+                type === "return" ||
+                type === "scrap" ? (
                   <Field
                     name="reference"
-                    label={
-                      type === "scrap" ? "Reason or reference" : "Build order"
+                    label={referenceLabels[type] ?? "Reference"}
+                    hint={
+                      type === "issue"
+                        ? "A job or note. For a build order, choose it under “Build order”."
+                        : undefined
                     }
                     errors={errors.reference}
                     autoComplete="off"
@@ -553,8 +496,10 @@ function MovementForm({ loaderData, actionData }: Route.ComponentProps) {
             {busy
               ? "Recording…"
               : weighBack !== null && weighBack > 0
-                ? `Issue ${formatQuantity(weighBack, "kg", 3)}`
-                : typeLabels[type].verb}
+                ? `Issue ${formatQuantity(weighBack, "kg", 3)}${order ? ` to ${order.reference}` : ""}`
+                : order
+                  ? `Issue to ${order.reference}`
+                  : typeLabels[type].verb}
           </button>
         </Form>
       ) : null}

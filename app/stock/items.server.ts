@@ -10,6 +10,7 @@ import {
   sql,
   type SQL,
 } from "drizzle-orm";
+import { compareOldestFirst } from "~/build-orders/stock-allocation";
 import { db } from "~/db/client.server";
 import { items, locations, lots, stockBalances } from "~/db/schema";
 import type { ItemKind } from "~/db/tables/stock-enums";
@@ -150,7 +151,7 @@ function itemSummary(row: {
   };
 }
 
-/** One item with its balances by lot and location, or null. */
+/** One item with its balances by lot and location (oldest lot first), or null. */
 export async function findItemBySku(sku: string) {
   const [row] = await db
     .select({ id: items.id, ...summaryColumns })
@@ -158,8 +159,11 @@ export async function findItemBySku(sku: string) {
     .where(eq(items.sku, sku))
     .limit(1);
   if (!row) return null;
-  const balances = await db
+  const balanceRows = await db
     .select({
+      lotId: stockBalances.lotId,
+      locationId: stockBalances.locationId,
+      receivedOn: lots.receivedOn,
       lot: lots.lotNumber,
       tareKg: lots.tareKg,
       location: locations.code,
@@ -170,8 +174,11 @@ export async function findItemBySku(sku: string) {
     .from(stockBalances)
     .innerJoin(locations, eq(locations.id, stockBalances.locationId))
     .leftJoin(lots, eq(lots.id, stockBalances.lotId))
-    .where(and(eq(stockBalances.itemId, row.id), gt(stockBalances.onHand, "0")))
-    .orderBy(asc(locations.code), asc(lots.lotNumber));
+    .where(
+      and(eq(stockBalances.itemId, row.id), gt(stockBalances.onHand, "0")),
+    );
+  // Oldest lot first, the order a reservation takes them in (and the build-order page lists them).
+  const balances = balanceRows.sort(compareOldestFirst);
   return {
     id: row.id,
     ...itemSummary(row),

@@ -7,7 +7,13 @@ import { z } from "zod";
 import { formNumber } from "~/lib/number-text";
 import { movementRequestSchema } from "./movement-request";
 
-const numberFields = ["quantity", "unitCost", "grossKg", "tareKg"] as const;
+const numberFields = [
+  "quantity",
+  "unitCost",
+  "grossKg",
+  "tareKg",
+  "buildOrderId",
+] as const;
 
 function formValuesToRequest(values: unknown): unknown {
   if (!values || typeof values !== "object") return values;
@@ -32,9 +38,19 @@ export const movementFormSchema = z.preprocess(
   movementRequestSchema,
 );
 
-/** Where a ledger refusal's field shows on the form (lot and location are one choice there). */
-export function formFieldOf(field: string | undefined, type: string): string {
+/**
+ * Where a refusal's field shows on the form (lot and location are one choice there). An
+ * issue to a build order shows the order's refusals (not open, no line for the item, no
+ * such order) at the order's choice.
+ */
+export function formFieldOf(
+  field: string | undefined,
+  type: string,
+  toBuildOrder = false,
+): string {
   if ((field === "lot" || field === "location") && type !== "receipt")
     return "balance";
+  if (toBuildOrder && (field === undefined || field === "sku"))
+    return "buildOrderId";
   return field ?? "";
 }

@@ -4,6 +4,10 @@
  * Shared by the API and the record-movement forms.
  */
 import { z } from "zod";
+import {
+  buildOrderIdInReference,
+  buildOrderReference,
+} from "~/build-orders/build-order-status";
 import { movementTypes } from "~/db/tables/stock-enums";
 import { quantityFromNumber, unitCostFromNumber } from "./decimal-amounts";
 
@@ -73,6 +77,13 @@ export const movementRequestSchema = z
     supplierBatch: optionalText(60),
     reference: optionalText(80),
     note: optionalText(500),
+    /** An issue to this build order: it takes what the order holds and counts as issued to it. */
+    buildOrderId: z
+      .number({ error: "buildOrderId must be a whole number." })
+      .int("buildOrderId must be a whole number.")
+      .min(1, "buildOrderId must be at least 1.")
+      .max(2_147_483_647, "buildOrderId is out of range.")
+      .optional(),
   })
   .superRefine((value, context) => {
     const problem = (path: string, message: string) =>
@@ -126,6 +137,53 @@ export const movementRequestSchema = z
     }
     if (value.type === "adjustment" && !value.note)
       problem("note", "Say why stock is adjusted.");
+    refineBuildOrderIssue(value, problem);
   });
+
+/** How to issue to a build order, for a reference that names one on a plain issue. */
+export function issueToBuildOrderHelp(orderId: number): string {
+  const reference = buildOrderReference(orderId);
+  return `${reference} is a build order: issue to it through the order, so it counts against what the order holds — choose ${reference} under “Build order” on this page, send buildOrderId: ${orderId} with the issue, or use Issue on the order's page (/build-orders/${orderId}).`;
+}
+
+/**
+ * An issue names its build order by buildOrderId, never only in the free-text reference:
+ * a plain issue with "BO-12" would lower the stock while the order still held it.
+ */
+function refineBuildOrderIssue(
+  value: {
+    type: string;
+    reference?: string;
+    buildOrderId?: number;
+    quantity?: bigint;
+    grossKg?: bigint;
+  },
+  problem: (path: string, message: string) => void,
+) {
+  if (value.buildOrderId === undefined) {
+    const named = buildOrderIdInReference(value.reference);
+    if (value.type === "issue" && named !== null)
+      problem("reference", issueToBuildOrderHelp(named));
+    return;
+  }
+  if (value.type !== "issue") {
+    problem(
+      "buildOrderId",
+      "Stock goes to a build order by an issue: buildOrderId is only for issues.",
+    );
+    return;
+  }
+  const named = buildOrderIdInReference(value.reference);
+  if (named !== null && named !== value.buildOrderId)
+    problem(
+      "reference",
+      `The reference names ${buildOrderReference(named)}, but the issue is to ${buildOrderReference(value.buildOrderId)}.`,
+    );
+  if (value.quantity !== undefined && value.grossKg !== undefined)
+    problem(
+      "grossKg",
+      "Give the quantity or the spool's gross weight, not both.",
+    );
+}
 
 export type MovementRequest = z.output<typeof movementRequestSchema>;

@@ -227,7 +227,7 @@ describe("stock pages in the browser", () => {
       lot: "SP-101",
       location: store,
       grossKg: 2.15,
-      reference: "BO-2031",
+      reference: "JOB-2031",
     });
 
     await page.getByRole("link", { name: "← Stock" }).click();

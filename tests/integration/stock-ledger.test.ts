@@ -113,7 +113,7 @@ describe("receipts, weigh-back issues, transfers and counts", () => {
       lot: "SP-1",
       location: mainStore,
       grossKg: 4.15,
-      reference: "BO-1001",
+      reference: "JOB-1001",
     });
     expect(issue.status).toBe(201);
     const issued = await issue.json();

@@ -342,7 +342,7 @@ describe("item page", () => {
       lot: "SP-7",
       location: store,
       grossKg: 4.15,
-      reference: "BO-7",
+      reference: "JOB-7",
     });
 
     const { status, html } = await page(`/stock/items/${sku}`);
@@ -358,7 +358,7 @@ describe("item page", () => {
     expect(html).toContain("0.600 kg");
     expect(html).toContain("3.550 kg");
     expect(html).toContain("−1.250 kg");
-    expect(html).toContain("BO-7");
+    expect(html).toContain("JOB-7");
     expect(html).toMatch(
       /<svg[^>]*role="img"[^>]*aria-label="On hand over the last 2 movements/,
     );

@@ -1,0 +1,171 @@
+/**
+ * The receipt fields of the record-movement page: the location (starting at where the
+ * item usually is), the spool's gross and tare with the net shown as they are typed, the
+ * unit cost in the company currency, the supplier batch and the delivery note.
+ */
+import { useState } from "react";
+import { MeasureField } from "~/components/measure-field";
+import { formatQuantity } from "~/lib/format";
+import { spoolNetKg } from "~/stock/spool-net-weight";
+
+type Errors = Record<string, string[] | undefined>;
+
+function Field(props: Omit<React.ComponentProps<typeof MeasureField>, "id">) {
+  return <MeasureField id={`movement-${props.name}`} {...props} />;
+}
+
+export function ReceiptFields({
+  unit,
+  isWire,
+  locations,
+  usualLocation,
+  currency,
+  errors,
+  inputClassName,
+}: {
+  unit: string;
+  isWire: boolean;
+  locations: { code: string; name: string }[];
+  /** Where the item usually is (see usual-location.server.ts); null: the first location. */
+  usualLocation: string | null;
+  /** The company currency the unit cost is in. */
+  currency: string;
+  errors: Errors;
+  inputClassName: string;
+}) {
+  const [gross, setGross] = useState("");
+  const [tare, setTare] = useState("");
+  const net = isWire ? spoolNetKg(gross, tare) : null;
+  return (
+    <div className="grid gap-4 sm:grid-cols-2">
+      <div>
+        <label htmlFor="movement-location" className="field-label">
+          Into location
+        </label>
+        <select
+          id="movement-location"
+          name="location"
+          className={inputClassName}
+          defaultValue={usualLocation ?? locations[0]?.code}
+          aria-describedby={
+            usualLocation ? "movement-location-hint" : undefined
+          }
+        >
+          {locations.map((location) => (
+            <option key={location.code} value={location.code}>
+              {location.code} · {location.name}
+            </option>
+          ))}
+        </select>
+        {usualLocation ? (
+          <p
+            id="movement-location-hint"
+            className="mt-1 text-xs text-graphite-500"
+          >
+            Where this item usually is
+          </p>
+        ) : null}
+        {errors.location ? (
+          <p className="field-error">{errors.location.join(" ")}</p>
+        ) : null}
+      </div>
+      <Field
+        name="lot"
+        label={isWire ? "Spool lot number" : "Lot (optional)"}
+        errors={errors.lot}
+        autoComplete="off"
+        required={isWire}
+      />
+      {isWire ? (
+        <>
+          <Field
+            name="grossKg"
+            label="Gross weight"
+            unit="kg"
+            type="number"
+            step="0.001"
+            inputMode="decimal"
+            value={gross}
+            onChange={(event) => setGross(event.target.value)}
+            // A spool's quantity is its weight: the form has no quantity field, so a missing one is asked for here.
+            errors={
+              errors.grossKg ??
+              (errors.quantity ? ["Give the spool's gross weight."] : undefined)
+            }
+            hint="Spool with wire, on the scale"
+          />
+          <Field
+            name="tareKg"
+            label="Tare weight"
+            unit="kg"
+            type="number"
+            step="0.001"
+            inputMode="decimal"
+            value={tare}
+            onChange={(event) => setTare(event.target.value)}
+            errors={errors.tareKg}
+            hint="The empty spool"
+          />
+          {net !== null ? (
+            <p
+              role="status"
+              className="rounded-md bg-graphite-50 px-4 py-3 sm:col-span-2"
+            >
+              {net > 0 ? (
+                <>
+                  Net weight (gross − tare):{" "}
+                  <strong className="tabular-nums">
+                    {formatQuantity(net, "kg", 3)}
+                  </strong>
+                </>
+              ) : (
+                <span className="text-danger">
+                  Net weight (gross − tare) is {formatQuantity(net, "kg", 3)}:
+                  the gross weight must be more than the tare weight.
+                </span>
+              )}
+            </p>
+          ) : null}
+          <Field
+            name="spoolType"
+            label="Spool type"
+            errors={errors.spoolType}
+            placeholder="e.g. DIN 250"
+          />
+        </>
+      ) : (
+        <Field
+          name="quantity"
+          label="Quantity"
+          unit={unit}
+          type="number"
+          step={unit === "pcs" ? "1" : "0.001"}
+          inputMode="decimal"
+          errors={errors.quantity}
+        />
+      )}
+      <Field
+        name="unitCost"
+        label={`Unit cost per ${unit}`}
+        unit={currency}
+        type="number"
+        step="0.0001"
+        inputMode="decimal"
+        errors={errors.unitCost}
+        hint={`In ${currency}, the company currency`}
+      />
+      <Field
+        name="supplierBatch"
+        label="Supplier batch"
+        errors={errors.supplierBatch}
+        autoComplete="off"
+      />
+      <Field
+        name="reference"
+        label="Delivery note"
+        errors={errors.reference}
+        autoComplete="off"
+      />
+    </div>
+  );
+}
