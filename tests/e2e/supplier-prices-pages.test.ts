@@ -64,13 +64,8 @@ async function unusedCurrency(): Promise<string> {
   }
 }
 
-async function shot(page: Page, name: string) {
-  await saveScreenshot(page, name);
-  await page.screenshot({
-    path: `/work/notes/shots/h3-${name}.png`,
-    fullPage: true,
-  });
-}
+const shot = (page: Page, name: string) =>
+  saveScreenshot(page, `supplier-prices-${name}`);
 
 /** A new copper wire of our own, 10 kg reorder quantity. */
 async function createWire(): Promise<{ sku: string; id: number }> {
