@@ -143,6 +143,7 @@ function priceListRow(values: Partial<Record<PriceListField, string>>) {
       columns: Object.fromEntries(
         priceListFields.map((field, index) => [field, index]),
       ),
+      headers: priceListFields,
       decimalComma: true,
       importDay: "2025-06-02",
       knownGrades: new Set(["n42sh"]),

@@ -46,14 +46,42 @@ export const currencyCodes: readonly CurrencyCode[] = CURRENCIES.map(
 
 const knownCodes: ReadonlySet<string> = new Set(currencyCodes);
 
-/** The code for a cell like "EUR", "eur" or " Eur ", or undefined when it is not in the list. */
+/**
+ * Signs that stand for one currency of the list only, read as its code (common
+ * practice: € is only the euro; £ in a price list to a buyer of these goods is
+ * sterling).
+ */
+const currencySigns: Readonly<Record<string, CurrencyCode>> = {
+  "€": "EUR",
+  "£": "GBP",
+};
+
+/**
+ * The code for a cell like "EUR", "eur", " Eur " or "€", or undefined when it
+ * is not in the list (or is a sign several currencies use, see
+ * {@link ambiguousCurrencySigns}).
+ */
 export function findCurrencyCode(text: string): CurrencyCode | undefined {
-  const code = text.trim().toUpperCase();
+  const trimmed = text.trim();
+  if (Object.hasOwn(currencySigns, trimmed)) return currencySigns[trimmed];
+  const code = trimmed.toUpperCase();
   return knownCodes.has(code) ? (code as CurrencyCode) : undefined;
 }
 
-/** Symbols people type instead of a code, with the one code each stands for (used for hints only). */
-export const currencySymbolHints: Readonly<Record<string, CurrencyCode>> = {
-  "€": "EUR",
-  "£": "GBP",
+/** Signs several currencies use: what they may stand for, and the codes to write instead. */
+export const ambiguousCurrencySigns: Readonly<
+  Record<string, { standsFor: string; write: string }>
+> = {
+  $: {
+    standsFor: "US, Canadian, Australian and other dollars",
+    write: "a code such as USD, CAD or AUD",
+  },
+  "¥": {
+    standsFor: "the Japanese yen and the Chinese yuan",
+    write: "JPY or CNY",
+  },
+  kr: {
+    standsFor: "the Swedish krona and the Norwegian and Danish krone",
+    write: "SEK, NOK or DKK",
+  },
 };

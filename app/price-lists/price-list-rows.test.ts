@@ -30,6 +30,7 @@ const allColumns: FieldColumns = Object.fromEntries(
 
 const context: PriceListRowContext = {
   columns: allColumns,
+  headers: testFields,
   decimalComma: false,
   importDay: "2025-06-02",
   knownGrades: new Set(["n42sh", "n52", "y30", "c5 (y30)"]),
@@ -178,57 +179,57 @@ describe("good rows", () => {
 describe("bad prices and quantities", () => {
   it("refuses a negative price", () => {
     expect(messageOf(read({ ...magnet, price: "-3" }))).toBe(
-      'Line 14: the price "-3" is negative.',
+      'Line 14: the price "-3" (column "price") is negative.',
     );
   });
 
   it("refuses a price longer than any number before reading it", () => {
     expect(messageOf(read({ ...magnet, price: "1".repeat(50_000) }))).toBe(
-      `Line 14: the price "${"1".repeat(39)}…" is longer than 40 characters, more than any number can be.`,
+      `Line 14: the price "${"1".repeat(39)}…" (column "price") is longer than 40 characters, more than any number can be.`,
     );
   });
 
   it("refuses a price that is not a number", () => {
     expect(messageOf(read({ ...magnet, price: "on request" }))).toBe(
-      'Line 14: the price "on request" is not a number.',
+      'Line 14: the price "on request" (column "price") is not a number.',
     );
     expect(messageOf(read({ ...magnet, price: "1,85" }))).toBe(
-      'Line 14: the price "1,85" has a comma; in a file separated by commas or tabs, write numbers with a decimal point and no thousands separator (1234.50).',
+      'Line 14: the price "1,85" (column "price") has a comma; in a file separated by commas or tabs, write numbers with a decimal point and no thousands separator (1234.50).',
     );
     expect(
       messageOf(read({ ...magnet, price: "1.850" }, { decimalComma: true })),
     ).toBe(
-      'Line 14: the price "1.850" could mean 1,850 or 1850; in a file separated by semicolons, write it with a decimal comma and no thousands separator.',
+      'Line 14: the price "1.850" (column "price") could mean 1,850 or 1850; in a file separated by semicolons, write it with a decimal comma and no thousands separator.',
     );
   });
 
   it("refuses more than 4 decimals, an empty price, and both a price and an adder", () => {
     expect(messageOf(read({ ...magnet, price: "1.23456" }))).toBe(
-      'Line 14: the price "1.23456" has more than 4 decimals.',
+      'Line 14: the price "1.23456" (column "price") has more than 4 decimals.',
     );
     expect(messageOf(read({ ...magnet, price: "" }))).toBe(
-      "Line 14: the price and the adder per kg are both empty.",
+      'Line 14: the price (column "price") and the adder per kg (column "adderPerKg") are both empty.',
     );
     expect(messageOf(read({ ...awgWire, adderPerKg: "3" }))).toBe(
-      "Line 14: the row gives both a price and an adder per kg; give one of them.",
+      'Line 14: the row gives both a price "14.20" (column "price") and an adder per kg "3" (column "adderPerKg"); give one of them.',
     );
   });
 
   it("refuses an adder per kg on a magnet", () => {
     expect(messageOf(read({ ...magnet, price: "", adderPerKg: "2" }))).toBe(
-      "Line 14: an adder per kg is for wire priced on the metal base, and this row is a magnet.",
+      'Line 14: an adder per kg (column "adderPerKg") is for wire priced on the metal base, and this row is a magnet.',
     );
   });
 
   it("refuses a minimum quantity that is not a number, zero, or part of a piece", () => {
     expect(messageOf(read({ ...magnet, minQuantity: "ten" }))).toBe(
-      'Line 14: the minimum quantity "ten" is not a number.',
+      'Line 14: the minimum quantity "ten" (column "minQuantity") is not a number.',
     );
     expect(messageOf(read({ ...magnet, minQuantity: "0" }))).toBe(
-      'Line 14: the minimum quantity "0" must be more than zero.',
+      'Line 14: the minimum quantity "0" (column "minQuantity") must be more than zero.',
     );
     expect(messageOf(read({ ...magnet, minQuantity: "2.5" }))).toBe(
-      'Line 14: the minimum quantity "2.5" is not a whole number of pieces.',
+      'Line 14: the minimum quantity "2.5" (column "minQuantity") is not a whole number of pieces.',
     );
     expect(read({ ...awgWire, minQuantity: "2.5" })).toMatchObject({
       ok: true,
@@ -239,34 +240,31 @@ describe("bad prices and quantities", () => {
 describe("bad currencies, dates and text", () => {
   it("refuses an unknown currency", () => {
     expect(messageOf(read({ ...magnet, currency: "EUX" }))).toBe(
-      'Line 14: the currency "EUX" is not a currency code we know (use a three-letter ISO 4217 code such as EUR or USD).',
-    );
-    expect(messageOf(read({ ...magnet, currency: "€" }))).toBe(
-      'Line 14: the currency "€" is a sign, not a code; write EUR.',
+      'Line 14: the currency "EUX" (column "currency") is not a currency code we know (use a three-letter ISO 4217 code such as EUR or USD).',
     );
     expect(messageOf(read({ ...magnet, currency: "" }))).toBe(
-      "Line 14: the currency is empty and the supplier has no default currency.",
+      'Line 14: the currency (column "currency") is empty and the supplier has no default currency.',
     );
   });
 
   it("refuses a month-first date and impossible days", () => {
     expect(messageOf(read({ ...magnet, validFrom: "03/25/2025" }))).toBe(
-      'Line 14: the date "03/25/2025" is written month first, which is not accepted because it is easily misread; write it as YYYY-MM-DD.',
+      'Line 14: the date "03/25/2025" (column "validFrom") is written month first, which is not accepted because it is easily misread; write it as YYYY-MM-DD.',
     );
     expect(messageOf(read({ ...magnet, validFrom: "2025-02-30" }))).toBe(
-      'Line 14: the date "2025-02-30" does not exist.',
+      'Line 14: the date "2025-02-30" (column "validFrom") does not exist.',
     );
   });
 
   it("refuses an empty or overlong SKU and a description over 200 characters", () => {
     expect(messageOf(read({ ...magnet, supplierSku: "" }))).toBe(
-      "Line 14: the supplier SKU is empty.",
+      'Line 14: the supplier SKU (column "supplierSku") is empty.',
     );
     expect(messageOf(read({ ...magnet, supplierSku: "S".repeat(61) }))).toBe(
-      `Line 14: the supplier SKU "${"S".repeat(39)}…" is longer than 60 characters.`,
+      `Line 14: the supplier SKU "${"S".repeat(39)}…" (column "supplierSku") is longer than 60 characters.`,
     );
     expect(messageOf(read({ ...magnet, description: "x".repeat(201) }))).toBe(
-      "Line 14: the description has 201 characters; the limit is 200.",
+      'Line 14: the description (column "description") has 201 characters; the limit is 200.',
     );
     expect(read({ ...magnet, description: "µ".repeat(200) })).toMatchObject({
       ok: true,
@@ -275,7 +273,7 @@ describe("bad currencies, dates and text", () => {
 
   it("lists every problem of a row in one message", () => {
     expect(messageOf(read({ ...magnet, price: "-3", currency: "EUX" }))).toBe(
-      'Line 14: the price "-3" is negative; the currency "EUX" is not a currency code we know (use a three-letter ISO 4217 code such as EUR or USD).',
+      'Line 14: the price "-3" (column "price") is negative; the currency "EUX" (column "currency") is not a currency code we know (use a three-letter ISO 4217 code such as EUR or USD).',
     );
   });
 });
@@ -283,10 +281,10 @@ describe("bad currencies, dates and text", () => {
 describe("bad wire and magnet details", () => {
   it("refuses an unknown AWG size", () => {
     expect(messageOf(read({ ...awgWire, size: "47" }))).toBe(
-      'Line 14: the AWG size "47" is not an AWG size from 4/0 to 46.',
+      'Line 14: the AWG size "47" (column "size") is not an AWG size from 4/0 to 46.',
     );
     expect(messageOf(read({ ...awgWire, size: "0.5" }))).toBe(
-      'Line 14: the AWG size "0.5" is not an AWG size from 4/0 to 46.',
+      'Line 14: the AWG size "0.5" (column "size") is not an AWG size from 4/0 to 46.',
     );
   });
 
@@ -294,13 +292,13 @@ describe("bad wire and magnet details", () => {
     expect(
       messageOf(read({ ...awgWire, standard: "IEC", size: "0.333" })),
     ).toBe(
-      'Line 14: the IEC size "0.333" is not an IEC 60317 nominal diameter in mm (0.020 to 5.000, such as 0.500).',
+      'Line 14: the IEC size "0.333" (column "size") is not an IEC 60317 nominal diameter in mm (0.020 to 5.000, such as 0.500).',
     );
   });
 
   it("refuses an unknown magnet grade", () => {
     expect(messageOf(read({ ...magnet, grade: "N99XX" }))).toBe(
-      'Line 14: the magnet grade "N99XX" is not a grade we know; check the spelling, or have an admin add the grade first.',
+      'Line 14: the magnet grade "N99XX" (column "grade") is not a grade we know; check the spelling, or have an admin add the grade first.',
     );
     expect(read({ ...magnet, grade: "C5  (Y30)" })).toMatchObject({
       ok: true,
@@ -310,50 +308,50 @@ describe("bad wire and magnet details", () => {
 
   it("refuses an unknown insulation grade and one from the other standard", () => {
     expect(messageOf(read({ ...awgWire, insulation: "grade 4" }))).toBe(
-      'Line 14: the insulation "grade 4" is not one we know (grade 1, 2 or 3 for IEC wire; single, heavy or triple build for AWG wire).',
+      'Line 14: the insulation "grade 4" (column "insulation") is not one we know (grade 1, 2 or 3 for IEC wire; single, heavy or triple build for AWG wire).',
     );
     expect(messageOf(read({ ...awgWire, insulation: "grade 2" }))).toBe(
-      'Line 14: the insulation "grade 2" is an IEC grade; AWG wire takes single, heavy or triple build.',
+      'Line 14: the insulation "grade 2" (column "insulation") is an IEC grade; AWG wire takes single, heavy or triple build.',
     );
     expect(
       messageOf(
         read({ ...awgWire, standard: "IEC", size: "0.5", insulation: "heavy" }),
       ),
     ).toBe(
-      'Line 14: the insulation "heavy" is an AWG film build; IEC wire takes grade 1, 2 or 3.',
+      'Line 14: the insulation "heavy" (column "insulation") is an AWG film build; IEC wire takes grade 1, 2 or 3.',
     );
   });
 
   it("refuses an unknown thermal class, standard and unit", () => {
     expect(messageOf(read({ ...awgWire, thermalClass: "170" }))).toBe(
-      'Line 14: the thermal class "170" is not 130, 155, 180, 200 or 220.',
+      'Line 14: the thermal class "170" (column "thermalClass") is not 130, 155, 180, 200 or 220.',
     );
     expect(messageOf(read({ ...awgWire, standard: "SWG" }))).toBe(
-      'Line 14: the wire standard "SWG" is not AWG or IEC.',
+      'Line 14: the wire standard "SWG" (column "standard") is not AWG or IEC.',
     );
     expect(messageOf(read({ ...awgWire, unit: "pcs" }))).toBe(
-      'Line 14: wire is priced per kg, not per "pcs".',
+      'Line 14: wire is priced per kg, not per "pcs" (column "unit").',
     );
     expect(messageOf(read({ ...magnet, unit: "kg" }))).toBe(
-      'Line 14: magnets are priced per piece, not per "kg".',
+      'Line 14: magnets are priced per piece, not per "kg" (column "unit").',
     );
     expect(messageOf(read({ ...magnet, unit: "box" }))).toBe(
-      'Line 14: the unit "box" is not kg, pcs or m.',
+      'Line 14: the unit "box" (column "unit") is not kg, pcs or m.',
     );
   });
 
   it("asks for the kind when a row looks like both wire and a magnet", () => {
     expect(messageOf(read({ ...awgWire, grade: "N42SH" }))).toBe(
-      "Line 14: the row has a wire standard and size and also a magnet grade; say in the kind column whether it is wire or a magnet.",
+      'Line 14: the row has a wire standard "AWG" (column "standard") and size "20" (column "size") and also a magnet grade "N42SH" (column "grade"); say in a kind column whether it is wire or a magnet.',
     );
     expect(messageOf(read({ ...magnet, kind: "coil" }))).toBe(
-      'Line 14: the kind "coil" is not wire, magnet or part.',
+      'Line 14: the kind "coil" (column "kind") is not wire, magnet or part.',
     );
   });
 
   it("reports a wire standard without a size instead of making the row a part", () => {
     expect(messageOf(read({ ...awgWire, size: "" }))).toBe(
-      "Line 14: wire needs a size.",
+      'Line 14: wire needs a size: the size (column "size") is empty.',
     );
   });
 });
@@ -376,7 +374,7 @@ describe("across rows", () => {
       {
         line: 9,
         message:
-          'Line 9: the supplier SKU "BLK-20-10-5" (minimum quantity 100, valid from 2025-06-02) is already on line 2 with another price (1.85 EUR there, 1.9 EUR here).',
+          'Line 9: the supplier SKU "BLK-20-10-5" (column "supplierSku"; minimum quantity 100, valid from 2025-06-02) is already on line 2 with another price (1.85 EUR there, 1.9 EUR here).',
       },
     ]);
   });
@@ -416,7 +414,7 @@ describe("across rows", () => {
       {
         line: 5,
         message:
-          'Line 5: the supplier SKU "CU-20H" is wire AWG 22 here but wire AWG 20 on line 2; one SKU must always be the same item.',
+          'Line 5: the supplier SKU "CU-20H" (column "supplierSku") is wire AWG 22 here but wire AWG 20 on line 2; one SKU must always be the same item.',
       },
     ]);
   });
@@ -434,5 +432,153 @@ describe("across rows", () => {
     expect(
       () => new PriceListRowCollector({ ...context, importDay: "today" }),
     ).toThrow(/importDay/);
+  });
+});
+
+describe("messages that name the column and the value", () => {
+  /** The file's own headers for the test columns, as a supplier might write them. */
+  const fileHeaders: Record<PriceListField, string> = {
+    supplierSku: "Art. no",
+    itemSku: "Our SKU",
+    description: "Text",
+    kind: "Type",
+    standard: "Norm",
+    size: "Gauge",
+    grade: "Quality",
+    insulation: "Build",
+    thermalClass: "Temp class",
+    unit: "UoM",
+    price: "Net price",
+    adderPerKg: "Adder EUR/kg",
+    currency: "Cur",
+    minQuantity: "MOQ",
+    validFrom: "Date",
+  };
+  const named = { ...context, headers: testFields.map((f) => fileHeaders[f]) };
+  const readNamed = (values: Partial<Record<PriceListField, string>>) =>
+    readPriceListRow(dataRow(14, values), named);
+
+  it("reports a typo in the adder before what the row's kind says about adders", () => {
+    expect(
+      messageOf(
+        readNamed({
+          supplierSku: "BRG-6001",
+          adderPerKg: "2.4O",
+          currency: "EUR",
+        }),
+      ),
+    ).toBe(
+      'Line 14: the adder per kg "2.4O" (column "Adder EUR/kg") is not a number; an adder per kg (column "Adder EUR/kg") is for wire priced on the metal base, and this row is a part.',
+    );
+    // A wire row with the same typo: only the number is wrong.
+    expect(
+      messageOf(readNamed({ ...awgWire, price: "", adderPerKg: "2.4O" })),
+    ).toBe(
+      'Line 14: the adder per kg "2.4O" (column "Adder EUR/kg") is not a number.',
+    );
+  });
+
+  it("puts the number problems before the others", () => {
+    expect(
+      messageOf(readNamed({ ...magnet, grade: "N99XX", price: "1,85" })),
+    ).toMatch(
+      /^Line 14: the price "1,85" \(column "Net price"\) has a comma;.*; the magnet grade "N99XX" \(column "Quality"\) is not a grade we know/,
+    );
+  });
+
+  it.each<[string, Partial<Record<PriceListField, string>>, string]>([
+    [
+      "a negative price",
+      { ...magnet, price: "-3" },
+      '"-3" (column "Net price")',
+    ],
+    [
+      "a bad quantity",
+      { ...magnet, minQuantity: "ten" },
+      '"ten" (column "MOQ")',
+    ],
+    [
+      "a part of a piece",
+      { ...magnet, minQuantity: "2.5" },
+      '"2.5" (column "MOQ")',
+    ],
+    [
+      "an unknown currency",
+      { ...magnet, currency: "EUX" },
+      '"EUX" (column "Cur")',
+    ],
+    [
+      "a day that does not exist",
+      { ...magnet, validFrom: "2025-02-30" },
+      '"2025-02-30" (column "Date")',
+    ],
+    [
+      "an unknown AWG size",
+      { ...awgWire, size: "47" },
+      '"47" (column "Gauge")',
+    ],
+    [
+      "an unknown standard",
+      { ...awgWire, standard: "SWG" },
+      '"SWG" (column "Norm")',
+    ],
+    [
+      "an unknown insulation",
+      { ...awgWire, insulation: "grade 4" },
+      '"grade 4" (column "Build")',
+    ],
+    [
+      "an unknown thermal class",
+      { ...awgWire, thermalClass: "170" },
+      '"170" (column "Temp class")',
+    ],
+    ["an unknown unit", { ...magnet, unit: "box" }, '"box" (column "UoM")'],
+    [
+      "a unit wire is not priced in",
+      { ...awgWire, unit: "pcs" },
+      '"pcs" (column "UoM")',
+    ],
+    ["an unknown kind", { ...magnet, kind: "coil" }, '"coil" (column "Type")'],
+    [
+      "an unknown grade",
+      { ...magnet, grade: "N99XX" },
+      '"N99XX" (column "Quality")',
+    ],
+    [
+      "an overlong SKU",
+      { ...magnet, supplierSku: "S".repeat(61) },
+      '…" (column "Art. no")',
+    ],
+    [
+      "an empty SKU",
+      { ...magnet, supplierSku: "" },
+      '(column "Art. no") is empty',
+    ],
+    ["an empty price", { ...magnet, price: "" }, '(column "Net price")'],
+    ["a missing size", { ...awgWire, size: "" }, '(column "Gauge") is empty'],
+  ])("names the column and the value for %s", (_label, values, expected) => {
+    expect(messageOf(readNamed(values))).toContain(expected);
+  });
+});
+
+describe("currency signs", () => {
+  it("reads € and £ as EUR and GBP", () => {
+    expect(read({ ...magnet, currency: "€" })).toMatchObject({
+      ok: true,
+      row: { currency: "EUR" },
+    });
+    expect(read({ ...magnet, currency: " £ " })).toMatchObject({
+      ok: true,
+      row: { currency: "GBP" },
+    });
+  });
+
+  it("asks for a code instead of $ or ¥, which stand for several currencies", () => {
+    expect(messageOf(read({ ...magnet, currency: "$" }))).toContain(
+      'the currency "$" (column "currency") stands for several currencies (US, Canadian, Australian and other dollars); write a code such as USD, CAD or AUD',
+    );
+    expect(messageOf(read({ ...magnet, currency: "¥" }))).toContain(
+      'the currency "¥" (column "currency") stands for several currencies (the Japanese yen and the Chinese yuan); write JPY or CNY',
+    );
   });
 });

@@ -40,9 +40,13 @@ import {
   type DecimalProblem,
   type DecimalRules,
 } from "./cell-values";
-import type { FieldColumns, PriceListField } from "./column-mapping";
 import {
-  currencySymbolHints,
+  priceListFieldLabel,
+  type FieldColumns,
+  type PriceListField,
+} from "./column-mapping";
+import {
+  ambiguousCurrencySigns,
   findCurrencyCode,
   type CurrencyCode,
 } from "./currencies";
@@ -103,6 +107,8 @@ export type PriceListRow = WirePriceRow | MagnetPriceRow | PartPriceRow;
 export interface PriceListRowContext {
   /** Where each mapped field is in a row, from `checkColumnMapping`. */
   columns: FieldColumns;
+  /** The file's header row: messages name the column a value came from by its header. */
+  headers: readonly string[];
   /** Numbers may use a decimal comma (semicolon-separated files). */
   decimalComma: boolean;
   /** The day of the import, YYYY-MM-DD: the start of prices without a date. */
@@ -117,32 +123,80 @@ export type PriceListRowReading =
   { ok: true; row: PriceListRow } | { ok: false; error: LineError };
 
 /**
+ * One row's cells by field, and the words messages use to point at them: each
+ * message names the value and the column it is in, by the file's own header.
+ */
+class RowCells {
+  constructor(
+    private readonly data: CsvDataRow,
+    private readonly context: PriceListRowContext,
+  ) {}
+
+  cell(field: PriceListField): string {
+    const index = this.context.columns[field];
+    return index === undefined ? "" : (this.data.cells[index] ?? "").trim();
+  }
+
+  /** `column "Adder"`. */
+  column(field: PriceListField): string {
+    return columnText(this.context, field);
+  }
+
+  /** `"2.4O" (column "Adder")`; `(column "Adder")` for an empty cell. */
+  ref(field: PriceListField): string {
+    const value = this.cell(field);
+    const column = this.column(field);
+    return value === "" ? `(${column})` : `${quote(value)} (${column})`;
+  }
+
+  /** `the size (column "Gauge") is empty`, or `no column is mapped to Wire size`. */
+  missing(field: PriceListField, label: string): string {
+    return this.context.columns[field] === undefined
+      ? `no column is mapped to ${priceListFieldLabel(field)}`
+      : `${label} (${columnText(this.context, field)}) is empty`;
+  }
+}
+
+/** `column "Adder EUR/kg"`: the file's header of a mapped field. */
+function columnText(context: PriceListRowContext, field: PriceListField) {
+  const index = context.columns[field];
+  const header = index === undefined ? undefined : context.headers[index];
+  return header === undefined
+    ? `no column is mapped to ${priceListFieldLabel(field)}`
+    : `column ${quote(header)}`;
+}
+
+/**
  * Reads one data row. All problems of the row are reported together in one
- * message: "Line 14: the price "-3" is negative; the currency "EUX" is …".
+ * message, the numbers first, each naming the value and its column: "Line 14:
+ * the price "-3" (column "Net price") is negative; the currency "EUX" (column
+ * "Cur") is …".
  */
 export function readPriceListRow(
   data: CsvDataRow,
   context: PriceListRowContext,
 ): PriceListRowReading {
   assertImportDay(context.importDay);
-  const cell = (field: PriceListField): string => {
-    const index = context.columns[field];
-    return index === undefined ? "" : (data.cells[index] ?? "").trim();
-  };
+  const cells = new RowCells(data, context);
+  const cell = (field: PriceListField) => cells.cell(field);
   const problems: string[] = [];
 
+  const amounts = readPrices(cells, context, problems);
+  const quantity = readMinQuantity(cells, context, problems);
+
   const supplierSku = cell("supplierSku");
-  if (supplierSku === "") problems.push("the supplier SKU is empty");
+  if (supplierSku === "")
+    problems.push(cells.missing("supplierSku", "the supplier SKU"));
   else if (supplierSku.length > maxSupplierSkuLength) {
     problems.push(
-      `the supplier SKU ${quote(supplierSku)} is longer than ${maxSupplierSkuLength} characters`,
+      `the supplier SKU ${cells.ref("supplierSku")} is longer than ${maxSupplierSkuLength} characters`,
     );
   }
 
   const itemSkuCell = cell("itemSku");
   if (itemSkuCell.length > maxItemSkuLength)
     problems.push(
-      `our SKU ${quote(itemSkuCell)} is longer than ${maxItemSkuLength} characters`,
+      `our SKU ${cells.ref("itemSku")} is longer than ${maxItemSkuLength} characters`,
     );
   const itemSku = itemSkuCell === "" ? null : itemSkuCell;
 
@@ -152,21 +206,17 @@ export function readPriceListRow(
     description.length > maxDescriptionLength ? [...description].length : 0;
   if (descriptionLength > maxDescriptionLength) {
     problems.push(
-      `the description has ${descriptionLength} characters; the limit is ${maxDescriptionLength}`,
+      `the description (${cells.column("description")}) has ${descriptionLength} characters; the limit is ${maxDescriptionLength}`,
     );
   }
 
-  const kind = readRowKind(cell, problems);
-  const item = kind ? readItem(kind, cell, context, problems) : undefined;
-  const prices = readPrices(cell, kind, context, problems);
-  const currency = readCurrency(cell("currency"), context, problems);
-  const minQuantity = readMinQuantity(
-    cell("minQuantity"),
-    item?.unit,
-    context,
-    problems,
-  );
-  const validFrom = readValidFrom(cell("validFrom"), context, problems);
+  const kind = readRowKind(cells, problems);
+  const item = kind ? readItem(kind, cells, context, problems) : undefined;
+  const prices = pricesForKind(amounts, kind, cells, problems);
+  const minQuantity =
+    quantity && wholePiecesFor(quantity, item?.unit, cells, problems);
+  const currency = readCurrency(cells, context, problems);
+  const validFrom = readValidFrom(cells, context, problems);
 
   if (
     problems.length > 0 ||
@@ -197,7 +247,6 @@ export function readPriceListRow(
   };
 }
 
-type CellReader = (field: PriceListField) => string;
 type ItemFields =
   | Pick<
       WirePriceRow,
@@ -213,23 +262,25 @@ type ItemFields =
  * reported instead of the row quietly becoming a part.
  */
 function readRowKind(
-  cell: CellReader,
+  cells: RowCells,
   problems: string[],
 ): ItemKind | undefined {
-  const kindCell = cell("kind");
+  const kindCell = cells.cell("kind");
   if (kindCell !== "") {
     const kind = readKind(kindCell);
     if (!kind) {
-      problems.push(`the kind ${quote(kindCell)} is not wire, magnet or part`);
+      problems.push(
+        `the kind ${cells.ref("kind")} is not wire, magnet or part`,
+      );
     }
     return kind;
   }
-  const hasStandard = cell("standard") !== "";
-  const hasSize = cell("size") !== "";
-  const hasGrade = cell("grade") !== "";
+  const hasStandard = cells.cell("standard") !== "";
+  const hasSize = cells.cell("size") !== "";
+  const hasGrade = cells.cell("grade") !== "";
   if (hasStandard && hasSize && hasGrade) {
     problems.push(
-      "the row has a wire standard and size and also a magnet grade; say in the kind column whether it is wire or a magnet",
+      `the row has a wire standard ${cells.ref("standard")} and size ${cells.ref("size")} and also a magnet grade ${cells.ref("grade")}; say in a kind column whether it is wire or a magnet`,
     );
     return undefined;
   }
@@ -240,22 +291,22 @@ function readRowKind(
 
 function readItem(
   kind: ItemKind,
-  cell: CellReader,
+  cells: RowCells,
   context: PriceListRowContext,
   problems: string[],
 ): ItemFields | undefined {
-  const unitCell = cell("unit");
+  const unitCell = cells.cell("unit");
   const unit = unitCell === "" ? undefined : readUnit(unitCell);
   if (unitCell !== "" && !unit) {
-    problems.push(`the unit ${quote(unitCell)} is not kg, pcs or m`);
+    problems.push(`the unit ${cells.ref("unit")} is not kg, pcs or m`);
     return undefined;
   }
   switch (kind) {
     case "wire": {
       if (unit && unit !== "kg") {
-        problems.push(`wire is priced per kg, not per ${quote(unitCell)}`);
+        problems.push(`wire is priced per kg, not per ${cells.ref("unit")}`);
       }
-      const wire = readWire(cell, context, problems);
+      const wire = readWire(cells, context, problems);
       return wire && (!unit || unit === "kg")
         ? { kind, unit: "kg", ...wire }
         : undefined;
@@ -263,10 +314,10 @@ function readItem(
     case "magnet": {
       if (unit && unit !== "pcs") {
         problems.push(
-          `magnets are priced per piece, not per ${quote(unitCell)}`,
+          `magnets are priced per piece, not per ${cells.ref("unit")}`,
         );
       }
-      const grade = readGrade(cell("grade"), context, problems);
+      const grade = readGrade(cells, context, problems);
       return grade && (!unit || unit === "pcs")
         ? { kind, unit: "pcs", ...grade }
         : undefined;
@@ -277,29 +328,34 @@ function readItem(
 }
 
 function readWire(
-  cell: CellReader,
+  cells: RowCells,
   context: PriceListRowContext,
   problems: string[],
 ):
   | Pick<WirePriceRow, "standard" | "size" | "insulation" | "thermalClass">
   | undefined {
-  const standardCell = cell("standard");
-  const sizeCell = cell("size");
+  const standardCell = cells.cell("standard");
+  const sizeCell = cells.cell("size");
   const standard =
     standardCell === "" ? undefined : readWireStandard(standardCell);
   if (standardCell === "") {
-    problems.push("wire needs a standard (AWG or IEC)");
+    problems.push(
+      `wire needs a standard (AWG or IEC): ${cells.missing("standard", "the standard")}`,
+    );
   } else if (!standard) {
-    problems.push(`the wire standard ${quote(standardCell)} is not AWG or IEC`);
+    problems.push(
+      `the wire standard ${cells.ref("standard")} is not AWG or IEC`,
+    );
   }
-  if (sizeCell === "") problems.push("wire needs a size");
+  if (sizeCell === "")
+    problems.push(`wire needs a size: ${cells.missing("size", "the size")}`);
 
   let size: string | undefined;
   if (standard === "AWG" && sizeCell !== "") {
     size = readAwgSize(sizeCell);
     if (!size) {
       problems.push(
-        `the AWG size ${quote(sizeCell)} is not an AWG size from 4/0 to 46`,
+        `the AWG size ${cells.ref("size")} is not an AWG size from 4/0 to 46`,
       );
     }
   }
@@ -310,36 +366,37 @@ function readWire(
     size = nominal ? iecSizeLabel(nominal.diameterMm) : undefined;
     if (!size) {
       problems.push(
-        `the IEC size ${quote(sizeCell)} is not an IEC 60317 nominal diameter in mm (0.020 to 5.000, such as 0.500)`,
+        `the IEC size ${cells.ref("size")} is not an IEC 60317 nominal diameter in mm (0.020 to 5.000, such as 0.500)`,
       );
     }
   }
 
-  const insulationCell = cell("insulation");
+  const insulationCell = cells.cell("insulation");
   let insulation: InsulationKey | null = null;
   if (insulationCell !== "") {
     const key = readInsulation(insulationCell);
+    const ref = cells.ref("insulation");
     if (!key) {
       problems.push(
-        `the insulation ${quote(insulationCell)} is not one we know (grade 1, 2 or 3 for IEC wire; single, heavy or triple build for AWG wire)`,
+        `the insulation ${ref} is not one we know (grade 1, 2 or 3 for IEC wire; single, heavy or triple build for AWG wire)`,
       );
     } else if (standard && insulationStandard(key) !== standard) {
       problems.push(
         standard === "IEC"
-          ? `the insulation ${quote(insulationCell)} is an AWG film build; IEC wire takes grade 1, 2 or 3`
-          : `the insulation ${quote(insulationCell)} is an IEC grade; AWG wire takes single, heavy or triple build`,
+          ? `the insulation ${ref} is an AWG film build; IEC wire takes grade 1, 2 or 3`
+          : `the insulation ${ref} is an IEC grade; AWG wire takes single, heavy or triple build`,
       );
     } else {
       insulation = key;
     }
   }
 
-  const thermalCell = cell("thermalClass");
+  const thermalCell = cells.cell("thermalClass");
   const thermalClass =
     thermalCell === "" ? null : readThermalClass(thermalCell);
   if (thermalClass === undefined) {
     problems.push(
-      `the thermal class ${quote(thermalCell)} is not 130, 155, 180, 200 or 220`,
+      `the thermal class ${cells.ref("thermalClass")} is not 130, 155, 180, 200 or 220`,
     );
   }
 
@@ -349,168 +406,210 @@ function readWire(
 }
 
 function readGrade(
-  gradeCell: string,
+  cells: RowCells,
   context: PriceListRowContext,
   problems: string[],
 ): { grade: string; gradeMatch: string } | undefined {
+  const gradeCell = cells.cell("grade");
   if (gradeCell === "") {
-    problems.push("a magnet needs a grade (such as N42SH)");
+    problems.push(
+      `a magnet needs a grade (such as N42SH): ${cells.missing("grade", "the grade")}`,
+    );
     return undefined;
   }
   const gradeMatch = gradeCell.toLowerCase().replace(/\s+/g, " ");
   if (!context.knownGrades.has(gradeMatch)) {
     problems.push(
-      `the magnet grade ${quote(gradeCell)} is not a grade we know; check the spelling, or have an admin add the grade first`,
+      `the magnet grade ${cells.ref("grade")} is not a grade we know; check the spelling, or have an admin add the grade first`,
     );
     return undefined;
   }
   return { grade: gradeCell, gradeMatch };
 }
 
+type RowPrices = Pick<PriceListRowBase, "price" | "adderPerKg">;
+
+/** The price or the adder per kg as numbers, before anything is known of the row's kind. */
 function readPrices(
-  cell: CellReader,
-  kind: ItemKind | undefined,
+  cells: RowCells,
   context: PriceListRowContext,
   problems: string[],
-): Pick<PriceListRowBase, "price" | "adderPerKg"> | undefined {
+): RowPrices | undefined {
   const priceMapped = context.columns.price !== undefined;
   const adderMapped = context.columns.adderPerKg !== undefined;
-  const priceCell = cell("price");
-  const adderCell = cell("adderPerKg");
+  const priceCell = cells.cell("price");
+  const adderCell = cells.cell("adderPerKg");
 
   if (priceCell === "" && adderCell === "") {
     problems.push(
       priceMapped && adderMapped
-        ? "the price and the adder per kg are both empty"
+        ? `the price ${cells.ref("price")} and the adder per kg ${cells.ref("adderPerKg")} are both empty`
         : priceMapped
-          ? "the price is empty"
-          : "the adder per kg is empty",
+          ? cells.missing("price", "the price")
+          : cells.missing("adderPerKg", "the adder per kg"),
     );
     return undefined;
   }
   if (priceCell !== "" && adderCell !== "") {
     problems.push(
-      "the row gives both a price and an adder per kg; give one of them",
+      `the row gives both a price ${cells.ref("price")} and an adder per kg ${cells.ref("adderPerKg")}; give one of them`,
     );
     return undefined;
   }
   if (priceCell !== "") {
-    const price = readAmount("price", priceCell, moneyRules, context, problems);
+    const price = readAmount(
+      "price",
+      "the price",
+      moneyRules,
+      cells,
+      context,
+      problems,
+    );
     return price === undefined ? undefined : { price, adderPerKg: null };
   }
-  if (kind && kind !== "wire") {
-    problems.push(
-      `an adder per kg is for wire priced on the metal base, and this row is a ${kind}`,
-    );
-    return undefined;
-  }
   const adderPerKg = readAmount(
-    "adder per kg",
-    adderCell,
+    "adderPerKg",
+    "the adder per kg",
     moneyRules,
+    cells,
     context,
     problems,
   );
   return adderPerKg === undefined ? undefined : { price: null, adderPerKg };
 }
 
+/**
+ * The prices when they suit the row's kind: an adder per kg is for wire only.
+ * Wrong numbers were reported before this; an adder on a row that is not wire
+ * is reported after them, whether its number was right or not.
+ */
+function pricesForKind(
+  amounts: RowPrices | undefined,
+  kind: ItemKind | undefined,
+  cells: RowCells,
+  problems: string[],
+): RowPrices | undefined {
+  const adderOnly =
+    cells.cell("adderPerKg") !== "" && cells.cell("price") === "";
+  if (!adderOnly || !kind || kind === "wire") return amounts;
+  problems.push(
+    `an adder per kg (${cells.column("adderPerKg")}) is for wire priced on the metal base, and this row is a ${kind}`,
+  );
+  return undefined;
+}
+
 function readCurrency(
-  currencyCell: string,
+  cells: RowCells,
   context: PriceListRowContext,
   problems: string[],
 ): CurrencyCode | undefined {
+  const currencyCell = cells.cell("currency");
   if (currencyCell === "") {
     if (context.supplierCurrency) return context.supplierCurrency;
     problems.push(
-      "the currency is empty and the supplier has no default currency",
+      `${cells.missing("currency", "the currency")} and the supplier has no default currency`,
     );
     return undefined;
   }
   const code = findCurrencyCode(currencyCell);
   if (code) return code;
-  const hinted = Object.hasOwn(currencySymbolHints, currencyCell)
-    ? currencySymbolHints[currencyCell]
+  const sign = currencyCell.trim().toLowerCase();
+  const ambiguous = Object.hasOwn(ambiguousCurrencySigns, sign)
+    ? ambiguousCurrencySigns[sign]
     : undefined;
+  const ref = cells.ref("currency");
   problems.push(
-    hinted
-      ? `the currency ${quote(currencyCell)} is a sign, not a code; write ${hinted}`
-      : `the currency ${quote(currencyCell)} is not a currency code we know (use a three-letter ISO 4217 code such as EUR or USD)`,
+    ambiguous
+      ? `the currency ${ref} stands for several currencies (${ambiguous.standsFor}); write ${ambiguous.write}`
+      : `the currency ${ref} is not a currency code we know (use a three-letter ISO 4217 code such as EUR or USD)`,
   );
   return undefined;
 }
 
+/** The minimum quantity as a number more than zero ("1.000" when the cell is empty). */
 function readMinQuantity(
-  quantityCell: string,
-  unit: StockUnit | undefined,
+  cells: RowCells,
   context: PriceListRowContext,
   problems: string[],
 ): string | undefined {
-  if (quantityCell === "") return "1.000";
+  if (cells.cell("minQuantity") === "") return "1.000";
   const quantity = readAmount(
-    "minimum quantity",
-    quantityCell,
+    "minQuantity",
+    "the minimum quantity",
     quantityRules,
+    cells,
     context,
     problems,
   );
   if (quantity === undefined) return undefined;
   if (/^0+\.0+$/.test(quantity)) {
     problems.push(
-      `the minimum quantity ${quote(quantityCell)} must be more than zero`,
-    );
-    return undefined;
-  }
-  if (unit === "pcs" && !quantity.endsWith(".000")) {
-    problems.push(
-      `the minimum quantity ${quote(quantityCell)} is not a whole number of pieces`,
+      `the minimum quantity ${cells.ref("minQuantity")} must be more than zero`,
     );
     return undefined;
   }
   return quantity;
 }
 
+/** The quantity, when it is a whole number of pieces for an item counted in pieces. */
+function wholePiecesFor(
+  quantity: string,
+  unit: StockUnit | undefined,
+  cells: RowCells,
+  problems: string[],
+): string | undefined {
+  if (unit !== "pcs" || quantity.endsWith(".000")) return quantity;
+  problems.push(
+    `the minimum quantity ${cells.ref("minQuantity")} is not a whole number of pieces`,
+  );
+  return undefined;
+}
+
 function readValidFrom(
-  dateCell: string,
+  cells: RowCells,
   context: PriceListRowContext,
   problems: string[],
 ): string | undefined {
+  const dateCell = cells.cell("validFrom");
   if (dateCell === "") return context.importDay;
   const reading = readDate(dateCell);
   if (reading.ok) return reading.isoDate;
-  const quoted = quote(dateCell);
+  const ref = cells.ref("validFrom");
   problems.push(
     {
-      "not-a-date": `the date ${quoted} is not a date we can read; write it as YYYY-MM-DD, DD.MM.YYYY or DD/MM/YYYY`,
-      "month-first": `the date ${quoted} is written month first, which is not accepted because it is easily misread; write it as YYYY-MM-DD`,
-      "no-such-day": `the date ${quoted} does not exist`,
-      "unlikely-year": `the date ${quoted} has an unlikely year; check it`,
+      "not-a-date": `the date ${ref} is not a date we can read; write it as YYYY-MM-DD, DD.MM.YYYY or DD/MM/YYYY`,
+      "month-first": `the date ${ref} is written month first, which is not accepted because it is easily misread; write it as YYYY-MM-DD`,
+      "no-such-day": `the date ${ref} does not exist`,
+      "unlikely-year": `the date ${ref} has an unlikely year; check it`,
     }[reading.problem],
   );
   return undefined;
 }
 
-/** A non-negative decimal amount, or undefined with a problem naming the field. */
+/** A non-negative decimal amount, or undefined with a problem naming the field, its value and column. */
 function readAmount(
+  field: PriceListField,
   label: string,
-  amountCell: string,
   rules: { decimals: number; maxWholeDigits: number },
+  cells: RowCells,
   context: PriceListRowContext,
   problems: string[],
 ): string | undefined {
+  const amountCell = cells.cell(field);
   const reading = readDecimal(
     amountCell,
     decimalRulesOf(rules, context.decimalComma),
   );
   if (reading.ok) return reading.text;
-  const quoted = quote(amountCell);
+  const named = `${label} ${cells.ref(field)}`;
   const messages: Record<DecimalProblem, string> = {
-    "not-a-number": `the ${label} ${quoted} is not a number`,
-    "too-long": `the ${label} ${quoted} is longer than ${maxNumberTextLength} characters, more than any number can be`,
-    "comma-not-allowed": `the ${label} ${quoted} has a comma; in a file separated by commas or tabs, write numbers with a decimal point and no thousands separator (1234.50)`,
-    "ambiguous-point": `the ${label} ${quoted} could mean ${amountCell.replace(".", ",")} or ${amountCell.replace(".", "")}; in a file separated by semicolons, write it with a decimal comma and no thousands separator`,
-    negative: `the ${label} ${quoted} is negative`,
-    "too-many-decimals": `the ${label} ${quoted} has more than ${rules.decimals} decimals`,
-    "too-large": `the ${label} ${quoted} is too large`,
+    "not-a-number": `${named} is not a number`,
+    "too-long": `${named} is longer than ${maxNumberTextLength} characters, more than any number can be`,
+    "comma-not-allowed": `${named} has a comma; in a file separated by commas or tabs, write numbers with a decimal point and no thousands separator (1234.50)`,
+    "ambiguous-point": `${named} could mean ${amountCell.replace(".", ",")} or ${amountCell.replace(".", "")}; in a file separated by semicolons, write it with a decimal comma and no thousands separator`,
+    negative: `${named} is negative`,
+    "too-many-decimals": `${named} has more than ${rules.decimals} decimals`,
+    "too-large": `${named} is too large`,
   };
   problems.push(messages[reading.problem]);
   return undefined;
@@ -632,7 +731,7 @@ export class PriceListRowCollector {
         this.lineErrors.add(
           lineError(
             row.line,
-            `the supplier SKU ${quote(row.supplierSku)} (minimum quantity ${plainDecimalText(row.minQuantity)}, valid from ${row.validFrom}) is already on line ${earlier.line} with ${difference}.`,
+            `the supplier SKU ${quote(row.supplierSku)} (${columnText(this.context, "supplierSku")}; minimum quantity ${plainDecimalText(row.minQuantity)}, valid from ${row.validFrom}) is already on line ${earlier.line} with ${difference}.`,
           ),
         );
       }
@@ -644,7 +743,7 @@ export class PriceListRowCollector {
       this.lineErrors.add(
         lineError(
           row.line,
-          `the supplier SKU ${quote(row.supplierSku)} is ${fingerprint.item} here but ${first.item} on line ${first.line}; one SKU must always be the same item.`,
+          `the supplier SKU ${quote(row.supplierSku)} (${columnText(this.context, "supplierSku")}) is ${fingerprint.item} here but ${first.item} on line ${first.line}; one SKU must always be the same item.`,
         ),
       );
       return;

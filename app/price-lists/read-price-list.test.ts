@@ -59,12 +59,12 @@ describe("reading a whole price list", () => {
       {
         line: 6,
         message:
-          'Line 6: the AWG size "50" is not an AWG size from 4/0 to 46; the price "-3" is negative.',
+          'Line 6: the price "-3" (column "Preis") is negative; the AWG size "50" (column "Durchmesser") is not an AWG size from 4/0 to 46.',
       },
       {
         line: 7,
         message:
-          'Line 7: the magnet grade "N99" is not a grade we know; check the spelling, or have an admin add the grade first; the minimum quantity "zehn" is not a number.',
+          'Line 7: the minimum quantity "zehn" (column "Mindestmenge") is not a number; the magnet grade "N99" (column "Sorte") is not a grade we know; check the spelling, or have an admin add the grade first.',
       },
     ]);
   });

@@ -72,6 +72,7 @@ function openReading(
 
   const collector = new PriceListRowCollector({
     columns: mapping.columns,
+    headers: opened.layout.headers,
     decimalComma: opened.layout.decimalComma,
     importDay: options.importDay,
     knownGrades: options.knownGrades,
