@@ -1,17 +1,19 @@
 /**
  * Step 2 of a price-list import: one row per column of the file, each with a
- * choice of our fields, and what the mapping still lacks, checked live.
+ * choice of our fields, and what the mapping still lacks, checked live. One
+ * column may feed both SKUs (a file whose item code is our own SKU).
  */
 import {
   PRICE_LIST_FIELDS,
+  sharedColumnFields,
   type PriceListField,
   type PriceListFieldInfo,
 } from "~/price-lists/column-mapping";
 
 export interface MappedColumn {
   header: string;
-  /** Our field, or "" when the column is left out. */
-  field: PriceListField | "";
+  /** Our fields: none when the column is left out, two only for Supplier SKU and Our SKU. */
+  fields: PriceListField[];
   /** Where the choice came from: the supplier's last import, a guess from the header, or the buyer. */
   source: "saved" | "guessed" | "chosen" | "none";
 }
@@ -41,6 +43,12 @@ function requirementText(
   }
 }
 
+/** A choice in a column's list: its fields joined by "+" ("" leaves the column out). */
+const choiceOf = (fields: readonly PriceListField[]) => fields.join("+");
+const fieldsOf = (choice: string) =>
+  choice === "" ? [] : (choice.split("+") as PriceListField[]);
+const bothSkusChoice = choiceOf(sharedColumnFields);
+
 export function ColumnMappingEditor({
   columns,
   sampleRow,
@@ -54,10 +62,12 @@ export function ColumnMappingEditor({
   supplierCurrency: string | null;
   /** What checkColumnMapping says about the current choice; empty when it is complete. */
   messages: string[];
-  onChange: (index: number, field: PriceListField | "") => void;
+  onChange: (index: number, fields: PriceListField[]) => void;
 }) {
-  const hintOf = (field: PriceListField | "") =>
-    PRICE_LIST_FIELDS.find((info) => info.key === field)?.hint;
+  const hintOf = (fields: readonly PriceListField[]) =>
+    fields.length > 1
+      ? "The same code is the supplier's SKU and our catalogue SKU: each row prices that item of our catalogue."
+      : PRICE_LIST_FIELDS.find((info) => info.key === fields[0])?.hint;
   return (
     <div className="space-y-4">
       <div className="panel overflow-x-auto p-0">
@@ -92,9 +102,9 @@ export function ColumnMappingEditor({
                   </label>
                   <select
                     id={`map-column-${index}`}
-                    value={column.field}
+                    value={choiceOf(column.fields)}
                     onChange={(event) =>
-                      onChange(index, event.target.value as PriceListField | "")
+                      onChange(index, fieldsOf(event.target.value))
                     }
                     aria-describedby={`map-column-${index}-note`}
                     className="field-input mt-0"
@@ -112,12 +122,17 @@ export function ColumnMappingEditor({
                         </option>
                       );
                     })}
+                    <option value={bothSkusChoice}>
+                      Supplier SKU and Our SKU (the same code)
+                    </option>
                   </select>
                   <p
                     id={`map-column-${index}-note`}
                     className="mt-1 text-xs text-graphite-500"
                   >
-                    {column.field ? hintOf(column.field) : "Not imported."}
+                    {column.fields.length > 0
+                      ? hintOf(column.fields)
+                      : "Not imported."}
                     {sourceText[column.source] ? (
                       <span
                         className={

@@ -1,7 +1,8 @@
 /**
  * Step 3 of a price-list import: what the dry run found — the counts, the
- * first rows as they will be stored, and the rows that cannot be imported
- * (the first 1,000 of them, with how many more there are).
+ * warnings, the first rows as they will be stored with the catalogue item each
+ * prices, and the rows that cannot be imported (the first 1,000 of them, with
+ * how many more there are).
  */
 import type { ColumnDef } from "@tanstack/react-table";
 import { DataTable } from "~/components/data-table";
@@ -9,6 +10,11 @@ import { formatQuantity } from "~/lib/format";
 import { moreLineErrorsText } from "~/price-lists/line-errors";
 import type { LineError } from "~/price-lists/parse-price-list";
 import type { PriceListRow } from "~/price-lists/price-list-rows";
+import {
+  describeMatch,
+  type PreviewRow,
+} from "~/purchasing/price-import-preview";
+import { ImportWarnings } from "./price-import/import-warnings";
 import type { PriceListCheck } from "./price-list-upload";
 
 function sizeOrGrade(row: PriceListRow): string {
@@ -27,9 +33,31 @@ function money(decimal: string): string {
   });
 }
 
-const rowColumns: ColumnDef<PriceListRow, unknown>[] = [
+function CatalogueItem({ row }: { row: PreviewRow }) {
+  const { match } = row;
+  return (
+    <div>
+      <span className="font-medium">{match.sku}</span>
+      <span
+        className={`block text-xs ${match.newItem ? "font-medium text-caution" : "text-graphite-500"}`}
+      >
+        {match.newItem
+          ? describeMatch(match)
+          : `${match.name} · ${describeMatch(match)}`}
+      </span>
+    </div>
+  );
+}
+
+const rowColumns: ColumnDef<PreviewRow, unknown>[] = [
   { accessorKey: "line", header: "Line", meta: { numeric: true } },
   { accessorKey: "supplierSku", header: "Supplier SKU" },
+  {
+    id: "catalogueItem",
+    header: "Catalogue item",
+    accessorFn: (row) => row.match.sku,
+    cell: ({ row }) => <CatalogueItem row={row.original} />,
+  },
   { accessorKey: "description", header: "Description" },
   { accessorKey: "kind", header: "Kind" },
   { id: "sizeOrGrade", header: "Size or grade", accessorFn: sizeOrGrade },
@@ -133,6 +161,7 @@ export function PriceListCheckResults({ check }: { check: PriceListCheck }) {
           tone="danger"
         />
       </dl>
+      <ImportWarnings warnings={check.warnings} />
       {check.invalidCount > 0 ? (
         <InvalidRowsTable
           invalid={check.invalid}

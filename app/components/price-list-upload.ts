@@ -6,11 +6,13 @@
  */
 import type { ApiAnswer } from "~/lib/api-request";
 import type { LineError } from "~/price-lists/parse-price-list";
-import type { PriceListRow } from "~/price-lists/price-list-rows";
+import type { PreviewRow } from "~/purchasing/price-import-preview";
+import type { PriceImportWarning } from "~/purchasing/price-import-warnings";
 
 /** The dry run's answer (200). */
 export interface PriceListCheck {
-  rows: PriceListRow[];
+  /** The first rows, each with the catalogue item it prices. */
+  rows: PreviewRow[];
   valid: number;
   /** The first 1,000 lines that cannot be imported. */
   invalid: LineError[];
@@ -18,6 +20,8 @@ export interface PriceListCheck {
   invalidCount: number;
   matched: number;
   newItems: number;
+  /** A missing currency rate or metal base: the import goes ahead, but prices will lack something. */
+  warnings: PriceImportWarning[];
 }
 
 /** The commit's answer: 201 with the import, or 200 when the file was imported before. */
@@ -29,6 +33,7 @@ export type PriceListImport =
       fileName: string;
       rows: number;
       newItems: number;
+      warnings: PriceImportWarning[];
     }
   | { alreadyImported: true; importId: number; message: string };
 

@@ -128,7 +128,7 @@ describe("checking a mapping", () => {
     expect(columnTwice).toEqual({
       ok: false,
       messages: [
-        'The column "Unit price" is chosen for Price per unit and Adder per kg; a column can feed one field only.',
+        'The column "Unit price" is chosen for Price per unit and Adder per kg; a column can feed one field only (only Supplier SKU and Our SKU may share a column).',
       ],
     });
   });
@@ -263,6 +263,82 @@ describe("suggesting a mapping", () => {
     );
     expect(suggested).toEqual([
       { header: "Special price", field: "price", source: "saved" },
+    ]);
+  });
+});
+
+describe("one column for the supplier's SKU and ours", () => {
+  const itemCodeHeaders = ["Item code", "Description", "Unit price"];
+  const bothSkus: ColumnMapping = [
+    { header: "Item code", field: "supplierSku" },
+    { header: "Item code", field: "itemSku" },
+    { header: "Unit price", field: "price" },
+  ];
+
+  it("lets one column feed both Supplier SKU and Our SKU", () => {
+    expect(
+      checkColumnMapping(bothSkus, itemCodeHeaders, {
+        supplierCurrency: "EUR",
+      }),
+    ).toEqual({ ok: true, columns: { supplierSku: 0, itemSku: 0, price: 2 } });
+  });
+
+  it("keeps every other rule: another pair on one column, required fields, unknown headers", () => {
+    expect(
+      checkColumnMapping(
+        [...bothSkus, { header: "Unit price", field: "adderPerKg" }],
+        itemCodeHeaders,
+        { supplierCurrency: "EUR" },
+      ),
+    ).toEqual({
+      ok: false,
+      messages: [
+        'The column "Unit price" is chosen for Price per unit and Adder per kg; a column can feed one field only (only Supplier SKU and Our SKU may share a column).',
+      ],
+    });
+    expect(
+      checkColumnMapping(
+        [
+          { header: "Item code", field: "itemSku" },
+          { header: "Item code", field: "description" },
+          { header: "Unit price", field: "price" },
+        ],
+        itemCodeHeaders,
+        { supplierCurrency: "EUR" },
+      ),
+    ).toEqual({
+      ok: false,
+      messages: [
+        'The column "Item code" is chosen for Our SKU and Description; a column can feed one field only (only Supplier SKU and Our SKU may share a column).',
+        "The mapping misses the supplier SKU column.",
+      ],
+    });
+    expect(
+      checkColumnMapping(
+        [
+          { header: "Code", field: "supplierSku" },
+          { header: "Code", field: "itemSku" },
+          { header: "Unit price", field: "price" },
+        ],
+        itemCodeHeaders,
+        { supplierCurrency: "EUR" },
+      ),
+    ).toEqual({
+      ok: false,
+      messages: [
+        'The column "Code" (for Supplier SKU) is not in the file\'s header row.',
+        'The column "Code" (for Our SKU) is not in the file\'s header row.',
+        "The mapping misses the supplier SKU column.",
+      ],
+    });
+  });
+
+  it("offers a saved shared column again for the supplier's next file", () => {
+    expect(suggestMapping(itemCodeHeaders, bothSkus)).toEqual([
+      { header: "Item code", field: "supplierSku", source: "saved" },
+      { header: "Item code", field: "itemSku", source: "saved" },
+      { header: "Description", field: "description", source: "guessed" },
+      { header: "Unit price", field: "price", source: "saved" },
     ]);
   });
 });

@@ -203,13 +203,33 @@ export interface MappingOptions {
   supplierCurrency?: string | null;
 }
 
+/**
+ * The one pair of fields that may read the same column: a file whose item code
+ * is our own SKU gives it as the supplier's SKU too.
+ */
+export const sharedColumnFields: readonly PriceListField[] = [
+  "supplierSku",
+  "itemSku",
+];
+
+/** True when the fields given may read one column together (one field always may). */
+export function mayShareColumn(fields: readonly PriceListField[]): boolean {
+  if (fields.length <= 1) return true;
+  return (
+    new Set(fields).size === fields.length &&
+    fields.every((field) => sharedColumnFields.includes(field))
+  );
+}
+
 export type MappingCheck =
   { ok: true; columns: FieldColumns } | { ok: false; messages: string[] };
 
 /**
  * Checks a mapping against the file's header row and turns it into column
  * indexes. Problems: a header that is not in the file (or is blank), a column
- * chosen twice, a field given two columns, and required fields left unmapped.
+ * chosen for two fields (except Supplier SKU and Our SKU, see
+ * {@link sharedColumnFields}), a field given two columns, and required fields
+ * left unmapped.
  */
 export function checkColumnMapping(
   mapping: ColumnMapping,
@@ -245,9 +265,9 @@ export function checkColumnMapping(
   }
 
   for (const [header, fields] of fieldsByHeader) {
-    if (fields.length > 1) {
+    if (fields.length > 1 && !mayShareColumn(fields)) {
       messages.push(
-        `The column "${header}" is chosen for ${listOf(fields.map(priceListFieldLabel))}; a column can feed one field only.`,
+        `The column "${header}" is chosen for ${listOf(fields.map(priceListFieldLabel))}; a column can feed one field only (only ${listOf(sharedColumnFields.map(priceListFieldLabel))} may share a column).`,
       );
     }
   }
@@ -606,22 +626,25 @@ function matchScore(header: string, field: PriceListField): number {
  * A mapping for a new file. A header that the supplier's saved mapping names
  * exactly keeps its saved field; the other columns are guessed from their
  * header text ("Unit price" → price, "Art. no" → supplier SKU, "Min qty" →
- * minimum quantity). Each field and each column is used at most once; the
+ * minimum quantity). Each field is used at most once, and each column too
+ * (a saved mapping may give one column both SKUs); the
  * best matches are placed first and ties go to the leftmost column.
  */
 export function suggestMapping(
   headers: readonly string[],
   savedMapping?: ColumnMapping | null,
 ): SuggestedColumn[] {
-  const chosen = new Map<number, SuggestedColumn>();
+  const chosen = new Map<number, SuggestedColumn[]>();
   const usedFields = new Set<PriceListField>();
 
   for (const { header, field } of savedMapping ?? []) {
     const index = headers.indexOf(header);
     if (index === -1 || header.trim() === "") continue;
-    if (chosen.has(index) || usedFields.has(field)) continue;
-    if (!isPriceListField(field)) continue;
-    chosen.set(index, { header, field, source: "saved" });
+    if (!isPriceListField(field) || usedFields.has(field)) continue;
+    const sharing = chosen.get(index) ?? [];
+    if (!mayShareColumn([...sharing.map((entry) => entry.field), field]))
+      continue;
+    chosen.set(index, [...sharing, { header, field, source: "saved" }]);
     usedFields.add(field);
   }
 
@@ -643,11 +666,11 @@ export function suggestMapping(
   );
   for (const { index, field } of candidates) {
     if (chosen.has(index) || usedFields.has(field)) continue;
-    chosen.set(index, { header: headers[index]!, field, source: "guessed" });
+    chosen.set(index, [{ header: headers[index]!, field, source: "guessed" }]);
     usedFields.add(field);
   }
 
   return [...chosen.entries()]
     .sort(([a], [b]) => a - b)
-    .map(([, entry]) => entry);
+    .flatMap(([, entries]) => entries);
 }

@@ -10,9 +10,9 @@ import type { PriceListRow } from "./price-list-rows";
 /** How many good rows the preview shows. */
 export const previewRowCount = 20;
 
-export interface PriceListPreview {
+export interface PriceListPreview<Row extends PriceListRow = PriceListRow> {
   /** The first {@link previewRowCount} good rows, in file order. */
-  rows: PriceListRow[];
+  rows: Row[];
   /** How many rows would be imported (exact repeats counted once). */
   valid: number;
   /** The first 1,000 lines that would not be imported, in file order. */
@@ -23,17 +23,19 @@ export interface PriceListPreview {
   invalidTruncated: boolean;
 }
 
-/** Builds a preview row by row, keeping only the rows it shows. */
-export class PriceListPreviewCollector {
-  private readonly shown: PriceListRow[] = [];
+/** Builds a preview row by row, keeping only the rows it shows (a row may carry more, such as its match). */
+export class PriceListPreviewCollector<
+  Row extends PriceListRow = PriceListRow,
+> {
+  private readonly shown: Row[] = [];
   private counted = 0;
 
-  add(row: PriceListRow): void {
+  add(row: Row): void {
     if (this.shown.length < previewRowCount) this.shown.push(row);
     this.counted += 1;
   }
 
-  preview(lineErrors: ListedLineErrors): PriceListPreview {
+  preview(lineErrors: ListedLineErrors): PriceListPreview<Row> {
     const { errors, errorCount } = mergeLineErrors(lineErrors);
     return {
       rows: this.shown,

@@ -14,12 +14,14 @@ import type {
 import { pool } from "~/db/client.server";
 import { ENAMELS } from "~/engineering/reference-data";
 import type { PriceListRow } from "~/price-lists/price-list-rows";
+import type { MatchedBy } from "./price-import-preview";
 
 /** A price row with the catalogue item it belongs to, or the item it creates. */
 export interface MatchedRow {
   row: PriceListRow;
   itemId: number | null;
   newItem: { sku: string; name: string } | null;
+  by: MatchedBy;
 }
 
 export interface PriceImportStart {

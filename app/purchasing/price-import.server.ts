@@ -10,17 +10,21 @@ import { and, eq, inArray } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import {
+  currencyRates,
   items,
   magnetGrades,
+  metalBasePrices,
   magnetItems,
   priceImports,
   supplierItems,
   suppliers,
   wireItems,
 } from "~/db/schema";
+import type { ConductorKey } from "~/engineering/reference-data";
 import {
   columnMappingToFields,
   type ColumnMapping,
+  type ColumnMappingByField,
 } from "~/price-lists/column-mapping";
 import { LineErrorList, mergeLineErrors } from "~/price-lists/line-errors";
 import type { LineError } from "~/price-lists/parse-price-list";
@@ -30,11 +34,18 @@ import {
 } from "~/price-lists/price-list-preview";
 import type { PriceListRow } from "~/price-lists/price-list-rows";
 import { readPriceListInBatches } from "~/price-lists/read-price-list";
+import { parseMoney, parseRate } from "~/pricing/money";
 import { StockError } from "~/stock/stock-errors";
+import {
+  PriceImportWarningCollector,
+  type PriceImportWarning,
+} from "./price-import-warnings";
+import type { PreviewMatch, PreviewRow } from "./price-import-preview";
 import {
   PriceImportWriter,
   type MatchedRow,
 } from "./price-import-writes.server";
+import { companyCurrency } from "./suppliers.server";
 
 export type ImportOutcome =
   | { kind: "refused"; messages: string[] }
@@ -48,9 +59,10 @@ export type ImportOutcome =
     }
   | {
       kind: "preview";
-      preview: PriceListPreview & {
+      preview: PriceListPreview<PreviewRow> & {
         matched: number;
         newItems: number;
+        warnings: PriceImportWarning[];
       };
     }
   | { kind: "already-imported"; importId: number }
@@ -61,6 +73,7 @@ export type ImportOutcome =
       newItems: number;
       supplier: string;
       fileName: string;
+      warnings: PriceImportWarning[];
     };
 
 function newItemSku(supplierId: number, supplierSku: string): string {
@@ -82,7 +95,11 @@ interface RowMatcher {
  * Loads what matching needs (the supplier's known SKUs, catalogue wires and
  * magnets, grade names) once; each row is then matched without a query.
  */
-async function loadRowMatcher(supplierId: number): Promise<RowMatcher> {
+async function loadRowMatcher(
+  supplierId: number,
+  columns: ColumnMappingByField,
+): Promise<RowMatcher> {
+  const columnOf = (header: string | undefined) => `column "${header ?? ""}"`;
   const known = new Map<string, number>();
   for (const mapping of await db
     .select({
@@ -185,17 +202,18 @@ async function loadRowMatcher(supplierId: number): Promise<RowMatcher> {
       if (!item || !item.active)
         return {
           line: row.line,
-          message: `Line ${row.line}: our SKU "${row.itemSku}" is not an active item in the catalogue.`,
+          message: `Line ${row.line}: our SKU "${row.itemSku}" (${columnOf(columns.itemSku)}) is not an active item in the catalogue.`,
         };
       if (item.kind !== row.kind)
         return {
           line: row.line,
-          message: `Line ${row.line}: our SKU "${row.itemSku}" is a ${item.kind} item, but the row is ${row.kind}.`,
+          message: `Line ${row.line}: our SKU "${row.itemSku}" (${columnOf(columns.itemSku)}) is a ${item.kind} item, but the row is ${row.kind}.`,
         };
-      return { row, itemId: item.id, newItem: null };
+      return { row, itemId: item.id, newItem: null, by: "our-sku" };
     }
     const mapped = known.get(row.supplierSku.toLowerCase());
-    if (mapped !== undefined) return { row, itemId: mapped, newItem: null };
+    if (mapped !== undefined)
+      return { row, itemId: mapped, newItem: null, by: "supplier-sku" };
     if (row.kind === "wire") {
       const wire = wiresBySize
         .get(`${row.standard} ${row.size}`)
@@ -204,7 +222,7 @@ async function loadRowMatcher(supplierId: number): Promise<RowMatcher> {
             row.insulation === null || candidate.insulation === row.insulation,
         );
       return wire
-        ? { row, itemId: wire.id, newItem: null }
+        ? { row, itemId: wire.id, newItem: null, by: "wire-size" }
         : {
             row,
             itemId: null,
@@ -212,22 +230,29 @@ async function loadRowMatcher(supplierId: number): Promise<RowMatcher> {
               row,
               row.description || `${row.standard} ${row.size} wire`,
             ),
+            by: "new-item",
           };
     }
     if (row.kind === "magnet") {
       const candidates =
         magnetsByGrade.get(gradeKeys.get(row.gradeMatch) ?? "") ?? [];
       if (candidates.length === 1)
-        return { row, itemId: candidates[0]!, newItem: null };
+        return {
+          row,
+          itemId: candidates[0]!,
+          newItem: null,
+          by: "magnet-grade",
+        };
       return {
         line: row.line,
-        message: `Line ${row.line}: ${candidates.length === 0 ? "no" : `${candidates.length}`} catalogue magnets of grade ${row.grade}; a magnet's shape is not in the price list, so add the item first (or keep one of that grade) and import again.`,
+        message: `Line ${row.line}: ${candidates.length === 0 ? "no" : `${candidates.length}`} catalogue magnets of grade "${row.grade}" (${columnOf(columns.grade)}); a magnet's shape is not in the price list, so add the item first (or keep one of that grade) and import again.`,
       };
     }
     return {
       row,
       itemId: null,
       newItem: newItemFor(row, row.description || row.supplierSku),
+      by: "new-item",
     };
   }
   return {
@@ -265,10 +290,14 @@ export async function importPriceList(input: {
       "supplier",
     );
 
-  const matcher = await loadRowMatcher(supplier.id);
+  const matcher = await loadRowMatcher(
+    supplier.id,
+    columnMappingToFields(input.mapping),
+  );
+  const importDay = input.today ?? new Date().toISOString().slice(0, 10);
   const readOptions = {
     mapping: input.mapping,
-    importDay: input.today ?? new Date().toISOString().slice(0, 10),
+    importDay,
     knownGrades: new Set(
       (
         await db
@@ -288,9 +317,17 @@ export async function importPriceList(input: {
   };
   // Rows that read well but match no catalogue item: listed up to 1,000, all counted.
   const matchErrors = new LineErrorList();
+  const warnings = new PriceImportWarningCollector();
+  const noteForWarnings = (matched: MatchedRow) =>
+    warnings.add(
+      matched.row.currency,
+      matched.row.adderPerKg === null
+        ? null
+        : conductorOfMatch(matched, matcher.conductorOf),
+    );
 
   if (input.dryRun) {
-    const preview = new PriceListPreviewCollector();
+    const preview = new PriceListPreviewCollector<MatchedRow & PriceListRow>();
     let matchedRows = 0;
     const newItemSkus = new Set<string>();
     const reading = await readPriceListInBatches(
@@ -305,19 +342,23 @@ export async function importPriceList(input: {
             matchErrors.add(result);
             continue;
           }
-          preview.add(row);
+          preview.add({ ...row, ...result });
+          noteForWarnings(result);
           if (result.newItem) newItemSkus.add(result.newItem.sku);
           else matchedRows += 1;
         }
       },
     );
     if (!reading.ok) return { kind: "refused", messages: reading.messages };
+    const shown = preview.preview(mergeLineErrors(reading, matchErrors));
     return {
       kind: "preview",
       preview: {
-        ...preview.preview(mergeLineErrors(reading, matchErrors)),
+        ...shown,
+        rows: await withMatches(shown.rows),
         matched: matchedRows,
         newItems: newItemSkus.size,
+        warnings: warnings.warnings(await loadWarningContext(importDay)),
       },
     };
   }
@@ -363,7 +404,10 @@ export async function importPriceList(input: {
         for (const row of rows) {
           const result = matcher.match(row);
           if (isLineError(result)) matchErrors.add(result);
-          else matched.push(result);
+          else {
+            matched.push(result);
+            noteForWarnings(result);
+          }
         }
         goodRows += matched.length;
         await writing;
@@ -400,6 +444,7 @@ export async function importPriceList(input: {
       newItems: written.newItems,
       supplier: supplier.name,
       fileName: input.fileName,
+      warnings: warnings.warnings(await loadWarningContext(importDay)),
     };
   } catch (error) {
     await writing.catch(() => undefined);
@@ -423,4 +468,94 @@ async function previousImportOf(
     )
     .limit(1);
   return previous?.id ?? null;
+}
+
+/** The metal an adder row is priced on: its catalogue wire's, copper for a new wire item (as written). */
+function conductorOfMatch(
+  matched: MatchedRow,
+  conductorOf: ReadonlyMap<number, string>,
+): ConductorKey {
+  const conductor =
+    matched.itemId === null ? undefined : conductorOf.get(matched.itemId);
+  return conductor === "aluminium" ? "aluminium" : "copper";
+}
+
+/**
+ * The previewed rows with the catalogue item each prices, as the fields they had plus
+ * `match`: one query for the (at most 20) items the shown rows matched.
+ */
+async function withMatches(
+  shown: readonly (MatchedRow & PriceListRow)[],
+): Promise<PreviewRow[]> {
+  const itemIds = [...new Set(shown.flatMap((entry) => entry.itemId ?? []))];
+  const found =
+    itemIds.length === 0
+      ? []
+      : await db
+          .select({
+            id: items.id,
+            sku: items.sku,
+            name: items.name,
+            kind: items.kind,
+          })
+          .from(items)
+          .where(inArray(items.id, itemIds));
+  const byId = new Map(found.map((item) => [item.id, item]));
+  return shown.map(({ itemId, newItem, by, row, ...fields }) => {
+    const item = itemId === null ? undefined : byId.get(itemId);
+    const match: PreviewMatch =
+      newItem || !item
+        ? {
+            sku: newItem?.sku ?? "",
+            name: newItem?.name ?? "",
+            kind: row.kind,
+            newItem: true,
+            by,
+          }
+        : {
+            sku: item.sku,
+            name: item.name,
+            kind: item.kind,
+            newItem: false,
+            by,
+          };
+    return { ...(fields as PriceListRow), match };
+  });
+}
+
+/** The rates, metal bases and company currency the import's warnings look at, on the import day. */
+async function loadWarningContext(date: string) {
+  const [rates, bases, currency] = await Promise.all([
+    db
+      .select({
+        currency: currencyRates.currency,
+        rate: currencyRates.rate,
+        validFrom: currencyRates.validFrom,
+      })
+      .from(currencyRates),
+    db
+      .select({
+        conductor: metalBasePrices.conductor,
+        currency: metalBasePrices.currency,
+        pricePerKg: metalBasePrices.pricePerKg,
+        validFrom: metalBasePrices.validFrom,
+      })
+      .from(metalBasePrices),
+    companyCurrency(),
+  ]);
+  return {
+    companyCurrency: currency,
+    date,
+    rates: rates.map((rate) => ({
+      currency: rate.currency,
+      date: rate.validFrom,
+      rate: parseRate(rate.rate),
+    })),
+    bases: bases.map((base) => ({
+      conductor: base.conductor as ConductorKey,
+      currency: base.currency,
+      pricePerKg: parseMoney(base.pricePerKg),
+      validFrom: base.validFrom,
+    })),
+  };
 }

@@ -51,9 +51,12 @@ function uploadedFileName(file: File): string {
 
 /**
  * POST /api/v1/price-lists (buyer, admin), multipart: file, supplier, mapping (JSON: our field → the
- * file's header). ?dryRun=1 → 200 { rows, valid, invalid, invalidCount, invalidTruncated }; otherwise
- * 201 with the import's summary, or 422 with the invalid rows and nothing written. `invalid` lists
- * the first 1,000 lines with errors; `invalidCount` counts them all.
+ * file's header; supplierSku and itemSku may name the same header). ?dryRun=1 → 200 { rows, valid,
+ * invalid, invalidCount, invalidTruncated, matched, newItems, warnings }, each row with `match`: the
+ * catalogue item it prices ({ sku, name, kind, newItem, by }); otherwise 201 with the import's
+ * summary and `warnings`, or 422 with the invalid rows and nothing written. `invalid` lists the first
+ * 1,000 lines with errors; `invalidCount` counts them all. `warnings` ({ kind, currency, conductor?,
+ * message }) name a missing currency rate or metal base; they never stop an import.
  */
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, ["buyer"]);
@@ -164,6 +167,7 @@ export async function action({ request }: Route.ActionArgs) {
             fileName: outcome.fileName,
             rows: outcome.rows,
             newItems: outcome.newItems,
+            warnings: outcome.warnings,
           },
           { status: 201 },
         );

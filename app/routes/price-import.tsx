@@ -11,6 +11,11 @@ import {
   ColumnMappingEditor,
   type MappedColumn,
 } from "~/components/column-mapping-editor";
+import { ImportDone } from "~/components/price-import/import-done";
+import {
+  mappingEntries,
+  suggestColumns,
+} from "~/components/price-import/mapped-columns";
 import {
   InvalidRowsTable,
   PriceListCheckResults,
@@ -32,8 +37,6 @@ import {
 import { formatQuantity } from "~/lib/format";
 import {
   checkColumnMapping,
-  suggestMapping,
-  type ColumnMappingEntry,
   type PriceListField,
 } from "~/price-lists/column-mapping";
 import { listSavedColumnMappings } from "~/purchasing/saved-column-mappings.server";
@@ -159,33 +162,22 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
 
   const supplier = suppliers.find((entry) => String(entry.id) === supplierId);
 
-  /**
-   * Offers a field for each column: what the buyer chose for a column of the
-   * same header before (a corrected file chosen again keeps those choices),
-   * else the supplier's saved mapping or a match on the header's words.
-   */
-  function suggestColumns(
+  const offerColumns = (
     headers: string[],
     forSupplier: string,
     chosenBefore: readonly MappedColumn[] = [],
-  ) {
-    const saved = savedMappings[Number(forSupplier)] ?? null;
-    const suggested = suggestMapping(headers, saved);
+  ) =>
     setColumns(
-      headers.map((header) => {
-        const chosen = chosenBefore.find((entry) => entry.header === header);
-        if (chosen) return chosen;
-        const hit = suggested.find((entry) => entry.header === header);
-        return hit
-          ? { header, field: hit.field, source: hit.source }
-          : { header, field: "", source: "none" };
-      }),
+      suggestColumns(
+        headers,
+        savedMappings[Number(forSupplier)] ?? null,
+        chosenBefore,
+      ),
     );
-  }
 
   function chooseSupplier(id: string) {
     setSupplierId(id);
-    if (reading.state === "read") suggestColumns(reading.headers, id);
+    if (reading.state === "read") offerColumns(reading.headers, id);
   }
 
   async function chooseFile(file: File | undefined) {
@@ -204,21 +196,19 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
       return;
     }
     setReading({ state: "read", token, file, ...result });
-    suggestColumns(result.headers, supplierId, chosenBefore);
+    offerColumns(result.headers, supplierId, chosenBefore);
   }
 
-  function chooseField(index: number, field: PriceListField | "") {
+  function chooseFields(index: number, fields: PriceListField[]) {
     setColumns((current) =>
       current.map((column, at) =>
-        at === index ? { ...column, field, source: "chosen" } : column,
+        at === index ? { ...column, fields, source: "chosen" } : column,
       ),
     );
   }
 
   const headers = reading.state === "read" ? reading.headers : [];
-  const entries: ColumnMappingEntry[] = columns.flatMap((column) =>
-    column.field ? [{ header: column.header, field: column.field }] : [],
-  );
+  const entries = mappingEntries(columns);
   const mappingCheck = checkColumnMapping(entries, headers, {
     supplierCurrency: supplier?.currency ?? null,
   });
@@ -370,7 +360,7 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
               sampleRow={reading.sampleRow}
               supplierCurrency={supplier?.currency ?? null}
               messages={mappingMessages}
-              onChange={chooseField}
+              onChange={chooseFields}
             />
           </>
         ) : (
@@ -469,48 +459,6 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
           </>
         )}
       </section>
-    </div>
-  );
-}
-
-function ImportDone({ result }: { result: PriceListImport }) {
-  const link = `/suppliers/imports?import=${result.importId}`;
-  if (result.alreadyImported)
-    return (
-      <div
-        role="status"
-        className="rounded-md border border-field/40 bg-field/5 px-4 py-3"
-      >
-        <p className="font-medium text-field">
-          Already imported, nothing changed.
-        </p>
-        <p className="mt-1 text-sm text-graphite-700">
-          This supplier&apos;s file was imported before with the same content.{" "}
-          <Link to={link} className="text-copper-700 underline">
-            See that import
-          </Link>
-        </p>
-      </div>
-    );
-  return (
-    <div
-      role="status"
-      className="rounded-md border border-ok/40 bg-ok/10 px-4 py-3"
-    >
-      <p className="font-medium text-ok">
-        Imported {formatQuantity(result.rows, "")} rows from {result.fileName}{" "}
-        for {result.supplier}.
-      </p>
-      <p className="mt-1 text-sm text-graphite-700">
-        {result.newItems === 0
-          ? "Every row matched an existing catalogue item."
-          : result.newItems === 1
-            ? "1 new catalogue item was created."
-            : `${result.newItems} new catalogue items were created.`}{" "}
-        <Link to={link} className="text-copper-700 underline">
-          See the import
-        </Link>
-      </p>
     </div>
   );
 }
