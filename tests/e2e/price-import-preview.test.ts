@@ -3,13 +3,16 @@
  * SKUs, the catalogue item each row matched (or the new item it makes), and the
  * warnings for a currency without a rate and a wire list without a metal base.
  */
-import fs from "node:fs";
-import path from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
 import { sendJson, signIn as signInApi } from "../support/app-client";
-import { launchBrowser, signIn, waitForHydration } from "../support/browser";
+import {
+  launchBrowser,
+  saveScreenshot,
+  signIn,
+  waitForHydration,
+} from "../support/browser";
 import { createSupplier } from "../support/price-list-fixtures";
 import { closeTestDatabase, uniqueCode } from "../support/test-database";
 
@@ -40,17 +43,6 @@ afterAll(async () => {
   await browser?.close();
   await closeTestDatabase();
 });
-
-/** Where the closing note of the work looks for its screenshots. */
-const notesShots = "/work/notes/shots";
-
-async function shot(page: Page, name: string) {
-  if (!fs.existsSync(notesShots)) return;
-  await page.screenshot({
-    path: path.join(notesShots, `${name}.png`),
-    fullPage: true,
-  });
-}
 
 async function openImportPage(page: Page) {
   await page.goto(`${new URL(page.url()).origin}/suppliers/import`);
@@ -123,6 +115,7 @@ describe("the import preview", () => {
       `${shaft}Rotor shaft 17 mm · by our SKU`,
     ]);
     await page.getByRole("button", { name: "Import 2 rows" }).waitFor();
+    await saveScreenshot(page, "price-import-mapping-both-skus");
     await page.close();
   });
 
@@ -157,7 +150,7 @@ describe("the import preview", () => {
     await page
       .getByRole("button", { name: "Import 3 rows", disabled: false })
       .waitFor();
-    await shot(page, "h2-import-preview-matched-skus");
+    await saveScreenshot(page, "price-import-preview-matched-skus");
     await page.close();
   });
 });
