@@ -74,6 +74,7 @@ describe("flashText", () => {
     sku: "CU-050",
     unit: "kg",
     quantity: 4.8,
+    change: 4.8,
     lot: "SP-710",
     location: "RACK-A",
     toLocation: null,
@@ -97,6 +98,31 @@ describe("flashText", () => {
     ).toBe(
       `Transfer recorded: 20${nbsp}pcs of CU-050 at RACK-A → BENCH. On hand now 120${nbsp}pcs.`,
     );
+  });
+
+  it("tells a count's difference and an adjustment with the sign", () => {
+    // The books held 20 pieces, 18 were counted: the difference is −2 (counted − books).
+    expect(
+      flashText("movement-recorded", {
+        ...receipt,
+        type: "count",
+        unit: "pcs",
+        quantity: 2,
+        change: -2,
+        lot: null,
+        onHandAfter: 18,
+      }),
+    ).toBe(
+      `Count recorded: difference −2${nbsp}pcs of CU-050 at RACK-A. On hand now 18${nbsp}pcs.`,
+    );
+    expect(
+      flashText("movement-recorded", {
+        ...receipt,
+        type: "adjustment",
+        quantity: 0.25,
+        change: -0.25,
+      }),
+    ).toMatch(/^Adjustment recorded: −0\.250\u00a0kg of CU-050/);
   });
 
   it("tells a build order's stock and what is still short", () => {

@@ -7,6 +7,7 @@
  */
 import { formatQuantity } from "./format";
 import {
+  formatSignedStockQuantity,
   formatStockQuantity,
   movementTypeLabels,
 } from "~/stock/stock-quantity-text";
@@ -25,6 +26,8 @@ export interface MovementSubject {
   unit: string;
   /** How much moved, without its sign. */
   quantity: number;
+  /** The change of stock at the location, with its sign (a count's difference to the books). */
+  change: number;
   lot: string | null;
   location: string;
   /** Where a transfer went. */
@@ -126,6 +129,14 @@ const heldList = (amounts: StockAmount[]) =>
     )
     .join(", ");
 
+/** A count or an adjustment tells its change with the sign ("difference −2 pcs"); other movements how much moved. */
+const movedAmount = (movement: MovementSubject) =>
+  movement.type === "count"
+    ? `difference ${formatSignedStockQuantity(movement.change, movement.unit)}`
+    : movement.type === "adjustment"
+      ? formatSignedStockQuantity(movement.change, movement.unit)
+      : formatStockQuantity(movement.quantity, movement.unit);
+
 const place = (movement: MovementSubject) =>
   `${movement.lot ? ` lot ${movement.lot}` : ""} at ${movement.location}`;
 
@@ -144,7 +155,7 @@ const texts: {
     "Archived: the item no longer shows in the stock list unless archived items are included.",
   "item-restore": () => "Restored to the stock list.",
   "movement-recorded": (movement) =>
-    `${movementTypeLabels[movement.type]} recorded: ${formatStockQuantity(movement.quantity, movement.unit)} of ${movement.sku}${place(movement)}${movement.toLocation ? ` → ${movement.toLocation}` : ""}. On hand now ${formatStockQuantity(movement.onHandAfter, movement.unit)}.`,
+    `${movementTypeLabels[movement.type]} recorded: ${movedAmount(movement)} of ${movement.sku}${place(movement)}${movement.toLocation ? ` → ${movement.toLocation}` : ""}. On hand now ${formatStockQuantity(movement.onHandAfter, movement.unit)}.`,
   "order-created": () =>
     "Build order made. Reserve its stock when the build is due.",
   "order-reserved": (order) =>

@@ -79,6 +79,7 @@ async function movement(id: number): Promise<MovementSubject | null> {
   return {
     ...row,
     quantity: Math.abs(amount(row.quantity)),
+    change: amount(row.quantity),
     onHandAfter: amount(row.onHandAfter),
   };
 }

@@ -8,6 +8,7 @@ import fs from "node:fs";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
+import { seriousAccessibilityViolations } from "../support/accessibility";
 import { get, sendJson, signIn as signInApi } from "../support/app-client";
 import {
   createPartItem,
@@ -150,6 +151,7 @@ describe("issuing at the store", () => {
       await page.getByRole("radio", { name: /lot SP-OLD/ }).isChecked(),
     ).toBe(true);
     await page.getByLabel("Quantity").fill("0.5");
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.screenshot({
       path: `${shots}/h1-record-build-order-picker.png`,
       fullPage: true,
@@ -202,6 +204,7 @@ describe("receiving at the store", () => {
     await net.waitFor();
     expect(await net.textContent()).toContain("4.800\u00a0kg");
     await page.getByLabel(`Unit cost per kg (${currency})`).waitFor();
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.screenshot({
       path: `${shots}/h1-record-receipt.png`,
       fullPage: true,
