@@ -1,6 +1,9 @@
 import { describe, expect, it } from "vitest";
 import {
+  coilCurrentDensityAPerMm2,
   coilSlotFillFactor,
+  currentDensityWarning,
+  designCheckNames,
   designWarnings,
   magnetTemperatureWarning,
   thermalClassName,
@@ -114,5 +117,66 @@ describe("designWarnings", () => {
     expect(designWarnings({ lines: [line], insulationClassC: null })).toEqual(
       [],
     );
+  });
+});
+
+describe("current density at the rated current (ranges: common practice, from memory)", () => {
+  const wire050 = {
+    ...WIRE_080,
+    sku: "CU-0.50-G2",
+    size: { standard: "IEC" as const, diameterMm: 0.5 },
+  };
+
+  it("is I ÷ (π/4 · d²): 6 A in 0.5 mm copper is 30.56 A/mm² (worked by hand)", () => {
+    // By hand: π · 0.25² = 0.196350 mm²; 6 ÷ 0.196350 = 30.5577 A/mm². GNU units agrees:
+    // units -t '6 A / (pi * (0.25 mm)^2)' 'A/mm^2' → 30.557749
+    expect(
+      coilCurrentDensityAPerMm2(checkFourCoil({ wire: wire050 }), 6),
+    ).toBeCloseTo(30.5577, 4);
+  });
+
+  it("shares the current between strands in hand", () => {
+    // 10 A in 2 × 0.8 mm: 10 ÷ (2 · π · 0.4²) = 10 ÷ 1.005310 = 9.9472 A/mm² (by hand;
+    // units -t '10 A / (2 * pi * (0.4 mm)^2)' 'A/mm^2' → 9.9471839).
+    expect(
+      coilCurrentDensityAPerMm2(checkFourCoil({ strandsInHand: 2 }), 10),
+    ).toBeCloseTo(9.9472, 4);
+  });
+
+  it("is not worked out without a positive current", () => {
+    expect(coilCurrentDensityAPerMm2(checkFourCoil(), 0)).toBeNull();
+    expect(coilCurrentDensityAPerMm2(checkFourCoil(), null)).toBeNull();
+  });
+
+  it("warns above fan cooling at 30.6 A/mm², naming the figure and the practice", () => {
+    const warning = currentDensityWarning(
+      checkFourCoil({ wire: wire050 }),
+      0,
+      6,
+    );
+    expect(warning?.code).toBe("current-density-above-fan-cooling");
+    expect(warning?.message).toContain("30.6 A/mm²");
+    expect(warning?.message).toContain("from memory");
+  });
+
+  it("warns above natural cooling between 6 and 10 A/mm², and not at or below 6", () => {
+    // 0.8 mm: A = 0.502655 mm². 4 A → 7.958 A/mm²; 3 A → 5.968 A/mm² (by hand; GNU units
+    // gives 7.9577472 and 5.9683104 for '4 A / (pi/4 * (0.8 mm)^2)' and the same at 3 A).
+    expect(currentDensityWarning(checkFourCoil(), 0, 4)?.code).toBe(
+      "current-density-above-natural-cooling",
+    );
+    expect(currentDensityWarning(checkFourCoil(), 0, 3)).toBeNull();
+  });
+
+  it("is among the design's warnings when the rated current is given", () => {
+    const warnings = designWarnings({
+      lines: [checkFourCoil({ wire: wire050 })],
+      insulationClassC: 155,
+      ratedCurrentA: 6,
+    });
+    expect(warnings.map((warning) => warning.code)).toEqual([
+      "current-density-above-fan-cooling",
+    ]);
+    expect(designCheckNames[warnings[0]!.code]).toBe("Current density");
   });
 });

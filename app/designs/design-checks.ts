@@ -6,7 +6,11 @@
  *   practice, brief), or beyond the geometric packing limits π/4 and π/√12 (brief), via
  *   the slot-fill module;
  * - a magnet whose operating temperature is above its grade's maximum working temperature:
- *   it may lose magnetisation for good (makers' tables; brief).
+ *   it may lose magnetisation for good (makers' tables; brief);
+ * - a coil whose current density J = I / (strands × bare area) at the rated current is
+ *   above what its cooling usually carries (COMMON PRACTICE, FROM MEMORY: roughly up to
+ *   5–6 A/mm² enclosed with natural cooling, about 10 A/mm² fan-cooled, more only with
+ *   liquid cooling or short duty). No published source was checked for these ranges.
  */
 
 import {
@@ -29,7 +33,32 @@ import {
 export type DesignWarningCode =
   | "wire-class-below-insulation-class"
   | SlotFillWarningCode
-  | "magnet-above-max-working-temperature";
+  | "magnet-above-max-working-temperature"
+  | CurrentDensityWarningCode;
+
+export type CurrentDensityWarningCode =
+  "current-density-above-natural-cooling" | "current-density-above-fan-cooling";
+
+/** Each check's name, as the release confirmation lists the checks still open. */
+export const designCheckNames: Record<DesignWarningCode, string> = {
+  "wire-class-below-insulation-class": "Wire thermal class",
+  "above-random-round-wire-practice": "Slot fill",
+  "above-square-packing-limit": "Slot fill",
+  "above-hexagonal-packing-limit": "Slot fill",
+  "magnet-above-max-working-temperature": "Magnet temperature",
+  "current-density-above-natural-cooling": "Current density",
+  "current-density-above-fan-cooling": "Current density",
+};
+
+/**
+ * Current density a coil's cooling usually carries, A/mm². COMMON PRACTICE, FROM
+ * MEMORY (no published source checked): about 5–6 enclosed with natural cooling, about
+ * 10 fan-cooled; beyond that only with liquid cooling or for short duty.
+ */
+export const currentDensityPractice = {
+  naturalCoolingAPerMm2: 6,
+  fanCooledAPerMm2: 10,
+} as const;
 
 export interface DesignWarning {
   code: DesignWarningCode;
@@ -113,12 +142,61 @@ export function magnetTemperatureWarning(
 }
 
 /**
+ * Current density in the coil's copper at `ratedCurrentA` through the coil, A/mm²: the
+ * strands in hand share the current, so J = I / (strands × π/4 · d²) with d the bare
+ * diameter. Null when the current is not a positive number.
+ */
+export function coilCurrentDensityAPerMm2(
+  line: CoilLine,
+  ratedCurrentA: number | null,
+): number | null {
+  if (ratedCurrentA === null || !Number.isFinite(ratedCurrentA)) return null;
+  if (ratedCurrentA <= 0) return null;
+  const copperMm2 =
+    line.strandsInHand * circleAreaMm2(designWireBareDiameterMm(line.wire));
+  return ratedCurrentA / copperMm2;
+}
+
+const densityText = (value: number) => `${value.toFixed(1)} A/mm²`;
+
+/** Warning when the coil's current density is above natural (or fan) cooling practice, else null. */
+export function currentDensityWarning(
+  line: CoilLine,
+  lineIndex: number,
+  ratedCurrentA: number | null,
+): DesignWarning | null {
+  const density = coilCurrentDensityAPerMm2(line, ratedCurrentA);
+  if (density === null) return null;
+  const { naturalCoolingAPerMm2, fanCooledAPerMm2 } = currentDensityPractice;
+  if (density <= naturalCoolingAPerMm2) return null;
+  const strands =
+    line.strandsInHand > 1 ? ` in ${line.strandsInHand} strands` : "";
+  const at = `Coil line ${lineIndex + 1} (${line.wire.sku}) carries ${densityText(density)} at the rated ${ratedCurrentA} A${strands}`;
+  const practice = `Common practice (from memory): up to about 5–6 A/mm² enclosed with natural cooling, about ${fanCooledAPerMm2} A/mm² fan-cooled, more only with liquid cooling or short duty.`;
+  return density > fanCooledAPerMm2
+    ? {
+        code: "current-density-above-fan-cooling",
+        lineIndex,
+        sku: line.wire.sku,
+        message: `${at}: above what even fan cooling carries. Use thicker wire or more strands in hand, or plan liquid cooling or short duty. ${practice}`,
+      }
+    : {
+        code: "current-density-above-natural-cooling",
+        lineIndex,
+        sku: line.wire.sku,
+        message: `${at}: above natural cooling, it needs a fan. ${practice}`,
+      };
+}
+
+/**
  * Every warning of a design, in line order. `insulationClassC` is the design's insulation
- * class, °C; null skips the wire class check.
+ * class, °C; null skips the wire class check. `ratedCurrentA` is the current through each
+ * coil; null or absent skips the current density check.
  */
 export function designWarnings(input: {
   lines: readonly DesignLine[];
   insulationClassC: number | null;
+  ratedCurrentA?: number | null;
 }): DesignWarning[] {
   const warnings: DesignWarning[] = [];
   input.lines.forEach((line, lineIndex) => {
@@ -133,6 +211,12 @@ export function designWarnings(input: {
       }
       const fillWarning = slotFillDesignWarning(line, lineIndex);
       if (fillWarning) warnings.push(fillWarning);
+      const densityWarning = currentDensityWarning(
+        line,
+        lineIndex,
+        input.ratedCurrentA ?? null,
+      );
+      if (densityWarning) warnings.push(densityWarning);
     } else if (line.kind === "magnet") {
       const temperatureWarning = magnetTemperatureWarning(line, lineIndex);
       if (temperatureWarning) warnings.push(temperatureWarning);
