@@ -50,6 +50,7 @@ describe("accessibility of every page (axe-core)", () => {
       ["/designs", /^\/designs\/\d+\/revisions\/\d+$/],
       ["/build-orders", /^\/build-orders\/\d+$/],
       ["/stock", /^\/stock\/items\/[^/]+$/],
+      ["/suppliers", /^\/suppliers\/\d+$/],
       ["/admin/people", /^\/admin\/people\/[^/]+$/],
     ] as const) {
       await page.goto(`${inject("baseUrl")}${list}`);
@@ -73,5 +74,6 @@ describe("accessibility of every page (axe-core)", () => {
       await visit(path);
     await page.close();
     expect(found).toEqual([]);
-  });
+    // Some twenty pages, each scanned: longer than one test's default minute on a busy machine.
+  }, 180_000);
 });
