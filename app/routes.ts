@@ -21,8 +21,10 @@ export default [
       index("routes/suppliers.tsx"),
       route("import", "routes/price-import.tsx"),
       route("imports", "routes/price-imports.tsx"),
+      route(":supplierId", "routes/supplier.tsx"),
     ]),
     route("prices", "routes/prices.tsx"),
+    route("best-prices", "routes/best-prices.tsx"),
     ...prefix("designs", [
       index("routes/designs.tsx"),
       route(":designId/revisions/:revision", "routes/design-revision.tsx"),
@@ -73,6 +75,7 @@ export default [
     route("locations", "routes/api.v1.locations.ts"),
     route("stock-movements", "routes/api.v1.stock-movements.ts"),
     route("suppliers", "routes/api.v1.suppliers.ts"),
+    route("suppliers/:supplierId", "routes/api.v1.supplier.ts"),
     route("price-lists", "routes/api.v1.price-lists.ts"),
     route("metal-base", "routes/api.v1.metal-base.ts"),
     route("currency-rates", "routes/api.v1.currency-rates.ts"),

@@ -24,6 +24,7 @@ import {
 import { buildOrderRouteRows } from "./route-roles.build-orders";
 import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
+import { supplierRouteRows } from "./route-roles.suppliers";
 import {
   expectedStatus,
   rolePairs,
@@ -42,6 +43,7 @@ const table: Row[] = [
   ...designRouteRows,
   ...buildOrderRouteRows,
   ...insightRouteRows,
+  ...supplierRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",
