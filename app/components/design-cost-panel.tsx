@@ -5,10 +5,13 @@ import type {
   DesignPageData,
   DesignPageLine,
 } from "~/designs/design-page.server";
+import { ESTIMATED_TORQUE_PER_NM_LABEL } from "~/designs/design-costing";
 import { costBasisLabels, type CostQuery } from "~/designs/design-page";
 import { formatQuantity } from "~/lib/format";
+import { countText, perUnitWord, quantityText } from "~/lib/unit-text";
 import { formatMass } from "~/reference/quantity-display";
 import { DataTable } from "./data-table";
+import { costBasisText, PriceBasisNote } from "./design/price-basis-note";
 import { DesignCostSplit } from "./design-cost-split";
 
 type Costing = DesignPageData["costing"];
@@ -20,17 +23,33 @@ const kindNames = { coil: "Coil", magnet: "Magnet", part: "Part" } as const;
 export function perMotorText(line: CostLine): string {
   if (line.unit === "kg" && line.kind === "coil")
     return `${formatMass(line.perMotorQuantity)} drawn${line.massBasis === "bare" ? " (bare conductor)" : ""}`;
-  return formatQuantity(
+  return quantityText(
     line.perMotorQuantity,
     line.unit,
     Number.isInteger(line.perMotorQuantity) ? 0 : 3,
   );
 }
 
-/** Money in the company currency, to the cent (the costing carries 0.0001). */
+/** Money in the company currency, to the cent (the costing carries 0.0001); per a unit: "EUR/piece". */
 export function money(value: number | null, currency: string, per?: string) {
   if (value === null) return "—";
-  return formatQuantity(value, per ? `${currency}/${per}` : currency, 2);
+  return formatQuantity(
+    value,
+    per ? `${currency}/${perUnitWord(per)}` : currency,
+    2,
+  );
+}
+
+/** What "per N·m" is over: the rated torque, or the first-order estimate (labelled so). */
+export function perNmTorqueText(
+  torque: Costing["perNmTorque"],
+  torqueBasis: string,
+): string {
+  if (!torque)
+    return "Give the rated torque, or the air-gap radius and flux density for an estimate, to see it.";
+  return torque.source === "rated"
+    ? `per N·m of rated torque ${formatQuantity(torque.torqueNm, "N·m", 3)}, ${torqueBasis}`
+    : `${ESTIMATED_TORQUE_PER_NM_LABEL}, ${formatQuantity(torque.torqueNm, "N·m", 3)}`;
 }
 
 interface PriceRow {
@@ -113,7 +132,7 @@ export function DesignPriceTable({
   );
   return (
     <DataTable
-      caption="Each line's price per motor and where the price comes from"
+      caption={`Each line's price per motor at the ${costBasisText(costing.basis)}, and where the price comes from`}
       columns={columns}
       rows={rows}
       emptyText="No lines to price yet."
@@ -155,11 +174,9 @@ function Figure({
 /** The costing's headline figures: cost per motor and per N·m, copper loss and the torque estimate. */
 export function DesignCostFigures({
   costing,
-  ratedTorqueNm,
   torqueBasis,
 }: {
   costing: Costing;
-  ratedTorqueNm: number | null;
   torqueBasis: string;
 }) {
   const currency = costing.currency;
@@ -171,11 +188,11 @@ export function DesignCostFigures({
         label="Cost per motor"
         value={money(costing.costPerMotor, currency)}
       >
-        {costing.complete ? (
-          `${formatQuantity(costing.quantity, costing.quantity === 1 ? "motor" : "motors")} · ${costBasisLabels[costing.basis].toLowerCase()}`
-        ) : (
-          <span className="font-medium text-caution">
-            {`Incomplete: ${formatQuantity(unpriced, unpriced === 1 ? "line" : "lines")} without a price ${unpriced === 1 ? "is" : "are"} left out.`}
+        {`for ${countText(costing.quantity, "motor")} `}
+        <PriceBasisNote basis={costing.basis} />
+        {costing.complete ? null : (
+          <span className="block font-medium text-caution">
+            {`Incomplete: ${countText(unpriced, "line")} without a price ${unpriced === 1 ? "is" : "are"} left out.`}
           </span>
         )}
       </Figure>
@@ -183,9 +200,13 @@ export function DesignCostFigures({
         label="Cost per N·m"
         value={money(costing.costPerNm, currency, "N·m")}
       >
-        {ratedTorqueNm === null
-          ? "Give the rated torque to see it."
-          : `rated torque ${formatQuantity(ratedTorqueNm, "N·m", 3)}, ${torqueBasis}`}
+        {perNmTorqueText(costing.perNmTorque, torqueBasis)}
+        {costing.costPerNm === null ? null : (
+          <>
+            {" "}
+            <PriceBasisNote basis={costing.basis} />
+          </>
+        )}
       </Figure>
       <Figure
         label="Copper loss"
@@ -201,9 +222,11 @@ export function DesignCostFigures({
             : formatQuantity(costing.copperLossPerNm, "W/(N·m)", 2)
         }
       >
-        {ratedTorqueNm === null
-          ? "Give the rated torque to see it."
-          : "copper loss ÷ rated torque"}
+        {!costing.perNmTorque
+          ? "Give the rated torque (or the figures for an estimate) to see it."
+          : costing.perNmTorque.source === "rated"
+            ? "copper loss ÷ rated torque"
+            : `copper loss ÷ estimated torque (first-order)`}
       </Figure>
       <Figure
         wide
@@ -297,13 +320,11 @@ export function DesignCostPanel({
   costing,
   query,
   lines,
-  ratedTorqueNm,
   torqueBasis,
 }: {
   costing: Costing;
   query: CostQuery;
   lines: DesignPageLine[];
-  ratedTorqueNm: number | null;
   torqueBasis: string;
 }) {
   return (
@@ -313,16 +334,12 @@ export function DesignCostPanel({
           Cost per motor
         </h2>
         <p className="text-sm text-graphite-500">
-          In {costing.currency}, rounded to the cent for display; prices as of
-          today (UTC).
+          In {costing.currency} at the {costBasisText(costing.basis)}, rounded
+          to the cent for display; prices as of today (UTC).
         </p>
       </div>
       <CostQueryForm query={query} />
-      <DesignCostFigures
-        costing={costing}
-        ratedTorqueNm={ratedTorqueNm}
-        torqueBasis={torqueBasis}
-      />
+      <DesignCostFigures costing={costing} torqueBasis={torqueBasis} />
       <DesignCostSplit split={costing.split} currency={costing.currency} />
       <div className="space-y-2">
         <h3 className="text-sm font-semibold">Prices of the lines</h3>

@@ -103,7 +103,7 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
             field={number.ratedTorqueNm}
             label="Rated torque"
             unit="N·m"
-            hint="For cost per N·m; empty when not known"
+            hint="For cost per N·m; when empty, the first-order estimate stands in (labelled so)"
           />
           <SelectField field={fields.torqueBasis} label="Rated torque is">
             <option value="measured">measured (test data)</option>

@@ -6,6 +6,7 @@ import type {
   DesignPageLine,
 } from "~/designs/design-page.server";
 import { formatQuantity } from "~/lib/format";
+import { countText, quantityText } from "~/lib/unit-text";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
 import type { DesignActionAnswer } from "./design-action-answer";
 import { DataTable } from "./data-table";
@@ -243,16 +244,9 @@ export function CoilLinesTable({
               </div>
               <div className="mt-1 text-xs leading-5">
                 <div>
-                  {formatQuantity(input.turns, "turns")} ×{" "}
-                  {formatQuantity(
-                    input.strandsInHand,
-                    input.strandsInHand === 1 ? "strand" : "strands",
-                  )}{" "}
-                  ·{" "}
-                  {formatQuantity(
-                    input.coilsPerMotor,
-                    input.coilsPerMotor === 1 ? "coil" : "coils",
-                  )}
+                  {countText(input.turns, "turn")} ×{" "}
+                  {countText(input.strandsInHand, "strand")} ·{" "}
+                  {countText(input.coilsPerMotor, "coil")}
                 </div>
                 <div>
                   active {formatQuantity(input.activeLengthMm, "mm", 1)} · end
@@ -427,7 +421,7 @@ export function MagnetLinesTable({
         cell: ({ row }) => {
           const input = row.original.line.input;
           return input.kind === "magnet"
-            ? formatQuantity(input.piecesPerMotor, "pcs")
+            ? quantityText(input.piecesPerMotor, "pcs")
             : null;
         },
       }) as ColumnDef<MagnetRow, unknown>,
@@ -530,7 +524,7 @@ export function PartLinesTable({
         cell: ({ row }) => {
           const { input, unit } = row.original.line;
           return input.kind === "part"
-            ? formatQuantity(
+            ? quantityText(
                 input.quantityPerMotor,
                 unit,
                 Number.isInteger(input.quantityPerMotor) ? 0 : 3,

@@ -19,6 +19,7 @@ import {
   type ItemPricing,
 } from "~/purchasing/item-prices.server";
 import { companyCurrency } from "~/purchasing/suppliers.server";
+import { countText, quantityText } from "~/lib/unit-text";
 import { parseUnitCost, quantityToNumber } from "~/stock/decimal-amounts";
 import { coilLineFigures } from "./coil-line-figures";
 import { designWarnings } from "./design-checks";
@@ -33,6 +34,15 @@ import { estimateTorque, TORQUE_ESTIMATE_LABEL } from "./torque-estimate";
 
 export const costingBases = ["best-price", "stock-average"] as const;
 export type CostingBasis = (typeof costingBases)[number];
+
+/** A stock quantity (thousandths) as it reads in a price source: "2 pieces", "0.031 kg". */
+function stockQuantityText(quantity: bigint, unit: string): string {
+  const value = quantityToNumber(quantity);
+  return quantityText(value, unit, Number.isInteger(value) ? 0 : 3).replace(
+    /\u00a0/g,
+    " ",
+  );
+}
 
 const optionalNumber = (value: string | null) =>
   value === null ? null : Number(value);
@@ -87,7 +97,7 @@ function bestPriceFor(
       .reduce((a, b) => (b < a ? b : a));
     if (smallestBreak > quantity) {
       best = cheapestAt(smallestBreak);
-      note = `, priced at the minimum order of ${quantityToNumber(smallestBreak)} ${pricing.unit}`;
+      note = `, priced at the minimum order of ${stockQuantityText(smallestBreak, pricing.unit)}`;
     }
   }
   if (!best) return null;
@@ -97,7 +107,7 @@ function bestPriceFor(
       : ` (adder ${formatMoneyText(best.adderPerKg)} + ${best.metalBase?.conductor ?? "metal"} base ${formatMoneyText(best.metalBase?.pricePerKg ?? 0n)} ${best.currency}/kg)`;
   return {
     unitPrice: best.landedUnitPrice,
-    source: `best price for ${quantityToNumber(quantity)} ${pricing.unit} (${motors} motors${note}): ${best.supplier} ${best.supplierSku}${adder}, import ${best.sourceLine.importId} line ${best.sourceLine.line}`,
+    source: `best price for ${stockQuantityText(quantity, pricing.unit)} (${countText(motors, "motor")}${note}): ${best.supplier} ${best.supplierSku}${adder}, import ${best.sourceLine.importId} line ${best.sourceLine.line}`,
   };
 }
 
@@ -198,14 +208,6 @@ export async function costRevision(input: {
   ]);
   const ratedTorqueNm = optionalNumber(revision.ratedTorqueNm);
   const ratedCurrentA = Number(revision.ratedCurrentA);
-  const costing = costDesign({
-    lines,
-    quantity: input.quantity,
-    currency,
-    prices,
-    ratedTorqueNm,
-  });
-
   const coils = lines.flatMap((line, index) =>
     line.kind === "coil"
       ? [
@@ -233,6 +235,16 @@ export async function costRevision(input: {
           poleCoverage: optionalNumber(revision.poleCoverage),
         })
       : null;
+  // Without a rated torque, "per N·m" is over the first-order estimate (labelled so).
+  const costing = costDesign({
+    lines,
+    quantity: input.quantity,
+    currency,
+    prices,
+    ratedTorqueNm,
+    estimatedTorqueNm: torqueEstimate?.torqueNm ?? null,
+  });
+  const perNmTorqueNm = costing.perNmTorque?.torqueNm ?? null;
 
   return {
     ...designCostingJson(costing),
@@ -240,9 +252,7 @@ export async function costRevision(input: {
     torqueBasis: revision.torqueBasis,
     copperLossW,
     copperLossPerNm:
-      ratedTorqueNm !== null && ratedTorqueNm > 0
-        ? copperLossW / ratedTorqueNm
-        : null,
+      perNmTorqueNm === null ? null : copperLossW / perNmTorqueNm,
     torqueEstimate: torqueEstimate ?? {
       label: TORQUE_ESTIMATE_LABEL,
       missing:
@@ -264,6 +274,7 @@ export async function costRevision(input: {
     warnings: designWarnings({
       lines,
       insulationClassC: revision.insulationClassC,
+      ratedCurrentA,
     }).map(({ code, lineIndex, sku, message }) => ({
       code,
       line: lineIndex + 1,

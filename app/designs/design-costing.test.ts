@@ -11,6 +11,7 @@ import {
   costDesign,
   costPerNewtonMetre,
   designCostingJson,
+  perNmTorque,
   requiredStockQuantity,
   type DesignCostingInput,
   type DesignCostSplit,
@@ -166,6 +167,32 @@ describe("a design with wire, magnets and parts (worked by hand)", () => {
     const result = costing(lines, prices, { ratedTorqueNm: 2 });
     expect(result.ratedTorqueNm).toBe(2);
     expect(money(result.costPerNm)).toBe("8.7928");
+  });
+
+  it("without a rated torque, takes cost per N·m over the first-order estimate and says so", () => {
+    // 17.5855 / 0.5 = 35.171 exactly (by hand).
+    const estimated = costing(lines, prices, { estimatedTorqueNm: 0.5 });
+    expect(estimated.ratedTorqueNm).toBeNull();
+    expect(estimated.perNmTorque).toEqual({
+      torqueNm: 0.5,
+      source: "estimated",
+    });
+    expect(money(estimated.costPerNm)).toBe("35.1710");
+    expect(designCostingJson(estimated).perNmTorque?.source).toBe("estimated");
+    // A rated torque, when given, wins over the estimate.
+    const rated = costing(lines, prices, {
+      ratedTorqueNm: 2,
+      estimatedTorqueNm: 0.5,
+    });
+    expect(rated.perNmTorque).toEqual({ torqueNm: 2, source: "rated" });
+    expect(money(rated.costPerNm)).toBe("8.7928");
+  });
+
+  it("has no torque to divide by when neither is a positive number", () => {
+    expect(perNmTorque(null, null)).toBeNull();
+    expect(perNmTorque(0, 0)).toBeNull();
+    expect(perNmTorque(null, Number.NaN)).toBeNull();
+    expect(perNmTorque(0, 1.2)).toEqual({ torqueNm: 1.2, source: "estimated" });
   });
 
   it("a new metal base moves the copper lines only", () => {

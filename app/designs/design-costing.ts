@@ -57,6 +57,40 @@ export interface DesignCostingInput {
   prices: ReadonlyMap<number, ItemUnitPrice>;
   /** Rated torque of one motor, N·m (measured, or estimated); null when not known. */
   ratedTorqueNm: number | null;
+  /**
+   * The first-order torque estimate, N·m; cost per N·m uses it when no rated torque is
+   * given, and says so (`perNmTorque.source` "estimated").
+   */
+  estimatedTorqueNm?: number | null;
+}
+
+/** The torque cost per N·m is taken over, and where it comes from. */
+export interface PerNmTorque {
+  torqueNm: number;
+  /** "rated": the revision's rated torque; "estimated": the first-order estimate. */
+  source: "rated" | "estimated";
+}
+
+/** How a cost per N·m over an estimated torque is labelled wherever it is shown. */
+export const ESTIMATED_TORQUE_PER_NM_LABEL =
+  "per N·m of estimated torque (first-order)";
+
+const usableTorque = (value: number | null | undefined): value is number =>
+  value !== null && value !== undefined && Number.isFinite(value) && value > 0;
+
+/**
+ * The torque "per N·m" figures divide by: the rated torque when given (> 0), else the
+ * first-order estimate when there is one (> 0), else null.
+ */
+export function perNmTorque(
+  ratedTorqueNm: number | null,
+  estimatedTorqueNm: number | null | undefined,
+): PerNmTorque | null {
+  if (usableTorque(ratedTorqueNm))
+    return { torqueNm: ratedTorqueNm, source: "rated" };
+  if (usableTorque(estimatedTorqueNm))
+    return { torqueNm: estimatedTorqueNm, source: "estimated" };
+  return null;
 }
 
 /** Cost of one motor by where the money goes, ten-thousandths. Adds up to costPerMotor exactly. */
@@ -90,7 +124,9 @@ export interface DesignCosting {
   /** Σ of the priced line costs, ten-thousandths. */
   costPerMotor: MoneyAmount;
   ratedTorqueNm: number | null;
-  /** costPerMotor ÷ ratedTorqueNm, half away from zero to 0.0001; null when torque is missing or ≤ 0. */
+  /** The torque cost per N·m is over: rated, else the estimate; null when neither. */
+  perNmTorque: PerNmTorque | null;
+  /** costPerMotor ÷ perNmTorque, half away from zero to 0.0001; null without a torque. */
   costPerNm: MoneyAmount | null;
   split: DesignCostSplit;
   lines: CostedDesignLine[];
@@ -236,12 +272,14 @@ export function costDesign(input: DesignCostingInput): DesignCosting {
     });
   }
 
+  const torque = perNmTorque(input.ratedTorqueNm, input.estimatedTorqueNm);
   return {
     quantity: input.quantity,
     currency: input.currency,
     costPerMotor,
     ratedTorqueNm: input.ratedTorqueNm,
-    costPerNm: costPerNewtonMetre(costPerMotor, input.ratedTorqueNm),
+    perNmTorque: torque,
+    costPerNm: costPerNewtonMetre(costPerMotor, torque?.torqueNm ?? null),
     split,
     lines,
     unpriced,
@@ -280,7 +318,8 @@ function moneyNumberOrNull(amount: MoneyAmount | null): number | null {
  * The costing as the API returns it: `{ quantity, currency, costPerMotor, ratedTorqueNm,
  * costPerNm, split, lines: [{ kind, sku, perMotorQuantity, unit, unitPrice, priceSource,
  * cost }] }` with money as JSON numbers to 0.0001 (rounded to cents only at display),
- * plus `complete`, `unpriced` and each line's `massBasis`.
+ * plus `complete`, `unpriced`, each line's `massBasis` and `perNmTorque` (the torque
+ * cost per N·m is over: `{ torqueNm, source: "rated" | "estimated" }`, or null).
  */
 export function designCostingJson(costing: DesignCosting) {
   return {
@@ -288,6 +327,7 @@ export function designCostingJson(costing: DesignCosting) {
     currency: costing.currency,
     costPerMotor: moneyNumber(costing.costPerMotor),
     ratedTorqueNm: costing.ratedTorqueNm,
+    perNmTorque: costing.perNmTorque,
     costPerNm: moneyNumberOrNull(costing.costPerNm),
     split: {
       activeCopper: moneyNumber(costing.split.activeCopper),

@@ -57,6 +57,8 @@ import {
   formatStockQuantity,
   formatUnitCost,
 } from "~/stock/stock-quantity-text";
+import { PriceBasisNote } from "~/components/design/price-basis-note";
+import { countText } from "~/lib/unit-text";
 
 function orderIdOf(value: string | undefined): number {
   const id = Number(value);
@@ -512,7 +514,7 @@ export default function BuildOrder({
       <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-4">
         <SummaryFigure
           label="Motors"
-          value={formatQuantity(order.quantity, "motors")}
+          value={countText(order.quantity, "motor")}
           emphasis
         />
         <SummaryFigure
@@ -524,6 +526,11 @@ export default function BuildOrder({
           value={
             <>
               {formatMoney(order.costs.plannedPerMotor)} {order.currency}
+              <PriceBasisNote
+                basis="stock-average"
+                after=" when the order was made"
+                className="block"
+              />
               {order.costs.plannedComplete ? null : (
                 <span className="block text-xs text-graphite-500">
                   some items had no cost yet
@@ -581,8 +588,9 @@ export default function BuildOrder({
                 Total planned{" "}
                 <strong>
                   {formatMoney(order.costs.plannedTotal)} {order.currency}
-                </strong>
-                , issued{" "}
+                </strong>{" "}
+                at the moving average cost of stock when the order was made,
+                issued{" "}
                 <strong>
                   {formatMoney(order.costs.actualTotal)} {order.currency}
                 </strong>{" "}

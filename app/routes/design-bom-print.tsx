@@ -24,6 +24,7 @@ import { costingDay, loadDesignPage } from "~/designs/design-page.server";
 import { designParams } from "~/designs/design-params";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
+import { countText, quantityText } from "~/lib/unit-text";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   await requireUser(request);
@@ -96,10 +97,10 @@ function bomColumns(currency: string, quantity: number) {
     }),
     bomColumn.display({
       id: "forBuild",
-      header: `For ${formatQuantity(quantity, quantity === 1 ? "motor" : "motors")}`,
+      header: `For ${countText(quantity, "motor")}`,
       meta: { numeric: true },
       cell: ({ row }) =>
-        formatQuantity(
+        quantityText(
           row.original.forBuild,
           row.original.line.unit,
           row.original.line.unit === "pcs" ? 0 : 3,
@@ -152,9 +153,9 @@ const coilColumns = [
           <div className="font-medium">{row.original.itemName}</div>
           {input.kind === "coil" ? (
             <div className="text-xs text-graphite-700">
-              {formatQuantity(input.turns, "turns")} ×{" "}
+              {countText(input.turns, "turn")} ×{" "}
               {formatQuantity(input.strandsInHand, "in hand")} ·{" "}
-              {formatQuantity(input.coilsPerMotor, "coils")} · active{" "}
+              {countText(input.coilsPerMotor, "coil")} · active{" "}
               {formatQuantity(input.activeLengthMm, "mm", 1)} · end turn{" "}
               {formatQuantity(input.endTurnLengthMm, "mm", 1)} · leads{" "}
               {formatQuantity(input.leadLengthMm, "mm", 0)} · scrap{" "}
@@ -264,13 +265,9 @@ export default function DesignBomPrint({ loaderData }: Route.ComponentProps) {
           {revision.status === "released"
             ? `released ${formatDateTime(revision.releasedAt)}`
             : "DRAFT: not released, may still change"}{" "}
-          · costed for{" "}
-          {formatQuantity(
-            costing.quantity,
-            costing.quantity === 1 ? "motor" : "motors",
-          )}{" "}
-          at the {costBasisLabels[costing.basis].toLowerCase()}, prices of {day}{" "}
-          (UTC), in {costing.currency}
+          · costed for {countText(costing.quantity, "motor")} at the{" "}
+          {costBasisLabels[costing.basis].toLowerCase()}, prices of {day} (UTC),
+          in {costing.currency}
         </p>
         {revision.description ? (
           <p className="mt-2 text-sm">{revision.description}</p>
@@ -323,7 +320,6 @@ export default function DesignBomPrint({ loaderData }: Route.ComponentProps) {
         </h2>
         <DesignCostFigures
           costing={costing}
-          ratedTorqueNm={revision.ratedTorqueNm}
           torqueBasis={revision.torqueBasis}
         />
         <DesignCostSplit

@@ -3,10 +3,8 @@ import type { Submission } from "@conform-to/react";
 import { useCallback, useMemo, useRef, useState } from "react";
 import {
   data,
-  Form,
   Link,
   redirect,
-  useFetcher,
   useFetchers,
   type ShouldRevalidateFunctionArgs,
 } from "react-router";
@@ -14,11 +12,18 @@ import type { Route } from "./+types/design-revision";
 import { requireRole, requireUser } from "~/auth/guard.server";
 import type { DesignActionAnswer } from "~/components/design-action-answer";
 import { DesignCostPanel, money } from "~/components/design-cost-panel";
+import { costBasisText } from "~/components/design/price-basis-note";
 import {
   DesignFieldsForm,
   DesignFieldsSummary,
 } from "~/components/design-fields-form";
 import { DesignInsulationCaution } from "~/components/design-insulation-caution";
+import {
+  CreateBuildOrderForm,
+  NewRevisionButton,
+  ReleaseControl,
+  StatusMark,
+} from "~/components/design/revision-actions";
 import {
   DesignLineEditor,
   type LineKind,
@@ -74,6 +79,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     ...page,
     costQuery: query,
     canEdit: userHasRole(user, ["builder"]),
+    // The build-order list's creation rule (its loader and action).
+    canCreateBuildOrder: userHasRole(user, ["builder"]),
   };
 }
 
@@ -287,91 +294,6 @@ export const meta: Route.MetaFunction = ({ data: loaderData }) => [
 
 type LoaderData = Route.ComponentProps["loaderData"];
 
-function StatusMark({ status }: { status: string }) {
-  return status === "released" ? (
-    <span className="inline-flex items-center gap-1 rounded-full border border-graphite-500 bg-graphite-100 px-2 py-0.5 text-xs font-semibold text-graphite-800">
-      <svg viewBox="0 0 12 12" aria-hidden="true" className="h-3 w-3">
-        <rect x="2" y="5.5" width="8" height="5.5" rx="1" fill="currentColor" />
-        <path
-          d="M3.8 5.5V4a2.2 2.2 0 0 1 4.4 0v1.5"
-          fill="none"
-          stroke="currentColor"
-          strokeWidth="1.3"
-        />
-      </svg>
-      Released
-    </span>
-  ) : (
-    <span className="inline-flex items-center gap-1 rounded-full border border-dashed border-copper-500 bg-copper-50 px-2 py-0.5 text-xs font-semibold text-copper-700">
-      Draft
-    </span>
-  );
-}
-
-/** Release in two steps: it cannot be undone. Goes through a fetcher: the page turns read-only in place. */
-function ReleaseControl({ revision }: { revision: number }) {
-  const fetcher = useFetcher<DesignActionAnswer>();
-  const [asking, setAsking] = useState(false);
-  const refused =
-    fetcher.state === "idle" && fetcher.data && !fetcher.data.ok
-      ? fetcher.data.message
-      : null;
-  return (
-    <div className="space-y-2">
-      {asking ? (
-        <fetcher.Form
-          method="post"
-          className="flex flex-wrap items-center gap-2 rounded-md border border-graphite-300 bg-sheet px-3 py-2"
-        >
-          <input type="hidden" name="intent" value="release" />
-          <span className="text-sm">
-            Lock revision {revision} for good? Build orders use released
-            revisions only.
-          </span>
-          <button
-            type="submit"
-            className="button-quiet border-graphite-800 font-semibold"
-            disabled={fetcher.state !== "idle"}
-          >
-            {fetcher.state !== "idle" ? "Releasing…" : "Release for good"}
-          </button>
-          <button
-            type="button"
-            className="button-quiet"
-            onClick={() => setAsking(false)}
-          >
-            Keep editing
-          </button>
-        </fetcher.Form>
-      ) : (
-        <button
-          type="button"
-          className="button-quiet"
-          onClick={() => setAsking(true)}
-        >
-          {`Release revision ${revision}…`}
-        </button>
-      )}
-      {refused ? (
-        <p role="alert" className="max-w-md text-sm text-danger">
-          {refused}
-        </p>
-      ) : null}
-    </div>
-  );
-}
-
-function NewRevisionButton({ next }: { next: number }) {
-  return (
-    <Form method="post">
-      <input type="hidden" name="intent" value="new-revision" />
-      <button type="submit" className="button-primary">
-        {`Start revision ${next}`}
-      </button>
-    </Form>
-  );
-}
-
 /** A coil line's figures as last saved, beside its editor. */
 function EditedLineFigures({
   loaderData,
@@ -413,7 +335,10 @@ function EditedLineFigures({
       "Line cost per motor",
       cost.cost === null ? "no price" : money(cost.cost, costing.currency),
     ]);
-  rows.push(["Cost per motor", money(costing.costPerMotor, costing.currency)]);
+  rows.push([
+    `Cost per motor, at the ${costBasisText(costing.basis)}`,
+    money(costing.costPerMotor, costing.currency),
+  ]);
   return (
     <div className="rounded-md border border-rule bg-white/70 p-3">
       <p className="mb-1 text-xs font-semibold uppercase tracking-wide text-graphite-500">
@@ -476,8 +401,15 @@ export default function DesignRevisionPage({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { revision, revisions, lines, costing, costQuery, canEdit } =
-    loaderData;
+  const {
+    revision,
+    revisions,
+    lines,
+    costing,
+    costQuery,
+    canEdit,
+    canCreateBuildOrder,
+  } = loaderData;
   const draft = revision.status === "draft";
   const editable = canEdit && draft;
   const latest = revisions[0]?.revision ?? revision.revision;
@@ -607,7 +539,19 @@ export default function DesignRevisionPage({
             <Link to={`${base}/print${query}`} className="button-quiet">
               Printable BOM
             </Link>
-            {editable ? <ReleaseControl revision={revision.revision} /> : null}
+            {editable ? (
+              <ReleaseControl
+                revision={revision.revision}
+                warnings={costing.warnings}
+              />
+            ) : null}
+            {canCreateBuildOrder && !draft ? (
+              <CreateBuildOrderForm
+                designId={revision.designId}
+                revision={revision.revision}
+                quantity={costQuery.quantity}
+              />
+            ) : null}
             {canEdit && !draft && revision.revision === latest ? (
               <NewRevisionButton next={latest + 1} />
             ) : null}
@@ -724,7 +668,6 @@ export default function DesignRevisionPage({
         costing={costing}
         query={costQuery}
         lines={lines}
-        ratedTorqueNm={revision.ratedTorqueNm}
         torqueBasis={revision.torqueBasis}
       />
     </div>

@@ -20,6 +20,7 @@ import { formatQuantity } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { isStockError } from "~/stock/stock-errors";
+import { countText } from "~/lib/unit-text";
 
 const designsPerPage = 25;
 
@@ -168,7 +169,7 @@ export default function Designs({
         <p className="mb-2 text-sm text-graphite-500">
           {total === 0
             ? "No designs yet."
-            : `${formatQuantity(total, total === 1 ? "design" : "designs")}, by name`}
+            : `${countText(total, "design")}, by name`}
         </p>
         <DataTable
           caption="Designs with their revisions"
