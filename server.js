@@ -4,6 +4,9 @@ import express from "express";
 
 const developing = process.env.NODE_ENV === "development";
 const port = Number.parseInt(process.env.PORT || "3000", 10);
+// Every interface by default, as a deployment behind a proxy or in a container
+// needs; `npm start` and `npm run dev` pass HOST=127.0.0.1 unless HOST is set
+// (scripts/lib/serve-app.ts), so a laptop serves itself only.
 const host = process.env.HOST || "0.0.0.0";
 
 const app = express();
@@ -51,7 +54,10 @@ if (developing) {
 }
 
 const server = app.listen(port, host, () => {
-  console.log(`[turnledger] serving http://localhost:${port}`);
+  const where = ["0.0.0.0", "::"].includes(host)
+    ? `every interface, port ${port}`
+    : `${host.includes(":") ? `[${host}]` : host}:${port}`;
+  console.log(`[turnledger] listening on ${where}`);
 });
 
 for (const signal of ["SIGINT", "SIGTERM"]) {

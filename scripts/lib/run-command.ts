@@ -21,6 +21,37 @@ export function runCommand(
   });
 }
 
+/**
+ * Runs a command to completion with its output kept back (a build's hundreds
+ * of file sizes); throws when it fails, with that output in the error, so the
+ * reason is shown only when there is one.
+ */
+export function runCommandQuietly(
+  command: string,
+  args: string[],
+  options: SpawnOptions = {},
+): Promise<void> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(command, args, {
+      ...options,
+      stdio: ["ignore", "pipe", "pipe"],
+    });
+    let output = "";
+    child.stdout?.on("data", (chunk: Buffer) => (output += chunk));
+    child.stderr?.on("data", (chunk: Buffer) => (output += chunk));
+    child.on("error", reject);
+    child.on("exit", (code, signal) => {
+      if (code === 0) resolve();
+      else
+        reject(
+          new Error(
+            `${command} ${args.join(" ")} failed (${signal ?? `exit ${code}`}). Its output:\n${output.trimEnd()}`,
+          ),
+        );
+    });
+  });
+}
+
 /** The absolute path of a program on PATH (or in the sbin folders), or null. */
 export function findProgram(name: string): string | null {
   const searchPath = [
