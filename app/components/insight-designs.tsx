@@ -10,17 +10,33 @@ import { Form, Link, useNavigation } from "react-router";
 import { DataTable } from "~/components/data-table";
 import type { InsightLoaderData } from "~/insight/insight-page.server";
 import type { DesignInsight } from "~/insight/design-insight.server";
-import { moneyChange, moneyFromJson } from "~/insight/design-insight";
+import {
+  moneyChange,
+  moneyFromJson,
+  rankByCostPerNm,
+  unpricedText,
+} from "~/insight/design-insight";
+import { ESTIMATED_TORQUE_PER_NM_LABEL } from "~/designs/design-costing";
+import { costBasisLabels } from "~/designs/design-page";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { formatMoney } from "~/pricing/money";
+import { costBasisText, PriceBasisNote } from "./design/price-basis-note";
 import { InsightCostChart } from "./insight-cost-chart";
 import { splitParts, Swatch } from "./insight-patterns";
+import { countText } from "~/lib/unit-text";
 
 export const whatIfFormId = "insight-what-if";
 
 type Data = Pick<
   InsightLoaderData,
-  "designs" | "bases" | "fields" | "errors" | "whatIf" | "quantity" | "today"
+  | "designs"
+  | "bases"
+  | "fields"
+  | "errors"
+  | "whatIf"
+  | "quantity"
+  | "basis"
+  | "today"
 >;
 
 /** Money exactly as the costing gives it, rounded to cents only here: "12.34 EUR". */
@@ -93,6 +109,7 @@ function pageHref(data: Data, page: number): string {
   if (fields.copperBase) params.set("copperBase", fields.copperBase);
   if (fields.aluminiumBase) params.set("aluminiumBase", fields.aluminiumBase);
   if (fields.date) params.set("date", fields.date);
+  if (fields.basis) params.set("basis", fields.basis);
   for (const [id, value] of Object.entries(fields.endTurn))
     if (value) params.set(`endTurn.${id}`, value);
   params.set("page", String(page));
@@ -134,7 +151,11 @@ function splitColumns() {
       id: "total",
       header: `Total`,
       cell: ({ row }) =>
-        row.original.costPerNm === null ? (
+        !row.original.complete ? (
+          <span className="text-xs text-caution">
+            {unpricedText(row.original.unpriced.length)}
+          </span>
+        ) : row.original.costPerNm === null ? (
           "—"
         ) : (
           <span className="font-semibold">
@@ -179,7 +200,16 @@ function designColumns(data: Data) {
       header: "Rated torque",
       cell: ({ row }) =>
         row.original.ratedTorqueNm === null ? (
-          <span className="text-graphite-500">not given</span>
+          <span className="text-graphite-500">
+            not given
+            {row.original.perNmTorque?.source === "estimated" ? (
+              <span className="block text-xs whitespace-nowrap">
+                estimate{" "}
+                {formatQuantity(row.original.perNmTorque.torqueNm, "N·m", 3)}{" "}
+                (first-order)
+              </span>
+            ) : null}
+          </span>
         ) : (
           <span className="whitespace-nowrap">
             {formatQuantity(row.original.ratedTorqueNm, "N·m", 3)}
@@ -192,7 +222,12 @@ function designColumns(data: Data) {
     }),
     column.display({
       id: "costPerMotor",
-      header: "Cost per motor",
+      header: () => (
+        <span>
+          Cost per motor
+          <PriceBasisNote basis={data.basis} className="block" />
+        </span>
+      ),
       cell: ({ row }) => (
         <span>
           <span className="whitespace-nowrap">
@@ -200,7 +235,7 @@ function designColumns(data: Data) {
           </span>
           {row.original.complete ? null : (
             <span className="ml-auto block max-w-48 text-xs text-caution">
-              incomplete, no price for{" "}
+              {unpricedText(row.original.unpriced.length)}:{" "}
               {row.original.unpriced.map((line) => line.sku).join(", ")}
             </span>
           )}
@@ -210,13 +245,25 @@ function designColumns(data: Data) {
     }),
     column.display({
       id: "costPerNm",
-      header: "Cost per N·m",
+      header: () => (
+        <span>
+          Cost per N·m
+          <PriceBasisNote basis={data.basis} className="block" />
+        </span>
+      ),
       cell: ({ row }) =>
         row.original.costPerNm === null ? (
-          <span className="text-graphite-500">no rated torque</span>
+          <span className="text-graphite-500">no torque</span>
         ) : (
-          <span className="font-semibold whitespace-nowrap">
-            {money(row.original.costPerNm, currency, "N·m")}
+          <span>
+            <span className="font-semibold whitespace-nowrap">
+              {money(row.original.costPerNm, currency, "N·m")}
+            </span>
+            {row.original.perNmTorque?.source === "estimated" ? (
+              <span className="ml-auto block max-w-40 text-xs text-graphite-500">
+                {ESTIMATED_TORQUE_PER_NM_LABEL}
+              </span>
+            ) : null}
           </span>
         ),
       meta: { numeric: true },
@@ -306,6 +353,55 @@ function designColumns(data: Data) {
   ];
 }
 
+/**
+ * The designs the ranking leaves out, set apart below the chart: with lines unpriced
+ * their cost is too low to compare; without a torque there is no cost per N·m.
+ */
+function NotRanked({
+  incomplete,
+  withoutTorque,
+  currency,
+}: {
+  incomplete: DesignInsight[];
+  withoutTorque: DesignInsight[];
+  currency: string;
+}) {
+  if (incomplete.length === 0 && withoutTorque.length === 0) return null;
+  return (
+    <div className="mt-3 border-t border-rule pt-2 text-sm">
+      <h4 className="text-xs font-semibold tracking-wide text-graphite-500 uppercase">
+        Not ranked
+      </h4>
+      <ul aria-label="Designs not ranked" className="mt-1 space-y-1">
+        {incomplete.map((design) => (
+          <li key={design.designId}>
+            <span className="font-medium">{designLabel(design)}</span>:{" "}
+            <span className="text-caution">
+              {unpricedText(design.unpriced.length)}
+            </span>
+            <span className="text-graphite-500">
+              {" "}
+              (the priced lines alone: {money(
+                design.costPerMotor,
+                currency,
+              )}{" "}
+              per motor)
+            </span>
+          </li>
+        ))}
+        {withoutTorque.map((design) => (
+          <li key={design.designId}>
+            <span className="font-medium">{designLabel(design)}</span>:{" "}
+            <span className="text-graphite-500">
+              no rated torque and no estimate, so no cost per N·m
+            </span>
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}
+
 /** A change with its sign, in the unit of the figure above it: "+0.06", "−0.10", "±0.00". */
 function signed(change: number): string {
   const value = moneyFromJson(change);
@@ -327,6 +423,7 @@ export function InsightDesigns({
   const currency = data.bases.currency;
   const designs = data.designs.designs;
   const sentence = whatIfSentence(data);
+  const ranking = rankByCostPerNm(designs);
   const pageCount = Math.max(
     1,
     Math.ceil(data.designs.total / data.designs.perPage),
@@ -343,13 +440,10 @@ export function InsightDesigns({
         </h2>
         <p className="text-sm text-graphite-500">
           The latest released revision of each design, newest design first, at
-          the best supplier price for{" "}
-          {formatQuantity(
-            data.quantity,
-            data.quantity === 1 ? "motor" : "motors",
-          )}{" "}
-          on {dayText(data.designs.date)}, in {currency}. Per N·m is per
-          newton-metre of the rated torque.
+          the {costBasisText(data.basis)} for{" "}
+          {countText(data.quantity, "motor")} on {dayText(data.designs.date)},
+          in {currency}. Per N·m is per newton-metre of the rated torque, or of
+          the first-order estimate where no rated torque is given (marked so).
         </p>
       </div>
 
@@ -453,6 +547,26 @@ export function InsightDesigns({
             messages={data.errors.aluminiumBase}
           />
         </div>
+        <div className="w-64">
+          <label htmlFor="insight-basis" className="field-label">
+            Price basis
+          </label>
+          <select
+            id="insight-basis"
+            name="basis"
+            defaultValue={data.basis}
+            aria-invalid={data.errors.basis ? true : undefined}
+            aria-describedby={data.errors.basis ? "basis-error" : undefined}
+            className="field-input"
+          >
+            {Object.entries(costBasisLabels).map(([basis, label]) => (
+              <option key={basis} value={basis}>
+                {label}
+              </option>
+            ))}
+          </select>
+          <FieldError id="basis-error" messages={data.errors.basis} />
+        </div>
         {data.fields.date ? (
           <input type="hidden" name="date" value={data.fields.date} />
         ) : null}
@@ -511,24 +625,35 @@ export function InsightDesigns({
           <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
             <div className="panel break-inside-avoid">
               <h3 className="mb-2 text-sm font-semibold">
-                Where the money per N·m goes
+                Where the money per N·m goes, cheapest first
               </h3>
               <InsightCostChart
                 currency={currency}
-                rows={designs.map((design) => ({
+                basis={costBasisText(data.basis)}
+                rows={ranking.ranked.map((design) => ({
                   key: String(design.designId),
                   label: designLabel(design),
                   costPerNm: design.costPerNm,
                   splitPerNm: design.splitPerNm,
                   complete: design.complete,
+                  estimated: design.perNmTorque?.source === "estimated",
                 }))}
+              />
+              <NotRanked
+                incomplete={ranking.incomplete}
+                withoutTorque={ranking.withoutTorque}
+                currency={currency}
               />
             </div>
             <div className="break-inside-avoid">
               <DataTable
-                caption={`Cost per N·m by part, ${currency} per N·m (the chart's figures)`}
+                caption={`Cost per N·m by part, ${currency} per N·m at the ${costBasisText(data.basis)} (the chart's figures)`}
                 columns={splitColumns()}
-                rows={designs}
+                rows={[
+                  ...ranking.ranked,
+                  ...ranking.incomplete,
+                  ...ranking.withoutTorque,
+                ]}
               />
               <p className="mt-1 text-xs text-graphite-500">
                 In {currency} per N·m of rated torque; the five parts add up to

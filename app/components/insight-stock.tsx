@@ -15,6 +15,7 @@ import { formatMoney } from "~/pricing/money";
 import { kindParts, palette, Swatch, type FillPart } from "./insight-patterns";
 import { InsightTrendChart, TrendSample } from "./insight-trend-chart";
 import { InsightValueBars } from "./insight-value-bars";
+import { countText } from "~/lib/unit-text";
 
 function money(value: number, currency: string): string {
   return formatMoney(moneyFromJson(value), currency, { decimals: 2 });
@@ -89,7 +90,7 @@ export function StockHeadline({ stock }: { stock: StockValueInsight }) {
           label="items below their reorder point"
           value={String(stock.belowReorderPoint)}
           to="/alerts"
-          note={`${stock.openAlerts} open alert${stock.openAlerts === 1 ? "" : "s"} — see Alerts`}
+          note={`${countText(stock.openAlerts, "open alert")} — see Alerts`}
         />
         <Figure
           label="kinds of item holding value"
@@ -97,7 +98,7 @@ export function StockHeadline({ stock }: { stock: StockValueInsight }) {
           note={stock.byKind
             .map(
               (kind) =>
-                `${kindParts.find((part) => part.key === kind.kind)?.label ?? kind.kind}: ${kind.items} item${kind.items === 1 ? "" : "s"}`,
+                `${kindParts.find((part) => part.key === kind.kind)?.label ?? kind.kind}: ${countText(kind.items, "item")}`,
             )
             .join(", ")}
         />
@@ -440,10 +441,10 @@ export function CostHistory({
           Cost per motor over the last year
         </h2>
         <p className="text-sm text-graphite-500">
-          Each released design costed on the same day of each month, at the
-          prices and metal base stored for that day, for {quantity} motor
-          {quantity === 1 ? "" : "s"} (the what-if does not apply here). A gap
-          is a month with a line that had no price.
+          Each released design costed on the same day of each month, at the best
+          supplier prices and metal base stored for that day, for{" "}
+          {countText(quantity, "motor")} (the what-if and the price basis above
+          do not apply here). A gap is a month with a line that had no price.
         </p>
       </div>
       <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">

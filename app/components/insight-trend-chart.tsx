@@ -4,8 +4,10 @@
  * @visx/glyph markers, @visx/scale, @visx/axis, @visx/grid) as plain SVG that the server
  * renders whole. Series differ in dash pattern and marker shape (the same styles as the
  * item page's price history) and are named at the end of their line, so the chart reads
- * in print and without colour; a gap in a line is a point with no value. The figures are
- * in a table beside the chart (the caller's).
+ * in print and without colour; a gap in a line is a point with no value. A series with
+ * only a few points (a design priced in two months) has each point's value written beside
+ * it, so a short line reads as figures over time rather than as a legend's key. The
+ * figures are in a table beside the chart (the caller's).
  */
 import { AxisBottom, AxisLeft } from "@visx/axis";
 import {
@@ -21,8 +23,10 @@ import { scaleLinear, scaleUtc } from "@visx/scale";
 import { LinePath } from "@visx/shape";
 import { useId } from "react";
 import { axisUnits } from "~/insight/axis-units";
+import { widestText, wrapLabel } from "~/insight/chart-labels";
 import { formatQuantity } from "~/lib/format";
 import {
+  labelSpacing,
   seriesStyle,
   spreadLabels,
   type SeriesStyle,
@@ -35,10 +39,17 @@ export interface TrendSeries {
   points: { date: string; value: number | null }[];
 }
 
-const width = 720;
+/** The plot's own width; the right margin grows to hold each series' whole name. */
+const plotWidth = 472;
 const height = 280;
-const margin = { top: 14, right: 170, bottom: 40, left: 78 };
-const labelCharacters = 24;
+const marginTop = 14;
+const marginBottom = 40;
+const marginLeft = 78;
+/** Series names wrap at this many characters (whole, on as many lines as they need). */
+const nameCharacters = 26;
+const nameLineHeight = 12;
+/** Series with at most this many points have each point's value written beside it. */
+const fewPoints = 3;
 
 /** Line colours from the palette; the dash and marker tell the series apart without them. */
 const strokes = [
@@ -62,12 +73,6 @@ const monthYear = new Intl.DateTimeFormat("en-GB", {
 });
 
 const dayOf = (date: string) => new Date(`${date}T00:00:00Z`);
-
-function shortLabel(label: string): string {
-  return label.length > labelCharacters
-    ? `${label.slice(0, labelCharacters - 1)}…`
-    : label;
-}
 
 /** The marker of a series, hollow so overlapping markers stay readable. */
 export function TrendMarker({
@@ -161,7 +166,17 @@ export function InsightTrendChart({
       point.value === null ? [] : [point.value],
     ),
   );
-  const innerWidth = width - margin.left - margin.right;
+  // Each name whole, wrapped, 12 px after the plot; the margin is as wide as its widest line.
+  const names = series.map((entry) => wrapLabel(entry.label, nameCharacters));
+  const nameLines = Math.max(1, ...names.map((lines) => lines.length));
+  const margin = {
+    top: marginTop,
+    bottom: marginBottom,
+    left: marginLeft,
+    right: Math.max(40, Math.ceil(widestText(names.flat(), 11) + 18)),
+  };
+  const innerWidth = plotWidth;
+  const width = margin.left + innerWidth + margin.right;
   const innerHeight = height - margin.top - margin.bottom;
   const first = dates.reduce(
     (a, b) => (b < a ? b : a),
@@ -189,7 +204,14 @@ export function InsightTrendChart({
       .find((point) => point.value !== null);
     return lastPoint ? yScale(lastPoint.value!) : null;
   });
-  const labelYs = spreadLabels(ends, 0, innerHeight);
+  // Names of several lines need more room between them than the shared spacing gives.
+  const spread =
+    Math.max(labelSpacing, nameLines * nameLineHeight + 2) / labelSpacing;
+  const labelYs = spreadLabels(
+    ends.map((end) => (end === null ? null : end / spread)),
+    0,
+    Math.max(0, innerHeight - (nameLines - 1) * nameLineHeight) / spread,
+  ).map((labelY) => (labelY === null ? null : labelY * spread));
 
   return (
     <figure className="space-y-2">
@@ -199,7 +221,8 @@ export function InsightTrendChart({
           role="img"
           aria-label={label}
           aria-describedby={summaryId}
-          className="h-auto w-full max-w-[720px] min-w-[30rem] tabular-nums"
+          style={{ maxWidth: width }}
+          className="h-auto w-full min-w-[30rem] tabular-nums"
         >
           <Group left={margin.left} top={margin.top}>
             <GridRows
@@ -256,8 +279,11 @@ export function InsightTrendChart({
               const stroke = strokes[index % strokes.length]!;
               const labelY = labelYs[index];
               const end = ends[index];
+              const valued = entry.points.filter(
+                (point) => point.value !== null,
+              );
               return (
-                <g key={entry.key}>
+                <g key={entry.key} data-series={entry.label}>
                   <LinePath
                     data={entry.points}
                     x={(point) => x(point.date)}
@@ -279,6 +305,19 @@ export function InsightTrendChart({
                           y={yScale(point.value)}
                           stroke={stroke}
                         />
+                        {/* Up and to the left of its point, so next months' values do not meet. */}
+                        {valued.length <= fewPoints ? (
+                          <text
+                            data-point-value=""
+                            x={x(point.date) - 5}
+                            y={Math.max(10, yScale(point.value) - 7)}
+                            textAnchor="end"
+                            fontSize={10}
+                            fill={palette.graphite900}
+                          >
+                            {formatQuantity(point.value, "", 2)}
+                          </text>
+                        ) : null}
                       </g>
                     ),
                   )}
@@ -295,13 +334,23 @@ export function InsightTrendChart({
                         />
                       ) : null}
                       <text
+                        data-series-name=""
                         x={innerWidth + 12}
                         y={labelY + 4}
                         fontSize={11}
                         fill={palette.graphite900}
                       >
-                        <title>{entry.label}</title>
-                        {shortLabel(entry.label)}
+                        {names[index]!.map((line, lineIndex) => (
+                          <tspan
+                            key={lineIndex}
+                            x={innerWidth + 12}
+                            dy={lineIndex === 0 ? 0 : nameLineHeight}
+                          >
+                            {lineIndex < names[index]!.length - 1
+                              ? `${line} `
+                              : line}
+                          </tspan>
+                        ))}
                       </text>
                     </g>
                   ) : null}

@@ -9,6 +9,7 @@ import { Group } from "@visx/group";
 import { scaleBand, scaleLinear } from "@visx/scale";
 import { Bar } from "@visx/shape";
 import { useId } from "react";
+import { widestText } from "~/insight/chart-labels";
 import { formatQuantity } from "~/lib/format";
 import {
   fillOf,
@@ -26,10 +27,10 @@ export interface ValueBar {
   part: FillPart<string>;
 }
 
-const width = 560;
+/** The bars' own width; the margins grow to hold each whole name and value. */
+const plotWidth = 280;
 const rowHeight = 30;
-const margin = { top: 6, right: 130, bottom: 34, left: 150 };
-const labelCharacters = 22;
+const gap = 8;
 
 export function InsightValueBars({
   bars,
@@ -42,9 +43,28 @@ export function InsightValueBars({
 }) {
   const prefix = usePatternPrefix();
   const summaryId = useId();
+  const money = (value: number) => formatQuantity(value, currency, 2);
+  const margin = {
+    top: 6,
+    bottom: 34,
+    left: Math.ceil(
+      widestText(
+        bars.map((bar) => bar.label),
+        12,
+      ) + gap,
+    ),
+    right: Math.ceil(
+      widestText(
+        bars.map((bar) => money(bar.value)),
+        12,
+        { bold: true },
+      ) + gap,
+    ),
+  };
+  const innerWidth = plotWidth;
+  const width = margin.left + innerWidth + margin.right;
   const height =
     margin.top + margin.bottom + rowHeight * Math.max(bars.length, 1);
-  const innerWidth = width - margin.left - margin.right;
   const innerHeight = height - margin.top - margin.bottom;
   const largest = Math.max(0, ...bars.map((bar) => bar.value));
   const xScale = scaleLinear<number>({
@@ -60,8 +80,6 @@ export function InsightValueBars({
   const parts = [
     ...new Map(bars.map((bar) => [bar.part.key, bar.part])).values(),
   ];
-  const money = (value: number) => formatQuantity(value, currency, 2);
-
   return (
     <figure>
       <svg
@@ -69,7 +87,8 @@ export function InsightValueBars({
         role="img"
         aria-label={label}
         aria-describedby={summaryId}
-        className="h-auto w-full max-w-[560px] tabular-nums print:[print-color-adjust:exact]"
+        style={{ maxWidth: width }}
+        className="h-auto w-full tabular-nums print:[print-color-adjust:exact]"
       >
         <PatternDefs prefix={prefix} parts={parts} />
         <Group left={margin.left} top={margin.top}>
@@ -94,10 +113,7 @@ export function InsightValueBars({
                   fontSize={12}
                   fill={palette.graphite900}
                 >
-                  <title>{bar.label}</title>
-                  {bar.label.length > labelCharacters
-                    ? `${bar.label.slice(0, labelCharacters - 1)}…`
-                    : bar.label}
+                  {bar.label}
                 </text>
                 <text
                   x={barWidth + 6}

@@ -1,9 +1,11 @@
 /**
  * The design half of the cost insight: the latest released revision of each design,
- * costed for a number of motors at the best price (`costRevision`, the same costing as
+ * costed for a number of motors at the price basis of the query (the best supplier price
+ * by default, or the moving average cost of stock; `costRevision`, the same costing as
  * `/api/v1/designs/:id/revisions/:rev/costing`), with the manager's what-if applied when
  * given (nothing saved), and on request the cost per motor a month apart over the last
- * year from the price and metal-base history. Read-only: nothing here writes.
+ * year from the price and metal-base history (always at the best supplier price of each
+ * day: the stock's average cost has no history to look back on). Read-only: nothing here writes.
  */
 import { and, count, desc, eq, exists, inArray, lte, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
@@ -126,7 +128,7 @@ async function designFigures(input: {
     revision,
     lines,
     quantity: query.quantity,
-    basis: "best-price" as const,
+    basis: query.basis,
     loadPricing,
     currency,
   };
@@ -136,7 +138,11 @@ async function designFigures(input: {
     input.history
       ? Promise.all(
           monthlyDates(date, costHistoryMonths).map(async (day) => {
-            const past = await costRevision({ ...common, date: day });
+            const past = await costRevision({
+              ...common,
+              basis: "best-price",
+              date: day,
+            });
             return {
               date: day,
               costPerMotor: past.costPerMotor,
@@ -155,6 +161,10 @@ async function designFigures(input: {
     releasedAt: revision.releasedAt?.toISOString() ?? null,
     ratedTorqueNm: costing.ratedTorqueNm,
     torqueBasis: costing.torqueBasis,
+    /** The torque per N·m is over: rated, or the first-order estimate without one. */
+    perNmTorque: costing.perNmTorque,
+    /** The price basis of the costs: "best-price" or "stock-average". */
+    basis: costing.basis,
     ratedCurrentA: Number(revision.ratedCurrentA),
     quantity: costing.quantity,
     currency: costing.currency,
@@ -216,6 +226,7 @@ export async function designInsight(
   );
   return {
     date,
+    basis: query.basis,
     total: page.total,
     page: query.page,
     perPage: query.perPage,

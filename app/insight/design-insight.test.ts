@@ -3,7 +3,9 @@ import {
   costHistoryChange,
   moneyChange,
   moneyFromJson,
+  rankByCostPerNm,
   splitPerNewtonMetre,
+  unpricedText,
 } from "./design-insight";
 
 describe("splitPerNewtonMetre", () => {
@@ -112,5 +114,35 @@ describe("costHistoryChange", () => {
   });
   it("needs two priced months", () => {
     expect(costHistoryChange([point("a", 1), point("b", 2, false)])).toBeNull();
+  });
+});
+
+describe("rankByCostPerNm", () => {
+  const design = (
+    name: string,
+    costPerNm: number | null,
+    unpriced: string[] = [],
+  ) => ({ name, costPerNm, complete: unpriced.length === 0, unpriced });
+
+  it("ranks priced designs cheapest first and sets incomplete ones apart, however cheap they look", () => {
+    const { ranked, incomplete, withoutTorque } = rankByCostPerNm([
+      design("hub", 11.75),
+      design("half-priced", 2.1, ["MAG-1", "BRG-2"]),
+      design("spindle", 9.4),
+      design("no torque", null),
+      design("fan", 11.75),
+    ]);
+    expect(ranked.map((entry) => entry.name)).toEqual([
+      "spindle",
+      "hub",
+      "fan",
+    ]);
+    expect(incomplete.map((entry) => entry.name)).toEqual(["half-priced"]);
+    expect(withoutTorque.map((entry) => entry.name)).toEqual(["no torque"]);
+  });
+
+  it("names how many lines are unpriced, in the singular for one", () => {
+    expect(unpricedText(1)).toBe("incomplete — 1\u00a0line unpriced");
+    expect(unpricedText(2)).toBe("incomplete — 2\u00a0lines unpriced");
   });
 });

@@ -5,6 +5,7 @@
  * BigInt ten-thousandths before any sum, so nothing drifts.
  */
 import { apportion } from "~/designs/apportion";
+import { countText } from "~/lib/unit-text";
 import type { MoneyAmount } from "~/pricing/money";
 
 /** The five parts of a motor's cost, in the order the charts stack them. */
@@ -106,4 +107,43 @@ export function costHistoryChange(
     change: moneyToJson(change),
     percent: tenths === null ? null : Number(tenths) / 10,
   };
+}
+
+/** What a ranking needs of a design's figures. */
+interface RankedFigures {
+  costPerNm: number | null;
+  complete: boolean;
+  unpriced: readonly unknown[];
+}
+
+/**
+ * Designs ranked by cost per N·m, cheapest first, with those that cannot be ranked set
+ * apart: a design with lines without a price would look cheaper than it is (its cost
+ * leaves those lines out), and one with no torque (rated or estimated) has no cost per
+ * N·m. Each group keeps the order it came in where figures tie.
+ */
+export function rankByCostPerNm<Design extends RankedFigures>(
+  designs: readonly Design[],
+): { ranked: Design[]; incomplete: Design[]; withoutTorque: Design[] } {
+  const incomplete = designs.filter((design) => !design.complete);
+  const withoutTorque = designs.filter(
+    (design) => design.complete && design.costPerNm === null,
+  );
+  const ranked = designs
+    .filter((design) => design.complete && design.costPerNm !== null)
+    .map((design, index) => ({ design, index }))
+    .sort(
+      (a, b) =>
+        Number(
+          moneyFromJson(a.design.costPerNm!) -
+            moneyFromJson(b.design.costPerNm!),
+        ) || a.index - b.index,
+    )
+    .map(({ design }) => design);
+  return { ranked, incomplete, withoutTorque };
+}
+
+/** "incomplete — 1 line unpriced", "incomplete — 2 lines unpriced". */
+export function unpricedText(unpricedLines: number): string {
+  return `incomplete — ${countText(unpricedLines, "line")} unpriced`;
 }

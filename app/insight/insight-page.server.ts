@@ -26,6 +26,7 @@ function typedFields(params: Record<string, string>) {
     copperBase: params.copperBase ?? "",
     aluminiumBase: params.aluminiumBase ?? "",
     date: params.date ?? "",
+    basis: params.basis ?? "",
     endTurn,
   };
 }
@@ -61,6 +62,7 @@ export async function loadInsight(
       endTurn: query.endTurn,
     },
     quantity: query.quantity,
+    basis: query.basis,
     designs,
     bases,
     stock,

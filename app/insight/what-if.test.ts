@@ -37,10 +37,18 @@ describe("the insight query", () => {
     const parsed = parse("quantity=&copperBase=&endTurn.12=");
     expect(parsed.data).toEqual({
       quantity: 1,
+      basis: "best-price",
       endTurn: {},
       page: 1,
       perPage: 20,
     });
+  });
+
+  it("takes the price basis, and names a basis it does not know", () => {
+    expect(parse("basis=stock-average").data?.basis).toBe("stock-average");
+    const refused = readInsightSearch({ basis: "cheapest" });
+    expect(refused.query.basis).toBe("best-price");
+    expect(refused.errors.basis?.[0]).toContain("stock-average");
   });
 
   it("names each bad parameter", () => {

@@ -13,10 +13,13 @@
  *   design (1 = as designed, 1.2 = 20 % longer, 0 = no end turns at all), 0 to 5.
  * - `quantity`: motors to cost for (quantity breaks), 1 to 1,000,000; 1 by default.
  * - `date`: the day prices are taken on, "YYYY-MM-DD"; today by default.
+ * - `basis`: the price basis, `best-price` (the best current supplier price, the default)
+ *   or `stock-average` (the moving average cost of stock, as build orders plan with).
  */
 import { z } from "zod";
 import type { ConductorKey } from "~/engineering/reference-data";
 import type { DesignLine } from "~/designs/design-lines";
+import { costBasisLabels, type CostBasis } from "~/designs/design-page";
 import type { MetalBasePrice } from "~/pricing/metal-base";
 import type { CurrencyCode, MoneyAmount } from "~/pricing/money";
 import {
@@ -76,6 +79,12 @@ export const insightQuerySchema = z.preprocess(
       message: "The quantity is a whole number of motors from 1 to 1,000,000.",
     }).default(1),
     date: dayParam("date", "The date is a day in YYYY-MM-DD form.").optional(),
+    basis: z
+      .enum(Object.keys(costBasisLabels) as [CostBasis, ...CostBasis[]], {
+        error:
+          "The price basis is best-price (best supplier price) or stock-average (moving average cost of stock).",
+      })
+      .default("best-price"),
     copperBase: moneyText.optional(),
     aluminiumBase: moneyText.optional(),
     endTurn: z

@@ -9,7 +9,9 @@ import { answerStockError } from "~/stock/stock-api.server";
  * GET /api/v1/insight/designs → [{ designId, name, revision, ratedTorqueNm, torqueBasis,
  * costPerMotor, costPerNm, split, splitPerNm, copperLossPerNm, currency, … }]: the latest
  * released revision of each design (newest design first, paged: `page`, `perPage` ≤ 50,
- * X-Total-Count), costed at the best price for `quantity` motors on `date` (today).
+ * X-Total-Count), costed for `quantity` motors on `date` (today) at the price `basis`:
+ * `best-price` (default) or `stock-average`; each design says its `basis`, and
+ * `perNmTorque` ({ torqueNm, source: "rated" | "estimated" }) what "per N·m" is over.
  *
  * Read-only what-if (nothing is saved): `copperBase` / `aluminiumBase` per kg in the
  * company currency, `endTurn.<designId>` a factor on that design's end-turn lengths;
