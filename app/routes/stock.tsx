@@ -8,6 +8,7 @@ import { DataTable } from "~/components/data-table";
 import { SortHeaderLink } from "~/components/sort-header-link";
 import { formatQuantity } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
+import { companyCurrency } from "~/purchasing/suppliers.server";
 import { listItems, type ItemSortKey } from "~/stock/items.server";
 import { stockCsvRowLimit } from "~/stock/stock-csv";
 import {
@@ -30,7 +31,10 @@ export async function loader({ request }: Route.LoaderArgs) {
   const { view, ignored } = readStockListView(
     new URL(request.url).searchParams,
   );
-  const { total, items } = await listItems(itemListQueryOf(view));
+  const [{ total, items }, currency] = await Promise.all([
+    listItems(itemListQueryOf(view)),
+    companyCurrency(),
+  ]);
   const pageCount = Math.max(1, Math.ceil(total / stockListPageSize));
   // A page past the end (the list shrank since the link was made) shows the last one.
   if (view.page > pageCount)
@@ -41,6 +45,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     pageCount,
     view,
     ignored,
+    currency,
     canCreate: userHasRole(user, ["buyer"]),
   };
 }
@@ -50,7 +55,7 @@ export const meta: Route.MetaFunction = () => [{ title: "Stock · Turnledger" }]
 type Item = Route.ComponentProps["loaderData"]["items"][number];
 const column = createColumnHelper<Item>();
 
-function stockColumns(view: StockListView) {
+function stockColumns(view: StockListView, currency: string) {
   const sortHeader = (label: string, key: ItemSortKey) => () => (
     <SortHeaderLink
       label={label}
@@ -132,7 +137,7 @@ function stockColumns(view: StockListView) {
       meta: { numeric: true },
     }),
     column.accessor("value", {
-      header: sortHeader("Value", "value"),
+      header: sortHeader(`Value (${currency})`, "value"),
       cell: (info) => (
         <span className="whitespace-nowrap">
           {formatMoney(info.getValue())}
@@ -144,8 +149,9 @@ function stockColumns(view: StockListView) {
 }
 
 export default function Stock({ loaderData }: Route.ComponentProps) {
-  const { items, total, pageCount, view, ignored, canCreate } = loaderData;
-  const columns = useMemo(() => stockColumns(view), [view]);
+  const { items, total, pageCount, view, ignored, currency, canCreate } =
+    loaderData;
+  const columns = useMemo(() => stockColumns(view, currency), [view, currency]);
   const navigate = useNavigate();
   /** Without JavaScript the browser sends the form as it is; with it, empty fields stay out of the address. */
   function showFiltered(event: React.FormEvent<HTMLFormElement>) {
@@ -294,7 +300,7 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
       />
       <p className="text-xs text-graphite-500">
         Available = on hand − reserved. Value = on hand × moving average cost,
-        in the company currency.
+        in {currency} (the company currency).
       </p>
     </div>
   );
