@@ -49,6 +49,32 @@ describe("buildOrderIdInReference", () => {
     expect(buildOrderIdInReference(buildOrderReference(4321))).toBe(4321);
   });
 
+  it("reads the dashes, signs and full-width letters a keyboard or a paste may bring", () => {
+    // Each of these is typed or pasted as "BO-12" by a person; the ledger must see order 12.
+    for (const reference of [
+      "BO\u221212", // minus sign
+      "BO\u201212", // figure dash
+      "BO\u201512", // horizontal bar
+      "BO\uFF0D12", // full-width hyphen-minus
+      "\uFF22\uFF2F\uFF0D\uFF11\uFF12", // full-width "BO-12"
+      "BO\u00a012", // no-break space
+      "BO\u200b-12", // zero-width space
+      "BO_12",
+      "BO#12",
+      "BO/12",
+      "BO.12",
+      "BO: 12",
+      "BO no. 12",
+      "BO nr 12",
+      "Build order 12",
+      "build-order #12",
+      "for build order no. 0012",
+    ])
+      expect(buildOrderIdInReference(reference), reference).toBe(12);
+    // The largest order id the database holds (INT) has ten digits.
+    expect(buildOrderIdInReference("BO-2147483647")).toBe(2147483647);
+  });
+
   it("leaves other references alone", () => {
     for (const reference of [
       "",
@@ -59,6 +85,10 @@ describe("buildOrderIdInReference", () => {
       "BO-",
       "BO-0",
       "DN-3100",
+      "BOB 12",
+      "ELBOW 12",
+      "rebuild order",
+      "BO no.",
     ])
       expect(buildOrderIdInReference(reference), String(reference)).toBe(null);
   });

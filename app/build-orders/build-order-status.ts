@@ -20,16 +20,28 @@ export function buildOrderReference(id: number): string {
 }
 
 /**
- * The build order a free-text reference names, or null: "BO-12", "bo 12", "BO12" and a
- * reference that holds one ("for BO-12") all name order 12. A reference like this on a
- * plain issue would lower the stock but not what the order holds, so the ledger refuses it.
+ * "BO" or "build order" as a word, an optional "no."/"nr"/"number", one optional
+ * separator (any dash, the minus sign, _ # / . :) and the order's number (leading zeros
+ * allowed; an INT id has at most ten digits).
+ */
+const buildOrderInText =
+  /(?<![\p{L}\p{N}])(?:BO|build[\s-]*order)(?!\p{L})\s*(?:(?:no|nr|number)\.?\s*)?[\p{Pd}\u2212_#/.:]?\s*(?:(?:no|nr|number)\.?\s*)?0*(\d{1,10})(?!\p{N})/iu;
+
+/** Characters a paste may hide inside a word: zero-width spaces and joiners, the byte-order mark. */
+const invisible = /[\u200b-\u200d\u2060\ufeff]/gu;
+
+/**
+ * The build order a free-text reference names, or null: "BO-12", "bo 12", "BO12", "BO no. 12",
+ * "build order #12" and a reference that holds one ("for BO-12") all name order 12, whatever
+ * dash or minus sign separates them and in full-width letters too (read as NFKC). A reference
+ * like this on a plain issue would lower the stock but not what the order holds, so the ledger
+ * refuses it.
  */
 export function buildOrderIdInReference(
   reference: string | null | undefined,
 ): number | null {
-  const match = /(?<![\p{L}\p{N}])BO\s*[-‐‑–—]?\s*0*(\d{1,9})(?!\p{N})/iu.exec(
-    reference ?? "",
-  );
+  const text = (reference ?? "").normalize("NFKC").replace(invisible, "");
+  const match = buildOrderInText.exec(text);
   if (!match) return null;
   const id = Number(match[1]);
   return id >= 1 ? id : null;
