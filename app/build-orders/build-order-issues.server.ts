@@ -44,7 +44,8 @@ export interface IssueResult extends RecordedMovement {
 
 export async function issueToBuildOrder(
   orderId: number,
-  request: IssueRequest,
+  /** The unit, when the caller names one (the stock-movements API), is checked against the item's. */
+  request: IssueRequest & { unit?: MovementRequest["unit"] },
   userId: string,
 ): Promise<IssueResult> {
   const result = await inBuildOrderTransaction(async (tx) => {
@@ -83,6 +84,7 @@ export async function issueToBuildOrder(
         location: request.location,
         quantity: request.quantity,
         grossKg: request.grossKg,
+        unit: request.unit,
         reference: buildOrderReference(order.id),
         note: request.note,
         toLocation: undefined,
@@ -150,6 +152,7 @@ export async function issueMovementToBuildOrder(
       location: request.location,
       quantity: request.quantity,
       grossKg: request.grossKg,
+      unit: request.unit,
       note: request.note,
     },
     userId,

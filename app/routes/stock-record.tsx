@@ -147,6 +147,7 @@ export async function action({ request }: Route.ActionArgs) {
       error.field,
       submission.value.type,
       buildOrderId !== undefined,
+      submission.value.grossKg !== undefined,
     );
     return data(
       submission.reply(

@@ -93,4 +93,12 @@ describe("record-movement form values", () => {
     expect(formFieldOf("quantity", "issue", true)).toBe("quantity");
     expect(formFieldOf(undefined, "issue")).toBe("");
   });
+  it("shows a refused amount at the gross weight when the spool was weighed back", () => {
+    // The weigh-back form has no quantity field: "holds only 1.8 kg … cannot issue 2.4 kg" must show beside the weight.
+    expect(formFieldOf("quantity", "issue", true, true)).toBe("grossKg");
+    expect(formFieldOf("quantity", "issue", false, true)).toBe("grossKg");
+    expect(formFieldOf("quantity", "issue", true, false)).toBe("quantity");
+    // A receipt's form shows a quantity refusal at the gross weight itself.
+    expect(formFieldOf("quantity", "receipt", false, true)).toBe("quantity");
+  });
 });

@@ -41,15 +41,19 @@ export const movementFormSchema = z.preprocess(
 /**
  * Where a refusal's field shows on the form (lot and location are one choice there). An
  * issue to a build order shows the order's refusals (not open, no line for the item, no
- * such order) at the order's choice.
+ * such order) at the order's choice; a weighed-back issue shows a refused amount at the
+ * gross weight.
  */
 export function formFieldOf(
   field: string | undefined,
   type: string,
   toBuildOrder = false,
+  /** The spool was weighed back: the issue form shows no quantity, so an amount refused shows at the weight. */
+  weighed = false,
 ): string {
   if ((field === "lot" || field === "location") && type !== "receipt")
     return "balance";
+  if (field === "quantity" && weighed && type === "issue") return "grossKg";
   if (toBuildOrder && (field === undefined || field === "sku"))
     return "buildOrderId";
   return field ?? "";

@@ -188,6 +188,32 @@ describe("issuing at the store", () => {
   });
 });
 
+describe("weighing a spool back against a build order", () => {
+  it("shows a refused weigh-back beside the gross weight (the form has no quantity then)", async () => {
+    await openRecord("issue", wire.sku);
+    await page
+      .getByLabel("Build order", { exact: true })
+      .selectOption(String(orderId));
+    // The order holds nothing on the newer spool (its reservation sits on SP-OLD).
+    await page.getByRole("radio", { name: /lot SP-NEW/ }).check();
+    // SP-NEW: 4.80 kg net; 5.00 kg gross − 0.60 kg tare = 4.40 kg now, so 0.400 kg would leave it.
+    await page.getByLabel("Spool gross weight now").fill("5");
+    await page
+      .getByRole("button", {
+        name: new RegExp(`^Issue 0\\.400.* to BO-${orderId}$`),
+      })
+      .click();
+    const error = page.locator("#movement-grossKg-error");
+    await error.waitFor();
+    expect(await error.textContent()).toContain(`BO-${orderId} holds no`);
+    await page.screenshot({
+      path: `${shots}/r1-record-weigh-back-refused.png`,
+      fullPage: true,
+    });
+    expect(await wireLine()).toMatchObject({ reserved: 1.302, issued: 0.5 });
+  });
+});
+
 describe("receiving at the store", () => {
   it("starts at the item's usual location, shows gross − tare as it is typed and names the currency", async () => {
     const [rows] = await testDatabase().query(

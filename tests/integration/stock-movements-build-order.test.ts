@@ -285,4 +285,101 @@ describe("an issue to a build order through the stock-movements API", () => {
     expect(receipt.status).toBe(400);
     expect((await receipt.json()).error.fields.buildOrderId).toBeDefined();
   });
+  it("refuses a build-order reference written with another dash, a sign or full-width letters", async () => {
+    const before = await movementCount();
+    const fullWidth = (text: string) =>
+      text.replace(/[A-Z0-9-]/g, (c) =>
+        String.fromCharCode(c.charCodeAt(0) + 0xfee0),
+      );
+    for (const reference of [
+      `BO\u2212${orderId}`, // minus sign
+      `BO\u2012${orderId}`, // figure dash
+      fullWidth(`BO-${orderId}`),
+      `BO#${orderId}`,
+      `build order ${orderId}`,
+    ]) {
+      const response = await movement({
+        type: "issue",
+        sku: wire.sku,
+        lot: "SP-B",
+        location: rackB,
+        quantity: 0.1,
+        reference,
+      });
+      expect(response.status, reference).toBe(400);
+      expect(
+        (await response.json()).error.fields.reference[0],
+        reference,
+      ).toContain(`/build-orders/${orderId}`);
+    }
+    expect(await movementCount()).toBe(before);
+  });
+
+  it("checks the unit named with an issue to an order as a plain issue does (400 on unit)", async () => {
+    const before = await movementCount();
+    const response = await movement({
+      type: "issue",
+      sku: wire.sku,
+      lot: "SP-A",
+      location: rackA,
+      quantity: 0.1,
+      unit: "pcs",
+      buildOrderId: orderId,
+    });
+    expect(response.status, await response.clone().text()).toBe(400);
+    expect((await response.json()).error.fields.unit[0]).toContain(
+      "stocked in kg",
+    );
+    expect(await movementCount()).toBe(before);
+    expect(await wireLine(orderId)).toMatchObject({
+      reserved: 0.902,
+      issued: 0.9,
+    });
+  });
+
+  it("answers 409 naming what the order holds when more is asked, writing nothing", async () => {
+    const before = await movementCount();
+    const response = await movement({
+      type: "issue",
+      sku: wire.sku,
+      lot: "SP-A",
+      location: rackA,
+      quantity: 1,
+      buildOrderId: orderId,
+    });
+    expect(response.status).toBe(409);
+    const body = await response.json();
+    // Held 0.902 kg on SP-A (1.802 − 0.5 − 0.4, by hand).
+    expect(body.error.message).toContain(
+      `BO-${orderId} holds only 0.902 kg of ${wire.sku} lot SP-A`,
+    );
+    expect(body.error.fields.quantity).toBeDefined();
+    expect(await movementCount()).toBe(before);
+    expect(await wireLine(orderId)).toMatchObject({
+      reserved: 0.902,
+      issued: 0.9,
+    });
+  });
+
+  it("lets only one of two storekeepers take the last of what the order holds at the same moment", async () => {
+    // Both ask 0.6 kg of the 0.902 kg held: the order's lock queues them, the second finds 0.302 kg.
+    const ask = () =>
+      movement({
+        type: "issue",
+        sku: wire.sku,
+        lot: "SP-A",
+        location: rackA,
+        quantity: 0.6,
+        buildOrderId: orderId,
+      });
+    const answers = await Promise.all([ask(), ask()]);
+    expect(answers.map((answer) => answer.status).sort()).toEqual([201, 409]);
+    expect(await wireLine(orderId)).toMatchObject({
+      reserved: 0.302,
+      issued: 1.5,
+    });
+    const books = await reservationBooks(wire.id);
+    expect(books.grams(books.reserved)).toBe(books.heldTotal);
+    expect(books.linesReserved).toBe(books.heldTotal);
+  });
 });
