@@ -68,6 +68,16 @@ export function findCurrencyCode(text: string): CurrencyCode | undefined {
   return knownCodes.has(code) ? (code as CurrencyCode) : undefined;
 }
 
+/**
+ * A currency as a person types it into a form: a sign that stands for one
+ * currency read as its code (" € " → EUR, through {@link findCurrencyCode}),
+ * anything else trimmed and in capitals for the form's own check ("usd" → USD,
+ * "$" stays "$").
+ */
+export function currencyCodeFromText(text: string): string {
+  return findCurrencyCode(text) ?? text.trim().toUpperCase();
+}
+
 /** Signs several currencies use: what they may stand for, and the codes to write instead. */
 export const ambiguousCurrencySigns: Readonly<
   Record<string, { standsFor: string; write: string }>

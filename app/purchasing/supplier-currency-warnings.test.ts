@@ -42,6 +42,16 @@ describe("what a supplier's currency is missing", () => {
     ]);
   });
 
+  it("reads £ as GBP and € as EUR, as the supplier schema does", () => {
+    expect(supplierCurrencyWarnings(" £ ", coverage)).toEqual(
+      supplierCurrencyWarnings("GBP", coverage),
+    );
+    expect(supplierCurrencyWarnings("£", coverage)).toHaveLength(3);
+    expect(
+      supplierCurrencyWarnings("€", { ...coverage, bases: [] }),
+    ).toHaveLength(2);
+  });
+
   it("warns of a missing base in the company currency itself", () => {
     expect(supplierCurrencyWarnings("EUR", { ...coverage, bases: [] })).toEqual(
       [

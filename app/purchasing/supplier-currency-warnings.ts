@@ -6,6 +6,7 @@
  * the supplier's page. Pure: no framework, no I/O.
  */
 import type { ConductorKey } from "~/engineering/reference-data";
+import { currencyCodeFromText } from "~/price-lists/currencies";
 
 /** The rates and metal bases in force today. */
 export interface CurrencyCoverage {
@@ -26,7 +27,7 @@ export function supplierCurrencyWarnings(
   currencyText: string | undefined,
   coverage: CurrencyCoverage,
 ): string[] {
-  const currency = (currencyText ?? "").trim().toUpperCase();
+  const currency = currencyCodeFromText(currencyText ?? "");
   if (!/^[A-Z]{3}$/.test(currency)) return [];
   const company = coverage.companyCurrency;
   const foreign = currency !== company;

@@ -1,14 +1,29 @@
 /** Suppliers, metal base and currency rates: request schemas shared by pages and API. */
 import { z } from "zod";
+import {
+  ambiguousCurrencySigns,
+  currencyCodeFromText,
+} from "~/price-lists/currencies";
 
+const currencyHint = "Give the currency as a 3-letter ISO 4217 code, e.g. EUR.";
+
+/** A 3-letter code; € and £ are read as EUR and GBP, $ and other shared signs are asked for as codes. */
 const isoCurrency = z
-  .string({ error: "Give the currency as a 3-letter ISO 4217 code, e.g. EUR." })
-  .trim()
-  .toUpperCase()
-  .regex(
-    /^[A-Z]{3}$/,
-    "Give the currency as a 3-letter ISO 4217 code, e.g. EUR.",
-  );
+  .string({ error: currencyHint })
+  .overwrite(currencyCodeFromText)
+  .superRefine((code, context) => {
+    if (/^[A-Z]{3}$/.test(code)) return;
+    const sign = code.toLowerCase();
+    const shared = Object.hasOwn(ambiguousCurrencySigns, sign)
+      ? ambiguousCurrencySigns[sign]
+      : undefined;
+    context.addIssue({
+      code: "custom",
+      message: shared
+        ? `${code} stands for several currencies (${shared.standsFor}): write ${shared.write}.`
+        : currencyHint,
+    });
+  });
 
 const day = z
   .string({ error: "Give the date as YYYY-MM-DD." })

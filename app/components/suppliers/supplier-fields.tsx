@@ -70,7 +70,7 @@ export function SupplierFields({
           field={fields.currency}
           label="Quotes in (currency)"
           autoComplete="off"
-          hint="3-letter ISO 4217 code, e.g. EUR, USD, CNY."
+          hint="3-letter ISO 4217 code, e.g. EUR, USD, CNY; € and £ are read as EUR and GBP."
         />
         <SupplierCurrencyWarnings
           currency={fields.currency.value}
