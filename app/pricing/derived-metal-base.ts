@@ -13,8 +13,9 @@
 
 import { latestOnOrBefore, type CalendarDate } from "./calendar-date";
 import { findExchangeRate, type ExchangeRateEntry } from "./currency";
-import type { MetalBasePrice } from "./metal-base";
+import { findMetalBase, type MetalBasePrice } from "./metal-base";
 import { divideHalfAwayFromZero, rateScale, type CurrencyCode } from "./money";
+import type { MissingMetalBase } from "./pricing-problems";
 import type { ConductorKey } from "~/engineering/reference-data";
 
 /** A base worked out from the company currency's base and a rate, with both named. */
@@ -74,6 +75,55 @@ export function deriveMetalBase(
     ),
     validFrom: companyBase.validFrom,
     derivedFrom: { base: companyBase, rate },
+  };
+}
+
+/** Where a wire line's metal base comes from: kept in its currency, derived, or missing (and what is lacking). */
+export type MetalBaseSource =
+  | { source: "kept"; base: MetalBasePrice }
+  | { source: "derived"; base: DerivedMetalBase }
+  | {
+      source: "missing";
+      problem: MissingMetalBase;
+      /** What a derived base would need and is not there; both false in the company currency. */
+      lacking: { rate: boolean; companyBase: boolean };
+    };
+
+/**
+ * The base for `conductor` in `currency`: the one the buyer keeps in that currency, else one
+ * derived by {@link deriveMetalBase}, else missing with the reason. The one rule pricing and
+ * the import's warnings both follow.
+ */
+export function metalBaseFor(request: DeriveMetalBaseRequest): MetalBaseSource {
+  const kept = findMetalBase(
+    request.bases,
+    request.conductor,
+    request.currency,
+    request.date,
+  );
+  if (kept.ok) return { source: "kept", base: kept.base };
+  const derived = deriveMetalBase(request);
+  if (derived) return { source: "derived", base: derived };
+  const foreign = request.currency !== request.companyCurrency;
+  const rate = findExchangeRate(
+    request.rates,
+    request.currency,
+    request.rateDate ?? request.date,
+  );
+  return {
+    source: "missing",
+    problem: kept.problem,
+    lacking: {
+      rate: foreign && (!rate || rate.rate <= 0n),
+      companyBase:
+        foreign &&
+        !findMetalBase(
+          request.bases,
+          request.conductor,
+          request.companyCurrency,
+          request.date,
+        ).ok,
+    },
   };
 }
 

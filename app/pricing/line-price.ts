@@ -11,12 +11,8 @@ import {
   type ExchangeRateEntry,
   type RateDay,
 } from "./currency";
-import { deriveMetalBase } from "./derived-metal-base";
-import {
-  fullWirePricePerKg,
-  wirePricePerKgOn,
-  type MetalBasePrice,
-} from "./metal-base";
+import { metalBaseFor } from "./derived-metal-base";
+import { fullWirePricePerKg, type MetalBasePrice } from "./metal-base";
 import type { CurrencyCode, MoneyAmount } from "./money";
 import type { PriceLine } from "./price-line";
 import type { PricingProblem } from "./pricing-problems";
@@ -67,27 +63,24 @@ export function priceLine(line: PriceLine, context: PricingContext): LinePrice {
   if (line.pricing === "unit-price") {
     quotedUnitPrice = line.unitPrice;
   } else {
-    const wirePrice = wirePricePerKgOn(line, context.bases, context.date);
     // No base kept in the line's currency: the company currency's base at the rate, named as such.
-    const derived = wirePrice.ok
-      ? null
-      : deriveMetalBase({
-          conductor: line.conductor,
-          currency: line.currency,
-          companyCurrency: context.companyCurrency,
-          bases: context.bases,
-          rates: context.rates,
-          date: context.date,
-          rateDate,
-        });
-    if (wirePrice.ok) {
-      quotedUnitPrice = wirePrice.pricePerKg;
-      metalBase = wirePrice.base;
-    } else if (derived) {
-      quotedUnitPrice = fullWirePricePerKg(line.adderPerKg, derived.pricePerKg);
-      metalBase = derived;
+    const found = metalBaseFor({
+      conductor: line.conductor,
+      currency: line.currency,
+      companyCurrency: context.companyCurrency,
+      bases: context.bases,
+      rates: context.rates,
+      date: context.date,
+      rateDate,
+    });
+    if (found.source === "missing") {
+      problems.push(found.problem);
     } else {
-      problems.push(wirePrice.problem);
+      quotedUnitPrice = fullWirePricePerKg(
+        line.adderPerKg,
+        found.base.pricePerKg,
+      );
+      metalBase = found.base;
     }
   }
   // Converted even when the base is missing, so a missing rate is reported in the same pass.

@@ -1,5 +1,8 @@
 import { describe, expect, it } from "vitest";
 import type { ExchangeRateEntry } from "~/pricing/currency";
+import { isDerivedMetalBase } from "~/pricing/derived-metal-base";
+import { priceLine } from "~/pricing/line-price";
+import { adderLine } from "~/pricing/price-line.test-support";
 import type { MetalBasePrice } from "~/pricing/metal-base";
 import { parseMoney, parseRate } from "~/pricing/money";
 import {
@@ -130,5 +133,40 @@ describe("warnings with no base in the company currency either", () => {
       message:
         "No aluminium base in GBP on or before 2026-03-02, and neither a rate for GBP nor an aluminium base in EUR to derive it from: the wire prices of this list (adder per kg in GBP) cannot be computed until an aluminium base in GBP (or a rate for GBP and an aluminium base in EUR) is entered.",
     });
+  });
+});
+
+describe("warnings and pricing agree on the metal base", () => {
+  // Every currency and conductor of the context above: the import warns "derived" exactly
+  // when pricing uses a derived base, and "no metal base" exactly when pricing cannot.
+  const cases = ["EUR", "USD", "CHF", "GBP"].flatMap((currency) =>
+    (["copper", "aluminium"] as const).map((conductor) => ({
+      currency,
+      conductor,
+    })),
+  );
+  it.each(cases)("$conductor in $currency", ({ currency, conductor }) => {
+    const [warning] = warningsFor([
+      { currency, adderConductor: conductor },
+    ]).filter((entry) => entry.kind !== "no-exchange-rate");
+    const priced = priceLine(
+      adderLine("1.00", {
+        currency,
+        conductor,
+        validFrom: "2026-01-01",
+      }),
+      context,
+    );
+    const pricedBase = priced.ok ? priced.metalBase : null;
+    const baseProblem =
+      !priced.ok &&
+      priced.problems.some((problem) => problem.kind === "no-metal-base");
+    expect(warning?.kind ?? "kept").toBe(
+      baseProblem
+        ? "no-metal-base"
+        : isDerivedMetalBase(pricedBase)
+          ? "metal-base-derived"
+          : "kept",
+    );
   });
 });

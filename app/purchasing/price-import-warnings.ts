@@ -4,14 +4,15 @@
  * suppliers'), and wire priced on the metal base in a currency with no base for
  * the conductor (the wire price is derived from the company currency's base at
  * the rate, or cannot be worked out at all when there is no rate or no such
- * base). Looked up with the same functions pricing uses, on the import day.
+ * base). Decided by pricing's own rule (`metalBaseFor`), on the import day.
  *
  * Pure: no I/O.
  */
 import type { ConductorKey } from "~/engineering/reference-data";
 import type { CalendarDate } from "~/pricing/calendar-date";
 import { findExchangeRate, type ExchangeRateEntry } from "~/pricing/currency";
-import { findMetalBase, type MetalBasePrice } from "~/pricing/metal-base";
+import { metalBaseFor } from "~/pricing/derived-metal-base";
+import type { MetalBasePrice } from "~/pricing/metal-base";
 
 export type PriceImportWarning =
   | { kind: "no-exchange-rate"; currency: string; message: string }
@@ -80,8 +81,16 @@ function metalBaseWarning(
   currency: string,
   context: PriceImportWarningContext,
 ): PriceImportWarning | null {
-  const { bases, companyCurrency, date } = context;
-  if (findMetalBase(bases, conductor, currency, date).ok) return null;
+  const { companyCurrency, date } = context;
+  const found = metalBaseFor({
+    conductor,
+    currency,
+    companyCurrency,
+    bases: context.bases,
+    rates: context.rates,
+    date,
+  });
+  if (found.source === "kept") return null;
   const base = (inCurrency: string) =>
     `${conductor === "aluminium" ? "an" : "a"} ${conductor} base in ${inCurrency}`;
   const missing = `No ${conductor} base in ${currency} on or before ${date}`;
@@ -91,27 +100,26 @@ function metalBaseWarning(
     text: string,
   ) => ({ kind, currency, conductor, message: text }) as const;
 
+  if (found.source === "derived")
+    return warning(
+      "metal-base-derived",
+      `${missing}: ${lines} will be derived from the ${conductor} base in ${companyCurrency} at the ${currency} rate.`,
+    );
   if (currency === companyCurrency)
     return warning(
       "no-metal-base",
       `${missing}: ${lines} cannot be computed until ${base(currency)} is entered.`,
     );
-  const rate = hasRate(currency, context);
-  const companyBase = findMetalBase(bases, conductor, companyCurrency, date).ok;
-  if (rate && companyBase)
-    return warning(
-      "metal-base-derived",
-      `${missing}: ${lines} will be derived from the ${conductor} base in ${companyCurrency} at the ${currency} rate.`,
-    );
-  const [lacking, enter] = !rate
-    ? companyBase
+  const { rate: noRate, companyBase: noCompanyBase } = found.lacking;
+  const [lacking, enter] = noRate
+    ? noCompanyBase
       ? [
-          `no ${currency} rate to derive it from the ${conductor} base in ${companyCurrency}`,
-          `${base(currency)} or a rate for ${currency}`,
-        ]
-      : [
           `neither a rate for ${currency} nor ${base(companyCurrency)} to derive it from`,
           `${base(currency)} (or a rate for ${currency} and ${base(companyCurrency)})`,
+        ]
+      : [
+          `no ${currency} rate to derive it from the ${conductor} base in ${companyCurrency}`,
+          `${base(currency)} or a rate for ${currency}`,
         ]
     : [
         `no ${conductor} base in ${companyCurrency} to derive it from at the ${currency} rate`,
