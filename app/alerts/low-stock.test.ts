@@ -140,6 +140,37 @@ describe("the e-mails", () => {
     expect(mail.text).toContain("#7 (in progress, 1.200 kg still to issue)");
   });
 
+  it("writes pieces as words: per piece, 1 piece, 3 pieces", () => {
+    const mail = alertMail({
+      sku: "BR-608",
+      name: "Bearing 608",
+      unit: "pcs",
+      available: 1_000n,
+      reorderPoint: 4_000n,
+      reorderQuantity: 3_000n,
+      bestOffer: {
+        supplier: "Lund Parts",
+        supplierSku: "LP-608",
+        unitPrice: 1.5,
+        currency: "EUR",
+      },
+      unpricedOffers: [],
+      buildOrders: [{ id: 9, status: "reserved", stillNeeded: 1_000n }],
+      itemUrl: "http://localhost:3000/stock/items/BR-608",
+    });
+    expect(mail.text).toContain(
+      "Available now: 1 piece (on hand less reserved)",
+    );
+    expect(mail.text).toContain("Reorder point: 4 pieces");
+    // Shortfall 4 − 1 = 3 equals the reorder quantity of 3.
+    expect(mail.text).toContain("Suggested order: 3 pieces");
+    expect(mail.text).toContain(
+      "Lund Parts, their SKU LP-608, 1.5000 EUR per piece",
+    );
+    expect(mail.text).toContain("#9 (reserved, 1 piece still to issue)");
+    expect(mail.text).not.toMatch(/\bpcs\b/);
+  });
+
   it("lists each reason an offer cannot be priced on a line of its own", () => {
     const mail = alertMail({
       sku: "CU-050",
@@ -195,7 +226,7 @@ describe("the e-mails", () => {
     );
     expect(mail.subject).toBe("Low stock digest: 2 items below reorder point");
     expect(mail.text).toContain(
-      "- A One: 2 pcs available, reorder point 10 pcs (low since 2026-12-01)",
+      "- A One: 2 pieces available, reorder point 10 pieces (low since 2026-12-01)",
     );
     expect(mail.text).toContain(
       "- B Two: 0.000 kg available, reorder point 1.500 kg",

@@ -15,6 +15,7 @@ import {
 } from "~/pricing/money";
 import { guardCell } from "~/stock/csv-formula-guard";
 import { quantityToNumber } from "~/stock/decimal-amounts";
+import { perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export type AlertChange = "open" | "close" | "none";
@@ -107,7 +108,7 @@ export interface AlertMailFacts {
   itemUrl: string;
 }
 
-/** "2.500 kg" with a plain space: e-mail text is read and searched as typed. */
+/** "2.500 kg", "3 pieces" with a plain space: e-mail text is read and searched as typed. */
 const quantityText = (thousandths: bigint, unit: string) =>
   formatStockQuantity(quantityToNumber(thousandths), unit).replace(
     /\u00a0/g,
@@ -127,7 +128,7 @@ export function alertMail(facts: AlertMailFacts): {
     `Reorder point: ${quantityText(facts.reorderPoint, facts.unit)}`,
     `Suggested order: ${quantityText(order, facts.unit)} (reorder quantity ${quantityText(facts.reorderQuantity, facts.unit)})`,
     facts.bestOffer
-      ? `Best price for that quantity: ${facts.bestOffer.supplier}, their SKU ${facts.bestOffer.supplierSku}, ${facts.bestOffer.unitPrice.toFixed(4)} ${facts.bestOffer.currency} per ${facts.unit}`
+      ? `Best price for that quantity: ${facts.bestOffer.supplier}, their SKU ${facts.bestOffer.supplierSku}, ${facts.bestOffer.unitPrice.toFixed(4)} ${facts.bestOffer.currency} per ${perUnitWord(facts.unit)}`
       : facts.unpricedOffers.length > 0
         ? "No supplier's price can be worked out for that quantity."
         : "No supplier quotes a price for that quantity yet.",
@@ -228,6 +229,7 @@ export function purchaseRequestCsv(
       guardCell(line.name),
       guardCell(line.supplierSku),
       quantityToNumber(line.quantity),
+      // The stock unit as stored (kg, pcs, m), not as words: machine-read, like the API.
       line.unit,
       Number(formatMoneyText(line.unitPrice)),
       line.currency,

@@ -89,6 +89,12 @@ describe("BOM CSV", () => {
     expect(row![4]).toBe("0.0308378");
   });
 
+  it("names one motor in the singular in the build column's header", () => {
+    // English: "1 motor", "2 motors" (CLDR plural rules).
+    expect(bomCsvHeaders(1, "EUR")).toContain("quantity for 1 motor");
+    expect(bomCsvHeaders(2, "EUR")).toContain("quantity for 2 motors");
+  });
+
   it("starts with a byte-order mark and ends lines with CRLF", () => {
     const text = bomCsv({ quantity: 1, currency: "EUR", lines: [coil] });
     expect(text.startsWith("\uFEFFline,kind,sku,")).toBe(true);

@@ -7,6 +7,7 @@
  */
 import Papa from "papaparse";
 import { parseExactDecimal } from "~/pricing/money";
+import { nounFor } from "~/lib/unit-text";
 import { guardCell } from "~/stock/csv-formula-guard";
 import { quantityToNumber } from "~/stock/decimal-amounts";
 import { requiredStockQuantity } from "./design-costing";
@@ -81,9 +82,11 @@ function columns(
     { header: "sku", cell: (line) => line.sku },
     { header: "item", cell: (line) => line.name },
     { header: "quantity per motor", cell: (line) => line.perMotorQuantity },
+    // The stock unit as stored (kg, pcs, m), not as words: a spreadsheet or a script
+    // reads this column back, so it stays the code the API and the import take.
     { header: "unit", cell: (line) => line.unit },
     {
-      header: `quantity for ${quantity} motors`,
+      header: `quantity for ${quantity} ${nounFor(quantity, "motor")}`,
       cell: (line) => buildQuantity(line.perMotorQuantity, quantity),
     },
     {

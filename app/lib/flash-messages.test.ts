@@ -96,7 +96,7 @@ describe("flashText", () => {
         onHandAfter: 120,
       }),
     ).toBe(
-      `Transfer recorded: 20${nbsp}pcs of CU-050 at RACK-A → BENCH. On hand now 120${nbsp}pcs.`,
+      `Transfer recorded: 20${nbsp}pieces of CU-050 at RACK-A → BENCH. On hand now 120${nbsp}pieces.`,
     );
   });
 
@@ -113,7 +113,7 @@ describe("flashText", () => {
         onHandAfter: 18,
       }),
     ).toBe(
-      `Count recorded: difference −2${nbsp}pcs of CU-050 at RACK-A. On hand now 18${nbsp}pcs.`,
+      `Count recorded: difference −2${nbsp}pieces of CU-050 at RACK-A. On hand now 18${nbsp}pieces.`,
     );
     expect(
       flashText("movement-recorded", {
@@ -136,17 +136,30 @@ describe("flashText", () => {
       short: [],
     };
     expect(flashText("order-reserved", order)).toBe(
-      `Held for BO-0007: 1.442${nbsp}kg of CU-050, 56${nbsp}pcs of N42SH-B.`,
+      `Held for BO-0007: 1.442${nbsp}kg of CU-050, 56${nbsp}pieces of N42SH-B.`,
     );
     expect(
       flashText("order-reserved", {
         ...order,
         short: [{ sku: "N42SH-B", quantity: 76, unit: "pcs" }],
       }),
-    ).toMatch(/\. Still short: 76\u00a0pcs of N42SH-B\.$/);
+    ).toMatch(/\. Still short: 76\u00a0pieces of N42SH-B\.$/);
     expect(flashText("order-quantity-changed", order)).toBe(
       `BO-0007 is now for 4${nbsp}motors.`,
     );
+    // One motor, one piece: English singular for exactly 1 (CLDR plural rules).
+    expect(flashText("order-quantity-changed", { ...order, quantity: 1 })).toBe(
+      `BO-0007 is now for 1${nbsp}motor.`,
+    );
+    expect(
+      flashText("order-quantity-changed-released", { ...order, quantity: 1 }),
+    ).toMatch(/^BO-0007 is now for 1\u00a0motor\. /);
+    expect(
+      flashText("order-reserved", {
+        ...order,
+        held: [{ sku: "N42SH-B", quantity: 1, unit: "pcs" }],
+      }),
+    ).toBe(`Held for BO-0007: 1${nbsp}piece of N42SH-B.`);
     expect(
       flashText("order-issued", {
         ...receipt,

@@ -5,7 +5,7 @@
  * the server looks up by that id. Nothing the address or the cookie says is
  * ever shown, so no link can make the app claim what it did not do. Pure.
  */
-import { formatQuantity } from "./format";
+import { countText } from "./unit-text";
 import {
   formatSignedStockQuantity,
   formatStockQuantity,
@@ -129,7 +129,7 @@ const heldList = (amounts: StockAmount[]) =>
     )
     .join(", ");
 
-/** A count or an adjustment tells its change with the sign ("difference −2 pcs"); other movements how much moved. */
+/** A count or an adjustment tells its change with the sign ("difference −2 pieces"); other movements how much moved. */
 const movedAmount = (movement: MovementSubject) =>
   movement.type === "count"
     ? `difference ${formatSignedStockQuantity(movement.change, movement.unit)}`
@@ -169,9 +169,9 @@ const texts: {
   "order-built": (order) =>
     `${order.reference} built. Whatever it still held is free again.`,
   "order-quantity-changed": (order) =>
-    `${order.reference} is now for ${formatQuantity(order.quantity, "motors")}.`,
+    `${order.reference} is now for ${countText(order.quantity, "motor")}.`,
   "order-quantity-changed-released": (order) =>
-    `${order.reference} is now for ${formatQuantity(order.quantity, "motors")}. What it held was released: reserve again.`,
+    `${order.reference} is now for ${countText(order.quantity, "motor")}. What it held was released: reserve again.`,
   "password-changed": () =>
     "Password changed. You stay signed in here; every other session has ended and your API tokens are revoked.",
 };

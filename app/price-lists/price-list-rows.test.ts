@@ -419,6 +419,31 @@ describe("across rows", () => {
     ]);
   });
 
+  it("names a part's unit as a word when one SKU is two items", () => {
+    const collector = collect([
+      dataRow(2, {
+        supplierSku: "SLEEVE",
+        unit: "m",
+        price: "0.4",
+        currency: "EUR",
+      }),
+      dataRow(3, {
+        supplierSku: "SLEEVE",
+        unit: "pcs",
+        price: "0.4",
+        minQuantity: "10",
+        currency: "EUR",
+      }),
+    ]);
+    expect(collector.errors).toEqual([
+      {
+        line: 3,
+        message:
+          'Line 3: the supplier SKU "SLEEVE" (column "supplierSku") is part per piece here but part per m on line 2; one SKU must always be the same item.',
+      },
+    ]);
+  });
+
   it("keeps the rows with errors out of the comparison", () => {
     const collector = collect([
       dataRow(2, { ...magnet, price: "x" }),

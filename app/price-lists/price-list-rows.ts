@@ -22,6 +22,7 @@ import {
 } from "~/engineering/reference-data";
 import type { ItemKind, StockUnit } from "~/db/tables/stock-enums";
 import { maxNumberTextLength, plainDecimalText } from "~/lib/number-text";
+import { perUnitWord } from "~/lib/unit-text";
 import { iecSizeLabel } from "~/reference/wire-size-labels";
 import {
   insulationStandard,
@@ -780,7 +781,7 @@ function describePrice(row: PriceListRow): string {
     : `adder ${plainDecimalText(row.adderPerKg ?? "0")} ${row.currency} per kg`;
 }
 
-/** "wire AWG 20 heavy class 155", "magnet N42SH", "part per pcs". */
+/** "wire AWG 20 heavy class 155", "magnet N42SH", "part per piece". */
 function describeItem(row: PriceListRow): string {
   const kindText = describeItemKind(row);
   return row.itemSku ? `${kindText} (our SKU ${row.itemSku})` : kindText;
@@ -801,6 +802,6 @@ function describeItemKind(row: PriceListRow): string {
     case "magnet":
       return `magnet ${row.gradeMatch.toUpperCase()}`;
     case "part":
-      return `part per ${row.unit}`;
+      return `part per ${perUnitWord(row.unit)}`;
   }
 }

@@ -34,6 +34,8 @@ const columns: { header: string; cell: (item: StockCsvItem) => Cell }[] = [
   { header: "name", cell: (item) => item.name },
   { header: "kind", cell: (item) => item.kind },
   { header: "size or grade", cell: (item) => item.sizeOrGrade },
+  // The stock unit as stored (kg, pcs, m), not as words: a spreadsheet or a script
+  // reads this column back, so it stays the code the API and the import take.
   { header: "unit", cell: (item) => item.unit },
   { header: "on hand", cell: (item) => item.onHand },
   { header: "reserved", cell: (item) => item.reserved },

@@ -1,13 +1,17 @@
 /** Stock quantities and money as the stock pages show them, on the one formatter. Pure. */
 import type { MovementType } from "~/db/tables/stock-enums";
 import { formatQuantity } from "~/lib/format";
+import { perUnitWord, quantityText } from "~/lib/unit-text";
 
-/** Kilograms and metres to the gram and millimetre (3 decimals), pieces whole: "4.800 kg", "100 pcs". */
+/**
+ * Kilograms and metres to the gram and millimetre (3 decimals), pieces whole and as a
+ * word: "4.800 kg", "1 piece", "100 pieces".
+ */
 export function formatStockQuantity(value: number, unit: string): string {
-  return formatQuantity(value, unit, unit === "pcs" ? 0 : 3);
+  return quantityText(value, unit, unit === "pcs" ? 0 : 3);
 }
 
-/** A change of stock with its sign, a true minus for less: "+4.800 kg", "−2 pcs". */
+/** A change of stock with its sign, a true minus for less: "+4.800 kg", "−2 pieces". */
 export function formatSignedStockQuantity(value: number, unit: string): string {
   const sign = value > 0 ? "+" : value < 0 ? "−" : "";
   return `${sign}${formatStockQuantity(Math.abs(value), unit)}`;
@@ -18,9 +22,9 @@ export function formatMoney(value: number): string {
   return formatQuantity(value, "", 2);
 }
 
-/** Cost per unit of stock, to a hundredth of a cent: "14.2000 per kg". */
+/** Cost per unit of stock, to a hundredth of a cent: "14.2000 per kg", "0.8500 per piece". */
 export function formatUnitCost(value: number, unit: string): string {
-  return `${formatQuantity(value, "", 4)} per ${unit}`;
+  return `${formatQuantity(value, "", 4)} per ${perUnitWord(unit)}`;
 }
 
 const kindLabels: Record<string, string> = {
