@@ -86,6 +86,23 @@ describe("record-movement form values", () => {
     });
     expect(twoOrders.error?.issues[0]?.path).toEqual(["reference"]);
   });
+  it("takes an issue's quantity or the spool's gross weight, not both, to an order or not", () => {
+    // Both given, the weigh-back would silently win over the quantity typed.
+    for (const buildOrderId of [undefined, "3"]) {
+      const both = movementFormSchema.safeParse({
+        type: "issue",
+        sku: "CU-050",
+        balance: "SP-7|MAIN",
+        quantity: "0.5",
+        grossKg: "4.5",
+        buildOrderId,
+      });
+      expect(
+        both.error?.issues.map((issue) => issue.path),
+        String(buildOrderId),
+      ).toEqual([["grossKg"]]);
+    }
+  });
   it("shows a build order's refusals at the order's choice", () => {
     expect(formFieldOf(undefined, "issue", true)).toBe("buildOrderId");
     expect(formFieldOf("sku", "issue", true)).toBe("buildOrderId");

@@ -123,6 +123,16 @@ export const movementRequestSchema = z
     ) {
       problem("grossKg", "Gross weight is for receipts and weigh-back issues.");
     }
+    // An issue by weighing back and by quantity at once would leave one of them unread.
+    if (
+      value.type === "issue" &&
+      value.quantity !== undefined &&
+      value.grossKg !== undefined
+    )
+      problem(
+        "grossKg",
+        "Give the quantity or the spool's gross weight, not both.",
+      );
     if (value.type === "receipt") {
       if (value.unitCost === undefined)
         problem("unitCost", "Give the unit cost of the receipt.");
@@ -155,8 +165,6 @@ function refineBuildOrderIssue(
     type: string;
     reference?: string;
     buildOrderId?: number;
-    quantity?: bigint;
-    grossKg?: bigint;
   },
   problem: (path: string, message: string) => void,
 ) {
@@ -178,11 +186,6 @@ function refineBuildOrderIssue(
     problem(
       "reference",
       `The reference names ${buildOrderReference(named)}, but the issue is to ${buildOrderReference(value.buildOrderId)}.`,
-    );
-  if (value.quantity !== undefined && value.grossKg !== undefined)
-    problem(
-      "grossKg",
-      "Give the quantity or the spool's gross weight, not both.",
     );
 }
 

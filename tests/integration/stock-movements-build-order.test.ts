@@ -315,6 +315,25 @@ describe("an issue to a build order through the stock-movements API", () => {
     expect(await movementCount()).toBe(before);
   });
 
+  it("refuses a plain issue with both a quantity and a gross weight (400 on grossKg), as for an order", async () => {
+    const before = await movementCount();
+    const response = await movement({
+      type: "issue",
+      sku: wire.sku,
+      lot: "SP-A",
+      location: rackA,
+      // SP-A holds 3.90 kg net: 4.00 kg gross − 0.60 kg tare would take 0.500 kg, not the 0.1 kg asked.
+      quantity: 0.1,
+      grossKg: 4,
+      reference: "JOB-78",
+    });
+    expect(response.status, await response.clone().text()).toBe(400);
+    expect((await response.json()).error.fields.grossKg[0]).toContain(
+      "not both",
+    );
+    expect(await movementCount()).toBe(before);
+  });
+
   it("checks the unit named with an issue to an order as a plain issue does (400 on unit)", async () => {
     const before = await movementCount();
     const response = await movement({
