@@ -19,6 +19,7 @@ import {
   parseQuantity,
   quantityToNumber,
 } from "~/stock/decimal-amounts";
+import { unitWord } from "~/lib/unit-text";
 import { BuildOrderError, type Shortage } from "./build-order-errors";
 import {
   balanceKey,
@@ -255,7 +256,7 @@ export async function reserveBuildOrderStock(
         `Not enough stock to reserve ${reference} in full: ${shortages
           .map(
             (shortage) =>
-              `${shortage.sku} short by ${shortage.short} ${shortage.unit}`,
+              `${shortage.sku} short by ${shortage.short} ${unitWord(shortage.unit, shortage.short)}`,
           )
           .join("; ")}. Nothing was reserved.`,
         undefined,

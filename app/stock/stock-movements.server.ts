@@ -34,7 +34,14 @@ import {
   quantityToNumber,
 } from "./decimal-amounts";
 import { StockError } from "./stock-errors";
+import { unitWord } from "~/lib/unit-text";
 import type { MovementRequest } from "./movement-request";
+
+/** An amount of stock in a refusal, as typed into the API: "1.5 kg", "1 piece", "3 pieces". */
+function amountText(thousandths: bigint, unit: string): string {
+  const value = quantityToNumber(thousandths);
+  return `${value} ${unitWord(unit, value)}`;
+}
 
 type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
 /** A transaction of the one database client, for callers that record a movement inside their own. */
@@ -370,7 +377,7 @@ async function lockReservation(
       409,
       heldQuantity === 0n
         ? `BO-${reservation.orderId} holds no ${item.sku} ${place}.`
-        : `BO-${reservation.orderId} holds only ${quantityToNumber(heldQuantity)} ${item.unit} of ${item.sku} ${place}; cannot issue ${quantityToNumber(taken)} ${item.unit}.`,
+        : `BO-${reservation.orderId} holds only ${amountText(heldQuantity, item.unit)} of ${item.sku} ${place}; cannot issue ${amountText(taken, item.unit)}.`,
       "quantity",
     );
   }
@@ -477,7 +484,7 @@ export async function recordMovementIn(
   if (from.onHand + change < 0n) {
     throw new StockError(
       409,
-      `Only ${quantityToNumber(from.onHand)} ${unit} of ${item.sku}${lot.number ? ` lot ${lot.number}` : ""} at ${location.code}; cannot take ${quantityToNumber(-change)} ${unit}.`,
+      `Only ${amountText(from.onHand, unit)} of ${item.sku}${lot.number ? ` lot ${lot.number}` : ""} at ${location.code}; cannot take ${amountText(-change, unit)}.`,
       "quantity",
     );
   }
@@ -489,7 +496,7 @@ export async function recordMovementIn(
   ) {
     throw new StockError(
       409,
-      `${quantityToNumber(from.reserved - reservedTaken)} ${unit} of ${item.sku} at ${location.code} is reserved for build orders; only ${quantityToNumber(from.onHand - from.reserved + reservedTaken)} ${unit} is free.`,
+      `${item.sku} at ${location.code}: ${amountText(from.reserved - reservedTaken, unit)} reserved for build orders, only ${amountText(from.onHand - from.reserved + reservedTaken, unit)} free.`,
       "quantity",
     );
   }

@@ -449,6 +449,8 @@ describe("reserving when stock is short", () => {
       { sku: magnet.sku, required: 80, available: 70, short: 10, unit: "pcs" },
     ]);
     expect(body.error.message).toContain("Nothing was reserved");
+    // 80 − 70 = 10 short, in words as a sentence reads (the JSON keeps the unit code).
+    expect(body.error.message).toContain(`${magnet.sku} short by 10 pieces`);
     const order = await readOrder(id);
     expect(order.status).toBe("draft");
     expect(order.lines.map((line) => line.reserved)).toEqual([0, 0]);

@@ -205,6 +205,30 @@ describe("receipts, weigh-back issues, transfers and counts", () => {
 });
 
 describe("never below zero", () => {
+  it("refuses taking more pieces than are there, naming them as words", async () => {
+    const sku = await createMagnet();
+    const received = await move({
+      type: "receipt",
+      sku,
+      location: mainStore,
+      quantity: 1,
+      unitCost: 0.85,
+    });
+    expect(received.status, await received.clone().text()).toBe(201);
+    const refused = await move({
+      type: "issue",
+      sku,
+      location: mainStore,
+      quantity: 2,
+    });
+    expect(refused.status).toBe(409);
+    // English: "1 piece", "2 pieces" (CLDR plural rules), never "1 pcs".
+    expect((await refused.json()).error.message).toBe(
+      `Only 1 piece of ${sku} at ${mainStore}; cannot take 2 pieces.`,
+    );
+    expect((await itemBalance(sku)).onHand).toBe(1);
+  });
+
   it("lets exactly 20 of 50 concurrent 1 kg issues through a 20 kg lot", async () => {
     const sku = await createWire();
     await move({
