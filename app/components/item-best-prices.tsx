@@ -1,4 +1,5 @@
 import { Form } from "react-router";
+import { countText, perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export interface ItemBestPrices {
@@ -132,7 +133,7 @@ export function ItemBestPricesPanel({
             <tr>
               <th scope="col">Supplier</th>
               <th scope="col" className="text-right">
-                Per {prices.unit} in {prices.companyCurrency}
+                Per {perUnitWord(prices.unit)} in {prices.companyCurrency}
               </th>
               <th scope="col" className="text-right">
                 Total
@@ -148,7 +149,7 @@ export function ItemBestPricesPanel({
                   <span className="block text-xs text-graphite-500">
                     {price.supplierSku}
                     {price.leadTimeDays !== null
-                      ? ` · ${price.leadTimeDays} days`
+                      ? ` · ${countText(price.leadTimeDays, "day")}`
                       : ""}
                   </span>
                 </td>

@@ -1,4 +1,5 @@
-import { formatDateTime, formatQuantity } from "~/lib/format";
+import { formatDateTime } from "~/lib/format";
+import { quantityText } from "~/lib/unit-text";
 import { onHandChart, type OnHandPoint } from "~/stock/on-hand-history-chart";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
@@ -85,7 +86,7 @@ export function OnHandChart({
               fontSize="12"
               fill="currentColor"
             >
-              {formatQuantity(tick.value, unit, decimals)}
+              {quantityText(tick.value, unit, decimals)}
             </text>
           </g>
         ))}

@@ -9,6 +9,7 @@ import {
   type ChartFrame,
   type SeriesStyle,
 } from "~/pricing/price-history-chart";
+import { perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 /** What the item page's loader sends: the unit price of one quantity over time, one series per offer. */
@@ -66,9 +67,9 @@ function monthText(date: string): string {
   return dayText(date).replace(/^\d+ /, "");
 }
 
-/** A unit price with its currency and unit, to the ten-thousandth: "12.5000 EUR/kg". */
+/** A unit price with its currency and unit, to the ten-thousandth: "12.5000 EUR/kg", "2.4000 EUR/piece". */
 function pricePerUnit(value: number, currency: string, unit: string): string {
-  return formatQuantity(value, `${currency}/${unit}`, 4);
+  return formatQuantity(value, `${currency}/${perUnitWord(unit)}`, 4);
 }
 
 function offerName(offer: Pick<Offer, "supplier" | "supplierSku">): string {
@@ -154,7 +155,7 @@ export function PriceHistoryChart({
 }) {
   const summaryId = useId();
   const currency = history.companyCurrency;
-  const unitWord = history.unit === "pcs" ? "piece" : history.unit;
+  const unitWord = perUnitWord(history.unit);
   const price = (value: number) => pricePerUnit(value, currency, history.unit);
   const quantity = formatStockQuantity(history.quantity, history.unit);
   const chart = priceHistoryChart(history.series, history.to, frame);

@@ -1,6 +1,7 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import { DataTable } from "~/components/data-table";
 import { formatDateTime, formatQuantity } from "~/lib/format";
+import { perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 interface ImportLine {
@@ -39,7 +40,11 @@ export function priceOrAdder(line: ImportLine): string {
     return `${metal} + ${formatQuantity(line.adderPerKg, `${line.currency}/kg`, 4)}`;
   }
   if (line.unitPrice !== null)
-    return formatQuantity(line.unitPrice, `${line.currency}/${line.unit}`, 4);
+    return formatQuantity(
+      line.unitPrice,
+      `${line.currency}/${perUnitWord(line.unit)}`,
+      4,
+    );
   return "—";
 }
 

@@ -10,6 +10,8 @@ import { formatQuantity } from "~/lib/format";
 import { moreLineErrorsText } from "~/price-lists/line-errors";
 import type { LineError } from "~/price-lists/parse-price-list";
 import type { PriceListRow } from "~/price-lists/price-list-rows";
+import { perUnitWord } from "~/lib/unit-text";
+import { formatStockQuantity } from "~/stock/stock-quantity-text";
 import {
   describeMatch,
   type PreviewRow,
@@ -67,14 +69,14 @@ const rowColumns: ColumnDef<PreviewRow, unknown>[] = [
     meta: { numeric: true },
     accessorFn: (row) =>
       row.price !== null
-        ? `${money(row.price)} ${row.currency}/${row.unit}`
+        ? `${money(row.price)} ${row.currency}/${perUnitWord(row.unit)}`
         : `adder ${money(row.adderPerKg ?? "0")} ${row.currency}/kg`,
   },
   {
     id: "minQuantity",
     header: "From quantity",
     meta: { numeric: true },
-    accessorFn: (row) => `${Number(row.minQuantity)}\u00a0${row.unit}`,
+    accessorFn: (row) => formatStockQuantity(Number(row.minQuantity), row.unit),
   },
   { accessorKey: "validFrom", header: "Valid from" },
 ];

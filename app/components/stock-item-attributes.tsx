@@ -7,6 +7,7 @@ import {
   type MagnetMaterial,
 } from "~/engineering/reference-data";
 import { formatQuantity } from "~/lib/format";
+import { quantityText } from "~/lib/unit-text";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
 import { magnetMaterialLabels } from "~/reference/magnet-materials";
 import {
@@ -162,7 +163,7 @@ export function MagnetAttributeList({
           <Row term="Mass on hand">
             {formatMass(magnet.figures.totalMassKg)}{" "}
             <span className="text-graphite-500">
-              for {formatQuantity(pieces, "pcs")}
+              for {quantityText(pieces, "pcs")}
             </span>
           </Row>
         </>

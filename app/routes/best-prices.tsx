@@ -13,6 +13,7 @@ import {
   listBestPrices,
 } from "~/purchasing/best-price-list.server";
 import { readBestPriceListQuery } from "~/purchasing/price-quantity-query";
+import { countText, perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -79,9 +80,11 @@ function columns(quantityText: string) {
             {best.supplier}
             <span className="block text-xs text-graphite-500">
               {best.supplierSku}
-              {best.leadTimeDays !== null ? ` · ${best.leadTimeDays} days` : ""}
+              {best.leadTimeDays !== null
+                ? ` · ${countText(best.leadTimeDays, "day")}`
+                : ""}
               {row.original.otherOffers > 0
-                ? ` · ${row.original.otherOffers} other ${row.original.otherOffers === 1 ? "offer" : "offers"}`
+                ? ` · ${countText(row.original.otherOffers, "other offer")}`
                 : ""}
             </span>
             {best.metalBaseDerivedFrom ? (
@@ -101,7 +104,7 @@ function columns(quantityText: string) {
         row.original.best ? (
           <span className="whitespace-nowrap font-medium">
             {money(row.original.best.unitPrice, row.original.companyCurrency)}/
-            {row.original.unit}
+            {perUnitWord(row.original.unit)}
           </span>
         ) : (
           "—"

@@ -31,9 +31,10 @@ import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
 import { buildOrderStatuses } from "~/db/tables/build-orders";
 import { redirectWithFlash } from "~/lib/flash.server";
-import { formatDateTime, formatQuantity } from "~/lib/format";
+import { formatDateTime } from "~/lib/format";
 import { pageFromSearch } from "~/lib/search-params";
 import { userHasRole } from "~/lib/roles";
+import { countText } from "~/lib/unit-text";
 
 const pageSize = 25;
 
@@ -134,7 +135,7 @@ const columns = [
     header: "Motors",
     cell: (info) => (
       <span className="whitespace-nowrap">
-        {formatQuantity(info.getValue(), "motors")}
+        {countText(info.getValue(), "motor")}
       </span>
     ),
     meta: { numeric: true },
@@ -224,7 +225,7 @@ export default function BuildOrders({
         />
         {total > 0 ? (
           <p className="text-sm text-graphite-500">
-            {formatQuantity(total, total === 1 ? "order" : "orders")}
+            {countText(total, "order")}
           </p>
         ) : null}
       </section>

@@ -5,7 +5,10 @@ import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { movementTypes } from "~/db/tables/stock-enums";
 import { formatDateTime, formatQuantity } from "~/lib/format";
-import { formatStockQuantity } from "~/stock/stock-quantity-text";
+import {
+  formatStockQuantity,
+  formatUnitCost,
+} from "~/stock/stock-quantity-text";
 import { readSearchLeniently, searchParamsObject } from "~/lib/search-params";
 import { movementJournalQuerySchema } from "~/stock/movement-journal-query";
 import { listMovements } from "~/stock/movement-journal.server";
@@ -92,7 +95,7 @@ const columns = [
           ? `counted ${formatStockQuantity(movement.countedQuantity, movement.unit)}`
           : null,
         movement.unitCost !== null
-          ? `at ${movement.unitCost.toFixed(4)} per ${movement.unit}`
+          ? `at ${formatUnitCost(movement.unitCost, movement.unit)}`
           : null,
         movement.note,
       ].filter(Boolean);

@@ -197,7 +197,7 @@ describe("a build order from the builder to the store", () => {
     const shortRow = page
       .getByRole("table", { name: "Short" })
       .getByRole("row", { name: new RegExp(magnetSku) });
-    expect(await shortRow.textContent()).toContain("76\u00a0pcs");
+    expect(await shortRow.textContent()).toContain("76\u00a0pieces");
     await saveScreenshot(page, "build-order-short");
     await page.getByRole("button", { name: "Cancel build order" }).click();
     await page.getByRole("status").filter({ hasText: "cancelled" }).waitFor();

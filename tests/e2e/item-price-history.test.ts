@@ -175,7 +175,7 @@ describe("price history on the item page", () => {
     const page = await signIn(browser, "buyer");
     await page.goto(`${baseUrl()}/stock/items/${sku}`);
     const section = page.getByRole("region", {
-      name: "Price history for 1 pcs",
+      name: "Price history for 1 piece",
     });
     await section.getByText("No price lines for this item yet.").waitFor();
     await section.getByRole("link", { name: "Import a price list" }).click();

@@ -37,7 +37,7 @@ const today = new Date().toISOString().slice(0, 10);
 let browser: Browser;
 let storekeeper = "";
 let location = "";
-/** The item whose prices move and whose stock runs low: reorder point 10 pcs, reorder quantity 20 pcs. */
+/** The item whose prices move and whose stock runs low: reorder point 10 pieces, reorder quantity 20 pieces. */
 const wedge = {
   sku: uniqueCode("WEDGE"),
   name: "Slot wedge, glass laminate 2 mm",
@@ -186,7 +186,7 @@ describe("the buyer's journey", () => {
     await saveScreenshot(page, "journey-buyer-1-start");
     await openItemByKeyboard(page, wedge.sku, wedge.name, found);
     await page
-      .getByRole("heading", { name: "Best prices for 20 pcs" })
+      .getByRole("heading", { name: "Best prices for 20 pieces" })
       .waitFor();
     expect(await bestPriceRows(page)).toEqual([
       expect.stringMatching(new RegExp(`^${usual}AL-W2.*2\\.4000 EUR`)),
@@ -268,24 +268,24 @@ describe("the buyer's journey", () => {
   });
 
   it("gets the low-stock e-mail when an issue takes the item below its reorder point", async () => {
-    // 15 − 6 = 9 pcs available, below the reorder point of 10.
+    // 15 − 6 = 9 pieces available, below the reorder point of 10.
     await moveStock({ type: "issue", quantity: 6 });
     const mail = await waitForMessage(
       buyerEmail,
       new RegExp(`^Low stock: ${wedge.sku} `),
     );
-    expect(mail.text).toContain("Available now: 9 pcs");
-    expect(mail.text).toContain("Reorder point: 10 pcs");
-    expect(mail.text).toContain("Suggested order: 20 pcs");
+    expect(mail.text).toContain("Available now: 9 pieces");
+    expect(mail.text).toContain("Reorder point: 10 pieces");
+    expect(mail.text).toContain("Suggested order: 20 pieces");
     expect(mail.text).toContain(
-      `Best price for that quantity: ${newcomer}, their SKU BI-W2, 1.8000 EUR per pcs`,
+      `Best price for that quantity: ${newcomer}, their SKU BI-W2, 1.8000 EUR per piece`,
     );
 
     await followLink(page, mainLink(page, "Alerts"), "Low-stock alerts", found);
     const alert = page.getByRole("row", { name: new RegExp(wedge.sku) });
     const alertText = readable(await alert.textContent());
     expect(alertText).toContain("Open");
-    expect(alertText).toContain("9 pcs");
+    expect(alertText).toContain("9 pieces");
     expect(alertText).toContain(`${buyerName} (e-mail`);
     await saveScreenshot(page, "journey-buyer-7-alerts");
     await page.close();
@@ -304,7 +304,7 @@ describe("the buyer's journey", () => {
     const text = row.locator("details pre");
     await text.waitFor();
     expect(await text.textContent()).toContain(
-      `Best price for that quantity: ${newcomer}, their SKU BI-W2, 1.8000 EUR per pcs`,
+      `Best price for that quantity: ${newcomer}, their SKU BI-W2, 1.8000 EUR per piece`,
     );
     expect(readable(await row.textContent())).not.toContain("Waiting");
     await scanPage(admin, found);

@@ -232,13 +232,13 @@ describe("the storekeeper's journey", () => {
     );
     await typeInto(page, page.getByLabel("Lot (optional)"), magnetLot);
     await typeInto(page, page.getByLabel("Quantity"), "120");
-    await typeInto(page, page.getByLabel("Unit cost per pcs"), "0.85");
+    await typeInto(page, page.getByLabel("Unit cost per piece"), "0.85");
     await typeInto(page, page.getByLabel("Supplier batch"), "B-2291");
     await press(page, page.getByRole("button", { name: "Receive" }));
-    const magnets = statusSaying(`120 pcs of ${magnetSku}`);
+    const magnets = statusSaying(`120 pieces of ${magnetSku}`);
     await magnets.waitFor();
     expect(readable(await magnets.textContent())).toContain(
-      "On hand now 120 pcs.",
+      "On hand now 120 pieces.",
     );
     await scanPage(page, found);
     expect(lotOnHand(await itemNow(magnetSku), magnetLot, drawer)).toBe(120);
@@ -320,7 +320,7 @@ describe("the storekeeper's journey", () => {
       page,
       page.getByRole("button", { name: `Issue to BO-${orderId}` }),
     );
-    await statusSaying(`Issued ${magnetLine.reserved} pcs`).waitFor();
+    await statusSaying(`Issued ${magnetLine.reserved} pieces`).waitFor();
     await page.getByRole("heading", { name: "Issued to the build" }).waitFor();
     await scanPage(page, found);
     await saveScreenshot(page, "journey-storekeeper-issued");
@@ -360,7 +360,7 @@ describe("the storekeeper's journey", () => {
     await typeInto(page, page.getByLabel("Counted"), String(counted));
     const difference = statusSaying("Difference to the books");
     expect(readable(await difference.textContent())).toMatch(
-      /^Difference to the books: −2 pcs$/,
+      /^Difference to the books: −2 pieces$/,
     );
     await scanPage(page, found);
     await saveScreenshot(page, "journey-storekeeper-count");
@@ -373,7 +373,7 @@ describe("the storekeeper's journey", () => {
     const recorded = statusSaying("Count recorded");
     await recorded.waitFor();
     expect(readable(await recorded.textContent())).toContain(
-      `On hand now ${counted} pcs.`,
+      `On hand now ${counted} pieces.`,
     );
     await scanPage(page, found);
 
@@ -436,13 +436,15 @@ describe("the storekeeper's journey", () => {
       })
       .getByRole("row", { name: new RegExp(magnetLot) });
     expect(readable(await magnetBalance.textContent())).toContain(
-      `${countedMagnets} pcs`,
+      `${countedMagnets} pieces`,
     );
     const lastMovement = page
       .getByRole("table", { name: `Movements of ${magnetSku}, newest first` })
       .getByRole("row")
       .nth(1);
-    expect(readable(await lastMovement.textContent())).toMatch(/Count.*−2 pcs/);
+    expect(readable(await lastMovement.textContent())).toMatch(
+      /Count.*−2 pieces/,
+    );
     await saveScreenshot(page, "journey-storekeeper-magnet-balances");
   });
 

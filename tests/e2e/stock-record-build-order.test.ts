@@ -247,7 +247,7 @@ describe("counting at the store", () => {
       .getByRole("status")
       .filter({ hasText: "Count recorded" });
     await message.waitFor();
-    expect(await message.textContent()).toContain("−2\u00a0pcs");
+    expect(await message.textContent()).toContain("−2\u00a0pieces");
     await page.screenshot({
       path: `${shots}/h1-record-count.png`,
       fullPage: true,

@@ -120,13 +120,13 @@ describe("the low-stock e-mail and the item page", () => {
       "buyer@turnledger.test",
       new RegExp(`Low stock: ${sku} `),
     );
-    expect(mail.text).toContain("Suggested order: 3 pcs");
+    expect(mail.text).toContain("Suggested order: 3 pieces");
     expect(mail.text).toContain(
-      `Best price for that quantity: ${supplier}, their SKU LH-${sku}, 1.5000 EUR per pcs`,
+      `Best price for that quantity: ${supplier}, their SKU LH-${sku}, 1.5000 EUR per piece`,
     );
 
     const page = await itemPageText(sku);
-    expect(page).toContain("Best prices for 3 pcs");
+    expect(page).toContain("Best prices for 3 pieces");
     expect(page).toMatch(new RegExp(`${supplier} LH-${sku} 1\\.5000 EUR`));
   });
 

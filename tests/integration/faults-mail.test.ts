@@ -200,7 +200,7 @@ describe("the SMTP server is stopped", () => {
     );
     expect(stdout).toMatch(/mail retry: [1-9]\d* sent/);
     expect(await waitUntil(() => arrived(sku).length === 1)).toBe(true);
-    expect(arrived(sku)[0]!.text).toContain("Available now: 7 pcs");
+    expect(arrived(sku)[0]!.text).toContain("Available now: 7 pieces");
     const sent = await outboxRowsFor(sku);
     expect(sent).toHaveLength(1);
     expect(sent[0]!.sentAt).not.toBeNull();

@@ -160,7 +160,7 @@ describe("a message after an action", () => {
     );
     const next = await followRedirect(recorded, storekeeper);
     expect(readable(await next.text())).toContain(
-      `Receipt recorded: 40 pcs of ${sku} at ${store}. On hand now 40 pcs.`,
+      `Receipt recorded: 40 pieces of ${sku} at ${store}. On hand now 40 pieces.`,
     );
   });
 });

@@ -170,17 +170,17 @@ describe("price history of an item", () => {
     const page = await get(`/stock/items/${encodeURIComponent(sku)}`, buyer);
     expect(page.status).toBe(200);
     const html = readable(await page.text());
-    expect(html).toContain("Price history for 1 pcs");
+    expect(html).toContain("Price history for 1 piece");
     expect(html).toContain('aria-label="Price history chart, EUR per piece"');
-    expect(html).toContain(`${supplier} · ${article}: 2.1500 EUR/pcs from `);
+    expect(html).toContain(`${supplier} · ${article}: 2.1500 EUR/piece from `);
     expect(html).toMatch(
-      /1 change, lowest 2\.1500 EUR\/pcs, highest 2\.4000 EUR\/pcs, now 2\.4000 EUR\/pcs\./,
+      /1 change, lowest 2\.1500 EUR\/piece, highest 2\.4000 EUR\/piece, now 2\.4000 EUR\/piece\./,
     );
-    expect(html).toContain("now 2.4000 EUR/pcs");
+    expect(html).toContain("now 2.4000 EUR/piece");
     // The figures table has one row per price, each with its unit.
     expect(html).toContain("Figures of the price history");
-    expect(html.match(/>2\.1500 EUR\/pcs</g)).toHaveLength(1);
-    expect(html.match(/>2\.4000 EUR\/pcs</g)).toHaveLength(1);
+    expect(html.match(/>2\.1500 EUR\/piece</g)).toHaveLength(1);
+    expect(html.match(/>2\.4000 EUR\/piece</g)).toHaveLength(1);
   });
 
   it("an item without price lines says so, with the import link for buyers only", async () => {

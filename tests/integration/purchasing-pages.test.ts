@@ -404,8 +404,8 @@ describe("/suppliers/imports", () => {
     expect(html).toContain("W-050");
     expect(html).toContain(wire!.sku);
     expect(html).toContain("copper base + 3.5000\u00a0EUR/kg");
-    expect(html).toContain("2.3500\u00a0EUR/pcs");
-    expect(html).toContain("100\u00a0pcs");
+    expect(html).toContain("2.3500\u00a0EUR/piece");
+    expect(html).toContain("100\u00a0pieces");
   });
 
   it("answers an unknown import with 404", async () => {

@@ -101,9 +101,9 @@ describe("low-stock alerts", () => {
       "buyer@turnledger.test",
       new RegExp(`Low stock: ${sku} `),
     );
-    expect(mail.text).toContain("Available now: 9 pcs");
-    expect(mail.text).toContain("Reorder point: 10 pcs");
-    expect(mail.text).toContain("Suggested order: 20 pcs");
+    expect(mail.text).toContain("Available now: 9 pieces");
+    expect(mail.text).toContain("Reorder point: 10 pieces");
+    expect(mail.text).toContain("Suggested order: 20 pieces");
     expect(await alertsOf(sku)).toMatchObject([{ status: "open" }]);
 
     // A second drop while open: no second e-mail.
@@ -255,7 +255,7 @@ describe("low-stock alerts", () => {
       /^Low stock digest: /,
     );
     expect(digest.text).toContain(
-      `- ${sku} Shaft circlip: 1 pcs available, reorder point 2 pcs`,
+      `- ${sku} Shaft circlip: 1 piece available, reorder point 2 pieces`,
     );
   });
 });

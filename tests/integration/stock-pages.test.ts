@@ -190,7 +190,7 @@ describe("stock list", () => {
     const byOnHand = await page(
       `/stock?search=${prefix}&sort=onHand&order=desc`,
     );
-    // 100 pcs, then 12 kg, then 4.8 kg (the sort compares the figures, whatever the unit).
+    // 100 pieces, then 12 kg, then 4.8 kg (the sort compares the figures, whatever the unit).
     expect(linkedSkus(byOnHand.html, prefix).slice(0, 3)).toEqual([
       skus[54],
       skus[4],
@@ -204,7 +204,7 @@ describe("stock list", () => {
   it("filters by kind and by reorder point, and shows figures with their units", async () => {
     const magnets = await page(`/stock?search=${prefix}&kind=magnet`);
     expect(linkedSkus(magnets.html, prefix)).toEqual([skus[53], skus[54]]);
-    expect(magnets.html).toContain("100 pcs");
+    expect(magnets.html).toContain("100 pieces");
     expect(magnets.html).toContain("90.00");
 
     // 4.8 kg available against a 5 kg reorder point.

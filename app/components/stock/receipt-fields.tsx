@@ -6,6 +6,7 @@
 import { useState } from "react";
 import { MeasureField } from "~/components/measure-field";
 import { formatQuantity } from "~/lib/format";
+import { perUnitWord } from "~/lib/unit-text";
 import { spoolNetKg } from "~/stock/spool-net-weight";
 
 type Errors = Record<string, string[] | undefined>;
@@ -146,7 +147,7 @@ export function ReceiptFields({
       )}
       <Field
         name="unitCost"
-        label={`Unit cost per ${unit}`}
+        label={`Unit cost per ${perUnitWord(unit)}`}
         unit={currency}
         type="number"
         step="0.0001"
