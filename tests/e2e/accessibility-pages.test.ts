@@ -6,7 +6,7 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { scanPage } from "../support/accessibility";
-import { launchBrowser, signIn } from "../support/browser";
+import { launchBrowser, signIn, waitForHydration } from "../support/browser";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -41,6 +41,14 @@ describe("accessibility of every page (axe-core)", () => {
     const visit = async (path: string) => {
       await page.goto(`${inject("baseUrl")}${path}`);
       await page.getByRole("heading", { level: 1 }).first().waitFor();
+      // A table that scrolls sideways becomes keyboard-reachable once React has measured it.
+      await waitForHydration(page);
+      await page.evaluate(
+        () =>
+          new Promise((done) =>
+            requestAnimationFrame(() => requestAnimationFrame(done)),
+          ),
+      );
       await scanPage(page, found);
     };
     for (const path of paths) await visit(path);
