@@ -38,7 +38,7 @@ export function OnHandChart({
   unit: string;
   reorderPoint: number;
 }) {
-  const chart = onHandChart(points, now, reorderPoint, frame);
+  const chart = onHandChart(points, now, reorderPoint, frame, unit === "pcs");
   if (!chart) {
     return (
       <p className="text-sm text-graphite-500">

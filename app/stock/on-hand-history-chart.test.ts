@@ -70,6 +70,23 @@ describe("on-hand chart", () => {
     expect(chart.path.endsWith("H490")).toBe(true);
   });
 
+  it("puts ticks on whole numbers for stock counted in pieces", () => {
+    // 2 pieces on hand: a 0.5 step would label half pieces, shown rounded as "1 piece" twice.
+    const points = [{ at: "2026-01-01T00:00:00Z", onHand: 2 }];
+    const inKg = onHandChart(points, "2026-01-05T00:00:00Z", 0, frame);
+    expect(inKg!.valueTicks.map((tick) => tick.value)).toEqual([
+      0, 0.5, 1, 1.5, 2,
+    ]);
+    const inPieces = onHandChart(
+      points,
+      "2026-01-05T00:00:00Z",
+      0,
+      frame,
+      true,
+    );
+    expect(inPieces!.valueTicks.map((tick) => tick.value)).toEqual([0, 1, 2]);
+  });
+
   it("has no chart without movements and no reorder line without a reorder point", () => {
     expect(onHandChart([], "2026-01-05T00:00:00Z", 0, frame)).toBeNull();
     expect(

@@ -60,6 +60,8 @@ export function onHandChart(
   now: string,
   reorderPoint: number,
   frame: ChartFrame,
+  /** Counted in whole units (pieces): ticks fall on whole numbers only. */
+  wholeUnits = false,
 ): OnHandChart | null {
   if (points.length === 0) return null;
   const end = Math.max(
@@ -72,7 +74,9 @@ export function onHandChart(
     reorderPoint,
     ...points.map((point) => point.onHand),
   );
-  const step = roundStep(highest);
+  const step = wholeUnits
+    ? Math.max(1, roundStep(highest))
+    : roundStep(highest);
   const top = Math.max(step, Math.ceil(highest / step) * step);
 
   const plotWidth = frame.width - frame.left - frame.right;
