@@ -150,7 +150,7 @@ describe("a build order from the builder to the store", () => {
 
     // Magnets by count.
     await page.getByRole("radio", { name: new RegExp(magnetSku) }).check();
-    await page.getByLabel("Quantity").fill("56");
+    await page.getByLabel(/^Quantity/).fill("56");
     await page.getByRole("button", { name: /^Issue to BO-/ }).click();
     const magnets = page.getByRole("status").filter({ hasText: "Issued 56" });
     await magnets.waitFor();

@@ -231,7 +231,7 @@ describe("the storekeeper's journey", () => {
       `${drawer} · Journey magnet drawer`,
     );
     await typeInto(page, page.getByLabel("Lot (optional)"), magnetLot);
-    await typeInto(page, page.getByLabel("Quantity"), "120");
+    await typeInto(page, page.getByLabel(/^Quantity/), "120");
     await typeInto(page, page.getByLabel("Unit cost per piece"), "0.85");
     await typeInto(page, page.getByLabel("Supplier batch"), "B-2291");
     await press(page, page.getByRole("button", { name: "Receive" }));
@@ -313,7 +313,7 @@ describe("the storekeeper's journey", () => {
     );
     await typeInto(
       page,
-      page.getByLabel("Quantity"),
+      page.getByLabel(/^Quantity/),
       String(magnetLine.reserved),
     );
     await press(
