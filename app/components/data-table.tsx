@@ -59,6 +59,7 @@ export function DataTable<Row>({
   initialSorting = [],
   search,
   facets = [],
+  widerThanPanel = false,
 }: {
   caption: string;
   columns: ColumnDef<Row, any>[]; // eslint-disable-line @typescript-eslint/no-explicit-any
@@ -71,6 +72,8 @@ export function DataTable<Row>({
   initialSorting?: SortingState;
   search?: TableSearch;
   facets?: TableFacet[];
+  /** Known to be wider than its panel (many columns): reachable by keyboard from the first paint, without waiting for a measurement. */
+  widerThanPanel?: boolean;
 }) {
   const [sorting, setSorting] = useState<SortingState>(initialSorting);
   const [globalFilter, setGlobalFilter] = useState("");
@@ -134,7 +137,7 @@ export function DataTable<Row>({
         ref={scrollBox}
         className="panel overflow-x-auto p-0"
         // A table wider than its panel scrolls: keyboard users reach it with Tab and scroll with the arrow keys.
-        {...(scrollsSideways
+        {...(scrollsSideways || widerThanPanel
           ? { tabIndex: 0, role: "region", "aria-label": caption }
           : {})}
       >

@@ -479,6 +479,7 @@ export function CostHistory({
         />
       </div>
       <DataTable
+        widerThanPanel
         caption={`Cost per motor by month, in ${currency}; — where a line had no price`}
         rows={withHistory}
         columns={[

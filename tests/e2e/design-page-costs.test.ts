@@ -141,6 +141,11 @@ describe("a released revision", () => {
     await page.getByLabel("Motors to build").fill("1");
     await page.getByRole("button", { name: "Create build order" }).click();
     await page.waitForURL(/\/build-orders\/\d+$/);
+    // The address changes before the order's page is drawn: wait for its text.
+    await page
+      .getByText("at the moving average cost of stock when the order was made")
+      .first()
+      .waitFor();
     const summary = readable(
       await page.locator("main dl").first().textContent(),
     );
