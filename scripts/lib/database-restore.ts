@@ -21,7 +21,10 @@ import {
   urlForDatabase,
   withClientLogin,
 } from "./mariadb-client-login";
-import { compareMigrations, type MigrationRecord } from "./migration-history";
+import {
+  compareMigrations,
+  type MigrationRecord,
+} from "~/db/migration-history";
 import { projectRoot } from "./project-paths";
 
 /** A refusal the person running the restore can act on (no stack trace needed). */
