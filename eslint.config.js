@@ -29,6 +29,28 @@ export default tseslint.config(
     },
   },
   {
+    // Every write transaction runs through writeTransaction, which retries deadlocks,
+    // lock wait timeouts and Galera certification conflicts (decision 027).
+    files: ["app/**/*.{ts,tsx}"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        {
+          selector:
+            "CallExpression[callee.type='MemberExpression'][callee.object.name='db'][callee.property.name='transaction']",
+          message:
+            "Run write transactions through writeTransaction (app/db/write-transaction.server.ts): it retries deadlocks and Galera conflicts.",
+        },
+        {
+          selector:
+            "CallExpression[callee.type='MemberExpression'][callee.property.name='beginTransaction']",
+          message:
+            "Begin transactions only inside retryWriteConflicts or writeTransaction (app/db/write-transaction.server.ts).",
+        },
+      ],
+    },
+  },
+  {
     files: ["server.js"],
     languageOptions: {
       globals: {

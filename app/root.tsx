@@ -62,6 +62,14 @@ function messageOf(data: unknown): string | null {
   return typeof data === "string" && data ? data : null;
 }
 
+function titleOf(data: unknown): string | null {
+  if (data && typeof data === "object" && "title" in data) {
+    const title = (data as { title: unknown }).title;
+    return typeof title === "string" ? title : null;
+  }
+  return null;
+}
+
 export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
   let status = 500;
   let title = "Something went wrong";
@@ -84,7 +92,8 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
       title = "Too much sent";
       detail = message ?? "The form is larger than Turnledger takes.";
     } else if (status === 503) {
-      title = "Database unavailable";
+      // "Database busy" from a write that lost to other writers (server/database-unavailable.ts).
+      title = titleOf(error.data) ?? "Database unavailable";
       detail =
         message ??
         "Turnledger cannot reach its database. This page will load again by itself.";

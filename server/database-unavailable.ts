@@ -13,6 +13,11 @@
  * - pages: a 503 route error, which `app/root.tsx`'s error boundary shows as
  *   "Database unavailable" (and which looks again every few seconds).
  *
+ * A write transaction that lost to other writers on every attempt
+ * (`DatabaseBusyError` from app/db/write-transaction.server.ts, decision 027) is
+ * answered the same way with "The database is busy with other changes. Try again
+ * in a moment." and the error page's title "Database busy".
+ *
  * Every other error passes through untouched. React Router's own hooks cannot
  * do this: `handleError` only logs, and without middleware nothing else sees a
  * loader's error before it becomes a 500. See
@@ -27,6 +32,11 @@ import {
   isDatabaseUnavailable,
   unavailableReason,
 } from "~/db/database-errors";
+import {
+  databaseBusyMessage,
+  databaseBusyRetryAfterSeconds,
+  isDatabaseBusy,
+} from "~/db/write-conflicts";
 
 type RouteEntry = ServerBuild["routes"][string];
 type RouteModule = NonNullable<RouteEntry>["module"];
@@ -52,11 +62,39 @@ export function databaseUnavailableError(
   );
 }
 
+/** What a request gets when its write transaction lost to other writers on every attempt. */
+export function databaseBusyError(
+  request: Request,
+  resourceRoute: boolean,
+): unknown {
+  const { pathname } = new URL(request.url);
+  const busyHeaders = {
+    "Retry-After": String(databaseBusyRetryAfterSeconds),
+    "Cache-Control": "no-store",
+  };
+  if (resourceRoute || pathname.startsWith("/api/")) {
+    return Response.json(
+      { error: { message: databaseBusyMessage } },
+      { status: 503, headers: busyHeaders },
+    );
+  }
+  return data(
+    { message: databaseBusyMessage, title: "Database busy" },
+    { status: 503, headers: busyHeaders },
+  );
+}
+
 function answering503(handler: Handler, resourceRoute: boolean): Handler {
   return async (args) => {
     try {
       return await handler(args);
     } catch (error) {
+      if (isDatabaseBusy(error)) {
+        console.warn(
+          `[db] database busy during a ${args.request.method}: gave up after ${error.attempts} attempts (${error.reason})`,
+        );
+        throw databaseBusyError(args.request, resourceRoute);
+      }
       // Responses and route errors (redirects, 4xx, the guard's own 503) carry no code.
       if (!isDatabaseUnavailable(error)) throw error;
       console.warn(

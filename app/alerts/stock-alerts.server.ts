@@ -16,6 +16,7 @@ import {
   sql,
 } from "drizzle-orm";
 import { db } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import { appUrl } from "~/lib/app-url.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import {
@@ -28,7 +29,7 @@ import {
   userRoles,
   users,
 } from "~/db/schema";
-import { queueMail, queueMailForLater } from "~/mail/mailer.server";
+import { deliverLater, queueMail, writeToOutbox } from "~/mail/mailer.server";
 import { todayUtc } from "~/purchasing/current-entries";
 import { bestPricesOf, loadItemPricing } from "~/purchasing/item-prices.server";
 import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
@@ -125,41 +126,81 @@ async function openBuildOrdersNeeding(itemId: number) {
     .filter((row) => row.stillNeeded > 0n);
 }
 
-async function tellAboutNewAlert(
-  alertId: number,
-  item: {
-    id: number;
-    sku: string;
-    name: string;
-    unit: string;
-    available: bigint;
-    reorderPoint: bigint;
-    reorderQuantity: bigint;
-  },
-) {
+interface AlertItem {
+  id: number;
+  sku: string;
+  name: string;
+  unit: string;
+  available: bigint;
+  reorderPoint: bigint;
+  reorderQuantity: bigint;
+}
+
+/** Who is told of a new alert at once, and the e-mail they get. */
+async function newAlertMail(item: AlertItem) {
   const recipients = (await alertPeople()).filter(
     (person) => alertModeOf(person) === "each",
   );
-  if (recipients.length === 0) return;
+  if (recipients.length === 0) return { recipients, mail: null };
   const mail = alertMail({
     ...item,
     ...(await offersFor(item)),
     buildOrders: await openBuildOrdersNeeding(item.id),
     itemUrl: `${appUrl()}/stock/items/${encodeURIComponent(item.sku)}`,
   });
-  // Written now, sent after the request has been answered (see queueMailForLater).
-  const outboxIds = await queueMailForLater(
-    recipients.map((person) => ({ to: person.email, ...mail })),
+  return { recipients, mail };
+}
+
+/**
+ * Opens the item's alert with its e-mails and notices in one transaction, and hands the
+ * e-mails to SMTP once it has committed; nothing when another request opened the alert
+ * first (one open alert per item: the unique key decides, inside the transaction).
+ * The e-mail's text and recipients are read before: a description, not a decision.
+ */
+async function openAlert(item: AlertItem) {
+  const text = (thousandths: bigint) =>
+    quantityToNumber(thousandths).toFixed(3);
+  const { recipients, mail } = await newAlertMail(item);
+  const queued = await writeTransaction(
+    async (tx) => {
+      let alertId: number;
+      try {
+        const [created] = await tx
+          .insert(stockAlerts)
+          .values({
+            itemId: item.id,
+            availableAtOpen: text(item.available),
+            reorderPoint: text(item.reorderPoint),
+            reorderQuantity: text(item.reorderQuantity),
+            openedAt: new Date(),
+          })
+          .$returningId();
+        alertId = created!.id;
+      } catch (error) {
+        // Another request opened it a moment ago: it tells people.
+        if (isDuplicateKey(error)) return [];
+        throw error;
+      }
+      if (!mail) return [];
+      // Written now, sent after the commit (deliverLater).
+      const messages = await writeToOutbox(
+        tx,
+        recipients.map((person) => ({ to: person.email, ...mail })),
+      );
+      await tx.insert(stockAlertNotices).values(
+        recipients.map((person, index) => ({
+          alertId,
+          userId: person.id,
+          kind: "alert" as const,
+          outboxId: messages[index]!.id,
+          createdAt: new Date(),
+        })),
+      );
+      return messages;
+    },
+    { label: "low-stock alert" },
   );
-  await db.insert(stockAlertNotices).values(
-    recipients.map((person, index) => ({
-      alertId,
-      userId: person.id,
-      kind: "alert" as const,
-      outboxId: outboxIds[index]!,
-      createdAt: new Date(),
-    })),
-  );
+  deliverLater(queued);
 }
 
 /**
@@ -217,25 +258,7 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
             ),
           );
       } else if (change === "open") {
-        let alertId: number;
-        try {
-          const [created] = await db
-            .insert(stockAlerts)
-            .values({
-              itemId: item.id,
-              availableAtOpen: text(item.available),
-              reorderPoint: text(item.reorderPoint),
-              reorderQuantity: text(item.reorderQuantity),
-              openedAt: new Date(),
-            })
-            .$returningId();
-          alertId = created!.id;
-        } catch (error) {
-          // Another request opened it a moment ago (one open alert per item): it tells people.
-          if (isDuplicateKey(error)) continue;
-          throw error;
-        }
-        await tellAboutNewAlert(alertId, item);
+        await openAlert(item);
       }
     }
   } catch (error) {

@@ -7,6 +7,10 @@
  */
 import { and, eq, lt, or, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
+import {
+  retryWriteConflicts,
+  writeTransaction,
+} from "~/db/write-transaction.server";
 import { attemptCounters, type attemptRules } from "~/db/schema";
 
 export type AttemptRule = (typeof attemptRules)[number];
@@ -38,10 +42,11 @@ const subjectOf = (subject: string) => subject.slice(0, 254);
 export async function countAttempts(
   attempts: { limit: AttemptLimit; subject: string }[],
 ): Promise<LimitedAttempts> {
-  const now = new Date();
-  await pruneEndedWindows(now);
-  const counted = await retryOnDeadlock(() =>
-    db.transaction(async (tx) => {
+  await pruneEndedWindows(new Date());
+  // Parallel upserts of one new key can deadlock; a retry counts afresh at its own time.
+  const counted = await writeTransaction(
+    async (tx) => {
+      const now = new Date();
       const rows = attempts.map(
         ({ limit, subject }) =>
           sql`(${limit.rule}, ${subjectOf(subject)}, 1, ${new Date(now.getTime() + limit.windowMs)})`,
@@ -62,7 +67,8 @@ export async function countAttempts(
             ...attempts.map(({ limit, subject }) => keyIs(limit.rule, subject)),
           ),
         );
-    }),
+    },
+    { label: "attempt count" },
   );
   const inOrder = attempts.map(({ limit, subject }) => {
     const row = counted.find(
@@ -96,19 +102,23 @@ export async function releaseAttempts(
   counted: readonly CountedAttempt[],
 ): Promise<void> {
   if (counted.length === 0) return;
-  await db
-    .update(attemptCounters)
-    .set({ attempts: sql`GREATEST(${attemptCounters.attempts} - 1, 0)` })
-    .where(
-      or(
-        ...counted.map((attempt) =>
-          and(
-            keyIs(attempt.rule, attempt.subject),
-            eq(attemptCounters.windowEndsAt, attempt.windowEndsAt),
+  await retryWriteConflicts(
+    () =>
+      db
+        .update(attemptCounters)
+        .set({ attempts: sql`GREATEST(${attemptCounters.attempts} - 1, 0)` })
+        .where(
+          or(
+            ...counted.map((attempt) =>
+              and(
+                keyIs(attempt.rule, attempt.subject),
+                eq(attemptCounters.windowEndsAt, attempt.windowEndsAt),
+              ),
+            ),
           ),
         ),
-      ),
-    );
+    { label: "attempt release" },
+  );
 }
 
 /** Forgets every attempt counted for a subject under a rule. */
@@ -116,7 +126,10 @@ export async function clearAttempts(
   rule: AttemptRule,
   subject: string,
 ): Promise<void> {
-  await db.delete(attemptCounters).where(keyIs(rule, subject));
+  await retryWriteConflicts(
+    () => db.delete(attemptCounters).where(keyIs(rule, subject)),
+    { label: "attempt clear" },
+  );
 }
 
 function keyIs(rule: AttemptRule, subject: string) {
@@ -131,32 +144,16 @@ let lastPruned = 0;
 async function pruneEndedWindows(now: Date): Promise<void> {
   if (now.getTime() - lastPruned < 60_000) return;
   lastPruned = now.getTime();
-  await db
-    .delete(attemptCounters)
-    .where(
-      lt(
-        attemptCounters.windowEndsAt,
-        new Date(now.getTime() - 24 * 60 * 60 * 1000),
-      ),
-    );
-}
-
-/** Runs the work again when MariaDB chose it as a deadlock's victim (parallel upserts of one new key can). */
-async function retryOnDeadlock<T>(work: () => Promise<T>): Promise<T> {
-  for (let attempt = 1; ; attempt += 1) {
-    try {
-      return await work();
-    } catch (error) {
-      if (attempt >= 3 || !isDeadlock(error)) throw error;
-    }
-  }
-}
-
-function isDeadlock(error: unknown): boolean {
-  for (let current = error, depth = 0; current && depth < 5; depth += 1) {
-    if ((current as { code?: unknown }).code === "ER_LOCK_DEADLOCK")
-      return true;
-    current = (current as { cause?: unknown }).cause;
-  }
-  return false;
+  await retryWriteConflicts(
+    () =>
+      db
+        .delete(attemptCounters)
+        .where(
+          lt(
+            attemptCounters.windowEndsAt,
+            new Date(now.getTime() - 24 * 60 * 60 * 1000),
+          ),
+        ),
+    { label: "attempt prune" },
+  );
 }

@@ -1,6 +1,7 @@
 import { createHash, randomBytes } from "node:crypto";
 import { and, eq, gt, isNull } from "drizzle-orm";
 import { db, type Transaction } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import { emailTokens } from "~/db/schema";
 
 export type EmailTokenPurpose = "invitation" | "password-reset";
@@ -33,7 +34,7 @@ export async function createEmailToken(
 ): Promise<string> {
   const token = randomBytes(32).toString("base64url");
   const now = new Date();
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     if (newTokenEndsEarlier[purpose]) {
       await tx
         .update(emailTokens)

@@ -10,9 +10,12 @@
  * Build-order transactions run at READ COMMITTED: locking reads then lock the rows they
  * find and no gaps between them, so two orders inserting reservation rows side by side
  * never block each other. Every figure a decision rests on is read with a lock.
+ *
+ * The transaction runs through `writeTransaction`: on a deadlock or a Galera conflict the
+ * whole of `work` runs again, so `work` reads (and locks) everything it decides on itself.
  */
 import { and, asc, eq, gt, inArray } from "drizzle-orm";
-import { db } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import {
   buildOrderEvents,
   buildOrders,
@@ -34,7 +37,10 @@ export type Transaction = LedgerTransaction;
 export function inBuildOrderTransaction<T>(
   work: (tx: Transaction) => Promise<T>,
 ): Promise<T> {
-  return db.transaction(work, { isolationLevel: "read committed" });
+  return writeTransaction(work, {
+    isolationLevel: "read committed",
+    label: "build order",
+  });
 }
 
 export interface LockedOrder {

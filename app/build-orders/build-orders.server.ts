@@ -4,6 +4,7 @@
  */
 import { asc, count, desc, eq, inArray } from "drizzle-orm";
 import { db } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import {
   buildOrderEvents,
   buildOrderLines,
@@ -117,7 +118,7 @@ export async function createBuildOrder(
     found.revision.id,
     input.quantity,
   );
-  return db.transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const now = new Date();
     const [created] = await tx
       .insert(buildOrders)

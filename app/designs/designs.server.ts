@@ -6,6 +6,7 @@
  */
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import {
   designLines,
   designRevisions,
@@ -119,7 +120,7 @@ export async function createDesign(
       `A design named "${input.name}" already exists.`,
       "name",
     );
-  return db.transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const [created] = await tx
       .insert(designs)
       .values({
@@ -249,7 +250,7 @@ export async function updateDraftRevision(
     expectLineIds?: number[];
   },
 ): Promise<void> {
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     const draft = await lockDraft(tx, designId, revision);
     const { lines, expectLineIds, ...fields } = change;
     if (expectLineIds) {
@@ -302,7 +303,7 @@ export async function releaseRevision(
   revision: number,
   userId: string,
 ): Promise<void> {
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     const draft = await lockDraft(tx, designId, revision);
     const [{ lines }] = (await tx
       .select({ lines: sql<number>`COUNT(*)` })
@@ -324,7 +325,7 @@ export async function releaseRevision(
 export async function startNewRevision(
   designId: number,
 ): Promise<{ revision: number }> {
-  return db.transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const [design] = await tx
       .select({ id: designs.id })
       .from(designs)

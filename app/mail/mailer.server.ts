@@ -7,7 +7,7 @@
  */
 import { and, asc, eq, isNull, lt } from "drizzle-orm";
 import nodemailer, { type Transporter } from "nodemailer";
-import { db } from "~/db/client.server";
+import { db, type Database, type Transaction } from "~/db/client.server";
 import { mailOutbox } from "~/db/schema";
 import { textToSend, textWithoutLink } from "./one-time-link";
 
@@ -123,10 +123,29 @@ const deliveriesUnderWay = new Set<Promise<void>>();
 export async function queueMailForLater(
   mails: readonly OutgoingMail[],
 ): Promise<number[]> {
+  const queued = await writeToOutbox(db, mails);
+  deliverLater(queued);
+  return queued.map((message) => message.id);
+}
+
+/** Messages written to the outbox and not yet handed to SMTP (see `writeToOutbox`). */
+export type OutboxMessages = readonly QueuedMessage[];
+
+/**
+ * Writes messages to the outbox, one row each (one statement per row, so each id is
+ * the one MariaDB gave that row, whatever `auto_increment_increment` is), in the
+ * caller's transaction when given one. Hand them to `deliverLater` only once that
+ * transaction has committed: a transaction that is rolled back and retried must not
+ * have sent anything.
+ */
+export async function writeToOutbox(
+  writer: Database | Transaction,
+  mails: readonly OutgoingMail[],
+): Promise<OutboxMessages> {
   const queued: QueuedMessage[] = [];
   for (const mail of mails) {
     const message = outboxRow(mail);
-    const [inserted] = await db
+    const [inserted] = await writer
       .insert(mailOutbox)
       .values(message)
       .$returningId();
@@ -134,13 +153,18 @@ export async function queueMailForLater(
       throw new Error("The outbox did not return the new message's id.");
     queued.push({ ...message, id: inserted.id, attempts: 0 });
   }
+  return queued;
+}
+
+/** Hands committed outbox messages to SMTP after the caller has moved on (all at once). */
+export function deliverLater(queued: OutboxMessages): void {
+  if (queued.length === 0) return;
   const delivery = Promise.all(queued.map(attemptDelivery)).then(
     () => undefined,
     (error: unknown) => console.error("[mail] delivery failed:", error),
   );
   deliveriesUnderWay.add(delivery);
   void delivery.finally(() => deliveriesUnderWay.delete(delivery));
-  return queued.map((message) => message.id);
 }
 
 /**

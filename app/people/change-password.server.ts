@@ -15,7 +15,7 @@ import {
   passwordWorkRetryAfterSeconds,
 } from "~/auth/password.server";
 import { endAllSessions, startSession } from "~/auth/session.server";
-import { db } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import { users } from "~/db/schema";
 import {
   checkSignIn,
@@ -55,7 +55,7 @@ export async function changeOwnPassword(input: {
     throw error;
   }
   const userId = input.user.id;
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     await tx.update(users).set({ passwordHash }).where(eq(users.id, userId));
     await endUnusedEmailTokens(tx, userId);
     await revokeAllApiTokens(tx, userId);

@@ -5,7 +5,7 @@
  */
 import { eq } from "drizzle-orm";
 import { createEmailToken } from "~/auth/email-tokens.server";
-import { db } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import { userRoles, users } from "~/db/schema";
 import { appUrl } from "~/lib/app-url.server";
 import { newUserId, normaliseEmail } from "./people.server";
@@ -29,7 +29,7 @@ export async function grantAdminAccess(input: {
   name?: string;
 }): Promise<AdminAccess> {
   const email = normaliseEmail(input.email);
-  const { userId, created } = await db.transaction(async (tx) => {
+  const { userId, created } = await writeTransaction(async (tx) => {
     const [existing] = await tx
       .select({ id: users.id })
       .from(users)

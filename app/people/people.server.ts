@@ -2,6 +2,7 @@
 import { randomBytes } from "node:crypto";
 import { and, asc, count, eq, isNull, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import { emailTokens, userRoles, users } from "~/db/schema";
 import { revokeAllApiTokens } from "~/auth/api-tokens.server";
 import {
@@ -173,7 +174,7 @@ export async function invitePerson(input: {
   appUrl: string;
 }): Promise<{ userId: string; mailSent: boolean }> {
   const userId = newUserId();
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     await tx.insert(users).values({
       id: userId,
       email: normaliseEmail(input.email),
@@ -202,7 +203,7 @@ export async function invitePerson(input: {
  * ends their sessions: what they could do before must not outlive the change.
  */
 export async function setRoles(userId: string, roles: Role[]): Promise<void> {
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     await tx.delete(userRoles).where(eq(userRoles.userId, userId));
     if (roles.length > 0) {
       await tx
@@ -234,7 +235,7 @@ export async function setActive(
   userId: string,
   active: boolean,
 ): Promise<void> {
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     await tx.update(users).set({ active }).where(eq(users.id, userId));
     if (!active) await revokeAllApiTokens(tx, userId);
   });
@@ -302,7 +303,7 @@ export async function setPasswordWithToken(
     if (isPasswordWorkBusy(error)) return passwordWorkBusy;
     throw error;
   }
-  const owner = await db.transaction(async (tx) => {
+  const owner = await writeTransaction(async (tx) => {
     const [row] = await tx
       .select({
         id: emailTokens.id,

@@ -76,6 +76,8 @@ export class PriceImportWriter {
     const connection = await pool.getConnection();
     const now = new Date();
     try {
+      // Run through retryWriteConflicts by importPriceList: a conflict reruns the import.
+      // eslint-disable-next-line no-restricted-syntax -- see above
       await connection.beginTransaction();
       const [created] = await connection.query<ResultSetHeader>(
         "INSERT INTO price_imports (supplier_id, file_name, file_sha256, row_count, created_items, mapping, user_id, created_at) VALUES (?, ?, ?, 0, 0, ?, ?, ?)",

@@ -9,6 +9,7 @@ import { createHash } from "node:crypto";
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { isDuplicateKey } from "~/db/database-errors";
+import { retryWriteConflicts } from "~/db/write-transaction.server";
 import {
   currencyRates,
   items,
@@ -269,7 +270,7 @@ function isLineError(result: MatchedRow | LineError): result is LineError {
 /** Rows read, matched and (on commit) written per step: small enough to keep memory flat. */
 const rowsPerBatch = 2_000;
 
-export async function importPriceList(input: {
+export interface PriceListImportInput {
   supplierName: string;
   fileName: string;
   bytes: Uint8Array;
@@ -277,7 +278,23 @@ export async function importPriceList(input: {
   dryRun: boolean;
   userId: string;
   today?: string;
-}): Promise<ImportOutcome> {
+}
+
+export async function importPriceList(
+  input: PriceListImportInput,
+): Promise<ImportOutcome> {
+  if (input.dryRun) return readOrImportPriceList(input);
+  // A commit rolled back by a deadlock or a Galera conflict runs again from the file:
+  // the supplier, the catalogue matches and every row are read afresh by each attempt.
+  return retryWriteConflicts(() => readOrImportPriceList(input), {
+    label: "price-list import",
+  });
+}
+
+/** One attempt: a preview, or the whole import in one transaction (see PriceImportWriter). */
+async function readOrImportPriceList(
+  input: PriceListImportInput,
+): Promise<ImportOutcome> {
   const [supplier] = await db
     .select()
     .from(suppliers)

@@ -1,6 +1,7 @@
 /** One supplier: its details, its price-list imports, changes to it, and what its currency lacks. */
 import { count, desc, eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import { priceImports, priceLines, suppliers, users } from "~/db/schema";
 import type { ConductorKey } from "~/engineering/reference-data";
@@ -86,7 +87,7 @@ export async function updateSupplier(
     ...(patch.notes !== undefined ? { notes: patch.notes } : {}),
   };
   try {
-    await db.transaction(async (tx) => {
+    await writeTransaction(async (tx) => {
       const [found] = await tx
         .select({ id: suppliers.id })
         .from(suppliers)

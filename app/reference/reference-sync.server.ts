@@ -24,6 +24,7 @@ import {
   thermalClasses,
   wireSizes,
 } from "~/db/schema";
+import { runWithRetries } from "~/db/write-conflicts";
 import { iecSizeLabel } from "./wire-size-labels";
 
 type Database = MySql2Database<typeof schema>;
@@ -48,148 +49,158 @@ function replaceBuiltIn(columns: string[]) {
 const text = (value: number) => String(value);
 
 export async function syncReferenceData(db: Database): Promise<void> {
-  await db.transaction(async (tx) => {
-    await tx
-      .insert(conductorMaterials)
-      .values(
-        CONDUCTOR_MATERIALS.map((row) => ({
-          key: row.key,
-          name: row.name,
-          resistivity20: row.resistivity20OhmMm2PerM.toFixed(9),
-          temperatureCoefficient20: text(row.temperatureCoefficient20PerK),
-          density: text(row.densityGPerCm3),
+  // The migration script's own client, not the app's (whose module needs DATABASE_URL at
+  // import): the same retries as writeTransaction, from the same rules. Two app servers
+  // starting at once against a Galera cluster both run this.
+  await runWithRetries(() =>
+    // eslint-disable-next-line no-restricted-syntax -- see above
+    db.transaction(async (tx) => {
+      await tx
+        .insert(conductorMaterials)
+        .values(
+          CONDUCTOR_MATERIALS.map((row) => ({
+            key: row.key,
+            name: row.name,
+            resistivity20: row.resistivity20OhmMm2PerM.toFixed(9),
+            temperatureCoefficient20: text(row.temperatureCoefficient20PerK),
+            density: text(row.densityGPerCm3),
+            source: row.source,
+          })),
+        )
+        .onDuplicateKeyUpdate({
+          set: replaceAll([
+            "name",
+            "resistivity_20_ohm_mm2_per_m",
+            "temperature_coefficient_20_per_k",
+            "density_g_per_cm3",
+            "source",
+          ]),
+        });
+
+      const sizes = [
+        ...AWG_SIZES.map((row) => ({
+          standard: "AWG" as const,
+          label: row.label,
+          gaugeNumber: row.gaugeNumber,
+          series: null,
+          bareDiameterMm: row.bareDiameterMm.toFixed(6),
           source: row.source,
         })),
-      )
-      .onDuplicateKeyUpdate({
-        set: replaceAll([
-          "name",
-          "resistivity_20_ohm_mm2_per_m",
-          "temperature_coefficient_20_per_k",
-          "density_g_per_cm3",
-          "source",
-        ]),
-      });
-
-    const sizes = [
-      ...AWG_SIZES.map((row) => ({
-        standard: "AWG" as const,
-        label: row.label,
-        gaugeNumber: row.gaugeNumber,
-        series: null,
-        bareDiameterMm: row.bareDiameterMm.toFixed(6),
-        source: row.source,
-      })),
-      ...IEC_NOMINAL_DIAMETERS.map((row) => ({
-        standard: "IEC" as const,
-        label: iecSizeLabel(row.diameterMm),
-        gaugeNumber: null,
-        series: row.series,
-        bareDiameterMm: row.diameterMm.toFixed(6),
-        source: row.source,
-      })),
-    ];
-    await tx
-      .insert(wireSizes)
-      .values(sizes)
-      .onDuplicateKeyUpdate({
-        set: replaceAll([
-          "gauge_number",
-          "series",
-          "bare_diameter_mm",
-          "source",
-        ]),
-      });
-
-    await tx
-      .insert(insulationKinds)
-      .values(
-        INSULATION_KINDS.map((row) => ({
-          key: row.key,
-          standard: row.standard,
-          name: row.name,
+        ...IEC_NOMINAL_DIAMETERS.map((row) => ({
+          standard: "IEC" as const,
+          label: iecSizeLabel(row.diameterMm),
+          gaugeNumber: null,
+          series: row.series,
+          bareDiameterMm: row.diameterMm.toFixed(6),
           source: row.source,
         })),
-      )
-      .onDuplicateKeyUpdate({
-        set: replaceAll(["standard", "name", "source"]),
-      });
+      ];
+      await tx
+        .insert(wireSizes)
+        .values(sizes)
+        .onDuplicateKeyUpdate({
+          set: replaceAll([
+            "gauge_number",
+            "series",
+            "bare_diameter_mm",
+            "source",
+          ]),
+        });
 
-    await tx
-      .insert(publishedOverallDiameters)
-      .values(
-        PUBLISHED_MAX_OVERALL_DIAMETERS.map((row) => ({
-          standard: row.standard,
-          sizeLabel:
-            row.standard === "IEC" ? iecSizeLabel(Number(row.size)) : row.size,
-          insulationKey: row.insulation,
-          maxOverallDiameterMm: row.maxOverallDiameterMm.toFixed(4),
-          source: row.source,
-        })),
-      )
-      .onDuplicateKeyUpdate({
-        set: replaceAll(["max_overall_diameter_mm", "source"]),
-      });
+      await tx
+        .insert(insulationKinds)
+        .values(
+          INSULATION_KINDS.map((row) => ({
+            key: row.key,
+            standard: row.standard,
+            name: row.name,
+            source: row.source,
+          })),
+        )
+        .onDuplicateKeyUpdate({
+          set: replaceAll(["standard", "name", "source"]),
+        });
 
-    await tx
-      .insert(thermalClasses)
-      .values(
-        THERMAL_CLASSES.map((row) => ({
-          classC: row.classC,
-          letter: row.letter,
-          typicalEnamels: row.typicalEnamels.join(", "),
-          source: row.source,
-        })),
-      )
-      .onDuplicateKeyUpdate({
-        set: replaceAll(["letter", "typical_enamels", "source"]),
-      });
+      await tx
+        .insert(publishedOverallDiameters)
+        .values(
+          PUBLISHED_MAX_OVERALL_DIAMETERS.map((row) => ({
+            standard: row.standard,
+            sizeLabel:
+              row.standard === "IEC"
+                ? iecSizeLabel(Number(row.size))
+                : row.size,
+            insulationKey: row.insulation,
+            maxOverallDiameterMm: row.maxOverallDiameterMm.toFixed(4),
+            source: row.source,
+          })),
+        )
+        .onDuplicateKeyUpdate({
+          set: replaceAll(["max_overall_diameter_mm", "source"]),
+        });
 
-    await tx
-      .insert(magnetGrades)
-      .values(
-        MAGNET_GRADES.map((row) => ({
-          key: row.key,
-          name: row.name,
-          aliases: row.aliases.join(","),
-          material: row.material,
-          temperatureSuffix: row.temperatureSuffix,
-          brMinT: text(row.brMinT),
-          brMaxT: text(row.brMaxT),
-          hcbMinKAm: text(row.hcbMinKAm),
-          hcjMinKAm: text(row.hcjMinKAm),
-          bhMaxMinKJm3: text(row.bhMaxMinKJm3),
-          bhMaxMaxKJm3: text(row.bhMaxMaxKJm3),
-          maxWorkingTemperatureC: row.maxWorkingTemperatureC,
-          brTemperatureCoefficientPerK: text(row.brTemperatureCoefficientPerK),
-          densityGPerCm3: text(row.densityGPerCm3),
-          recoilPermeability: text(row.recoilPermeability),
-          coercivityFallsWhenCold: row.coercivityFallsWhenCold,
-          source: row.source,
-          builtIn: true,
-        })),
-      )
-      .onDuplicateKeyUpdate({
-        // built_in last: MariaDB evaluates the assignments in order, so the IF()s still see the old flag.
-        set: replaceBuiltIn([
-          "name",
-          "aliases",
-          "material",
-          "temperature_suffix",
-          "br_min_t",
-          "br_max_t",
-          "hcb_min_ka_per_m",
-          "hcj_min_ka_per_m",
-          "bh_max_min_kj_per_m3",
-          "bh_max_max_kj_per_m3",
-          "max_working_temperature_c",
-          "br_temperature_coefficient_per_k",
-          "density_g_per_cm3",
-          "recoil_permeability",
-          "coercivity_falls_when_cold",
-          "source",
-          "built_in",
-        ]),
-      });
-  });
+      await tx
+        .insert(thermalClasses)
+        .values(
+          THERMAL_CLASSES.map((row) => ({
+            classC: row.classC,
+            letter: row.letter,
+            typicalEnamels: row.typicalEnamels.join(", "),
+            source: row.source,
+          })),
+        )
+        .onDuplicateKeyUpdate({
+          set: replaceAll(["letter", "typical_enamels", "source"]),
+        });
+
+      await tx
+        .insert(magnetGrades)
+        .values(
+          MAGNET_GRADES.map((row) => ({
+            key: row.key,
+            name: row.name,
+            aliases: row.aliases.join(","),
+            material: row.material,
+            temperatureSuffix: row.temperatureSuffix,
+            brMinT: text(row.brMinT),
+            brMaxT: text(row.brMaxT),
+            hcbMinKAm: text(row.hcbMinKAm),
+            hcjMinKAm: text(row.hcjMinKAm),
+            bhMaxMinKJm3: text(row.bhMaxMinKJm3),
+            bhMaxMaxKJm3: text(row.bhMaxMaxKJm3),
+            maxWorkingTemperatureC: row.maxWorkingTemperatureC,
+            brTemperatureCoefficientPerK: text(
+              row.brTemperatureCoefficientPerK,
+            ),
+            densityGPerCm3: text(row.densityGPerCm3),
+            recoilPermeability: text(row.recoilPermeability),
+            coercivityFallsWhenCold: row.coercivityFallsWhenCold,
+            source: row.source,
+            builtIn: true,
+          })),
+        )
+        .onDuplicateKeyUpdate({
+          // built_in last: MariaDB evaluates the assignments in order, so the IF()s still see the old flag.
+          set: replaceBuiltIn([
+            "name",
+            "aliases",
+            "material",
+            "temperature_suffix",
+            "br_min_t",
+            "br_max_t",
+            "hcb_min_ka_per_m",
+            "hcj_min_ka_per_m",
+            "bh_max_min_kj_per_m3",
+            "bh_max_max_kj_per_m3",
+            "max_working_temperature_c",
+            "br_temperature_coefficient_per_k",
+            "density_g_per_cm3",
+            "recoil_permeability",
+            "coercivity_falls_when_cold",
+            "source",
+            "built_in",
+          ]),
+        });
+    }),
+  );
 }

@@ -1,6 +1,7 @@
 /** Creating and changing catalogue items (the movement ledger is in stock-movements.server.ts). */
 import { eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import { items, magnetItems, wireItems } from "~/db/schema";
 import {
@@ -143,7 +144,7 @@ export async function createItem(
   }
 
   try {
-    await db.transaction(async (tx) => {
+    await writeTransaction(async (tx) => {
       const [created] = await tx
         .insert(items)
         .values({

@@ -13,7 +13,8 @@
  */
 import { checkStockAlertsOfSkus } from "~/alerts/stock-alerts.server";
 import { and, eq, sql } from "drizzle-orm";
-import { db } from "~/db/client.server";
+import type { Transaction } from "~/db/client.server";
+import { writeTransaction } from "~/db/write-transaction.server";
 import {
   buildOrderIssues,
   buildOrderLines,
@@ -43,7 +44,6 @@ function amountText(thousandths: bigint, unit: string): string {
   return `${value} ${unitWord(unit, value)}`;
 }
 
-type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
 /** A transaction of the one database client, for callers that record a movement inside their own. */
 export type LedgerTransaction = Transaction;
 
@@ -395,8 +395,9 @@ export async function recordMovement(
   userId: string,
   options: MovementOptions = {},
 ): Promise<RecordedMovement> {
-  const recorded = await db.transaction((tx) =>
-    recordMovementIn(tx, request, userId, options),
+  const recorded = await writeTransaction(
+    (tx) => recordMovementIn(tx, request, userId, options),
+    { label: "stock movement" },
   );
   // After the commit, in the same request: a drop below the reorder point opens an alert.
   if (options.checkAlerts !== false)
