@@ -1,19 +1,38 @@
 /**
- * The server entry: React Router's default Node entry, with one addition. The
- * request's Content-Security-Policy nonce (made in server/app.ts and sent in
- * the header there) goes to <ServerRouter nonce>, which hands it on to
+ * The server entry: React Router's default Node entry, with two additions.
+ * The request's Content-Security-Policy nonce (made in server/app.ts and sent
+ * in the header there) goes to <ServerRouter nonce>, which hands it on to
  * <Scripts>, <ScrollRestoration> and <Links>, and to React's own inline
- * scripts through renderToPipeableStream. See docs/decisions/012.
+ * scripts through renderToPipeableStream (docs/decisions/012). And errors go
+ * to the server's log once, with their stack (`handleError`, docs/decisions/024).
  */
 import { PassThrough } from "node:stream";
 import { createReadableStreamFromReadable } from "@react-router/node";
 import { isbot } from "isbot";
 import type { RenderToPipeableStreamOptions } from "react-dom/server";
 import { renderToPipeableStream } from "react-dom/server";
-import type { AppLoadContext, EntryContext } from "react-router";
-import { ServerRouter } from "react-router";
+import type {
+  AppLoadContext,
+  EntryContext,
+  HandleErrorFunction,
+} from "react-router";
+import { isRouteErrorResponse, ServerRouter } from "react-router";
+import { unexpectedErrorText } from "~/observability/error-reference";
+import { logServerError } from "~/observability/logger.server";
+import { currentRequest } from "~/observability/request-context.server";
 
 export const streamTimeout = 5_000;
+
+/**
+ * Every error React Router catches (a resource route's, a render's), logged
+ * once with its stack. Not: a request the client gave up on, and a route
+ * error under 500 (a path no route matches), which are no fault of ours.
+ */
+export const handleError: HandleErrorFunction = (error, { request }) => {
+  if (request.signal.aborted) return;
+  if (isRouteErrorResponse(error) && error.status < 500) return;
+  logServerError(error, "React Router caught an error");
+};
 
 export default function handleRequest(
   request: Request,
@@ -31,8 +50,7 @@ export default function handleRequest(
   }
   const nonce = loadContext.cspNonce;
 
-  return new Promise<Response>((resolve, reject) => {
-    let shellRendered = false;
+  return new Promise<Response>((resolve) => {
     const userAgent = request.headers.get("user-agent");
 
     // Crawlers and SPA mode wait for all content; browsers get the shell first.
@@ -52,7 +70,6 @@ export default function handleRequest(
       {
         nonce,
         [readyOption]() {
-          shellRendered = true;
           const body = new PassThrough({
             final(callback) {
               clearTimeout(timeoutId);
@@ -71,12 +88,21 @@ export default function handleRequest(
           );
         },
         onShellError(error: unknown) {
-          reject(error);
+          // No page could be drawn: a plain 500 with the reference to quote.
+          logServerError(error, "rendering the page failed");
+          clearTimeout(timeoutId);
+          responseHeaders.set("Content-Type", "text/plain; charset=utf-8");
+          resolve(
+            new Response(unexpectedErrorText(currentRequest()?.requestId), {
+              status: 500,
+              headers: responseHeaders,
+            }),
+          );
         },
         onError(error: unknown) {
           responseStatusCode = 500;
-          // Errors inside the shell are logged by handleDocumentRequest.
-          if (shellRendered) console.error(error);
+          // Logged once whoever sees it first (logServerError skips a repeat).
+          logServerError(error, "rendering the page failed");
         },
       },
     );

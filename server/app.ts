@@ -7,14 +7,28 @@ import express, {
   type Request as ExpressRequest,
   type Response as ExpressResponse,
 } from "express";
+import type { ServerBuild } from "react-router";
 import { lucia } from "~/auth/lucia.server";
 import { expectedOrigin, servesHost } from "~/lib/app-address";
 import { appAddress } from "~/lib/app-url.server";
+import { unexpectedErrorText } from "~/observability/error-reference";
+import { areaLogger, logServerError } from "~/observability/logger.server";
+import { mayReadMetrics } from "~/observability/metrics-access";
+import {
+  metricsContentType,
+  metricsText,
+  observeRequest,
+} from "~/observability/metrics.server";
+import { runWithRequestContext } from "~/observability/request-context.server";
+import { acceptedRequestId, newRequestId } from "~/observability/request-id";
+import { routeIdFor, routeTree } from "~/observability/route-id";
 import { answerDatabaseOutages } from "./database-unavailable";
 import { routedPath } from "./routed-path";
 import { limitRequestBodies } from "./request-size-limits";
+import { referenceUnexpectedErrors } from "./unexpected-errors";
 
 export { deploymentProblems } from "./deployment-checks";
+export { logger } from "~/observability/logger.server";
 
 declare module "react-router" {
   interface AppLoadContext {
@@ -224,11 +238,21 @@ export function refuseOddRequests(
 }
 
 /**
+ * The paths machines probe by address rather than by APP_URL's name: load
+ * balancers (/healthz liveness, /readyz readiness) and Prometheus (/metrics).
+ * They answer any Host; they make no page, link or e-mail.
+ */
+export const probePaths: ReadonlySet<string> = new Set([
+  "/healthz",
+  "/readyz",
+  "/metrics",
+]);
+
+/**
  * Serves only requests for APP_URL's host (on loopback: localhost, 127.0.0.1
  * and [::1] on its port). A request naming another host is answered 421
  * before any route: no page, link or e-mail is ever made for a host an
- * attacker chose. /healthz answers any host, for load balancers that probe
- * by address; it tells nothing but up or down.
+ * attacker chose. The {@link probePaths} answer any host.
  */
 export function refuseUnknownHosts(
   request: ExpressRequest,
@@ -237,7 +261,7 @@ export function refuseUnknownHosts(
 ) {
   if (
     servesHost(appAddress(), request.host) ||
-    routedPath(request) === "/healthz"
+    probePaths.has(routedPath(request))
   )
     return next();
   const message = `This server answers for ${appAddress().origin} only.`;
@@ -260,6 +284,150 @@ export function noStoreByDefault(
   next();
 }
 
+const serverBuild = () =>
+  import("virtual:react-router/server-build") as Promise<ServerBuild>;
+
+const routeTrees = new WeakMap<object, ReturnType<typeof routeTree>>();
+
+/** The route id of a request React Router answered (app/observability/route-id.ts). */
+async function routeIdOf(pathname: string): Promise<string> {
+  const build = await serverBuild();
+  let tree = routeTrees.get(build.routes);
+  if (!tree) {
+    tree = routeTree(build.routes);
+    routeTrees.set(build.routes, tree);
+  }
+  return routeIdFor(tree, pathname);
+}
+
+const httpLog = areaLogger("http");
+
+/** Whether a request carries an id our proxy gave it (X-Request-Id is kept only then). */
+const behindTrustedProxy = () => !!process.env.TRUST_PROXY;
+
+/**
+ * The label of a request that never reached React Router: a static file
+ * (server.js) or one of the refusals in front of the routes.
+ */
+function labelOutsideRoutes(status: number): string {
+  return status < 400 ? "(static)" : "(refused)";
+}
+
+/**
+ * Gives each request its id (the X-Request-Id header and
+ * `res.locals.requestId`), runs it in a request context (person, id for log
+ * lines), and when its answer ends writes one log line and counts it in the
+ * metrics: time, request id, method, route id, status, duration, person id.
+ * Never the URL, query, headers or body. Safe to run twice on one request
+ * (server.js puts it before the static files): the second run does nothing.
+ * See docs/decisions/024-structured-logs.md.
+ */
+export function observeRequests(
+  request: ExpressRequest,
+  response: ExpressResponse,
+  next: NextFunction,
+) {
+  if (response.locals.requestId) return next();
+  const requestId =
+    acceptedRequestId(request.get("X-Request-Id"), behindTrustedProxy()) ??
+    newRequestId();
+  response.locals.requestId = requestId;
+  response.setHeader("X-Request-Id", requestId);
+  const started = process.hrtime.bigint();
+  const context = { requestId, personId: null as string | null };
+  const pathname = routedPath(request);
+  response.once("close", () => {
+    const seconds = Number(process.hrtime.bigint() - started) / 1e9;
+    const status = response.statusCode;
+    const routed = response.locals.routeLabel === routedByReactRouter;
+    void (async () => {
+      const route = routed
+        ? await routeIdOf(pathname)
+        : typeof response.locals.routeLabel === "string"
+          ? response.locals.routeLabel
+          : labelOutsideRoutes(status);
+      observeRequest({ route, method: request.method, status, seconds });
+      const line = {
+        requestId,
+        method: request.method,
+        route,
+        status,
+        durationMs: Math.round(seconds * 1e4) / 10,
+        personId: context.personId,
+        ...(response.writableFinished ? {} : { aborted: true }),
+      };
+      // Probes come every few seconds: shown at LOG_LEVEL=debug only, unless they fail.
+      if (status >= 500) httpLog.error(line, "request");
+      else if (probePaths.has(pathname) && status < 400)
+        httpLog.debug(line, "request");
+      else httpLog.info(line, "request");
+    })().catch((error: unknown) =>
+      logServerError(error, "the request's log line failed"),
+    );
+  });
+  runWithRequestContext(context, next);
+}
+
+/** `res.locals.routeLabel` of a request React Router answers: its route id is looked up. */
+const routedByReactRouter = Symbol("routed by React Router");
+
+/**
+ * GET /metrics in Prometheus' text format, for a scraper on this machine or
+ * one holding METRICS_TOKEN (app/observability/metrics-access.ts); anyone
+ * else gets 404, as for a path that does not exist. See docs/decisions/025.
+ */
+export async function answerMetrics(
+  request: ExpressRequest,
+  response: ExpressResponse,
+  next: NextFunction,
+) {
+  if (
+    routedPath(request) !== "/metrics" ||
+    (request.method !== "GET" && request.method !== "HEAD")
+  )
+    return next();
+  response.locals.routeLabel = "(metrics)";
+  const allowed = mayReadMetrics(
+    {
+      remoteAddress: request.socket.remoteAddress,
+      forwarded:
+        request.get("X-Forwarded-For") !== undefined ||
+        request.get("Forwarded") !== undefined,
+      authorization: request.get("Authorization"),
+    },
+    process.env.METRICS_TOKEN || undefined,
+  );
+  if (!allowed) {
+    response.status(404).type("text/plain; charset=utf-8").send("Not found.\n");
+    return;
+  }
+  try {
+    const text = await metricsText();
+    response.status(200).type(metricsContentType).send(text);
+  } catch (error) {
+    next(error);
+  }
+}
+
+/**
+ * The last resort: an error no route handled (React Router's handler itself
+ * failed). Logged once with its stack; the answer is a plain 500 page with the
+ * request's reference for the person to quote.
+ */
+export function answerUnexpectedErrors(
+  error: unknown,
+  _request: ExpressRequest,
+  response: ExpressResponse,
+  next: NextFunction,
+) {
+  logServerError(error, "the request failed");
+  if (response.headersSent) return next(error);
+  response
+    .status(500)
+    .type("text/plain; charset=utf-8")
+    .send(unexpectedErrorText(response.locals.requestId as string | undefined));
+}
+
 export const app = express();
 
 app.disable("x-powered-by");
@@ -268,11 +436,13 @@ if (process.env.TRUST_PROXY) {
   const hops = Number(process.env.TRUST_PROXY);
   app.set("trust proxy", Number.isNaN(hops) ? process.env.TRUST_PROXY : hops);
 }
+app.use(observeRequests);
 app.use(securityHeaders);
 app.use(noStoreByDefault);
 app.use(refuseOddRequests);
 app.use(refuseUnknownHosts);
 app.use(compression());
+app.use(answerMetrics);
 
 // Server-Timing: how long the app took for each answer (read by `npm run bench` and browsers' dev tools).
 app.use((_request, response, next) => {
@@ -287,10 +457,14 @@ app.use((_request, response, next) => {
 app.use(refuseCrossSiteRequests);
 app.use(limitRequestBodies);
 
+app.use((_request, response, next) => {
+  response.locals.routeLabel = routedByReactRouter;
+  next();
+});
 app.use(
   createRequestHandler({
     build: () =>
-      import("virtual:react-router/server-build").then(answerDatabaseOutages),
+      serverBuild().then(answerDatabaseOutages).then(referenceUnexpectedErrors),
     getLoadContext(request, response) {
       return {
         clientAddress: request.ip ?? request.socket.remoteAddress ?? "unknown",
@@ -299,3 +473,4 @@ app.use(
     },
   }),
 );
+app.use(answerUnexpectedErrors);

@@ -32,11 +32,14 @@ import {
   isDatabaseUnavailable,
   unavailableReason,
 } from "~/db/database-errors";
+import { areaLogger } from "~/observability/logger.server";
 import {
   databaseBusyMessage,
   databaseBusyRetryAfterSeconds,
   isDatabaseBusy,
 } from "~/db/write-conflicts";
+
+const dbLog = areaLogger("db");
 
 type RouteEntry = ServerBuild["routes"][string];
 type RouteModule = NonNullable<RouteEntry>["module"];
@@ -97,8 +100,10 @@ function answering503(handler: Handler, resourceRoute: boolean): Handler {
       }
       // Responses and route errors (redirects, 4xx, the guard's own 503) carry no code.
       if (!isDatabaseUnavailable(error)) throw error;
-      console.warn(
-        `[db] database unavailable during ${args.request.method} ${new URL(args.request.url).pathname}: ${unavailableReason(error)}`,
+      // The request's log line (same requestId) names the route; never the URL.
+      dbLog.warn(
+        { method: args.request.method, reason: unavailableReason(error) },
+        "database unavailable during a request",
       );
       throw databaseUnavailableError(args.request, resourceRoute);
     }

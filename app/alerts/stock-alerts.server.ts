@@ -18,6 +18,7 @@ import {
 import { db } from "~/db/client.server";
 import { writeTransaction } from "~/db/write-transaction.server";
 import { appUrl } from "~/lib/app-url.server";
+import { areaLogger } from "~/observability/logger.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import {
   alertPreferences,
@@ -42,6 +43,8 @@ import {
   type AlertMailFacts,
   type AlertPerson,
 } from "./low-stock";
+
+const alertsLog = areaLogger("alerts");
 
 /** Active buyers and admins with their alert choice. */
 async function alertPeople(): Promise<AlertPerson[]> {
@@ -262,7 +265,7 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
       }
     }
   } catch (error) {
-    console.error("[alerts] low-stock check failed:", error);
+    alertsLog.error({ err: error }, "low-stock check failed");
   }
 }
 
@@ -424,7 +427,7 @@ export async function checkStockAlertsOfOrder(orderId: number) {
       .where(eq(buildOrderLines.orderId, orderId));
     await checkStockAlerts(lines.map((line) => line.itemId));
   } catch (error) {
-    console.error("[alerts] low-stock check failed:", error);
+    alertsLog.error({ err: error }, "low-stock check failed");
   }
 }
 
@@ -438,6 +441,6 @@ export async function checkStockAlertsOfSkus(skus: readonly string[]) {
       .where(inArray(items.sku, [...skus]));
     await checkStockAlerts(found.map((item) => item.id));
   } catch (error) {
-    console.error("[alerts] low-stock check failed:", error);
+    alertsLog.error({ err: error }, "low-stock check failed");
   }
 }

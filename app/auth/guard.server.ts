@@ -6,6 +6,7 @@
 import { data, redirect } from "react-router";
 import { isDatabaseUnavailable } from "~/db/database-errors";
 import { userHasRole, type Role } from "~/lib/roles";
+import { noteSignedInPerson } from "~/observability/request-context.server";
 import { getSessionState, type SessionUser } from "./session.server";
 
 function isApiRequest(request: Request): boolean {
@@ -28,7 +29,10 @@ export async function getOptionalUser(
   request: Request,
 ): Promise<SessionUser | null> {
   try {
-    return (await getSessionState(request)).user;
+    const { user } = await getSessionState(request);
+    // The request's log line names who it was for (docs/decisions/024).
+    if (user) noteSignedInPerson(user.id);
+    return user;
   } catch (error) {
     if (isDatabaseUnavailable(error)) databaseUnavailable(request);
     throw error;

@@ -9,7 +9,10 @@ import { and, asc, eq, isNull, lt } from "drizzle-orm";
 import nodemailer, { type Transporter } from "nodemailer";
 import { db, type Database, type Transaction } from "~/db/client.server";
 import { mailOutbox } from "~/db/schema";
+import { areaLogger } from "~/observability/logger.server";
 import { textToSend, textWithoutLink } from "./one-time-link";
+
+const mailLog = areaLogger("mail");
 
 export const defaultSmtpUrl = "smtp://127.0.0.1:2525";
 
@@ -83,9 +86,8 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
     return true;
   } catch (error) {
     const reason = error instanceof Error ? error.message : String(error);
-    console.warn(
-      `[mail] message ${message.id} to ${message.toAddress} not sent: ${reason}`,
-    );
+    // The outbox id finds the address on the admin's Outbox page.
+    mailLog.warn({ outboxId: message.id, reason }, "message not sent");
     await db
       .update(mailOutbox)
       .set({ lastError: reason.slice(0, 500), attempts })
@@ -161,7 +163,7 @@ export function deliverLater(queued: OutboxMessages): void {
   if (queued.length === 0) return;
   const delivery = Promise.all(queued.map(attemptDelivery)).then(
     () => undefined,
-    (error: unknown) => console.error("[mail] delivery failed:", error),
+    (error: unknown) => mailLog.error({ err: error }, "delivery failed"),
   );
   deliveriesUnderWay.add(delivery);
   void delivery.finally(() => deliveriesUnderWay.delete(delivery));
@@ -176,7 +178,7 @@ export function afterTheAnswer(work: Promise<unknown>): void {
   const tracked = work.then(
     () => undefined,
     (error: unknown) =>
-      console.error("[turnledger] work after an answer failed:", error),
+      mailLog.error({ err: error }, "work after an answer failed"),
   );
   deliveriesUnderWay.add(tracked);
   void tracked.finally(() => deliveriesUnderWay.delete(tracked));

@@ -6,15 +6,25 @@
  * What the rest of the app calls:
  * - `observeRequest` (server/app.ts, once per answered request);
  * - `countTransactionRetry(reason)` (the transaction retry helper);
- * - `timePriceListImport(work)` (the price-list commit);
+ * - `observePriceListImport(seconds)` (the price-list commit);
  * - `metricsText()` (the /metrics answer).
+ *
+ * The database's figures (outbox backlog, open alerts) are read when
+ * Prometheus asks, with a short time limit: a database that is down or slow
+ * reports them as NaN in that scrape (and turnledger_database_figures_up 0)
+ * instead of failing it.
  */
+import type { Pool as CorePool } from "mysql2";
 import {
   Counter,
+  Gauge,
   Histogram,
   Registry,
   collectDefaultMetrics,
 } from "prom-client";
+import { countOpenAlerts } from "~/alerts/stock-alerts.server";
+import { pool } from "~/db/client.server";
+import { outboxBacklog } from "~/mail/outbox-backlog.server";
 
 function createMetrics() {
   const registry = new Registry();
@@ -46,8 +56,44 @@ function createMetrics() {
     buckets: [0.05, 0.1, 0.25, 0.5, 1, 2.5, 5, 10, 30, 60],
     registers: [registry],
   });
+  const poolConnections = new Gauge({
+    name: "turnledger_db_pool_connections",
+    help: "Database connections of this server's pool: in_use (lent to a request), idle (open, free) and waiting (requests queued for a connection).",
+    labelNames: ["state"] as const,
+    registers: [registry],
+    collect() {
+      const figures = poolFigures();
+      for (const [state, value] of Object.entries(figures))
+        this.set({ state }, value);
+    },
+  });
+  const databaseFiguresUp = new Gauge({
+    name: "turnledger_database_figures_up",
+    help: "1 when this scrape read the database's figures (outbox, alerts), 0 when the database did not answer in time.",
+    registers: [registry],
+  });
+  const outboxUnsent = new Gauge({
+    name: "turnledger_mail_outbox_unsent",
+    help: "E-mails in the outbox that SMTP has not accepted yet and that will still be tried.",
+    registers: [registry],
+  });
+  const outboxOldestAge = new Gauge({
+    name: "turnledger_mail_outbox_oldest_unsent_age_seconds",
+    help: "How long the oldest unsent e-mail has waited (0 when none waits).",
+    registers: [registry],
+  });
+  const openAlerts = new Gauge({
+    name: "turnledger_stock_alerts_open",
+    help: "Low-stock alerts open now (one per item at most).",
+    registers: [registry],
+  });
   return {
     registry,
+    poolConnections,
+    databaseFiguresUp,
+    outboxUnsent,
+    outboxOldestAge,
+    openAlerts,
     requests,
     requestDuration,
     transactionRetries,
@@ -89,22 +135,78 @@ export function countTransactionRetry(reason: string): void {
   metrics.transactionRetries.inc({ reason });
 }
 
-/** Runs a price-list commit and records how long it took, whether it succeeded or threw. */
-export async function timePriceListImport<T>(
-  work: () => Promise<T>,
-): Promise<T> {
-  const stop = metrics.priceListImportDuration.startTimer();
+/** Records how long a committed price-list import took (seconds). */
+export function observePriceListImport(seconds: number): void {
+  metrics.priceListImportDuration.observe(seconds);
+}
+
+/**
+ * The pool's connections by state. mysql2 has no public figures for this;
+ * these are the core pool's own lists (mysql2 3.x, lib/base/pool.js).
+ */
+function poolFigures(): { in_use: number; idle: number; waiting: number } {
+  const core = (pool as unknown as { pool: CorePool }).pool as unknown as {
+    _allConnections?: { length: number };
+    _freeConnections?: { length: number };
+    _connectionQueue?: { length: number };
+  };
+  const all = core._allConnections?.length ?? 0;
+  const idle = core._freeConnections?.length ?? 0;
+  return {
+    in_use: all - idle,
+    idle,
+    waiting: core._connectionQueue?.length ?? 0,
+  };
+}
+
+/** How long a scrape waits for the database's figures. */
+const databaseFiguresTimeoutMs = 2_000;
+/** The reading under way: scrapes while the database hangs share it instead of queuing more. */
+let readingFigures: Promise<void> | null = null;
+
+async function readDatabaseFigures(): Promise<void> {
+  const [backlog, alerts] = await Promise.all([
+    outboxBacklog(),
+    countOpenAlerts(),
+  ]);
+  metrics.outboxUnsent.set(backlog.unsent);
+  metrics.outboxOldestAge.set(
+    backlog.oldestUnsentAt
+      ? Math.max(0, (Date.now() - backlog.oldestUnsentAt.getTime()) / 1000)
+      : 0,
+  );
+  metrics.openAlerts.set(alerts);
+}
+
+/** Refreshes the database's figures, or leaves them out of this scrape when the database does not answer in time. */
+async function refreshDatabaseFigures(): Promise<void> {
+  const reading = (readingFigures ??= readDatabaseFigures().finally(() => {
+    readingFigures = null;
+  }));
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const timedOut = new Promise<"timeout">((resolve) => {
+    timer = setTimeout(() => resolve("timeout"), databaseFiguresTimeoutMs);
+  });
   try {
-    return await work();
+    const outcome = await Promise.race([reading, timedOut]);
+    if (outcome === "timeout") throw new Error("timed out");
+    metrics.databaseFiguresUp.set(1);
+  } catch {
+    // Stale numbers would read as true ones: NaN says "not known now".
+    metrics.outboxUnsent.set(Number.NaN);
+    metrics.outboxOldestAge.set(Number.NaN);
+    metrics.openAlerts.set(Number.NaN);
+    metrics.databaseFiguresUp.set(0);
   } finally {
-    stop();
+    clearTimeout(timer);
   }
 }
 
 /** The Content-Type of {@link metricsText}: Prometheus' text format 0.0.4. */
 export const metricsContentType = metrics.registry.contentType;
 
-/** Every metric in Prometheus' text format. */
-export function metricsText(): Promise<string> {
+/** Every metric in Prometheus' text format, the database's figures read just now. */
+export async function metricsText(): Promise<string> {
+  await refreshDatabaseFigures();
   return metrics.registry.metrics();
 }

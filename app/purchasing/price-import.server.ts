@@ -27,6 +27,7 @@ import {
   type ColumnMapping,
   type ColumnMappingByField,
 } from "~/price-lists/column-mapping";
+import { observePriceListImport } from "~/observability/metrics.server";
 import { LineErrorList, mergeLineErrors } from "~/price-lists/line-errors";
 import type { LineError } from "~/price-lists/parse-price-list";
 import {
@@ -380,6 +381,7 @@ async function readOrImportPriceList(
     };
   }
 
+  const commitStarted = performance.now();
   const fileSha256 = createHash("sha256").update(input.bytes).digest("hex");
   const previous = await previousImportOf(supplier.id, fileSha256);
   if (previous) return { kind: "already-imported", importId: previous };
@@ -454,6 +456,7 @@ async function readOrImportPriceList(
       headerSignature: input.mapping.map((entry) => entry.header).join("\t"),
       mapping: JSON.stringify(input.mapping),
     });
+    observePriceListImport((performance.now() - commitStarted) / 1000);
     return {
       kind: "imported",
       importId: written.importId,

@@ -1,5 +1,8 @@
 import { sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
+import { areaLogger } from "~/observability/logger.server";
+
+const healthLog = areaLogger("health");
 
 /** GET /healthz → { status, database } for load balancers: 200 when the database answers, else 503. */
 export async function loader() {
@@ -19,7 +22,7 @@ export async function loader() {
   } catch (error) {
     // The reason goes to the server's log, never to the caller: anyone may
     // ask /healthz, and a driver's message names hosts, users and databases.
-    console.error("[turnledger] /healthz: the database did not answer:", error);
+    healthLog.error({ err: error }, "/healthz: the database did not answer");
     return Response.json(
       { status: "unavailable", database: { state: "down" } },
       {

@@ -5,7 +5,10 @@ import {
 } from "~/db/database-errors";
 import { isEngineeringInputError } from "~/engineering/errors";
 import { apiError, databaseUnavailableAnswer } from "~/lib/api.server";
+import { areaLogger } from "~/observability/logger.server";
 import { isStockError } from "./stock-errors";
+
+const dbLog = areaLogger("db");
 
 /**
  * Runs stock work for an API route; the ledger's refusals become 400/404/409 JSON answers,
@@ -29,7 +32,10 @@ export async function answerStockError(
     }
     if (isDuplicateKey(error)) return apiError(409, "That already exists.");
     if (isDatabaseUnavailable(error)) {
-      console.warn(`[db] database unavailable: ${unavailableReason(error)}`);
+      dbLog.warn(
+        { reason: unavailableReason(error) },
+        "database unavailable during a request",
+      );
       return databaseUnavailableAnswer();
     }
     throw error;
