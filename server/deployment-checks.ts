@@ -4,14 +4,22 @@
  *
  * - APP_URL is set and well-formed: every e-mailed link and the Host check
  *   come from it (app/lib/app-address.ts).
+ * - The database server is MariaDB 10.6 or newer (docs/decisions/029).
+ * - The database has exactly the migrations this build was made with: a
+ *   server never migrates; behind, it says to run `npm run db:migrate`;
+ *   ahead or foreign, that another version migrated it (docs/decisions/023).
+ *   Demo servers too.
  * - No demo account signs in with the published demo password, unless the
  *   server is a demo (DEMO_DATA=1, which `npm start` sets on its private
  *   MariaDB and the tests set for theirs).
  */
-import { inArray, isNotNull, like, or, and } from "drizzle-orm";
+import { inArray, isNotNull, like, or, and, sql } from "drizzle-orm";
 import { defaultDemoPassword, demoPassword } from "~/auth/demo-password.server";
 import { verifyPassword } from "~/auth/password.server";
 import { db } from "~/db/client.server";
+import { databaseServerProblem } from "~/db/database-server-version";
+import { schemaProblem } from "~/db/migration-history";
+import { schemaStatus } from "~/db/schema-version.server";
 import { users } from "~/db/schema";
 import { parseAppUrl } from "~/lib/app-address";
 import { demoPeople } from "../seed/demo-people";
@@ -36,6 +44,14 @@ function appUrlProblem(env: NodeJS.ProcessEnv): string | null {
   } catch (error) {
     return (error as Error).message;
   }
+}
+
+/** Why the database server will not do (not MariaDB 10.6+), or null. */
+async function serverVersionProblem(): Promise<string | null> {
+  const [rows] = (await db.execute(
+    sql`SELECT VERSION() AS version`,
+  )) as unknown as [{ version: string }[]];
+  return databaseServerProblem(rows[0]?.version ?? "");
 }
 
 /** The demo accounts (by e-mail or seeded id) that still sign in with a demo password. */
@@ -80,6 +96,11 @@ export async function deploymentProblems(
   const problems: string[] = [];
   const appUrl = appUrlProblem(env);
   if (appUrl) problems.push(appUrl);
+  const server = await serverVersionProblem();
+  if (server) return [...problems, server];
+  // The account check below reads tables a database behind may not have yet.
+  const schema = schemaProblem(await schemaStatus());
+  if (schema) return [...problems, schema];
   if (!isDemoServer(env)) {
     const demoAccounts = await accountsWithDemoPassword();
     if (demoAccounts.length > 0)

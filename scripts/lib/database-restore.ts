@@ -10,7 +10,6 @@ import fs from "node:fs";
 import path from "node:path";
 import { pipeline } from "node:stream/promises";
 import { createGunzip } from "node:zlib";
-import { readMigrationFiles } from "drizzle-orm/migrator";
 import mysql from "mysql2/promise";
 import { poolOptionsFromUrl } from "~/db/connection-options";
 import { verifyBackupChecksum } from "./backup-files";
@@ -21,11 +20,12 @@ import {
   urlForDatabase,
   withClientLogin,
 } from "./mariadb-client-login";
+import { compareMigrations } from "~/db/migration-history";
 import {
-  compareMigrations,
-  type MigrationRecord,
-} from "~/db/migration-history";
-import { projectRoot } from "./project-paths";
+  appliedMigrations,
+  knownMigrations,
+  tableNames,
+} from "./migration-state";
 
 /** A refusal the person running the restore can act on (no stack trace needed). */
 export class RestoreRefused extends Error {}
@@ -36,27 +36,6 @@ export interface RestoreOptions {
   /** Empty a non-empty database first instead of refusing. */
   force?: boolean;
   log?: (line: string) => void;
-}
-
-/** The migrations this version ships (drizzle/meta/_journal.json). */
-export function knownMigrations(): MigrationRecord[] {
-  return readMigrationFiles({
-    migrationsFolder: path.join(projectRoot, "drizzle"),
-  }).map((migration) => ({
-    hash: migration.hash,
-    createdAt: migration.folderMillis,
-  }));
-}
-
-async function tableNames(
-  connection: mysql.Connection,
-  database: string,
-): Promise<string[]> {
-  const [rows] = await connection.query(
-    "SELECT TABLE_NAME AS name FROM information_schema.TABLES WHERE TABLE_SCHEMA = ?",
-    [database],
-  );
-  return (rows as { name: string }[]).map((row) => row.name);
 }
 
 async function emptyDatabase(
@@ -73,22 +52,6 @@ async function emptyDatabase(
   for (const name of await tableNames(connection, database))
     await connection.query(`DROP TABLE \`${database}\`.\`${name}\``);
   await connection.query("SET FOREIGN_KEY_CHECKS = 1");
-}
-
-async function appliedMigrations(
-  connection: mysql.Connection,
-  database: string,
-): Promise<MigrationRecord[]> {
-  if (
-    !(await tableNames(connection, database)).includes("__drizzle_migrations")
-  )
-    return [];
-  const [rows] = await connection.query(
-    `SELECT hash, created_at AS createdAt FROM \`${database}\`.__drizzle_migrations ORDER BY created_at, id`,
-  );
-  return (rows as { hash: string; createdAt: string | number }[]).map(
-    (row) => ({ hash: row.hash, createdAt: Number(row.createdAt) }),
-  );
 }
 
 /** Streams the gzip backup through gunzip into `mariadb <database>`. */

@@ -1,4 +1,3 @@
-import path from "node:path";
 import { and, count, eq, isNotNull } from "drizzle-orm";
 import { drizzle, type MySql2Database } from "drizzle-orm/mysql2";
 import { migrate } from "drizzle-orm/mysql2/migrator";
@@ -11,8 +10,21 @@ import {
   demoStorekeeperId,
 } from "../../seed/demo-people";
 import { databaseIsEmpty, seedDemoData } from "../../seed/seed-demo-data";
-import { projectRoot } from "./project-paths";
+import { databaseServerProblem } from "~/db/database-server-version";
+import { compareMigrations, schemaProblem } from "~/db/migration-history";
 import { syncReferenceData } from "~/reference/reference-sync.server";
+import { charsetPlan, createDatabaseAdvice } from "./database-charset";
+import {
+  ensureMigrationLockTable,
+  migrationLockTable,
+  takeMigrationLock,
+  type MigrationLock,
+} from "./migration-lock";
+import {
+  appliedMigrations,
+  knownMigrations,
+  migrationsFolder,
+} from "./migration-state";
 
 async function withDatabase<T>(
   databaseUrl: string,
@@ -29,15 +41,125 @@ async function withDatabase<T>(
   }
 }
 
+/** db:migrate will not go on, and says why and what to do (no stack trace needed). */
+export class MigrationRefused extends Error {}
+
+export interface MigrationOutcome {
+  /** Migrations this run applied (0 when another run had applied them). */
+  applied: number;
+  /** This version's migrations, all of which the database now has. */
+  known: number;
+}
+
 /**
  * Applies the committed migrations in drizzle/ that the database has not had
- * yet, then writes the built-in engineering reference data.
+ * yet, then writes the built-in engineering reference data — under the
+ * migration lock (migration-lock.ts), so two runs at once never both apply a
+ * migration: the second waits, then finds nothing left to do. Before the
+ * first migration it checks the server (MariaDB 10.6+) and the database's
+ * character set (utf8mb4, set as the default of an empty database).
+ * Refuses a database migrated by a newer or another version of Turnledger.
  */
-export function migrateDatabase(databaseUrl: string): Promise<void> {
-  return withDatabase(databaseUrl, async (db) => {
-    await migrate(db, { migrationsFolder: path.join(projectRoot, "drizzle") });
+export async function migrateDatabase(
+  databaseUrl: string,
+  options: { log?: (line: string) => void } = {},
+): Promise<MigrationOutcome> {
+  const log = options.log ?? ((line: string) => console.log(line));
+  const lockPool = mysql.createPool({
+    ...poolOptionsFromUrl(databaseUrl),
+    connectionLimit: 1,
+  });
+  try {
+    const connection = await lockPool.getConnection();
+    try {
+      const [[server]] = (await connection.query(
+        "SELECT VERSION() AS version, DATABASE() AS name",
+      )) as unknown as [[{ version: string; name: string }]];
+      const serverProblem = databaseServerProblem(server.version);
+      if (serverProblem) throw new MigrationRefused(serverProblem);
+
+      await ensureMigrationLockTable(connection);
+      const waitSeconds = Number(process.env.MIGRATE_LOCK_WAIT_SECONDS ?? 600);
+      const lock = await takeMigrationLock(connection, { waitSeconds, log });
+      try {
+        return await migrateUnderLock(connection, server.name, databaseUrl, {
+          lock,
+          log,
+        });
+      } finally {
+        await lock.release();
+      }
+    } finally {
+      connection.release();
+    }
+  } finally {
+    await lockPool.end();
+  }
+}
+
+async function migrateUnderLock(
+  connection: mysql.Connection,
+  database: string,
+  databaseUrl: string,
+  { lock, log }: { lock: MigrationLock; log: (line: string) => void },
+): Promise<MigrationOutcome> {
+  const known = knownMigrations();
+  const before = await appliedMigrations(connection, database);
+  const fit = compareMigrations(before, known);
+  if (fit.kind === "newer" || fit.kind === "foreign")
+    throw new MigrationRefused(
+      schemaProblem({ ...fit, applied: before.length, known: known.length })!,
+    );
+  if (fit.kind === "older") await prepareCharset(connection, database, log);
+
+  await withDatabase(databaseUrl, async (db) => {
+    await migrate(db, { migrationsFolder });
+    lock.assertHeld();
     await syncReferenceData(db);
   });
+  lock.assertHeld();
+  return { applied: known.length - before.length, known: known.length };
+}
+
+/** Makes new tables utf8mb4, or refuses a database that holds other tables (database-charset.ts). */
+async function prepareCharset(
+  connection: mysql.Connection,
+  database: string,
+  log: (line: string) => void,
+): Promise<void> {
+  const [[defaults]] = (await connection.query(
+    "SELECT DEFAULT_CHARACTER_SET_NAME AS charset, DEFAULT_COLLATION_NAME AS collation FROM information_schema.SCHEMATA WHERE SCHEMA_NAME = ?",
+    [database],
+  )) as unknown as [[{ charset: string; collation: string }]];
+  const [tables] = (await connection.query(
+    "SELECT TABLE_NAME AS name, TABLE_COLLATION AS collation FROM information_schema.TABLES " +
+      "WHERE TABLE_SCHEMA = ? AND TABLE_TYPE = 'BASE TABLE' AND TABLE_NAME <> ?",
+    [database, migrationLockTable],
+  )) as unknown as [{ name: string; collation: string }[]];
+  const plan = charsetPlan({
+    database,
+    defaultCharset: defaults.charset,
+    defaultCollation: defaults.collation,
+    tables,
+  });
+  if (plan.kind === "refuse") throw new MigrationRefused(plan.message);
+  if (plan.kind === "ready") return;
+  try {
+    await connection.query(
+      `ALTER DATABASE \`${database}\` CHARACTER SET utf8mb4 COLLATE ${plan.collation}`,
+    );
+  } catch (error) {
+    throw new MigrationRefused(
+      `The database ${database}'s default character set is ${defaults.charset} (${defaults.collation}), ` +
+        `which cannot hold the Greek letters and symbols Turnledger stores, and changing it failed: ${(error as Error).message}. ` +
+        `Have its administrator run \`ALTER DATABASE \`${database}\` CHARACTER SET utf8mb4 COLLATE ${plan.collation}\`, ` +
+        `or create it with \`${createDatabaseAdvice(database)}\`, then run \`npm run db:migrate\` again.`,
+    );
+  }
+  log(
+    `[turnledger] the database ${database}'s default character set was ${defaults.charset} (${defaults.collation}): ` +
+      `set to utf8mb4 (${plan.collation}) before migrating, so every table holds any character.`,
+  );
 }
 
 /** True when no active account has a password: nobody can sign in yet. */
