@@ -24,12 +24,13 @@ export interface OutboxBacklog {
 }
 
 /**
- * The outbox's backlog in one query. The index `mail_outbox_unsent_idx`
- * (sent_at, created_at) finds the unsent rows without reading the sent ones,
- * however many years of sent mail the table holds.
+ * The one query behind {@link outboxBacklog}. The index
+ * `mail_outbox_unsent_idx` (sent_at, created_at) finds the unsent rows
+ * without reading the sent ones, however many years of sent mail the table
+ * holds (tests/integration/readiness.test.ts reads the query plan).
  */
-export async function outboxBacklog(): Promise<OutboxBacklog> {
-  const [row] = await db
+export function outboxBacklogQuery() {
+  return db
     .select({ unsent: count(), oldestUnsentAt: min(mailOutbox.createdAt) })
     .from(mailOutbox)
     .where(
@@ -38,6 +39,11 @@ export async function outboxBacklog(): Promise<OutboxBacklog> {
         lt(mailOutbox.attempts, deliveryAttemptsBeforeGivingUp),
       ),
     );
+}
+
+/** The outbox's backlog now. */
+export async function outboxBacklog(): Promise<OutboxBacklog> {
+  const [row] = await outboxBacklogQuery();
   // MIN() is read through the column, so it arrives as a Date (UTC).
   return {
     unsent: row?.unsent ?? 0,

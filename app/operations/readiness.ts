@@ -15,8 +15,10 @@
  * host, a driver's message or a migration's name.
  */
 
+import type { SchemaStatus } from "~/db/migration-history";
+
 /** How the database's migrations compare with the build's (app/db/schema-version.server.ts). */
-export type SchemaKind = "current" | "older" | "newer" | "foreign";
+export type SchemaKind = SchemaStatus["kind"];
 
 export interface ReadinessFacts {
   stopping: boolean;

@@ -1,0 +1,104 @@
+/**
+ * Gathers what /readyz decides on (app/operations/readiness.ts): the
+ * stopping flag, whether the database answers, its migrations against this
+ * build's, and the outbox's oldest unsent e-mail. Each database question has
+ * a time limit, so a load balancer's probe gets an answer before its own
+ * timeout. Why the server is not ready goes to the server's log (once per
+ * change, not on every probe); the caller sees states only.
+ */
+import { schemaStatus } from "~/db/schema-version.server";
+import { outboxBacklog } from "~/mail/outbox-backlog.server";
+import { readOperatingSettings } from "./operating-settings";
+import {
+  judgeReadiness,
+  type Readiness,
+  type ReadinessFacts,
+} from "./readiness";
+import { isStopping } from "./server-stopping";
+
+/** Longest wait for each database question: below a load balancer's usual 5 s probe timeout. */
+const questionTimeoutMs = 2_000;
+
+class NoAnswerInTime extends Error {}
+
+async function answerInTime<T>(question: Promise<T>): Promise<T> {
+  let timer: NodeJS.Timeout | undefined;
+  try {
+    return await Promise.race([
+      question,
+      new Promise<never>((_resolve, reject) => {
+        timer = setTimeout(
+          () =>
+            reject(
+              new NoAnswerInTime(
+                `no answer within ${questionTimeoutMs / 1000} s`,
+              ),
+            ),
+          questionTimeoutMs,
+        );
+      }),
+    ]);
+  } finally {
+    clearTimeout(timer);
+  }
+}
+
+/** The facts, asking the database only what the answers before allow. */
+async function gatherFacts(now: Date): Promise<ReadinessFacts> {
+  const facts: ReadinessFacts = {
+    stopping: isStopping(),
+    databaseUp: null,
+    schema: null,
+    oldestUnsentAt: undefined,
+    outboxMaxAgeMinutes: readOperatingSettings().settings.outboxMaxAgeMinutes,
+    now,
+  };
+  // A stopping server is not ready whatever the database says; its pool is closing.
+  if (facts.stopping) return facts;
+  try {
+    facts.schema = (await answerInTime(schemaStatus())).kind;
+    // The outbox table is this version's only when the migrations are.
+    if (facts.schema === "current" && facts.outboxMaxAgeMinutes !== null)
+      facts.oldestUnsentAt = (
+        await answerInTime(outboxBacklog())
+      ).oldestUnsentAt;
+    facts.databaseUp = true;
+  } catch (error) {
+    // The reason goes to the server's log, never to the caller: a driver's
+    // message names hosts, users and databases.
+    console.error("[turnledger] /readyz: the database did not answer:", error);
+    facts.databaseUp = false;
+    facts.schema = null;
+    facts.oldestUnsentAt = undefined;
+  }
+  return facts;
+}
+
+/** What the log last said about readiness, so a change is logged once. */
+let lastLogged = "ready";
+
+function logChange(readiness: Readiness) {
+  const summary = readiness.ready
+    ? "ready"
+    : readiness.failed
+        .map((name) => {
+          const check = readiness.checks[name];
+          if (name === "outbox" && "oldestUnsentMinutes" in check)
+            return `outbox stuck (the oldest unsent e-mail has waited ${check.oldestUnsentMinutes} min, more than READY_OUTBOX_MAX_AGE_MINUTES=${check.maxAgeMinutes}; see the admin's Outbox and run npm run mail:retry)`;
+          if (name === "migrations")
+            return `migrations ${check.state} (npm run db:migrate, or a server of the database's version)`;
+          return `${name} ${check.state}`;
+        })
+        .join("; ");
+  if (summary === lastLogged) return;
+  lastLogged = summary;
+  if (readiness.ready) console.log("[turnledger] /readyz: ready again");
+  else console.warn(`[turnledger] /readyz: not ready: ${summary}`);
+}
+
+/** Whether this server should be sent requests now, and why not. */
+export async function checkReadiness(now = new Date()): Promise<Readiness> {
+  const readiness = judgeReadiness(await gatherFacts(now));
+  logChange(readiness);
+  return readiness;
+}
