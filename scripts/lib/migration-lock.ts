@@ -90,22 +90,29 @@ async function currentRow(
   return (rows as LockRow[])[0] ?? null;
 }
 
+type Attempt =
+  | { kind: "taken" }
+  /** `previous` is the expired row as it was read just before (null if it vanished). */
+  | { kind: "taken-over"; previous: LockRow | null }
+  | { kind: "held"; by: LockRow | null };
+
 /** One attempt: take a free row, or take over an expired one. */
 async function tryTake(
   connection: mysql.Connection,
   holder: string,
   ttlSeconds: number,
-): Promise<"taken" | "taken-over" | "held"> {
+): Promise<Attempt> {
   try {
     await connection.query(
       `INSERT INTO \`${migrationLockTable}\` (name, holder, taken_at, expires_at)
        VALUES (?, ?, UTC_TIMESTAMP(3), UTC_TIMESTAMP(3) + INTERVAL ? SECOND)`,
       [lockName, holder, ttlSeconds],
     );
-    return "taken";
+    return { kind: "taken" };
   } catch (error) {
     if (!lostTheRace(error)) throw error;
   }
+  const before = await currentRow(connection);
   try {
     const [result] = await connection.query(
       `UPDATE \`${migrationLockTable}\`
@@ -114,11 +121,11 @@ async function tryTake(
       [holder, ttlSeconds, lockName],
     );
     if ((result as mysql.ResultSetHeader).affectedRows === 1)
-      return "taken-over";
+      return { kind: "taken-over", previous: before };
   } catch (error) {
     if (!lostTheRace(error)) throw error;
   }
-  return "held";
+  return { kind: "held", by: before };
 }
 
 const iso = (date: Date) => date.toISOString().replace(/\.\d+Z$/, "Z");
@@ -140,21 +147,18 @@ export async function takeMigrationLock(
 
   const started = Date.now();
   let lastNote = 0;
-  let previous: LockRow | null = null;
   for (;;) {
-    const outcome = await tryTake(connection, holder, ttlSeconds);
-    if (outcome !== "held") {
-      if (outcome === "taken-over" && previous)
-        log(
-          `[turnledger] took over the migration lock left by ${previous.holder} ` +
-            `(taken ${iso(previous.takenAt)}, expired ${iso(previous.expiresAt)}: that run stopped without releasing it).`,
-        );
-      else if (outcome === "taken-over")
-        log("[turnledger] took over an expired migration lock.");
+    const attempt = await tryTake(connection, holder, ttlSeconds);
+    if (attempt.kind === "taken-over")
+      log(
+        attempt.previous
+          ? `[turnledger] took over the migration lock left by ${attempt.previous.holder} ` +
+              `(taken ${iso(attempt.previous.takenAt)}, expired ${iso(attempt.previous.expiresAt)}: that run stopped without releasing it).`
+          : "[turnledger] took over an expired migration lock.",
+      );
+    if (attempt.kind !== "held")
       return startRenewing(connection, holder, ttlSeconds, log);
-    }
-    const row = await currentRow(connection);
-    if (row) previous = row;
+    const row = attempt.by;
     const waited = (Date.now() - started) / 1000;
     if (waited >= waitSeconds)
       throw new MigrationLockError(

@@ -7,7 +7,12 @@
  */
 import { spawn } from "node:child_process";
 import { randomBytes } from "node:crypto";
+import fs from "node:fs";
+import os from "node:os";
 import path from "node:path";
+import { drizzle } from "drizzle-orm/mysql2";
+import { migrate } from "drizzle-orm/mysql2/migrator";
+import mysql from "mysql2/promise";
 import { afterAll, describe, expect, inject, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
 import { appServerArguments } from "../../scripts/lib/app-server-process";
@@ -15,6 +20,10 @@ import {
   connectAsRoot,
   ensureLocalMariadb,
 } from "../../scripts/lib/local-mariadb";
+import {
+  knownMigrations,
+  migrationsFolder,
+} from "../../scripts/lib/migration-state";
 import {
   baseUrl,
   get,
@@ -25,6 +34,11 @@ import {
 } from "../support/app-client";
 import { receivedMessages, waitForMessage } from "../support/mail-fake-client";
 import { rawRequest } from "../support/raw-http";
+import {
+  dropDatabase,
+  freshDatabase,
+  runDbMigrate,
+} from "../support/scratch-databases";
 import {
   closeTestDatabase,
   createPerson,
@@ -396,5 +410,109 @@ describe("npm run admin:create", () => {
     });
     expect(refused.code).toBe(2);
     expect(refused.output).toMatch(/Give one e-mail address/);
+  });
+});
+
+describe("a server against a database that does not have its migrations", () => {
+  // Ports past the ones other tests start servers on (TEST_PORT + 2, + 20…23, + 41).
+  const serverPort = () => port() + 50;
+  const known = knownMigrations();
+
+  /** Migrates a fresh database with all but the last `behind` of this version's migrations. */
+  async function migratedBehind(suffix: string, behind: number) {
+    const { name, url } = await freshDatabase(suffix);
+    const folder = fs.mkdtempSync(path.join(os.tmpdir(), "turnledger-older-"));
+    const pool = mysql.createPool({ uri: url, connectionLimit: 1 });
+    try {
+      fs.cpSync(migrationsFolder, folder, { recursive: true });
+      const journalFile = path.join(folder, "meta", "_journal.json");
+      const journal = JSON.parse(fs.readFileSync(journalFile, "utf8")) as {
+        entries: unknown[];
+      };
+      journal.entries = journal.entries.slice(0, -behind);
+      fs.writeFileSync(journalFile, JSON.stringify(journal));
+      await migrate(drizzle(pool), { migrationsFolder: folder });
+    } finally {
+      await pool.end();
+      fs.rmSync(folder, { recursive: true, force: true });
+    }
+    return { name, url };
+  }
+
+  it("one migration behind refuses to start and says to run npm run db:migrate", async () => {
+    const { name, url } = await migratedBehind("behind", 1);
+    try {
+      const server = startServer(
+        {
+          DATABASE_URL: url,
+          APP_URL: `http://localhost:${serverPort()}`,
+          DEMO_DATA: "1",
+        },
+        serverPort(),
+      );
+      const outcome = await server.outcome;
+      await server.stop();
+      expect(outcome.listening, outcome.output).toBe(false);
+      expect("code" in outcome && outcome.code).toBe(1);
+      expect(outcome.output).toContain(
+        `The database has ${known.length - 1} of this version's ${known.length} migrations: run \`npm run db:migrate\``,
+      );
+
+      // Once migrated it starts (the server itself never migrated).
+      const migrated = await runDbMigrate(url);
+      expect(migrated.code, migrated.output).toBe(0);
+      expect(migrated.output).toContain("applied 1 migration;");
+      const again = startServer(
+        {
+          DATABASE_URL: url,
+          APP_URL: `http://localhost:${serverPort()}`,
+          DEMO_DATA: "1",
+        },
+        serverPort(),
+      );
+      const started = await again.outcome;
+      await again.stop();
+      expect(started.listening, started.output).toBe(true);
+    } finally {
+      await dropDatabase(name);
+    }
+  });
+
+  it("with a migration this version does not know refuses to start: migrated by a newer Turnledger", async () => {
+    const { name, url } = await freshDatabase("ahead");
+    try {
+      const migrated = await runDbMigrate(url);
+      expect(migrated.code, migrated.output).toBe(0);
+      const connection = await mysql.createConnection({ uri: url });
+      try {
+        await connection.query(
+          "INSERT INTO __drizzle_migrations (hash, created_at) VALUES (?, ?)",
+          ["f".repeat(64), known.at(-1)!.createdAt + 60_000],
+        );
+      } finally {
+        await connection.end();
+      }
+      const server = startServer(
+        {
+          DATABASE_URL: url,
+          APP_URL: `http://localhost:${serverPort()}`,
+          DEMO_DATA: "1",
+        },
+        serverPort(),
+      );
+      const outcome = await server.outcome;
+      await server.stop();
+      expect(outcome.listening, outcome.output).toBe(false);
+      expect(outcome.output).toContain(
+        `This database was migrated by a newer Turnledger: it has ${known.length + 1} migrations, this version knows ${known.length}.`,
+      );
+
+      // db:migrate of this version will not touch it either.
+      const refused = await runDbMigrate(url);
+      expect(refused.code, refused.output).toBe(1);
+      expect(refused.output).toContain("migrated by a newer Turnledger");
+    } finally {
+      await dropDatabase(name);
+    }
   });
 });
