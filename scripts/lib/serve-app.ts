@@ -103,6 +103,12 @@ export async function serveApp(
       HOST: host,
       // On a laptop the app is this machine (localhost, 127.0.0.1, [::1]).
       APP_URL: appUrl,
+      // `npm start` is someone using the app in a browser: the terminal keeps
+      // the few lines above, not a JSON line per request (warnings and errors
+      // still show). `npm run dev` shows every request, pretty-printed.
+      // LOG_LEVEL=info brings the request lines back (docs/decisions/024).
+      LOG_LEVEL:
+        process.env.LOG_LEVEL ?? (mode === "production" ? "warn" : "info"),
       // The demo's published password is allowed on a demo server only
       // (server/deployment-checks.ts).
       ...(demo ? { DEMO_DATA: "1" } : {}),
