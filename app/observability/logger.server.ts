@@ -54,7 +54,11 @@ function createLogger(): Logger {
     transport: developing
       ? {
           target: "pino-pretty",
-          options: { translateTime: "SYS:HH:MM:ss.l", ignore: "pid,hostname" },
+          options: {
+            translateTime: "SYS:HH:MM:ss.l",
+            ignore: "pid,hostname",
+            singleLine: true,
+          },
         }
       : undefined,
   });
