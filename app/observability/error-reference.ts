@@ -1,6 +1,6 @@
 /** What a person reads when the server failed them, and the reference to quote (the request id). */
 export const unexpectedErrorMessage =
-  "Something went wrong on the server. It has been logged; try again, and tell an admin the reference below if it keeps happening.";
+  "The server could not answer this request. It has been logged; try again, and tell an admin the reference below if it keeps happening.";
 
 /** The plain-text 500 page of an answer that failed before any page could be drawn. */
 export function unexpectedErrorText(requestId: string | undefined): string {

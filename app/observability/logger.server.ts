@@ -38,12 +38,38 @@ export const redactedPaths = [
   "err.cause.params",
 ];
 
+/**
+ * Drizzle writes a failed query's values into the error's message (and so its
+ * stack): "Failed query: …\nparams: a@b.example,…". They are cut out here;
+ * the query itself, with its placeholders, stays.
+ */
+function withoutQueryValues(text: unknown): unknown {
+  if (typeof text !== "string") return text;
+  return text.replace(
+    /\nparams: [\s\S]*?(?=\n {4}at |\ncaused by: |$)/,
+    `\nparams: ${censor}`,
+  );
+}
+
+/** pino's error serializer (type, message, stack, cause), without query values. */
+function serializeError(error: unknown) {
+  const serialized = pino.stdSerializers.err(error as Error) as unknown;
+  if (!serialized || typeof serialized !== "object") return serialized;
+  const fields = serialized as Record<string, unknown>;
+  return {
+    ...fields,
+    message: withoutQueryValues(fields.message),
+    stack: withoutQueryValues(fields.stack),
+  };
+}
+
 function createLogger(): Logger {
   const developing = process.env.NODE_ENV === "development";
   return pino({
     level: process.env.LOG_LEVEL || "info",
     timestamp: pino.stdTimeFunctions.isoTime,
     redact: { paths: redactedPaths, censor },
+    serializers: { err: serializeError },
     // Every line written while answering a request names it.
     mixin() {
       const request = currentRequest();
@@ -70,6 +96,8 @@ const globalForLogger = globalThis as unknown as {
 };
 
 export const logger = (globalForLogger.turnledgerLogger ??= createLogger());
+
+export { withoutQueryValues };
 
 /** A logger for one area of the app ("db", "mail", "alerts", "http"…): its lines carry `area`. */
 export function areaLogger(area: string): Logger {
