@@ -17,6 +17,7 @@ import { inArray, isNotNull, like, or, and, sql } from "drizzle-orm";
 import { defaultDemoPassword, demoPassword } from "~/auth/demo-password.server";
 import { verifyPassword } from "~/auth/password.server";
 import { db } from "~/db/client.server";
+import { isDatabaseUnavailable, unavailableReason } from "~/db/database-errors";
 import { databaseServerProblem } from "~/db/database-server-version";
 import { schemaProblem } from "~/db/migration-history";
 import { schemaStatus } from "~/db/schema-version.server";
@@ -96,7 +97,17 @@ export async function deploymentProblems(
   const problems: string[] = [];
   const appUrl = appUrlProblem(env);
   if (appUrl) problems.push(appUrl);
-  const server = await serverVersionProblem();
+  let server: string | null;
+  try {
+    server = await serverVersionProblem();
+  } catch (error) {
+    if (!isDatabaseUnavailable(error)) throw error;
+    return [
+      ...problems,
+      `The database cannot be reached (${unavailableReason(error)}), so the server cannot check that it has this version's migrations. ` +
+        "Start it, or correct DATABASE_URL, then start the server again.",
+    ];
+  }
   if (server) return [...problems, server];
   // The account check below reads tables a database behind may not have yet.
   const schema = schemaProblem(await schemaStatus());
