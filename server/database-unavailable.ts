@@ -93,8 +93,13 @@ function answering503(handler: Handler, resourceRoute: boolean): Handler {
       return await handler(args);
     } catch (error) {
       if (isDatabaseBusy(error)) {
-        console.warn(
-          `[db] database busy during a ${args.request.method}: gave up after ${error.attempts} attempts (${error.reason})`,
+        dbLog.warn(
+          {
+            method: args.request.method,
+            attempts: error.attempts,
+            reason: error.reason,
+          },
+          "database busy: a write lost to other writers on every attempt",
         );
         throw databaseBusyError(args.request, resourceRoute);
       }

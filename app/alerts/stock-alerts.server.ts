@@ -16,7 +16,10 @@ import {
   sql,
 } from "drizzle-orm";
 import { db } from "~/db/client.server";
-import { writeTransaction } from "~/db/write-transaction.server";
+import {
+  retryWriteConflicts,
+  writeTransaction,
+} from "~/db/write-transaction.server";
 import { appUrl } from "~/lib/app-url.server";
 import { areaLogger } from "~/observability/logger.server";
 import { isDuplicateKey } from "~/db/database-errors";
@@ -248,18 +251,22 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
       const text = (thousandths: bigint) =>
         quantityToNumber(thousandths).toFixed(3);
       if (change === "close") {
-        await db
-          .update(stockAlerts)
-          .set({
-            closedAt: new Date(),
-            availableAtClose: text(item.available),
-          })
-          .where(
-            and(
-              eq(stockAlerts.id, row.openAlertId!),
-              isNull(stockAlerts.closedAt),
-            ),
-          );
+        await retryWriteConflicts(
+          () =>
+            db
+              .update(stockAlerts)
+              .set({
+                closedAt: new Date(),
+                availableAtClose: text(item.available),
+              })
+              .where(
+                and(
+                  eq(stockAlerts.id, row.openAlertId!),
+                  isNull(stockAlerts.closedAt),
+                ),
+              ),
+          { label: "low-stock alert close" },
+        );
       } else if (change === "open") {
         await openAlert(item);
       }

@@ -59,7 +59,12 @@ describe("which errors are retried", () => {
 });
 
 describe("the wait before a retry", () => {
-  const policy = { maxAttempts: 8, baseDelayMs: 15, maxDelayMs: 800 };
+  const policy = {
+    maxAttempts: 8,
+    baseDelayMs: 15,
+    maxDelayMs: 800,
+    maxLockWaitTimeouts: 3,
+  };
 
   it("lies between half and all of an exponential ceiling (equal jitter)", () => {
     // Ceilings 15, 30, 60, 120, 240, 480, 800 (capped), 800 ms.
@@ -128,7 +133,15 @@ describe("running with retries", () => {
         attempts += 1;
         throw last;
       },
-      { ...noSleep, policy: { maxAttempts: 5, baseDelayMs: 1, maxDelayMs: 2 } },
+      {
+        ...noSleep,
+        policy: {
+          maxAttempts: 5,
+          baseDelayMs: 1,
+          maxDelayMs: 2,
+          maxLockWaitTimeouts: 3,
+        },
+      },
     ).catch((error: unknown) => error);
     expect(attempts).toBe(5);
     expect(failure).toBeInstanceOf(DatabaseBusyError);
@@ -136,6 +149,19 @@ describe("running with retries", () => {
     expect((failure as DatabaseBusyError).attempts).toBe(5);
     expect((failure as DatabaseBusyError).reason).toBe("deadlock");
     expect((failure as DatabaseBusyError).cause).toBe(last);
+  });
+
+  it("gives up after three lock wait timeouts (each already waited innodb_lock_wait_timeout)", async () => {
+    let attempts = 0;
+    const failure = await runWithRetries(async () => {
+      attempts += 1;
+      // A deadlock between the timeouts does not reset their count.
+      if (attempts === 2) throw driverError(1213, "ER_LOCK_DEADLOCK");
+      throw driverError(1205, "ER_LOCK_WAIT_TIMEOUT");
+    }, noSleep).catch((error: unknown) => error);
+    expect(attempts).toBe(4);
+    expect(failure).toBeInstanceOf(DatabaseBusyError);
+    expect((failure as DatabaseBusyError).reason).toBe("lock_wait_timeout");
   });
 
   it("throws any other error at once, unchanged, without retrying", async () => {
@@ -163,7 +189,12 @@ describe("running with retries", () => {
           slept.push(ms);
         },
         random: () => 0,
-        policy: { maxAttempts: 8, baseDelayMs: 10, maxDelayMs: 1_000 },
+        policy: {
+          maxAttempts: 8,
+          baseDelayMs: 10,
+          maxDelayMs: 1_000,
+          maxLockWaitTimeouts: 3,
+        },
       },
     );
     expect(slept).toEqual([5, 10, 20]);

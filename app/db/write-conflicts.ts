@@ -79,6 +79,11 @@ export interface RetryPolicy {
   baseDelayMs: number;
   /** No wait is longer than this. */
   maxDelayMs: number;
+  /**
+   * Lock wait timeouts allowed before giving up: each one has already waited
+   * `innodb_lock_wait_timeout` (50 s by default), so a few are plenty.
+   */
+  maxLockWaitTimeouts: number;
 }
 
 /**
@@ -91,6 +96,7 @@ export const defaultRetryPolicy: RetryPolicy = {
   maxAttempts: 8,
   baseDelayMs: 15,
   maxDelayMs: 800,
+  maxLockWaitTimeouts: 3,
 };
 
 /**
@@ -124,7 +130,8 @@ const sleepFor = (ms: number) =>
 
 /**
  * Runs `attempt` until it succeeds, throws an error that is not a conflict (thrown on
- * unchanged), or has lost `maxAttempts` times (then `DatabaseBusyError`). `attempt` must
+ * unchanged), or has lost `maxAttempts` times or timed out waiting for a lock
+ * `maxLockWaitTimeouts` times (then `DatabaseBusyError`). `attempt` must
  * be whole: it begins its transaction, reads what it decides on, writes and commits.
  */
 export async function runWithRetries<T>(
@@ -133,13 +140,18 @@ export async function runWithRetries<T>(
 ): Promise<T> {
   const policy = hooks.policy ?? defaultRetryPolicy;
   const sleep = hooks.sleep ?? sleepFor;
+  let lockWaitTimeouts = 0;
   for (let attemptNumber = 1; ; attemptNumber += 1) {
     try {
       return await attempt();
     } catch (error) {
       const reason = conflictReasonOf(error);
       if (reason === null) throw error;
-      if (attemptNumber >= policy.maxAttempts)
+      if (reason === "lock_wait_timeout") lockWaitTimeouts += 1;
+      if (
+        attemptNumber >= policy.maxAttempts ||
+        lockWaitTimeouts >= policy.maxLockWaitTimeouts
+      )
         throw new DatabaseBusyError(attemptNumber, reason, error);
       const delay = retryDelayMs(attemptNumber, policy, hooks.random);
       hooks.onRetry?.(reason, attemptNumber, delay);

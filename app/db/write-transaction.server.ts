@@ -16,6 +16,7 @@
  * `db.transaction` is not called anywhere else in app/ (an ESLint rule says so).
  */
 import type { MySqlTransactionConfig } from "drizzle-orm/mysql-core";
+import { areaLogger } from "~/observability/logger.server";
 import { countTransactionRetry } from "~/observability/metrics.server";
 import { db, type Transaction } from "./client.server";
 import {
@@ -31,11 +32,14 @@ export interface WriteTransactionOptions {
   label?: string;
 }
 
+const retryLog = areaLogger("db");
+
 function noteRetry(label: string | undefined) {
   return (reason: ConflictReason, retry: number, delayMs: number) => {
     countTransactionRetry(reason);
-    console.warn(
-      `[db] ${label ?? "write transaction"} retried (${reason}), retry ${retry} after ${delayMs} ms`,
+    retryLog.info(
+      { transaction: label ?? "write transaction", reason, retry, delayMs },
+      "write transaction retried",
     );
   };
 }

@@ -274,12 +274,14 @@ export async function updateDraftRevision(
           "The lines were changed by someone else meanwhile: reload the page and make your change again.",
         );
     }
-    const columns = revisionColumns(fields);
-    if (Object.keys(columns).length > 0)
-      await tx
-        .update(designRevisions)
-        .set(columns)
-        .where(eq(designRevisions.id, draft.id));
+    // Written on every save, lines only or not: see designRevisions.draftSaves.
+    await tx
+      .update(designRevisions)
+      .set({
+        ...revisionColumns(fields),
+        draftSaves: sql`${designRevisions.draftSaves} + 1`,
+      })
+      .where(eq(designRevisions.id, draft.id));
     if (lines) {
       const itemIds = await resolveLineItems(tx, lines);
       await tx.delete(designLines).where(eq(designLines.revisionId, draft.id));
@@ -354,6 +356,7 @@ export async function startNewRevision(
         id: undefined,
         releasedAt: null,
         releasedBy: null,
+        draftSaves: 0,
         createdAt: new Date(),
         revision: next,
         status: "draft",

@@ -9,6 +9,7 @@ import { and, asc, eq, isNull, lt } from "drizzle-orm";
 import nodemailer, { type Transporter } from "nodemailer";
 import { db, type Database, type Transaction } from "~/db/client.server";
 import { mailOutbox } from "~/db/schema";
+import { retryWriteConflicts } from "~/db/write-transaction.server";
 import { areaLogger } from "~/observability/logger.server";
 import { textToSend, textWithoutLink } from "./one-time-link";
 
@@ -78,11 +79,21 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
       subject: message.subject,
       text: textToSend(message.textBody, message.oneTimeLink),
     });
-    // Sent: the link has reached its recipient and is kept nowhere else.
-    await db
-      .update(mailOutbox)
-      .set({ sentAt: new Date(), lastError: null, attempts, oneTimeLink: null })
-      .where(eq(mailOutbox.id, message.id));
+    // Sent: the link has reached its recipient and is kept nowhere else. Retried on a
+    // write conflict: a row left unsent would be sent a second time by mail:retry.
+    await retryWriteConflicts(
+      () =>
+        db
+          .update(mailOutbox)
+          .set({
+            sentAt: new Date(),
+            lastError: null,
+            attempts,
+            oneTimeLink: null,
+          })
+          .where(eq(mailOutbox.id, message.id)),
+      { label: "outbox sent mark" },
+    );
     return true;
   } catch (error) {
     const reason = error instanceof Error ? error.message : String(error);

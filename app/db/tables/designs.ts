@@ -73,6 +73,12 @@ export const designRevisions = mysqlTable(
     }),
     poleCoverage: decimal("pole_coverage", { precision: 4, scale: 3 }),
     notes: varchar("notes", { length: 1000 }).notNull().default(""),
+    /**
+     * Saves of the draft. Every save changes this row, so a save and a release made at
+     * once on two Galera nodes touch the same row and one loses certification (a row
+     * only locked with FOR UPDATE is not in a write set): decision 027.
+     */
+    draftSaves: int("draft_saves").notNull().default(0),
     releasedAt: datetime("released_at", { mode: "date", fsp: 3 }),
     releasedBy: varchar("released_by", { length: 40 }).references(
       () => users.id,

@@ -1,0 +1,1 @@
+ALTER TABLE `design_revisions` ADD `draft_saves` int DEFAULT 0 NOT NULL;
