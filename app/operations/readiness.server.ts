@@ -8,6 +8,7 @@
  */
 import { schemaStatus } from "~/db/schema-version.server";
 import { outboxBacklog } from "~/mail/outbox-backlog.server";
+import { areaLogger } from "~/observability/logger.server";
 import { readOperatingSettings } from "./operating-settings";
 import {
   judgeReadiness,
@@ -15,6 +16,8 @@ import {
   type ReadinessFacts,
 } from "./readiness";
 import { isStopping } from "./server-stopping";
+
+const healthLog = areaLogger("health");
 
 /** Longest wait for each database question: below a load balancer's usual 5 s probe timeout. */
 const questionTimeoutMs = 2_000;
@@ -66,7 +69,7 @@ async function gatherFacts(now: Date): Promise<ReadinessFacts> {
   } catch (error) {
     // The reason goes to the server's log, never to the caller: a driver's
     // message names hosts, users and databases.
-    console.error("[turnledger] /readyz: the database did not answer:", error);
+    healthLog.error({ err: error }, "/readyz: the database did not answer");
     facts.databaseUp = false;
     facts.schema = null;
     facts.oldestUnsentAt = undefined;
@@ -77,23 +80,30 @@ async function gatherFacts(now: Date): Promise<ReadinessFacts> {
 /** What the log last said about readiness, so a change is logged once. */
 let lastLogged = "ready";
 
+/** Why the server is not ready, in words an operator can act on. */
+function reasons(readiness: Readiness): string {
+  return readiness.failed
+    .map((name) => {
+      const check = readiness.checks[name];
+      if (name === "outbox" && "oldestUnsentMinutes" in check)
+        return `outbox stuck (the oldest unsent e-mail has waited ${check.oldestUnsentMinutes} min, more than READY_OUTBOX_MAX_AGE_MINUTES=${check.maxAgeMinutes}; see the admin's Outbox and run npm run mail:retry)`;
+      if (name === "migrations")
+        return `migrations ${check.state} (run npm run db:migrate, or serve the database with the version it was migrated by)`;
+      return `${name} ${check.state}`;
+    })
+    .join("; ");
+}
+
 function logChange(readiness: Readiness) {
-  const summary = readiness.ready
-    ? "ready"
-    : readiness.failed
-        .map((name) => {
-          const check = readiness.checks[name];
-          if (name === "outbox" && "oldestUnsentMinutes" in check)
-            return `outbox stuck (the oldest unsent e-mail has waited ${check.oldestUnsentMinutes} min, more than READY_OUTBOX_MAX_AGE_MINUTES=${check.maxAgeMinutes}; see the admin's Outbox and run npm run mail:retry)`;
-          if (name === "migrations")
-            return `migrations ${check.state} (npm run db:migrate, or a server of the database's version)`;
-          return `${name} ${check.state}`;
-        })
-        .join("; ");
+  const summary = readiness.ready ? "ready" : reasons(readiness);
   if (summary === lastLogged) return;
   lastLogged = summary;
-  if (readiness.ready) console.log("[turnledger] /readyz: ready again");
-  else console.warn(`[turnledger] /readyz: not ready: ${summary}`);
+  if (readiness.ready) healthLog.info("/readyz: ready again");
+  else
+    healthLog.warn(
+      { failed: readiness.failed, checks: readiness.checks },
+      `/readyz: not ready: ${summary}`,
+    );
 }
 
 /** Whether this server should be sent requests now, and why not. */
