@@ -17,9 +17,7 @@ export interface DatabaseServerVersion {
   patch: number;
 }
 
-export function parseServerVersion(
-  text: string,
-): DatabaseServerVersion | null {
+export function parseServerVersion(text: string): DatabaseServerVersion | null {
   const version = text.trim().replace(/^5\.5\.5-/, "");
   const numbers = /^(\d+)\.(\d+)(?:\.(\d+))?/.exec(version);
   if (!numbers) return null;
