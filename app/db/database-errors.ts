@@ -26,12 +26,32 @@ const unavailableCodes = new Set([
   "ER_CON_COUNT_ERROR",
 ]);
 
+/**
+ * A Galera node that is up but not part of the cluster's primary component
+ * (joining, catching up by IST/SST, or cut off from the majority) refuses
+ * every query with 1047 ER_UNKNOWN_COM_ERROR "WSREP has not yet prepared node
+ * for application use": for the app, its database is unavailable until the
+ * node is Synced (docs/decisions/028-galera-test-cluster.md).
+ */
+function isGaleraNodeNotReady(error: unknown): boolean {
+  const { code, sqlMessage, message } = error as {
+    code?: unknown;
+    sqlMessage?: unknown;
+    message?: unknown;
+  };
+  return (
+    code === "ER_UNKNOWN_COM_ERROR" &&
+    /WSREP/.test(String(sqlMessage ?? message))
+  );
+}
+
 /** True when an error means "the database is down or unreachable". */
 export function isDatabaseUnavailable(error: unknown): boolean {
   let current: unknown = error;
   for (let depth = 0; current && depth < 5; depth += 1) {
     const code = (current as { code?: unknown }).code;
     if (typeof code === "string" && unavailableCodes.has(code)) return true;
+    if (isGaleraNodeNotReady(current)) return true;
     // mysql2 marks errors that end the connection (network, protocol) as fatal.
     if ((current as { fatal?: unknown }).fatal === true) return true;
     current = (current as { cause?: unknown }).cause;
