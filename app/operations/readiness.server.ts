@@ -60,8 +60,10 @@ async function gatherFacts(now: Date): Promise<ReadinessFacts> {
   if (facts.stopping) return facts;
   try {
     facts.schema = (await answerInTime(schemaStatus())).kind;
-    // The outbox table is this version's only when the migrations are.
-    if (facts.schema === "current" && facts.outboxMaxAgeMinutes !== null)
+    // The outbox table is as this version knows it only when the database
+    // has all of this version's migrations (ahead: a newer one's on top).
+    const knownTables = facts.schema === "current" || facts.schema === "newer";
+    if (knownTables && facts.outboxMaxAgeMinutes !== null)
       facts.oldestUnsentAt = (
         await answerInTime(outboxBacklog())
       ).oldestUnsentAt;
@@ -88,17 +90,28 @@ function reasons(readiness: Readiness): string {
       if (name === "outbox" && "oldestUnsentMinutes" in check)
         return `outbox stuck (the oldest unsent e-mail has waited ${check.oldestUnsentMinutes} min, more than READY_OUTBOX_MAX_AGE_MINUTES=${check.maxAgeMinutes}; see the admin's Outbox and run npm run mail:retry)`;
       if (name === "migrations")
-        return `migrations ${check.state} (run npm run db:migrate, or serve the database with the version it was migrated by)`;
+        return check.state === "behind"
+          ? "migrations behind (run npm run db:migrate with this version)"
+          : "migrations foreign (the database was migrated by another line of Turnledger, or DATABASE_URL names the wrong database)";
       return `${name} ${check.state}`;
     })
     .join("; ");
 }
 
 function logChange(readiness: Readiness) {
-  const summary = readiness.ready ? "ready" : reasons(readiness);
+  const ahead = readiness.checks.migrations.state === "ahead";
+  const summary = !readiness.ready
+    ? reasons(readiness)
+    : ahead
+      ? "ready, migrations ahead"
+      : "ready";
   if (summary === lastLogged) return;
   lastLogged = summary;
-  if (readiness.ready) healthLog.info("/readyz: ready again");
+  if (readiness.ready && ahead)
+    healthLog.warn(
+      "/readyz: a newer version has migrated the database; this server still serves but will refuse to start again: replace it with the new version",
+    );
+  else if (readiness.ready) healthLog.info("/readyz: ready again");
   else
     healthLog.warn(
       { failed: readiness.failed, checks: readiness.checks },

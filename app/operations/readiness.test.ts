@@ -61,10 +61,9 @@ describe("judgeReadiness", () => {
 
   it.each([
     ["older", "behind"],
-    ["newer", "ahead"],
     ["foreign", "foreign"],
   ] as const)(
-    "is not ready when the database's migrations are %s than the build's (%s)",
+    "is not ready when the database's migrations are %s (%s)",
     (schema, state) => {
       const readiness = judgeReadiness({ ...healthy, schema });
       expect(readiness.ready).toBe(false);
@@ -72,6 +71,12 @@ describe("judgeReadiness", () => {
       expect(readiness.checks.migrations).toEqual({ ok: false, state });
     },
   );
+
+  it("stays ready, saying so, when a newer version has migrated the database (an upgrade under way)", () => {
+    const readiness = judgeReadiness({ ...healthy, schema: "newer" });
+    expect(readiness.ready).toBe(true);
+    expect(readiness.checks.migrations).toEqual({ ok: true, state: "ahead" });
+  });
 
   it("stays ready while the oldest unsent e-mail has waited up to the limit, and not a moment past it", () => {
     const atLimit = judgeReadiness({

@@ -5,9 +5,14 @@
  *
  * - the server has not been told to stop (it is finishing its last requests);
  * - the database answers;
- * - the database's migrations are the ones this build was made with (behind:
- *   `npm run db:migrate` has not run yet; ahead or foreign: this is an older
- *   build, or the wrong database);
+ * - the database has this build's migrations: not behind (`npm run db:migrate`
+ *   has not run) and not foreign (the wrong database, or an edited migration).
+ *   Ahead — a newer version migrated the database while this server runs — is
+ *   still ready, with the state shown: during an upgrade the old servers keep
+ *   serving while the new ones start (most releases only add tables and
+ *   columns; README "Upgrading"), and taking them all out of the load balancer
+ *   at the moment of `db:migrate` would stop the shop. An old server that
+ *   restarts refuses to start against it (server/deployment-checks.ts);
  * - the outbox is not stuck: its oldest unsent e-mail has waited no longer
  *   than the limit (READY_OUTBOX_MAX_AGE_MINUTES; none when the check is off).
  *
@@ -78,7 +83,7 @@ export function judgeReadiness(facts: ReadinessFacts): Readiness {
       facts.schema === null
         ? { ok: false, state: "not checked" }
         : {
-            ok: facts.schema === "current",
+            ok: facts.schema === "current" || facts.schema === "newer",
             state: schemaStates[facts.schema],
           },
     outbox: outboxCheck(facts),
