@@ -188,8 +188,12 @@ function newConnectionAnswer(): Promise<"refused" | number> {
   });
 }
 
-/** Signs in as the buyer and adds a supplier; its id and the buyer's cookie. */
-async function buyerWithSupplier(client: AppClient) {
+/**
+ * Signs in as the buyer, adds a supplier and starts committing a generated
+ * price list of `rows` lines for it: the supplier's id, the answer to come
+ * (its status and body, or why the request failed) and whether it has come.
+ */
+async function startCommit(client: AppClient, rows: number) {
   const cookie = await client.signIn(buyer.email, buyer.password);
   const name = faultCode("Stopping Supplier");
   const created = await client.send(
@@ -199,11 +203,32 @@ async function buyerWithSupplier(client: AppClient) {
     cookie,
   );
   expect(created.status, await created.clone().text()).toBe(201);
-  const [rows] = await database.query(
+  const [found] = await database.query(
     "SELECT id FROM suppliers WHERE name = ?",
     [name],
   );
-  return { cookie, name, supplierId: (rows as { id: number }[])[0]!.id };
+  let answered = false;
+  const answer: Promise<
+    { status: number; body: { rows?: number } } | { failed: string }
+  > = client
+    .uploadPriceList(cookie, {
+      supplier: name,
+      fileName: `${name}.csv`,
+      csv: priceListCsv(rows, faultCode("GS")),
+    })
+    .then(
+      async (response) => ({
+        status: response.status,
+        body: (await response.json()) as { rows?: number },
+      }),
+      (error: unknown) => ({ failed: String(error) }),
+    )
+    .finally(() => (answered = true));
+  return {
+    supplierId: (found as { id: number }[])[0]!.id,
+    answer,
+    answered: () => answered,
+  };
 }
 
 describe("SIGTERM during a price-list commit", () => {
@@ -211,36 +236,27 @@ describe("SIGTERM during a price-list commit", () => {
     const rows = 60_000;
     const server = await startServer({ SHUTDOWN_GRACE_MS: "60000" });
     try {
-      const { cookie, name, supplierId } = await buyerWithSupplier(
-        server.client,
-      );
-      let answered = false;
       const started = Date.now();
-      const commit = server.client
-        .uploadPriceList(cookie, {
-          supplier: name,
-          fileName: "stopping-whole.csv",
-          csv: priceListCsv(rows, faultCode("GS")),
-        })
-        .then(async (response) => ({
-          status: response.status,
-          body: (await response.json()) as { rows?: number },
-        }))
-        .finally(() => (answered = true));
+      const { supplierId, answer, answered } = await startCommit(
+        server.client,
+        rows,
+      );
 
-      await waitForImportTransaction(2_000, () => answered);
+      await waitForImportTransaction(2_000, answered);
       server.signal("SIGTERM");
       const signalledAfterMs = Date.now() - started;
 
       // Stopping: a new connection is refused (or answered 503), never served.
       await sleep(200);
-      expect(answered).toBe(false);
+      expect(answered()).toBe(false);
       const late = await newConnectionAnswer();
       expect(["refused", 503]).toContain(late);
 
-      const answer = await commit;
-      expect(answer.status, JSON.stringify(answer.body)).toBe(201);
-      expect(answer.body.rows).toBe(rows);
+      const committed = await answer;
+      expect(committed).toEqual({
+        status: 201,
+        body: expect.objectContaining({ rows }),
+      });
       const { code, output } = await server.exited;
       expect(code, output).toBe(0);
       expect(output).toMatch(/SIGTERM: stopping/);
@@ -262,30 +278,14 @@ describe("SIGTERM during a price-list commit", () => {
     const rows = 60_000;
     const server = await startServer({ SHUTDOWN_GRACE_MS: "0" });
     try {
-      const { cookie, name, supplierId } = await buyerWithSupplier(
+      const { supplierId, answer, answered } = await startCommit(
         server.client,
+        rows,
       );
-      let answered = false;
-      const commit = server.client
-        .uploadPriceList(cookie, {
-          supplier: name,
-          fileName: "stopping-cut.csv",
-          csv: priceListCsv(rows, faultCode("GC")),
-        })
-        .then(
-          (response) => ({ status: response.status }),
-          (error: unknown) => ({ failed: String(error) }),
-        )
-        .finally(() => (answered = true));
-
-      const writtenAtSignal = await waitForImportTransaction(
-        2_000,
-        () => answered,
-      );
+      const writtenAtSignal = await waitForImportTransaction(2_000, answered);
       server.signal("SIGTERM");
 
-      const answer = await commit;
-      expect(answer).toHaveProperty("failed");
+      expect(await answer).toHaveProperty("failed");
       const { code, output } = await server.exited;
       expect(code, output).toBe(0);
       expect(output).toMatch(/were cut off/);
@@ -321,34 +321,23 @@ describe("SIGTERM during a price-list commit", () => {
   it("a second signal a moment after the first stops the server at once", async () => {
     const server = await startServer({ SHUTDOWN_GRACE_MS: "60000" });
     try {
-      const { cookie, name, supplierId } = await buyerWithSupplier(
+      const { supplierId, answer, answered } = await startCommit(
         server.client,
+        100_000,
       );
-      let answered = false;
-      const commit = server.client
-        .uploadPriceList(cookie, {
-          supplier: name,
-          fileName: "stopping-twice.csv",
-          csv: priceListCsv(100_000, faultCode("GT")),
-        })
-        .then(
-          (response) => ({ status: response.status }),
-          (error: unknown) => ({ failed: String(error) }),
-        )
-        .finally(() => (answered = true));
-      await waitForImportTransaction(2_000, () => answered);
+      await waitForImportTransaction(2_000, answered);
       server.signal("SIGTERM");
       // Within half a second of the first stop's start a signal counts as the
       // same stop (Ctrl-C reaches the server from the terminal and from npm
       // start); after it, as a second one.
       await expect.poll(server.output).toMatch(/SIGTERM: stopping/);
       await sleep(800);
-      expect(answered).toBe(false);
+      expect(answered()).toBe(false);
       server.signal("SIGTERM");
       const { code, output } = await server.exited;
       expect(code, output).toBe(1);
       expect(output).toMatch(/SIGTERM again: stopping at once/);
-      expect(await commit).toHaveProperty("failed");
+      expect(await answer).toHaveProperty("failed");
       const stored = await storedImport(supplierId);
       expect(
         [0, 100_000],
