@@ -1,5 +1,10 @@
 // The HTTP server: Express in front of React Router, in development (with
 // Vite's dev middleware and hot reload) and in production (the built app).
+// On SIGTERM or SIGINT it stops gracefully (server/shutdown.ts): no new
+// connections, requests in flight finish within SHUTDOWN_GRACE_MS, then the
+// database pool closes and the process exits 0. A second signal, a moment
+// after the first, exits at once.
+import http from "node:http";
 import express from "express";
 
 const developing = process.env.NODE_ENV === "development";
@@ -12,11 +17,24 @@ const host = process.env.HOST || "0.0.0.0";
 const app = express();
 app.disable("x-powered-by");
 
+// The app's logger (app/observability/logger.server.ts, docs/decisions/024).
+let log;
+/** The app's server module (server/app.ts): built, or loaded through Vite in development. */
+let appModule;
+/** Closes Vite's dev server, in development. */
+let closeDevServer = async () => {};
+
 if (developing) {
   const vite = await import("vite");
   const viteDevServer = await vite.createServer({
     server: { middlewareMode: true },
   });
+  // Loaded again when stopping, to stop with the module as it is by then.
+  appModule = () => viteDevServer.ssrLoadModule("./server/app.ts");
+  closeDevServer = () => viteDevServer.close();
+  ({ logger: log } = await viteDevServer.ssrLoadModule(
+    "./app/observability/logger.server.ts",
+  ));
   app.use(viteDevServer.middlewares);
   app.use(async (request, response, next) => {
     try {
@@ -31,16 +49,25 @@ if (developing) {
   // BUILD_DIRECTORY as in react-router.config.ts.
   const buildDirectory = process.env.BUILD_DIRECTORY ?? "build";
   const built = await import(`./${buildDirectory}/server/index.js`);
+  appModule = async () => built;
+  log = built.logger;
   // A built app is served as in production (whatever NODE_ENV says) and
   // refuses to start where a shop would be unsafe
   // (server/deployment-checks.ts): it says what to fix and exits.
-  const problems = await built.deploymentProblems();
+  const problems = [
+    ...(await built.deploymentProblems()),
+    ...built.operatingSettingProblems(),
+  ];
   if (problems.length > 0) {
-    console.error("[turnledger] not starting:");
-    for (const problem of problems) console.error(`  - ${problem}`);
+    log.fatal(
+      { problems },
+      `not starting:\n${problems.map((problem) => `  - ${problem}`).join("\n")}`,
+    );
     process.exit(1);
   }
-  // The security headers (docs/decisions/012) go on the static files too.
+  // Request ids, the log line and the metrics (docs/decisions/024, 025), and
+  // the security headers (docs/decisions/012) go on the static files too.
+  app.use(built.observeRequests);
   app.use(built.securityHeaders);
   app.use(
     "/assets",
@@ -53,16 +80,41 @@ if (developing) {
   app.use(built.app);
 }
 
-const server = app.listen(port, host, () => {
+const server = http.createServer();
+const drain = new (await appModule()).HttpDrain(server);
+server.on("request", drain.handle(app));
+server.listen(port, host, () => {
   const where = ["0.0.0.0", "::"].includes(host)
     ? `every interface, port ${port}`
     : `${host.includes(":") ? `[${host}]` : host}:${port}`;
-  console.log(`[turnledger] listening on ${where}`);
+  log.info(`listening on ${where}`);
 });
+
+/** When the first stop signal came; 0 while running. */
+let stopAskedAt = 0;
 
 for (const signal of ["SIGINT", "SIGTERM"]) {
   process.on(signal, () => {
-    server.close(() => process.exit(0));
-    setTimeout(() => process.exit(0), 3_000).unref();
+    if (stopAskedAt !== 0) {
+      // Ctrl-C reaches the server from the terminal and again, moments
+      // later, from the npm start wrapper that forwards it: one stop, not two.
+      if (Date.now() - stopAskedAt < 500) return;
+      log.warn(`${signal} again: stopping at once`);
+      process.exit(1);
+    }
+    stopAskedAt = Date.now();
+    appModule()
+      .then((module) => module.stopGracefully(drain, signal, log))
+      .then(closeDevServer)
+      .then(
+        () => {
+          log.info("stopped");
+          process.exit(0);
+        },
+        (error) => {
+          log.error({ err: error }, "stopping failed");
+          process.exit(1);
+        },
+      );
   });
 }

@@ -62,6 +62,7 @@ export default [
 
   // Machine-readable routes.
   route("healthz", "routes/healthz.ts"),
+  route("readyz", "routes/readyz.ts"),
   ...prefix("api/v1", [
     route("sessions", "routes/api.v1.sessions.ts"),
     route("me", "routes/api.v1.me.ts"),

@@ -29,6 +29,7 @@ import { referenceUnexpectedErrors } from "./unexpected-errors";
 
 export { deploymentProblems } from "./deployment-checks";
 export { logger } from "~/observability/logger.server";
+export * from "./shutdown";
 
 declare module "react-router" {
   interface AppLoadContext {

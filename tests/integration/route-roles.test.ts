@@ -177,6 +177,12 @@ const table: Row[] = [
     expect: { anonymous: 200, signedIn: 200 },
   },
   {
+    file: "routes/readyz.ts",
+    method: "GET",
+    path: "/readyz",
+    expect: { anonymous: 200, signedIn: 200 },
+  },
+  {
     file: "routes/api.v1.sessions.ts",
     method: "GET",
     path: "/api/v1/sessions",
