@@ -9,6 +9,7 @@ import {
   useRevalidator,
 } from "react-router";
 import { z } from "zod";
+import { referenceOf } from "./observability/error-reference";
 import type { Route } from "./+types/root";
 import "./app.css";
 
@@ -76,9 +77,12 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
   let detail =
     "The error has been logged. Try again, and tell an admin if it keeps happening.";
   let stack: string | undefined;
+  // The failed request's id (server/unexpected-errors.ts), for the person to quote.
+  let reference: string | null = null;
 
   if (isRouteErrorResponse(error)) {
     status = error.status;
+    reference = referenceOf(error.data);
     const message = messageOf(error.data);
     if (status === 404) {
       title = "Page not found";
@@ -112,6 +116,11 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
       </p>
       <h1 className="mt-2 text-3xl font-semibold text-graphite-900">{title}</h1>
       <p className="mt-4 text-graphite-700">{detail}</p>
+      {reference ? (
+        <p className="mt-4 text-sm text-graphite-700">
+          Reference: <code className="font-mono">{reference}</code>
+        </p>
+      ) : null}
       {status === 503 ? <RetryWhileUnavailable /> : null}
       <p className="mt-8">
         <a className="button-quiet" href="/">
