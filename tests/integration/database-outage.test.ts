@@ -4,42 +4,10 @@
  * without restarting the app. A TCP relay between a second app server and the
  * test MariaDB is cut and restored, so the other tests' server is untouched.
  */
-import net from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { inject } from "vitest";
 import { startAppServer } from "../../scripts/lib/test-environment";
-
-class DatabaseRelay {
-  private server: net.Server | null = null;
-  private sockets = new Set<net.Socket>();
-  constructor(
-    private target: { host: string; port: number },
-    readonly port: number,
-  ) {}
-
-  async up(): Promise<void> {
-    this.server = net.createServer((client) => {
-      const upstream = net.connect(this.target);
-      for (const socket of [client, upstream]) {
-        this.sockets.add(socket);
-        socket.on("close", () => this.sockets.delete(socket));
-        socket.on("error", () => socket.destroy());
-      }
-      client.pipe(upstream).pipe(client);
-    });
-    await new Promise<void>((resolve) =>
-      this.server!.listen(this.port, "127.0.0.1", resolve),
-    );
-  }
-
-  async down(): Promise<void> {
-    for (const socket of this.sockets) socket.destroy();
-    await new Promise<void>((resolve) =>
-      this.server ? this.server.close(() => resolve()) : resolve(),
-    );
-    this.server = null;
-  }
-}
+import { DatabaseRelay } from "../support/database-relay";
 
 // Ports follow the run's own TEST_PORT, so a second run beside this one gets others.
 const testPort = Number(process.env.TEST_PORT ?? 3100);

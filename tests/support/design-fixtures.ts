@@ -2,6 +2,7 @@
  * Designs written straight into the test database (a design, one revision and its
  * lines), so build-order tests do not depend on the design pages or API.
  */
+import type mysql from "mysql2/promise";
 import { testDatabase, uniqueCode } from "./test-database";
 
 export type FixtureLine =
@@ -26,9 +27,14 @@ const owner = "demo-03-builder";
 /** A design with revision 1 holding the lines; released unless asked otherwise. */
 export async function createDesign(
   lines: FixtureLine[],
-  options: { status?: "draft" | "released"; name?: string } = {},
+  options: {
+    status?: "draft" | "released";
+    name?: string;
+    /** Another database than the test database (a Galera node's). */
+    database?: mysql.Pool;
+  } = {},
 ): Promise<{ designId: number; revision: number; revisionId: number }> {
-  const db = testDatabase();
+  const db = options.database ?? testDatabase();
   const status = options.status ?? "released";
   const [design] = await db.query(
     "INSERT INTO designs (name, motor_type, user_id, created_at) VALUES (?, 'outrunner BLDC', ?, NOW(3))",

@@ -20,16 +20,19 @@ export async function closeTestDatabase(): Promise<void> {
   pool = undefined;
 }
 
-/** Creates an active person with a password and roles; returns the id. */
-export async function createPerson(input: {
-  email: string;
-  password: string;
-  roles: Role[];
-  name?: string;
-}): Promise<string> {
+/** Creates an active person with a password and roles (in `database`, by default the test database); returns the id. */
+export async function createPerson(
+  input: {
+    email: string;
+    password: string;
+    roles: Role[];
+    name?: string;
+  },
+  database: mysql.Pool = testDatabase(),
+): Promise<string> {
   const id = `test-${randomBytes(8).toString("hex")}`;
   const passwordHash = await hash(input.password);
-  const db = testDatabase();
+  const db = database;
   await db.query(
     "INSERT INTO users (id, email, name, password_hash, active, created_at) VALUES (?, ?, ?, ?, 1, NOW(3))",
     [id, input.email, input.name ?? "Test Person", passwordHash],
@@ -47,8 +50,9 @@ export async function createPerson(input: {
 export async function createLocation(
   code: string,
   name = `Test ${code}`,
+  database: mysql.Pool = testDatabase(),
 ): Promise<string> {
-  await testDatabase().query(
+  await database.query(
     "INSERT INTO locations (code, name, kind) VALUES (?, ?, 'bin')",
     [code, name],
   );
