@@ -51,6 +51,11 @@ export default tseslint.config(
     },
   },
   {
+    // Log lines go through the one logger (app/observability/logger.server.ts, decision 024).
+    files: ["app/**/*.{ts,tsx}", "server/**/*.ts"],
+    rules: { "no-console": "error" },
+  },
+  {
     files: ["server.js"],
     languageOptions: {
       globals: {
