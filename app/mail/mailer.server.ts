@@ -79,8 +79,29 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
       subject: message.subject,
       text: textToSend(message.textBody, message.oneTimeLink),
     });
-    // Sent: the link has reached its recipient and is kept nowhere else. Retried on a
-    // write conflict: a row left unsent would be sent a second time by mail:retry.
+  } catch (error) {
+    const reason = error instanceof Error ? error.message : String(error);
+    // The outbox id finds the address on the admin's Outbox page.
+    mailLog.warn({ outboxId: message.id, reason }, "message not sent");
+    await retryWriteConflicts(
+      () =>
+        db
+          .update(mailOutbox)
+          .set({ lastError: reason.slice(0, 500), attempts })
+          .where(eq(mailOutbox.id, message.id)),
+      { label: "outbox failure mark" },
+    ).catch((markError: unknown) =>
+      mailLog.error(
+        { outboxId: message.id, err: markError },
+        "message not sent, and its failure could not be recorded",
+      ),
+    );
+    return false;
+  }
+  // Sent: the link has reached its recipient and is kept nowhere else. Retried on a
+  // write conflict: a row left unsent would be sent a second time by mail:retry.
+  // A mark that still fails is logged, never recorded as a failed send.
+  try {
     await retryWriteConflicts(
       () =>
         db
@@ -94,17 +115,13 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
           .where(eq(mailOutbox.id, message.id)),
       { label: "outbox sent mark" },
     );
-    return true;
   } catch (error) {
-    const reason = error instanceof Error ? error.message : String(error);
-    // The outbox id finds the address on the admin's Outbox page.
-    mailLog.warn({ outboxId: message.id, reason }, "message not sent");
-    await db
-      .update(mailOutbox)
-      .set({ lastError: reason.slice(0, 500), attempts })
-      .where(eq(mailOutbox.id, message.id));
-    return false;
+    mailLog.error(
+      { outboxId: message.id, err: error },
+      "message sent, but not marked sent: mail:retry would send it again",
+    );
   }
+  return true;
 }
 
 /** Queues a message and tries to send it at once: its outbox id, and whether SMTP accepted it. */
