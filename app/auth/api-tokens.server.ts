@@ -2,6 +2,8 @@
 import { randomBytes } from "node:crypto";
 import { and, desc, eq, isNull } from "drizzle-orm";
 import { db, type Transaction } from "~/db/client.server";
+import { retryWriteConflicts } from "~/db/write-transaction.server";
+import { areaLogger } from "~/observability/logger.server";
 import { apiTokens, userRoles, users } from "~/db/schema";
 import { isRole, type Role } from "~/lib/roles";
 import { hashToken } from "./email-tokens.server";
@@ -135,10 +137,21 @@ export async function userFromApiToken(
     !row.lastUsedAt ||
     now - row.lastUsedAt.getTime() > lastUsedResolutionMs
   ) {
-    await db
-      .update(apiTokens)
-      .set({ lastUsedAt: new Date(now) })
-      .where(eq(apiTokens.id, row.id));
+    // Only a note for the token list: a conflict that outlasts the retries
+    // is logged, and the request goes on.
+    await retryWriteConflicts(
+      () =>
+        db
+          .update(apiTokens)
+          .set({ lastUsedAt: new Date(now) })
+          .where(eq(apiTokens.id, row.id)),
+      { label: "token last use" },
+    ).catch((error: unknown) =>
+      areaLogger("auth").warn(
+        { err: error },
+        "the API token's last use was not recorded",
+      ),
+    );
   }
   return {
     id: row.userId,

@@ -1,6 +1,7 @@
 import { eq } from "drizzle-orm";
 import { generateIdFromEntropySize } from "lucia";
 import { db } from "~/db/client.server";
+import { retryWriteConflicts } from "~/db/write-transaction.server";
 import { sessions, userRoles } from "~/db/schema";
 import type { Role } from "~/lib/roles";
 import { userFromApiToken } from "./api-tokens.server";
@@ -75,10 +76,14 @@ async function readSession(request: Request): Promise<SessionState> {
   }
   if (session.fresh && session.expiresAt.getTime() > absoluteEnd) {
     // Extended by lucia just now: no further than the absolute end.
-    await db
-      .update(sessions)
-      .set({ expiresAt: new Date(absoluteEnd) })
-      .where(eq(sessions.id, session.id));
+    await retryWriteConflicts(
+      () =>
+        db
+          .update(sessions)
+          .set({ expiresAt: new Date(absoluteEnd) })
+          .where(eq(sessions.id, session.id)),
+      { label: "session end" },
+    );
   }
   if (!user.active) {
     // Deactivation ends sessions at once; this is the belt to that brace.

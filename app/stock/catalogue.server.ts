@@ -1,7 +1,10 @@
 /** Creating and changing catalogue items (the movement ledger is in stock-movements.server.ts). */
 import { eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
-import { writeTransaction } from "~/db/write-transaction.server";
+import {
+  retryWriteConflicts,
+  writeTransaction,
+} from "~/db/write-transaction.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import { items, magnetItems, wireItems } from "~/db/schema";
 import {
@@ -194,18 +197,23 @@ export async function updateItem(
       throw new StockError(400, `${sku} is counted in whole pieces.`, field);
     }
   }
-  await db
-    .update(items)
-    .set({
-      ...(change.name !== undefined ? { name: change.name } : {}),
-      ...(change.reorderPoint !== undefined
-        ? { reorderPoint: quantityText(change.reorderPoint) }
-        : {}),
-      ...(change.reorderQuantity !== undefined
-        ? { reorderQuantity: quantityText(change.reorderQuantity) }
-        : {}),
-      ...(change.active !== undefined ? { active: change.active } : {}),
-      updatedAt: new Date(),
-    })
-    .where(eq(items.id, item.id));
+  // Every movement writes this row too: retried on a conflict like a transaction.
+  await retryWriteConflicts(
+    () =>
+      db
+        .update(items)
+        .set({
+          ...(change.name !== undefined ? { name: change.name } : {}),
+          ...(change.reorderPoint !== undefined
+            ? { reorderPoint: quantityText(change.reorderPoint) }
+            : {}),
+          ...(change.reorderQuantity !== undefined
+            ? { reorderQuantity: quantityText(change.reorderQuantity) }
+            : {}),
+          ...(change.active !== undefined ? { active: change.active } : {}),
+          updatedAt: new Date(),
+        })
+        .where(eq(items.id, item.id)),
+    { label: "item update" },
+  );
 }
