@@ -395,6 +395,7 @@ export async function answerMetrics(
         request.get("X-Forwarded-For") !== undefined ||
         request.get("Forwarded") !== undefined,
       authorization: request.get("Authorization"),
+      behindProxy: behindTrustedProxy(),
     },
     process.env.METRICS_TOKEN || undefined,
   );

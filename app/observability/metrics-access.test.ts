@@ -36,6 +36,7 @@ describe("mayReadMetrics", () => {
     remoteAddress,
     forwarded: false,
     authorization: undefined,
+    behindProxy: false,
     ...extra,
   });
 
@@ -48,6 +49,21 @@ describe("mayReadMetrics", () => {
     expect(
       mayReadMetrics(from("127.0.0.1", { forwarded: true }), undefined),
     ).toBe(false);
+  });
+
+  it("behind a trusted proxy, lets loopback in only with the token (a proxy may add no forwarding header)", () => {
+    expect(
+      mayReadMetrics(from("127.0.0.1", { behindProxy: true }), undefined),
+    ).toBe(false);
+    expect(
+      mayReadMetrics(
+        from("127.0.0.1", {
+          behindProxy: true,
+          authorization: `Bearer ${token}`,
+        }),
+        token,
+      ),
+    ).toBe(true);
   });
 
   it("lets others in only with the configured bearer token", () => {

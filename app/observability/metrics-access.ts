@@ -26,19 +26,31 @@ export interface MetricsRequest {
   /** Whether the request carries X-Forwarded-For or Forwarded: it came through a proxy. */
   forwarded: boolean;
   authorization: string | undefined;
+  /**
+   * Whether TRUST_PROXY says a proxy stands in front: then every request may
+   * have come through it, with or without forwarding headers, and loopback
+   * proves nothing.
+   */
+  behindProxy: boolean;
 }
 
 /**
  * Whether the request may read the metrics. From loopback only when no proxy
  * forwarded it: a reverse proxy on the same machine connects from loopback
  * on behalf of anyone on the internet. With METRICS_TOKEN set, a matching
- * `Authorization: Bearer` header lets a scraper elsewhere in.
+ * `Authorization: Bearer` header lets a scraper elsewhere in. Behind a proxy
+ * (TRUST_PROXY set) only the token does: a proxy that adds no forwarding
+ * headers would otherwise open /metrics to whoever reaches it.
  */
 export function mayReadMetrics(
   request: MetricsRequest,
   metricsToken: string | undefined,
 ): boolean {
-  if (isLoopbackAddress(request.remoteAddress) && !request.forwarded)
+  if (
+    isLoopbackAddress(request.remoteAddress) &&
+    !request.forwarded &&
+    !request.behindProxy
+  )
     return true;
   if (!metricsToken) return false;
   const match = request.authorization?.match(/^Bearer\s+(\S+)$/i);
