@@ -14,7 +14,6 @@
  * reports them as NaN in that scrape (and turnledger_database_figures_up 0)
  * instead of failing it.
  */
-import type { Pool as CorePool } from "mysql2";
 import {
   Counter,
   Gauge,
@@ -23,7 +22,7 @@ import {
   collectDefaultMetrics,
 } from "prom-client";
 import { countOpenAlerts } from "~/alerts/stock-alerts.server";
-import { pool } from "~/db/client.server";
+import { poolFigures } from "~/db/pool-figures.server";
 import { outboxBacklog } from "~/mail/outbox-backlog.server";
 
 function createMetrics() {
@@ -46,7 +45,7 @@ function createMetrics() {
   });
   const transactionRetries = new Counter({
     name: "turnledger_transaction_retries_total",
-    help: "Database transactions run again after a conflict, by reason (deadlock, lock wait timeout, certification failure, …).",
+    help: "Database transactions run again after a conflict, by reason: deadlock (an InnoDB deadlock or a Galera certification conflict, both error 1213) or lock_wait_timeout.",
     labelNames: ["reason"] as const,
     registers: [registry],
   });
@@ -138,25 +137,6 @@ export function countTransactionRetry(reason: string): void {
 /** Records how long a committed price-list import took (seconds). */
 export function observePriceListImport(seconds: number): void {
   metrics.priceListImportDuration.observe(seconds);
-}
-
-/**
- * The pool's connections by state. mysql2 has no public figures for this;
- * these are the core pool's own lists (mysql2 3.x, lib/base/pool.js).
- */
-function poolFigures(): { in_use: number; idle: number; waiting: number } {
-  const core = (pool as unknown as { pool: CorePool }).pool as unknown as {
-    _allConnections?: { length: number };
-    _freeConnections?: { length: number };
-    _connectionQueue?: { length: number };
-  };
-  const all = core._allConnections?.length ?? 0;
-  const idle = core._freeConnections?.length ?? 0;
-  return {
-    in_use: all - idle,
-    idle,
-    waiting: core._connectionQueue?.length ?? 0,
-  };
 }
 
 /** How long a scrape waits for the database's figures. */

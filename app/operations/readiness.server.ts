@@ -6,6 +6,7 @@
  * timeout. Why the server is not ready goes to the server's log (once per
  * change, not on every probe); the caller sees states only.
  */
+import { poolFigures } from "~/db/pool-figures.server";
 import { schemaStatus } from "~/db/schema-version.server";
 import { outboxBacklog } from "~/mail/outbox-backlog.server";
 import { areaLogger } from "~/observability/logger.server";
@@ -46,6 +47,10 @@ async function answerInTime<T>(question: Promise<T>): Promise<T> {
   }
 }
 
+/** What the database answered last time it did, for a probe that finds the pool full. */
+let lastAnswered: Pick<ReadinessFacts, "schema" | "oldestUnsentAt"> | null =
+  null;
+
 /** The facts, asking the database only what the answers before allow. */
 async function gatherFacts(now: Date): Promise<ReadinessFacts> {
   const facts: ReadinessFacts = {
@@ -68,7 +73,25 @@ async function gatherFacts(now: Date): Promise<ReadinessFacts> {
         await answerInTime(outboxBacklog())
       ).oldestUnsentAt;
     facts.databaseUp = true;
+    lastAnswered = {
+      schema: facts.schema,
+      oldestUnsentAt: facts.oldestUnsentAt,
+    };
   } catch (error) {
+    // Every connection lent out and requests queued: the questions waited for
+    // a connection, not for the database, which is busy answering them. A
+    // load balancer that took every busy server out would turn load into an
+    // outage, so the last answers stand.
+    if (
+      error instanceof NoAnswerInTime &&
+      lastAnswered &&
+      poolFigures().waiting > 0
+    ) {
+      healthLog.warn(
+        "/readyz: every database connection is busy; the last answers stand",
+      );
+      return { ...facts, databaseUp: true, ...lastAnswered };
+    }
     // The reason goes to the server's log, never to the caller: a driver's
     // message names hosts, users and databases.
     healthLog.error({ err: error }, "/readyz: the database did not answer");
