@@ -87,7 +87,7 @@ export interface RetryPolicy {
 }
 
 /**
- * Eight attempts, waits of at most 15, 30, 60 … 800 ms (about 1.9 s in all at worst).
+ * Eight attempts, waits of at most 15, 30, 60 … 800 ms (about 1.75 s in all at worst).
  * More than the usual five: on a Galera cluster every app server's transactions on one
  * hot balance row certify against each other, and a request that loses several rounds
  * in a row under a burst should still get its answer rather than a 503.

@@ -50,8 +50,9 @@ const text = (value: number) => String(value);
 
 export async function syncReferenceData(db: Database): Promise<void> {
   // The migration script's own client, not the app's (whose module needs DATABASE_URL at
-  // import): the same retries as writeTransaction, from the same rules. Two app servers
-  // starting at once against a Galera cluster both run this.
+  // import): the same retries as writeTransaction, from the same rules. Runs inside
+  // db:migrate, under its lock; retried all the same, since on a Galera cluster app
+  // servers writing on other nodes may still conflict with it at certification.
   await runWithRetries(() =>
     // eslint-disable-next-line no-restricted-syntax -- see above
     db.transaction(async (tx) => {
