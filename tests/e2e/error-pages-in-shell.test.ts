@@ -1,6 +1,11 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, signIn, waitForHydration } from "../support/browser";
+import {
+  launchBrowser,
+  saveScreenshot,
+  signIn,
+  waitForHydration,
+} from "../support/browser";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -21,6 +26,7 @@ describe("a missing build order", () => {
     ).toBe(true);
     const menu = page.getByRole("navigation", { name: "Main" });
     expect(await menu.isVisible()).toBe(true);
+    await saveScreenshot(page, "build-order-missing");
     await menu.getByRole("link", { name: "Build orders" }).click();
     await page
       .getByRole("heading", { level: 1, name: "Build orders" })
