@@ -2,9 +2,10 @@
 import { z } from "zod";
 import { buildOrderStatuses } from "~/db/tables/build-orders";
 import { apiError } from "~/lib/api.server";
-import { idFromText, pageParam, pageSizeParam } from "~/lib/search-params";
+import { pageParam, pageSizeParam } from "~/lib/search-params";
 import { answerStockError } from "~/stock/stock-api.server";
 import { isBuildOrderError } from "./build-order-errors";
+import { buildOrderIdFromPath } from "./build-order-path";
 
 /**
  * Runs build-order work for an API route: a BuildOrderError becomes 400/404/409 JSON
@@ -36,9 +37,7 @@ export async function answerBuildOrderError(
 
 /** The order id of the path, or a 404 answer when it is not a whole number. */
 export function orderIdFrom(value: string | undefined): number {
-  const id = idFromText(value);
-  if (id === null) throw apiError(404, `No build order "${value ?? ""}".`);
-  return id;
+  return buildOrderIdFromPath(value, (message) => apiError(404, message));
 }
 
 export const buildOrderListQuerySchema = z.object({

@@ -17,24 +17,15 @@ import {
 } from "~/build-orders/build-order-forms";
 import { issueToBuildOrder } from "~/build-orders/build-order-issues.server";
 import { reserveBuildOrderStock } from "~/build-orders/build-order-reservations.server";
+import {
+  buildOrderApiStepOf,
+  buildOrderStepRoles,
+} from "~/build-orders/build-order-steps";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
-import type { Role } from "~/lib/roles";
-
-/** Who may take each step (admins may take any). */
-const stepRoles: Record<string, Role[]> = {
-  reserve: ["builder"],
-  cancel: ["builder"],
-  complete: ["builder"],
-  issue: ["storekeeper"],
-};
-
-function stepOf(value: string | undefined): keyof typeof stepRoles | null {
-  return value && Object.hasOwn(stepRoles, value) ? value : null;
-}
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   await requireUser(request);
-  if (!stepOf(params.step))
+  if (!buildOrderApiStepOf(params.step))
     return apiError(404, `No build-order step "${params.step}".`);
   return methodNotAllowed(["POST"]);
 }
@@ -48,9 +39,9 @@ export async function loader({ request, params }: Route.LoaderArgs) {
  */
 export async function action({ request, params }: Route.ActionArgs) {
   await requireUser(request);
-  const step = stepOf(params.step);
+  const step = buildOrderApiStepOf(params.step);
   if (!step) return apiError(404, `No build-order step "${params.step}".`);
-  const user = await requireRole(request, stepRoles[step]!);
+  const user = await requireRole(request, buildOrderStepRoles[step]);
   if (request.method !== "POST") return methodNotAllowed(["POST"]);
   const id = orderIdFrom(params.orderId);
   return answerBuildOrderError(async () => {

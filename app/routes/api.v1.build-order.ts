@@ -7,6 +7,7 @@ import {
 import { changeBuildOrderQuantity } from "~/build-orders/build-order-closing.server";
 import { findBuildOrder } from "~/build-orders/build-order-details.server";
 import { quantityChangeSchema } from "~/build-orders/build-order-forms";
+import { buildOrderReference } from "~/build-orders/build-order-status";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
 
 /** GET /api/v1/build-orders/:orderId → the order, its lines with availability, costs and history. */
@@ -14,7 +15,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   await requireUser(request);
   const id = orderIdFrom(params.orderId);
   const order = await findBuildOrder(id);
-  if (!order) return apiError(404, `No build order BO-${id}.`);
+  if (!order)
+    return apiError(404, `No build order ${buildOrderReference(id)}.`);
   return Response.json(order);
 }
 

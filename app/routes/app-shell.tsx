@@ -9,6 +9,7 @@ import type { Route } from "./+types/app-shell";
 import { requireUser } from "~/auth/guard.server";
 import { sessionHeaders } from "~/auth/session-headers.server";
 import { FlashMessage } from "~/components/flash-message";
+import { RouteErrorNotice, RouteErrorPage } from "~/components/route-error";
 import { takeFlash } from "~/lib/flash.server";
 import { navigationItems } from "~/lib/navigation";
 import { roleLabels, userHasRole } from "~/lib/roles";
@@ -35,7 +36,41 @@ export const headers: Route.HeadersFunction = ({ loaderHeaders }) =>
   loaderHeaders;
 
 export default function AppShell({ loaderData }: Route.ComponentProps) {
-  const { user, flash } = loaderData;
+  return (
+    <ShellFrame user={loaderData.user} flash={loaderData.flash}>
+      <Outlet />
+    </ShellFrame>
+  );
+}
+
+/**
+ * A page's refusal or failure (403, 404, 503…) under the header and menu. When the
+ * shell itself could not load (no one signed in, the database down), the root's
+ * error page shows it without them.
+ */
+export function ErrorBoundary({ error, loaderData }: Route.ErrorBoundaryProps) {
+  if (!loaderData) return <RouteErrorPage error={error} />;
+  return (
+    <ShellFrame user={loaderData.user} flash={loaderData.flash}>
+      <div className="mx-auto max-w-xl py-12">
+        <RouteErrorNotice error={error} />
+      </div>
+    </ShellFrame>
+  );
+}
+
+type ShellData = Route.ComponentProps["loaderData"];
+
+/** The header with the person and the menu, the page in the middle, the footer. */
+function ShellFrame({
+  user,
+  flash,
+  children,
+}: {
+  user: ShellData["user"];
+  flash: ShellData["flash"];
+  children: React.ReactNode;
+}) {
   const items = navigationItems.filter(
     (item) => item.roles.length === 0 || userHasRole(user, item.roles),
   );
@@ -99,7 +134,7 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
       </header>
       <main className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">
         <FlashMessage flash={flash} />
-        <Outlet />
+        {children}
       </main>
       <footer className="border-t border-rule py-4 print:border-0 text-center text-xs text-graphite-500">
         Turnledger · figures are first-order engineering estimates; electrical

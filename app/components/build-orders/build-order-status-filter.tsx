@@ -1,0 +1,36 @@
+/** The build-order list's filter: all orders, or the orders of one status. */
+import { Link } from "react-router";
+import { buildOrderListHref } from "~/build-orders/build-order-list-address";
+import {
+  buildOrderStatusLabels,
+  type BuildOrderStatus,
+} from "~/build-orders/build-order-status";
+import { buildOrderStatuses } from "~/db/tables/build-orders";
+
+export function BuildOrderStatusFilter({
+  status,
+}: {
+  status: BuildOrderStatus | null;
+}) {
+  return (
+    <nav aria-label="Filter by status">
+      <ul className="flex flex-wrap gap-2 text-sm">
+        {[null, ...buildOrderStatuses].map((candidate) => (
+          <li key={candidate ?? "all"}>
+            <Link
+              to={buildOrderListHref(candidate)}
+              aria-current={candidate === status ? "page" : undefined}
+              className={`inline-flex min-h-9 items-center rounded-md border px-3 font-medium ${
+                candidate === status
+                  ? "border-graphite-800 bg-graphite-800 text-white"
+                  : "border-graphite-300 bg-sheet text-graphite-800 hover:border-graphite-500"
+              }`}
+            >
+              {candidate ? buildOrderStatusLabels[candidate] : "All"}
+            </Link>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}
