@@ -1,12 +1,24 @@
 import { createColumnHelper } from "@tanstack/react-table";
+import { AxisBottom, AxisLeft } from "@visx/axis";
+import { curveStepAfter } from "@visx/curve";
+import {
+  GlyphCircle,
+  GlyphCross,
+  GlyphDiamond,
+  GlyphSquare,
+  GlyphTriangle,
+} from "@visx/glyph";
+import { GridRows } from "@visx/grid";
+import { scaleLinear, scaleUtc } from "@visx/scale";
+import { Line, LinePath } from "@visx/shape";
 import { useId } from "react";
 import { Link } from "react-router";
 import { DataTable } from "~/components/data-table";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import {
-  markerPath,
   priceHistoryChart,
   type ChartFrame,
+  type ChartPoint,
   type SeriesStyle,
 } from "~/pricing/price-history-chart";
 import { perUnitWord } from "~/lib/unit-text";
@@ -82,39 +94,88 @@ function shortName(name: string): string {
     : name;
 }
 
-/** The marker of an offer, hollow so overlapping markers stay readable. */
+/** The colour of an offer's marker where it is filled (the cross), as its line. */
+const fillClasses = [
+  "fill-graphite-900",
+  "fill-copper-600",
+  "fill-field",
+  "fill-ok",
+  "fill-caution",
+  "fill-graphite-500",
+];
+
+/**
+ * The marker of an offer, hollow so overlapping markers stay readable: the shapes and
+ * sizes of the insight trend chart's markers, in the offer's colour classes.
+ */
 function Marker({
   style,
   x,
   y,
-  className,
-  children,
+  index,
 }: {
   style: SeriesStyle;
   x: number;
   y: number;
-  className: string;
-  children?: React.ReactNode;
+  /** The offer's place: its colour. */
+  index: number;
 }) {
-  return (
-    <path
-      d={markerPath(style.marker, x, y)}
-      className={`${className} ${style.marker === "cross" ? "fill-none" : "fill-sheet"}`}
-      strokeWidth={1.75}
-    >
-      {children}
-    </path>
-  );
+  const stroke = strokeClasses[index % strokeClasses.length]!;
+  const common = {
+    left: x,
+    top: y,
+    size: 48,
+    strokeWidth: 1.75,
+    className: `${stroke} fill-sheet`,
+  };
+  switch (style.marker) {
+    case "circle":
+      return <GlyphCircle {...common} />;
+    case "square":
+      return <GlyphSquare {...common} />;
+    case "triangle":
+      return <GlyphTriangle {...common} />;
+    case "triangle-down":
+      return (
+        <g transform={`rotate(180 ${x} ${y})`}>
+          <GlyphTriangle {...common} />
+        </g>
+      );
+    case "diamond":
+      return <GlyphDiamond {...common} />;
+    case "cross":
+      return (
+        <GlyphCross
+          {...common}
+          size={36}
+          strokeWidth={0.5}
+          className={`${stroke} ${fillClasses[index % fillClasses.length]!}`}
+        />
+      );
+  }
 }
 
+/**
+ * The offer's prices as a step line: each price holds until the next point, a day
+ * without a price ends the line there, and the last price holds on to `end`.
+ */
+function stepsOf(points: readonly ChartPoint[], end: string): ChartPoint[] {
+  const steps: ChartPoint[] = [];
+  let held: number | null = null;
+  for (const point of points) {
+    if (point.unitPrice === null && held !== null)
+      steps.push({ date: point.date, unitPrice: held });
+    steps.push(point);
+    held = point.unitPrice;
+  }
+  if (held !== null) steps.push({ date: end, unitPrice: held });
+  return steps;
+}
+
+const dayOf = (date: string) => new Date(`${date}T00:00:00Z`);
+
 /** A short piece of the offer's line with its marker: the legend's key. */
-function LineSample({
-  style,
-  strokeClass,
-}: {
-  style: SeriesStyle;
-  strokeClass: string;
-}) {
+function LineSample({ style, index }: { style: SeriesStyle; index: number }) {
   return (
     <svg
       viewBox="0 0 36 12"
@@ -123,16 +184,14 @@ function LineSample({
       aria-hidden="true"
       className="shrink-0"
     >
-      <line
-        x1={1}
-        x2={35}
-        y1={6}
-        y2={6}
-        className={strokeClass}
+      <Line
+        from={{ x: 1, y: 6 }}
+        to={{ x: 35, y: 6 }}
+        className={strokeClasses[index % strokeClasses.length]}
         strokeWidth={2}
         strokeDasharray={style.dash || undefined}
       />
-      <Marker style={style} x={18} y={6} className={strokeClass} />
+      <Marker style={style} x={18} y={6} index={index} />
     </svg>
   );
 }
@@ -159,6 +218,15 @@ export function PriceHistoryChart({
   const price = (value: number) => pricePerUnit(value, currency, history.unit);
   const quantity = formatStockQuantity(history.quantity, history.unit);
   const chart = priceHistoryChart(history.series, history.to, frame);
+  const values = chart?.valueTicks.map((tick) => tick.value) ?? [0, 1];
+  const yScale = scaleLinear<number>({
+    domain: [values[0]!, values[values.length - 1]!],
+    range: [plotBottom, frame.top],
+  });
+  const xScale = scaleUtc<number>({
+    domain: chart ? [dayOf(chart.start), dayOf(chart.end)] : [0, 1],
+    range: [frame.left, plotRight],
+  });
 
   return (
     <section
@@ -219,58 +287,54 @@ export function PriceHistoryChart({
               aria-describedby={summaryId}
               className="h-auto w-full min-w-[34rem] text-graphite-700 tabular-nums"
             >
-              {chart.valueTicks.map((tick) => (
-                <g key={tick.value}>
-                  <line
-                    x1={frame.left}
-                    x2={plotRight}
-                    y1={tick.y}
-                    y2={tick.y}
-                    stroke="currentColor"
-                    strokeOpacity={0.14}
-                  />
-                  <text
-                    x={frame.left - 8}
-                    y={tick.y + 4}
-                    textAnchor="end"
-                    fontSize="12"
-                    fill="currentColor"
-                  >
-                    {formatQuantity(tick.value, "", chart.valueDecimals)}
-                  </text>
-                </g>
-              ))}
-              <line
-                x1={frame.left}
-                x2={plotRight}
-                y1={plotBottom}
-                y2={plotBottom}
+              <GridRows
+                scale={yScale}
+                tickValues={values}
+                left={frame.left}
+                width={plotRight - frame.left}
                 stroke="currentColor"
-                strokeOpacity={0.5}
+                strokeOpacity={0.14}
               />
-              {chart.dateTicks.map((tick) => (
-                <g key={tick.date}>
-                  <line
-                    x1={tick.x}
-                    x2={tick.x}
-                    y1={plotBottom}
-                    y2={plotBottom + 5}
-                    stroke="currentColor"
-                    strokeOpacity={0.5}
-                  />
-                  <text
-                    x={tick.x}
-                    y={plotBottom + 18}
-                    textAnchor={tick.anchor}
-                    fontSize="12"
-                    fill="currentColor"
-                  >
-                    {chart.monthTicks
-                      ? monthText(tick.date)
-                      : dayText(tick.date)}
-                  </text>
-                </g>
-              ))}
+              <AxisLeft
+                scale={yScale}
+                left={frame.left}
+                tickValues={values}
+                hideAxisLine
+                hideTicks
+                tickLength={8}
+                tickFormat={(value) =>
+                  formatQuantity(Number(value), "", chart.valueDecimals)
+                }
+                tickLabelProps={{
+                  fontSize: 12,
+                  fontFamily: undefined,
+                  fill: "currentColor",
+                  textAnchor: "end",
+                  dx: 0,
+                  dy: 4,
+                }}
+              />
+              <AxisBottom
+                scale={xScale}
+                top={plotBottom}
+                tickValues={chart.dateTicks.map((tick) => dayOf(tick.date))}
+                stroke="currentColor"
+                tickStroke="currentColor"
+                tickLength={5}
+                axisLineClassName="[stroke-opacity:0.5]"
+                tickLineProps={{ strokeOpacity: 0.5, strokeLinecap: "butt" }}
+                tickFormat={(_, index) => {
+                  const date = chart.dateTicks[index]!.date;
+                  return chart.monthTicks ? monthText(date) : dayText(date);
+                }}
+                tickLabelProps={(_, index) => ({
+                  fontSize: 12,
+                  fontFamily: undefined,
+                  fill: "currentColor",
+                  textAnchor: chart.dateTicks[index]!.anchor,
+                  dy: 1,
+                })}
+              />
               <text
                 x={frame.left}
                 y={frame.height - 6}
@@ -299,8 +363,12 @@ export function PriceHistoryChart({
                 const pricedNow = offer.points.at(-1)?.unitPrice != null;
                 return (
                   <g key={name}>
-                    <path
-                      d={layout.path}
+                    <LinePath
+                      data={stepsOf(offer.points, chart.end)}
+                      x={(point) => xScale(dayOf(point.date))}
+                      y={(point) => yScale(point.unitPrice ?? 0)}
+                      defined={(point) => point.unitPrice !== null}
+                      curve={curveStepAfter}
                       fill="none"
                       className={strokeClass}
                       strokeWidth={2.25}
@@ -308,24 +376,22 @@ export function PriceHistoryChart({
                       strokeLinejoin="round"
                     />
                     {layout.markers.map((marker) => (
-                      <Marker
-                        key={marker.date}
-                        style={layout.style}
-                        x={marker.x}
-                        y={marker.y}
-                        className={strokeClass}
-                      >
+                      <g key={marker.date}>
                         <title>{`${name}: ${price(marker.unitPrice)} from ${dayText(marker.date)}`}</title>
-                      </Marker>
+                        <Marker
+                          style={layout.style}
+                          x={xScale(dayOf(marker.date))}
+                          y={yScale(marker.unitPrice)}
+                          index={index}
+                        />
+                      </g>
                     ))}
                     {layout.labelY !== null && layout.endY !== null ? (
                       <g>
                         {pricedNow && layout.labelY !== layout.endY ? (
-                          <line
-                            x1={plotRight + 1}
-                            x2={plotRight + 6}
-                            y1={layout.endY}
-                            y2={layout.labelY}
+                          <Line
+                            from={{ x: plotRight + 1, y: layout.endY }}
+                            to={{ x: plotRight + 6, y: layout.labelY }}
                             className={strokeClass}
                             strokeWidth={1}
                           />
@@ -334,7 +400,7 @@ export function PriceHistoryChart({
                           style={layout.style}
                           x={plotRight + 13}
                           y={layout.labelY}
-                          className={strokeClass}
+                          index={index}
                         />
                         <text
                           x={plotRight + 23}
@@ -365,10 +431,7 @@ export function PriceHistoryChart({
                     key={offerName(offer)}
                     className="flex items-center gap-2"
                   >
-                    <LineSample
-                      style={layout.style}
-                      strokeClass={strokeClasses[index % strokeClasses.length]!}
-                    />
+                    <LineSample style={layout.style} index={index} />
                     <span>
                       <span className="font-medium">{offerName(offer)}</span>
                       <span className="text-graphite-500">
