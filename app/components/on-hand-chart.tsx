@@ -6,7 +6,11 @@ import { scaleLinear, scaleUtc } from "@visx/scale";
 import { Line, LinePath } from "@visx/shape";
 import { formatDateTime } from "~/lib/format";
 import { quantityText } from "~/lib/unit-text";
-import { onHandChart, type OnHandPoint } from "~/stock/on-hand-history-chart";
+import {
+  onHandChart,
+  type OnHandChart as OnHandChartLayout,
+  type OnHandPoint,
+} from "~/stock/on-hand-history-chart";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 const frame = {
@@ -57,12 +61,6 @@ export function OnHandChart({
       </p>
     );
   }
-  const decimals =
-    unit === "pcs"
-      ? 0
-      : chart.valueTicks.some((tick) => !Number.isInteger(tick.value))
-        ? 2
-        : 0;
   const last = points[points.length - 1]!;
   const summary = `On hand over the last ${points.length} movement${points.length === 1 ? "" : "s"}, from ${dayOf(points[0]!.at)} to now: ${formatStockQuantity(last.onHand, unit)} now${
     reorderPoint > 0
@@ -73,9 +71,8 @@ export function OnHandChart({
   const plotRight = frame.width - frame.right;
   const plotBottom = frame.height - frame.bottom;
   const values = chart.valueTicks.map((tick) => tick.value);
-  const times = chart.timeTicks.map((tick) => new Date(tick.at));
-  const start = times[0]!;
-  const end = times[times.length - 1]!;
+  const start = new Date(chart.timeTicks[0]!.at);
+  const end = new Date(chart.timeTicks[chart.timeTicks.length - 1]!.at);
   const xScale = scaleUtc<number>({
     domain: [start, end],
     range: [plotLeft, plotRight],
@@ -86,14 +83,6 @@ export function OnHandChart({
   });
   // The line holds each on hand until the next movement, and the last one until now.
   const line = [...points, { at: end.toISOString(), onHand: last.onHand }];
-  const timeText = (at: string, index: number) =>
-    index === times.length - 1
-      ? "now"
-      : !chart.withinTwoDays
-        ? dayOf(at)
-        : index === 0
-          ? `${dayOf(at)}, ${timeOfDay(at)}`
-          : timeOfDay(at);
   return (
     <figure>
       <svg
@@ -102,79 +91,7 @@ export function OnHandChart({
         aria-label={summary}
         className="h-auto w-full text-graphite-700"
       >
-        <GridRows
-          scale={yScale}
-          tickValues={values.filter((value) => value !== 0)}
-          left={plotLeft}
-          width={plotRight - plotLeft}
-          stroke="currentColor"
-          strokeOpacity={0.12}
-        />
-        <GridRows
-          scale={yScale}
-          tickValues={[0]}
-          left={plotLeft}
-          width={plotRight - plotLeft}
-          stroke="currentColor"
-          strokeOpacity={0.6}
-        />
-        <AxisLeft
-          scale={yScale}
-          left={plotLeft}
-          tickValues={values}
-          hideAxisLine
-          hideTicks
-          tickLength={8}
-          tickFormat={(value) => quantityText(Number(value), unit, decimals)}
-          tickLabelProps={{
-            fontSize: 12,
-            fontFamily: undefined,
-            fill: "currentColor",
-            textAnchor: "end",
-            dx: 0,
-            dy: 4,
-          }}
-        />
-        <AxisBottom
-          scale={xScale}
-          top={plotBottom}
-          tickValues={times}
-          hideAxisLine
-          hideTicks
-          tickLength={6}
-          tickFormat={(_, index) => timeText(chart.timeTicks[index]!.at, index)}
-          tickLabelProps={(_, index) => ({
-            fontSize: 12,
-            fontFamily: undefined,
-            fill: "currentColor",
-            textAnchor:
-              index === 0
-                ? "start"
-                : index === times.length - 1
-                  ? "end"
-                  : "middle",
-          })}
-        />
-        <text
-          x={plotLeft}
-          y={frame.height - 4}
-          fontSize="11"
-          fill="currentColor"
-          fillOpacity={0.7}
-        >
-          Time (UTC) →
-        </text>
-        <text
-          x={12}
-          y={frame.top + (plotBottom - frame.top) / 2}
-          fontSize="11"
-          fill="currentColor"
-          fillOpacity={0.7}
-          textAnchor="middle"
-          transform={`rotate(-90 12 ${frame.top + (plotBottom - frame.top) / 2})`}
-        >
-          On hand ({unit})
-        </text>
+        <OnHandAxes chart={chart} xScale={xScale} yScale={yScale} unit={unit} />
         {reorderPoint > 0 ? (
           <g>
             <Line
@@ -225,5 +142,119 @@ export function OnHandChart({
         {points.length > 1 ? `${points.length} movements` : "movement"} shown.
       </figcaption>
     </figure>
+  );
+}
+
+/**
+ * The chart's grid and axes: the value ticks (the zero line darker), the start, middle
+ * and now of the time axis (times of day when it spans two days or less), and the axis
+ * titles.
+ */
+function OnHandAxes({
+  chart,
+  xScale,
+  yScale,
+  unit,
+}: {
+  chart: OnHandChartLayout;
+  xScale: ReturnType<typeof scaleUtc<number>>;
+  yScale: ReturnType<typeof scaleLinear<number>>;
+  unit: string;
+}) {
+  const plotLeft = frame.left;
+  const plotRight = frame.width - frame.right;
+  const plotBottom = frame.height - frame.bottom;
+  const values = chart.valueTicks.map((tick) => tick.value);
+  const times = chart.timeTicks.map((tick) => new Date(tick.at));
+  const decimals =
+    unit === "pcs"
+      ? 0
+      : chart.valueTicks.some((tick) => !Number.isInteger(tick.value))
+        ? 2
+        : 0;
+  const timeText = (at: string, index: number) =>
+    index === times.length - 1
+      ? "now"
+      : !chart.withinTwoDays
+        ? dayOf(at)
+        : index === 0
+          ? `${dayOf(at)}, ${timeOfDay(at)}`
+          : timeOfDay(at);
+  return (
+    <>
+      <GridRows
+        scale={yScale}
+        tickValues={values.filter((value) => value !== 0)}
+        left={plotLeft}
+        width={plotRight - plotLeft}
+        stroke="currentColor"
+        strokeOpacity={0.12}
+      />
+      <GridRows
+        scale={yScale}
+        tickValues={[0]}
+        left={plotLeft}
+        width={plotRight - plotLeft}
+        stroke="currentColor"
+        strokeOpacity={0.6}
+      />
+      <AxisLeft
+        scale={yScale}
+        left={plotLeft}
+        tickValues={values}
+        hideAxisLine
+        hideTicks
+        tickLength={8}
+        tickFormat={(value) => quantityText(Number(value), unit, decimals)}
+        tickLabelProps={{
+          fontSize: 12,
+          fontFamily: undefined,
+          fill: "currentColor",
+          textAnchor: "end",
+          dx: 0,
+          dy: 4,
+        }}
+      />
+      <AxisBottom
+        scale={xScale}
+        top={plotBottom}
+        tickValues={times}
+        hideAxisLine
+        hideTicks
+        tickLength={6}
+        tickFormat={(_, index) => timeText(chart.timeTicks[index]!.at, index)}
+        tickLabelProps={(_, index) => ({
+          fontSize: 12,
+          fontFamily: undefined,
+          fill: "currentColor",
+          textAnchor:
+            index === 0
+              ? "start"
+              : index === times.length - 1
+                ? "end"
+                : "middle",
+        })}
+      />
+      <text
+        x={plotLeft}
+        y={frame.height - 4}
+        fontSize="11"
+        fill="currentColor"
+        fillOpacity={0.7}
+      >
+        Time (UTC) →
+      </text>
+      <text
+        x={12}
+        y={frame.top + (plotBottom - frame.top) / 2}
+        fontSize="11"
+        fill="currentColor"
+        fillOpacity={0.7}
+        textAnchor="middle"
+        transform={`rotate(-90 12 ${frame.top + (plotBottom - frame.top) / 2})`}
+      >
+        On hand ({unit})
+      </text>
+    </>
   );
 }
