@@ -26,6 +26,7 @@ import {
   formNumber,
   maxNumberTextLength,
   plainDecimalText,
+  typedNumber,
   withoutSuffix,
   withoutTrailingZeros,
 } from "./number-text";
@@ -59,6 +60,23 @@ describe("a form's number field", () => {
   it("passes other values through", () => {
     expect(formNumber(5)).toBe(5);
     expect(formNumber(undefined)).toBeUndefined();
+  });
+});
+
+describe("a number typed in a field", () => {
+  it.each([
+    ["4.6", 4.6],
+    [" 4,6 ", 4.6],
+    ["-2", -2],
+    ["12.", 12],
+    ["", null],
+    ["   ", null],
+    ["1e3", null],
+    ["4,6,1", null],
+    ["five", null],
+    ["1".repeat(maxNumberTextLength + 1), null],
+  ])("reads %j as %j", (text, value) => {
+    expect(typedNumber(text)).toBe(value);
   });
 });
 

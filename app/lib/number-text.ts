@@ -38,6 +38,16 @@ export function formNumber(value: unknown): unknown {
     : trimmed;
 }
 
+/**
+ * A number typed in a field, read as {@link formNumber} reads it (a decimal comma
+ * allowed), for what a page shows while you type: "4,6" → 4.6; null while the text is
+ * empty or no plain decimal number.
+ */
+export function typedNumber(text: string): number | null {
+  const value = formNumber(text);
+  return typeof value === "number" ? value : null;
+}
+
 /** "1.2500" → "1.25", "0.000" → "0.", "100" → "1": the text without its last zeros (no pattern). */
 export function withoutTrailingZeros(text: string): string {
   let end = text.length;

@@ -1,24 +1,18 @@
-import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
-import { createColumnHelper } from "@tanstack/react-table";
-import { data, Form, Link, useNavigation } from "react-router";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data, Link } from "react-router";
 import type { Route } from "./+types/stock-item";
 import { requireRole, requireUser } from "~/auth/guard.server";
-import { SummaryFigure } from "~/components/summary-figure";
-import { BelowReorderMark } from "~/components/below-reorder-mark";
-import { DataTable } from "~/components/data-table";
-import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
-import { OnHandChart } from "~/components/on-hand-chart";
-import { QuantityField } from "~/components/quantity-field";
-import {
-  MagnetAttributeList,
-  WireAttributeList,
-  type MagnetAttributes,
-  type WireAttributes,
-} from "~/components/stock-item-attributes";
-import { FormMessages, TextField } from "~/components/text-field";
-import type { ConductorKey } from "~/engineering/reference-data";
-import { formatDateTime, formatQuantity } from "~/lib/format";
+import { ItemBestPricesPanel } from "~/components/item-best-prices";
+import { PriceHistoryChart } from "~/components/price-history-chart";
+import { CatalogueEntryPanel } from "~/components/stock/catalogue-entry-panel";
+import { ItemAttributesPanel } from "~/components/stock/item-attributes-panel";
+import { ItemBalancesPanel } from "~/components/stock/item-balances-panel";
+import { ItemMovementsPanel } from "~/components/stock/item-movements-panel";
+import { ItemOnHandPanel } from "~/components/stock/item-on-hand-panel";
+import { ItemPageHeading } from "~/components/stock/item-page-heading";
+import { ItemSummaryFigures } from "~/components/stock/item-summary-figures";
+import { ReorderPointPanel } from "~/components/stock/reorder-point-panel";
+import { FormMessages } from "~/components/text-field";
 import { pageCountOf, pageFromSearch } from "~/lib/search-params";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { userHasRole } from "~/lib/roles";
@@ -27,18 +21,14 @@ import {
   changesCatalogue,
   itemChangeSchema,
   itemPatchOf,
-  renameFormSchema,
-  reorderFormSchema,
 } from "~/stock/item-change-form";
 import {
   countItemMovements,
-  findItemAttributes,
   listOnHandHistory,
 } from "~/stock/item-details.server";
+import { itemPageAttributes } from "~/stock/item-page-attributes.server";
 import { findItemBySku } from "~/stock/items.server";
 import { listMovements } from "~/stock/movement-journal.server";
-import { ItemBestPricesPanel } from "~/components/item-best-prices";
-import { PriceHistoryChart } from "~/components/price-history-chart";
 import {
   bestPricesOf,
   loadItemPricing,
@@ -49,19 +39,6 @@ import { todayUtc } from "~/purchasing/current-entries";
 import { readItemPriceQuantity } from "~/purchasing/price-quantity-query";
 import { quantityFromNumber } from "~/stock/decimal-amounts";
 import { isStockError } from "~/stock/stock-errors";
-import {
-  formatMoney,
-  formatSignedStockQuantity,
-  formatStockQuantity,
-  formatUnitCost,
-  itemKindLabel,
-  movementTypeLabels,
-} from "~/stock/stock-quantity-text";
-import {
-  magnetShapeOf,
-  magnetStockFigures,
-  wireStockFigures,
-} from "~/stock/stocked-item-figures";
 
 const movementPageSize = 20;
 
@@ -72,64 +49,6 @@ function notFound(sku: string): never {
   );
 }
 
-async function attributesOf(item: {
-  id: number;
-  kind: "wire" | "magnet" | "part";
-  onHand: number;
-}) {
-  const found = await findItemAttributes(item.id, item.kind);
-  if (found?.kind === "wire") {
-    let figures = null;
-    try {
-      figures = wireStockFigures({
-        conductor: found.conductor as ConductorKey,
-        standard: found.standard,
-        sizeLabel: found.sizeLabel,
-        onHandKg: item.onHand,
-      });
-    } catch {
-      // A size or conductor the engineering tables no longer know: show the attributes without figures.
-    }
-    return { ...found, figures } satisfies WireAttributes;
-  }
-  if (found?.kind === "magnet") {
-    const shape = magnetShapeOf(found.shape, found.dimensionsMm);
-    let figures = null;
-    if (found.grade && shape) {
-      try {
-        figures = magnetStockFigures({
-          grade: found.grade,
-          shape,
-          pieces: item.onHand,
-        });
-      } catch {
-        // Stored dimensions the estimate refuses: show them without a mass.
-      }
-    }
-    const grade = found.grade
-      ? {
-          name: found.grade.name,
-          material: found.grade.material,
-          maxWorkingTemperatureC: found.grade.maxWorkingTemperatureC,
-          densityGPerCm3: found.grade.densityGPerCm3,
-        }
-      : null;
-    return {
-      kind: "magnet",
-      gradeKey: found.gradeKey,
-      grade,
-      shape,
-      coating: found.coating,
-      magnetisation: found.magnetisation,
-      figures: figures && {
-        massPerPieceKg: figures.massPerPieceKg,
-        totalMassKg: figures.totalMassKg,
-      },
-    } satisfies MagnetAttributes;
-  }
-  return null;
-}
-
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
   const found = await findItemBySku(params.sku);
@@ -137,7 +56,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const { id, ...item } = found;
   const url = new URL(request.url);
   const [attributes, movementCount, history] = await Promise.all([
-    attributesOf(found),
+    itemPageAttributes(found),
     countItemMovements(id),
     listOnHandHistory(id),
   ]);
@@ -229,169 +148,18 @@ export const meta: Route.MetaFunction = ({ data: loaderData }) => [
   },
 ];
 
-type LoaderData = Route.ComponentProps["loaderData"];
-type Balance = LoaderData["item"]["balances"][number];
-type Movement = LoaderData["movements"][number];
-
-function balanceColumns(unit: string, isWire: boolean) {
-  const column = createColumnHelper<Balance>();
-  return [
-    column.accessor("location", {
-      header: "Location",
-      cell: (info) => (
-        <>
-          <span className="font-medium">{info.getValue()}</span>{" "}
-          <span className="text-graphite-500">
-            {info.row.original.locationName}
-          </span>
-        </>
-      ),
-    }),
-    column.accessor("lot", {
-      header: "Lot",
-      cell: (info) => info.getValue() ?? "—",
-    }),
-    ...(isWire
-      ? [
-          column.accessor("tareKg", {
-            header: "Spool tare",
-            cell: (info) => {
-              const tare = info.getValue();
-              return tare === null ? "—" : formatQuantity(tare, "kg", 3);
-            },
-            meta: { numeric: true },
-          }),
-        ]
-      : []),
-    column.accessor("onHand", {
-      header: "On hand",
-      cell: (info) => formatStockQuantity(info.getValue(), unit),
-      meta: { numeric: true },
-    }),
-    column.accessor("reserved", {
-      header: "Reserved",
-      cell: (info) => formatStockQuantity(info.getValue(), unit),
-      meta: { numeric: true },
-    }),
-  ];
-}
-
-function movementColumns(unit: string) {
-  const column = createColumnHelper<Movement>();
-  return [
-    column.accessor("createdAt", {
-      header: "When",
-      cell: (info) => (
-        <span className="whitespace-nowrap">
-          {formatDateTime(info.getValue())}
-        </span>
-      ),
-    }),
-    column.accessor("type", {
-      header: "Movement",
-      cell: (info) => movementTypeLabels[info.getValue()] ?? info.getValue(),
-    }),
-    column.accessor("lot", {
-      header: "Lot",
-      cell: (info) => info.getValue() ?? "—",
-    }),
-    column.accessor("location", { header: "Location" }),
-    column.accessor("quantity", {
-      header: "Change",
-      cell: (info) => (
-        <span className="whitespace-nowrap">
-          {formatSignedStockQuantity(info.getValue(), unit)}
-        </span>
-      ),
-      meta: { numeric: true },
-    }),
-    column.accessor("itemOnHandAfter", {
-      header: "On hand after",
-      cell: (info) => (
-        <span className="whitespace-nowrap">
-          {formatStockQuantity(info.getValue(), unit)}
-        </span>
-      ),
-      meta: { numeric: true },
-    }),
-    column.accessor("unitCost", {
-      header: "Unit cost",
-      cell: (info) => {
-        const cost = info.getValue();
-        return cost === null ? (
-          "—"
-        ) : (
-          <span className="whitespace-nowrap">
-            {formatUnitCost(cost, unit)}
-          </span>
-        );
-      },
-      meta: { numeric: true },
-    }),
-    column.display({
-      id: "reference",
-      header: "Reference and note",
-      cell: ({ row }) =>
-        [row.original.reference, row.original.note]
-          .filter(Boolean)
-          .join(" · ") || "—",
-    }),
-    column.accessor("user", { header: "By" }),
-  ];
-}
-
 export default function StockItem({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const {
-    item,
-    attributes,
-    history,
-    now,
-    movements,
-    page,
-    pageCount,
-    movementCount,
-    can,
-    prices,
-    priceQuantity,
-    priceHistory,
-  } = loaderData;
-  const navigation = useNavigation();
-  const busy = navigation.state !== "idle";
-  const [reorderForm, reorderFields] = useForm({
-    id: "reorder",
-    lastResult:
-      actionData?.intent === "reorder" ? actionData.result : undefined,
-    defaultValue: {
-      reorderPoint: String(item.reorderPoint),
-      reorderQuantity: String(item.reorderQuantity),
-    },
-    constraint: getZodConstraint(reorderFormSchema),
-    shouldValidate: "onBlur",
-    shouldRevalidate: "onInput",
-    onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: reorderFormSchema }),
-  });
-  const [renameForm, renameFields] = useForm({
-    id: "rename",
-    lastResult: actionData?.intent === "rename" ? actionData.result : undefined,
-    defaultValue: { name: item.name },
-    constraint: getZodConstraint(renameFormSchema),
-    shouldValidate: "onBlur",
-    shouldRevalidate: "onInput",
-    onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: renameFormSchema }),
-  });
+  const { item, attributes, can, prices, priceQuantity, priceHistory } =
+    loaderData;
   const otherErrors =
     actionData &&
     actionData.intent !== "reorder" &&
     actionData.intent !== "rename"
       ? actionData.result.error?.[""]
       : undefined;
-  const unit = item.unit;
-  const sku = encodeURIComponent(item.sku);
 
   return (
     <div className="space-y-6">
@@ -403,99 +171,21 @@ export default function StockItem({
           ← Stock
         </Link>
       </p>
-
-      <div className="flex flex-wrap items-start justify-between gap-4">
-        <div>
-          <p className="text-sm font-medium text-graphite-500">
-            {itemKindLabel(item.kind)} · SKU{" "}
-            <span className="text-graphite-900">{item.sku}</span>
-          </p>
-          <h1 className="mt-1 text-2xl font-semibold">{item.name}</h1>
-          <p className="mt-1 flex flex-wrap items-center gap-2 text-graphite-700">
-            {item.sizeOrGrade || null}
-            {item.active ? null : (
-              <span className="rounded border border-graphite-300 px-1.5 py-0.5 text-xs font-medium text-graphite-700">
-                Archived
-              </span>
-            )}
-            {item.belowReorder ? <BelowReorderMark /> : null}
-          </p>
-        </div>
-        <div className="flex flex-wrap gap-2">
-          <Link to={`/stock/journal?sku=${sku}`} className="button-quiet">
-            Journal for this item
-          </Link>
-          {can.record ? (
-            <Link to={`/stock/record?sku=${sku}`} className="button-primary">
-              Record movement
-            </Link>
-          ) : null}
-        </div>
-      </div>
-
+      <ItemPageHeading item={item} canRecord={can.record} />
       <FormMessages errors={otherErrors ?? undefined} />
-
-      <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-3 lg:grid-cols-6">
-        <SummaryFigure
-          label="On hand"
-          value={formatStockQuantity(item.onHand, unit)}
-          emphasis
-        />
-        <SummaryFigure
-          label="Reserved"
-          value={formatStockQuantity(item.reserved, unit)}
-        />
-        <SummaryFigure
-          label="Available"
-          value={formatStockQuantity(item.available, unit)}
-          emphasis
-        />
-        <SummaryFigure
-          label="Reorder point"
-          value={
-            item.reorderPoint > 0
-              ? formatStockQuantity(item.reorderPoint, unit)
-              : "not set"
-          }
-        />
-        <SummaryFigure
-          label="Average cost"
-          value={formatUnitCost(item.averageCost, unit)}
-        />
-        <SummaryFigure label="Value" value={formatMoney(item.value)} />
-      </dl>
+      <ItemSummaryFigures item={item} />
 
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="space-y-6">
           {attributes ? (
-            <section aria-labelledby="attributes-heading" className="panel">
-              <h2
-                id="attributes-heading"
-                className="mb-2 text-lg font-semibold"
-              >
-                {attributes.kind === "wire" ? "Wire" : "Magnet"}
-              </h2>
-              {attributes.kind === "wire" ? (
-                <WireAttributeList wire={attributes} onHandKg={item.onHand} />
-              ) : (
-                <MagnetAttributeList magnet={attributes} pieces={item.onHand} />
-              )}
-            </section>
+            <ItemAttributesPanel attributes={attributes} onHand={item.onHand} />
           ) : null}
-          {attributes?.kind === "magnet" ? <MagnetHandlingCaution /> : null}
-
-          <section aria-labelledby="balances-heading" className="space-y-2">
-            <h2 id="balances-heading" className="text-lg font-semibold">
-              Where it is
-            </h2>
-            <DataTable
-              caption={`On hand of ${item.sku} by location and lot`}
-              columns={balanceColumns(unit, item.kind === "wire")}
-              rows={item.balances}
-              emptyText="Nothing on hand."
-            />
-          </section>
-
+          <ItemBalancesPanel
+            sku={item.sku}
+            unit={item.unit}
+            isWire={item.kind === "wire"}
+            balances={item.balances}
+          />
           {prices ? (
             <ItemBestPricesPanel
               prices={prices}
@@ -514,139 +204,42 @@ export default function StockItem({
               canImport={can.importPrices}
             />
           ) : null}
-
-          <section aria-labelledby="chart-heading" className="panel">
-            <h2 id="chart-heading" className="mb-3 text-lg font-semibold">
-              On hand over time
-            </h2>
-            <OnHandChart
-              points={history}
-              now={now}
-              unit={unit}
-              reorderPoint={item.reorderPoint}
-            />
-          </section>
+          <ItemOnHandPanel
+            points={loaderData.history}
+            now={loaderData.now}
+            unit={item.unit}
+            reorderPoint={item.reorderPoint}
+          />
         </div>
 
         <div className="space-y-6">
-          {can.reorder ? (
-            <section aria-labelledby="reorder-heading" className="panel">
-              <h2 id="reorder-heading" className="mb-1 text-lg font-semibold">
-                Reorder point
-              </h2>
-              <p className="mb-3 text-sm text-graphite-500">
-                When the available stock falls below the reorder point, buyers
-                hear of it. 0 turns the alert off.
-              </p>
-              <Form
-                method="post"
-                {...getFormProps(reorderForm)}
-                className="space-y-4"
-              >
-                <input type="hidden" name="intent" value="reorder" />
-                <FormMessages
-                  id={reorderForm.errorId}
-                  errors={reorderForm.errors}
-                />
-                <QuantityField
-                  field={reorderFields.reorderPoint}
-                  label="Reorder point"
-                  unit={unit}
-                />
-                <QuantityField
-                  field={reorderFields.reorderQuantity}
-                  label="Reorder quantity"
-                  unit={unit}
-                  hint="How much to order at a time"
-                />
-                <button type="submit" className="button-quiet" disabled={busy}>
-                  Save reorder point
-                </button>
-              </Form>
-            </section>
-          ) : (
-            <section
-              aria-labelledby="reorder-heading"
-              className="panel text-sm"
-            >
-              <h2 id="reorder-heading" className="mb-2 text-lg font-semibold">
-                Reorder point
-              </h2>
-              <p>
-                {item.reorderPoint > 0
-                  ? `${formatStockQuantity(item.reorderPoint, unit)}; order ${formatStockQuantity(item.reorderQuantity, unit)} at a time.`
-                  : "Not set."}
-              </p>
-            </section>
-          )}
-
+          <ReorderPointPanel
+            item={item}
+            canSet={can.reorder}
+            lastResult={
+              actionData?.intent === "reorder" ? actionData.result : undefined
+            }
+          />
           {can.catalogue ? (
-            <section
-              aria-labelledby="catalogue-heading"
-              className="panel space-y-4"
-            >
-              <h2 id="catalogue-heading" className="text-lg font-semibold">
-                Catalogue entry
-              </h2>
-              <Form
-                method="post"
-                {...getFormProps(renameForm)}
-                className="space-y-3"
-              >
-                <input type="hidden" name="intent" value="rename" />
-                <FormMessages
-                  id={renameForm.errorId}
-                  errors={renameForm.errors}
-                />
-                <TextField
-                  field={renameFields.name}
-                  label="Name"
-                  autoComplete="off"
-                />
-                <button type="submit" className="button-quiet" disabled={busy}>
-                  Save name
-                </button>
-              </Form>
-              <Form method="post" className="border-t border-rule pt-4">
-                <p className="mb-2 text-sm text-graphite-700">
-                  {item.active
-                    ? "Archiving hides the item from the stock list; its history stays."
-                    : "This item is archived: it shows in the stock list only with archived items included."}
-                </p>
-                <button
-                  type="submit"
-                  name="intent"
-                  value={item.active ? "archive" : "restore"}
-                  className="button-quiet"
-                  disabled={busy}
-                >
-                  {item.active ? "Archive item" : "Restore item"}
-                </button>
-              </Form>
-            </section>
+            <CatalogueEntryPanel
+              item={item}
+              lastResult={
+                actionData?.intent === "rename" ? actionData.result : undefined
+              }
+            />
           ) : null}
         </div>
       </div>
 
-      <section aria-labelledby="movements-heading" className="space-y-2">
-        <h2 id="movements-heading" className="text-lg font-semibold">
-          Movements{" "}
-          <span className="font-normal text-graphite-500">
-            · {formatQuantity(movementCount, "")}, newest first
-          </span>
-        </h2>
-        <DataTable
-          caption={`Movements of ${item.sku}, newest first`}
-          columns={movementColumns(unit)}
-          rows={movements}
-          page={page}
-          pageCount={pageCount}
-          pageHref={(target) =>
-            `/stock/items/${sku}?page=${target}${priceQuantity.text ? `&quantity=${encodeURIComponent(priceQuantity.text)}` : ""}`
-          }
-          emptyText="No movements yet."
-        />
-      </section>
+      <ItemMovementsPanel
+        sku={item.sku}
+        unit={item.unit}
+        movements={loaderData.movements}
+        movementCount={loaderData.movementCount}
+        page={loaderData.page}
+        pageCount={loaderData.pageCount}
+        priceQuantityText={priceQuantity.text}
+      />
     </div>
   );
 }

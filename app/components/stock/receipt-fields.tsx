@@ -4,16 +4,12 @@
  * unit cost in the company currency, the supplier batch and the delivery note.
  */
 import { useState } from "react";
-import { MeasureField } from "~/components/measure-field";
 import { formatQuantity } from "~/lib/format";
 import { perUnitWord } from "~/lib/unit-text";
 import { spoolNetKg } from "~/stock/spool-net-weight";
+import { MovementField as Field } from "./movement-field";
 
 type Errors = Record<string, string[] | undefined>;
-
-function Field(props: Omit<React.ComponentProps<typeof MeasureField>, "id">) {
-  return <MeasureField id={`movement-${props.name}`} {...props} />;
-}
 
 export function ReceiptFields({
   unit,

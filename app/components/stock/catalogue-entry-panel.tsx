@@ -1,0 +1,62 @@
+/** The item's catalogue entry for a buyer: rename it, archive it or restore it. */
+import {
+  getFormProps,
+  useForm,
+  type SubmissionResult,
+} from "@conform-to/react";
+import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { Form, useNavigation } from "react-router";
+import { FormMessages, TextField } from "~/components/text-field";
+import { renameFormSchema } from "~/stock/item-change-form";
+
+export function CatalogueEntryPanel({
+  item,
+  lastResult,
+}: {
+  item: { name: string; active: boolean };
+  /** The answer to the last rename form sent, if that was the form sent. */
+  lastResult: SubmissionResult<string[]> | undefined;
+}) {
+  const busy = useNavigation().state !== "idle";
+  const [form, fields] = useForm({
+    id: "rename",
+    lastResult,
+    defaultValue: { name: item.name },
+    constraint: getZodConstraint(renameFormSchema),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+    onValidate: ({ formData }) =>
+      parseWithZod(formData, { schema: renameFormSchema }),
+  });
+  return (
+    <section aria-labelledby="catalogue-heading" className="panel space-y-4">
+      <h2 id="catalogue-heading" className="text-lg font-semibold">
+        Catalogue entry
+      </h2>
+      <Form method="post" {...getFormProps(form)} className="space-y-3">
+        <input type="hidden" name="intent" value="rename" />
+        <FormMessages id={form.errorId} errors={form.errors} />
+        <TextField field={fields.name} label="Name" autoComplete="off" />
+        <button type="submit" className="button-quiet" disabled={busy}>
+          Save name
+        </button>
+      </Form>
+      <Form method="post" className="border-t border-rule pt-4">
+        <p className="mb-2 text-sm text-graphite-700">
+          {item.active
+            ? "Archiving hides the item from the stock list; its history stays."
+            : "This item is archived: it shows in the stock list only with archived items included."}
+        </p>
+        <button
+          type="submit"
+          name="intent"
+          value={item.active ? "archive" : "restore"}
+          className="button-quiet"
+          disabled={busy}
+        >
+          {item.active ? "Archive item" : "Restore item"}
+        </button>
+      </Form>
+    </section>
+  );
+}

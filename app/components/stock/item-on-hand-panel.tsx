@@ -1,0 +1,19 @@
+/** The item's on hand over time, as a chart. */
+import { OnHandChart } from "~/components/on-hand-chart";
+import type { OnHandPoint } from "~/stock/on-hand-history-chart";
+
+export function ItemOnHandPanel(props: {
+  points: OnHandPoint[];
+  now: string;
+  unit: string;
+  reorderPoint: number;
+}) {
+  return (
+    <section aria-labelledby="chart-heading" className="panel">
+      <h2 id="chart-heading" className="mb-3 text-lg font-semibold">
+        On hand over time
+      </h2>
+      <OnHandChart {...props} />
+    </section>
+  );
+}

@@ -1,0 +1,54 @@
+/** The item's figures at a glance: on hand, reserved, available, reorder point, average cost, value. */
+import { SummaryFigure } from "~/components/summary-figure";
+import {
+  formatMoney,
+  formatStockQuantity,
+  formatUnitCost,
+} from "~/stock/stock-quantity-text";
+
+export function ItemSummaryFigures({
+  item,
+}: {
+  item: {
+    unit: string;
+    onHand: number;
+    reserved: number;
+    available: number;
+    reorderPoint: number;
+    averageCost: number;
+    value: number;
+  };
+}) {
+  const unit = item.unit;
+  return (
+    <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-3 lg:grid-cols-6">
+      <SummaryFigure
+        label="On hand"
+        value={formatStockQuantity(item.onHand, unit)}
+        emphasis
+      />
+      <SummaryFigure
+        label="Reserved"
+        value={formatStockQuantity(item.reserved, unit)}
+      />
+      <SummaryFigure
+        label="Available"
+        value={formatStockQuantity(item.available, unit)}
+        emphasis
+      />
+      <SummaryFigure
+        label="Reorder point"
+        value={
+          item.reorderPoint > 0
+            ? formatStockQuantity(item.reorderPoint, unit)
+            : "not set"
+        }
+      />
+      <SummaryFigure
+        label="Average cost"
+        value={formatUnitCost(item.averageCost, unit)}
+      />
+      <SummaryFigure label="Value" value={formatMoney(item.value)} />
+    </dl>
+  );
+}

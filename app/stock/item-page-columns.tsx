@@ -1,0 +1,145 @@
+/**
+ * The item page's two tables: where the stock is (by location and lot, a wire spool's
+ * tare too) and the item's movements. Column definitions for the one DataTable.
+ */
+import { createColumnHelper } from "@tanstack/react-table";
+import type { MovementType } from "~/db/tables/stock-enums";
+import { formatDateTime, formatQuantity } from "~/lib/format";
+import {
+  formatSignedStockQuantity,
+  formatStockQuantity,
+  formatUnitCost,
+  movementTypeLabels,
+} from "./stock-quantity-text";
+
+/** One lot (or none) at one location. */
+export interface ItemBalanceRow {
+  location: string;
+  locationName: string;
+  lot: string | null;
+  tareKg: number | null;
+  onHand: number;
+  reserved: number;
+}
+
+/** One movement of the item, with the item's on hand after it. */
+export interface ItemMovementRow {
+  /** ISO time. */
+  createdAt: string;
+  type: MovementType;
+  lot: string | null;
+  location: string;
+  quantity: number;
+  itemOnHandAfter: number;
+  unitCost: number | null;
+  reference: string | null;
+  note: string | null;
+  user: string;
+}
+
+export function balanceColumns(unit: string, isWire: boolean) {
+  const column = createColumnHelper<ItemBalanceRow>();
+  return [
+    column.accessor("location", {
+      header: "Location",
+      cell: (info) => (
+        <>
+          <span className="font-medium">{info.getValue()}</span>{" "}
+          <span className="text-graphite-500">
+            {info.row.original.locationName}
+          </span>
+        </>
+      ),
+    }),
+    column.accessor("lot", {
+      header: "Lot",
+      cell: (info) => info.getValue() ?? "—",
+    }),
+    ...(isWire
+      ? [
+          column.accessor("tareKg", {
+            header: "Spool tare",
+            cell: (info) => {
+              const tare = info.getValue();
+              return tare === null ? "—" : formatQuantity(tare, "kg", 3);
+            },
+            meta: { numeric: true },
+          }),
+        ]
+      : []),
+    column.accessor("onHand", {
+      header: "On hand",
+      cell: (info) => formatStockQuantity(info.getValue(), unit),
+      meta: { numeric: true },
+    }),
+    column.accessor("reserved", {
+      header: "Reserved",
+      cell: (info) => formatStockQuantity(info.getValue(), unit),
+      meta: { numeric: true },
+    }),
+  ];
+}
+
+export function movementColumns(unit: string) {
+  const column = createColumnHelper<ItemMovementRow>();
+  return [
+    column.accessor("createdAt", {
+      header: "When",
+      cell: (info) => (
+        <span className="whitespace-nowrap">
+          {formatDateTime(info.getValue())}
+        </span>
+      ),
+    }),
+    column.accessor("type", {
+      header: "Movement",
+      cell: (info) => movementTypeLabels[info.getValue()] ?? info.getValue(),
+    }),
+    column.accessor("lot", {
+      header: "Lot",
+      cell: (info) => info.getValue() ?? "—",
+    }),
+    column.accessor("location", { header: "Location" }),
+    column.accessor("quantity", {
+      header: "Change",
+      cell: (info) => (
+        <span className="whitespace-nowrap">
+          {formatSignedStockQuantity(info.getValue(), unit)}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
+    column.accessor("itemOnHandAfter", {
+      header: "On hand after",
+      cell: (info) => (
+        <span className="whitespace-nowrap">
+          {formatStockQuantity(info.getValue(), unit)}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
+    column.accessor("unitCost", {
+      header: "Unit cost",
+      cell: (info) => {
+        const cost = info.getValue();
+        return cost === null ? (
+          "—"
+        ) : (
+          <span className="whitespace-nowrap">
+            {formatUnitCost(cost, unit)}
+          </span>
+        );
+      },
+      meta: { numeric: true },
+    }),
+    column.display({
+      id: "reference",
+      header: "Reference and note",
+      cell: ({ row }) =>
+        [row.original.reference, row.original.note]
+          .filter(Boolean)
+          .join(" · ") || "—",
+    }),
+    column.accessor("user", { header: "By" }),
+  ];
+}
