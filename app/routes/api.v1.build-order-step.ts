@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.build-order-step";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import {
   answerBuildOrderError,
   orderIdFrom,
@@ -18,18 +18,20 @@ import {
 import { issueToBuildOrder } from "~/build-orders/build-order-issues.server";
 import { reserveBuildOrderStock } from "~/build-orders/build-order-reservations.server";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
-import type { Role } from "~/lib/roles";
+import type { Capability } from "~/lib/capabilities";
 
-/** Who may take each step (admins may take any). */
-const stepRoles: Record<string, Role[]> = {
-  reserve: ["builder"],
-  cancel: ["builder"],
-  complete: ["builder"],
-  issue: ["storekeeper"],
+/** What each step needs (admins may take any). */
+const stepCapabilities: Record<string, Capability> = {
+  reserve: "runBuildOrders",
+  cancel: "runBuildOrders",
+  complete: "runBuildOrders",
+  issue: "issueToBuildOrders",
 };
 
-function stepOf(value: string | undefined): keyof typeof stepRoles | null {
-  return value && Object.hasOwn(stepRoles, value) ? value : null;
+function stepOf(
+  value: string | undefined,
+): keyof typeof stepCapabilities | null {
+  return value && Object.hasOwn(stepCapabilities, value) ? value : null;
 }
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -50,7 +52,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   await requireUser(request);
   const step = stepOf(params.step);
   if (!step) return apiError(404, `No build-order step "${params.step}".`);
-  const user = await requireRole(request, stepRoles[step]!);
+  const user = await requireCapability(request, stepCapabilities[step]!);
   if (request.method !== "POST") return methodNotAllowed(["POST"]);
   const id = orderIdFrom(params.orderId);
   return answerBuildOrderError(async () => {

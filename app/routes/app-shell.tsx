@@ -11,7 +11,8 @@ import { sessionHeaders } from "~/auth/session-headers.server";
 import { FlashMessage } from "~/components/flash-message";
 import { takeFlash } from "~/lib/flash.server";
 import { navigationItems } from "~/lib/navigation";
-import { roleLabels, userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
+import { roleLabels } from "~/lib/roles";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -37,7 +38,7 @@ export const headers: Route.HeadersFunction = ({ loaderHeaders }) =>
 export default function AppShell({ loaderData }: Route.ComponentProps) {
   const { user, flash } = loaderData;
   const items = navigationItems.filter(
-    (item) => item.roles.length === 0 || userHasRole(user, item.roles),
+    (item) => !item.capability || userCan(user, item.capability),
   );
   return (
     <div className="flex min-h-screen flex-col">

@@ -9,7 +9,11 @@ import { useState } from "react";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { z } from "zod";
 import type { Route } from "./+types/build-order";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import {
+  refuseUnless,
+  requireCapability,
+  requireUser,
+} from "~/auth/guard.server";
 import { MeasureField } from "~/components/measure-field";
 import { SummaryFigure } from "~/components/summary-figure";
 import {
@@ -50,7 +54,7 @@ import { FormMessages } from "~/components/text-field";
 import type { FlashNote } from "~/lib/flash-messages";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime, formatQuantity } from "~/lib/format";
-import { userHasRole } from "~/lib/roles";
+import { needsRoleMessage, userCan, type Capability } from "~/lib/capabilities";
 import { isStockError } from "~/stock/stock-errors";
 import {
   formatMoney,
@@ -83,20 +87,20 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   return {
     order,
     can: {
-      build: userHasRole(user, ["builder"]),
-      issue: userHasRole(user, ["storekeeper"]),
+      build: userCan(user, "runBuildOrders"),
+      issue: userCan(user, "issueToBuildOrders"),
     },
   };
 }
 
-/** Who takes each step of the page (admins take any). */
-const intentRoles = {
-  reserve: ["builder"],
-  cancel: ["builder"],
-  complete: ["builder"],
-  quantity: ["builder"],
-  issue: ["storekeeper"],
-} as const satisfies Record<BuildOrderIntent, readonly string[]>;
+/** What each step of the page needs (admins take any). */
+const intentCapabilities = {
+  reserve: "runBuildOrders",
+  cancel: "runBuildOrders",
+  complete: "runBuildOrders",
+  quantity: "runBuildOrders",
+  issue: "issueToBuildOrders",
+} as const satisfies Record<BuildOrderIntent, Capability>;
 
 interface StepAnswer {
   intent: string;
@@ -119,17 +123,13 @@ async function done(orderId: number, note: FlashNote): Promise<never> {
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, ["builder", "storekeeper"]);
+  const user = await requireCapability(request, "takeBuildOrderSteps");
   const id = orderIdOf(params.orderId);
   const formData = await request.formData();
   const intent = formData.get("intent");
-  if (isBuildOrderIntent(intent) && !userHasRole(user, intentRoles[intent])) {
-    throw data(
-      {
-        message: `This step needs the role ${intentRoles[intent].join(" or ")}.`,
-      },
-      { status: 403 },
-    );
+  if (isBuildOrderIntent(intent)) {
+    const needed = intentCapabilities[intent];
+    refuseUnless(request, user, needed, needsRoleMessage(needed, "This step"));
   }
   await orderOr404(id);
   if (!isBuildOrderIntent(intent)) {

@@ -8,7 +8,7 @@ import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { z } from "zod";
 import type { Route } from "./+types/build-orders";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { isBuildOrderError } from "~/build-orders/build-order-errors";
 import {
   createFormFieldOf,
@@ -33,7 +33,7 @@ import { buildOrderStatuses } from "~/db/tables/build-orders";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime } from "~/lib/format";
 import { pageFromSearch } from "~/lib/search-params";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { countText } from "~/lib/unit-text";
 
 const pageSize = 25;
@@ -49,7 +49,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   const url = new URL(request.url);
   const status = statusFrom(url.searchParams.get("status"));
   const page = pageFromSearch(url.searchParams.get("page"));
-  const canCreate = userHasRole(user, ["builder"]);
+  const canCreate = userCan(user, "createBuildOrders");
   const [{ total, buildOrders }, revisions] = await Promise.all([
     listBuildOrders({ status, page, pageSize }),
     canCreate ? listReleasedRevisions() : Promise.resolve([]),
@@ -75,7 +75,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["builder"]);
+  const user = await requireCapability(request, "createBuildOrders");
   const submission = parseWithZod(await request.formData(), {
     schema: createFormSchema,
     disableAutoCoercion: true,
