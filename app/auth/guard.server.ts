@@ -1,11 +1,12 @@
 /**
  * The one guard module. Every loader, action and API route calls
- * requireUser or requireRole first; hiding a control in the UI is not a check.
+ * requireUser or requireCapability first; hiding a control in the UI is not a check.
+ * Who has which capability is the one table in app/lib/capabilities.ts.
  * Pages get a redirect to sign-in or a 403 page; API routes (/api/…) get JSON.
  */
 import { data, redirect } from "react-router";
 import { isDatabaseUnavailable } from "~/db/database-errors";
-import { userHasRole, type Role } from "~/lib/roles";
+import { needsRoleMessage, userCan, type Capability } from "~/lib/capabilities";
 import { noteSignedInPerson } from "~/observability/request-context.server";
 import { getSessionState, type SessionUser } from "./session.server";
 
@@ -65,14 +66,28 @@ export async function requireUser(request: Request): Promise<SessionUser> {
   throw redirect(target, { headers });
 }
 
-/** The signed-in user when they hold one of the roles (admins always pass); else 403. */
-export async function requireRole(
+/** The signed-in user when they have the capability (admins have all); else 403. */
+export async function requireCapability(
   request: Request,
-  allowed: readonly Role[],
+  capability: Capability,
 ): Promise<SessionUser> {
   const user = await requireUser(request);
-  if (userHasRole(user, allowed)) return user;
-  const message = `This needs the role ${allowed.join(" or ")}.`;
+  refuseUnless(request, user, capability);
+  return user;
+}
+
+/**
+ * For a step inside a loader or action that already has its signed-in user:
+ * nothing when the user has the capability, else the 403 requireCapability
+ * answers (a 403 page, or JSON under /api/), saying `message`.
+ */
+export function refuseUnless(
+  request: Request,
+  user: SessionUser,
+  capability: Capability,
+  message = needsRoleMessage(capability),
+): void {
+  if (userCan(user, capability)) return;
   if (isApiRequest(request)) {
     throw Response.json({ error: { message } }, { status: 403 });
   }

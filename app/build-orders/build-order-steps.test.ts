@@ -3,20 +3,25 @@ import { buildOrderIntents } from "./build-order-forms";
 import {
   buildOrderApiStepOf,
   buildOrderApiSteps,
-  buildOrderStepRoles,
+  buildOrderStepCapabilities,
 } from "./build-order-steps";
+import { capabilityRoles } from "~/lib/capabilities";
 
-describe("build-order step roles", () => {
-  it("name a role for every step of the order page", () => {
-    expect(Object.keys(buildOrderStepRoles).sort()).toEqual(
+describe("build-order step capabilities", () => {
+  it("name a capability for every step of the order page", () => {
+    expect(Object.keys(buildOrderStepCapabilities).sort()).toEqual(
       [...buildOrderIntents].sort(),
     );
   });
 
   it("leave issuing to the storekeeper and everything else to the builder", () => {
-    expect(buildOrderStepRoles.issue).toEqual(["storekeeper"]);
+    expect(capabilityRoles[buildOrderStepCapabilities.issue]).toEqual([
+      "storekeeper",
+    ]);
     for (const step of ["reserve", "cancel", "complete", "quantity"] as const)
-      expect(buildOrderStepRoles[step]).toEqual(["builder"]);
+      expect(capabilityRoles[buildOrderStepCapabilities[step]]).toEqual([
+        "builder",
+      ]);
   });
 });
 

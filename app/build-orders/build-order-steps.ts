@@ -1,18 +1,18 @@
 /**
- * Who takes each step of a build order (admins take any), shared by the order page and
+ * What each step of a build order needs (admins take any), shared by the order page and
  * the API so the two cannot disagree. Pure.
  */
-import type { Role } from "~/lib/roles";
+import type { Capability } from "~/lib/capabilities";
 import type { BuildOrderIntent } from "./build-order-forms";
 
-/** The role each step of the order needs, by the page form's intent. */
-export const buildOrderStepRoles = {
-  reserve: ["builder"],
-  cancel: ["builder"],
-  complete: ["builder"],
-  quantity: ["builder"],
-  issue: ["storekeeper"],
-} as const satisfies Record<BuildOrderIntent, readonly Role[]>;
+/** What each step of the order needs (app/lib/capabilities.ts), by the page form's intent. */
+export const buildOrderStepCapabilities = {
+  reserve: "runBuildOrders",
+  cancel: "runBuildOrders",
+  complete: "runBuildOrders",
+  quantity: "runBuildOrders",
+  issue: "issueToBuildOrders",
+} as const satisfies Record<BuildOrderIntent, Capability>;
 
 /**
  * The steps the API takes at POST /api/v1/build-orders/:orderId/:step (a new number of

@@ -1,32 +1,33 @@
+import type { Capability } from "./capabilities";
 import type { Role } from "./roles";
 
 export interface NavigationItem {
   to: string;
   label: string;
-  /** Who sees the item; empty means everyone signed in. */
-  roles: readonly Role[];
+  /** Shown to those who have it (app/lib/capabilities.ts); without one, to everyone signed in. */
+  capability?: Capability;
   /** Lit only on this exact address, not on the pages below it (which have their own items). */
   exact?: boolean;
 }
 
-/** The app shell's menu. Pages check roles themselves; this only decides what is shown. */
+/** The app shell's menu. Pages check capabilities themselves; this only decides what is shown. */
 export const navigationItems: readonly NavigationItem[] = [
-  { to: "/", label: "Start", roles: [], exact: true },
-  { to: "/stock", label: "Stock", roles: [], exact: true },
-  { to: "/stock/record", label: "Record movement", roles: ["storekeeper"] },
-  { to: "/stock/journal", label: "Journal", roles: [] },
-  { to: "/suppliers", label: "Suppliers", roles: [] },
-  { to: "/best-prices", label: "Best prices", roles: [] },
-  { to: "/prices", label: "Metal base & rates", roles: [] },
-  { to: "/alerts", label: "Alerts", roles: [] },
-  { to: "/insight", label: "Cost insight", roles: [] },
-  { to: "/designs", label: "Designs", roles: [] },
-  { to: "/build-orders", label: "Build orders", roles: [] },
-  { to: "/tools/coil-estimator", label: "Coil estimator", roles: [] },
-  { to: "/tools/magnet-estimator", label: "Magnet estimator", roles: [] },
-  { to: "/reference", label: "Reference", roles: [] },
-  { to: "/admin/people", label: "People", roles: ["admin"] },
-  { to: "/admin/outbox", label: "Outbox", roles: ["admin"] },
+  { to: "/", label: "Start", exact: true },
+  { to: "/stock", label: "Stock", exact: true },
+  { to: "/stock/record", label: "Record movement", capability: "recordStock" },
+  { to: "/stock/journal", label: "Journal" },
+  { to: "/suppliers", label: "Suppliers" },
+  { to: "/best-prices", label: "Best prices" },
+  { to: "/prices", label: "Metal base & rates" },
+  { to: "/alerts", label: "Alerts" },
+  { to: "/insight", label: "Cost insight" },
+  { to: "/designs", label: "Designs" },
+  { to: "/build-orders", label: "Build orders" },
+  { to: "/tools/coil-estimator", label: "Coil estimator" },
+  { to: "/tools/magnet-estimator", label: "Magnet estimator" },
+  { to: "/reference", label: "Reference" },
+  { to: "/admin/people", label: "People", capability: "managePeople" },
+  { to: "/admin/outbox", label: "Outbox", capability: "readOutbox" },
 ];
 
 /** What each role is trusted with (the product brief's role table), shown on the start page. */

@@ -23,7 +23,8 @@ export function isRole(value: string): value is Role {
 
 /**
  * True when the user holds one of the roles; admins may do anything.
- * For showing or hiding controls only: the server checks with requireRole.
+ * The building block of the capability table (app/lib/capabilities.ts): pages and
+ * routes ask userCan and requireCapability, never this.
  */
 export function userHasRole(
   user: { roles: readonly Role[] } | null | undefined,

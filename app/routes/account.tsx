@@ -14,7 +14,8 @@ import { ChangePasswordForm } from "~/components/account/change-password-form";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages, TextField } from "~/components/text-field";
 import { formatDateTime } from "~/lib/format";
-import { roleLabels, userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
+import { roleLabels } from "~/lib/roles";
 import {
   alertPreferenceOf,
   setAlertPreference,
@@ -31,7 +32,7 @@ import { checkSignIn } from "~/people/people.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  const hearsAlerts = userHasRole(user, ["buyer"]);
+  const hearsAlerts = userCan(user, "hearLowStockAlerts");
   return {
     user,
     tokens: await listApiTokens(user.id),
@@ -63,7 +64,7 @@ export async function action({ request, context }: Route.ActionArgs) {
     });
   if (formData.get("intent") === "alert-mode") {
     // Buyers (and admins, who opt in) choose how they hear about low stock.
-    if (!userHasRole(user, ["buyer"]))
+    if (!userCan(user, "hearLowStockAlerts"))
       return data(
         {
           result: null,

@@ -1,13 +1,13 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import type { Route } from "./+types/admin-outbox";
-import { requireRole } from "~/auth/guard.server";
+import { requireCapability } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { formatDateTime } from "~/lib/format";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { listOutbox, outboxPageSize } from "~/mail/outbox.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, ["admin"]);
+  await requireCapability(request, "readOutbox");
   const { total, messages, page, pageCount } = await readPageOrLast(
     pageFromSearch(new URL(request.url).searchParams.get("page")),
     outboxPageSize,

@@ -3,7 +3,7 @@ import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/admin-people";
-import { requireRole } from "~/auth/guard.server";
+import { requireCapability } from "~/auth/guard.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import { DataTable } from "~/components/data-table";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
@@ -21,7 +21,7 @@ import {
 } from "~/people/people.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, ["admin"]);
+  await requireCapability(request, "managePeople");
   const { people, page, pageCount } = await readPageOrLast(
     pageFromSearch(new URL(request.url).searchParams.get("page")),
     peoplePageSize,
@@ -31,7 +31,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const admin = await requireRole(request, ["admin"]);
+  const admin = await requireCapability(request, "managePeople");
   const submission = await parseWithZod(await request.formData(), {
     schema: inviteSchema.superRefine(async (value, context) => {
       if (await emailIsTaken(value.email)) {

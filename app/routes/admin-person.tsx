@@ -3,7 +3,7 @@ import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/admin-person";
 import { createEmailToken } from "~/auth/email-tokens.server";
-import { requireRole } from "~/auth/guard.server";
+import { requireCapability } from "~/auth/guard.server";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages } from "~/components/text-field";
 import { appUrl } from "~/lib/app-url.server";
@@ -18,14 +18,14 @@ import {
 } from "~/people/people.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const admin = await requireRole(request, ["admin"]);
+  const admin = await requireCapability(request, "managePeople");
   const person = await findPerson(params.userId);
   if (!person) throw data({ message: "No such person." }, { status: 404 });
   return { person, isSelf: person.id === admin.id };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const admin = await requireRole(request, ["admin"]);
+  const admin = await requireCapability(request, "managePeople");
   const person = await findPerson(params.userId);
   if (!person) throw data({ message: "No such person." }, { status: 404 });
   const submission = parseWithZod(await request.formData(), {

@@ -2,11 +2,11 @@ import { data } from "react-router";
 import type { Route } from "./+types/alerts-purchase-request";
 import { purchaseRequestCsv } from "~/alerts/low-stock";
 import { purchaseRequestsBySupplier } from "~/alerts/purchase-requests.server";
-import { requireRole } from "~/auth/guard.server";
+import { requireCapability } from "~/auth/guard.server";
 
 /** GET /alerts/purchase-request.csv?supplier=Name (buyer, admin): the supplier's draft purchase request. */
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, ["buyer"]);
+  await requireCapability(request, "draftPurchaseRequests");
   const supplier = new URL(request.url).searchParams.get("supplier") ?? "";
   const lines = (await purchaseRequestsBySupplier()).get(supplier);
   if (!lines)

@@ -6,7 +6,7 @@ import { alertsPageSize, listAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { formatDateTime } from "~/lib/format";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
@@ -25,7 +25,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     alertsPageSize,
     (page) => listAlerts({ status, page }),
   );
-  const canBuy = userHasRole(user, ["buyer"]);
+  const canBuy = userCan(user, "draftPurchaseRequests");
   const requests = canBuy
     ? [...(await purchaseRequestsBySupplier())].map(([supplier, lines]) => ({
         supplier,

@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.build-order-step";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import {
   answerBuildOrderError,
   orderIdFrom,
@@ -19,7 +19,7 @@ import { issueToBuildOrder } from "~/build-orders/build-order-issues.server";
 import { reserveBuildOrderStock } from "~/build-orders/build-order-reservations.server";
 import {
   buildOrderApiStepOf,
-  buildOrderStepRoles,
+  buildOrderStepCapabilities,
 } from "~/build-orders/build-order-steps";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
 
@@ -41,7 +41,10 @@ export async function action({ request, params }: Route.ActionArgs) {
   await requireUser(request);
   const step = buildOrderApiStepOf(params.step);
   if (!step) return apiError(404, `No build-order step "${params.step}".`);
-  const user = await requireRole(request, buildOrderStepRoles[step]);
+  const user = await requireCapability(
+    request,
+    buildOrderStepCapabilities[step],
+  );
   if (request.method !== "POST") return methodNotAllowed(["POST"]);
   const id = orderIdFrom(params.orderId);
   return answerBuildOrderError(async () => {

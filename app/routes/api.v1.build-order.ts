@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.build-order";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import {
   answerBuildOrderError,
   orderIdFrom,
@@ -26,7 +26,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
  * draft again. → 200 { id, status, released }.
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, ["builder"]);
+  const user = await requireCapability(request, "runBuildOrders");
   if (request.method !== "PATCH") return methodNotAllowed(["GET", "PATCH"]);
   const id = orderIdFrom(params.orderId);
   const { quantity } = await readJsonBody(request, quantityChangeSchema);

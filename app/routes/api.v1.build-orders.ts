@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.build-orders";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import {
   answerBuildOrderError,
   buildOrderListQuerySchema,
@@ -30,7 +30,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 /** POST /api/v1/build-orders { designId, revision, quantity, note? } (builder, admin) → 201 { id, status }. */
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["builder"]);
+  const user = await requireCapability(request, "createBuildOrders");
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const input = await readJsonBody(request, buildOrderCreateSchema);
   return answerBuildOrderError(async () =>

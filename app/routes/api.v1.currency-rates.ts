@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.currency-rates";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
 import { companyCurrencyRateRefusal } from "~/purchasing/currency-rate-rules";
 import { currencyRateSchema } from "~/purchasing/supplier-schemas";
@@ -29,7 +29,7 @@ export async function loader({ request }: Route.LoaderArgs) {
  * and day again replaces the rate. A rate for the company currency itself is refused.
  */
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["buyer"]);
+  const user = await requireCapability(request, "keepPrices");
   if (request.method !== "PUT") return methodNotAllowed(["GET", "PUT"]);
   const input = await readJsonBody(request, currencyRateSchema);
   const refusal = companyCurrencyRateRefusal(

@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.design-revision";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { designParams } from "~/designs/design-params";
 import {
   findRevision,
@@ -30,7 +30,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
  * list of lines when `lines` is given. 409 for a released revision; 400 naming bad fields.
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  await requireRole(request, ["builder"]);
+  await requireCapability(request, "editDesigns");
   if (request.method !== "PUT" && request.method !== "PATCH")
     return methodNotAllowed(["GET", "PUT"]);
   const ids = designParams(params);

@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.designs";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { newDesignSchema } from "~/designs/design-schemas";
 import { createDesign, listDesigns } from "~/designs/designs.server";
 import {
@@ -34,7 +34,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 /** POST /api/v1/designs (builder, admin): the design with revision 1 as a draft → 201 { id, revision }. */
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["builder"]);
+  const user = await requireCapability(request, "editDesigns");
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const input = await readJsonBody(request, newDesignSchema);
   return answerStockError(async () =>

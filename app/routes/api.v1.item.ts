@@ -1,7 +1,6 @@
 import type { Route } from "./+types/api.v1.item";
-import { requireUser } from "~/auth/guard.server";
+import { refuseUnless, requireUser } from "~/auth/guard.server";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
-import { userHasRole } from "~/lib/roles";
 import { updateItem } from "~/stock/catalogue.server";
 import { itemPatchSchema } from "~/stock/item-schemas";
 import { findItemBySku } from "~/stock/items.server";
@@ -22,18 +21,17 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireUser(request);
   if (request.method !== "PATCH") return methodNotAllowed(["GET", "PATCH"]);
-  if (!userHasRole(user, ["buyer", "storekeeper"])) {
-    return apiError(403, "This needs the role buyer or storekeeper.");
-  }
+  refuseUnless(request, user, "keepReorderLevels");
   const change = await readJsonBody(request, itemPatchSchema);
   const touchesCatalogue =
     change.name !== undefined || change.active !== undefined;
-  if (touchesCatalogue && !userHasRole(user, ["buyer"])) {
-    return apiError(
-      403,
+  if (touchesCatalogue)
+    refuseUnless(
+      request,
+      user,
+      "keepCatalogue",
       "Storekeepers change reorder point and quantity only; the name and archive state need the role buyer.",
     );
-  }
   return answerStockError(async () => {
     await updateItem(params.sku, change);
     return Response.json(withoutId((await findItemBySku(params.sku))!));

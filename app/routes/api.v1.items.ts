@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.items";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import {
   methodNotAllowed,
   readJsonBody,
@@ -35,7 +35,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 /** POST /api/v1/items (buyer, admin) → 201 the new item. */
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["buyer"]);
+  const user = await requireCapability(request, "keepCatalogue");
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const input = await readJsonBody(request, itemCreateSchema);
   return answerStockError(async () => {

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import type { Route } from "./+types/api.v1.outbox";
-import { requireRole } from "~/auth/guard.server";
+import { requireCapability } from "~/auth/guard.server";
 import { methodNotAllowed, readSearchParams } from "~/lib/api.server";
 import { pageSizeParam } from "~/lib/search-params";
 import { listOutbox } from "~/mail/outbox.server";
@@ -9,7 +9,7 @@ const outboxQuery = z.object({ limit: pageSizeParam("limit", 500, 100) });
 
 /** GET /api/v1/outbox?limit=100 → [{ to, subject, text, sentAt }], newest first. Admins only. */
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, ["admin"]);
+  await requireCapability(request, "readOutbox");
   const { limit } = readSearchParams(request, outboxQuery);
   const { messages } = await listOutbox(1, limit);
   return Response.json(
@@ -24,6 +24,6 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 /** Any other method: 405 in the API's error shape, after the same check as GET. */
 export async function action({ request }: Route.ActionArgs) {
-  await requireRole(request, ["admin"]);
+  await requireCapability(request, "readOutbox");
   return methodNotAllowed(["GET"]);
 }

@@ -6,7 +6,7 @@ import {
   parseFormData,
 } from "@remix-run/form-data-parser";
 import type { Route } from "./+types/api.v1.price-lists";
-import { requireRole } from "~/auth/guard.server";
+import { requireCapability } from "~/auth/guard.server";
 import { apiError, methodNotAllowed } from "~/lib/api.server";
 import { importPriceList } from "~/purchasing/price-import.server";
 import {
@@ -20,7 +20,7 @@ import {
 import { answerStockError } from "~/stock/stock-api.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, ["buyer"]);
+  await requireCapability(request, "importPriceLists");
   return methodNotAllowed(["POST"]);
 }
 
@@ -59,7 +59,7 @@ function uploadedFileName(file: File): string {
  * message }) name a missing currency rate or metal base; they never stop an import.
  */
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["buyer"]);
+  const user = await requireCapability(request, "importPriceLists");
   if (request.method !== "POST") return methodNotAllowed(["POST"]);
   // The body's size as a whole is bounded before this runs (server/request-size-limits.ts).
   let form: FormData;

@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.stock-movements";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import {
   methodNotAllowed,
   readJsonBody,
@@ -33,7 +33,7 @@ export async function loader({ request }: Route.LoaderArgs) {
  * reference names a build order ("BO-12") is refused with 400 on `reference`.
  */
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["storekeeper"]);
+  const user = await requireCapability(request, "recordStock");
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const movement = await readJsonBody(request, movementRequestSchema);
   const { buildOrderId } = movement;

@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.supplier";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
 import { idFromText } from "~/lib/search-params";
 import {
@@ -39,7 +39,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
  * fields, 404 for no such supplier, 409 when another supplier has the name.
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  await requireRole(request, ["buyer"]);
+  await requireCapability(request, "keepSuppliers");
   if (request.method !== "PATCH") return methodNotAllowed(["GET", "PATCH"]);
   const id = idFromText(params.supplierId);
   if (id === null) return noSuchSupplier(params.supplierId);

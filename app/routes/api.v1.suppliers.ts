@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api.v1.suppliers";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { methodNotAllowed, readJsonBody } from "~/lib/api.server";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
 import { createSupplier, listSuppliers } from "~/purchasing/suppliers.server";
@@ -13,7 +13,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 /** POST /api/v1/suppliers (buyer, admin) → 201 the supplier with its id; 409 when the name is taken. */
 export async function action({ request }: Route.ActionArgs) {
-  await requireRole(request, ["buyer"]);
+  await requireCapability(request, "keepSuppliers");
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const input = await readJsonBody(request, supplierSchema);
   return answerStockError(async () => {

@@ -12,7 +12,8 @@ import { FlashMessage } from "~/components/flash-message";
 import { RouteErrorNotice, RouteErrorPage } from "~/components/route-error";
 import { takeFlash } from "~/lib/flash.server";
 import { navigationItems } from "~/lib/navigation";
-import { roleLabels, userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
+import { roleLabels } from "~/lib/roles";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -72,7 +73,7 @@ function ShellFrame({
   children: React.ReactNode;
 }) {
   const items = navigationItems.filter(
-    (item) => item.roles.length === 0 || userHasRole(user, item.roles),
+    (item) => !item.capability || userCan(user, item.capability),
   );
   return (
     <div className="flex min-h-screen flex-col">

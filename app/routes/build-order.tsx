@@ -2,7 +2,11 @@ import type { SubmissionResult } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data } from "react-router";
 import type { Route } from "./+types/build-order";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import {
+  refuseUnless,
+  requireCapability,
+  requireUser,
+} from "~/auth/guard.server";
 import {
   cancelBuildOrder,
   changeBuildOrderQuantity,
@@ -36,7 +40,7 @@ import {
   buildOrderStepNote,
   type BuildOrderStepOutcome,
 } from "~/build-orders/build-order-step-notes";
-import { buildOrderStepRoles } from "~/build-orders/build-order-steps";
+import { buildOrderStepCapabilities } from "~/build-orders/build-order-steps";
 import {
   heldSpots,
   heldSpotsKey,
@@ -55,7 +59,7 @@ import { PlannedAndUsedPanel } from "~/components/build-orders/planned-and-used-
 import { ReservePanel } from "~/components/build-orders/reserve-panel";
 import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
-import { userHasRole } from "~/lib/roles";
+import { needsRoleMessage, userCan } from "~/lib/capabilities";
 import { isStockError } from "~/stock/stock-errors";
 
 function orderIdOf(value: string | undefined): number {
@@ -80,8 +84,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   return {
     order,
     can: {
-      build: userHasRole(user, ["builder"]),
-      issue: userHasRole(user, ["storekeeper"]),
+      build: userCan(user, "runBuildOrders"),
+      issue: userCan(user, "issueToBuildOrders"),
     },
   };
 }
@@ -113,20 +117,13 @@ async function done(
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, ["builder", "storekeeper"]);
+  const user = await requireCapability(request, "takeBuildOrderSteps");
   const id = orderIdOf(params.orderId);
   const formData = await request.formData();
   const intent = formData.get("intent");
-  if (
-    isBuildOrderIntent(intent) &&
-    !userHasRole(user, buildOrderStepRoles[intent])
-  ) {
-    throw data(
-      {
-        message: `This step needs the role ${buildOrderStepRoles[intent].join(" or ")}.`,
-      },
-      { status: 403 },
-    );
+  if (isBuildOrderIntent(intent)) {
+    const needed = buildOrderStepCapabilities[intent];
+    refuseUnless(request, user, needed, needsRoleMessage(needed, "This step"));
   }
   await orderOr404(id);
   if (!isBuildOrderIntent(intent)) {

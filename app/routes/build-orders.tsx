@@ -1,7 +1,7 @@
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, redirect } from "react-router";
 import type { Route } from "./+types/build-orders";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { isBuildOrderError } from "~/build-orders/build-order-errors";
 import {
   createFormFieldOf,
@@ -23,7 +23,7 @@ import { NewBuildOrderForm } from "~/components/build-orders/new-build-order-for
 import { DataTable } from "~/components/data-table";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { pageFromSearch } from "~/lib/search-params";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { countText } from "~/lib/unit-text";
 
 const pageSize = 25;
@@ -33,7 +33,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   const url = new URL(request.url);
   const status = buildOrderStatusFrom(url.searchParams.get("status"));
   const page = pageFromSearch(url.searchParams.get("page"));
-  const canCreate = userHasRole(user, ["builder"]);
+  const canCreate = userCan(user, "createBuildOrders");
   const [{ total, buildOrders }, revisions] = await Promise.all([
     listBuildOrders({ status, page, pageSize }),
     canCreate ? listReleasedRevisions() : Promise.resolve([]),
@@ -55,7 +55,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["builder"]);
+  const user = await requireCapability(request, "createBuildOrders");
   const submission = parseWithZod(await request.formData(), {
     schema: createFormSchema,
     disableAutoCoercion: true,

@@ -9,7 +9,7 @@ import {
   type ShouldRevalidateFunctionArgs,
 } from "react-router";
 import type { Route } from "./+types/design-revision";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import type { DesignActionAnswer } from "~/components/design-action-answer";
 import { DesignCostPanel, money } from "~/components/design-cost-panel";
 import { costBasisText } from "~/components/design/price-basis-note";
@@ -61,7 +61,7 @@ import {
   updateDraftRevision,
 } from "~/designs/designs.server";
 import { formatDateTime, formatQuantity } from "~/lib/format";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
 import { isStockError } from "~/stock/stock-errors";
 
@@ -78,9 +78,9 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   return {
     ...page,
     costQuery: query,
-    canEdit: userHasRole(user, ["builder"]),
+    canEdit: userCan(user, "editDesigns"),
     // The build-order list's creation rule (its loader and action).
-    canCreateBuildOrder: userHasRole(user, ["builder"]),
+    canCreateBuildOrder: userCan(user, "createBuildOrders"),
   };
 }
 
@@ -138,7 +138,7 @@ function lineIdOf(value: FormDataEntryValue | null): number | null | "bad" {
  * (the data layer's 409, shown as it is); bad input gets field messages and writes nothing.
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, ["builder"]);
+  const user = await requireCapability(request, "editDesigns");
   const formData = await request.formData();
   const intent = designPageIntentOf(formData.get("intent"));
   if (!intent)

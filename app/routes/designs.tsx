@@ -7,7 +7,7 @@ import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/designs";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { insulationClassLabel } from "~/components/design-fields-form";
 import { QuantityField } from "~/components/quantity-field";
@@ -17,7 +17,7 @@ import { FormMessages, TextField } from "~/components/text-field";
 import { insulationClasses, newDesignSchema } from "~/designs/design-schemas";
 import { createDesign, listDesigns } from "~/designs/designs.server";
 import { formatQuantity } from "~/lib/format";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { isStockError } from "~/stock/stock-errors";
 import { countText } from "~/lib/unit-text";
@@ -37,12 +37,12 @@ export async function loader({ request }: Route.LoaderArgs) {
     total: listed.total,
     page: listed.page,
     pageCount: listed.pageCount,
-    canCreate: userHasRole(user, ["builder"]),
+    canCreate: userCan(user, "editDesigns"),
   };
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["builder"]);
+  const user = await requireCapability(request, "editDesigns");
   const submission = parseWithZod(await request.formData(), {
     schema: newDesignSchema,
   });

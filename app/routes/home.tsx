@@ -7,7 +7,8 @@ import { StockHeadline } from "~/components/insight-stock";
 import { loadInsight } from "~/insight/insight-page.server";
 import { adminFigures } from "~/people/admin-figures.server";
 import { roleDuties } from "~/lib/navigation";
-import { roles, roleLabels, userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
+import { roles, roleLabels } from "~/lib/roles";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -16,7 +17,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   // trends and breakdowns are on /insight.
   const isManager = user.roles.includes("manager");
   // Buyers (and admins) start from what is low: the open alerts, linked to the alerts page.
-  const isBuyer = userHasRole(user, ["buyer"]);
+  const isBuyer = userCan(user, "hearLowStockAlerts");
   const [admin, insight, openAlerts] = await Promise.all([
     isAdmin ? adminFigures() : null,
     isManager ? loadInsight(request, { page: "start" }) : null,

@@ -6,7 +6,7 @@ import {
   type ShouldRevalidateFunctionArgs,
 } from "react-router";
 import type { Route } from "./+types/price-import";
-import { requireRole } from "~/auth/guard.server";
+import { requireCapability } from "~/auth/guard.server";
 import {
   ColumnMappingEditor,
   type MappedColumn,
@@ -43,7 +43,7 @@ import { listSavedColumnMappings } from "~/purchasing/saved-column-mappings.serv
 import { listSuppliers } from "~/purchasing/suppliers.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, ["buyer"]);
+  await requireCapability(request, "importPriceLists");
   const [suppliers, savedMappings] = await Promise.all([
     listSuppliers(),
     listSavedColumnMappings(),
@@ -92,7 +92,7 @@ export async function clientAction({
 
 /** The page works in the browser (clientAction); a plain form post has nothing to do here. */
 export async function action({ request }: Route.ActionArgs) {
-  await requireRole(request, ["buyer"]);
+  await requireCapability(request, "importPriceLists");
   throw data(
     {
       message:

@@ -5,7 +5,7 @@ import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { PriceImportDetail } from "~/components/price-import-detail";
 import { formatDateTime, formatQuantity } from "~/lib/format";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import {
   idFromText,
   pageFromSearch,
@@ -50,7 +50,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     return {
       opened: await openedImport(importParam, page),
       list: null,
-      canImport: userHasRole(user, ["buyer"]),
+      canImport: userCan(user, "importPriceLists"),
     };
   }
   const { imports, ...paging } = await readPageOrLast(
@@ -61,7 +61,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   return {
     opened: null,
     list: { imports, page: paging.page, pageCount: paging.pageCount },
-    canImport: userHasRole(user, ["buyer"]),
+    canImport: userCan(user, "importPriceLists"),
   };
 }
 

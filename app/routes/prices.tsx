@@ -2,13 +2,13 @@ import { parseWithZod } from "@conform-to/zod/v4";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, useLocation } from "react-router";
 import type { Route } from "./+types/prices";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { CurrencyRateForm } from "~/components/currency-rate-form";
 import { DataTable } from "~/components/data-table";
 import { MetalBaseForm } from "~/components/metal-base-form";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatQuantity } from "~/lib/format";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { companyCurrencyRateRefusal } from "~/purchasing/currency-rate-rules";
 import { entriesInForce, todayUtc } from "~/purchasing/current-entries";
 import {
@@ -42,12 +42,12 @@ export async function loader({ request }: Route.LoaderArgs) {
     ),
     rates,
     currentRates: entriesInForce(rates, (entry) => entry.currency, today),
-    canKeep: userHasRole(user, ["buyer"]),
+    canKeep: userCan(user, "keepPrices"),
   };
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["buyer"]);
+  const user = await requireCapability(request, "keepPrices");
   const formData = await request.formData();
   const intent = formData.get("intent");
   if (intent === "metal-base") {

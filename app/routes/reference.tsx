@@ -1,7 +1,7 @@
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Link } from "react-router";
 import type { Route } from "./+types/reference";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { AddMagnetGradeForm } from "~/components/add-magnet-grade-form";
 import { ConductorMaterialTable } from "~/components/conductor-material-table";
 import { useFlash } from "~/components/flash-message";
@@ -10,7 +10,7 @@ import { MagnetGradeTable } from "~/components/magnet-grade-table";
 import { ThermalClassTable } from "~/components/thermal-class-table";
 import { WireSizeTable } from "~/components/wire-size-table";
 import { redirectWithFlash } from "~/lib/flash.server";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { addMagnetGrade } from "~/reference/magnet-grade-admin.server";
 import {
   magnetGradeFormSchema,
@@ -67,13 +67,13 @@ export async function loader({ request }: Route.LoaderArgs) {
   const table = tableFromSearch(search.get("table"));
   return {
     section: await rowsOf(table),
-    canAddGrade: userHasRole(user, ["admin"]),
+    canAddGrade: userCan(user, "addMagnetGrades"),
   };
 }
 
 /** Adds a magnet grade (admins only); field messages on bad input, 409 when the name is taken. */
 export async function action({ request }: Route.ActionArgs) {
-  const admin = await requireRole(request, ["admin"]);
+  const admin = await requireCapability(request, "addMagnetGrades");
   const submission = parseWithZod(await request.formData(), {
     schema: magnetGradeFormSchema,
   });

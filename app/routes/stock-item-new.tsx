@@ -7,7 +7,7 @@ import {
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-item-new";
-import { requireRole } from "~/auth/guard.server";
+import { requireCapability } from "~/auth/guard.server";
 import { MagnetItemFields } from "~/components/magnet-item-fields";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
@@ -22,7 +22,7 @@ import { newItemFormSchema, unitOfNewItem } from "~/stock/new-item-form";
 import { isStockError } from "~/stock/stock-errors";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, ["buyer"]);
+  await requireCapability(request, "keepCatalogue");
   const [awg, iec, grades] = await Promise.all([
     listWireSizes("AWG"),
     listWireSizes("IEC"),
@@ -49,7 +49,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["buyer"]);
+  const user = await requireCapability(request, "keepCatalogue");
   const submission = parseWithZod(await request.formData(), {
     schema: newItemFormSchema,
   });

@@ -1,7 +1,11 @@
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Link } from "react-router";
 import type { Route } from "./+types/stock-item";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import {
+  refuseUnless,
+  requireCapability,
+  requireUser,
+} from "~/auth/guard.server";
 import { ItemBestPricesPanel } from "~/components/item-best-prices";
 import { PriceHistoryChart } from "~/components/price-history-chart";
 import { CatalogueEntryPanel } from "~/components/stock/catalogue-entry-panel";
@@ -15,7 +19,7 @@ import { ReorderPointPanel } from "~/components/stock/reorder-point-panel";
 import { FormMessages } from "~/components/text-field";
 import { pageCountOf, pageFromSearch } from "~/lib/search-params";
 import { redirectWithFlash } from "~/lib/flash.server";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { updateItem } from "~/stock/catalogue.server";
 import {
   changesCatalogue,
@@ -96,27 +100,25 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     pageCount,
     movementCount,
     can: {
-      reorder: userHasRole(user, ["buyer", "storekeeper"]),
-      catalogue: userHasRole(user, ["buyer"]),
-      importPrices: userHasRole(user, ["buyer"]),
-      record: userHasRole(user, ["storekeeper"]),
+      reorder: userCan(user, "keepReorderLevels"),
+      catalogue: userCan(user, "keepCatalogue"),
+      importPrices: userCan(user, "importPriceLists"),
+      record: userCan(user, "recordStock"),
     },
   };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, ["buyer", "storekeeper"]);
+  const user = await requireCapability(request, "keepReorderLevels");
   const formData = await request.formData();
   const intent = formData.get("intent");
-  if (changesCatalogue(intent) && !userHasRole(user, ["buyer"])) {
-    throw data(
-      {
-        message:
-          "Storekeepers change the reorder point and quantity only; renaming and archiving need the role buyer.",
-      },
-      { status: 403 },
+  if (changesCatalogue(intent))
+    refuseUnless(
+      request,
+      user,
+      "keepCatalogue",
+      "Storekeepers change the reorder point and quantity only; renaming and archiving need the role buyer.",
     );
-  }
   if (!(await findItemBySku(params.sku))) notFound(params.sku);
   const submission = parseWithZod(formData, { schema: itemChangeSchema });
   if (submission.status !== "success") {

@@ -1,7 +1,7 @@
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data } from "react-router";
 import type { Route } from "./+types/stock-record";
-import { requireRole } from "~/auth/guard.server";
+import { requireCapability } from "~/auth/guard.server";
 import { listOrdersToIssueItem } from "~/build-orders/build-order-issue-choices.server";
 import { isBuildOrderError } from "~/build-orders/build-order-errors";
 import { issueMovementToBuildOrder } from "~/build-orders/build-order-issues.server";
@@ -23,7 +23,7 @@ import { usualLocationOf } from "~/stock/usual-location.server";
 import { wireMetresPerKg } from "~/stock/wire-length.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, ["storekeeper"]);
+  await requireCapability(request, "recordStock");
   const url = new URL(request.url);
   const type = chosenMovementType(url.searchParams.get("type"));
   const sku = url.searchParams.get("sku")?.trim() ?? "";
@@ -50,7 +50,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, ["storekeeper"]);
+  const user = await requireCapability(request, "recordStock");
   const formData = await request.formData();
   const submission = parseWithZod(formData, {
     schema: movementFormSchema,

@@ -8,7 +8,7 @@ import { DataTable } from "~/components/data-table";
 import { SortHeaderLink } from "~/components/sort-header-link";
 import { StockListFilter } from "~/components/stock/stock-list-filter";
 import { formatQuantity } from "~/lib/format";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { companyCurrency } from "~/purchasing/suppliers.server";
 import { listItems, type ItemSortKey } from "~/stock/items.server";
 import { stockCsvRowLimit } from "~/stock/stock-csv";
@@ -47,7 +47,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     view,
     ignored,
     currency,
-    canCreate: userHasRole(user, ["buyer"]),
+    canCreate: userCan(user, "keepCatalogue"),
   };
 }
 

@@ -3,7 +3,7 @@ import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/supplier";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { SummaryFigure } from "~/components/summary-figure";
 import {
@@ -13,7 +13,7 @@ import {
 import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime, formatQuantity } from "~/lib/format";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import { idFromText } from "~/lib/search-params";
 import {
   currencyCoverage,
@@ -43,12 +43,12 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     ...history,
     importLimit: supplierImportLimit,
     coverage,
-    canKeep: userHasRole(user, ["buyer"]),
+    canKeep: userCan(user, "keepSuppliers"),
   };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  await requireRole(request, ["buyer"]);
+  await requireCapability(request, "keepSuppliers");
   const id = idFromText(params.supplierId);
   if (id === null || !(await findSupplier(id))) notFound();
   const submission = parseWithZod(await request.formData(), {

@@ -7,13 +7,13 @@ import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/suppliers";
-import { requireRole, requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { SupplierFields } from "~/components/suppliers/supplier-fields";
 import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime, formatQuantity } from "~/lib/format";
-import { userHasRole } from "~/lib/roles";
+import { userCan } from "~/lib/capabilities";
 import type { CurrencyCoverage } from "~/purchasing/supplier-currency-warnings";
 import { currencyCoverage } from "~/purchasing/supplier-details.server";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
@@ -30,12 +30,12 @@ export async function loader({ request }: Route.LoaderArgs) {
   return {
     suppliers,
     coverage,
-    canKeep: userHasRole(user, ["buyer"]),
+    canKeep: userCan(user, "keepSuppliers"),
   };
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  await requireRole(request, ["buyer"]);
+  await requireCapability(request, "keepSuppliers");
   const submission = parseWithZod(await request.formData(), {
     schema: supplierSchema,
   });

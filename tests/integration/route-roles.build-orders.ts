@@ -1,5 +1,5 @@
 /** Route × role rows of the build-order pages and API (see route-roles.test.ts). */
-import type { RouteRoleRow } from "../support/route-role-row";
+import { byCapability, type RouteRoleRow } from "../support/route-role-row";
 
 // No order has this id: once the role check passes, the answer is 404.
 const noOrder = "/build-orders/999999999";
@@ -16,7 +16,7 @@ export const buildOrderRouteRows: RouteRoleRow[] = [
     file: "routes/build-orders.tsx",
     method: "POST",
     path: "/build-orders",
-    expect: { anonymous: 302, builder: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("createBuildOrders", 400) },
   },
   {
     file: "routes/build-order.tsx",
@@ -29,13 +29,7 @@ export const buildOrderRouteRows: RouteRoleRow[] = [
     file: "routes/build-order.tsx",
     method: "POST",
     path: noOrder,
-    expect: {
-      anonymous: 302,
-      builder: 404,
-      storekeeper: 404,
-      admin: 404,
-      signedIn: 403,
-    },
+    expect: { anonymous: 302, ...byCapability("takeBuildOrderSteps", 404) },
   },
   {
     file: "routes/api.v1.build-orders.ts",
@@ -47,7 +41,7 @@ export const buildOrderRouteRows: RouteRoleRow[] = [
     file: "routes/api.v1.build-orders.ts",
     method: "POST",
     path: "/api/v1/build-orders",
-    expect: { anonymous: 401, builder: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("createBuildOrders", 400) },
   },
   {
     file: "routes/api.v1.build-order.ts",
@@ -60,38 +54,38 @@ export const buildOrderRouteRows: RouteRoleRow[] = [
     file: "routes/api.v1.build-order.ts",
     method: "POST",
     path: `/api/v1${noOrder}`,
-    expect: { anonymous: 401, builder: 405, admin: 405, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("runBuildOrders", 405) },
   },
   {
     file: "routes/api.v1.build-order.ts",
     method: "PATCH",
     path: `/api/v1${noOrder}`,
-    expect: { anonymous: 401, builder: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("runBuildOrders", 400) },
   },
   {
     file: "routes/api.v1.build-order-step.ts",
     method: "POST",
     path: `/api/v1${noOrder}/reserve`,
-    expect: { anonymous: 401, builder: 404, admin: 404, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("runBuildOrders", 404) },
   },
   {
     file: "routes/api.v1.build-order-step.ts",
     method: "POST",
     path: `/api/v1${noOrder}/cancel`,
-    expect: { anonymous: 401, builder: 404, admin: 404, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("runBuildOrders", 404) },
   },
   {
     file: "routes/api.v1.build-order-step.ts",
     method: "POST",
     path: `/api/v1${noOrder}/complete`,
-    expect: { anonymous: 401, builder: 404, admin: 404, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("runBuildOrders", 404) },
   },
   // An issue without a JSON body is refused as bad input once the role check passes.
   {
     file: "routes/api.v1.build-order-step.ts",
     method: "POST",
     path: `/api/v1${noOrder}/issue`,
-    expect: { anonymous: 401, storekeeper: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("issueToBuildOrders", 400) },
   },
   {
     file: "routes/api.v1.build-order-step.ts",

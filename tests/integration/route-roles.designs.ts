@@ -1,5 +1,5 @@
 /** Route × role rows of the design pages and API (see route-roles.test.ts). */
-import type { RouteRoleRow } from "../support/route-role-row";
+import { byCapability, type RouteRoleRow } from "../support/route-role-row";
 
 /**
  * The table runs against the demo data, which has no design: the routes of one design are
@@ -9,9 +9,6 @@ import type { RouteRoleRow } from "../support/route-role-row";
  * real design, per role, are in design-pages.test.ts.
  */
 const missing = "/designs/999999/revisions/1";
-const builders = { builder: 400, admin: 400, signedIn: 403 };
-/** A method the path does not take: 405 once the role check passes. */
-const buildersOnly405 = { builder: 405, admin: 405, signedIn: 403 };
 
 export const designRouteRows: RouteRoleRow[] = [
   {
@@ -25,7 +22,7 @@ export const designRouteRows: RouteRoleRow[] = [
     file: "routes/designs.tsx",
     method: "POST",
     path: "/designs",
-    expect: { anonymous: 302, ...builders },
+    expect: { anonymous: 302, ...byCapability("editDesigns", 400) },
   },
   {
     file: "routes/design-revision.tsx",
@@ -38,7 +35,7 @@ export const designRouteRows: RouteRoleRow[] = [
     file: "routes/design-revision.tsx",
     method: "POST",
     path: missing,
-    expect: { anonymous: 302, ...builders },
+    expect: { anonymous: 302, ...byCapability("editDesigns", 400) },
   },
   {
     file: "routes/design-bom-export.ts",
@@ -64,7 +61,7 @@ export const designRouteRows: RouteRoleRow[] = [
     file: "routes/api.v1.designs.ts",
     method: "POST",
     path: "/api/v1/designs",
-    expect: { anonymous: 401, builder: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("editDesigns", 400) },
   },
   {
     file: "routes/api.v1.design.ts",
@@ -82,13 +79,13 @@ export const designRouteRows: RouteRoleRow[] = [
     file: "routes/api.v1.design-revisions.ts",
     method: "GET",
     path: "/api/v1/designs/999999/revisions",
-    expect: { anonymous: 401, ...buildersOnly405 },
+    expect: { anonymous: 401, ...byCapability("editDesigns", 405) },
   },
   {
     file: "routes/api.v1.design-revisions.ts",
     method: "POST",
     path: "/api/v1/designs/999999/revisions",
-    expect: { anonymous: 401, builder: 404, admin: 404, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("editDesigns", 404) },
   },
   {
     file: "routes/api.v1.design-revision.ts",
@@ -100,31 +97,31 @@ export const designRouteRows: RouteRoleRow[] = [
     file: "routes/api.v1.design-revision.ts",
     method: "PUT",
     path: "/api/v1/designs/999999/revisions/1",
-    expect: { anonymous: 401, builder: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("editDesigns", 400) },
   },
   {
     file: "routes/api.v1.design-revision.ts",
     method: "PATCH",
     path: "/api/v1/designs/999999/revisions/1",
-    expect: { anonymous: 401, builder: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("editDesigns", 400) },
   },
   {
     file: "routes/api.v1.design-revision.ts",
     method: "POST",
     path: "/api/v1/designs/999999/revisions/1",
-    expect: { anonymous: 401, ...buildersOnly405 },
+    expect: { anonymous: 401, ...byCapability("editDesigns", 405) },
   },
   {
     file: "routes/api.v1.design-revision-release.ts",
     method: "GET",
     path: "/api/v1/designs/999999/revisions/1/release",
-    expect: { anonymous: 401, ...buildersOnly405 },
+    expect: { anonymous: 401, ...byCapability("releaseDesigns", 405) },
   },
   {
     file: "routes/api.v1.design-revision-release.ts",
     method: "POST",
     path: "/api/v1/designs/999999/revisions/1/release",
-    expect: { anonymous: 401, builder: 404, admin: 404, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("releaseDesigns", 404) },
   },
   {
     file: "routes/api.v1.design-costing.ts",

@@ -4,7 +4,7 @@
  * change a supplier. No supplier has id 2147483647, so readers get 404 after the role
  * check and buyers get 404 (page) or 400 (API, no JSON body) before anything changes.
  */
-import type { RouteRoleRow } from "../support/route-role-row";
+import { byCapability, type RouteRoleRow } from "../support/route-role-row";
 
 export const supplierRouteRows: RouteRoleRow[] = [
   {
@@ -17,7 +17,7 @@ export const supplierRouteRows: RouteRoleRow[] = [
     file: "routes/supplier.tsx",
     method: "POST",
     path: "/suppliers/2147483647",
-    expect: { anonymous: 302, buyer: 404, admin: 404, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("keepSuppliers", 404) },
   },
   {
     file: "routes/best-prices.tsx",
@@ -35,12 +35,12 @@ export const supplierRouteRows: RouteRoleRow[] = [
     file: "routes/api.v1.supplier.ts",
     method: "PATCH",
     path: "/api/v1/suppliers/2147483647",
-    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("keepSuppliers", 400) },
   },
   {
     file: "routes/api.v1.supplier.ts",
     method: "POST",
     path: "/api/v1/suppliers/2147483647",
-    expect: { anonymous: 401, buyer: 405, admin: 405, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("keepSuppliers", 405) },
   },
 ];

@@ -4,7 +4,9 @@
  * Which handlers there are is read from the source (each file of
  * app/routes.ts, its exported loader and action, and the methods the action
  * branches to), so a route, export or method added without a row here fails
- * the first test and nothing ships without its access being checked.
+ * the first test and nothing ships without its access being checked. A row whose
+ * route checks a capability takes who passes from app/lib/capabilities.ts
+ * (byCapability), the table the guard and the pages read.
  */
 import { createHash, randomBytes } from "node:crypto";
 import { matchRoutes, type RouteObject } from "react-router";
@@ -26,17 +28,13 @@ import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
 import { supplierRouteRows } from "./route-roles.suppliers";
 import {
+  byCapability,
   expectedStatus,
   rolePairs,
   rolesOf,
   type Caller,
   type RouteRoleRow as Row,
 } from "../support/route-role-row";
-
-const adminOnly = { anonymous: 302, admin: 200, signedIn: 403 };
-const adminOnlyApi = { anonymous: 401, admin: 200, signedIn: 403 };
-const adminOnlyApi405 = { anonymous: 401, admin: 405, signedIn: 403 };
-const buyersApi405 = { anonymous: 401, buyer: 405, admin: 405, signedIn: 403 };
 
 // Rows of the design and build-order routes live beside this file.
 const table: Row[] = [
@@ -55,7 +53,7 @@ const table: Row[] = [
     file: "routes/alerts-purchase-request.ts",
     method: "GET",
     path: "/alerts/purchase-request.csv?supplier=Nobody%20at%20all",
-    expect: { anonymous: 302, buyer: 404, admin: 404, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("draftPurchaseRequests", 404) },
   },
   {
     file: "routes/api.v1.alerts.ts",
@@ -79,32 +77,32 @@ const table: Row[] = [
     file: "routes/admin-people.tsx",
     method: "GET",
     path: "/admin/people",
-    expect: adminOnly,
+    expect: { anonymous: 302, ...byCapability("managePeople", 200) },
   },
   // An empty invitation: refused before anything is written; admins get field messages.
   {
     file: "routes/admin-people.tsx",
     method: "POST",
     path: "/admin/people",
-    expect: { anonymous: 302, admin: 400, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("managePeople", 400) },
   },
   {
     file: "routes/admin-person.tsx",
     method: "GET",
     path: "/admin/people/demo-05-manager",
-    expect: adminOnly,
+    expect: { anonymous: 302, ...byCapability("managePeople", 200) },
   },
   {
     file: "routes/admin-person.tsx",
     method: "POST",
     path: "/admin/people/demo-05-manager",
-    expect: { anonymous: 302, admin: 400, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("managePeople", 400) },
   },
   {
     file: "routes/admin-outbox.tsx",
     method: "GET",
     path: "/admin/outbox",
-    expect: adminOnly,
+    expect: { anonymous: 302, ...byCapability("readOutbox", 200) },
   },
   {
     file: "routes/account.tsx",
@@ -243,7 +241,7 @@ const table: Row[] = [
     file: "routes/api.v1.outbox.ts",
     method: "POST",
     path: "/api/v1/outbox",
-    expect: adminOnlyApi405,
+    expect: { anonymous: 401, ...byCapability("readOutbox", 405) },
   },
   {
     file: "routes/api.v1.me.ts",
@@ -255,7 +253,7 @@ const table: Row[] = [
     file: "routes/api.v1.outbox.ts",
     method: "GET",
     path: "/api/v1/outbox",
-    expect: adminOnlyApi,
+    expect: { anonymous: 401, ...byCapability("readOutbox", 200) },
   },
   // The engineering API: every signed-in role may calculate and read reference data.
   {
@@ -324,7 +322,7 @@ const table: Row[] = [
     file: "routes/reference.tsx",
     method: "POST",
     path: "/reference",
-    expect: { anonymous: 302, admin: 400, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("addMagnetGrades", 400) },
   },
   // Stock pages: everyone signed in reads; buyers (and admins) add items; an unknown SKU is 404 once the role check passes.
   {
@@ -343,13 +341,13 @@ const table: Row[] = [
     file: "routes/stock-item-new.tsx",
     method: "GET",
     path: "/stock/items/new",
-    expect: { anonymous: 302, admin: 200, buyer: 200, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("keepCatalogue", 200) },
   },
   {
     file: "routes/stock-item-new.tsx",
     method: "POST",
     path: "/stock/items/new",
-    expect: { anonymous: 302, admin: 400, buyer: 400, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("keepCatalogue", 400) },
   },
   {
     file: "routes/stock-item.tsx",
@@ -361,13 +359,7 @@ const table: Row[] = [
     file: "routes/stock-item.tsx",
     method: "POST",
     path: "/stock/items/NO-SUCH-SKU",
-    expect: {
-      anonymous: 302,
-      admin: 404,
-      buyer: 404,
-      storekeeper: 404,
-      signedIn: 403,
-    },
+    expect: { anonymous: 302, ...byCapability("keepReorderLevels", 404) },
   },
   // The coil estimator (its live figures come from the API through a clientAction).
   {
@@ -387,13 +379,13 @@ const table: Row[] = [
     file: "routes/stock-record.tsx",
     method: "GET",
     path: "/stock/record",
-    expect: { anonymous: 302, storekeeper: 200, admin: 200, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("recordStock", 200) },
   },
   {
     file: "routes/stock-record.tsx",
     method: "POST",
     path: "/stock/record",
-    expect: { anonymous: 302, storekeeper: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("recordStock", 400) },
   },
   {
     file: "routes/stock-journal.tsx",
@@ -412,7 +404,7 @@ const table: Row[] = [
     file: "routes/api.v1.items.ts",
     method: "POST",
     path: "/api/v1/items",
-    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("keepCatalogue", 400) },
   },
   {
     file: "routes/api.v1.item.ts",
@@ -430,13 +422,7 @@ const table: Row[] = [
     file: "routes/api.v1.item.ts",
     method: "PATCH",
     path: "/api/v1/items/NO-SUCH-SKU",
-    expect: {
-      anonymous: 401,
-      buyer: 400,
-      storekeeper: 400,
-      admin: 400,
-      signedIn: 403,
-    },
+    expect: { anonymous: 401, ...byCapability("keepReorderLevels", 400) },
   },
   {
     file: "routes/api.v1.locations.ts",
@@ -454,7 +440,7 @@ const table: Row[] = [
     file: "routes/api.v1.stock-movements.ts",
     method: "POST",
     path: "/api/v1/stock-movements",
-    expect: { anonymous: 401, storekeeper: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("recordStock", 400) },
   },
   // Suppliers and prices: everyone reads; buyers (and admins) keep them and import price lists.
   {
@@ -467,19 +453,19 @@ const table: Row[] = [
     file: "routes/api.v1.suppliers.ts",
     method: "POST",
     path: "/api/v1/suppliers",
-    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("keepSuppliers", 400) },
   },
   {
     file: "routes/api.v1.price-lists.ts",
     method: "GET",
     path: "/api/v1/price-lists",
-    expect: buyersApi405,
+    expect: { anonymous: 401, ...byCapability("importPriceLists", 405) },
   },
   {
     file: "routes/api.v1.price-lists.ts",
     method: "POST",
     path: "/api/v1/price-lists",
-    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("importPriceLists", 400) },
   },
   {
     file: "routes/api.v1.item-prices.ts",
@@ -491,14 +477,14 @@ const table: Row[] = [
     file: "routes/price-import.tsx",
     method: "GET",
     path: "/suppliers/import",
-    expect: { anonymous: 302, buyer: 200, admin: 200, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("importPriceLists", 200) },
   },
   // The import page works in the browser; a plain form post is refused (405) after the role check.
   {
     file: "routes/price-import.tsx",
     method: "POST",
     path: "/suppliers/import",
-    expect: { anonymous: 302, buyer: 405, admin: 405, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("importPriceLists", 405) },
   },
   {
     file: "routes/api.v1.metal-base.ts",
@@ -510,13 +496,13 @@ const table: Row[] = [
     file: "routes/api.v1.metal-base.ts",
     method: "POST",
     path: "/api/v1/metal-base",
-    expect: buyersApi405,
+    expect: { anonymous: 401, ...byCapability("keepPrices", 405) },
   },
   {
     file: "routes/api.v1.metal-base.ts",
     method: "PUT",
     path: "/api/v1/metal-base",
-    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("keepPrices", 400) },
   },
   {
     file: "routes/api.v1.currency-rates.ts",
@@ -528,13 +514,13 @@ const table: Row[] = [
     file: "routes/api.v1.currency-rates.ts",
     method: "POST",
     path: "/api/v1/currency-rates",
-    expect: buyersApi405,
+    expect: { anonymous: 401, ...byCapability("keepPrices", 405) },
   },
   {
     file: "routes/api.v1.currency-rates.ts",
     method: "PUT",
     path: "/api/v1/currency-rates",
-    expect: { anonymous: 401, buyer: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 401, ...byCapability("keepPrices", 400) },
   },
   {
     file: "routes/suppliers.tsx",
@@ -547,7 +533,7 @@ const table: Row[] = [
     file: "routes/suppliers.tsx",
     method: "POST",
     path: "/suppliers",
-    expect: { anonymous: 302, buyer: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("keepSuppliers", 400) },
   },
   {
     file: "routes/prices.tsx",
@@ -559,7 +545,7 @@ const table: Row[] = [
     file: "routes/prices.tsx",
     method: "POST",
     path: "/prices",
-    expect: { anonymous: 302, buyer: 400, admin: 400, signedIn: 403 },
+    expect: { anonymous: 302, ...byCapability("keepPrices", 400) },
   },
   {
     file: "routes/price-imports.tsx",

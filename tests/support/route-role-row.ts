@@ -1,3 +1,4 @@
+import { userCan, type Capability } from "~/lib/capabilities";
 import { roles, type Role } from "~/lib/roles";
 import type { HandlerMethod } from "./route-handlers";
 
@@ -19,6 +20,25 @@ export interface RouteRoleRow {
   expect: Partial<Record<Caller, number>> & { signedIn?: number };
   /** The request ends the session it is sent with: each caller signs in afresh for it. */
   endsSession?: boolean;
+}
+
+/**
+ * The expectations of a row whose route checks a capability, read from the one
+ * table the guard and the pages read (app/lib/capabilities.ts): `passed` — what
+ * the route answers once the check passes — for each role that has the
+ * capability (admins have all), 403 for each role that has not. Every role is
+ * named, so a route whose guard asks the wrong capability answers differently.
+ */
+export function byCapability(
+  capability: Capability,
+  passed: number,
+): Record<Role, number> {
+  return Object.fromEntries(
+    roles.map((role) => [
+      role,
+      userCan({ roles: [role] }, capability) ? passed : 403,
+    ]),
+  ) as Record<Role, number>;
 }
 
 /**

@@ -1,0 +1,111 @@
+import { readdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
+import { describe, expect, it } from "vitest";
+import {
+  capabilityRoles,
+  needsRoleMessage,
+  rolesWith,
+  userCan,
+  type Capability,
+} from "./capabilities";
+import { roles, type Role } from "./roles";
+
+describe("capabilityRoles", () => {
+  // Who may do what; a change here changes the guard, the controls and the
+  // route × role test at once, so it is made on purpose or not at all.
+  it("gives each capability the roles the product's role table gives it", () => {
+    expect(capabilityRoles).toEqual({
+      recordStock: ["storekeeper"],
+      keepCatalogue: ["buyer"],
+      keepReorderLevels: ["buyer", "storekeeper"],
+      keepSuppliers: ["buyer"],
+      importPriceLists: ["buyer"],
+      keepPrices: ["buyer"],
+      hearLowStockAlerts: ["buyer"],
+      draftPurchaseRequests: ["buyer"],
+      editDesigns: ["builder"],
+      releaseDesigns: ["builder"],
+      createBuildOrders: ["builder"],
+      runBuildOrders: ["builder"],
+      issueToBuildOrders: ["storekeeper"],
+      takeBuildOrderSteps: ["builder", "storekeeper"],
+      managePeople: ["admin"],
+      readOutbox: ["admin"],
+      addMagnetGrades: ["admin"],
+    });
+  });
+
+  it("lets whoever takes one build-order step onto the order's page, and nobody else", () => {
+    const stepRoles = new Set([
+      ...rolesWith("runBuildOrders"),
+      ...rolesWith("issueToBuildOrders"),
+    ]);
+    expect(new Set(rolesWith("takeBuildOrderSteps"))).toEqual(stepRoles);
+  });
+
+  it("gives managers no capability: they read", () => {
+    const managerCan = (Object.keys(capabilityRoles) as Capability[]).filter(
+      (capability) => userCan({ roles: ["manager"] }, capability),
+    );
+    expect(managerCan).toEqual([]);
+  });
+});
+
+describe("userCan", () => {
+  it("passes a person holding one of the capability's roles", () => {
+    expect(userCan({ roles: ["manager", "storekeeper"] }, "recordStock")).toBe(
+      true,
+    );
+    expect(userCan({ roles: ["storekeeper"] }, "keepReorderLevels")).toBe(true);
+  });
+  it("refuses a person holding none of them", () => {
+    expect(userCan({ roles: ["storekeeper"] }, "keepCatalogue")).toBe(false);
+    expect(userCan({ roles: ["buyer", "builder"] }, "managePeople")).toBe(
+      false,
+    );
+  });
+  it("gives admins every capability", () => {
+    for (const capability of Object.keys(capabilityRoles) as Capability[])
+      expect(userCan({ roles: ["admin"] }, capability)).toBe(true);
+  });
+  it("refuses nobody signed in", () => {
+    expect(userCan(null, "recordStock")).toBe(false);
+    expect(userCan(undefined, "readOutbox")).toBe(false);
+  });
+  it("knows only the five roles", () => {
+    const named = Object.values(capabilityRoles).flat() as Role[];
+    expect(named.every((role) => roles.includes(role))).toBe(true);
+  });
+});
+
+describe("needsRoleMessage", () => {
+  it("names the capability's roles in the table's order", () => {
+    expect(needsRoleMessage("keepReorderLevels")).toBe(
+      "This needs the role buyer or storekeeper.",
+    );
+    expect(needsRoleMessage("issueToBuildOrders", "This step")).toBe(
+      "This step needs the role storekeeper.",
+    );
+  });
+});
+
+describe("where access is decided", () => {
+  /** Every source file under app/, beside this table and the roles module itself. */
+  function sourcesOf(folder: string): string[] {
+    return readdirSync(folder, { withFileTypes: true }).flatMap((entry) => {
+      const path = join(folder, entry.name);
+      if (entry.isDirectory()) return sourcesOf(path);
+      return /\.tsx?$/.test(entry.name) && !/\.test\.tsx?$/.test(entry.name)
+        ? [path]
+        : [];
+    });
+  }
+
+  it("asks the capability table everywhere, never roles directly", () => {
+    const own = new Set(["app/lib/capabilities.ts", "app/lib/roles.ts"]);
+    const asking = sourcesOf("app")
+      .filter((path) => !own.has(path))
+      .filter((path) => /\buserHasRole\b/.test(readFileSync(path, "utf8")));
+    expect(asking).toEqual([]);
+  });
+});

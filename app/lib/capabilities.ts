@@ -1,0 +1,71 @@
+/**
+ * The one table of who may do what: each capability names the roles that have it
+ * (admins have every capability, as the product brief's role table says). The server
+ * checks with requireCapability / refuseUnless (app/auth/guard.server.ts), pages show
+ * controls with userCan, and the route × role test (tests/integration/route-roles.test.ts)
+ * expects its allow/deny answers from this same table.
+ *
+ * The order of each list is the order the refusal names them in: "This needs the role
+ * buyer or storekeeper."
+ */
+import { userHasRole, type Role } from "./roles";
+
+export const capabilityRoles = {
+  /** Record receipts, issues, returns, transfers, counts and scrap. */
+  recordStock: ["storekeeper"],
+  /** Add items, rename and archive them. */
+  keepCatalogue: ["buyer"],
+  /** Set an item's reorder point and reorder quantity. */
+  keepReorderLevels: ["buyer", "storekeeper"],
+  /** Add and change suppliers. */
+  keepSuppliers: ["buyer"],
+  /** Import suppliers' price lists. */
+  importPriceLists: ["buyer"],
+  /** Keep the metal base price and the currency rates. */
+  keepPrices: ["buyer"],
+  /** Hear about low stock (alert e-mails, the open alerts on the start page). */
+  hearLowStockAlerts: ["buyer"],
+  /** Draft purchase requests from the open alerts. */
+  draftPurchaseRequests: ["buyer"],
+  /** Create designs, edit draft revisions and start new revisions. */
+  editDesigns: ["builder"],
+  /** Release a design revision. */
+  releaseDesigns: ["builder"],
+  /** Create build orders. */
+  createBuildOrders: ["builder"],
+  /** Reserve stock for a build order, change its quantity, complete or cancel it. */
+  runBuildOrders: ["builder"],
+  /** Issue stock to a build order. */
+  issueToBuildOrders: ["storekeeper"],
+  /** Take any step on a build order's page (each step then needs its own capability). */
+  takeBuildOrderSteps: ["builder", "storekeeper"],
+  /** Invite people, give them roles, deactivate them. */
+  managePeople: ["admin"],
+  /** Read every e-mail Turnledger sends. */
+  readOutbox: ["admin"],
+  /** Add a magnet grade to the reference tables. */
+  addMagnetGrades: ["admin"],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Capability = keyof typeof capabilityRoles;
+
+/** The roles that have the capability, admins besides. */
+export function rolesWith(capability: Capability): readonly Role[] {
+  return capabilityRoles[capability];
+}
+
+/** True when the user has the capability (admins have all). */
+export function userCan(
+  user: { roles: readonly Role[] } | null | undefined,
+  capability: Capability,
+): boolean {
+  return userHasRole(user, capabilityRoles[capability]);
+}
+
+/** The refusal's words: "This needs the role buyer or storekeeper." (or "This step needs …"). */
+export function needsRoleMessage(
+  capability: Capability,
+  what = "This",
+): string {
+  return `${what} needs the role ${rolesWith(capability).join(" or ")}.`;
+}
