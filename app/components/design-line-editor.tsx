@@ -8,6 +8,7 @@ import {
   magnetLineSchema,
   partLineSchema,
 } from "~/designs/design-schemas";
+import { formNumber } from "~/lib/number-text";
 import type { DesignActionAnswer } from "./design-action-answer";
 import { CoilDrawing } from "./coil-drawing";
 import { DesignItemPicker } from "./design-item-picker";
@@ -29,11 +30,10 @@ const kindNames: Record<LineKind, string> = {
   part: "part line",
 };
 
-/** A typed number as the drawing takes it; NaN (no drawing) for anything else. */
+/** A typed number as the drawing takes it ("1,25" too); NaN (no drawing) for anything else. */
 function typedNumber(value: unknown): number {
-  return typeof value === "string" && value.trim() !== ""
-    ? Number(value.trim().replace(",", "."))
-    : Number.NaN;
+  const read = formNumber(value);
+  return typeof read === "number" ? read : Number.NaN;
 }
 
 /** What the fields start with: the line's values, or a new line's few sensible defaults. */
