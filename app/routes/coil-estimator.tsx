@@ -17,11 +17,11 @@ import { postJson, type ApiAnswer } from "~/lib/api-request";
 import type { CoilEstimateRequest } from "~/lib/estimate-requests";
 import type { Route } from "./+types/coil-estimator";
 import { requireUser } from "~/auth/guard.server";
-import { CoilDrawing } from "~/components/coil-drawing";
-import { CoilResults } from "~/components/coil-results";
-import { EndTurnHelper } from "~/components/end-turn-helper";
+import { CoilDrawing } from "~/components/estimators/coil-drawing";
+import { CoilResults } from "~/components/estimators/coil-results";
+import { EndTurnHelper } from "~/components/estimators/end-turn-helper";
 import { conductorSplit, type CoilEstimate } from "~/engineering/coil-estimate";
-import { ConductorSplitBar } from "~/components/conductor-split-bar";
+import { ConductorSplitBar } from "~/components/estimators/conductor-split-bar";
 import {
   coilEstimatorDefaults,
   coilEstimatorFormSchema,

@@ -10,14 +10,14 @@ import {
 } from "react-router";
 import type { Route } from "./+types/design-revision";
 import { requireRole, requireUser } from "~/auth/guard.server";
-import type { DesignActionAnswer } from "~/components/design-action-answer";
-import { DesignCostPanel, money } from "~/components/design-cost-panel";
+import type { DesignActionAnswer } from "~/components/design/action-answer";
+import { DesignCostPanel, money } from "~/components/design/cost-panel";
 import { costBasisText } from "~/components/design/price-basis-note";
 import {
   DesignFieldsForm,
   DesignFieldsSummary,
-} from "~/components/design-fields-form";
-import { DesignInsulationCaution } from "~/components/design-insulation-caution";
+} from "~/components/design/fields-form";
+import { DesignInsulationCaution } from "~/components/design/insulation-caution";
 import {
   CreateBuildOrderForm,
   NewRevisionButton,
@@ -27,14 +27,14 @@ import {
 import {
   DesignLineEditor,
   type LineKind,
-} from "~/components/design-line-editor";
+} from "~/components/design/line-editor";
 import {
   CoilLinesTable,
   DesignWarningList,
   MagnetLinesTable,
   PartLinesTable,
   type LineTableActions,
-} from "~/components/design-line-tables";
+} from "~/components/design/line-tables";
 import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
 import {
   applyLineChange,

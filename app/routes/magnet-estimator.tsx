@@ -11,15 +11,15 @@ import { requireUser } from "~/auth/guard.server";
 import {
   requestMagnetEstimate,
   type EstimateAnswer,
-} from "~/components/magnet-estimate-api";
+} from "~/components/estimators/magnet-estimate-api";
 import {
   MagnetEstimateInputs,
   MagnetEstimateResults,
   MagnetEstimateWarnings,
   type EstimatedInput,
   type GradeSummary,
-} from "~/components/magnet-estimate-results";
-import { MagnetGradeSelect } from "~/components/magnet-grade-select";
+} from "~/components/estimators/magnet-estimate-results";
+import { MagnetGradeSelect } from "~/components/estimators/magnet-grade-select";
 import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
 import {
   MagnetDimensionInputs,

@@ -10,7 +10,7 @@ import { requireRole } from "~/auth/guard.server";
 import {
   ColumnMappingEditor,
   type MappedColumn,
-} from "~/components/column-mapping-editor";
+} from "~/components/price-import/column-mapping-editor";
 import { ImportDone } from "~/components/price-import/import-done";
 import {
   mappingEntries,
@@ -19,21 +19,21 @@ import {
 import {
   InvalidRowsTable,
   PriceListCheckResults,
-} from "~/components/price-list-check-results";
+} from "~/components/price-import/price-list-check-results";
 import {
   sendPriceList,
   type PriceListAnswer,
   type PriceListCheck,
   type PriceListImport,
-} from "~/components/price-list-upload";
+} from "~/components/price-import/price-list-upload";
 import {
   fileSizeProblem,
   readPriceListHeader,
-} from "~/components/read-price-list-header";
+} from "~/components/price-import/read-price-list-header";
 import {
   reportUploadProgress,
   UploadProgressBar,
-} from "~/components/upload-progress-bar";
+} from "~/components/price-import/upload-progress-bar";
 import { formatQuantity } from "~/lib/format";
 import {
   checkColumnMapping,

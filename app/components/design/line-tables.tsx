@@ -8,8 +8,8 @@ import type {
 import { formatQuantity } from "~/lib/format";
 import { countText, quantityText } from "~/lib/unit-text";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
-import type { DesignActionAnswer } from "./design-action-answer";
-import { DataTable } from "./data-table";
+import type { DesignActionAnswer } from "./action-answer";
+import { DataTable } from "~/components/data-table";
 
 type Costing = DesignPageData["costing"];
 export type CoilFigures = Costing["coils"][number];

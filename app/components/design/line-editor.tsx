@@ -9,12 +9,12 @@ import {
   partLineSchema,
 } from "~/designs/design-schemas";
 import { formNumber } from "~/lib/number-text";
-import type { DesignActionAnswer } from "./design-action-answer";
-import { CoilDrawing } from "./coil-drawing";
-import { DesignItemPicker } from "./design-item-picker";
-import { EndTurnHelper } from "./end-turn-helper";
-import { QuantityField } from "./quantity-field";
-import { FormMessages } from "./text-field";
+import type { DesignActionAnswer } from "./action-answer";
+import { CoilDrawing } from "~/components/estimators/coil-drawing";
+import { DesignItemPicker } from "./item-picker";
+import { EndTurnHelper } from "~/components/estimators/end-turn-helper";
+import { QuantityField } from "~/components/quantity-field";
+import { FormMessages } from "~/components/text-field";
 
 export type LineKind = "coil" | "magnet" | "part";
 
