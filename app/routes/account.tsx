@@ -1,6 +1,5 @@
-import { getFormProps, getSelectProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
-import { data, Form, useNavigation } from "react-router";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/account";
 import {
@@ -9,11 +8,10 @@ import {
   revokeApiToken,
 } from "~/auth/api-tokens.server";
 import { requireUser } from "~/auth/guard.server";
+import { ApiTokensSection } from "~/components/account/api-tokens-section";
 import { changePasswordAction } from "~/components/account/change-password-action.server";
 import { ChangePasswordForm } from "~/components/account/change-password-form";
-import { RoleCheckboxes } from "~/components/role-checkboxes";
-import { FormMessages, TextField } from "~/components/text-field";
-import { formatDateTime } from "~/lib/format";
+import { LowStockMailChoice } from "~/components/account/low-stock-mail-choice";
 import { userCan } from "~/lib/capabilities";
 import { roleLabels } from "~/lib/roles";
 import {
@@ -185,22 +183,6 @@ export default function Account({
   actionData,
 }: Route.ComponentProps) {
   const { user, tokens, alertMode } = loaderData;
-  const navigation = useNavigation();
-  const [form, fields] = useForm({
-    id: "new-token",
-    lastResult: actionData?.result,
-    defaultValue: { scope: "all", roles: user.roles, lifetimeDays: "90" },
-    constraint: getZodConstraint(createTokenSchema),
-    shouldValidate: "onBlur",
-    onValidate({ formData }) {
-      return parseWithZod(formData, { schema: createTokenSchema });
-    },
-  });
-  const { key: selectKey, ...selectProps } = getSelectProps(
-    fields.lifetimeDays,
-    { ariaDescribedBy: fields.lifetimeDays.descriptionId },
-  );
-  const isAdmin = user.roles.includes("admin");
   const passwordResult =
     actionData && "passwordResult" in actionData
       ? actionData.passwordResult
@@ -220,234 +202,15 @@ export default function Account({
         liveTokens={tokens.filter((token) => !token.revokedAt).length}
       />
 
-      {alertMode ? (
-        <section aria-labelledby="alerts-heading" className="space-y-3">
-          <h2 id="alerts-heading" className="text-lg font-semibold">
-            Low-stock e-mails
-          </h2>
-          <Form method="post" className="space-y-2">
-            <input type="hidden" name="intent" value="alert-mode" />
-            <fieldset className="space-y-1 text-sm">
-              <legend className="mb-1 text-graphite-700">
-                When an item falls below its reorder point, tell me:
-              </legend>
-              {(
-                [
-                  ["each", "by e-mail, for each new alert"],
-                  ["digest", "once a day, in a digest of every open alert"],
-                  ["none", "not by e-mail (I read the Alerts page)"],
-                ] as const
-              ).map(([mode, label]) => (
-                <label key={mode} className="flex items-center gap-2">
-                  <input
-                    type="radio"
-                    name="mode"
-                    value={mode}
-                    defaultChecked={alertMode === mode}
-                  />
-                  {label}
-                </label>
-              ))}
-            </fieldset>
-            <button type="submit" className="button-quiet">
-              Save
-            </button>
-          </Form>
-        </section>
-      ) : null}
+      {alertMode ? <LowStockMailChoice alertMode={alertMode} /> : null}
 
-      <section aria-labelledby="tokens-heading" className="space-y-4">
-        <h2 id="tokens-heading" className="text-lg font-semibold">
-          API tokens
-        </h2>
-        <p className="text-sm text-graphite-700">
-          Scripts and other tools call <code>/api/v1</code> with{" "}
-          <code>Authorization: Bearer &lt;token&gt;</code>. A token acts with
-          the roles you give it, and never with more than you hold.
-        </p>
-        {actionData?.newToken ? (
-          <div
-            role="status"
-            className="rounded-md border border-ok/40 bg-ok/5 p-4 text-sm"
-          >
-            <p className="font-medium text-ok">
-              Copy the token now: it is shown only this once.
-            </p>
-            <code className="mt-2 block break-all rounded bg-white p-2 text-graphite-900">
-              {actionData.newToken}
-            </code>
-          </div>
-        ) : null}
-        {actionData?.notice ? (
-          <p role="status" className="text-sm text-graphite-700">
-            {actionData.notice}
-          </p>
-        ) : null}
-        <Form
-          method="post"
-          {...getFormProps(form)}
-          className="panel grid gap-4 md:grid-cols-2"
-        >
-          <FormMessages id={form.errorId} errors={form.errors} />
-          <TextField
-            field={fields.name}
-            label="Token name"
-            autoComplete="off"
-            hint="e.g. the scale at the winding bench"
-          />
-          <div>
-            <label htmlFor={fields.lifetimeDays.id} className="field-label">
-              Lives for
-            </label>
-            <select key={selectKey} {...selectProps} className="field-input">
-              <option value="30">30 days</option>
-              <option value="90">90 days</option>
-              <option value="365">a year</option>
-              {isAdmin ? <option value="never">until revoked</option> : null}
-            </select>
-            <p
-              id={fields.lifetimeDays.descriptionId}
-              className="mt-1 text-xs text-graphite-500"
-            >
-              {isAdmin
-                ? "A year at most, or until revoked for an admin's own tokens."
-                : "A year at most."}
-            </p>
-            {fields.lifetimeDays.errors ? (
-              <p id={fields.lifetimeDays.errorId} className="field-error">
-                {fields.lifetimeDays.errors.join(" ")}
-              </p>
-            ) : null}
-          </div>
-          <TextField
-            field={fields.currentPassword}
-            label="Your password"
-            type="password"
-            autoComplete="current-password"
-            hint="Asked again before a token is made."
-          />
-          <fieldset className="space-y-3 md:col-span-2">
-            <legend className="field-label">Roles the token acts with</legend>
-            <label className="flex items-center gap-2 text-sm">
-              <input
-                type="radio"
-                name={fields.scope.name}
-                value="all"
-                defaultChecked
-                className="h-4 w-4 accent-copper-600"
-              />
-              All my roles, as they are each time it is used
-            </label>
-            <label className="flex items-center gap-2 text-sm">
-              <input
-                type="radio"
-                name={fields.scope.name}
-                value="chosen"
-                className="h-4 w-4 accent-copper-600"
-              />
-              Only the roles ticked below (never more than I hold)
-            </label>
-            <RoleCheckboxes
-              field={fields.roles}
-              legend="Roles for “only these”"
-              choices={user.roles}
-            />
-          </fieldset>
-          <div>
-            <button
-              type="submit"
-              name="intent"
-              value="create"
-              className="button-primary"
-              disabled={navigation.state !== "idle"}
-            >
-              Create token
-            </button>
-          </div>
-        </Form>
-        <div className="panel overflow-x-auto p-0">
-          <table className="data-table">
-            <caption className="sr-only">Your API tokens</caption>
-            <thead>
-              <tr>
-                <th scope="col">Name</th>
-                <th scope="col">Starts with</th>
-                <th scope="col">Roles</th>
-                <th scope="col">Created</th>
-                <th scope="col">Expires</th>
-                <th scope="col">Last used</th>
-                <th scope="col">
-                  <span className="sr-only">Revoke</span>
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {tokens.length === 0 ? (
-                <tr>
-                  <td
-                    colSpan={7}
-                    className="py-6 text-center text-graphite-500"
-                  >
-                    No tokens yet.
-                  </td>
-                </tr>
-              ) : (
-                tokens.map((token) => (
-                  <tr
-                    key={token.id}
-                    className={
-                      token.revokedAt
-                        ? "text-graphite-500 line-through"
-                        : undefined
-                    }
-                  >
-                    <td>{token.name}</td>
-                    <td>
-                      <code>{token.tokenPrefix}…</code>
-                    </td>
-                    <td>
-                      {token.followsOwner
-                        ? "all of yours"
-                        : token.roles
-                            .map((role) => roleLabels[role])
-                            .join(", ")}
-                    </td>
-                    <td>{formatDateTime(token.createdAt)}</td>
-                    <td>
-                      {token.expiresAt
-                        ? formatDateTime(token.expiresAt)
-                        : "never"}
-                    </td>
-                    <td>{formatDateTime(token.lastUsedAt)}</td>
-                    <td>
-                      {token.revokedAt ? (
-                        "revoked"
-                      ) : (
-                        <Form method="post">
-                          <input
-                            type="hidden"
-                            name="tokenId"
-                            value={token.id}
-                          />
-                          <button
-                            type="submit"
-                            name="intent"
-                            value="revoke"
-                            className="button-quiet"
-                            aria-label={`Revoke ${token.name}`}
-                          >
-                            Revoke
-                          </button>
-                        </Form>
-                      )}
-                    </td>
-                  </tr>
-                ))
-              )}
-            </tbody>
-          </table>
-        </div>
-      </section>
+      <ApiTokensSection
+        tokens={tokens}
+        roles={user.roles}
+        lastResult={actionData?.result}
+        newToken={actionData?.newToken}
+        notice={actionData?.notice}
+      />
     </div>
   );
 }

@@ -8,11 +8,11 @@ import {
   DesignCostFigures,
   money,
   perMotorText,
-} from "~/components/design-cost-panel";
-import { DesignCostSplit } from "~/components/design-cost-split";
-import { DesignFieldsSummary } from "~/components/design-fields-form";
-import { DesignInsulationCaution } from "~/components/design-insulation-caution";
-import { DesignWarningList } from "~/components/design-line-tables";
+} from "~/components/design/cost-panel";
+import { DesignCostSplit } from "~/components/design/cost-split";
+import { DesignFieldsSummary } from "~/components/design/fields-form";
+import { DesignInsulationCaution } from "~/components/design/insulation-caution";
+import { DesignWarningList } from "~/components/design/line-tables";
 import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
 import { buildQuantity } from "~/designs/bom-csv";
 import {

@@ -1,41 +1,22 @@
 import { parseWithZod } from "@conform-to/zod/v4";
 import type { Submission } from "@conform-to/react";
-import { useCallback, useMemo, useRef, useState } from "react";
 import {
   data,
-  Link,
   redirect,
-  useFetchers,
   type ShouldRevalidateFunctionArgs,
 } from "react-router";
 import type { Route } from "./+types/design-revision";
 import { requireCapability, requireUser } from "~/auth/guard.server";
-import type { DesignActionAnswer } from "~/components/design-action-answer";
-import { DesignCostPanel, money } from "~/components/design-cost-panel";
-import { costBasisText } from "~/components/design/price-basis-note";
+import type { DesignActionAnswer } from "~/components/design/action-answer";
+import { BillOfMaterials } from "~/components/design/bill-of-materials";
+import { DesignCostPanel } from "~/components/design/cost-panel";
 import {
   DesignFieldsForm,
   DesignFieldsSummary,
-} from "~/components/design-fields-form";
-import { DesignInsulationCaution } from "~/components/design-insulation-caution";
-import {
-  CreateBuildOrderForm,
-  NewRevisionButton,
-  ReleaseControl,
-  StatusMark,
-} from "~/components/design/revision-actions";
-import {
-  DesignLineEditor,
-  type LineKind,
-} from "~/components/design-line-editor";
-import {
-  CoilLinesTable,
-  DesignWarningList,
-  MagnetLinesTable,
-  PartLinesTable,
-  type LineTableActions,
-} from "~/components/design-line-tables";
-import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
+} from "~/components/design/fields-form";
+import { PostedAnswer } from "~/components/design/posted-answer";
+import { RevisionHeader } from "~/components/design/revision-header";
+import { RevisionNav } from "~/components/design/revision-nav";
 import {
   applyLineChange,
   costQuerySearch,
@@ -44,11 +25,7 @@ import {
   readCostQuery,
   type DesignPageIntent,
 } from "~/designs/design-page";
-import {
-  loadDesignPage,
-  storedLineInputs,
-  type DesignPageLine,
-} from "~/designs/design-page.server";
+import { loadDesignPage, storedLineInputs } from "~/designs/design-page.server";
 import { designParams } from "~/designs/design-params";
 import { findRevision } from "~/designs/design-revisions.server";
 import {
@@ -60,9 +37,7 @@ import {
   startNewRevision,
   updateDraftRevision,
 } from "~/designs/designs.server";
-import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
-import { formatMass, formatSignificant } from "~/reference/quantity-display";
 import { isStockError } from "~/stock/stock-errors";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -292,111 +267,6 @@ export const meta: Route.MetaFunction = ({ data: loaderData }) => [
   },
 ];
 
-type LoaderData = Route.ComponentProps["loaderData"];
-
-/** A coil line's figures as last saved, beside its editor. */
-function EditedLineFigures({
-  loaderData,
-  position,
-}: {
-  loaderData: LoaderData;
-  position: number;
-}) {
-  const { costing } = loaderData;
-  const coil = costing.coils.find((figures) => figures.line === position);
-  const cost = costing.lines[position - 1];
-  const rows: [string, string][] = [];
-  if (coil) {
-    rows.push(
-      ["Copper per motor", formatQuantity(coil.copperLengthM, "m", 3)],
-      [
-        "Drawn from stock",
-        `${formatMass(coil.drawnMassKg)}${coil.massBasis === "bare" ? " (bare conductor)" : ""}`,
-      ],
-      [
-        "R per coil at 20 °C",
-        formatSignificant(coil.resistance20PerCoilOhm, "Ω", 4),
-      ],
-      [
-        `R per coil hot (${formatQuantity(coil.operatingTemperatureC, "°C", 0)})`,
-        formatSignificant(coil.resistancePerCoilOhm, "Ω", 4),
-      ],
-      ["Active share", formatQuantity(coil.activeShare * 100, "%", 1)],
-      [
-        "Copper loss at rated current",
-        coil.copperLossW === null
-          ? "—"
-          : formatQuantity(coil.copperLossW, "W", 2),
-      ],
-    );
-  }
-  if (cost)
-    rows.push([
-      "Line cost per motor",
-      cost.cost === null ? "no price" : money(cost.cost, costing.currency),
-    ]);
-  rows.push([
-    `Cost per motor, at the ${costBasisText(costing.basis)}`,
-    money(costing.costPerMotor, costing.currency),
-  ]);
-  return (
-    <div className="rounded-md border border-rule bg-white/70 p-3">
-      <p className="mb-1 text-xs font-semibold uppercase tracking-wide text-graphite-500">
-        Line {position} as saved
-      </p>
-      <dl className="text-sm">
-        {rows.map(([label, value]) => (
-          <div
-            key={label}
-            className="flex justify-between gap-3 border-b border-graphite-100 py-1 last:border-0"
-          >
-            <dt className="text-graphite-700">{label}</dt>
-            <dd className="text-right tabular-nums">{value}</dd>
-          </div>
-        ))}
-      </dl>
-    </div>
-  );
-}
-
-/**
- * The answer to a form sent without JavaScript (the page's forms are fetchers, whose
- * answers show beside them; a plain post lands here instead).
- */
-function PostedAnswer({ answer }: { answer: DesignActionAnswer | undefined }) {
-  if (!answer) return null;
-  const messages = answer.message
-    ? [answer.message]
-    : Object.entries(answer.result?.error ?? {}).flatMap(([name, errors]) =>
-        (errors ?? []).map((error) => (name ? `${name}: ${error}` : error)),
-      );
-  if (messages.length === 0) return null;
-  return (
-    <div
-      role={answer.ok ? "status" : "alert"}
-      className={`rounded-md border px-4 py-2 text-sm ${
-        answer.ok
-          ? "border-ok/40 bg-ok/5 text-ok"
-          : "border-danger/40 bg-danger/5 text-danger"
-      }`}
-    >
-      {answer.ok ? null : <p className="font-semibold">Nothing was changed.</p>}
-      <ul>
-        {messages.map((message) => (
-          <li key={message}>{message}</li>
-        ))}
-      </ul>
-    </div>
-  );
-}
-
-interface Editing {
-  session: number;
-  kind: LineKind;
-  /** The line's position; null while a new line is not added yet. */
-  position: number | null;
-}
-
 export default function DesignRevisionPage({
   loaderData,
   actionData,
@@ -411,177 +281,27 @@ export default function DesignRevisionPage({
     canCreateBuildOrder,
   } = loaderData;
   const draft = revision.status === "draft";
-  const editable = canEdit && draft;
   const latest = revisions[0]?.revision ?? revision.revision;
   const query = costQuerySearch(costQuery);
-  const base = `/designs/${revision.designId}/revisions/${revision.revision}`;
-
-  const sessions = useRef(0);
-  const [editing, setEditing] = useState<Editing | null>(null);
-  const startEditing = useCallback(
-    (kind: LineKind, position: number | null) => {
-      sessions.current += 1;
-      setEditing({ session: sessions.current, kind, position });
-    },
-    [],
-  );
-  const onAdded = useCallback(
-    (position: number) =>
-      setEditing((current) => (current ? { ...current, position } : current)),
-    [],
-  );
-  const close = useCallback(() => setEditing(null), []);
-  const editingLine =
-    editing?.position != null
-      ? (lines.find((line) => line.position === editing.position) ?? null)
-      : null;
-  // The line went (removed elsewhere) or the revision was released: nothing to edit.
-  const editorOpen =
-    editable &&
-    editing !== null &&
-    (editing.position === null || editingLine !== null);
-
-  const actions: LineTableActions = useMemo(
-    () => ({
-      onEdit: editable
-        ? (line: DesignPageLine) => startEditing(line.kind, line.position)
-        : null,
-      onRemove: close,
-      editingPosition: editorOpen ? (editing?.position ?? null) : null,
-    }),
-    [editable, startEditing, close, editorOpen, editing?.position],
-  );
-
-  const busy = useFetchers().some((fetcher) => fetcher.state !== "idle");
-  const coils = lines.filter((line) => line.kind === "coil");
-  const magnets = lines.filter((line) => line.kind === "magnet");
-  const parts = lines.filter((line) => line.kind === "part");
-  const warningsOf = (kind: LineKind) =>
-    costing.warnings.filter(
-      (warning) => lines[warning.line - 1]?.kind === kind,
-    );
-
-  const editor = (kind: LineKind) =>
-    editorOpen && editing?.kind === kind ? (
-      <DesignLineEditor
-        key={editing.session}
-        formId={`design-line-${editing.session}`}
-        kind={kind}
-        line={editingLine}
-        figures={
-          editingLine ? (
-            <EditedLineFigures
-              loaderData={loaderData}
-              position={editingLine.position}
-            />
-          ) : null
-        }
-        onAdded={onAdded}
-        onClose={close}
-      />
-    ) : null;
-  const addButton = (kind: LineKind, label: string) =>
-    editable &&
-    !(editorOpen && editing?.kind === kind && editing.position === null) ? (
-      <button
-        type="button"
-        className="button-quiet"
-        onClick={() => startEditing(kind, null)}
-      >
-        + {label}
-      </button>
-    ) : null;
 
   return (
     <div className="space-y-8">
       <div className="space-y-4">
-        <p className="text-sm print:hidden">
-          <Link
-            to="/designs"
-            className="text-copper-700 underline underline-offset-2"
-          >
-            ← Designs
-          </Link>
-        </p>
-        <div className="flex flex-wrap items-start justify-between gap-4">
-          <div className="min-w-0">
-            <p className="text-sm text-graphite-500">
-              Design{revision.motorType ? ` · ${revision.motorType}` : ""}
-            </p>
-            <h1 className="text-2xl font-semibold break-words">
-              {revision.name}
-            </h1>
-            <p className="mt-1 flex flex-wrap items-center gap-2 text-graphite-700">
-              <span>Revision {revision.revision}</span>
-              <StatusMark status={revision.status} />
-              <span className="text-sm text-graphite-500">
-                {revision.releasedAt
-                  ? `released ${formatDateTime(revision.releasedAt)}`
-                  : editable
-                    ? "changes are saved line by line"
-                    : "being worked on"}
-              </span>
-            </p>
-            {revision.description ? (
-              <p className="mt-2 max-w-3xl text-graphite-700">
-                {revision.description}
-              </p>
-            ) : null}
-          </div>
-          <div className="flex flex-wrap items-start gap-2 print:hidden">
-            <a
-              href={`${base}/bom.csv${query}`}
-              className="button-quiet"
-              download
-            >
-              BOM as CSV
-            </a>
-            <Link to={`${base}/print${query}`} className="button-quiet">
-              Printable BOM
-            </Link>
-            {editable ? (
-              <ReleaseControl
-                revision={revision.revision}
-                warnings={costing.warnings}
-              />
-            ) : null}
-            {canCreateBuildOrder && !draft ? (
-              <CreateBuildOrderForm
-                designId={revision.designId}
-                revision={revision.revision}
-                quantity={costQuery.quantity}
-              />
-            ) : null}
-            {canEdit && !draft && revision.revision === latest ? (
-              <NewRevisionButton next={latest + 1} />
-            ) : null}
-          </div>
-        </div>
-        <nav
-          aria-label="Revisions"
-          className="flex flex-wrap items-center gap-2 text-sm print:hidden"
-        >
-          <span className="text-graphite-500">Revisions:</span>
-          {[...revisions].reverse().map((other) =>
-            other.revision === revision.revision ? (
-              <span
-                key={other.revision}
-                aria-current="page"
-                className="rounded-md bg-graphite-800 px-2 py-0.5 font-medium text-white"
-              >
-                {other.revision} · {other.status}
-              </span>
-            ) : (
-              <Link
-                key={other.revision}
-                to={`/designs/${revision.designId}/revisions/${other.revision}${query}`}
-                className="rounded-md border border-graphite-300 px-2 py-0.5 text-copper-700 hover:border-copper-500"
-              >
-                {other.revision} · {other.status}
-              </Link>
-            ),
-          )}
-        </nav>
+        <RevisionHeader
+          revision={revision}
+          warnings={costing.warnings}
+          costQuery={costQuery}
+          query={query}
+          latest={latest}
+          canEdit={canEdit}
+          canCreateBuildOrder={canCreateBuildOrder}
+        />
+        <RevisionNav
+          designId={revision.designId}
+          current={revision.revision}
+          revisions={revisions}
+          query={query}
+        />
         <PostedAnswer answer={actionData} />
         {!draft ? (
           <p
@@ -596,73 +316,18 @@ export default function DesignRevisionPage({
         ) : null}
       </div>
 
-      {editable ? (
+      {canEdit && draft ? (
         <DesignFieldsForm revision={revision} />
       ) : (
         <DesignFieldsSummary revision={revision} />
       )}
 
-      <section aria-labelledby="lines-heading" className="space-y-8">
-        <div className="flex flex-wrap items-baseline justify-between gap-3">
-          <h2 id="lines-heading" className="text-lg font-semibold">
-            Bill of materials, per motor
-          </h2>
-          <p role="status" className="text-sm text-graphite-500">
-            {busy ? "Saving and working out the figures…" : ""}
-          </p>
-        </div>
-
-        <section aria-labelledby="coils-heading" className="space-y-3">
-          <div>
-            <h3 id="coils-heading" className="font-semibold">
-              Coils
-            </h3>
-            <p className="text-sm text-graphite-500">
-              Only the active sides lie in the field and make torque; the end
-              turns add copper, loss and cost.
-            </p>
-          </div>
-          <CoilLinesTable lines={coils} costing={costing} actions={actions} />
-          <DesignWarningList
-            warnings={warningsOf("coil")}
-            label="Checks of the coil lines"
-          />
-          {editor("coil")}
-          {addButton("coil", "Add a coil line")}
-          <DesignInsulationCaution
-            insulationClassC={revision.insulationClassC}
-          />
-        </section>
-
-        <section aria-labelledby="magnets-heading" className="space-y-3">
-          <h3 id="magnets-heading" className="font-semibold">
-            Magnets
-          </h3>
-          <MagnetLinesTable
-            lines={magnets}
-            costing={costing}
-            actions={actions}
-          />
-          <DesignWarningList
-            warnings={warningsOf("magnet")}
-            label="Checks of the magnet lines"
-          />
-          {editor("magnet")}
-          {addButton("magnet", "Add a magnet line")}
-          {magnets.length > 0 || (editorOpen && editing?.kind === "magnet") ? (
-            <MagnetHandlingCaution />
-          ) : null}
-        </section>
-
-        <section aria-labelledby="parts-heading" className="space-y-3">
-          <h3 id="parts-heading" className="font-semibold">
-            Other parts
-          </h3>
-          <PartLinesTable lines={parts} actions={actions} />
-          {editor("part")}
-          {addButton("part", "Add a part line")}
-        </section>
-      </section>
+      <BillOfMaterials
+        lines={lines}
+        costing={costing}
+        insulationClassC={revision.insulationClassC}
+        editable={canEdit && draft}
+      />
 
       <DesignCostPanel
         costing={costing}

@@ -9,7 +9,7 @@ import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/designs";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
-import { insulationClassLabel } from "~/components/design-fields-form";
+import { insulationClassLabel } from "~/components/design/fields-form";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
 import { TextAreaField } from "~/components/text-area-field";

@@ -9,7 +9,7 @@ import { Form, useFetcher } from "react-router";
 import type { DesignPageData } from "~/designs/design-page.server";
 import { designCheckNames } from "~/designs/design-checks";
 import { maxMotorsPerOrder } from "~/build-orders/build-order-requirements";
-import type { DesignActionAnswer } from "../design-action-answer";
+import type { DesignActionAnswer } from "./action-answer";
 
 type Warning = DesignPageData["costing"]["warnings"][number];
 

@@ -3,7 +3,7 @@
  * file was imported before), a link to the import, and its warnings.
  */
 import { Link } from "react-router";
-import type { PriceListImport } from "~/components/price-list-upload";
+import type { PriceListImport } from "~/components/price-import/price-list-upload";
 import { formatQuantity } from "~/lib/format";
 import { ImportWarnings } from "./import-warnings";
 

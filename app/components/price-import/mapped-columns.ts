@@ -3,7 +3,7 @@
  * what the buyer chose before, the supplier's saved mapping or the header's
  * words, and turned into the mapping the API takes. Pure.
  */
-import type { MappedColumn } from "~/components/column-mapping-editor";
+import type { MappedColumn } from "~/components/price-import/column-mapping-editor";
 import {
   suggestMapping,
   type ColumnMapping,

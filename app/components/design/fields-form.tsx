@@ -13,11 +13,11 @@ import {
   DEFAULT_POLE_COVERAGE_SOURCE,
 } from "~/designs/torque-estimate";
 import { formatQuantity } from "~/lib/format";
-import type { DesignActionAnswer } from "./design-action-answer";
-import { QuantityField } from "./quantity-field";
-import { SelectField } from "./select-field";
-import { TextAreaField } from "./text-area-field";
-import { FormMessages } from "./text-field";
+import type { DesignActionAnswer } from "./action-answer";
+import { QuantityField } from "~/components/quantity-field";
+import { SelectField } from "~/components/select-field";
+import { TextAreaField } from "~/components/text-area-field";
+import { FormMessages } from "~/components/text-field";
 
 type Revision = DesignPageData["revision"];
 

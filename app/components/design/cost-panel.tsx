@@ -10,9 +10,9 @@ import { costBasisLabels, type CostQuery } from "~/designs/design-page";
 import { formatQuantity } from "~/lib/format";
 import { countText, perUnitWord, quantityText } from "~/lib/unit-text";
 import { formatMass } from "~/reference/quantity-display";
-import { DataTable } from "./data-table";
-import { costBasisText, PriceBasisNote } from "./design/price-basis-note";
-import { DesignCostSplit } from "./design-cost-split";
+import { DataTable } from "~/components/data-table";
+import { costBasisText, PriceBasisNote } from "./price-basis-note";
+import { DesignCostSplit } from "./cost-split";
 
 type Costing = DesignPageData["costing"];
 type CostLine = Costing["lines"][number];

@@ -16,7 +16,7 @@ import {
   describeMatch,
   type PreviewRow,
 } from "~/purchasing/price-import-preview";
-import { ImportWarnings } from "./price-import/import-warnings";
+import { ImportWarnings } from "./import-warnings";
 import type { PriceListCheck } from "./price-list-upload";
 
 function sizeOrGrade(row: PriceListRow): string {

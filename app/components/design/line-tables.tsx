@@ -8,8 +8,8 @@ import type {
 import { formatQuantity } from "~/lib/format";
 import { countText, quantityText } from "~/lib/unit-text";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
-import type { DesignActionAnswer } from "./design-action-answer";
-import { DataTable } from "./data-table";
+import type { DesignActionAnswer } from "./action-answer";
+import { DataTable } from "~/components/data-table";
 
 type Costing = DesignPageData["costing"];
 export type CoilFigures = Costing["coils"][number];
@@ -200,6 +200,37 @@ interface CoilRow {
   warnings: DesignWarning[];
 }
 
+/** A coil line's wire and winding: the item, its wire, turns, strands, coils and lengths. */
+function CoilCell({ line }: { line: CoilLine }) {
+  const input = line.input;
+  if (input.kind !== "coil") return null;
+  return (
+    <div className="min-w-48">
+      <div className="font-medium">{line.itemName}</div>
+      <div className="text-xs text-graphite-500">
+        {input.sku} · {formatQuantity(line.wire.bareDiameterMm, "mm", 3)} bare ·
+        class {line.wire.thermalClassC}
+      </div>
+      <div className="mt-1 text-xs leading-5">
+        <div>
+          {countText(input.turns, "turn")} ×{" "}
+          {countText(input.strandsInHand, "strand")} ·{" "}
+          {countText(input.coilsPerMotor, "coil")}
+        </div>
+        <div>
+          active {formatQuantity(input.activeLengthMm, "mm", 1)} · end turn{" "}
+          {formatQuantity(input.endTurnLengthMm, "mm", 1)} · leads{" "}
+          {formatQuantity(input.leadLengthMm, "mm", 0)}
+        </div>
+        <div className="text-graphite-500">
+          scrap {formatQuantity(input.scrapPercent, "%", 1)} · at{" "}
+          {formatQuantity(input.operatingTemperatureC, "°C", 0)}
+        </div>
+      </div>
+    </div>
+  );
+}
+
 const coilColumn = createColumnHelper<CoilRow>();
 
 /** Coil lines with their copper figures per motor, the checks beside each. */
@@ -230,37 +261,7 @@ export function CoilLinesTable({
       coilColumn.display({
         id: "coil",
         header: "Wire and coil",
-        cell: ({ row }) => {
-          const { line } = row.original;
-          const input = line.input;
-          if (input.kind !== "coil") return null;
-          return (
-            <div className="min-w-48">
-              <div className="font-medium">{line.itemName}</div>
-              <div className="text-xs text-graphite-500">
-                {input.sku} ·{" "}
-                {formatQuantity(line.wire.bareDiameterMm, "mm", 3)} bare · class{" "}
-                {line.wire.thermalClassC}
-              </div>
-              <div className="mt-1 text-xs leading-5">
-                <div>
-                  {countText(input.turns, "turn")} ×{" "}
-                  {countText(input.strandsInHand, "strand")} ·{" "}
-                  {countText(input.coilsPerMotor, "coil")}
-                </div>
-                <div>
-                  active {formatQuantity(input.activeLengthMm, "mm", 1)} · end
-                  turn {formatQuantity(input.endTurnLengthMm, "mm", 1)} · leads{" "}
-                  {formatQuantity(input.leadLengthMm, "mm", 0)}
-                </div>
-                <div className="text-graphite-500">
-                  scrap {formatQuantity(input.scrapPercent, "%", 1)} · at{" "}
-                  {formatQuantity(input.operatingTemperatureC, "°C", 0)}
-                </div>
-              </div>
-            </div>
-          );
-        },
+        cell: ({ row }) => <CoilCell line={row.original.line} />,
       }) as ColumnDef<CoilRow, unknown>,
       coilColumn.display({
         id: "copper",

@@ -8,12 +8,15 @@ import {
   magnetLineSchema,
   partLineSchema,
 } from "~/designs/design-schemas";
-import type { DesignActionAnswer } from "./design-action-answer";
-import { CoilDrawing } from "./coil-drawing";
-import { DesignItemPicker } from "./design-item-picker";
-import { EndTurnHelper } from "./end-turn-helper";
-import { QuantityField } from "./quantity-field";
-import { FormMessages } from "./text-field";
+import { formNumber } from "~/lib/number-text";
+import type { DesignActionAnswer } from "./action-answer";
+import { CoilDrawing } from "~/components/estimators/coil-drawing";
+import { DesignItemPicker } from "./item-picker";
+import { lineItemTexts } from "./line-item-texts";
+import { LineQuantityFields } from "./line-quantity-fields";
+import { EndTurnHelper } from "~/components/estimators/end-turn-helper";
+import { QuantityField } from "~/components/quantity-field";
+import { FormMessages } from "~/components/text-field";
 
 export type LineKind = "coil" | "magnet" | "part";
 
@@ -29,11 +32,10 @@ const kindNames: Record<LineKind, string> = {
   part: "part line",
 };
 
-/** A typed number as the drawing takes it; NaN (no drawing) for anything else. */
+/** A typed number as the drawing takes it ("1,25" too); NaN (no drawing) for anything else. */
 function typedNumber(value: unknown): number {
-  return typeof value === "string" && value.trim() !== ""
-    ? Number(value.trim().replace(",", "."))
-    : Number.NaN;
+  const read = formNumber(value);
+  return typeof read === "number" ? read : Number.NaN;
 }
 
 /** What the fields start with: the line's values, or a new line's few sensible defaults. */
@@ -140,27 +142,9 @@ export function DesignLineEditor({
             <div className="sm:col-span-2">
               <DesignItemPicker
                 field={skuField}
-                label={
-                  kind === "coil"
-                    ? "Wire"
-                    : kind === "magnet"
-                      ? "Magnet"
-                      : "Item"
-                }
-                kind={
-                  kind === "coil"
-                    ? "wire"
-                    : kind === "magnet"
-                      ? "magnet"
-                      : undefined
-                }
-                hint={
-                  kind === "coil"
-                    ? "Only magnet-wire items: type part of the name or SKU."
-                    : kind === "magnet"
-                      ? "Only magnet items: type part of the grade, name or SKU."
-                      : "Any catalogue item: bearing, shaft, lamination stack …"
-                }
+                label={lineItemTexts[kind].label}
+                kind={lineItemTexts[kind].itemKind}
+                hint={lineItemTexts[kind].hint}
                 knownItem={
                   line
                     ? { sku: line.input.sku, name: line.itemName }
@@ -168,70 +152,7 @@ export function DesignLineEditor({
                 }
               />
             </div>
-            {kind === "coil" ? (
-              <>
-                <QuantityField field={field.turns!} label="Turns" />
-                <QuantityField
-                  field={field.strandsInHand!}
-                  label="Strands in hand"
-                />
-                <QuantityField
-                  field={field.activeLengthMm!}
-                  label="Active length"
-                  unit="mm"
-                  hint="Each coil side in the field"
-                />
-                <QuantityField
-                  field={field.endTurnLengthMm!}
-                  label="End-turn length"
-                  unit="mm"
-                  hint="Each of the two ends; or estimate it below"
-                />
-                <QuantityField
-                  field={field.leadLengthMm!}
-                  label="Lead length"
-                  unit="mm"
-                  hint="Each of the two leads"
-                />
-                <QuantityField
-                  field={field.coilsPerMotor!}
-                  label="Coils per motor"
-                />
-                <QuantityField
-                  field={field.scrapPercent!}
-                  label="Scrap"
-                  unit="%"
-                  hint="Drawn beyond the wound length; 2–5 % in production"
-                />
-                <QuantityField
-                  field={field.operatingTemperatureC!}
-                  label="Operating temperature"
-                  unit="°C"
-                  hint="Of the copper at the rated point"
-                  allowNegative
-                />
-              </>
-            ) : kind === "magnet" ? (
-              <>
-                <QuantityField
-                  field={field.piecesPerMotor!}
-                  label="Pieces per motor"
-                />
-                <QuantityField
-                  field={field.operatingTemperatureC!}
-                  label="Magnet temperature"
-                  unit="°C"
-                  hint="At the rated point; empty when not known (not checked)"
-                  allowNegative
-                />
-              </>
-            ) : (
-              <QuantityField
-                field={field.quantityPerMotor!}
-                label="Quantity per motor"
-                hint="In the item's unit (pcs, kg, m)"
-              />
-            )}
+            <LineQuantityFields kind={kind} field={field} />
           </div>
           <div className="flex flex-wrap items-center gap-3">
             <button type="submit" className="button-primary" disabled={busy}>

@@ -1,0 +1,55 @@
+import type { SubmissionResult } from "@conform-to/react";
+import type { Role } from "~/lib/roles";
+import { ApiTokenTable, type ApiTokenRow } from "./api-token-table";
+import { NewTokenForm } from "./new-token-form";
+
+/** The account page's API tokens: how scripts use one, a new token shown once, the form, the list. */
+export function ApiTokensSection({
+  tokens,
+  roles,
+  lastResult,
+  newToken,
+  notice,
+}: {
+  tokens: ApiTokenRow[];
+  roles: Role[];
+  /** The token form's last answer. */
+  lastResult: SubmissionResult<string[]> | null | undefined;
+  /** A token just made, shown this once. */
+  newToken: string | null | undefined;
+  /** What the last change of a token or a choice did. */
+  notice: string | null | undefined;
+}) {
+  return (
+    <section aria-labelledby="tokens-heading" className="space-y-4">
+      <h2 id="tokens-heading" className="text-lg font-semibold">
+        API tokens
+      </h2>
+      <p className="text-sm text-graphite-700">
+        Scripts and other tools call <code>/api/v1</code> with{" "}
+        <code>Authorization: Bearer &lt;token&gt;</code>. A token acts with the
+        roles you give it, and never with more than you hold.
+      </p>
+      {newToken ? (
+        <div
+          role="status"
+          className="rounded-md border border-ok/40 bg-ok/5 p-4 text-sm"
+        >
+          <p className="font-medium text-ok">
+            Copy the token now: it is shown only this once.
+          </p>
+          <code className="mt-2 block break-all rounded bg-white p-2 text-graphite-900">
+            {newToken}
+          </code>
+        </div>
+      ) : null}
+      {notice ? (
+        <p role="status" className="text-sm text-graphite-700">
+          {notice}
+        </p>
+      ) : null}
+      <NewTokenForm lastResult={lastResult} roles={roles} />
+      <ApiTokenTable tokens={tokens} />
+    </section>
+  );
+}
