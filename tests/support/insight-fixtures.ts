@@ -7,8 +7,7 @@
 import { eq, sum } from "drizzle-orm";
 import type { Page } from "playwright-core";
 import { designLines, designRevisions, metalBasePrices } from "~/db/schema";
-import { demoPassword } from "../../seed/demo-people";
-import { signIn as signInApi } from "./app-client";
+import { signInAs } from "./app-client";
 import {
   createMagnetItem,
   createPartItem,
@@ -30,7 +29,7 @@ import { testDb, uniqueCode } from "./test-database";
  * 0.5 N·m (measured).
  */
 export async function createPricedReleasedDesign() {
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
+  const buyer = await signInAs("buyer");
   const wire = await createWireItem(buyer);
   const magnet = await createMagnetItem(buyer);
   const part = await createPartItem(buyer);
