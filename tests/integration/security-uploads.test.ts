@@ -230,7 +230,8 @@ describe("an uploaded file", () => {
     }
     // Nothing of the file landed in the folders the server serves files from.
     const root = path.resolve(import.meta.dirname, "..", "..");
-    for (const folder of ["public", path.join("build", "client")]) {
+    const buildDirectory = process.env.BUILD_DIRECTORY ?? "build";
+    for (const folder of ["public", path.join(buildDirectory, "client")]) {
       const names = fs.readdirSync(path.join(root, folder), {
         recursive: true,
       }) as string[];
