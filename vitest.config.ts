@@ -14,6 +14,21 @@ export default defineConfig({
             "seed/**/*.test.ts",
             "server/**/*.test.ts",
           ],
+          // Checks against GNU units have their own project (below), so the
+          // unit tests need nothing but `npm ci`.
+          exclude: ["**/node_modules/**", "**/*.gnu-units.test.ts"],
+          environment: "node",
+        },
+      },
+      {
+        extends: true,
+        test: {
+          // Checks against GNU units (Debian package "units"), the independent
+          // reference for the AWG formula: scripts/test.ts installs units when
+          // a file of this project is in the run, and each fails, never skips,
+          // without it.
+          name: "gnu-units",
+          include: ["app/**/*.gnu-units.test.ts"],
           environment: "node",
         },
       },

@@ -54,7 +54,7 @@ import {
 import { LineErrorList } from "./line-errors";
 import { lineError, type CsvDataRow, type LineError } from "./parse-price-list";
 
-/** Matches the supplier SKU column planned for the purchasing tables. */
+/** Matches the supplier SKU columns of the purchasing tables (supplier_items, price_lines: varchar 60). */
 export const maxSupplierSkuLength = 60;
 export const maxDescriptionLength = 200;
 /** Our item SKUs (items.sku). */

@@ -1,10 +1,19 @@
 /**
  * The environment the integration and browser tests run against: the private
  * MariaDB with a fresh test database, the mail fake on test ports, and the
- * production build served on TEST_PORT. Used by vitest's global setup.
+ * production build served on TEST_PORT (built again only when its inputs
+ * changed). Used by vitest's global setup.
  */
 import { spawn, type ChildProcess } from "node:child_process";
+import fs from "node:fs";
 import path from "node:path";
+import {
+  buildInputsHash,
+  buildStamp,
+  buildStampFile,
+  builtServerFile,
+  decideBuild,
+} from "./build-inputs";
 import { migrateDatabase, seedWhenEmpty } from "./database-tasks";
 import {
   ensureLocalMariadb,
@@ -98,6 +107,42 @@ export async function startAppServer(options: {
   return { baseUrl, pid: server.pid ?? 0, running, stop };
 }
 
+/**
+ * Builds the app for production unless the build there is was made from the
+ * same inputs (scripts/lib/build-inputs.ts) or TEST_SKIP_BUILD=1 says to
+ * serve it as it is.
+ */
+async function buildWhenChanged(): Promise<void> {
+  const buildDirectory = path.resolve(
+    projectRoot,
+    process.env.BUILD_DIRECTORY ?? "build",
+  );
+  const stampFile = buildStampFile(buildDirectory);
+  const inputsHash = buildInputsHash(projectRoot, process.env);
+  const buildExists = fs.existsSync(builtServerFile(buildDirectory));
+  const decision = decideBuild({
+    skipBuild: process.env.TEST_SKIP_BUILD === "1",
+    buildExists,
+    storedStamp: fs.existsSync(stampFile)
+      ? fs.readFileSync(stampFile, "utf8").trim()
+      : null,
+    currentStamp: buildExists ? buildStamp(inputsHash, buildDirectory) : null,
+  });
+  if (!decision.build) return;
+  fs.rmSync(stampFile, { force: true });
+  await runCommand(
+    path.join(projectRoot, "node_modules", ".bin", "react-router"),
+    ["build"],
+    {
+      cwd: projectRoot,
+      stdio: ["ignore", "ignore", "inherit"],
+      // Vitest sets NODE_ENV=test; the app under test is the production build.
+      env: { ...process.env, NODE_ENV: "production" },
+    },
+  );
+  fs.writeFileSync(stampFile, `${buildStamp(inputsHash, buildDirectory)}\n`);
+}
+
 export async function startTestEnvironment(): Promise<TestEnvironment> {
   let databaseUrl = process.env.TEST_DATABASE_URL;
   if (!databaseUrl) {
@@ -116,18 +161,7 @@ export async function startTestEnvironment(): Promise<TestEnvironment> {
   process.env.SMTP_URL = `smtp://127.0.0.1:${mailFake.smtpPort}`;
   await seedWhenEmpty(databaseUrl, { quiet: true });
 
-  if (process.env.TEST_SKIP_BUILD !== "1") {
-    await runCommand(
-      path.join(projectRoot, "node_modules", ".bin", "react-router"),
-      ["build"],
-      {
-        cwd: projectRoot,
-        stdio: ["ignore", "ignore", "inherit"],
-        // Vitest sets NODE_ENV=test; the app under test is the production build.
-        env: { ...process.env, NODE_ENV: "production" },
-      },
-    );
-  }
+  await buildWhenChanged();
   const port = Number(process.env.TEST_PORT ?? 3100);
   const app = await startAppServer({
     port,

@@ -1,7 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { signIn as signInApi } from "../support/app-client";
+import { signInAs } from "../support/app-client";
 import {
   createMagnetItem,
   createWireItem,
@@ -26,11 +25,8 @@ let wireSku = "";
 let magnetSku = "";
 beforeAll(async () => {
   browser = await launchBrowser();
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
-  const storekeeper = await signInApi(
-    "storekeeper@turnledger.test",
-    demoPassword(),
-  );
+  const buyer = await signInAs("buyer");
+  const storekeeper = await signInAs("storekeeper");
   const rack = await createLocation(uniqueCode("WR"), "Wire rack for builds");
   const drawer = await createLocation(uniqueCode("MD"), "Magnet drawer");
   const wire = await createWireItem(buyer);

@@ -7,8 +7,7 @@
  */
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { sendJson, signIn as signInApi } from "../support/app-client";
+import { sendJson, signInAs } from "../support/app-client";
 import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
 import { readable, waitForText } from "../support/page-text";
 import {
@@ -25,11 +24,8 @@ const designName = `E2E outrunner ${uniqueCode("D")}`;
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
-  const storekeeper = await signInApi(
-    "storekeeper@turnledger.test",
-    demoPassword(),
-  );
+  const buyer = await signInAs("buyer");
+  const storekeeper = await signInAs("storekeeper");
   wireSku = uniqueCode("EW");
   magnetSku = uniqueCode("EM");
   for (const item of [

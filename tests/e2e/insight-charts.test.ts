@@ -8,8 +8,7 @@
 import path from "node:path";
 import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, signIn as signInApi } from "../support/app-client";
+import { baseUrl, signInAs } from "../support/app-client";
 import {
   launchBrowser,
   saveScreenshot,
@@ -47,7 +46,7 @@ function daysAgo(days: number): string {
 beforeAll(async () => {
   browser = await launchBrowser();
   ({ designName: pricedName } = await createPricedReleasedDesign());
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
+  const buyer = await signInAs("buyer");
   const magnet = await createMagnetItem(buyer);
   const part = await createPartItem(buyer);
   const unpriced = await createPartItem(buyer, "pcs", "Shaft seal, no quote");

@@ -1,7 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, sendJson, signIn as signInApi } from "../support/app-client";
+import { baseUrl, sendJson, signInAs } from "../support/app-client";
 import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
 import {
   closeTestDatabase,
@@ -13,7 +12,7 @@ let browser: Browser;
 let buyer = "";
 beforeAll(async () => {
   browser = await launchBrowser();
-  buyer = await signInApi("buyer@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
 });
 afterAll(async () => {
   await browser?.close();

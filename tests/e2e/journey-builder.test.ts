@@ -9,9 +9,8 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { formatQuantity } from "~/lib/format";
-import { demoPassword } from "../../seed/demo-people";
 import { scanPage } from "../support/accessibility";
-import { signIn as signInApi } from "../support/app-client";
+import { signInAs } from "../support/app-client";
 import { launchBrowser, saveScreenshot } from "../support/browser";
 import {
   createMagnetItem,
@@ -42,11 +41,8 @@ const magnetCostEach = 0.9;
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
-  const storekeeper = await signInApi(
-    "storekeeper@turnledger.test",
-    demoPassword(),
-  );
+  const buyer = await signInAs("buyer");
+  const storekeeper = await signInAs("storekeeper");
   const wire = await createWireItem(buyer);
   const magnet = await createMagnetItem(buyer);
   wireSku = wire.sku;

@@ -10,7 +10,7 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoPassword } from "../../seed/demo-people";
-import { sendJson, signIn as signInApi } from "../support/app-client";
+import { sendJson, signIn as signInApi, signInAs } from "../support/app-client";
 import { scanPage } from "../support/accessibility";
 import { launchBrowser, saveScreenshot } from "../support/browser";
 import { followLink, mainLink, signInByKeyboard } from "../support/journey";
@@ -54,7 +54,7 @@ const newcomer = `Borealis Insulation ${uniqueCode("B")}`;
 beforeAll(async () => {
   browser = await launchBrowser();
   const buyer = await signInApi(buyerEmail, demoPassword());
-  storekeeper = await signInApi("storekeeper@turnledger.test", demoPassword());
+  storekeeper = await signInAs("storekeeper");
   for (const [item, reorderPoint] of [
     [wedge, 10],
     [sleeve, 0],

@@ -9,8 +9,7 @@
 import Papa from "papaparse";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { signIn as signInApi } from "../support/app-client";
+import { signInAs } from "../support/app-client";
 import { scanPage } from "../support/accessibility";
 import { launchBrowser, saveScreenshot } from "../support/browser";
 import { receive } from "../support/build-order-fixtures";
@@ -39,16 +38,13 @@ beforeAll(async () => {
   browser = await launchBrowser();
   design = await createPricedReleasedDesign();
   // 2.5 kg of the design's wire on a spool at 14.00 EUR/kg: 35.00 EUR in stock.
-  await receive(
-    await signInApi("storekeeper@turnledger.test", demoPassword()),
-    {
-      sku: design.wire.sku,
-      lot: "SP-J1",
-      location: await createLocation(uniqueCode("JM")),
-      quantity: 2.5,
-      unitCost: 14,
-    },
-  );
+  await receive(await signInAs("storekeeper"), {
+    sku: design.wire.sku,
+    lot: "SP-J1",
+    location: await createLocation(uniqueCode("JM")),
+    quantity: 2.5,
+    unitCost: 14,
+  });
 });
 afterAll(async () => {
   await browser?.close();

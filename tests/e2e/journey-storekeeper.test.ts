@@ -9,9 +9,8 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
-import { demoPassword } from "../../seed/demo-people";
 import { scanPage } from "../support/accessibility";
-import { sendJson, signIn as signInApi } from "../support/app-client";
+import { sendJson, signInAs } from "../support/app-client";
 import { launchBrowser, saveScreenshot } from "../support/browser";
 import {
   createMagnetItem,
@@ -51,8 +50,8 @@ const designName = uniqueCode("Journey hub motor");
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
-  builder = await signInApi("builder@turnledger.test", demoPassword());
+  const buyer = await signInAs("buyer");
+  builder = await signInAs("builder");
   rack = await createLocation(uniqueCode("JR"), "Journey wire rack");
   drawer = await createLocation(uniqueCode("JD"), "Journey magnet drawer");
   const wire = await createWireItem(buyer);

@@ -5,8 +5,7 @@
  */
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { sendJson, signIn as signInApi } from "../support/app-client";
+import { sendJson, signInAs } from "../support/app-client";
 import {
   launchBrowser,
   saveScreenshot,
@@ -23,7 +22,7 @@ let shaft = "";
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  buyer = await signInApi("buyer@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
   bearing = uniqueCode("BRG");
   shaft = uniqueCode("SHF");
   for (const [sku, name] of [

@@ -9,8 +9,7 @@ import os from "node:os";
 import path from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { sendJson, signIn as signInApi } from "../support/app-client";
+import { sendJson, signInAs } from "../support/app-client";
 import {
   launchBrowser,
   saveScreenshot,
@@ -24,7 +23,7 @@ let supplier = "";
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
+  const buyer = await signInAs("buyer");
   supplier = `Kupferdraht Nord ${uniqueCode("E2E")}`;
   const created = await sendJson(
     "POST",

@@ -1,6 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { baseUrl } from "../support/app-client";
+import { baseUrl, newPerson } from "../support/app-client";
 import {
   launchBrowser,
   saveScreenshot,
@@ -37,9 +37,7 @@ async function recordAnImport(): Promise<string> {
   const [magnets] = await database.query(
     "SELECT id FROM items WHERE unit = 'pcs' LIMIT 1",
   );
-  const [buyers] = await database.query(
-    "SELECT id FROM users WHERE email = 'buyer@turnledger.test'",
-  );
+  const importer = await newPerson("buyer");
   const [imported] = await database.query(
     "INSERT INTO price_imports (supplier_id, file_name, file_sha256, row_count, created_items, mapping, user_id, created_at) VALUES (?, ?, SHA2(?, 256), 3, 1, ?, ?, UTC_TIMESTAMP(3))",
     [
@@ -53,7 +51,7 @@ async function recordAnImport(): Promise<string> {
         minQuantity: "From qty",
         validFrom: "Valid from",
       }),
-      (buyers as { id: string }[])[0]!.id,
+      importer.id,
     ],
   );
   const importId = (imported as { insertId: number }).insertId;

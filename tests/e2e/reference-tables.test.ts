@@ -1,6 +1,7 @@
 import { randomBytes } from "node:crypto";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { newPerson } from "../support/app-client";
 import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
 
 let browser: Browser;
@@ -168,7 +169,8 @@ describe("reference tables", () => {
   });
 
   it("an admin adds a grade: field messages first, then the row and the estimator offer it", async () => {
-    const page = await signIn(browser, "admin");
+    const admin = await newPerson("admin", "Orla Brenning");
+    const page = await signIn(browser, admin);
     await openReference(page, "Magnet grades");
     const form = page.getByRole("region", { name: "Add a magnet grade" });
     await expect(form.textContent()).resolves.toContain(
@@ -222,7 +224,7 @@ describe("reference tables", () => {
     const added = await text(row.first());
     expect(added).toContain("1.30–1.34 T");
     expect(added).toContain("−0.110 %/K");
-    expect(added).toContain("Added by Maren Holt");
+    expect(added).toContain(`Added by ${admin.name}`);
     expect(await form.getByLabel("Grade name").inputValue()).toBe("");
     await saveScreenshot(page, "reference-add-grade-done");
 

@@ -8,8 +8,7 @@
  */
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { sendJson, signIn as signInOverHttp } from "../support/app-client";
+import { sendJson, signInAs } from "../support/app-client";
 import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
 import {
   closeTestDatabase,
@@ -23,15 +22,9 @@ let designId = 0;
 
 let browser: Browser;
 beforeAll(async () => {
-  const buyer = await signInOverHttp("buyer@turnledger.test", demoPassword());
-  const storekeeper = await signInOverHttp(
-    "storekeeper@turnledger.test",
-    demoPassword(),
-  );
-  const builder = await signInOverHttp(
-    "builder@turnledger.test",
-    demoPassword(),
-  );
+  const buyer = await signInAs("buyer");
+  const storekeeper = await signInAs("storekeeper");
+  const builder = await signInAs("builder");
   const item = await sendJson(
     "POST",
     "/api/v1/items",

@@ -2,7 +2,13 @@ import fs from "node:fs";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { roles } from "~/lib/roles";
-import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
+import { newPerson } from "../support/app-client";
+import {
+  demoPerson,
+  launchBrowser,
+  saveScreenshot,
+  signIn,
+} from "../support/browser";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -15,7 +21,8 @@ afterAll(async () => {
 describe("each demo role signs in and sees its own navigation", () => {
   for (const role of roles) {
     it(role, async () => {
-      const page = await signIn(browser, role);
+      // The seeded demo people: the ones a first `npm start` offers.
+      const page = await signIn(browser, demoPerson(role));
       const navigation = page.getByRole("navigation", { name: "Main" });
       const links = await navigation.getByRole("link").allTextContents();
       if (role === "admin") {
@@ -83,17 +90,16 @@ describe("each demo role signs in and sees its own navigation", () => {
   }
 
   it("a wrong password shows the one message and keeps the e-mail typed", async () => {
+    const buyer = await newPerson("buyer");
     const page = await browser.newPage();
     await page.goto(`${(await import("vitest")).inject("baseUrl")}/sign-in`);
-    await page.getByLabel("E-mail").fill("buyer@turnledger.test");
+    await page.getByLabel("E-mail").fill(buyer.email);
     await page.getByLabel("Password").fill("not-the-password");
     await page.getByRole("button", { name: "Sign in" }).click();
     await expect(page.getByRole("alert").textContent()).resolves.toContain(
       "E-mail or password is wrong.",
     );
-    expect(await page.getByLabel("E-mail").inputValue()).toBe(
-      "buyer@turnledger.test",
-    );
+    expect(await page.getByLabel("E-mail").inputValue()).toBe(buyer.email);
     await saveScreenshot(page, "sign-in-wrong-password");
     await page.close();
   });

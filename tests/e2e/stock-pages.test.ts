@@ -1,7 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, sendJson, signIn as signInApi } from "../support/app-client";
+import { baseUrl, sendJson, signInAs } from "../support/app-client";
 import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
 import {
   closeTestDatabase,
@@ -14,11 +13,9 @@ let storekeeper = "";
 let store = "";
 beforeAll(async () => {
   browser = await launchBrowser();
-  storekeeper = await signInApi("storekeeper@turnledger.test", demoPassword());
+  storekeeper = await signInAs("storekeeper");
   store = await createLocation(uniqueCode("BS"), "Main store, rack B");
-  await stockSomeItems(
-    await signInApi("buyer@turnledger.test", demoPassword()),
-  );
+  await stockSomeItems(await signInAs("buyer"));
 });
 afterAll(async () => {
   await browser?.close();

@@ -7,9 +7,8 @@
 import fs from "node:fs";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import { seriousAccessibilityViolations } from "../support/accessibility";
-import { get, sendJson, signIn as signInApi } from "../support/app-client";
+import { get, sendJson, signInAs } from "../support/app-client";
 import {
   createPartItem,
   createWireItem,
@@ -41,10 +40,10 @@ const shots = "/work/notes/shots";
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
-  const builder = await signInApi("builder@turnledger.test", demoPassword());
-  storekeeper = await signInApi("storekeeper@turnledger.test", demoPassword());
-  manager = await signInApi("manager@turnledger.test", demoPassword());
+  const buyer = await signInAs("buyer");
+  const builder = await signInAs("builder");
+  storekeeper = await signInAs("storekeeper");
+  manager = await signInAs("manager");
   backRack = await createLocation(uniqueCode("ZZ"), "Back rack");
   frontRack = await createLocation(uniqueCode("AA"), "Front rack");
   wire = await createWireItem(buyer);

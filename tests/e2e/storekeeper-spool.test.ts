@@ -1,7 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { sendJson, signIn as signInApi } from "../support/app-client";
+import { sendJson, signInAs } from "../support/app-client";
 import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
 import {
   closeTestDatabase,
@@ -19,7 +18,7 @@ beforeAll(async () => {
     "Test rack for the spool journey",
   );
   sku = uniqueCode("CU");
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
+  const buyer = await signInAs("buyer");
   const created = await sendJson(
     "POST",
     "/api/v1/items",

@@ -8,8 +8,7 @@
  */
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, sendJson, signIn as signInApi } from "../support/app-client";
+import { baseUrl, newPerson, sendJson, signInAs } from "../support/app-client";
 import {
   launchBrowser,
   saveScreenshot,
@@ -32,7 +31,7 @@ let savedEuroBase: { price_per_kg: string } | undefined;
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  buyerCookie = await signInApi("buyer@turnledger.test", demoPassword());
+  buyerCookie = await signInAs("buyer");
   const [rows] = await testDatabase().query(
     "SELECT price_per_kg FROM metal_base_prices WHERE conductor = 'copper' AND currency = 'EUR' AND valid_from = ?",
     [today],
@@ -192,12 +191,10 @@ describe("the supplier form and page", () => {
     const name = `Import mill ${uniqueCode("I")}`;
     const supplierId = await createSupplier(buyerCookie, name);
     const fileName = `${uniqueCode("list")}.csv`;
-    const [buyers] = await testDatabase().query(
-      "SELECT id FROM users WHERE email = 'buyer@turnledger.test'",
-    );
+    const importer = await newPerson("buyer");
     await testDatabase().query(
       "INSERT INTO price_imports (supplier_id, file_name, file_sha256, row_count, created_items, mapping, user_id, created_at) VALUES (?, ?, SHA2(?, 256), 4, 0, '{}', ?, UTC_TIMESTAMP(3))",
-      [supplierId, fileName, fileName, (buyers as { id: string }[])[0]!.id],
+      [supplierId, fileName, fileName, importer.id],
     );
     const page = await signIn(browser, "manager");
     await page.goto(`${baseUrl()}/suppliers/${supplierId}`);

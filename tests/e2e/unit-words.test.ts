@@ -6,8 +6,7 @@
 import fs from "node:fs";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { sendJson, signIn as signInApi } from "../support/app-client";
+import { sendJson, signInAs } from "../support/app-client";
 import { createMagnetItem, receive } from "../support/build-order-fixtures";
 import { launchBrowser, signIn, waitForHydration } from "../support/browser";
 import { createDesign } from "../support/design-fixtures";
@@ -42,12 +41,9 @@ async function open(path: string, shot: string): Promise<string> {
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
-  const builder = await signInApi("builder@turnledger.test", demoPassword());
-  const storekeeper = await signInApi(
-    "storekeeper@turnledger.test",
-    demoPassword(),
-  );
+  const buyer = await signInAs("buyer");
+  const builder = await signInAs("builder");
+  const storekeeper = await signInAs("storekeeper");
   const shelf = await createLocation(uniqueCode("PW"), "Magnet shelf");
   magnet = await createMagnetItem(buyer);
   // One magnet on the shelf at 0.85 a piece.

@@ -4,8 +4,7 @@
  * outbox and the SMTP fake. The start page shows a buyer how many alerts are open.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { get, sendJson, signIn } from "../support/app-client";
+import { get, sendJson, signInAs, uniqueEmail } from "../support/app-client";
 import { waitForMessage } from "../support/mail-fake-client";
 import {
   createSupplier,
@@ -14,6 +13,7 @@ import {
 import {
   closeTestDatabase,
   createLocation,
+  createPerson,
   testDatabase,
   uniqueCode,
 } from "../support/test-database";
@@ -21,10 +21,17 @@ import {
 let buyer = "";
 let storekeeper = "";
 let location = "";
+/** A buyer who chose nothing, so hears of each alert (the default for buyers). */
+const listener = uniqueEmail("alert-buyer");
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
+  await createPerson({
+    email: listener,
+    roles: ["buyer"],
+    password: "alert-buyer-password",
+  });
+  buyer = await signInAs("buyer");
+  storekeeper = await signInAs("storekeeper");
   location = await createLocation(uniqueCode("AP"));
 });
 afterAll(async () => {
@@ -117,7 +124,7 @@ describe("the low-stock e-mail and the item page", () => {
     // 12 − 5 = 7 < 10: the alert opens; the suggested order is the shortfall, 10 − 7 = 3 pcs.
     await move({ type: "issue", sku, quantity: 5 });
     const mail = await waitForMessage(
-      "buyer@turnledger.test",
+      listener,
       new RegExp(`Low stock: ${sku} `),
     );
     expect(mail.text).toContain("Suggested order: 3 pieces");
@@ -139,7 +146,7 @@ describe("the low-stock e-mail and the item page", () => {
     // 10 − 0.5 = 9.5 < 10: suggested order 0.5 kg, below the 1 kg break.
     await move({ type: "issue", sku, quantity: 0.5 });
     const mail = await waitForMessage(
-      "buyer@turnledger.test",
+      listener,
       new RegExp(`Low stock: ${sku} `),
     );
     expect(mail.text).toContain("Suggested order: 0.500 kg");
@@ -169,7 +176,7 @@ describe("the start page", () => {
         `<a[^>]*href="/alerts"[^>]*>\\s*<span[^>]*>${open}</span>\\s*<span[^>]*>open low-stock alerts?</span>`,
       ),
     );
-    const builder = await signIn("builder@turnledger.test", demoPassword());
+    const builder = await signInAs("builder");
     expect(await (await get("/", builder)).text()).not.toContain(
       "open low-stock alert",
     );

@@ -4,14 +4,13 @@
  * take is a 405, both as `{ error: { message } }`, never the HTML error page.
  */
 import { beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, signIn } from "../support/app-client";
+import { baseUrl, signInAs } from "../support/app-client";
 
 const methods = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE"] as const;
 
 let cookie = "";
 beforeAll(async () => {
-  cookie = await signIn("manager@turnledger.test", demoPassword());
+  cookie = await signInAs("manager");
 });
 
 function ask(

@@ -13,10 +13,16 @@ import path from "node:path";
 import mysql from "mysql2/promise";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { poolOptionsFromUrl } from "~/db/connection-options";
-import { demoPassword } from "../../seed/demo-people";
 import { appServerArguments } from "../../scripts/lib/app-server-process";
 import { urlForDatabase } from "../../scripts/lib/mariadb-client-login";
-import { sendJson, sessionCookieFrom, signIn } from "../support/app-client";
+import {
+  newPerson,
+  sendJson,
+  sessionCookieFrom,
+  signIn,
+  signInAs,
+  type TestPerson,
+} from "../support/app-client";
 import {
   closeTestDatabase,
   createLocation,
@@ -34,11 +40,17 @@ const backupFolder = fs.mkdtempSync(
 
 let buyer = "";
 let storekeeper = "";
+/** The storekeeper's sign-in, made before the backup, so the restored database holds them too. */
+let storekeeperPerson: TestPerson;
 let store = "";
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  storekeeperPerson = await newPerson("storekeeper");
+  storekeeper = await signIn(
+    storekeeperPerson.email,
+    storekeeperPerson.password,
+  );
   store = await createLocation(uniqueCode("BK"));
 });
 afterAll(async () => {
@@ -251,8 +263,8 @@ describe("the restore drill", () => {
         method: "POST",
         headers: { "Content-Type": "application/json", Origin: origin },
         body: JSON.stringify({
-          email: "storekeeper@turnledger.test",
-          password: demoPassword(),
+          email: storekeeperPerson.email,
+          password: storekeeperPerson.password,
         }),
       });
       expect(signedIn.status).toBe(200);

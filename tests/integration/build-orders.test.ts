@@ -5,8 +5,7 @@
  * roles, bad input, and many builders reserving the same stock at once.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, get, sendJson, signIn } from "../support/app-client";
+import { baseUrl, get, sendJson, signInAs } from "../support/app-client";
 import {
   createMagnetItem,
   createPartItem,
@@ -31,8 +30,6 @@ let rackA = "";
 let rackB = "";
 
 beforeAll(async () => {
-  const signInAs = (role: string) =>
-    signIn(`${role}@turnledger.test`, demoPassword());
   buyer = await signInAs("buyer");
   builder = await signInAs("builder");
   storekeeper = await signInAs("storekeeper");

@@ -6,8 +6,7 @@
  * (2026, 2031) meet these.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { get, sendJson, signIn } from "../support/app-client";
+import { get, sendJson, signInAs } from "../support/app-client";
 import {
   createMagnetItem,
   createPartItem,
@@ -139,9 +138,9 @@ async function tableCounts() {
 }
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  manager = await signIn("manager@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  manager = await signInAs("manager");
+  storekeeper = await signInAs("storekeeper");
   wire = await createWireItem(buyer);
   magnet = await createMagnetItem(buyer);
   part = await createPartItem(buyer);

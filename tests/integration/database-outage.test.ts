@@ -7,6 +7,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { inject } from "vitest";
 import { startAppServer } from "../../scripts/lib/test-environment";
+import { newPerson } from "../support/app-client";
 import { DatabaseRelay } from "../support/database-relay";
 
 // Ports follow the run's own TEST_PORT, so a second run beside this one gets others.
@@ -30,12 +31,13 @@ beforeAll(async () => {
     databaseUrl: relayedUrl.toString(),
     smtpUrl: inject("smtpUrl"),
   });
+  const manager = await newPerson("manager");
   const response = await fetch(`${app.baseUrl}/api/v1/sessions`, {
     method: "POST",
     headers: { "Content-Type": "application/json" },
     body: JSON.stringify({
-      email: "manager@turnledger.test",
-      password: process.env.DEMO_PASSWORD || "turnledger-demo",
+      email: manager.email,
+      password: manager.password,
     }),
   });
   expect(response.status).toBe(200);

@@ -14,7 +14,6 @@ import { drizzle } from "drizzle-orm/mysql2";
 import { migrate } from "drizzle-orm/mysql2/migrator";
 import mysql from "mysql2/promise";
 import { afterAll, describe, expect, inject, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import { appServerArguments } from "../../scripts/lib/app-server-process";
 import {
   connectAsRoot,
@@ -29,8 +28,8 @@ import {
   get,
   postForm,
   sessionCookieFrom,
-  signIn,
   uniqueEmail,
+  signInAs,
 } from "../support/app-client";
 import { receivedMessages, waitForMessage } from "../support/mail-fake-client";
 import { rawRequest } from "../support/raw-http";
@@ -241,7 +240,7 @@ describe("a request no route can answer", () => {
 
 describe("answers for signed-in people", () => {
   it("are never stored by a browser or proxy", async () => {
-    const cookie = await signIn("storekeeper@turnledger.test", demoPassword());
+    const cookie = await signInAs("storekeeper");
     for (const pathAndQuery of ["/stock", "/stock.data", "/api/v1/items"]) {
       const answer = await get(pathAndQuery, cookie);
       expect(answer.status, pathAndQuery).toBe(200);

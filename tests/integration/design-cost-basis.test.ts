@@ -5,8 +5,7 @@
  * query. Real HTTP against the built app and the test database.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { get, signIn } from "../support/app-client";
+import { get, signInAs } from "../support/app-client";
 import { createPricedReleasedDesign } from "../support/insight-fixtures";
 import { closeTestDatabase, testDatabase } from "../support/test-database";
 
@@ -15,7 +14,7 @@ let designId = 0;
 let revisionId = 0;
 
 beforeAll(async () => {
-  manager = await signIn("manager@turnledger.test", demoPassword());
+  manager = await signInAs("manager");
   ({ designId } = await createPricedReleasedDesign());
   const [rows] = await testDatabase().query(
     "SELECT id FROM design_revisions WHERE design_id = ? AND revision = 1",

@@ -5,8 +5,7 @@
  * message, and the BOM CSV export with its formulas neutralised.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { get, postForm, sendJson, signIn } from "../support/app-client";
+import { get, postForm, sendJson, signInAs } from "../support/app-client";
 import {
   createMagnetItem,
   createPartItem,
@@ -31,10 +30,10 @@ let currency = "";
 const trickyName = '=HYPERLINK("http://example.test","open me")';
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  builder = await signIn("builder@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
-  manager = await signIn("manager@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  builder = await signInAs("builder");
+  storekeeper = await signInAs("storekeeper");
+  manager = await signInAs("manager");
   wireSku = (await createWireItem(buyer)).sku;
   magnetSku = (await createMagnetItem(buyer)).sku;
   trickySku = (await createPartItem(buyer, "pcs", trickyName)).sku;

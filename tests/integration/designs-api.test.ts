@@ -5,8 +5,7 @@
  * never meet these.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { get, sendJson, signIn } from "../support/app-client";
+import { get, sendJson, signInAs } from "../support/app-client";
 import {
   createMagnetItem,
   createPartItem,
@@ -33,9 +32,9 @@ async function created(response: Response) {
 }
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  builder = await signIn("builder@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  builder = await signInAs("builder");
+  storekeeper = await signInAs("storekeeper");
   wireSku = (await createWireItem(buyer)).sku;
   magnetSku = (await createMagnetItem(buyer)).sku;
   partSku = (await createPartItem(buyer, "pcs", "Bearing 608-2RS")).sku;

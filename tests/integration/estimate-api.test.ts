@@ -1,10 +1,9 @@
 import { beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { get, sendJson, signIn } from "../support/app-client";
+import { get, sendJson, signInAs } from "../support/app-client";
 
 let cookie = "";
 beforeAll(async () => {
-  cookie = await signIn("builder@turnledger.test", demoPassword());
+  cookie = await signInAs("builder");
 });
 
 const post = (path: string, body: unknown) =>

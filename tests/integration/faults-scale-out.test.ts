@@ -6,12 +6,12 @@
  * in MariaDB, so none of this depends on which process answers.
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import {
   startAppServer,
   type AppServer,
 } from "../../scripts/lib/test-environment";
-import { uniqueEmail } from "../support/app-client";
+import type { Role } from "~/lib/roles";
+import { newPerson, uniqueEmail } from "../support/app-client";
 import {
   createPartItem,
   receive,
@@ -104,8 +104,10 @@ describe("two app processes on one database", () => {
   });
 
   it("reservations sent to both at once never hold more than is on hand; each order holds all its lines or nothing", async () => {
-    const signInAs = (role: string) =>
-      one.signIn(`${role}@turnledger.test`, demoPassword());
+    const signInAs = async (role: Role) => {
+      const person = await newPerson(role);
+      return one.signIn(person.email, person.password);
+    };
     const buyer = await signInAs("buyer");
     const storekeeper = await signInAs("storekeeper");
     const builder = await signInAs("builder");

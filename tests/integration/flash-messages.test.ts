@@ -6,14 +6,13 @@
  * `?created=` or `?added=`, or a cookie made by hand, shows nothing.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import {
   flashCookieFrom,
   followRedirect,
   get,
   postForm,
   sendJson,
-  signIn,
+  signInAs,
 } from "../support/app-client";
 import {
   closeTestDatabase,
@@ -27,9 +26,9 @@ let storekeeper = "";
 let manager = "";
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
-  manager = await signIn("manager@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  storekeeper = await signInAs("storekeeper");
+  manager = await signInAs("manager");
 });
 afterAll(closeTestDatabase);
 

@@ -1,7 +1,6 @@
 /** An item's price history: two imported price lists, read back through the API and the item page. */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, get, sendJson, signIn } from "../support/app-client";
+import { baseUrl, get, sendJson, signInAs } from "../support/app-client";
 import {
   closeTestDatabase,
   testDatabase,
@@ -12,8 +11,8 @@ let buyer = "";
 let storekeeper = "";
 let supplier = "";
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  storekeeper = await signInAs("storekeeper");
   supplier = `History bearings ${uniqueCode("S")}`;
   const created = await sendJson(
     "POST",

@@ -4,13 +4,12 @@
  * that a plain form post changes nothing.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import {
   baseUrl,
   get,
   postForm,
   sendJson,
-  signIn,
+  signInAs,
 } from "../support/app-client";
 import { closeTestDatabase, uniqueCode } from "../support/test-database";
 
@@ -18,8 +17,14 @@ const cookies: Record<string, string> = {};
 let supplier = "";
 
 beforeAll(async () => {
-  for (const role of ["buyer", "admin", "storekeeper", "builder", "manager"])
-    cookies[role] = await signIn(`${role}@turnledger.test`, demoPassword());
+  for (const role of [
+    "buyer",
+    "admin",
+    "storekeeper",
+    "builder",
+    "manager",
+  ] as const)
+    cookies[role] = await signInAs(role);
   supplier = `Page test winding wire ${uniqueCode("PI")}`;
   const created = await sendJson(
     "POST",

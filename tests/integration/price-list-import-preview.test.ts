@@ -5,8 +5,7 @@
  * warnings for a currency without a rate or a wire list without a metal base.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, sendJson, signIn } from "../support/app-client";
+import { baseUrl, sendJson, signInAs } from "../support/app-client";
 import { createSupplier } from "../support/price-list-fixtures";
 import {
   closeTestDatabase,
@@ -20,7 +19,7 @@ let bearing = "";
 let shaft = "";
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
   supplier = `Preview test supplier ${uniqueCode("S")}`;
   await createSupplier(buyer, supplier, "EUR");
   bearing = uniqueCode("BRG");

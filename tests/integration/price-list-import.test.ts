@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, sendJson, signIn } from "../support/app-client";
+import { baseUrl, sendJson, signInAs } from "../support/app-client";
 import {
   closeTestDatabase,
   testDatabase,
@@ -10,7 +9,7 @@ import {
 let buyer = "";
 let supplier = "";
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
   supplier = `Test wire mill ${uniqueCode("S")}`;
   const created = await sendJson(
     "POST",
@@ -245,8 +244,8 @@ describe("price-list import", () => {
   });
 
   it("lets only buyers and admins import", async () => {
-    for (const role of ["storekeeper", "builder", "manager"]) {
-      const cookie = await signIn(`${role}@turnledger.test`, demoPassword());
+    for (const role of ["storekeeper", "builder", "manager"] as const) {
+      const cookie = await signInAs(role);
       expect((await upload(good(), { cookie })).status).toBe(403);
     }
   });
@@ -266,10 +265,7 @@ describe("metal base", () => {
       buyer,
     );
     expect(put.status).toBe(200);
-    const storekeeper = await signIn(
-      "storekeeper@turnledger.test",
-      demoPassword(),
-    );
+    const storekeeper = await signInAs("storekeeper");
     expect(
       (
         await sendJson(

@@ -4,8 +4,7 @@
  * supplier's SKU to them; a wrong SKU or kind is an invalid line, nothing written.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, get, sendJson, signIn } from "../support/app-client";
+import { baseUrl, get, sendJson, signInAs } from "../support/app-client";
 import {
   closeTestDatabase,
   testDatabase,
@@ -18,7 +17,7 @@ let bearing = "";
 let magnet = "";
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
   supplier = `Our-SKU test supplier ${uniqueCode("S")}`;
   expect(
     (

@@ -1,12 +1,12 @@
 /** The suppliers, prices and past-imports pages and the currency-rates API, over HTTP. */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import {
   followRedirect,
   get,
+  newPerson,
   postForm,
   sendJson,
-  signIn,
+  signInAs,
 } from "../support/app-client";
 import {
   closeTestDatabase,
@@ -16,8 +16,8 @@ import {
 
 const cookies: Record<string, string> = {};
 beforeAll(async () => {
-  for (const role of ["buyer", "storekeeper", "manager", "admin"]) {
-    cookies[role] = await signIn(`${role}@turnledger.test`, demoPassword());
+  for (const role of ["buyer", "storekeeper", "manager", "admin"] as const) {
+    cookies[role] = await signInAs(role);
   }
 });
 afterAll(closeTestDatabase);
@@ -352,9 +352,7 @@ describe("/suppliers/imports", () => {
     const [[wire], [magnet], [buyer]] = (await Promise.all([
       database.query("SELECT id, sku FROM items WHERE unit = 'kg' LIMIT 1"),
       database.query("SELECT id, sku FROM items WHERE unit = 'pcs' LIMIT 1"),
-      database.query(
-        "SELECT id FROM users WHERE email = 'buyer@turnledger.test'",
-      ),
+      newPerson("buyer").then((person) => [[{ id: person.id }]]),
     ]).then((results) => results.map(([rows]) => rows))) as [
       { id: number; sku: string }[],
       { id: number; sku: string }[],

@@ -9,13 +9,12 @@
 import { randomBytes } from "node:crypto";
 import http from "node:http";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import {
   baseUrl,
   get,
   postForm,
   sendJson,
-  signIn,
+  signInAs,
 } from "../support/app-client";
 import { createWireItem } from "../support/build-order-fixtures";
 import { createDesign } from "../support/design-fixtures";
@@ -31,8 +30,8 @@ const mebibyte = 1024 * 1024;
 let buyer = "";
 let builder = "";
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  builder = await signIn("builder@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  builder = await signInAs("builder");
 });
 afterAll(closeTestDatabase);
 

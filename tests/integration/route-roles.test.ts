@@ -14,8 +14,7 @@ import type { RouteConfigEntry } from "@react-router/dev/routes";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import routes from "~/routes";
 import { roles } from "~/lib/roles";
-import { demoPassword, demoPeople } from "../../seed/demo-people";
-import { baseUrl, signIn, uniqueEmail } from "../support/app-client";
+import { baseUrl, newPerson, signIn, uniqueEmail } from "../support/app-client";
 import { handlersOf, routeFilesOf } from "../support/route-handlers";
 import {
   closeTestDatabase,
@@ -639,10 +638,8 @@ async function addPerson(
 
 beforeAll(async () => {
   for (const role of roles) {
-    const person = demoPeople.find((candidate) =>
-      candidate.roles.includes(role),
-    )!;
-    await addPerson(role, person.email, demoPassword());
+    const person = await newPerson(role);
+    await addPerson(role, person.email, person.password);
   }
   for (const pair of rolePairs) {
     const email = uniqueEmail(pair.replace("+", "-"));

@@ -5,20 +5,19 @@
  * docs/decisions/012-security-headers-and-origin.md.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import {
   baseUrl,
   get,
   postForm,
   sendJson,
-  signIn,
   uniqueEmail,
+  signInAs,
 } from "../support/app-client";
 import { closeTestDatabase, createPerson } from "../support/test-database";
 
 let manager = "";
 beforeAll(async () => {
-  manager = await signIn("manager@turnledger.test", demoPassword());
+  manager = await signInAs("manager");
 });
 afterAll(closeTestDatabase);
 
@@ -105,7 +104,7 @@ describe("security headers", () => {
   it("keep a header a route sets itself, once", async () => {
     // The purchase-request CSV sets X-Content-Type-Options itself; 404 here, but the
     // route's own answer must not end up with the header twice.
-    const buyer = await signIn("buyer@turnledger.test", demoPassword());
+    const buyer = await signInAs("buyer");
     const answer = await get(
       "/alerts/purchase-request.csv?supplier=Nobody%20at%20all",
       buyer,

@@ -8,8 +8,7 @@
  */
 import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, get, sendJson, signIn } from "../support/app-client";
+import { baseUrl, get, sendJson, signInAs } from "../support/app-client";
 import {
   closeTestDatabase,
   createLocation,
@@ -35,10 +34,10 @@ let storekeeper = "";
 let manager = "";
 let location = "";
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  builder = await signIn("builder@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
-  manager = await signIn("manager@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  builder = await signInAs("builder");
+  storekeeper = await signInAs("storekeeper");
+  manager = await signInAs("manager");
   location = await createLocation(uniqueCode("SEC"));
 });
 afterAll(closeTestDatabase);

@@ -8,14 +8,15 @@
 import { spawn } from "node:child_process";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import {
   baseUrl,
   get,
+  newPerson,
   postForm,
   sessionCookieFrom,
   signIn,
   uniqueEmail,
+  signInAs,
 } from "../support/app-client";
 import { rawRequest } from "../support/raw-http";
 import {
@@ -29,7 +30,7 @@ const foreign = "https://shop-supplies.example";
 
 let buyer = "";
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
 });
 afterAll(closeTestDatabase);
 
@@ -298,10 +299,11 @@ describe("a write without Origin", () => {
   });
 
   it("and without credentials goes on: a script signs in through the API", async () => {
+    const manager = await newPerson("manager");
     const response = await send("POST", "/api/v1/sessions", {
       json: {
-        email: "manager@turnledger.test",
-        password: demoPassword(),
+        email: manager.email,
+        password: manager.password,
       },
     });
     expect(response.status).toBe(200);
@@ -419,7 +421,7 @@ describe("the app's own origin", () => {
 
 describe("a path with dot segments", () => {
   it("is judged as the page it routes to: a bearer header does not excuse a cookie's write to /stock/record", async () => {
-    const cookie = await signIn("storekeeper@turnledger.test", demoPassword());
+    const cookie = await signInAs("storekeeper");
     for (const trick of [
       "/api/../stock/record",
       "/api/%2e%2e/stock/record",

@@ -8,8 +8,7 @@ import { randomBytes } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { baseUrl, get, sendJson, signIn } from "../support/app-client";
+import { baseUrl, get, sendJson, signInAs } from "../support/app-client";
 import {
   closeTestDatabase,
   testDatabase,
@@ -19,7 +18,7 @@ import {
 let buyer = "";
 let supplier = "";
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
   supplier = `Upload test mill ${uniqueCode("S")}`;
   const created = await sendJson(
     "POST",
@@ -231,7 +230,8 @@ describe("an uploaded file", () => {
     }
     // Nothing of the file landed in the folders the server serves files from.
     const root = path.resolve(import.meta.dirname, "..", "..");
-    for (const folder of ["public", path.join("build", "client")]) {
+    const buildDirectory = process.env.BUILD_DIRECTORY ?? "build";
+    for (const folder of ["public", path.join(buildDirectory, "client")]) {
       const names = fs.readdirSync(path.join(root, folder), {
         recursive: true,
       }) as string[];

@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { get, sendJson, signIn } from "../support/app-client";
+import { get, sendJson, signInAs } from "../support/app-client";
 import {
   closeTestDatabase,
   createLocation,
@@ -14,8 +13,8 @@ let mainStore = "";
 let benchBin = "";
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  storekeeper = await signInAs("storekeeper");
   mainStore = await createLocation(uniqueCode("ST"));
   benchBin = await createLocation(uniqueCode("BN"));
 });
@@ -352,8 +351,8 @@ describe("who may record, and bad input", () => {
   it("refuses buyers, builders and managers with 403 and writes nothing", async () => {
     const sku = await createMagnet();
     const before = await movementCount();
-    for (const role of ["buyer", "builder", "manager"]) {
-      const cookie = await signIn(`${role}@turnledger.test`, demoPassword());
+    for (const role of ["buyer", "builder", "manager"] as const) {
+      const cookie = await signInAs(role);
       const answer = await move(
         { type: "receipt", sku, location: mainStore, quantity: 5, unitCost: 1 },
         cookie,
@@ -518,7 +517,7 @@ describe("items API", () => {
         )
       ).status,
     ).toBe(403);
-    const builder = await signIn("builder@turnledger.test", demoPassword());
+    const builder = await signInAs("builder");
     expect(
       (
         await sendJson(

@@ -5,8 +5,7 @@
  * is never held by an order and gone from the shelf at once.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { get, sendJson, signIn } from "../support/app-client";
+import { get, sendJson, signInAs } from "../support/app-client";
 import {
   createPartItem,
   createWireItem,
@@ -89,8 +88,6 @@ async function movementCount(): Promise<number> {
 }
 
 beforeAll(async () => {
-  const signInAs = (role: string) =>
-    signIn(`${role}@turnledger.test`, demoPassword());
   buyer = await signInAs("buyer");
   builder = await signInAs("builder");
   storekeeper = await signInAs("storekeeper");

@@ -5,13 +5,12 @@
  */
 import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import {
   followRedirect,
   get,
   postForm,
   sendJson,
-  signIn,
+  signInAs,
 } from "../support/app-client";
 import {
   closeTestDatabase,
@@ -26,10 +25,10 @@ let manager = "";
 let store = "";
 
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  storekeeper = await signIn("storekeeper@turnledger.test", demoPassword());
-  builder = await signIn("builder@turnledger.test", demoPassword());
-  manager = await signIn("manager@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  storekeeper = await signInAs("storekeeper");
+  builder = await signInAs("builder");
+  manager = await signInAs("manager");
   store = await createLocation(uniqueCode("SP"));
 });
 afterAll(closeTestDatabase);

@@ -5,13 +5,12 @@
  * with 409, never a 500).
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
 import {
   followRedirect,
   get,
   postForm,
   sendJson,
-  signIn,
+  signInAs,
 } from "../support/app-client";
 import { createSupplier } from "../support/price-list-fixtures";
 import {
@@ -23,8 +22,8 @@ import {
 let buyer = "";
 let builder = "";
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
-  builder = await signIn("builder@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
+  builder = await signInAs("builder");
 });
 afterAll(async () => {
   await closeTestDatabase();

@@ -3,8 +3,7 @@
  * taken name) naming the field, never a 500, and nothing is written.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { demoPassword } from "../../seed/demo-people";
-import { sendJson, signIn } from "../support/app-client";
+import { sendJson, signInAs } from "../support/app-client";
 import { createSupplier } from "../support/price-list-fixtures";
 import {
   closeTestDatabase,
@@ -14,7 +13,7 @@ import {
 
 let buyer = "";
 beforeAll(async () => {
-  buyer = await signIn("buyer@turnledger.test", demoPassword());
+  buyer = await signInAs("buyer");
 });
 afterAll(async () => {
   await closeTestDatabase();

@@ -1,6 +1,9 @@
 /** Talking to the running test app over HTTP, as a browser or script would. */
 import { randomBytes } from "node:crypto";
 import { inject } from "vitest";
+import type { Role } from "~/lib/roles";
+import { alertPreferences } from "~/db/schema";
+import { createPerson, testDb } from "./test-database";
 
 export const baseUrl = () => inject("baseUrl");
 
@@ -79,6 +82,40 @@ export async function signIn(email: string, password: string): Promise<string> {
     );
   }
   return cookie;
+}
+
+/** A person a test made for itself: how they sign in, and their id. */
+export type TestPerson = {
+  id: string;
+  email: string;
+  password: string;
+  name: string;
+};
+
+/**
+ * Makes a fresh active person holding `role` (and no other), so no two tests
+ * share one. A buyer made here hears of no low-stock alert (alert mode
+ * "none"): otherwise every alert of every later test would e-mail every buyer
+ * made before it. Tests about alert e-mail choose their recipients themselves.
+ */
+export async function newPerson(
+  role: Role,
+  name = `Test ${role}`,
+): Promise<TestPerson> {
+  const email = uniqueEmail(role);
+  const password = `pw-${randomBytes(9).toString("base64url")}`;
+  const id = await createPerson({ email, password, roles: [role], name });
+  if (role === "buyer")
+    await testDb()
+      .insert(alertPreferences)
+      .values({ userId: id, mode: "none" });
+  return { id, email, password, name };
+}
+
+/** Makes a fresh person holding `role` (newPerson) and signs them in through the API: the session cookie. */
+export async function signInAs(role: Role): Promise<string> {
+  const person = await newPerson(role);
+  return signIn(person.email, person.password);
 }
 
 /** The name=value part of a Set-Cookie header for the one-time message cookie. */

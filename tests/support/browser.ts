@@ -1,4 +1,4 @@
-/** Debian's Chromium driven by playwright-core, and a signIn(role) helper for browser tests. */
+/** Debian's Chromium driven by playwright-core, and signIn(browser, role) for browser tests. */
 import fs from "node:fs";
 import path from "node:path";
 import {
@@ -10,6 +10,7 @@ import {
 import { inject } from "vitest";
 import type { Role } from "~/lib/roles";
 import { demoPassword, demoPeople } from "../../seed/demo-people";
+import { newPerson } from "./app-client";
 
 export const screenshotFolder = path.resolve(
   import.meta.dirname,
@@ -121,17 +122,30 @@ export async function waitForHydration(page: Page): Promise<void> {
   });
 }
 
-/** Opens a new page signed in as the demo person of a role, on the start page (hydrated). */
-export async function signIn(browser: Browser, role: Role): Promise<Page> {
+/** How the seeded demo person of a role signs in, for a test that checks the demo data's own person. */
+export function demoPerson(role: Role): { email: string; password: string } {
   const person = demoPeople.find((candidate) => candidate.roles.includes(role));
   if (!person) throw new Error(`no demo person holds the role ${role}`);
+  return { email: person.email, password: demoPassword() };
+}
+
+/**
+ * Opens a new page signed in, on the start page (hydrated): as a fresh person
+ * holding `who` when it is a role (newPerson in app-client.ts), else as the
+ * person given (one the test made, or demoPerson(role)).
+ */
+export async function signIn(
+  browser: Browser,
+  who: Role | { email: string; password: string },
+): Promise<Page> {
+  const person = typeof who === "string" ? await newPerson(who) : who;
   const page = await browser.newPage({
     viewport: { width: 1280, height: 800 },
   });
   await page.goto(`${inject("baseUrl")}/sign-in`);
   await waitForHydration(page);
   await page.getByLabel("E-mail").fill(person.email);
-  await page.getByLabel("Password").fill(demoPassword());
+  await page.getByLabel("Password").fill(person.password);
   await page.getByRole("button", { name: "Sign in" }).click();
   await page.waitForURL(`${inject("baseUrl")}/`);
   await page.getByRole("navigation", { name: "Main" }).waitFor();

@@ -1,7 +1,14 @@
 /** Items, stock and build-order figures for the build-order tests, through the real API and database. */
 import { expect } from "vitest";
 import { sendJson } from "./app-client";
-import { testDatabase, uniqueCode } from "./test-database";
+import { eq, sql, sum } from "drizzle-orm";
+import {
+  buildOrderLines,
+  buildOrderReservations,
+  items,
+  stockBalances,
+} from "~/db/schema";
+import { testDb, uniqueCode } from "./test-database";
 
 async function created(response: Response): Promise<void> {
   expect(response.status, await response.clone().text()).toBe(201);
@@ -70,11 +77,11 @@ export async function createPartItem(
 }
 
 export async function itemIdOf(sku: string): Promise<number> {
-  const [rows] = await testDatabase().query(
-    "SELECT id FROM items WHERE sku = ?",
-    [sku],
-  );
-  return (rows as { id: number }[])[0]!.id;
+  const [row] = await testDb()
+    .select({ id: items.id })
+    .from(items)
+    .where(eq(items.sku, sku));
+  return row!.id;
 }
 
 /** Records a receipt through the stock API. */
@@ -96,55 +103,57 @@ const toNumber = (value: string | number) => Number(value);
 
 /** The kept figures of an item and the sums they must equal. */
 export async function reservationBooks(itemId: number) {
-  const db = testDatabase();
-  const [itemRows] = await db.query(
-    "SELECT on_hand, reserved FROM items WHERE id = ?",
-    [itemId],
-  );
-  const [balanceRows] = await db.query(
-    "SELECT lot_id, location_id, on_hand, reserved FROM stock_balances WHERE item_id = ?",
-    [itemId],
-  );
-  const [heldRows] = await db.query(
-    "SELECT lot_id, location_id, SUM(quantity) AS quantity FROM build_order_reservations WHERE item_id = ? GROUP BY lot_id, location_id",
-    [itemId],
-  );
-  const [lineRows] = await db.query(
-    "SELECT COALESCE(SUM(reserved), 0) AS reserved FROM build_order_lines WHERE item_id = ?",
-    [itemId],
-  );
-  const item = (itemRows as { on_hand: string; reserved: string }[])[0]!;
-  const balances = (
-    balanceRows as {
-      lot_id: number;
-      location_id: number;
-      on_hand: string;
-      reserved: string;
-    }[]
-  ).map((row) => ({
-    key: `${row.lot_id}:${row.location_id}`,
-    onHand: toNumber(row.on_hand),
+  const db = testDb();
+  const [item] = await db
+    .select({ onHand: items.onHand, reserved: items.reserved })
+    .from(items)
+    .where(eq(items.id, itemId));
+  const balanceRows = await db
+    .select({
+      lotId: stockBalances.lotId,
+      locationId: stockBalances.locationId,
+      onHand: stockBalances.onHand,
+      reserved: stockBalances.reserved,
+    })
+    .from(stockBalances)
+    .where(eq(stockBalances.itemId, itemId));
+  const heldRows = await db
+    .select({
+      lotId: buildOrderReservations.lotId,
+      locationId: buildOrderReservations.locationId,
+      quantity: sum(buildOrderReservations.quantity),
+    })
+    .from(buildOrderReservations)
+    .where(eq(buildOrderReservations.itemId, itemId))
+    .groupBy(buildOrderReservations.lotId, buildOrderReservations.locationId);
+  const [lines] = await db
+    .select({
+      reserved: sql<string>`COALESCE(SUM(${buildOrderLines.reserved}), 0)`,
+    })
+    .from(buildOrderLines)
+    .where(eq(buildOrderLines.itemId, itemId));
+  const balances = balanceRows.map((row) => ({
+    key: `${row.lotId}:${row.locationId}`,
+    onHand: toNumber(row.onHand),
     reserved: toNumber(row.reserved),
   }));
   const held = new Map(
-    (
-      heldRows as { lot_id: number; location_id: number; quantity: string }[]
-    ).map((row) => [
-      `${row.lot_id}:${row.location_id}`,
-      toNumber(row.quantity),
+    heldRows.map((row) => [
+      `${row.lotId}:${row.locationId}`,
+      toNumber(row.quantity ?? 0),
     ]),
   );
   const grams = (value: number) => Math.round(value * 1000);
   return {
-    onHand: toNumber(item.on_hand),
-    reserved: toNumber(item.reserved),
+    onHand: toNumber(item!.onHand),
+    reserved: toNumber(item!.reserved),
     balances,
     held,
     /** Σ build_order_reservations of the item, in grams (thousandths). */
-    heldTotal: grams([...held.values()].reduce((sum, value) => sum + value, 0)),
-    linesReserved: grams(
-      toNumber((lineRows as { reserved: string }[])[0]!.reserved),
+    heldTotal: grams(
+      [...held.values()].reduce((total, value) => total + value, 0),
     ),
+    linesReserved: grams(toNumber(lines!.reserved)),
     grams,
   };
 }

@@ -3,7 +3,8 @@
  * lines), so build-order tests do not depend on the design pages or API.
  */
 import type mysql from "mysql2/promise";
-import { testDatabase, uniqueCode } from "./test-database";
+import { designLines, designRevisions, designs } from "~/db/schema";
+import { testDb, uniqueCode } from "./test-database";
 
 export type FixtureLine =
   | {
@@ -34,55 +35,59 @@ export async function createDesign(
     database?: mysql.Pool;
   } = {},
 ): Promise<{ designId: number; revision: number; revisionId: number }> {
-  const db = options.database ?? testDatabase();
+  const db = testDb(options.database);
   const status = options.status ?? "released";
-  const [design] = await db.query(
-    "INSERT INTO designs (name, motor_type, user_id, created_at) VALUES (?, 'outrunner BLDC', ?, NOW(3))",
-    [options.name ?? uniqueCode("Test motor"), owner],
-  );
-  const designId = (design as { insertId: number }).insertId;
-  const [revision] = await db.query(
-    `INSERT INTO design_revisions
-       (design_id, revision, status, poles, slots, rated_current_a, insulation_class_c, released_at, released_by, created_at)
-     VALUES (?, 1, ?, 14, 12, 10, 155, ?, ?, NOW(3))`,
-    [
+  const [design] = await db
+    .insert(designs)
+    .values({
+      name: options.name ?? uniqueCode("Test motor"),
+      motorType: "outrunner BLDC",
+      userId: owner,
+    })
+    .$returningId();
+  const designId = design!.id;
+  const [revision] = await db
+    .insert(designRevisions)
+    .values({
       designId,
+      revision: 1,
       status,
-      status === "released" ? new Date() : null,
-      status === "released" ? owner : null,
-    ],
-  );
-  const revisionId = (revision as { insertId: number }).insertId;
+      poles: 14,
+      slots: 12,
+      ratedCurrentA: "10",
+      insulationClassC: 155,
+      releasedAt: status === "released" ? new Date() : null,
+      releasedBy: status === "released" ? owner : null,
+    })
+    .$returningId();
+  const revisionId = revision!.id;
   for (const [index, line] of lines.entries()) {
-    const common = [revisionId, index + 1, line.kind, line.itemId];
+    const common = {
+      revisionId,
+      position: index + 1,
+      kind: line.kind,
+      itemId: line.itemId,
+    };
     if (line.kind === "coil") {
-      await db.query(
-        `INSERT INTO design_lines
-           (revision_id, position, kind, item_id, turns, strands_in_hand, active_length_mm, end_turn_length_mm,
-            lead_length_mm, coils_per_motor, scrap_percent, operating_temperature_c)
-         VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
-        [
-          ...common,
-          line.turns,
-          line.strandsInHand ?? 1,
-          line.activeLengthMm,
-          line.endTurnLengthMm,
-          line.leadLengthMm ?? 0,
-          line.coilsPerMotor ?? 1,
-          line.scrapPercent ?? 0,
-          line.operatingTemperatureC ?? 20,
-        ],
-      );
+      await db.insert(designLines).values({
+        ...common,
+        turns: line.turns,
+        strandsInHand: line.strandsInHand ?? 1,
+        activeLengthMm: String(line.activeLengthMm),
+        endTurnLengthMm: String(line.endTurnLengthMm),
+        leadLengthMm: String(line.leadLengthMm ?? 0),
+        coilsPerMotor: line.coilsPerMotor ?? 1,
+        scrapPercent: String(line.scrapPercent ?? 0),
+        operatingTemperatureC: String(line.operatingTemperatureC ?? 20),
+      });
     } else if (line.kind === "magnet") {
-      await db.query(
-        "INSERT INTO design_lines (revision_id, position, kind, item_id, pieces_per_motor) VALUES (?, ?, ?, ?, ?)",
-        [...common, line.piecesPerMotor],
-      );
+      await db
+        .insert(designLines)
+        .values({ ...common, piecesPerMotor: line.piecesPerMotor });
     } else {
-      await db.query(
-        "INSERT INTO design_lines (revision_id, position, kind, item_id, quantity_per_motor) VALUES (?, ?, ?, ?, ?)",
-        [...common, line.quantityPerMotor],
-      );
+      await db
+        .insert(designLines)
+        .values({ ...common, quantityPerMotor: line.quantityPerMotor });
     }
   }
   return { designId, revision: 1, revisionId };

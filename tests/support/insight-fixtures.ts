@@ -4,9 +4,10 @@
  * page and /insight show its cost per N·m; its row in the designs table; the
  * what-if form's hydration.
  */
+import { eq, sum } from "drizzle-orm";
 import type { Page } from "playwright-core";
-import { demoPassword } from "../../seed/demo-people";
-import { signIn as signInApi } from "./app-client";
+import { designLines, designRevisions, metalBasePrices } from "~/db/schema";
+import { signInAs } from "./app-client";
 import {
   createMagnetItem,
   createPartItem,
@@ -14,8 +15,12 @@ import {
 } from "./build-order-fixtures";
 import { createDesign } from "./design-fixtures";
 import { readable } from "./page-text";
-import { createSupplier, importPriceList } from "./price-list-fixtures";
-import { testDatabase, uniqueCode } from "./test-database";
+import {
+  createSupplier,
+  importPriceList,
+  mapSupplierSku,
+} from "./price-list-fixtures";
+import { testDb, uniqueCode } from "./test-database";
 
 /**
  * Three items priced as in designs-api.test.ts, valid since 2020 so they hold today:
@@ -24,17 +29,14 @@ import { testDatabase, uniqueCode } from "./test-database";
  * 0.5 N·m (measured).
  */
 export async function createPricedReleasedDesign() {
-  const buyer = await signInApi("buyer@turnledger.test", demoPassword());
+  const buyer = await signInAs("buyer");
   const wire = await createWireItem(buyer);
   const magnet = await createMagnetItem(buyer);
   const part = await createPartItem(buyer);
   const supplier = `Insight browser supplier ${uniqueCode("S")}`;
   const supplierId = await createSupplier(buyer, supplier);
   for (const item of [wire, magnet, part])
-    await testDatabase().query(
-      "INSERT INTO supplier_items (supplier_id, supplier_sku, item_id) VALUES (?, ?, ?)",
-      [supplierId, `B-${item.sku}`, item.id],
-    );
+    await mapSupplierSku(supplierId, `B-${item.sku}`, item.id);
   await importPriceList(buyer, {
     supplier,
     fileName: "insight-browser.csv",
@@ -73,10 +75,10 @@ export async function createPricedReleasedDesign() {
     ],
     { name: designName },
   );
-  await testDatabase().query(
-    "UPDATE design_revisions SET rated_torque_nm = 0.5, torque_basis = 'measured' WHERE id = ?",
-    [design.revisionId],
-  );
+  await testDb()
+    .update(designRevisions)
+    .set({ ratedTorqueNm: "0.5", torqueBasis: "measured" })
+    .where(eq(designRevisions.id, design.revisionId));
   return { designName, designId: design.designId, wire, magnet, part };
 }
 
@@ -128,10 +130,14 @@ export async function waitForWhatIfHydration(
 
 /** Counts that any write by the what-if would change. */
 export async function designCounts() {
-  const [rows] = await testDatabase().query(
-    `SELECT (SELECT COUNT(*) FROM metal_base_prices) AS bases,
-            (SELECT COALESCE(SUM(end_turn_length_mm), 0) FROM design_lines) AS endTurns,
-            (SELECT COUNT(*) FROM design_revisions) AS revisions`,
-  );
-  return (rows as Record<string, unknown>[])[0];
+  const db = testDb();
+  return {
+    bases: await db.$count(metalBasePrices),
+    endTurns: (
+      await db
+        .select({ total: sum(designLines.endTurnLengthMm) })
+        .from(designLines)
+    )[0]!.total,
+    revisions: await db.$count(designRevisions),
+  };
 }

@@ -1,7 +1,10 @@
 /** Suppliers and their price lists through the real API, for tests that need prices before their browser steps. */
 import { expect } from "vitest";
 import { baseUrl, sendJson } from "./app-client";
-import { testDatabase } from "./test-database";
+import { eq } from "drizzle-orm";
+import { supplierItems, suppliers } from "~/db/schema";
+import { itemIdOf } from "./build-order-fixtures";
+import { testDb } from "./test-database";
 
 /** Adds a supplier as the buyer whose session cookie is given; returns its id. */
 export async function createSupplier(
@@ -16,11 +19,22 @@ export async function createSupplier(
     buyer,
   );
   expect(response.status, await response.clone().text()).toBe(201);
-  const [rows] = await testDatabase().query(
-    "SELECT id FROM suppliers WHERE name = ?",
-    [name],
-  );
-  return (rows as { id: number }[])[0]!.id;
+  const [row] = await testDb()
+    .select({ id: suppliers.id })
+    .from(suppliers)
+    .where(eq(suppliers.name, name));
+  return row!.id;
+}
+
+/** Maps a supplier's own SKU to one of our items (what an import would find). */
+export async function mapSupplierSku(
+  supplierId: number,
+  supplierSku: string,
+  itemId: number,
+): Promise<void> {
+  await testDb()
+    .insert(supplierItems)
+    .values({ supplierId, supplierSku, itemId });
 }
 
 /**
@@ -69,10 +83,7 @@ export async function quoteDesignItems(
 ): Promise<void> {
   const supplierId = await createSupplier(buyer, quote.supplier);
   for (const sku of [quote.wireSku, quote.magnetSku, quote.partSku])
-    await testDatabase().query(
-      "INSERT INTO supplier_items (supplier_id, supplier_sku, item_id) SELECT ?, ?, id FROM items WHERE sku = ?",
-      [supplierId, `I-${sku}`, sku],
-    );
+    await mapSupplierSku(supplierId, `I-${sku}`, await itemIdOf(sku));
   await importPriceList(buyer, {
     supplier: quote.supplier,
     fileName: quote.fileName,

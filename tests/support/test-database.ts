@@ -1,9 +1,12 @@
 /** Direct access to the test database, for setting up people and reading what was stored. */
 import { hash } from "@node-rs/argon2";
 import { randomBytes } from "node:crypto";
+import { drizzle, type MySql2Database } from "drizzle-orm/mysql2";
 import mysql from "mysql2/promise";
 import { inject } from "vitest";
 import { poolOptionsFromUrl } from "~/db/connection-options";
+import * as schema from "~/db/schema";
+import { locations, userRoles, users } from "~/db/schema";
 import type { Role } from "~/lib/roles";
 
 let pool: mysql.Pool | undefined;
@@ -13,6 +16,25 @@ export function testDatabase(): mysql.Pool {
     connectionLimit: 3,
   });
   return pool;
+}
+
+export type TestDb = MySql2Database<typeof schema>;
+
+const drizzleByPool = new WeakMap<mysql.Pool, TestDb>();
+
+/**
+ * Drizzle on `database` (by default the test database), with the app's schema:
+ * fixtures write through it, so a renamed table or column breaks the typecheck
+ * instead of a test run.
+ */
+export function testDb(database: mysql.Pool = testDatabase()): TestDb {
+  let db = drizzleByPool.get(database);
+  if (!db) {
+    // "planetscale" mode as in app/db/client.server.ts (MariaDB has no LATERAL joins).
+    db = drizzle(database, { schema, mode: "planetscale" });
+    drizzleByPool.set(database, db);
+  }
+  return db;
 }
 
 export async function closeTestDatabase(): Promise<void> {
@@ -32,17 +54,18 @@ export async function createPerson(
 ): Promise<string> {
   const id = `test-${randomBytes(8).toString("hex")}`;
   const passwordHash = await hash(input.password);
-  const db = database;
-  await db.query(
-    "INSERT INTO users (id, email, name, password_hash, active, created_at) VALUES (?, ?, ?, ?, 1, NOW(3))",
-    [id, input.email, input.name ?? "Test Person", passwordHash],
-  );
-  for (const role of input.roles) {
-    await db.query("INSERT INTO user_roles (user_id, role) VALUES (?, ?)", [
-      id,
-      role,
-    ]);
-  }
+  const db = testDb(database);
+  await db.insert(users).values({
+    id,
+    email: input.email,
+    name: input.name ?? "Test Person",
+    passwordHash,
+    active: true,
+  });
+  if (input.roles.length > 0)
+    await db
+      .insert(userRoles)
+      .values(input.roles.map((role) => ({ userId: id, role })));
   return id;
 }
 
@@ -52,10 +75,7 @@ export async function createLocation(
   name = `Test ${code}`,
   database: mysql.Pool = testDatabase(),
 ): Promise<string> {
-  await database.query(
-    "INSERT INTO locations (code, name, kind) VALUES (?, ?, 'bin')",
-    [code, name],
-  );
+  await testDb(database).insert(locations).values({ code, name, kind: "bin" });
   return code;
 }
 
