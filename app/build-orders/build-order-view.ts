@@ -3,8 +3,8 @@
  * has been issued, the held stock a storekeeper issues from, the step to offer first and
  * the spool weigh-back preview. Pure: runs in the browser and in tests.
  */
-import { spoolNetMassKg } from "~/engineering/spool";
-import { formNumber } from "~/lib/number-text";
+import { typedNumber } from "~/lib/number-text";
+import { weighBackPreview as spoolWeighBack } from "~/stock/weigh-back-preview";
 import {
   canComplete,
   canIssue,
@@ -120,16 +120,11 @@ export function weighBackPreview(
   grossText: string,
 ): WeighBack | null {
   if (spot?.kind !== "wire" || spot.tareKg === null) return null;
-  const grossKg = formNumber(grossText);
-  if (typeof grossKg !== "number") return null;
-  let netNowKg: number;
-  try {
-    netNowKg = spoolNetMassKg(grossKg, spot.tareKg);
-  } catch {
-    return { netNowKg: null, issueKg: null };
-  }
-  return {
-    netNowKg,
-    issueKg: Math.round((spot.onHand - netNowKg) * 1000) / 1000,
-  };
+  if (typedNumber(grossText) === null) return null;
+  return (
+    spoolWeighBack(spot.onHand, grossText, spot.tareKg) ?? {
+      netNowKg: null,
+      issueKg: null,
+    }
+  );
 }
