@@ -6,7 +6,7 @@ import {
 } from "~/build-orders/build-order-forms";
 import { coilLineSchema, partLineSchema } from "~/designs/design-schemas";
 import { insightQuerySchema } from "~/insight/what-if";
-import { isCalendarDate } from "~/pricing/calendar-date";
+import { isCalendarDate } from "~/lib/calendar-days";
 import { parseExactDecimal, parseMoney, parseRate } from "~/pricing/money";
 import {
   moneyRules,

@@ -11,7 +11,7 @@
  * base is an estimate and says where it came from, so every screen can name it.
  */
 
-import { latestOnOrBefore, type CalendarDate } from "./calendar-date";
+import { latestOnOrBefore, type CalendarDate } from "~/lib/calendar-days";
 import { findExchangeRate, type ExchangeRateEntry } from "./currency";
 import { findMetalBase, type MetalBasePrice } from "./metal-base";
 import { divideHalfAwayFromZero, rateScale, type CurrencyCode } from "./money";
