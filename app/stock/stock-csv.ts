@@ -5,6 +5,7 @@
  */
 import Papa from "papaparse";
 import { guardCell } from "./csv-formula-guard";
+import { roundedAmountText } from "./decimal-amounts";
 
 /** The most rows one export holds; the stock page says so when a view matches more. */
 export const stockCsvRowLimit = 50_000;
@@ -52,7 +53,8 @@ const columns: { header: string; cell: (item: StockCsvItem) => Cell }[] = [
   },
   {
     header: "value (company currency)",
-    cell: (item) => Math.round(item.value * 100) / 100,
+    // To the cent, half away from zero on the exact amount (decision 006).
+    cell: (item) => Number(roundedAmountText(item.value, 2)),
   },
   { header: "archived", cell: (item) => (item.active ? "no" : "yes") },
 ];
