@@ -4,7 +4,7 @@
  * below that point; an alert opens on the drop and closes when available is
  * back at or above the point. Pure: quantities in thousandths of the unit.
  */
-import Papa from "papaparse";
+import { csvFile } from "~/lib/csv-file";
 import {
   amountForQuantity,
   formatExactDecimal,
@@ -13,7 +13,6 @@ import {
   rescale,
   type MoneyAmount,
 } from "~/pricing/money";
-import { guardCell } from "~/stock/csv-formula-guard";
 import { quantityToNumber } from "~/stock/decimal-amounts";
 import { perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
@@ -225,9 +224,9 @@ export function purchaseRequestCsv(
       line.unitPrice,
     );
     return [
-      guardCell(line.sku),
-      guardCell(line.name),
-      guardCell(line.supplierSku),
+      line.sku,
+      line.name,
+      line.supplierSku,
       quantityToNumber(line.quantity),
       // The stock unit as stored (kg, pcs, m), not as words: machine-read, like the API.
       line.unit,
@@ -242,5 +241,5 @@ export function purchaseRequestCsv(
       ),
     ];
   });
-  return `\uFEFF${Papa.unparse({ fields: [...purchaseRequestHeaders], data: rows }, { newline: "\r\n" })}\r\n`;
+  return csvFile(purchaseRequestHeaders, rows);
 }
