@@ -15,6 +15,7 @@ import {
   type RecordedMovement,
 } from "~/stock/stock-movements.server";
 import { BuildOrderError } from "./build-order-errors";
+import { heldByBuildOrderLine } from "./build-order-held-stock.server";
 import type { MovementRequest } from "~/stock/movement-request";
 import { StockError } from "~/stock/stock-errors";
 import type { IssueRequest } from "./build-order-forms";
@@ -92,7 +93,7 @@ export async function issueToBuildOrder(
         supplierBatch: undefined,
       },
       userId,
-      { reservation: { orderId: order.id, lineId: line.id } },
+      { held: heldByBuildOrderLine({ orderId: order.id, lineId: line.id }) },
     );
     if (order.status === "reserved")
       await changeStatus(tx, order, "in_progress", userId, "First issue.");

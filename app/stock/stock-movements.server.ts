@@ -11,15 +11,10 @@
  * reserved stock, and the same transaction lowers what the order line holds on that
  * balance and raises what it has been issued.
  */
-import { checkStockAlertsOfSkus } from "~/alerts/stock-alerts.server";
 import { and, eq, sql } from "drizzle-orm";
 import type { Transaction } from "~/db/client.server";
 import { writeTransaction } from "~/db/write-transaction.server";
 import {
-  buildOrderIssues,
-  buildOrderLines,
-  buildOrderReservations,
-  buildOrders,
   items,
   locations,
   lots,
@@ -39,7 +34,7 @@ import { unitWord } from "~/lib/unit-text";
 import type { MovementRequest } from "./movement-request";
 
 /** An amount of stock in a refusal, as typed into the API: "1.5 kg", "1 piece", "3 pieces". */
-function amountText(thousandths: bigint, unit: string): string {
+export function amountText(thousandths: bigint, unit: string): string {
   const value = quantityToNumber(thousandths);
   return `${value} ${unitWord(unit, value)}`;
 }
@@ -47,16 +42,78 @@ function amountText(thousandths: bigint, unit: string): string {
 /** A transaction of the one database client, for callers that record a movement inside their own. */
 export type LedgerTransaction = Transaction;
 
+/**
+ * The document a movement is made for, named by the caller that owns it (a build order
+ * today): the ledger knows it only by these words and never imports its owner.
+ */
+export interface SourceDocument {
+  /** What it is, in words: "build order". */
+  kind: string;
+  id: number;
+  /** How people write it: "BO-12". */
+  reference: string;
+}
+
+/** The balance an issue takes held stock from, with the quantity it takes. */
+export interface HeldBalance {
+  item: { id: number; sku: string; unit: string };
+  lot: { id: number; number: string | null };
+  location: { id: number; code: string };
+  taken: bigint;
+}
+
+/**
+ * Stock a source document holds (reserves) that an issue takes, supplied by the
+ * document's owner. The ledger calls these inside the movement's transaction, in this
+ * order: `lockDocument` before it locks the item (the lock order of every such
+ * transaction), `lockHeld` once it knows the balance and the quantity (refusing with a
+ * StockError when the document holds less), `recordTaken` once the movement row exists.
+ */
+export interface HeldStock {
+  source: SourceDocument;
+  lockDocument(tx: Transaction): Promise<void>;
+  /** Locks what the document holds on the balance; refuses when it holds less than is taken. */
+  lockHeld(tx: Transaction, balance: HeldBalance): Promise<void>;
+  /** Lowers what the document holds by `taken` and notes the movement against it. */
+  recordTaken(
+    tx: Transaction,
+    taken: { movementId: number; quantity: bigint; unitCost: bigint },
+  ): Promise<void>;
+}
+
+/**
+ * Work to do once movements are committed: after `writeTransaction` returned, so once
+ * even when the transaction's work was retried. Low-stock alerts subscribe here
+ * (`app/alerts/stock-alerts.server.ts`), so the ledger imports no alert code.
+ */
+export type MovementsCommittedHook = (skus: readonly string[]) => Promise<void>;
+
+const committedHooks = new Set<MovementsCommittedHook>();
+
+/** Adds work to run after movements are committed; returns the function that removes it. */
+export function afterMovementsCommitted(
+  hook: MovementsCommittedHook,
+): () => void {
+  committedHooks.add(hook);
+  return () => committedHooks.delete(hook);
+}
+
+/** Runs the after-commit work, in the order it was added. For callers that commit movements in their own transaction. */
+export async function movementsCommitted(skus: readonly string[]) {
+  for (const hook of committedHooks) await hook(skus);
+}
+
 export interface MovementOptions {
   /** When it happened; only imports and the demo seed give a time other than now. */
   at?: Date;
   /**
-   * An issue of stock reserved for a build order line. The issue may take only what
-   * the line holds on this lot and location; it lowers that reservation (balance, item,
-   * order line) and raises the line's issued quantity, all in the movement's transaction.
+   * An issue of stock a source document holds (a build order line's reservation). The
+   * issue may take only what the document holds on this lot and location; the reserved
+   * quantity of the balance and item goes down with it, and the document's owner lowers
+   * its own rows, all in the movement's transaction.
    */
-  reservation?: { orderId: number; lineId: number };
-  /** Low-stock alerts are checked after the movement unless false (the demo seed checks once at the end). */
+  held?: HeldStock;
+  /** The after-commit work (low-stock alerts) runs after the movement unless false (the demo seed checks once at the end). */
   checkAlerts?: boolean;
 }
 
@@ -310,85 +367,6 @@ function signedChange(
   }
 }
 
-/**
- * Locks the build order (first, before the item: the lock order of every build-order
- * transaction) and checks it exists. Re-locking an order the caller already holds is free.
- */
-async function lockReservingOrder(tx: Transaction, orderId: number) {
-  const [order] = await tx
-    .select({ id: buildOrders.id })
-    .from(buildOrders)
-    .where(eq(buildOrders.id, orderId))
-    .for("update");
-  if (!order)
-    throw new StockError(404, `No build order BO-${orderId}.`, "orderId");
-}
-
-/**
- * What the order line holds on the balance the issue takes from, locked; refuses an
- * issue of another item, of something other than an issue, or of more than is held.
- */
-async function lockReservation(
-  tx: Transaction,
-  reservation: { orderId: number; lineId: number },
-  request: MovementRequest,
-  item: { id: number; sku: string; unit: string },
-  lot: { id: number; number: string | null },
-  location: { id: number; code: string },
-  taken: bigint,
-) {
-  if (request.type !== "issue")
-    throw new StockError(
-      400,
-      "Only an issue takes stock reserved for a build order.",
-      "type",
-    );
-  const [line] = await tx
-    .select({
-      orderId: buildOrderLines.orderId,
-      itemId: buildOrderLines.itemId,
-      reserved: buildOrderLines.reserved,
-      issued: buildOrderLines.issued,
-    })
-    .from(buildOrderLines)
-    .where(eq(buildOrderLines.id, reservation.lineId))
-    .for("update");
-  if (!line || line.orderId !== reservation.orderId || line.itemId !== item.id)
-    throw new StockError(
-      400,
-      `BO-${reservation.orderId} has no line for ${item.sku}.`,
-      "sku",
-    );
-  const where = and(
-    eq(buildOrderReservations.lineId, reservation.lineId),
-    eq(buildOrderReservations.itemId, item.id),
-    eq(buildOrderReservations.lotId, lot.id),
-    eq(buildOrderReservations.locationId, location.id),
-  );
-  const [held] = await tx
-    .select({ quantity: buildOrderReservations.quantity })
-    .from(buildOrderReservations)
-    .where(where)
-    .for("update");
-  const heldQuantity = held ? parseQuantity(held.quantity) : 0n;
-  const place = `${lot.number ? `lot ${lot.number} ` : ""}at ${location.code}`;
-  if (taken > heldQuantity) {
-    throw new StockError(
-      409,
-      heldQuantity === 0n
-        ? `BO-${reservation.orderId} holds no ${item.sku} ${place}.`
-        : `BO-${reservation.orderId} holds only ${amountText(heldQuantity, item.unit)} of ${item.sku} ${place}; cannot issue ${amountText(taken, item.unit)}.`,
-      "quantity",
-    );
-  }
-  return {
-    where,
-    held: heldQuantity,
-    lineReserved: parseQuantity(line.reserved),
-    lineIssued: parseQuantity(line.issued),
-  };
-}
-
 /** Records one movement (two rows for a transfer). Throws StockError for the user's mistakes. */
 export async function recordMovement(
   request: MovementRequest,
@@ -401,13 +379,14 @@ export async function recordMovement(
   );
   // After the commit, in the same request: a drop below the reorder point opens an alert.
   if (options.checkAlerts !== false)
-    await checkStockAlertsOfSkus([recorded.movement.sku]);
+    await movementsCommitted([recorded.movement.sku]);
   return recorded;
 }
 
 /**
- * The same inside the caller's transaction, for a caller that locks its build order
- * first and changes the order's state in the same transaction.
+ * The same inside the caller's transaction, for a caller that locks its document (a
+ * build order) first and changes the document's state in the same transaction. The
+ * caller runs `movementsCommitted` after its commit.
  */
 export async function recordMovementIn(
   tx: Transaction,
@@ -415,8 +394,7 @@ export async function recordMovementIn(
   userId: string,
   options: MovementOptions = {},
 ): Promise<RecordedMovement> {
-  if (options.reservation)
-    await lockReservingOrder(tx, options.reservation.orderId);
+  if (options.held) await options.held.lockDocument(tx);
   const item = await lockItem(tx, request.sku);
   if (!item.active)
     throw new StockError(
@@ -469,18 +447,17 @@ export async function recordMovementIn(
 
   const change = signedChange(request, item, lot, from);
   const unit = item.unit;
-  // An issue to a build order takes what the order holds here: that much reserved stock goes with it.
-  const held = options.reservation
-    ? await lockReservation(
-        tx,
-        options.reservation,
-        request,
-        item,
-        lot,
-        location,
-        -change,
-      )
-    : null;
+  // An issue to a document (a build order) takes what it holds here: that much reserved stock goes with it.
+  const held = options.held ?? null;
+  if (held) {
+    if (request.type !== "issue")
+      throw new StockError(
+        400,
+        `Only an issue takes stock reserved for a ${held.source.kind}.`,
+        "type",
+      );
+    await held.lockHeld(tx, { item, lot, location, taken: -change });
+  }
   const reservedTaken = held ? -change : 0n;
   if (from.onHand + change < 0n) {
     throw new StockError(
@@ -580,30 +557,12 @@ export async function recordMovementIn(
       updatedAt: now,
     })
     .where(eq(items.id, item.id));
-  if (held && options.reservation) {
-    const { lineId } = options.reservation;
-    if (held.held === reservedTaken) {
-      await tx.delete(buildOrderReservations).where(held.where);
-    } else {
-      await tx
-        .update(buildOrderReservations)
-        .set({ quantity: formatQuantityText(held.held - reservedTaken) })
-        .where(held.where);
-    }
-    await tx
-      .update(buildOrderLines)
-      .set({
-        reserved: formatQuantityText(held.lineReserved - reservedTaken),
-        issued: formatQuantityText(held.lineIssued + reservedTaken),
-      })
-      .where(eq(buildOrderLines.id, lineId));
-    await tx.insert(buildOrderIssues).values({
+  if (held)
+    await held.recordTaken(tx, {
       movementId,
-      lineId,
-      quantity: formatQuantityText(reservedTaken),
-      unitCost: formatUnitCostText(averageAfter),
+      quantity: reservedTaken,
+      unitCost: averageAfter,
     });
-  }
 
   return {
     movement: {
