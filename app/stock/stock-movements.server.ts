@@ -5,11 +5,13 @@
  * than deadlock), checks that no balance goes below zero or below what is
  * reserved, appends the movement and updates the kept balances.
  *
- * An issue to a build order (`options.reservation`) takes stock the order holds: the
- * order row is locked before the item (the build-order modules lock in the same order:
- * order, then items by id, then balances), the taken quantity may come out of the
- * reserved stock, and the same transaction lowers what the order line holds on that
- * balance and raises what it has been issued.
+ * An issue to a source document that holds stock (`options.held`, a build order line
+ * today, supplied by `app/build-orders/build-order-held-stock.server.ts`) takes what the
+ * document holds: the document is locked before the item (the build-order modules lock
+ * in the same order: order, then items by id, then balances), the taken quantity comes
+ * out of the reserved stock, and the same transaction lowers what the document holds on
+ * that balance. After the commit the ledger runs its after-commit work
+ * (`afterMovementsCommitted`: the low-stock alerts).
  */
 import { and, eq, sql } from "drizzle-orm";
 import type { Transaction } from "~/db/client.server";
