@@ -13,7 +13,7 @@ import {
   rescale,
   type MoneyAmount,
 } from "~/pricing/money";
-import { quantityToNumber } from "~/stock/decimal-amounts";
+import { quantityToNumber } from "~/lib/decimal-amounts";
 import { perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 

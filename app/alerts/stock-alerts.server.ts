@@ -36,7 +36,7 @@ import {
 import { deliverLater, queueMail, writeToOutbox } from "~/mail/mailer.server";
 import { todayUtc } from "~/purchasing/current-entries";
 import { bestPricesOf, loadItemPricing } from "~/purchasing/item-prices.server";
-import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { afterMovementsCommitted } from "~/stock/stock-movements.server";
 import {
   alertChange,

@@ -23,7 +23,7 @@ import {
   parseQuantity,
   parseUnitCost,
   quantityToNumber,
-} from "~/stock/decimal-amounts";
+} from "~/lib/decimal-amounts";
 import { orderCosts } from "./build-order-costs";
 import { buildOrderReference, canReserve } from "./build-order-status";
 import { selectBuildOrderSummaries } from "./build-orders.server";

@@ -16,7 +16,7 @@ import {
   formatQuantityText,
   formatUnitCostText,
   parseQuantity,
-} from "~/stock/decimal-amounts";
+} from "~/lib/decimal-amounts";
 import { StockError } from "~/stock/stock-errors";
 import { amountText, type HeldStock } from "~/stock/stock-movements.server";
 import { buildOrderReference } from "./build-order-status";

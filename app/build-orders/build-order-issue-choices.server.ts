@@ -15,7 +15,7 @@ import {
   lots,
 } from "~/db/schema";
 import { buildOrderStatuses } from "~/db/tables/build-orders";
-import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { buildOrderReference, canIssue } from "./build-order-status";
 import { compareOldestFirst } from "./stock-allocation";
 

@@ -9,7 +9,7 @@
 import { checkStockAlertsOfOrder } from "~/alerts/stock-alerts.server";
 import { and, eq } from "drizzle-orm";
 import { buildOrderLines, items } from "~/db/schema";
-import { quantityToNumber, parseQuantity } from "~/stock/decimal-amounts";
+import { quantityToNumber, parseQuantity } from "~/lib/decimal-amounts";
 import {
   recordMovementIn,
   type RecordedMovement,

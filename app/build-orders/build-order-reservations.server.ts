@@ -18,7 +18,7 @@ import {
   formatQuantityText,
   parseQuantity,
   quantityToNumber,
-} from "~/stock/decimal-amounts";
+} from "~/lib/decimal-amounts";
 import { unitWord } from "~/lib/unit-text";
 import { BuildOrderError, type Shortage } from "./build-order-errors";
 import {

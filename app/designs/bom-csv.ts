@@ -8,7 +8,7 @@
 import { csvFile } from "~/lib/csv-file";
 import { parseExactDecimal } from "~/pricing/money";
 import { nounFor } from "~/lib/unit-text";
-import { quantityToNumber } from "~/stock/decimal-amounts";
+import { quantityToNumber } from "~/lib/decimal-amounts";
 import { requiredStockQuantity } from "./design-costing";
 
 /** The geometry of a coil line, as the builder entered it. */

@@ -27,7 +27,7 @@ import {
   formatExactDecimal,
   parseExactDecimal,
 } from "~/pricing/money";
-import { divideHalfAwayFromZero } from "~/stock/decimal-amounts";
+import { divideHalfAwayFromZero } from "~/lib/decimal-amounts";
 import { EngineeringInputError } from "~/engineering/errors";
 import { apportion } from "./apportion";
 import { coilLineFigures, type DrawnMassBasis } from "./coil-line-figures";

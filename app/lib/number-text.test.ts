@@ -20,7 +20,7 @@ import {
 } from "~/price-lists/cell-values";
 import type { PriceListField } from "~/price-lists/column-mapping";
 import { readPriceListRow } from "~/price-lists/price-list-rows";
-import { parseQuantity, parseUnitCost } from "~/stock/decimal-amounts";
+import { parseQuantity, parseUnitCost } from "~/lib/decimal-amounts";
 import { movementFormSchema } from "~/stock/movement-form";
 import {
   formNumber,

@@ -15,7 +15,7 @@ import { latestOnOrBefore, type CalendarDate } from "~/lib/calendar-days";
 import { findExchangeRate, type ExchangeRateEntry } from "./currency";
 import { findMetalBase, type MetalBasePrice } from "./metal-base";
 import { rateScale, type CurrencyCode } from "./money";
-import { divideHalfAwayFromZero } from "~/stock/decimal-amounts";
+import { divideHalfAwayFromZero } from "~/lib/decimal-amounts";
 import type { MissingMetalBase } from "./pricing-problems";
 import type { ConductorKey } from "~/engineering/reference-data";
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { divideHalfAwayFromZero } from "~/stock/decimal-amounts";
+import { divideHalfAwayFromZero } from "~/lib/decimal-amounts";
 import {
   amountForQuantity,
   convertAmount,

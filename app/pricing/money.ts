@@ -4,7 +4,7 @@
  *
  * - Money (unit prices, adders, metal bases, amounts) is a BigInt count of
  *   ten-thousandths of a currency unit: 12.5 EUR/kg is 125000n. This is the same scale as
- *   unit costs in the stock ledger (`~/stock/decimal-amounts`), so the two mix freely.
+ *   unit costs in the stock ledger (`~/lib/decimal-amounts`), so the two mix freely.
  * - Exchange rates are a BigInt count of millionths: 1.085 is 1085000n.
  * - Quantities that are finer than the stock ledger's thousandths (a coil's wound mass to
  *   a tenth of a milligram) are {@link ExactDecimal}s.
@@ -22,7 +22,7 @@ import {
   formatUnitCostText,
   parseUnitCost,
   unitCostScale,
-} from "~/stock/decimal-amounts";
+} from "~/lib/decimal-amounts";
 
 /** Money in ten-thousandths of a currency unit (4 decimals). */
 export type MoneyAmount = bigint;

@@ -5,7 +5,7 @@
  * line. Each offer has its own dash pattern and marker shape, so the chart reads in black
  * and white and without telling colours apart. Pure: no I/O, no framework.
  */
-import { roundStep, type ChartFrame } from "~/stock/on-hand-history-chart";
+import { roundStep, type ChartFrame } from "~/lib/chart-frame";
 import {
   addMonths,
   dateOfDayNumber,

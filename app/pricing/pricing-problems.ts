@@ -6,7 +6,7 @@
  */
 
 import type { ConductorKey } from "~/engineering/reference-data";
-import { formatQuantityText } from "~/stock/decimal-amounts";
+import { formatQuantityText } from "~/lib/decimal-amounts";
 import type { CalendarDate } from "~/lib/calendar-days";
 import type { CurrencyCode } from "./money";
 

@@ -21,7 +21,7 @@ import type { MetalBasePrice } from "~/pricing/metal-base";
 import { parseMoney, parseRate, type CurrencyCode } from "~/pricing/money";
 import { priceHistory } from "~/pricing/price-history";
 import type { PriceLine } from "~/pricing/price-line";
-import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { companyCurrency } from "./suppliers.server";
 
 const money = (amount: bigint) => Number(amount) / 10_000;

@@ -47,7 +47,7 @@ import {
 import { quantityToPrice } from "~/alerts/low-stock";
 import { todayUtc } from "~/purchasing/current-entries";
 import { readItemPriceQuantity } from "~/purchasing/price-quantity-query";
-import { quantityFromNumber } from "~/stock/decimal-amounts";
+import { quantityFromNumber } from "~/lib/decimal-amounts";
 import { isStockError } from "~/stock/stock-errors";
 import {
   formatMoney,

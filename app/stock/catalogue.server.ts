@@ -12,7 +12,7 @@ import { magnetVolumeMm3 } from "~/engineering/magnet-estimate";
 import { findMagnetGradeByName } from "~/reference/magnet-grades.server";
 import { iecSizeLabel } from "~/reference/wire-size-labels";
 import type { ItemCreateInput, ItemPatchInput } from "./item-schemas";
-import { formatQuantityText, quantityFromNumber } from "./decimal-amounts";
+import { formatQuantityText, quantityFromNumber } from "~/lib/decimal-amounts";
 import { StockError } from "./stock-errors";
 
 const insulationNames: Record<string, string> = {

@@ -19,7 +19,7 @@ import {
   parseUnitCost,
   quantityToNumber,
   valueOf,
-} from "./decimal-amounts";
+} from "~/lib/decimal-amounts";
 
 import type { itemSortKeys } from "./item-list-query";
 

@@ -2,7 +2,7 @@
 import { and, desc, eq, gte, lt, type SQL } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { items, locations, lots, stockMovements, users } from "~/db/schema";
-import { parseQuantity, quantityToNumber } from "./decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { dayAfter, startOfDay } from "~/lib/calendar-days";
 import type { MovementJournalQuery } from "./movement-journal-query";
 

@@ -4,7 +4,7 @@
  * are guarded against formula injection (`csvFile`). Pure: no I/O.
  */
 import { csvFile } from "~/lib/csv-file";
-import { roundedAmountText } from "./decimal-amounts";
+import { roundedAmountText } from "~/lib/decimal-amounts";
 
 /** The most rows one export holds; the stock page says so when a view matches more. */
 export const stockCsvRowLimit = 50_000;

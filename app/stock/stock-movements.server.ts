@@ -30,7 +30,7 @@ import {
   parseQuantity,
   parseUnitCost,
   quantityToNumber,
-} from "./decimal-amounts";
+} from "~/lib/decimal-amounts";
 import { StockError } from "./stock-errors";
 import { unitWord } from "~/lib/unit-text";
 import type { MovementRequest } from "./movement-request";
