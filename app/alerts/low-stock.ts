@@ -5,6 +5,7 @@
  * back at or above the point. Pure: quantities in thousandths of the unit.
  */
 import { csvFile } from "~/lib/csv-file";
+import type { AlertMailMode } from "~/db/tables/alert-enums";
 import {
   amountForQuantity,
   formatExactDecimal,
@@ -18,10 +19,6 @@ import { perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export type AlertChange = "open" | "close" | "none";
-
-/** How a person hears about low stock: an e-mail per alert, a daily digest, or none. */
-export const alertMailModes = ["each", "digest", "none"] as const;
-export type AlertMailMode = (typeof alertMailModes)[number];
 
 /** What happens to an item's alert after its available stock changed. */
 export function alertChange(input: {

@@ -1,6 +1,6 @@
 /** What the build-order API routes share: refusals as JSON, the list query, the order id from the path. */
 import { z } from "zod";
-import { buildOrderStatuses } from "~/db/tables/build-orders";
+import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 import { apiError } from "~/lib/api.server";
 import { idFromText, pageParam, pageSizeParam } from "~/lib/search-params";
 import { answerStockError } from "~/stock/stock-api.server";

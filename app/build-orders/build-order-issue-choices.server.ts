@@ -14,7 +14,7 @@ import {
   locations,
   lots,
 } from "~/db/schema";
-import { buildOrderStatuses } from "~/db/tables/build-orders";
+import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { buildOrderReference, canIssue } from "./build-order-status";
 import { compareOldestFirst } from "./stock-allocation";

@@ -29,7 +29,7 @@ import { DataTable } from "~/components/data-table";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
-import { buildOrderStatuses } from "~/db/tables/build-orders";
+import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime } from "~/lib/format";
 import { pageFromSearch } from "~/lib/search-params";
