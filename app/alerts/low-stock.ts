@@ -6,6 +6,7 @@
  */
 import { csvFile } from "~/lib/csv-file";
 import type { AlertMailMode } from "~/db/tables/alert-enums";
+import { suggestedOrderQuantity } from "~/stock/reorder-quantities";
 import {
   amountForQuantity,
   formatExactDecimal,
@@ -30,34 +31,6 @@ export function alertChange(input: {
   if (low && !input.alertOpen) return "open";
   if (!low && input.alertOpen) return "close";
   return "none";
-}
-
-/** What to order: the reorder quantity, or more when that would still leave stock below the point. */
-export function suggestedOrderQuantity(input: {
-  available: bigint;
-  reorderPoint: bigint;
-  reorderQuantity: bigint;
-}): bigint {
-  const shortfall = input.reorderPoint - input.available;
-  return input.reorderQuantity > shortfall
-    ? input.reorderQuantity
-    : shortfall > 0n
-      ? shortfall
-      : 0n;
-}
-
-/**
- * The quantity an item is priced at for buying, one rule for its page, the best-prices list
- * and its low-stock e-mail: the suggested order ({@link suggestedOrderQuantity}), or one unit
- * (1000 thousandths) when nothing is to be ordered (no reorder quantity, not low).
- */
-export function quantityToPrice(input: {
-  available: bigint;
-  reorderPoint: bigint;
-  reorderQuantity: bigint;
-}): bigint {
-  const order = suggestedOrderQuantity(input);
-  return order > 0n ? order : 1_000n;
 }
 
 export interface AlertPerson {

@@ -9,7 +9,8 @@ import { items, stockAlerts } from "~/db/schema";
 import { bestPrices } from "~/pricing/best-price";
 import { loadItemPricing } from "~/purchasing/item-prices.server";
 import { parseQuantity } from "~/lib/decimal-amounts";
-import { suggestedOrderQuantity, type PurchaseRequestLine } from "./low-stock";
+import type { PurchaseRequestLine } from "./low-stock";
+import { suggestedOrderQuantity } from "~/stock/reorder-quantities";
 
 /** Every open alert's item priced by every supplier that quotes it, grouped by supplier. */
 export async function purchaseRequestsBySupplier(): Promise<

@@ -37,13 +37,13 @@ import { deliverLater, queueMail, writeToOutbox } from "~/mail/mailer.server";
 import { todayUtc } from "~/purchasing/current-entries";
 import { bestPricesOf, loadItemPricing } from "~/purchasing/item-prices.server";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
+import { quantityToPrice } from "~/stock/reorder-quantities";
 import { afterMovementsCommitted } from "~/stock/stock-movements.server";
 import {
   alertChange,
   alertMail,
   alertModeOf,
   digestMail,
-  quantityToPrice,
   type AlertMailFacts,
   type AlertPerson,
 } from "./low-stock";

@@ -38,7 +38,7 @@ import {
   refusalFor,
   type BuildOrderStatus,
 } from "./build-order-status";
-import { allocateOldestFirst, type Allocation } from "./stock-allocation";
+import { allocateOldestFirst, type Allocation } from "~/stock/stock-allocation";
 
 export interface HeldStock {
   sku: string;

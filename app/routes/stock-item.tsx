@@ -44,7 +44,7 @@ import {
   loadItemPricing,
   priceHistoryOf,
 } from "~/purchasing/item-prices.server";
-import { quantityToPrice } from "~/alerts/low-stock";
+import { quantityToPrice } from "~/stock/reorder-quantities";
 import { todayUtc } from "~/purchasing/current-entries";
 import { readItemPriceQuantity } from "~/purchasing/price-quantity-query";
 import { quantityFromNumber } from "~/lib/decimal-amounts";
