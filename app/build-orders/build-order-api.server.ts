@@ -3,7 +3,7 @@ import { z } from "zod";
 import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 import { apiError } from "~/lib/api.server";
 import { idFromText, pageParam, pageSizeParam } from "~/lib/search-params";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 import { isBuildOrderError } from "./build-order-errors";
 
 /**
@@ -13,7 +13,7 @@ import { isBuildOrderError } from "./build-order-errors";
 export async function answerBuildOrderError(
   work: () => Promise<Response>,
 ): Promise<Response> {
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     try {
       return await work();
     } catch (error) {

@@ -17,7 +17,7 @@ import {
   formatUnitCostText,
   parseQuantity,
 } from "~/lib/decimal-amounts";
-import { StockError } from "~/stock/stock-errors";
+import { DomainError } from "~/lib/domain-error";
 import { amountText, type HeldStock } from "~/stock/stock-movements.server";
 import { buildOrderReference } from "./build-order-status";
 
@@ -48,7 +48,7 @@ export function heldByBuildOrderLine(reservation: {
         .where(eq(buildOrders.id, orderId))
         .for("update");
       if (!order)
-        throw new StockError(404, `No build order ${reference}.`, "orderId");
+        throw new DomainError(404, `No build order ${reference}.`, "orderId");
     },
 
     // What the order line holds on the balance the issue takes from, locked; refuses an
@@ -65,7 +65,7 @@ export function heldByBuildOrderLine(reservation: {
         .where(eq(buildOrderLines.id, lineId))
         .for("update");
       if (!line || line.orderId !== orderId || line.itemId !== item.id)
-        throw new StockError(
+        throw new DomainError(
           400,
           `${reference} has no line for ${item.sku}.`,
           "sku",
@@ -84,7 +84,7 @@ export function heldByBuildOrderLine(reservation: {
       const heldQuantity = held ? parseQuantity(held.quantity) : 0n;
       const place = `${lot.number ? `lot ${lot.number} ` : ""}at ${location.code}`;
       if (taken > heldQuantity) {
-        throw new StockError(
+        throw new DomainError(
           409,
           heldQuantity === 0n
             ? `${reference} holds no ${item.sku} ${place}.`

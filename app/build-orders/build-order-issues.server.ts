@@ -17,7 +17,7 @@ import {
 import { BuildOrderError } from "./build-order-errors";
 import { heldByBuildOrderLine } from "./build-order-held-stock.server";
 import type { MovementRequest } from "~/stock/movement-request";
-import { StockError } from "~/stock/stock-errors";
+import { DomainError } from "~/lib/domain-error";
 import type { IssueRequest } from "./build-order-forms";
 import {
   changeStatus,
@@ -140,7 +140,7 @@ export async function issueMovementToBuildOrder(
   userId: string,
 ): Promise<MovementIssueResult> {
   if (request.type !== "issue")
-    throw new StockError(
+    throw new DomainError(
       400,
       "Stock goes to a build order by an issue: buildOrderId is only for issues.",
       "buildOrderId",

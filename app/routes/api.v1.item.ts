@@ -5,7 +5,7 @@ import { userHasRole } from "~/lib/roles";
 import { updateItem } from "~/stock/catalogue.server";
 import { itemPatchSchema } from "~/stock/item-schemas";
 import { findItemBySku } from "~/stock/items.server";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 /** GET /api/v1/items/:sku → the item with its balances by lot and location. */
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -34,7 +34,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       "Storekeepers change reorder point and quantity only; the name and archive state need the role buyer.",
     );
   }
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     await updateItem(params.sku, change);
     return Response.json(withoutId((await findItemBySku(params.sku))!));
   });

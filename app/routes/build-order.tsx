@@ -51,7 +51,7 @@ import type { FlashNote } from "~/lib/flash-messages";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userHasRole } from "~/lib/roles";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 import {
   formatMoney,
   formatStockQuantity,
@@ -191,7 +191,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       }
     }
   } catch (error) {
-    if (isBuildOrderError(error) || isStockError(error)) {
+    if (isBuildOrderError(error) || isDomainError(error)) {
       const field =
         intent === "issue"
           ? issueFormFieldOf(error.field)

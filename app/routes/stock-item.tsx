@@ -48,7 +48,7 @@ import { quantityToPrice } from "~/stock/reorder-quantities";
 import { todayUtc } from "~/purchasing/current-entries";
 import { readItemPriceQuantity } from "~/purchasing/price-quantity-query";
 import { quantityFromNumber } from "~/lib/decimal-amounts";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 import {
   formatMoney,
   formatSignedStockQuantity,
@@ -209,7 +209,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   try {
     await updateItem(params.sku, itemPatchOf(submission.value));
   } catch (error) {
-    if (!isStockError(error)) throw error;
+    if (!isDomainError(error)) throw error;
     const result = error.field
       ? submission.reply({ fieldErrors: { [error.field]: [error.message] } })
       : submission.reply({ formErrors: [error.message] });

@@ -31,7 +31,7 @@ import {
   parseUnitCost,
   quantityToNumber,
 } from "~/lib/decimal-amounts";
-import { StockError } from "./stock-errors";
+import { DomainError } from "~/lib/domain-error";
 import { unitWord } from "~/lib/unit-text";
 import type { MovementRequest } from "./movement-request";
 
@@ -69,7 +69,7 @@ export interface HeldBalance {
  * document's owner. The ledger calls these inside the movement's transaction, in this
  * order: `lockDocument` before it locks the item (the lock order of every such
  * transaction), `lockHeld` once it knows the balance and the quantity (refusing with a
- * StockError when the document holds less), `recordTaken` once the movement row exists.
+ * DomainError when the document holds less), `recordTaken` once the movement row exists.
  */
 export interface HeldStock {
   source: SourceDocument;
@@ -150,7 +150,7 @@ async function lockItem(tx: Transaction, sku: string) {
     .where(eq(items.sku, sku))
     .for("update")
     .limit(1);
-  if (!item) throw new StockError(400, `No item with SKU "${sku}".`, "sku");
+  if (!item) throw new DomainError(400, `No item with SKU "${sku}".`, "sku");
   return item;
 }
 
@@ -165,7 +165,7 @@ async function findLocation(tx: Transaction, code: string, field: string) {
     .where(eq(locations.code, code))
     .limit(1);
   if (!location || !location.active)
-    throw new StockError(400, `No location with code "${code}".`, field);
+    throw new DomainError(400, `No location with code "${code}".`, field);
   return location;
 }
 
@@ -237,7 +237,7 @@ async function resolveLot(
 ): Promise<{ id: number; number: string | null; tareKg: bigint | null }> {
   if (!request.lot) {
     if (item.kind === "wire") {
-      throw new StockError(
+      throw new DomainError(
         400,
         "Wire is kept by spool: give the spool's lot number.",
         "lot",
@@ -258,7 +258,7 @@ async function resolveLot(
     };
   }
   if (request.type !== "receipt") {
-    throw new StockError(
+    throw new DomainError(
       400,
       `No lot "${request.lot}" of this item. A new lot comes with a receipt.`,
       "lot",
@@ -299,27 +299,27 @@ function signedChange(
     case "receipt": {
       if (request.grossKg !== undefined) {
         if (item.kind !== "wire")
-          throw new StockError(
+          throw new DomainError(
             400,
             "Gross and tare weights are for wire spools.",
             "grossKg",
           );
         const tare = request.tareKg ?? lot.tareKg;
         if (tare === null)
-          throw new StockError(
+          throw new DomainError(
             400,
             "Give the spool's tare (empty spool) weight.",
             "tareKg",
           );
         const net = request.grossKg - tare;
         if (net <= 0n)
-          throw new StockError(
+          throw new DomainError(
             400,
             "The gross weight must be more than the tare weight.",
             "grossKg",
           );
         if (request.quantity !== undefined && request.quantity !== net) {
-          throw new StockError(
+          throw new DomainError(
             400,
             `Gross − tare is ${quantityToNumber(net)} kg, not ${quantityToNumber(request.quantity)} kg.`,
             "quantity",
@@ -333,21 +333,21 @@ function signedChange(
       if (request.grossKg !== undefined) {
         // Spool weigh-back: what left the spool is its previous net less its net now.
         if (lot.tareKg === null)
-          throw new StockError(
+          throw new DomainError(
             400,
             "This lot has no tare weight: issue by quantity.",
             "grossKg",
           );
         const netNow = request.grossKg - lot.tareKg;
         if (netNow < 0n)
-          throw new StockError(
+          throw new DomainError(
             400,
             "The gross weight is below the spool's tare weight.",
             "grossKg",
           );
         const taken = balance.onHand - netNow;
         if (taken <= 0n) {
-          throw new StockError(
+          throw new DomainError(
             400,
             "The spool weighs as much as or more than its recorded net: nothing to issue.",
             "grossKg",
@@ -369,7 +369,7 @@ function signedChange(
   }
 }
 
-/** Records one movement (two rows for a transfer). Throws StockError for the user's mistakes. */
+/** Records one movement (two rows for a transfer). Throws DomainError for the user's mistakes. */
 export async function recordMovement(
   request: MovementRequest,
   userId: string,
@@ -399,13 +399,13 @@ export async function recordMovementIn(
   if (options.held) await options.held.lockDocument(tx);
   const item = await lockItem(tx, request.sku);
   if (!item.active)
-    throw new StockError(
+    throw new DomainError(
       409,
       `Item ${item.sku} is archived: restore it before moving stock.`,
       "sku",
     );
   if (request.unit && request.unit !== item.unit) {
-    throw new StockError(
+    throw new DomainError(
       400,
       `Item ${item.sku} is stocked in ${item.unit}, not ${request.unit}.`,
       "unit",
@@ -418,7 +418,7 @@ export async function recordMovementIn(
     item.unit === "pcs" &&
     quantities.some((value) => value! % 1000n !== 0n)
   ) {
-    throw new StockError(
+    throw new DomainError(
       400,
       `Item ${item.sku} is counted in whole pieces.`,
       "quantity",
@@ -430,7 +430,7 @@ export async function recordMovementIn(
       ? await findLocation(tx, request.toLocation!, "toLocation")
       : null;
   if (toLocation && toLocation.id === location.id) {
-    throw new StockError(
+    throw new DomainError(
       400,
       "A transfer needs two different locations.",
       "toLocation",
@@ -453,7 +453,7 @@ export async function recordMovementIn(
   const held = options.held ?? null;
   if (held) {
     if (request.type !== "issue")
-      throw new StockError(
+      throw new DomainError(
         400,
         `Only an issue takes stock reserved for a ${held.source.kind}.`,
         "type",
@@ -462,7 +462,7 @@ export async function recordMovementIn(
   }
   const reservedTaken = held ? -change : 0n;
   if (from.onHand + change < 0n) {
-    throw new StockError(
+    throw new DomainError(
       409,
       `Only ${amountText(from.onHand, unit)} of ${item.sku}${lot.number ? ` lot ${lot.number}` : ""} at ${location.code}; cannot take ${amountText(-change, unit)}.`,
       "quantity",
@@ -474,7 +474,7 @@ export async function recordMovementIn(
     request.type !== "adjustment" &&
     from.onHand + change < from.reserved - reservedTaken
   ) {
-    throw new StockError(
+    throw new DomainError(
       409,
       `${item.sku} at ${location.code}: ${amountText(from.reserved - reservedTaken, unit)} reserved for build orders, only ${amountText(from.onHand - from.reserved + reservedTaken, unit)} free.`,
       "quantity",
