@@ -1,4 +1,4 @@
-import { formatDateTime } from "~/lib/format";
+import { formatDay, formatTimeOfDay } from "~/lib/format";
 import { quantityText } from "~/lib/unit-text";
 import { onHandChart, type OnHandPoint } from "~/stock/on-hand-history-chart";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
@@ -11,16 +11,6 @@ const frame = {
   top: 14,
   bottom: 40,
 };
-
-/** The day of a time, as the one formatter writes it: "2 Dec 2026". */
-function dayOf(iso: string): string {
-  return formatDateTime(iso).split(", ")[0] ?? iso;
-}
-
-/** The time of day: "14:05" (the axis says UTC). */
-function timeOf(iso: string): string {
-  return (formatDateTime(iso).split(", ")[1] ?? "").replace(" UTC", "");
-}
 
 /**
  * On hand over time as a step line, one dot per movement, the reorder point
@@ -53,7 +43,7 @@ export function OnHandChart({
         ? 2
         : 0;
   const last = points[points.length - 1]!;
-  const summary = `On hand over the last ${points.length} movement${points.length === 1 ? "" : "s"}, from ${dayOf(points[0]!.at)} to now: ${formatStockQuantity(last.onHand, unit)} now${
+  const summary = `On hand over the last ${points.length} movement${points.length === 1 ? "" : "s"}, from ${formatDay(points[0]!.at)} to now: ${formatStockQuantity(last.onHand, unit)} now${
     reorderPoint > 0
       ? `, reorder point ${formatStockQuantity(reorderPoint, unit)}`
       : ""
@@ -108,10 +98,10 @@ export function OnHandChart({
             {index === chart.timeTicks.length - 1
               ? "now"
               : !chart.withinTwoDays
-                ? dayOf(tick.at)
+                ? formatDay(tick.at)
                 : index === 0
-                  ? `${dayOf(tick.at)}, ${timeOf(tick.at)}`
-                  : timeOf(tick.at)}
+                  ? `${formatDay(tick.at)}, ${formatTimeOfDay(tick.at)}`
+                  : formatTimeOfDay(tick.at)}
           </text>
         ))}
         <text

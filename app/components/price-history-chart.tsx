@@ -2,7 +2,7 @@ import { createColumnHelper } from "@tanstack/react-table";
 import { useId } from "react";
 import { Link } from "react-router";
 import { DataTable } from "~/components/data-table";
-import { formatDateTime, formatQuantity } from "~/lib/format";
+import { formatDay, formatQuantity } from "~/lib/format";
 import {
   markerPath,
   priceHistoryChart,
@@ -57,14 +57,9 @@ const strokeClasses = [
   "stroke-graphite-500",
 ];
 
-/** "2026-12-02" → "2 Dec 2026", as the one formatter writes days. */
-function dayText(date: string): string {
-  return formatDateTime(`${date}T00:00:00Z`).split(", ")[0] ?? date;
-}
-
 /** "2026-12-01" → "Dec 2026". */
 function monthText(date: string): string {
-  return dayText(date).replace(/^\d+ /, "");
+  return formatDay(date).replace(/^\d+ /, "");
 }
 
 /** A unit price with its currency and unit, to the ten-thousandth: "12.5000 EUR/kg", "2.4000 EUR/piece". */
@@ -172,8 +167,8 @@ export function PriceHistoryChart({
         <p className="text-sm text-graphite-500">
           Unit price in {currency} per {unitWord}
           {chart
-            ? `, ${dayText(chart.start)} to ${dayText(chart.end)}, one line per supplier article`
-            : ` over the last year, ${dayText(history.from)} to ${dayText(history.to)}`}
+            ? `, ${formatDay(chart.start)} to ${formatDay(chart.end)}, one line per supplier article`
+            : ` over the last year, ${formatDay(history.from)} to ${formatDay(history.to)}`}
           .
         </p>
       </div>
@@ -267,7 +262,7 @@ export function PriceHistoryChart({
                   >
                     {chart.monthTicks
                       ? monthText(tick.date)
-                      : dayText(tick.date)}
+                      : formatDay(tick.date)}
                   </text>
                 </g>
               ))}
@@ -315,7 +310,7 @@ export function PriceHistoryChart({
                         y={marker.y}
                         className={strokeClass}
                       >
-                        <title>{`${name}: ${price(marker.unitPrice)} from ${dayText(marker.date)}`}</title>
+                        <title>{`${name}: ${price(marker.unitPrice)} from ${formatDay(marker.date)}`}</title>
                       </Marker>
                     ))}
                     {layout.labelY !== null && layout.endY !== null ? (
@@ -427,7 +422,7 @@ function figureColumns(companyCurrency: string, unit: string) {
     column.accessor("date", {
       header: "From",
       cell: (info) => (
-        <span className="whitespace-nowrap">{dayText(info.getValue())}</span>
+        <span className="whitespace-nowrap">{formatDay(info.getValue())}</span>
       ),
     }),
     column.accessor("unitPrice", {
@@ -486,7 +481,7 @@ function summaryOf(
       offer.currency === history.companyCurrency
         ? ""
         : ` (quoted in ${offer.currency})`;
-    return `${name}${quoted}: ${price(priced[0]!.unitPrice)} from ${dayText(priced[0]!.date)}, ${changes === 0 ? "no change" : `${changes} change${changes === 1 ? "" : "s"}`}, lowest ${price(Math.min(...values))}, highest ${price(Math.max(...values))}, ${last.unitPrice === null ? "no price now" : `now ${price(last.unitPrice)}`}.`;
+    return `${name}${quoted}: ${price(priced[0]!.unitPrice)} from ${formatDay(priced[0]!.date)}, ${changes === 0 ? "no change" : `${changes} change${changes === 1 ? "" : "s"}`}, lowest ${price(Math.min(...values))}, highest ${price(Math.max(...values))}, ${last.unitPrice === null ? "no price now" : `now ${price(last.unitPrice)}`}.`;
   });
-  return `Unit price of ${quantity} from ${dayText(history.from)} to ${dayText(history.to)}, ${history.series.length} supplier article${history.series.length === 1 ? "" : "s"}. ${offers.join(" ")}`;
+  return `Unit price of ${quantity} from ${formatDay(history.from)} to ${formatDay(history.to)}, ${history.series.length} supplier article${history.series.length === 1 ? "" : "s"}. ${offers.join(" ")}`;
 }
