@@ -1,6 +1,7 @@
 import js from "@eslint/js";
 import reactHooks from "eslint-plugin-react-hooks";
 import tseslint from "typescript-eslint";
+import { domainLayerConfigs } from "./scripts/lint/domain-layers.js";
 
 export default tseslint.config(
   {
@@ -55,6 +56,8 @@ export default tseslint.config(
     files: ["app/**/*.{ts,tsx}", "server/**/*.ts"],
     rules: { "no-console": "error" },
   },
+  // A domain folder imports only the folders below it (scripts/lint/domain-layers.js).
+  ...domainLayerConfigs(),
   {
     files: ["server.js"],
     languageOptions: {

@@ -11,7 +11,7 @@ import { items, locations } from "~/db/schema";
 import { createItem } from "~/stock/catalogue.server";
 import type { ItemCreateInput } from "~/stock/item-schemas";
 import { movementRequestSchema } from "~/stock/movement-request";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 import { recordMovement } from "~/stock/stock-movements.server";
 
 const demoLocations = [
@@ -369,7 +369,7 @@ export async function seedDemoStock(storekeeperId: string): Promise<void> {
         checkAlerts: false,
       });
     } catch (error) {
-      if (!isStockError(error)) throw error; // a demo issue larger than the spool is simply skipped
+      if (!isDomainError(error)) throw error; // a demo issue larger than the spool is simply skipped
     }
   };
 

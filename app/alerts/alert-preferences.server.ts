@@ -2,7 +2,7 @@
 import { eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { alertPreferences } from "~/db/schema";
-import type { AlertMailMode } from "./low-stock";
+import type { AlertMailMode } from "~/db/tables/alert-enums";
 
 export async function alertPreferenceOf(
   userId: string,

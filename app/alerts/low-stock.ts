@@ -4,7 +4,9 @@
  * below that point; an alert opens on the drop and closes when available is
  * back at or above the point. Pure: quantities in thousandths of the unit.
  */
-import Papa from "papaparse";
+import { csvFile } from "~/lib/csv-file";
+import type { AlertMailMode } from "~/db/tables/alert-enums";
+import { suggestedOrderQuantity } from "~/stock/reorder-quantities";
 import {
   amountForQuantity,
   formatExactDecimal,
@@ -13,16 +15,11 @@ import {
   rescale,
   type MoneyAmount,
 } from "~/pricing/money";
-import { guardCell } from "~/stock/csv-formula-guard";
-import { quantityToNumber } from "~/stock/decimal-amounts";
+import { quantityToNumber } from "~/lib/decimal-amounts";
 import { perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export type AlertChange = "open" | "close" | "none";
-
-/** How a person hears about low stock: an e-mail per alert, a daily digest, or none. */
-export const alertMailModes = ["each", "digest", "none"] as const;
-export type AlertMailMode = (typeof alertMailModes)[number];
 
 /** What happens to an item's alert after its available stock changed. */
 export function alertChange(input: {
@@ -34,34 +31,6 @@ export function alertChange(input: {
   if (low && !input.alertOpen) return "open";
   if (!low && input.alertOpen) return "close";
   return "none";
-}
-
-/** What to order: the reorder quantity, or more when that would still leave stock below the point. */
-export function suggestedOrderQuantity(input: {
-  available: bigint;
-  reorderPoint: bigint;
-  reorderQuantity: bigint;
-}): bigint {
-  const shortfall = input.reorderPoint - input.available;
-  return input.reorderQuantity > shortfall
-    ? input.reorderQuantity
-    : shortfall > 0n
-      ? shortfall
-      : 0n;
-}
-
-/**
- * The quantity an item is priced at for buying, one rule for its page, the best-prices list
- * and its low-stock e-mail: the suggested order ({@link suggestedOrderQuantity}), or one unit
- * (1000 thousandths) when nothing is to be ordered (no reorder quantity, not low).
- */
-export function quantityToPrice(input: {
-  available: bigint;
-  reorderPoint: bigint;
-  reorderQuantity: bigint;
-}): bigint {
-  const order = suggestedOrderQuantity(input);
-  return order > 0n ? order : 1_000n;
 }
 
 export interface AlertPerson {
@@ -225,9 +194,9 @@ export function purchaseRequestCsv(
       line.unitPrice,
     );
     return [
-      guardCell(line.sku),
-      guardCell(line.name),
-      guardCell(line.supplierSku),
+      line.sku,
+      line.name,
+      line.supplierSku,
       quantityToNumber(line.quantity),
       // The stock unit as stored (kg, pcs, m), not as words: machine-read, like the API.
       line.unit,
@@ -242,5 +211,5 @@ export function purchaseRequestCsv(
       ),
     ];
   });
-  return `\uFEFF${Papa.unparse({ fields: [...purchaseRequestHeaders], data: rows }, { newline: "\r\n" })}\r\n`;
+  return csvFile(purchaseRequestHeaders, rows);
 }

@@ -8,8 +8,9 @@ import { db } from "~/db/client.server";
 import { items, stockAlerts } from "~/db/schema";
 import { bestPrices } from "~/pricing/best-price";
 import { loadItemPricing } from "~/purchasing/item-prices.server";
-import { parseQuantity } from "~/stock/decimal-amounts";
-import { suggestedOrderQuantity, type PurchaseRequestLine } from "./low-stock";
+import { parseQuantity } from "~/lib/decimal-amounts";
+import type { PurchaseRequestLine } from "./low-stock";
+import { suggestedOrderQuantity } from "~/stock/reorder-quantities";
 
 /** Every open alert's item priced by every supplier that quotes it, grouped by supplier. */
 export async function purchaseRequestsBySupplier(): Promise<

@@ -36,13 +36,14 @@ import {
 import { deliverLater, queueMail, writeToOutbox } from "~/mail/mailer.server";
 import { todayUtc } from "~/purchasing/current-entries";
 import { bestPricesOf, loadItemPricing } from "~/purchasing/item-prices.server";
-import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
+import { quantityToPrice } from "~/stock/reorder-quantities";
+import { afterMovementsCommitted } from "~/stock/stock-movements.server";
 import {
   alertChange,
   alertMail,
   alertModeOf,
   digestMail,
-  quantityToPrice,
   type AlertMailFacts,
   type AlertPerson,
 } from "./low-stock";
@@ -451,3 +452,7 @@ export async function checkStockAlertsOfSkus(skus: readonly string[]) {
     alertsLog.error({ err: error }, "low-stock check failed");
   }
 }
+
+// Every movement the ledger commits is checked against the reorder points, once, after
+// the final commit (the ledger's after-commit hook; it imports no alert code).
+afterMovementsCommitted(checkStockAlertsOfSkus);

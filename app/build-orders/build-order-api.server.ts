@@ -1,9 +1,9 @@
 /** What the build-order API routes share: refusals as JSON, the list query, the order id from the path. */
 import { z } from "zod";
-import { buildOrderStatuses } from "~/db/tables/build-orders";
+import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 import { apiError } from "~/lib/api.server";
 import { pageParam, pageSizeParam } from "~/lib/search-params";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 import { isBuildOrderError } from "./build-order-errors";
 import { buildOrderIdFromPath } from "./build-order-path";
 
@@ -14,7 +14,7 @@ import { buildOrderIdFromPath } from "./build-order-path";
 export async function answerBuildOrderError(
   work: () => Promise<Response>,
 ): Promise<Response> {
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     try {
       return await work();
     } catch (error) {

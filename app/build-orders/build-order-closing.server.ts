@@ -8,7 +8,7 @@ import { checkStockAlertsOfOrder } from "~/alerts/stock-alerts.server";
 import { and, eq } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { buildOrderLines, buildOrders } from "~/db/schema";
-import { formatQuantityText } from "~/stock/decimal-amounts";
+import { formatQuantityText } from "~/lib/decimal-amounts";
 import { BuildOrderError } from "./build-order-errors";
 import {
   changeStatus,

@@ -6,8 +6,7 @@
  * Amounts are rounded half away from zero to 0.0001 once per line (the project's rule,
  * `valueOf`); per motor is the total ÷ motors, rounded the same way.
  */
-import { valueOf } from "~/stock/decimal-amounts";
-import { divideHalfAwayFromZero } from "~/pricing/money";
+import { divideHalfAwayFromZero, valueOf } from "~/lib/decimal-amounts";
 
 export interface LineForCosting {
   /** Thousandths of the unit. */

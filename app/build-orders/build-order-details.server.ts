@@ -23,11 +23,11 @@ import {
   parseQuantity,
   parseUnitCost,
   quantityToNumber,
-} from "~/stock/decimal-amounts";
+} from "~/lib/decimal-amounts";
 import { orderCosts } from "./build-order-costs";
 import { buildOrderReference, canReserve } from "./build-order-status";
 import { selectBuildOrderSummaries } from "./build-orders.server";
-import { compareOldestFirst } from "./stock-allocation";
+import { compareOldestFirst } from "~/stock/stock-allocation";
 
 const money = (tenThousandths: bigint) => Number(tenThousandths) / 10_000;
 const quantity = (text: string) => quantityToNumber(parseQuantity(text));

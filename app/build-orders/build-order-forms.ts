@@ -5,7 +5,7 @@
  */
 import { z } from "zod";
 import { formNumber } from "~/lib/number-text";
-import { quantityFromNumber } from "~/stock/decimal-amounts";
+import { quantityFromNumber } from "~/lib/decimal-amounts";
 import { maxMotorsPerOrder } from "./build-order-requirements";
 
 const wholeNumber = (label: string, max: number) =>

@@ -14,10 +14,10 @@ import {
   locations,
   lots,
 } from "~/db/schema";
-import { buildOrderStatuses } from "~/db/tables/build-orders";
-import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
+import { buildOrderStatuses } from "~/db/tables/build-order-enums";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { buildOrderReference, canIssue } from "./build-order-status";
-import { compareOldestFirst } from "./stock-allocation";
+import { compareOldestFirst } from "~/stock/stock-allocation";
 
 /** Enough for any workshop's open orders of one item; the page lists them in one choice. */
 const maxChoices = 50;

@@ -9,14 +9,15 @@
 import { checkStockAlertsOfOrder } from "~/alerts/stock-alerts.server";
 import { and, eq } from "drizzle-orm";
 import { buildOrderLines, items } from "~/db/schema";
-import { quantityToNumber, parseQuantity } from "~/stock/decimal-amounts";
+import { quantityToNumber, parseQuantity } from "~/lib/decimal-amounts";
 import {
   recordMovementIn,
   type RecordedMovement,
 } from "~/stock/stock-movements.server";
 import { BuildOrderError } from "./build-order-errors";
+import { heldByBuildOrderLine } from "./build-order-held-stock.server";
 import type { MovementRequest } from "~/stock/movement-request";
-import { StockError } from "~/stock/stock-errors";
+import { DomainError } from "~/lib/domain-error";
 import type { IssueRequest } from "./build-order-forms";
 import {
   changeStatus,
@@ -92,7 +93,7 @@ export async function issueToBuildOrder(
         supplierBatch: undefined,
       },
       userId,
-      { reservation: { orderId: order.id, lineId: line.id } },
+      { held: heldByBuildOrderLine({ orderId: order.id, lineId: line.id }) },
     );
     if (order.status === "reserved")
       await changeStatus(tx, order, "in_progress", userId, "First issue.");
@@ -139,7 +140,7 @@ export async function issueMovementToBuildOrder(
   userId: string,
 ): Promise<MovementIssueResult> {
   if (request.type !== "issue")
-    throw new StockError(
+    throw new DomainError(
       400,
       "Stock goes to a build order by an issue: buildOrderId is only for issues.",
       "buildOrderId",

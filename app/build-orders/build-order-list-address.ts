@@ -1,5 +1,5 @@
 /** The build-order list's address: the status it is filtered by and the page. Pure. */
-import { buildOrderStatuses } from "~/db/tables/build-orders";
+import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 import type { BuildOrderStatus } from "./build-order-status";
 
 /** The status a `?status=` value names, or undefined for any other text. */

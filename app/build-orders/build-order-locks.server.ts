@@ -23,7 +23,7 @@ import {
   lots,
   stockBalances,
 } from "~/db/schema";
-import { parseQuantity } from "~/stock/decimal-amounts";
+import { parseQuantity } from "~/lib/decimal-amounts";
 import type { LedgerTransaction } from "~/stock/stock-movements.server";
 import { BuildOrderError } from "./build-order-errors";
 import {

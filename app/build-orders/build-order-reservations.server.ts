@@ -18,7 +18,7 @@ import {
   formatQuantityText,
   parseQuantity,
   quantityToNumber,
-} from "~/stock/decimal-amounts";
+} from "~/lib/decimal-amounts";
 import { unitWord } from "~/lib/unit-text";
 import { BuildOrderError, type Shortage } from "./build-order-errors";
 import {
@@ -38,7 +38,7 @@ import {
   refusalFor,
   type BuildOrderStatus,
 } from "./build-order-status";
-import { allocateOldestFirst, type Allocation } from "./stock-allocation";
+import { allocateOldestFirst, type Allocation } from "~/stock/stock-allocation";
 
 export interface HeldStock {
   sku: string;

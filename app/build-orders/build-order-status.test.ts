@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { buildOrderStatuses } from "~/db/tables/build-orders";
+import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 import {
   buildOrderIdInReference,
   buildOrderReference,

@@ -2,7 +2,7 @@
  * The life of a build order: draft → reserved → in progress → complete, or cancelled
  * from any state before complete. Pure: shared by the server and the pages.
  */
-import type { buildOrderStatuses } from "~/db/tables/build-orders";
+import type { buildOrderStatuses } from "~/db/tables/build-order-enums";
 
 export type BuildOrderStatus = (typeof buildOrderStatuses)[number];
 

@@ -23,7 +23,7 @@ import {
   formatQuantityText,
   formatUnitCostText,
   parseUnitCost,
-} from "~/stock/decimal-amounts";
+} from "~/lib/decimal-amounts";
 import { BuildOrderError } from "./build-order-errors";
 import type { BuildOrderCreateInput } from "./build-order-forms";
 import { itemRequirements } from "./build-order-requirements";

@@ -18,7 +18,7 @@ import {
 } from "~/insight/design-insight";
 import { ESTIMATED_TORQUE_PER_NM_LABEL } from "~/designs/design-costing";
 import { costBasisLabels } from "~/designs/design-page";
-import { formatDateTime, formatQuantity } from "~/lib/format";
+import { formatDay, formatQuantity } from "~/lib/format";
 import { formatMoney } from "~/pricing/money";
 import { costBasisText, PriceBasisNote } from "./design/price-basis-note";
 import { InsightCostChart } from "./insight-cost-chart";
@@ -47,10 +47,6 @@ function money(value: number, currency: string, per?: string): string {
   });
 }
 
-function dayText(date: string): string {
-  return formatDateTime(`${date}T00:00:00Z`).split(", ")[0] ?? date;
-}
-
 function designLabel(design: DesignInsight): string {
   return `${design.name} · rev ${design.revision}`;
 }
@@ -75,7 +71,7 @@ function StoredBase({
   return (
     <p className="mt-1 text-xs text-graphite-500">
       {base
-        ? `Stored: ${money(base.pricePerKg, currency, "kg")} from ${dayText(base.validFrom)}`
+        ? `Stored: ${money(base.pricePerKg, currency, "kg")} from ${formatDay(base.validFrom)}`
         : `No ${metal} base stored in ${currency} for this day.`}
     </p>
   );
@@ -441,7 +437,7 @@ export function InsightDesigns({
         <p className="text-sm text-graphite-500">
           The latest released revision of each design, newest design first, at
           the {costBasisText(data.basis)} for{" "}
-          {countText(data.quantity, "motor")} on {dayText(data.designs.date)},
+          {countText(data.quantity, "motor")} on {formatDay(data.designs.date)},
           in {currency}. Per N·m is per newton-metre of the rated torque, or of
           the first-order estimate where no rated torque is given (marked so).
         </p>

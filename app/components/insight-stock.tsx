@@ -10,7 +10,7 @@ import { DataTable } from "~/components/data-table";
 import type { DesignInsight } from "~/insight/design-insight.server";
 import { costHistoryChange, moneyFromJson } from "~/insight/design-insight";
 import type { StockValueInsight } from "~/insight/stock-value.server";
-import { formatDateTime } from "~/lib/format";
+import { formatDay } from "~/lib/format";
 import { formatMoney } from "~/pricing/money";
 import { kindParts, palette, Swatch, type FillPart } from "./insight-patterns";
 import { InsightTrendChart, TrendSample } from "./insight-trend-chart";
@@ -19,10 +19,6 @@ import { countText } from "~/lib/unit-text";
 
 function money(value: number, currency: string): string {
   return formatMoney(moneyFromJson(value), currency, { decimals: 2 });
-}
-
-function dayText(date: string): string {
-  return formatDateTime(`${date}T00:00:00Z`).split(", ")[0] ?? date;
 }
 
 const monthHeader = new Intl.DateTimeFormat("en-GB", {
@@ -285,7 +281,7 @@ export function StockTrend({
           label={`Stock value at the end of each week, in ${currency}`}
           summary={
             first && last
-              ? `Stock value ${money(first.value, currency)} at the end of the week of ${dayText(first.week)}, ${money(last.value, currency)} now; lowest ${money(Math.min(...trend.map((point) => point.value)), currency)}, highest ${money(Math.max(...trend.map((point) => point.value)), currency)}.`
+              ? `Stock value ${money(first.value, currency)} at the end of the week of ${formatDay(first.week)}, ${money(last.value, currency)} now; lowest ${money(Math.min(...trend.map((point) => point.value)), currency)}, highest ${money(Math.max(...trend.map((point) => point.value)), currency)}.`
               : "No weeks to show."
           }
           series={[
@@ -320,7 +316,7 @@ export function StockTrend({
               header: "Week of",
               cell: (info) => (
                 <span className="whitespace-nowrap">
-                  {dayText(info.getValue())}
+                  {formatDay(info.getValue())}
                   {info.row.original.complete ? "" : " (so far)"}
                 </span>
               ),
@@ -360,7 +356,7 @@ function changeColumns(currency: string) {
           <span className="whitespace-nowrap">
             {money(change.from.costPerMotor, currency)}
             <span className="block text-xs text-graphite-500">
-              {dayText(change.from.date)}
+              {formatDay(change.from.date)}
             </span>
           </span>
         ) : (
@@ -378,7 +374,7 @@ function changeColumns(currency: string) {
           <span className="whitespace-nowrap">
             {money(change.to.costPerMotor, currency)}
             <span className="block text-xs text-graphite-500">
-              {dayText(change.to.date)}
+              {formatDay(change.to.date)}
             </span>
           </span>
         ) : (
@@ -459,7 +455,7 @@ export function CostHistory({
                 const priced = points.filter((point) => point.complete);
                 return priced.length === 0
                   ? `${design.name}: not fully priced in any month.`
-                  : `${design.name}: ${money(priced[0]!.costPerMotor, currency)} on ${dayText(priced[0]!.date)}, ${money(priced.at(-1)!.costPerMotor, currency)} on ${dayText(priced.at(-1)!.date)}.`;
+                  : `${design.name}: ${money(priced[0]!.costPerMotor, currency)} on ${formatDay(priced[0]!.date)}, ${money(priced.at(-1)!.costPerMotor, currency)} on ${formatDay(priced.at(-1)!.date)}.`;
               })
               .join(" ")}
             series={withHistory.map((design) => ({
@@ -500,7 +496,7 @@ export function CostHistory({
             column.display({
               id: date,
               header: () => (
-                <span className="whitespace-nowrap" title={dayText(date)}>
+                <span className="whitespace-nowrap" title={formatDay(date)}>
                   {monthHeader.format(new Date(`${date}T00:00:00Z`))}
                 </span>
               ),

@@ -4,7 +4,7 @@ import { GlyphCircle } from "@visx/glyph";
 import { GridRows } from "@visx/grid";
 import { scaleLinear, scaleUtc } from "@visx/scale";
 import { Line, LinePath } from "@visx/shape";
-import { formatDateTime } from "~/lib/format";
+import { formatDay, formatTimeOfDay } from "~/lib/format";
 import { quantityText } from "~/lib/unit-text";
 import {
   onHandChart,
@@ -21,16 +21,6 @@ const frame = {
   top: 14,
   bottom: 40,
 };
-
-/** The day of a time, as the one formatter writes it: "2 Dec 2026". */
-function dayOf(iso: string): string {
-  return formatDateTime(iso).split(", ")[0] ?? iso;
-}
-
-/** The time of day: "14:05" (the axis says UTC). */
-function timeOfDay(iso: string): string {
-  return (formatDateTime(iso).split(", ")[1] ?? "").replace(" UTC", "");
-}
 
 /** A movement's point on the chart: its time and the on hand after it. */
 const timeOf = (point: OnHandPoint) => new Date(point.at);
@@ -62,7 +52,7 @@ export function OnHandChart({
     );
   }
   const last = points[points.length - 1]!;
-  const summary = `On hand over the last ${points.length} movement${points.length === 1 ? "" : "s"}, from ${dayOf(points[0]!.at)} to now: ${formatStockQuantity(last.onHand, unit)} now${
+  const summary = `On hand over the last ${points.length} movement${points.length === 1 ? "" : "s"}, from ${formatDay(points[0]!.at)} to now: ${formatStockQuantity(last.onHand, unit)} now${
     reorderPoint > 0
       ? `, reorder point ${formatStockQuantity(reorderPoint, unit)}`
       : ""
@@ -176,10 +166,10 @@ function OnHandAxes({
     index === times.length - 1
       ? "now"
       : !chart.withinTwoDays
-        ? dayOf(at)
+        ? formatDay(at)
         : index === 0
-          ? `${dayOf(at)}, ${timeOfDay(at)}`
-          : timeOfDay(at);
+          ? `${formatDay(at)}, ${formatTimeOfDay(at)}`
+          : formatTimeOfDay(at);
   return (
     <>
       <GridRows

@@ -8,12 +8,12 @@ import {
 } from "~/components/stock/price-history-plot";
 import { perUnitWord } from "~/lib/unit-text";
 import {
-  dayText,
   offerName,
   pricePerUnit,
   priceHistorySummary,
   type PriceHistoryView,
 } from "~/stock/price-history-texts";
+import { formatDay } from "~/lib/format";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export type { PriceHistoryView };
@@ -53,8 +53,8 @@ export function PriceHistoryChart({
         <p className="text-sm text-graphite-500">
           Unit price in {currency} per {unitWord}
           {chart
-            ? `, ${dayText(chart.start)} to ${dayText(chart.end)}, one line per supplier article`
-            : ` over the last year, ${dayText(history.from)} to ${dayText(history.to)}`}
+            ? `, ${formatDay(chart.start)} to ${formatDay(chart.end)}, one line per supplier article`
+            : ` over the last year, ${formatDay(history.from)} to ${formatDay(history.to)}`}
           .
         </p>
       </div>

@@ -6,4 +6,6 @@ export * from "./tables/stock-enums";
 export * from "./tables/purchasing";
 export * from "./tables/designs";
 export * from "./tables/build-orders";
+export * from "./tables/build-order-enums";
 export * from "./tables/alerts";
+export * from "./tables/alert-enums";

@@ -3,13 +3,12 @@
  * per-motor quantity and the quantity a build of N motors draws from stock,
  * the price and its source, and a coil line's geometry. Numbers are written as
  * plain numbers with the unit in its own column or header; text cells are
- * guarded against formula injection. Pure: no I/O.
+ * guarded against formula injection (`csvFile`). Pure: no I/O.
  */
-import Papa from "papaparse";
+import { csvFile } from "~/lib/csv-file";
 import { parseExactDecimal } from "~/pricing/money";
 import { nounFor } from "~/lib/unit-text";
-import { guardCell } from "~/stock/csv-formula-guard";
-import { quantityToNumber } from "~/stock/decimal-amounts";
+import { quantityToNumber } from "~/lib/decimal-amounts";
 import { requiredStockQuantity } from "./design-costing";
 
 /** The geometry of a coil line, as the builder entered it. */
@@ -144,9 +143,12 @@ export function bomCsvHeaders(quantity: number, currency: string): string[] {
 export function bomCsv(input: BomCsvInput): string {
   const list = columns(input.quantity, input.currency);
   const rows = input.lines.map((line, index) =>
-    list.map((column) => guardCell(column.cell(line, index))),
+    list.map((column) => column.cell(line, index)),
   );
-  return `\uFEFF${Papa.unparse({ fields: list.map((column) => column.header), data: rows }, { newline: "\r\n" })}\r\n`;
+  return csvFile(
+    list.map((column) => column.header),
+    rows,
+  );
 }
 
 /** "turnledger-bom-outrunner-12n14p-rev2.csv": the design's name in plain letters and digits. */

@@ -20,7 +20,7 @@ import {
 } from "~/purchasing/item-prices.server";
 import { companyCurrency } from "~/purchasing/suppliers.server";
 import { countText, quantityText } from "~/lib/unit-text";
-import { parseUnitCost, quantityToNumber } from "~/stock/decimal-amounts";
+import { parseUnitCost, quantityToNumber } from "~/lib/decimal-amounts";
 import { coilLineFigures } from "./coil-line-figures";
 import { designWarnings } from "./design-checks";
 import {

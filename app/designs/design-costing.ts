@@ -24,10 +24,10 @@
 import type { CurrencyCode, ExactDecimal, MoneyAmount } from "~/pricing/money";
 import {
   amountForQuantity,
-  divideHalfAwayFromZero,
   formatExactDecimal,
   parseExactDecimal,
 } from "~/pricing/money";
+import { divideHalfAwayFromZero } from "~/lib/decimal-amounts";
 import { EngineeringInputError } from "~/engineering/errors";
 import { apportion } from "./apportion";
 import { coilLineFigures, type DrawnMassBasis } from "./coil-line-figures";

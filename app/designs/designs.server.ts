@@ -15,7 +15,7 @@ import {
   magnetItems,
   wireItems,
 } from "~/db/schema";
-import { StockError } from "~/stock/stock-errors";
+import { DomainError } from "~/lib/domain-error";
 import type {
   DesignLineInput,
   NewDesign,
@@ -115,7 +115,7 @@ export async function createDesign(
     .where(eq(designs.name, input.name))
     .limit(1);
   if (existing)
-    throw new StockError(
+    throw new DomainError(
       409,
       `A design named "${input.name}" already exists.`,
       "name",
@@ -154,12 +154,12 @@ async function lockDraft(tx: Transaction, designId: number, revision: number) {
     .for("update")
     .limit(1);
   if (!found)
-    throw new StockError(
+    throw new DomainError(
       404,
       `Design ${designId} has no revision ${revision}.`,
     );
   if (found.status !== "draft")
-    throw new StockError(
+    throw new DomainError(
       409,
       `Revision ${revision} is released and cannot be changed. Start a new revision to make changes.`,
     );
@@ -193,19 +193,19 @@ async function resolveLineItems(
     const item = bySku.get(line.sku.toLowerCase());
     const field = `lines[${index}].sku`;
     if (!item || !item.active)
-      throw new StockError(
+      throw new DomainError(
         400,
         `Line ${index + 1}: no active item with SKU "${line.sku}".`,
         field,
       );
     if (line.kind === "coil" && item.isWire === null)
-      throw new StockError(
+      throw new DomainError(
         400,
         `Line ${index + 1}: ${item.sku} is not a magnet wire item; a coil is wound from wire.`,
         field,
       );
     if (line.kind === "magnet" && item.isMagnet === null)
-      throw new StockError(
+      throw new DomainError(
         400,
         `Line ${index + 1}: ${item.sku} is not a magnet item.`,
         field,
@@ -269,7 +269,7 @@ export async function updateDraftRevision(
           expectLineIds,
         )
       )
-        throw new StockError(
+        throw new DomainError(
           409,
           "The lines were changed by someone else meanwhile: reload the page and make your change again.",
         );
@@ -312,7 +312,7 @@ export async function releaseRevision(
       .from(designLines)
       .where(eq(designLines.revisionId, draft.id))) as [{ lines: number }];
     if (Number(lines) === 0)
-      throw new StockError(
+      throw new DomainError(
         409,
         "A revision without lines cannot be released: add its coils, magnets and parts first.",
       );
@@ -334,7 +334,7 @@ export async function startNewRevision(
       .where(eq(designs.id, designId))
       .for("update")
       .limit(1);
-    if (!design) throw new StockError(404, `No design ${designId}.`);
+    if (!design) throw new DomainError(404, `No design ${designId}.`);
     const [latest] = await tx
       .select()
       .from(designRevisions)
@@ -342,9 +342,9 @@ export async function startNewRevision(
       .orderBy(desc(designRevisions.revision))
       .limit(1);
     if (!latest)
-      throw new StockError(404, `Design ${designId} has no revisions.`);
+      throw new DomainError(404, `Design ${designId} has no revisions.`);
     if (latest.status === "draft")
-      throw new StockError(
+      throw new DomainError(
         409,
         `Revision ${latest.revision} is still a draft: change it, or release it before starting another.`,
       );

@@ -16,7 +16,7 @@ import {
   type RevisionRow,
   type StoredDesignLine,
 } from "~/designs/design-revisions.server";
-import type { CalendarDate } from "~/pricing/calendar-date";
+import type { CalendarDate } from "~/lib/calendar-days";
 import { parseMoney } from "~/pricing/money";
 import {
   loadItemsPricing,

@@ -3,9 +3,14 @@
  * is. Weeks run Monday 00:00 to the next Monday 00:00 UTC (ISO 8601 weeks, times in UTC
  * as everywhere in Turnledger).
  */
-import type { CalendarDate } from "~/pricing/calendar-date";
+import {
+  addMonths,
+  dayMs,
+  dayOf,
+  startOfDay,
+  type CalendarDate,
+} from "~/lib/calendar-days";
 
-const dayMs = 86_400_000;
 const weekMs = 7 * dayMs;
 
 /** One week of a stock-value trend: the Monday it starts, and the moment its value is taken. */
@@ -20,13 +25,7 @@ export interface TrendWeek {
 
 /** Monday 00:00 UTC of the week `moment` lies in. */
 export function weekStart(moment: Date): Date {
-  const day = new Date(
-    Date.UTC(
-      moment.getUTCFullYear(),
-      moment.getUTCMonth(),
-      moment.getUTCDate(),
-    ),
-  );
+  const day = startOfDay(dayOf(moment));
   // getUTCDay: Sunday 0 … Saturday 6; days since Monday: Monday 0 … Sunday 6.
   const sinceMonday = (day.getUTCDay() + 6) % 7;
   return new Date(day.getTime() - sinceMonday * dayMs);
@@ -47,7 +46,7 @@ export function trendWeeks(now: Date, count: number): TrendWeek[] {
     const start = current - (count - 1 - index) * weekMs;
     const complete = start !== current;
     return {
-      week: new Date(start).toISOString().slice(0, 10),
+      week: dayOf(new Date(start)),
       valueAt: complete ? new Date(start + weekMs) : now,
       complete,
     };
@@ -62,18 +61,7 @@ export function monthlyDates(
   today: CalendarDate,
   count: number,
 ): CalendarDate[] {
-  const [year, month, day] = today.split("-").map(Number) as [
-    number,
-    number,
-    number,
-  ];
-  return Array.from({ length: count }, (_, index) => {
-    const back = count - 1 - index;
-    const first = new Date(Date.UTC(year, month - 1 - back, 1));
-    const lastDay = new Date(
-      Date.UTC(first.getUTCFullYear(), first.getUTCMonth() + 1, 0),
-    ).getUTCDate();
-    first.setUTCDate(Math.min(day, lastDay));
-    return first.toISOString().slice(0, 10);
-  });
+  return Array.from({ length: count }, (_, index) =>
+    addMonths(today, -(count - 1 - index)),
+  );
 }

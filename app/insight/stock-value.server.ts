@@ -22,7 +22,7 @@ import { db } from "~/db/client.server";
 import { items, locations, stockAlerts, stockBalances } from "~/db/schema";
 import type { ItemKind } from "~/db/tables/stock-enums";
 import { companyCurrency } from "~/purchasing/suppliers.server";
-import { parseUnitCost } from "~/stock/decimal-amounts";
+import { parseUnitCost } from "~/lib/decimal-amounts";
 import { moneyToJson } from "./design-insight";
 import { trendWeeks, type TrendWeek } from "./insight-periods";
 

@@ -29,7 +29,7 @@ import {
   readSearchLeniently,
   wholeNumberParam,
 } from "~/lib/search-params";
-import { parseUnitCost } from "~/stock/decimal-amounts";
+import { parseUnitCost } from "~/lib/decimal-amounts";
 
 /** Stand-ins for one costing; every field optional, nothing saved. */
 export interface CostingWhatIf {

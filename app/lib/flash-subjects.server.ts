@@ -17,7 +17,7 @@ import {
   stockMovements,
   suppliers,
 } from "~/db/schema";
-import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import type {
   FlashNote,
   FlashSubjects,

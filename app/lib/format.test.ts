@@ -1,5 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { formatDateTime, formatQuantity } from "./format";
+import {
+  formatDateTime,
+  formatDay,
+  formatQuantity,
+  formatTimeOfDay,
+} from "./format";
 
 describe("formatQuantity", () => {
   it("puts the unit beside the number, with a no-break space", () => {
@@ -14,5 +19,14 @@ describe("formatDateTime", () => {
       "2 Dec 2026, 14:05 UTC",
     );
     expect(formatDateTime(null)).toBe("—");
+  });
+});
+
+describe("formatDay and formatTimeOfDay", () => {
+  it("write the day and the time of day as formatDateTime does", () => {
+    expect(formatDay("2026-12-02")).toBe("2 Dec 2026");
+    expect(formatDay("2026-12-02T23:59:00Z")).toBe("2 Dec 2026");
+    expect(formatDay("2026-01-05T00:00:00.000Z")).toBe("5 Jan 2026");
+    expect(formatTimeOfDay("2026-12-02T14:05:00Z")).toBe("14:05");
   });
 });

@@ -15,6 +15,20 @@ export function formatDateTime(
   return `${dateTimeFormat.format(date)} UTC`;
 }
 
+/**
+ * The day of a time, or a calendar day ("2026-12-02"), as people read it: "2 Dec 2026"
+ * (formatDateTime without the time of day).
+ */
+export function formatDay(value: string): string {
+  const time = /^\d{4}-\d{2}-\d{2}$/.test(value) ? `${value}T00:00:00Z` : value;
+  return formatDateTime(time).split(", ")[0] ?? value;
+}
+
+/** The time of day of a time: "14:05" (UTC; the caller says so). */
+export function formatTimeOfDay(value: string): string {
+  return (formatDateTime(value).split(", ")[1] ?? "").replace(" UTC", "");
+}
+
 /** A number with its unit, e.g. formatQuantity(1.2345, "kg", 3) → "1.235 kg". */
 export function formatQuantity(
   value: number,

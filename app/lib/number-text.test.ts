@@ -6,7 +6,7 @@ import {
 } from "~/build-orders/build-order-forms";
 import { coilLineSchema, partLineSchema } from "~/designs/design-schemas";
 import { insightQuerySchema } from "~/insight/what-if";
-import { isCalendarDate } from "~/pricing/calendar-date";
+import { isCalendarDate } from "~/lib/calendar-days";
 import { parseExactDecimal, parseMoney, parseRate } from "~/pricing/money";
 import {
   moneyRules,
@@ -20,7 +20,7 @@ import {
 } from "~/price-lists/cell-values";
 import type { PriceListField } from "~/price-lists/column-mapping";
 import { readPriceListRow } from "~/price-lists/price-list-rows";
-import { parseQuantity, parseUnitCost } from "~/stock/decimal-amounts";
+import { parseQuantity, parseUnitCost } from "~/lib/decimal-amounts";
 import { movementFormSchema } from "~/stock/movement-form";
 import {
   formNumber,

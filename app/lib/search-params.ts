@@ -7,7 +7,7 @@
  * `pageFromSearch`, `readPageOrLast`). Pure: no framework, no I/O.
  */
 import { z } from "zod";
-import { isCalendarDate } from "~/pricing/calendar-date";
+import { isCalendarDate } from "./calendar-days";
 
 /** The query string's values, empty ones dropped (a GET form sends every field, filled or not). */
 export function searchParamsObject(

@@ -16,6 +16,7 @@ import {
   type WireStandard,
 } from "~/engineering/reference-data";
 import type { ItemKind, StockUnit } from "~/db/tables/stock-enums";
+import { isRealDay } from "~/lib/calendar-days";
 import {
   isTooLongForNumber,
   maxNumberTextLength,
@@ -204,14 +205,8 @@ function checkedDate(year: number, month: number, day: number): DateReading {
   if (year < earliestYear || year > latestYear) {
     return { ok: false, problem: "unlikely-year" };
   }
-  const date = new Date(Date.UTC(year, month - 1, day));
-  if (
-    date.getUTCFullYear() !== year ||
-    date.getUTCMonth() !== month - 1 ||
-    date.getUTCDate() !== day
-  ) {
+  if (!isRealDay(year, month, day))
     return { ok: false, problem: "no-such-day" };
-  }
   return {
     ok: true,
     isoDate: `${year}-${String(month).padStart(2, "0")}-${String(day).padStart(2, "0")}`,

@@ -7,7 +7,7 @@
  * out (their old prices show in the price history).
  */
 
-import { assertCalendarDate } from "./calendar-date";
+import { assertCalendarDate } from "~/lib/calendar-days";
 import { priceLine, type PricingContext } from "./line-price";
 import type { MetalBasePrice } from "./metal-base";
 import {

@@ -6,7 +6,7 @@
  * day) is the caller's choice, see {@link rateDayFor}.
  */
 
-import { latestOnOrBefore, type CalendarDate } from "./calendar-date";
+import { latestOnOrBefore, type CalendarDate } from "~/lib/calendar-days";
 import {
   convertAmount,
   type CurrencyCode,

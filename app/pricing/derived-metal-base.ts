@@ -11,10 +11,11 @@
  * base is an estimate and says where it came from, so every screen can name it.
  */
 
-import { latestOnOrBefore, type CalendarDate } from "./calendar-date";
+import { latestOnOrBefore, type CalendarDate } from "~/lib/calendar-days";
 import { findExchangeRate, type ExchangeRateEntry } from "./currency";
 import { findMetalBase, type MetalBasePrice } from "./metal-base";
-import { divideHalfAwayFromZero, rateScale, type CurrencyCode } from "./money";
+import { rateScale, type CurrencyCode } from "./money";
+import { divideHalfAwayFromZero } from "~/lib/decimal-amounts";
 import type { MissingMetalBase } from "./pricing-problems";
 import type { ConductorKey } from "~/engineering/reference-data";
 

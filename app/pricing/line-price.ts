@@ -4,7 +4,7 @@
  * currency. Shared by best price and price history.
  */
 
-import type { CalendarDate } from "./calendar-date";
+import type { CalendarDate } from "~/lib/calendar-days";
 import {
   rateDayFor,
   toCompanyCurrency,

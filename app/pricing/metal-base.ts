@@ -11,7 +11,7 @@
  */
 
 import type { ConductorKey } from "~/engineering/reference-data";
-import { latestOnOrBefore, type CalendarDate } from "./calendar-date";
+import { latestOnOrBefore, type CalendarDate } from "~/lib/calendar-days";
 import {
   amountForQuantity,
   parseExactDecimal,

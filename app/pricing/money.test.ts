@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
+import { divideHalfAwayFromZero } from "~/lib/decimal-amounts";
 import {
   amountForQuantity,
   convertAmount,
-  divideHalfAwayFromZero,
   formatExactDecimal,
   formatMoney,
   formatMoneyText,

@@ -4,7 +4,7 @@
  *
  * - Money (unit prices, adders, metal bases, amounts) is a BigInt count of
  *   ten-thousandths of a currency unit: 12.5 EUR/kg is 125000n. This is the same scale as
- *   unit costs in the stock ledger (`~/stock/decimal-amounts`), so the two mix freely.
+ *   unit costs in the stock ledger (`~/lib/decimal-amounts`), so the two mix freely.
  * - Exchange rates are a BigInt count of millionths: 1.085 is 1085000n.
  * - Quantities that are finer than the stock ledger's thousandths (a coil's wound mass to
  *   a tenth of a milligram) are {@link ExactDecimal}s.
@@ -17,10 +17,12 @@
 
 import { isTooLongForNumber } from "~/lib/number-text";
 import {
+  decimalNumberPattern,
+  divideHalfAwayFromZero,
   formatUnitCostText,
   parseUnitCost,
   unitCostScale,
-} from "~/stock/decimal-amounts";
+} from "~/lib/decimal-amounts";
 
 /** Money in ten-thousandths of a currency unit (4 decimals). */
 export type MoneyAmount = bigint;
@@ -44,8 +46,6 @@ export interface ExactDecimal {
   readonly digits: bigint;
   readonly decimals: number;
 }
-
-const decimalPattern = /^-?\d+(\.\d+)?$/;
 
 /** "12.50" → 125000n. Throws RangeError on a fifth non-zero decimal or a non-number. */
 export function parseMoney(text: string): MoneyAmount {
@@ -83,7 +83,7 @@ export function formatRateText(rate: ExchangeRate): string {
 /** "0.0299396" → { digits: 299396n, decimals: 7 }. Throws RangeError on a non-number. */
 export function parseExactDecimal(text: string): ExactDecimal {
   const trimmed = text.trim();
-  if (isTooLongForNumber(trimmed) || !decimalPattern.test(trimmed)) {
+  if (isTooLongForNumber(trimmed) || !decimalNumberPattern.test(trimmed)) {
     throw new RangeError(`"${text.slice(0, 40)}" is not a decimal number`);
   }
   const negative = trimmed.startsWith("-");
@@ -114,22 +114,6 @@ export function fromThousandths(thousandths: bigint): ExactDecimal {
 /** A mass in grams as the same mass in kilograms: 29.94 g → 0.02994 kg, exactly. */
 export function gramsToKilograms(grams: ExactDecimal): ExactDecimal {
   return { digits: grams.digits, decimals: grams.decimals + 3 };
-}
-
-/**
- * `numerator / denominator`, rounded half away from zero to a whole number.
- * Throws RangeError when the denominator is zero.
- */
-export function divideHalfAwayFromZero(
-  numerator: bigint,
-  denominator: bigint,
-): bigint {
-  if (denominator === 0n) throw new RangeError("division by zero");
-  const negative = numerator < 0n !== denominator < 0n;
-  const n = numerator < 0n ? -numerator : numerator;
-  const d = denominator < 0n ? -denominator : denominator;
-  const rounded = (n * 2n + d) / (2n * d);
-  return negative ? -rounded : rounded;
 }
 
 /** An exact decimal as a whole count of 10^-decimals, rounded half away from zero. */

@@ -5,8 +5,14 @@
  * line. Each offer has its own dash pattern and marker shape, so the chart reads in black
  * and white and without telling colours apart. Pure: no I/O, no framework.
  */
-import { roundStep, type ChartFrame } from "~/stock/on-hand-history-chart";
-import type { CalendarDate } from "./calendar-date";
+import { roundStep, type ChartFrame } from "~/lib/chart-frame";
+import {
+  addMonths,
+  dateOfDayNumber,
+  dayNumber,
+  monthStartOnOrAfter,
+  type CalendarDate,
+} from "~/lib/calendar-days";
 
 export type { ChartFrame };
 
@@ -85,16 +91,11 @@ export interface PriceHistoryChartLayout {
   series: SeriesLayout[];
 }
 
-const dayMs = 86_400_000;
 /** The shortest time axis: prices of the last few days are not stretched across the plot. */
 const shortestSpanDays = 7;
 /** Vertical room per label beside the plot, px. */
 export const labelSpacing = 14;
 
-const dayNumber = (date: CalendarDate) =>
-  Date.parse(`${date}T00:00:00Z`) / dayMs;
-const dateOf = (day: number): CalendarDate =>
-  new Date(day * dayMs).toISOString().slice(0, 10);
 const round = (value: number) => Math.round(value * 10) / 10;
 /** Tick values without binary noise: 0.30000000000000004 → 0.3. */
 const clean = (value: number) => Number(value.toPrecision(12));
@@ -139,7 +140,7 @@ export function priceHistoryChart(
           (plotBottom - plotTop),
     );
 
-  const endDate = dateOf(endDay);
+  const endDate = dateOfDayNumber(endDay);
   const laidOut = series.map((offer, index) => {
     let path = "";
     let open = false;
@@ -185,7 +186,7 @@ export function priceHistoryChart(
   });
 
   return {
-    start: dateOf(startDay),
+    start: dateOfDayNumber(startDay),
     end: endDate,
     valueTicks: axis.ticks.map((value) => ({ value, y: y(value) })),
     valueDecimals: axis.decimals,
@@ -232,19 +233,12 @@ function dateTicks(
   x: (date: CalendarDate) => number,
 ): Pick<PriceHistoryChartLayout, "dateTicks" | "monthTicks"> {
   const months: CalendarDate[] = [];
-  const first = new Date(startDay * dayMs);
   for (
-    let month = new Date(
-      Date.UTC(
-        first.getUTCFullYear(),
-        first.getUTCMonth() + (first.getUTCDate() === 1 ? 0 : 1),
-        1,
-      ),
-    );
-    month.getTime() <= endDay * dayMs;
-    month.setUTCMonth(month.getUTCMonth() + 1)
+    let month = monthStartOnOrAfter(dateOfDayNumber(startDay));
+    dayNumber(month) <= endDay;
+    month = addMonths(month, 1)
   ) {
-    months.push(month.toISOString().slice(0, 10));
+    months.push(month);
   }
   if (months.length >= 3) {
     const every = [1, 2, 3, 6, 12].find(
@@ -253,8 +247,8 @@ function dateTicks(
     const chosen = months.filter(
       (month) => (Number(month.slice(5, 7)) - 1) % every === 0,
     );
-    const left = x(dateOf(startDay));
-    const right = x(dateOf(endDay));
+    const left = x(dateOfDayNumber(startDay));
+    const right = x(dateOfDayNumber(endDay));
     return {
       monthTicks: true,
       dateTicks: chosen.map((date) => {
@@ -267,13 +261,21 @@ function dateTicks(
       }),
     };
   }
-  const middle = dateOf(Math.round((startDay + endDay) / 2));
+  const middle = dateOfDayNumber(Math.round((startDay + endDay) / 2));
   return {
     monthTicks: false,
     dateTicks: [
-      { date: dateOf(startDay), x: x(dateOf(startDay)), anchor: "start" },
+      {
+        date: dateOfDayNumber(startDay),
+        x: x(dateOfDayNumber(startDay)),
+        anchor: "start",
+      },
       { date: middle, x: x(middle), anchor: "middle" },
-      { date: dateOf(endDay), x: x(dateOf(endDay)), anchor: "end" },
+      {
+        date: dateOfDayNumber(endDay),
+        x: x(dateOfDayNumber(endDay)),
+        anchor: "end",
+      },
     ],
   };
 }

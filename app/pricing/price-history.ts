@@ -12,7 +12,7 @@ import {
   assertCalendarDate,
   dayAfter,
   type CalendarDate,
-} from "./calendar-date";
+} from "~/lib/calendar-days";
 import type { ExchangeRateEntry } from "./currency";
 import { priceLine } from "./line-price";
 import type { MetalBasePrice } from "./metal-base";

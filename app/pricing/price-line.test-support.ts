@@ -1,5 +1,5 @@
 /** Builders for price lines in the pricing tests: a valid line with only what a test changes. */
-import { parseQuantity } from "~/stock/decimal-amounts";
+import { parseQuantity } from "~/lib/decimal-amounts";
 import { parseMoney } from "./money";
 import type { AdderPriceLine, UnitPriceLine } from "./price-line";
 

@@ -6,7 +6,7 @@
  */
 
 import type { ConductorKey } from "~/engineering/reference-data";
-import type { CalendarDate } from "./calendar-date";
+import type { CalendarDate } from "~/lib/calendar-days";
 import type { CurrencyCode, MoneyAmount } from "./money";
 
 /** Where a line came from: the price-list import and the row in its file (1-based). */

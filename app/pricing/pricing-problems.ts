@@ -6,8 +6,8 @@
  */
 
 import type { ConductorKey } from "~/engineering/reference-data";
-import { formatQuantityText } from "~/stock/decimal-amounts";
-import type { CalendarDate } from "./calendar-date";
+import { formatQuantityText } from "~/lib/decimal-amounts";
+import type { CalendarDate } from "~/lib/calendar-days";
 import type { CurrencyCode } from "./money";
 
 /** No metal base for the conductor in the currency on or before the day. */

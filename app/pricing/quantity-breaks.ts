@@ -5,7 +5,7 @@
  * quantity at or below it, among the lines valid on the day.
  */
 
-import type { CalendarDate } from "./calendar-date";
+import type { CalendarDate } from "~/lib/calendar-days";
 import { offerKey, type PriceLine } from "./price-line";
 
 type Validity = Pick<PriceLine, "validFrom" | "validTo">;

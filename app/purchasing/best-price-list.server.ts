@@ -4,10 +4,10 @@
  * `quantityToPrice`, the rule its page and its low-stock e-mail use).
  */
 import { and, asc, count, eq, exists, like, sql, type SQL } from "drizzle-orm";
-import { quantityToPrice } from "~/alerts/low-stock";
+import { quantityToPrice } from "~/stock/reorder-quantities";
 import { db } from "~/db/client.server";
 import { items, priceLines } from "~/db/schema";
-import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { todayUtc } from "./current-entries";
 import { bestPricesOf, loadItemsPricing } from "./item-prices.server";
 

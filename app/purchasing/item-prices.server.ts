@@ -15,13 +15,13 @@ import {
 import type { ConductorKey } from "~/engineering/reference-data";
 import { bestPrices } from "~/pricing/best-price";
 import { isDerivedMetalBase } from "~/pricing/derived-metal-base";
-import type { CalendarDate } from "~/pricing/calendar-date";
+import { addDays, type CalendarDate } from "~/lib/calendar-days";
 import type { ExchangeRateEntry } from "~/pricing/currency";
 import type { MetalBasePrice } from "~/pricing/metal-base";
 import { parseMoney, parseRate, type CurrencyCode } from "~/pricing/money";
 import { priceHistory } from "~/pricing/price-history";
 import type { PriceLine } from "~/pricing/price-line";
-import { parseQuantity, quantityToNumber } from "~/stock/decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { companyCurrency } from "./suppliers.server";
 
 const money = (amount: bigint) => Number(amount) / 10_000;
@@ -218,13 +218,6 @@ export function bestPricesOf(
 /** How far back the item page and the API chart prices. */
 export const priceHistoryDays = 365;
 
-/** The day `days` days before `date`: ("2026-12-02", 365) → "2025-12-02". */
-function daysBefore(date: CalendarDate, days: number): CalendarDate {
-  const day = new Date(`${date}T00:00:00Z`);
-  day.setUTCDate(day.getUTCDate() - days);
-  return day.toISOString().slice(0, 10);
-}
-
 /**
  * The unit price of `quantity` over the `priceHistoryDays` days up to `to`, in the company
  * currency, one series per offer (supplier and supplier SKU). Each point's price stands
@@ -235,7 +228,7 @@ export function priceHistoryOf(
   quantity: bigint,
   to: CalendarDate,
 ) {
-  const from = daysBefore(to, priceHistoryDays);
+  const from = addDays(to, -priceHistoryDays);
   const series = priceHistory({
     itemId: String(pricing.itemId),
     quantity,

@@ -9,7 +9,7 @@
  * Pure: no I/O.
  */
 import type { ConductorKey } from "~/engineering/reference-data";
-import type { CalendarDate } from "~/pricing/calendar-date";
+import type { CalendarDate } from "~/lib/calendar-days";
 import { findExchangeRate, type ExchangeRateEntry } from "~/pricing/currency";
 import { metalBaseFor } from "~/pricing/derived-metal-base";
 import type { MetalBasePrice } from "~/pricing/metal-base";

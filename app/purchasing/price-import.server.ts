@@ -37,7 +37,7 @@ import {
 import type { PriceListRow } from "~/price-lists/price-list-rows";
 import { readPriceListInBatches } from "~/price-lists/read-price-list";
 import { parseMoney, parseRate } from "~/pricing/money";
-import { StockError } from "~/stock/stock-errors";
+import { DomainError } from "~/lib/domain-error";
 import {
   PriceImportWarningCollector,
   type PriceImportWarning,
@@ -302,7 +302,7 @@ async function readOrImportPriceList(
     .where(eq(suppliers.name, input.supplierName.trim()))
     .limit(1);
   if (!supplier)
-    throw new StockError(
+    throw new DomainError(
       400,
       `No supplier named "${input.supplierName}". Create the supplier first.`,
       "supplier",

@@ -4,7 +4,7 @@
  * Pure: no framework, no I/O.
  */
 import { z } from "zod";
-import { quantityFromNumber } from "~/stock/decimal-amounts";
+import { quantityFromNumber } from "~/lib/decimal-amounts";
 import { maxStockQuantity } from "~/stock/movement-request";
 import {
   pageParam,

@@ -5,7 +5,7 @@ import { writeTransaction } from "~/db/write-transaction.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import { priceImports, priceLines, suppliers, users } from "~/db/schema";
 import type { ConductorKey } from "~/engineering/reference-data";
-import { StockError } from "~/stock/stock-errors";
+import { DomainError } from "~/lib/domain-error";
 import { entriesInForce, todayUtc } from "./current-entries";
 import type { SupplierPatch } from "./supplier-schemas";
 import type { CurrencyCoverage } from "./supplier-currency-warnings";
@@ -93,12 +93,12 @@ export async function updateSupplier(
         .from(suppliers)
         .where(eq(suppliers.id, id))
         .for("update");
-      if (!found) throw new StockError(404, `No supplier with id ${id}.`);
+      if (!found) throw new DomainError(404, `No supplier with id ${id}.`);
       await tx.update(suppliers).set(set).where(eq(suppliers.id, id));
     });
   } catch (error) {
     if (isDuplicateKey(error))
-      throw new StockError(
+      throw new DomainError(
         409,
         `There is already a supplier named "${patch.name}".`,
         "name",

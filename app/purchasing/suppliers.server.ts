@@ -8,7 +8,7 @@ import {
   settings,
   suppliers,
 } from "~/db/schema";
-import { StockError } from "~/stock/stock-errors";
+import { DomainError } from "~/lib/domain-error";
 import type {
   CurrencyRateInput,
   MetalBaseInput,
@@ -67,7 +67,7 @@ export async function createSupplier(input: SupplierInput): Promise<number> {
     return created!.id;
   } catch (error) {
     if (isDuplicateKey(error))
-      throw new StockError(
+      throw new DomainError(
         409,
         `There is already a supplier named "${input.name}".`,
         "name",

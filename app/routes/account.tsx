@@ -18,7 +18,8 @@ import {
   alertPreferenceOf,
   setAlertPreference,
 } from "~/alerts/alert-preferences.server";
-import { alertMailModes, alertModeOf } from "~/alerts/low-stock";
+import { alertModeOf } from "~/alerts/low-stock";
+import { alertMailModes } from "~/db/tables/alert-enums";
 import { signInRefusal } from "~/lib/account-schemas";
 import {
   createTokenSchema,

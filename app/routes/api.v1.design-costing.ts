@@ -10,7 +10,7 @@ import {
 import { maxBuildQuantity } from "~/designs/design-page";
 import { apiError, methodNotAllowed, readSearchParams } from "~/lib/api.server";
 import { dayParam, wholeNumberParam } from "~/lib/search-params";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 const costingQuery = z.object({
   quantity: wholeNumberParam("quantity", {
@@ -39,7 +39,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const ids = designParams(params);
   const found = ids ? await findRevision(ids.designId, ids.revision) : null;
   if (!found) return apiError(404, "No such design revision.");
-  return answerStockError(async () =>
+  return answerDomainError(async () =>
     Response.json(
       await costRevision({
         revision: found.revision,

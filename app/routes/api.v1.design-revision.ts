@@ -10,7 +10,7 @@ import {
 import { revisionUpdateSchema } from "~/designs/design-schemas";
 import { updateDraftRevision } from "~/designs/designs.server";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 /** GET /api/v1/designs/:designId/revisions/:revision → the revision's fields and lines. */
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -44,7 +44,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   const change = Object.fromEntries(
     Object.entries(parsed).filter(([key]) => body && key in body),
   ) as typeof parsed;
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     await updateDraftRevision(ids.designId, ids.revision, change);
     const found = await findRevision(ids.designId, ids.revision);
     const lines = await loadRevisionLines(found!.revision.id);

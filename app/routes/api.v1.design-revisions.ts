@@ -3,7 +3,7 @@ import { requireCapability } from "~/auth/guard.server";
 import { designParams } from "~/designs/design-params";
 import { startNewRevision } from "~/designs/designs.server";
 import { apiError, methodNotAllowed } from "~/lib/api.server";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "editDesigns");
@@ -16,7 +16,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   if (request.method !== "POST") return methodNotAllowed(["POST"]);
   const ids = designParams(params);
   if (!ids) return apiError(404, `No design ${params.designId}.`);
-  return answerStockError(async () =>
+  return answerDomainError(async () =>
     Response.json(await startNewRevision(ids.designId), { status: 201 }),
   );
 }

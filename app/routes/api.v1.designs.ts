@@ -8,7 +8,7 @@ import {
   readSearchParams,
 } from "~/lib/api.server";
 import { pageParam, pageSizeParam } from "~/lib/search-params";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 import { z } from "zod";
 
 const listQuery = z.object({
@@ -37,7 +37,7 @@ export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "editDesigns");
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const input = await readJsonBody(request, newDesignSchema);
-  return answerStockError(async () =>
+  return answerDomainError(async () =>
     Response.json(await createDesign(input, user.id), { status: 201 }),
   );
 }

@@ -3,7 +3,7 @@ import { requireUser } from "~/auth/guard.server";
 import { designInsight } from "~/insight/design-insight.server";
 import { insightQuerySchema } from "~/insight/what-if";
 import { methodNotAllowed, readSearchParams } from "~/lib/api.server";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 /**
  * GET /api/v1/insight/designs → [{ designId, name, revision, ratedTorqueNm, torqueBasis,
@@ -24,7 +24,7 @@ import { answerStockError } from "~/stock/stock-api.server";
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
   const query = readSearchParams(request, insightQuerySchema);
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     const insight = await designInsight(query, {
       today: new Date().toISOString().slice(0, 10),
       history: query.history === "1",

@@ -8,7 +8,7 @@ import {
   loadItemPricing,
   priceHistoryOf,
 } from "~/purchasing/item-prices.server";
-import { quantityFromNumber } from "~/stock/decimal-amounts";
+import { quantityFromNumber } from "~/lib/decimal-amounts";
 import { maxStockQuantity } from "~/stock/movement-request";
 
 const itemPricesQuerySchema = z.object({

@@ -4,7 +4,7 @@ import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
 import { updateItem } from "~/stock/catalogue.server";
 import { itemPatchSchema } from "~/stock/item-schemas";
 import { findItemBySku } from "~/stock/items.server";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 /** GET /api/v1/items/:sku → the item with its balances by lot and location. */
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -32,7 +32,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       "keepCatalogue",
       "Storekeepers change reorder point and quantity only; the name and archive state need the role buyer.",
     );
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     await updateItem(params.sku, change);
     return Response.json(withoutId((await findItemBySku(params.sku))!));
   });

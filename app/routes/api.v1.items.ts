@@ -9,7 +9,7 @@ import { createItem } from "~/stock/catalogue.server";
 import { itemCreateSchema } from "~/stock/item-schemas";
 import { itemListQuerySchema } from "~/stock/item-list-query";
 import { findItemBySku, listItems } from "~/stock/items.server";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 /** GET /api/v1/items?search=&kind=&belowReorder=1&sort=&order=&page=&pageSize= → a page of items. */
 export async function loader({ request }: Route.LoaderArgs) {
@@ -38,7 +38,7 @@ export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "keepCatalogue");
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const input = await readJsonBody(request, itemCreateSchema);
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     const sku = await createItem(input, user.id);
     return Response.json(await findItemBySku(sku), { status: 201 });
   });

@@ -17,7 +17,7 @@ import {
   fileTooLargeMessage,
   maxPriceListBytes,
 } from "~/price-lists/decode-csv";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "importPriceLists");
@@ -120,7 +120,7 @@ export async function action({ request }: Route.ActionArgs) {
   const upload = file as File;
 
   const dryRun = new URL(request.url).searchParams.get("dryRun") === "1";
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     const outcome = await importPriceList({
       supplierName: supplier,
       fileName: uploadedFileName(upload) || "price-list.csv",

@@ -10,7 +10,7 @@ import { issueMovementToBuildOrder } from "~/build-orders/build-order-issues.ser
 import { movementJournalQuerySchema } from "~/stock/movement-journal-query";
 import { listMovements } from "~/stock/movement-journal.server";
 import { movementRequestSchema } from "~/stock/movement-request";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 import { recordMovement } from "~/stock/stock-movements.server";
 
 /** GET /api/v1/stock-movements?type=&sku=&user=&from=&to=&page=&pageSize= → the journal, newest first. */
@@ -44,7 +44,7 @@ export async function action({ request }: Route.ActionArgs) {
         { status: 201 },
       ),
     );
-  return answerStockError(async () =>
+  return answerDomainError(async () =>
     Response.json(await recordMovement(movement, user.id), { status: 201 }),
   );
 }

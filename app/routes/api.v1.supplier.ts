@@ -7,7 +7,7 @@ import {
   updateSupplier,
 } from "~/purchasing/supplier-details.server";
 import { supplierPatchSchema } from "~/purchasing/supplier-schemas";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 async function supplierAnswer(id: number | null) {
   const supplier = id === null ? null : await findSupplier(id);
@@ -44,7 +44,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   const id = idFromText(params.supplierId);
   if (id === null) return noSuchSupplier(params.supplierId);
   const patch = await readJsonBody(request, supplierPatchSchema);
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     await updateSupplier(id, patch);
     return Response.json(await supplierAnswer(id));
   });

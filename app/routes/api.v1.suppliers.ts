@@ -3,7 +3,7 @@ import { requireCapability, requireUser } from "~/auth/guard.server";
 import { methodNotAllowed, readJsonBody } from "~/lib/api.server";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
 import { createSupplier, listSuppliers } from "~/purchasing/suppliers.server";
-import { answerStockError } from "~/stock/stock-api.server";
+import { answerDomainError } from "~/lib/api-errors.server";
 
 /** GET /api/v1/suppliers → [{ id, name, email, currency, leadTimeDays, notes }] (the id for /api/v1/suppliers/:id). */
 export async function loader({ request }: Route.LoaderArgs) {
@@ -16,7 +16,7 @@ export async function action({ request }: Route.ActionArgs) {
   await requireCapability(request, "keepSuppliers");
   if (request.method !== "POST") return methodNotAllowed(["GET", "POST"]);
   const input = await readJsonBody(request, supplierSchema);
-  return answerStockError(async () => {
+  return answerDomainError(async () => {
     const id = await createSupplier(input);
     return Response.json(
       {

@@ -60,7 +60,7 @@ import { ReservePanel } from "~/components/build-orders/reserve-panel";
 import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { needsRoleMessage, userCan } from "~/lib/capabilities";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 
 function orderIdOf(value: string | undefined): number {
   return buildOrderIdFromPath(value, (message) =>
@@ -173,7 +173,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       }
     }
   } catch (error) {
-    if (isBuildOrderError(error) || isStockError(error)) {
+    if (isBuildOrderError(error) || isDomainError(error)) {
       const field =
         intent === "issue"
           ? issueFormFieldOf(error.field)

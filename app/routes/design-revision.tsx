@@ -38,7 +38,7 @@ import {
   updateDraftRevision,
 } from "~/designs/designs.server";
 import { userCan } from "~/lib/capabilities";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -69,7 +69,7 @@ function refusal(
   error: unknown,
   lineIndex: number | null = null,
 ) {
-  if (!isStockError(error)) throw error;
+  if (!isDomainError(error)) throw error;
   const index = lineIndexOfField(error.field);
   const field =
     index !== null
@@ -94,7 +94,7 @@ function refusal(
 
 /** A message for a change the page could not make at all (no form to show it beside). */
 function plainRefusal(intent: DesignPageIntent, error: unknown) {
-  if (!isStockError(error)) throw error;
+  if (!isDomainError(error)) throw error;
   return answer({ intent, ok: false, message: error.message }, error.status);
 }
 

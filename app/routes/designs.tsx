@@ -19,7 +19,7 @@ import { createDesign, listDesigns } from "~/designs/designs.server";
 import { formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 import { countText } from "~/lib/unit-text";
 
 const designsPerPage = 25;
@@ -53,7 +53,7 @@ export async function action({ request }: Route.ActionArgs) {
   try {
     created = await createDesign(submission.value, user.id);
   } catch (error) {
-    if (!isStockError(error)) throw error;
+    if (!isDomainError(error)) throw error;
     const result = error.field
       ? submission.reply({ fieldErrors: { [error.field]: [error.message] } })
       : submission.reply({ formErrors: [error.message] });

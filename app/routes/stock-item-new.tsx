@@ -19,7 +19,7 @@ import { listMagnetGrades } from "~/reference/magnet-grades.server";
 import { listWireSizes } from "~/reference/wire-sizes.server";
 import { createItem } from "~/stock/catalogue.server";
 import { newItemFormSchema, unitOfNewItem } from "~/stock/new-item-form";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "keepCatalogue");
@@ -60,7 +60,7 @@ export async function action({ request }: Route.ActionArgs) {
   try {
     sku = await createItem(submission.value, user.id);
   } catch (error) {
-    if (!isStockError(error)) throw error;
+    if (!isDomainError(error)) throw error;
     const result = error.field
       ? submission.reply({ fieldErrors: { [error.field]: [error.message] } })
       : submission.reply({ formErrors: [error.message] });

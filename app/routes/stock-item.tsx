@@ -38,11 +38,11 @@ import {
   loadItemPricing,
   priceHistoryOf,
 } from "~/purchasing/item-prices.server";
-import { quantityToPrice } from "~/alerts/low-stock";
+import { quantityToPrice } from "~/stock/reorder-quantities";
 import { todayUtc } from "~/purchasing/current-entries";
 import { readItemPriceQuantity } from "~/purchasing/price-quantity-query";
-import { quantityFromNumber } from "~/stock/decimal-amounts";
-import { isStockError } from "~/stock/stock-errors";
+import { quantityFromNumber } from "~/lib/decimal-amounts";
+import { isDomainError } from "~/lib/domain-error";
 
 const movementPageSize = 20;
 
@@ -130,7 +130,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   try {
     await updateItem(params.sku, itemPatchOf(submission.value));
   } catch (error) {
-    if (!isStockError(error)) throw error;
+    if (!isDomainError(error)) throw error;
     const result = error.field
       ? submission.reply({ fieldErrors: { [error.field]: [error.message] } })
       : submission.reply({ formErrors: [error.message] });

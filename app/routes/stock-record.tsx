@@ -17,7 +17,7 @@ import {
   chosenMovementType,
   movementHelp,
 } from "~/stock/record-movement-texts";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 import { recordMovement } from "~/stock/stock-movements.server";
 import { usualLocationOf } from "~/stock/usual-location.server";
 import { wireMetresPerKg } from "~/stock/wire-length.server";
@@ -80,7 +80,7 @@ export async function action({ request }: Route.ActionArgs) {
         : { code: "order-issued", id: movement.id },
     );
   } catch (error) {
-    if (!isStockError(error) && !isBuildOrderError(error)) throw error;
+    if (!isDomainError(error) && !isBuildOrderError(error)) throw error;
     const field = formFieldOf(
       error.field,
       submission.value.type,

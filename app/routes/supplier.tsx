@@ -23,7 +23,7 @@ import {
   updateSupplier,
 } from "~/purchasing/supplier-details.server";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 
 function notFound(): never {
   throw data({ message: "No such supplier." }, { status: 404 });
@@ -68,7 +68,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       notes: input.notes ?? null,
     });
   } catch (error) {
-    if (!isStockError(error)) throw error;
+    if (!isDomainError(error)) throw error;
     const result = error.field
       ? submission.reply({ fieldErrors: { [error.field]: [error.message] } })
       : submission.reply({ formErrors: [error.message] });

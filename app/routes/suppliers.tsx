@@ -19,7 +19,7 @@ import { currencyCoverage } from "~/purchasing/supplier-details.server";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
 import { listSupplierOverview } from "~/purchasing/supplier-overview.server";
 import { createSupplier } from "~/purchasing/suppliers.server";
-import { isStockError } from "~/stock/stock-errors";
+import { isDomainError } from "~/lib/domain-error";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -46,7 +46,7 @@ export async function action({ request }: Route.ActionArgs) {
   try {
     id = await createSupplier(submission.value);
   } catch (error) {
-    if (!isStockError(error)) throw error;
+    if (!isDomainError(error)) throw error;
     const result = submission.reply({
       fieldErrors: { [error.field ?? "name"]: [error.message] },
     });

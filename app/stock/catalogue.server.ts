@@ -15,8 +15,8 @@ import { magnetVolumeMm3 } from "~/engineering/magnet-estimate";
 import { findMagnetGradeByName } from "~/reference/magnet-grades.server";
 import { iecSizeLabel } from "~/reference/wire-size-labels";
 import type { ItemCreateInput, ItemPatchInput } from "./item-schemas";
-import { formatQuantityText, quantityFromNumber } from "./decimal-amounts";
-import { StockError } from "./stock-errors";
+import { formatQuantityText, quantityFromNumber } from "~/lib/decimal-amounts";
+import { DomainError } from "~/lib/domain-error";
 
 const insulationNames: Record<string, string> = {
   grade1: "grade 1",
@@ -75,7 +75,7 @@ export async function createItem(
     if (input.standard === "AWG") {
       const size = findAwgSize(input.size);
       if (!size)
-        throw new StockError(
+        throw new DomainError(
           400,
           `AWG ${input.size} is not a size from 4/0 to 46.`,
           "size",
@@ -84,7 +84,7 @@ export async function createItem(
     } else {
       const diameter = findIecNominalDiameter(Number(input.size));
       if (!diameter)
-        throw new StockError(
+        throw new DomainError(
           400,
           `${input.size} mm is not an IEC 60317 nominal diameter.`,
           "size",
@@ -93,7 +93,7 @@ export async function createItem(
     }
     const iecInsulation = input.insulation.startsWith("grade");
     if (iecInsulation !== (input.standard === "IEC")) {
-      throw new StockError(
+      throw new DomainError(
         400,
         input.standard === "IEC"
           ? "IEC wire takes grade1, grade2 or grade3."
@@ -114,7 +114,7 @@ export async function createItem(
   } else if (input.kind === "magnet") {
     const grade = await findMagnetGradeByName(input.grade);
     if (!grade)
-      throw new StockError(
+      throw new DomainError(
         400,
         `Unknown magnet grade "${input.grade}".`,
         "grade",
@@ -138,7 +138,7 @@ export async function createItem(
   if (unit === "pcs") {
     for (const field of ["reorderPoint", "reorderQuantity"] as const) {
       if (!Number.isInteger(input[field]))
-        throw new StockError(
+        throw new DomainError(
           400,
           `${input.sku} is counted in whole pieces.`,
           field,
@@ -166,7 +166,7 @@ export async function createItem(
     });
   } catch (error) {
     if (isDuplicateKey(error))
-      throw new StockError(
+      throw new DomainError(
         409,
         `SKU ${input.sku} is already in the catalogue.`,
         "sku",
@@ -186,7 +186,7 @@ export async function updateItem(
     .from(items)
     .where(eq(items.sku, sku))
     .limit(1);
-  if (!item) throw new StockError(404, `No item with SKU "${sku}".`, "sku");
+  if (!item) throw new DomainError(404, `No item with SKU "${sku}".`, "sku");
   for (const field of ["reorderPoint", "reorderQuantity"] as const) {
     const value = change[field];
     if (
@@ -194,7 +194,7 @@ export async function updateItem(
       item.unit === "pcs" &&
       !Number.isInteger(value)
     ) {
-      throw new StockError(400, `${sku} is counted in whole pieces.`, field);
+      throw new DomainError(400, `${sku} is counted in whole pieces.`, field);
     }
   }
   // Every movement writes this row too: retried on a conflict like a transaction.

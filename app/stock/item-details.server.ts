@@ -4,7 +4,7 @@ import { db } from "~/db/client.server";
 import { magnetItems, stockMovements, wireItems } from "~/db/schema";
 import type { ItemKind } from "~/db/tables/stock-enums";
 import { findMagnetGradeByName } from "~/reference/magnet-grades.server";
-import { parseQuantity, quantityToNumber } from "./decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 
 /** The wire or magnet attributes of an item; null for other parts. */
 export async function findItemAttributes(itemId: number, kind: ItemKind) {

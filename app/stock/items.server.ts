@@ -10,7 +10,7 @@ import {
   sql,
   type SQL,
 } from "drizzle-orm";
-import { compareOldestFirst } from "~/build-orders/stock-allocation";
+import { compareOldestFirst } from "./stock-allocation";
 import { db } from "~/db/client.server";
 import { items, locations, lots, stockBalances } from "~/db/schema";
 import type { ItemKind } from "~/db/tables/stock-enums";
@@ -19,7 +19,7 @@ import {
   parseUnitCost,
   quantityToNumber,
   valueOf,
-} from "./decimal-amounts";
+} from "~/lib/decimal-amounts";
 
 import type { itemSortKeys } from "./item-list-query";
 

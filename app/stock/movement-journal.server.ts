@@ -2,7 +2,8 @@
 import { and, desc, eq, gte, lt, type SQL } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { items, locations, lots, stockMovements, users } from "~/db/schema";
-import { parseQuantity, quantityToNumber } from "./decimal-amounts";
+import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
+import { dayAfter, startOfDay } from "~/lib/calendar-days";
 import type { MovementJournalQuery } from "./movement-journal-query";
 
 /**
@@ -33,15 +34,10 @@ export async function listMovements(
     conditions.push(eq(stockMovements.userId, user?.id ?? ""));
   }
   if (query.from)
-    conditions.push(
-      gte(stockMovements.createdAt, new Date(`${query.from}T00:00:00Z`)),
-    );
+    conditions.push(gte(stockMovements.createdAt, startOfDay(query.from)));
   if (query.to)
     conditions.push(
-      lt(
-        stockMovements.createdAt,
-        new Date(Date.parse(`${query.to}T00:00:00Z`) + 86_400_000),
-      ),
+      lt(stockMovements.createdAt, startOfDay(dayAfter(query.to))),
     );
 
   const rows = await db

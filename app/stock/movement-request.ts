@@ -9,7 +9,7 @@ import {
   buildOrderReference,
 } from "~/build-orders/build-order-status";
 import { movementTypes } from "~/db/tables/stock-enums";
-import { quantityFromNumber, unitCostFromNumber } from "./decimal-amounts";
+import { quantityFromNumber, unitCostFromNumber } from "~/lib/decimal-amounts";
 
 /** The largest quantity (or unit cost) a movement may carry; also the largest a price is asked for. */
 export const maxStockQuantity = 1_000_000_000;

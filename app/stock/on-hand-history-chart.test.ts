@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { onHandChart, roundStep } from "./on-hand-history-chart";
+import { roundStep } from "~/lib/chart-frame";
+import { onHandChart } from "./on-hand-history-chart";
 
 const frame = {
   width: 500,

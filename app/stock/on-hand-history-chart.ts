@@ -3,21 +3,13 @@
  * quantity after each movement, from the first movement shown to now, with
  * round-numbered value ticks. Pure: no I/O, no framework.
  */
+import { roundStep, type ChartFrame } from "~/lib/chart-frame";
 
 export interface OnHandPoint {
   /** ISO time of the movement. */
   at: string;
   /** Item on hand after it. */
   onHand: number;
-}
-
-export interface ChartFrame {
-  width: number;
-  height: number;
-  left: number;
-  right: number;
-  top: number;
-  bottom: number;
 }
 
 export interface OnHandChart {
@@ -33,17 +25,6 @@ export interface OnHandChart {
   reorderY: number | null;
   /** Where each movement's point is drawn. */
   markers: { x: number; y: number }[];
-}
-
-/** A round step (1, 2 or 5 × 10ⁿ) that cuts 0…max into at most `maxTicks` steps. */
-export function roundStep(max: number, maxTicks = 5): number {
-  if (!(max > 0)) return 1;
-  const rough = max / maxTicks;
-  const power = 10 ** Math.floor(Math.log10(rough));
-  for (const factor of [1, 2, 5, 10]) {
-    if (factor * power >= rough) return factor * power;
-  }
-  return 10 * power;
 }
 
 const round = (value: number) => Math.round(value * 10) / 10;

@@ -3,7 +3,7 @@
  * prices with their currency and unit, each supplier article's name (shortened beside the
  * plot) and the summary that stands in for the chart for screen readers. Pure.
  */
-import { formatDateTime, formatQuantity } from "~/lib/format";
+import { formatDay, formatQuantity } from "~/lib/format";
 import { perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "./stock-quantity-text";
 
@@ -33,14 +33,9 @@ export type PriceOffer = PriceHistoryView["series"][number];
 /** Names beside the plot are cut to this many characters. */
 const labelCharacters = 26;
 
-/** "2026-12-02" → "2 Dec 2026", as the one formatter writes days. */
-export function dayText(date: string): string {
-  return formatDateTime(`${date}T00:00:00Z`).split(", ")[0] ?? date;
-}
-
 /** "2026-12-01" → "Dec 2026". */
 export function monthText(date: string): string {
-  return dayText(date).replace(/^\d+ /, "");
+  return formatDay(date).replace(/^\d+ /, "");
 }
 
 /** A unit price with its currency and unit, to the ten-thousandth: "12.5000 EUR/kg", "2.4000 EUR/piece". */
@@ -84,7 +79,7 @@ export function priceHistorySummary(
       offer.currency === history.companyCurrency
         ? ""
         : ` (quoted in ${offer.currency})`;
-    return `${name}${quoted}: ${price(priced[0]!.unitPrice)} from ${dayText(priced[0]!.date)}, ${changes === 0 ? "no change" : `${changes} change${changes === 1 ? "" : "s"}`}, lowest ${price(Math.min(...values))}, highest ${price(Math.max(...values))}, ${last.unitPrice === null ? "no price now" : `now ${price(last.unitPrice)}`}.`;
+    return `${name}${quoted}: ${price(priced[0]!.unitPrice)} from ${formatDay(priced[0]!.date)}, ${changes === 0 ? "no change" : `${changes} change${changes === 1 ? "" : "s"}`}, lowest ${price(Math.min(...values))}, highest ${price(Math.max(...values))}, ${last.unitPrice === null ? "no price now" : `now ${price(last.unitPrice)}`}.`;
   });
-  return `Unit price of ${quantity} from ${dayText(history.from)} to ${dayText(history.to)}, ${history.series.length} supplier article${history.series.length === 1 ? "" : "s"}. ${offers.join(" ")}`;
+  return `Unit price of ${quantity} from ${formatDay(history.from)} to ${formatDay(history.to)}, ${history.series.length} supplier article${history.series.length === 1 ? "" : "s"}. ${offers.join(" ")}`;
 }

@@ -4,7 +4,7 @@
  * comma allowed). Null until both are numbers with at most 3 decimals. Pure.
  */
 import { formNumber } from "~/lib/number-text";
-import { quantityFromNumber, quantityToNumber } from "./decimal-amounts";
+import { quantityFromNumber, quantityToNumber } from "~/lib/decimal-amounts";
 
 function grams(text: string): bigint | null {
   const value = formNumber(text);

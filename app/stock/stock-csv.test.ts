@@ -65,6 +65,19 @@ describe("stock CSV", () => {
     expect(row![header!.indexOf("value (company currency)")]).toBe("10.01");
   });
 
+  it("rounds half a cent away from zero on the exact amount, not on a float (decision 006)", () => {
+    const valueCell = (value: number) => {
+      const [header, row] = parse(stockCsv([{ ...wire, value }]));
+      return row![header!.indexOf("value (company currency)")];
+    };
+    // 1.005 is 1.00499999999999989… as a float: rounding the float gives 1.
+    expect(valueCell(1.005)).toBe("1.01");
+    expect(valueCell(-1.005)).toBe("-1.01");
+    expect(valueCell(2.675)).toBe("2.68");
+    expect(valueCell(1.0049)).toBe("1");
+    expect(valueCell(68.1)).toBe("68.1");
+  });
+
   it("names the file by the day in UTC", () => {
     expect(stockCsvFilename(new Date("2026-12-02T23:59:00Z"))).toBe(
       "turnledger-stock-2026-12-02.csv",

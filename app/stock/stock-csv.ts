@@ -1,10 +1,10 @@
 /**
  * The stock list as a CSV file: one row per item, quantities as plain numbers
  * with the unit in its own column, money in the company currency. Text cells
- * are guarded against formula injection. Pure: no I/O.
+ * are guarded against formula injection (`csvFile`). Pure: no I/O.
  */
-import Papa from "papaparse";
-import { guardCell } from "./csv-formula-guard";
+import { csvFile } from "~/lib/csv-file";
+import { roundedAmountText } from "~/lib/decimal-amounts";
 
 /** The most rows one export holds; the stock page says so when a view matches more. */
 export const stockCsvRowLimit = 50_000;
@@ -52,7 +52,8 @@ const columns: { header: string; cell: (item: StockCsvItem) => Cell }[] = [
   },
   {
     header: "value (company currency)",
-    cell: (item) => Math.round(item.value * 100) / 100,
+    // To the cent, half away from zero on the exact amount (decision 006).
+    cell: (item) => Number(roundedAmountText(item.value, 2)),
   },
   { header: "archived", cell: (item) => (item.active ? "no" : "yes") },
 ];
@@ -64,10 +65,8 @@ export const stockCsvHeaders = columns.map((column) => column.header);
  * UTF-8 (sizes carry × and Ø) and CRLF line ends as RFC 4180 has them.
  */
 export function stockCsv(items: readonly StockCsvItem[]): string {
-  const rows = items.map((item) =>
-    columns.map((column) => guardCell(column.cell(item))),
-  );
-  return `\uFEFF${Papa.unparse({ fields: stockCsvHeaders, data: rows }, { newline: "\r\n" })}\r\n`;
+  const rows = items.map((item) => columns.map((column) => column.cell(item)));
+  return csvFile(stockCsvHeaders, rows);
 }
 
 /** "turnledger-stock-2026-12-02.csv": the day in UTC, as every time in Turnledger. */

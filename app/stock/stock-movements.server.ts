@@ -5,21 +5,18 @@
  * than deadlock), checks that no balance goes below zero or below what is
  * reserved, appends the movement and updates the kept balances.
  *
- * An issue to a build order (`options.reservation`) takes stock the order holds: the
- * order row is locked before the item (the build-order modules lock in the same order:
- * order, then items by id, then balances), the taken quantity may come out of the
- * reserved stock, and the same transaction lowers what the order line holds on that
- * balance and raises what it has been issued.
+ * An issue to a source document that holds stock (`options.held`, a build order line
+ * today, supplied by `app/build-orders/build-order-held-stock.server.ts`) takes what the
+ * document holds: the document is locked before the item (the build-order modules lock
+ * in the same order: order, then items by id, then balances), the taken quantity comes
+ * out of the reserved stock, and the same transaction lowers what the document holds on
+ * that balance. After the commit the ledger runs its after-commit work
+ * (`afterMovementsCommitted`: the low-stock alerts).
  */
-import { checkStockAlertsOfSkus } from "~/alerts/stock-alerts.server";
 import { and, eq, sql } from "drizzle-orm";
 import type { Transaction } from "~/db/client.server";
 import { writeTransaction } from "~/db/write-transaction.server";
 import {
-  buildOrderIssues,
-  buildOrderLines,
-  buildOrderReservations,
-  buildOrders,
   items,
   locations,
   lots,
@@ -33,13 +30,13 @@ import {
   parseQuantity,
   parseUnitCost,
   quantityToNumber,
-} from "./decimal-amounts";
-import { StockError } from "./stock-errors";
+} from "~/lib/decimal-amounts";
+import { DomainError } from "~/lib/domain-error";
 import { unitWord } from "~/lib/unit-text";
 import type { MovementRequest } from "./movement-request";
 
 /** An amount of stock in a refusal, as typed into the API: "1.5 kg", "1 piece", "3 pieces". */
-function amountText(thousandths: bigint, unit: string): string {
+export function amountText(thousandths: bigint, unit: string): string {
   const value = quantityToNumber(thousandths);
   return `${value} ${unitWord(unit, value)}`;
 }
@@ -47,16 +44,78 @@ function amountText(thousandths: bigint, unit: string): string {
 /** A transaction of the one database client, for callers that record a movement inside their own. */
 export type LedgerTransaction = Transaction;
 
+/**
+ * The document a movement is made for, named by the caller that owns it (a build order
+ * today): the ledger knows it only by these words and never imports its owner.
+ */
+export interface SourceDocument {
+  /** What it is, in words: "build order". */
+  kind: string;
+  id: number;
+  /** How people write it: "BO-12". */
+  reference: string;
+}
+
+/** The balance an issue takes held stock from, with the quantity it takes. */
+export interface HeldBalance {
+  item: { id: number; sku: string; unit: string };
+  lot: { id: number; number: string | null };
+  location: { id: number; code: string };
+  taken: bigint;
+}
+
+/**
+ * Stock a source document holds (reserves) that an issue takes, supplied by the
+ * document's owner. The ledger calls these inside the movement's transaction, in this
+ * order: `lockDocument` before it locks the item (the lock order of every such
+ * transaction), `lockHeld` once it knows the balance and the quantity (refusing with a
+ * DomainError when the document holds less), `recordTaken` once the movement row exists.
+ */
+export interface HeldStock {
+  source: SourceDocument;
+  lockDocument(tx: Transaction): Promise<void>;
+  /** Locks what the document holds on the balance; refuses when it holds less than is taken. */
+  lockHeld(tx: Transaction, balance: HeldBalance): Promise<void>;
+  /** Lowers what the document holds by `taken` and notes the movement against it. */
+  recordTaken(
+    tx: Transaction,
+    taken: { movementId: number; quantity: bigint; unitCost: bigint },
+  ): Promise<void>;
+}
+
+/**
+ * Work to do once movements are committed: after `writeTransaction` returned, so once
+ * even when the transaction's work was retried. Low-stock alerts subscribe here
+ * (`app/alerts/stock-alerts.server.ts`), so the ledger imports no alert code.
+ */
+export type MovementsCommittedHook = (skus: readonly string[]) => Promise<void>;
+
+const committedHooks = new Set<MovementsCommittedHook>();
+
+/** Adds work to run after movements are committed; returns the function that removes it. */
+export function afterMovementsCommitted(
+  hook: MovementsCommittedHook,
+): () => void {
+  committedHooks.add(hook);
+  return () => committedHooks.delete(hook);
+}
+
+/** Runs the after-commit work, in the order it was added. For callers that commit movements in their own transaction. */
+export async function movementsCommitted(skus: readonly string[]) {
+  for (const hook of committedHooks) await hook(skus);
+}
+
 export interface MovementOptions {
   /** When it happened; only imports and the demo seed give a time other than now. */
   at?: Date;
   /**
-   * An issue of stock reserved for a build order line. The issue may take only what
-   * the line holds on this lot and location; it lowers that reservation (balance, item,
-   * order line) and raises the line's issued quantity, all in the movement's transaction.
+   * An issue of stock a source document holds (a build order line's reservation). The
+   * issue may take only what the document holds on this lot and location; the reserved
+   * quantity of the balance and item goes down with it, and the document's owner lowers
+   * its own rows, all in the movement's transaction.
    */
-  reservation?: { orderId: number; lineId: number };
-  /** Low-stock alerts are checked after the movement unless false (the demo seed checks once at the end). */
+  held?: HeldStock;
+  /** The after-commit work (low-stock alerts) runs after the movement unless false (the demo seed checks once at the end). */
   checkAlerts?: boolean;
 }
 
@@ -91,7 +150,7 @@ async function lockItem(tx: Transaction, sku: string) {
     .where(eq(items.sku, sku))
     .for("update")
     .limit(1);
-  if (!item) throw new StockError(400, `No item with SKU "${sku}".`, "sku");
+  if (!item) throw new DomainError(400, `No item with SKU "${sku}".`, "sku");
   return item;
 }
 
@@ -106,7 +165,7 @@ async function findLocation(tx: Transaction, code: string, field: string) {
     .where(eq(locations.code, code))
     .limit(1);
   if (!location || !location.active)
-    throw new StockError(400, `No location with code "${code}".`, field);
+    throw new DomainError(400, `No location with code "${code}".`, field);
   return location;
 }
 
@@ -178,7 +237,7 @@ async function resolveLot(
 ): Promise<{ id: number; number: string | null; tareKg: bigint | null }> {
   if (!request.lot) {
     if (item.kind === "wire") {
-      throw new StockError(
+      throw new DomainError(
         400,
         "Wire is kept by spool: give the spool's lot number.",
         "lot",
@@ -199,7 +258,7 @@ async function resolveLot(
     };
   }
   if (request.type !== "receipt") {
-    throw new StockError(
+    throw new DomainError(
       400,
       `No lot "${request.lot}" of this item. A new lot comes with a receipt.`,
       "lot",
@@ -240,27 +299,27 @@ function signedChange(
     case "receipt": {
       if (request.grossKg !== undefined) {
         if (item.kind !== "wire")
-          throw new StockError(
+          throw new DomainError(
             400,
             "Gross and tare weights are for wire spools.",
             "grossKg",
           );
         const tare = request.tareKg ?? lot.tareKg;
         if (tare === null)
-          throw new StockError(
+          throw new DomainError(
             400,
             "Give the spool's tare (empty spool) weight.",
             "tareKg",
           );
         const net = request.grossKg - tare;
         if (net <= 0n)
-          throw new StockError(
+          throw new DomainError(
             400,
             "The gross weight must be more than the tare weight.",
             "grossKg",
           );
         if (request.quantity !== undefined && request.quantity !== net) {
-          throw new StockError(
+          throw new DomainError(
             400,
             `Gross − tare is ${quantityToNumber(net)} kg, not ${quantityToNumber(request.quantity)} kg.`,
             "quantity",
@@ -274,21 +333,21 @@ function signedChange(
       if (request.grossKg !== undefined) {
         // Spool weigh-back: what left the spool is its previous net less its net now.
         if (lot.tareKg === null)
-          throw new StockError(
+          throw new DomainError(
             400,
             "This lot has no tare weight: issue by quantity.",
             "grossKg",
           );
         const netNow = request.grossKg - lot.tareKg;
         if (netNow < 0n)
-          throw new StockError(
+          throw new DomainError(
             400,
             "The gross weight is below the spool's tare weight.",
             "grossKg",
           );
         const taken = balance.onHand - netNow;
         if (taken <= 0n) {
-          throw new StockError(
+          throw new DomainError(
             400,
             "The spool weighs as much as or more than its recorded net: nothing to issue.",
             "grossKg",
@@ -310,86 +369,7 @@ function signedChange(
   }
 }
 
-/**
- * Locks the build order (first, before the item: the lock order of every build-order
- * transaction) and checks it exists. Re-locking an order the caller already holds is free.
- */
-async function lockReservingOrder(tx: Transaction, orderId: number) {
-  const [order] = await tx
-    .select({ id: buildOrders.id })
-    .from(buildOrders)
-    .where(eq(buildOrders.id, orderId))
-    .for("update");
-  if (!order)
-    throw new StockError(404, `No build order BO-${orderId}.`, "orderId");
-}
-
-/**
- * What the order line holds on the balance the issue takes from, locked; refuses an
- * issue of another item, of something other than an issue, or of more than is held.
- */
-async function lockReservation(
-  tx: Transaction,
-  reservation: { orderId: number; lineId: number },
-  request: MovementRequest,
-  item: { id: number; sku: string; unit: string },
-  lot: { id: number; number: string | null },
-  location: { id: number; code: string },
-  taken: bigint,
-) {
-  if (request.type !== "issue")
-    throw new StockError(
-      400,
-      "Only an issue takes stock reserved for a build order.",
-      "type",
-    );
-  const [line] = await tx
-    .select({
-      orderId: buildOrderLines.orderId,
-      itemId: buildOrderLines.itemId,
-      reserved: buildOrderLines.reserved,
-      issued: buildOrderLines.issued,
-    })
-    .from(buildOrderLines)
-    .where(eq(buildOrderLines.id, reservation.lineId))
-    .for("update");
-  if (!line || line.orderId !== reservation.orderId || line.itemId !== item.id)
-    throw new StockError(
-      400,
-      `BO-${reservation.orderId} has no line for ${item.sku}.`,
-      "sku",
-    );
-  const where = and(
-    eq(buildOrderReservations.lineId, reservation.lineId),
-    eq(buildOrderReservations.itemId, item.id),
-    eq(buildOrderReservations.lotId, lot.id),
-    eq(buildOrderReservations.locationId, location.id),
-  );
-  const [held] = await tx
-    .select({ quantity: buildOrderReservations.quantity })
-    .from(buildOrderReservations)
-    .where(where)
-    .for("update");
-  const heldQuantity = held ? parseQuantity(held.quantity) : 0n;
-  const place = `${lot.number ? `lot ${lot.number} ` : ""}at ${location.code}`;
-  if (taken > heldQuantity) {
-    throw new StockError(
-      409,
-      heldQuantity === 0n
-        ? `BO-${reservation.orderId} holds no ${item.sku} ${place}.`
-        : `BO-${reservation.orderId} holds only ${amountText(heldQuantity, item.unit)} of ${item.sku} ${place}; cannot issue ${amountText(taken, item.unit)}.`,
-      "quantity",
-    );
-  }
-  return {
-    where,
-    held: heldQuantity,
-    lineReserved: parseQuantity(line.reserved),
-    lineIssued: parseQuantity(line.issued),
-  };
-}
-
-/** Records one movement (two rows for a transfer). Throws StockError for the user's mistakes. */
+/** Records one movement (two rows for a transfer). Throws DomainError for the user's mistakes. */
 export async function recordMovement(
   request: MovementRequest,
   userId: string,
@@ -401,13 +381,14 @@ export async function recordMovement(
   );
   // After the commit, in the same request: a drop below the reorder point opens an alert.
   if (options.checkAlerts !== false)
-    await checkStockAlertsOfSkus([recorded.movement.sku]);
+    await movementsCommitted([recorded.movement.sku]);
   return recorded;
 }
 
 /**
- * The same inside the caller's transaction, for a caller that locks its build order
- * first and changes the order's state in the same transaction.
+ * The same inside the caller's transaction, for a caller that locks its document (a
+ * build order) first and changes the document's state in the same transaction. The
+ * caller runs `movementsCommitted` after its commit.
  */
 export async function recordMovementIn(
   tx: Transaction,
@@ -415,17 +396,16 @@ export async function recordMovementIn(
   userId: string,
   options: MovementOptions = {},
 ): Promise<RecordedMovement> {
-  if (options.reservation)
-    await lockReservingOrder(tx, options.reservation.orderId);
+  if (options.held) await options.held.lockDocument(tx);
   const item = await lockItem(tx, request.sku);
   if (!item.active)
-    throw new StockError(
+    throw new DomainError(
       409,
       `Item ${item.sku} is archived: restore it before moving stock.`,
       "sku",
     );
   if (request.unit && request.unit !== item.unit) {
-    throw new StockError(
+    throw new DomainError(
       400,
       `Item ${item.sku} is stocked in ${item.unit}, not ${request.unit}.`,
       "unit",
@@ -438,7 +418,7 @@ export async function recordMovementIn(
     item.unit === "pcs" &&
     quantities.some((value) => value! % 1000n !== 0n)
   ) {
-    throw new StockError(
+    throw new DomainError(
       400,
       `Item ${item.sku} is counted in whole pieces.`,
       "quantity",
@@ -450,7 +430,7 @@ export async function recordMovementIn(
       ? await findLocation(tx, request.toLocation!, "toLocation")
       : null;
   if (toLocation && toLocation.id === location.id) {
-    throw new StockError(
+    throw new DomainError(
       400,
       "A transfer needs two different locations.",
       "toLocation",
@@ -469,21 +449,20 @@ export async function recordMovementIn(
 
   const change = signedChange(request, item, lot, from);
   const unit = item.unit;
-  // An issue to a build order takes what the order holds here: that much reserved stock goes with it.
-  const held = options.reservation
-    ? await lockReservation(
-        tx,
-        options.reservation,
-        request,
-        item,
-        lot,
-        location,
-        -change,
-      )
-    : null;
+  // An issue to a document (a build order) takes what it holds here: that much reserved stock goes with it.
+  const held = options.held ?? null;
+  if (held) {
+    if (request.type !== "issue")
+      throw new DomainError(
+        400,
+        `Only an issue takes stock reserved for a ${held.source.kind}.`,
+        "type",
+      );
+    await held.lockHeld(tx, { item, lot, location, taken: -change });
+  }
   const reservedTaken = held ? -change : 0n;
   if (from.onHand + change < 0n) {
-    throw new StockError(
+    throw new DomainError(
       409,
       `Only ${amountText(from.onHand, unit)} of ${item.sku}${lot.number ? ` lot ${lot.number}` : ""} at ${location.code}; cannot take ${amountText(-change, unit)}.`,
       "quantity",
@@ -495,7 +474,7 @@ export async function recordMovementIn(
     request.type !== "adjustment" &&
     from.onHand + change < from.reserved - reservedTaken
   ) {
-    throw new StockError(
+    throw new DomainError(
       409,
       `${item.sku} at ${location.code}: ${amountText(from.reserved - reservedTaken, unit)} reserved for build orders, only ${amountText(from.onHand - from.reserved + reservedTaken, unit)} free.`,
       "quantity",
@@ -580,30 +559,12 @@ export async function recordMovementIn(
       updatedAt: now,
     })
     .where(eq(items.id, item.id));
-  if (held && options.reservation) {
-    const { lineId } = options.reservation;
-    if (held.held === reservedTaken) {
-      await tx.delete(buildOrderReservations).where(held.where);
-    } else {
-      await tx
-        .update(buildOrderReservations)
-        .set({ quantity: formatQuantityText(held.held - reservedTaken) })
-        .where(held.where);
-    }
-    await tx
-      .update(buildOrderLines)
-      .set({
-        reserved: formatQuantityText(held.lineReserved - reservedTaken),
-        issued: formatQuantityText(held.lineIssued + reservedTaken),
-      })
-      .where(eq(buildOrderLines.id, lineId));
-    await tx.insert(buildOrderIssues).values({
+  if (held)
+    await held.recordTaken(tx, {
       movementId,
-      lineId,
-      quantity: formatQuantityText(reservedTaken),
-      unitCost: formatUnitCostText(averageAfter),
+      quantity: reservedTaken,
+      unitCost: averageAfter,
     });
-  }
 
   return {
     movement: {

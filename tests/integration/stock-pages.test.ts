@@ -313,6 +313,29 @@ describe("CSV export", () => {
     expect(text).not.toMatch(/(^|,)=HYPERLINK/m);
   });
 
+  it("rounds the value to the cent half away from zero on the exact amount", async () => {
+    const sku = uniqueCode("FR");
+    await createWire(sku);
+    await move({
+      type: "receipt",
+      sku,
+      lot: "SP-1",
+      location: store,
+      grossKg: 1.6,
+      tareKg: 0.6,
+      unitCost: 1.005,
+    });
+
+    const response = await get(`/stock/export.csv?search=${sku}`, manager);
+    expect(response.status).toBe(200);
+    const [row] = Papa.parse<Record<string, string>>(await response.text(), {
+      header: true,
+      skipEmptyLines: true,
+    }).data;
+    // 1 kg × 1.0050 per kg = 1.0050: half a cent, rounded up (decision 006).
+    expect(row!["value (company currency)"]).toBe("1.01");
+  });
+
   it("refuses filters it cannot read with a 400, not an error page", async () => {
     const response = await get("/stock/export.csv?kind=spring", manager);
     expect(response.status).toBe(400);

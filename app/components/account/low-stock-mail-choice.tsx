@@ -1,5 +1,5 @@
 import { Form } from "react-router";
-import type { AlertMailMode } from "~/alerts/low-stock";
+import type { AlertMailMode } from "~/db/tables/alert-enums";
 
 /** How a buyer hears about items below their reorder point: each alert, a daily digest, or not by e-mail. */
 export function LowStockMailChoice({

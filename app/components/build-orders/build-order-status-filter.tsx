@@ -5,7 +5,7 @@ import {
   buildOrderStatusLabels,
   type BuildOrderStatus,
 } from "~/build-orders/build-order-status";
-import { buildOrderStatuses } from "~/db/tables/build-orders";
+import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 
 export function BuildOrderStatusFilter({
   status,

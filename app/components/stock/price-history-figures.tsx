@@ -6,12 +6,12 @@ import { createColumnHelper } from "@tanstack/react-table";
 import { DataTable } from "~/components/data-table";
 import { perUnitWord } from "~/lib/unit-text";
 import {
-  dayText,
   offerName,
   pricePerUnit,
   type PriceHistoryView,
   type PriceOffer,
 } from "~/stock/price-history-texts";
+import { formatDay } from "~/lib/format";
 
 export function PriceHistoryFigures({
   history,
@@ -57,7 +57,7 @@ function figureColumns(companyCurrency: string, unit: string) {
     column.accessor("date", {
       header: "From",
       cell: (info) => (
-        <span className="whitespace-nowrap">{dayText(info.getValue())}</span>
+        <span className="whitespace-nowrap">{formatDay(info.getValue())}</span>
       ),
     }),
     column.accessor("unitPrice", {

@@ -19,12 +19,12 @@ import {
   type PriceHistoryChartLayout,
 } from "~/pricing/price-history-chart";
 import {
-  dayText,
   monthText,
   offerName,
   shortName,
   type PriceHistoryView,
 } from "~/stock/price-history-texts";
+import { formatDay } from "~/lib/format";
 import { OfferMarker, offerStrokeClass } from "./price-offer-marker";
 
 const frame: ChartFrame = {
@@ -135,7 +135,7 @@ export function PriceHistoryPlot({
           tickLineProps={{ strokeOpacity: 0.5, strokeLinecap: "butt" }}
           tickFormat={(_, index) => {
             const date = chart.dateTicks[index]!.date;
-            return chart.monthTicks ? monthText(date) : dayText(date);
+            return chart.monthTicks ? monthText(date) : formatDay(date);
           }}
           tickLabelProps={(_, index) => ({
             fontSize: 12,
@@ -186,7 +186,7 @@ export function PriceHistoryPlot({
               />
               {layout.markers.map((marker) => (
                 <g key={marker.date}>
-                  <title>{`${name}: ${price(marker.unitPrice)} from ${dayText(marker.date)}`}</title>
+                  <title>{`${name}: ${price(marker.unitPrice)} from ${formatDay(marker.date)}`}</title>
                   <OfferMarker
                     style={layout.style}
                     x={xScale(dayOf(marker.date))}

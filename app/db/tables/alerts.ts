@@ -17,7 +17,7 @@ import {
 } from "drizzle-orm/mysql-core";
 import { mailOutbox, users } from "./accounts";
 import { items } from "./stock";
-import { alertMailModes } from "~/alerts/low-stock";
+import { alertMailModes } from "./alert-enums";
 
 const quantity = (name: string) => decimal(name, { precision: 14, scale: 3 });
 

@@ -20,14 +20,7 @@ import {
 import { createdAt, users } from "./accounts";
 import { designRevisions, designs } from "./designs";
 import { items, locations, stockMovements } from "./stock";
-
-export const buildOrderStatuses = [
-  "draft",
-  "reserved",
-  "in_progress",
-  "complete",
-  "cancelled",
-] as const;
+import { buildOrderStatuses } from "./build-order-enums";
 
 const quantity = (name: string) => decimal(name, { precision: 14, scale: 3 });
 

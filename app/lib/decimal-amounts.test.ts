@@ -5,6 +5,7 @@ import {
   parseQuantity,
   parseUnitCost,
   quantityFromNumber,
+  roundedAmountText,
   valueOf,
 } from "./decimal-amounts";
 
@@ -65,5 +66,17 @@ describe("moving average cost", () => {
   });
   it("values stock exactly: 2.500 kg at 14.2000 = 35.5000", () => {
     expect(valueOf(2_500n, 142_000n)).toBe(355_000n);
+  });
+});
+
+describe("amounts rounded for a file", () => {
+  it("rounds half away from zero on the exact amount, never on the float", () => {
+    expect(roundedAmountText(1.005, 2)).toBe("1.01");
+    expect(roundedAmountText(-1.005, 2)).toBe("-1.01");
+    expect(roundedAmountText(2.675, 2)).toBe("2.68");
+    expect(roundedAmountText(1.0049, 2)).toBe("1.00");
+    expect(roundedAmountText(68.16, 2)).toBe("68.16");
+    expect(roundedAmountText(0.00005, 4)).toBe("0.0001");
+    expect(roundedAmountText(12.34567, 3)).toBe("12.346");
   });
 });

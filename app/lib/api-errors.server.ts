@@ -6,21 +6,22 @@ import {
 import { isEngineeringInputError } from "~/engineering/errors";
 import { apiError, databaseUnavailableAnswer } from "~/lib/api.server";
 import { areaLogger } from "~/observability/logger.server";
-import { isStockError } from "./stock-errors";
+import { isDomainError } from "./domain-error";
 
 const dbLog = areaLogger("db");
 
 /**
- * Runs stock work for an API route; the ledger's refusals become 400/404/409 JSON answers,
- * and a database lost on the way (its transaction rolled back) a 503 JSON answer.
+ * Runs an API route's work; domain refusals (`DomainError`, engineering input errors,
+ * duplicates) become 400/404/409 JSON answers, and a database lost on the way (its
+ * transaction rolled back) a 503 JSON answer. The one API error mapper.
  */
-export async function answerStockError(
+export async function answerDomainError(
   work: () => Promise<Response>,
 ): Promise<Response> {
   try {
     return await work();
   } catch (error) {
-    if (isStockError(error)) {
+    if (isDomainError(error)) {
       return apiError(
         error.status,
         error.message,

@@ -9,7 +9,8 @@ import { isTooLongForNumber } from "~/lib/number-text";
 export const quantityScale = 1_000n;
 export const unitCostScale = 10_000n;
 
-const decimalPattern = /^-?\d+(\.\d+)?$/;
+/** A plain decimal number as stored and sent: digits, an optional point and fraction, an optional leading minus. */
+export const decimalNumberPattern = /^-?\d+(\.\d+)?$/;
 
 /** "12.345" → 12345n thousandths. Throws on more than 3 decimals or non-numbers. */
 export function parseQuantity(text: string): bigint {
@@ -23,7 +24,7 @@ export function parseUnitCost(text: string): bigint {
 
 function parseScaled(text: string, decimals: number): bigint {
   const trimmed = text.trim();
-  if (isTooLongForNumber(trimmed) || !decimalPattern.test(trimmed))
+  if (isTooLongForNumber(trimmed) || !decimalNumberPattern.test(trimmed))
     throw new RangeError(`"${text.slice(0, 40)}" is not a decimal number`);
   const negative = trimmed.startsWith("-");
   const [whole, fraction = ""] = trimmed.replace("-", "").split(".");
@@ -69,13 +70,37 @@ function formatScaled(value: bigint, decimals: number): string {
   return `${negative ? "-" : ""}${whole}.${fraction}`;
 }
 
+/**
+ * A money amount kept as a JSON number (ten-thousandths over 10,000, as the item API
+ * gives it) as plain text to `decimals` places, rounded half away from zero on the exact
+ * amount: 1.005 → "1.01", where rounding the float (1.00499…) would give "1.00".
+ */
+export function roundedAmountText(
+  amount: number,
+  decimals: 1 | 2 | 3 | 4,
+): string {
+  const tenThousandths = BigInt(Math.round(amount * 10_000));
+  return formatScaled(
+    divideHalfAwayFromZero(tenThousandths, 10n ** BigInt(4 - decimals)),
+    decimals,
+  );
+}
+
 /** Thousandths as a JSON number (exact for any stock quantity below 9 × 10¹² units). */
 export function quantityToNumber(thousandths: bigint): number {
   return Number(thousandths) / 1000;
 }
 
-/** Divides and rounds half away from zero. */
-function divideRounded(numerator: bigint, denominator: bigint): bigint {
+/**
+ * `numerator / denominator`, rounded half away from zero to a whole number: the one
+ * rounding rule of quantities and money (decision 006). Throws RangeError when the
+ * denominator is zero.
+ */
+export function divideHalfAwayFromZero(
+  numerator: bigint,
+  denominator: bigint,
+): bigint {
+  if (denominator === 0n) throw new RangeError("division by zero");
   const negative = numerator < 0n !== denominator < 0n;
   const n = numerator < 0n ? -numerator : numerator;
   const d = denominator < 0n ? -denominator : denominator;
@@ -96,7 +121,7 @@ export function movingAverageAfterReceipt(input: {
   const before = input.onHand > 0n ? input.onHand : 0n;
   const total = before + input.received;
   if (total <= 0n) return input.unitCost;
-  return divideRounded(
+  return divideHalfAwayFromZero(
     before * input.averageCost + input.received * input.unitCost,
     total,
   );
@@ -104,5 +129,5 @@ export function movingAverageAfterReceipt(input: {
 
 /** Value of a quantity at a unit cost, in ten-thousandths of money (exact). */
 export function valueOf(thousandths: bigint, unitCost: bigint): bigint {
-  return divideRounded(thousandths * unitCost, quantityScale);
+  return divideHalfAwayFromZero(thousandths * unitCost, quantityScale);
 }

@@ -1,0 +1,19 @@
+/**
+ * A request the domain refuses, in any folder (the stock ledger, designs, suppliers, …):
+ * 400 (bad input), 404 (unknown thing) or 409 (not enough stock, conflicts). API routes
+ * answer it as JSON through `answerDomainError` (`app/lib/api-errors.server.ts`).
+ */
+export class DomainError extends Error {
+  constructor(
+    readonly status: 400 | 404 | 409,
+    message: string,
+    readonly field?: string,
+  ) {
+    super(message);
+    this.name = "DomainError";
+  }
+}
+
+export function isDomainError(error: unknown): error is DomainError {
+  return error instanceof DomainError;
+}
