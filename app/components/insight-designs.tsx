@@ -12,6 +12,7 @@ import type { InsightLoaderData } from "~/insight/insight-page.server";
 import type { DesignInsight } from "~/insight/design-insight.server";
 import {
   moneyChange,
+  costingMoneyText,
   moneyFromJson,
   rankByCostPerNm,
   unpricedText,
@@ -19,7 +20,6 @@ import {
 import { ESTIMATED_TORQUE_PER_NM_LABEL } from "~/designs/design-costing";
 import { costBasisLabels } from "~/designs/design-page";
 import { formatDay, formatQuantity } from "~/lib/format";
-import { formatMoney } from "~/pricing/money";
 import { costBasisText, PriceBasisNote } from "./design/price-basis-note";
 import { InsightCostChart } from "./insight-cost-chart";
 import { splitParts, Swatch } from "./insight-patterns";
@@ -38,14 +38,6 @@ type Data = Pick<
   | "basis"
   | "today"
 >;
-
-/** Money exactly as the costing gives it, rounded to cents only here: "12.34 EUR". */
-function money(value: number, currency: string, per?: string): string {
-  return formatMoney(moneyFromJson(value), currency, {
-    decimals: 2,
-    ...(per ? { per } : {}),
-  });
-}
 
 function designLabel(design: DesignInsight): string {
   return `${design.name} · rev ${design.revision}`;
@@ -71,7 +63,7 @@ function StoredBase({
   return (
     <p className="mt-1 text-xs text-graphite-500">
       {base
-        ? `Stored: ${money(base.pricePerKg, currency, "kg")} from ${formatDay(base.validFrom)}`
+        ? `Stored: ${costingMoneyText(base.pricePerKg, currency, "kg")} from ${formatDay(base.validFrom)}`
         : `No ${metal} base stored in ${currency} for this day.`}
     </p>
   );
@@ -87,7 +79,7 @@ function whatIfSentence(data: Data): string | null {
     if (value === null) continue;
     const stored = data.bases[metal];
     parts.push(
-      `${metal} base ${money(value, currency, "kg")}${stored ? ` instead of the stored ${money(stored.pricePerKg, currency, "kg")}` : ""}`,
+      `${metal} base ${costingMoneyText(value, currency, "kg")}${stored ? ` instead of the stored ${costingMoneyText(stored.pricePerKg, currency, "kg")}` : ""}`,
     );
   }
   for (const design of data.designs.designs)
@@ -112,13 +104,6 @@ function pageHref(data: Data, page: number): string {
   return `?${params.toString()}`;
 }
 
-/** A money figure without its currency, for tables that name the unit in their caption: "11.75". */
-function amount(value: number): string {
-  return formatMoney(moneyFromJson(value), "", { decimals: 2 }).split(
-    "\u00a0",
-  )[0]!;
-}
-
 function splitColumns() {
   const column = createColumnHelper<DesignInsight>();
   return [
@@ -138,7 +123,7 @@ function splitColumns() {
         ),
         cell: ({ row }) => {
           const split = row.original.splitPerNm;
-          return split ? amount(split[part.key]) : "—";
+          return split ? costingMoneyText(split[part.key]) : "—";
         },
         meta: { numeric: true },
       }),
@@ -155,7 +140,7 @@ function splitColumns() {
           "—"
         ) : (
           <span className="font-semibold">
-            {amount(row.original.costPerNm)}
+            {costingMoneyText(row.original.costPerNm)}
           </span>
         ),
       meta: { numeric: true },
@@ -227,7 +212,7 @@ function designColumns(data: Data) {
       cell: ({ row }) => (
         <span>
           <span className="whitespace-nowrap">
-            {money(row.original.costPerMotor, currency)}
+            {costingMoneyText(row.original.costPerMotor, currency)}
           </span>
           {row.original.complete ? null : (
             <span className="ml-auto block max-w-48 text-xs text-caution">
@@ -253,7 +238,7 @@ function designColumns(data: Data) {
         ) : (
           <span>
             <span className="font-semibold whitespace-nowrap">
-              {money(row.original.costPerNm, currency, "N·m")}
+              {costingMoneyText(row.original.costPerNm, currency, "N·m")}
             </span>
             {row.original.perNmTorque?.source === "estimated" ? (
               <span className="ml-auto block max-w-40 text-xs text-graphite-500">
@@ -277,7 +262,7 @@ function designColumns(data: Data) {
                 <span className="whitespace-nowrap text-graphite-700">
                   {stored.costPerNm === null
                     ? "—"
-                    : money(stored.costPerNm, currency, "N·m")}
+                    : costingMoneyText(stored.costPerNm, currency, "N·m")}
                   {stored.costPerNm !== null &&
                   row.original.costPerNm !== null ? (
                     <span className="block text-xs">
@@ -377,11 +362,8 @@ function NotRanked({
             </span>
             <span className="text-graphite-500">
               {" "}
-              (the priced lines alone: {money(
-                design.costPerMotor,
-                currency,
-              )}{" "}
-              per motor)
+              (the priced lines alone:{" "}
+              {costingMoneyText(design.costPerMotor, currency)} per motor)
             </span>
           </li>
         ))}
@@ -401,7 +383,7 @@ function NotRanked({
 /** A change with its sign, in the unit of the figure above it: "+0.06", "−0.10", "±0.00". */
 function signed(change: number): string {
   const value = moneyFromJson(change);
-  const text = amount(Number(value < 0n ? -value : value) / 10_000);
+  const text = costingMoneyText(Number(value < 0n ? -value : value) / 10_000);
   return `${value > 0n ? "+" : value < 0n ? "−" : "±"}${text}`;
 }
 

@@ -8,18 +8,13 @@ import { createColumnHelper } from "@tanstack/react-table";
 import { Link } from "react-router";
 import { DataTable } from "~/components/data-table";
 import type { DesignInsight } from "~/insight/design-insight.server";
-import { costHistoryChange, moneyFromJson } from "~/insight/design-insight";
+import { costHistoryChange, costingMoneyText } from "~/insight/design-insight";
 import type { StockValueInsight } from "~/insight/stock-value.server";
 import { formatDay } from "~/lib/format";
-import { formatMoney } from "~/pricing/money";
 import { kindParts, palette, Swatch, type FillPart } from "./insight-patterns";
 import { InsightTrendChart, TrendSample } from "./insight-trend-chart";
 import { InsightValueBars } from "./insight-value-bars";
 import { countText } from "~/lib/unit-text";
-
-function money(value: number, currency: string): string {
-  return formatMoney(moneyFromJson(value), currency, { decimals: 2 });
-}
 
 const monthHeader = new Intl.DateTimeFormat("en-GB", {
   month: "short",
@@ -74,12 +69,12 @@ export function StockHeadline({ stock }: { stock: StockValueInsight }) {
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <Figure
           label="in stock (on hand × average cost)"
-          value={money(stock.total, stock.currency)}
+          value={costingMoneyText(stock.total, stock.currency)}
           to="/stock"
         />
         <Figure
           label="reserved for build orders"
-          value={money(stock.reservedValue, stock.currency)}
+          value={costingMoneyText(stock.reservedValue, stock.currency)}
           to="/build-orders"
         />
         <Figure
@@ -176,7 +171,7 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
                 header: "Value",
                 cell: ({ row }) => (
                   <span className="whitespace-nowrap">
-                    {money(row.original.row.value, currency)}
+                    {costingMoneyText(row.original.row.value, currency)}
                   </span>
                 ),
                 meta: { numeric: true },
@@ -186,7 +181,7 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
           <p className="text-sm">
             Total{" "}
             <span className="font-semibold">
-              {money(stock.total, currency)}
+              {costingMoneyText(stock.total, currency)}
             </span>
           </p>
         </div>
@@ -233,7 +228,7 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
                     header: "Value",
                     cell: ({ row }) => (
                       <span className="whitespace-nowrap">
-                        {money(row.original.value, currency)}
+                        {costingMoneyText(row.original.value, currency)}
                       </span>
                     ),
                     meta: { numeric: true },
@@ -248,7 +243,7 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
                   ? ` The chart shows the ${shownLocations.length} most valuable locations.`
                   : ""}
                 {stock.otherLocations
-                  ? ` ${stock.otherLocations.locations} more locations hold ${money(stock.otherLocations.value, currency)}.`
+                  ? ` ${stock.otherLocations.locations} more locations hold ${costingMoneyText(stock.otherLocations.value, currency)}.`
                   : ""}
               </p>
             </>
@@ -281,7 +276,7 @@ export function StockTrend({
           label={`Stock value at the end of each week, in ${currency}`}
           summary={
             first && last
-              ? `Stock value ${money(first.value, currency)} at the end of the week of ${formatDay(first.week)}, ${money(last.value, currency)} now; lowest ${money(Math.min(...trend.map((point) => point.value)), currency)}, highest ${money(Math.max(...trend.map((point) => point.value)), currency)}.`
+              ? `Stock value ${costingMoneyText(first.value, currency)} at the end of the week of ${formatDay(first.week)}, ${costingMoneyText(last.value, currency)} now; lowest ${costingMoneyText(Math.min(...trend.map((point) => point.value)), currency)}, highest ${costingMoneyText(Math.max(...trend.map((point) => point.value)), currency)}.`
               : "No weeks to show."
           }
           series={[
@@ -325,7 +320,7 @@ export function StockTrend({
               header: "Value at its end",
               cell: (info) => (
                 <span className="whitespace-nowrap">
-                  {money(info.getValue(), currency)}
+                  {costingMoneyText(info.getValue(), currency)}
                 </span>
               ),
               meta: { numeric: true },
@@ -354,7 +349,7 @@ function changeColumns(currency: string) {
         const change = changeOf(row.original);
         return change ? (
           <span className="whitespace-nowrap">
-            {money(change.from.costPerMotor, currency)}
+            {costingMoneyText(change.from.costPerMotor, currency)}
             <span className="block text-xs text-graphite-500">
               {formatDay(change.from.date)}
             </span>
@@ -372,7 +367,7 @@ function changeColumns(currency: string) {
         const change = changeOf(row.original);
         return change ? (
           <span className="whitespace-nowrap">
-            {money(change.to.costPerMotor, currency)}
+            {costingMoneyText(change.to.costPerMotor, currency)}
             <span className="block text-xs text-graphite-500">
               {formatDay(change.to.date)}
             </span>
@@ -398,7 +393,7 @@ function changeColumns(currency: string) {
         return (
           <span className="whitespace-nowrap font-semibold">
             {sign}
-            {money(Math.abs(change.change), currency)}
+            {costingMoneyText(Math.abs(change.change), currency)}
             {change.percent === null ? null : (
               <span className="block text-xs font-normal text-graphite-500">
                 {sign}
@@ -455,7 +450,7 @@ export function CostHistory({
                 const priced = points.filter((point) => point.complete);
                 return priced.length === 0
                   ? `${design.name}: not fully priced in any month.`
-                  : `${design.name}: ${money(priced[0]!.costPerMotor, currency)} on ${formatDay(priced[0]!.date)}, ${money(priced.at(-1)!.costPerMotor, currency)} on ${formatDay(priced.at(-1)!.date)}.`;
+                  : `${design.name}: ${costingMoneyText(priced[0]!.costPerMotor, currency)} on ${formatDay(priced[0]!.date)}, ${costingMoneyText(priced.at(-1)!.costPerMotor, currency)} on ${formatDay(priced.at(-1)!.date)}.`;
               })
               .join(" ")}
             series={withHistory.map((design) => ({
@@ -504,11 +499,7 @@ export function CostHistory({
                 const point = row.original.costHistory?.[index];
                 return point && point.complete ? (
                   <span className="whitespace-nowrap">
-                    {
-                      formatMoney(moneyFromJson(point.costPerMotor), currency, {
-                        decimals: 2,
-                      }).split("\u00a0")[0]
-                    }
+                    {costingMoneyText(point.costPerMotor)}
                   </span>
                 ) : (
                   "—"

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
   costHistoryChange,
+  costingMoneyText,
   moneyChange,
   moneyFromJson,
   rankByCostPerNm,
@@ -144,5 +145,17 @@ describe("rankByCostPerNm", () => {
   it("names how many lines are unpriced, in the singular for one", () => {
     expect(unpricedText(1)).toBe("incomplete — 1\u00a0line unpriced");
     expect(unpricedText(2)).toBe("incomplete — 2\u00a0lines unpriced");
+  });
+});
+
+describe("costingMoneyText", () => {
+  // Worked by hand: exact ten-thousandths rounded half away from zero (decision 006),
+  // where a float would give 12.34 for 12.345.
+  it("rounds a costing figure to the cent exactly, with or without its currency", () => {
+    expect(costingMoneyText(12.345, "EUR")).toBe("12.35\u00a0EUR");
+    expect(costingMoneyText(1234.5, "EUR", "N·m")).toBe(
+      "1,234.50\u00a0EUR/N·m",
+    );
+    expect(costingMoneyText(11.745)).toBe("11.75");
   });
 });

@@ -6,7 +6,7 @@
  */
 import { apportion } from "~/designs/apportion";
 import { countText } from "~/lib/unit-text";
-import type { MoneyAmount } from "~/pricing/money";
+import { formatMoney, type MoneyAmount } from "~/pricing/money";
 
 /** The five parts of a motor's cost, in the order the charts stack them. */
 export const splitKeys = [
@@ -23,6 +23,23 @@ export type SplitFigures = Record<SplitKey, number>;
 /** A money figure from the costing's JSON (4 decimals) as ten-thousandths. */
 export function moneyFromJson(value: number): MoneyAmount {
   return BigInt(Math.round(value * 10_000));
+}
+
+/**
+ * A costing figure to the cent, exactly (half away from zero): "1,234.50 EUR",
+ * per a unit "12.34 EUR/N·m"; without a currency the number alone, for tables
+ * whose caption names it: "11.75".
+ */
+export function costingMoneyText(
+  value: number,
+  currency = "",
+  per?: string,
+): string {
+  const text = formatMoney(moneyFromJson(value), currency, {
+    decimals: 2,
+    ...(per ? { per } : {}),
+  });
+  return currency ? text : text.split("\u00a0")[0]!;
 }
 
 /** Ten-thousandths as a JSON number, exact to 4 decimals. */

@@ -1,10 +1,26 @@
 import { describe, expect, it } from "vitest";
 import {
+  formatAmount,
   formatDateTime,
   formatDay,
+  formatPriceText,
   formatQuantity,
   formatTimeOfDay,
 } from "./format";
+
+// Expected texts worked by hand from the en-GB number format (comma thousands, point decimals).
+describe("money and price texts", () => {
+  it("writes an amount to the cent, grouped, without a currency", () => {
+    expect(formatAmount(1234.5)).toBe("1,234.50");
+    expect(formatAmount(0)).toBe("0.00");
+  });
+
+  it("writes a file's price with two to four places and no grouping", () => {
+    expect(formatPriceText("14.2000")).toBe("14.20");
+    expect(formatPriceText("0.85125")).toBe("0.8513");
+    expect(formatPriceText("12345.6")).toBe("12345.60");
+  });
+});
 
 describe("formatQuantity", () => {
   it("puts the unit beside the number, with a no-break space", () => {

@@ -29,6 +29,20 @@ export function formatTimeOfDay(value: string): string {
   return (formatDateTime(value).split(", ")[1] ?? "").replace(" UTC", "");
 }
 
+/** Money in the company currency, to the cent, without the currency: "1,234.50". */
+export function formatAmount(value: number): string {
+  return formatQuantity(value, "", 2);
+}
+
+/** A price as a file gives it, "14.2000" → "14.20": at least two places, the rest only where they count. */
+export function formatPriceText(decimal: string): string {
+  return Number(decimal).toLocaleString("en-GB", {
+    minimumFractionDigits: 2,
+    maximumFractionDigits: 4,
+    useGrouping: false,
+  });
+}
+
 /** A number with its unit, e.g. formatQuantity(1.2345, "kg", 3) → "1.235 kg". */
 export function formatQuantity(
   value: number,

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
   countText,
+  moneyText,
   nounFor,
   perUnitWord,
   quantityText,
@@ -54,5 +55,14 @@ describe("stock units in words", () => {
   it("names the unit after per in the singular", () => {
     expect(perUnitWord("pcs")).toBe("piece");
     expect(perUnitWord("kg")).toBe("kg");
+  });
+});
+
+describe("moneyText", () => {
+  // Worked by hand: en-GB grouping, two places, a no-break space before the currency.
+  it("writes money to the cent with its currency, per a unit when given", () => {
+    expect(moneyText(1234.5, "EUR")).toBe("1,234.50\u00a0EUR");
+    expect(moneyText(0.85, "EUR", "pcs")).toBe("0.85\u00a0EUR/piece");
+    expect(moneyText(null, "EUR")).toBe("—");
   });
 });

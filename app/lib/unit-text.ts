@@ -81,3 +81,20 @@ export function quantityText(
 export function perUnitWord(unit: string): string {
   return unitWords[unit]?.one ?? unit;
 }
+
+/**
+ * Money in a currency, to the cent (a costing carries 0.0001), per a unit when
+ * given: "1,234.50 EUR", "0.85 EUR/piece"; "—" when there is none.
+ */
+export function moneyText(
+  value: number | null,
+  currency: string,
+  per?: string,
+): string {
+  if (value === null) return "—";
+  return formatQuantity(
+    value,
+    per ? `${currency}/${perUnitWord(per)}` : currency,
+    2,
+  );
+}

@@ -6,7 +6,6 @@ import { DataTable } from "~/components/data-table";
 import {
   CostQueryForm,
   DesignCostFigures,
-  money,
   perMotorText,
 } from "~/components/design/cost-panel";
 import { DesignCostSplit } from "~/components/design/cost-split";
@@ -24,7 +23,7 @@ import { costingDay, loadDesignPage } from "~/designs/design-page.server";
 import { designParams } from "~/designs/design-params";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
-import { countText, quantityText } from "~/lib/unit-text";
+import { countText, moneyText, quantityText } from "~/lib/unit-text";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   await requireUser(request);
@@ -111,7 +110,11 @@ function bomColumns(currency: string, quantity: number) {
       header: "Unit price",
       meta: { numeric: true },
       cell: ({ row }) =>
-        money(row.original.line.unitPrice, currency, row.original.line.unit),
+        moneyText(
+          row.original.line.unitPrice,
+          currency,
+          row.original.line.unit,
+        ),
     }),
     bomColumn.display({
       id: "cost",
@@ -120,7 +123,7 @@ function bomColumns(currency: string, quantity: number) {
       cell: ({ row }) =>
         row.original.line.cost === null
           ? "no price"
-          : money(row.original.line.cost, currency),
+          : moneyText(row.original.line.cost, currency),
     }),
     bomColumn.display({
       id: "source",

@@ -7,7 +7,7 @@ import { BelowReorderMark } from "~/components/below-reorder-mark";
 import { DataTable } from "~/components/data-table";
 import { SortHeaderLink } from "~/components/sort-header-link";
 import { StockListFilter } from "~/components/stock/stock-list-filter";
-import { formatQuantity } from "~/lib/format";
+import { formatQuantity, formatAmount } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
 import { companyCurrency } from "~/purchasing/suppliers.server";
 import { listItems, type ItemSortKey } from "~/stock/items.server";
@@ -22,7 +22,6 @@ import {
   type StockListView,
 } from "~/stock/stock-list-view";
 import {
-  formatMoney,
   formatStockQuantity,
   itemKindLabel,
 } from "~/stock/stock-quantity-text";
@@ -141,7 +140,7 @@ function stockColumns(view: StockListView, currency: string) {
       header: sortHeader(`Value (${currency})`, "value"),
       cell: (info) => (
         <span className="whitespace-nowrap">
-          {formatMoney(info.getValue())}
+          {formatAmount(info.getValue())}
         </span>
       ),
       meta: { numeric: true },

@@ -17,11 +17,6 @@ export function formatSignedStockQuantity(value: number, unit: string): string {
   return `${sign}${formatStockQuantity(Math.abs(value), unit)}`;
 }
 
-/** Money in the company currency, to the cent: "1,234.50". */
-export function formatMoney(value: number): string {
-  return formatQuantity(value, "", 2);
-}
-
 /** Cost per unit of stock, to a hundredth of a cent: "14.2000 per kg", "0.8500 per piece". */
 export function formatUnitCost(value: number, unit: string): string {
   return `${formatQuantity(value, "", 4)} per ${perUnitWord(unit)}`;

@@ -1,10 +1,10 @@
+import { formatAmount } from "~/lib/format";
 /** The order's figures in a row: motors, status, planned cost per motor and what has been issued per motor. */
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
 import { buildOrderStatusLabels } from "~/build-orders/build-order-status";
 import { PriceBasisNote } from "~/components/design/price-basis-note";
 import { SummaryFigure } from "~/components/summary-figure";
 import { countText } from "~/lib/unit-text";
-import { formatMoney } from "~/stock/stock-quantity-text";
 
 export function BuildOrderSummary({
   order,
@@ -28,7 +28,7 @@ export function BuildOrderSummary({
         label="Planned cost per motor"
         value={
           <>
-            {formatMoney(order.costs.plannedPerMotor)} {order.currency}
+            {formatAmount(order.costs.plannedPerMotor)} {order.currency}
             <PriceBasisNote
               basis="stock-average"
               after=" when the order was made"
@@ -50,7 +50,7 @@ export function BuildOrderSummary({
         }
         value={
           anyIssued
-            ? `${formatMoney(order.costs.actualPerMotor)} ${order.currency}`
+            ? `${formatAmount(order.costs.actualPerMotor)} ${order.currency}`
             : "—"
         }
         emphasis={order.status === "complete"}

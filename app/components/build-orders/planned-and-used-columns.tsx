@@ -1,9 +1,7 @@
+import { formatAmount } from "~/lib/format";
 /** The columns of the order page's "Planned and used" table: per item, planned against issued quantity and cost. */
 import { createColumnHelper } from "@tanstack/react-table";
-import {
-  formatMoney,
-  formatSignedStockQuantity,
-} from "~/stock/stock-quantity-text";
+import { formatSignedStockQuantity } from "~/stock/stock-quantity-text";
 import {
   lineQuantityCell,
   type BuildOrderLine,
@@ -50,14 +48,14 @@ export function plannedAndUsedColumns(currency: string) {
         return cost === null ? (
           <span className="text-graphite-500">no cost yet</span>
         ) : (
-          formatMoney(cost)
+          formatAmount(cost)
         );
       },
       meta: { numeric: true },
     }),
     column.accessor("actualCost", {
       header: `Actual cost (${currency})`,
-      cell: (info) => formatMoney(info.getValue()),
+      cell: (info) => formatAmount(info.getValue()),
       meta: { numeric: true },
     }),
   ];

@@ -1,7 +1,8 @@
+import { formatAmount } from "~/lib/format";
 /** "Planned and used": planned against issued quantity and cost per item, with the totals. */
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
 import { DataTable } from "~/components/data-table";
-import { formatMoney } from "~/stock/stock-quantity-text";
+
 import { plannedAndUsedColumns } from "./planned-and-used-columns";
 
 export function PlannedAndUsedPanel({ order }: { order: BuildOrderDetails }) {
@@ -18,11 +19,11 @@ export function PlannedAndUsedPanel({ order }: { order: BuildOrderDetails }) {
       <p className="text-sm text-graphite-700">
         Total planned{" "}
         <strong>
-          {formatMoney(order.costs.plannedTotal)} {order.currency}
+          {formatAmount(order.costs.plannedTotal)} {order.currency}
         </strong>{" "}
         at the moving average cost of stock when the order was made, issued{" "}
         <strong>
-          {formatMoney(order.costs.actualTotal)} {order.currency}
+          {formatAmount(order.costs.actualTotal)} {order.currency}
         </strong>{" "}
         at the moving average cost of each issue.
       </p>

@@ -8,7 +8,7 @@ import type {
 import { ESTIMATED_TORQUE_PER_NM_LABEL } from "~/designs/design-costing";
 import { costBasisLabels, type CostQuery } from "~/designs/design-page";
 import { formatQuantity } from "~/lib/format";
-import { countText, perUnitWord, quantityText } from "~/lib/unit-text";
+import { countText, moneyText, quantityText } from "~/lib/unit-text";
 import { formatMass } from "~/reference/quantity-display";
 import { DataTable } from "~/components/data-table";
 import { costBasisText, PriceBasisNote } from "./price-basis-note";
@@ -27,16 +27,6 @@ export function perMotorText(line: CostLine): string {
     line.perMotorQuantity,
     line.unit,
     Number.isInteger(line.perMotorQuantity) ? 0 : 3,
-  );
-}
-
-/** Money in the company currency, to the cent (the costing carries 0.0001); per a unit: "EUR/piece". */
-export function money(value: number | null, currency: string, per?: string) {
-  if (value === null) return "—";
-  return formatQuantity(
-    value,
-    per ? `${currency}/${perUnitWord(per)}` : currency,
-    2,
   );
 }
 
@@ -104,7 +94,11 @@ export function DesignPriceTable({
         header: "Unit price",
         meta: { numeric: true },
         cell: ({ row }) =>
-          money(row.original.line.unitPrice, currency, row.original.line.unit),
+          moneyText(
+            row.original.line.unitPrice,
+            currency,
+            row.original.line.unit,
+          ),
       }),
       priceColumn.display({
         id: "cost",
@@ -114,7 +108,7 @@ export function DesignPriceTable({
           row.original.line.cost === null ? (
             <span className="font-medium text-caution">no price</span>
           ) : (
-            money(row.original.line.cost, currency)
+            moneyText(row.original.line.cost, currency)
           ),
       }),
       priceColumn.display({
@@ -186,7 +180,7 @@ export function DesignCostFigures({
     <div className="grid items-start gap-3 sm:grid-cols-2 xl:grid-cols-4">
       <Figure
         label="Cost per motor"
-        value={money(costing.costPerMotor, currency)}
+        value={moneyText(costing.costPerMotor, currency)}
       >
         {`for ${countText(costing.quantity, "motor")} `}
         <PriceBasisNote basis={costing.basis} />
@@ -198,7 +192,7 @@ export function DesignCostFigures({
       </Figure>
       <Figure
         label="Cost per N·m"
-        value={money(costing.costPerNm, currency, "N·m")}
+        value={moneyText(costing.costPerNm, currency, "N·m")}
       >
         {perNmTorqueText(costing.perNmTorque, torqueBasis)}
         {costing.costPerNm === null ? null : (

@@ -1,7 +1,7 @@
+import { moneyText } from "~/lib/unit-text";
 import type { DesignPageData } from "~/designs/design-page.server";
 import { formatQuantity } from "~/lib/format";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
-import { money } from "./cost-panel";
 import { costBasisText } from "./price-basis-note";
 
 /** A line's figures as last saved, beside its editor: a coil's copper and resistance, and the costs. */
@@ -42,11 +42,11 @@ export function SavedLineFigures({
   if (cost)
     rows.push([
       "Line cost per motor",
-      cost.cost === null ? "no price" : money(cost.cost, costing.currency),
+      cost.cost === null ? "no price" : moneyText(cost.cost, costing.currency),
     ]);
   rows.push([
     `Cost per motor, at the ${costBasisText(costing.basis)}`,
-    money(costing.costPerMotor, costing.currency),
+    moneyText(costing.costPerMotor, costing.currency),
   ]);
   return (
     <div className="rounded-md border border-rule bg-white/70 p-3">

@@ -6,7 +6,7 @@
  */
 import type { ColumnDef } from "@tanstack/react-table";
 import { DataTable } from "~/components/data-table";
-import { formatQuantity } from "~/lib/format";
+import { formatQuantity, formatPriceText } from "~/lib/format";
 import { moreLineErrorsText } from "~/price-lists/line-errors";
 import type { LineError } from "~/price-lists/parse-price-list";
 import type { PriceListRow } from "~/price-lists/price-list-rows";
@@ -24,15 +24,6 @@ function sizeOrGrade(row: PriceListRow): string {
     return row.standard === "AWG" ? `AWG ${row.size}` : `${row.size} mm`;
   if (row.kind === "magnet") return row.grade;
   return "—";
-}
-
-/** "14.2000" → "14.20": at least two places, the rest only where they count. */
-function money(decimal: string): string {
-  return Number(decimal).toLocaleString("en-GB", {
-    minimumFractionDigits: 2,
-    maximumFractionDigits: 4,
-    useGrouping: false,
-  });
 }
 
 function CatalogueItem({ row }: { row: PreviewRow }) {
@@ -69,8 +60,8 @@ const rowColumns: ColumnDef<PreviewRow, unknown>[] = [
     meta: { numeric: true },
     accessorFn: (row) =>
       row.price !== null
-        ? `${money(row.price)} ${row.currency}/${perUnitWord(row.unit)}`
-        : `adder ${money(row.adderPerKg ?? "0")} ${row.currency}/kg`,
+        ? `${formatPriceText(row.price)} ${row.currency}/${perUnitWord(row.unit)}`
+        : `adder ${formatPriceText(row.adderPerKg ?? "0")} ${row.currency}/kg`,
   },
   {
     id: "minQuantity",

@@ -1,7 +1,7 @@
+import { formatAmount } from "~/lib/format";
 /** The item's figures at a glance: on hand, reserved, available, reorder point, average cost, value. */
 import { SummaryFigure } from "~/components/summary-figure";
 import {
-  formatMoney,
   formatStockQuantity,
   formatUnitCost,
 } from "~/stock/stock-quantity-text";
@@ -48,7 +48,7 @@ export function ItemSummaryFigures({
         label="Average cost"
         value={formatUnitCost(item.averageCost, unit)}
       />
-      <SummaryFigure label="Value" value={formatMoney(item.value)} />
+      <SummaryFigure label="Value" value={formatAmount(item.value)} />
     </dl>
   );
 }
