@@ -12,7 +12,7 @@ import { costHistoryChange, costingMoneyText } from "~/insight/design-insight";
 import type { StockValueInsight } from "~/insight/stock-value.server";
 import { formatDay } from "~/lib/format";
 import { kindParts, palette, Swatch, type FillPart } from "./insight-patterns";
-import { InsightTrendChart, TrendSample } from "./insight-trend-chart";
+import { InsightTrendChart, TrendSample } from "./insight/insight-trend-chart";
 import { InsightValueBars } from "./insight-value-bars";
 import { countText } from "~/lib/unit-text";
 

@@ -2,7 +2,7 @@ import { Link } from "react-router";
 import type { Route } from "./+types/home";
 import { countOpenAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
-import { InsightDesigns } from "~/components/insight-designs";
+import { InsightDesigns } from "~/components/insight/insight-designs";
 import { StockHeadline } from "~/components/insight-stock";
 import { loadInsight } from "~/insight/insight-page.server";
 import { adminFigures } from "~/people/admin-figures.server";

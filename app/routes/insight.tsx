@@ -2,7 +2,7 @@ import { Suspense } from "react";
 import { Await, Link } from "react-router";
 import type { Route } from "./+types/insight";
 import { requireUser } from "~/auth/guard.server";
-import { InsightDesigns } from "~/components/insight-designs";
+import { InsightDesigns } from "~/components/insight/insight-designs";
 import {
   CostHistory,
   StockBreakdown,

@@ -27,7 +27,7 @@ import {
   PatternLegend,
   splitParts,
   usePatternPrefix,
-} from "./insight-patterns";
+} from "../insight-patterns";
 
 export interface CostChartRow {
   key: string;

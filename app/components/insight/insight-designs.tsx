@@ -20,9 +20,9 @@ import {
 import { ESTIMATED_TORQUE_PER_NM_LABEL } from "~/designs/design-costing";
 import { costBasisLabels } from "~/designs/design-page";
 import { formatDay, formatQuantity } from "~/lib/format";
-import { costBasisText, PriceBasisNote } from "./design/price-basis-note";
+import { costBasisText, PriceBasisNote } from "../design/price-basis-note";
 import { InsightCostChart } from "./insight-cost-chart";
-import { splitParts, Swatch } from "./insight-patterns";
+import { splitParts, Swatch } from "../insight-patterns";
 import { countText } from "~/lib/unit-text";
 
 export const whatIfFormId = "insight-what-if";

@@ -31,7 +31,7 @@ import {
   spreadLabels,
   type SeriesStyle,
 } from "~/pricing/price-history-chart";
-import { palette } from "./insight-patterns";
+import { palette } from "../insight-patterns";
 
 export interface TrendSeries {
   key: string;
