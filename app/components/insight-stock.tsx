@@ -12,7 +12,8 @@ import { costHistoryChange, costingMoneyText } from "~/insight/design-insight";
 import type { StockValueInsight } from "~/insight/stock-value.server";
 import { formatDay } from "~/lib/format";
 import { kindParts, palette, Swatch, type FillPart } from "./insight-patterns";
-import { InsightTrendChart, TrendSample } from "./insight/insight-trend-chart";
+import { InsightTrendChart } from "./insight/insight-trend-chart";
+import { TrendSample } from "./insight/trend-marker";
 import { InsightValueBars } from "./insight-value-bars";
 import { countText } from "~/lib/unit-text";
 
