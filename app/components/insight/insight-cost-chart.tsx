@@ -11,48 +11,27 @@ import { AxisBottom } from "@visx/axis";
 import { GridColumns } from "@visx/grid";
 import { Group } from "@visx/group";
 import { scaleBand, scaleLinear } from "@visx/scale";
-import { BarStackHorizontal } from "@visx/shape";
 import { useId } from "react";
-import {
-  splitKeys,
-  type SplitFigures,
-  type SplitKey,
-} from "~/insight/design-insight";
-import { estimatedTextWidth, widestText } from "~/insight/chart-labels";
 import { formatQuantity } from "~/lib/format";
 import {
-  fillOf,
   palette,
   PatternDefs,
   PatternLegend,
   splitParts,
   usePatternPrefix,
 } from "../insight-patterns";
-
-export interface CostChartRow {
-  key: string;
-  /** "Hub motor · rev 2" */
-  label: string;
-  costPerNm: number | null;
-  splitPerNm: SplitFigures | null;
-  complete: boolean;
-  /** Per N·m of the first-order torque estimate (no rated torque given). */
-  estimated?: boolean;
-}
-
-type StackDatum = Record<SplitKey, number> & { key: string };
-
-/** The chart's usual width; it grows only for a name longer than a whole row. */
-const usualWidth = 600;
-/** Each design's row: its whole name on a line of its own, its bar below it. */
-const nameHeight = 16;
-const barHeight = 20;
-const rowHeight = nameHeight + barHeight + 12;
-const marginTop = 4;
-const marginBottom = 44;
-/** Room for half of the first tick label ("0.00"), centred on the axis start. */
-const marginLeft = 18;
-const gap = 8;
+import { CostChartBars } from "./cost-chart-bars";
+import {
+  barHeight,
+  chartedRows,
+  costAxisLabel,
+  costChartFrame,
+  costChartSummary,
+  type CostChartRow,
+  nameHeight,
+  rowHeight,
+} from "./cost-chart-layout";
+import { CostChartRowText } from "./cost-chart-row-text";
 
 export function InsightCostChart({
   rows,
@@ -66,45 +45,9 @@ export function InsightCostChart({
 }) {
   const prefix = usePatternPrefix();
   const summaryId = useId();
-  const perNm = (value: number) => formatQuantity(value, `${currency}/N·m`, 2);
-  const charted = rows.filter(
-    (
-      row,
-    ): row is CostChartRow & { splitPerNm: SplitFigures; costPerNm: number } =>
-      row.splitPerNm !== null && row.costPerNm !== null,
-  );
-  const valueText = (row: CostChartRow) =>
-    row.costPerNm === null ? "no rated torque" : perNm(row.costPerNm);
-  const axisLabel = `${currency} per N·m, at the ${basis}`;
-  // Each total (and its note) at the end of its bar, in the right margin at the longest.
-  const margin = {
-    top: marginTop,
-    bottom: marginBottom,
-    left: marginLeft,
-    right: Math.ceil(
-      Math.max(
-        widestText(rows.map(valueText), 12, { bold: true }),
-        widestText(["incomplete: lines unpriced", "estimated torque"], 10),
-      ) + gap,
-    ),
-  };
-  // Names run across the whole row; a name longer than that widens the chart.
-  const width = Math.ceil(
-    Math.max(
-      usualWidth,
-      margin.left +
-        widestText(
-          rows.map((row) => row.label),
-          11,
-        ) +
-        gap,
-      estimatedTextWidth(axisLabel, 11) + margin.left + gap,
-    ),
-  );
-  const innerWidth = width - margin.left - margin.right;
-  const count = Math.max(rows.length, 1);
-  const innerHeight = rowHeight * count;
-  const height = margin.top + margin.bottom + innerHeight;
+  const charted = chartedRows(rows);
+  const { margin, width, innerWidth, count, innerHeight, height } =
+    costChartFrame(rows, currency, basis);
   const largest = Math.max(0, ...charted.map((row) => row.costPerNm));
   const xScale = scaleLinear<number>({
     domain: [0, largest > 0 ? largest : 1],
@@ -119,10 +62,6 @@ export function InsightCostChart({
     paddingOuter: 0,
   });
   const barTop = (key: string) => nameHeight + (yScale(key) ?? 0);
-  const data: StackDatum[] = charted.map((row) => ({
-    key: row.key,
-    ...row.splitPerNm,
-  }));
 
   return (
     <figure className="space-y-2">
@@ -145,88 +84,28 @@ export function InsightCostChart({
               strokeOpacity={0.14}
             />
             <Group top={nameHeight}>
-              <BarStackHorizontal<StackDatum, SplitKey>
-                data={data}
-                keys={[...splitKeys]}
-                y={(datum) => datum.key}
+              <CostChartBars
+                charted={charted}
                 xScale={xScale}
                 yScale={yScale}
-                color={(key) =>
-                  fillOf(
-                    prefix,
-                    splitParts.find((part) => part.key === key)!,
-                  )
-                }
-              >
-                {(stacks) =>
-                  stacks.map((stack) =>
-                    stack.bars.map((bar) =>
-                      bar.width > 0 ? (
-                        <rect
-                          key={`${stack.key}-${bar.bar.data.key}`}
-                          x={bar.x}
-                          y={bar.y}
-                          width={bar.width}
-                          height={bar.height}
-                          fill={bar.color}
-                          stroke={palette.sheet}
-                          strokeWidth={1}
-                        >
-                          <title>{`${splitParts.find((part) => part.key === stack.key)!.label}: ${perNm(bar.bar.data[stack.key])}`}</title>
-                        </rect>
-                      ) : null,
-                    ),
-                  )
-                }
-              </BarStackHorizontal>
+                prefix={prefix}
+                currency={currency}
+              />
             </Group>
-            {rows.map((row) => {
-              const y = barTop(row.key) + yScale.bandwidth() / 2;
-              const end =
-                row.costPerNm !== null && row.splitPerNm !== null
-                  ? xScale(row.costPerNm)
-                  : 0;
-              return (
-                <g key={row.key}>
-                  <text
-                    x={0}
-                    y={barTop(row.key) - 5}
-                    fontSize={11}
-                    fill={palette.graphite900}
-                  >
-                    {row.label}
-                  </text>
-                  <text
-                    x={end + 6}
-                    y={y + (row.complete && !row.estimated ? 4 : -1)}
-                    fontSize={12}
-                    fontWeight={600}
-                    fill={palette.graphite900}
-                  >
-                    {valueText(row)}
-                  </text>
-                  {row.costPerNm !== null && !row.complete ? (
-                    <text
-                      x={end + 6}
-                      y={y + 11}
-                      fontSize={10}
-                      fill={palette.caution}
-                    >
-                      incomplete: lines unpriced
-                    </text>
-                  ) : row.costPerNm !== null && row.estimated ? (
-                    <text
-                      x={end + 6}
-                      y={y + 11}
-                      fontSize={10}
-                      fill={palette.graphite700}
-                    >
-                      estimated torque
-                    </text>
-                  ) : null}
-                </g>
-              );
-            })}
+            {rows.map((row) => (
+              <CostChartRowText
+                key={row.key}
+                row={row}
+                currency={currency}
+                barTop={barTop(row.key)}
+                barMiddle={barTop(row.key) + yScale.bandwidth() / 2}
+                end={
+                  row.costPerNm !== null && row.splitPerNm !== null
+                    ? xScale(row.costPerNm)
+                    : 0
+                }
+              />
+            ))}
             <AxisBottom
               top={innerHeight}
               scale={xScale}
@@ -239,7 +118,7 @@ export function InsightCostChart({
                 fill: palette.graphite700,
                 textAnchor: "middle",
               }}
-              label={axisLabel}
+              label={costAxisLabel(currency, basis)}
               labelProps={{
                 fontSize: 11,
                 fill: palette.graphite700,
@@ -250,19 +129,7 @@ export function InsightCostChart({
         </svg>
       </div>
       <p id={summaryId} className="sr-only">
-        {charted.length === 0
-          ? "No design has a cost per N·m yet."
-          : charted
-              .map(
-                (row) =>
-                  `${row.label}: ${perNm(row.costPerNm)}, of which ${splitParts
-                    .map(
-                      (part) =>
-                        `${part.label.toLowerCase()} ${perNm(row.splitPerNm[part.key])}`,
-                    )
-                    .join(", ")}.`,
-              )
-              .join(" ")}
+        {costChartSummary(charted, currency, splitParts)}
       </p>
       <figcaption>
         <PatternLegend parts={splitParts} label="Parts of the cost" />
