@@ -1,18 +1,13 @@
-import {
-  getFormProps,
-  getInputProps,
-  useForm,
-  type FieldMetadata,
-} from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getFormProps } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-item-new";
 import { requireCapability } from "~/auth/guard.server";
-import { MagnetItemFields } from "~/components/magnet-item-fields";
-import { QuantityField } from "~/components/quantity-field";
-import { SelectField } from "~/components/select-field";
+import { ItemKindChoice } from "~/components/stock/item-kind-choice";
+import { NewItemKindFields } from "~/components/stock/new-item-kind-fields";
+import { ReorderingFields } from "~/components/stock/reordering-fields";
+import { useNewItemForm } from "~/components/stock/use-new-item-form";
 import { FormMessages, TextField } from "~/components/text-field";
-import { WireItemFields } from "~/components/wire-item-fields";
 import { itemKinds } from "~/db/tables/stock-enums";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { listMagnetGrades } from "~/reference/magnet-grades.server";
@@ -75,42 +70,13 @@ export const meta: Route.MetaFunction = () => [
   { title: "New item · Stock · Turnledger" },
 ];
 
-const kindChoices = [
-  { kind: "wire", label: "Magnet wire", detail: "kept in kg, on spools" },
-  { kind: "magnet", label: "Permanent magnet", detail: "kept in pieces" },
-  {
-    kind: "part",
-    label: "Other part",
-    detail: "bearings, shafts, laminations …",
-  },
-] as const;
-
-type Field = FieldMetadata<unknown>;
-
 export default function NewStockItem({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
   const { startKind, sizes, grades } = loaderData;
   const navigation = useNavigation();
-  const [form, fields] = useForm({
-    id: "new-item",
-    lastResult: actionData?.result,
-    defaultValue: {
-      kind: startKind,
-      conductor: "copper",
-      standard: "IEC",
-      shape: { kind: "block" },
-      unit: "pcs",
-      reorderPoint: "0",
-      reorderQuantity: "0",
-    },
-    constraint: getZodConstraint(newItemFormSchema),
-    shouldValidate: "onBlur",
-    shouldRevalidate: "onInput",
-    onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: newItemFormSchema }),
-  });
+  const [form, fields] = useNewItemForm(actionData?.result, startKind);
   const kind = fields.kind.value ?? startKind;
   const unit = unitOfNewItem(
     kind,
@@ -137,44 +103,7 @@ export default function NewStockItem({
 
       <Form method="post" {...getFormProps(form)} className="panel space-y-6">
         <FormMessages id={form.errorId} errors={form.errors} />
-
-        <fieldset
-          aria-describedby={
-            fields.kind.errors ? fields.kind.errorId : undefined
-          }
-        >
-          <legend className="field-label">What is it?</legend>
-          <div className="mt-1 grid gap-2 sm:grid-cols-3">
-            {kindChoices.map((choice) => {
-              const { key, ...radioProps } = getInputProps(fields.kind, {
-                type: "radio",
-                value: choice.kind,
-              });
-              return (
-                <label
-                  key={choice.kind}
-                  className="relative flex cursor-pointer flex-col rounded-md border border-graphite-300 bg-white px-3 py-2 has-checked:border-copper-500 has-checked:bg-copper-50 has-focus-visible:outline-2 has-focus-visible:outline-copper-500"
-                >
-                  <input
-                    key={key}
-                    {...radioProps}
-                    className="absolute inset-0 z-10 cursor-pointer opacity-0"
-                  />
-                  <span className="font-medium">{choice.label}</span>
-                  <span className="text-xs text-graphite-500">
-                    {choice.detail}
-                  </span>
-                </label>
-              );
-            })}
-          </div>
-          {fields.kind.errors ? (
-            <p id={fields.kind.errorId} className="field-error">
-              {fields.kind.errors.join(" ")}
-            </p>
-          ) : null}
-        </fieldset>
-
+        <ItemKindChoice field={fields.kind} />
         <div className="grid gap-4 sm:grid-cols-[14rem_1fr]">
           <TextField
             field={fields.sku}
@@ -184,62 +113,13 @@ export default function NewStockItem({
           />
           <TextField field={fields.name} label="Name" autoComplete="off" />
         </div>
-
-        {kind === "wire" ? (
-          <WireItemFields
-            fields={{
-              conductor: fields.conductor as Field,
-              standard: fields.standard as Field,
-              size: fields.size as Field,
-              insulation: fields.insulation as Field,
-              thermalClass: fields.thermalClass as Field,
-              enamel: fields.enamel as Field,
-            }}
-            sizes={sizes}
-          />
-        ) : kind === "magnet" ? (
-          <MagnetItemFields
-            fields={{
-              grade: fields.grade as Field,
-              shape: fields.shape as unknown as FieldMetadata<
-                Record<string, unknown> | undefined
-              >,
-              coating: fields.coating as Field,
-              magnetisation: fields.magnetisation as Field,
-            }}
-            grades={grades}
-          />
-        ) : (
-          <fieldset className="grid gap-4 sm:grid-cols-2">
-            <legend className="mb-2 text-sm font-semibold uppercase tracking-wide text-graphite-500">
-              Part
-            </legend>
-            <SelectField field={fields.unit as Field} label="Kept in">
-              <option value="pcs">pieces (pcs)</option>
-              <option value="m">metres (m)</option>
-              <option value="kg">kilograms (kg)</option>
-            </SelectField>
-          </fieldset>
-        )}
-
-        <fieldset className="grid gap-4 sm:grid-cols-2">
-          <legend className="mb-2 text-sm font-semibold uppercase tracking-wide text-graphite-500">
-            Reordering
-          </legend>
-          <QuantityField
-            field={fields.reorderPoint}
-            label="Reorder point"
-            unit={unit}
-            hint="Buyers hear of it when the available stock falls below; 0 for no alert"
-          />
-          <QuantityField
-            field={fields.reorderQuantity}
-            label="Reorder quantity"
-            unit={unit}
-            hint="How much to order at a time"
-          />
-        </fieldset>
-
+        <NewItemKindFields
+          kind={kind}
+          fields={fields}
+          sizes={sizes}
+          grades={grades}
+        />
+        <ReorderingFields fields={fields} unit={unit} />
         <div className="flex flex-wrap items-center gap-3 border-t border-rule pt-5">
           <button
             type="submit"
