@@ -9,3 +9,5 @@ export * from "./tables/build-orders";
 export * from "./tables/build-order-enums";
 export * from "./tables/alerts";
 export * from "./tables/alert-enums";
+export * from "./tables/purchase-orders";
+export * from "./tables/purchase-order-enums";

@@ -27,6 +27,10 @@ export const capabilityRoles = {
   hearLowStockAlerts: ["buyer"],
   /** Draft purchase requests from the open alerts. */
   draftPurchaseRequests: ["buyer"],
+  /** Create, edit, send, cancel and close purchase orders; turn the buying plan into orders. */
+  orderPurchases: ["buyer"],
+  /** Book deliveries against purchase orders. */
+  receivePurchases: ["storekeeper"],
   /** Create designs, edit draft revisions and start new revisions. */
   editDesigns: ["builder"],
   /** Release a design revision. */

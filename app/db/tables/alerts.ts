@@ -35,6 +35,8 @@ export const stockAlerts = mysqlTable(
     openedAt: datetime("opened_at", { mode: "date", fsp: 3 }).notNull(),
     closedAt: datetime("closed_at", { mode: "date", fsp: 3 }),
     availableAtClose: quantity("available_at_close"),
+    /** The sent purchase order that covers the shortfall when the alert opened (no e-mail then). */
+    coveredByOrderId: int("covered_by_order_id"),
     /** The item while the alert is open, null once closed: unique, so an item has one open alert. */
     openItemId: int("open_item_id").generatedAlwaysAs(
       sql`IF(closed_at IS NULL, item_id, NULL)`,

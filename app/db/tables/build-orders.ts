@@ -7,6 +7,7 @@ import { sql } from "drizzle-orm";
 import {
   bigint,
   check,
+  date,
   datetime,
   decimal,
   index,
@@ -38,6 +39,8 @@ export const buildOrders = mysqlTable(
     quantity: int("quantity").notNull(),
     status: mysqlEnum("status", buildOrderStatuses).notNull().default("draft"),
     note: varchar("note", { length: 500 }).notNull().default(""),
+    /** When building starts: the buying plan needs the order's stock by this day. */
+    plannedStart: date("planned_start", { mode: "string" }),
     userId: varchar("user_id", { length: 40 })
       .notNull()
       .references(() => users.id),

@@ -8,6 +8,7 @@ import {
   decimal,
   index,
   int,
+  mysqlEnum,
   mysqlTable,
   smallint,
   text,
@@ -16,6 +17,7 @@ import {
 } from "drizzle-orm/mysql-core";
 import { createdAt, users } from "./accounts";
 import { items } from "./stock";
+import { metalBaseFixings } from "./purchase-order-enums";
 
 export const suppliers = mysqlTable(
   "suppliers",
@@ -26,6 +28,25 @@ export const suppliers = mysqlTable(
     /** ISO 4217 code the supplier quotes in unless a price line says otherwise. */
     currency: varchar("currency", { length: 3 }).notNull(),
     leadTimeDays: smallint("lead_time_days"),
+    /** Where purchase orders are e-mailed; the general address when empty. */
+    orderEmail: varchar("order_email", { length: 254 }),
+    /** When the metal base of a wire price is fixed: on ordering or on delivery (both common practice). */
+    metalBaseFixedAt: mysqlEnum("metal_base_fixed_at", metalBaseFixings)
+      .notNull()
+      .default("order"),
+    /** How far past the ordered quantity a delivery may go, percent: wire by weight, and pieces (common practice, no source). */
+    wireTolerancePercent: decimal("wire_tolerance_percent", {
+      precision: 5,
+      scale: 2,
+    })
+      .notNull()
+      .default("10"),
+    pieceTolerancePercent: decimal("piece_tolerance_percent", {
+      precision: 5,
+      scale: 2,
+    })
+      .notNull()
+      .default("0"),
     notes: varchar("notes", { length: 1000 }),
     createdAt: createdAt(),
   },
@@ -102,6 +123,10 @@ export const priceLines = mysqlTable(
     conductor: varchar("conductor", { length: 20 }),
     minQuantity: decimal("min_quantity", { precision: 14, scale: 3 }).notNull(),
     validFrom: date("valid_from", { mode: "string" }).notNull(),
+    /** The supplier's lead time for this line, days; the supplier's own when null. */
+    leadTimeDays: smallint("lead_time_days"),
+    /** Sold only in whole packs or spools of this quantity (in the item's unit); null when any quantity. */
+    packQuantity: decimal("pack_quantity", { precision: 14, scale: 3 }),
     importId: int("import_id").references(() => priceImports.id),
     line: int("line"),
   },

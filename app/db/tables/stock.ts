@@ -65,6 +65,8 @@ export const items = mysqlTable(
     /** Kept balances for the whole item (all lots and locations). */
     onHand: quantity("on_hand").notNull().default("0"),
     reserved: quantity("reserved").notNull().default("0"),
+    /** Still to come on sent purchase orders (ordered − received, until received or closed). */
+    onOrder: quantity("on_order").notNull().default("0"),
     /** Moving average cost per unit, updated on receipts. */
     averageCost: unitMoney("average_cost").notNull().default("0"),
     /** Kept by the database from the columns above, so lists sort and filter on an index. */
@@ -111,6 +113,7 @@ export const items = mysqlTable(
     index("items_on_hand_idx").on(table.active, table.onHand),
     check("items_on_hand_not_negative", sql`${table.onHand} >= 0`),
     check("items_reserved_not_negative", sql`${table.reserved} >= 0`),
+    check("items_on_order_not_negative", sql`${table.onOrder} >= 0`),
   ],
 );
 
