@@ -6,6 +6,7 @@ import {
   mysqlEnum,
   mysqlTable,
   primaryKey,
+  longtext,
   text,
   uniqueIndex,
   varchar,
@@ -141,6 +142,23 @@ export const mailOutbox = mysqlTable(
     index("mail_outbox_created_idx").on(table.createdAt),
     index("mail_outbox_unsent_idx").on(table.sentAt, table.createdAt),
   ],
+);
+
+/** Files sent with an outbox message (a purchase order's PDF and CSV), kept with it. */
+export const mailAttachments = mysqlTable(
+  "mail_attachments",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    outboxId: int("outbox_id")
+      .notNull()
+      .references(() => mailOutbox.id),
+    fileName: varchar("file_name", { length: 200 }).notNull(),
+    contentType: varchar("content_type", { length: 100 }).notNull(),
+    /** The file's bytes, base64. */
+    contentBase64: longtext("content_base64").notNull(),
+    byteSize: int("byte_size").notNull(),
+  },
+  (table) => [index("mail_attachments_outbox_idx").on(table.outboxId)],
 );
 
 /**
