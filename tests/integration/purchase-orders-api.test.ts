@@ -173,6 +173,16 @@ async function createDraft(
   );
 }
 
+/** POST …/send, …/cancel or …/close as the buyer. */
+function step(orderId: number, name: string, body?: unknown) {
+  return sendJson(
+    "POST",
+    `/api/v1/purchase-orders/${orderId}/${name}`,
+    body,
+    buyer,
+  );
+}
+
 async function onOrder(itemId: number): Promise<number> {
   const [row] = await testDb()
     .select({ onOrder: items.onOrder })
@@ -384,15 +394,7 @@ describe("sending", () => {
     );
     const magnetBefore = await onOrder(magnet.id);
     const wireBefore = await onOrder(wire.id);
-    const sent = await json<OrderJson>(
-      await sendJson(
-        "POST",
-        `/api/v1/purchase-orders/${order.id}/send`,
-        undefined,
-        buyer,
-      ),
-      200,
-    );
+    const sent = await json<OrderJson>(await step(order.id, "send"), 200);
     expect(sent.status).toBe("sent");
     expect(sent.orderedOn).toBe(today);
     expect(sent.lines[0]!.expectedDate).toBe(addDays(today, 21));
@@ -455,12 +457,7 @@ describe("sending", () => {
 
     // Frozen: no second send, no edit, and nothing written by either refusal.
     const before = await writtenRows();
-    const again = await sendJson(
-      "POST",
-      `/api/v1/purchase-orders/${order.id}/send`,
-      undefined,
-      buyer,
-    );
+    const again = await step(order.id, "send");
     expect(again.status).toBe(409);
     const edit = await sendJson(
       "PATCH",
@@ -503,23 +500,10 @@ describe("cancelling and closing short", () => {
   it("cancelling a sent order takes its quantities off on_order", async () => {
     const before = await onOrder(magnet.id);
     const order = await createDraft([{ sku: magnet.sku, quantity: 30 }]);
-    await json(
-      await sendJson(
-        "POST",
-        `/api/v1/purchase-orders/${order.id}/send`,
-        undefined,
-        buyer,
-      ),
-      200,
-    );
+    await json(await step(order.id, "send"), 200);
     expect(await onOrder(magnet.id)).toBe(before + 30);
     const cancelled = await json<OrderJson>(
-      await sendJson(
-        "POST",
-        `/api/v1/purchase-orders/${order.id}/cancel`,
-        { reason: "Ordered twice" },
-        buyer,
-      ),
+      await step(order.id, "cancel", { reason: "Ordered twice" }),
       200,
     );
     expect(cancelled.status).toBe("cancelled");
@@ -530,15 +514,7 @@ describe("cancelling and closing short", () => {
   it("closing short takes off only what was still open", async () => {
     const before = await onOrder(magnet.id);
     const order = await createDraft([{ sku: magnet.sku, quantity: 100 }]);
-    await json(
-      await sendJson(
-        "POST",
-        `/api/v1/purchase-orders/${order.id}/send`,
-        undefined,
-        buyer,
-      ),
-      200,
-    );
+    await json(await step(order.id, "send"), 200);
     // 40 of 100 arrived (booked here as the receiving side does: received up, on_order down).
     const db = testDb();
     await db
@@ -555,23 +531,10 @@ describe("cancelling and closing short", () => {
       .where(eq(items.id, magnet.id));
     // A partly received order cannot be cancelled, and the refusal writes nothing.
     const rows = await writtenRows();
-    const cancel = await sendJson(
-      "POST",
-      `/api/v1/purchase-orders/${order.id}/cancel`,
-      {},
-      buyer,
-    );
+    const cancel = await step(order.id, "cancel", {});
     expect(cancel.status).toBe(409);
     expect(await writtenRows()).toEqual(rows);
-    const closed = await json<OrderJson>(
-      await sendJson(
-        "POST",
-        `/api/v1/purchase-orders/${order.id}/close`,
-        undefined,
-        buyer,
-      ),
-      200,
-    );
+    const closed = await json<OrderJson>(await step(order.id, "close"), 200);
     expect(closed.status).toBe("closed_short");
     expect(closed.lines[0]).toMatchObject({ received: 40, open: 60 });
     expect(closed.events.at(-1)!.kind).toBe("closed-short");
@@ -582,23 +545,10 @@ describe("cancelling and closing short", () => {
     const before = await onOrder(magnet.id);
     const order = await createDraft([{ sku: magnet.sku, quantity: 7 }]);
     const rows = await writtenRows();
-    const close = await sendJson(
-      "POST",
-      `/api/v1/purchase-orders/${order.id}/close`,
-      { reason: "x" },
-      buyer,
-    );
+    const close = await step(order.id, "close", { reason: "x" });
     expect(close.status).toBe(409);
     expect(await writtenRows()).toEqual(rows);
-    await json(
-      await sendJson(
-        "POST",
-        `/api/v1/purchase-orders/${order.id}/cancel`,
-        undefined,
-        buyer,
-      ),
-      200,
-    );
+    await json(await step(order.id, "cancel"), 200);
     expect(await onOrder(magnet.id)).toBe(before);
   });
 });
@@ -734,12 +684,7 @@ describe("refusals write nothing", () => {
       201,
     );
     const before = await writtenRows();
-    const response = await sendJson(
-      "POST",
-      `/api/v1/purchase-orders/${order.id}/send`,
-      undefined,
-      buyer,
-    );
+    const response = await step(order.id, "send");
     expect(response.status).toBe(422);
     expect(
       ((await response.json()) as { error: { message: string } }).error.message,
