@@ -2,6 +2,8 @@ import { parseWithZod } from "@conform-to/zod/v4";
 import { describe, expect, it } from "vitest";
 import {
   cancelFormSchema,
+  draftPatchFromForm,
+  type DraftForm,
   closeFormSchema,
   draftFormSchema,
   fromAlertFormSchema,
@@ -280,5 +282,130 @@ describe("the list's address", () => {
     expect(purchaseOrderListHref({ supplierId: 9 })).toBe(
       "/purchase-orders?supplier=9",
     );
+  });
+});
+
+describe("the draft's edit as a patch", () => {
+  const stored = {
+    currency: "EUR",
+    notes: "Gate 2",
+    lines: [
+      {
+        id: 1,
+        sku: "CU-050",
+        quantity: 25_000n,
+        requestedDate: null,
+        overridePrice: null,
+        overrideReason: null,
+      },
+      {
+        id: 2,
+        sku: "MAG-10",
+        quantity: 400_000n,
+        requestedDate: "2027-01-15",
+        overridePrice: 23_450n,
+        overrideReason: "Phone quote",
+      },
+      {
+        id: 3,
+        sku: "TAPE",
+        quantity: 5_000n,
+        requestedDate: null,
+        overridePrice: null,
+        overrideReason: null,
+      },
+    ],
+  };
+  const line = (
+    values: Partial<DraftForm["lines"][number]> & {
+      sku: string;
+      quantity: bigint;
+    },
+  ) => ({
+    id: undefined,
+    requestedDate: undefined,
+    unitPrice: undefined,
+    overrideReason: undefined,
+    ...values,
+  });
+
+  it("is empty when nothing changed", () => {
+    expect(
+      draftPatchFromForm(stored, {
+        intent: "save",
+        currency: "EUR",
+        notes: "Gate 2",
+        lines: [
+          line({ id: 1, sku: "CU-050", quantity: 25_000n }),
+          line({
+            id: 2,
+            sku: "MAG-10",
+            quantity: 400_000n,
+            requestedDate: "2027-01-15",
+            unitPrice: 23_450n,
+            overrideReason: "Phone quote",
+          }),
+          line({ id: 3, sku: "tape", quantity: 5_000n }),
+        ],
+      }),
+    ).toEqual({});
+  });
+
+  it("changes, adds and removes only what differs", () => {
+    expect(
+      draftPatchFromForm(stored, {
+        intent: "save",
+        currency: "USD",
+        notes: undefined,
+        lines: [
+          line({
+            id: 1,
+            sku: "CU-050",
+            quantity: 30_000n,
+            requestedDate: "2027-02-01",
+          }),
+          // The price emptied: back to the price list; the date emptied: cleared.
+          line({ id: 2, sku: "MAG-10", quantity: 400_000n }),
+          line({ sku: "SLOT-PAPER", quantity: 2_000n }),
+          // Line 3 left out: removed.
+        ],
+      }),
+    ).toEqual({
+      currency: "USD",
+      notes: "",
+      add: [
+        {
+          sku: "SLOT-PAPER",
+          quantity: 2_000n,
+          requestedDate: undefined,
+          unitPrice: undefined,
+          overrideReason: undefined,
+        },
+      ],
+      change: [
+        { id: 1, quantity: 30_000n, requestedDate: "2027-02-01" },
+        { id: 2, requestedDate: null, unitPrice: null },
+      ],
+      remove: [3],
+    });
+  });
+
+  it("replaces a line whose item changed and refuses a line of another order", () => {
+    const patch = draftPatchFromForm(stored, {
+      intent: "save",
+      currency: undefined,
+      notes: "Gate 2",
+      lines: [line({ id: 3, sku: "TAPE-WIDE", quantity: 5_000n })],
+    });
+    expect(patch.add?.map((added) => added.sku)).toEqual(["TAPE-WIDE"]);
+    expect(patch.remove).toEqual([1, 2, 3]);
+    expect(() =>
+      draftPatchFromForm(stored, {
+        intent: "save",
+        currency: undefined,
+        notes: undefined,
+        lines: [line({ id: 99, sku: "X", quantity: 1n })],
+      }),
+    ).toThrow(RangeError);
   });
 });

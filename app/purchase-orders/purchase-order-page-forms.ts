@@ -233,3 +233,84 @@ export function orderFormFieldOf(field: string | undefined): string {
   if (dotted) return `lines[${dotted[1]}].${dotted[2]}`;
   return field;
 }
+
+/** A draft's line as stored, for {@link draftPatchFromForm}. */
+export interface StoredDraftLine {
+  id: number;
+  sku: string;
+  /** Thousandths of the item's unit. */
+  quantity: bigint;
+  requestedDate: string | null;
+  /** Ten-thousandths: the buyer's own price, or null when the price list prices the line. */
+  overridePrice: bigint | null;
+  overrideReason: string | null;
+}
+
+/** What the draft's edit form changes, as the domain's patch takes it. */
+export interface DraftPatchFromForm {
+  currency?: string;
+  notes?: string;
+  add?: Omit<OrderLineInput, "id">[];
+  change?: {
+    id: number;
+    quantity?: bigint;
+    unitPrice?: bigint | null;
+    overrideReason?: string;
+    requestedDate?: string | null;
+  }[];
+  remove?: number[];
+}
+
+/**
+ * The draft's edit as a patch of only what differs from the stored order: a line with
+ * an id is changed where its fields differ (a price emptied goes back to the price list,
+ * a date emptied is cleared), a line without one is added, a stored line left out is
+ * removed. A line whose SKU was changed is removed and added anew (the item is the line).
+ * Throws RangeError for an id that is not one of the order's lines.
+ */
+export function draftPatchFromForm(
+  stored: { currency: string; notes: string; lines: StoredDraftLine[] },
+  form: DraftForm,
+): DraftPatchFromForm {
+  const byId = new Map(stored.lines.map((line) => [line.id, line]));
+  const add: NonNullable<DraftPatchFromForm["add"]> = [];
+  const change: NonNullable<DraftPatchFromForm["change"]> = [];
+  const kept = new Set<number>();
+  for (const { id, ...line } of form.lines) {
+    const before = id === undefined ? undefined : byId.get(id);
+    if (id !== undefined && !before)
+      throw new RangeError(`line ${id} is not on this order`);
+    if (!before || before.sku.toLowerCase() !== line.sku.toLowerCase()) {
+      add.push(line);
+      continue;
+    }
+    kept.add(before.id);
+    const changed: NonNullable<DraftPatchFromForm["change"]>[number] = {
+      id: before.id,
+    };
+    if (line.quantity !== before.quantity) changed.quantity = line.quantity;
+    if ((line.requestedDate ?? null) !== before.requestedDate)
+      changed.requestedDate = line.requestedDate ?? null;
+    if (
+      (line.unitPrice ?? null) !== before.overridePrice ||
+      (line.overrideReason ?? null) !== before.overrideReason
+    ) {
+      changed.unitPrice = line.unitPrice ?? null;
+      if (line.overrideReason) changed.overrideReason = line.overrideReason;
+    }
+    if (Object.keys(changed).length > 1) change.push(changed);
+  }
+  const remove = stored.lines
+    .filter((line) => !kept.has(line.id))
+    .map((line) => line.id);
+  const notes = form.notes ?? "";
+  return {
+    ...(form.currency && form.currency !== stored.currency
+      ? { currency: form.currency }
+      : {}),
+    ...(notes !== stored.notes ? { notes } : {}),
+    ...(add.length ? { add } : {}),
+    ...(change.length ? { change } : {}),
+    ...(remove.length ? { remove } : {}),
+  };
+}
