@@ -136,12 +136,19 @@ async function purchaseOrder(
     .select({
       supplier: suppliers.name,
       orderEmail: suppliers.orderEmail,
+      email: suppliers.email,
     })
     .from(purchaseOrders)
     .innerJoin(suppliers, eq(suppliers.id, purchaseOrders.supplierId))
     .where(eq(purchaseOrders.id, id))
     .limit(1);
-  return row ? { ...row, number: purchaseOrderNumber(id) } : null;
+  if (!row) return null;
+  return {
+    number: purchaseOrderNumber(id),
+    supplier: row.supplier,
+    // Orders go to the order address, else the supplier's general one.
+    orderEmail: row.orderEmail || row.email,
+  };
 }
 
 /** The subject of a note's message, or null when it no longer exists. */

@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import {
   cancelFormSchema,
   draftPatchFromForm,
+  draftRefusalField,
   type DraftForm,
   closeFormSchema,
   draftFormSchema,
@@ -347,7 +348,7 @@ describe("the draft's edit as a patch", () => {
           }),
           line({ id: 3, sku: "tape", quantity: 5_000n }),
         ],
-      }),
+      }).patch,
     ).toEqual({});
   });
 
@@ -371,27 +372,41 @@ describe("the draft's edit as a patch", () => {
         ],
       }),
     ).toEqual({
-      currency: "USD",
-      notes: "",
-      add: [
-        {
-          sku: "SLOT-PAPER",
-          quantity: 2_000n,
-          requestedDate: undefined,
-          unitPrice: undefined,
-          overrideReason: undefined,
-        },
-      ],
-      change: [
-        { id: 1, quantity: 30_000n, requestedDate: "2027-02-01" },
-        { id: 2, requestedDate: null, unitPrice: null },
-      ],
-      remove: [3],
+      positions: { add: [2], change: [0, 1] },
+      patch: {
+        currency: "USD",
+        notes: "",
+        add: [
+          {
+            sku: "SLOT-PAPER",
+            quantity: 2_000n,
+            requestedDate: undefined,
+            unitPrice: undefined,
+            overrideReason: undefined,
+          },
+        ],
+        change: [
+          { id: 1, quantity: 30_000n, requestedDate: "2027-02-01" },
+          { id: 2, requestedDate: null, unitPrice: null },
+        ],
+        remove: [3],
+      },
     });
   });
 
+  it("puts a refusal of an added or changed line beside its line on the form", () => {
+    const positions = { add: [2, 4], change: [0, 3] };
+    expect(draftRefusalField("add.1.sku", positions)).toBe("lines[4].sku");
+    expect(draftRefusalField("change[1].quantity", positions)).toBe(
+      "lines[3].quantity",
+    );
+    expect(draftRefusalField("add.7.sku", positions)).toBe("");
+    expect(draftRefusalField("currency", positions)).toBe("currency");
+    expect(draftRefusalField("supplier", positions)).toBe("");
+  });
+
   it("replaces a line whose item changed and refuses a line of another order", () => {
-    const patch = draftPatchFromForm(stored, {
+    const { patch } = draftPatchFromForm(stored, {
       intent: "save",
       currency: undefined,
       notes: "Gate 2",

@@ -271,17 +271,23 @@ export interface DraftPatchFromForm {
 export function draftPatchFromForm(
   stored: { currency: string; notes: string; lines: StoredDraftLine[] },
   form: DraftForm,
-): DraftPatchFromForm {
+): {
+  patch: DraftPatchFromForm;
+  /** The form's line (0, 1, 2 …) of each added and each changed line, in the patch's order. */
+  positions: { add: number[]; change: number[] };
+} {
   const byId = new Map(stored.lines.map((line) => [line.id, line]));
   const add: NonNullable<DraftPatchFromForm["add"]> = [];
   const change: NonNullable<DraftPatchFromForm["change"]> = [];
   const kept = new Set<number>();
-  for (const { id, ...line } of form.lines) {
+  const positions = { add: [] as number[], change: [] as number[] };
+  for (const [index, { id, ...line }] of form.lines.entries()) {
     const before = id === undefined ? undefined : byId.get(id);
     if (id !== undefined && !before)
       throw new RangeError(`line ${id} is not on this order`);
     if (!before || before.sku.toLowerCase() !== line.sku.toLowerCase()) {
       add.push(line);
+      positions.add.push(index);
       continue;
     }
     kept.add(before.id);
@@ -298,19 +304,44 @@ export function draftPatchFromForm(
       changed.unitPrice = line.unitPrice ?? null;
       if (line.overrideReason) changed.overrideReason = line.overrideReason;
     }
-    if (Object.keys(changed).length > 1) change.push(changed);
+    if (Object.keys(changed).length > 1) {
+      change.push(changed);
+      positions.change.push(index);
+    }
   }
   const remove = stored.lines
     .filter((line) => !kept.has(line.id))
     .map((line) => line.id);
   const notes = form.notes ?? "";
   return {
-    ...(form.currency && form.currency !== stored.currency
-      ? { currency: form.currency }
-      : {}),
-    ...(notes !== stored.notes ? { notes } : {}),
-    ...(add.length ? { add } : {}),
-    ...(change.length ? { change } : {}),
-    ...(remove.length ? { remove } : {}),
+    patch: {
+      ...(form.currency && form.currency !== stored.currency
+        ? { currency: form.currency }
+        : {}),
+      ...(notes !== stored.notes ? { notes } : {}),
+      ...(add.length ? { add } : {}),
+      ...(change.length ? { change } : {}),
+      ...(remove.length ? { remove } : {}),
+    },
+    positions,
   };
+}
+
+/**
+ * Where a refusal of the draft's patch shows on the edit form: "add.1.sku" names the
+ * second added line, "change.0.quantity" the first changed one, each found on the form by
+ * {@link draftPatchFromForm}'s positions; "currency" and "notes" are fields of their own;
+ * anything else is about the whole form ("").
+ */
+export function draftRefusalField(
+  field: string | undefined,
+  positions: { add: number[]; change: number[] } | undefined,
+): string {
+  if (!field) return "";
+  if (field === "currency" || field === "notes") return field;
+  const match = /^(add|change)[.[](\d+)]?\.(\w+)$/.exec(field);
+  const index = match
+    ? positions?.[match[1] as "add" | "change"][Number(match[2])]
+    : undefined;
+  return match && index !== undefined ? `lines[${index}].${match[3]}` : "";
 }

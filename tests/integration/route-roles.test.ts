@@ -25,6 +25,7 @@ import {
 import { buildOrderRouteRows } from "./route-roles.build-orders";
 import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
+import { purchaseOrderPageRows } from "./route-roles.purchase-order-pages";
 import { supplierRouteRows } from "./route-roles.suppliers";
 import {
   byCapability,
@@ -41,6 +42,7 @@ const table: Row[] = [
   ...buildOrderRouteRows,
   ...insightRouteRows,
   ...supplierRouteRows,
+  ...purchaseOrderPageRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",
