@@ -119,13 +119,14 @@ describe("purchase orders in the browser", () => {
 
     // Edit the draft: more bearings, and the magnets go.
     const edit = page.getByRole("form", { name: "Edit the draft" });
-    await edit.getByRole("group", { name: "Line 1" }).getByLabel("Quantity").fill("150");
+    await edit
+      .getByRole("group", { name: "Line 1" })
+      .getByLabel("Quantity")
+      .fill("150");
     await edit.getByRole("button", { name: "Remove line 2" }).click();
     await edit.getByRole("button", { name: "Save changes" }).click();
     await flash(page, `${number} saved.`).waitFor();
-    await expect
-      .poll(() => lines.getByRole("row").count())
-      .toBe(2);
+    await expect.poll(() => lines.getByRole("row").count()).toBe(2);
     expect(await lines.textContent()).toContain("150");
 
     // Send, after saying where it goes.
@@ -134,7 +135,10 @@ describe("purchase orders in the browser", () => {
       .getByText(/e-mails PO-\d{6} to orders@bearing-house\.example/)
       .waitFor();
     await page.getByRole("button", { name: `Yes, send ${number}` }).click();
-    await flash(page, `${number} sent to orders@bearing-house.example`).waitFor();
+    await flash(
+      page,
+      `${number} sent to orders@bearing-house.example`,
+    ).waitFor();
     await page.getByRole("heading", { level: 1 }).getByText("Sent").waitFor();
     expect(
       await page.getByRole("form", { name: "Edit the draft" }).count(),
@@ -152,9 +156,9 @@ describe("purchase orders in the browser", () => {
       [`${number}%`],
     );
     expect(
-      (attachments as { fileName: string }[]).map((row) =>
-        path.extname(row.fileName),
-      ).sort(),
+      (attachments as { fileName: string }[])
+        .map((row) => path.extname(row.fileName))
+        .sort(),
     ).toEqual([".csv", ".pdf"]);
 
     await page.getByRole("link", { name: "Printable order" }).click();
