@@ -400,7 +400,11 @@ describe("the draft's edit as a patch", () => {
     expect(draftRefusalField("change[1].quantity", positions)).toBe(
       "lines[3].quantity",
     );
+    expect(draftRefusalField("lines.0.unitPrice", positions)).toBe(
+      "lines[2].unitPrice",
+    );
     expect(draftRefusalField("add.7.sku", positions)).toBe("");
+    expect(draftRefusalField("lines", positions)).toBe("lines");
     expect(draftRefusalField("currency", positions)).toBe("currency");
     expect(draftRefusalField("supplier", positions)).toBe("");
   });

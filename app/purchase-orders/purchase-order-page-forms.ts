@@ -328,20 +328,23 @@ export function draftPatchFromForm(
 }
 
 /**
- * Where a refusal of the draft's patch shows on the edit form: "add.1.sku" names the
- * second added line, "change.0.quantity" the first changed one, each found on the form by
- * {@link draftPatchFromForm}'s positions; "currency" and "notes" are fields of their own;
- * anything else is about the whole form ("").
+ * Where a refusal of the draft's patch shows on the edit form: "add.1.sku" (and
+ * "lines.1.sku", as updateDraftOrder names the added lines by their place among the
+ * added) names the second added line, "change.0.quantity" the first changed one, each
+ * found on the form by {@link draftPatchFromForm}'s positions; "currency", "notes" and
+ * "lines" (the lines as a whole) are fields of their own; anything else is about the
+ * whole form ("").
  */
 export function draftRefusalField(
   field: string | undefined,
   positions: { add: number[]; change: number[] } | undefined,
 ): string {
   if (!field) return "";
-  if (field === "currency" || field === "notes") return field;
-  const match = /^(add|change)[.[](\d+)]?\.(\w+)$/.exec(field);
+  if (field === "currency" || field === "notes" || field === "lines")
+    return field;
+  const match = /^(add|change|lines)[.[](\d+)]?\.(\w+)$/.exec(field);
   const index = match
-    ? positions?.[match[1] as "add" | "change"][Number(match[2])]
+    ? positions?.[match[1] === "change" ? "change" : "add"][Number(match[2])]
     : undefined;
   return match && index !== undefined ? `lines[${index}].${match[3]}` : "";
 }
