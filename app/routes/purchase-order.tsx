@@ -12,7 +12,6 @@ import { orderLineColumns } from "~/components/purchase-orders/order-line-column
 import { OrderReceiptsPanel } from "~/components/purchase-orders/order-receipts-panel";
 import { SendOrderPanel } from "~/components/purchase-orders/send-order-panel";
 import { userCan } from "~/lib/capabilities";
-import { isDomainError } from "~/lib/domain-error";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { idFromText } from "~/lib/search-params";
 import { loadPurchaseOrder } from "~/purchase-orders/purchase-order-details.server";
