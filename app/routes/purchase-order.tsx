@@ -5,7 +5,7 @@ import type { Route } from "./+types/purchase-order";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { DraftEditForm } from "~/components/purchase-orders/draft-edit-form";
-import { EndOrderForm } from "~/components/purchase-orders/end-order-form";
+import { EndOrderPanel } from "~/components/purchase-orders/end-order-panel";
 import { OrderHeading } from "~/components/purchase-orders/order-heading";
 import { OrderHistoryPanel } from "~/components/purchase-orders/order-history-panel";
 import { orderLineColumns } from "~/components/purchase-orders/order-line-columns";
@@ -21,12 +21,7 @@ import {
   orderPageSchemas,
   type OrderPageIntent,
 } from "~/purchase-orders/purchase-order-page-forms";
-import {
-  canCancel,
-  canCloseShort,
-  canEdit,
-  canReceive,
-} from "~/purchase-orders/purchase-order-status";
+import { canEdit, canReceive } from "~/purchase-orders/purchase-order-status";
 
 async function orderOr404(value: string | undefined) {
   const id = idFromText(value);
@@ -95,6 +90,12 @@ export async function action({ request, params }: Route.ActionArgs) {
   return data<StepAnswer>({ intent, result }, { status: outcome.status });
 }
 
+/** A refused send, or a step the page does not know: said above the Send button. */
+function sendErrors(answer: StepAnswer | undefined) {
+  if (answer?.intent !== "send" && answer?.intent !== "") return undefined;
+  return Object.values(answer.result.error ?? {}).flatMap((each) => each ?? []);
+}
+
 export const meta: Route.MetaFunction = ({ data: loaderData }) => [
   {
     title: `${loaderData ? `${loaderData.order.number} ${loaderData.order.supplier.name}` : "Purchase order"} · Turnledger`,
@@ -110,8 +111,6 @@ export default function PurchaseOrder({
   const resultFor = (intent: OrderPageIntent) =>
     answer?.intent === intent ? answer.result : undefined;
   const editing = can.order && canEdit(order.status);
-  const ending =
-    can.order && (canCancel(order.status) || canCloseShort(order.status));
   return (
     <div className="space-y-6">
       <OrderHeading
@@ -136,28 +135,15 @@ export default function PurchaseOrder({
             <SendOrderPanel
               number={order.number}
               orderEmail={order.supplier.orderEmail || order.supplier.email}
-              errors={
-                answer?.intent === "send" || answer?.intent === ""
-                  ? Object.values(answer.result.error ?? {}).flat()
-                  : undefined
-              }
+              errors={sendErrors(answer)}
             />
           ) : null}
-          {ending ? (
-            <section
-              aria-labelledby="end-order-heading"
-              className="panel space-y-4"
-            >
-              <h2 id="end-order-heading" className="text-lg font-semibold">
-                End the order
-              </h2>
-              {canCancel(order.status) ? (
-                <EndOrderForm step="cancel" lastResult={resultFor("cancel")} />
-              ) : null}
-              {canCloseShort(order.status) ? (
-                <EndOrderForm step="close" lastResult={resultFor("close")} />
-              ) : null}
-            </section>
+          {can.order ? (
+            <EndOrderPanel
+              status={order.status}
+              cancelResult={resultFor("cancel")}
+              closeResult={resultFor("close")}
+            />
           ) : null}
           <OrderHistoryPanel events={order.events} />
         </div>
