@@ -66,6 +66,7 @@ export function DraftEditForm({
         form={form}
         lines={fields.lines}
         currency={fields.currency.value?.trim().toUpperCase() || order.currency}
+        supplier={order.supplier.name}
         knownItems={knownItems}
       />
       <button type="submit" className="button-primary" disabled={busy}>

@@ -78,6 +78,7 @@ export function NewOrderForm({
         form={form}
         lines={fields.lines}
         currency={currency || "price"}
+        supplier={supplier?.name}
         knownItems={{}}
       />
       <button type="submit" className="button-primary" disabled={busy}>

@@ -9,11 +9,13 @@ import { DesignItemPicker } from "~/components/design/item-picker";
 import { QuantityField } from "~/components/quantity-field";
 import { TextField } from "~/components/text-field";
 import type { OrderLineDraft } from "./order-lines-editor";
+import { useListPrice } from "./use-list-price";
 
 export function OrderLineFields({
   line,
   position,
   currency,
+  supplier,
   knownItem,
   removeButton,
 }: {
@@ -21,11 +23,18 @@ export function OrderLineFields({
   /** 1, 2, 3 … as the page lists the lines. */
   position: number;
   currency: string;
+  /** The supplier's name, once chosen: its list price for the line shows as a hint. */
+  supplier?: string;
   knownItem?: { sku: string; name: string; unit: string };
   removeButton: React.ReactNode;
 }) {
   const fields = line.getFieldset();
   const [unit, setUnit] = useState(knownItem?.unit);
+  const listPrice = useListPrice(
+    supplier,
+    unit ? (fields.sku.value ?? "") : "",
+    fields.quantity.value ?? "",
+  );
   const overriding = Boolean(
     fields.unitPrice.value ||
     fields.overrideReason.value ||
@@ -56,6 +65,11 @@ export function OrderLineFields({
           hint="Empty: ordered on + lead time."
         />
       </div>
+      {listPrice ? (
+        <p className="mt-2 text-xs text-graphite-700" aria-live="polite">
+          {listPrice}
+        </p>
+      ) : null}
       <details open={overriding} className="mt-3">
         <summary className="cursor-pointer text-sm font-medium text-copper-700">
           Price of your own

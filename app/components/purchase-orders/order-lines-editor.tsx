@@ -25,11 +25,14 @@ export function OrderLinesEditor({
   form,
   lines,
   currency,
+  supplier,
   knownItems,
 }: {
   form: FormMetadata<OrderFormShape, string[]>;
   lines: FieldMetadata<OrderLineDraft[], OrderFormShape, string[]>;
   currency: string;
+  /** The supplier's name, once chosen. */
+  supplier?: string;
   /** Items the lines had when the page was loaded, by SKU: their names and units show at once. */
   knownItems: Record<string, { sku: string; name: string; unit: string }>;
 }) {
@@ -48,6 +51,7 @@ export function OrderLinesEditor({
           line={line}
           position={index + 1}
           currency={currency}
+          supplier={supplier}
           knownItem={knownItems[line.getFieldset().sku.initialValue ?? ""]}
           removeButton={
             list.length > 1 ? (
