@@ -6,6 +6,7 @@
 import { useEffect, useState } from "react";
 import { typedNumber } from "~/lib/number-text";
 import { formatPriceText } from "~/lib/format";
+import { perUnitWord } from "~/lib/unit-text";
 
 interface PriceAnswer {
   unit: string;
@@ -23,14 +24,17 @@ export function useListPrice(
   sku: string,
   quantityText: string,
 ): string | null {
-  const [hint, setHint] = useState<string | null>(null);
   const quantity = typedNumber(quantityText) ?? 1;
+  const wanted = sku.trim();
+  const key =
+    supplier && wanted && quantity > 0
+      ? `${supplier}|${wanted}|${quantity}`
+      : "";
+  // The hint is kept with what it was read for, so an older answer never shows for a newer line.
+  const [answer, setAnswer] = useState({ key: "", text: "" });
+  const setHint = (text: string | null) => setAnswer({ key, text: text ?? "" });
   useEffect(() => {
-    const wanted = sku.trim();
-    if (!supplier || !wanted || quantity <= 0) {
-      setHint(null);
-      return;
-    }
+    if (!key) return;
     const controller = new AbortController();
     const timer = setTimeout(async () => {
       try {
@@ -49,7 +53,7 @@ export function useListPrice(
         );
         setHint(
           offer
-            ? `Price list: ${formatPriceText(String(offer.quotedUnitPrice))} ${offer.currency}/${body.unit} (break from ${offer.minQuantity})`
+            ? `Price list: ${formatPriceText(String(offer.quotedUnitPrice))} ${offer.currency}/${perUnitWord(body.unit)} (break from ${offer.minQuantity})`
             : refused
               ? `No list price: ${refused.reasons.join(" ")}`
               : "This supplier's price list does not have this item: give a price of your own.",
@@ -62,6 +66,8 @@ export function useListPrice(
       clearTimeout(timer);
       controller.abort();
     };
-  }, [supplier, sku, quantity]);
-  return hint;
+    // setHint changes with the key only.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [key]);
+  return key && answer.key === key && answer.text ? answer.text : null;
 }
