@@ -1,5 +1,6 @@
 import { parseWithZod } from "@conform-to/zod/v4";
 import { describe, expect, it } from "vitest";
+import type { z } from "zod";
 import {
   cancelFormSchema,
   draftPatchFromForm,
@@ -24,14 +25,18 @@ function formData(fields: Record<string, string>): FormData {
   return data;
 }
 
-function parse(
-  schema: Parameters<typeof parseWithZod>[1]["schema"],
+function parse<Schema extends z.ZodType>(
+  schema: Schema,
   fields: Record<string, string>,
 ) {
-  return parseWithZod(formData(fields), {
+  const submission = parseWithZod(formData(fields), {
     schema,
     disableAutoCoercion: true,
   });
+  // The messages by field name, whatever the outcome (none on success).
+  return submission as typeof submission & {
+    error?: Record<string, string[] | null> | null;
+  };
 }
 
 const emptyLine = (index: number) => ({

@@ -11,6 +11,7 @@ import { quantityFromNumber, unitCostFromNumber } from "~/lib/decimal-amounts";
 import { formNumber } from "~/lib/number-text";
 import { idFromText } from "~/lib/search-params";
 import { isoCurrency } from "~/purchasing/supplier-schemas";
+import type { DraftOrderPatch } from "./purchase-order-forms";
 
 /** Most lines one order takes on a page. */
 export const maxOrderLines = 200;
@@ -247,19 +248,7 @@ export interface StoredDraftLine {
 }
 
 /** What the draft's edit form changes, as the domain's patch takes it. */
-export interface DraftPatchFromForm {
-  currency?: string;
-  notes?: string;
-  add?: Omit<OrderLineInput, "id">[];
-  change?: {
-    id: number;
-    quantity?: bigint;
-    unitPrice?: bigint | null;
-    overrideReason?: string;
-    requestedDate?: string | null;
-  }[];
-  remove?: number[];
-}
+export type DraftPatchFromForm = DraftOrderPatch;
 
 /**
  * The draft's edit as a patch of only what differs from the stored order: a line with
@@ -291,20 +280,29 @@ export function draftPatchFromForm(
       continue;
     }
     kept.add(before.id);
+    // No reason given keeps the line's own (the domain's rule); a changed price brings its reason.
     const changed: NonNullable<DraftPatchFromForm["change"]>[number] = {
       id: before.id,
+      overrideReason: undefined,
     };
-    if (line.quantity !== before.quantity) changed.quantity = line.quantity;
-    if ((line.requestedDate ?? null) !== before.requestedDate)
+    let differs = false;
+    if (line.quantity !== before.quantity) {
+      changed.quantity = line.quantity;
+      differs = true;
+    }
+    if ((line.requestedDate ?? null) !== before.requestedDate) {
       changed.requestedDate = line.requestedDate ?? null;
+      differs = true;
+    }
     if (
       (line.unitPrice ?? null) !== before.overridePrice ||
       (line.overrideReason ?? null) !== before.overrideReason
     ) {
       changed.unitPrice = line.unitPrice ?? null;
-      if (line.overrideReason) changed.overrideReason = line.overrideReason;
+      changed.overrideReason = line.overrideReason;
+      differs = true;
     }
-    if (Object.keys(changed).length > 1) {
+    if (differs) {
       change.push(changed);
       positions.change.push(index);
     }

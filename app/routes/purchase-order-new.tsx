@@ -79,7 +79,7 @@ export default function PurchaseOrderNew({
   actionData,
 }: Route.ComponentProps) {
   const alertErrors = actionData?.fromAlert
-    ? Object.values(actionData.result.error ?? {}).flat()
+    ? Object.values(actionData.result.error ?? {}).flatMap((each) => each ?? [])
     : undefined;
   return (
     <div className="mx-auto max-w-5xl space-y-6">

@@ -4,22 +4,22 @@ import { maxOrderLines } from "~/purchase-orders/purchase-order-page-forms";
 import { OrderLineFields } from "./order-line-fields";
 
 /** A line as its fields hold it (text), before the schema reads it. */
-export interface OrderLineDraft {
+export type OrderLineDraft = {
   id?: string;
   sku?: string;
   quantity?: string;
   requestedDate?: string;
   unitPrice?: string;
   overrideReason?: string;
-}
+};
 
-export interface OrderFormShape {
+export type OrderFormShape = {
   intent?: string;
   supplierId?: string;
   currency?: string;
   notes?: string;
   lines: OrderLineDraft[];
-}
+};
 
 export function OrderLinesEditor({
   form,

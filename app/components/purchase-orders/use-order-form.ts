@@ -5,14 +5,14 @@ import { useNavigation } from "react-router";
 import type { z } from "zod";
 import type { OrderFormShape } from "./order-lines-editor";
 
-export function useOrderForm(
+export function useOrderForm<Schema extends z.ZodType>(
   id: string,
-  schema: z.ZodType,
+  schema: Schema,
   defaultValue: OrderFormShape,
   lastResult: SubmissionResult<string[]> | undefined,
 ) {
   const navigation = useNavigation();
-  const [form, fields] = useForm<OrderFormShape>({
+  const [form, fields] = useForm<OrderFormShape, z.output<Schema>>({
     id,
     lastResult: navigation.state === "idle" ? lastResult : null,
     defaultValue,
