@@ -85,17 +85,17 @@ describe("purchase orders in the browser", () => {
     await form.getByText("Choose the supplier.").waitFor();
     await form.getByText("Give the item's SKU.").waitFor();
 
-    await form.getByLabel("Supplier").selectOption(fixtures.name);
+    await form.getByLabel("Supplier", { exact: true }).selectOption(fixtures.name);
     await form
       .getByText("Orders go to orders@bearing-house.example.")
       .waitFor();
     await form.getByLabel("Notes for the supplier").fill("Deliver to gate 2.");
     const first = form.getByRole("group", { name: "Line 1" });
-    await first.getByLabel("Item").fill(fixtures.part.sku);
+    await first.getByRole("combobox", { name: "Item (SKU)" }).fill(fixtures.part.sku);
     await first.getByLabel("Quantity").fill("120");
     await form.getByRole("button", { name: "Add a line" }).click();
     const second = form.getByRole("group", { name: "Line 2" });
-    await second.getByLabel("Item").fill(fixtures.magnet.sku);
+    await second.getByRole("combobox", { name: "Item (SKU)" }).fill(fixtures.magnet.sku);
     await second.getByLabel("Quantity").fill("40");
     await second.getByText("Price of your own").click();
     await second.getByLabel("Unit price").fill("2,10");
@@ -152,7 +152,7 @@ describe("purchase orders in the browser", () => {
     const [attachments] = await testDatabase().query(
       `SELECT a.file_name AS fileName FROM mail_attachments a
        JOIN mail_outbox o ON o.id = a.outbox_id
-       WHERE o.recipient = 'orders@bearing-house.example' AND a.file_name LIKE ?`,
+       WHERE o.to_address = 'orders@bearing-house.example' AND a.file_name LIKE ?`,
       [`${number}%`],
     );
     expect(
