@@ -85,24 +85,39 @@ describe("purchase orders in the browser", () => {
     await form.getByText("Choose the supplier.").waitFor();
     await form.getByText("Give the item's SKU.").waitFor();
 
-    await form.getByLabel("Supplier", { exact: true }).selectOption(fixtures.name);
+    await form
+      .getByLabel("Supplier", { exact: true })
+      .selectOption(fixtures.name);
     await form
       .getByText("Orders go to orders@bearing-house.example.")
       .waitFor();
     await form.getByLabel("Notes for the supplier").fill("Deliver to gate 2.");
     const first = form.getByRole("group", { name: "Line 1" });
-    await first.getByRole("combobox", { name: "Item (SKU)" }).fill(fixtures.part.sku);
+    await first
+      .getByRole("combobox", { name: "Item (SKU)" })
+      .fill(fixtures.part.sku);
     await first.getByLabel("Quantity").fill("120");
     await form.getByRole("button", { name: "Add a line" }).click();
     const second = form.getByRole("group", { name: "Line 2" });
-    await second.getByRole("combobox", { name: "Item (SKU)" }).fill(fixtures.magnet.sku);
+    await second
+      .getByRole("combobox", { name: "Item (SKU)" })
+      .fill(fixtures.magnet.sku);
     await second.getByLabel("Quantity").fill("40");
-    await second.getByText("Price of your own").click();
+    await second.getByText("Price of your own", { exact: true }).click();
     await second.getByLabel("Unit price").fill("2,10");
     // A price of one's own needs its reason.
     await form.getByRole("button", { name: "Save draft order" }).click();
     await second.getByText(/^Say why this price replaces/).waitFor();
     await second.getByLabel("Why this price").fill("Quoted by phone");
+    // The supplier's list price shows beside its line, and says when there is none.
+    await first
+      .getByText("Price list: 1.50 EUR/piece (break from 1)")
+      .waitFor();
+    await second
+      .getByText("This supplier's price list does not have this item", {
+        exact: false,
+      })
+      .waitFor();
     await shoot(page, "new");
     await form.getByRole("button", { name: "Save draft order" }).click();
 
@@ -115,6 +130,10 @@ describe("purchase orders in the browser", () => {
     const lines = page.getByRole("table", { name: /Lines of/ });
     await expect.poll(() => lines.textContent()).toContain("BH-6001");
     expect(await lines.textContent()).toContain("Quoted by phone");
+    await page
+      .getByRole("form", { name: "Edit the draft" })
+      .getByText("Price list: 1.50 EUR/piece (break from 1)")
+      .waitFor();
     await shoot(page, "detail-draft");
 
     // Edit the draft: more bearings, and the magnets go.

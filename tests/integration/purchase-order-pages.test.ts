@@ -5,7 +5,13 @@
  * order.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { followRedirect, get, postForm, signInAs } from "../support/app-client";
+import {
+  followRedirect,
+  get,
+  postForm,
+  sendJson,
+  signInAs,
+} from "../support/app-client";
 import {
   createMagnetItem,
   createPartItem,
@@ -13,6 +19,7 @@ import {
 import { createSupplier } from "../support/price-list-fixtures";
 import {
   closeTestDatabase,
+  createLocation,
   testDatabase,
   uniqueCode,
 } from "../support/test-database";
@@ -289,6 +296,77 @@ describe("the purchase-order pages", () => {
     expect(sheet).toContain(`Purchase order PO-${String(id).padStart(6, "0")}`);
     // 120 pieces × 1.50 EUR = 180.00 EUR (by hand).
     expect(sheet).toContain("180.00");
+  });
+
+  it("drafts an order from an open low-stock alert through the alerts page's Order button", async () => {
+    const { name, supplierId } = await setting();
+    // A part with reorder point 10 and reorder quantity 20, quoted by the supplier.
+    const sku = uniqueCode("LOW");
+    const made = await sendJson(
+      "POST",
+      "/api/v1/items",
+      {
+        kind: "part",
+        sku,
+        name: "Shaft circlip",
+        unit: "pcs",
+        reorderPoint: 10,
+        reorderQuantity: 20,
+      },
+      buyer,
+    );
+    expect(made.status, await made.clone().text()).toBe(201);
+    const itemId = (
+      await rows<{ id: number }>("SELECT id FROM items WHERE sku = ?", [sku])
+    )[0]!.id;
+    await testDatabase().query(
+      `INSERT INTO price_lines (supplier_id, item_id, supplier_sku, currency, unit_price, min_quantity, valid_from, line)
+       VALUES (?, ?, 'CL-10', 'EUR', 0.2, 1, '2026-01-01', 1)`,
+      [supplierId, itemId],
+    );
+    const location = await createLocation(uniqueCode("PO"));
+    for (const body of [
+      { type: "receipt", quantity: 15, unitCost: 0.2 },
+      { type: "issue", quantity: 6 },
+    ]) {
+      const moved = await sendJson(
+        "POST",
+        "/api/v1/stock-movements",
+        { location, sku, ...body },
+        storekeeper,
+      );
+      expect(moved.status, await moved.clone().text()).toBe(201);
+    }
+    const [alert] = await rows<{ id: number }>(
+      "SELECT id FROM stock_alerts WHERE item_id = ? AND closed_at IS NULL",
+      [itemId],
+    );
+    expect(alert).toBeDefined();
+
+    // Buyers see the button on the open alert; builders do not.
+    expect(await (await get("/alerts", buyer)).text()).toContain(
+      `aria-label="Order ${sku}"`,
+    );
+    expect(await (await get("/alerts", builder)).text()).not.toContain(
+      `aria-label="Order ${sku}"`,
+    );
+
+    const response = await postForm(
+      "/purchase-orders/new",
+      { intent: "from-alert", alertId: String(alert!.id) },
+      buyer,
+    );
+    expect(response.status).toBe(302);
+    const page = await (await followRedirect(response, buyer)).text();
+    expect(page).toContain(`drafted for ${name} from the low-stock alert`);
+    // Available 15 − 6 = 9, 1 below the reorder point of 10: the reorder quantity, 20, is larger (by hand).
+    expect(
+      await rows<{ quantity: string; status: string }>(
+        `SELECT l.quantity, o.status FROM purchase_order_lines l
+         JOIN purchase_orders o ON o.id = l.order_id WHERE l.item_id = ?`,
+        [itemId],
+      ),
+    ).toEqual([{ quantity: "20.000", status: "draft" }]);
   });
 
   it("refuses an order from an alert that is not there, writing nothing", async () => {

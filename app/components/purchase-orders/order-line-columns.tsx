@@ -1,4 +1,4 @@
-/** The columns of an order's lines: item, supplier's SKU, quantity, price and its source, total, dates, received and open. */
+/** The columns of an order's lines: item (ours and the supplier's SKU), quantity, price and its source, total, expected and wanted dates, received and open. */
 import { createColumnHelper } from "@tanstack/react-table";
 import { Link } from "react-router";
 import type { PurchaseOrderView } from "~/purchase-orders/purchase-order-details.server";
@@ -28,12 +28,11 @@ export function orderLineColumns(currency: string, showReceipts: boolean) {
             {row.original.sku}
           </Link>
           <div className="text-xs text-graphite-500">{row.original.name}</div>
+          <div className="text-xs text-graphite-500">
+            Supplier&apos;s SKU: {row.original.supplierSku || "—"}
+          </div>
         </div>
       ),
-    }),
-    column.accessor("supplierSku", {
-      header: "Supplier's SKU",
-      cell: (info) => info.getValue() || "—",
     }),
     column.accessor("quantity", {
       header: "Quantity",
@@ -60,13 +59,6 @@ export function orderLineColumns(currency: string, showReceipts: boolean) {
         </span>
       ),
     }),
-    column.accessor("requestedDate", {
-      header: "Wanted by",
-      cell: (info) => {
-        const day = info.getValue();
-        return day ? formatDay(day) : "—";
-      },
-    }),
     column.accessor("expectedDate", {
       header: "Expected",
       cell: ({ row }) => (
@@ -74,8 +66,8 @@ export function orderLineColumns(currency: string, showReceipts: boolean) {
           {formatDay(row.original.expectedDate)}
           <span className="block text-xs text-graphite-500">
             {row.original.requestedDate
-              ? "as wanted"
-              : `lead time ${row.original.leadTimeDays} d`}
+              ? `wanted by ${formatDay(row.original.requestedDate)}`
+              : `ordered on + ${row.original.leadTimeDays} d lead time`}
           </span>
         </span>
       ),

@@ -8,6 +8,7 @@ import { useState } from "react";
 import { DesignItemPicker } from "~/components/design/item-picker";
 import { QuantityField } from "~/components/quantity-field";
 import { TextField } from "~/components/text-field";
+import { perUnitWord } from "~/lib/unit-text";
 import type { OrderLineDraft } from "./order-lines-editor";
 import { useListPrice } from "./use-list-price";
 
@@ -78,7 +79,7 @@ export function OrderLineFields({
           <QuantityField
             field={fields.unitPrice}
             label="Unit price"
-            unit={`${currency}${unit ? `/${unit}` : ""}`}
+            unit={`${currency}${unit ? `/${perUnitWord(unit)}` : ""}`}
             hint="Leave empty to take the supplier's price list."
           />
           <TextField

@@ -22,9 +22,9 @@ export function SendOrderPanel({
       <FormMessages errors={errors} />
       {orderEmail ? (
         <p className="text-sm text-graphite-700">
-          Sending e-mails {number} to <strong>{orderEmail}</strong> with the
-          order as a PDF and a CSV file. The lines are then fixed: quantities
-          count as stock on order.
+          Send e-mails {number} to <strong>{orderEmail}</strong> with the order
+          attached as a PDF and a CSV file. Its lines are then fixed and their
+          quantities count as stock on order.
         </p>
       ) : (
         <p className="text-sm text-caution">
