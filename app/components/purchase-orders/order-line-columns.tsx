@@ -20,7 +20,7 @@ export function orderLineColumns(currency: string, showReceipts: boolean) {
     column.accessor("sku", {
       header: "Item",
       cell: ({ row }) => (
-        <div>
+        <div className="min-w-40">
           <Link
             to={`/stock/items/${encodeURIComponent(row.original.sku)}`}
             className="font-medium text-copper-700 underline-offset-2 hover:underline"
