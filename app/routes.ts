@@ -38,6 +38,13 @@ export default [
       ),
     ]),
     route("insight", "routes/insight.tsx"),
+    ...prefix("purchase-orders", [
+      index("routes/purchase-orders.tsx"),
+      route("new", "routes/purchase-order-new.tsx"),
+      // Fixed paths ("late") before ":orderId".
+      route(":orderId", "routes/purchase-order.tsx"),
+      route(":orderId/print", "routes/purchase-order-print.tsx"),
+    ]),
     route("alerts", "routes/alerts.tsx"),
     route("alerts/purchase-request.csv", "routes/alerts-purchase-request.ts"),
     ...prefix("build-orders", [

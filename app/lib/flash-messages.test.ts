@@ -174,6 +174,22 @@ describe("flashText", () => {
     );
   });
 
+  it("says where a purchase order was sent, or only that it was", () => {
+    const order = {
+      number: "PO-000123",
+      supplier: "Spool mill",
+      orderEmail: "orders@mill.example",
+    };
+    expect(flashText("purchase-order-sent", order)).toBe(
+      "PO-000123 sent to orders@mill.example with the order as PDF and CSV. Its lines can no longer change.",
+    );
+    expect(
+      flashText("purchase-order-sent", { ...order, orderEmail: null }),
+    ).toBe(
+      "PO-000123 sent with the order as PDF and CSV. Its lines can no longer change.",
+    );
+  });
+
   it("has a sentence for every code, whatever its subject", () => {
     const order = { reference: "BO-0001", quantity: 2, held: [], short: [] };
     const subjects: Record<FlashSubjectKind, unknown> = {
@@ -183,6 +199,11 @@ describe("flashText", () => {
       movement: receipt,
       order,
       orderIssue: { ...receipt, reference: "BO-0001", issued: 1, required: 2 },
+      purchaseOrder: {
+        number: "PO-000001",
+        supplier: "Spool mill",
+        orderEmail: "orders@mill.example",
+      },
     };
     for (const code of Object.keys(flashMessageSubjects) as FlashCode[]) {
       const subject = subjects[flashMessageSubjects[code]];

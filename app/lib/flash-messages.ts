@@ -55,6 +55,12 @@ export interface FlashSubjects {
     issued: number;
     required: number;
   };
+  /** A purchase order: its number, its supplier and where an order is e-mailed. */
+  purchaseOrder: {
+    number: string;
+    supplier: string;
+    orderEmail: string | null;
+  };
 }
 
 export type FlashSubjectKind = keyof FlashSubjects;
@@ -81,6 +87,12 @@ export const flashMessageSubjects = {
   "order-quantity-changed": "order",
   "order-quantity-changed-released": "order",
   "password-changed": "none",
+  "purchase-order-created": "purchaseOrder",
+  "purchase-order-from-alert": "purchaseOrder",
+  "purchase-order-saved": "purchaseOrder",
+  "purchase-order-sent": "purchaseOrder",
+  "purchase-order-cancelled": "purchaseOrder",
+  "purchase-order-closed": "purchaseOrder",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -98,6 +110,7 @@ const idKinds = {
   movement: "number",
   order: "number",
   orderIssue: "number",
+  purchaseOrder: "number",
 } as const satisfies Record<FlashSubjectKind, "none" | "number" | "key">;
 
 type IdOf<Kind extends FlashSubjectKind> = {
@@ -174,6 +187,16 @@ const texts: {
     `${order.reference} is now for ${countText(order.quantity, "motor")}. What it held was released: reserve again.`,
   "password-changed": () =>
     "Password changed. You stay signed in here; every other session has ended and your API tokens are revoked.",
+  "purchase-order-created": (order) =>
+    `${order.number} drafted for ${order.supplier}. Check the lines, then send it.`,
+  "purchase-order-from-alert": (order) =>
+    `${order.number} drafted for ${order.supplier} from the low-stock alert. Check the quantity and price, then send it.`,
+  "purchase-order-saved": (order) => `${order.number} saved.`,
+  "purchase-order-sent": (order) =>
+    `${order.number} sent${order.orderEmail ? ` to ${order.orderEmail}` : ""} with the order as PDF and CSV. Its lines can no longer change.`,
+  "purchase-order-cancelled": (order) => `${order.number} cancelled.`,
+  "purchase-order-closed": (order) =>
+    `${order.number} closed short: what was still open is no longer on order.`,
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

@@ -14,10 +14,12 @@ import {
   locations,
   lots,
   magnetGrades,
+  purchaseOrders,
   stockMovements,
   suppliers,
 } from "~/db/schema";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
+import { purchaseOrderNumber } from "~/purchase-orders/purchase-order-status";
 import type {
   FlashNote,
   FlashSubjects,
@@ -126,6 +128,29 @@ async function orderIssue(
   };
 }
 
+/** A purchase order as its messages name it. */
+async function purchaseOrder(
+  id: number,
+): Promise<FlashSubjects["purchaseOrder"] | null> {
+  const [row] = await db
+    .select({
+      supplier: suppliers.name,
+      orderEmail: suppliers.orderEmail,
+      email: suppliers.email,
+    })
+    .from(purchaseOrders)
+    .innerJoin(suppliers, eq(suppliers.id, purchaseOrders.supplierId))
+    .where(eq(purchaseOrders.id, id))
+    .limit(1);
+  if (!row) return null;
+  return {
+    number: purchaseOrderNumber(id),
+    supplier: row.supplier,
+    // Orders go to the order address, else the supplier's general one.
+    orderEmail: row.orderEmail || row.email,
+  };
+}
+
 /** The subject of a note's message, or null when it no longer exists. */
 export async function flashSubjectOf(
   note: FlashNote,
@@ -144,5 +169,7 @@ export async function flashSubjectOf(
       return order(note.id as number);
     case "orderIssue":
       return orderIssue(note.id as number);
+    case "purchaseOrder":
+      return purchaseOrder(note.id as number);
   }
 }

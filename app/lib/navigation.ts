@@ -19,6 +19,7 @@ export const navigationItems: readonly NavigationItem[] = [
   { to: "/suppliers", label: "Suppliers" },
   { to: "/best-prices", label: "Best prices" },
   { to: "/prices", label: "Metal base & rates" },
+  { to: "/purchase-orders", label: "Purchase orders" },
   { to: "/alerts", label: "Alerts" },
   { to: "/insight", label: "Cost insight" },
   { to: "/designs", label: "Designs" },

@@ -8,7 +8,7 @@ import {
 const currencyHint = "Give the currency as a 3-letter ISO 4217 code, e.g. EUR.";
 
 /** A 3-letter code; € and £ are read as EUR and GBP, $ and other shared signs are asked for as codes. */
-const isoCurrency = z
+export const isoCurrency = z
   .string({ error: currencyHint })
   .overwrite(currencyCodeFromText)
   .superRefine((code, context) => {

@@ -5,6 +5,7 @@ import { purchaseRequestsBySupplier } from "~/alerts/purchase-requests.server";
 import { alertsPageSize, listAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import { OrderFromAlertButton } from "~/components/purchase-orders/order-from-alert-button";
 import { formatDateTime } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
@@ -34,6 +35,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     : [];
   return {
     status,
+    canOrder: userCan(user, "orderPurchases"),
     alerts,
     page,
     pageCount,
@@ -133,8 +135,18 @@ const columns = [
   }),
 ];
 
+/** Buyers make a draft purchase order from each open alert. */
+const orderColumn = column.display({
+  id: "order",
+  header: () => <span className="sr-only">Order</span>,
+  cell: ({ row }) =>
+    row.original.status === "open" ? (
+      <OrderFromAlertButton alertId={row.original.id} sku={row.original.sku} />
+    ) : null,
+});
+
 export default function Alerts({ loaderData }: Route.ComponentProps) {
-  const { status, alerts, page, pageCount, total, canBuy, requests } =
+  const { status, alerts, page, pageCount, total, canBuy, canOrder, requests } =
     loaderData;
   return (
     <div>
@@ -198,7 +210,7 @@ export default function Alerts({ loaderData }: Route.ComponentProps) {
       ) : null}
       <DataTable
         caption={`${total} ${status === "all" ? "" : `${status} `}alert${total === 1 ? "" : "s"}, newest first`}
-        columns={columns}
+        columns={canOrder ? [...columns, orderColumn] : columns}
         rows={alerts}
         page={page}
         pageCount={pageCount}

@@ -1,7 +1,7 @@
 import { getInputProps, type FieldMetadata } from "@conform-to/react";
 import { useEffect, useRef, useState } from "react";
 
-interface ItemChoice {
+export interface ItemChoice {
   sku: string;
   name: string;
   sizeOrGrade: string;
@@ -19,6 +19,7 @@ export function DesignItemPicker({
   kind,
   hint,
   knownItem,
+  onPick,
 }: {
   field: FieldMetadata<string | undefined>;
   label: string;
@@ -26,6 +27,8 @@ export function DesignItemPicker({
   hint?: string;
   /** The item the line has now, so its name shows before any search. */
   knownItem?: { sku: string; name: string };
+  /** Told the item whose SKU the field now holds exactly, or undefined (e.g. to show its unit beside a quantity). */
+  onPick?: (item: ItemChoice | undefined) => void;
 }) {
   const [choices, setChoices] = useState<ItemChoice[]>([]);
   const [searched, setSearched] = useState(false);
@@ -39,7 +42,15 @@ export function DesignItemPicker({
     [],
   );
 
+  const pickFrom = (text: string, list: ItemChoice[]) =>
+    onPick?.(
+      list.find(
+        (choice) => choice.sku.toLowerCase() === text.trim().toLowerCase(),
+      ),
+    );
+
   function search(text: string) {
+    pickFrom(text, choices);
     clearTimeout(timer.current);
     timer.current = setTimeout(async () => {
       request.current?.abort();
@@ -57,6 +68,7 @@ export function DesignItemPicker({
         const body = (await response.json()) as { items: ItemChoice[] };
         setChoices(body.items);
         setSearched(true);
+        pickFrom(text, body.items);
       } catch {
         // A newer search replaced this one, or the network failed: keep the last choices.
       }
