@@ -102,6 +102,10 @@ export default [
     route("build-orders", "routes/api.v1.build-orders.ts"),
     route("build-orders/:orderId", "routes/api.v1.build-order.ts"),
     route("build-orders/:orderId/:step", "routes/api.v1.build-order-step.ts"),
+    route(
+      "purchase-orders/:orderId/receipts",
+      "routes/api.v1.purchase-order-receipts.ts",
+    ),
     // Any other path under /api/v1: a JSON 404 for every method.
     route("*", "routes/api.v1.not-found.ts"),
   ]),
