@@ -25,6 +25,7 @@ import {
 import { buildOrderRouteRows } from "./route-roles.build-orders";
 import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
+import { receivingRouteRows } from "./route-roles.receiving";
 import { supplierRouteRows } from "./route-roles.suppliers";
 import {
   byCapability,
@@ -41,6 +42,7 @@ const table: Row[] = [
   ...buildOrderRouteRows,
   ...insightRouteRows,
   ...supplierRouteRows,
+  ...receivingRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",
