@@ -22,6 +22,7 @@ import {
   purchaseOrders,
   purchaseReceiptLines,
   purchaseReceipts,
+  settings,
   suppliers,
   wireItems,
 } from "~/db/schema";
@@ -37,7 +38,7 @@ import {
 } from "~/lib/decimal-amounts";
 import { DomainError, isDomainError } from "~/lib/domain-error";
 import { formatRateText, parseMoney, parseRate } from "~/pricing/money";
-import { companyCurrency } from "~/purchasing/suppliers.server";
+import { defaultCompanyCurrency } from "~/purchasing/suppliers.server";
 import {
   movementsCommitted,
   recordMovementIn,
@@ -205,8 +206,18 @@ async function entryQuantity(
   return net;
 }
 
+/**
+ * The bases and rates that price the order on the day, read through the transaction: a
+ * second connection taken while the order row is locked could wait for a pool that the
+ * receipts queued behind this one hold.
+ */
 async function pricingOn(tx: Transaction, orderCurrency: string, day: string) {
-  const company = await companyCurrency();
+  const [setting] = await tx
+    .select({ value: settings.value })
+    .from(settings)
+    .where(eq(settings.key, "company_currency"))
+    .limit(1);
+  const company = setting?.value ?? defaultCompanyCurrency;
   const [baseRows, rateRows] = await Promise.all([
     tx
       .select({
