@@ -50,6 +50,7 @@ export default [
       route("items/new", "routes/stock-item-new.tsx"),
       route("items/:sku", "routes/stock-item.tsx"),
       route("record", "routes/stock-record.tsx"),
+      route("receive", "routes/stock-receive.tsx"),
       route("journal", "routes/stock-journal.tsx"),
     ]),
   ]),

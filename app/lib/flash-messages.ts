@@ -55,6 +55,12 @@ export interface FlashSubjects {
     issued: number;
     required: number;
   };
+  /** A delivery received against a purchase order: the order, how many spools or lots, its status now. */
+  purchaseReceipt: {
+    reference: string;
+    entries: number;
+    statusLabel: string;
+  };
 }
 
 export type FlashSubjectKind = keyof FlashSubjects;
@@ -81,6 +87,7 @@ export const flashMessageSubjects = {
   "order-quantity-changed": "order",
   "order-quantity-changed-released": "order",
   "password-changed": "none",
+  "purchase-received": "purchaseReceipt",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -98,6 +105,7 @@ const idKinds = {
   movement: "number",
   order: "number",
   orderIssue: "number",
+  purchaseReceipt: "number",
 } as const satisfies Record<FlashSubjectKind, "none" | "number" | "key">;
 
 type IdOf<Kind extends FlashSubjectKind> = {
@@ -174,6 +182,8 @@ const texts: {
     `${order.reference} is now for ${countText(order.quantity, "motor")}. What it held was released: reserve again.`,
   "password-changed": () =>
     "Password changed. You stay signed in here; every other session has ended and your API tokens are revoked.",
+  "purchase-received": (receipt) =>
+    `Received ${countText(receipt.entries, { one: "spool or lot", other: "spools or lots" })} against ${receipt.reference}. The order is now ${receipt.statusLabel.toLowerCase()}.`,
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

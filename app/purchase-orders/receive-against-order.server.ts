@@ -11,7 +11,7 @@
  * The low-stock after-commit work runs once the transaction has committed.
  */
 import { and, asc, eq, inArray, lte, sql } from "drizzle-orm";
-import type { Transaction } from "~/db/client.server";
+import type { Database, Transaction } from "~/db/client.server";
 import {
   currencyRates,
   items,
@@ -211,7 +211,11 @@ async function entryQuantity(
  * second connection taken while the order row is locked could wait for a pool that the
  * receipts queued behind this one hold.
  */
-async function pricingOn(tx: Transaction, orderCurrency: string, day: string) {
+export async function readReceiptPricing(
+  tx: Transaction | Database,
+  orderCurrency: string,
+  day: string,
+) {
   const [setting] = await tx
     .select({ value: settings.value })
     .from(settings)
@@ -346,7 +350,7 @@ async function receiveIn(
       throw new DomainError(409, refusal, `lines.${first.index}.quantity`);
   }
 
-  const pricing = await pricingOn(tx, order.currency, receivedOn);
+  const pricing = await readReceiptPricing(tx, order.currency, receivedOn);
   const costs = new Map<
     number,
     { unitPrice: bigint; unitCost: bigint; rate: bigint | null }
