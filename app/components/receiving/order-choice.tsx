@@ -35,6 +35,7 @@ export function OrderChoice({
             Order number
           </label>
           <input
+            key={typed}
             id="order-number"
             name="order"
             defaultValue={typed}

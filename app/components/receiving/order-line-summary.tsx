@@ -24,7 +24,11 @@ export function OrderLineSummary({
     ["Expected", formatDay(line.expectedDate)],
     [
       "Tolerance",
-      `${formatQuantity(line.tolerancePercent, "%", 0)} · up to ${amount(line.mayStillTake)} more`,
+      `${formatQuantity(
+        line.tolerancePercent,
+        "%",
+        Number.isInteger(line.tolerancePercent) ? 0 : 2,
+      )} · at most ${amount(line.mayStillTake)} more`,
     ],
     [
       "Unit cost",
@@ -37,7 +41,7 @@ export function OrderLineSummary({
     <div className="space-y-2">
       <h3 className="text-base font-semibold">
         Line {line.lineNumber} · {line.sku}{" "}
-        <span className="font-normal text-graphite-600">{line.name}</span>
+        <span className="font-normal text-graphite-500">{line.name}</span>
       </h3>
       <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-6">
         {figures.map(([label, value]) => (

@@ -43,8 +43,8 @@ export function SpoolEntryFields({
     autoComplete: "off",
   };
   return (
-    <fieldset className="grid gap-3 rounded-md border border-graphite-200 p-3 sm:grid-cols-4">
-      <legend className="px-1 text-sm text-graphite-600">
+    <fieldset className="grid gap-3 rounded-md border border-graphite-300 p-3 sm:grid-cols-4">
+      <legend className="px-1 text-sm text-graphite-500">
         {isWire ? "Spool" : "Lot"} {position}
       </legend>
       <input type="hidden" name={name("lineId")} value={lineId} />
