@@ -57,6 +57,7 @@ export default [
       route("items/new", "routes/stock-item-new.tsx"),
       route("items/:sku", "routes/stock-item.tsx"),
       route("record", "routes/stock-record.tsx"),
+      route("receive", "routes/stock-receive.tsx"),
       route("journal", "routes/stock-journal.tsx"),
     ]),
   ]),
@@ -122,6 +123,10 @@ export default [
     route(
       "purchase-orders/:orderId/close",
       "routes/api.v1.purchase-order-close.ts",
+    ),
+    route(
+      "purchase-orders/:orderId/receipts",
+      "routes/api.v1.purchase-order-receipts.ts",
     ),
     // Any other path under /api/v1: a JSON 404 for every method.
     route("*", "routes/api.v1.not-found.ts"),

@@ -2,7 +2,8 @@
  * A request the domain refuses, in any folder (the stock ledger, designs, suppliers, …):
  * 400 (bad input), 404 (unknown thing), 409 (not enough stock, conflicts, the wrong status)
  * or 422 (a well-formed request naming something that cannot be used: an unknown SKU in a
- * purchase order's lines, a supplier without an order address). API routes
+ * purchase order's lines, a supplier without an order address, receiving against a draft
+ * order). API routes
  * answer it as JSON through `answerDomainError` (`app/lib/api-errors.server.ts`).
  */
 export class DomainError extends Error {

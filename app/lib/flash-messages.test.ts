@@ -190,6 +190,27 @@ describe("flashText", () => {
     );
   });
 
+  it("tells a receipt against an order with its spools and the order's status", () => {
+    expect(
+      flashText("purchase-received", {
+        reference: "PO-000123",
+        entries: 2,
+        statusLabel: "Partly received",
+      }),
+    ).toBe(
+      `Received 2${nbsp}spools or lots against PO-000123. The order is now partly received.`,
+    );
+    expect(
+      flashText("purchase-received", {
+        reference: "PO-000123",
+        entries: 1,
+        statusLabel: "Received",
+      }),
+    ).toBe(
+      `Received 1${nbsp}spool or lot against PO-000123. The order is now received.`,
+    );
+  });
+
   it("has a sentence for every code, whatever its subject", () => {
     const order = { reference: "BO-0001", quantity: 2, held: [], short: [] };
     const subjects: Record<FlashSubjectKind, unknown> = {
@@ -203,6 +224,11 @@ describe("flashText", () => {
         number: "PO-000001",
         supplier: "Spool mill",
         orderEmail: "orders@mill.example",
+      },
+      purchaseReceipt: {
+        reference: "PO-000001",
+        entries: 2,
+        statusLabel: "Partly received",
       },
     };
     for (const code of Object.keys(flashMessageSubjects) as FlashCode[]) {

@@ -61,6 +61,12 @@ export interface FlashSubjects {
     supplier: string;
     orderEmail: string | null;
   };
+  /** A delivery received against a purchase order: the order, how many spools or lots, its status now. */
+  purchaseReceipt: {
+    reference: string;
+    entries: number;
+    statusLabel: string;
+  };
 }
 
 export type FlashSubjectKind = keyof FlashSubjects;
@@ -93,6 +99,7 @@ export const flashMessageSubjects = {
   "purchase-order-sent": "purchaseOrder",
   "purchase-order-cancelled": "purchaseOrder",
   "purchase-order-closed": "purchaseOrder",
+  "purchase-received": "purchaseReceipt",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -111,6 +118,7 @@ const idKinds = {
   order: "number",
   orderIssue: "number",
   purchaseOrder: "number",
+  purchaseReceipt: "number",
 } as const satisfies Record<FlashSubjectKind, "none" | "number" | "key">;
 
 type IdOf<Kind extends FlashSubjectKind> = {
@@ -197,6 +205,8 @@ const texts: {
   "purchase-order-cancelled": (order) => `${order.number} cancelled.`,
   "purchase-order-closed": (order) =>
     `${order.number} closed short: what was still open is no longer on order.`,
+  "purchase-received": (receipt) =>
+    `Received ${countText(receipt.entries, { one: "spool or lot", other: "spools or lots" })} against ${receipt.reference}. The order is now ${receipt.statusLabel.toLowerCase()}.`,
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

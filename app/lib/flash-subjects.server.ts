@@ -3,7 +3,7 @@
  * note carries: the supplier's name, the movement recorded, the build order.
  * Null when there is no such thing (the message is then not shown).
  */
-import { and, eq, ne } from "drizzle-orm";
+import { and, count, eq, ne } from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
 import { findBuildOrder } from "~/build-orders/build-order-details.server";
 import { db } from "~/db/client.server";
@@ -15,11 +15,16 @@ import {
   lots,
   magnetGrades,
   purchaseOrders,
+  purchaseReceiptLines,
+  purchaseReceipts,
   stockMovements,
   suppliers,
 } from "~/db/schema";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
-import { purchaseOrderNumber } from "~/purchase-orders/purchase-order-status";
+import {
+  purchaseOrderNumber,
+  purchaseOrderStatusLabels,
+} from "~/purchase-orders/purchase-order-status";
 import type {
   FlashNote,
   FlashSubjects,
@@ -151,6 +156,32 @@ async function purchaseOrder(
   };
 }
 
+/** A receipt against a purchase order: its order, how many spools or lots, the order's status now. */
+async function purchaseReceipt(
+  receiptId: number,
+): Promise<FlashSubjects["purchaseReceipt"] | null> {
+  const [row] = await db
+    .select({
+      orderId: purchaseOrders.id,
+      status: purchaseOrders.status,
+      entries: count(purchaseReceiptLines.id),
+    })
+    .from(purchaseReceipts)
+    .innerJoin(purchaseOrders, eq(purchaseOrders.id, purchaseReceipts.orderId))
+    .leftJoin(
+      purchaseReceiptLines,
+      eq(purchaseReceiptLines.receiptId, purchaseReceipts.id),
+    )
+    .where(eq(purchaseReceipts.id, receiptId))
+    .groupBy(purchaseOrders.id, purchaseOrders.status);
+  if (!row) return null;
+  return {
+    reference: purchaseOrderNumber(row.orderId),
+    entries: row.entries,
+    statusLabel: purchaseOrderStatusLabels[row.status],
+  };
+}
+
 /** The subject of a note's message, or null when it no longer exists. */
 export async function flashSubjectOf(
   note: FlashNote,
@@ -171,5 +202,7 @@ export async function flashSubjectOf(
       return orderIssue(note.id as number);
     case "purchaseOrder":
       return purchaseOrder(note.id as number);
+    case "purchaseReceipt":
+      return purchaseReceipt(note.id as number);
   }
 }

@@ -7,19 +7,30 @@ import {
 } from "~/lib/api.server";
 import { answerBuildOrderError } from "~/build-orders/build-order-api.server";
 import { issueMovementToBuildOrder } from "~/build-orders/build-order-issues.server";
+import { purchaseOrderNumber } from "~/purchase-orders/purchase-order-status";
 import { movementJournalQuerySchema } from "~/stock/movement-journal-query";
 import { listMovements } from "~/stock/movement-journal.server";
 import { movementRequestSchema } from "~/stock/movement-request";
 import { answerDomainError } from "~/lib/api-errors.server";
 import { recordMovement } from "~/stock/stock-movements.server";
 
-/** GET /api/v1/stock-movements?type=&sku=&user=&from=&to=&page=&pageSize= → the journal, newest first. */
+/**
+ * GET /api/v1/stock-movements?type=&sku=&user=&from=&to=&page=&pageSize= → the journal, newest first.
+ * A receipt booked against a purchase order carries its number (`purchaseOrder: "PO-000123"`,
+ * `purchaseOrderId`); every other movement null.
+ */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
   const query = readSearchParams(request, movementJournalQuerySchema);
   const { hasMore, movements } = await listMovements(query);
   return Response.json({
-    movements,
+    movements: movements.map((movement) => ({
+      ...movement,
+      purchaseOrder:
+        movement.purchaseOrderId === null
+          ? null
+          : purchaseOrderNumber(movement.purchaseOrderId),
+    })),
     page: query.page,
     pageSize: query.pageSize,
     hasMore,

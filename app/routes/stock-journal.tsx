@@ -3,6 +3,10 @@ import { Form, Link, useSearchParams } from "react-router";
 import type { Route } from "./+types/stock-journal";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import {
+  ReceiptOrderLink,
+  referenceBesides,
+} from "~/components/stock/receipt-order-link";
 import { movementTypes } from "~/db/tables/stock-enums";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import {
@@ -87,7 +91,7 @@ const columns = [
     cell: ({ row }) => {
       const movement = row.original;
       const parts = [
-        movement.reference,
+        referenceBesides(movement.reference, movement.purchaseOrderId),
         movement.grossKg !== null
           ? `weighed ${formatQuantity(movement.grossKg, "kg", 3)} gross`
           : null,
@@ -99,8 +103,22 @@ const columns = [
           : null,
         movement.note,
       ].filter(Boolean);
+      const order = (
+        <ReceiptOrderLink
+          type={movement.type}
+          purchaseOrderId={movement.purchaseOrderId}
+        />
+      );
       return (
-        <span className="text-graphite-700">{parts.join(" · ") || "—"}</span>
+        <span className="text-graphite-700">
+          {movement.type === "receipt" ? (
+            <>
+              {order}
+              {parts.length ? " · " : ""}
+            </>
+          ) : null}
+          {parts.join(" · ") || (movement.type === "receipt" ? "" : "—")}
+        </span>
       );
     },
   }),

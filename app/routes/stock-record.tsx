@@ -1,5 +1,5 @@
 import { parseWithZod } from "@conform-to/zod/v4";
-import { data } from "react-router";
+import { data, Link } from "react-router";
 import type { Route } from "./+types/stock-record";
 import { requireCapability } from "~/auth/guard.server";
 import { listOrdersToIssueItem } from "~/build-orders/build-order-issue-choices.server";
@@ -9,6 +9,7 @@ import { useFlash } from "~/components/flash-message";
 import { ItemSkuSearch } from "~/components/stock/item-sku-search";
 import { MovementTypeNav } from "~/components/stock/movement-type-nav";
 import { RecordMovementForm } from "~/components/stock/record-movement-form";
+import { userCan } from "~/lib/capabilities";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { companyCurrency } from "~/purchasing/suppliers.server";
 import { findItemBySku, listLocations } from "~/stock/items.server";
@@ -23,7 +24,7 @@ import { usualLocationOf } from "~/stock/usual-location.server";
 import { wireMetresPerKg } from "~/stock/wire-length.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireCapability(request, "recordStock");
+  const user = await requireCapability(request, "recordStock");
   const url = new URL(request.url);
   const type = chosenMovementType(url.searchParams.get("type"));
   const sku = url.searchParams.get("sku")?.trim() ?? "";
@@ -46,6 +47,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     usualLocation,
     currency,
     orders,
+    canReceiveOrders: userCan(user, "receivePurchases"),
   };
 }
 
@@ -118,6 +120,19 @@ export default function StockRecord({
       <h1 className="text-2xl font-semibold">Record movement</h1>
       <MovementTypeNav type={type} sku={sku} />
       <p className="text-graphite-700">{movementHelp[type]}</p>
+      {type === "receipt" && loaderData.canReceiveOrders ? (
+        <p className="rounded-md border border-copper-300 bg-copper-50/40 px-4 py-3">
+          A delivery for a purchase order?{" "}
+          <Link
+            to="/stock/receive"
+            className="font-medium text-copper-700 underline-offset-2 hover:underline"
+          >
+            Receive against an order
+          </Link>{" "}
+          — its unit cost comes from the order. Below: a receipt without an
+          order (samples, returns).
+        </p>
+      ) : null}
       <ItemSkuSearch
         type={type}
         sku={sku}

@@ -3,6 +3,7 @@
  * tare too) and the item's movements. Column definitions for the one DataTable.
  */
 import { createColumnHelper } from "@tanstack/react-table";
+import type { ReactNode } from "react";
 import type { MovementType } from "~/db/tables/stock-enums";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import {
@@ -35,6 +36,8 @@ export interface ItemMovementRow {
   reference: string | null;
   note: string | null;
   user: string;
+  /** The purchase order a receipt was booked against; null for one without and other movements. */
+  purchaseOrderId?: number | null;
 }
 
 export function balanceColumns(unit: string, isWire: boolean) {
@@ -80,7 +83,17 @@ export function balanceColumns(unit: string, isWire: boolean) {
   ];
 }
 
-export function movementColumns(unit: string) {
+/**
+ * The movement columns; `receiptOrder` (from the page) names a receipt's purchase order, or
+ * says it had none, ahead of the reference and note, and gives the reference it leaves.
+ */
+export function movementColumns(
+  unit: string,
+  receiptOrder?: (row: ItemMovementRow) => {
+    mark: ReactNode;
+    reference: string | null;
+  },
+) {
   const column = createColumnHelper<ItemMovementRow>();
   return [
     column.accessor("createdAt", {
@@ -135,10 +148,22 @@ export function movementColumns(unit: string) {
     column.display({
       id: "reference",
       header: "Reference and note",
-      cell: ({ row }) =>
-        [row.original.reference, row.original.note]
+      cell: ({ row }) => {
+        const order = receiptOrder?.(row.original);
+        const words = [
+          order ? order.reference : row.original.reference,
+          row.original.note,
+        ]
           .filter(Boolean)
-          .join(" · ") || "—",
+          .join(" · ");
+        if (!order?.mark) return words || "—";
+        return (
+          <>
+            {order.mark}
+            {words ? ` · ${words}` : null}
+          </>
+        );
+      },
     }),
     column.accessor("user", { header: "By" }),
   ];

@@ -1,7 +1,15 @@
 /** Reading the movement journal, newest first, a page at a time. */
 import { and, desc, eq, gte, lt, type SQL } from "drizzle-orm";
 import { db } from "~/db/client.server";
-import { items, locations, lots, stockMovements, users } from "~/db/schema";
+import {
+  items,
+  locations,
+  lots,
+  purchaseReceiptLines,
+  purchaseReceipts,
+  stockMovements,
+  users,
+} from "~/db/schema";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { dayAfter, startOfDay } from "~/lib/calendar-days";
 import type { MovementJournalQuery } from "./movement-journal-query";
@@ -59,12 +67,22 @@ export async function listMovements(
       note: stockMovements.note,
       user: users.name,
       createdAt: stockMovements.createdAt,
+      /** The purchase order a receipt was booked against; null for one without (and every other movement). */
+      purchaseOrderId: purchaseReceipts.orderId,
     })
     .from(stockMovements)
     .innerJoin(items, eq(items.id, stockMovements.itemId))
     .innerJoin(locations, eq(locations.id, stockMovements.locationId))
     .innerJoin(users, eq(users.id, stockMovements.userId))
     .leftJoin(lots, eq(lots.id, stockMovements.lotId))
+    .leftJoin(
+      purchaseReceiptLines,
+      eq(purchaseReceiptLines.movementId, stockMovements.id),
+    )
+    .leftJoin(
+      purchaseReceipts,
+      eq(purchaseReceipts.id, purchaseReceiptLines.receiptId),
+    )
     .where(conditions.length > 0 ? and(...conditions) : undefined)
     .orderBy(desc(stockMovements.createdAt), desc(stockMovements.id))
     .limit(query.pageSize + 1)

@@ -43,6 +43,8 @@ function amount(
 }
 
 const quantity = (label = "quantity") => amount(label, quantityFromNumber, 3);
+/** An exact quantity (thousandths of the unit), for other requests that move stock (a receipt against an order). */
+export const quantityField = quantity;
 const code = (label: string) =>
   z
     .string({ error: `Give the ${label}.` })

@@ -27,6 +27,7 @@ import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
 import { purchaseOrderRouteRows } from "./route-roles.purchase-orders";
 import { purchaseOrderPageRows } from "./route-roles.purchase-order-pages";
+import { receivingRouteRows } from "./route-roles.receiving";
 import { supplierRouteRows } from "./route-roles.suppliers";
 import {
   byCapability,
@@ -45,6 +46,7 @@ const table: Row[] = [
   ...supplierRouteRows,
   ...purchaseOrderRouteRows,
   ...purchaseOrderPageRows,
+  ...receivingRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",

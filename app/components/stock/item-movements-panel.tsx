@@ -5,6 +5,19 @@ import {
   movementColumns,
   type ItemMovementRow,
 } from "~/stock/item-page-columns";
+import { ReceiptOrderLink, referenceBesides } from "./receipt-order-link";
+
+/** A receipt's order (or "no order") beside the reference, which then leaves out the order's number. */
+function receiptOrder(row: ItemMovementRow) {
+  const id = row.purchaseOrderId ?? null;
+  return {
+    mark:
+      row.type === "receipt" ? (
+        <ReceiptOrderLink type={row.type} purchaseOrderId={id} />
+      ) : null,
+    reference: referenceBesides(row.reference, id),
+  };
+}
 
 export function ItemMovementsPanel({
   sku,
@@ -34,7 +47,7 @@ export function ItemMovementsPanel({
       </h2>
       <DataTable
         caption={`Movements of ${sku}, newest first`}
-        columns={movementColumns(unit)}
+        columns={movementColumns(unit, receiptOrder)}
         rows={movements}
         page={page}
         pageCount={pageCount}

@@ -4,10 +4,9 @@
  * unit cost in the company currency, the supplier batch and the delivery note.
  */
 import { useState } from "react";
-import { formatQuantity } from "~/lib/format";
 import { perUnitWord } from "~/lib/unit-text";
-import { spoolNetKg } from "~/stock/spool-net-weight";
 import { MovementField as Field } from "./movement-field";
+import { SpoolNetStatus } from "./spool-net-status";
 
 type Errors = Record<string, string[] | undefined>;
 
@@ -32,7 +31,6 @@ export function ReceiptFields({
 }) {
   const [gross, setGross] = useState("");
   const [tare, setTare] = useState("");
-  const net = isWire ? spoolNetKg(gross, tare) : null;
   return (
     <div className="grid gap-4 sm:grid-cols-2">
       <div>
@@ -103,26 +101,7 @@ export function ReceiptFields({
             errors={errors.tareKg}
             hint="The empty spool"
           />
-          {net !== null ? (
-            <p
-              role="status"
-              className="rounded-md bg-graphite-50 px-4 py-3 sm:col-span-2"
-            >
-              {net > 0 ? (
-                <>
-                  Net weight (gross − tare):{" "}
-                  <strong className="tabular-nums">
-                    {formatQuantity(net, "kg", 3)}
-                  </strong>
-                </>
-              ) : (
-                <span className="text-danger">
-                  Net weight (gross − tare) is {formatQuantity(net, "kg", 3)}:
-                  the gross weight must be more than the tare weight.
-                </span>
-              )}
-            </p>
-          ) : null}
+          <SpoolNetStatus gross={gross} tare={tare} />
           <Field
             name="spoolType"
             label="Spool type"

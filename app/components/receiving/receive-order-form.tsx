@@ -1,0 +1,113 @@
+/**
+ * The delivery against one order: each open line with its spools or lots (one to start
+ * with, more added per line), validated in the browser with the schema the server uses.
+ * Field errors show at their entry; what was typed stays after a refusal.
+ */
+import {
+  getFormProps,
+  useForm,
+  type SubmissionResult,
+} from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { useState } from "react";
+import { Form, useNavigation } from "react-router";
+import { FormMessages } from "~/components/text-field";
+import { receiptFormSchema } from "~/purchase-orders/receipt-request";
+import type { ReceivingOrder } from "~/purchase-orders/receiving-view";
+import { OrderLineSummary } from "./order-line-summary";
+import { SpoolEntryFields } from "./spool-entry-fields";
+
+interface Entry {
+  key: number;
+  lineId: number;
+}
+
+export function ReceiveOrderForm({
+  order,
+  locations,
+  lastResult,
+}: {
+  order: ReceivingOrder;
+  locations: { code: string; name: string }[];
+  lastResult: SubmissionResult<string[]> | undefined;
+}) {
+  const navigation = useNavigation();
+  const busy = navigation.state !== "idle";
+  const lines = order.lines.filter((line) => line.mayStillTake > 0);
+  const [entries, setEntries] = useState<Entry[]>(() =>
+    lines.map((line, key) => ({ key, lineId: line.id })),
+  );
+  const [nextKey, setNextKey] = useState(lines.length);
+  const [form] = useForm({
+    id: `receive-${order.id}`,
+    lastResult: navigation.state === "idle" ? lastResult : null,
+    shouldValidate: "onSubmit",
+    onValidate({ formData }) {
+      return parseWithZod(formData, {
+        schema: receiptFormSchema,
+        disableAutoCoercion: true,
+      });
+    },
+  });
+  const errors = (form.allErrors ?? {}) as Record<string, string[] | undefined>;
+  const add = (lineId: number) => {
+    setEntries((current) => [...current, { key: nextKey, lineId }]);
+    setNextKey((key) => key + 1);
+  };
+  const remove = (key: number) =>
+    setEntries((current) => current.filter((entry) => entry.key !== key));
+
+  if (lines.length === 0)
+    return (
+      <p className="panel">Every line of {order.number} is received in full.</p>
+    );
+  return (
+    <Form method="post" {...getFormProps(form)} className="space-y-5">
+      <FormMessages id={form.errorId} errors={form.errors ?? errors.lines} />
+      <input type="hidden" name="orderId" value={order.id} />
+      {lines.map((line) => (
+        <section
+          key={line.id}
+          className="panel space-y-3"
+          aria-label={`Line ${line.lineNumber}, ${line.sku}`}
+        >
+          <OrderLineSummary line={line} currency={order.companyCurrency} />
+          {entries.map((entry, index) =>
+            entry.lineId === line.id ? (
+              <SpoolEntryFields
+                key={entry.key}
+                index={index}
+                number={
+                  entries
+                    .slice(0, index + 1)
+                    .filter((each) => each.lineId === line.id).length
+                }
+                lineId={line.id}
+                unit={line.unit}
+                isWire={line.isWire}
+                locations={locations}
+                usualLocation={line.usualLocation}
+                errors={errors}
+                onRemove={() => remove(entry.key)}
+              />
+            ) : null,
+          )}
+          <button
+            type="button"
+            className="button-quiet"
+            onClick={() => add(line.id)}
+          >
+            Add a {line.isWire ? "spool" : "lot"} to line {line.lineNumber}
+          </button>
+        </section>
+      ))}
+      <button
+        type="submit"
+        className="button-primary min-h-12 w-full text-lg"
+        disabled={busy || entries.length === 0}
+      >
+        {busy ? "Receiving…" : `Receive against ${order.number}`}
+      </button>
+    </Form>
+  );
+}
