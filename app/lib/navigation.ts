@@ -20,6 +20,7 @@ export const navigationItems: readonly NavigationItem[] = [
   { to: "/best-prices", label: "Best prices" },
   { to: "/prices", label: "Metal base & rates" },
   { to: "/alerts", label: "Alerts" },
+  { to: "/purchase-orders/late", label: "Late order lines" },
   { to: "/insight", label: "Cost insight" },
   { to: "/designs", label: "Designs" },
   { to: "/build-orders", label: "Build orders" },

@@ -26,6 +26,7 @@ import { buildOrderRouteRows } from "./route-roles.build-orders";
 import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
 import { supplierRouteRows } from "./route-roles.suppliers";
+import { onOrderRouteRows } from "./route-roles.on-order";
 import {
   byCapability,
   expectedStatus,
@@ -41,6 +42,7 @@ const table: Row[] = [
   ...buildOrderRouteRows,
   ...insightRouteRows,
   ...supplierRouteRows,
+  ...onOrderRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",
