@@ -35,8 +35,8 @@ export default function LateOrderLines({ loaderData }: Route.ComponentProps) {
         <p className="mt-1 max-w-3xl text-sm text-graphite-700">
           Lines of sent orders whose expected day has passed and that have not
           arrived in full, as of {formatDay(today)} (UTC). A line is expected on
-          its requested day, else on the order day plus the lead time. Chase
-          the supplier, or close the order short when the rest will not come.
+          its requested day, else on the order day plus the lead time. Chase the
+          supplier, or close the order short when the rest will not come.
         </p>
       </div>
       <DataTable

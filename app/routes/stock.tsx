@@ -227,8 +227,8 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
       />
       <p className="text-xs text-graphite-500">
         Available = on hand − reserved. On order = still to come on sent
-        purchase orders. Value = on hand × moving average cost,
-        in {currency} (the company currency).
+        purchase orders. Value = on hand × moving average cost, in {currency}{" "}
+        (the company currency).
       </p>
     </div>
   );
