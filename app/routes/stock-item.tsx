@@ -101,6 +101,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     attributes,
     history,
     orderLines: orderLines.map((line) => ({ ...line, unit: item.unit })),
+    orderLinesLimit: itemOrderLinesLimit,
     now: new Date().toISOString(),
     movements,
     page,
@@ -200,7 +201,7 @@ export default function StockItem({
             unit={item.unit}
             onOrder={item.onOrder}
             lines={loaderData.orderLines}
-            limit={itemOrderLinesLimit}
+            limit={loaderData.orderLinesLimit}
           />
           {prices ? (
             <ItemBestPricesPanel
