@@ -47,6 +47,8 @@ export default [
     ]),
     route("alerts", "routes/alerts.tsx"),
     route("alerts/purchase-request.csv", "routes/alerts-purchase-request.ts"),
+    // Before any purchase-orders/:orderId route, so "late" is never taken for an order id.
+    route("purchase-orders/late", "routes/purchase-orders-late.tsx"),
     ...prefix("build-orders", [
       index("routes/build-orders.tsx"),
       route(":orderId", "routes/build-order.tsx"),

@@ -4,8 +4,11 @@ import {
   alertChange,
   alertMail,
   alertModeOf,
+  coveredText,
   digestMail,
+  orderCoverage,
   purchaseRequestCsv,
+  type OpenOrderLine,
 } from "./low-stock";
 
 // Quantities in thousandths of the unit: 5_000n is 5 kg.
@@ -39,6 +42,138 @@ describe("when an alert opens and closes", () => {
     expect(
       alertChange({ available: 0n, reorderPoint: 0n, alertOpen: true }),
     ).toBe("close");
+  });
+});
+
+describe("an alert covered by orders already sent", () => {
+  // Worked example, done by hand: reorder point 50 kg, today 3 Dec 2026.
+  // Open lines: PO 7 20 kg due 10 Dec, PO 5 15 kg due 15 Dec, PO 9 30 kg due 20 Dec,
+  // PO 4 nothing left open (due 5 Dec).
+  const lines: OpenOrderLine[] = [
+    { orderId: 9, expectedDate: "2026-12-20", open: 30_000n },
+    { orderId: 5, expectedDate: "2026-12-15", open: 15_000n },
+    { orderId: 4, expectedDate: "2026-12-05", open: 0n },
+    { orderId: 7, expectedDate: "2026-12-10", open: 20_000n },
+  ];
+  const base = { reorderPoint: 50_000n, today: "2026-12-03", lines };
+
+  it("is not covered when what is due within the lead time falls short", () => {
+    // Lead time 14 days: horizon 17 Dec. 12 + 20 (PO 7) + 15 (PO 5) = 47 kg < 50 kg;
+    // PO 9 (20 Dec) comes too late to count.
+    expect(
+      orderCoverage({ ...base, available: 12_000n, leadTimeDays: 14 }),
+    ).toBeNull();
+  });
+
+  it("is covered by the order whose line makes it enough, earliest due first", () => {
+    // 15 + 20 = 35 kg, + 15 = 50 kg: at the reorder point with PO 5's line (15 Dec).
+    expect(
+      orderCoverage({ ...base, available: 15_000n, leadTimeDays: 14 }),
+    ).toEqual({ orderId: 5, due: "2026-12-15" });
+    // Lead time 21 days: horizon 24 Dec, so PO 9 counts: 47 + 30 = 77 kg ≥ 50 kg.
+    expect(
+      orderCoverage({ ...base, available: 12_000n, leadTimeDays: 21 }),
+    ).toEqual({ orderId: 9, due: "2026-12-20" });
+  });
+
+  it("counts a line due on the last day of the lead time, not the day after", () => {
+    const one = [{ orderId: 3, expectedDate: "2026-12-17", open: 60_000n }];
+    expect(
+      orderCoverage({ ...base, lines: one, available: 0n, leadTimeDays: 14 }),
+    ).toEqual({ orderId: 3, due: "2026-12-17" });
+    expect(
+      orderCoverage({ ...base, lines: one, available: 0n, leadTimeDays: 13 }),
+    ).toBeNull();
+  });
+
+  it("takes the older order first when two lines are due the same day", () => {
+    const same = [
+      { orderId: 12, expectedDate: "2026-12-08", open: 40_000n },
+      { orderId: 11, expectedDate: "2026-12-08", open: 40_000n },
+    ];
+    expect(
+      orderCoverage({
+        ...base,
+        lines: same,
+        available: 20_000n,
+        leadTimeDays: 7,
+      }),
+    ).toEqual({ orderId: 11, due: "2026-12-08" });
+  });
+
+  it("counts only lines already due when the lead time is unknown", () => {
+    const late = [
+      { orderId: 2, expectedDate: "2026-12-01", open: 40_000n },
+      { orderId: 8, expectedDate: "2026-12-04", open: 40_000n },
+    ];
+    expect(
+      orderCoverage({
+        ...base,
+        lines: late,
+        available: 10_000n,
+        leadTimeDays: null,
+      }),
+    ).toEqual({ orderId: 2, due: "2026-12-01" });
+    expect(
+      orderCoverage({
+        ...base,
+        lines: late.slice(1),
+        available: 10_000n,
+        leadTimeDays: null,
+      }),
+    ).toBeNull();
+  });
+
+  it("says nothing for an item that is not low", () => {
+    expect(
+      orderCoverage({ ...base, available: 50_000n, leadTimeDays: 14 }),
+    ).toBeNull();
+    expect(
+      orderCoverage({
+        ...base,
+        reorderPoint: 0n,
+        available: 0n,
+        leadTimeDays: 14,
+      }),
+    ).toBeNull();
+  });
+
+  it("names the order and the day", () => {
+    expect(coveredText({ orderId: 123, due: "2026-12-12" })).toBe(
+      "covered by PO-000123 due 12 Dec 2026",
+    );
+  });
+
+  it("lists covered alerts apart in the digest", () => {
+    const mail = digestMail(
+      [
+        {
+          sku: "W-1",
+          name: "Copper 0.50",
+          unit: "kg",
+          available: 5_000n,
+          reorderPoint: 20_000n,
+          openedAt: new Date("2026-12-01T08:00:00Z"),
+          coveredBy: { orderId: 42, due: "2026-12-09" },
+        },
+        {
+          sku: "M-1",
+          name: "Block",
+          unit: "pcs",
+          available: 0n,
+          reorderPoint: 100_000n,
+          openedAt: new Date("2026-12-02T08:00:00Z"),
+          coveredBy: null,
+        },
+      ],
+      "http://localhost:3000/alerts",
+    );
+    expect(mail.text).toContain(
+      "2 items are below the reorder point, 1 covered by sent orders:\n\n- M-1 Block: 0 pieces available",
+    );
+    expect(mail.text).toContain(
+      "Covered by orders already sent (nothing to order):\n- W-1 Copper 0.50: 5.000 kg available, reorder point 20.000 kg (low since 2026-12-01; covered by PO-000042 due 9 Dec 2026)",
+    );
   });
 });
 

@@ -2,7 +2,9 @@
  * Low-stock rules and the words of their e-mails. An item with a reorder
  * point above zero is low while its available stock (on hand − reserved) is
  * below that point; an alert opens on the drop and closes when available is
- * back at or above the point. Pure: quantities in thousandths of the unit.
+ * back at or above the point. An open alert is covered (no e-mail) while sent
+ * orders due within the item's lead time make up the shortfall
+ * (`orderCoverage`). Pure: quantities in thousandths of the unit.
  */
 import { csvFile } from "~/lib/csv-file";
 import type { AlertMailMode } from "~/db/tables/alert-enums";
@@ -18,6 +20,9 @@ import {
 import { quantityToNumber } from "~/lib/decimal-amounts";
 import { perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
+import { addDays, type CalendarDate } from "~/lib/calendar-days";
+import { formatDay } from "~/lib/format";
+import { purchaseOrderNumber } from "~/purchase-orders/purchase-order-status";
 
 export type AlertChange = "open" | "close" | "none";
 
@@ -31,6 +36,67 @@ export function alertChange(input: {
   if (low && !input.alertOpen) return "open";
   if (!low && input.alertOpen) return "close";
   return "none";
+}
+
+/** What is still to come on one line of a sent (or partly received) order for the item. */
+export interface OpenOrderLine {
+  orderId: number;
+  expectedDate: CalendarDate;
+  /** Ordered − received, thousandths of the item's unit. */
+  open: bigint;
+}
+
+/** The order that makes a low item's shortfall good in time, and when its line is due. */
+export interface OrderCoverage {
+  orderId: number;
+  due: CalendarDate;
+}
+
+/**
+ * Whether open order lines cover a low item: lines expected on or before today + the
+ * item's lead time (what a new order placed today would take) are counted, earliest
+ * due first (then the older order), until available + their open quantities reach the
+ * reorder point; the order whose line makes it enough covers the alert. Without a
+ * known lead time only lines due by today count (never hides a shortfall on a guess).
+ * Null when the item is not low or the lines due in time are not enough.
+ */
+export function orderCoverage(input: {
+  available: bigint;
+  reorderPoint: bigint;
+  today: CalendarDate;
+  leadTimeDays: number | null;
+  lines: readonly OpenOrderLine[];
+}): OrderCoverage | null {
+  if (input.reorderPoint <= 0n || input.available >= input.reorderPoint) {
+    return null;
+  }
+  const horizon = addDays(input.today, Math.max(0, input.leadTimeDays ?? 0));
+  const inTime = input.lines
+    .filter((line) => line.open > 0n && line.expectedDate <= horizon)
+    .sort((a, b) =>
+      a.expectedDate === b.expectedDate
+        ? a.orderId - b.orderId
+        : a.expectedDate < b.expectedDate
+          ? -1
+          : 1,
+    );
+  let expected = input.available;
+  for (const line of inTime) {
+    expected += line.open;
+    if (expected >= input.reorderPoint) {
+      return { orderId: line.orderId, due: line.expectedDate };
+    }
+  }
+  return null;
+}
+
+/** "covered by PO-000123 due 12 Dec 2026": how pages, the API and the digest name a covered alert. */
+export function coveredText(coverage: {
+  orderId: number;
+  due: CalendarDate | null;
+}): string {
+  const order = `covered by ${purchaseOrderNumber(coverage.orderId)}`;
+  return coverage.due ? `${order} due ${formatDay(coverage.due)}` : order;
 }
 
 export interface AlertPerson {
@@ -139,23 +205,32 @@ export interface DigestLine {
   available: bigint;
   reorderPoint: bigint;
   openedAt: Date;
+  /** The sent order that makes the shortfall good in time, or null (a call to order). */
+  coveredBy?: { orderId: number; due: CalendarDate | null } | null;
 }
 
-/** The daily digest of every open alert. */
+/** The daily digest of every open alert: the ones to order first, then those orders cover. */
 export function digestMail(
   alerts: readonly DigestLine[],
   alertsUrl: string,
 ): { subject: string; text: string } {
-  const lines = alerts.map(
-    (alert) =>
-      `- ${alert.sku} ${alert.name}: ${quantityText(alert.available, alert.unit)} available, reorder point ${quantityText(alert.reorderPoint, alert.unit)} (low since ${alert.openedAt.toISOString().slice(0, 10)})`,
-  );
+  const line = (alert: DigestLine) =>
+    `- ${alert.sku} ${alert.name}: ${quantityText(alert.available, alert.unit)} available, reorder point ${quantityText(alert.reorderPoint, alert.unit)} (low since ${alert.openedAt.toISOString().slice(0, 10)}${alert.coveredBy ? `; ${coveredText(alert.coveredBy)}` : ""})`;
+  const toOrder = alerts.filter((alert) => !alert.coveredBy);
+  const covered = alerts.filter((alert) => alert.coveredBy);
   return {
     subject: `Low stock digest: ${alerts.length} item${alerts.length === 1 ? "" : "s"} below reorder point`,
     text: [
-      `${alerts.length} item${alerts.length === 1 ? " is" : "s are"} below the reorder point:`,
+      `${alerts.length} item${alerts.length === 1 ? " is" : "s are"} below the reorder point${covered.length > 0 ? `, ${covered.length} covered by sent orders` : ""}:`,
       "",
-      ...lines,
+      ...toOrder.map(line),
+      ...(covered.length > 0
+        ? [
+            ...(toOrder.length > 0 ? [""] : []),
+            "Covered by orders already sent (nothing to order):",
+            ...covered.map(line),
+          ]
+        : []),
       "",
       `All alerts: ${alertsUrl}`,
     ].join("\n"),

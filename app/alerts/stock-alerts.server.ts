@@ -15,12 +15,13 @@ import {
   isNull,
   sql,
 } from "drizzle-orm";
-import { db } from "~/db/client.server";
+import { db, type Transaction } from "~/db/client.server";
 import {
   retryWriteConflicts,
   writeTransaction,
 } from "~/db/write-transaction.server";
 import { appUrl } from "~/lib/app-url.server";
+import { purchaseOrderNumber } from "~/purchase-orders/purchase-order-status";
 import { areaLogger } from "~/observability/logger.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import {
@@ -30,9 +31,11 @@ import {
   items,
   stockAlertNotices,
   stockAlerts,
+  suppliers,
   userRoles,
   users,
 } from "~/db/schema";
+import { coverDueDays, openOrderLinesOf } from "./open-order-lines.server";
 import { deliverLater, queueMail, writeToOutbox } from "~/mail/mailer.server";
 import { todayUtc } from "~/purchasing/current-entries";
 import { bestPricesOf, loadItemPricing } from "~/purchasing/item-prices.server";
@@ -43,9 +46,12 @@ import {
   alertChange,
   alertMail,
   alertModeOf,
+  coveredText,
   digestMail,
+  orderCoverage,
   type AlertMailFacts,
   type AlertPerson,
+  type OrderCoverage,
 } from "./low-stock";
 
 const alertsLog = areaLogger("alerts");
@@ -158,16 +164,43 @@ async function newAlertMail(item: AlertItem) {
   return { recipients, mail };
 }
 
+/** Writes the alert's e-mails to the outbox and who was told, inside the caller's transaction. */
+async function writeAlertMail(
+  tx: Transaction,
+  alertId: number,
+  { recipients, mail }: Awaited<ReturnType<typeof newAlertMail>>,
+) {
+  if (!mail) return [];
+  // Written now, sent after the commit (deliverLater).
+  const messages = await writeToOutbox(
+    tx,
+    recipients.map((person) => ({ to: person.email, ...mail })),
+  );
+  await tx.insert(stockAlertNotices).values(
+    recipients.map((person, index) => ({
+      alertId,
+      userId: person.id,
+      kind: "alert" as const,
+      outboxId: messages[index]!.id,
+      createdAt: new Date(),
+    })),
+  );
+  return messages;
+}
+
 /**
  * Opens the item's alert with its e-mails and notices in one transaction, and hands the
  * e-mails to SMTP once it has committed; nothing when another request opened the alert
  * first (one open alert per item: the unique key decides, inside the transaction).
+ * An alert covered by a sent order opens marked so, and e-mails nobody.
  * The e-mail's text and recipients are read before: a description, not a decision.
  */
-async function openAlert(item: AlertItem) {
+async function openAlert(item: AlertItem, coverage: OrderCoverage | null) {
   const text = (thousandths: bigint) =>
     quantityToNumber(thousandths).toFixed(3);
-  const { recipients, mail } = await newAlertMail(item);
+  const told = coverage
+    ? { recipients: [], mail: null }
+    : await newAlertMail(item);
   const queued = await writeTransaction(
     async (tx) => {
       let alertId: number;
@@ -180,6 +213,7 @@ async function openAlert(item: AlertItem) {
             reorderPoint: text(item.reorderPoint),
             reorderQuantity: text(item.reorderQuantity),
             openedAt: new Date(),
+            coveredByOrderId: coverage?.orderId ?? null,
           })
           .$returningId();
         alertId = created!.id;
@@ -188,22 +222,7 @@ async function openAlert(item: AlertItem) {
         if (isDuplicateKey(error)) return [];
         throw error;
       }
-      if (!mail) return [];
-      // Written now, sent after the commit (deliverLater).
-      const messages = await writeToOutbox(
-        tx,
-        recipients.map((person) => ({ to: person.email, ...mail })),
-      );
-      await tx.insert(stockAlertNotices).values(
-        recipients.map((person, index) => ({
-          alertId,
-          userId: person.id,
-          kind: "alert" as const,
-          outboxId: messages[index]!.id,
-          createdAt: new Date(),
-        })),
-      );
-      return messages;
+      return writeAlertMail(tx, alertId, told);
     },
     { label: "low-stock alert" },
   );
@@ -211,9 +230,50 @@ async function openAlert(item: AlertItem) {
 }
 
 /**
+ * Keeps an open alert's cover up to date: another order may now cover it, or its order
+ * was cancelled, closed short or slipped. Losing its cover makes it a call to order: the
+ * e-mails go out then, once (the update that clears the cover decides who sends them).
+ */
+async function recoverAlert(
+  item: AlertItem,
+  alertId: number,
+  coveredBefore: number | null,
+  coverage: OrderCoverage | null,
+) {
+  const coveredNow = coverage?.orderId ?? null;
+  if (coveredNow === coveredBefore) return;
+  const told =
+    coveredBefore !== null && coveredNow === null
+      ? await newAlertMail(item)
+      : { recipients: [], mail: null };
+  const queued = await writeTransaction(
+    async (tx) => {
+      const [result] = await tx
+        .update(stockAlerts)
+        .set({ coveredByOrderId: coveredNow })
+        .where(
+          and(
+            eq(stockAlerts.id, alertId),
+            isNull(stockAlerts.closedAt),
+            coveredBefore === null
+              ? isNull(stockAlerts.coveredByOrderId)
+              : eq(stockAlerts.coveredByOrderId, coveredBefore),
+          ),
+        );
+      // Another request changed it first: it tells people.
+      if (result.affectedRows !== 1) return [];
+      return writeAlertMail(tx, alertId, told);
+    },
+    { label: "low-stock alert cover" },
+  );
+  deliverLater(queued);
+}
+
+/**
  * Checks the items after their stock changed: opens, keeps or closes each
- * one's alert. Call it after the stock transaction has committed. Errors are
- * logged, never thrown: the stock work has already been done.
+ * one's alert, and whether sent orders cover it. Call it after the stock (or
+ * purchase-order) transaction has committed. Errors are logged, never thrown:
+ * the stock work has already been done.
  */
 export async function checkStockAlerts(itemIds: readonly number[]) {
   const ids = [...new Set(itemIds)];
@@ -229,11 +289,18 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
         reserved: items.reserved,
         reorderPoint: items.reorderPoint,
         reorderQuantity: items.reorderQuantity,
+        leadTimeDays: suppliers.leadTimeDays,
         openAlertId: stockAlerts.id,
+        coveredByOrderId: stockAlerts.coveredByOrderId,
       })
       .from(items)
       .leftJoin(stockAlerts, eq(stockAlerts.openItemId, items.id))
+      .leftJoin(suppliers, eq(suppliers.id, items.preferredSupplierId))
       .where(inArray(items.id, ids));
+    const lowIds = rows
+      .filter((row) => parseQuantity(row.reorderPoint) > 0n)
+      .map((row) => row.id);
+    const openLines = await openOrderLinesOf(lowIds);
     for (const row of rows) {
       const item = {
         id: row.id,
@@ -249,6 +316,14 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
         reorderPoint: item.reorderPoint,
         alertOpen: row.openAlertId !== null,
       });
+      const coverage = () =>
+        orderCoverage({
+          available: item.available,
+          reorderPoint: item.reorderPoint,
+          today: todayUtc(),
+          leadTimeDays: row.leadTimeDays,
+          lines: openLines.get(item.id) ?? [],
+        });
       const text = (thousandths: bigint) =>
         quantityToNumber(thousandths).toFixed(3);
       if (change === "close") {
@@ -269,7 +344,14 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
           { label: "low-stock alert close" },
         );
       } else if (change === "open") {
-        await openAlert(item);
+        await openAlert(item, coverage());
+      } else if (row.openAlertId !== null) {
+        await recoverAlert(
+          item,
+          row.openAlertId,
+          row.coveredByOrderId,
+          coverage(),
+        );
       }
     }
   } catch (error) {
@@ -292,12 +374,15 @@ export async function sendAlertDigest(): Promise<{
       onHand: items.onHand,
       reserved: items.reserved,
       reorderPoint: items.reorderPoint,
+      itemId: stockAlerts.itemId,
+      coveredByOrderId: stockAlerts.coveredByOrderId,
     })
     .from(stockAlerts)
     .innerJoin(items, eq(items.id, stockAlerts.itemId))
     .where(isNotNull(stockAlerts.openItemId))
     .orderBy(asc(items.sku));
   if (open.length === 0) return { people: 0, alerts: 0 };
+  const covers = await coversOf(open);
   const recipients = (await alertPeople()).filter(
     (person) => alertModeOf(person) === "digest",
   );
@@ -309,6 +394,7 @@ export async function sendAlertDigest(): Promise<{
       available: parseQuantity(alert.onHand) - parseQuantity(alert.reserved),
       reorderPoint: parseQuantity(alert.reorderPoint),
       openedAt: alert.openedAt,
+      coveredBy: covers.get(alert.id) ?? null,
     })),
     `${appUrl()}/alerts`,
   );
@@ -325,6 +411,68 @@ export async function sendAlertDigest(): Promise<{
     );
   }
   return { people: recipients.length, alerts: open.length };
+}
+
+/** Each covered alert's order and the day it is due (null once the order has nothing open for the item). */
+async function coversOf(
+  alerts: readonly {
+    id: number;
+    itemId: number;
+    coveredByOrderId: number | null;
+  }[],
+): Promise<Map<number, { orderId: number; due: string | null }>> {
+  const covered = alerts.flatMap((alert) =>
+    alert.coveredByOrderId === null
+      ? []
+      : [
+          {
+            id: alert.id,
+            itemId: alert.itemId,
+            orderId: alert.coveredByOrderId,
+          },
+        ],
+  );
+  const due = await coverDueDays(covered);
+  return new Map(
+    covered.map((alert) => [
+      alert.id,
+      {
+        orderId: alert.orderId,
+        due: due.get(`${alert.itemId}:${alert.orderId}`) ?? null,
+      },
+    ]),
+  );
+}
+
+/** A covered alert as pages and the API show it: the order, its number, when due, in words. */
+function coverAnswer(
+  cover: { orderId: number; due: string | null } | undefined,
+) {
+  return cover
+    ? {
+        orderId: cover.orderId,
+        order: purchaseOrderNumber(cover.orderId),
+        due: cover.due,
+        text: coveredText(cover),
+      }
+    : null;
+}
+
+/** Open alerts for the start page: those to order, and those sent orders cover. */
+export async function countOpenAlertsByCover(): Promise<{
+  toOrder: number;
+  covered: number;
+}> {
+  const [row] = await db
+    .select({
+      total: sql<number>`COUNT(*)`,
+      covered: sql<number>`COUNT(${stockAlerts.coveredByOrderId})`,
+    })
+    .from(stockAlerts)
+    .where(isNotNull(stockAlerts.openItemId));
+  const total = Number(row?.total ?? 0);
+  const covered = Number(row?.covered ?? 0);
+  return { toOrder: total - covered, covered };
 }
 
 /** How many alerts are open now (one per item at most), for the start page. */
@@ -369,6 +517,8 @@ export async function listAlerts(options: {
       openedAt: stockAlerts.openedAt,
       closedAt: stockAlerts.closedAt,
       availableAtClose: stockAlerts.availableAtClose,
+      itemId: stockAlerts.itemId,
+      coveredByOrderId: stockAlerts.coveredByOrderId,
     })
     .from(stockAlerts)
     .innerJoin(items, eq(items.id, stockAlerts.itemId))
@@ -396,6 +546,7 @@ export async function listAlerts(options: {
             ),
           )
           .orderBy(asc(stockAlertNotices.createdAt));
+  const covers = await coversOf(alerts);
   return {
     total: Number(total),
     alerts: alerts.map((alert) => ({
@@ -414,6 +565,7 @@ export async function listAlerts(options: {
       closedAt: alert.closedAt?.toISOString() ?? null,
       availableAtClose:
         alert.availableAtClose === null ? null : Number(alert.availableAtClose),
+      coveredBy: coverAnswer(covers.get(alert.id)),
       told: notices
         .filter((notice) => notice.alertId === alert.id)
         .map(({ kind, createdAt, email, name }) => ({

@@ -21,6 +21,7 @@ export const navigationItems: readonly NavigationItem[] = [
   { to: "/prices", label: "Metal base & rates" },
   { to: "/purchase-orders", label: "Purchase orders" },
   { to: "/alerts", label: "Alerts" },
+  { to: "/purchase-orders/late", label: "Late order lines" },
   { to: "/insight", label: "Cost insight" },
   { to: "/designs", label: "Designs" },
   { to: "/build-orders", label: "Build orders" },

@@ -13,6 +13,9 @@ import {
   companyCurrency,
   listCurrencyRates,
   listMetalBase,
+  percentText,
+  supplierOrderingColumns,
+  withOrderingNumbers,
 } from "./suppliers.server";
 
 /** The imports listed on a supplier's page, newest first. */
@@ -28,11 +31,12 @@ export async function findSupplier(id: number) {
       leadTimeDays: suppliers.leadTimeDays,
       notes: suppliers.notes,
       createdAt: suppliers.createdAt,
+      ...supplierOrderingColumns,
     })
     .from(suppliers)
     .where(eq(suppliers.id, id))
     .limit(1);
-  return row ?? null;
+  return row ? withOrderingNumbers(row) : null;
 }
 
 /** The supplier's price-list imports, newest first, and how many price lines it has in all. */
@@ -85,6 +89,16 @@ export async function updateSupplier(
       ? { leadTimeDays: patch.leadTimeDays }
       : {}),
     ...(patch.notes !== undefined ? { notes: patch.notes } : {}),
+    ...(patch.orderEmail !== undefined ? { orderEmail: patch.orderEmail } : {}),
+    ...(patch.metalBaseFixedAt !== undefined
+      ? { metalBaseFixedAt: patch.metalBaseFixedAt }
+      : {}),
+    ...(patch.wireTolerancePercent !== undefined
+      ? { wireTolerancePercent: percentText(patch.wireTolerancePercent) }
+      : {}),
+    ...(patch.pieceTolerancePercent !== undefined
+      ? { pieceTolerancePercent: percentText(patch.pieceTolerancePercent) }
+      : {}),
   };
   try {
     await writeTransaction(async (tx) => {

@@ -50,3 +50,71 @@ describe("a supplier's currency", () => {
       ]);
   });
 });
+
+describe("a supplier's ordering settings", () => {
+  const messages = (input: Record<string, unknown>) => {
+    const parsed = supplierSchema.safeParse({
+      name: "Coil mill",
+      currency: "EUR",
+      ...input,
+    });
+    return parsed.success
+      ? {}
+      : Object.fromEntries(
+          parsed.error.issues.map((issue) => [issue.path[0], issue.message]),
+        );
+  };
+
+  it("starts with the base fixed at order, wire 10 % and pieces 0 % (common practice)", () => {
+    const parsed = supplierSchema.parse({ name: "Coil mill", currency: "EUR" });
+    expect(parsed).toMatchObject({
+      metalBaseFixedAt: "order",
+      wireTolerancePercent: 10,
+      pieceTolerancePercent: 0,
+    });
+    expect(parsed.orderEmail).toBeUndefined();
+  });
+
+  it("takes tolerances from 0 to 100 % with up to 2 decimals", () => {
+    expect(
+      messages({ wireTolerancePercent: 0, pieceTolerancePercent: 100 }),
+    ).toEqual({});
+    expect(messages({ wireTolerancePercent: 7.25 })).toEqual({});
+    expect(messages({ wireTolerancePercent: -1 })).toEqual({
+      wireTolerancePercent: "The wire tolerance cannot be negative.",
+    });
+    expect(messages({ pieceTolerancePercent: 100.01 })).toEqual({
+      pieceTolerancePercent: "The piece tolerance is at most 100 %.",
+    });
+    expect(messages({ wireTolerancePercent: 2.125 })).toEqual({
+      wireTolerancePercent: "The wire tolerance has at most 2 decimals.",
+    });
+  });
+
+  it("checks the order address and the fixing, field by field", () => {
+    expect(
+      messages({ orderEmail: "orders@mill", metalBaseFixedAt: "invoice" }),
+    ).toEqual({
+      orderEmail: "Give a valid e-mail address for orders.",
+      metalBaseFixedAt: "The metal base is fixed at order or at delivery.",
+    });
+    expect(
+      messages({
+        orderEmail: "orders@mill.example",
+        metalBaseFixedAt: "delivery",
+      }),
+    ).toEqual({});
+  });
+
+  it("patches only what is sent; null clears the order address", () => {
+    expect(supplierPatchSchema.parse({ pieceTolerancePercent: 2 })).toEqual({
+      pieceTolerancePercent: 2,
+    });
+    expect(supplierPatchSchema.parse({ orderEmail: null })).toEqual({
+      orderEmail: null,
+    });
+    expect(
+      supplierPatchSchema.safeParse({ wireTolerancePercent: 150 }).success,
+    ).toBe(false);
+  });
+});

@@ -4,6 +4,7 @@ import {
   ambiguousCurrencySigns,
   currencyCodeFromText,
 } from "~/price-lists/currencies";
+import { metalBaseFixings } from "~/db/tables/purchase-order-enums";
 
 const currencyHint = "Give the currency as a 3-letter ISO 4217 code, e.g. EUR.";
 
@@ -45,6 +46,36 @@ const price = (label: string, decimals: number) =>
       `The ${label} has at most ${decimals} decimals.`,
     );
 
+/** How far past the ordered quantity a delivery may go: 0–100 %, to 2 decimals (the column's scale). */
+const tolerancePercent = (what: string) =>
+  z
+    .number({ error: `Give the ${what} tolerance as a number of percent.` })
+    .min(0, `The ${what} tolerance cannot be negative.`)
+    .max(100, `The ${what} tolerance is at most 100 %.`)
+    .refine(
+      (value) => Math.abs(Math.round(value * 100) - value * 100) < 1e-6,
+      `The ${what} tolerance has at most 2 decimals.`,
+    );
+
+/** The supplier's ordering settings, without defaults (the PATCH leaves out what it does not send). */
+const orderingFields = {
+  orderEmail: z
+    .email({ error: "Give a valid e-mail address for orders." })
+    .max(254, "The address is at most 254 characters."),
+  metalBaseFixedAt: z.enum(metalBaseFixings, {
+    error: "The metal base is fixed at order or at delivery.",
+  }),
+  wireTolerancePercent: tolerancePercent("wire"),
+  pieceTolerancePercent: tolerancePercent("piece"),
+};
+
+/** What the database starts a supplier with (common practice, no source): wire ±10 % by weight, pieces exact. */
+export const supplierOrderingDefaults = {
+  metalBaseFixedAt: "order",
+  wireTolerancePercent: 10,
+  pieceTolerancePercent: 0,
+} as const;
+
 export const supplierSchema = z.object({
   name: z
     .string({ error: "Give the supplier's name." })
@@ -60,6 +91,16 @@ export const supplierSchema = z.object({
     .max(730, "The lead time is at most 730 days.")
     .optional(),
   notes: z.string().trim().max(1000, "Use at most 1000 characters.").optional(),
+  orderEmail: orderingFields.orderEmail.optional(),
+  metalBaseFixedAt: orderingFields.metalBaseFixedAt.default(
+    supplierOrderingDefaults.metalBaseFixedAt,
+  ),
+  wireTolerancePercent: orderingFields.wireTolerancePercent.default(
+    supplierOrderingDefaults.wireTolerancePercent,
+  ),
+  pieceTolerancePercent: orderingFields.pieceTolerancePercent.default(
+    supplierOrderingDefaults.pieceTolerancePercent,
+  ),
 });
 
 export const metalBaseSchema = z.object({
@@ -92,10 +133,15 @@ export const supplierPatchSchema = z
     currency: isoCurrency.optional(),
     leadTimeDays: supplierSchema.shape.leadTimeDays.nullable(),
     notes: supplierSchema.shape.notes.nullable(),
+    orderEmail: orderingFields.orderEmail.nullable().optional(),
+    metalBaseFixedAt: orderingFields.metalBaseFixedAt.optional(),
+    wireTolerancePercent: orderingFields.wireTolerancePercent.optional(),
+    pieceTolerancePercent: orderingFields.pieceTolerancePercent.optional(),
   })
   .strict()
   .refine((patch) => Object.keys(patch).length > 0, {
-    message: "Send at least one of name, email, currency, leadTimeDays, notes.",
+    message:
+      "Send at least one of name, email, currency, leadTimeDays, notes, orderEmail, metalBaseFixedAt, wireTolerancePercent, pieceTolerancePercent.",
   });
 
 export type SupplierPatch = z.output<typeof supplierPatchSchema>;

@@ -28,7 +28,7 @@ export async function companyCurrency(): Promise<string> {
 }
 
 export async function listSuppliers() {
-  return db
+  const rows = await db
     .select({
       id: suppliers.id,
       name: suppliers.name,
@@ -37,11 +37,35 @@ export async function listSuppliers() {
       currency: suppliers.currency,
       leadTimeDays: suppliers.leadTimeDays,
       notes: suppliers.notes,
+      ...supplierOrderingColumns,
     })
     .from(suppliers)
     .orderBy(asc(suppliers.name))
     .limit(1000);
+  return rows.map(withOrderingNumbers);
 }
+
+/** The ordering settings of a supplier as stored (tolerances as DECIMAL text). */
+export const supplierOrderingColumns = {
+  orderEmail: suppliers.orderEmail,
+  metalBaseFixedAt: suppliers.metalBaseFixedAt,
+  wireTolerancePercent: suppliers.wireTolerancePercent,
+  pieceTolerancePercent: suppliers.pieceTolerancePercent,
+};
+
+/** A supplier row with its tolerances as numbers of percent (2 decimals at most, exact in a double). */
+export function withOrderingNumbers<
+  Row extends { wireTolerancePercent: string; pieceTolerancePercent: string },
+>(row: Row) {
+  return {
+    ...row,
+    wireTolerancePercent: Number(row.wireTolerancePercent),
+    pieceTolerancePercent: Number(row.pieceTolerancePercent),
+  };
+}
+
+/** A tolerance as the DECIMAL(5,2) column takes it. */
+export const percentText = (percent: number) => percent.toFixed(2);
 
 export async function findSupplierByName(name: string) {
   const [row] = await db
@@ -63,6 +87,10 @@ export async function createSupplier(input: SupplierInput): Promise<number> {
         currency: input.currency,
         leadTimeDays: input.leadTimeDays ?? null,
         notes: input.notes ?? null,
+        orderEmail: input.orderEmail ?? null,
+        metalBaseFixedAt: input.metalBaseFixedAt,
+        wireTolerancePercent: percentText(input.wireTolerancePercent),
+        pieceTolerancePercent: percentText(input.pieceTolerancePercent),
       })
       .$returningId();
     return created!.id;

@@ -4,6 +4,7 @@ import type { Route } from "./+types/alerts";
 import { purchaseRequestsBySupplier } from "~/alerts/purchase-requests.server";
 import { alertsPageSize, listAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
+import { AlertState } from "~/components/alerts/alert-state";
 import { DataTable } from "~/components/data-table";
 import { OrderFromAlertButton } from "~/components/purchase-orders/order-from-alert-button";
 import { formatDateTime } from "~/lib/format";
@@ -68,14 +69,12 @@ const columns = [
   }),
   column.accessor("status", {
     header: "State",
-    cell: (info) =>
-      info.getValue() === "open" ? (
-        <span className="rounded border border-copper-700 px-1.5 py-0.5 text-xs font-semibold text-copper-700">
-          Open
-        </span>
-      ) : (
-        <span className="text-xs text-graphite-500">Closed</span>
-      ),
+    cell: (info) => (
+      <AlertState
+        status={info.getValue()}
+        coveredBy={info.row.original.coveredBy}
+      />
+    ),
   }),
   column.accessor("availableAtOpen", {
     header: "Available when opened",
@@ -177,7 +176,9 @@ export default function Alerts({ loaderData }: Route.ComponentProps) {
         An alert opens when an item&apos;s available stock (on hand less
         reserved) falls below its reorder point, and closes by itself when it is
         back at or above it. Buyers get an e-mail for each new alert, or a daily
-        digest, as chosen on their account page.
+        digest, as chosen on their account page. An alert that sent orders due
+        within the item&apos;s lead time make good is marked covered and e-mails
+        nobody.
       </p>
       {canBuy ? (
         <section aria-labelledby="purchase-requests" className="mb-6 panel">

@@ -19,13 +19,20 @@ async function supplierAnswer(id: number | null) {
     currency: supplier.currency,
     leadTimeDays: supplier.leadTimeDays,
     notes: supplier.notes,
+    orderEmail: supplier.orderEmail,
+    metalBaseFixedAt: supplier.metalBaseFixedAt,
+    wireTolerancePercent: supplier.wireTolerancePercent,
+    pieceTolerancePercent: supplier.pieceTolerancePercent,
   };
 }
 
 const noSuchSupplier = (text: string) =>
   apiError(404, `No supplier with id "${text}".`);
 
-/** GET /api/v1/suppliers/:supplierId → { id, name, email, currency, leadTimeDays, notes }. */
+/**
+ * GET /api/v1/suppliers/:supplierId → { id, name, email, currency, leadTimeDays, notes,
+ * orderEmail, metalBaseFixedAt ("order" | "delivery"), wireTolerancePercent, pieceTolerancePercent }.
+ */
 export async function loader({ request, params }: Route.LoaderArgs) {
   await requireUser(request);
   const supplier = await supplierAnswer(idFromText(params.supplierId));
@@ -35,7 +42,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 /**
  * PATCH /api/v1/suppliers/:supplierId (buyer, admin) with any of name, email, currency,
- * leadTimeDays, notes (null clears the optional ones) → 200 the supplier; 400 for bad
+ * leadTimeDays, notes, orderEmail, metalBaseFixedAt, wireTolerancePercent and
+ * pieceTolerancePercent (0–100; null clears the optional ones) → 200 the supplier; 400 for bad
  * fields, 404 for no such supplier, 409 when another supplier has the name.
  */
 export async function action({ request, params }: Route.ActionArgs) {

@@ -5,7 +5,10 @@ import { supplierSchema } from "~/purchasing/supplier-schemas";
 import { createSupplier, listSuppliers } from "~/purchasing/suppliers.server";
 import { answerDomainError } from "~/lib/api-errors.server";
 
-/** GET /api/v1/suppliers → [{ id, name, email, currency, leadTimeDays, notes }] (the id for /api/v1/suppliers/:id). */
+/**
+ * GET /api/v1/suppliers → [{ id, name, email, currency, leadTimeDays, notes, orderEmail,
+ * metalBaseFixedAt, wireTolerancePercent, pieceTolerancePercent }] (the id for /api/v1/suppliers/:id).
+ */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
   return Response.json(await listSuppliers());
@@ -26,6 +29,10 @@ export async function action({ request }: Route.ActionArgs) {
         currency: input.currency,
         leadTimeDays: input.leadTimeDays ?? null,
         notes: input.notes ?? null,
+        orderEmail: input.orderEmail ?? null,
+        metalBaseFixedAt: input.metalBaseFixedAt,
+        wireTolerancePercent: input.wireTolerancePercent,
+        pieceTolerancePercent: input.pieceTolerancePercent,
       },
       { status: 201 },
     );

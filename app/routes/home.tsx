@@ -1,6 +1,6 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/home";
-import { countOpenAlerts } from "~/alerts/stock-alerts.server";
+import { countOpenAlertsByCover } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
 import { InsightDesigns } from "~/components/insight/insight-designs";
 import { StockHeadline } from "~/components/insight-stock";
@@ -21,7 +21,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   const [admin, insight, openAlerts] = await Promise.all([
     isAdmin ? adminFigures() : null,
     isManager ? loadInsight(request, { page: "start" }) : null,
-    isBuyer ? countOpenAlerts() : null,
+    isBuyer ? countOpenAlertsByCover() : null,
   ]);
   return {
     name: user.name,
@@ -76,11 +76,20 @@ export default function Home({ loaderData }: Route.ComponentProps) {
           <div className="grid gap-3 sm:grid-cols-4">
             <Figure
               label={
-                openAlerts === 1
-                  ? "open low-stock alert"
-                  : "open low-stock alerts"
+                openAlerts.toOrder === 1
+                  ? "open low-stock alert to order"
+                  : "open low-stock alerts to order"
               }
-              value={openAlerts}
+              value={openAlerts.toOrder}
+              to="/alerts"
+            />
+            <Figure
+              label={
+                openAlerts.covered === 1
+                  ? "low item covered by a sent order"
+                  : "low items covered by sent orders"
+              }
+              value={openAlerts.covered}
               to="/alerts"
             />
           </div>

@@ -13,6 +13,7 @@ import { ItemAttributesPanel } from "~/components/stock/item-attributes-panel";
 import { ItemBalancesPanel } from "~/components/stock/item-balances-panel";
 import { ItemMovementsPanel } from "~/components/stock/item-movements-panel";
 import { ItemOnHandPanel } from "~/components/stock/item-on-hand-panel";
+import { ItemOrderLinesPanel } from "~/components/stock/item-order-lines-panel";
 import { ItemPageHeading } from "~/components/stock/item-page-heading";
 import { ItemSummaryFigures } from "~/components/stock/item-summary-figures";
 import { ReorderPointPanel } from "~/components/stock/reorder-point-panel";
@@ -43,6 +44,10 @@ import { todayUtc } from "~/purchasing/current-entries";
 import { readItemPriceQuantity } from "~/purchasing/price-quantity-query";
 import { quantityFromNumber } from "~/lib/decimal-amounts";
 import { isDomainError } from "~/lib/domain-error";
+import {
+  itemOrderLinesLimit,
+  openOrderLinesOfItem,
+} from "~/purchase-orders/open-order-lines.server";
 
 const movementPageSize = 20;
 
@@ -59,10 +64,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   if (!found) notFound(params.sku);
   const { id, ...item } = found;
   const url = new URL(request.url);
-  const [attributes, movementCount, history] = await Promise.all([
+  const [attributes, movementCount, history, orderLines] = await Promise.all([
     itemPageAttributes(found),
     countItemMovements(id),
     listOnHandHistory(id),
+    openOrderLinesOfItem(id, todayUtc()),
   ]);
   // A page past the end (a typed address) shows the last one.
   const pageCount = pageCountOf(movementCount, movementPageSize);
@@ -94,6 +100,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     item,
     attributes,
     history,
+    orderLines: orderLines.map((line) => ({ ...line, unit: item.unit })),
+    orderLinesLimit: itemOrderLinesLimit,
     now: new Date().toISOString(),
     movements,
     page,
@@ -187,6 +195,13 @@ export default function StockItem({
             unit={item.unit}
             isWire={item.kind === "wire"}
             balances={item.balances}
+          />
+          <ItemOrderLinesPanel
+            sku={item.sku}
+            unit={item.unit}
+            onOrder={item.onOrder}
+            lines={loaderData.orderLines}
+            limit={loaderData.orderLinesLimit}
           />
           {prices ? (
             <ItemBestPricesPanel

@@ -121,6 +121,18 @@ function stockColumns(view: StockListView, currency: string) {
       ),
       meta: { numeric: true },
     }),
+    column.accessor("onOrder", {
+      // Not sortable: items.on_order has no index (adding one needs a migration).
+      header: "On order",
+      cell: (info) => (
+        <span
+          className={`whitespace-nowrap ${info.getValue() > 0 ? "" : "text-graphite-500"}`}
+        >
+          {formatStockQuantity(info.getValue(), info.row.original.unit)}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
     column.accessor("reorderPoint", {
       header: "Reorder point",
       cell: (info) =>
@@ -160,7 +172,7 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
           <h1 className="text-2xl font-semibold">Stock</h1>
           <p className="mt-1 text-graphite-500">
             Wire, magnets and other parts with what is on hand, reserved for
-            build orders and free to use.
+            build orders, free to use and still to come on sent orders.
           </p>
         </div>
         <div className="flex flex-wrap gap-2">
@@ -214,8 +226,9 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
         }
       />
       <p className="text-xs text-graphite-500">
-        Available = on hand − reserved. Value = on hand × moving average cost,
-        in {currency} (the company currency).
+        Available = on hand − reserved. On order = still to come on sent
+        purchase orders. Value = on hand × moving average cost, in {currency}{" "}
+        (the company currency).
       </p>
     </div>
   );

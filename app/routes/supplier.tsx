@@ -5,7 +5,8 @@ import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/supplier";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
-import { SummaryFigure } from "~/components/summary-figure";
+import { SupplierDeliveryPanel } from "~/components/suppliers/supplier-delivery-panel";
+import { SupplierSummaryFigures } from "~/components/suppliers/supplier-summary-figures";
 import {
   SupplierCurrencyWarnings,
   SupplierFields,
@@ -24,6 +25,8 @@ import {
 } from "~/purchasing/supplier-details.server";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
 import { isDomainError } from "~/lib/domain-error";
+import { todayUtc } from "~/purchasing/current-entries";
+import { supplierDeliveryPerformance } from "~/purchase-orders/supplier-deliveries.server";
 
 function notFound(): never {
   throw data({ message: "No such supplier." }, { status: 404 });
@@ -34,12 +37,14 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const id = idFromText(params.supplierId);
   const supplier = id === null ? null : await findSupplier(id);
   if (!supplier) notFound();
-  const [history, coverage] = await Promise.all([
+  const [history, coverage, performance] = await Promise.all([
     listSupplierImports(supplier.id),
     currencyCoverage(),
+    supplierDeliveryPerformance(supplier.id, todayUtc()),
   ]);
   return {
     supplier,
+    performance,
     ...history,
     importLimit: supplierImportLimit,
     coverage,
@@ -66,6 +71,10 @@ export async function action({ request, params }: Route.ActionArgs) {
       currency: input.currency,
       leadTimeDays: input.leadTimeDays ?? null,
       notes: input.notes ?? null,
+      orderEmail: input.orderEmail ?? null,
+      metalBaseFixedAt: input.metalBaseFixedAt,
+      wireTolerancePercent: input.wireTolerancePercent,
+      pieceTolerancePercent: input.pieceTolerancePercent,
     });
   } catch (error) {
     if (!isDomainError(error)) throw error;
@@ -130,6 +139,7 @@ export default function Supplier({
     importLimit,
     coverage,
     canKeep,
+    performance,
   } = loaderData;
   const navigation = useNavigation();
   const [form, fields] = useForm({
@@ -142,6 +152,10 @@ export default function Supplier({
       leadTimeDays:
         supplier.leadTimeDays === null ? "" : String(supplier.leadTimeDays),
       notes: supplier.notes ?? "",
+      orderEmail: supplier.orderEmail ?? "",
+      metalBaseFixedAt: supplier.metalBaseFixedAt,
+      wireTolerancePercent: String(supplier.wireTolerancePercent),
+      pieceTolerancePercent: String(supplier.pieceTolerancePercent),
     },
     constraint: getZodConstraint(supplierSchema),
     shouldValidate: "onBlur",
@@ -149,7 +163,6 @@ export default function Supplier({
     onValidate: ({ formData }) =>
       parseWithZod(formData, { schema: supplierSchema }),
   });
-  const days = supplier.leadTimeDays;
   return (
     <div className="space-y-6">
       <p className="text-sm">
@@ -168,40 +181,11 @@ export default function Supplier({
         ) : null}
       </header>
 
-      <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-3 lg:grid-cols-5">
-        <SummaryFigure label="Quotes in" value={supplier.currency} emphasis />
-        <SummaryFigure
-          label="Lead time"
-          value={
-            days === null
-              ? "not given"
-              : formatQuantity(days, days === 1 ? "day" : "days")
-          }
-        />
-        <SummaryFigure
-          label="E-mail for orders"
-          value={
-            supplier.email ? (
-              <a
-                href={`mailto:${supplier.email}`}
-                className="text-copper-700 underline-offset-2 hover:underline"
-              >
-                {supplier.email}
-              </a>
-            ) : (
-              "—"
-            )
-          }
-        />
-        <SummaryFigure
-          label="Price lines"
-          value={formatQuantity(priceLineCount, "")}
-        />
-        <SummaryFigure
-          label="Supplier since"
-          value={formatDateTime(supplier.createdAt)}
-        />
-      </dl>
+      <SupplierSummaryFigures
+        supplier={supplier}
+        priceLineCount={priceLineCount}
+      />
+      <SupplierDeliveryPanel performance={performance} />
 
       <SupplierCurrencyWarnings
         currency={supplier.currency}

@@ -16,7 +16,10 @@ import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
 import type { CurrencyCoverage } from "~/purchasing/supplier-currency-warnings";
 import { currencyCoverage } from "~/purchasing/supplier-details.server";
-import { supplierSchema } from "~/purchasing/supplier-schemas";
+import {
+  supplierOrderingDefaults,
+  supplierSchema,
+} from "~/purchasing/supplier-schemas";
 import { listSupplierOverview } from "~/purchasing/supplier-overview.server";
 import { createSupplier } from "~/purchasing/suppliers.server";
 import { isDomainError } from "~/lib/domain-error";
@@ -169,7 +172,16 @@ function NewSupplierForm({
   const [form, fields] = useForm({
     id: "new-supplier",
     lastResult,
-    defaultValue: { currency: coverage.companyCurrency },
+    defaultValue: {
+      currency: coverage.companyCurrency,
+      metalBaseFixedAt: supplierOrderingDefaults.metalBaseFixedAt,
+      wireTolerancePercent: String(
+        supplierOrderingDefaults.wireTolerancePercent,
+      ),
+      pieceTolerancePercent: String(
+        supplierOrderingDefaults.pieceTolerancePercent,
+      ),
+    },
     constraint: getZodConstraint(supplierSchema),
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",

@@ -61,6 +61,7 @@ const summaryColumns = {
   sizeOrGrade: items.sizeOrGrade,
   onHand: items.onHand,
   reserved: items.reserved,
+  onOrder: items.onOrder,
   reorderPoint: items.reorderPoint,
   reorderQuantity: items.reorderQuantity,
   averageCost: items.averageCost,
@@ -124,6 +125,7 @@ function itemSummary(row: {
   sizeOrGrade: string;
   onHand: string;
   reserved: string;
+  onOrder: string;
   reorderPoint: string;
   reorderQuantity: string;
   averageCost: string;
@@ -142,6 +144,8 @@ function itemSummary(row: {
     onHand: quantityToNumber(onHand),
     reserved: quantityToNumber(reserved),
     available: quantityToNumber(onHand - reserved),
+    // Still to come on sent orders: the kept balance (items.on_order), never re-summed here.
+    onOrder: quantityToNumber(parseQuantity(row.onOrder)),
     reorderPoint: quantityToNumber(reorderPoint),
     reorderQuantity: quantityToNumber(parseQuantity(row.reorderQuantity)),
     belowReorder: reorderPoint > 0n && onHand - reserved < reorderPoint,

@@ -16,6 +16,7 @@ const wire: StockCsvItem = {
   onHand: 4.8,
   reserved: 1.25,
   available: 3.55,
+  onOrder: 25,
   reorderPoint: 5,
   reorderQuantity: 10,
   belowReorder: true,
@@ -38,6 +39,7 @@ describe("stock CSV", () => {
     expect(cell("unit")).toBe("kg");
     expect(cell("on hand")).toBe("4.8");
     expect(cell("available")).toBe("3.55");
+    expect(cell("on order")).toBe("25");
     expect(cell("below reorder point")).toBe("yes");
     expect(cell("value (company currency)")).toBe("68.16");
     expect(cell("archived")).toBe("no");

@@ -19,6 +19,7 @@ export interface StockCsvItem {
   onHand: number;
   reserved: number;
   available: number;
+  onOrder: number;
   reorderPoint: number;
   reorderQuantity: number;
   belowReorder: boolean;
@@ -40,6 +41,7 @@ const columns: { header: string; cell: (item: StockCsvItem) => Cell }[] = [
   { header: "on hand", cell: (item) => item.onHand },
   { header: "reserved", cell: (item) => item.reserved },
   { header: "available", cell: (item) => item.available },
+  { header: "on order", cell: (item) => item.onOrder },
   { header: "reorder point", cell: (item) => item.reorderPoint },
   { header: "reorder quantity", cell: (item) => item.reorderQuantity },
   {

@@ -95,6 +95,7 @@ const expectedCsvHeader = [
   "on hand",
   "reserved",
   "available",
+  "on order",
   "reorder point",
   "reorder quantity",
   "below reorder point",

@@ -165,7 +165,7 @@ describe("the low-stock e-mail and the item page", () => {
 describe("the start page", () => {
   it("shows a buyer how many alerts are open, linked to the alerts page", async () => {
     const [rows] = await testDatabase().query(
-      "SELECT COUNT(*) AS open FROM stock_alerts WHERE closed_at IS NULL",
+      "SELECT COUNT(*) AS open FROM stock_alerts WHERE closed_at IS NULL AND covered_by_order_id IS NULL",
     );
     const open = Number((rows as { open: number }[])[0]!.open);
     expect(open).toBeGreaterThan(0);
@@ -173,7 +173,7 @@ describe("the start page", () => {
     const html = await response.text();
     expect(html).toMatch(
       new RegExp(
-        `<a[^>]*href="/alerts"[^>]*>\\s*<span[^>]*>${open}</span>\\s*<span[^>]*>open low-stock alerts?</span>`,
+        `<a[^>]*href="/alerts"[^>]*>\\s*<span[^>]*>${open}</span>\\s*<span[^>]*>open low-stock alerts? to order</span>`,
       ),
     );
     const builder = await signInAs("builder");

@@ -29,6 +29,7 @@ import { purchaseOrderRouteRows } from "./route-roles.purchase-orders";
 import { purchaseOrderPageRows } from "./route-roles.purchase-order-pages";
 import { receivingRouteRows } from "./route-roles.receiving";
 import { supplierRouteRows } from "./route-roles.suppliers";
+import { onOrderRouteRows } from "./route-roles.on-order";
 import {
   byCapability,
   expectedStatus,
@@ -47,6 +48,7 @@ const table: Row[] = [
   ...purchaseOrderRouteRows,
   ...purchaseOrderPageRows,
   ...receivingRouteRows,
+  ...onOrderRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",

@@ -61,6 +61,11 @@ describe("PATCH /api/v1/suppliers/:id", () => {
       currency: "USD",
       leadTimeDays: 21,
       notes: null,
+      // Untouched ordering settings keep the database's starting values.
+      orderEmail: null,
+      metalBaseFixedAt: "order",
+      wireTolerancePercent: 10,
+      pieceTolerancePercent: 0,
     });
     const read = await get(`/api/v1/suppliers/${id}`, builder);
     expect(read.status).toBe(200);

@@ -1,5 +1,5 @@
 import { formatAmount } from "~/lib/format";
-/** The item's figures at a glance: on hand, reserved, available, reorder point, average cost, value. */
+/** The item's figures at a glance: on hand, reserved, available, on order, reorder point, average cost, value. */
 import { SummaryFigure } from "~/components/summary-figure";
 import {
   formatStockQuantity,
@@ -14,6 +14,7 @@ export function ItemSummaryFigures({
     onHand: number;
     reserved: number;
     available: number;
+    onOrder: number;
     reorderPoint: number;
     averageCost: number;
     value: number;
@@ -21,7 +22,7 @@ export function ItemSummaryFigures({
 }) {
   const unit = item.unit;
   return (
-    <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-3 lg:grid-cols-6">
+    <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-3 lg:grid-cols-7">
       <SummaryFigure
         label="On hand"
         value={formatStockQuantity(item.onHand, unit)}
@@ -35,6 +36,10 @@ export function ItemSummaryFigures({
         label="Available"
         value={formatStockQuantity(item.available, unit)}
         emphasis
+      />
+      <SummaryFigure
+        label="On order"
+        value={formatStockQuantity(item.onOrder, unit)}
       />
       <SummaryFigure
         label="Reorder point"

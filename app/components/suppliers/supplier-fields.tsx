@@ -2,6 +2,7 @@ import type { FieldMetadata } from "@conform-to/react";
 import { QuantityField } from "~/components/quantity-field";
 import { TextAreaField } from "~/components/text-area-field";
 import { TextField } from "~/components/text-field";
+import { SupplierOrderingFields } from "./supplier-ordering-fields";
 import {
   supplierCurrencyWarnings,
   type CurrencyCoverage,
@@ -53,6 +54,10 @@ export function SupplierFields({
     currency: FieldMetadata<string>;
     leadTimeDays: FieldMetadata<number | undefined>;
     notes: FieldMetadata<string | undefined>;
+    orderEmail: FieldMetadata<string | undefined>;
+    metalBaseFixedAt: FieldMetadata<string>;
+    wireTolerancePercent: FieldMetadata<number>;
+    pieceTolerancePercent: FieldMetadata<number>;
   };
   coverage: CurrencyCoverage;
 }) {
@@ -61,7 +66,7 @@ export function SupplierFields({
       <TextField field={fields.name} label="Name" autoComplete="off" />
       <TextField
         field={fields.email}
-        label="E-mail for orders"
+        label="E-mail"
         type="email"
         autoComplete="off"
       />
@@ -83,6 +88,7 @@ export function SupplierFields({
         unit="days"
       />
       <TextAreaField field={fields.notes} label="Notes" />
+      <SupplierOrderingFields fields={fields} />
     </>
   );
 }
