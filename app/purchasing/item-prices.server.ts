@@ -64,8 +64,11 @@ export async function loadItemsPricing(
     db
       .select({
         itemId: priceLines.itemId,
+        supplierId: suppliers.id,
         supplier: suppliers.name,
-        leadTimeDays: suppliers.leadTimeDays,
+        supplierLeadTimeDays: suppliers.leadTimeDays,
+        lineLeadTimeDays: priceLines.leadTimeDays,
+        packQuantity: priceLines.packQuantity,
         supplierSku: priceLines.supplierSku,
         currency: priceLines.currency,
         unitPrice: priceLines.unitPrice,
@@ -111,14 +114,20 @@ export async function loadItemsPricing(
   }));
   const linesByItem = new Map<number, PriceLine[]>();
   for (const row of rows) {
+    // The price line's own lead time, else the supplier's.
+    const leadTimeDays = row.lineLeadTimeDays ?? row.supplierLeadTimeDays;
+    const packQuantity =
+      row.packQuantity === null ? 0n : parseQuantity(row.packQuantity);
     const common = {
       itemId: String(row.itemId),
+      supplierId: row.supplierId,
       supplier: row.supplier,
       supplierSku: row.supplierSku,
       currency: row.currency,
       minQuantity: parseQuantity(row.minQuantity),
       validFrom: row.validFrom,
-      ...(row.leadTimeDays === null ? {} : { leadTimeDays: row.leadTimeDays }),
+      ...(leadTimeDays === null ? {} : { leadTimeDays }),
+      ...(packQuantity > 0n ? { packQuantity } : {}),
       sourceLine: { importId: String(row.importId ?? ""), line: row.line ?? 0 },
     };
     const line: PriceLine =

@@ -22,6 +22,7 @@ export const domainLayers = [
   ["designs"],
   ["insight"],
   ["build-orders"],
+  ["buying-plan"],
   ["components"],
   ["routes"],
 ];
