@@ -44,6 +44,7 @@ export default [
       index("routes/build-orders.tsx"),
       route(":orderId", "routes/build-order.tsx"),
     ]),
+    route("buying-plan", "routes/buying-plan.tsx"),
     ...prefix("stock", [
       index("routes/stock.tsx"),
       route("export.csv", "routes/stock-export.ts"),
@@ -102,6 +103,7 @@ export default [
     route("build-orders", "routes/api.v1.build-orders.ts"),
     route("build-orders/:orderId", "routes/api.v1.build-order.ts"),
     route("build-orders/:orderId/:step", "routes/api.v1.build-order-step.ts"),
+    route("buying-plan", "routes/api.v1.buying-plan.ts"),
     // Any other path under /api/v1: a JSON 404 for every method.
     route("*", "routes/api.v1.not-found.ts"),
   ]),

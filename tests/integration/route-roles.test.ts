@@ -23,6 +23,7 @@ import {
 } from "../support/test-database";
 
 import { buildOrderRouteRows } from "./route-roles.build-orders";
+import { buyingPlanRouteRows } from "./route-roles.buying-plan";
 import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
 import { supplierRouteRows } from "./route-roles.suppliers";
@@ -39,6 +40,7 @@ import {
 const table: Row[] = [
   ...designRouteRows,
   ...buildOrderRouteRows,
+  ...buyingPlanRouteRows,
   ...insightRouteRows,
   ...supplierRouteRows,
   {

@@ -1,0 +1,406 @@
+/**
+ * The buying plan's API against the real app and MariaDB, on a small fixture whose
+ * suggestions are worked out by hand below: two items, build orders with planned starts
+ * (one fully reserved), a sent purchase order's open line and a draft one (not on order),
+ * price lines with pack sizes, breaks and lead times. Also the build orders' planned
+ * start through their API.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { eq } from "drizzle-orm";
+import {
+  priceLines,
+  purchaseOrderLines,
+  purchaseOrders,
+  settings,
+  suppliers,
+} from "~/db/schema";
+import { addDays, dayOf } from "~/lib/calendar-days";
+import { mondayOf } from "~/buying-plan/plan-weeks";
+import { get, sendJson, signInAs } from "../support/app-client";
+import { itemIdOf, receive } from "../support/build-order-fixtures";
+import { createDesign } from "../support/design-fixtures";
+import {
+  closeTestDatabase,
+  createLocation,
+  testDb,
+  uniqueCode,
+} from "../support/test-database";
+
+interface PlanJson {
+  weeks: string[];
+  suggestions: {
+    sku: string;
+    supplierId: number | null;
+    quantity: number;
+    unitPrice: number | null;
+    currency: string | null;
+    total: number | null;
+    needBy: string;
+    orderBy: string;
+    late: boolean;
+    reason: string;
+  }[];
+  items: {
+    sku: string;
+    weeks: {
+      weekStart: string;
+      projected: number;
+      projectedWithSuggestion: number;
+    }[];
+  }[];
+}
+
+let buyer = "";
+let builder = "";
+let storekeeper = "";
+let manager = "";
+let currency = "EUR";
+const resin = uniqueCode("RES");
+const bearing = uniqueCode("BRG");
+const supplierIds: number[] = [];
+let plannedOrder = 0;
+
+// The weeks of the plan, from the Monday of the week the test runs in.
+const today = dayOf(new Date());
+const monday = mondayOf(today);
+const day = (offset: number) => addDays(monday, offset);
+
+async function createItem(
+  sku: string,
+  unit: "kg" | "pcs",
+  reorderPoint: number,
+  reorderQuantity: number,
+) {
+  const response = await sendJson(
+    "POST",
+    "/api/v1/items",
+    {
+      kind: "part",
+      sku,
+      name: `Plan test ${sku}`,
+      unit,
+      reorderPoint,
+      reorderQuantity,
+    },
+    buyer,
+  );
+  expect(response.status, await response.clone().text()).toBe(201);
+  return itemIdOf(sku);
+}
+
+async function createOrder(
+  design: { designId: number; revision: number },
+  quantity: number,
+  plannedStart?: string,
+): Promise<number> {
+  const response = await sendJson(
+    "POST",
+    "/api/v1/build-orders",
+    {
+      designId: design.designId,
+      revision: design.revision,
+      quantity,
+      ...(plannedStart ? { plannedStart } : {}),
+    },
+    builder,
+  );
+  expect(response.status, await response.clone().text()).toBe(201);
+  return ((await response.json()) as { id: number }).id;
+}
+
+async function addSupplier(name: string, leadTimeDays: number | null) {
+  const [row] = await testDb()
+    .insert(suppliers)
+    .values({ name: uniqueCode(name), currency, leadTimeDays })
+    .$returningId();
+  supplierIds.push(row!.id);
+  return row!.id;
+}
+
+beforeAll(async () => {
+  buyer = await signInAs("buyer");
+  builder = await signInAs("builder");
+  storekeeper = await signInAs("storekeeper");
+  manager = await signInAs("manager");
+  const db = testDb();
+  const [setting] = await db
+    .select({ value: settings.value })
+    .from(settings)
+    .where(eq(settings.key, "company_currency"));
+  currency = setting?.value ?? "EUR";
+
+  // Resin (kg): reorder point 5 kg, reorder quantity 10 kg. Bearings (pcs): no reorder point.
+  const resinId = await createItem(resin, "kg", 5, 10);
+  const bearingId = await createItem(bearing, "pcs", 0, 0);
+  const rack = await createLocation(uniqueCode("PL"));
+  await receive(storekeeper, {
+    sku: resin,
+    location: rack,
+    quantity: 12,
+    unitCost: 15,
+  });
+  await receive(storekeeper, {
+    sku: bearing,
+    location: rack,
+    quantity: 40,
+    unitCost: 2,
+  });
+
+  // BO-a: 2 motors × 3.5 kg resin, starting Wednesday of week 2.
+  const resinDesign = await createDesign([
+    { kind: "part", itemId: resinId, quantityPerMotor: "3.5" },
+  ]);
+  plannedOrder = await createOrder(resinDesign, 2, day(16));
+  // BO-b: 1 motor × 2 kg resin, no planned start, fully reserved (held: out of the free stock).
+  const heldDesign = await createDesign([
+    { kind: "part", itemId: resinId, quantityPerMotor: "2" },
+  ]);
+  const heldOrder = await createOrder(heldDesign, 1);
+  const reserved = await sendJson(
+    "POST",
+    `/api/v1/build-orders/${heldOrder}/reserve`,
+    {},
+    builder,
+  );
+  expect(reserved.status, await reserved.clone().text()).toBe(200);
+  // BO-c: 2 motors × 65 bearings, starting Monday of week 1.
+  const bearingDesign = await createDesign([
+    { kind: "part", itemId: bearingId, quantityPerMotor: "65" },
+  ]);
+  await createOrder(bearingDesign, 2, day(7));
+
+  // Price lines: resin from two suppliers, bearings from one.
+  const coilco = await addSupplier("Plan Coilco", 30);
+  const wirehaus = await addSupplier("Plan Wirehaus", 14);
+  const magnetix = await addSupplier("Plan Bearings", null);
+  const line = (
+    supplierId: number,
+    itemId: number,
+    unitPrice: string,
+    minQuantity: string,
+    extra: { packQuantity?: string; leadTimeDays?: number } = {},
+  ) => ({
+    supplierId,
+    itemId,
+    supplierSku: `S${supplierId}-${itemId}`,
+    currency,
+    unitPrice,
+    minQuantity,
+    validFrom: "2026-01-01",
+    ...extra,
+  });
+  await db.insert(priceLines).values([
+    // Coilco's line lead time (10 days) overrides its 30 days.
+    line(coilco, resinId, "17.0000", "0", {
+      packQuantity: "4",
+      leadTimeDays: 10,
+    }),
+    line(coilco, resinId, "16.0000", "25", {
+      packQuantity: "4",
+      leadTimeDays: 10,
+    }),
+    line(wirehaus, resinId, "21.0000", "0"),
+    line(magnetix, bearingId, "2.4000", "1", {
+      packQuantity: "10",
+      leadTimeDays: 21,
+    }),
+    line(magnetix, bearingId, "2.1000", "100", {
+      packQuantity: "10",
+      leadTimeDays: 21,
+    }),
+  ]);
+
+  // A sent order: 20 kg resin due on Tuesday of week 3. A draft order (not on order): 100 kg this week.
+  for (const [status, expectedDate, quantity] of [
+    ["sent", day(22), "20"],
+    ["draft", day(0), "100"],
+  ] as const) {
+    const [order] = await db
+      .insert(purchaseOrders)
+      .values({
+        supplierId: wirehaus,
+        status,
+        currency,
+        orderedOn: status === "sent" ? today : null,
+        userId: "demo-02-buyer",
+        updatedAt: new Date(),
+      })
+      .$returningId();
+    await db.insert(purchaseOrderLines).values({
+      orderId: order!.id,
+      lineNumber: 1,
+      itemId: resinId,
+      quantity,
+      unitPrice: "21.0000",
+      priceSource: "price_list",
+      expectedDate,
+    });
+  }
+});
+afterAll(closeTestDatabase);
+
+async function readPlan(
+  query = "?weeks=4",
+  cookie = manager,
+): Promise<PlanJson> {
+  const response = await get(`/api/v1/buying-plan${query}`, cookie);
+  expect(response.status, await response.clone().text()).toBe(200);
+  return (await response.json()) as PlanJson;
+}
+
+describe("GET /api/v1/buying-plan: a small fixture worked out by hand", () => {
+  it("weeks start on Monday of this week", async () => {
+    const plan = await readPlan();
+    expect(plan.weeks).toEqual([day(0), day(7), day(14), day(21)]);
+    expect((await readPlan("")).weeks).toHaveLength(8);
+  });
+
+  /*
+   * Resin by hand: on hand 12 kg, reserved 2 kg (BO-b holds all it needs, so it needs
+   * nothing more): free 10 kg. The draft order does not count.
+   *   week 0: 10. week 1: 10.
+   *   week 2: 10 − 7 (BO-a: 2 × 3.5 kg) = 3 < 5: short 2 kg; at least the reorder
+   *     quantity 10 kg. Coilco, 4 kg packs: 12 kg × 17.00 = 204.00 (its 25 kg break:
+   *     28 kg × 16.00 = 448.00). Wirehaus: 10 kg × 21.00 = 210.00. Coilco wins.
+   *     Need by Monday of week 2 (day 14); order by 14 − 10 (the line's lead time) = day 4.
+   *     Then 3 + 12 = 15.
+   *   week 3: 15 + 20 (the sent order, due day 22) = 35.
+   */
+  it("suggests 12 kg resin from Coilco and projects the weeks", async () => {
+    const plan = await readPlan();
+    const suggestions = plan.suggestions.filter((entry) => entry.sku === resin);
+    expect(suggestions).toEqual([
+      expect.objectContaining({
+        supplierId: supplierIds[0],
+        quantity: 12,
+        unitPrice: 17,
+        currency,
+        total: 204,
+        needBy: day(14),
+        orderBy: day(4),
+        late: day(4) < today,
+        reason: expect.stringContaining(
+          `BO-${plannedOrder} needs 7.000\u00a0kg in week of`,
+        ),
+      }),
+    ]);
+    expect(suggestions[0]!.reason).toContain(
+      "projected 2.000\u00a0kg below reorder point 5.000\u00a0kg",
+    );
+    const weeks = plan.items.find((item) => item.sku === resin)!.weeks;
+    expect(weeks.map((week) => week.projected)).toEqual([10, 10, 3, 35]);
+    expect(weeks.map((week) => week.projectedWithSuggestion)).toEqual([
+      10, 10, 15, 35,
+    ]);
+  });
+
+  /*
+   * Bearings by hand (no reorder point: stay at or above zero): 40 free.
+   *   week 1: 40 − 130 (BO-c: 2 × 65) = −90: short 90 → boxes of 10: 90 × 2.40 = 216.00;
+   *     the 100 break: 100 × 2.10 = 210.00, cheaper: 100 pieces. Need by day 7, order by
+   *     day 7 − 21 = day −14: late.
+   */
+  it("raises the bearings to the cheaper 100-piece break, late", async () => {
+    const plan = await readPlan();
+    expect(plan.suggestions.filter((entry) => entry.sku === bearing)).toEqual([
+      expect.objectContaining({
+        supplierId: supplierIds[2],
+        quantity: 100,
+        unitPrice: 2.1,
+        total: 210,
+        needBy: day(7),
+        orderBy: day(-14),
+        late: true,
+      }),
+    ]);
+  });
+
+  it("refuses a horizon outside 1–26 weeks with 400 and a message", async () => {
+    for (const weeks of ["0", "27", "abc", "8.5", "-1"]) {
+      const response = await get(`/api/v1/buying-plan?weeks=${weeks}`, manager);
+      expect(response.status, weeks).toBe(400);
+      const body = (await response.json()) as {
+        error: { fields: Record<string, string[]> };
+      };
+      expect(body.error.fields.weeks![0]).toBe(
+        "weeks must be a whole number from 1 to 26.",
+      );
+    }
+  });
+
+  it("is read by every signed-in person and not by anyone else", async () => {
+    expect((await get("/api/v1/buying-plan")).status).toBe(401);
+    expect((await get("/api/v1/buying-plan", builder)).status).toBe(200);
+  });
+});
+
+describe("build orders' planned start through the API", () => {
+  it("is returned, changed and cleared by PATCH, and refused when bad or closed", async () => {
+    const read = async () =>
+      (
+        (await (
+          await get(`/api/v1/build-orders/${plannedOrder}`, manager)
+        ).json()) as { plannedStart: string | null }
+      ).plannedStart;
+    expect(await read()).toBe(day(16));
+    const patch = (body: unknown) =>
+      sendJson("PATCH", `/api/v1/build-orders/${plannedOrder}`, body, builder);
+
+    const moved = await patch({ plannedStart: day(23) });
+    expect(moved.status, await moved.clone().text()).toBe(200);
+    expect(await moved.json()).toMatchObject({
+      id: plannedOrder,
+      status: "draft",
+      plannedStart: day(23),
+    });
+    expect(await read()).toBe(day(23));
+
+    const bad = await patch({ plannedStart: "2026-02-30" });
+    expect(bad.status).toBe(400);
+    expect(
+      ((await bad.json()) as { error: { fields: Record<string, string[]> } })
+        .error.fields.plannedStart,
+    ).toBeDefined();
+    expect((await patch({})).status).toBe(400);
+    expect(await read()).toBe(day(23));
+
+    const cleared = await patch({ plannedStart: null });
+    expect(cleared.status).toBe(200);
+    expect(await read()).toBeNull();
+    await patch({ plannedStart: day(16) });
+
+    // A bad planned start on creation is refused with the field named.
+    const created = await sendJson(
+      "POST",
+      "/api/v1/build-orders",
+      { designId: 1, revision: 1, quantity: 1, plannedStart: "next week" },
+      builder,
+    );
+    expect(created.status).toBe(400);
+  });
+
+  it("refuses to change the planned start of a cancelled order (409), changing nothing", async () => {
+    const design = await createDesign([
+      { kind: "part", itemId: await itemIdOf(resin), quantityPerMotor: "1" },
+    ]);
+    const id = await createOrder(design, 1, day(9));
+    const cancelled = await sendJson(
+      "POST",
+      `/api/v1/build-orders/${id}/cancel`,
+      {},
+      builder,
+    );
+    expect(cancelled.status).toBe(200);
+    const refused = await sendJson(
+      "PATCH",
+      `/api/v1/build-orders/${id}`,
+      { plannedStart: day(30) },
+      builder,
+    );
+    expect(refused.status).toBe(409);
+    const order = (await (
+      await get(`/api/v1/build-orders/${id}`, manager)
+    ).json()) as { plannedStart: string };
+    expect(order.plannedStart).toBe(day(9));
+  });
+});

@@ -1,0 +1,25 @@
+/** Route × role rows of the buying plan's page and API (see route-roles.test.ts). */
+import type { RouteRoleRow } from "../support/route-role-row";
+
+export const buyingPlanRouteRows: RouteRoleRow[] = [
+  // Everyone signed in reads the plan.
+  {
+    file: "routes/buying-plan.tsx",
+    method: "GET",
+    path: "/buying-plan",
+    expect: { anonymous: 302, signedIn: 200 },
+  },
+  {
+    file: "routes/api.v1.buying-plan.ts",
+    method: "GET",
+    path: "/api/v1/buying-plan",
+    expect: { anonymous: 401, signedIn: 200 },
+  },
+  // The plan's API takes GET only.
+  {
+    file: "routes/api.v1.buying-plan.ts",
+    method: "POST",
+    path: "/api/v1/buying-plan",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+];
