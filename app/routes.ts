@@ -104,6 +104,20 @@ export default [
     route("build-orders/:orderId", "routes/api.v1.build-order.ts"),
     route("build-orders/:orderId/:step", "routes/api.v1.build-order-step.ts"),
     route("buying-plan", "routes/api.v1.buying-plan.ts"),
+    route("purchase-orders", "routes/api.v1.purchase-orders.ts"),
+    route("purchase-orders/:orderId", "routes/api.v1.purchase-order.ts"),
+    route(
+      "purchase-orders/:orderId/send",
+      "routes/api.v1.purchase-order-send.ts",
+    ),
+    route(
+      "purchase-orders/:orderId/cancel",
+      "routes/api.v1.purchase-order-cancel.ts",
+    ),
+    route(
+      "purchase-orders/:orderId/close",
+      "routes/api.v1.purchase-order-close.ts",
+    ),
     // Any other path under /api/v1: a JSON 404 for every method.
     route("*", "routes/api.v1.not-found.ts"),
   ]),

@@ -50,27 +50,5 @@ export const buildOrderListQuerySchema = z.object({
   pageSize: pageSizeParam("pageSize", 200, 50),
 });
 
-/** Reads an optional JSON body (none, or an empty one, reads as {}) and validates it; throws a 400 naming each bad field. */
-export async function readOptionalJsonBody<Schema extends z.ZodType>(
-  request: Request,
-  schema: Schema,
-): Promise<z.output<Schema>> {
-  const text = await request.text();
-  let body: unknown = {};
-  if (text.trim() !== "") {
-    try {
-      body = JSON.parse(text);
-    } catch {
-      throw apiError(
-        400,
-        "The body must be JSON (Content-Type: application/json).",
-      );
-    }
-  }
-  const parsed = schema.safeParse(body);
-  if (parsed.success) return parsed.data;
-  const fields: Record<string, string[]> = {};
-  for (const issue of parsed.error.issues)
-    (fields[issue.path.join(".") || "body"] ??= []).push(issue.message);
-  throw apiError(400, "Some fields are missing or wrong.", fields);
-}
+/** Kept here for the build-order routes; it lives with the other body readers. */
+export { readOptionalJsonBody } from "~/lib/api.server";

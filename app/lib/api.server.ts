@@ -46,6 +46,32 @@ export async function readJsonBody<Schema extends z.ZodType>(
   );
 }
 
+/** Reads an optional JSON body (none, or an empty one, reads as {}) and validates it; throws a 400 naming each bad field. */
+export async function readOptionalJsonBody<Schema extends z.ZodType>(
+  request: Request,
+  schema: Schema,
+): Promise<z.output<Schema>> {
+  const text = await request.text();
+  let body: unknown = {};
+  if (text.trim() !== "") {
+    try {
+      body = JSON.parse(text);
+    } catch {
+      throw apiError(
+        400,
+        "The body must be JSON (Content-Type: application/json).",
+      );
+    }
+  }
+  const parsed = schema.safeParse(body);
+  if (parsed.success) return parsed.data;
+  throw apiError(
+    400,
+    "Some fields are missing or wrong.",
+    fieldsOf(parsed.error.issues, "body"),
+  );
+}
+
 /** Reads and validates a request's query string (empty values dropped); throws a 400 naming each bad parameter. */
 export function readSearchParams<Schema extends z.ZodType>(
   request: Request,

@@ -3,12 +3,14 @@
  * handed to SMTP; a message the SMTP server did not accept stays unsent and
  * `npm run mail:retry` sends it later. Sending never throws to the caller.
  * A message's one-time link is stored apart from its text and dropped once
- * SMTP has taken it (app/mail/one-time-link.ts).
+ * SMTP has taken it (app/mail/one-time-link.ts). Files sent with a message (a
+ * purchase order's PDF and CSV) are kept with it in mail_attachments, so a
+ * retry sends the same files and the admin's outbox names them.
  */
 import { and, asc, eq, isNull, lt } from "drizzle-orm";
 import nodemailer, { type Transporter } from "nodemailer";
 import { db, type Database, type Transaction } from "~/db/client.server";
-import { mailOutbox } from "~/db/schema";
+import { mailAttachments, mailOutbox } from "~/db/schema";
 import { retryWriteConflicts } from "~/db/write-transaction.server";
 import { areaLogger } from "~/observability/logger.server";
 import { textToSend, textWithoutLink } from "./one-time-link";
@@ -46,6 +48,14 @@ export interface OutgoingMail {
   text: string;
   /** A link that must reach the recipient only (it appears in `text`). */
   oneTimeLink?: string;
+  /** Files sent with the message, kept with it in the outbox. */
+  attachments?: readonly MailAttachment[];
+}
+
+export interface MailAttachment {
+  fileName: string;
+  contentType: string;
+  content: Buffer;
 }
 
 interface QueuedMessage {
@@ -55,6 +65,8 @@ interface QueuedMessage {
   textBody: string;
   oneTimeLink: string | null;
   attempts: number;
+  /** Known when just queued; read from mail_attachments when undefined (a retry). */
+  attachments?: readonly MailAttachment[];
 }
 
 /** The outbox row for a message: its one-time link kept apart from the text. */
@@ -69,15 +81,40 @@ function outboxRow(mail: OutgoingMail) {
   };
 }
 
+/** The files kept with an outbox message, in the order they were added. */
+async function storedAttachments(outboxId: number): Promise<MailAttachment[]> {
+  const rows = await db
+    .select({
+      fileName: mailAttachments.fileName,
+      contentType: mailAttachments.contentType,
+      contentBase64: mailAttachments.contentBase64,
+    })
+    .from(mailAttachments)
+    .where(eq(mailAttachments.outboxId, outboxId))
+    .orderBy(asc(mailAttachments.id));
+  return rows.map((row) => ({
+    fileName: row.fileName,
+    contentType: row.contentType,
+    content: Buffer.from(row.contentBase64, "base64"),
+  }));
+}
+
 /** Hands one queued message to SMTP and records the outcome on its outbox row. */
 async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
   const attempts = message.attempts + 1;
   try {
+    const attachments =
+      message.attachments ?? (await storedAttachments(message.id));
     await smtp().sendMail({
       from: fromAddress(),
       to: message.toAddress,
       subject: message.subject,
       text: textToSend(message.textBody, message.oneTimeLink),
+      attachments: attachments.map((attachment) => ({
+        filename: attachment.fileName,
+        contentType: attachment.contentType,
+        content: attachment.content,
+      })),
     });
   } catch (error) {
     const reason = error instanceof Error ? error.message : String(error);
@@ -128,16 +165,11 @@ async function attemptDelivery(message: QueuedMessage): Promise<boolean> {
 export async function queueMail(
   mail: OutgoingMail,
 ): Promise<{ outboxId: number; sent: boolean }> {
-  const queued = outboxRow(mail);
-  const [inserted] = await db.insert(mailOutbox).values(queued).$returningId();
-  if (!inserted)
+  const [queued] = await writeToOutbox(db, [mail]);
+  if (!queued)
     throw new Error("The outbox did not return the new message's id.");
-  const sent = await attemptDelivery({
-    ...queued,
-    id: inserted.id,
-    attempts: 0,
-  });
-  return { outboxId: inserted.id, sent };
+  const sent = await attemptDelivery(queued);
+  return { outboxId: queued.id, sent };
 }
 
 /** Deliveries started by `queueMailForLater` and not yet finished. */
@@ -181,7 +213,17 @@ export async function writeToOutbox(
       .$returningId();
     if (!inserted)
       throw new Error("The outbox did not return the new message's id.");
-    queued.push({ ...message, id: inserted.id, attempts: 0 });
+    const attachments = mail.attachments ?? [];
+    for (const attachment of attachments) {
+      await writer.insert(mailAttachments).values({
+        outboxId: inserted.id,
+        fileName: attachment.fileName,
+        contentType: attachment.contentType,
+        contentBase64: attachment.content.toString("base64"),
+        byteSize: attachment.content.length,
+      });
+    }
+    queued.push({ ...message, id: inserted.id, attempts: 0, attachments });
   }
   return queued;
 }
