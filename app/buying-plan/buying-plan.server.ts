@@ -34,6 +34,8 @@ const maxPlannedItems = 2_000;
 export interface LoadedPlan extends BuyingPlan {
   today: CalendarDate;
   companyCurrency: string;
+  /** Draft purchase orders (not on order yet) holding a line of each item, by SKU. */
+  draftsBySku: Record<string, number[]>;
 }
 
 /** The plan over `weeks` weeks (1–26) from the week of `today` (UTC). */
@@ -120,10 +122,34 @@ export async function loadBuyingPlan(
     reorderPoint: parseQuantity(row.reorderPoint),
     reorderQuantity: parseQuantity(row.reorderQuantity),
   }));
-  const [pricing, currency] = await Promise.all([
+  const [pricing, currency, draftRows] = await Promise.all([
     loadItemsPricing(planItems.map((item) => item.sku)),
     companyCurrency(),
+    itemIds.length === 0
+      ? []
+      : db
+          .selectDistinct({
+            itemId: purchaseOrderLines.itemId,
+            orderId: purchaseOrders.id,
+          })
+          .from(purchaseOrderLines)
+          .innerJoin(
+            purchaseOrders,
+            eq(purchaseOrders.id, purchaseOrderLines.orderId),
+          )
+          .where(
+            and(
+              inArray(purchaseOrderLines.itemId, itemIds),
+              eq(purchaseOrders.status, "draft"),
+            ),
+          )
+          .orderBy(purchaseOrders.id),
   ]);
+  const draftsBySku: Record<string, number[]> = {};
+  for (const row of draftRows) {
+    const sku = planItems.find((item) => item.itemId === row.itemId)?.sku;
+    if (sku) (draftsBySku[sku] ??= []).push(row.orderId);
+  }
   const priced = [...pricing.values()];
   const plan = buyingPlan({
     today,
@@ -150,5 +176,5 @@ export async function loadBuyingPlan(
     rates: priced[0]?.rates ?? [],
     companyCurrency: currency,
   });
-  return { ...plan, today, companyCurrency: currency };
+  return { ...plan, today, companyCurrency: currency, draftsBySku };
 }

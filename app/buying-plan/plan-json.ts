@@ -8,6 +8,7 @@ import { buildOrderReference } from "~/build-orders/build-order-status";
 import type { CalendarDate } from "~/lib/calendar-days";
 import { quantityToNumber } from "~/lib/decimal-amounts";
 import { amountForQuantity, fromThousandths } from "~/pricing/money";
+import { purchaseOrderNumber } from "~/purchase-orders/purchase-order-status";
 import type { BuyingPlan, Suggestion } from "./buying-plan";
 
 const money = (tenThousandths: bigint) => Number(tenThousandths) / 10_000;
@@ -19,7 +20,7 @@ export function suggestionKey(
   return `${suggestion.item.sku}@${suggestion.needBy}`;
 }
 
-function suggestionJson(suggestion: Suggestion) {
+function suggestionJson(suggestion: Suggestion, drafts: readonly number[]) {
   const order = suggestion.order;
   const candidate = order?.candidate ?? null;
   return {
@@ -56,6 +57,8 @@ function suggestionJson(suggestion: Suggestion) {
     orderBy: suggestion.orderBy,
     late: suggestion.late,
     reason: suggestion.reason,
+    /** Draft purchase orders already holding the item (drafts are not on order: send them, or this suggestion stays). */
+    draftOrders: drafts.map((id) => ({ id, number: purchaseOrderNumber(id) })),
     needs: suggestion.needs.map((need) => ({
       buildOrderId: need.buildOrderId,
       reference: buildOrderReference(need.buildOrderId),
@@ -67,14 +70,20 @@ function suggestionJson(suggestion: Suggestion) {
 export type SuggestionJson = ReturnType<typeof suggestionJson>;
 
 export function buyingPlanJson(
-  plan: BuyingPlan & { today: CalendarDate; companyCurrency: string },
+  plan: BuyingPlan & {
+    today: CalendarDate;
+    companyCurrency: string;
+    draftsBySku?: Record<string, number[]>;
+  },
 ) {
   return {
     today: plan.today,
     /** Weeks start on Monday; the first is the week of `today`. */
     weeks: plan.weeks,
     companyCurrency: plan.companyCurrency,
-    suggestions: plan.suggestions.map(suggestionJson),
+    suggestions: plan.suggestions.map((suggestion) =>
+      suggestionJson(suggestion, plan.draftsBySku?.[suggestion.item.sku] ?? []),
+    ),
     items: plan.items.map(({ item, weeks }) => ({
       sku: item.sku,
       name: item.name,

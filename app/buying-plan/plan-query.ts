@@ -9,3 +9,14 @@ export const buyingPlanQuerySchema = z.object({
     max: planHorizon.max,
   }).default(planHorizon.default),
 });
+
+/** The "Make draft orders" form: the horizon shown and the suggestions ticked. */
+export const draftOrdersFormSchema = z.object({
+  weeks: buyingPlanQuerySchema.shape.weeks,
+  suggestion: z
+    .array(z.string().max(80, "A suggestion is named by its item and week."), {
+      error: "Choose at least one suggestion.",
+    })
+    .min(1, "Choose at least one suggestion.")
+    .max(500, "Choose at most 500 suggestions at once."),
+});

@@ -1,12 +1,19 @@
+import { data } from "react-router";
 import type { Route } from "./+types/buying-plan";
-import { requireUser } from "~/auth/guard.server";
+import { requireCapability, requireUser } from "~/auth/guard.server";
 import { loadBuyingPlan } from "~/buying-plan/buying-plan.server";
 import { buyingPlanJson } from "~/buying-plan/plan-json";
-import { buyingPlanQuerySchema } from "~/buying-plan/plan-query";
+import { makeDraftOrders } from "~/buying-plan/plan-drafts.server";
+import {
+  buyingPlanQuerySchema,
+  draftOrdersFormSchema,
+} from "~/buying-plan/plan-query";
+import type { DraftOrdersAnswer } from "~/components/buying-plan/draft-orders-form";
 import { HorizonForm } from "~/components/buying-plan/horizon-form";
 import { ItemProjection } from "~/components/buying-plan/item-projection";
 import { SuggestionsPanel } from "~/components/buying-plan/suggestions-panel";
 import { userCan } from "~/lib/capabilities";
+import { isDomainError } from "~/lib/domain-error";
 import { readSearchLeniently } from "~/lib/search-params";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -30,11 +37,46 @@ export async function loader({ request }: Route.LoaderArgs) {
   };
 }
 
+/** "Make draft orders" (buyers, admins): the ticked suggestions as draft purchase orders, one per supplier. */
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireCapability(request, "orderPurchases");
+  const form = await request.formData();
+  const parsed = draftOrdersFormSchema.safeParse({
+    weeks: form.get("weeks") ?? undefined,
+    suggestion: form.getAll("suggestion"),
+  });
+  if (!parsed.success)
+    return data<DraftOrdersAnswer>(
+      {
+        made: [],
+        refused: null,
+        errors: [...new Set(parsed.error.issues.map((issue) => issue.message))],
+      },
+      { status: 400 },
+    );
+  try {
+    return await makeDraftOrders(
+      parsed.data.weeks,
+      parsed.data.suggestion,
+      user.id,
+    );
+  } catch (error) {
+    if (!isDomainError(error)) throw error;
+    return data<DraftOrdersAnswer>(
+      { made: [], refused: null, errors: [error.message] },
+      { status: error.status === 404 ? 409 : error.status },
+    );
+  }
+}
+
 export const meta: Route.MetaFunction = () => [
   { title: "Buying plan · Turnledger" },
 ];
 
-export default function BuyingPlan({ loaderData }: Route.ComponentProps) {
+export default function BuyingPlan({
+  loaderData,
+  actionData,
+}: Route.ComponentProps) {
   const { plan, weeks, shownSku, canOrder } = loaderData;
   const shown = plan.items.find((item) => item.sku === shownSku) ?? null;
   const itemHref = (sku: string) =>
@@ -57,6 +99,7 @@ export default function BuyingPlan({ loaderData }: Route.ComponentProps) {
         suggestions={plan.suggestions}
         weeks={weeks}
         canOrder={canOrder}
+        answer={(actionData as DraftOrdersAnswer | undefined) ?? null}
       />
       <ItemProjection items={plan.items} shown={shown} itemHref={itemHref} />
     </div>

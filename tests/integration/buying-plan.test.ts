@@ -6,8 +6,9 @@
  * start through their API.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { eq } from "drizzle-orm";
+import { and, asc, eq, like } from "drizzle-orm";
 import {
+  items,
   priceLines,
   purchaseOrderLines,
   purchaseOrders,
@@ -16,7 +17,7 @@ import {
 } from "~/db/schema";
 import { addDays, dayOf } from "~/lib/calendar-days";
 import { mondayOf } from "~/buying-plan/plan-weeks";
-import { get, sendJson, signInAs } from "../support/app-client";
+import { get, postForm, sendJson, signInAs } from "../support/app-client";
 import { itemIdOf, receive } from "../support/build-order-fixtures";
 import { createDesign } from "../support/design-fixtures";
 import {
@@ -331,6 +332,113 @@ describe("GET /api/v1/buying-plan: a small fixture worked out by hand", () => {
   it("is read by every signed-in person and not by anyone else", async () => {
     expect((await get("/api/v1/buying-plan")).status).toBe(401);
     expect((await get("/api/v1/buying-plan", builder)).status).toBe(200);
+  });
+});
+
+describe("Make draft orders from the plan (POST /buying-plan)", () => {
+  const draftsOf = () =>
+    testDb()
+      .select({
+        orderId: purchaseOrders.id,
+        supplierId: purchaseOrders.supplierId,
+        status: purchaseOrders.status,
+        sku: items.sku,
+        quantity: purchaseOrderLines.quantity,
+        unitPrice: purchaseOrderLines.unitPrice,
+        requestedDate: purchaseOrderLines.requestedDate,
+      })
+      .from(purchaseOrders)
+      .innerJoin(
+        purchaseOrderLines,
+        eq(purchaseOrderLines.orderId, purchaseOrders.id),
+      )
+      .innerJoin(items, eq(items.id, purchaseOrderLines.itemId))
+      .where(
+        and(
+          eq(purchaseOrders.status, "draft"),
+          like(purchaseOrders.notes, "From the buying plan%"),
+        ),
+      )
+      .orderBy(asc(purchaseOrders.id));
+
+  it("refuses people who may not order, a stale choice and an empty one, writing nothing", async () => {
+    const fields = { weeks: "4", suggestion: [`${resin}@${day(14)}`] };
+    expect((await postForm("/buying-plan", fields, storekeeper)).status).toBe(
+      403,
+    );
+    expect((await postForm("/buying-plan", fields, builder)).status).toBe(403);
+    // A week the plan does not suggest (the page was shown before the plan changed).
+    const stale = await postForm(
+      "/buying-plan",
+      { weeks: "4", suggestion: [`${resin}@${day(14)}`, `${resin}@${day(7)}`] },
+      buyer,
+    );
+    expect(stale.status).toBe(409);
+    expect((await postForm("/buying-plan", { weeks: "4" }, buyer)).status).toBe(
+      400,
+    );
+    expect(
+      (await postForm("/buying-plan", { ...fields, weeks: "40" }, buyer))
+        .status,
+    ).toBe(400);
+    expect(await draftsOf()).toEqual([]);
+  });
+
+  it("makes one draft per supplier at the plan's quantities, priced from the lists", async () => {
+    const response = await postForm(
+      "/buying-plan",
+      {
+        weeks: "4",
+        suggestion: [`${resin}@${day(14)}`, `${bearing}@${day(7)}`],
+      },
+      buyer,
+    );
+    expect(response.status).toBe(200);
+    const drafts = await draftsOf();
+    // Hand-worked above: 12 kg resin from Coilco at 17.00, 100 bearings at 2.10; each
+    // requested for its need-by Monday, or today when that Monday has passed.
+    expect(
+      drafts.map(
+        ({ supplierId, status, sku, quantity, unitPrice, requestedDate }) => ({
+          supplierId,
+          status,
+          sku,
+          quantity,
+          unitPrice,
+          requestedDate,
+        }),
+      ),
+    ).toEqual([
+      {
+        supplierId: supplierIds[0],
+        status: "draft",
+        sku: resin,
+        quantity: "12.000",
+        unitPrice: "17.0000",
+        requestedDate: day(14) < today ? today : day(14),
+      },
+      {
+        supplierId: supplierIds[2],
+        status: "draft",
+        sku: bearing,
+        quantity: "100.000",
+        unitPrice: "2.1000",
+        requestedDate: day(7) < today ? today : day(7),
+      },
+    ]);
+    expect(new Set(drafts.map((draft) => draft.orderId)).size).toBe(2);
+    const page = await response.text();
+    for (const draft of drafts)
+      expect(page).toContain(`/purchase-orders/${draft.orderId}`);
+
+    // Drafts are not on order: the plan still suggests them, naming the drafts.
+    const plan = await readPlan();
+    const resinSuggestion = plan.suggestions.find(
+      (entry) => entry.sku === resin,
+    ) as { draftOrders: { id: number }[] } | undefined;
+    expect(resinSuggestion?.draftOrders.map((draft) => draft.id)).toEqual([
+      drafts[0]!.orderId,
+    ]);
   });
 });
 

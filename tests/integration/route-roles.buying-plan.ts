@@ -1,5 +1,5 @@
 /** Route × role rows of the buying plan's page and API (see route-roles.test.ts). */
-import type { RouteRoleRow } from "../support/route-role-row";
+import { byCapability, type RouteRoleRow } from "../support/route-role-row";
 
 export const buyingPlanRouteRows: RouteRoleRow[] = [
   // Everyone signed in reads the plan.
@@ -8,6 +8,13 @@ export const buyingPlanRouteRows: RouteRoleRow[] = [
     method: "GET",
     path: "/buying-plan",
     expect: { anonymous: 302, signedIn: 200 },
+  },
+  // Buyers (and admins) make draft orders from it; an empty choice gets a message.
+  {
+    file: "routes/buying-plan.tsx",
+    method: "POST",
+    path: "/buying-plan",
+    expect: { anonymous: 302, ...byCapability("orderPurchases", 400) },
   },
   {
     file: "routes/api.v1.buying-plan.ts",

@@ -7,7 +7,6 @@
  * for screen readers; the table of weeks below holds every figure.
  */
 import { AxisLeft } from "@visx/axis";
-import { GlyphDiamond, GlyphTriangle } from "@visx/glyph";
 import { scaleLinear } from "@visx/scale";
 import { Line, LinePath } from "@visx/shape";
 import {
@@ -17,6 +16,7 @@ import {
 import { formatDay } from "~/lib/format";
 import { quantityText } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
+import { WeekMarkers } from "./week-markers";
 
 const frame = {
   width: 720,
@@ -26,7 +26,6 @@ const frame = {
   top: 16,
   bottom: 36,
 };
-const glyph = Math.PI * 4.5 ** 2;
 
 export function ProjectedStockChart({
   sku,
@@ -133,42 +132,12 @@ export function ProjectedStockChart({
           strokeLinejoin="round"
         />
         {chart.points.map((point) => (
-          <g key={point.weekStart}>
-            {point.needed > 0 ? (
-              <g transform={`rotate(180 ${point.x - 12} ${chart.zeroY + 12})`}>
-                <title>{`Needed: ${formatStockQuantity(point.needed, unit)}`}</title>
-                <GlyphTriangle
-                  left={point.x - 12}
-                  top={chart.zeroY + 12}
-                  size={glyph}
-                  className="fill-danger"
-                />
-              </g>
-            ) : null}
-            {point.arriving > 0 ? (
-              <g>
-                <title>{`On order, due: ${formatStockQuantity(point.arriving, unit)}`}</title>
-                <GlyphTriangle
-                  left={point.x + 12}
-                  top={chart.zeroY - 12}
-                  size={glyph}
-                  className="fill-field"
-                />
-              </g>
-            ) : null}
-            {point.suggested > 0 ? (
-              <g>
-                <title>{`Suggested: ${formatStockQuantity(point.suggested, unit)}`}</title>
-                <GlyphDiamond
-                  left={point.x}
-                  top={point.withY}
-                  size={glyph * 1.4}
-                  className="fill-sheet stroke-copper-700"
-                  strokeWidth={2}
-                />
-              </g>
-            ) : null}
-          </g>
+          <WeekMarkers
+            key={point.weekStart}
+            point={point}
+            zeroY={chart.zeroY}
+            unit={unit}
+          />
         ))}
       </svg>
       <figcaption className="mt-1 text-xs text-graphite-500">

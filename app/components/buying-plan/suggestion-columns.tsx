@@ -22,7 +22,10 @@ export function suggestionColumns(formId: string | null) {
                 name="suggestion"
                 value={row.original.key}
                 form={formId}
-                defaultChecked={row.original.supplierId !== null}
+                defaultChecked={
+                  row.original.supplierId !== null &&
+                  row.original.draftOrders.length === 0
+                }
                 disabled={row.original.supplierId === null}
                 aria-label={`Order ${row.original.sku} for the week of ${formatDay(row.original.needBy)}`}
                 className="size-4 accent-copper-600"
@@ -120,7 +123,28 @@ export function suggestionColumns(formId: string | null) {
     }),
     column.accessor("reason", {
       header: "Why",
-      cell: (info) => <span className="text-sm">{info.getValue()}</span>,
+      cell: (info) => (
+        <span className="text-sm">
+          {info.getValue()}
+          {info.row.original.draftOrders.length > 0 ? (
+            <span className="mt-1 block text-xs text-caution">
+              Already in draft{" "}
+              {info.row.original.draftOrders.map((draft, index) => (
+                <span key={draft.id}>
+                  {index > 0 ? ", " : ""}
+                  <Link
+                    to={`/purchase-orders/${draft.id}`}
+                    className="underline underline-offset-2"
+                  >
+                    {draft.number}
+                  </Link>
+                </span>
+              ))}
+              : send it, or this stays suggested.
+            </span>
+          ) : null}
+        </span>
+      ),
     }),
   ];
 }

@@ -2,16 +2,25 @@
 import type { SuggestionJson } from "~/buying-plan/plan-json";
 import { DataTable } from "~/components/data-table";
 import { countText } from "~/lib/unit-text";
+import {
+  DraftOrdersForm,
+  draftOrdersFormId,
+  type DraftOrdersAnswer,
+} from "./draft-orders-form";
 import { suggestionColumns } from "./suggestion-columns";
 
 export function SuggestionsPanel({
   suggestions,
+  weeks,
   canOrder,
+  answer,
 }: {
   suggestions: SuggestionJson[];
   weeks: number;
   canOrder: boolean;
+  answer: DraftOrdersAnswer | null;
 }) {
+  const ordering = canOrder && suggestions.length > 0;
   const late = suggestions.filter((suggestion) => suggestion.late).length;
   return (
     <section aria-labelledby="suggestions-heading" className="space-y-3">
@@ -27,10 +36,13 @@ export function SuggestionsPanel({
       </div>
       <DataTable
         caption="Suggested orders, earliest order-by day first"
-        columns={suggestionColumns(canOrder ? null : null)}
+        columns={suggestionColumns(ordering ? draftOrdersFormId : null)}
         rows={suggestions}
         emptyText="No suggestion: the stock and open orders cover every week."
       />
+      {ordering || answer ? (
+        <DraftOrdersForm weeks={weeks} answer={answer} />
+      ) : null}
     </section>
   );
 }
