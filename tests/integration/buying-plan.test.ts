@@ -60,6 +60,8 @@ const resin = uniqueCode("RES");
 const bearing = uniqueCode("BRG");
 const supplierIds: number[] = [];
 let plannedOrder = 0;
+/** The fixture's own draft order holding resin. */
+let fixtureDraft = 0;
 
 // The weeks of the plan, from the Monday of the week the test runs in.
 const today = dayOf(new Date());
@@ -227,6 +229,7 @@ beforeAll(async () => {
         updatedAt: new Date(),
       })
       .$returningId();
+    if (status === "draft") fixtureDraft = order!.id;
     await db.insert(purchaseOrderLines).values({
       orderId: order!.id,
       lineNumber: 1,
@@ -395,8 +398,9 @@ describe("Make draft orders from the plan (POST /buying-plan)", () => {
     );
     expect(response.status).toBe(200);
     const drafts = await draftsOf();
-    // Hand-worked above: 12 kg resin from Coilco at 17.00, 100 bearings at 2.10; each
-    // requested for its need-by Monday, or today when that Monday has passed.
+    // Hand-worked above: 100 bearings at 2.10, 12 kg resin from Coilco at 17.00 (in the
+    // plan's order, earliest order-by day first); each requested for its need-by Monday,
+    // or today when that Monday has passed.
     expect(
       drafts.map(
         ({ supplierId, status, sku, quantity, unitPrice, requestedDate }) => ({
@@ -410,20 +414,20 @@ describe("Make draft orders from the plan (POST /buying-plan)", () => {
       ),
     ).toEqual([
       {
-        supplierId: supplierIds[0],
-        status: "draft",
-        sku: resin,
-        quantity: "12.000",
-        unitPrice: "17.0000",
-        requestedDate: day(14) < today ? today : day(14),
-      },
-      {
         supplierId: supplierIds[2],
         status: "draft",
         sku: bearing,
         quantity: "100.000",
         unitPrice: "2.1000",
         requestedDate: day(7) < today ? today : day(7),
+      },
+      {
+        supplierId: supplierIds[0],
+        status: "draft",
+        sku: resin,
+        quantity: "12.000",
+        unitPrice: "17.0000",
+        requestedDate: day(14) < today ? today : day(14),
       },
     ]);
     expect(new Set(drafts.map((draft) => draft.orderId)).size).toBe(2);
@@ -437,7 +441,8 @@ describe("Make draft orders from the plan (POST /buying-plan)", () => {
       (entry) => entry.sku === resin,
     ) as { draftOrders: { id: number }[] } | undefined;
     expect(resinSuggestion?.draftOrders.map((draft) => draft.id)).toEqual([
-      drafts[0]!.orderId,
+      fixtureDraft,
+      drafts.find((draft) => draft.sku === resin)!.orderId,
     ]);
   });
 });
