@@ -7,25 +7,15 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { and, asc, eq, like } from "drizzle-orm";
-import {
-  items,
-  priceLines,
-  purchaseOrderLines,
-  purchaseOrders,
-  settings,
-  suppliers,
-} from "~/db/schema";
-import { addDays, dayOf } from "~/lib/calendar-days";
-import { mondayOf } from "~/buying-plan/plan-weeks";
+import { items, purchaseOrderLines, purchaseOrders } from "~/db/schema";
 import { get, postForm, sendJson, signInAs } from "../support/app-client";
-import { itemIdOf, receive } from "../support/build-order-fixtures";
-import { createDesign } from "../support/design-fixtures";
+import { itemIdOf } from "../support/build-order-fixtures";
 import {
-  closeTestDatabase,
-  createLocation,
-  testDb,
-  uniqueCode,
-} from "../support/test-database";
+  createBuyingPlanFixture,
+  type BuyingPlanFixture,
+} from "../support/buying-plan-fixtures";
+import { createDesign } from "../support/design-fixtures";
+import { closeTestDatabase, testDb } from "../support/test-database";
 
 interface PlanJson {
   weeks: string[];
@@ -55,191 +45,32 @@ let buyer = "";
 let builder = "";
 let storekeeper = "";
 let manager = "";
-let currency = "EUR";
-const resin = uniqueCode("RES");
-const bearing = uniqueCode("BRG");
-const supplierIds: number[] = [];
+let fixture: BuyingPlanFixture;
+// Filled from the fixture before the tests run (see tests/support/buying-plan-fixtures.ts).
+let currency = "";
+let resin = "";
+let bearing = "";
+let supplierIds: number[] = [];
 let plannedOrder = 0;
-/** The fixture's own draft order holding resin. */
 let fixtureDraft = 0;
-
-// The weeks of the plan, from the Monday of the week the test runs in.
-const today = dayOf(new Date());
-const monday = mondayOf(today);
-const day = (offset: number) => addDays(monday, offset);
-
-async function createItem(
-  sku: string,
-  unit: "kg" | "pcs",
-  reorderPoint: number,
-  reorderQuantity: number,
-) {
-  const response = await sendJson(
-    "POST",
-    "/api/v1/items",
-    {
-      kind: "part",
-      sku,
-      name: `Plan test ${sku}`,
-      unit,
-      reorderPoint,
-      reorderQuantity,
-    },
-    buyer,
-  );
-  expect(response.status, await response.clone().text()).toBe(201);
-  return itemIdOf(sku);
-}
-
-async function createOrder(
-  design: { designId: number; revision: number },
-  quantity: number,
-  plannedStart?: string,
-): Promise<number> {
-  const response = await sendJson(
-    "POST",
-    "/api/v1/build-orders",
-    {
-      designId: design.designId,
-      revision: design.revision,
-      quantity,
-      ...(plannedStart ? { plannedStart } : {}),
-    },
-    builder,
-  );
-  expect(response.status, await response.clone().text()).toBe(201);
-  return ((await response.json()) as { id: number }).id;
-}
-
-async function addSupplier(name: string, leadTimeDays: number | null) {
-  const [row] = await testDb()
-    .insert(suppliers)
-    .values({ name: uniqueCode(name), currency, leadTimeDays })
-    .$returningId();
-  supplierIds.push(row!.id);
-  return row!.id;
-}
+let today = "";
+const day = (offset: number) => fixture.day(offset);
 
 beforeAll(async () => {
   buyer = await signInAs("buyer");
   builder = await signInAs("builder");
   storekeeper = await signInAs("storekeeper");
   manager = await signInAs("manager");
-  const db = testDb();
-  const [setting] = await db
-    .select({ value: settings.value })
-    .from(settings)
-    .where(eq(settings.key, "company_currency"));
-  currency = setting?.value ?? "EUR";
-
-  // Resin (kg): reorder point 5 kg, reorder quantity 10 kg. Bearings (pcs): no reorder point.
-  const resinId = await createItem(resin, "kg", 5, 10);
-  const bearingId = await createItem(bearing, "pcs", 0, 0);
-  const rack = await createLocation(uniqueCode("PL"));
-  await receive(storekeeper, {
-    sku: resin,
-    location: rack,
-    quantity: 12,
-    unitCost: 15,
-  });
-  await receive(storekeeper, {
-    sku: bearing,
-    location: rack,
-    quantity: 40,
-    unitCost: 2,
-  });
-
-  // BO-a: 2 motors × 3.5 kg resin, starting Wednesday of week 2.
-  const resinDesign = await createDesign([
-    { kind: "part", itemId: resinId, quantityPerMotor: "3.5" },
-  ]);
-  plannedOrder = await createOrder(resinDesign, 2, day(16));
-  // BO-b: 1 motor × 2 kg resin, no planned start, fully reserved (held: out of the free stock).
-  const heldDesign = await createDesign([
-    { kind: "part", itemId: resinId, quantityPerMotor: "2" },
-  ]);
-  const heldOrder = await createOrder(heldDesign, 1);
-  const reserved = await sendJson(
-    "POST",
-    `/api/v1/build-orders/${heldOrder}/reserve`,
-    {},
-    builder,
-  );
-  expect(reserved.status, await reserved.clone().text()).toBe(200);
-  // BO-c: 2 motors × 65 bearings, starting Monday of week 1.
-  const bearingDesign = await createDesign([
-    { kind: "part", itemId: bearingId, quantityPerMotor: "65" },
-  ]);
-  await createOrder(bearingDesign, 2, day(7));
-
-  // Price lines: resin from two suppliers, bearings from one.
-  const coilco = await addSupplier("Plan Coilco", 30);
-  const wirehaus = await addSupplier("Plan Wirehaus", 14);
-  const magnetix = await addSupplier("Plan Bearings", null);
-  const line = (
-    supplierId: number,
-    itemId: number,
-    unitPrice: string,
-    minQuantity: string,
-    extra: { packQuantity?: string; leadTimeDays?: number } = {},
-  ) => ({
-    supplierId,
-    itemId,
-    supplierSku: `S${supplierId}-${itemId}`,
+  fixture = await createBuyingPlanFixture({ buyer, builder, storekeeper });
+  ({
     currency,
-    unitPrice,
-    minQuantity,
-    validFrom: "2026-01-01",
-    ...extra,
-  });
-  await db.insert(priceLines).values([
-    // Coilco's line lead time (10 days) overrides its 30 days.
-    line(coilco, resinId, "17.0000", "0", {
-      packQuantity: "4",
-      leadTimeDays: 10,
-    }),
-    line(coilco, resinId, "16.0000", "25", {
-      packQuantity: "4",
-      leadTimeDays: 10,
-    }),
-    line(wirehaus, resinId, "21.0000", "0"),
-    line(magnetix, bearingId, "2.4000", "1", {
-      packQuantity: "10",
-      leadTimeDays: 21,
-    }),
-    line(magnetix, bearingId, "2.1000", "100", {
-      packQuantity: "10",
-      leadTimeDays: 21,
-    }),
-  ]);
-
-  // A sent order: 20 kg resin due on Tuesday of week 3. A draft order (not on order): 100 kg this week.
-  for (const [status, expectedDate, quantity] of [
-    ["sent", day(22), "20"],
-    ["draft", day(0), "100"],
-  ] as const) {
-    const [order] = await db
-      .insert(purchaseOrders)
-      .values({
-        supplierId: wirehaus,
-        status,
-        currency,
-        orderedOn: status === "sent" ? today : null,
-        userId: "demo-02-buyer",
-        updatedAt: new Date(),
-      })
-      .$returningId();
-    if (status === "draft") fixtureDraft = order!.id;
-    await db.insert(purchaseOrderLines).values({
-      orderId: order!.id,
-      lineNumber: 1,
-      itemId: resinId,
-      quantity,
-      unitPrice: "21.0000",
-      priceSource: "price_list",
-      expectedDate,
-    });
-  }
+    resin,
+    bearing,
+    supplierIds,
+    plannedOrder,
+    fixtureDraft,
+    today,
+  } = fixture);
 });
 afterAll(closeTestDatabase);
 
@@ -496,7 +327,14 @@ describe("build orders' planned start through the API", () => {
     const design = await createDesign([
       { kind: "part", itemId: await itemIdOf(resin), quantityPerMotor: "1" },
     ]);
-    const id = await createOrder(design, 1, day(9));
+    const made = await sendJson(
+      "POST",
+      "/api/v1/build-orders",
+      { ...design, quantity: 1, plannedStart: day(9) },
+      builder,
+    );
+    expect(made.status).toBe(201);
+    const { id } = (await made.json()) as { id: number };
     const cancelled = await sendJson(
       "POST",
       `/api/v1/build-orders/${id}/cancel`,
