@@ -20,11 +20,11 @@ import { WeekMarkers } from "./week-markers";
 
 const frame = {
   width: 720,
-  height: 240,
+  height: 260,
   left: 84,
   right: 16,
   top: 16,
-  bottom: 36,
+  bottom: 48,
 };
 
 export function ProjectedStockChart({
@@ -84,7 +84,7 @@ export function ProjectedStockChart({
           <text
             key={point.weekStart}
             x={point.x}
-            y={frame.height - 12}
+            y={frame.height - 10}
             fontSize="12"
             fill="currentColor"
             textAnchor="middle"

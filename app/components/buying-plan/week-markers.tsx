@@ -17,11 +17,11 @@ export function WeekMarkers({
   return (
     <g>
       {point.needed > 0 ? (
-        <g transform={`rotate(180 ${point.x - 12} ${zeroY + 12})`}>
+        <g transform={`rotate(180 ${point.x - 12} ${zeroY + 10})`}>
           <title>{`Needed: ${formatStockQuantity(point.needed, unit)}`}</title>
           <GlyphTriangle
             left={point.x - 12}
-            top={zeroY + 12}
+            top={zeroY + 10}
             size={glyph}
             className="fill-danger"
           />
@@ -32,7 +32,7 @@ export function WeekMarkers({
           <title>{`On order, due: ${formatStockQuantity(point.arriving, unit)}`}</title>
           <GlyphTriangle
             left={point.x + 12}
-            top={zeroY - 12}
+            top={zeroY - 10}
             size={glyph}
             className="fill-field"
           />
