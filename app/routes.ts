@@ -53,6 +53,7 @@ export default [
       index("routes/build-orders.tsx"),
       route(":orderId", "routes/build-order.tsx"),
     ]),
+    route("buying-plan", "routes/buying-plan.tsx"),
     ...prefix("stock", [
       index("routes/stock.tsx"),
       route("export.csv", "routes/stock-export.ts"),
@@ -112,6 +113,7 @@ export default [
     route("build-orders", "routes/api.v1.build-orders.ts"),
     route("build-orders/:orderId", "routes/api.v1.build-order.ts"),
     route("build-orders/:orderId/:step", "routes/api.v1.build-order-step.ts"),
+    route("buying-plan", "routes/api.v1.buying-plan.ts"),
     route("purchase-orders", "routes/api.v1.purchase-orders.ts"),
     route("purchase-orders/:orderId", "routes/api.v1.purchase-order.ts"),
     route(

@@ -22,6 +22,7 @@ import {
 import {
   buildOrderReference,
   canCancel,
+  canChangePlannedStart,
   canChangeQuantity,
   canComplete,
   refusalFor,
@@ -136,4 +137,47 @@ export async function changeBuildOrderQuantity(
   });
   await checkStockAlertsOfOrder(orderId);
   return result;
+}
+
+/**
+ * Sets (or clears, with null) the day building starts, while the order is open; the
+ * change is kept in the order's history. Nothing held or issued changes.
+ */
+export async function changeBuildOrderPlannedStart(
+  orderId: number,
+  plannedStart: string | null,
+  userId: string,
+): Promise<{
+  id: number;
+  status: BuildOrderStatus;
+  plannedStart: string | null;
+}> {
+  return inBuildOrderTransaction(async (tx) => {
+    const order = await lockOrder(tx, orderId);
+    if (!canChangePlannedStart(order.status))
+      throw new BuildOrderError(
+        409,
+        refusalFor("plannedStart", order.status),
+        "plannedStart",
+      );
+    const [current] = await tx
+      .select({ plannedStart: buildOrders.plannedStart })
+      .from(buildOrders)
+      .where(eq(buildOrders.id, order.id));
+    const before = current?.plannedStart ?? null;
+    if (before === plannedStart)
+      return { id: order.id, status: order.status, plannedStart };
+    await tx
+      .update(buildOrders)
+      .set({ plannedStart })
+      .where(eq(buildOrders.id, order.id));
+    await changeStatus(
+      tx,
+      order,
+      order.status,
+      userId,
+      `Planned start ${before ?? "not set"} → ${plannedStart ?? "not set"}.`,
+    );
+    return { id: order.id, status: order.status, plannedStart };
+  });
 }

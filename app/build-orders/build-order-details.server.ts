@@ -259,6 +259,8 @@ export async function findBuildOrder(orderId: number) {
     revision: order.revision,
     quantity: order.quantity,
     note: order.note,
+    /** "YYYY-MM-DD" when building starts; null when not planned. */
+    plannedStart: order.plannedStart,
     createdBy: order.createdBy,
     createdAt: order.createdAt.toISOString(),
     updatedAt: order.updatedAt.toISOString(),

@@ -6,6 +6,7 @@
 import { z } from "zod";
 import { formNumber } from "~/lib/number-text";
 import { quantityFromNumber } from "~/lib/decimal-amounts";
+import { isCalendarDate } from "~/lib/calendar-days";
 import { maxMotorsPerOrder } from "./build-order-requirements";
 
 const wholeNumber = (label: string, max: number) =>
@@ -58,12 +59,22 @@ const code = (label: string, max: number) =>
     .min(1, `Give the ${label}.`)
     .max(max, `The ${label} has at most ${max} characters.`);
 
+/** A day as "YYYY-MM-DD": when building starts (the buying plan needs the stock by then). */
+const plannedStartDay = z
+  .string({ error: "The planned start must be a day as YYYY-MM-DD." })
+  .trim()
+  .refine(
+    (value) => isCalendarDate(value),
+    "The planned start must be a real day as YYYY-MM-DD.",
+  );
+
 /** POST /api/v1/build-orders */
 export const buildOrderCreateSchema = z.object({
   designId: wholeNumber("design id", 2_147_483_647),
   revision: wholeNumber("revision", 32_767),
   quantity: motors,
   note,
+  plannedStart: plannedStartDay.optional(),
 });
 export type BuildOrderCreateInput = z.output<typeof buildOrderCreateSchema>;
 
@@ -118,8 +129,20 @@ export type IssueRequest = z.output<typeof issueRequestSchema>;
 /** POST /api/v1/build-orders/:id/cancel and /complete */
 export const closeRequestSchema = z.object({ note });
 
-/** PATCH /api/v1/build-orders/:id */
-export const quantityChangeSchema = z.object({ quantity: motors });
+/** PATCH /api/v1/build-orders/:id: a new number of motors, a new planned start (null clears it), or both. */
+export const buildOrderChangeSchema = z
+  .object({
+    quantity: motors.optional(),
+    plannedStart: plannedStartDay.nullable().optional(),
+  })
+  .refine(
+    (value) => value.quantity !== undefined || value.plannedStart !== undefined,
+    {
+      message: "Give the quantity, the planned start, or both.",
+      path: ["quantity"],
+    },
+  );
+export type BuildOrderChange = z.output<typeof buildOrderChangeSchema>;
 
 // ——— The pages' forms: text fields turned into the API's values ———
 
@@ -142,6 +165,7 @@ export const createFormSchema = z.preprocess(
       designRevision: form.designRevision,
       quantity: formNumber(form.quantity),
       note: form.note,
+      plannedStart: form.plannedStart,
     });
   },
   z
@@ -151,6 +175,7 @@ export const createFormSchema = z.preprocess(
         .regex(/^\d+\/\d+$/, "Choose a released design revision."),
       quantity: motors,
       note,
+      plannedStart: plannedStartDay.optional(),
     })
     .transform(({ designRevision, ...rest }) => {
       const [designId, revision] = designRevision.split("/");
@@ -229,6 +254,18 @@ export const quantityFormSchema = z.preprocess(
   z.object({ intent: z.literal("quantity"), quantity: motors }),
 );
 
+/** The planned-start form of the order page: an empty day clears it. */
+export const plannedStartFormSchema = z.preprocess(
+  (values) => {
+    const form = formObject(values);
+    return { intent: form.intent, plannedStart: form.plannedStart || null };
+  },
+  z.object({
+    intent: z.literal("plannedStart"),
+    plannedStart: plannedStartDay.nullable(),
+  }),
+);
+
 /** Steps of the order page, by the form's intent. */
 export const buildOrderIntents = [
   "reserve",
@@ -236,6 +273,7 @@ export const buildOrderIntents = [
   "cancel",
   "complete",
   "quantity",
+  "plannedStart",
 ] as const;
 export type BuildOrderIntent = (typeof buildOrderIntents)[number];
 
@@ -245,6 +283,7 @@ export const intentSchemas = {
   cancel: cancelFormSchema,
   complete: completeFormSchema,
   quantity: quantityFormSchema,
+  plannedStart: plannedStartFormSchema,
 } as const;
 
 export function isBuildOrderIntent(value: unknown): value is BuildOrderIntent {

@@ -75,9 +75,15 @@ export function canChangeQuantity(status: BuildOrderStatus): boolean {
   return status === "draft" || status === "reserved";
 }
 
+/** The planned start can change while the order is open (not built, not cancelled). */
+export function canChangePlannedStart(status: BuildOrderStatus): boolean {
+  return canCancel(status);
+}
+
 /** Why a step is refused in the order's current state, for a 409 answer. */
 export function refusalFor(
-  step: "reserve" | "issue" | "cancel" | "complete" | "quantity",
+  step:
+    "reserve" | "issue" | "cancel" | "complete" | "quantity" | "plannedStart",
   status: BuildOrderStatus,
 ): string {
   const state = buildOrderStatusLabels[status].toLowerCase();
@@ -98,5 +104,7 @@ export function refusalFor(
       return status === "in_progress"
         ? "Stock has been issued to the build order: the number of motors can no longer change."
         : `The build order is ${state}: the number of motors can no longer change.`;
+    case "plannedStart":
+      return `The build order is ${state}: its planned start can no longer change.`;
   }
 }

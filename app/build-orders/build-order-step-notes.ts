@@ -10,7 +10,8 @@ export type BuildOrderStepOutcome =
   | { step: "issue"; movementId: number }
   | { step: "cancel" }
   | { step: "complete" }
-  | { step: "quantity"; releasedCount: number };
+  | { step: "quantity"; releasedCount: number }
+  | { step: "plannedStart" };
 
 /** The message after a step on order `orderId`. */
 export function buildOrderStepNote(
@@ -30,6 +31,8 @@ export function buildOrderStepNote(
       return { code: "order-cancelled", id: orderId };
     case "complete":
       return { code: "order-built", id: orderId };
+    case "plannedStart":
+      return { code: "order-planned-start-changed", id: orderId };
     case "quantity":
       return {
         code:

@@ -18,7 +18,13 @@ describe("build-order step capabilities", () => {
     expect(capabilityRoles[buildOrderStepCapabilities.issue]).toEqual([
       "storekeeper",
     ]);
-    for (const step of ["reserve", "cancel", "complete", "quantity"] as const)
+    for (const step of [
+      "reserve",
+      "cancel",
+      "complete",
+      "quantity",
+      "plannedStart",
+    ] as const)
       expect(capabilityRoles[buildOrderStepCapabilities[step]]).toEqual([
         "builder",
       ]);

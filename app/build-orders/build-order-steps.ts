@@ -11,12 +11,13 @@ export const buildOrderStepCapabilities = {
   cancel: "runBuildOrders",
   complete: "runBuildOrders",
   quantity: "runBuildOrders",
+  plannedStart: "runBuildOrders",
   issue: "issueToBuildOrders",
 } as const satisfies Record<BuildOrderIntent, Capability>;
 
 /**
  * The steps the API takes at POST /api/v1/build-orders/:orderId/:step (a new number of
- * motors is a PATCH of the order itself).
+ * motors or planned start is a PATCH of the order itself).
  */
 export const buildOrderApiSteps = [
   "reserve",

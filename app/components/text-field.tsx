@@ -10,7 +10,7 @@ export function TextField({
 }: {
   field: FieldMetadata<string | undefined>;
   label: string;
-  type?: "text" | "email" | "password";
+  type?: "text" | "email" | "password" | "date";
   autoComplete?: string;
   hint?: string;
 }) {

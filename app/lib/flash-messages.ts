@@ -92,6 +92,7 @@ export const flashMessageSubjects = {
   "order-built": "order",
   "order-quantity-changed": "order",
   "order-quantity-changed-released": "order",
+  "order-planned-start-changed": "order",
   "password-changed": "none",
   "purchase-order-created": "purchaseOrder",
   "purchase-order-from-alert": "purchaseOrder",
@@ -193,6 +194,8 @@ const texts: {
     `${order.reference} is now for ${countText(order.quantity, "motor")}.`,
   "order-quantity-changed-released": (order) =>
     `${order.reference} is now for ${countText(order.quantity, "motor")}. What it held was released: reserve again.`,
+  "order-planned-start-changed": (order) =>
+    `${order.reference}: planned start saved.`,
   "password-changed": () =>
     "Password changed. You stay signed in here; every other session has ended and your API tokens are revoked.",
   "purchase-order-created": (order) =>

@@ -25,6 +25,7 @@ export const navigationItems: readonly NavigationItem[] = [
   { to: "/insight", label: "Cost insight" },
   { to: "/designs", label: "Designs" },
   { to: "/build-orders", label: "Build orders" },
+  { to: "/buying-plan", label: "Buying plan" },
   { to: "/tools/coil-estimator", label: "Coil estimator" },
   { to: "/tools/magnet-estimator", label: "Magnet estimator" },
   { to: "/reference", label: "Reference" },

@@ -34,6 +34,13 @@ interface PriceLineCommon {
   validTo?: CalendarDate;
   /** Days from order to delivery, when the supplier says. Breaks ties in best price. */
   leadTimeDays?: number;
+  /**
+   * Sold only in whole packs or spools of this many thousandths of the item's unit (a
+   * 25 kg spool: 25 000); absent when any quantity is sold.
+   */
+  packQuantity?: bigint;
+  /** The supplier's id, when the line was read from the database (orders name it). */
+  supplierId?: number;
   sourceLine: PriceLineSource;
 }
 

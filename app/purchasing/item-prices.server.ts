@@ -49,6 +49,10 @@ export async function loadItemPricing(
 /** The stored columns of a price line that pricing reads (with the supplier's name and lead time beside). */
 export const priceLineColumns = {
   itemId: priceLines.itemId,
+  supplierId: priceLines.supplierId,
+  /** The line's own lead time; the supplier's applies when it is null. */
+  lineLeadTimeDays: priceLines.leadTimeDays,
+  packQuantity: priceLines.packQuantity,
   supplierSku: priceLines.supplierSku,
   currency: priceLines.currency,
   unitPrice: priceLines.unitPrice,
@@ -63,8 +67,12 @@ export const priceLineColumns = {
 /** A stored price line as `priceLineColumns` reads it, with its supplier's name and the lead time that applies. */
 export interface PriceLineRow {
   itemId: number;
+  supplierId: number;
   supplier: string;
+  /** The supplier's lead time. */
   leadTimeDays: number | null;
+  lineLeadTimeDays: number | null;
+  packQuantity: string | null;
   supplierSku: string;
   currency: string;
   unitPrice: string | null;
@@ -82,14 +90,20 @@ export function priceLinesByItem(
 ): Map<number, PriceLine[]> {
   const linesByItem = new Map<number, PriceLine[]>();
   for (const row of rows) {
+    // The price line's own lead time, else the supplier's.
+    const leadTimeDays = row.lineLeadTimeDays ?? row.leadTimeDays;
+    const packQuantity =
+      row.packQuantity === null ? 0n : parseQuantity(row.packQuantity);
     const common = {
       itemId: String(row.itemId),
+      supplierId: row.supplierId,
       supplier: row.supplier,
       supplierSku: row.supplierSku,
       currency: row.currency,
       minQuantity: parseQuantity(row.minQuantity),
       validFrom: row.validFrom,
-      ...(row.leadTimeDays === null ? {} : { leadTimeDays: row.leadTimeDays }),
+      ...(leadTimeDays === null ? {} : { leadTimeDays }),
+      ...(packQuantity > 0n ? { packQuantity } : {}),
       sourceLine: { importId: String(row.importId ?? ""), line: row.line ?? 0 },
     };
     const line: PriceLine =

@@ -9,6 +9,7 @@ import {
 } from "~/auth/guard.server";
 import {
   cancelBuildOrder,
+  changeBuildOrderPlannedStart,
   changeBuildOrderQuantity,
   completeBuildOrder,
 } from "~/build-orders/build-order-closing.server";
@@ -32,6 +33,7 @@ import { reserveBuildOrderStock } from "~/build-orders/build-order-reservations.
 import {
   buildOrderReference,
   canCancel,
+  canChangePlannedStart,
   canComplete,
   canIssue,
   canReserve,
@@ -55,6 +57,7 @@ import { HistoryPanel } from "~/components/build-orders/history-panel";
 import { IssuePanel } from "~/components/build-orders/issue-panel";
 import { IssuedStockPanel } from "~/components/build-orders/issued-stock-panel";
 import { NeedsPanel } from "~/components/build-orders/needs-panel";
+import { PlannedStartPanel } from "~/components/build-orders/planned-start-panel";
 import { PlannedAndUsedPanel } from "~/components/build-orders/planned-and-used-panel";
 import { ReservePanel } from "~/components/build-orders/reserve-panel";
 import { FormMessages } from "~/components/text-field";
@@ -171,14 +174,19 @@ export async function action({ request, params }: Route.ActionArgs) {
         );
         return done(id, { step: "quantity", releasedCount: released.length });
       }
+      case "plannedStart": {
+        await changeBuildOrderPlannedStart(id, value.plannedStart, user.id);
+        return done(id, { step: "plannedStart" });
+      }
     }
   } catch (error) {
     if (isBuildOrderError(error) || isDomainError(error)) {
       const field =
         intent === "issue"
           ? issueFormFieldOf(error.field)
-          : intent === "quantity" && error.field === "quantity"
-            ? "quantity"
+          : (intent === "quantity" || intent === "plannedStart") &&
+              error.field === intent
+            ? intent
             : "";
       const result = submission.reply(
         field
@@ -263,6 +271,11 @@ export default function BuildOrder({
               lastResult={resultFor("complete")}
             />
           ) : null}
+          <PlannedStartPanel
+            order={order}
+            canChange={can.build && canChangePlannedStart(order.status)}
+            lastResult={resultFor("plannedStart")}
+          />
           {can.build && canCancel(order.status) ? (
             <ChangeOrCancelPanel
               order={order}

@@ -23,6 +23,7 @@ import {
 } from "../support/test-database";
 
 import { buildOrderRouteRows } from "./route-roles.build-orders";
+import { buyingPlanRouteRows } from "./route-roles.buying-plan";
 import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
 import { purchaseOrderRouteRows } from "./route-roles.purchase-orders";
@@ -43,6 +44,7 @@ import {
 const table: Row[] = [
   ...designRouteRows,
   ...buildOrderRouteRows,
+  ...buyingPlanRouteRows,
   ...insightRouteRows,
   ...supplierRouteRows,
   ...purchaseOrderRouteRows,

@@ -165,6 +165,7 @@ describe("the build-order list columns", () => {
         quantity: 4,
         status: "reserved",
         note: "",
+        plannedStart: null,
         createdBy: "Bo Builder",
         createdAt: "2026-02-01T10:00:00.000Z",
         updatedAt: "2026-02-01T10:00:00.000Z",

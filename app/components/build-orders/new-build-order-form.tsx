@@ -21,7 +21,12 @@ export function NewBuildOrderForm({
 }) {
   const navigation = useNavigation();
   const [form, fields] = useForm<
-    { designRevision: string; quantity: string; note: string },
+    {
+      designRevision: string;
+      quantity: string;
+      note: string;
+      plannedStart: string;
+    },
     z.output<typeof createFormSchema>
   >({
     id: "new-build-order",
@@ -72,6 +77,12 @@ export function NewBuildOrderForm({
             field={fields.quantity}
             label="Motors to build"
             unit="motors"
+          />
+          <TextField
+            field={fields.plannedStart}
+            label="Planned start (optional)"
+            type="date"
+            hint="The buying plan needs this order's stock by this day; without one, this week."
           />
           <TextField
             field={fields.note}
