@@ -34,6 +34,8 @@ interface PriceLineCommon {
   validTo?: CalendarDate;
   /** Days from order to delivery, when the supplier says. Breaks ties in best price. */
   leadTimeDays?: number;
+  /** Sold in whole packs or spools of this size, thousandths of the item's unit; absent: any quantity. */
+  packQuantity?: bigint;
   sourceLine: PriceLineSource;
 }
 

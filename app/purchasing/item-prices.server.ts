@@ -65,7 +65,9 @@ export async function loadItemsPricing(
       .select({
         itemId: priceLines.itemId,
         supplier: suppliers.name,
-        leadTimeDays: suppliers.leadTimeDays,
+        supplierLeadTimeDays: suppliers.leadTimeDays,
+        lineLeadTimeDays: priceLines.leadTimeDays,
+        packQuantity: priceLines.packQuantity,
         supplierSku: priceLines.supplierSku,
         currency: priceLines.currency,
         unitPrice: priceLines.unitPrice,
@@ -111,6 +113,8 @@ export async function loadItemsPricing(
   }));
   const linesByItem = new Map<number, PriceLine[]>();
   for (const row of rows) {
+    // The line's own lead time, else the supplier's.
+    const leadTimeDays = row.lineLeadTimeDays ?? row.supplierLeadTimeDays;
     const common = {
       itemId: String(row.itemId),
       supplier: row.supplier,
@@ -118,7 +122,10 @@ export async function loadItemsPricing(
       currency: row.currency,
       minQuantity: parseQuantity(row.minQuantity),
       validFrom: row.validFrom,
-      ...(row.leadTimeDays === null ? {} : { leadTimeDays: row.leadTimeDays }),
+      ...(leadTimeDays === null ? {} : { leadTimeDays }),
+      ...(row.packQuantity === null
+        ? {}
+        : { packQuantity: parseQuantity(row.packQuantity) }),
       sourceLine: { importId: String(row.importId ?? ""), line: row.line ?? 0 },
     };
     const line: PriceLine =
@@ -205,6 +212,11 @@ export function bestPricesOf(
       unitPrice: money(candidate.landedUnitPrice),
       total: money(candidate.totalForQuantity),
       leadTimeDays: candidate.leadTimeDays,
+      /** The pack or spool size the item is sold in, in its unit; null: any quantity. */
+      packQuantity:
+        candidate.packQuantity === null
+          ? null
+          : quantityToNumber(candidate.packQuantity),
       source: candidate.sourceLine,
     })),
     cannotPrice: result.cannotPrice.map((offer) => ({
