@@ -5,7 +5,8 @@
  * with the sheet's row number as its line, so the same column mapping, row
  * checks, preview and all-or-nothing commit apply.
  *
- * The sheet is the one asked for by name, else the first visible one. The
+ * The sheet is the one asked for by name, else the first visible one that has
+ * a header row (a cover sheet before the prices is passed over). The
  * header is the first row that names two columns or more (a title or a note
  * in one cell above it is passed over). Cells right of the last named column
  * are not read (they have no header to map).
@@ -87,21 +88,28 @@ export async function openPriceListWorkbook(
     hidden: worksheet.state !== "visible" && worksheet.state !== undefined,
   }));
   const wanted = sheetName?.trim();
-  const worksheet = wanted
-    ? workbook.worksheets.find(
-        (entry) => entry.name.toLowerCase() === wanted.toLowerCase(),
-      )
-    : (workbook.worksheets.find((_, index) => !sheets[index]!.hidden) ??
-      workbook.worksheets[0]);
-  if (!worksheet) {
-    return {
-      ok: false,
-      message: wanted
-        ? `The workbook has no sheet named "${wanted}"; its sheets are ${sheets.map((sheet) => `"${sheet.name}"`).join(", ")}.`
-        : "The workbook has no sheets.",
-    };
+  if (wanted) {
+    const worksheet = workbook.worksheets.find(
+      (entry) => entry.name.toLowerCase() === wanted.toLowerCase(),
+    );
+    if (!worksheet)
+      return {
+        ok: false,
+        message: `The workbook has no sheet named "${wanted}"; its sheets are ${sheets.map((sheet) => `"${sheet.name}"`).join(", ")}.`,
+      };
+    return openSheet(worksheet, sheets);
   }
-  return openSheet(worksheet, sheets);
+  // The first visible sheet with a header row: a cover or notes sheet before the prices is passed over.
+  const visible = workbook.worksheets.filter(
+    (_, index) => !sheets[index]!.hidden,
+  );
+  let first: OpenedWorkbook | null = null;
+  for (const worksheet of visible) {
+    const opened = openSheet(worksheet, sheets);
+    if (opened.ok) return opened;
+    first ??= opened;
+  }
+  return first ?? { ok: false, message: "The workbook has no visible sheets." };
 }
 
 function openSheet(
