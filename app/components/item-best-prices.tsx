@@ -22,6 +22,7 @@ export interface ItemBestPrices {
     unitPrice: number;
     total: number;
     leadTimeDays: number | null;
+    packQuantity: number | null;
   }[];
   cannotPrice: { supplier: string; supplierSku: string; reasons: string[] }[];
 }
@@ -150,6 +151,9 @@ export function ItemBestPricesPanel({
                     {price.supplierSku}
                     {price.leadTimeDays !== null
                       ? ` · ${countText(price.leadTimeDays, "day")}`
+                      : ""}
+                    {price.packQuantity !== null
+                      ? ` · packs of ${formatStockQuantity(price.packQuantity, prices.unit)}`
                       : ""}
                   </span>
                 </td>

@@ -26,6 +26,8 @@ export const priceListFieldKeys = [
   "currency",
   "minQuantity",
   "validFrom",
+  "leadTimeDays",
+  "packQuantity",
 ] as const;
 
 export type PriceListField = (typeof priceListFieldKeys)[number];
@@ -138,6 +140,18 @@ export const PRICE_LIST_FIELDS: readonly PriceListFieldInfo[] = [
     label: "Valid from",
     requirement: "optional",
     hint: "The day the price starts: 2025-03-01, 01.03.2025 or 01/03/2025. The import day when left out.",
+  },
+  {
+    key: "leadTimeDays",
+    label: "Lead time (days)",
+    requirement: "optional",
+    hint: "Whole days from order to delivery for this line (0 or more). The supplier's own lead time when left out.",
+  },
+  {
+    key: "packQuantity",
+    label: "Pack quantity",
+    requirement: "optional",
+    hint: "The spool or pack size the item is sold in, in the item's unit (kg of wire, pieces of magnets); orders are rounded up to whole packs. Any quantity when left out.",
   },
 ];
 
@@ -536,6 +550,33 @@ const headerSpellings: Readonly<Record<PriceListField, readonly string[]>> = {
     "gultig ab",
     "gultig von",
     "datum",
+  ],
+  leadTimeDays: [
+    "lead time",
+    "lead time days",
+    "lead time d",
+    "leadtime",
+    "delivery time",
+    "delivery days",
+    "lieferzeit",
+    "lieferzeit tage",
+    "delai",
+    "delai de livraison",
+    "tempi di consegna",
+  ],
+  packQuantity: [
+    "pack quantity",
+    "pack qty",
+    "pack size",
+    "package quantity",
+    "packing unit",
+    "spool size",
+    "spool weight",
+    "spool kg",
+    "verpackungseinheit",
+    "vpe",
+    "spulengewicht",
+    "conditionnement",
   ],
 };
 

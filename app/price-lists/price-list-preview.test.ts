@@ -15,6 +15,8 @@ function partRow(line: number): PriceListRow {
     currency: "EUR",
     minQuantity: "1.000",
     validFrom: "2025-06-02",
+    leadTimeDays: null,
+    packQuantity: null,
   };
 }
 

@@ -23,6 +23,8 @@ const testFields: readonly PriceListField[] = [
   "currency",
   "minQuantity",
   "validFrom",
+  "leadTimeDays",
+  "packQuantity",
 ];
 const allColumns: FieldColumns = Object.fromEntries(
   testFields.map((field, index) => [field, index]),
@@ -92,6 +94,8 @@ describe("good rows", () => {
         currency: "USD",
         minQuantity: "1.000",
         validFrom: "2025-06-02",
+        leadTimeDays: null,
+        packQuantity: null,
       },
     });
   });
@@ -478,6 +482,8 @@ describe("messages that name the column and the value", () => {
     currency: "Cur",
     minQuantity: "MOQ",
     validFrom: "Date",
+    leadTimeDays: "Lead time",
+    packQuantity: "Spool kg",
   };
   const named = { ...context, headers: testFields.map((f) => fileHeaders[f]) };
   const readNamed = (values: Partial<Record<PriceListField, string>>) =>
@@ -604,6 +610,60 @@ describe("currency signs", () => {
     );
     expect(messageOf(read({ ...magnet, currency: "¥" }))).toContain(
       'the currency "¥" (column "currency") stands for several currencies (the Japanese yen and the Chinese yuan); write JPY or CNY',
+    );
+  });
+});
+
+describe("lead time and pack quantity", () => {
+  it("reads whole days and a pack size in the item's unit", () => {
+    const wire = read({ ...awgWire, leadTimeDays: "21", packQuantity: "5" });
+    expect(wire.ok && wire.row.leadTimeDays).toBe(21);
+    expect(wire.ok && wire.row.packQuantity).toBe("5.000");
+    // A spool of 2.5 kg is a pack of wire; a workbook's number cell 14.0 is 14 days.
+    const spool = read({
+      ...awgWire,
+      leadTimeDays: "14.0",
+      packQuantity: "2.5",
+    });
+    expect(
+      spool.ok && [spool.row.leadTimeDays, spool.row.packQuantity],
+    ).toEqual([14, "2.500"]);
+    const sameDay = read({ ...magnet, leadTimeDays: "0", packQuantity: "100" });
+    expect(
+      sameDay.ok && [sameDay.row.leadTimeDays, sameDay.row.packQuantity],
+    ).toEqual([0, "100.000"]);
+  });
+
+  it("refuses days that are not whole, negative or implausible, and packs of nothing or of part pieces", () => {
+    expect(messageOf(read({ ...awgWire, leadTimeDays: "2.5" }))).toBe(
+      'Line 14: the lead time "2.5" (column "leadTimeDays") is not a whole number of days.',
+    );
+    expect(messageOf(read({ ...awgWire, leadTimeDays: "-3" }))).toContain(
+      "is negative",
+    );
+    expect(messageOf(read({ ...awgWire, leadTimeDays: "4000" }))).toContain(
+      "more than 3,650 days",
+    );
+    expect(
+      messageOf(read({ ...awgWire, leadTimeDays: "two weeks" })),
+    ).toContain("is not a whole number of days");
+    expect(messageOf(read({ ...awgWire, packQuantity: "0" }))).toBe(
+      'Line 14: the pack quantity "0" (column "packQuantity") must be more than zero.',
+    );
+    expect(messageOf(read({ ...magnet, packQuantity: "12.5" }))).toContain(
+      "is not a whole number of pieces",
+    );
+    expect(messageOf(read({ ...awgWire, packQuantity: "-5" }))).toContain(
+      "is negative",
+    );
+  });
+
+  it("treats the same break with other terms as a conflicting repeat", () => {
+    const collector = new PriceListRowCollector(context);
+    collector.add(dataRow(2, { ...awgWire, leadTimeDays: "14" }));
+    collector.add(dataRow(3, { ...awgWire, leadTimeDays: "21" }));
+    expect(collector.errors[0]?.message).toContain(
+      "another lead time or pack quantity",
     );
   });
 });

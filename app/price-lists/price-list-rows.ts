@@ -77,6 +77,10 @@ interface PriceListRowBase {
   minQuantity: string;
   /** The day the price starts, YYYY-MM-DD. */
   validFrom: string;
+  /** Whole days from order to delivery for this line; null: the supplier's own. */
+  leadTimeDays: number | null;
+  /** The pack or spool size the item is sold in, 3 places in the item's unit ("5.000"); null: any quantity. */
+  packQuantity: string | null;
 }
 
 export interface WirePriceRow extends PriceListRowBase {
@@ -218,6 +222,8 @@ export function readPriceListRow(
     quantity && wholePiecesFor(quantity, item?.unit, cells, problems);
   const currency = readCurrency(cells, context, problems);
   const validFrom = readValidFrom(cells, context, problems);
+  const leadTimeDays = readLeadTimeDays(cells, problems);
+  const packQuantity = readPackQuantity(cells, context, item?.unit, problems);
 
   if (
     problems.length > 0 ||
@@ -225,7 +231,9 @@ export function readPriceListRow(
     !prices ||
     !currency ||
     !minQuantity ||
-    !validFrom
+    !validFrom ||
+    leadTimeDays === undefined ||
+    packQuantity === undefined
   ) {
     return {
       ok: false,
@@ -243,6 +251,8 @@ export function readPriceListRow(
       currency,
       minQuantity,
       validFrom,
+      leadTimeDays,
+      packQuantity,
       ...item,
     },
   };
@@ -566,6 +576,68 @@ function wholePiecesFor(
   return undefined;
 }
 
+/** The longest lead time accepted, in days (ten years): more is a typing mistake. */
+export const maxLeadTimeDays = 3650;
+
+/** Whole days, 0 or more; null when the cell is empty or not mapped. */
+function readLeadTimeDays(
+  cells: RowCells,
+  problems: string[],
+): number | null | undefined {
+  const cell = cells.cell("leadTimeDays");
+  if (cell === "") return null;
+  const named = `the lead time ${cells.ref("leadTimeDays")}`;
+  const whole = /^\d+(?:\.0*)?$/.exec(cell);
+  if (!whole) {
+    problems.push(
+      /^-\s*\d/.test(cell)
+        ? `${named} is negative`
+        : `${named} is not a whole number of days`,
+    );
+    return undefined;
+  }
+  const days = Number.parseInt(cell, 10);
+  if (days > maxLeadTimeDays) {
+    problems.push(
+      `${named} is more than ${maxLeadTimeDays.toLocaleString("en-GB")} days; check it`,
+    );
+    return undefined;
+  }
+  return days;
+}
+
+/** A quantity more than zero (whole pieces for an item counted in pieces); null when empty or not mapped. */
+function readPackQuantity(
+  cells: RowCells,
+  context: PriceListRowContext,
+  unit: StockUnit | undefined,
+  problems: string[],
+): string | null | undefined {
+  if (cells.cell("packQuantity") === "") return null;
+  const quantity = readAmount(
+    "packQuantity",
+    "the pack quantity",
+    quantityRules,
+    cells,
+    context,
+    problems,
+  );
+  if (quantity === undefined) return undefined;
+  if (/^0+\.0+$/.test(quantity)) {
+    problems.push(
+      `the pack quantity ${cells.ref("packQuantity")} must be more than zero`,
+    );
+    return undefined;
+  }
+  if (unit === "pcs" && !quantity.endsWith(".000")) {
+    problems.push(
+      `the pack quantity ${cells.ref("packQuantity")} is not a whole number of pieces`,
+    );
+    return undefined;
+  }
+  return quantity;
+}
+
 function readValidFrom(
   cells: RowCells,
   context: PriceListRowContext,
@@ -672,6 +744,8 @@ interface RowFingerprint {
   price: string;
   item: string;
   description: string;
+  /** Lead time and pack quantity: "14|5.000", "|" when neither is given. */
+  terms: string;
 }
 
 function fingerprintOf(row: PriceListRow): RowFingerprint {
@@ -680,6 +754,7 @@ function fingerprintOf(row: PriceListRow): RowFingerprint {
     price: describePrice(row),
     item: describeItem(row),
     description: row.description,
+    terms: `${row.leadTimeDays ?? ""}|${row.packQuantity ?? ""}`,
   };
 }
 
@@ -770,6 +845,9 @@ function describeDifference(
   }
   if (earlier.description !== later.description) {
     return "another description";
+  }
+  if (earlier.terms !== later.terms) {
+    return "another lead time or pack quantity";
   }
   return null;
 }

@@ -51,6 +51,21 @@ export function readPriceListFile(
   return readPriceListText(decoded.text, options);
 }
 
+/**
+ * The rows of an opened price list, CSV or workbook: its header, whether
+ * numbers may have a decimal comma, and a way to visit its data rows.
+ */
+export interface OpenedPriceListRows<Layout extends RowsLayout = RowsLayout> {
+  layout: Layout;
+  forEachRow: OpenedPriceListCsv["forEachRow"];
+  forEachBatch: OpenedPriceListCsv["forEachBatch"];
+}
+
+export interface RowsLayout {
+  headers: string[];
+  decimalComma: boolean;
+}
+
 /** Opens the text and checks the mapping: a row collector ready to be fed, or file-level problems. */
 function openReading(
   text: string,
@@ -64,21 +79,33 @@ function openReading(
   | { ok: false; messages: string[] } {
   const opened = openPriceListCsv(text);
   if (!opened.ok) return { ok: false, messages: [opened.message] };
+  const collector = collectorFor(opened, options);
+  if (!collector.ok) return collector;
+  return { ok: true, opened, collector: collector.collector };
+}
 
+/** Checks the mapping against the opened file's header: a row collector, or file-level problems. */
+function collectorFor(
+  opened: OpenedPriceListRows,
+  options: PriceListReadOptions,
+):
+  | { ok: true; collector: PriceListRowCollector }
+  | { ok: false; messages: string[] } {
   const mapping = checkColumnMapping(options.mapping, opened.layout.headers, {
     supplierCurrency: options.supplierCurrency,
   });
   if (!mapping.ok) return { ok: false, messages: mapping.messages };
-
-  const collector = new PriceListRowCollector({
-    columns: mapping.columns,
-    headers: opened.layout.headers,
-    decimalComma: opened.layout.decimalComma,
-    importDay: options.importDay,
-    knownGrades: options.knownGrades,
-    supplierCurrency: options.supplierCurrency,
-  });
-  return { ok: true, opened, collector };
+  return {
+    ok: true,
+    collector: new PriceListRowCollector({
+      columns: mapping.columns,
+      headers: opened.layout.headers,
+      decimalComma: opened.layout.decimalComma,
+      importDay: options.importDay,
+      knownGrades: options.knownGrades,
+      supplierCurrency: options.supplierCurrency,
+    }),
+  };
 }
 
 /** Reads price-list text with a mapping into typed rows and per-line errors. */
@@ -123,9 +150,33 @@ export async function readPriceListInBatches(
 > {
   const decoded = decodePriceListBytes(bytes);
   if (!decoded.ok) return { ok: false, messages: [decoded.message] };
-  const reading = openReading(decoded.text, options);
-  if (!reading.ok) return reading;
-  const { opened, collector } = reading;
+  const opened = openPriceListCsv(decoded.text);
+  if (!opened.ok) return { ok: false, messages: [opened.message] };
+  return readOpenedPriceListInBatches(opened, options, batchRows, onBatch);
+}
+
+/**
+ * {@link readPriceListInBatches} for a file already opened: a CSV, or a sheet
+ * of a workbook (read-workbook.server.ts).
+ */
+export async function readOpenedPriceListInBatches<Layout extends RowsLayout>(
+  opened: OpenedPriceListRows<Layout>,
+  options: PriceListReadOptions,
+  batchRows: number,
+  onBatch: (rows: PriceListRow[], lineErrorsSoFar: number) => Promise<void>,
+): Promise<
+  | {
+      ok: true;
+      layout: Layout;
+      goodRows: number;
+      errors: LineError[];
+      errorCount: number;
+    }
+  | { ok: false; messages: string[] }
+> {
+  const started = collectorFor(opened, options);
+  if (!started.ok) return started;
+  const { collector } = started;
   const outcome = await opened.forEachBatch(
     batchRows,
     async (batch, csvErrorsSoFar) => {

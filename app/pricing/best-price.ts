@@ -53,6 +53,8 @@ export interface PriceCandidate {
   /** The break that applies, thousandths of the item's unit. */
   minQuantity: bigint;
   leadTimeDays: number | null;
+  /** The pack or spool size, thousandths of the item's unit; null: any quantity. */
+  packQuantity: bigint | null;
   /** Unit price as quoted, in `currency` (adder lines: adder + base). */
   quotedUnitPrice: MoneyAmount;
   /** Adder per kg in `currency` for adder lines; null for a fixed unit price. */
@@ -142,6 +144,7 @@ export function bestPrices(request: BestPriceRequest): BestPriceResult {
       currency: line.currency,
       minQuantity: line.minQuantity,
       leadTimeDays: line.leadTimeDays ?? null,
+      packQuantity: line.packQuantity ?? null,
       quotedUnitPrice: price.quotedUnitPrice,
       adderPerKg: line.pricing === "metal-base-adder" ? line.adderPerKg : null,
       metalBase: price.metalBase,

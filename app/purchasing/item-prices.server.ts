@@ -262,6 +262,11 @@ export function bestPricesOf(
       unitPrice: money(candidate.landedUnitPrice),
       total: money(candidate.totalForQuantity),
       leadTimeDays: candidate.leadTimeDays,
+      /** The pack or spool size the item is sold in, in its unit; null: any quantity. */
+      packQuantity:
+        candidate.packQuantity === null
+          ? null
+          : quantityToNumber(candidate.packQuantity),
       source: candidate.sourceLine,
     })),
     cannotPrice: result.cannotPrice.map((offer) => ({

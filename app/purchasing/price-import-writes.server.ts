@@ -113,9 +113,10 @@ export class PriceImportWriter {
       (entry) => [this.start.supplierId, entry.row.supplierSku, entry.itemId],
     );
     await this.insertInBatches(
-      `INSERT INTO price_lines (supplier_id, item_id, supplier_sku, currency, unit_price, adder_per_kg, conductor, min_quantity, valid_from, import_id, line) VALUES ?
+      `INSERT INTO price_lines (supplier_id, item_id, supplier_sku, currency, unit_price, adder_per_kg, conductor, min_quantity, valid_from, lead_time_days, pack_quantity, import_id, line) VALUES ?
        ON DUPLICATE KEY UPDATE item_id = VALUES(item_id), currency = VALUES(currency), unit_price = VALUES(unit_price),
-         adder_per_kg = VALUES(adder_per_kg), conductor = VALUES(conductor), import_id = VALUES(import_id), line = VALUES(line)`,
+         adder_per_kg = VALUES(adder_per_kg), conductor = VALUES(conductor), lead_time_days = VALUES(lead_time_days),
+         pack_quantity = VALUES(pack_quantity), import_id = VALUES(import_id), line = VALUES(line)`,
       matched,
       ({ row, itemId }) => [
         this.start.supplierId,
@@ -130,6 +131,8 @@ export class PriceImportWriter {
           : null,
         row.minQuantity,
         row.validFrom,
+        row.leadTimeDays,
+        row.packQuantity,
         this.importId,
         row.line,
       ],

@@ -35,7 +35,12 @@ import {
   type PriceListPreview,
 } from "~/price-lists/price-list-preview";
 import type { PriceListRow } from "~/price-lists/price-list-rows";
-import { readPriceListInBatches } from "~/price-lists/read-price-list";
+import { openPriceList } from "~/price-lists/open-price-list.server";
+import {
+  readOpenedPriceListInBatches,
+  type OpenedPriceListRows,
+  type PriceListReadOptions,
+} from "~/price-lists/read-price-list";
 import { parseMoney, parseRate } from "~/pricing/money";
 import { DomainError } from "~/lib/domain-error";
 import {
@@ -275,6 +280,8 @@ export interface PriceListImportInput {
   supplierName: string;
   fileName: string;
   bytes: Uint8Array;
+  /** A workbook's sheet to read (by name); its first visible sheet when not given. */
+  sheet?: string | null;
   mapping: ColumnMapping;
   dryRun: boolean;
   userId: string;
@@ -313,7 +320,10 @@ async function readOrImportPriceList(
     columnMappingToFields(input.mapping),
   );
   const importDay = input.today ?? new Date().toISOString().slice(0, 10);
-  const readOptions = {
+  const file = await openPriceList(input.bytes, input.fileName, input.sheet);
+  if (!file.ok) return { kind: "refused", messages: [file.message] };
+  const opened: OpenedPriceListRows = file.opened;
+  const readOptions: PriceListReadOptions = {
     mapping: input.mapping,
     importDay,
     knownGrades: new Set(
@@ -348,8 +358,8 @@ async function readOrImportPriceList(
     const preview = new PriceListPreviewCollector<MatchedRow & PriceListRow>();
     let matchedRows = 0;
     const newItemSkus = new Set<string>();
-    const reading = await readPriceListInBatches(
-      input.bytes,
+    const reading = await readOpenedPriceListInBatches(
+      opened,
       readOptions,
       rowsPerBatch,
       async (rows) => {
@@ -413,8 +423,8 @@ async function readOrImportPriceList(
   let goodRows = 0;
   let writing: Promise<void> = Promise.resolve();
   try {
-    const reading = await readPriceListInBatches(
-      input.bytes,
+    const reading = await readOpenedPriceListInBatches(
+      opened,
       readOptions,
       rowsPerBatch,
       async (rows, lineErrorsSoFar) => {

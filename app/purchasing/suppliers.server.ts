@@ -33,7 +33,6 @@ export async function listSuppliers() {
       id: suppliers.id,
       name: suppliers.name,
       email: suppliers.email,
-      orderEmail: suppliers.orderEmail,
       currency: suppliers.currency,
       leadTimeDays: suppliers.leadTimeDays,
       notes: suppliers.notes,

@@ -18,6 +18,10 @@ import {
   maxPriceListBytes,
 } from "~/price-lists/decode-csv";
 import { answerDomainError } from "~/lib/api-errors.server";
+import {
+  layoutAnswerOf,
+  openPriceList,
+} from "~/price-lists/open-price-list.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "importPriceLists");
@@ -50,8 +54,12 @@ function uploadedFileName(file: File): string {
 }
 
 /**
- * POST /api/v1/price-lists (buyer, admin), multipart: file, supplier, mapping (JSON: our field → the
- * file's header; supplierSku and itemSku may name the same header). ?dryRun=1 → 200 { rows, valid,
+ * POST /api/v1/price-lists (buyer, admin), multipart: file (CSV, or an .xlsx workbook: told by its
+ * content), sheet (optional: the workbook's sheet to read, by name; else its first visible sheet),
+ * supplier, mapping (JSON: our field → the file's header; supplierSku and itemSku may name the same
+ * header). ?layout=1 (file and sheet only) → 200 { format, headers, sampleRow, headerLine, and
+ * sheets [{ name, hidden }] and sheet for a workbook, or encoding for a CSV }: what a mapping needs.
+ * ?dryRun=1 → 200 { rows, valid,
  * invalid, invalidCount, invalidTruncated, matched, newItems, warnings }, each row with `match`: the
  * catalogue item it prices ({ sku, name, kind, newItem, by }); otherwise 201 with the import's
  * summary and `warnings`, or 422 with the invalid rows and nothing written. `invalid` lists the first
@@ -84,6 +92,9 @@ export async function action({ request }: Route.ActionArgs) {
     throw error;
   }
   const file = form.get("file");
+  const sheet = String(form.get("sheet") ?? "").trim() || null;
+  if (new URL(request.url).searchParams.get("layout") === "1")
+    return answerLayout(file, sheet);
   const supplier = String(form.get("supplier") ?? "").trim();
   const fields: Record<string, string[]> = {};
   if (!(file instanceof File))
@@ -125,6 +136,7 @@ export async function action({ request }: Route.ActionArgs) {
       supplierName: supplier,
       fileName: uploadedFileName(upload) || "price-list.csv",
       bytes: new Uint8Array(await upload.arrayBuffer()),
+      sheet,
       mapping: columnMappingFromFields(mappingObject as Record<string, string>),
       dryRun,
       userId: user.id,
@@ -173,4 +185,23 @@ export async function action({ request }: Route.ActionArgs) {
         );
     }
   });
+}
+
+/** ?layout=1: the file's header row, first data row and (for a workbook) sheets; nothing is written. */
+async function answerLayout(
+  file: FormDataEntryValue | null,
+  sheet: string | null,
+): Promise<Response> {
+  if (!(file instanceof File))
+    return apiError(400, "Some fields are missing or wrong.", {
+      file: ['Attach the price list as the field "file".'],
+    });
+  const opened = await openPriceList(
+    new Uint8Array(await file.arrayBuffer()),
+    uploadedFileName(file),
+    sheet,
+  );
+  if (!opened.ok)
+    return apiError(400, opened.message, { file: [opened.message] });
+  return Response.json(layoutAnswerOf(opened));
 }

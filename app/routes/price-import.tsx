@@ -49,6 +49,7 @@ export async function clientAction({
   const upload = {
     file: form.get("file") as File,
     supplier: String(form.get("supplier") ?? ""),
+    sheet: String(form.get("sheet") ?? ""),
     mapping: JSON.parse(String(form.get("mapping") ?? "{}")) as Record<
       string,
       string
@@ -94,9 +95,9 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
       <div>
         <h1 className="text-2xl font-semibold">Import a price list</h1>
         <p className="mt-1 text-graphite-700">
-          Bring a supplier&apos;s CSV price list into Turnledger: choose the
-          file, tell which column holds what, look at the rows, then import them
-          in one go.
+          Bring a supplier&apos;s price list (CSV or .xlsx workbook) into
+          Turnledger: choose the file, tell which column holds what, look at the
+          rows, then import them in one go.
         </p>
       </div>
 
@@ -107,6 +108,7 @@ export default function PriceImport({ loaderData }: Route.ComponentProps) {
         reading={reading}
         onChooseSupplier={priceImport.chooseSupplier}
         onChooseFile={priceImport.chooseFile}
+        onChooseSheet={priceImport.chooseSheet}
       />
       <MappingStep
         reading={reading}

@@ -138,7 +138,7 @@ async function chooseListAndMapIt(
 ): Promise<void> {
   await chooseFileByKeyboard(
     page,
-    page.getByLabel("Price list (CSV, up to 20 MB)"),
+    page.getByLabel("Price list (CSV or .xlsx, up to 20 MB)"),
     file,
     options,
   );

@@ -61,7 +61,7 @@ async function chooseSupplierAndFile(
   await page
     .getByLabel("Supplier", { exact: true })
     .selectOption({ label: `${supplier} (${currency})` });
-  await page.getByLabel("Price list (CSV, up to 20 MB)").setInputFiles({
+  await page.getByLabel("Price list (CSV or .xlsx, up to 20 MB)").setInputFiles({
     name,
     mimeType: "text/csv",
     buffer: Buffer.from(`${lines.join("\n")}\n`, "utf-8"),

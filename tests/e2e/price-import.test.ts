@@ -7,6 +7,7 @@
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
+import ExcelJS from "exceljs";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sendJson, signInAs } from "../support/app-client";
@@ -69,8 +70,65 @@ async function openImportPage(page: Page) {
   await waitForHydration(page);
 }
 
+/** A supplier's workbook: an old list first, this year's prices (typed cells) on the second sheet. */
+async function workbookFile(name: string) {
+  const book = new ExcelJS.Workbook();
+  const old = book.addWorksheet("Prices 2025");
+  old.addRow(["Art. no", "Price"]);
+  old.addRow(["OLD-1", 9.99]);
+  const current = book.addWorksheet("Prices 2026");
+  current.addRow(["Copper wire, prices net per kg"]);
+  current.addRow([
+    "Art. no",
+    "Description",
+    "Standard",
+    "Size",
+    "Insulation",
+    "Price",
+    "Currency",
+    "Min qty",
+    "Valid from",
+    "Lead time (days)",
+    "Spool kg",
+  ]);
+  const rows: ExcelJS.CellValue[][] = [
+    [
+      "X-1",
+      "Enamelled copper 0.50 mm",
+      "IEC",
+      0.5,
+      "grade 2",
+      14.345,
+      "EUR",
+      25,
+    ],
+    [
+      "X-2",
+      "Enamelled copper 0.80 mm",
+      "IEC",
+      0.8,
+      "grade 2",
+      13.65,
+      "EUR",
+      25,
+    ],
+    ["X-3", "Enamelled copper 1.00 mm", "IEC", 1, "grade 2", 13.1, "EUR", 50],
+  ];
+  for (const row of rows)
+    current.addRow([...row, new Date(Date.UTC(2026, 10, 1)), 21, 5]);
+  current.getColumn(9).numFmt = "dd.mm.yyyy";
+  return {
+    name,
+    mimeType:
+      "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet",
+    buffer: Buffer.from(await book.xlsx.writeBuffer()),
+  };
+}
+
 async function chooseFile(page: Page, file: ReturnType<typeof csvFile>) {
-  await page.getByLabel("Price list (CSV, up to 20 MB)").setInputFiles(file);
+  await page
+    .getByLabel("Price list (CSV or .xlsx, up to 20 MB)")
+    .setInputFiles(file);
   await page.getByText(`${file.name}:`).waitFor();
 }
 
@@ -181,6 +239,47 @@ describe("price-list import in the browser", () => {
     await page.close();
   });
 
+  it("imports an .xlsx workbook from the sheet the buyer chooses", async () => {
+    const page = await signIn(browser, "buyer");
+    await openImportPage(page);
+    await page
+      .getByLabel("Supplier", { exact: true })
+      .selectOption({ label: `${supplier} (EUR)` });
+    await chooseFile(page, await workbookFile("mill-list-2026.xlsx"));
+    // The first sheet is read until the buyer chooses another.
+    const sheet = page.getByLabel("Sheet", { exact: true });
+    expect(await sheet.inputValue()).toBe("Prices 2025");
+    await page.getByText("from the sheet “Prices 2025”.").waitFor();
+    await sheet.selectOption("Prices 2026");
+    await page.getByText("from the sheet “Prices 2026”.").waitFor();
+    expect(await fieldFor(page, "Lead time (days)").inputValue()).toBe(
+      "leadTimeDays",
+    );
+    expect(await fieldFor(page, "Spool kg").inputValue()).toBe("packQuantity");
+    await page.getByText("Every needed field has a column.").waitFor();
+
+    await page.getByRole("button", { name: "Check the rows" }).click();
+    const stored = page.getByRole("table", {
+      name: "Rows as they will be stored",
+    });
+    await stored.getByRole("cell", { name: "X-3" }).waitFor();
+    // Typed cells read exactly: the number cell 14.345, the date cell as typed, days and spool.
+    const first = stored.getByRole("row").nth(1);
+    expect(await first.textContent()).toContain("14.345");
+    expect(await first.textContent()).toContain("2026-11-01");
+    expect(await first.textContent()).toMatch(/21\sdays · packs of 5\.000\skg/);
+    expect(await first.getByRole("cell").first().textContent()).toBe("3");
+    await saveScreenshot(page, "price-import-6-xlsx-check");
+
+    await page
+      .getByRole("button", { name: "Import 3 rows", disabled: false })
+      .click();
+    await page
+      .getByText(`Imported 3 rows from mill-list-2026.xlsx for ${supplier}.`)
+      .waitFor();
+    await page.close();
+  });
+
   it("shows the upload's progress while a larger file is sent", async () => {
     const page = await signIn(browser, "buyer");
     await openImportPage(page);
@@ -234,12 +333,12 @@ describe("price-list import in the browser", () => {
       const page = await signIn(browser, "buyer");
       await openImportPage(page);
       await page
-        .getByLabel("Price list (CSV, up to 20 MB)")
+        .getByLabel("Price list (CSV or .xlsx, up to 20 MB)")
         .setInputFiles(huge);
       await page.getByText(/a price list can be at most 20 MB/).waitFor();
       expect(
         await page
-          .getByLabel("Price list (CSV, up to 20 MB)")
+          .getByLabel("Price list (CSV or .xlsx, up to 20 MB)")
           .getAttribute("aria-invalid"),
       ).toBe("true");
       await page.close();

@@ -477,6 +477,13 @@ const table: Row[] = [
     expect: { anonymous: 401, ...byCapability("importPriceLists", 400) },
   },
   {
+    // A file's header and a workbook's sheets, for the mapping screen: the same guard.
+    file: "routes/api.v1.price-lists.ts",
+    method: "POST",
+    path: "/api/v1/price-lists?layout=1",
+    expect: { anonymous: 401, ...byCapability("importPriceLists", 400) },
+  },
+  {
     file: "routes/api.v1.item-prices.ts",
     method: "GET",
     path: "/api/v1/items/NO-SUCH-SKU/prices",

@@ -10,7 +10,7 @@ import { formatQuantity, formatPriceText } from "~/lib/format";
 import { moreLineErrorsText } from "~/price-lists/line-errors";
 import type { LineError } from "~/price-lists/parse-price-list";
 import type { PriceListRow } from "~/price-lists/price-list-rows";
-import { perUnitWord } from "~/lib/unit-text";
+import { countText, perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 import {
   describeMatch,
@@ -70,7 +70,19 @@ const rowColumns: ColumnDef<PreviewRow, unknown>[] = [
     accessorFn: (row) => formatStockQuantity(Number(row.minQuantity), row.unit),
   },
   { accessorKey: "validFrom", header: "Valid from" },
+  { id: "terms", header: "Lead time, pack", accessorFn: termsText },
 ];
+
+/** "14 days · packs of 5.000 kg"; "—" when the row gives neither. */
+function termsText(row: PriceListRow): string {
+  const terms = [
+    row.leadTimeDays === null ? null : countText(row.leadTimeDays, "day"),
+    row.packQuantity === null
+      ? null
+      : `packs of ${formatStockQuantity(Number(row.packQuantity), row.unit)}`,
+  ].filter((term) => term !== null);
+  return terms.length > 0 ? terms.join(" · ") : "—";
+}
 
 const invalidColumns: ColumnDef<LineError, unknown>[] = [
   { accessorKey: "line", header: "Line", meta: { numeric: true } },

@@ -51,6 +51,8 @@ export type UploadProgress =
 export interface PriceListUpload {
   file: File;
   supplier: string;
+  /** A workbook's sheet to read; "" for a CSV (or a workbook's first visible sheet). */
+  sheet: string;
   /** Our field → the file's header. */
   mapping: Record<string, string>;
   dryRun: boolean;
@@ -64,6 +66,7 @@ export function sendPriceList<T>(
   const body = new FormData();
   body.append("supplier", upload.supplier);
   body.append("mapping", JSON.stringify(upload.mapping));
+  if (upload.sheet) body.append("sheet", upload.sheet);
   body.append("file", upload.file, upload.file.name);
   const url = `/api/v1/price-lists${upload.dryRun ? "?dryRun=1" : ""}`;
 

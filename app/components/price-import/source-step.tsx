@@ -1,9 +1,13 @@
 import { Link } from "react-router";
 import { formatQuantity } from "~/lib/format";
+import { SheetChoice } from "./sheet-choice";
 import { StepHeading } from "./step-heading";
 import type { FileReading, ImportSupplier } from "./use-price-list-import";
 
-/** Step 1: the supplier the prices are for, and the CSV file (its header read in the browser). */
+/**
+ * Step 1: the supplier the prices are for, and the file: a CSV (its header read in the
+ * browser) or an .xlsx workbook (read by the server), with a choice of sheet when it has several.
+ */
 export function SourceStep({
   suppliers,
   supplierId,
@@ -11,6 +15,7 @@ export function SourceStep({
   reading,
   onChooseSupplier,
   onChooseFile,
+  onChooseSheet,
 }: {
   suppliers: ImportSupplier[];
   supplierId: string;
@@ -19,6 +24,7 @@ export function SourceStep({
   reading: FileReading;
   onChooseSupplier: (id: string) => void;
   onChooseFile: (file: File | undefined) => Promise<void>;
+  onChooseSheet: (sheet: string) => void;
 }) {
   return (
     <section aria-labelledby="step-source" className="panel space-y-4">
@@ -60,12 +66,12 @@ export function SourceStep({
         </div>
         <div>
           <label htmlFor="import-file" className="field-label">
-            Price list (CSV, up to 20 MB)
+            Price list (CSV or .xlsx, up to 20 MB)
           </label>
           <input
             id="import-file"
             type="file"
-            accept=".csv,.txt,text/csv,text/plain"
+            accept=".csv,.txt,.xlsx,text/csv,text/plain,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet"
             onChange={(event) => void onChooseFile(event.target.files?.[0])}
             aria-invalid={reading.state === "failed" ? true : undefined}
             aria-describedby="import-file-note"
@@ -76,22 +82,34 @@ export function SourceStep({
               <p className="field-error">{reading.message}</p>
             ) : reading.state === "reading" ? (
               <p role="status" className="mt-1 text-sm text-graphite-700">
-                Reading the file&apos;s header…
+                {reading.file.name.toLowerCase().endsWith(".xlsx")
+                  ? "Reading the workbook…"
+                  : "Reading the file\u2019s header…"}
               </p>
             ) : reading.state === "read" ? (
               <p className="mt-1 text-xs text-graphite-500">
                 {reading.file.name}:{" "}
                 {formatQuantity(reading.file.size / 1024, "KB", 1)},{" "}
-                {reading.headers.length} columns, read as {reading.encoding}.
+                {reading.headers.length} columns,{" "}
+                {reading.format === "xlsx"
+                  ? `from the sheet “${reading.sheet}”.`
+                  : `read as ${reading.encoding}.`}
               </p>
             ) : (
               <p className="mt-1 text-xs text-graphite-500">
-                Comma, semicolon or tab separated; the first row names the
-                columns.
+                A CSV (comma, semicolon or tab separated) or an .xlsx workbook;
+                the first row names the columns.
               </p>
             )}
           </div>
         </div>
+        {reading.state === "read" && reading.format === "xlsx" ? (
+          <SheetChoice
+            sheets={reading.sheets}
+            sheet={reading.sheet}
+            onChooseSheet={onChooseSheet}
+          />
+        ) : null}
       </div>
     </section>
   );

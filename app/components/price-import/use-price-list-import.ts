@@ -12,7 +12,11 @@ import type {
   PriceListCheck,
   PriceListImport,
 } from "./price-list-upload";
-import { fileSizeProblem, readPriceListHeader } from "./read-price-list-header";
+import {
+  fileSizeProblem,
+  readPriceListHeader,
+  type PriceListHeaderReading,
+} from "./read-price-list-header";
 
 export type PriceImportIntent = "check" | "import";
 
@@ -25,15 +29,12 @@ export type FileReading =
   | { state: "none" }
   | { state: "reading"; file: File }
   | { state: "failed"; file: File | null; message: string }
-  | {
+  | ({
       state: "read";
-      /** Which choice of file this is, so choosing the same file again starts afresh. */
+      /** Which choice of file (or of a workbook's sheet) this is, so choosing again starts afresh. */
       token: number;
       file: File;
-      headers: string[];
-      sampleRow: string[];
-      encoding: string;
-    };
+    } & Extract<PriceListHeaderReading, { ok: true }>);
 
 export interface ImportSupplier {
   id: number;
@@ -78,7 +79,7 @@ export function usePriceListImport(
     if (reading.state === "read") offerColumns(reading.headers, id);
   }
 
-  async function chooseFile(file: File | undefined) {
+  async function chooseFile(file: File | undefined, sheet?: string) {
     const token = ++readToken.current;
     const chosenBefore = columns.filter((column) => column.source === "chosen");
     setColumns([]);
@@ -87,7 +88,7 @@ export function usePriceListImport(
     if (tooLarge)
       return setReading({ state: "failed", file, message: tooLarge });
     setReading({ state: "reading", file });
-    const result = await readPriceListHeader(file);
+    const result = await readPriceListHeader(file, sheet);
     if (token !== readToken.current) return; // a newer file was chosen meanwhile
     if (!result.ok) {
       setReading({ state: "failed", file, message: result.message });
@@ -95,6 +96,11 @@ export function usePriceListImport(
     }
     setReading({ state: "read", token, file, ...result });
     offerColumns(result.headers, supplierId, chosenBefore);
+  }
+
+  /** Another sheet of the workbook: its header is read afresh and the columns offered again. */
+  function chooseSheet(sheet: string) {
+    if (reading.state === "read") void chooseFile(reading.file, sheet);
   }
 
   function chooseFields(index: number, fields: PriceListField[]) {
@@ -115,12 +121,15 @@ export function usePriceListImport(
     entries.map((entry) => [entry.field, entry.header]),
   );
   const ready = supplier !== undefined && reading.state === "read";
+  const sheet =
+    reading.state === "read" && reading.format === "xlsx" ? reading.sheet : "";
   const key = ready
     ? JSON.stringify([
         reading.token,
         supplier.name,
         reading.file.name,
         reading.file.size,
+        sheet,
         mappingByField,
       ])
     : "";
@@ -142,6 +151,7 @@ export function usePriceListImport(
     form.set("key", key);
     form.set("supplier", supplier.name);
     form.set("mapping", JSON.stringify(mappingByField));
+    form.set("sheet", sheet);
     form.set("file", reading.file, reading.file.name);
     const fetcher = intent === "check" ? checkFetcher : importFetcher;
     void fetcher.submit(form, {
@@ -158,6 +168,7 @@ export function usePriceListImport(
     columns,
     chooseSupplier,
     chooseFile,
+    chooseSheet,
     chooseFields,
     mappingOk: mappingCheck.ok,
     mappingMessages,
