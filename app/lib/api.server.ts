@@ -23,6 +23,23 @@ export function databaseUnavailableAnswer(): Response {
   });
 }
 
+const notJson = () =>
+  apiError(400, "The body must be JSON (Content-Type: application/json).");
+
+/** A parsed body checked against its schema; throws a 400 answer naming each bad field. */
+function validBody<Schema extends z.ZodType>(
+  body: unknown,
+  schema: Schema,
+): z.output<Schema> {
+  const parsed = schema.safeParse(body);
+  if (parsed.success) return parsed.data;
+  throw apiError(
+    400,
+    "Some fields are missing or wrong.",
+    fieldsOf(parsed.error.issues, "body"),
+  );
+}
+
 /** Reads and validates a JSON body; throws a 400 answer naming each bad field. */
 export async function readJsonBody<Schema extends z.ZodType>(
   request: Request,
@@ -32,18 +49,9 @@ export async function readJsonBody<Schema extends z.ZodType>(
   try {
     body = await request.json();
   } catch {
-    throw apiError(
-      400,
-      "The body must be JSON (Content-Type: application/json).",
-    );
+    throw notJson();
   }
-  const parsed = schema.safeParse(body);
-  if (parsed.success) return parsed.data;
-  throw apiError(
-    400,
-    "Some fields are missing or wrong.",
-    fieldsOf(parsed.error.issues, "body"),
-  );
+  return validBody(body, schema);
 }
 
 /** Reads an optional JSON body (none, or an empty one, reads as {}) and validates it; throws a 400 naming each bad field. */
@@ -57,19 +65,10 @@ export async function readOptionalJsonBody<Schema extends z.ZodType>(
     try {
       body = JSON.parse(text);
     } catch {
-      throw apiError(
-        400,
-        "The body must be JSON (Content-Type: application/json).",
-      );
+      throw notJson();
     }
   }
-  const parsed = schema.safeParse(body);
-  if (parsed.success) return parsed.data;
-  throw apiError(
-    400,
-    "Some fields are missing or wrong.",
-    fieldsOf(parsed.error.issues, "body"),
-  );
+  return validBody(body, schema);
 }
 
 /** Reads and validates a request's query string (empty values dropped); throws a 400 naming each bad parameter. */

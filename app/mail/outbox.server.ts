@@ -1,13 +1,14 @@
-import { count, desc } from "drizzle-orm";
+import { asc, count, desc, inArray } from "drizzle-orm";
 import { db } from "~/db/client.server";
-import { mailOutbox } from "~/db/schema";
+import { mailAttachments, mailOutbox } from "~/db/schema";
 import { textForOutbox } from "./one-time-link";
 
 export const outboxPageSize = 50;
 
 /**
  * The outbox newest first, a page at a time, and the number of messages in
- * all. One-time links are never read: admins see a note in their place.
+ * all, each with the names, types and sizes of its attachments (never their
+ * bytes). One-time links are never read: admins see a note in their place.
  */
 export async function listOutbox(page: number, pageSize = outboxPageSize) {
   const [total] = await db.select({ messages: count() }).from(mailOutbox);
@@ -26,11 +27,36 @@ export async function listOutbox(page: number, pageSize = outboxPageSize) {
     .orderBy(desc(mailOutbox.createdAt), desc(mailOutbox.id))
     .limit(pageSize)
     .offset((page - 1) * pageSize);
+  const files =
+    messages.length === 0
+      ? []
+      : await db
+          .select({
+            outboxId: mailAttachments.outboxId,
+            fileName: mailAttachments.fileName,
+            contentType: mailAttachments.contentType,
+            byteSize: mailAttachments.byteSize,
+          })
+          .from(mailAttachments)
+          .where(
+            inArray(
+              mailAttachments.outboxId,
+              messages.map((message) => message.id),
+            ),
+          )
+          .orderBy(asc(mailAttachments.id));
   return {
     total: total?.messages ?? 0,
     messages: messages.map((message) => ({
       ...message,
       text: textForOutbox(message.text, message.sentAt !== null),
+      attachments: files
+        .filter((file) => file.outboxId === message.id)
+        .map(({ fileName, contentType, byteSize }) => ({
+          fileName,
+          contentType,
+          byteSize,
+        })),
     })),
   };
 }

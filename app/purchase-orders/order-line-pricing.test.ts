@@ -287,3 +287,44 @@ describe("lead times and expected dates (worked examples by hand)", () => {
     ).toBe("2028-03-06");
   });
 });
+
+describe("priceOrderLine: an order in the supplier's own currency", () => {
+  it("needs no exchange rate when every line is quoted in the order's currency", () => {
+    const priced = priceOrderLine(
+      request({
+        lines: breaks.map((line) => ({ ...line, currency: "DKK" })),
+        quantity: pieces(100),
+        orderCurrency: "DKK",
+      }),
+    );
+    expect(priced).toMatchObject({ ok: true, unitPrice: parseMoney("2.10") });
+  });
+
+  it("a base kept only in the company currency is still found through the rate", () => {
+    // 9.80 EUR/kg at 0.134 EUR per DKK is 73.1343 DKK/kg (9.80 ÷ 0.134 = 73.13432…);
+    // adder 20.00 DKK/kg: 93.1343 DKK/kg.
+    const priced = priceOrderLine(
+      request({
+        lines: [adderLine("20.00", { currency: "DKK" })],
+        itemId: wire,
+        quantity: 10_000n,
+        orderCurrency: "DKK",
+        bases: [
+          {
+            conductor: "copper",
+            currency: "EUR",
+            pricePerKg: parseMoney("9.80"),
+            validFrom: "2026-03-01",
+          },
+        ],
+        rates: [{ currency: "DKK", date: "2026-01-01", rate: 134_000n }],
+      }),
+    );
+    expect(priced).toMatchObject({
+      ok: true,
+      adderPerKg: parseMoney("20"),
+      metalBasePerKg: parseMoney("73.1343"),
+      unitPrice: parseMoney("93.1343"),
+    });
+  });
+});

@@ -70,19 +70,36 @@ export type OrderLinePrice = PricedOrderLine | { ok: false; message: string };
 export function priceOrderLine(
   request: OrderLinePricingRequest,
 ): OrderLinePrice {
-  const result = bestPrices({
-    itemId: request.itemId,
-    quantity: request.quantity,
-    lines: request.lines,
-    bases: request.bases,
-    rates: request.rates,
-    companyCurrency: request.companyCurrency,
-    date: request.date,
-  });
+  const offers = (companyCurrency: CurrencyCode) =>
+    bestPrices({
+      itemId: request.itemId,
+      quantity: request.quantity,
+      lines: request.lines,
+      bases: request.bases,
+      rates: request.rates,
+      companyCurrency,
+      date: request.date,
+    });
+  // Lines all quoted in the order's currency are compared in it and need no rate; a base
+  // kept only in the company currency still needs the company route, tried next.
+  const itemLines = request.lines.filter(
+    (line) => line.itemId === request.itemId,
+  );
+  const inOrderCurrency =
+    request.orderCurrency !== request.companyCurrency &&
+    itemLines.length > 0 &&
+    itemLines.every((line) => line.currency === request.orderCurrency);
+  let result = offers(
+    inOrderCurrency ? request.orderCurrency : request.companyCurrency,
+  );
+  if (inOrderCurrency && result.candidates.length === 0) {
+    const viaCompany = offers(request.companyCurrency);
+    if (viaCompany.candidates.length > 0) result = viaCompany;
+  }
   const best = result.candidates[0];
   if (!best) {
     const problems = result.cannotPrice.flatMap((offer) =>
-      offer.problems.map((problem) => problem.message),
+      offer.problems.map((problem) => sentence(problem.message)),
     );
     return {
       ok: false,
@@ -117,6 +134,8 @@ export function priceOrderLine(
     metalBaseFixedAt: null,
   };
 }
+
+const sentence = (text: string) => (/[.!?]$/.test(text) ? text : `${text}.`);
 
 function common(best: {
   supplierSku: string;

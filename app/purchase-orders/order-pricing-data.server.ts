@@ -7,22 +7,16 @@
  */
 import { and, eq, inArray } from "drizzle-orm";
 import type { Database, Transaction } from "~/db/client.server";
-import {
-  currencyRates,
-  items,
-  metalBasePrices,
-  priceLines,
-  supplierItems,
-  suppliers,
-} from "~/db/schema";
+import { items, priceLines, supplierItems, suppliers } from "~/db/schema";
 import type { MetalBaseFixing } from "~/db/tables/purchase-order-enums";
-import type { ConductorKey } from "~/engineering/reference-data";
-import { parseQuantity } from "~/lib/decimal-amounts";
 import type { ExchangeRateEntry } from "~/pricing/currency";
 import type { MetalBasePrice } from "~/pricing/metal-base";
-import { parseMoney, parseRate } from "~/pricing/money";
 import type { PriceLine } from "~/pricing/price-line";
-import { companyCurrency } from "~/purchasing/suppliers.server";
+import {
+  loadPricingReference,
+  priceLineColumns,
+  priceLinesByItem,
+} from "~/purchasing/item-prices.server";
 
 type Reader = Database | Transaction;
 
@@ -35,6 +29,15 @@ export interface OrderSupplier {
   orderEmail: string | null;
   email: string | null;
 }
+
+/** The columns of an item an order line needs. */
+export const orderItemColumns = {
+  id: items.id,
+  sku: items.sku,
+  name: items.name,
+  unit: items.unit,
+  active: items.active,
+};
 
 export interface OrderItem {
   id: number;
@@ -84,41 +87,29 @@ export async function findItemsBySku(
   const wanted = [...new Set(skus)];
   if (wanted.length === 0) return new Map();
   const rows = await reader
-    .select({
-      id: items.id,
-      sku: items.sku,
-      name: items.name,
-      unit: items.unit,
-      active: items.active,
-    })
+    .select(orderItemColumns)
     .from(items)
     .where(inArray(items.sku, wanted));
   return new Map(rows.map((row) => [row.sku.toUpperCase(), row]));
 }
 
-/** Everything the supplier's prices for these items depend on. */
+/**
+ * Everything the supplier's prices for these items depend on. The price lines carry their
+ * own lead time (`price_lines.lead_time_days`); the supplier's is applied per order line.
+ */
 export async function loadOrderPricingData(
   reader: Reader,
   supplier: OrderSupplier,
   itemIds: readonly number[],
 ): Promise<OrderPricingData> {
   const ids = [...new Set(itemIds)];
-  const [rows, skuRows, baseRows, rateRows, currency] = await Promise.all([
+  const [rows, skuRows, reference] = await Promise.all([
     ids.length === 0
       ? []
       : reader
           .select({
-            itemId: priceLines.itemId,
-            supplierSku: priceLines.supplierSku,
-            currency: priceLines.currency,
-            unitPrice: priceLines.unitPrice,
-            adderPerKg: priceLines.adderPerKg,
-            conductor: priceLines.conductor,
-            minQuantity: priceLines.minQuantity,
-            validFrom: priceLines.validFrom,
+            ...priceLineColumns,
             leadTimeDays: priceLines.leadTimeDays,
-            importId: priceLines.importId,
-            line: priceLines.line,
           })
           .from(priceLines)
           .where(
@@ -142,67 +133,14 @@ export async function loadOrderPricingData(
               inArray(supplierItems.itemId, ids),
             ),
           ),
-    reader
-      .select({
-        conductor: metalBasePrices.conductor,
-        currency: metalBasePrices.currency,
-        pricePerKg: metalBasePrices.pricePerKg,
-        validFrom: metalBasePrices.validFrom,
-      })
-      .from(metalBasePrices),
-    reader
-      .select({
-        currency: currencyRates.currency,
-        rate: currencyRates.rate,
-        validFrom: currencyRates.validFrom,
-      })
-      .from(currencyRates),
-    companyCurrency(),
+    loadPricingReference(reader),
   ]);
-  const linesByItem = new Map<number, PriceLine[]>();
-  for (const row of rows) {
-    const common = {
-      itemId: String(row.itemId),
-      supplier: supplier.name,
-      supplierSku: row.supplierSku,
-      currency: row.currency,
-      minQuantity: parseQuantity(row.minQuantity),
-      validFrom: row.validFrom,
-      ...(row.leadTimeDays === null ? {} : { leadTimeDays: row.leadTimeDays }),
-      sourceLine: { importId: String(row.importId ?? ""), line: row.line ?? 0 },
-    };
-    const line: PriceLine =
-      row.adderPerKg !== null
-        ? {
-            ...common,
-            pricing: "metal-base-adder",
-            adderPerKg: parseMoney(row.adderPerKg),
-            conductor: (row.conductor ?? "copper") as ConductorKey,
-          }
-        : {
-            ...common,
-            pricing: "unit-price",
-            unitPrice: parseMoney(row.unitPrice ?? "0"),
-          };
-    const list = linesByItem.get(row.itemId);
-    if (list) list.push(line);
-    else linesByItem.set(row.itemId, [line]);
-  }
   return {
     supplier,
-    linesByItem,
+    linesByItem: priceLinesByItem(
+      rows.map((row) => ({ ...row, supplier: supplier.name })),
+    ),
     supplierSkus: new Map(skuRows.map((row) => [row.itemId, row.supplierSku])),
-    bases: baseRows.map((base) => ({
-      conductor: base.conductor as ConductorKey,
-      currency: base.currency,
-      pricePerKg: parseMoney(base.pricePerKg),
-      validFrom: base.validFrom,
-    })),
-    rates: rateRows.map((rate) => ({
-      currency: rate.currency,
-      date: rate.validFrom,
-      rate: parseRate(rate.rate),
-    })),
-    companyCurrency: currency,
+    ...reference,
   };
 }

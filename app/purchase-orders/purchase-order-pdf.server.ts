@@ -18,9 +18,9 @@ const columns = [
   { key: "line", label: "#", width: 20, align: "left" },
   { key: "sku", label: "Our SKU", width: 62, align: "left" },
   { key: "supplierSku", label: "Supplier SKU", width: 62, align: "left" },
-  { key: "description", label: "Description", width: 118, align: "left" },
+  { key: "description", label: "Description", width: 106, align: "left" },
   { key: "quantity", label: "Quantity", width: 56, align: "right" },
-  { key: "unitPrice", label: "Unit price", width: 68, align: "right" },
+  { key: "unitPrice", label: "Unit price", width: 80, align: "right" },
   { key: "lineTotal", label: "Line total", width: 52, align: "right" },
   {
     key: "dates",
@@ -76,6 +76,8 @@ export function purchaseOrderPdf(
     if (pdf.y + height > pageHeight - margin - 40) {
       pdf.addPage();
       if (!bold) drawRow(headerTexts, true);
+      // The header row leaves its bold face behind.
+      pdf.font(bold ? "Helvetica-Bold" : "Helvetica").fontSize(8);
     }
     const top = pdf.y;
     let x = margin;

@@ -40,6 +40,7 @@ import {
   findItemsBySku,
   findOrderSupplier,
   loadOrderPricingData,
+  orderItemColumns,
   type OrderItem,
   type OrderPricingData,
 } from "./order-pricing-data.server";
@@ -833,13 +834,7 @@ async function lockItems(
 ): Promise<Map<number, OrderItem>> {
   if (itemIds.length === 0) return new Map();
   const rows = await tx
-    .select({
-      id: items.id,
-      sku: items.sku,
-      name: items.name,
-      unit: items.unit,
-      active: items.active,
-    })
+    .select(orderItemColumns)
     .from(items)
     .where(inArray(items.id, [...itemIds]))
     .orderBy(asc(items.id))
@@ -850,13 +845,7 @@ async function lockItems(
 async function itemsById(tx: Transaction, itemIds: readonly number[]) {
   if (itemIds.length === 0) return new Map<number, OrderItem>();
   const rows = await tx
-    .select({
-      id: items.id,
-      sku: items.sku,
-      name: items.name,
-      unit: items.unit,
-      active: items.active,
-    })
+    .select(orderItemColumns)
     .from(items)
     .where(inArray(items.id, [...new Set(itemIds)]));
   return new Map(rows.map((row) => [row.id, row]));

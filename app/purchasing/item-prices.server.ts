@@ -4,7 +4,7 @@
  * same inputs, loaded once by `loadItemPricing`.
  */
 import { eq, inArray } from "drizzle-orm";
-import { db } from "~/db/client.server";
+import { db, type Database, type Transaction } from "~/db/client.server";
 import {
   currencyRates,
   items,
@@ -46,69 +46,40 @@ export async function loadItemPricing(
   return pricing ?? null;
 }
 
-/**
- * The pricing of several items at once, keyed by the stored SKU (unknown SKUs left out): one query for all
- * their price lines, one for the metal bases, one for the rates — a design of 60 lines is
- * priced with four queries, not 240.
- */
-export async function loadItemsPricing(
-  skus: readonly string[],
-): Promise<Map<string, ItemPricing>> {
-  const wanted = [...new Set(skus)];
-  if (wanted.length === 0) return new Map();
-  const [found, rows, baseRows, rateRows, currency] = await Promise.all([
-    db
-      .select({ id: items.id, sku: items.sku, unit: items.unit })
-      .from(items)
-      .where(inArray(items.sku, wanted)),
-    db
-      .select({
-        itemId: priceLines.itemId,
-        supplier: suppliers.name,
-        leadTimeDays: suppliers.leadTimeDays,
-        supplierSku: priceLines.supplierSku,
-        currency: priceLines.currency,
-        unitPrice: priceLines.unitPrice,
-        adderPerKg: priceLines.adderPerKg,
-        conductor: priceLines.conductor,
-        minQuantity: priceLines.minQuantity,
-        validFrom: priceLines.validFrom,
-        importId: priceLines.importId,
-        line: priceLines.line,
-      })
-      .from(priceLines)
-      .innerJoin(items, eq(items.id, priceLines.itemId))
-      .innerJoin(suppliers, eq(suppliers.id, priceLines.supplierId))
-      .where(inArray(items.sku, wanted))
-      .limit(5_000 * wanted.length),
-    db
-      .select({
-        conductor: metalBasePrices.conductor,
-        currency: metalBasePrices.currency,
-        pricePerKg: metalBasePrices.pricePerKg,
-        validFrom: metalBasePrices.validFrom,
-      })
-      .from(metalBasePrices),
-    db
-      .select({
-        currency: currencyRates.currency,
-        rate: currencyRates.rate,
-        validFrom: currencyRates.validFrom,
-      })
-      .from(currencyRates),
-    companyCurrency(),
-  ]);
-  const bases: MetalBasePrice[] = baseRows.map((base) => ({
-    conductor: base.conductor as ConductorKey,
-    currency: base.currency,
-    pricePerKg: parseMoney(base.pricePerKg),
-    validFrom: base.validFrom,
-  }));
-  const rates: ExchangeRateEntry[] = rateRows.map((rate) => ({
-    currency: rate.currency,
-    date: rate.validFrom,
-    rate: parseRate(rate.rate),
-  }));
+/** The stored columns of a price line that pricing reads (with the supplier's name and lead time beside). */
+export const priceLineColumns = {
+  itemId: priceLines.itemId,
+  supplierSku: priceLines.supplierSku,
+  currency: priceLines.currency,
+  unitPrice: priceLines.unitPrice,
+  adderPerKg: priceLines.adderPerKg,
+  conductor: priceLines.conductor,
+  minQuantity: priceLines.minQuantity,
+  validFrom: priceLines.validFrom,
+  importId: priceLines.importId,
+  line: priceLines.line,
+};
+
+/** A stored price line as `priceLineColumns` reads it, with its supplier's name and the lead time that applies. */
+export interface PriceLineRow {
+  itemId: number;
+  supplier: string;
+  leadTimeDays: number | null;
+  supplierSku: string;
+  currency: string;
+  unitPrice: string | null;
+  adderPerKg: string | null;
+  conductor: string | null;
+  minQuantity: string;
+  validFrom: string;
+  importId: number | null;
+  line: number | null;
+}
+
+/** Stored price lines as the pricing modules' lines, by our item id. */
+export function priceLinesByItem(
+  rows: readonly PriceLineRow[],
+): Map<number, PriceLine[]> {
   const linesByItem = new Map<number, PriceLine[]>();
   for (const row of rows) {
     const common = {
@@ -138,6 +109,80 @@ export async function loadItemsPricing(
     if (list) list.push(line);
     else linesByItem.set(row.itemId, [line]);
   }
+  return linesByItem;
+}
+
+/** Every metal base and currency rate, and the company currency: what every price depends on besides its lines. */
+export async function loadPricingReference(
+  reader: Database | Transaction = db,
+): Promise<{
+  bases: MetalBasePrice[];
+  rates: ExchangeRateEntry[];
+  companyCurrency: CurrencyCode;
+}> {
+  const [baseRows, rateRows, currency] = await Promise.all([
+    reader
+      .select({
+        conductor: metalBasePrices.conductor,
+        currency: metalBasePrices.currency,
+        pricePerKg: metalBasePrices.pricePerKg,
+        validFrom: metalBasePrices.validFrom,
+      })
+      .from(metalBasePrices),
+    reader
+      .select({
+        currency: currencyRates.currency,
+        rate: currencyRates.rate,
+        validFrom: currencyRates.validFrom,
+      })
+      .from(currencyRates),
+    companyCurrency(),
+  ]);
+  return {
+    bases: baseRows.map((base) => ({
+      conductor: base.conductor as ConductorKey,
+      currency: base.currency,
+      pricePerKg: parseMoney(base.pricePerKg),
+      validFrom: base.validFrom,
+    })),
+    rates: rateRows.map((rate) => ({
+      currency: rate.currency,
+      date: rate.validFrom,
+      rate: parseRate(rate.rate),
+    })),
+    companyCurrency: currency,
+  };
+}
+
+/**
+ * The pricing of several items at once, keyed by the stored SKU (unknown SKUs left out): one query for all
+ * their price lines, one for the metal bases, one for the rates — a design of 60 lines is
+ * priced with four queries, not 240.
+ */
+export async function loadItemsPricing(
+  skus: readonly string[],
+): Promise<Map<string, ItemPricing>> {
+  const wanted = [...new Set(skus)];
+  if (wanted.length === 0) return new Map();
+  const [found, rows, reference] = await Promise.all([
+    db
+      .select({ id: items.id, sku: items.sku, unit: items.unit })
+      .from(items)
+      .where(inArray(items.sku, wanted)),
+    db
+      .select({
+        ...priceLineColumns,
+        supplier: suppliers.name,
+        leadTimeDays: suppliers.leadTimeDays,
+      })
+      .from(priceLines)
+      .innerJoin(items, eq(items.id, priceLines.itemId))
+      .innerJoin(suppliers, eq(suppliers.id, priceLines.supplierId))
+      .where(inArray(items.sku, wanted))
+      .limit(5_000 * wanted.length),
+    loadPricingReference(),
+  ]);
+  const linesByItem = priceLinesByItem(rows);
   return new Map(
     found.map((item) => [
       item.sku,
@@ -146,9 +191,7 @@ export async function loadItemsPricing(
         itemId: item.id,
         unit: item.unit,
         lines: linesByItem.get(item.id) ?? [],
-        bases,
-        rates,
-        companyCurrency: currency,
+        ...reference,
       },
     ]),
   );

@@ -2,7 +2,7 @@ import { createColumnHelper } from "@tanstack/react-table";
 import type { Route } from "./+types/admin-outbox";
 import { requireCapability } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
-import { formatDateTime } from "~/lib/format";
+import { formatDateTime, formatQuantity } from "~/lib/format";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { listOutbox, outboxPageSize } from "~/mail/outbox.server";
 
@@ -36,14 +36,27 @@ const columns = [
     id: "message",
     header: "Message",
     cell: ({ row }) => (
-      <details>
-        <summary className="cursor-pointer font-medium">
-          {row.original.subject}
-        </summary>
-        <pre className="mt-2 whitespace-pre-wrap font-sans text-graphite-700">
-          {row.original.text}
-        </pre>
-      </details>
+      <>
+        <details>
+          <summary className="cursor-pointer font-medium">
+            {row.original.subject}
+          </summary>
+          <pre className="mt-2 whitespace-pre-wrap font-sans text-graphite-700">
+            {row.original.text}
+          </pre>
+        </details>
+        {row.original.attachments.length > 0 ? (
+          <p className="mt-2 text-sm text-graphite-700">
+            Attached:{" "}
+            {row.original.attachments
+              .map(
+                (file) =>
+                  `${file.fileName} (${formatQuantity(file.byteSize / 1024, "KB", 1)})`,
+              )
+              .join(", ")}
+          </p>
+        ) : null}
+      </>
     ),
   }),
   column.display({

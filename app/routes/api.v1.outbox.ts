@@ -7,7 +7,7 @@ import { listOutbox } from "~/mail/outbox.server";
 
 const outboxQuery = z.object({ limit: pageSizeParam("limit", 500, 100) });
 
-/** GET /api/v1/outbox?limit=100 → [{ to, subject, text, sentAt }], newest first. Admins only. */
+/** GET /api/v1/outbox?limit=100 → [{ to, subject, text, sentAt, attachments: [{ fileName, contentType, byteSize }] }], newest first. Admins only. */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "readOutbox");
   const { limit } = readSearchParams(request, outboxQuery);
@@ -18,6 +18,7 @@ export async function loader({ request }: Route.LoaderArgs) {
       subject: message.subject,
       text: message.text,
       sentAt: message.sentAt?.toISOString() ?? null,
+      attachments: message.attachments,
     })),
   );
 }

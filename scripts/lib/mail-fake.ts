@@ -1,8 +1,9 @@
 /**
  * The local SMTP fake for development and tests: a real SMTP server (the
  * smtp-server package) on 127.0.0.1 that keeps every message it accepts, and
- * a small HTTP endpoint that lists them, so tests read what truly went
- * through SMTP. It delivers nothing anywhere.
+ * a small HTTP endpoint that lists them (attachments with their bytes in
+ * base64), so tests read what truly went through SMTP. It delivers nothing
+ * anywhere.
  *
  * Tests can make it refuse some recipients, as a server that is down would
  * (421 "service not available"): PUT /refusals ["text in the address", …];
@@ -14,11 +15,18 @@ import type { AddressInfo } from "node:net";
 import { simpleParser } from "mailparser";
 import { SMTPServer } from "smtp-server";
 
+export interface ReceivedAttachment {
+  fileName: string;
+  contentType: string;
+  contentBase64: string;
+}
+
 export interface ReceivedMessage {
   to: string[];
   from: string;
   subject: string;
   text: string;
+  attachments: ReceivedAttachment[];
   receivedAt: string;
 }
 
@@ -68,6 +76,11 @@ export async function startMailFake(options: {
             from: addressesOf(parsed.from)[0] ?? "",
             subject: parsed.subject ?? "",
             text: parsed.text ?? "",
+            attachments: parsed.attachments.map((attachment) => ({
+              fileName: attachment.filename ?? "",
+              contentType: attachment.contentType,
+              contentBase64: attachment.content.toString("base64"),
+            })),
             receivedAt: new Date().toISOString(),
           };
           messages.unshift(message);

@@ -26,6 +26,7 @@ import { buildOrderRouteRows } from "./route-roles.build-orders";
 import { designRouteRows } from "./route-roles.designs";
 import { insightRouteRows } from "./route-roles.insight";
 import { purchaseOrderPageRows } from "./route-roles.purchase-order-pages";
+import { purchaseOrderRouteRows } from "./route-roles.purchase-orders";
 import { supplierRouteRows } from "./route-roles.suppliers";
 import {
   byCapability,
@@ -43,6 +44,7 @@ const table: Row[] = [
   ...insightRouteRows,
   ...supplierRouteRows,
   ...purchaseOrderPageRows,
+  ...purchaseOrderRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",

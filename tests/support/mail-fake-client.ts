@@ -6,6 +6,12 @@ export interface ReceivedMessage {
   from: string;
   subject: string;
   text: string;
+  /** Files sent with the message, their bytes in base64. */
+  attachments: {
+    fileName: string;
+    contentType: string;
+    contentBase64: string;
+  }[];
   receivedAt: string;
 }
 
