@@ -112,5 +112,6 @@ describe("receiving against an order", () => {
     expect(await link.getAttribute("href")).toBe(
       `/purchase-orders/${order.id}`,
     );
+    await saveScreenshot(page, "journal-receipt-order");
   });
 });
