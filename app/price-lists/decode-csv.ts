@@ -160,10 +160,10 @@ function looksBinary(text: string): boolean {
 /** A hint for file types buyers often upload by mistake, recognised by their first bytes. */
 function describeKnownBinary(bytes: Uint8Array): string | null {
   if (startsWith(bytes, [0x50, 0x4b, 0x03, 0x04])) {
-    return "It looks like a spreadsheet workbook or a ZIP archive: open it in the spreadsheet program, save it as CSV and upload that file.";
+    return "It looks like a spreadsheet workbook or a ZIP archive: upload an .xlsx workbook as it is, or open it in the spreadsheet program, save it as CSV and upload that file.";
   }
   if (startsWith(bytes, [0xd0, 0xcf, 0x11, 0xe0])) {
-    return "It looks like an older spreadsheet workbook: open it in the spreadsheet program, save it as CSV and upload that file.";
+    return "It looks like an older .xls workbook, or a workbook protected with a password: open it in the spreadsheet program, save it as .xlsx (Excel workbook, without a password) or as CSV and upload that file.";
   }
   if (startsWith(bytes, [0x25, 0x50, 0x44, 0x46])) {
     return "It looks like a PDF: ask the supplier for the price list as CSV, or as a spreadsheet to save as CSV.";

@@ -544,9 +544,26 @@ function readMinQuantity(
   problems: string[],
 ): string | undefined {
   if (cells.cell("minQuantity") === "") return "1.000";
-  const quantity = readAmount(
+  return readPositiveQuantity(
     "minQuantity",
     "the minimum quantity",
+    cells,
+    context,
+    problems,
+  );
+}
+
+/** A quantity more than zero, 3 places; undefined with a problem naming the field otherwise. */
+function readPositiveQuantity(
+  field: "minQuantity" | "packQuantity",
+  label: string,
+  cells: RowCells,
+  context: PriceListRowContext,
+  problems: string[],
+): string | undefined {
+  const quantity = readAmount(
+    field,
+    label,
     quantityRules,
     cells,
     context,
@@ -554,9 +571,7 @@ function readMinQuantity(
   );
   if (quantity === undefined) return undefined;
   if (/^0+\.0+$/.test(quantity)) {
-    problems.push(
-      `the minimum quantity ${cells.ref("minQuantity")} must be more than zero`,
-    );
+    problems.push(`${label} ${cells.ref(field)} must be more than zero`);
     return undefined;
   }
   return quantity;
@@ -614,21 +629,14 @@ function readPackQuantity(
   problems: string[],
 ): string | null | undefined {
   if (cells.cell("packQuantity") === "") return null;
-  const quantity = readAmount(
+  const quantity = readPositiveQuantity(
     "packQuantity",
     "the pack quantity",
-    quantityRules,
     cells,
     context,
     problems,
   );
   if (quantity === undefined) return undefined;
-  if (/^0+\.0+$/.test(quantity)) {
-    problems.push(
-      `the pack quantity ${cells.ref("packQuantity")} must be more than zero`,
-    );
-    return undefined;
-  }
   if (unit === "pcs" && !quantity.endsWith(".000")) {
     problems.push(
       `the pack quantity ${cells.ref("packQuantity")} is not a whole number of pieces`,

@@ -127,6 +127,17 @@ export function readPriceListText(
   };
 }
 
+/** The end of a reading in batches: the good rows' count and the errors, or file-level problems. */
+export type BatchReading<Layout> =
+  | {
+      ok: true;
+      layout: Layout;
+      goodRows: number;
+      errors: LineError[];
+      errorCount: number;
+    }
+  | { ok: false; messages: string[] };
+
 /**
  * Reads an uploaded file and hands its good rows over in batches (each awaited
  * before the next is read), keeping none of them: for imports of large files.
@@ -138,16 +149,7 @@ export async function readPriceListInBatches(
   options: PriceListReadOptions,
   batchRows: number,
   onBatch: (rows: PriceListRow[], lineErrorsSoFar: number) => Promise<void>,
-): Promise<
-  | {
-      ok: true;
-      layout: CsvLayout;
-      goodRows: number;
-      errors: LineError[];
-      errorCount: number;
-    }
-  | { ok: false; messages: string[] }
-> {
+): Promise<BatchReading<CsvLayout>> {
   const decoded = decodePriceListBytes(bytes);
   if (!decoded.ok) return { ok: false, messages: [decoded.message] };
   const opened = openPriceListCsv(decoded.text);
@@ -164,16 +166,7 @@ export async function readOpenedPriceListInBatches<Layout extends RowsLayout>(
   options: PriceListReadOptions,
   batchRows: number,
   onBatch: (rows: PriceListRow[], lineErrorsSoFar: number) => Promise<void>,
-): Promise<
-  | {
-      ok: true;
-      layout: Layout;
-      goodRows: number;
-      errors: LineError[];
-      errorCount: number;
-    }
-  | { ok: false; messages: string[] }
-> {
+): Promise<BatchReading<Layout>> {
   const started = collectorFor(opened, options);
   if (!started.ok) return started;
   const { collector } = started;
