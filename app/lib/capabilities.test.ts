@@ -23,6 +23,8 @@ describe("capabilityRoles", () => {
       keepPrices: ["buyer"],
       hearLowStockAlerts: ["buyer"],
       draftPurchaseRequests: ["buyer"],
+      orderPurchases: ["buyer"],
+      receivePurchases: ["storekeeper"],
       editDesigns: ["builder"],
       releaseDesigns: ["builder"],
       createBuildOrders: ["builder"],

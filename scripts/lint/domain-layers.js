@@ -18,6 +18,7 @@ export const domainLayers = [
   ["price-lists"],
   ["pricing"],
   ["purchasing"],
+  ["purchase-orders"],
   ["alerts"],
   ["designs"],
   ["insight"],
