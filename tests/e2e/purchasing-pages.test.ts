@@ -87,7 +87,7 @@ describe("suppliers and prices in the browser", () => {
     const name = `Enamel works ${uniqueCode("E")}`;
     const form = page.getByRole("region", { name: "New supplier" });
     await form.getByLabel("Name").fill(name);
-    await form.getByLabel("E-mail for orders").fill("not an address");
+    await form.getByLabel("E-mail", { exact: true }).fill("not an address");
     await form.getByLabel("Quotes in (currency)").fill("USD");
     await form.getByLabel("Lead time").fill("21");
     await form.getByLabel("Notes").fill("Spools returnable, 10 kg minimum.");
@@ -97,7 +97,9 @@ describe("suppliers and prices in the browser", () => {
       .toBe(1);
     await saveScreenshot(page, "purchasing-supplier-field-error");
 
-    await form.getByLabel("E-mail for orders").fill("orders@enamel.example");
+    await form
+      .getByLabel("E-mail", { exact: true })
+      .fill("orders@enamel.example");
     await form.getByRole("button", { name: "Add supplier" }).click();
     await page
       .getByRole("status")
