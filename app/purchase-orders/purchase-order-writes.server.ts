@@ -34,6 +34,7 @@ import { deliverLater, writeToOutbox } from "~/mail/mailer.server";
 import { bestPrices } from "~/pricing/best-price";
 import { loadItemPricing } from "~/purchasing/item-prices.server";
 import { suggestedOrderQuantity } from "~/stock/reorder-quantities";
+import { movementsCommitted } from "~/stock/stock-movements.server";
 import { expectedDateOf, orderDateOf } from "./order-line-pricing";
 import { lineValuesFor, type LineValues } from "./order-line-values";
 import {
@@ -642,7 +643,7 @@ export async function sendPurchaseOrder(
     { label },
   );
   deliverLater(queued);
-  return orderView(orderId);
+  return viewAfterOnOrderChanged(orderId);
 }
 
 // ---------------------------------------------------------------- ending
@@ -739,7 +740,20 @@ async function endOrder(
     },
     { label },
   );
-  return orderView(orderId);
+  return viewAfterOnOrderChanged(orderId);
+}
+
+/**
+ * The order after its items' stock on order changed (sent, cancelled, closed short): the
+ * ledger's after-commit work runs for those items, so a low-stock alert's cover by sent
+ * orders (decision 011) is worked out again at once.
+ */
+async function viewAfterOnOrderChanged(
+  orderId: number,
+): Promise<PurchaseOrderView> {
+  const view = await orderView(orderId);
+  await movementsCommitted([...new Set(view.lines.map((line) => line.sku))]);
+  return view;
 }
 
 // ---------------------------------------------------------------- shared steps
