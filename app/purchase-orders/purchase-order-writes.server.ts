@@ -898,6 +898,12 @@ function priceLine(
   currency: string,
   when: { pricingDate: CalendarDate; orderDate: CalendarDate; field: string },
 ) {
+  if (item.unit === "pcs" && line.quantity % 1000n !== 0n)
+    throw new DomainError(
+      400,
+      `${item.sku} is counted in whole pieces.`,
+      when.field.replace(/unitPrice$/, "quantity"),
+    );
   const result = lineValuesFor({
     item,
     quantity: line.quantity,

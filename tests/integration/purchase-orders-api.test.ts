@@ -568,6 +568,18 @@ describe("refusals write nothing", () => {
       /missing or wrong/,
     ],
     [
+      "a piece item ordered in part pieces",
+      () =>
+        sendJson(
+          "POST",
+          "/api/v1/purchase-orders",
+          { supplierId, lines: [{ sku: magnet.sku, quantity: 2.5 }] },
+          buyer,
+        ),
+      400,
+      /counted in whole pieces.*lines\.0\.quantity/,
+    ],
+    [
       "an unknown supplier",
       () =>
         sendJson(
