@@ -2,12 +2,13 @@
  * A buyer's purchase order in Chromium: written by hand on the new-order page (one line
  * at the price list's price, one at a price of the buyer's own with its reason), edited
  * while draft, sent after the confirmation, then seen sent with its history, in the list
- * and on the printable page.
+ * and on the printable page; each page scanned with axe-core on the way.
  */
 import fs from "node:fs";
 import path from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { scanPage } from "../support/accessibility";
 import { baseUrl, signInAs } from "../support/app-client";
 import {
   createMagnetItem,
@@ -35,8 +36,12 @@ afterAll(async () => {
   await closeTestDatabase();
 });
 
-/** The page's screenshot, also where the notes of this work keep them. */
+/** Serious or critical axe-core findings on the pages shot below (none expected). */
+const found: string[] = [];
+
+/** The page's screenshot (after an accessibility scan), also where the notes of this work keep them. */
 async function shoot(page: Page, name: string) {
+  await scanPage(page, found);
   const file = await saveScreenshot(page, `purchase-orders-${name}`);
   const notes = "/work/notes/shots";
   if (fs.existsSync(notes))
@@ -192,5 +197,6 @@ describe("purchase orders in the browser", () => {
     await row.waitFor();
     expect(await row.textContent()).toContain(fixtures.name);
     await shoot(page, "list");
+    expect(found).toEqual([]);
   });
 });

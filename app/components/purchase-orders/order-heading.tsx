@@ -55,7 +55,7 @@ export function OrderHeading({
           : ""} ·{" "}
         <Link
           to={`/suppliers/${order.supplier.id}`}
-          className="text-copper-700 underline-offset-2 hover:underline"
+          className="text-copper-700 underline underline-offset-2"
         >
           supplier&apos;s page
         </Link>{" "}

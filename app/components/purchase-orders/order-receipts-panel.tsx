@@ -41,7 +41,7 @@ export function OrderReceiptsPanel({ order }: { order: PurchaseOrderView }) {
                       of {line.sku} ·{" "}
                       <Link
                         to={`/stock/journal?${journal}`}
-                        className="text-copper-700 underline-offset-2 hover:underline"
+                        className="text-copper-700 underline underline-offset-2"
                       >
                         in the journal
                       </Link>
