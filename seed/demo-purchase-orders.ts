@@ -173,7 +173,7 @@ export async function seedDemoPurchaseOrders(
   const twice = await createPurchaseOrder(
     {
       supplierId: otherWire.supplierId,
-      lines: [{ sku: otherWire.skus[0]!, quantity: amount(5) }],
+      lines: [{ sku: otherWire.skus[0]!, quantity: amount(10) }],
     },
     buyerId,
   );
@@ -199,7 +199,7 @@ export async function seedDemoPurchaseOrders(
       supplierId: otherWire.supplierId,
       notes: "Check the enamel grade with the winding shop before sending.",
       lines: [
-        { sku: otherWire.skus[1] ?? otherWire.skus[0]!, quantity: amount(8) },
+        { sku: otherWire.skus[1] ?? otherWire.skus[0]!, quantity: amount(20) },
       ],
     },
     buyerId,
