@@ -21,8 +21,8 @@ import {
   parseUnitCost,
   quantityToNumber,
 } from "~/lib/decimal-amounts";
-import { amountForQuantity, fromThousandths } from "~/pricing/money";
 import { orderDateOf } from "./order-line-pricing";
+import { lineTotalCents } from "./purchase-order-document";
 import type { PurchaseOrderListQuery } from "./purchase-order-forms";
 import {
   purchaseOrderNumber,
@@ -144,8 +144,8 @@ export async function loadPurchaseOrder(orderId: number, reader: Reader = db) {
       unitPrice,
       metalBasePerKg: moneyOrNull(line.metalBasePerKg),
       adderPerKg: moneyOrNull(line.adderPerKg),
-      /** quantity × unit price, rounded half away from zero to a ten-thousandth. */
-      lineTotal: amountForQuantity(fromThousandths(quantity), unitPrice),
+      // To the cent, as the printed order and its PDF and CSV add it up (one rule).
+      lineTotal: lineTotalCents(quantity, unitPrice) * 100n,
     };
   });
   return {
@@ -293,7 +293,7 @@ export async function listPurchaseOrders(query: PurchaseOrderListQuery) {
           .select({
             orderId: purchaseOrderLines.orderId,
             lines: count(),
-            total: sql<string>`SUM(ROUND(${purchaseOrderLines.quantity} * ${purchaseOrderLines.unitPrice}, 4))`,
+            total: sql<string>`SUM(ROUND(${purchaseOrderLines.quantity} * ${purchaseOrderLines.unitPrice}, 2))`,
             nextExpected: sql<
               string | null
             >`MIN(CASE WHEN ${purchaseOrderLines.quantity} > ${purchaseOrderLines.received} THEN ${purchaseOrderLines.expectedDate} END)`.mapWith(

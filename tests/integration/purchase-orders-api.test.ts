@@ -282,8 +282,9 @@ describe("creating and editing a draft", () => {
       requestedDate: "2031-05-02",
       expectedDate: "2031-05-02",
     });
-    // 315.00 + 25.5 × 68.25 = 315.00 + 1,740.375 = 2,055.375
-    expect(order.total).toBe(2055.375);
+    // Line totals to the cent, half away from zero, as the printed order adds them:
+    // 315.00 + 25.5 × 68.25 = 315.00 + 1,740.375 → 1,740.38 = 2,055.38
+    expect(order.total).toBe(2055.38);
     expect(order.events.map((event) => event.kind)).toEqual(["created"]);
     expect(order.events[0]!.detail).toContain(magnet.sku);
   });
