@@ -117,14 +117,15 @@ export default function PurchaseOrder({
         order={order}
         canReceiveHere={can.receive && canReceive(order.status)}
       />
+      {/* The lines take the page's whole width: a sent order's columns (received, open) fit. */}
+      <DataTable
+        caption={`Lines of ${order.number}`}
+        columns={orderLineColumns(order.currency, order.status !== "draft")}
+        rows={order.lines}
+        emptyText="This order has no lines yet."
+      />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0 space-y-6">
-          <DataTable
-            caption={`Lines of ${order.number}`}
-            columns={orderLineColumns(order.currency, order.status !== "draft")}
-            rows={order.lines}
-            emptyText="This order has no lines yet."
-          />
           {editing ? (
             <DraftEditForm order={order} lastResult={resultFor("save")} />
           ) : null}
