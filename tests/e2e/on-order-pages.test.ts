@@ -149,7 +149,11 @@ describe("on order in the browser", () => {
 
   it("lists the late lines for everyone signed in", async () => {
     const page = await signIn(browser, "storekeeper");
-    await page.getByRole("link", { name: "Late order lines" }).click();
+    // From the menu's purchase orders to their late lines.
+    await page.getByRole("link", { name: "Purchase orders" }).click();
+    await page.waitForURL(`${baseUrl()}/purchase-orders`);
+    await waitForHydration(page);
+    await page.getByRole("link", { name: "Late lines", exact: true }).click();
     await page.waitForURL(`${baseUrl()}/purchase-orders/late`);
     await waitForHydration(page);
     const row = page
