@@ -50,14 +50,17 @@ describe("conductor materials", () => {
     expect(copper.densityGPerCm3).toBe(8.89);
   });
 
-  it("aluminium 1350 is 61 % IACS", () => {
+  it("aluminium magnet wire is annealed 1350-O: 61.8 % IACS, not the hard-drawn 61 %", () => {
     const aluminium = conductorMaterial("aluminium");
     const copper = conductorMaterial("copper");
-    // IEC 60889 / ASTM B230: 61 % IACS; IACS is the IEC 60028 copper (brief).
+    // ASTM B233, aluminium 1350-O (annealed, as magnet wire is): ρ20 = 0.027899 Ω·mm²/m,
+    // 61.8 % IACS; IACS is the IEC 60028 copper, 1/58 Ω·mm²/m. The hard-drawn overhead-line
+    // value (IEC 60889 / ASTM B230, 0.028264, 61 % IACS) made resistance 1.3 % high.
+    expect(aluminium.resistivity20OhmMm2PerM).toBe(0.027899);
     expect(
       (copper.resistivity20OhmMm2PerM / aluminium.resistivity20OhmMm2PerM) *
         100,
-    ).toBeCloseTo(61, 1);
+    ).toBeCloseTo(61.8, 1);
     expect(aluminium.temperatureCoefficient20PerK).toBe(0.00403);
     expect(aluminium.densityGPerCm3).toBe(2.703);
   });

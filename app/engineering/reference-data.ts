@@ -43,13 +43,14 @@ export const CONDUCTOR_MATERIALS: readonly ConductorMaterial[] = [
   },
   {
     key: "aluminium",
-    name: "Aluminium 1350",
-    resistivity20OhmMm2PerM: 0.028264,
+    name: "Aluminium 1350-O (annealed)",
+    // Magnet wire is annealed: ASTM B233's 1350-O value, not the hard-drawn line conductor's 0.028264.
+    resistivity20OhmMm2PerM: 0.027899,
     temperatureCoefficient20PerK: 0.00403,
     densityGPerCm3: 2.703,
     source:
-      "IEC 60889 / ASTM B230, aluminium 1350 at 61 % IACS: ρ20 = 0.028264 Ω·mm²/m, α20 = 0.00403 /K, 2.703 g/cm³ (brief); " +
-      "annealed 1350-O is 0.027899 Ω·mm²/m per ASTM B233",
+      "ASTM B233, aluminium 1350-O (annealed, as magnet wire is) at 61.8 % IACS: ρ20 = 0.027899 Ω·mm²/m; " +
+      "α20 = 0.00403 /K and 2.703 g/cm³ (brief; IEC 60889 / ASTM B230 give 0.028264 Ω·mm²/m for hard-drawn line conductor)",
   },
 ];
 

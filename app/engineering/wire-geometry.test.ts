@@ -202,15 +202,18 @@ describe("resistance, mass and length per mass", () => {
   });
 
   it("follows R(T) = R20 · (1 + α20 · (T − 20)) for aluminium too", () => {
-    // Brief: R(T) = R20 (1 + α20 (T − 20)); aluminium 1350 ρ20 0.028264, α20 0.00403 (IEC 60889 / ASTM B230).
+    // Brief: R(T) = R20 (1 + α20 (T − 20)); annealed aluminium 1350-O ρ20 0.027899 Ω·mm²/m
+    // (ASTM B233), α20 0.00403 /K (brief). Worked by hand for 2 mm: area π = 3.14159 mm²,
+    // R20 = 0.027899 / 3.14159 = 0.0088805 Ω/m (GNU units: 0.0088805275); at 75 °C
+    // × (1 + 0.00403 × 55) = 1.22165 → 0.010849 Ω/m.
     const area = circleAreaMm2(2);
     expect(resistancePerMetreOhm("aluminium", area, 20)).toBeCloseTo(
-      0.028264 / area,
-      15,
+      0.0088805,
+      7,
     );
     expect(resistancePerMetreOhm("aluminium", area, 75)).toBeCloseTo(
-      (0.028264 / area) * (1 + 0.00403 * 55),
-      15,
+      0.010849,
+      6,
     );
     // Below 20 °C the resistance falls.
     expect(resistancePerMetreOhm("copper", area, -20)).toBeLessThan(
