@@ -228,16 +228,26 @@ describe("magnet warnings", () => {
     ).toContain("150 °C");
   });
 
-  it("note for ferrite that its coercivity falls when cold", () => {
-    // Brief: ferrite's coercivity falls when cold, so its risk is at low temperature.
+  it("notes for ferrite that its coercivity falls when cold, only below the catalogue's 20 °C", () => {
+    // Brief: ferrite's coercivity falls when cold, so its risk is at low temperature. Data
+    // sheets give HcJ at 20 °C (common practice) and hard ferrite's HcJ rises with
+    // temperature (about +0.2…+0.4 %/K, from memory), so only below 20 °C is it weaker.
     const cold = estimateMagnet({ grade: "C5", shape, temperatureC: -30 });
     expect(cold.warnings.map((w) => w.code)).toEqual([
       "coercivity-falls-when-cold",
     ]);
+    expect(cold.warnings[0]!.message).toContain("-30 °C");
+    for (const temperatureC of [20, 80, 150]) {
+      const warm = estimateMagnet({ grade: "C5", shape, temperatureC });
+      expect(warm.warnings).toEqual([]);
+    }
     const tooHot = estimateMagnet({ grade: "C5", shape, temperatureC: 260 });
     expect(tooHot.warnings.map((w) => w.code)).toEqual([
       "above-max-working-temperature",
-      "coercivity-falls-when-cold",
     ]);
+    // NdFeB's coercivity falls when hot, never this note.
+    expect(
+      estimateMagnet({ grade: "N42SH", shape, temperatureC: -30 }).warnings,
+    ).toEqual([]);
   });
 });

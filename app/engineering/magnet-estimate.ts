@@ -197,6 +197,9 @@ export interface MagnetEstimate {
   warnings: MagnetWarning[];
 }
 
+/** The temperature magnet data sheets give Br and HcJ at (common practice). */
+const catalogueTemperatureC = 20;
+
 function magnetWarnings(
   grade: MagnetGrade,
   temperatureC: number,
@@ -208,10 +211,12 @@ function magnetWarnings(
       message: `${temperatureC} °C is above the ${grade.maxWorkingTemperatureC} °C maximum working temperature of ${grade.name}: it may lose magnetisation for good. Choose a higher temperature grade.`,
     });
   }
-  if (grade.coercivityFallsWhenCold) {
+  // Catalogue coercivities are given at 20 °C; a grade whose coercivity falls when cold
+  // (ferrite: its HcJ rises with temperature) is weaker than its data sheet only below that.
+  if (grade.coercivityFallsWhenCold && temperatureC < catalogueTemperatureC) {
     warnings.push({
       code: "coercivity-falls-when-cold",
-      message: `The coercivity of ${grade.name} falls when cold, so its risk of demagnetisation is at the lowest operating temperature, not the highest.`,
+      message: `At ${temperatureC} °C the coercivity of ${grade.name} is below its ${catalogueTemperatureC} °C catalogue value (it falls when cold), so its risk of demagnetisation is at the lowest operating temperature, not the highest: check the working point there.`,
     });
   }
   return warnings;
