@@ -22,6 +22,8 @@ import { items } from "./stock";
 export const revisionStatuses = ["draft", "released"] as const;
 export const torqueBases = ["measured", "estimated"] as const;
 export const designLineKinds = ["coil", "magnet", "part"] as const;
+/** How the phase windings join: star (wye) or delta. */
+export const phaseConnections = ["star", "delta"] as const;
 
 export const designs = mysqlTable(
   "designs",
@@ -62,9 +64,25 @@ export const designRevisions = mysqlTable(
       .default("estimated"),
     /** IEC 60085 thermal class of the motor's insulation system, °C. */
     insulationClassC: smallint("insulation_class_c").notNull(),
-    /** Slot area inside the liner, mm², for the fill factor; null when unknown. */
+    /** Slot area, mm², for the fill factor; null when unknown. */
     slotAreaMm2: decimal("slot_area_mm2", { precision: 10, scale: 2 }),
+    /** Slot liner and separator (phase paper, wedge) area taken from the slot area, mm²; null = none given. */
+    slotLinerAreaMm2: decimal("slot_liner_area_mm2", {
+      precision: 10,
+      scale: 2,
+    }),
     coilSidesPerSlot: smallint("coil_sides_per_slot").notNull().default(2),
+    /** Number of phases of the winding (3 for the usual drive). */
+    phases: smallint("phases").notNull().default(3),
+    /** Winding layers: 1 (single layer) or 2 (double layer). */
+    windingLayers: smallint("winding_layers").notNull().default(2),
+    phaseConnection: mysqlEnum("phase_connection", phaseConnections)
+      .notNull()
+      .default("star"),
+    /** Parallel paths per phase (a); each coil carries the phase current ÷ a. */
+    parallelPaths: smallint("parallel_paths").notNull().default(1),
+    /** Rated mechanical speed, rpm, for the electrical frequency (AC resistance, back-EMF); null when unknown. */
+    ratedSpeedRpm: decimal("rated_speed_rpm", { precision: 10, scale: 1 }),
     /** For the first-order torque estimate. */
     airGapRadiusMm: decimal("air_gap_radius_mm", { precision: 10, scale: 3 }),
     airGapFluxDensityT: decimal("air_gap_flux_density_t", {
@@ -90,6 +108,15 @@ export const designRevisions = mysqlTable(
     index("design_revisions_status_idx").on(table.status, table.designId),
     check("design_revisions_poles_positive", sql`${table.poles} > 0`),
     check("design_revisions_slots_positive", sql`${table.slots} > 0`),
+    check("design_revisions_phases_positive", sql`${table.phases} > 0`),
+    check(
+      "design_revisions_layers_valid",
+      sql`${table.windingLayers} IN (1, 2)`,
+    ),
+    check(
+      "design_revisions_parallel_paths_positive",
+      sql`${table.parallelPaths} > 0`,
+    ),
   ],
 );
 

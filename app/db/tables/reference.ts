@@ -142,6 +142,13 @@ export const magnetGrades = mysqlTable(
       precision: 9,
       scale: 6,
     }).notNull(),
+    /** Reversible temperature coefficient of HcJ, 1/K (about −0.0055 for NdFeB, positive for ferrite); null when unknown. */
+    hcjTemperatureCoefficientPerK: decimal(
+      "hcj_temperature_coefficient_per_k",
+      { precision: 9, scale: 6 },
+    ),
+    /** Curie temperature of the material, °C; above it the magnet is no magnet. Null when unknown. */
+    curieTemperatureC: smallint("curie_temperature_c"),
     densityGPerCm3: decimal("density_g_per_cm3", {
       precision: 6,
       scale: 3,
