@@ -17,7 +17,7 @@ import {
 } from "~/db/schema";
 import { buildOrderCreateSchema } from "~/build-orders/build-order-forms";
 import { createBuildOrder } from "~/build-orders/build-orders.server";
-import { addDays } from "~/lib/calendar-days";
+import { addDays, todayUtc } from "~/lib/calendar-days";
 import { quantityFromNumber } from "~/lib/decimal-amounts";
 import { receiptRequestSchema } from "~/purchase-orders/receipt-request";
 import { receiveAgainstOrder } from "~/purchase-orders/receive-against-order.server";
@@ -31,7 +31,7 @@ import {
 import type { DemoDesigns } from "./demo-designs";
 import { demoPersonId } from "./demo-person-ids";
 
-const today = () => new Date().toISOString().slice(0, 10);
+const today = () => todayUtc();
 const amount = (value: number) => quantityFromNumber(value)!;
 
 /** The supplier's id and the SKUs its price lines quote, of one unit, in SKU order. */

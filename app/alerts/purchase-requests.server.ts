@@ -11,6 +11,7 @@ import { loadItemPricing } from "~/purchasing/item-prices.server";
 import { parseQuantity } from "~/lib/decimal-amounts";
 import type { PurchaseRequestLine } from "./low-stock";
 import { suggestedOrderQuantity } from "~/stock/reorder-quantities";
+import { todayUtc } from "~/lib/calendar-days";
 
 /** Every open alert's item priced by every supplier that quotes it, grouped by supplier. */
 export async function purchaseRequestsBySupplier(): Promise<
@@ -32,7 +33,7 @@ export async function purchaseRequestsBySupplier(): Promise<
     .orderBy(items.sku)
     .limit(2_000);
   const bySupplier = new Map<string, PurchaseRequestLine[]>();
-  const today = new Date().toISOString().slice(0, 10);
+  const today = todayUtc();
   for (const item of open) {
     const quantity = suggestedOrderQuantity({
       available: parseQuantity(item.onHand) - parseQuantity(item.reserved),

@@ -37,7 +37,7 @@ import {
 } from "~/db/schema";
 import { coverDueDays, openOrderLinesOf } from "./open-order-lines.server";
 import { deliverLater, queueMail, writeToOutbox } from "~/mail/mailer.server";
-import { todayUtc } from "~/purchasing/current-entries";
+import { todayUtc } from "~/lib/calendar-days";
 import { bestPricesOf, loadItemPricing } from "~/purchasing/item-prices.server";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { quantityToPrice } from "~/stock/reorder-quantities";

@@ -14,6 +14,7 @@ import {
   stockValueTrend,
 } from "./stock-value.server";
 import { readInsightSearch } from "./what-if";
+import { todayUtc } from "~/lib/calendar-days";
 
 /** The form's fields as typed (so a bad value stays in its box beside its message). */
 function typedFields(params: Record<string, string>) {
@@ -37,7 +38,7 @@ export async function loadInsight(
 ) {
   const params = searchParamsObject(new URL(request.url).searchParams);
   const { query, errors } = readInsightSearch(params);
-  const today = new Date().toISOString().slice(0, 10);
+  const today = todayUtc();
   const fullPage = options.page === "insight";
   if (!fullPage) prepareStockValueTrend();
   const [designs, bases, stock] = await Promise.all([

@@ -7,6 +7,7 @@ import {
   dayAfter,
   dayNumber,
   dayOf,
+  todayUtc,
   isCalendarDate,
   isRealDay,
   latestOnOrBefore,
@@ -83,5 +84,12 @@ describe("calendar days", () => {
     expect(monthStartOnOrAfter("2026-03-01")).toBe("2026-03-01");
     expect(monthStartOnOrAfter("2026-03-02")).toBe("2026-04-01");
     expect(monthStartOnOrAfter("2026-12-31")).toBe("2027-01-01");
+  });
+});
+
+describe("todayUtc", () => {
+  it("gives the UTC day, not the local one", () => {
+    // 23:30 at UTC−2 on 30 June is 01:30 UTC on 1 July.
+    expect(todayUtc(new Date("2026-06-30T23:30:00-02:00"))).toBe("2026-07-01");
   });
 });

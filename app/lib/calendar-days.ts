@@ -56,6 +56,11 @@ export function dayOf(moment: Date): CalendarDate {
   return moment.toISOString().slice(0, 10);
 }
 
+/** Today's day in UTC, the day dated tables (prices, metal bases, rates) are read for. */
+export function todayUtc(now = new Date()): CalendarDate {
+  return dayOf(now);
+}
+
 /** Days since 1970-01-01: "1970-01-02" → 1. Whole for every day, so days subtract. */
 export function dayNumber(date: CalendarDate): number {
   return startOfDay(date).getTime() / dayMs;

@@ -8,7 +8,7 @@ import { quantityToPrice } from "~/stock/reorder-quantities";
 import { db } from "~/db/client.server";
 import { items, priceLines } from "~/db/schema";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
-import { todayUtc } from "./current-entries";
+import { todayUtc } from "~/lib/calendar-days";
 import { bestPricesOf, loadItemsPricing } from "./item-prices.server";
 
 export const bestPriceListPageSize = 25;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { entriesInForce, todayUtc } from "./current-entries";
+import { entriesInForce } from "./current-entries";
 
 const base = [
   { conductor: "copper", currency: "EUR", validFrom: "2026-03-01", price: 9.1 },
@@ -31,11 +31,5 @@ describe("entriesInForce", () => {
 
   it("leaves out keys whose entries all start later", () => {
     expect(entriesInForce(base, key, "2026-01-01")).toEqual([]);
-  });
-});
-
-describe("todayUtc", () => {
-  it("gives the UTC day, not the local one", () => {
-    expect(todayUtc(new Date("2026-06-30T23:30:00-02:00"))).toBe("2026-07-01");
   });
 });

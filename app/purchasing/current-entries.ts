@@ -1,10 +1,5 @@
 /** Picks what is in force today from dated histories (metal base, currency rates). */
 
-/** Today's date in UTC as YYYY-MM-DD, the form the dated tables use. */
-export function todayUtc(now = new Date()): string {
-  return now.toISOString().slice(0, 10);
-}
-
 /**
  * The entry in force on `day` for each key: the one with the latest validFrom
  * not after `day`. Entries dated later are not yet in force. Sorted by key.

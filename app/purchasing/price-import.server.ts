@@ -53,6 +53,7 @@ import {
   type MatchedRow,
 } from "./price-import-writes.server";
 import { companyCurrency } from "./suppliers.server";
+import { todayUtc } from "~/lib/calendar-days";
 
 export type ImportOutcome =
   | { kind: "refused"; messages: string[] }
@@ -319,7 +320,7 @@ async function readOrImportPriceList(
     supplier.id,
     columnMappingToFields(input.mapping),
   );
-  const importDay = input.today ?? new Date().toISOString().slice(0, 10);
+  const importDay = input.today ?? todayUtc();
   const file = await openPriceList(input.bytes, input.fileName, input.sheet);
   if (!file.ok) return { kind: "refused", messages: [file.message] };
   const opened: OpenedPriceListRows = file.opened;

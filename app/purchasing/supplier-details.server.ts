@@ -6,7 +6,8 @@ import { isDuplicateKey } from "~/db/database-errors";
 import { priceImports, priceLines, suppliers, users } from "~/db/schema";
 import type { ConductorKey } from "~/engineering/reference-data";
 import { DomainError } from "~/lib/domain-error";
-import { entriesInForce, todayUtc } from "./current-entries";
+import { todayUtc } from "~/lib/calendar-days";
+import { entriesInForce } from "./current-entries";
 import type { SupplierPatch } from "./supplier-schemas";
 import type { CurrencyCoverage } from "./supplier-currency-warnings";
 import {

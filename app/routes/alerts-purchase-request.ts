@@ -3,6 +3,7 @@ import type { Route } from "./+types/alerts-purchase-request";
 import { purchaseRequestCsv } from "~/alerts/low-stock";
 import { purchaseRequestsBySupplier } from "~/alerts/purchase-requests.server";
 import { requireCapability } from "~/auth/guard.server";
+import { todayUtc } from "~/lib/calendar-days";
 
 /** GET /alerts/purchase-request.csv?supplier=Name (buyer, admin): the supplier's draft purchase request. */
 export async function loader({ request }: Route.LoaderArgs) {
@@ -16,7 +17,7 @@ export async function loader({ request }: Route.LoaderArgs) {
       },
       { status: 404 },
     );
-  const fileName = `purchase-request-${supplier.replace(/[^A-Za-z0-9-]+/g, "-").slice(0, 60)}-${new Date().toISOString().slice(0, 10)}.csv`;
+  const fileName = `purchase-request-${supplier.replace(/[^A-Za-z0-9-]+/g, "-").slice(0, 60)}-${todayUtc()}.csv`;
   return new Response(purchaseRequestCsv(lines), {
     headers: {
       "Content-Type": "text/csv; charset=utf-8",

@@ -11,6 +11,7 @@ import { maxBuildQuantity } from "~/designs/design-page";
 import { apiError, methodNotAllowed, readSearchParams } from "~/lib/api.server";
 import { dayParam, wholeNumberParam } from "~/lib/search-params";
 import { answerDomainError } from "~/lib/api-errors.server";
+import { todayUtc } from "~/lib/calendar-days";
 
 const costingQuery = z.object({
   quantity: wholeNumberParam("quantity", {
@@ -46,7 +47,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
         lines: await loadRevisionLines(found.revision.id, found.revision),
         quantity: query.quantity,
         basis: query.basis,
-        date: query.date ?? new Date().toISOString().slice(0, 10),
+        date: query.date ?? todayUtc(),
       }),
     ),
   );

@@ -4,6 +4,7 @@ import { designInsight } from "~/insight/design-insight.server";
 import { insightQuerySchema } from "~/insight/what-if";
 import { methodNotAllowed, readSearchParams } from "~/lib/api.server";
 import { answerDomainError } from "~/lib/api-errors.server";
+import { todayUtc } from "~/lib/calendar-days";
 
 /**
  * GET /api/v1/insight/designs → [{ designId, name, revision, ratedTorqueNm, torqueBasis,
@@ -26,7 +27,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   const query = readSearchParams(request, insightQuerySchema);
   return answerDomainError(async () => {
     const insight = await designInsight(query, {
-      today: new Date().toISOString().slice(0, 10),
+      today: todayUtc(),
       history: query.history === "1",
     });
     return Response.json(insight.designs, {

@@ -10,6 +10,7 @@ import {
 } from "~/purchasing/item-prices.server";
 import { quantityFromNumber } from "~/lib/decimal-amounts";
 import { maxStockQuantity } from "~/stock/movement-request";
+import { todayUtc } from "~/lib/calendar-days";
 
 const itemPricesQuerySchema = z.object({
   quantity: positiveDecimalParam("quantity", {
@@ -35,7 +36,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   await requireUser(request);
   const query = readSearchParams(request, itemPricesQuerySchema);
   const quantity = quantityFromNumber(query.quantity)!;
-  const date = query.date ?? new Date().toISOString().slice(0, 10);
+  const date = query.date ?? todayUtc();
   const pricing = await loadItemPricing(params.sku);
   if (!pricing) return apiError(404, `No item with SKU "${params.sku}".`);
   return Response.json({

@@ -10,7 +10,8 @@ import { redirectWithFlash } from "~/lib/flash.server";
 import { formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
 import { companyCurrencyRateRefusal } from "~/purchasing/currency-rate-rules";
-import { entriesInForce, todayUtc } from "~/purchasing/current-entries";
+import { todayUtc } from "~/lib/calendar-days";
+import { entriesInForce } from "~/purchasing/current-entries";
 import {
   currencyRateSchema,
   metalBaseSchema,

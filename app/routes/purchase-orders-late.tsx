@@ -4,7 +4,7 @@ import { DataTable } from "~/components/data-table";
 import { lateLineColumns } from "~/components/purchase-orders/open-line-columns";
 import { formatDay, formatQuantity } from "~/lib/format";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
-import { todayUtc } from "~/purchasing/current-entries";
+import { todayUtc } from "~/lib/calendar-days";
 import {
   lateLinesPageSize,
   listLateLines,

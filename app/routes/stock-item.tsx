@@ -40,7 +40,7 @@ import {
   priceHistoryOf,
 } from "~/purchasing/item-prices.server";
 import { quantityToPrice } from "~/stock/reorder-quantities";
-import { todayUtc } from "~/purchasing/current-entries";
+import { todayUtc } from "~/lib/calendar-days";
 import { readItemPriceQuantity } from "~/purchasing/price-quantity-query";
 import { quantityFromNumber } from "~/lib/decimal-amounts";
 import { isDomainError } from "~/lib/domain-error";

@@ -25,7 +25,7 @@ import {
 } from "~/purchasing/supplier-details.server";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
 import { isDomainError } from "~/lib/domain-error";
-import { todayUtc } from "~/purchasing/current-entries";
+import { todayUtc } from "~/lib/calendar-days";
 import { supplierDeliveryPerformance } from "~/purchase-orders/supplier-deliveries.server";
 
 function notFound(): never {

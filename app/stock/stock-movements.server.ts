@@ -34,6 +34,7 @@ import {
 import { DomainError } from "~/lib/domain-error";
 import { unitWord } from "~/lib/unit-text";
 import type { MovementRequest } from "./movement-request";
+import { todayUtc } from "~/lib/calendar-days";
 
 /** An amount of stock in a refusal, as typed into the API: "1.5 kg", "1 piece", "3 pieces". */
 export function amountText(thousandths: bigint, unit: string): string {
@@ -275,7 +276,7 @@ async function resolveLot(
         request.tareKg === undefined
           ? null
           : formatQuantityText(request.tareKg),
-      receivedOn: new Date().toISOString().slice(0, 10),
+      receivedOn: todayUtc(),
     })
     .$returningId();
   return {
