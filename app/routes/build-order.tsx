@@ -64,6 +64,7 @@ import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { needsRoleMessage, userCan } from "~/lib/capabilities";
 import { isDomainError } from "~/lib/domain-error";
+import { refusalReply } from "~/lib/refusal-reply";
 
 function orderIdOf(value: string | undefined): number {
   return buildOrderIdFromPath(value, (message) =>
@@ -188,11 +189,7 @@ export async function action({ request, params }: Route.ActionArgs) {
               error.field === intent
             ? intent
             : "";
-      const result = submission.reply(
-        field
-          ? { fieldErrors: { [field]: [error.message] } }
-          : { formErrors: [error.message] },
-      );
+      const result = refusalReply(submission, field, error.message);
       return stepRefused(
         intent,
         result,

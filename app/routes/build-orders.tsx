@@ -25,6 +25,7 @@ import { redirectWithFlash } from "~/lib/flash.server";
 import { pageFromSearch } from "~/lib/search-params";
 import { userCan } from "~/lib/capabilities";
 import { countText } from "~/lib/unit-text";
+import { refusalReply } from "~/lib/refusal-reply";
 
 const pageSize = 25;
 
@@ -71,11 +72,7 @@ export async function action({ request }: Route.ActionArgs) {
   } catch (error) {
     if (!isBuildOrderError(error)) throw error;
     const field = createFormFieldOf(error.field);
-    const result = submission.reply(
-      field
-        ? { fieldErrors: { [field]: [error.message] } }
-        : { formErrors: [error.message] },
-    );
+    const result = refusalReply(submission, field, error.message);
     return data(
       { result },
       { status: error.status === 404 ? 400 : error.status },

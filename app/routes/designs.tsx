@@ -21,6 +21,7 @@ import { userCan } from "~/lib/capabilities";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { isDomainError } from "~/lib/domain-error";
 import { countText } from "~/lib/unit-text";
+import { refusalReply } from "~/lib/refusal-reply";
 
 const designsPerPage = 25;
 
@@ -54,9 +55,7 @@ export async function action({ request }: Route.ActionArgs) {
     created = await createDesign(submission.value, user.id);
   } catch (error) {
     if (!isDomainError(error)) throw error;
-    const result = error.field
-      ? submission.reply({ fieldErrors: { [error.field]: [error.message] } })
-      : submission.reply({ formErrors: [error.message] });
+    const result = refusalReply(submission, error.field, error.message);
     return data({ result }, { status: error.status });
   }
   return redirect(`/designs/${created.id}/revisions/${created.revision}`);

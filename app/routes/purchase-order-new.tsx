@@ -17,6 +17,7 @@ import {
   createPurchaseOrder,
 } from "~/purchase-orders/purchase-order-writes.server";
 import { listSuppliers } from "~/purchasing/suppliers.server";
+import { refusalReply } from "~/lib/refusal-reply";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "orderPurchases");
@@ -58,11 +59,7 @@ export async function action({ request }: Route.ActionArgs) {
   } catch (error) {
     if (!isDomainError(error)) throw error;
     const field = fromAlert ? "" : orderFormFieldOf(error.field);
-    const result = submission.reply(
-      field
-        ? { fieldErrors: { [field]: [error.message] } }
-        : { formErrors: [error.message] },
-    );
+    const result = refusalReply(submission, field, error.message);
     return data(
       { fromAlert, result },
       { status: error.status === 404 ? 400 : error.status },

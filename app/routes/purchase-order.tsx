@@ -22,6 +22,7 @@ import {
   type OrderPageIntent,
 } from "~/purchase-orders/purchase-order-page-forms";
 import { canEdit, canReceive } from "~/purchase-orders/purchase-order-status";
+import { refusalReply } from "~/lib/refusal-reply";
 
 async function orderOr404(value: string | undefined) {
   const id = idFromText(value);
@@ -82,11 +83,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       code: outcome.flash,
       id: order.id,
     });
-  const result = submission.reply(
-    outcome.field
-      ? { fieldErrors: { [outcome.field]: [outcome.message] } }
-      : { formErrors: [outcome.message] },
-  );
+  const result = refusalReply(submission, outcome.field, outcome.message);
   return data<StepAnswer>({ intent, result }, { status: outcome.status });
 }
 

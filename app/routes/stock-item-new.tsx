@@ -15,6 +15,7 @@ import { listWireSizes } from "~/reference/wire-sizes.server";
 import { createItem } from "~/stock/catalogue.server";
 import { newItemFormSchema, unitOfNewItem } from "~/stock/new-item-form";
 import { isDomainError } from "~/lib/domain-error";
+import { refusalReply } from "~/lib/refusal-reply";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "keepCatalogue");
@@ -56,9 +57,7 @@ export async function action({ request }: Route.ActionArgs) {
     sku = await createItem(submission.value, user.id);
   } catch (error) {
     if (!isDomainError(error)) throw error;
-    const result = error.field
-      ? submission.reply({ fieldErrors: { [error.field]: [error.message] } })
-      : submission.reply({ formErrors: [error.message] });
+    const result = refusalReply(submission, error.field, error.message);
     return data({ result }, { status: error.status });
   }
   return redirectWithFlash(`/stock/items/${encodeURIComponent(sku)}`, {

@@ -48,6 +48,7 @@ import {
   itemOrderLinesLimit,
   openOrderLinesOfItem,
 } from "~/purchase-orders/open-order-lines.server";
+import { refusalReply } from "~/lib/refusal-reply";
 
 const movementPageSize = 20;
 
@@ -139,9 +140,7 @@ export async function action({ request, params }: Route.ActionArgs) {
     await updateItem(params.sku, itemPatchOf(submission.value));
   } catch (error) {
     if (!isDomainError(error)) throw error;
-    const result = error.field
-      ? submission.reply({ fieldErrors: { [error.field]: [error.message] } })
-      : submission.reply({ formErrors: [error.message] });
+    const result = refusalReply(submission, error.field, error.message);
     return data(
       { intent: submission.value.intent, result },
       { status: error.status },

@@ -21,6 +21,7 @@ import {
   listReceivableOrders,
 } from "~/purchase-orders/receiving-page.server";
 import { listLocations } from "~/stock/items.server";
+import { refusalReply } from "~/lib/refusal-reply";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "receivePurchases");
@@ -80,14 +81,9 @@ export async function action({ request }: Route.ActionArgs) {
   } catch (error) {
     if (!isDomainError(error)) throw error;
     const field = receiptFormField(error.field);
-    return data(
-      submission.reply(
-        field
-          ? { fieldErrors: { [field]: [error.message] } }
-          : { formErrors: [error.message] },
-      ),
-      { status: error.status === 404 ? 400 : error.status },
-    );
+    return data(refusalReply(submission, field, error.message), {
+      status: error.status === 404 ? 400 : error.status,
+    });
   }
 }
 

@@ -22,6 +22,7 @@ import { isDomainError } from "~/lib/domain-error";
 import { recordMovement } from "~/stock/stock-movements.server";
 import { usualLocationOf } from "~/stock/usual-location.server";
 import { wireMetresPerKg } from "~/stock/wire-length.server";
+import { refusalReply } from "~/lib/refusal-reply";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireCapability(request, "recordStock");
@@ -89,14 +90,9 @@ export async function action({ request }: Route.ActionArgs) {
       buildOrderId !== undefined,
       submission.value.grossKg !== undefined,
     );
-    return data(
-      submission.reply(
-        field
-          ? { fieldErrors: { [field]: [error.message] } }
-          : { formErrors: [error.message] },
-      ),
-      { status: error.status === 404 ? 400 : error.status },
-    );
+    return data(refusalReply(submission, field, error.message), {
+      status: error.status === 404 ? 400 : error.status,
+    });
   }
 }
 

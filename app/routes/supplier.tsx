@@ -27,6 +27,7 @@ import { supplierSchema } from "~/purchasing/supplier-schemas";
 import { isDomainError } from "~/lib/domain-error";
 import { todayUtc } from "~/lib/calendar-days";
 import { supplierDeliveryPerformance } from "~/purchase-orders/supplier-deliveries.server";
+import { refusalReply } from "~/lib/refusal-reply";
 
 function notFound(): never {
   throw data({ message: "No such supplier." }, { status: 404 });
@@ -78,9 +79,7 @@ export async function action({ request, params }: Route.ActionArgs) {
     });
   } catch (error) {
     if (!isDomainError(error)) throw error;
-    const result = error.field
-      ? submission.reply({ fieldErrors: { [error.field]: [error.message] } })
-      : submission.reply({ formErrors: [error.message] });
+    const result = refusalReply(submission, error.field, error.message);
     return data({ result }, { status: error.status });
   }
   return redirectWithFlash(`/suppliers/${id}`, { code: "supplier-saved", id });
