@@ -1,7 +1,7 @@
 /**
  * Purchase orders for the receiving tests, written straight into the test database as the
  * ordering code would leave them: a supplier, an order in a status, its lines, and for a
- * sent order the items' stock on order raised by each line's quantity (what sending does).
+ * sent order the items' stock on order raised by what is still open on each line.
  */
 import { randomBytes } from "node:crypto";
 import { eq, sql } from "drizzle-orm";
@@ -13,6 +13,7 @@ import {
   suppliers,
 } from "~/db/schema";
 import type { PurchaseOrderStatus } from "~/db/tables/purchase-order-enums";
+import { todayUtc } from "~/lib/calendar-days";
 import { testDb, uniqueCode } from "./test-database";
 
 export async function createOrderSupplier(
@@ -53,38 +54,55 @@ export interface OrderLineFixture {
   itemId: number;
   /** In the item's unit, as text ("20.000"). */
   quantity: string;
-  unitPrice: string;
+  /** Default "1.0000". */
+  unitPrice?: string;
   adderPerKg?: string;
   metalBasePerKg?: string;
   metalBaseFixedAt?: "order" | "delivery";
+  /** Default: today. */
+  expectedDate?: string;
+  /** Already received, in the item's unit; default "0". */
+  received?: string;
+  completedAt?: Date | null;
 }
 
-/** An order with its lines; returns the order id and line ids in the order given. */
+/**
+ * An order with its lines; returns the order id and line ids in the order given. When its
+ * status is sent or partly received, each item's on_order rises by what is still open on
+ * its line (as sending and receiving keep it).
+ */
 export async function createOrder(input: {
   supplierId: number;
-  currency: string;
+  /** Default "EUR". */
+  currency?: string;
   userId: string;
+  /** Default "sent". */
   status?: PurchaseOrderStatus;
+  /** Default: today once sent, none while draft. */
+  orderedOn?: string;
+  updatedAt?: Date;
   lines: OrderLineFixture[];
 }): Promise<{ id: number; lineIds: number[] }> {
   const db = testDb();
   const status = input.status ?? "sent";
-  const today = new Date().toISOString().slice(0, 10);
+  const today = todayUtc();
   const sent = status !== "draft";
   const [order] = await db
     .insert(purchaseOrders)
     .values({
       supplierId: input.supplierId,
       status,
-      currency: input.currency,
-      orderedOn: sent ? today : null,
+      currency: input.currency ?? "EUR",
+      orderedOn: sent ? (input.orderedOn ?? today) : null,
       sentAt: sent ? new Date() : null,
       userId: input.userId,
-      updatedAt: new Date(),
+      updatedAt: input.updatedAt ?? new Date(),
     })
     .$returningId();
   const lineIds: number[] = [];
+  const open = status === "sent" || status === "partly_received";
   for (const [index, line] of input.lines.entries()) {
+    const received = line.received ?? "0";
     const [row] = await db
       .insert(purchaseOrderLines)
       .values({
@@ -92,19 +110,23 @@ export async function createOrder(input: {
         lineNumber: index + 1,
         itemId: line.itemId,
         quantity: line.quantity,
-        unitPrice: line.unitPrice,
+        unitPrice: line.unitPrice ?? "1.0000",
         priceSource: "price_list",
         adderPerKg: line.adderPerKg ?? null,
         metalBasePerKg: line.metalBasePerKg ?? null,
         metalBaseFixedAt: line.metalBaseFixedAt ?? null,
-        expectedDate: today,
+        expectedDate: line.expectedDate ?? today,
+        received,
+        completedAt: line.completedAt ?? null,
       })
       .$returningId();
     lineIds.push(row!.id);
-    if (status === "sent" || status === "partly_received")
+    if (open)
       await db
         .update(items)
-        .set({ onOrder: sql`${items.onOrder} + ${line.quantity}` })
+        .set({
+          onOrder: sql`${items.onOrder} + GREATEST(0, ${line.quantity} - ${received})`,
+        })
         .where(eq(items.id, line.itemId));
   }
   return { id: order!.id, lineIds };
