@@ -24,7 +24,7 @@
  * √3 × 60/(2π·1000) = 0.016540, GNU units).
  *
  * Resistance: a phase has a paths in parallel, each of (coils per phase ÷ a) coils in
- * series: R_ph = (coils per phase × R_coil) ÷ a². Between two terminals: star 2·R_ph;
+ * series: R_ph = (coils per phase × R_coil) ÷ a². Between two terminals: one phase R_ph; star 2·R_ph;
  * delta (polygon of m phases) R_ph ∥ (m−1)·R_ph = R_ph·(m−1)/m, that is (2/3)·R_ph for m = 3.
  */
 
@@ -243,10 +243,13 @@ export function windingResistance(
   coilsPerPhase(totalCoils, input);
   const { phases, parallelPaths } = input;
   const phaseOhm = seriesOhm / phases / parallelPaths ** 2;
+  // One phase has two terminals; otherwise between two of the m terminals.
   const lineToLineOhm =
-    input.connection === "star"
-      ? 2 * phaseOhm
-      : (phaseOhm * (phases - 1)) / phases;
+    phases === 1
+      ? phaseOhm
+      : input.connection === "star"
+        ? 2 * phaseOhm
+        : (phaseOhm * (phases - 1)) / phases;
   return { phaseOhm, lineToLineOhm };
 }
 
