@@ -7,7 +7,6 @@ import {
   checkFourCoil,
   fieldOfError,
   n42shMagnets,
-  partLine,
   WIRE_080,
 } from "./design-lines.test-support";
 import {
