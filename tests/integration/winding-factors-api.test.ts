@@ -3,7 +3,7 @@ import { get, sendJson, signInAs } from "../support/app-client";
 
 let cookie = "";
 beforeAll(async () => {
-  cookie = await signInAs("viewer");
+  cookie = await signInAs("storekeeper");
 });
 
 const post = (body: unknown) =>
