@@ -8,7 +8,13 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sendJson, signInAs } from "../support/app-client";
-import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
+import path from "node:path";
+import {
+  launchBrowser,
+  saveScreenshot,
+  screenshotFolder,
+  signIn,
+} from "../support/browser";
 import { readable, waitForText } from "../support/page-text";
 import {
   closeTestDatabase,
@@ -205,7 +211,9 @@ describe("design editor", () => {
     await waitForText(
       page,
       () =>
-        panel.getByRole("group", { name: "Winding factor k_w1" }).innerText(),
+        panel
+          .getByRole("group", { name: "Fundamental winding factor" })
+          .innerText(),
       /0\.933/,
     );
     // Kt = 10.353662 N·m ÷ 10 A = 1.035 N·m/A (the torque worked above).
@@ -225,13 +233,13 @@ describe("design editor", () => {
 
     // 10 slots and 14 poles cannot make a balanced 3-phase winding: the message stands
     // beside Slots and nothing is saved.
-    await page.getByLabel("Slots").fill("10");
+    await page.getByLabel("Slots", { exact: true }).fill("10");
     await page.getByRole("button", { name: "Save motor figures" }).click();
     await page
       .getByText(/10 slots and 14 poles cannot make a balanced 3-phase winding/)
       .waitFor();
-    await page.getByLabel("Slots").fill("12");
-    await page.getByLabel("Rated speed").fill("3000");
+    await page.getByLabel("Slots", { exact: true }).fill("12");
+    await page.getByLabel("Rated speed (rpm)", { exact: true }).fill("3000");
     await page.getByRole("button", { name: "Save motor figures" }).click();
     await page.getByText("Saved. The figures below are up to date.").waitFor();
     // 7 pole pairs × 3000 rpm ÷ 60 = 350 Hz.
@@ -245,6 +253,9 @@ describe("design editor", () => {
     );
     await panel.scrollIntoViewIfNeeded();
     await saveScreenshot(page, "design-winding-panel");
+    await panel.screenshot({
+      path: path.join(screenshotFolder, "design-winding-panel-close.png"),
+    });
   });
 
   it("updates the copper figures and the cost as the end-turn length changes, without reloading", async () => {

@@ -69,7 +69,7 @@ export function WindingPanel({ winding }: { winding: WindingFigures }) {
       </div>
       <div className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3">
         <WindingFigure
-          label="Winding factor k_w1"
+          label="Fundamental winding factor"
           figure={windingFactor}
           show={() =>
             "value" in windingFactor &&
@@ -77,7 +77,7 @@ export function WindingPanel({ winding }: { winding: WindingFigures }) {
           }
         >
           {"value" in windingFactor
-            ? `Star of slots; ${windingFactor.value.kind === "concentrated" ? "tooth coils" : "distributed"}, coil pitch ${windingFactor.value.coilPitch} ${windingFactor.value.coilPitch === 1 ? "slot" : "slots"}. 5th ${formatQuantity(windingFactor.value.harmonics.find((h) => h.order === 5)?.factor ?? 0, "", 3)}, 7th ${formatQuantity(windingFactor.value.harmonics.find((h) => h.order === 7)?.factor ?? 0, "", 3)}.`
+            ? `Star of slots; ${windingFactor.value.kind === "concentrated" ? "tooth coils" : "distributed"}, coil pitch ${windingFactor.value.coilPitch} ${windingFactor.value.coilPitch === 1 ? "slot" : "slots"}. Harmonics: 5th ${formatQuantity(windingFactor.value.harmonics.find((h) => h.order === 5)?.factor ?? 0, "", 3)}, 7th ${formatQuantity(windingFactor.value.harmonics.find((h) => h.order === 7)?.factor ?? 0, "", 3)}.`
             : null}
         </WindingFigure>
         <WindingFigure
