@@ -30,7 +30,13 @@ import {
   type ItemUnitPrice,
 } from "./design-costing";
 import type { RevisionRow, StoredDesignLine } from "./design-revisions.server";
-import { estimateTorque, TORQUE_ESTIMATE_LABEL } from "./torque-estimate";
+import { isEngineeringInputError } from "~/engineering/errors";
+import {
+  estimateTorque,
+  TORQUE_ESTIMATE_LABEL,
+  type DesignWinding,
+} from "./torque-estimate";
+import { designWindingFigures } from "./winding-figures";
 
 export const costingBases = ["best-price", "stock-average"] as const;
 export type CostingBasis = (typeof costingBases)[number];
@@ -172,6 +178,27 @@ async function stockAveragePrices(
 }
 
 /**
+ * The first-order torque estimate, or what is missing (no figures given) or why the
+ * revision's winding refuses it (as a message: the page shows it, never an error page).
+ */
+function firstOrderTorque(
+  estimate: (() => ReturnType<typeof estimateTorque>) | null,
+): ReturnType<typeof estimateTorque> | { label: string; missing: string } {
+  if (!estimate)
+    return {
+      label: TORQUE_ESTIMATE_LABEL,
+      missing:
+        "Give the air-gap radius and flux density (and at least one coil line) for a first-order torque estimate.",
+    };
+  try {
+    return estimate();
+  } catch (error) {
+    if (!isEngineeringInputError(error)) throw error;
+    return { label: TORQUE_ESTIMATE_LABEL, missing: error.message };
+  }
+}
+
+/**
  * The whole costing of a revision as the API and the design page show it.
  *
  * `whatIf` (optional, nothing saved) stands in for the metal base in the company currency
@@ -207,14 +234,24 @@ export async function costRevision(input: {
     input.currency ?? companyCurrency(),
   ]);
   const ratedTorqueNm = optionalNumber(revision.ratedTorqueNm);
+  // The rated current is the RMS phase current; each of a parallel paths carries 1/a of it.
   const ratedCurrentA = Number(revision.ratedCurrentA);
+  const coilCurrentA = ratedCurrentA / revision.parallelPaths;
+  const winding: DesignWinding = {
+    slots: revision.slots,
+    poles: revision.poles,
+    layers: revision.windingLayers,
+    phases: revision.phases,
+    connection: revision.phaseConnection,
+    parallelPaths: revision.parallelPaths,
+  };
   const coils = lines.flatMap((line, index) =>
     line.kind === "coil"
       ? [
           {
             index,
             sku: line.wire.sku,
-            figures: coilLineFigures(line, ratedCurrentA),
+            figures: coilLineFigures(line, coilCurrentA),
           },
         ]
       : [],
@@ -225,16 +262,20 @@ export async function costRevision(input: {
   );
   const airGapRadiusMm = optionalNumber(revision.airGapRadiusMm);
   const fluxDensityT = optionalNumber(revision.airGapFluxDensityT);
-  const torqueEstimate =
+  const torqueEstimate = firstOrderTorque(
     airGapRadiusMm !== null && fluxDensityT !== null && coils.length > 0
-      ? estimateTorque({
-          lines,
-          fluxDensity: { source: "typed", fluxDensityT },
-          ratedCurrentA,
-          airGapRadiusMm,
-          poleCoverage: optionalNumber(revision.poleCoverage),
-        })
-      : null;
+      ? () =>
+          estimateTorque({
+            lines,
+            winding,
+            fluxDensity: { source: "typed", fluxDensityT },
+            ratedCurrentA,
+            airGapRadiusMm,
+            poleCoverage: optionalNumber(revision.poleCoverage),
+          })
+      : null,
+  );
+  const estimatedTorque = "torqueNm" in torqueEstimate ? torqueEstimate : null;
   // Without a rated torque, "per N·m" is over the first-order estimate (labelled so).
   const costing = costDesign({
     lines,
@@ -242,7 +283,7 @@ export async function costRevision(input: {
     currency,
     prices,
     ratedTorqueNm,
-    estimatedTorqueNm: torqueEstimate?.torqueNm ?? null,
+    estimatedTorqueNm: estimatedTorque?.torqueNm ?? null,
   });
   const perNmTorqueNm = costing.perNmTorque?.torqueNm ?? null;
 
@@ -253,11 +294,16 @@ export async function costRevision(input: {
     copperLossW,
     copperLossPerNm:
       perNmTorqueNm === null ? null : copperLossW / perNmTorqueNm,
-    torqueEstimate: torqueEstimate ?? {
-      label: TORQUE_ESTIMATE_LABEL,
-      missing:
-        "Give the air-gap radius and flux density (and at least one coil line) for a first-order torque estimate.",
-    },
+    torqueEstimate,
+    winding: designWindingFigures({
+      winding,
+      lines,
+      ratedCurrentA,
+      ratedSpeedRpm: optionalNumber(revision.ratedSpeedRpm),
+      airGapRadiusMm,
+      airGapFluxDensityT: fluxDensityT,
+      poleCoverage: optionalNumber(revision.poleCoverage),
+    }),
     coils: coils.map(({ index, sku, figures }) => ({
       line: index + 1,
       sku,
@@ -274,7 +320,7 @@ export async function costRevision(input: {
     warnings: designWarnings({
       lines,
       insulationClassC: revision.insulationClassC,
-      ratedCurrentA,
+      ratedCurrentA: coilCurrentA,
     }).map(({ code, lineIndex, sku, message }) => ({
       code,
       line: lineIndex + 1,

@@ -4,6 +4,7 @@
  * forms and as numbers from JSON; both are read here.
  */
 import { z } from "zod";
+import { windingInfeasibility } from "~/engineering/winding-factor";
 import { formNumber } from "~/lib/number-text";
 
 const number = (label: string) =>
@@ -48,6 +49,7 @@ export const revisionFieldsSchema = z.object({
     "A motor has an even number of poles.",
   ),
   slots: whole("slot count", 1, 1000),
+  /** RMS phase current of a sinusoidal drive at the rated point, A. */
   ratedCurrentA: positive("rated current", 10_000, "A"),
   ratedTorqueNm: z.preprocess(
     (value) => (value === "" || value === null ? undefined : value),
@@ -69,6 +71,18 @@ export const revisionFieldsSchema = z.object({
     positive("slot area", 100_000, "mm²").optional(),
   ),
   coilSidesPerSlot: whole("coil sides per slot", 1, 2).default(2),
+  phases: whole("phase count", 1, 12).default(3),
+  windingLayers: whole("number of winding layers", 1, 2).default(2),
+  phaseConnection: z
+    .enum(["star", "delta"], {
+      error: "Say whether the phases are joined in star or in delta.",
+    })
+    .default("star"),
+  parallelPaths: whole("number of parallel paths", 1, 100).default(1),
+  ratedSpeedRpm: z.preprocess(
+    (value) => (value === "" || value === null ? undefined : value),
+    positive("rated speed", 1_000_000, "rpm").optional(),
+  ),
   airGapRadiusMm: z.preprocess(
     (value) => (value === "" || value === null ? undefined : value),
     positive("air-gap radius", 10_000, "mm").optional(),
@@ -87,6 +101,65 @@ export const revisionFieldsSchema = z.object({
     .max(1000, "Notes are at most 1,000 characters.")
     .default(""),
 });
+
+/** The winding fields of a revision, as `windingFieldIssue` reads them. */
+type WindingFields = Pick<
+  RevisionFields,
+  "slots" | "poles" | "phases" | "windingLayers" | "phaseConnection"
+>;
+
+/** The revision field each refusal of the winding-factor calculation is about. */
+const windingFieldOf: Record<string, keyof WindingFields> = {
+  slots: "slots",
+  poles: "poles",
+  phases: "phases",
+  layers: "windingLayers",
+  coilPitch: "slots",
+};
+
+/**
+ * Why these fields cannot make a balanced winding, with the field to show it beside; null
+ * when they can, or when the winding is not one the winding factor covers (one phase, as
+ * a moving-coil actuator; an even phase count): those are allowed and simply get no
+ * winding factor. A delta needs 3 or more phases.
+ */
+export function windingFieldIssue(
+  fields: WindingFields,
+): { field: keyof WindingFields; message: string } | null {
+  if (fields.phaseConnection === "delta" && fields.phases < 3)
+    return {
+      field: "phaseConnection",
+      message: "A delta joins 3 or more phases; one phase has no delta.",
+    };
+  if (fields.phases < 3 || fields.phases % 2 === 0) return null;
+  const refusal = windingInfeasibility({
+    slots: fields.slots,
+    poles: fields.poles,
+    layers: fields.windingLayers,
+    phases: fields.phases,
+  });
+  return refusal
+    ? {
+        field: windingFieldOf[refusal.field] ?? "slots",
+        message: refusal.message,
+      }
+    : null;
+}
+
+/** Adds the winding's refusal to a form's issues, beside its field. */
+function checkWinding(fields: WindingFields, context: z.RefinementCtx): void {
+  const issue = windingFieldIssue(fields);
+  if (issue)
+    context.addIssue({
+      code: "custom",
+      path: [issue.field],
+      message: issue.message,
+    });
+}
+
+/** The revision form (page): the fields, and a winding that can be balanced. */
+export const revisionFormSchema =
+  revisionFieldsSchema.superRefine(checkWinding);
 
 export const newDesignSchema = revisionFieldsSchema.extend({
   name: z
@@ -152,6 +225,9 @@ export const designLineSchema = z.discriminatedUnion(
 
 export type RevisionFields = z.infer<typeof revisionFieldsSchema>;
 export type NewDesign = z.infer<typeof newDesignSchema>;
+
+/** The new-design form: its fields, and a winding that can be balanced. */
+export const newDesignFormSchema = newDesignSchema.superRefine(checkWinding);
 export type DesignLineInput = z.infer<typeof designLineSchema>;
 
 /** A whole revision as the API's PUT takes it: the fields, and the lines when given. */

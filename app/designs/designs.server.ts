@@ -16,10 +16,11 @@ import {
   wireItems,
 } from "~/db/schema";
 import { DomainError } from "~/lib/domain-error";
-import type {
-  DesignLineInput,
-  NewDesign,
-  RevisionFields,
+import {
+  windingFieldIssue,
+  type DesignLineInput,
+  type NewDesign,
+  type RevisionFields,
 } from "./design-schemas";
 
 type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
@@ -43,6 +44,13 @@ function revisionColumns(fields: Partial<RevisionFields>) {
     columns.slotAreaMm2 = decimalText(fields.slotAreaMm2, 2);
   if ("coilSidesPerSlot" in fields)
     columns.coilSidesPerSlot = fields.coilSidesPerSlot;
+  if ("phases" in fields) columns.phases = fields.phases;
+  if ("windingLayers" in fields) columns.windingLayers = fields.windingLayers;
+  if ("phaseConnection" in fields)
+    columns.phaseConnection = fields.phaseConnection;
+  if ("parallelPaths" in fields) columns.parallelPaths = fields.parallelPaths;
+  if ("ratedSpeedRpm" in fields)
+    columns.ratedSpeedRpm = decimalText(fields.ratedSpeedRpm, 1);
   if ("airGapRadiusMm" in fields)
     columns.airGapRadiusMm = decimalText(fields.airGapRadiusMm, 3);
   if ("airGapFluxDensityT" in fields)
@@ -51,6 +59,40 @@ function revisionColumns(fields: Partial<RevisionFields>) {
     columns.poleCoverage = decimalText(fields.poleCoverage, 3);
   if ("notes" in fields) columns.notes = fields.notes ?? "";
   return columns;
+}
+
+const windingKeys = [
+  "slots",
+  "poles",
+  "phases",
+  "windingLayers",
+  "phaseConnection",
+] as const;
+
+type WindingFields = Pick<RevisionFields, (typeof windingKeys)[number]>;
+
+/** 400 beside its field for a winding that cannot be balanced (see `windingFieldIssue`). */
+function refuseUnbalancedWinding(fields: WindingFields): void {
+  const issue = windingFieldIssue(fields);
+  if (issue) throw new DomainError(400, issue.message, issue.field);
+}
+
+/**
+ * The winding a revision will have after a change that touches it, refused when it cannot
+ * be balanced. A change to other fields leaves a stored winding alone.
+ */
+function checkChangedWinding(
+  stored: WindingFields,
+  change: Partial<RevisionFields>,
+): void {
+  if (!windingKeys.some((key) => key in change)) return;
+  refuseUnbalancedWinding({
+    slots: change.slots ?? stored.slots,
+    poles: change.poles ?? stored.poles,
+    phases: change.phases ?? stored.phases,
+    windingLayers: change.windingLayers ?? stored.windingLayers,
+    phaseConnection: change.phaseConnection ?? stored.phaseConnection,
+  });
 }
 
 /** Designs by name, each with its revisions (newest first), a page at a time. */
@@ -120,6 +162,7 @@ export async function createDesign(
       `A design named "${input.name}" already exists.`,
       "name",
     );
+  refuseUnbalancedWinding(input);
   return writeTransaction(async (tx) => {
     const [created] = await tx
       .insert(designs)
@@ -143,7 +186,15 @@ export async function createDesign(
 /** Locks a revision row; 404 when missing, 409 when released (a released revision never changes). */
 async function lockDraft(tx: Transaction, designId: number, revision: number) {
   const [found] = await tx
-    .select({ id: designRevisions.id, status: designRevisions.status })
+    .select({
+      id: designRevisions.id,
+      status: designRevisions.status,
+      slots: designRevisions.slots,
+      poles: designRevisions.poles,
+      phases: designRevisions.phases,
+      windingLayers: designRevisions.windingLayers,
+      phaseConnection: designRevisions.phaseConnection,
+    })
     .from(designRevisions)
     .where(
       and(
@@ -253,6 +304,7 @@ export async function updateDraftRevision(
   await writeTransaction(async (tx) => {
     const draft = await lockDraft(tx, designId, revision);
     const { lines, expectLineIds, ...fields } = change;
+    checkChangedWinding(draft, fields);
     if (expectLineIds) {
       const now = await tx
         .select({ id: designLines.id })

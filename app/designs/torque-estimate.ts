@@ -1,53 +1,72 @@
 /**
  * FIRST-ORDER torque estimate of a design, labelled as such wherever it is shown:
  *
- *   T = k · B_g · I · Σ forceLengthM · r
+ *   T = Kt · I,   Kt = m · √2 · k_w1 · N_ph · B̂₁ · r · L   (`~/engineering/motor-constants`)
  *
- * - Σ forceLengthM: conductor length in the field over the design's coil lines, each
- *   line's 2 × turns × active length × coils per motor (`forceLengthM` of the coil
- *   estimator). End turns lie outside the field and add nothing (brief, "Coils").
- * - B_g: air-gap flux density, typed, or from a magnet by B_g = Br · l_m / (l_m + μ_rec · g)
- *   with Br at the magnet temperature (Hanselman, Brushless Permanent Magnet Motor Design;
- *   brief), through `airGapFluxDensityT` of the magnet estimator.
- * - I: rated current through each coil, A; r: air-gap radius, m.
- * - F = B · I · L and T = F · r (brief), through `conductorForceN` and `torqueNm`.
- * - k: the fraction of the active conductors that lie under a pole at any moment (the
- *   rest sit between magnets, in little field). Default {@link DEFAULT_POLE_COVERAGE}.
+ * - I: the design's rated current, the RMS PHASE current of a sinusoidal drive. Each phase
+ *   has a parallel paths, so a coil carries I/a.
+ * - k_w1: the fundamental winding factor of the revision's slots, poles, layers and phases,
+ *   by the star of slots (`~/engineering/winding-factor`).
+ * - N_ph · L: series turns per phase times the active length, from the coil lines (their
+ *   coils split equally among the m phases and a paths; end turns lie outside the field).
+ * - B̂₁: the fundamental of the air-gap field, (4/π) · B_g · sin(α_p · π/2), from the
+ *   flat-topped B_g under the magnets (typed, or B_g = Br · l_m / (l_m + μ_rec · g) from a
+ *   magnet, Hanselman) and α_p, the magnet arc ÷ pole pitch. Default α_p
+ *   {@link DEFAULT_POLE_COVERAGE}.
+ * - r: the air-gap radius.
  *
- * What it leaves out: slotting, fringing and leakage, saturation, the winding factor, the
- * phase current waveform and armature reaction. Rated torque from test data is what cost
- * per N·m should use when there is some.
+ * What it leaves out: slotting, fringing and leakage, saturation, the field's harmonics
+ * (with sinusoidal currents they make ripple, not mean torque) and armature reaction. Rated
+ * torque from test data is what cost per N·m should use when there is some.
  */
 
-import { estimateCoil } from "~/engineering/coil-estimate";
-import { EngineeringInputError, requirePositive } from "~/engineering/errors";
-import { conductorForceN, torqueNm } from "~/engineering/force-and-torque";
+import { EngineeringInputError } from "~/engineering/errors";
+import {
+  CURRENT_BASIS_TEXT,
+  fundamentalFluxDensityT,
+  motorConstants,
+  type MotorConstants,
+  type PhaseConnection,
+  type WindingCoils,
+} from "~/engineering/motor-constants";
 import {
   airGapFluxDensityT,
   remanenceAtTemperatureT,
 } from "~/engineering/magnet-estimate";
-import { coilEstimateInputFor } from "./coil-line-figures";
+import {
+  windingFactors,
+  type WindingFactors,
+} from "~/engineering/winding-factor";
 import { assertDesignLine, type DesignLine } from "./design-lines";
 
 /**
- * Default k, the fraction of conductors under the poles, for a surface permanent-magnet
- * machine: the pole-arc to pole-pitch ratio (the share of the rotor circumference the
- * magnets cover), typically 0.7–0.85. COMMON PRACTICE, value from memory: no published
- * source was checked for this range or for 0.8 as its middle. Give the design's own
- * magnet arc ÷ pole pitch when known.
+ * Default α_p, the magnet arc ÷ pole pitch of a surface permanent-magnet rotor, typically
+ * 0.7–0.85. COMMON PRACTICE, value from memory: no published source was checked for this
+ * range or for 0.8 as its middle. Give the design's own magnet arc ÷ pole pitch when known.
  */
 export const DEFAULT_POLE_COVERAGE = 0.8;
 
 export const DEFAULT_POLE_COVERAGE_SOURCE =
-  "Surface PM machine: pole-arc to pole-pitch ratio, typically 0.7–0.85 (common practice, from memory)";
+  "Surface PM rotor: magnet arc ÷ pole pitch, typically 0.7–0.85 (common practice, from memory)";
 
 /** Label shown with every torque estimate. */
 export const TORQUE_ESTIMATE_LABEL =
-  "First-order estimate: T = k · B_g · I · Σ active conductor length · r. Not a measured torque.";
+  "First-order estimate: T = Kt · I with I the RMS phase current of a sinusoidal drive, Kt from the winding factor and the fundamental of the air-gap field. Not a measured torque.";
+
+/** The revision's winding: what the winding factor and the phase figures need. */
+export interface DesignWinding {
+  slots: number;
+  poles: number;
+  /** 1 or 2. */
+  layers: number;
+  phases: number;
+  connection: PhaseConnection;
+  parallelPaths: number;
+}
 
 /** Where the air-gap flux density comes from. */
 export type AirGapFluxDensityInput =
-  /** Typed by the builder (measured or from a field calculation), T. */
+  /** Typed by the builder (measured or from a field calculation), T: the flat top under a magnet. */
   | { source: "typed"; fluxDensityT: number }
   /** From a surface magnet, leakage neglected (magnet estimator). */
   | {
@@ -69,12 +88,13 @@ export type AirGapFluxDensityInput =
 export interface TorqueEstimateInput {
   /** The design's lines; only coil lines count. */
   lines: readonly DesignLine[];
+  winding: DesignWinding;
   fluxDensity: AirGapFluxDensityInput;
-  /** Rated current through each coil, A, ≥ 0. */
+  /** Rated current: RMS phase current of a sinusoidal drive, A, ≥ 0. */
   ratedCurrentA: number;
   /** Air-gap radius, mm, > 0. */
   airGapRadiusMm: number;
-  /** Fraction of conductors under the poles, 0 < k ≤ 1; default {@link DEFAULT_POLE_COVERAGE}. */
+  /** Magnet arc ÷ pole pitch α_p, 0 < α_p ≤ 1; default {@link DEFAULT_POLE_COVERAGE}. */
   poleCoverage?: number | null;
 }
 
@@ -82,14 +102,21 @@ export interface TorqueEstimate {
   /** Always "first-order": the estimate is never to be shown as a measured torque. */
   basis: "first-order";
   label: string;
+  /** What the current is: RMS phase current of a sinusoidal drive. */
+  currentBasis: string;
   torqueNm: number;
-  /** B_g used, T. */
+  /** Flat-top B_g used, T. */
   fluxDensityT: number;
-  /** Σ forceLengthM over the coil lines for one motor, m. */
+  /** Peak of its fundamental B̂₁, T. */
+  fundamentalFluxDensityT: number;
+  /** Fundamental winding factor k_w1. */
+  windingFactor: number;
+  constants: MotorConstants;
+  /** Σ 2 × turns × active length × coils over the coil lines for one motor, m. */
   forceLengthM: number;
-  /** k used. */
+  /** α_p used. */
   poleCoverage: number;
-  /** Where k comes from: the default's source, or "given". */
+  /** Where α_p comes from: the default's source, or "given". */
   poleCoverageSource: string;
 }
 
@@ -116,46 +143,69 @@ export function airGapFluxDensityFor(input: AirGapFluxDensityInput): number {
   });
 }
 
-/** Σ forceLengthM of the coil lines for one motor, m (end turns and leads excluded). */
-export function designForceLengthM(lines: readonly DesignLine[]): number {
-  let total = 0;
+/** The coil lines as groups of coils of the winding (checked). */
+export function designCoilGroups(lines: readonly DesignLine[]): WindingCoils[] {
+  const groups: WindingCoils[] = [];
   for (const line of lines) {
     if (line.kind !== "coil") continue;
     assertDesignLine(line);
-    total += estimateCoil(coilEstimateInputFor(line)).total.forceLengthM;
+    groups.push({
+      coils: line.coilsPerMotor,
+      turnsPerCoil: line.turns,
+      activeLengthMm: line.activeLengthMm,
+    });
   }
-  return total;
+  return groups;
+}
+
+/** The winding factors of the revision's winding; refuses a winding that cannot be balanced. */
+export function designWindingFactors(winding: DesignWinding): WindingFactors {
+  return windingFactors({
+    slots: winding.slots,
+    poles: winding.poles,
+    layers: winding.layers,
+    phases: winding.phases,
+  });
 }
 
 /** First-order torque of one motor (see the module comment). */
 export function estimateTorque(input: TorqueEstimateInput): TorqueEstimate {
   const given = input.poleCoverage ?? null;
   const poleCoverage = given ?? DEFAULT_POLE_COVERAGE;
-  if (!(poleCoverage > 0 && poleCoverage <= 1)) {
-    throw new EngineeringInputError(
-      "poleCoverage",
-      "The fraction of conductors under the poles must be more than 0 and at most 1.",
-    );
-  }
   if (!Number.isFinite(input.ratedCurrentA) || input.ratedCurrentA < 0) {
     throw new EngineeringInputError(
       "ratedCurrentA",
       "Rated current must be a number of zero or more.",
     );
   }
-  requirePositive(input.airGapRadiusMm, "airGapRadiusMm", "Air-gap radius");
-
   const fluxDensityT = airGapFluxDensityFor(input.fluxDensity);
-  const forceLengthM = designForceLengthM(input.lines);
-  const forceN =
-    poleCoverage *
-    conductorForceN(fluxDensityT, input.ratedCurrentA, forceLengthM);
+  const fundamental = fundamentalFluxDensityT(fluxDensityT, poleCoverage);
+  const windingFactor = designWindingFactors(input.winding).fundamental;
+  const coils = designCoilGroups(input.lines);
+  const constants = motorConstants({
+    phases: input.winding.phases,
+    connection: input.winding.connection,
+    parallelPaths: input.winding.parallelPaths,
+    coils,
+    windingFactor,
+    fundamentalFluxDensityT: fundamental,
+    airGapRadiusMm: input.airGapRadiusMm,
+  });
   return {
     basis: "first-order",
     label: TORQUE_ESTIMATE_LABEL,
-    torqueNm: torqueNm(forceN, input.airGapRadiusMm / 1000),
+    currentBasis: CURRENT_BASIS_TEXT,
+    torqueNm: constants.ktNmPerA * input.ratedCurrentA,
     fluxDensityT,
-    forceLengthM,
+    fundamentalFluxDensityT: fundamental,
+    windingFactor,
+    constants,
+    forceLengthM: coils.reduce(
+      (sum, group) =>
+        sum +
+        (2 * group.turnsPerCoil * group.activeLengthMm * group.coils) / 1000,
+      0,
+    ),
     poleCoverage,
     poleCoverageSource: given === null ? DEFAULT_POLE_COVERAGE_SOURCE : "given",
   };

@@ -17,6 +17,7 @@ import {
 import { PostedAnswer } from "~/components/design/posted-answer";
 import { RevisionHeader } from "~/components/design/revision-header";
 import { RevisionNav } from "~/components/design/revision-nav";
+import { WindingPanel } from "~/components/design/winding-panel";
 import {
   applyLineChange,
   costQuerySearch,
@@ -28,10 +29,7 @@ import {
 import { loadDesignPage, storedLineInputs } from "~/designs/design-page.server";
 import { designParams } from "~/designs/design-params";
 import { findRevision } from "~/designs/design-revisions.server";
-import {
-  designLineSchema,
-  revisionFieldsSchema,
-} from "~/designs/design-schemas";
+import { designLineSchema, revisionFormSchema } from "~/designs/design-schemas";
 import {
   releaseRevision,
   startNewRevision,
@@ -136,7 +134,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   switch (intent) {
     case "fields": {
       const submission = parseWithZod(formData, {
-        schema: revisionFieldsSchema,
+        schema: revisionFormSchema,
       });
       if (submission.status !== "success")
         return answer({ intent, ok: false, result: submission.reply() }, 400);
@@ -152,6 +150,11 @@ export async function action({ request, params }: Route.ActionArgs) {
           insulationClassC: fields.insulationClassC,
           slotAreaMm2: fields.slotAreaMm2,
           coilSidesPerSlot: fields.coilSidesPerSlot,
+          phases: fields.phases,
+          windingLayers: fields.windingLayers,
+          phaseConnection: fields.phaseConnection,
+          parallelPaths: fields.parallelPaths,
+          ratedSpeedRpm: fields.ratedSpeedRpm,
           airGapRadiusMm: fields.airGapRadiusMm,
           airGapFluxDensityT: fields.airGapFluxDensityT,
           poleCoverage: fields.poleCoverage,
@@ -321,6 +324,8 @@ export default function DesignRevisionPage({
       ) : (
         <DesignFieldsSummary revision={revision} />
       )}
+
+      <WindingPanel winding={costing.winding} />
 
       <BillOfMaterials
         lines={lines}

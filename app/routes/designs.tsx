@@ -14,7 +14,10 @@ import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
 import { TextAreaField } from "~/components/text-area-field";
 import { FormMessages, TextField } from "~/components/text-field";
-import { insulationClasses, newDesignSchema } from "~/designs/design-schemas";
+import {
+  insulationClasses,
+  newDesignFormSchema,
+} from "~/designs/design-schemas";
 import { createDesign, listDesigns } from "~/designs/designs.server";
 import { formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
@@ -45,7 +48,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "editDesigns");
   const submission = parseWithZod(await request.formData(), {
-    schema: newDesignSchema,
+    schema: newDesignFormSchema,
   });
   if (submission.status !== "success") {
     return data({ result: submission.reply() }, { status: 400 });
@@ -202,11 +205,11 @@ function NewDesignForm({
       torqueBasis: "estimated",
       insulationClassC: "155",
     },
-    constraint: getZodConstraint(newDesignSchema),
+    constraint: getZodConstraint(newDesignFormSchema),
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: newDesignSchema }),
+      parseWithZod(formData, { schema: newDesignFormSchema }),
   });
   // The schema reads numbers from text, so Conform types them as unknown; the inputs need name, id and errors.
   const number = fields as unknown as Record<
@@ -241,7 +244,7 @@ function NewDesignForm({
           <QuantityField field={number.slots} label="Slots" />
           <QuantityField
             field={number.ratedCurrentA}
-            label="Rated current"
+            label="Rated current (RMS per phase)"
             unit="A"
           />
           <SelectField field={fields.insulationClassC} label="Insulation class">

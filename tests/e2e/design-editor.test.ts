@@ -8,7 +8,13 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sendJson, signInAs } from "../support/app-client";
-import { launchBrowser, saveScreenshot, signIn } from "../support/browser";
+import path from "node:path";
+import {
+  launchBrowser,
+  saveScreenshot,
+  screenshotFolder,
+  signIn,
+} from "../support/browser";
 import { readable, waitForText } from "../support/page-text";
 import {
   closeTestDatabase,
@@ -185,12 +191,71 @@ describe("design editor", () => {
     await page.getByLabel("Air-gap flux density").fill("0.9");
     await page.getByRole("button", { name: "Save motor figures" }).click();
     await page.getByText("Saved. The figures below are up to date.").waitFor();
-    // T = k · B · I · Σ active conductor length · r = 0.8 × 0.9 T × 10 A × (2 × 40 × 0.050 m × 12) × 0.030 m
-    //   = 10.368 N·m (by hand, from the brief's F = B·I·L and T = F·r; k = 0.8 by default).
-    await waitForText(page, () => torqueEstimate().innerText(), /10\.368 N·m/);
+    // T = Kt · I = 3 · √2 · k_w1 · N_ph · B̂₁ · r · L · I: 12 slots / 14 poles double layer,
+    // k_w1 0.9330 (Libert & Soulard's table, from memory), N_ph = 12 × 40 ÷ 3 = 160,
+    // B̂₁ = (4/π) · 0.9 T · sin(0.8 · 90°) = 1.0898 T, r 30 mm, L 50 mm, 10 A RMS per phase
+    //   = 10.354 N·m (by hand; GNU units → 10.353662; α_p = 0.8 by default).
+    await waitForText(page, () => torqueEstimate().innerText(), /10\.354 N·m/);
     expect(readable(await torqueEstimate().innerText())).toContain(
       "First-order estimate",
     );
+  });
+
+  it("shows the winding panel, and a field message for a winding that cannot be balanced", async () => {
+    const panel = page.getByRole("region", {
+      name: "Winding and motor constants",
+    });
+    const figureText = async (label: string) =>
+      readable(await panel.getByRole("group", { name: label }).innerText());
+    // 12 slots / 14 poles double layer: 0.933 (Libert & Soulard's table, from memory).
+    await waitForText(
+      page,
+      () =>
+        panel
+          .getByRole("group", { name: "Fundamental winding factor" })
+          .innerText(),
+      /0\.933/,
+    );
+    // Kt = 10.353662 N·m ÷ 10 A = 1.035 N·m/A (the torque worked above).
+    expect(await figureText("Torque constant Kt")).toContain("1.035 N·m/A");
+    // Ke_LL = √3 × Kt ÷ 3 = 0.5978 V·s/rad RMS (motor-constants.test.ts, by hand).
+    expect(await figureText("Back-EMF constant Ke, line to line")).toContain(
+      "0.5978 V·s/rad",
+    );
+    // 12 coils of 0.22981 Ω with leads (brief, worked check 4), 4 per phase in series, star:
+    // 2 × 4 × 0.22981 = 1.8385 Ω.
+    expect(await figureText("Resistance line to line, 20 °C")).toContain(
+      "1.8385 Ω",
+    );
+    expect(readable(await panel.innerText())).toContain(
+      "RMS phase currents of a sinusoidal drive",
+    );
+
+    // 10 slots and 14 poles cannot make a balanced 3-phase winding: the message stands
+    // beside Slots and nothing is saved.
+    await page.getByLabel("Slots", { exact: true }).fill("10");
+    await page.getByRole("button", { name: "Save motor figures" }).click();
+    await page
+      .getByText(/10 slots and 14 poles cannot make a balanced 3-phase winding/)
+      .waitFor();
+    await page.getByLabel("Slots", { exact: true }).fill("12");
+    await page.getByLabel("Rated speed (rpm)", { exact: true }).fill("3000");
+    await page.getByRole("button", { name: "Save motor figures" }).click();
+    await page.getByText("Saved. The figures below are up to date.").waitFor();
+    // 7 pole pairs × 3000 rpm ÷ 60 = 350 Hz.
+    await waitForText(
+      page,
+      () =>
+        panel
+          .getByRole("group", { name: "Electrical frequency at rated speed" })
+          .innerText(),
+      /350\.0 Hz/,
+    );
+    await panel.scrollIntoViewIfNeeded();
+    await saveScreenshot(page, "design-winding-panel");
+    await panel.screenshot({
+      path: path.join(screenshotFolder, "design-winding-panel-close.png"),
+    });
   });
 
   it("updates the copper figures and the cost as the end-turn length changes, without reloading", async () => {
@@ -204,7 +269,7 @@ describe("design editor", () => {
     // 12 × 9.373 m × 0.5027 mm² × 8.89 g/cm³ = 502.61 g × 14.20 per kg = 7.14.
     await waitForText(page, () => costPerMotor().innerText(), /^7\.14 EUR$/);
     // End turns lie outside the field: the torque estimate does not move.
-    expect(readable(await torqueEstimate().innerText())).toMatch(/10\.368 N·m/);
+    expect(readable(await torqueEstimate().innerText())).toMatch(/10\.354 N·m/);
     // Longer end turns: a smaller share of each turn in the field, 100 / 220 = 45.5 %.
     expect(readable(await coilCell(5).innerText())).toBe("45.5 %");
     expect(

@@ -39,12 +39,19 @@ beforeAll(async () => {
     { kind: "magnet", itemId: fixture.magnet.id, piecesPerMotor: 2 },
     { kind: "part", itemId: fixture.part.id, quantityPerMotor: "1" },
   ];
-  const estimated = await createDesign(lines, {
-    name: uniqueCode("Estimated outrunner"),
-  });
+  // Twelve tooth coils (one per tooth of the fixture's 12-slot, 14-pole stator).
+  const estimated = await createDesign(
+    lines.map((line) =>
+      line.kind === "coil" ? { ...line, coilsPerMotor: 12 } : line,
+    ),
+    { name: uniqueCode("Estimated outrunner") },
+  );
   estimatedId = estimated.designId;
-  // No rated torque; r 30 mm, B_g 0.9 T, k 0.8 at 10 A: T = 0.8 · 0.9 · 10 · 4 m · 0.03 m
-  // = 0.864 N·m (by hand; brief, "Coils").
+  // No rated torque; r 30 mm, B_g 0.9 T, α_p 0.8, 10 A RMS per phase, 12 coils of 40 turns,
+  // 50 mm active, 12 slots / 14 poles double layer, star: T = 3·√2·k_w1·N_ph·B̂₁·r·L·I with
+  // k_w1 0.9330 (Libert & Soulard, from memory), N_ph 160, B̂₁ = (4/π)·0.9 T·sin 72° =
+  // 1.0898 T → 10.354 N·m (by hand; GNU units → 10.353662; winding-factor and
+  // motor-constants tests).
   await testDatabase().query(
     `UPDATE design_revisions SET rated_torque_nm = NULL, air_gap_radius_mm = 30,
        air_gap_flux_density_t = 0.9, pole_coverage = 0.8 WHERE id = ?`,
@@ -77,7 +84,7 @@ describe("cost per N·m", () => {
     const perNm = await figure(page, "Cost per N·m");
     expect(perNm).toMatch(/\d+\.\d\d EUR\/N·m/);
     expect(perNm).toContain("per N·m of estimated torque (first-order)");
-    expect(perNm).toContain("0.864 N·m");
+    expect(perNm).toContain("10.354 N·m");
     await saveScreenshot(page, "h4-design-estimated-torque");
     await page.close();
   });

@@ -48,21 +48,31 @@ const perNm = (cost: number, torque: number) =>
 
 describe("cost per N·m without a rated torque", () => {
   it("is over the first-order estimate, and says so", async () => {
-    // No rated torque; air gap r 30 mm, B_g 0.9 T, k 0.8, 10 A through the coil of 40
-    // turns with 50 mm active sides: Σ L = 2 · 40 · 0.05 m = 4 m, and
-    // T = k · B · I · Σ L · r = 0.8 · 0.9 · 10 · 4 · 0.03 = 0.864 N·m (by hand; brief,
-    // "Coils": F = B·I·L, T = F·r over the active conductors only; GNU units:
-    // units -t '0.8 * 0.9 T * 10 A * 4 m * 0.03 m' 'N*m' → 0.864).
+    // No rated torque; air gap r 30 mm, B_g 0.9 T, α_p 0.8, 10 A RMS phase current, twelve
+    // coils of 40 turns with 50 mm active sides on 12 slots / 14 poles, double layer, star:
+    // T = 3 · √2 · k_w1 · N_ph · B̂₁ · r · L · I with k_w1 = 0.9330 (Libert & Soulard's table,
+    // from memory), N_ph = 160, B̂₁ = (4/π) · 0.9 T · sin 72° = 1.0898305 T: 10.3537 N·m
+    // (by hand; GNU units: units -t '10 A * 3*sqrt(2) * sin(75deg)^2 * 160 * (4/pi * 0.9 T *
+    // sin(72 deg)) * 30 mm * 50 mm' 'N m' → 10.353662).
     await testDatabase().query(
       `UPDATE design_revisions SET rated_torque_nm = NULL, air_gap_radius_mm = 30,
          air_gap_flux_density_t = 0.9, pole_coverage = 0.8 WHERE id = ?`,
       [revisionId],
     );
+    await testDatabase().query(
+      `UPDATE design_lines SET coils_per_motor = 12 WHERE revision_id = ? AND kind = 'coil'`,
+      [revisionId],
+    );
     const result = await costing();
     expect(result.ratedTorqueNm).toBeNull();
     expect(result.perNmTorque?.source).toBe("estimated");
-    expect(result.perNmTorque?.torqueNm).toBeCloseTo(0.864, 9);
-    expect(result.costPerNm).toBe(perNm(result.costPerMotor, 0.864));
+    expect(result.perNmTorque?.torqueNm).toBeCloseTo(10.3537, 4);
+    expect(result.costPerNm).toBe(
+      perNm(
+        result.costPerMotor,
+        Number(result.perNmTorque!.torqueNm.toFixed(6)),
+      ),
+    );
 
     // The insight gives the same, marked the same way.
     const insight = await get(`/api/v1/insight/designs?perPage=50`, manager);

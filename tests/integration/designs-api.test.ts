@@ -348,17 +348,21 @@ describe("designs API", () => {
   it("end turns add cost but no torque; active length doubles the torque estimate", async () => {
     const id = await newDesign();
     const path = `/api/v1/designs/${id}/revisions/1`;
-    await sendJson("PUT", path, { lines: [workedCoil()] }, builder);
+    // Twelve tooth coils of worked check 4, one per tooth of the 12-slot, 14-pole stator.
+    const twelve = { ...workedCoil(), coilsPerMotor: 12 };
+    await sendJson("PUT", path, { lines: [twelve] }, builder);
     const base = await costing(id);
-    // T = k · B · I · Σ forceLengthM · r = 0.8 × 0.9 T × 10 A × (2 × 40 × 0.050 m) × 0.030 m
-    //   = 0.864 N·m (worked by hand from the brief's F = B·I·L, T = F·r; GNU units agrees:
-    //   units -t "0.8 * 0.9 tesla * 10 A * 4 m * 0.03 m" "N*m" → 0.864).
-    expect(base.torqueEstimate.torqueNm).toBeCloseTo(0.864, 10);
+    // T = Kt · I = 3 · √2 · k_w1 · N_ph · B̂₁ · r · L · I with k_w1 = 0.9330 (12 slots / 14
+    // poles double layer: 0.933 in Libert & Soulard's table, from memory), B̂₁ = (4/π) · 0.9 T
+    // · sin(0.8 · 90°) = 1.0898305 T, N_ph = 12 × 40 ÷ 3 = 160, r 30 mm, L 50 mm, 10 A RMS:
+    // 10.3537 N·m (worked by hand; GNU units: units -t '10 A * 3*sqrt(2) * sin(75deg)^2 * 160
+    // * (4/pi * 0.9 T * sin(72 deg)) * 30 mm * 50 mm' 'N m' → 10.353662).
+    expect(base.torqueEstimate.torqueNm).toBeCloseTo(10.3537, 4);
 
     await sendJson(
       "PUT",
       path,
-      { lines: [{ ...workedCoil(), endTurnLengthMm: 60 }] },
+      { lines: [{ ...twelve, endTurnLengthMm: 60 }] },
       builder,
     );
     const longerEnds = await costing(id);
@@ -371,7 +375,7 @@ describe("designs API", () => {
     await sendJson(
       "PUT",
       path,
-      { lines: [{ ...workedCoil(), activeLengthMm: 100 }] },
+      { lines: [{ ...twelve, activeLengthMm: 100 }] },
       builder,
     );
     const longerActive = await costing(id);
@@ -379,6 +383,108 @@ describe("designs API", () => {
       2 * base.torqueEstimate.torqueNm!,
       12,
     );
+  });
+
+  it("keeps the winding fields: read, changed, refused when unbalanced, copied to a new revision", async () => {
+    const id = await newDesign();
+    const path = `/api/v1/designs/${id}/revisions/1`;
+    const created = (await (await get(path, builder)).json()) as Record<
+      string,
+      unknown
+    >;
+    // The defaults of migration 0017.
+    expect(created).toMatchObject({
+      phases: 3,
+      windingLayers: 2,
+      phaseConnection: "star",
+      parallelPaths: 1,
+      ratedSpeedRpm: null,
+    });
+    const changed = await sendJson(
+      "PATCH",
+      path,
+      {
+        windingLayers: 1,
+        phaseConnection: "delta",
+        parallelPaths: 2,
+        ratedSpeedRpm: 3000,
+        lines: [{ ...workedCoil(), coilsPerMotor: 12 }],
+      },
+      builder,
+    );
+    expect(changed.status, await changed.clone().text()).toBe(200);
+    expect(await changed.json()).toMatchObject({
+      windingLayers: 1,
+      phaseConnection: "delta",
+      parallelPaths: 2,
+      ratedSpeedRpm: 3000,
+      poles: 14,
+    });
+
+    // 10 slots cannot take a balanced 3-phase winding with 14 poles: 400 beside "slots",
+    // nothing written.
+    const refused = await sendJson("PATCH", path, { slots: 10 }, builder);
+    expect(refused.status).toBe(400);
+    const refusal = (await refused.json()) as {
+      error: { message: string; fields?: Record<string, string[]> };
+    };
+    expect(refusal.error.message).toMatch(/cannot make a balanced 3-phase/);
+    expect(Object.keys(refusal.error.fields ?? {})).toEqual(["slots"]);
+    // A single layer needs an even number of slots: 9 slots / 8 poles is refused on layers.
+    const single = await sendJson(
+      "PATCH",
+      path,
+      { slots: 9, poles: 8 },
+      builder,
+    );
+    expect(single.status).toBe(400);
+    expect(
+      Object.keys(
+        ((await single.json()) as { error: { fields?: object } }).error
+          .fields ?? {},
+      ),
+    ).toEqual(["windingLayers"]);
+    expect(await (await get(path, builder)).json()).toMatchObject({
+      slots: 12,
+      poles: 14,
+    });
+
+    // The costing shows the winding: 12 slots / 14 poles single layer 0.966 (Libert &
+    // Soulard; from memory); 14 poles at 3000 rpm: 7 × 50 = 350 Hz.
+    const figures = (await costing(id)) as unknown as {
+      winding: {
+        windingFactor: { value: { fundamental: number } };
+        electricalFrequency: { value: number };
+        resistance: { value: { lineToLine20Ohm: number } };
+      };
+    };
+    expect(figures.winding.windingFactor.value.fundamental).toBeCloseTo(
+      0.966,
+      3,
+    );
+    expect(figures.winding.electricalFrequency.value).toBe(350);
+    // Coil 0.22981 Ω with its leads at 20 °C (brief, worked check 4); 4 coils per phase in
+    // 2 paths of 2: R_ph = 4 × 0.22981 ÷ 4 = 0.22981 Ω; delta: (2/3) × 0.22981 = 0.15321 Ω.
+    expect(
+      Math.abs(figures.winding.resistance.value.lineToLine20Ohm - 0.15321),
+    ).toBeLessThan(0.00005);
+
+    await sendJson("POST", `${path}/release`, {}, builder);
+    const next = await sendJson(
+      "POST",
+      `/api/v1/designs/${id}/revisions`,
+      {},
+      builder,
+    );
+    expect(next.status).toBe(201);
+    expect(
+      await (await get(`/api/v1/designs/${id}/revisions/2`, builder)).json(),
+    ).toMatchObject({
+      windingLayers: 1,
+      phaseConnection: "delta",
+      parallelPaths: 2,
+      ratedSpeedRpm: 3000,
+    });
   });
 
   it("answers 400 for a bad costing query and 404 for a missing revision", async () => {

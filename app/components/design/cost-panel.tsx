@@ -206,7 +206,7 @@ export function DesignCostFigures({
         label="Copper loss"
         value={formatQuantity(costing.copperLossW, "W", 2)}
       >
-        every coil at the rated current, hot
+        every coil at the rated phase current ÷ parallel paths, hot
       </Figure>
       <Figure
         label="Copper loss per N·m"
@@ -233,12 +233,16 @@ export function DesignCostFigures({
       >
         {"torqueNm" in estimate ? (
           <>
-            {estimate.label} k = {formatQuantity(estimate.poleCoverage, "", 2)}
+            {estimate.label} Kt ={" "}
+            {formatQuantity(estimate.constants.ktNmPerA, "N·m/A", 3)}, k_w1 ={" "}
+            {formatQuantity(estimate.windingFactor, "", 3)}, B_g ={" "}
+            {formatQuantity(estimate.fluxDensityT, "T", 3)} (fundamental{" "}
+            {formatQuantity(estimate.fundamentalFluxDensityT, "T", 3)} with α_p
+            = {formatQuantity(estimate.poleCoverage, "", 2)}
             {estimate.poleCoverageSource === "given"
-              ? " (given)"
-              : ` (${estimate.poleCoverageSource})`}
-            , B_g = {formatQuantity(estimate.fluxDensityT, "T", 3)}, active
-            conductor {formatQuantity(estimate.forceLengthM, "m", 3)}.
+              ? ", given"
+              : `: ${estimate.poleCoverageSource}`}
+            ), active conductor {formatQuantity(estimate.forceLengthM, "m", 3)}.
           </>
         ) : (
           <>

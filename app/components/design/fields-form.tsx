@@ -6,7 +6,7 @@ import type { DesignPageData } from "~/designs/design-page.server";
 import { thermalClassName } from "~/designs/design-checks";
 import {
   insulationClasses,
-  revisionFieldsSchema,
+  revisionFormSchema,
 } from "~/designs/design-schemas";
 import {
   DEFAULT_POLE_COVERAGE,
@@ -45,16 +45,21 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
       insulationClassC: String(revision.insulationClassC),
       slotAreaMm2: text(revision.slotAreaMm2),
       coilSidesPerSlot: String(revision.coilSidesPerSlot),
+      phases: String(revision.phases),
+      windingLayers: String(revision.windingLayers),
+      phaseConnection: revision.phaseConnection,
+      parallelPaths: String(revision.parallelPaths),
+      ratedSpeedRpm: text(revision.ratedSpeedRpm),
       airGapRadiusMm: text(revision.airGapRadiusMm),
       airGapFluxDensityT: text(revision.airGapFluxDensityT),
       poleCoverage: text(revision.poleCoverage),
       notes: revision.notes,
     },
-    constraint: getZodConstraint(revisionFieldsSchema),
+    constraint: getZodConstraint(revisionFormSchema),
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: revisionFieldsSchema }),
+      parseWithZod(formData, { schema: revisionFormSchema }),
     onSubmit: () => setChangedSinceSave(false),
   });
   const busy = fetcher.state !== "idle";
@@ -84,9 +89,9 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
           <QuantityField field={number.slots} label="Slots" />
           <QuantityField
             field={number.ratedCurrentA}
-            label="Rated current"
+            label="Rated current (RMS per phase)"
             unit="A"
-            hint="Through each coil at the rated point"
+            hint="RMS phase current of a sinusoidal drive at the rated point; each coil carries it ÷ parallel paths"
           />
           <SelectField
             field={fields.insulationClassC}
@@ -122,6 +127,26 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
             <option value="1">1 (single layer)</option>
             <option value="2">2 (double layer)</option>
           </SelectField>
+          <QuantityField field={number.phases} label="Phases" />
+          <SelectField field={fields.windingLayers} label="Winding layers">
+            <option value="2">2 (double layer)</option>
+            <option value="1">1 (single layer)</option>
+          </SelectField>
+          <SelectField field={fields.phaseConnection} label="Phase connection">
+            <option value="star">star (wye)</option>
+            <option value="delta">delta</option>
+          </SelectField>
+          <QuantityField
+            field={number.parallelPaths}
+            label="Parallel paths per phase"
+            hint="a: the coils of a phase in a equal paths"
+          />
+          <QuantityField
+            field={number.ratedSpeedRpm}
+            label="Rated speed"
+            unit="rpm"
+            hint="For the electrical frequency"
+          />
           <QuantityField
             field={number.airGapRadiusMm}
             label="Air-gap radius"
@@ -136,8 +161,8 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
           />
           <QuantityField
             field={number.poleCoverage}
-            label="Conductors under the poles, k"
-            hint={`Empty for ${DEFAULT_POLE_COVERAGE}: ${DEFAULT_POLE_COVERAGE_SOURCE}`}
+            label="Magnet arc ÷ pole pitch, α_p"
+            hint={`For the fundamental of the air-gap field. Empty for ${DEFAULT_POLE_COVERAGE}: ${DEFAULT_POLE_COVERAGE_SOURCE}`}
           />
         </div>
         <TextAreaField field={fields.notes} label="Notes" rows={2} />
@@ -184,7 +209,7 @@ export function DesignFieldsSummary({ revision }: { revision: Revision }) {
       <dl className="grid grid-cols-2 gap-x-6 lg:grid-cols-4">
         <Term label="Poles">{formatQuantity(revision.poles, "")}</Term>
         <Term label="Slots">{formatQuantity(revision.slots, "")}</Term>
-        <Term label="Rated current">
+        <Term label="Rated current (RMS per phase)">
           {formatQuantity(revision.ratedCurrentA, "A", 2)}
         </Term>
         <Term label="Insulation class">
@@ -203,13 +228,28 @@ export function DesignFieldsSummary({ revision }: { revision: Revision }) {
             ? "1 (single layer)"
             : "2 (double layer)"}
         </Term>
+        <Term label="Phases">{formatQuantity(revision.phases, "")}</Term>
+        <Term label="Winding layers">
+          {revision.windingLayers === 1
+            ? "1 (single layer)"
+            : "2 (double layer)"}
+        </Term>
+        <Term label="Phase connection">
+          {revision.phaseConnection === "star" ? "star (wye)" : "delta"}
+        </Term>
+        <Term label="Parallel paths per phase">
+          {formatQuantity(revision.parallelPaths, "")}
+        </Term>
+        <Term label="Rated speed">
+          {optional(revision.ratedSpeedRpm, "rpm", 0)}
+        </Term>
         <Term label="Air-gap radius">
           {optional(revision.airGapRadiusMm, "mm", 1)}
         </Term>
         <Term label="Air-gap flux density">
           {optional(revision.airGapFluxDensityT, "T", 3)}
         </Term>
-        <Term label="Conductors under the poles, k">
+        <Term label="Magnet arc ÷ pole pitch, α_p">
           {revision.poleCoverage === null
             ? `${DEFAULT_POLE_COVERAGE} (default)`
             : formatQuantity(revision.poleCoverage, "", 3)}

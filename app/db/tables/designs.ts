@@ -53,7 +53,7 @@ export const designRevisions = mysqlTable(
     status: mysqlEnum("status", revisionStatuses).notNull().default("draft"),
     poles: smallint("poles").notNull(),
     slots: smallint("slots").notNull(),
-    /** Current through each coil at the rated point, A. */
+    /** Rated current: the RMS phase current of a sinusoidal drive, A (each of the parallel paths carries ÷ parallel_paths). */
     ratedCurrentA: decimal("rated_current_a", {
       precision: 10,
       scale: 3,
