@@ -130,27 +130,31 @@ describe("loss with harmonics, P = Σ I_h² R_ac(f_h)", () => {
     // 350 Hz → 0.135 Ω. 10² · 0.105 + 2² · 0.125 + 1² · 0.135 = 10.5 + 0.5 + 0.135 = 11.135 W.
     const result = harmonicLosses(
       50,
+      10,
       [
-        { order: 1, currentA: 10 },
         { order: 5, currentA: 2 },
         { order: 7, currentA: 1 },
       ],
       (f) => 0.1 * (1 + f / 1000),
     );
-    expect(result.harmonics.map((h) => h.frequencyHz)).toEqual([50, 250, 350]);
+    expect(result.losses.map((h) => h.frequencyHz)).toEqual([50, 250, 350]);
     expectWithinRelative(result.lossW, 11.135, 1e-12);
   });
 
-  it("refuses a repeated order, naming the harmonic", () => {
+  it("refuses a repeated order and order 1, naming the harmonic", () => {
     expect(() =>
       harmonicLosses(
         50,
+        10,
         [
-          { order: 1, currentA: 10 },
-          { order: 1, currentA: 2 },
+          { order: 3, currentA: 1 },
+          { order: 3, currentA: 2 },
         ],
         () => 1,
       ),
     ).toThrowError(expect.objectContaining({ field: "harmonics.1.order" }) as Error);
+    expect(() =>
+      harmonicLosses(50, 10, [{ order: 1, currentA: 1 }], () => 1),
+    ).toThrowError(expect.objectContaining({ field: "harmonics.0.order" }) as Error);
   });
 });

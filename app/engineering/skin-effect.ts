@@ -139,13 +139,13 @@ export function roundConductorPenetrationRatio(
   });
 }
 
-/** One harmonic of the coil current: its order (1 = fundamental) and RMS current, A. */
+/** One harmonic of the coil current: its order (2 or more) and RMS current, A. */
 export interface HarmonicCurrent {
   order: number;
   currentA: number;
 }
 
-/** The loss at one harmonic: I² · R_ac(f_h). */
+/** The loss at one frequency of the current (order 1 is the fundamental): I² · R_ac(f). */
 export interface HarmonicLoss extends HarmonicCurrent {
   frequencyHz: number;
   acResistanceOhm: number;
@@ -153,21 +153,24 @@ export interface HarmonicLoss extends HarmonicCurrent {
 }
 
 /**
- * Loss P = Σ I_h² · R_ac(f_h) over the fundamental and its harmonics; `acResistanceAt`
- * gives the AC resistance (Ω) at a frequency (Hz). Orders must be distinct whole numbers ≥ 1.
+ * Loss P = Σ I_h² · R_ac(f_h) over the fundamental (RMS `fundamentalCurrentA` at
+ * `fundamentalHz`) and the `harmonics` (distinct whole orders ≥ 2); `acResistanceAt` gives
+ * the AC resistance (Ω) at a frequency (Hz). Fields are named as the API's "harmonics.i.…".
  */
 export function harmonicLosses(
   fundamentalHz: number,
-  currents: readonly HarmonicCurrent[],
+  fundamentalCurrentA: number,
+  harmonics: readonly HarmonicCurrent[],
   acResistanceAt: (frequencyHz: number) => number,
-): { harmonics: HarmonicLoss[]; lossW: number } {
+): { losses: HarmonicLoss[]; lossW: number } {
   requirePositive(fundamentalHz, "frequencyHz", "The frequency");
+  requireNonNegative(fundamentalCurrentA, "currentA", "The current");
   const seen = new Set<number>();
-  const harmonics = currents.map((harmonic, index) => {
-    if (!Number.isInteger(harmonic.order) || harmonic.order < 1) {
+  harmonics.forEach((harmonic, index) => {
+    if (!Number.isInteger(harmonic.order) || harmonic.order < 2) {
       throw new EngineeringInputError(
         `harmonics.${index}.order`,
-        "A harmonic's order must be a whole number of at least 1.",
+        "A harmonic's order must be a whole number of at least 2 (the fundamental's current is the coil current).",
       );
     }
     if (seen.has(harmonic.order)) {
@@ -177,24 +180,32 @@ export function harmonicLosses(
       );
     }
     seen.add(harmonic.order);
-    requireNonNegative(harmonic.currentA, `harmonics.${index}.currentA`, "A harmonic's current");
-    const frequencyHz = fundamentalHz * harmonic.order;
-    if (frequencyHz > MAX_FREQUENCY_HZ) {
+    requireNonNegative(
+      harmonic.currentA,
+      `harmonics.${index}.currentA`,
+      "A harmonic's current",
+    );
+    if (fundamentalHz * harmonic.order > MAX_FREQUENCY_HZ) {
       throw new EngineeringInputError(
         `harmonics.${index}.order`,
         `Harmonic ${harmonic.order} of ${fundamentalHz} Hz is above 10 MHz.`,
       );
     }
-    const acResistanceOhm = acResistanceAt(frequencyHz);
-    return {
-      ...harmonic,
-      frequencyHz,
-      acResistanceOhm,
-      lossW: harmonic.currentA ** 2 * acResistanceOhm,
-    };
   });
+  const losses = [{ order: 1, currentA: fundamentalCurrentA }, ...harmonics].map(
+    (harmonic) => {
+      const frequencyHz = fundamentalHz * harmonic.order;
+      const acResistanceOhm = acResistanceAt(frequencyHz);
+      return {
+        ...harmonic,
+        frequencyHz,
+        acResistanceOhm,
+        lossW: harmonic.currentA ** 2 * acResistanceOhm,
+      };
+    },
+  );
   return {
-    harmonics,
-    lossW: harmonics.reduce((sum, harmonic) => sum + harmonic.lossW, 0),
+    losses,
+    lossW: losses.reduce((sum, loss) => sum + loss.lossW, 0),
   };
 }
