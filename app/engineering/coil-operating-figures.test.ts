@@ -179,9 +179,9 @@ describe("operating temperature", () => {
     });
     // With R20 = 0.21952406 (unrounded), GNU units:
     // (40 + 2·100·R20·(1 − 20α))/(1 − 2·100·R20·α) = 97.230644 °C;
-    // 100 · R20 · (1 + 0.00393 · 77.230644) = 28.615235 W.
+    // 100 · R20 · (1 + 0.00393 · 77.230644) = 28.615322 W.
     expectWithinRelative(result.operatingPoint!.temperatureC, 97.230644, 1e-6);
-    expectWithinRelative(result.operatingPoint!.lossPerCoilW, 28.615235, 1e-6);
+    expectWithinRelative(result.operatingPoint!.lossPerCoilW, 28.615322, 1e-6);
     expectWithinRelative(
       result.operatingPoint!.totalLossW,
       12 * result.operatingPoint!.lossPerCoilW,
