@@ -151,3 +151,17 @@ describe("litz AC resistance (strand-level Dowell)", () => {
     expect(litz).toBeLessThan(solid / 4);
   });
 });
+
+describe("litz strand sizes", () => {
+  it("refuses a strand size that is not in the tables, naming wire.strandWire.diameterMm", () => {
+    expect(() =>
+      litzWire({
+        standard: "litz",
+        strands: 10,
+        strandWire: { standard: "IEC", diameterMm: 0.101 },
+      }),
+    ).toThrowError(
+      expect.objectContaining({ field: "wire.strandWire.diameterMm" }) as Error,
+    );
+  });
+});

@@ -119,6 +119,21 @@ function checkPacking(packingFactor: number): void {
   }
 }
 
+/** The strand's bare diameter; a refused size names "wire.strandWire.…" (the API's path). */
+function strandBareDiameterMm(strandWire: WireSpec): number {
+  try {
+    return bareDiameterMm(strandWire);
+  } catch (error) {
+    if (error instanceof EngineeringInputError && error.field.startsWith("wire.")) {
+      throw new EngineeringInputError(
+        error.field.replace("wire.", "wire.strandWire."),
+        error.message,
+      );
+    }
+    throw error;
+  }
+}
+
 export interface LitzWire {
   strands: number;
   strandBareDiameterMm: number;
@@ -149,7 +164,7 @@ export function litzWire(
   insulation?: InsulationKey | null,
 ): LitzWire {
   checkStrands(spec.strands);
-  const strandBare = bareDiameterMm(spec.strandWire);
+  const strandBare = strandBareDiameterMm(spec.strandWire);
   const strandInsulation: InsulationKey =
     insulation ?? (spec.strandWire.standard === "IEC" ? "grade1" : "single");
   const overall = overallDiameter(spec.strandWire, strandInsulation);
