@@ -14,7 +14,12 @@
  */
 
 import { EngineeringInputError } from "./errors";
-import { litzAcResistanceFactor, litzWire, type LitzWire, type LitzWireSpec } from "./litz-wire";
+import {
+  litzAcResistanceFactor,
+  litzWire,
+  type LitzWire,
+  type LitzWireSpec,
+} from "./litz-wire";
 import {
   rectangularWire,
   type RectangularWire,
@@ -138,7 +143,11 @@ export function conductorAcResistanceFactor(
   }
   const pitch = conductor.overallDiameterMm ?? conductor.bareDiameterMm;
   return dowellResistanceFactor(
-    roundConductorPenetrationRatio(conductor.bareDiameterMm, pitch, skinDepthMm),
+    roundConductorPenetrationRatio(
+      conductor.bareDiameterMm,
+      pitch,
+      skinDepthMm,
+    ),
     layers,
   );
 }

@@ -18,7 +18,11 @@
  * All outputs are plain numbers in the named units, unrounded.
  */
 
-import { coilConductor, type CoilWireSpec, type ConductorKind } from "./coil-conductor";
+import {
+  coilConductor,
+  type CoilWireSpec,
+  type ConductorKind,
+} from "./coil-conductor";
 import {
   coilOperatingFigures,
   type CoilAcLoss,

@@ -14,7 +14,11 @@ const CHECK_4: CoilEstimateInput = {
 describe("current density on the coil", () => {
   it("10 A in 0.80 mm: 19.894 A/mm² (10 / (π/4 · 0.64), GNU units)", () => {
     const result = estimateCoil({ ...CHECK_4, currentA: 10 });
-    expectWithinRelative(result.perCoil.currentDensityAPerMm2!, 19.894368, 1e-7);
+    expectWithinRelative(
+      result.perCoil.currentDensityAPerMm2!,
+      19.894368,
+      1e-7,
+    );
   });
 
   it("is null without a current, and so are the AC figures without a frequency", () => {
@@ -43,7 +47,11 @@ describe("AC resistance of the check-4 coil at 10 kHz, four layers, 20 °C", () 
   it("skin depth 0.66085 mm, R_ac/R_dc 2.75295, R_ac 0.604338 Ω", () => {
     expectWithinRelative(result.perCoil.skinDepthMm!, 0.66085493, 1e-6);
     expectWithinRelative(result.perCoil.acResistanceRatio!, 2.7529527, 1e-6);
-    expectWithinRelative(result.perCoil.acResistanceOhm!, 0.21952406 * 2.7529527, 1e-6);
+    expectWithinRelative(
+      result.perCoil.acResistanceOhm!,
+      0.21952406 * 2.7529527,
+      1e-6,
+    );
   });
 
   it("loss 10² · 0.604338 = 60.434 W per coil; the DC fields are unchanged", () => {
@@ -54,7 +62,11 @@ describe("AC resistance of the check-4 coil at 10 kHz, four layers, 20 °C", () 
   });
 
   it("one layer is assumed, and flagged, when no layer count is given", () => {
-    const single = estimateCoil({ ...CHECK_4, currentA: 10, frequencyHz: 10_000 });
+    const single = estimateCoil({
+      ...CHECK_4,
+      currentA: 10,
+      frequencyHz: 10_000,
+    });
     expect(single.acLoss!.layersPerCoil).toBe(1);
     expect(single.acLoss!.layersAssumed).toBe(true);
     expect(single.perCoil.acResistanceRatio!).toBeLessThan(
@@ -86,9 +98,9 @@ describe("harmonics: P = Σ I_h² R_ac(f_h)", () => {
 
   it("refuses harmonics without a frequency (frequencyHz) or without a current (currentA)", () => {
     const harmonics = [{ order: 3, currentA: 1 }];
-    expect(() => estimateCoil({ ...CHECK_4, currentA: 10, harmonics })).toThrowError(
-      expect.objectContaining({ field: "frequencyHz" }) as Error,
-    );
+    expect(() =>
+      estimateCoil({ ...CHECK_4, currentA: 10, harmonics }),
+    ).toThrowError(expect.objectContaining({ field: "frequencyHz" }) as Error);
     expect(() =>
       estimateCoil({ ...CHECK_4, frequencyHz: 50, harmonics }),
     ).toThrowError(expect.objectContaining({ field: "currentA" }) as Error);
@@ -97,7 +109,9 @@ describe("harmonics: P = Σ I_h² R_ac(f_h)", () => {
   it("refuses zero layers, naming layersPerCoil", () => {
     expect(() =>
       estimateCoil({ ...CHECK_4, frequencyHz: 50, layersPerCoil: 0 }),
-    ).toThrowError(expect.objectContaining({ field: "layersPerCoil" }) as Error);
+    ).toThrowError(
+      expect.objectContaining({ field: "layersPerCoil" }) as Error,
+    );
   });
 });
 
@@ -159,10 +173,22 @@ describe("litz and flat wire coils", () => {
   });
 
   it("a flat conductor wound on edge has more eddy loss than wound flat", () => {
-    const flat = { standard: "rectangular" as const, thicknessMm: 2, widthMm: 8 };
-    const base = { ...CHECK_4, frequencyHz: 1000, layersPerCoil: 3, insulation: "grade2" as const };
+    const flat = {
+      standard: "rectangular" as const,
+      thicknessMm: 2,
+      widthMm: 8,
+    };
+    const base = {
+      ...CHECK_4,
+      frequencyHz: 1000,
+      layersPerCoil: 3,
+      insulation: "grade2" as const,
+    };
     const flatwise = estimateCoil({ ...base, wire: flat });
-    const edgewise = estimateCoil({ ...base, wire: { ...flat, edgewise: true } });
+    const edgewise = estimateCoil({
+      ...base,
+      wire: { ...flat, edgewise: true },
+    });
     expect(edgewise.perCoil.acResistanceRatio!).toBeGreaterThan(
       flatwise.perCoil.acResistanceRatio!,
     );
@@ -192,7 +218,10 @@ describe("operating temperature", () => {
 
   it("refuses a thermal input without a current, naming currentA", () => {
     expect(() =>
-      estimateCoil({ ...CHECK_4, thermal: { ambientC: 40, temperatureRiseK: 60 } }),
+      estimateCoil({
+        ...CHECK_4,
+        thermal: { ambientC: 40, temperatureRiseK: 60 },
+      }),
     ).toThrowError(expect.objectContaining({ field: "currentA" }) as Error);
   });
 });

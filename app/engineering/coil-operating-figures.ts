@@ -7,7 +7,10 @@
  * terminals at the fundamental; harmonics give their own RMS currents.
  */
 
-import { conductorAcResistanceFactor, type CoilConductor } from "./coil-conductor";
+import {
+  conductorAcResistanceFactor,
+  type CoilConductor,
+} from "./coil-conductor";
 import { currentDensityAPerMm2 } from "./current-density";
 import { EngineeringInputError } from "./errors";
 import type { ConductorKey } from "./reference-data";
@@ -18,7 +21,10 @@ import {
   type HarmonicLoss,
 } from "./skin-effect";
 import { windingTemperature, type ThermalInput } from "./winding-temperature";
-import { resistanceTemperatureFactor, resistivityOhmMm2PerM } from "./wire-geometry";
+import {
+  resistanceTemperatureFactor,
+  resistivityOhmMm2PerM,
+} from "./wire-geometry";
 
 export interface CoilOperatingInput {
   conductor: ConductorKey;
@@ -126,14 +132,19 @@ export function coilOperatingFigures(
   /** Loss of one coil at a temperature: I² R_dc without a frequency, else Σ I_h² R_ac(f_h). */
   const lossAt = (temperatureC: number): number => {
     const current = currentA ?? 0;
-    if (frequencyHz === null) return current ** 2 * dcResistanceAt(temperatureC);
-    return harmonicLosses(frequencyHz, current, harmonics, (hz) =>
-      dcResistanceAt(temperatureC) * acRatioAt(hz, temperatureC),
+    if (frequencyHz === null)
+      return current ** 2 * dcResistanceAt(temperatureC);
+    return harmonicLosses(
+      frequencyHz,
+      current,
+      harmonics,
+      (hz) => dcResistanceAt(temperatureC) * acRatioAt(hz, temperatureC),
     ).lossW;
   };
 
   const temperatureC = input.temperatureC;
-  const ratio = frequencyHz === null ? null : acRatioAt(frequencyHz, temperatureC);
+  const ratio =
+    frequencyHz === null ? null : acRatioAt(frequencyHz, temperatureC);
   const perCoil: CoilOperatingPerCoil = {
     currentDensityAPerMm2:
       currentA === null
@@ -146,8 +157,12 @@ export function coilOperatingFigures(
     skinDepthMm:
       frequencyHz === null
         ? null
-        : skinDepthMm(resistivityOhmMm2PerM(input.conductor, temperatureC), frequencyHz),
-    acResistanceOhm: ratio === null ? null : dcResistanceAt(temperatureC) * ratio,
+        : skinDepthMm(
+            resistivityOhmMm2PerM(input.conductor, temperatureC),
+            frequencyHz,
+          ),
+    acResistanceOhm:
+      ratio === null ? null : dcResistanceAt(temperatureC) * ratio,
     acResistanceRatio: ratio,
   };
 
@@ -162,7 +177,8 @@ export function coilOperatingFigures(
     acLoss = {
       frequencyHz,
       layersPerCoil: layers,
-      layersAssumed: input.layersPerCoil === undefined || input.layersPerCoil === null,
+      layersAssumed:
+        input.layersPerCoil === undefined || input.layersPerCoil === null,
       temperatureC,
       harmonics: losses,
       lossPerCoilW: lossW,

@@ -61,7 +61,11 @@ describe("litz bundle", () => {
     // Hand-worked: 0.117 · √(100/0.75) = 0.117 · 11.5470 = 1.35100 mm. Rule of thumb
     // (common practice, from memory): 1.155 · 0.117 · 10 = 1.35135 mm.
     expectWithinRelative(litzBundleDiameterMm(0.117, 100), 1.351, 1e-4);
-    expectWithinRelative(litzBundleDiameterMm(0.117, 100), 1.155 * 0.117 * 10, 5e-4);
+    expectWithinRelative(
+      litzBundleDiameterMm(0.117, 100),
+      1.155 * 0.117 * 10,
+      5e-4,
+    );
   });
 
   it("100 × IEC 0.100 mm: 0.78540 mm² of copper, the area of one 1.000 mm wire", () => {

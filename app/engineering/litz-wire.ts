@@ -24,7 +24,10 @@
 
 import { EngineeringInputError, requirePositive } from "./errors";
 import type { InsulationKey } from "./reference-data";
-import { dowellResistanceFactor, roundConductorPenetrationRatio } from "./skin-effect";
+import {
+  dowellResistanceFactor,
+  roundConductorPenetrationRatio,
+} from "./skin-effect";
 import {
   bareDiameterMm,
   circleAreaMm2,
@@ -55,7 +58,11 @@ const FINE_STRAND_ENAMEL_SHARE = 0.1;
 
 /** IEC 60317-11 k1 (via Elektrisola's notes): 1.02, 1.04, then 1.06 for three steps or more. */
 export function litzTakeUpFactor(bunchingSteps: number): number {
-  if (!Number.isInteger(bunchingSteps) || bunchingSteps < 1 || bunchingSteps > 10) {
+  if (
+    !Number.isInteger(bunchingSteps) ||
+    bunchingSteps < 1 ||
+    bunchingSteps > 10
+  ) {
     throw new EngineeringInputError(
       "wire.bunchingSteps",
       "The bunching steps must be a whole number from 1 to 10.",
@@ -73,7 +80,11 @@ export function litzResistancePerLength(
   strands: number,
   takeUpFactor: number,
 ): number {
-  requirePositive(strandResistancePerLength, "wire.strandWire", "The strand resistance");
+  requirePositive(
+    strandResistancePerLength,
+    "wire.strandWire",
+    "The strand resistance",
+  );
   checkStrands(strands);
   checkTakeUp(takeUpFactor);
   return (strandResistancePerLength * takeUpFactor) / strands;
@@ -85,7 +96,11 @@ export function litzBundleDiameterMm(
   strands: number,
   packingFactor = DEFAULT_LITZ_PACKING_FACTOR,
 ): number {
-  requirePositive(strandOverallDiameterMm, "wire.strandWire", "The strand diameter");
+  requirePositive(
+    strandOverallDiameterMm,
+    "wire.strandWire",
+    "The strand diameter",
+  );
   checkStrands(strands);
   checkPacking(packingFactor);
   return strandOverallDiameterMm * Math.sqrt(strands / packingFactor);
@@ -101,7 +116,11 @@ function checkStrands(strands: number): void {
 }
 
 function checkTakeUp(takeUpFactor: number): void {
-  if (!Number.isFinite(takeUpFactor) || takeUpFactor < 1 || takeUpFactor > 1.2) {
+  if (
+    !Number.isFinite(takeUpFactor) ||
+    takeUpFactor < 1 ||
+    takeUpFactor > 1.2
+  ) {
     throw new EngineeringInputError(
       "wire.takeUpFactor",
       "The take-up factor must be between 1 and 1.2 (each strand is a little longer than the bundle).",
@@ -111,7 +130,11 @@ function checkTakeUp(takeUpFactor: number): void {
 
 function checkPacking(packingFactor: number): void {
   // π/√12 = 0.9069 is the densest packing of equal circles (hexagonal).
-  if (!Number.isFinite(packingFactor) || packingFactor < 0.3 || packingFactor > 0.9069) {
+  if (
+    !Number.isFinite(packingFactor) ||
+    packingFactor < 0.3 ||
+    packingFactor > 0.9069
+  ) {
     throw new EngineeringInputError(
       "wire.packingFactor",
       "The packing factor must be between 0.3 and 0.9069 (hexagonal packing, π/√12).",
@@ -124,7 +147,10 @@ function strandBareDiameterMm(strandWire: WireSpec): number {
   try {
     return bareDiameterMm(strandWire);
   } catch (error) {
-    if (error instanceof EngineeringInputError && error.field.startsWith("wire.")) {
+    if (
+      error instanceof EngineeringInputError &&
+      error.field.startsWith("wire.")
+    ) {
       throw new EngineeringInputError(
         error.field.replace("wire.", "wire.strandWire."),
         error.message,

@@ -33,24 +33,34 @@ describe("conductor area A = a·b − (4 − π)·r²", () => {
   it("1.00 × 5.00 mm: 4.7854 mm², the maker's formula S = a·b − 0.2146·a² for r = a/2", () => {
     // Published section formula of a flat-wire maker (rvyuan.com "formula" page):
     // S = T·B − 0.2146·T² = 5.00 − 0.2146 = 4.7854 mm².
-    const wire = rectangularWire({ standard: "rectangular", thicknessMm: 1, widthMm: 5 });
+    const wire = rectangularWire({
+      standard: "rectangular",
+      thicknessMm: 1,
+      widthMm: 5,
+    });
     expectWithinRelative(wire.areaMm2, 4.7854, 1e-5);
   });
 
   it("0.80 × 4.00 mm: 3.2 − 0.2146 · 0.64 = 3.06266 mm² by the same published formula", () => {
-    const wire = rectangularWire({ standard: "rectangular", thicknessMm: 0.8, widthMm: 4 });
+    const wire = rectangularWire({
+      standard: "rectangular",
+      thicknessMm: 0.8,
+      widthMm: 4,
+    });
     expectWithinRelative(wire.areaMm2, 3.2 - 0.2146 * 0.64, 2e-5);
   });
 
   it("2.00 × 8.00 mm, r 0.65 mm: 15.637323 mm²; 4.00 × 10.00 mm, r 1.00 mm: 39.141593 mm²", () => {
     // GNU units: units -t '2*8-(4-pi)*0.65^2' → 15.637323; '4*10-(4-pi)*1^2' → 39.141593.
     expectWithinRelative(
-      rectangularWire({ standard: "rectangular", thicknessMm: 2, widthMm: 8 }).areaMm2,
+      rectangularWire({ standard: "rectangular", thicknessMm: 2, widthMm: 8 })
+        .areaMm2,
       15.637323,
       1e-7,
     );
     expectWithinRelative(
-      rectangularWire({ standard: "rectangular", thicknessMm: 4, widthMm: 10 }).areaMm2,
+      rectangularWire({ standard: "rectangular", thicknessMm: 4, widthMm: 10 })
+        .areaMm2,
       39.141593,
       1e-7,
     );
@@ -86,7 +96,10 @@ describe("overall size, mass, resistance and fill", () => {
 
   it("refuses grade 3 and AWG builds for flat wire, naming insulation", () => {
     expect(() =>
-      rectangularWire({ standard: "rectangular", thicknessMm: 2, widthMm: 8 }, "grade3"),
+      rectangularWire(
+        { standard: "rectangular", thicknessMm: 2, widthMm: 8 },
+        "grade3",
+      ),
     ).toThrowError(expect.objectContaining({ field: "insulation" }) as Error);
   });
 
@@ -113,7 +126,12 @@ describe("overall size, mass, resistance and fill", () => {
 
   it("refuses a liner that fills the slot, naming linerAreaMm2", () => {
     expect(() =>
-      rectangularSlotFill({ wire, conductorsInSlot: 2, slotAreaMm2: 50, linerAreaMm2: 50 }),
+      rectangularSlotFill({
+        wire,
+        conductorsInSlot: 2,
+        slotAreaMm2: 50,
+        linerAreaMm2: 50,
+      }),
     ).toThrowError(expect.objectContaining({ field: "linerAreaMm2" }) as Error);
   });
 });

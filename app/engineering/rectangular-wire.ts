@@ -15,7 +15,11 @@
  * input path ("wire.thicknessMm", "wire.widthMm", "wire.cornerRadiusMm", "insulation").
  */
 
-import { EngineeringInputError, requireNonNegative, requirePositive } from "./errors";
+import {
+  EngineeringInputError,
+  requireNonNegative,
+  requirePositive,
+} from "./errors";
 import {
   CORNER_RADIUS_ROWS,
   ENAMEL_INCREASE_MM,
@@ -79,7 +83,11 @@ export function rectangularAreaMm2(
 ): number {
   requirePositive(thicknessMm, "wire.thicknessMm", "The thickness");
   requirePositive(widthMm, "wire.widthMm", "The width");
-  requireNonNegative(cornerRadiusMm, "wire.cornerRadiusMm", "The corner radius");
+  requireNonNegative(
+    cornerRadiusMm,
+    "wire.cornerRadiusMm",
+    "The corner radius",
+  );
   if (cornerRadiusMm > Math.min(thicknessMm, widthMm) / 2) {
     throw new EngineeringInputError(
       "wire.cornerRadiusMm",
@@ -123,8 +131,7 @@ export function rectangularWire(
     cornerRadiusMm,
     cornerRadiusFromStandard: given === undefined || given === null,
     areaMm2: rectangularAreaMm2(spec.thicknessMm, spec.widthMm, cornerRadiusMm),
-    overallThicknessMm:
-      increase === null ? null : spec.thicknessMm + increase,
+    overallThicknessMm: increase === null ? null : spec.thicknessMm + increase,
     overallWidthMm: increase === null ? null : spec.widthMm + increase,
   };
 }
@@ -150,7 +157,11 @@ export function rectangularPerMetre(
   requirePositive(areaMm2, "wire", "The conductor area");
   return {
     linearMassKgPerM: linearMassKgPerM(conductor, areaMm2),
-    resistancePerMetreOhm: resistancePerMetreOhm(conductor, areaMm2, temperatureC),
+    resistancePerMetreOhm: resistancePerMetreOhm(
+      conductor,
+      areaMm2,
+      temperatureC,
+    ),
   };
 }
 
@@ -193,7 +204,9 @@ export function rectangularSlotFill(input: {
   const grossFill =
     wire.overallThicknessMm === null || wire.overallWidthMm === null
       ? null
-      : (input.conductorsInSlot * wire.overallThicknessMm * wire.overallWidthMm) /
+      : (input.conductorsInSlot *
+          wire.overallThicknessMm *
+          wire.overallWidthMm) /
         freeMm2;
   return {
     copperFill: (input.conductorsInSlot * wire.areaMm2) / freeMm2,

@@ -86,7 +86,11 @@ describe("Dowell's R_ac/R_dc (Proc. IEE 1966)", () => {
     // Hand-worked: Δ = 10, m = 2 → 10 · (1 + 2) = 30; Δ = 10, m = 1 → 10.
     expectWithinRelative(dowellResistanceFactor(10, 2), 30, 1e-3);
     expectWithinRelative(dowellResistanceFactor(10, 1), 10, 1e-3);
-    expectWithinRelative(dowellResistanceFactor(100, 3), 100 * (1 + 16 / 3), 1e-12);
+    expectWithinRelative(
+      dowellResistanceFactor(100, 3),
+      100 * (1 + 16 / 3),
+      1e-12,
+    );
   });
 
   it("rises steadily with Δ for three layers (no dip in Dowell's curves of F_R)", () => {
@@ -99,7 +103,9 @@ describe("Dowell's R_ac/R_dc (Proc. IEE 1966)", () => {
   });
 
   it("refuses fewer than one layer, naming layersPerCoil", () => {
-    expect(() => dowellResistanceFactor(1, 0)).toThrowError(EngineeringInputError);
+    expect(() => dowellResistanceFactor(1, 0)).toThrowError(
+      EngineeringInputError,
+    );
     expect(() => dowellResistanceFactor(1, Number.NaN)).toThrowError(
       expect.objectContaining({ field: "layersPerCoil" }) as Error,
     );
@@ -152,9 +158,13 @@ describe("loss with harmonics, P = Σ I_h² R_ac(f_h)", () => {
         ],
         () => 1,
       ),
-    ).toThrowError(expect.objectContaining({ field: "harmonics.1.order" }) as Error);
+    ).toThrowError(
+      expect.objectContaining({ field: "harmonics.1.order" }) as Error,
+    );
     expect(() =>
       harmonicLosses(50, 10, [{ order: 1, currentA: 1 }], () => 1),
-    ).toThrowError(expect.objectContaining({ field: "harmonics.0.order" }) as Error);
+    ).toThrowError(
+      expect.objectContaining({ field: "harmonics.0.order" }) as Error,
+    );
   });
 });

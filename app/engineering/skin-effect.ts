@@ -19,7 +19,11 @@
  * - Loss with harmonics: P = Σ I_h² · R_ac(f_h), I_h the RMS current of each harmonic.
  */
 
-import { EngineeringInputError, requireNonNegative, requirePositive } from "./errors";
+import {
+  EngineeringInputError,
+  requireNonNegative,
+  requirePositive,
+} from "./errors";
 
 /** Permeability of free space, H/m (4π × 10⁻⁷; the 2019 SI value differs by 5 × 10⁻¹⁰). */
 export const MU_0_H_PER_M = 4 * Math.PI * 1e-7;
@@ -44,7 +48,11 @@ export function skinDepthMm(
       "The frequency must be at most 10 MHz.",
     );
   }
-  requirePositive(relativePermeability, "relativePermeability", "The relative permeability");
+  requirePositive(
+    relativePermeability,
+    "relativePermeability",
+    "The relative permeability",
+  );
   // Ω·mm²/m → Ω·m is × 10⁻⁶; the depth in m → mm is × 10³.
   const resistivityOhmM = resistivityOhmMm2PerM * 1e-6;
   return (
@@ -192,18 +200,19 @@ export function harmonicLosses(
       );
     }
   });
-  const losses = [{ order: 1, currentA: fundamentalCurrentA }, ...harmonics].map(
-    (harmonic) => {
-      const frequencyHz = fundamentalHz * harmonic.order;
-      const acResistanceOhm = acResistanceAt(frequencyHz);
-      return {
-        ...harmonic,
-        frequencyHz,
-        acResistanceOhm,
-        lossW: harmonic.currentA ** 2 * acResistanceOhm,
-      };
-    },
-  );
+  const losses = [
+    { order: 1, currentA: fundamentalCurrentA },
+    ...harmonics,
+  ].map((harmonic) => {
+    const frequencyHz = fundamentalHz * harmonic.order;
+    const acResistanceOhm = acResistanceAt(frequencyHz);
+    return {
+      ...harmonic,
+      frequencyHz,
+      acResistanceOhm,
+      lossW: harmonic.currentA ** 2 * acResistanceOhm,
+    };
+  });
   return {
     losses,
     lossW: losses.reduce((sum, loss) => sum + loss.lossW, 0),

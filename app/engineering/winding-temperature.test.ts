@@ -42,7 +42,11 @@ describe("winding temperature from a thermal resistance", () => {
     // (40 + 8·21.952·0.9214) / (1 − 8·21.952·0.00393) = 201.81 / 0.30985 = 651.3 °C.
     expect(() =>
       windingTemperature({ ambientC: 40, thermalResistanceKPerW: 8 }, lossAt),
-    ).toThrowError(expect.objectContaining({ field: "thermal.thermalResistanceKPerW" }) as Error);
+    ).toThrowError(
+      expect.objectContaining({
+        field: "thermal.thermalResistanceKPerW",
+      }) as Error,
+    );
   });
 
   it("with no loss stays at ambient", () => {
@@ -56,19 +60,35 @@ describe("winding temperature from a thermal resistance", () => {
   it("refuses a negative or NaN thermal resistance and an ambient of 1000 °C", () => {
     expect(() =>
       windingTemperature({ ambientC: 40, thermalResistanceKPerW: -1 }, lossAt),
-    ).toThrowError(expect.objectContaining({ field: "thermal.thermalResistanceKPerW" }) as Error);
+    ).toThrowError(
+      expect.objectContaining({
+        field: "thermal.thermalResistanceKPerW",
+      }) as Error,
+    );
     expect(() =>
-      windingTemperature({ ambientC: 40, thermalResistanceKPerW: Number.NaN }, lossAt),
-    ).toThrowError(expect.objectContaining({ field: "thermal.thermalResistanceKPerW" }) as Error);
+      windingTemperature(
+        { ambientC: 40, thermalResistanceKPerW: Number.NaN },
+        lossAt,
+      ),
+    ).toThrowError(
+      expect.objectContaining({
+        field: "thermal.thermalResistanceKPerW",
+      }) as Error,
+    );
     expect(() =>
       windingTemperature({ ambientC: 1000, thermalResistanceKPerW: 1 }, lossAt),
-    ).toThrowError(expect.objectContaining({ field: "thermal.ambientC" }) as Error);
+    ).toThrowError(
+      expect.objectContaining({ field: "thermal.ambientC" }) as Error,
+    );
   });
 });
 
 describe("winding temperature from a given rise", () => {
   it("40 °C + 60 K = 100 °C; loss 21.952 · (1 + 0.00393 · 80) = 28.854 W (hand-worked)", () => {
-    const result = windingTemperature({ ambientC: 40, temperatureRiseK: 60 }, lossAt);
+    const result = windingTemperature(
+      { ambientC: 40, temperatureRiseK: 60 },
+      lossAt,
+    );
     expect(result.temperatureC).toBe(100);
     expectWithinRelative(result.lossW, 28.85371, 1e-6);
     expect(result.iterations).toBe(0);
@@ -77,9 +97,13 @@ describe("winding temperature from a given rise", () => {
   it("refuses a negative rise and one that passes 400 °C", () => {
     expect(() =>
       windingTemperature({ ambientC: 40, temperatureRiseK: -5 }, lossAt),
-    ).toThrowError(expect.objectContaining({ field: "thermal.temperatureRiseK" }) as Error);
+    ).toThrowError(
+      expect.objectContaining({ field: "thermal.temperatureRiseK" }) as Error,
+    );
     expect(() =>
       windingTemperature({ ambientC: 40, temperatureRiseK: 380 }, lossAt),
-    ).toThrowError(expect.objectContaining({ field: "thermal.temperatureRiseK" }) as Error);
+    ).toThrowError(
+      expect.objectContaining({ field: "thermal.temperatureRiseK" }) as Error,
+    );
   });
 });

@@ -14,7 +14,11 @@
  * 220 °C for common wire) is refused as runaway.
  */
 
-import { EngineeringInputError, requireNonNegative, requirePositive } from "./errors";
+import {
+  EngineeringInputError,
+  requireNonNegative,
+  requirePositive,
+} from "./errors";
 
 /** Highest temperature the iteration follows, °C (the estimate's temperature limit). */
 export const MAX_WINDING_TEMPERATURE_C = 400;
@@ -23,8 +27,16 @@ const TOLERANCE_K = 1e-6;
 const MAX_ITERATIONS = 10_000;
 
 export type ThermalInput =
-  | { ambientC: number; thermalResistanceKPerW: number; temperatureRiseK?: undefined }
-  | { ambientC: number; temperatureRiseK: number; thermalResistanceKPerW?: undefined };
+  | {
+      ambientC: number;
+      thermalResistanceKPerW: number;
+      temperatureRiseK?: undefined;
+    }
+  | {
+      ambientC: number;
+      temperatureRiseK: number;
+      thermalResistanceKPerW?: undefined;
+    };
 
 export interface WindingTemperature {
   /** Operating temperature of the winding, °C. */
@@ -76,7 +88,11 @@ export function windingTemperature(
   }
 
   const rth = thermal.thermalResistanceKPerW;
-  requirePositive(rth, "thermal.thermalResistanceKPerW", "The thermal resistance");
+  requirePositive(
+    rth,
+    "thermal.thermalResistanceKPerW",
+    "The thermal resistance",
+  );
   let temperatureC = thermal.ambientC;
   for (let iteration = 1; iteration <= MAX_ITERATIONS; iteration += 1) {
     const next = thermal.ambientC + rth * lossAtW(temperatureC);

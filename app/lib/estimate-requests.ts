@@ -82,11 +82,16 @@ export const wireSpecSchema = z.discriminatedUnion(
 );
 
 /** Round magnet wire: a strand of litz wire. */
-const roundWireSpecSchema = z.discriminatedUnion("standard", [awgWire, iecWire], {
-  error: 'Give the strand: { standard: "AWG", size } or { standard: "IEC", diameterMm }.',
-});
+const roundWireSpecSchema = z.discriminatedUnion(
+  "standard",
+  [awgWire, iecWire],
+  {
+    error:
+      'Give the strand: { standard: "AWG", size } or { standard: "IEC", diameterMm }.',
+  },
+);
 
-const litzWire = z.object({
+export const litzWireSchema = z.object({
   standard: z.literal("litz"),
   strands: wholeNumber("the strands", 2, 100_000),
   strandWire: roundWireSpecSchema,
@@ -97,16 +102,25 @@ const litzWire = z.object({
     .nullish(),
   packingFactor: number("the packing factor")
     .min(0.3, "The packing factor must be at least 0.3.")
-    .max(0.9069, "The packing factor must be at most 0.9069 (hexagonal packing).")
+    .max(
+      0.9069,
+      "The packing factor must be at most 0.9069 (hexagonal packing).",
+    )
     .nullish(),
 });
 
 const flatDimension = (label: string) =>
   number(label)
-    .gt(0, `${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm.`)
-    .max(100, `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 100 mm.`);
+    .gt(
+      0,
+      `${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm.`,
+    )
+    .max(
+      100,
+      `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 100 mm.`,
+    );
 
-const rectangularWire = z.object({
+export const rectangularWireSchema = z.object({
   standard: z.literal("rectangular"),
   thicknessMm: flatDimension("the thickness"),
   widthMm: flatDimension("the width"),
@@ -114,13 +128,15 @@ const rectangularWire = z.object({
     .min(0, "The corner radius cannot be negative.")
     .max(50, "The corner radius must be at most 50 mm.")
     .nullish(),
-  edgewise: z.boolean({ error: "Edgewise must be true or false." }).default(false),
+  edgewise: z
+    .boolean({ error: "Edgewise must be true or false." })
+    .default(false),
 });
 
 /** Any wire a coil estimate takes: round AWG or IEC, litz, or rectangular (flat). */
 export const coilWireSpecSchema = z.discriminatedUnion(
   "standard",
-  [awgWire, iecWire, litzWire, rectangularWire],
+  [awgWire, iecWire, litzWireSchema, rectangularWireSchema],
   {
     error: (issue) =>
       issue.input === undefined
@@ -185,19 +201,22 @@ const ambientC = number("the ambient temperature")
   .min(-70, "The ambient temperature must be at least −70 °C.")
   .max(300, "The ambient temperature must be at most 300 °C.");
 
+/** The thermal input's fields, shared by the API request and the estimator form. */
+export const thermalFields = {
+  ambientC,
+  thermalResistanceKPerW: number("the thermal resistance")
+    .gt(0, "The thermal resistance must be more than 0 K/W.")
+    .max(1_000, "The thermal resistance must be at most 1,000 K/W.")
+    .nullish(),
+  temperatureRiseK: number("the temperature rise")
+    .min(0, "The temperature rise cannot be negative.")
+    .max(400, "The temperature rise must be at most 400 K.")
+    .nullish(),
+};
+
 /** Ambient and either a thermal resistance (K/W, coil to ambient) or a temperature rise (K). */
 export const thermalSchema = z
-  .object({
-    ambientC,
-    thermalResistanceKPerW: number("the thermal resistance")
-      .gt(0, "The thermal resistance must be more than 0 K/W.")
-      .max(1_000, "The thermal resistance must be at most 1,000 K/W.")
-      .nullish(),
-    temperatureRiseK: number("the temperature rise")
-      .min(0, "The temperature rise cannot be negative.")
-      .max(400, "The temperature rise must be at most 400 K.")
-      .nullish(),
-  })
+  .object(thermalFields)
   .superRefine((value, context) => {
     const hasResistance = value.thermalResistanceKPerW != null;
     const hasRise = value.temperatureRiseK != null;
@@ -216,7 +235,10 @@ export const thermalSchema = z
           ambientC: value.ambientC,
           thermalResistanceKPerW: value.thermalResistanceKPerW,
         }
-      : { ambientC: value.ambientC, temperatureRiseK: value.temperatureRiseK ?? 0 },
+      : {
+          ambientC: value.ambientC,
+          temperatureRiseK: value.temperatureRiseK ?? 0,
+        },
   );
 
 export const coilEstimateRequestSchema = z.object({
@@ -226,7 +248,9 @@ export const coilEstimateRequestSchema = z.object({
   ...coilNumberFields,
   ...coilFrequencyFields,
   harmonics: z
-    .array(harmonicSchema, { error: "The harmonics must be a list of { order, currentA }." })
+    .array(harmonicSchema, {
+      error: "The harmonics must be a list of { order, currentA }.",
+    })
     .max(50, "Give at most 50 harmonics.")
     .nullish(),
   thermal: thermalSchema.nullish(),

@@ -132,19 +132,88 @@ describe("POST /api/v1/coil-estimates: current density and AC resistance", () =>
     ["frequencyHz", { frequencyHz: 2e7 }],
     ["frequencyHz", { harmonics: [{ order: 3, currentA: 1 }], currentA: 10 }],
     ["currentA", { harmonics: [{ order: 3, currentA: 1 }], frequencyHz: 50 }],
-    ["harmonics.0.order", { harmonics: [{ order: 1, currentA: 1 }], frequencyHz: 50, currentA: 1 }],
-    ["harmonics.1.order", { harmonics: [{ order: 3, currentA: 1 }, { order: 3, currentA: 1 }], frequencyHz: 50, currentA: 1 }],
+    [
+      "harmonics.0.order",
+      { harmonics: [{ order: 1, currentA: 1 }], frequencyHz: 50, currentA: 1 },
+    ],
+    [
+      "harmonics.1.order",
+      {
+        harmonics: [
+          { order: 3, currentA: 1 },
+          { order: 3, currentA: 1 },
+        ],
+        frequencyHz: 50,
+        currentA: 1,
+      },
+    ],
     ["layersPerCoil", { layersPerCoil: 0, frequencyHz: 50 }],
-    ["thermal.thermalResistanceKPerW", { currentA: 10, thermal: { ambientC: 40, thermalResistanceKPerW: 2, temperatureRiseK: 50 } }],
-    ["thermal.thermalResistanceKPerW", { currentA: 10, thermal: { ambientC: 40, thermalResistanceKPerW: 20 } }],
-    ["thermal.ambientC", { currentA: 10, thermal: { ambientC: 900, temperatureRiseK: 5 } }],
+    [
+      "thermal.thermalResistanceKPerW",
+      {
+        currentA: 10,
+        thermal: {
+          ambientC: 40,
+          thermalResistanceKPerW: 2,
+          temperatureRiseK: 50,
+        },
+      },
+    ],
+    [
+      "thermal.thermalResistanceKPerW",
+      { currentA: 10, thermal: { ambientC: 40, thermalResistanceKPerW: 20 } },
+    ],
+    [
+      "thermal.ambientC",
+      { currentA: 10, thermal: { ambientC: 900, temperatureRiseK: 5 } },
+    ],
     ["currentA", { thermal: { ambientC: 40, temperatureRiseK: 50 } }],
-    ["wire.strands", { wire: { standard: "litz", strands: 1, strandWire: { standard: "IEC", diameterMm: 0.1 } } }],
-    ["wire.strandWire.diameterMm", { wire: { standard: "litz", strands: 10, strandWire: { standard: "IEC", diameterMm: 0.101 } } }],
-    ["wire.thicknessMm", { wire: { standard: "rectangular", thicknessMm: 0.5, widthMm: 3 } }],
-    ["wire.widthMm", { wire: { standard: "rectangular", thicknessMm: 1, widthMm: 12 } }],
-    ["wire.cornerRadiusMm", { wire: { standard: "rectangular", thicknessMm: 2, widthMm: 8, cornerRadiusMm: 1.5 } }],
-    ["insulation", { wire: { standard: "rectangular", thicknessMm: 2, widthMm: 8 }, insulation: "grade3" }],
+    [
+      "wire.strands",
+      {
+        wire: {
+          standard: "litz",
+          strands: 1,
+          strandWire: { standard: "IEC", diameterMm: 0.1 },
+        },
+      },
+    ],
+    [
+      "wire.strandWire.diameterMm",
+      {
+        wire: {
+          standard: "litz",
+          strands: 10,
+          strandWire: { standard: "IEC", diameterMm: 0.101 },
+        },
+      },
+    ],
+    [
+      "wire.thicknessMm",
+      { wire: { standard: "rectangular", thicknessMm: 0.5, widthMm: 3 } },
+    ],
+    [
+      "wire.widthMm",
+      { wire: { standard: "rectangular", thicknessMm: 1, widthMm: 12 } },
+    ],
+    [
+      "wire.cornerRadiusMm",
+      {
+        wire: {
+          standard: "rectangular",
+          thicknessMm: 2,
+          widthMm: 8,
+          cornerRadiusMm: 1.5,
+        },
+      },
+    ],
+    [
+      "insulation",
+      {
+        wire: { standard: "rectangular", thicknessMm: 2, widthMm: 8 },
+        insulation: "grade3",
+      },
+    ],
   ])("refuses a bad %s with 400 naming the field", async (field, change) => {
     const response = await post({ ...workedCoil, ...change });
     expect(response.status).toBe(400);
