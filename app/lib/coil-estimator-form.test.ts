@@ -109,3 +109,20 @@ describe("the coil estimator's form", () => {
     expect(formFieldOfApiField("layersPerCoil")).toBe("layersPerCoil");
   });
 });
+
+describe("flat wire without the round sizes on the form", () => {
+  it("parses when the size standard and diameter are absent (they are not shown)", () => {
+    const formData = new FormData();
+    for (const [name, value] of Object.entries(coilEstimatorDefaults)) {
+      if (name !== "standard" && name !== "iecDiameterMm" && name !== "awgSize")
+        formData.set(name, value);
+    }
+    formData.set("wireForm", "rectangular");
+    formData.set("flatThicknessMm", "2");
+    formData.set("flatWidthMm", "8");
+    const submission = parseWithZod(formData, {
+      schema: coilEstimatorFormSchema,
+    });
+    expect(submission.status).toBe("success");
+  });
+});

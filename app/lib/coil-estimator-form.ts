@@ -22,7 +22,10 @@ export const coilEstimatorFormSchema = z
   .object({
     conductor: conductorSchema,
     wireForm: z.enum(wireForms, { error: "Choose round, litz or flat wire." }),
-    standard: z.enum(["AWG", "IEC"], { error: "Choose AWG or IEC." }),
+    // Not on the form for flat wire, which has its own sizes.
+    standard: z
+      .enum(["AWG", "IEC"], { error: "Choose AWG or IEC." })
+      .default("IEC"),
     awgSize: z.string().optional(),
     iecDiameterMm: iecDiameterField.optional(),
     insulation: insulationSchema.optional(),

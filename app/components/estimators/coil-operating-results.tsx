@@ -10,8 +10,12 @@ const ohms = (value: number) => formatQuantity(value, "Ω", value < 1 ? 5 : 3);
 const watts = (value: number) => formatQuantity(value, "W", 2);
 const hertz = (value: number) =>
   value >= 1000
-    ? formatQuantity(value / 1000, "kHz", 3)
-    : formatQuantity(value, "Hz", 0);
+    ? formatQuantity(
+        value / 1000,
+        "kHz",
+        Number.isInteger(value / 1000) ? 0 : 3,
+      )
+    : formatQuantity(value, "Hz", Number.isInteger(value) ? 0 : 2);
 
 const coolingWords: Record<CoolingPractice, string> = {
   natural: "within natural cooling",
@@ -123,7 +127,7 @@ export function CoilOperatingResults({
           }
         />
         <Figure
-          label="R_ac / R_dc"
+          label="AC / DC resistance"
           value={
             perCoil.acResistanceRatio === null
               ? "—"
@@ -184,19 +188,29 @@ export function CoilOperatingResults({
               </tr>
             ))}
             <tr>
-              <th scope="row">AC copper loss at {temperatureC} °C</th>
-              <td />
-              <td className="text-right">
-                all {coilCount}: {watts(acLoss.totalLossW)}
-              </td>
+              <th scope="row" colSpan={3}>
+                AC copper loss per coil at {temperatureC} °C
+              </th>
               <td className="text-right font-semibold">
                 {watts(acLoss.lossPerCoilW)}
+              </td>
+            </tr>
+            <tr>
+              <th scope="row" colSpan={3}>
+                AC copper loss of all {coilCount}{" "}
+                {coilCount === 1 ? "coil" : "coils"}
+              </th>
+              <td className="text-right font-semibold">
+                {watts(acLoss.totalLossW)}
               </td>
             </tr>
           </tbody>
         </table>
       ) : null}
 
+      {operatingPoint ? (
+        <h3 className="font-semibold">At the operating temperature</h3>
+      ) : null}
       {operatingPoint ? (
         <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-4">
           <Figure
