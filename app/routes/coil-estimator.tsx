@@ -95,9 +95,9 @@ export default function CoilEstimator({ loaderData }: Route.ComponentProps) {
           <h1 className="text-2xl font-semibold">Coil estimator</h1>
           <p className="mt-1 max-w-3xl text-graphite-500">
             Copper length, mass, resistance and loss of a coil from its
-            geometry, with current density, AC resistance at a frequency and
-            the operating temperature. Only the active sides lie in the field
-            and make torque; the end turns add length, resistance and cost.
+            geometry, with current density, AC resistance at a frequency and the
+            operating temperature. Only the active sides lie in the field and
+            make torque; the end turns add length, resistance and cost.
           </p>
         </div>
         <button
