@@ -23,6 +23,9 @@ import {
   type SlotFillWarningCode,
 } from "~/engineering/slot-fill";
 import { circleAreaMm2 } from "~/engineering/wire-geometry";
+import { currentDensityPractice } from "~/engineering/current-density";
+
+export { currentDensityPractice };
 import {
   designWireBareDiameterMm,
   type CoilLine,
@@ -49,16 +52,6 @@ export const designCheckNames: Record<DesignWarningCode, string> = {
   "current-density-above-natural-cooling": "Current density",
   "current-density-above-fan-cooling": "Current density",
 };
-
-/**
- * Current density a coil's cooling usually carries, A/mm². COMMON PRACTICE, FROM
- * MEMORY (no published source checked): about 5–6 enclosed with natural cooling, about
- * 10 fan-cooled; beyond that only with liquid cooling or for short duty.
- */
-export const currentDensityPractice = {
-  naturalCoolingAPerMm2: 6,
-  fanCooledAPerMm2: 10,
-} as const;
 
 export interface DesignWarning {
   code: DesignWarningCode;

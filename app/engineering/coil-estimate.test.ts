@@ -183,7 +183,15 @@ function seededRandom(seed: number): () => number {
 
 /** A random coil with every optional field filled in. */
 type RandomCoil = Required<
-  Omit<CoilEstimateInput, "insulation" | "currentA">
+  Omit<
+    CoilEstimateInput,
+    | "insulation"
+    | "currentA"
+    | "frequencyHz"
+    | "harmonics"
+    | "layersPerCoil"
+    | "thermal"
+  >
 > & { currentA: number };
 
 function randomCoils(count: number, seed: number): RandomCoil[] {
@@ -343,8 +351,8 @@ describe("properties over 300 random coils (seeded)", () => {
         1e-9,
       );
       for (const key of Object.keys(
-        result.perCoil,
-      ) as (keyof typeof result.perCoil)[]) {
+        result.total,
+      ) as (keyof typeof result.total)[]) {
         relativeClose(result.total[key], result.perCoil[key] * coil.coilCount);
       }
       relativeClose(

@@ -8,26 +8,39 @@
  * - resistance between the leads, strands in parallel:
  *   R = ρ(T) · (N · MLT + 2 · l_lead) / (strands · A), ρ(T) = ρ20 · (1 + α20 · (T − 20))
  * - scrap adds to what is drawn from stock, not to resistance.
+ * - litz wire: copper length and mass × the take-up factor, resistance too (./litz-wire);
+ *   flat wire: area by IEC 60317-0-2 (./rectangular-wire).
+ * - current density, AC resistance (Dowell), harmonics and the operating temperature:
+ *   ./coil-operating-figures.
  *
  * The input is assumed validated (types, ranges, integers) by the API's schema; wire
  * and insulation lookups that fail still throw {@link EngineeringInputError}.
  * All outputs are plain numbers in the named units, unrounded.
  */
 
-import type { ConductorKey, InsulationKey } from "./reference-data";
 import {
-  bareDiameterMm,
-  circleAreaMm2,
-  linearMassKgPerM,
-  overallDiameter,
-  resistancePerMetreOhm,
-  type WireSpec,
-} from "./wire-geometry";
+  coilConductor,
+  type CoilWireSpec,
+  type ConductorKind,
+} from "./coil-conductor";
+import {
+  coilOperatingFigures,
+  type CoilAcLoss,
+  type CoilOperatingPerCoil,
+  type CoilOperatingPoint,
+} from "./coil-operating-figures";
+import type { LitzWire } from "./litz-wire";
+import type { RectangularWire } from "./rectangular-wire";
+import type { ConductorKey, InsulationKey } from "./reference-data";
+import type { HarmonicCurrent } from "./skin-effect";
+import type { ThermalInput } from "./winding-temperature";
+import { linearMassKgPerM, resistancePerMetreOhm } from "./wire-geometry";
 
 export interface CoilEstimateInput {
   conductor: ConductorKey;
-  wire: WireSpec;
-  /** IEC grade for IEC wire, film build for AWG wire; omitted → overall diameter null. */
+  /** Round (AWG, IEC), litz or rectangular wire. */
+  wire: CoilWireSpec;
+  /** IEC grade for IEC wire, film build for AWG wire (litz: the strands'); omitted → overall diameter null. */
   insulation?: InsulationKey | null;
   /** Turns per coil, integer ≥ 1. */
   turns: number;
@@ -47,6 +60,14 @@ export interface CoilEstimateInput {
   scrapPercent?: number;
   /** Terminal current through each coil, A, ≥ 0; omitted → copperLossW null. */
   currentA?: number | null;
+  /** Fundamental frequency of the current, Hz; omitted → no AC figures. */
+  frequencyHz?: number | null;
+  /** Harmonics of the current (orders ≥ 2, RMS A), needs frequencyHz and currentA. */
+  harmonics?: readonly HarmonicCurrent[] | null;
+  /** Layers of conductors in each coil for the AC resistance; default 1 (flagged). */
+  layersPerCoil?: number | null;
+  /** Ambient and a thermal resistance or a temperature rise; needs currentA. */
+  thermal?: ThermalInput | null;
 }
 
 export interface CoilQuantities {
@@ -66,23 +87,37 @@ export interface CoilQuantities {
   forceLengthM: number;
 }
 
+/** perCoil: the quantities plus current density and the AC figures at the fundamental. */
+export type PerCoilQuantities = CoilQuantities & CoilOperatingPerCoil;
+
 export interface CoilEstimate {
-  /** One strand. overallDiameterMm is null when unknown; overallDiameterIsEstimate flags a fitted estimate. */
+  /**
+   * One strand in hand. overallDiameterMm is null when unknown; overallDiameterIsEstimate
+   * flags a fitted estimate. Litz: bareDiameterMm is the equal-copper round diameter and
+   * overallDiameterMm the estimated bundle; flat wire: the equal-copper diameter and null.
+   */
   wire: {
     bareDiameterMm: number;
     overallDiameterMm: number | null;
     overallDiameterIsEstimate: boolean;
     areaMm2: number;
+    kind: ConductorKind;
+    litz: LitzWire | null;
+    rectangular: (RectangularWire & { edgewise: boolean }) | null;
   };
   /** Mean length of turn 2·active + 2·end turn, mm. */
   meanTurnLengthMm: number;
   /** Share of each turn that lies in the field: active ÷ (active + end turn), 0–1. */
   activeShare: number;
-  perCoil: CoilQuantities;
-  /** perCoil × coilCount, field by field. */
+  perCoil: PerCoilQuantities;
+  /** perCoil × coilCount, field by field (the DC quantities only). */
   total: CoilQuantities;
   /** coilCount × I² × perCoil.resistanceOhm, W; null when no current is given. */
   copperLossW: number | null;
+  /** Loss at the fundamental and harmonics at temperatureC; null without frequency and current. */
+  acLoss: CoilAcLoss | null;
+  /** Temperature and loss found together from the thermal input; null without one. */
+  operatingPoint: CoilOperatingPoint | null;
 }
 
 /** Mean length of turn, mm: 2 · active length + 2 · end-turn length (per end). */
@@ -126,23 +161,28 @@ export function estimateCoil(input: CoilEstimateInput): CoilEstimate {
   const temperatureC = input.temperatureC ?? 20;
   const scrapPercent = input.scrapPercent ?? 0;
 
-  const bare = bareDiameterMm(input.wire);
-  const areaMm2 = circleAreaMm2(bare);
-  const overall = overallDiameter(input.wire, input.insulation);
+  const conductor = coilConductor(input.wire, input.insulation);
+  const areaMm2 = conductor.areaMm2;
 
   const mltMm = meanTurnLengthMm(input.activeLengthMm, input.endTurnLengthMm);
-  // Length of one strand from lead end to lead end, m.
+  // Length of one strand from lead end to lead end, m (litz: of the bundle).
   const strandLengthM = (input.turns * mltMm + 2 * leadLengthMm) / 1000;
+  // Copper per metre of conductor: litz strands are longer than the bundle by the take-up.
+  const copperLengthFactor = conductor.lengthFactor;
   const conductorLengthM = strands * strandLengthM;
   const purchasedLengthM = conductorLengthM * (1 + scrapPercent / 100);
-  const massPerMetreKg = linearMassKgPerM(input.conductor, areaMm2);
+  const massPerMetreKg =
+    linearMassKgPerM(input.conductor, areaMm2) * copperLengthFactor;
 
   // Strands in parallel: one strand's length over the section of all strands.
   const parallelAreaMm2 = strands * areaMm2;
   const resistance20Ohm =
-    strandLengthM * resistancePerMetreOhm(input.conductor, parallelAreaMm2, 20);
+    strandLengthM *
+    copperLengthFactor *
+    resistancePerMetreOhm(input.conductor, parallelAreaMm2, 20);
   const resistanceOhm =
     strandLengthM *
+    copperLengthFactor *
     resistancePerMetreOhm(input.conductor, parallelAreaMm2, temperatureC);
 
   // Per the contract: 2 × turns × active length, NOT multiplied by strands. That is
@@ -152,7 +192,7 @@ export function estimateCoil(input: CoilEstimateInput): CoilEstimate {
   // current used is the current per strand.
   const forceLengthM = (2 * input.turns * input.activeLengthMm) / 1000;
 
-  const perCoil: CoilQuantities = {
+  const quantities: CoilQuantities = {
     conductorLengthM,
     purchasedLengthM,
     woundMassKg: conductorLengthM * massPerMetreKg,
@@ -162,22 +202,42 @@ export function estimateCoil(input: CoilEstimateInput): CoilEstimate {
     forceLengthM,
   };
 
+  const operating = coilOperatingFigures({
+    conductor: input.conductor,
+    coilConductor: conductor,
+    strandsInHand: strands,
+    coilCount,
+    resistance20Ohm,
+    temperatureC,
+    currentA: input.currentA,
+    frequencyHz: input.frequencyHz,
+    harmonics: input.harmonics,
+    layersPerCoil: input.layersPerCoil,
+    thermal: input.thermal,
+  });
+  const perCoil: PerCoilQuantities = { ...quantities, ...operating.perCoil };
+
   const currentA = input.currentA;
   return {
     wire: {
-      bareDiameterMm: bare,
-      overallDiameterMm: overall.overallDiameterMm,
-      overallDiameterIsEstimate: overall.overallDiameterIsEstimate,
+      bareDiameterMm: conductor.bareDiameterMm,
+      overallDiameterMm: conductor.overallDiameterMm,
+      overallDiameterIsEstimate: conductor.overallDiameterIsEstimate,
       areaMm2,
+      kind: conductor.kind,
+      litz: conductor.litz,
+      rectangular: conductor.rectangular,
     },
     meanTurnLengthMm: mltMm,
     activeShare: activeShare(input.activeLengthMm, input.endTurnLengthMm),
     perCoil,
-    total: scaleQuantities(perCoil, coilCount),
+    total: scaleQuantities(quantities, coilCount),
     copperLossW:
       currentA === undefined || currentA === null
         ? null
         : coilCount * currentA * currentA * perCoil.resistanceOhm,
+    acLoss: operating.acLoss,
+    operatingPoint: operating.operatingPoint,
   };
 }
 

@@ -81,6 +81,70 @@ export const wireSpecSchema = z.discriminatedUnion(
   },
 );
 
+/** Round magnet wire: a strand of litz wire. */
+const roundWireSpecSchema = z.discriminatedUnion(
+  "standard",
+  [awgWire, iecWire],
+  {
+    error:
+      'Give the strand: { standard: "AWG", size } or { standard: "IEC", diameterMm }.',
+  },
+);
+
+export const litzWireSchema = z.object({
+  standard: z.literal("litz"),
+  strands: wholeNumber("the strands", 2, 100_000),
+  strandWire: roundWireSpecSchema,
+  bunchingSteps: wholeNumber("the bunching steps", 1, 10).default(1),
+  takeUpFactor: number("the take-up factor")
+    .min(1, "The take-up factor must be at least 1.")
+    .max(1.2, "The take-up factor must be at most 1.2.")
+    .nullish(),
+  packingFactor: number("the packing factor")
+    .min(0.3, "The packing factor must be at least 0.3.")
+    .max(
+      0.9069,
+      "The packing factor must be at most 0.9069 (hexagonal packing).",
+    )
+    .nullish(),
+});
+
+const flatDimension = (label: string) =>
+  number(label)
+    .gt(
+      0,
+      `${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm.`,
+    )
+    .max(
+      100,
+      `${label[0]!.toUpperCase()}${label.slice(1)} must be at most 100 mm.`,
+    );
+
+export const rectangularWireSchema = z.object({
+  standard: z.literal("rectangular"),
+  thicknessMm: flatDimension("the thickness"),
+  widthMm: flatDimension("the width"),
+  cornerRadiusMm: number("the corner radius")
+    .min(0, "The corner radius cannot be negative.")
+    .max(50, "The corner radius must be at most 50 mm.")
+    .nullish(),
+  edgewise: z
+    .boolean({ error: "Edgewise must be true or false." })
+    .default(false),
+});
+
+/** Any wire a coil estimate takes: round AWG or IEC, litz, or rectangular (flat). */
+export const coilWireSpecSchema = z.discriminatedUnion(
+  "standard",
+  [awgWire, iecWire, litzWireSchema, rectangularWireSchema],
+  {
+    error: (issue) =>
+      issue.input === undefined
+        ? 'Give the wire: { standard: "AWG", size }, { standard: "IEC", diameterMm }, { standard: "litz", strands, strandWire } or { standard: "rectangular", thicknessMm, widthMm }.'
+        : 'The wire standard must be "AWG", "IEC", "litz" or "rectangular".',
+  },
+);
+
 export const insulationKeys = [
   "grade1",
   "grade2",
@@ -117,11 +181,79 @@ export const coilNumberFields = {
     .nullish(),
 };
 
+/** The coil's operation at a frequency, shared by the API request and the estimator form. */
+export const coilFrequencyFields = {
+  frequencyHz: number("the frequency")
+    .gt(0, "The frequency must be more than 0 Hz.")
+    .max(10_000_000, "The frequency must be at most 10 MHz.")
+    .nullish(),
+  layersPerCoil: wholeNumber("the layers per coil", 1, 1_000).nullish(),
+};
+
+const harmonicSchema = z.object({
+  order: wholeNumber("the harmonic's order", 2, 1_000),
+  currentA: number("the harmonic's current")
+    .min(0, "A harmonic's current cannot be negative.")
+    .max(100_000, "A harmonic's current must be at most 100,000 A."),
+});
+
+const ambientC = number("the ambient temperature")
+  .min(-70, "The ambient temperature must be at least −70 °C.")
+  .max(300, "The ambient temperature must be at most 300 °C.");
+
+/** The thermal input's fields, shared by the API request and the estimator form. */
+export const thermalFields = {
+  ambientC,
+  thermalResistanceKPerW: number("the thermal resistance")
+    .gt(0, "The thermal resistance must be more than 0 K/W.")
+    .max(1_000, "The thermal resistance must be at most 1,000 K/W.")
+    .nullish(),
+  temperatureRiseK: number("the temperature rise")
+    .min(0, "The temperature rise cannot be negative.")
+    .max(400, "The temperature rise must be at most 400 K.")
+    .nullish(),
+};
+
+/** Ambient and either a thermal resistance (K/W, coil to ambient) or a temperature rise (K). */
+export const thermalSchema = z
+  .object(thermalFields)
+  .superRefine((value, context) => {
+    const hasResistance = value.thermalResistanceKPerW != null;
+    const hasRise = value.temperatureRiseK != null;
+    if (hasResistance === hasRise) {
+      context.addIssue({
+        code: "custom",
+        path: ["thermalResistanceKPerW"],
+        message:
+          "Give either the thermal resistance or the temperature rise, not both.",
+      });
+    }
+  })
+  .transform((value) =>
+    value.thermalResistanceKPerW != null
+      ? {
+          ambientC: value.ambientC,
+          thermalResistanceKPerW: value.thermalResistanceKPerW,
+        }
+      : {
+          ambientC: value.ambientC,
+          temperatureRiseK: value.temperatureRiseK ?? 0,
+        },
+  );
+
 export const coilEstimateRequestSchema = z.object({
   conductor: conductorSchema,
-  wire: wireSpecSchema,
+  wire: coilWireSpecSchema,
   insulation: insulationSchema.nullish(),
   ...coilNumberFields,
+  ...coilFrequencyFields,
+  harmonics: z
+    .array(harmonicSchema, {
+      error: "The harmonics must be a list of { order, currentA }.",
+    })
+    .max(50, "Give at most 50 harmonics.")
+    .nullish(),
+  thermal: thermalSchema.nullish(),
 });
 
 export type CoilEstimateRequest = z.infer<typeof coilEstimateRequestSchema>;

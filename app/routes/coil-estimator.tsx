@@ -5,6 +5,7 @@ import type { CoilEstimateRequest } from "~/lib/estimate-requests";
 import type { Route } from "./+types/coil-estimator";
 import { requireUser } from "~/auth/guard.server";
 import { CoilDrawing } from "~/components/estimators/coil-drawing";
+import { CoilFrequencyFields } from "~/components/estimators/coil-frequency-fields";
 import { CoilOperationFields } from "~/components/estimators/coil-operation-fields";
 import { CoilResultsPanel } from "~/components/estimators/coil-results-panel";
 import { CoilWindingFields } from "~/components/estimators/coil-winding-fields";
@@ -94,8 +95,9 @@ export default function CoilEstimator({ loaderData }: Route.ComponentProps) {
           <h1 className="text-2xl font-semibold">Coil estimator</h1>
           <p className="mt-1 max-w-3xl text-graphite-500">
             Copper length, mass, resistance and loss of a coil from its
-            geometry. Only the active sides lie in the field and make torque;
-            the end turns add length, resistance and cost.
+            geometry, with current density, AC resistance at a frequency and the
+            operating temperature. Only the active sides lie in the field and
+            make torque; the end turns add length, resistance and cost.
           </p>
         </div>
         <button
@@ -123,6 +125,10 @@ export default function CoilEstimator({ loaderData }: Route.ComponentProps) {
           />
           <CoilWindingFields fields={fields} apiFieldErrors={apiFieldErrors} />
           <CoilOperationFields
+            fields={fields}
+            apiFieldErrors={apiFieldErrors}
+          />
+          <CoilFrequencyFields
             fields={fields}
             apiFieldErrors={apiFieldErrors}
           />

@@ -1,5 +1,6 @@
 import { conductorSplit, type CoilEstimate } from "~/engineering/coil-estimate";
 import type { CoilEstimateRequest } from "~/lib/estimate-requests";
+import { CoilOperatingResults } from "./coil-operating-results";
 import { CoilResults } from "./coil-results";
 import { ConductorSplitBar } from "./conductor-split-bar";
 
@@ -23,6 +24,11 @@ export function CoilResultsPanel({
             coilCount={lastGood.input.coilCount}
             temperatureC={lastGood.input.temperatureC}
             pending={pending}
+          />
+          <CoilOperatingResults
+            estimate={lastGood.estimate}
+            coilCount={lastGood.input.coilCount}
+            temperatureC={lastGood.input.temperatureC}
           />
         </div>
       ) : (

@@ -16,7 +16,7 @@ function mass(kg: number, units: UnitSystem) {
     : formatQuantity(kgToPounds(kg), "lb", 4);
 }
 function smallLength(mm: number | null, units: UnitSystem) {
-  if (mm === null) return "not published";
+  if (mm === null) return "—";
   return units === "metric"
     ? formatQuantity(mm, "mm", 4)
     : formatQuantity(mmToInches(mm), "in", 5);
@@ -96,13 +96,21 @@ export function CoilResults({
       </div>
       <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-4">
         <div className="rounded-md border border-rule bg-white p-3">
-          <dt className="text-graphite-500">Bare diameter</dt>
+          <dt className="text-graphite-500">
+            {estimate.wire.kind === "round"
+              ? "Bare diameter"
+              : "Diameter of equal copper"}
+          </dt>
           <dd className="font-semibold">
             {smallLength(estimate.wire.bareDiameterMm, units)}
           </dd>
         </div>
         <div className="rounded-md border border-rule bg-white p-3">
-          <dt className="text-graphite-500">Overall diameter (max)</dt>
+          <dt className="text-graphite-500">
+            {estimate.wire.kind === "litz"
+              ? "Bundle diameter"
+              : "Overall diameter (max)"}
+          </dt>
           <dd className="font-semibold">
             {smallLength(estimate.wire.overallDiameterMm, units)}
             {estimate.wire.overallDiameterIsEstimate ? (
