@@ -22,7 +22,7 @@ import { companyCurrency } from "~/purchasing/suppliers.server";
 import { countText, quantityText } from "~/lib/unit-text";
 import { parseUnitCost, quantityToNumber } from "~/lib/decimal-amounts";
 import { coilLineFigures } from "./coil-line-figures";
-import { designWarnings } from "./design-checks";
+import { coilSlotFill, designWarnings } from "./design-checks";
 import {
   costDesign,
   designCostingJson,
@@ -215,6 +215,7 @@ export async function costRevision(input: {
             index,
             sku: line.wire.sku,
             figures: coilLineFigures(line, ratedCurrentA),
+            fill: coilSlotFill(line),
           },
         ]
       : [],
@@ -258,7 +259,7 @@ export async function costRevision(input: {
       missing:
         "Give the air-gap radius and flux density (and at least one coil line) for a first-order torque estimate.",
     },
-    coils: coils.map(({ index, sku, figures }) => ({
+    coils: coils.map(({ index, sku, figures, fill }) => ({
       line: index + 1,
       sku,
       copperLengthM: figures.copperLengthM,
@@ -270,6 +271,10 @@ export async function costRevision(input: {
       activeShare: figures.activeShare,
       copperLossW: figures.copperLossW,
       forceLengthM: figures.forceLengthM,
+      // Slot fill (null without a slot area): bare copper, and over the enamel with the liner
+      // taken off; the limits in `warnings` are judged on the gross fill.
+      copperFill: fill?.copperFill ?? null,
+      grossFill: fill?.grossFill ?? null,
     })),
     warnings: designWarnings({
       lines,

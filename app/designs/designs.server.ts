@@ -16,10 +16,11 @@ import {
   wireItems,
 } from "~/db/schema";
 import { DomainError } from "~/lib/domain-error";
-import type {
-  DesignLineInput,
-  NewDesign,
-  RevisionFields,
+import {
+  slotLinerTooLargeMessage,
+  type DesignLineInput,
+  type NewDesign,
+  type RevisionFields,
 } from "./design-schemas";
 
 type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
@@ -41,6 +42,8 @@ function revisionColumns(fields: Partial<RevisionFields>) {
     columns.insulationClassC = fields.insulationClassC;
   if ("slotAreaMm2" in fields)
     columns.slotAreaMm2 = decimalText(fields.slotAreaMm2, 2);
+  if ("slotLinerAreaMm2" in fields)
+    columns.slotLinerAreaMm2 = decimalText(fields.slotLinerAreaMm2, 2);
   if ("coilSidesPerSlot" in fields)
     columns.coilSidesPerSlot = fields.coilSidesPerSlot;
   if ("airGapRadiusMm" in fields)
@@ -237,6 +240,19 @@ function lineColumns(line: DesignLineInput) {
   }
 }
 
+/** 400 when the stored liner area (after a change of either field) is not below the slot area. */
+async function refuseLinerFillingSlot(tx: Transaction, revisionId: number) {
+  const [row] = await tx
+    .select({
+      slot: designRevisions.slotAreaMm2,
+      liner: designRevisions.slotLinerAreaMm2,
+    })
+    .from(designRevisions)
+    .where(eq(designRevisions.id, revisionId));
+  if (row?.slot && row.liner && Number(row.liner) >= Number(row.slot))
+    throw new DomainError(400, slotLinerTooLargeMessage, "slotLinerAreaMm2");
+}
+
 /**
  * Changes a draft revision: the given fields, and (when `lines` is given) its
  * whole list of lines. 409 for a released revision; nothing is written then.
@@ -282,6 +298,7 @@ export async function updateDraftRevision(
         draftSaves: sql`${designRevisions.draftSaves} + 1`,
       })
       .where(eq(designRevisions.id, draft.id));
+    await refuseLinerFillingSlot(tx, draft.id);
     if (lines) {
       const itemIds = await resolveLineItems(tx, lines);
       await tx.delete(designLines).where(eq(designLines.revisionId, draft.id));

@@ -28,10 +28,7 @@ import {
 import { loadDesignPage, storedLineInputs } from "~/designs/design-page.server";
 import { designParams } from "~/designs/design-params";
 import { findRevision } from "~/designs/design-revisions.server";
-import {
-  designLineSchema,
-  revisionFieldsSchema,
-} from "~/designs/design-schemas";
+import { designLineSchema, revisionFormSchema } from "~/designs/design-schemas";
 import {
   releaseRevision,
   startNewRevision,
@@ -136,7 +133,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   switch (intent) {
     case "fields": {
       const submission = parseWithZod(formData, {
-        schema: revisionFieldsSchema,
+        schema: revisionFormSchema,
       });
       if (submission.status !== "success")
         return answer({ intent, ok: false, result: submission.reply() }, 400);
@@ -151,6 +148,7 @@ export async function action({ request, params }: Route.ActionArgs) {
           torqueBasis: fields.torqueBasis,
           insulationClassC: fields.insulationClassC,
           slotAreaMm2: fields.slotAreaMm2,
+          slotLinerAreaMm2: fields.slotLinerAreaMm2,
           coilSidesPerSlot: fields.coilSidesPerSlot,
           airGapRadiusMm: fields.airGapRadiusMm,
           airGapFluxDensityT: fields.airGapFluxDensityT,

@@ -6,7 +6,7 @@ import type { DesignPageData } from "~/designs/design-page.server";
 import { thermalClassName } from "~/designs/design-checks";
 import {
   insulationClasses,
-  revisionFieldsSchema,
+  revisionFormSchema,
 } from "~/designs/design-schemas";
 import {
   DEFAULT_POLE_COVERAGE,
@@ -44,17 +44,18 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
       torqueBasis: revision.torqueBasis,
       insulationClassC: String(revision.insulationClassC),
       slotAreaMm2: text(revision.slotAreaMm2),
+      slotLinerAreaMm2: text(revision.slotLinerAreaMm2),
       coilSidesPerSlot: String(revision.coilSidesPerSlot),
       airGapRadiusMm: text(revision.airGapRadiusMm),
       airGapFluxDensityT: text(revision.airGapFluxDensityT),
       poleCoverage: text(revision.poleCoverage),
       notes: revision.notes,
     },
-    constraint: getZodConstraint(revisionFieldsSchema),
+    constraint: getZodConstraint(revisionFormSchema),
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: revisionFieldsSchema }),
+      parseWithZod(formData, { schema: revisionFormSchema }),
     onSubmit: () => setChangedSinceSave(false),
   });
   const busy = fetcher.state !== "idle";
@@ -113,7 +114,13 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
             field={number.slotAreaMm2}
             label="Slot area"
             unit="mm²"
-            hint="Inside the liner; gives each coil's fill factor"
+            hint="The whole slot; gives each coil's copper and gross fill"
+          />
+          <QuantityField
+            field={number.slotLinerAreaMm2}
+            label="Slot liner and separator area"
+            unit="mm²"
+            hint="Taken from the slot area for the gross fill; empty for none"
           />
           <SelectField
             field={fields.coilSidesPerSlot}
@@ -197,6 +204,9 @@ export function DesignFieldsSummary({ revision }: { revision: Revision }) {
         </Term>
         <Term label="Slot area">
           {optional(revision.slotAreaMm2, "mm²", 1)}
+        </Term>
+        <Term label="Slot liner and separator">
+          {optional(revision.slotLinerAreaMm2, "mm²", 1)}
         </Term>
         <Term label="Coil sides per slot">
           {revision.coilSidesPerSlot === 1
