@@ -80,6 +80,7 @@ export default [
     route("outbox", "routes/api.v1.outbox.ts"),
     route("coil-estimates", "routes/api.v1.coil-estimates.ts"),
     route("magnet-estimates", "routes/api.v1.magnet-estimates.ts"),
+    route("slot-fills", "routes/api.v1.slot-fills.ts"),
     route("wire-sizes", "routes/api.v1.wire-sizes.ts"),
     route("magnet-grades", "routes/api.v1.magnet-grades.ts"),
     route("items", "routes/api.v1.items.ts"),
