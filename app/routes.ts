@@ -108,6 +108,10 @@ export default [
       "designs/:designId/revisions/:revision/costing",
       "routes/api.v1.design-costing.ts",
     ),
+    route(
+      "designs/:designId/revisions/:revision/lines/:line/substitutes",
+      "routes/api.v1.design-line-substitutes.ts",
+    ),
     route("alerts", "routes/api.v1.alerts.ts"),
     route("insight/designs", "routes/api.v1.insight-designs.ts"),
     route("insight/stock-value", "routes/api.v1.insight-stock-value.ts"),

@@ -23,7 +23,7 @@ import {
   type RevisionFields,
 } from "./design-schemas";
 
-type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
+export type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
 
 const decimalText = (value: number | undefined | null, decimals: number) =>
   value === undefined || value === null ? null : value.toFixed(decimals);
@@ -340,6 +340,45 @@ export async function releaseRevision(
   });
 }
 
+type LineRow = typeof designLines.$inferSelect;
+
+/**
+ * Inserts revision `next` of the source's design as a draft copy of `source`: its fields and
+ * its lines, each line through `changeLine` (unchanged by default). Returns the new row's id.
+ */
+export async function copyRevisionAsDraft(
+  tx: Transaction,
+  source: typeof designRevisions.$inferSelect,
+  next: number,
+  changeLine: (line: LineRow) => LineRow = (line) => line,
+): Promise<number> {
+  const [created] = await tx
+    .insert(designRevisions)
+    .values({
+      ...source,
+      id: undefined,
+      releasedAt: null,
+      releasedBy: null,
+      draftSaves: 0,
+      createdAt: new Date(),
+      revision: next,
+      status: "draft",
+    })
+    .$returningId();
+  const lines = await tx
+    .select()
+    .from(designLines)
+    .where(eq(designLines.revisionId, source.id));
+  if (lines.length > 0)
+    await tx.insert(designLines).values(
+      lines.map(changeLine).map(({ id: _id, ...line }) => ({
+        ...line,
+        revisionId: created!.id,
+      })),
+    );
+  return created!.id;
+}
+
 /** Starts the next revision as a draft copy of the latest one; 409 while a draft exists. */
 export async function startNewRevision(
   designId: number,
@@ -366,30 +405,7 @@ export async function startNewRevision(
         `Revision ${latest.revision} is still a draft: change it, or release it before starting another.`,
       );
     const next = latest.revision + 1;
-    const [created] = await tx
-      .insert(designRevisions)
-      .values({
-        ...latest,
-        id: undefined,
-        releasedAt: null,
-        releasedBy: null,
-        draftSaves: 0,
-        createdAt: new Date(),
-        revision: next,
-        status: "draft",
-      })
-      .$returningId();
-    const lines = await tx
-      .select()
-      .from(designLines)
-      .where(eq(designLines.revisionId, latest.id));
-    if (lines.length > 0)
-      await tx.insert(designLines).values(
-        lines.map(({ id: _id, ...line }) => ({
-          ...line,
-          revisionId: created!.id,
-        })),
-      );
+    await copyRevisionAsDraft(tx, latest, next);
     return { revision: next };
   });
 }
