@@ -63,3 +63,23 @@ export const substituteFormSchema = substituteChoiceSchema.extend({
   ),
   tolerance: tolerancePercentField,
 });
+
+/** The design page's `?tolerance=`: the value to use, what was typed, and its message when it could not be used. */
+export interface SubstituteQuery {
+  tolerancePercent: number;
+  typed: string;
+  error?: string;
+}
+
+/** Reads the page's `?tolerance=`; a bad value falls back to the default, with its message. */
+export function readSubstituteQuery(search: URLSearchParams): SubstituteQuery {
+  const typed = search.get("tolerance") ?? "";
+  const parsed = tolerancePercentField.safeParse(typed);
+  return parsed.success
+    ? { tolerancePercent: parsed.data, typed }
+    : {
+        tolerancePercent: DEFAULT_AREA_TOLERANCE * 100,
+        typed,
+        error: parsed.error.issues[0]?.message,
+      };
+}

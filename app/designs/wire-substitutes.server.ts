@@ -175,7 +175,13 @@ export async function applyWireSubstitute(
   ref: LineRef,
   choice: { sku: string; strands: number },
   tolerance = DEFAULT_AREA_TOLERANCE,
-): Promise<{ status: 200 | 201; revision: number; revisionId: number }> {
+): Promise<{
+  status: 200 | 201;
+  revision: number;
+  revisionId: number;
+  /** The changed line's id (in the new revision when one was made). */
+  lineId: number;
+}> {
   const { found, line } = await findCoilLine(ref);
   const substitutes = await substitutesOf(found, line, tolerance);
   const chosen = substitutes.find(
@@ -238,6 +244,7 @@ export async function applyWireSubstitute(
         status: 200,
         revision: revision.revision,
         revisionId: revision.id,
+        lineId: line.id,
       };
     }
 
@@ -269,7 +276,16 @@ export async function applyWireSubstitute(
     const revisionId = await copyRevisionAsDraft(tx, revision, next, (row) =>
       row.id === line.id ? { ...row, ...change } : row,
     );
-    return { status: 201, revision: next, revisionId };
+    const [copied] = await tx
+      .select({ id: designLines.id })
+      .from(designLines)
+      .where(
+        and(
+          eq(designLines.revisionId, revisionId),
+          eq(designLines.position, line.position),
+        ),
+      );
+    return { status: 201, revision: next, revisionId, lineId: copied!.id };
   });
 }
 

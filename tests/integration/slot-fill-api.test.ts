@@ -36,8 +36,11 @@ describe("POST /api/v1/slot-fills", () => {
   });
 
   it("takes the liner off and assumes grade 2 for IEC wire without an insulation", async () => {
-    const { insulation: _none, ...withoutInsulation } = issueCase;
-    const response = await post({ ...withoutInsulation, linerAreaMm2: 6 });
+    const response = await post({
+      ...issueCase,
+      insulation: undefined,
+      linerAreaMm2: 6,
+    });
     const body = await response.json();
     // units -t '1336 * pi/4 * (0.239 mm)^2 / (60 mm^2 - 6 mm^2)' → 1.1099371
     expect(body.grossFill).toBeCloseTo(1.1099371, 6);

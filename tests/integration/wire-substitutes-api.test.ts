@@ -7,12 +7,12 @@ import { count, eq, inArray } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { designLines, designRevisions } from "~/db/schema";
 import { get, sendJson, signInAs } from "../support/app-client";
-import {
-  createPartItem,
-  itemIdOf,
-  receive,
-} from "../support/build-order-fixtures";
+import { createPartItem } from "../support/build-order-fixtures";
 import { createDesign } from "../support/design-fixtures";
+import {
+  createIecWireItem,
+  receiveSpool,
+} from "../support/substitute-fixtures";
 import {
   closeTestDatabase,
   createLocation,
@@ -24,29 +24,6 @@ let buyer = "";
 let builder = "";
 let storekeeper = "";
 let rack = "";
-
-/** An IEC copper wire item, grade 2, class 180, made through the items API. */
-async function wireItem(diameter: string, conductor = "copper") {
-  const sku = uniqueCode(`W${diameter.replace(".", "")}`);
-  const response = await sendJson(
-    "POST",
-    "/api/v1/items",
-    {
-      kind: "wire",
-      sku,
-      name: `Enamelled ${conductor} ${diameter} mm grade 2`,
-      conductor,
-      standard: "IEC",
-      size: diameter,
-      insulation: "grade2",
-      thermalClass: 180,
-      enamel: "polyesterimide",
-    },
-    buyer,
-  );
-  expect(response.status, await response.clone().text()).toBe(201);
-  return { sku, id: await itemIdOf(sku) };
-}
 
 let original: { sku: string; id: number };
 let twoOf071: { sku: string; id: number };
@@ -93,31 +70,13 @@ beforeAll(async () => {
   builder = await signInAs("builder");
   storekeeper = await signInAs("storekeeper");
   rack = await createLocation(uniqueCode("SUB"));
-  original = await wireItem("1.0");
-  twoOf071 = await wireItem("0.71");
-  notInStock = await wireItem("0.5");
-  aluminium = await wireItem("0.71", "aluminium");
-  await receive(storekeeper, {
-    sku: original.sku,
-    lot: uniqueCode("SP"),
-    location: rack,
-    quantity: 5,
-    unitCost: 12,
-  });
-  await receive(storekeeper, {
-    sku: twoOf071.sku,
-    lot: uniqueCode("SP"),
-    location: rack,
-    quantity: 3,
-    unitCost: 13.5,
-  });
-  await receive(storekeeper, {
-    sku: aluminium.sku,
-    lot: uniqueCode("SP"),
-    location: rack,
-    quantity: 3,
-    unitCost: 4,
-  });
+  original = await createIecWireItem(buyer, "1.0");
+  twoOf071 = await createIecWireItem(buyer, "0.71");
+  notInStock = await createIecWireItem(buyer, "0.5");
+  aluminium = await createIecWireItem(buyer, "0.71", "aluminium");
+  await receiveSpool(storekeeper, rack, original.sku, 5, 12);
+  await receiveSpool(storekeeper, rack, twoOf071.sku, 3, 13.5);
+  await receiveSpool(storekeeper, rack, aluminium.sku, 3, 4);
   const part = await createPartItem(buyer);
   // The brief's worked check 4 coil (40 turns, active 50 mm, end turn 30 mm) in 1.00 mm copper.
   design = await createDesign([
