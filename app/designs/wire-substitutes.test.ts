@@ -120,6 +120,24 @@ describe("substitutes from stock for a coil line (issue 19)", () => {
     expect(unslotted[0]!.grossFill).toBeNull();
   });
 
+  it("leaves out, in a slot, a wire whose overall diameter is unknown", () => {
+    // AWG 30 (bare 0.2546 mm, ASTM B258): 15 strands are −2.74 % of 1.00 mm (by hand:
+    // 15 × 0.2546² = 0.9723); no NEMA row or estimate for its build, so no gross fill.
+    const awg30: StockedWire = {
+      ...stocked(8, 0.25),
+      sku: "CU-AWG30",
+      size: { standard: "AWG", size: "30" },
+      insulation: "heavy",
+    };
+    const slotted = { ...line, slot: { areaMm2: 200, coilSidesPerSlot: 2 } };
+    expect(proposeWireSubstitutes(query([awg30], { line: slotted }))).toEqual(
+      [],
+    );
+    const [free] = proposeWireSubstitutes(query([awg30]));
+    expect(free?.strands).toBe(15);
+    expect(free?.areaChangePercent).toBeCloseTo(-2.74, 1);
+  });
+
   it("refuses a tolerance outside 0–25 %, naming it", () => {
     for (const tolerance of [-0.01, 0.5, Number.NaN]) {
       expect(() => proposeWireSubstitutes(query([], { tolerance }))).toThrow(

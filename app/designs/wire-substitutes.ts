@@ -12,7 +12,9 @@
  *   IEC 60317-0-1 bare diameters). Every n with the change within the tolerance is offered.
  * - Fit (only when the revision has a slot area): the substituted winding must fit
  *   (gross fill ≤ π/√12) and pass no more serious fill limit than the line does today
- *   (0.45 random-wound practice, π/4, π/√12; slot-fill module).
+ *   (0.45 random-wound practice, π/4, π/√12; slot-fill module). When the line's own fill is
+ *   judged over the enamel, a candidate whose overall diameter is unknown is left out: its
+ *   fit cannot be judged on gross fill.
  * - Changes per motor come from the design's own calculations: resistance and copper loss
  *   from coil-line-figures (R(T) with strands in parallel), mass drawn from stock likewise,
  *   cost from the design costing (costDesign) at each item's moving average cost of stock.
@@ -182,7 +184,12 @@ export function proposeWireSubstitutes(
         strandsInHand: strands,
       };
       const fill = coilSlotFill(substituted);
-      if (fill && (!fill.fits || fillRank(fill) > fillRank(fillBefore)))
+      if (
+        fill &&
+        (!fill.fits ||
+          fillRank(fill) > fillRank(fillBefore) ||
+          (fill.grossFill === null && fillBefore?.grossFill !== null))
+      )
         continue;
       const after = coilLineFigures(substituted, query.ratedCurrentA);
       const costAfter = lineCost(substituted, candidate.unitCost);
