@@ -138,11 +138,22 @@ describe("substitutes from stock for a coil line (issue 19)", () => {
     expect(free?.areaChangePercent).toBeCloseTo(-2.74, 1);
   });
 
-  it("refuses a tolerance outside 0–25 %, naming it", () => {
-    for (const tolerance of [-0.01, 0.5, Number.NaN]) {
-      expect(() => proposeWireSubstitutes(query([], { tolerance }))).toThrow(
-        EngineeringInputError,
-      );
-    }
+  it("refuses a tolerance outside 0–25 %, a NaN class or a negative current, naming each", () => {
+    const fieldOf = (more: Partial<WireSubstituteQuery>) => {
+      try {
+        proposeWireSubstitutes(query([], more));
+      } catch (error) {
+        expect(error).toBeInstanceOf(EngineeringInputError);
+        return (error as EngineeringInputError).field;
+      }
+      return null;
+    };
+    for (const tolerance of [-0.01, 0.5, Number.NaN])
+      expect(fieldOf({ tolerance })).toBe("tolerance");
+    expect(fieldOf({ insulationClassC: Number.NaN })).toBe("insulationClassC");
+    expect(fieldOf({ ratedCurrentA: -1 })).toBe("ratedCurrentA");
+    expect(fieldOf({ line: { ...line, strandsInHand: 0 } })).toBe(
+      "strandsInHand",
+    );
   });
 });

@@ -21,8 +21,11 @@
  * - Sorted by the size of the area change, then fewer strands, then SKU.
  */
 
-import { EngineeringInputError } from "~/engineering/errors";
-import { isEngineeringInputError } from "~/engineering/errors";
+import {
+  EngineeringInputError,
+  isEngineeringInputError,
+  requireNonNegative,
+} from "~/engineering/errors";
 import type { SlotFill } from "~/engineering/slot-fill";
 import { circleAreaMm2 } from "~/engineering/wire-geometry";
 import { formatExactDecimal, type MoneyAmount } from "~/pricing/money";
@@ -152,6 +155,13 @@ export function proposeWireSubstitutes(
 ): WireSubstitute[] {
   const tolerance = query.tolerance ?? DEFAULT_AREA_TOLERANCE;
   assertAreaTolerance(tolerance);
+  if (!Number.isFinite(query.insulationClassC))
+    throw new EngineeringInputError(
+      "insulationClassC",
+      "The insulation class must be a number of °C.",
+    );
+  if (query.ratedCurrentA !== null)
+    requireNonNegative(query.ratedCurrentA, "ratedCurrentA", "Rated current");
   const { line } = query;
   const target =
     line.strandsInHand * circleAreaMm2(designWireBareDiameterMm(line.wire));
