@@ -81,6 +81,7 @@ export default [
     route("coil-estimates", "routes/api.v1.coil-estimates.ts"),
     route("magnet-estimates", "routes/api.v1.magnet-estimates.ts"),
     route("winding-factors", "routes/api.v1.winding-factors.ts"),
+    route("slot-fills", "routes/api.v1.slot-fills.ts"),
     route("wire-sizes", "routes/api.v1.wire-sizes.ts"),
     route("magnet-grades", "routes/api.v1.magnet-grades.ts"),
     route("items", "routes/api.v1.items.ts"),
@@ -107,6 +108,10 @@ export default [
     route(
       "designs/:designId/revisions/:revision/costing",
       "routes/api.v1.design-costing.ts",
+    ),
+    route(
+      "designs/:designId/revisions/:revision/lines/:line/substitutes",
+      "routes/api.v1.design-line-substitutes.ts",
     ),
     route("alerts", "routes/api.v1.alerts.ts"),
     route("insight/designs", "routes/api.v1.insight-designs.ts"),

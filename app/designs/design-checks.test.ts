@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
   coilCurrentDensityAPerMm2,
+  coilSlotFill,
   coilSlotFillFactor,
   currentDensityWarning,
   designCheckNames,
@@ -39,6 +40,52 @@ describe("wire thermal class against the design's insulation class (IEC 60085; b
   it("names classes by IEC 60085 letter where the reference data has one", () => {
     expect(thermalClassName(180)).toBe("180 (H)");
     expect(thermalClassName(105)).toBe("105");
+  });
+});
+
+describe("slot fill judged over the enamel (issue 19, fix 1)", () => {
+  // IEC 0.20 mm grade 2, max overall 0.239 mm (IEC 60317-0-1, brief's table), 668 turns ×
+  // 2 coil sides in 60 mm². By hand: 1336 × π/4 × 0.239² / 60 = 0.999 (GNU units:
+  // units -t '1336 * pi/4 * (0.239 mm)^2 / (60 mm^2)' → 0.99894342); copper 0.700.
+  const fine = {
+    ...WIRE_080,
+    sku: "CU-0.20-G2",
+    size: { standard: "IEC" as const, diameterMm: 0.2 },
+    insulation: "grade2" as const,
+  };
+  const issueCoil = checkFourCoil({
+    wire: fine,
+    turns: 668,
+    slot: { areaMm2: 60, coilSidesPerSlot: 2 },
+  });
+
+  it("warns that the issue's winding cannot fit (gross 0.999 > π/√12), not a mild 0.700", () => {
+    const [warning] = designWarnings({
+      lines: [issueCoil],
+      insulationClassC: null,
+    });
+    expect(warning?.code).toBe("above-hexagonal-packing-limit");
+    expect(warning?.message).toContain("0.999");
+    expect(coilSlotFillFactor(issueCoil)).toBeCloseTo(0.69952796, 7);
+  });
+
+  it("takes the liner off the slot for the gross fill", () => {
+    // 60 − 10 mm² liner: units -t '1336 * pi/4 * (0.239 mm)^2 / (50 mm^2)' → 1.1987321
+    const lined = checkFourCoil({
+      wire: fine,
+      turns: 668,
+      slot: { areaMm2: 60, linerAreaMm2: 10, coilSidesPerSlot: 2 },
+    });
+    expect(coilSlotFill(lined)?.grossFill).toBeCloseTo(1.1987321, 6);
+  });
+
+  it("says it judged on copper fill when the wire's insulation is not catalogued", () => {
+    const [warning] = designWarnings({
+      lines: [{ ...issueCoil, wire: { ...fine, insulation: null } }],
+      insulationClassC: null,
+    });
+    expect(warning?.code).toBe("above-random-round-wire-practice");
+    expect(warning?.message).toContain("understates");
   });
 });
 

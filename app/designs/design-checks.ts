@@ -3,8 +3,9 @@
  * - a wire whose thermal class is below the design's insulation class: the wire's class
  *   must be at least the motor's (IEC 60085; brief, "Thermal classes");
  * - a coil whose slot is filled beyond what random-wound round wire reaches, 0.45 (common
- *   practice, brief), or beyond the geometric packing limits π/4 and π/√12 (brief), via
- *   the slot-fill module;
+ *   practice, brief), or beyond the geometric packing limits π/4 and π/√12 (brief), judged
+ *   on GROSS fill (over the enamel, liner subtracted) via the slot-fill module — on copper
+ *   fill, with a note, only when the wire's overall diameter is unknown;
  * - a magnet whose operating temperature is above its grade's maximum working temperature:
  *   it may lose magnetisation for good (makers' tables; brief);
  * - a coil whose current density J = I / (strands × bare area) at the rated current is
@@ -28,6 +29,7 @@ import { currentDensityPractice } from "~/engineering/current-density";
 export { currentDensityPractice };
 import {
   designWireBareDiameterMm,
+  designWireOverallDiameterMm,
   type CoilLine,
   type DesignLine,
   type MagnetLine,
@@ -85,21 +87,27 @@ export function wireClassWarning(
 }
 
 /**
- * Net conductor fill of the coil line's slot: turns × strands × coil sides per slot ×
- * bare strand area ÷ slot area; null when the line has no slot.
+ * Copper fill of the coil line's slot: turns × strands × coil sides per slot × bare
+ * strand area ÷ slot area; null when the line has no slot.
  */
 export function coilSlotFillFactor(line: CoilLine): number | null {
-  return coilSlotFill(line)?.fillFactor ?? null;
+  return coilSlotFill(line)?.copperFill ?? null;
 }
 
-/** The slot-fill module's assessment of the line's slot, or null without a slot. */
-function coilSlotFill(line: CoilLine): SlotFill | null {
+/**
+ * The slot-fill module's assessment of the line's slot (copper fill, gross fill over the
+ * wire's maximum overall diameter, the limits judged on gross fill), or null without a slot.
+ */
+export function coilSlotFill(line: CoilLine): SlotFill | null {
   if (!line.slot) return null;
   return assessSlotFill({
-    turns: line.turns * line.slot.coilSidesPerSlot,
-    strandsInHand: line.strandsInHand,
-    bareAreaMm2: circleAreaMm2(designWireBareDiameterMm(line.wire)),
+    turns: line.turns,
+    coilSidesPerSlot: line.slot.coilSidesPerSlot,
+    strands: line.strandsInHand,
+    bareDiameterMm: designWireBareDiameterMm(line.wire),
+    overallDiameterMm: designWireOverallDiameterMm(line.wire),
     slotAreaMm2: line.slot.areaMm2,
+    linerAreaMm2: line.slot.linerAreaMm2 ?? null,
   });
 }
 
@@ -108,13 +116,14 @@ export function slotFillDesignWarning(
   line: CoilLine,
   lineIndex: number,
 ): DesignWarning | null {
-  const warning = coilSlotFill(line)?.fillWarning ?? null;
-  if (!warning) return null;
+  const fill = coilSlotFill(line);
+  if (!fill?.warning) return null;
+  const note = fill.note ? ` ${fill.note}` : "";
   return {
-    code: warning.code,
+    code: fill.warning.code,
     lineIndex,
     sku: line.wire.sku,
-    message: `Coil line ${lineIndex + 1} (${line.wire.sku}): ${warning.message}`,
+    message: `Coil line ${lineIndex + 1} (${line.wire.sku}): ${fill.warning.message}${note}`,
   };
 }
 

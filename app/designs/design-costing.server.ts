@@ -22,7 +22,7 @@ import { companyCurrency } from "~/purchasing/suppliers.server";
 import { countText, quantityText } from "~/lib/unit-text";
 import { parseUnitCost, quantityToNumber } from "~/lib/decimal-amounts";
 import { coilLineFigures } from "./coil-line-figures";
-import { designWarnings } from "./design-checks";
+import { coilSlotFill, designWarnings } from "./design-checks";
 import {
   costDesign,
   designCostingJson,
@@ -252,6 +252,7 @@ export async function costRevision(input: {
             index,
             sku: line.wire.sku,
             figures: coilLineFigures(line, coilCurrentA),
+            fill: coilSlotFill(line),
           },
         ]
       : [],
@@ -304,7 +305,7 @@ export async function costRevision(input: {
       airGapFluxDensityT: fluxDensityT,
       poleCoverage: optionalNumber(revision.poleCoverage),
     }),
-    coils: coils.map(({ index, sku, figures }) => ({
+    coils: coils.map(({ index, sku, figures, fill }) => ({
       line: index + 1,
       sku,
       copperLengthM: figures.copperLengthM,
@@ -316,6 +317,10 @@ export async function costRevision(input: {
       activeShare: figures.activeShare,
       copperLossW: figures.copperLossW,
       forceLengthM: figures.forceLengthM,
+      // Slot fill (null without a slot area): bare copper, and over the enamel with the liner
+      // taken off; the limits in `warnings` are judged on the gross fill.
+      copperFill: fill?.copperFill ?? null,
+      grossFill: fill?.grossFill ?? null,
     })),
     warnings: designWarnings({
       lines,

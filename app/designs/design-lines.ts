@@ -13,8 +13,12 @@ import {
   requireNonNegative,
   requirePositive,
 } from "~/engineering/errors";
-import type { ConductorKey } from "~/engineering/reference-data";
-import { bareDiameterMm, type WireSpec } from "~/engineering/wire-geometry";
+import type { ConductorKey, InsulationKey } from "~/engineering/reference-data";
+import {
+  bareDiameterMm,
+  overallDiameter,
+  type WireSpec,
+} from "~/engineering/wire-geometry";
 import type { ExactDecimal } from "~/pricing/money";
 
 /** The catalogue item a line uses: its id and SKU (both unique). */
@@ -39,12 +43,16 @@ export interface DesignWire extends DesignItemRef {
   enamelledLinearMassKgPerM: number | null;
   /** Thermal class of the wire's insulation (IEC 60085), °C: 130, 155, 180, 200, 220 … */
   thermalClassC: number;
+  /** Enamel grade (IEC) or film build (AWG) of the catalogue item, for the overall diameter; null/absent when not catalogued. */
+  insulation?: InsulationKey | null;
 }
 
 /** The slot a coil side lies in, for the fill factor. */
 export interface CoilSlot {
-  /** Slot area available to conductors (inside the liner), mm². */
+  /** Whole slot area, mm². */
   areaMm2: number;
+  /** Slot liner and separator area taken from the slot area, mm²; null/absent when not given. */
+  linerAreaMm2?: number | null;
   /** Coil sides sharing one slot: 1 for a single-layer winding, 2 for a double-layer one. */
   coilSidesPerSlot: number;
 }
@@ -127,6 +135,20 @@ export function designWireBareDiameterMm(wire: DesignWire): number {
   return bareDiameterMm(wire.size);
 }
 
+/**
+ * Maximum overall diameter of one strand over its enamel, mm (published, else the labelled
+ * estimate of the wire-geometry module); null when the item names no insulation, or one
+ * that does not belong to its standard, or the size is outside the estimate's range.
+ */
+export function designWireOverallDiameterMm(wire: DesignWire): number | null {
+  if (!wire.insulation) return null;
+  try {
+    return overallDiameter(wire.size, wire.insulation).overallDiameterMm;
+  } catch {
+    return null;
+  }
+}
+
 function requireWholeNumberAtLeastOne(
   value: number,
   field: string,
@@ -180,6 +202,15 @@ function assertCoilLine(line: CoilLine): void {
   }
   if (line.slot) {
     requirePositive(line.slot.areaMm2, "slot.areaMm2", "Slot area");
+    const liner = line.slot.linerAreaMm2;
+    if (liner !== undefined && liner !== null) {
+      requireNonNegative(liner, "slot.linerAreaMm2", "Slot liner area");
+      if (liner >= line.slot.areaMm2)
+        throw new EngineeringInputError(
+          "slot.linerAreaMm2",
+          "The slot liner and separator area must be less than the slot area.",
+        );
+    }
     requireWholeNumberAtLeastOne(
       line.slot.coilSidesPerSlot,
       "slot.coilSidesPerSlot",

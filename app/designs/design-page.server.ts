@@ -4,8 +4,8 @@
  * the other revisions, and the costing for a build quantity and price basis.
  */
 import { costRevision, type RevisionCosting } from "./design-costing.server";
-import { coilSlotFillFactor } from "./design-checks";
-import { designWireBareDiameterMm } from "./design-lines";
+import { coilSlotFill } from "./design-checks";
+import { designWireBareDiameterMm, type CoilLine } from "./design-lines";
 import type { CostQuery, StoredLineInput } from "./design-page";
 import {
   findRevision,
@@ -62,6 +62,19 @@ export async function storedLineInputs(
   }));
 }
 
+/** A coil line's slot fill as the page and the API show it; null without a slot area. */
+export function slotFillView(line: CoilLine) {
+  const fill = coilSlotFill(line);
+  if (!fill) return null;
+  return {
+    copperFill: fill.copperFill,
+    grossFill: fill.grossFill,
+    judgedOn: fill.judgedOn,
+    fits: fill.fits,
+    note: fill.note,
+  };
+}
+
 /** One line as the page shows it: what the builder entered, and what the item brings. */
 function pageLine(line: StoredDesignLine) {
   const common = {
@@ -80,8 +93,10 @@ function pageLine(line: StoredDesignLine) {
           conductor: line.wire.conductor,
           bareDiameterMm: designWireBareDiameterMm(line.wire),
         },
-        /** Net conductor fill of the slot; null without a slot area. */
-        fillFactor: coilSlotFillFactor(line),
+        /** Copper fill of the slot (bare conductor); null without a slot area. */
+        fillFactor: coilSlotFill(line)?.copperFill ?? null,
+        /** Copper and gross fill (over the enamel) with what the limits were judged on; null without a slot area. */
+        slotFill: slotFillView(line),
       };
     case "magnet": {
       const limit = line.magnet.maxWorkingTemperatureC;

@@ -90,6 +90,7 @@ export const designPageIntents = [
   "remove-line",
   "release",
   "new-revision",
+  "use-substitute",
 ] as const;
 export type DesignPageIntent = (typeof designPageIntents)[number];
 

@@ -14,7 +14,11 @@ import {
   magnetItems,
   wireItems,
 } from "~/db/schema";
-import type { ConductorKey } from "~/engineering/reference-data";
+import {
+  findInsulationKind,
+  type ConductorKey,
+  type InsulationKey,
+} from "~/engineering/reference-data";
 import { parseExactDecimal } from "~/pricing/money";
 import { magnetGradeFromRow } from "~/reference/magnet-grades.server";
 import {
@@ -60,17 +64,30 @@ export async function findRevision(designId: number, revision: number) {
 const optionalNumber = (value: string | null): number | null =>
   value === null ? null : Number(value);
 
+/** The catalogue's insulation when it is a known grade or build of the wire's standard, else null. */
+function insulationOf(
+  standard: string,
+  insulation: string | null,
+): InsulationKey | null {
+  const kind = insulation === null ? undefined : findInsulationKind(insulation);
+  return kind && kind.standard === standard ? kind.key : null;
+}
+
 /** The lines of a revision in their order, as the design calculations take them. */
 export async function loadRevisionLines(
   revisionId: number,
   /** The revision's slot figures when the caller has them (saves a query). */
-  known?: Pick<RevisionRow, "slotAreaMm2" | "coilSidesPerSlot">,
+  known?: Pick<
+    RevisionRow,
+    "slotAreaMm2" | "slotLinerAreaMm2" | "coilSidesPerSlot"
+  >,
 ): Promise<StoredDesignLine[]> {
   const [revision] = known
     ? [known]
     : await db
         .select({
           slotAreaMm2: designRevisions.slotAreaMm2,
+          slotLinerAreaMm2: designRevisions.slotLinerAreaMm2,
           coilSidesPerSlot: designRevisions.coilSidesPerSlot,
         })
         .from(designRevisions)
@@ -102,6 +119,7 @@ export async function loadRevisionLines(
     gradeRows.map((row) => [row.key, magnetGradeFromRow(row)]),
   );
   const slotArea = optionalNumber(revision.slotAreaMm2);
+  const slotLinerArea = optionalNumber(revision.slotLinerAreaMm2);
 
   return rows.map(({ line, item, wire, magnet }): StoredDesignLine => {
     const common = {
@@ -120,6 +138,7 @@ export async function loadRevisionLines(
           size: wireSpecOf(wire.standard, wire.sizeLabel),
           enamelledLinearMassKgPerM: null,
           thermalClassC: wire.thermalClass,
+          insulation: insulationOf(wire.standard, wire.insulation),
         },
         turns: line.turns!,
         strandsInHand: line.strandsInHand!,
@@ -134,6 +153,7 @@ export async function loadRevisionLines(
             ? null
             : {
                 areaMm2: slotArea,
+                linerAreaMm2: slotLinerArea,
                 coilSidesPerSlot: revision.coilSidesPerSlot,
               },
       };
@@ -224,6 +244,7 @@ export function revisionView(
     torqueBasis: revision.torqueBasis,
     insulationClassC: revision.insulationClassC,
     slotAreaMm2: optionalNumber(revision.slotAreaMm2),
+    slotLinerAreaMm2: optionalNumber(revision.slotLinerAreaMm2),
     coilSidesPerSlot: revision.coilSidesPerSlot,
     phases: revision.phases,
     windingLayers: revision.windingLayers,

@@ -70,6 +70,10 @@ export const revisionFieldsSchema = z.object({
     (value) => (value === "" || value === null ? undefined : value),
     positive("slot area", 100_000, "mm²").optional(),
   ),
+  slotLinerAreaMm2: z.preprocess(
+    (value) => (value === "" || value === null ? undefined : value),
+    ranged("slot liner area", 0, 100_000, "mm²").optional(),
+  ),
   coilSidesPerSlot: whole("coil sides per slot", 1, 2).default(2),
   phases: whole("phase count", 1, 12).default(3),
   windingLayers: whole("number of winding layers", 1, 2).default(2),
@@ -157,27 +161,59 @@ function checkWinding(fields: WindingFields, context: z.RefinementCtx): void {
     });
 }
 
-/** The revision form (page): the fields, and a winding that can be balanced. */
-export const revisionFormSchema =
-  revisionFieldsSchema.superRefine(checkWinding);
+/** The message when the slot liner and separator would take the whole slot. */
+export const slotLinerTooLargeMessage =
+  "The slot liner and separator area must be less than the slot area: nothing would be left for the wire.";
 
-export const newDesignSchema = revisionFieldsSchema.extend({
-  name: z
-    .string({ error: "Give the design a name." })
-    .trim()
-    .min(1, "Give the design a name.")
-    .max(120, "A name is at most 120 characters."),
-  description: z
-    .string()
-    .trim()
-    .max(1000, "A description is at most 1,000 characters.")
-    .default(""),
-  motorType: z
-    .string()
-    .trim()
-    .max(60, "The motor type is at most 60 characters.")
-    .default(""),
-});
+/** Refuses a liner area at or above the slot area, beside the liner field (both must be given). */
+function slotLinerWithinSlot(
+  fields: { slotAreaMm2?: number; slotLinerAreaMm2?: number },
+  context: z.RefinementCtx,
+) {
+  if (
+    fields.slotAreaMm2 !== undefined &&
+    fields.slotLinerAreaMm2 !== undefined &&
+    fields.slotLinerAreaMm2 >= fields.slotAreaMm2
+  )
+    context.addIssue({
+      code: "custom",
+      path: ["slotLinerAreaMm2"],
+      message: slotLinerTooLargeMessage,
+    });
+}
+
+/** Checks the fields together: a winding that can be balanced, the liner inside the slot. */
+function checkRevisionFields(
+  fields: WindingFields & { slotAreaMm2?: number; slotLinerAreaMm2?: number },
+  context: z.RefinementCtx,
+): void {
+  checkWinding(fields, context);
+  slotLinerWithinSlot(fields, context);
+}
+
+/** The revision form (page): the fields, checked together. */
+export const revisionFormSchema =
+  revisionFieldsSchema.superRefine(checkRevisionFields);
+
+export const newDesignSchema = revisionFieldsSchema
+  .extend({
+    name: z
+      .string({ error: "Give the design a name." })
+      .trim()
+      .min(1, "Give the design a name.")
+      .max(120, "A name is at most 120 characters."),
+    description: z
+      .string()
+      .trim()
+      .max(1000, "A description is at most 1,000 characters.")
+      .default(""),
+    motorType: z
+      .string()
+      .trim()
+      .max(60, "The motor type is at most 60 characters.")
+      .default(""),
+  })
+  .superRefine(checkRevisionFields);
 
 const sku = z
   .string({ error: "Choose the item (its SKU)." })
@@ -231,9 +267,12 @@ export const newDesignFormSchema = newDesignSchema.superRefine(checkWinding);
 export type DesignLineInput = z.infer<typeof designLineSchema>;
 
 /** A whole revision as the API's PUT takes it: the fields, and the lines when given. */
-export const revisionUpdateSchema = revisionFieldsSchema.partial().extend({
-  lines: z
-    .array(designLineSchema)
-    .max(200, "A revision has at most 200 lines.")
-    .optional(),
-});
+export const revisionUpdateSchema = revisionFieldsSchema
+  .partial()
+  .extend({
+    lines: z
+      .array(designLineSchema)
+      .max(200, "A revision has at most 200 lines.")
+      .optional(),
+  })
+  .superRefine(slotLinerWithinSlot);

@@ -18,12 +18,13 @@ import {
 import { DomainError } from "~/lib/domain-error";
 import {
   windingFieldIssue,
+  slotLinerTooLargeMessage,
   type DesignLineInput,
   type NewDesign,
   type RevisionFields,
 } from "./design-schemas";
 
-type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
+export type Transaction = Parameters<Parameters<typeof db.transaction>[0]>[0];
 
 const decimalText = (value: number | undefined | null, decimals: number) =>
   value === undefined || value === null ? null : value.toFixed(decimals);
@@ -42,6 +43,8 @@ function revisionColumns(fields: Partial<RevisionFields>) {
     columns.insulationClassC = fields.insulationClassC;
   if ("slotAreaMm2" in fields)
     columns.slotAreaMm2 = decimalText(fields.slotAreaMm2, 2);
+  if ("slotLinerAreaMm2" in fields)
+    columns.slotLinerAreaMm2 = decimalText(fields.slotLinerAreaMm2, 2);
   if ("coilSidesPerSlot" in fields)
     columns.coilSidesPerSlot = fields.coilSidesPerSlot;
   if ("phases" in fields) columns.phases = fields.phases;
@@ -288,6 +291,19 @@ function lineColumns(line: DesignLineInput) {
   }
 }
 
+/** 400 when the stored liner area (after a change of either field) is not below the slot area. */
+async function refuseLinerFillingSlot(tx: Transaction, revisionId: number) {
+  const [row] = await tx
+    .select({
+      slot: designRevisions.slotAreaMm2,
+      liner: designRevisions.slotLinerAreaMm2,
+    })
+    .from(designRevisions)
+    .where(eq(designRevisions.id, revisionId));
+  if (row?.slot && row.liner && Number(row.liner) >= Number(row.slot))
+    throw new DomainError(400, slotLinerTooLargeMessage, "slotLinerAreaMm2");
+}
+
 /**
  * Changes a draft revision: the given fields, and (when `lines` is given) its
  * whole list of lines. 409 for a released revision; nothing is written then.
@@ -334,6 +350,7 @@ export async function updateDraftRevision(
         draftSaves: sql`${designRevisions.draftSaves} + 1`,
       })
       .where(eq(designRevisions.id, draft.id));
+    await refuseLinerFillingSlot(tx, draft.id);
     if (lines) {
       const itemIds = await resolveLineItems(tx, lines);
       await tx.delete(designLines).where(eq(designLines.revisionId, draft.id));
@@ -375,6 +392,45 @@ export async function releaseRevision(
   });
 }
 
+type LineRow = typeof designLines.$inferSelect;
+
+/**
+ * Inserts revision `next` of the source's design as a draft copy of `source`: its fields and
+ * its lines, each line through `changeLine` (unchanged by default). Returns the new row's id.
+ */
+export async function copyRevisionAsDraft(
+  tx: Transaction,
+  source: typeof designRevisions.$inferSelect,
+  next: number,
+  changeLine: (line: LineRow) => LineRow = (line) => line,
+): Promise<number> {
+  const [created] = await tx
+    .insert(designRevisions)
+    .values({
+      ...source,
+      id: undefined,
+      releasedAt: null,
+      releasedBy: null,
+      draftSaves: 0,
+      createdAt: new Date(),
+      revision: next,
+      status: "draft",
+    })
+    .$returningId();
+  const lines = await tx
+    .select()
+    .from(designLines)
+    .where(eq(designLines.revisionId, source.id));
+  if (lines.length > 0)
+    await tx.insert(designLines).values(
+      lines.map(changeLine).map(({ id: _id, ...line }) => ({
+        ...line,
+        revisionId: created!.id,
+      })),
+    );
+  return created!.id;
+}
+
 /** Starts the next revision as a draft copy of the latest one; 409 while a draft exists. */
 export async function startNewRevision(
   designId: number,
@@ -401,30 +457,7 @@ export async function startNewRevision(
         `Revision ${latest.revision} is still a draft: change it, or release it before starting another.`,
       );
     const next = latest.revision + 1;
-    const [created] = await tx
-      .insert(designRevisions)
-      .values({
-        ...latest,
-        id: undefined,
-        releasedAt: null,
-        releasedBy: null,
-        draftSaves: 0,
-        createdAt: new Date(),
-        revision: next,
-        status: "draft",
-      })
-      .$returningId();
-    const lines = await tx
-      .select()
-      .from(designLines)
-      .where(eq(designLines.revisionId, latest.id));
-    if (lines.length > 0)
-      await tx.insert(designLines).values(
-        lines.map(({ id: _id, ...line }) => ({
-          ...line,
-          revisionId: created!.id,
-        })),
-      );
+    await copyRevisionAsDraft(tx, latest, next);
     return { revision: next };
   });
 }

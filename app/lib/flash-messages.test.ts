@@ -211,6 +211,19 @@ describe("flashText", () => {
     );
   });
 
+  it("tells which line of which revision a substitute wire went to", () => {
+    expect(
+      flashText("wire-substitute-applied", {
+        position: 1,
+        sku: "CU-0.71",
+        strands: 2,
+        revision: 3,
+      }),
+    ).toBe(
+      "Line 1 of revision 3 now winds 2 × CU-0.71 in hand. The revision is a draft: check its figures, then release it.",
+    );
+  });
+
   it("has a sentence for every code, whatever its subject", () => {
     const order = { reference: "BO-0001", quantity: 2, held: [], short: [] };
     const subjects: Record<FlashSubjectKind, unknown> = {
@@ -230,6 +243,7 @@ describe("flashText", () => {
         entries: 2,
         statusLabel: "Partly received",
       },
+      designLine: { position: 1, sku: "CU-0.71", strands: 2, revision: 3 },
     };
     for (const code of Object.keys(flashMessageSubjects) as FlashCode[]) {
       const subject = subjects[flashMessageSubjects[code]];

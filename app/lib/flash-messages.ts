@@ -61,6 +61,13 @@ export interface FlashSubjects {
     supplier: string;
     orderEmail: string | null;
   };
+  /** A design line after a change: its place, its wire and strands, its revision. */
+  designLine: {
+    position: number;
+    sku: string;
+    strands: number;
+    revision: number;
+  };
   /** A delivery received against a purchase order: the order, how many spools or lots, its status now. */
   purchaseReceipt: {
     reference: string;
@@ -101,6 +108,7 @@ export const flashMessageSubjects = {
   "purchase-order-cancelled": "purchaseOrder",
   "purchase-order-closed": "purchaseOrder",
   "purchase-received": "purchaseReceipt",
+  "wire-substitute-applied": "designLine",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -120,6 +128,7 @@ const idKinds = {
   orderIssue: "number",
   purchaseOrder: "number",
   purchaseReceipt: "number",
+  designLine: "number",
 } as const satisfies Record<FlashSubjectKind, "none" | "number" | "key">;
 
 type IdOf<Kind extends FlashSubjectKind> = {
@@ -210,6 +219,8 @@ const texts: {
     `${order.number} closed short: what was still open is no longer on order.`,
   "purchase-received": (receipt) =>
     `Received ${countText(receipt.entries, { one: "spool or lot", other: "spools or lots" })} against ${receipt.reference}. The order is now ${receipt.statusLabel.toLowerCase()}.`,
+  "wire-substitute-applied": (line) =>
+    `Line ${line.position} of revision ${line.revision} now winds ${line.strands} × ${line.sku} in hand. The revision is a draft: check its figures, then release it.`,
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

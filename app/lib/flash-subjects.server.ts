@@ -10,6 +10,8 @@ import { db } from "~/db/client.server";
 import {
   buildOrderIssues,
   buildOrderLines,
+  designLines,
+  designRevisions,
   items,
   locations,
   lots,
@@ -182,6 +184,23 @@ async function purchaseReceipt(
   };
 }
 
+/** A design line with its wire and revision. */
+async function designLine(id: number) {
+  const [row] = await db
+    .select({
+      position: designLines.position,
+      sku: items.sku,
+      strands: designLines.strandsInHand,
+      revision: designRevisions.revision,
+    })
+    .from(designLines)
+    .innerJoin(items, eq(items.id, designLines.itemId))
+    .innerJoin(designRevisions, eq(designRevisions.id, designLines.revisionId))
+    .where(eq(designLines.id, id))
+    .limit(1);
+  return row ? { ...row, strands: row.strands ?? 1 } : null;
+}
+
 /** The subject of a note's message, or null when it no longer exists. */
 export async function flashSubjectOf(
   note: FlashNote,
@@ -204,5 +223,7 @@ export async function flashSubjectOf(
       return purchaseOrder(note.id as number);
     case "purchaseReceipt":
       return purchaseReceipt(note.id as number);
+    case "designLine":
+      return designLine(note.id as number);
   }
 }

@@ -37,6 +37,16 @@ import {
 } from "~/designs/designs.server";
 import { userCan } from "~/lib/capabilities";
 import { isDomainError } from "~/lib/domain-error";
+import { redirectWithFlash } from "~/lib/flash.server";
+import { WireSubstitutesPanel } from "~/components/design/wire-substitutes-panel";
+import {
+  readSubstituteQuery,
+  substituteFormSchema,
+} from "~/designs/wire-substitute-schemas";
+import {
+  applyWireSubstitute,
+  loadSubstitutePanels,
+} from "~/designs/wire-substitutes.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -48,9 +58,17 @@ export async function loader({ request, params }: Route.LoaderArgs) {
       { message: "There is no such design revision." },
       { status: 404 },
     );
+  const substituteQuery = readSubstituteQuery(
+    new URL(request.url).searchParams,
+  );
   return {
     ...page,
     costQuery: query,
+    substituteQuery,
+    substitutes: await loadSubstitutePanels(
+      ids!,
+      substituteQuery.tolerancePercent / 100,
+    ),
     canEdit: userCan(user, "editDesigns"),
     // The build-order list's creation rule (its loader and action).
     canCreateBuildOrder: userCan(user, "createBuildOrders"),
@@ -149,6 +167,7 @@ export async function action({ request, params }: Route.ActionArgs) {
           torqueBasis: fields.torqueBasis,
           insulationClassC: fields.insulationClassC,
           slotAreaMm2: fields.slotAreaMm2,
+          slotLinerAreaMm2: fields.slotLinerAreaMm2,
           coilSidesPerSlot: fields.coilSidesPerSlot,
           phases: fields.phases,
           windingLayers: fields.windingLayers,
@@ -242,6 +261,9 @@ export async function action({ request, params }: Route.ActionArgs) {
       });
     }
 
+    case "use-substitute":
+      return applySubstitute(ids, formData);
+
     case "new-revision": {
       let next: { revision: number };
       try {
@@ -251,6 +273,31 @@ export async function action({ request, params }: Route.ActionArgs) {
       }
       return redirect(`/designs/${ids.designId}/revisions/${next.revision}`);
     }
+  }
+}
+
+/** Applies a substitute from stock to a coil line; a flash message on the revision it went to. */
+async function applySubstitute(
+  ids: { designId: number; revision: number },
+  formData: FormData,
+) {
+  const intent = "use-substitute";
+  const submission = parseWithZod(formData, { schema: substituteFormSchema });
+  if (submission.status !== "success")
+    return answer({ intent, ok: false, result: submission.reply() }, 400);
+  const { line, sku, strands, tolerance } = submission.value;
+  try {
+    const applied = await applyWireSubstitute(
+      { ...ids, position: line },
+      { sku, strands },
+      tolerance / 100,
+    );
+    return redirectWithFlash(
+      `/designs/${ids.designId}/revisions/${applied.revision}`,
+      { code: "wire-substitute-applied", id: applied.lineId },
+    );
+  } catch (error) {
+    return refusal(intent, submission, error);
   }
 }
 
@@ -282,6 +329,8 @@ export default function DesignRevisionPage({
     costQuery,
     canEdit,
     canCreateBuildOrder,
+    substitutes,
+    substituteQuery,
   } = loaderData;
   const draft = revision.status === "draft";
   const latest = revisions[0]?.revision ?? revision.revision;
@@ -332,6 +381,14 @@ export default function DesignRevisionPage({
         costing={costing}
         insulationClassC={revision.insulationClassC}
         editable={canEdit && draft}
+      />
+
+      <WireSubstitutesPanel
+        panels={substitutes}
+        query={substituteQuery}
+        keep={Object.fromEntries(new URLSearchParams(query))}
+        currency={costing.currency}
+        canEdit={canEdit}
       />
 
       <DesignCostPanel

@@ -135,4 +135,17 @@ export const designRouteRows: RouteRoleRow[] = [
     path: "/api/v1/designs/999999/revisions/1/costing",
     expect: { anonymous: 401, signedIn: 405 },
   },
+  // Substitutes from stock: any reader may look; an empty POST from a builder is bad input (400).
+  {
+    file: "routes/api.v1.design-line-substitutes.ts",
+    method: "GET",
+    path: "/api/v1/designs/999999/revisions/1/lines/1/substitutes",
+    expect: { anonymous: 401, signedIn: 404 },
+  },
+  {
+    file: "routes/api.v1.design-line-substitutes.ts",
+    method: "POST",
+    path: "/api/v1/designs/999999/revisions/1/lines/1/substitutes",
+    expect: { anonymous: 401, ...byCapability("editDesigns", 400) },
+  },
 ];

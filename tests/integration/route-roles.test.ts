@@ -229,6 +229,18 @@ const table: Row[] = [
     expect: { anonymous: 401, signedIn: 400 },
   },
   {
+    file: "routes/api.v1.slot-fills.ts",
+    method: "GET",
+    path: "/api/v1/slot-fills",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
+    file: "routes/api.v1.slot-fills.ts",
+    method: "POST",
+    path: "/api/v1/slot-fills",
+    expect: { anonymous: 401, signedIn: 400 },
+  },
+  {
     file: "routes/api.v1.wire-sizes.ts",
     method: "POST",
     path: "/api/v1/wire-sizes",

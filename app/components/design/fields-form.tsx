@@ -44,6 +44,7 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
       torqueBasis: revision.torqueBasis,
       insulationClassC: String(revision.insulationClassC),
       slotAreaMm2: text(revision.slotAreaMm2),
+      slotLinerAreaMm2: text(revision.slotLinerAreaMm2),
       coilSidesPerSlot: String(revision.coilSidesPerSlot),
       phases: String(revision.phases),
       windingLayers: String(revision.windingLayers),
@@ -118,7 +119,13 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
             field={number.slotAreaMm2}
             label="Slot area"
             unit="mm²"
-            hint="Inside the liner; gives each coil's fill factor"
+            hint="The whole slot; gives each coil's copper and gross fill"
+          />
+          <QuantityField
+            field={number.slotLinerAreaMm2}
+            label="Slot liner and separator area"
+            unit="mm²"
+            hint="Taken from the slot area for the gross fill; empty for none"
           />
           <SelectField
             field={fields.coilSidesPerSlot}
@@ -222,6 +229,9 @@ export function DesignFieldsSummary({ revision }: { revision: Revision }) {
         </Term>
         <Term label="Slot area">
           {optional(revision.slotAreaMm2, "mm²", 1)}
+        </Term>
+        <Term label="Slot liner and separator">
+          {optional(revision.slotLinerAreaMm2, "mm²", 1)}
         </Term>
         <Term label="Coil sides per slot">
           {revision.coilSidesPerSlot === 1

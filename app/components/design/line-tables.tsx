@@ -233,6 +233,28 @@ function CoilCell({ line }: { line: CoilLine }) {
 
 const coilColumn = createColumnHelper<CoilRow>();
 
+/** Copper fill and gross fill (over the enamel, liner taken off); the limits are judged on gross. */
+function SlotFillCell({ fill }: { fill: CoilLine["slotFill"] }) {
+  if (!fill) return "—";
+  return (
+    <div className="whitespace-nowrap">
+      <div>
+        {fill.grossFill === null ? "—" : formatQuantity(fill.grossFill, "", 3)}{" "}
+        <span className="text-xs text-graphite-500">gross, over enamel</span>
+      </div>
+      <div>
+        {formatQuantity(fill.copperFill, "", 3)}{" "}
+        <span className="text-xs text-graphite-500">copper</span>
+      </div>
+      {fill.judgedOn === "copper" ? (
+        <div className="text-xs text-graphite-500">
+          overall diameter unknown
+        </div>
+      ) : null}
+    </div>
+  );
+}
+
 /** Coil lines with their copper figures per motor, the checks beside each. */
 export function CoilLinesTable({
   lines,
@@ -347,10 +369,7 @@ export function CoilLinesTable({
           id: "fill",
           header: "Slot fill",
           meta: { numeric: true },
-          cell: ({ row }) =>
-            row.original.line.fillFactor === null
-              ? "—"
-              : formatQuantity(row.original.line.fillFactor, "", 3),
+          cell: ({ row }) => <SlotFillCell fill={row.original.line.slotFill} />,
         }) as ColumnDef<CoilRow, unknown>,
       );
     list.push(

@@ -1,0 +1,43 @@
+import type { Route } from "./+types/api.v1.slot-fills";
+import { requireUser } from "~/auth/guard.server";
+import { assessWireSlotFill } from "~/engineering/wire-slot-fill";
+import {
+  calculateOr400,
+  methodNotAllowed,
+  readJsonBody,
+} from "~/lib/api.server";
+import { slotFillRequestSchema } from "~/lib/slot-fill-request";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireUser(request);
+  return methodNotAllowed(["POST"]);
+}
+
+/**
+ * POST /api/v1/slot-fills: copper fill and gross fill (over the enamel, liner taken off) of
+ * a winding in a slot, the limits judged on gross fill. Any signed-in role.
+ * → { copperFill, grossFill, limit, fits, message, … } (decision 037).
+ */
+export async function action({ request }: Route.ActionArgs) {
+  await requireUser(request);
+  if (request.method !== "POST") return methodNotAllowed(["POST"]);
+  const input = await readJsonBody(request, slotFillRequestSchema);
+  const fill = calculateOr400(() => assessWireSlotFill(input));
+  return Response.json({
+    copperFill: fill.copperFill,
+    grossFill: fill.grossFill,
+    limit: fill.limit,
+    fits: fill.fits,
+    message: fill.message,
+    judgedOn: fill.judgedOn,
+    limitCode: fill.warning?.code ?? null,
+    note: fill.note,
+    wireAreaMm2: fill.wireAreaMm2,
+    insulation: fill.insulation,
+    insulationAssumed: fill.insulationAssumed,
+    bareDiameterMm: fill.bareDiameterMm,
+    overallDiameterMm: fill.overallDiameterMm,
+    overallDiameterIsEstimate: fill.overallDiameterIsEstimate,
+    overallDiameterSource: fill.overallDiameterSource,
+  });
+}
