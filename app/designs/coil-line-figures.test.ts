@@ -164,7 +164,7 @@ describe("input the figures cannot use", () => {
     ["scrapPercent", { scrapPercent: -3 }],
     [
       "wire.diameterMm",
-      { wire: { ...WIRE_080, size: { standard: "IEC", diameterMm: 0.81 } } },
+      { wire: { ...WIRE_080, size: { standard: "IEC", diameterMm: 6.3 } } },
     ],
   ] as const)("refuses a bad %s with a field-named error", (field, change) => {
     expect(fieldOfError(() => coilLineFigures(checkFourCoil(change)))).toBe(

@@ -14,6 +14,7 @@
  * All outputs are plain numbers in the named units, unrounded.
  */
 
+import { assertCoilEstimateInput } from "./coil-estimate-input";
 import type { ConductorKey, InsulationKey } from "./reference-data";
 import {
   bareDiameterMm,
@@ -120,6 +121,7 @@ function scaleQuantities(
 
 /** Estimates a coil's conductor length, mass, resistance and loss (see the module comment). */
 export function estimateCoil(input: CoilEstimateInput): CoilEstimate {
+  assertCoilEstimateInput(input);
   const strands = input.strandsInHand ?? 1;
   const leadLengthMm = input.leadLengthMm ?? 0;
   const coilCount = input.coilCount ?? 1;
@@ -194,6 +196,7 @@ export interface ConductorSplit {
  * up to `perCoil.conductorLengthM` of {@link estimateCoil}.
  */
 export function conductorSplit(input: CoilEstimateInput): ConductorSplit {
+  assertCoilEstimateInput(input);
   const strands = input.strandsInHand ?? 1;
   const perSideM = (lengthMm: number) =>
     (strands * input.turns * 2 * lengthMm) / 1000;

@@ -171,15 +171,70 @@ describe("AWG bare diameter (ASTM B258)", () => {
 });
 
 describe("IEC bare diameter", () => {
-  it("is the nominal diameter, and only a nominal diameter", () => {
+  it("is the nominal diameter, R20/R40 step or not (issue 19, fix 8)", () => {
     expect(bareDiameterMm({ standard: "IEC", diameterMm: 0.8 })).toBe(0.8);
     expect(bareDiameterMm({ standard: "IEC", diameterMm: 1.06 })).toBe(1.06);
+    // Commonly stocked sizes between the steps (issue 19): refused before the fix.
+    for (const diameterMm of [0.35, 0.55, 0.65, 1.3, 0.81]) {
+      expect(bareDiameterMm({ standard: "IEC", diameterMm })).toBe(diameterMm);
+    }
+    // The standard's range is 0.020 mm to 5.000 mm (brief).
+    expect(bareDiameterMm({ standard: "IEC", diameterMm: 0.02 })).toBe(0.02);
+    expect(bareDiameterMm({ standard: "IEC", diameterMm: 5 })).toBe(5);
+    for (const diameterMm of [0.019, 5.001, 6.3, 0, -0.5, Number.NaN]) {
+      expect(
+        fieldOf(() => bareDiameterMm({ standard: "IEC", diameterMm })),
+      ).toBe("wire.diameterMm");
+    }
+    // Nominal diameters are printed to 0.001 mm: 0.3505 mm is not one.
     expect(
-      fieldOf(() => bareDiameterMm({ standard: "IEC", diameterMm: 0.81 })),
+      fieldOf(() => bareDiameterMm({ standard: "IEC", diameterMm: 0.3505 })),
     ).toBe("wire.diameterMm");
-    expect(
-      fieldOf(() => bareDiameterMm({ standard: "IEC", diameterMm: 6.3 })),
-    ).toBe("wire.diameterMm");
+  });
+
+  it("interpolates the overall diameter of 0.350 mm grade 2 between the published rows, flagged", () => {
+    // Hand-worked. The published IEC 60317-0-1 grade 2 rows either side of 0.350 mm are
+    // 0.200 mm → 0.239 mm and 0.500 mm → 0.566 mm (brief, two transcriptions):
+    // 0.239 + (0.350 − 0.200)/(0.500 − 0.200) × (0.566 − 0.239) = 0.239 + 0.5 × 0.327
+    // = 0.4025 mm.
+    const result = overallDiameter(
+      { standard: "IEC", diameterMm: 0.35 },
+      "grade2",
+    );
+    expectMatchesPrinted(result.overallDiameterMm ?? NaN, "0.4025");
+    expect(result.overallDiameterIsEstimate).toBe(true);
+    expect(result.overallDiameterSource).toContain("interpolated");
+    expect(result.overallDiameterSource).toContain("0.200 mm");
+    expect(result.overallDiameterSource).toContain("0.500 mm");
+    // 0.650 mm grade 1 between 0.500 (0.544) and 1.000 (1.062):
+    // 0.544 + 0.3 × 0.518 = 0.6994 mm.
+    expectMatchesPrinted(
+      overallDiameter({ standard: "IEC", diameterMm: 0.65 }, "grade1")
+        .overallDiameterMm ?? NaN,
+      "0.6994",
+    );
+    // It lies between the values for its neighbouring steps 0.335 and 0.355 mm.
+    const below = overallDiameter(
+      { standard: "IEC", diameterMm: 0.335 },
+      "grade2",
+    ).overallDiameterMm!;
+    const above = overallDiameter(
+      { standard: "IEC", diameterMm: 0.355 },
+      "grade2",
+    ).overallDiameterMm!;
+    expect(result.overallDiameterMm!).toBeGreaterThan(below);
+    expect(result.overallDiameterMm!).toBeLessThan(above);
+  });
+
+  it("falls back to the fitted estimate beyond the published rows (1.300 mm), still flagged", () => {
+    const result = overallDiameter(
+      { standard: "IEC", diameterMm: 1.3 },
+      "grade2",
+    );
+    expect(result.overallDiameterIsEstimate).toBe(true);
+    expect(result.overallDiameterSource).toContain("fitted");
+    // Above the bare 1.300 mm and above the published 1.000 mm grade 2 row's 1.093 mm.
+    expect(result.overallDiameterMm!).toBeGreaterThan(1.3);
   });
 });
 
