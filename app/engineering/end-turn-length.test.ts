@@ -105,3 +105,68 @@ describe("end-turn length from the slot pitch (Magnussen and Sadarangani, IEMDC 
     }
   });
 });
+
+describe("refusals (issue 19, fix 6)", () => {
+  const fieldOf = (run: () => unknown) => {
+    try {
+      run();
+    } catch (error) {
+      if (error instanceof EngineeringInputError) return error.field;
+      throw error;
+    }
+    return undefined;
+  };
+
+  it("a tooth as wide as or wider than the slot pitch leaves no slot", () => {
+    // τ_u = tooth width + slot width: before the fix a 14 mm tooth in a 12 mm pitch gave
+    // (π/4)·26 = 20.4 mm as if the coil had somewhere to lie.
+    expect(
+      fieldOf(() =>
+        endTurnLengthFromToothMm({ slotPitchMm: 12, toothWidthMm: 14 }),
+      ),
+    ).toBe("toothWidthMm");
+    expect(
+      fieldOf(() =>
+        endTurnLengthFromToothMm({ slotPitchMm: 12, toothWidthMm: 12 }),
+      ),
+    ).toBe("toothWidthMm");
+  });
+
+  it("negative, NaN and infinite lengths, and an unknown layout", () => {
+    expect(
+      fieldOf(() =>
+        endTurnLengthFromToothMm({ slotPitchMm: -12, toothWidthMm: 6 }),
+      ),
+    ).toBe("slotPitchMm");
+    expect(
+      fieldOf(() =>
+        endTurnLengthFromToothMm({
+          slotPitchMm: Number.POSITIVE_INFINITY,
+          toothWidthMm: 6,
+        }),
+      ),
+    ).toBe("slotPitchMm");
+    expect(
+      fieldOf(() =>
+        endTurnLengthFromToothMm({ slotPitchMm: 12, toothWidthMm: Number.NaN }),
+      ),
+    ).toBe("toothWidthMm");
+    expect(
+      fieldOf(() =>
+        endTurnLengthFromToothMm({
+          slotPitchMm: 12,
+          toothWidthMm: 6,
+          overhangFactor: -1.8,
+        }),
+      ),
+    ).toBe("overhangFactor");
+    expect(fieldOf(() => slotPitchMm(-40, 12))).toBe("radiusMm");
+    expect(fieldOf(() => slotPitchMm(40, -12))).toBe("slotCount");
+    expect(fieldOf(() => slotPitchMm(40, 0))).toBe("slotCount");
+    expect(
+      fieldOf(() =>
+        endTurnFactor("hairpin" as Parameters<typeof endTurnFactor>[0]),
+      ),
+    ).toBe("layout");
+  });
+});

@@ -27,3 +27,30 @@ describe("spool weigh-back", () => {
     expect(spoolNetMassKg(0.6, 0.6)).toBe(0);
   });
 });
+
+describe("refusals (issue 19, fix 6)", () => {
+  const fieldOf = (run: () => unknown) => {
+    try {
+      run();
+    } catch (error) {
+      if (error instanceof EngineeringInputError) return error.field;
+      throw error;
+    }
+    return undefined;
+  };
+
+  it("names the field of a negative, NaN or infinite quantity", () => {
+    expect(fieldOf(() => spoolNetMassKg(-5.4, 0.6))).toBe("grossKg");
+    expect(fieldOf(() => spoolNetMassKg(5.4, Number.NaN))).toBe("tareKg");
+    expect(fieldOf(() => maxLengthFromMassM(-1, 0.0017))).toBe("netMassKg");
+    expect(fieldOf(() => maxLengthFromMassM(1, 0))).toBe("linearMassKgPerM");
+    // Before the fix: −10 m gave a negative mass.
+    expect(fieldOf(() => massFromLengthKg(-10, 0.0017))).toBe("lengthM");
+    expect(
+      fieldOf(() => massFromLengthKg(Number.POSITIVE_INFINITY, 0.0017)),
+    ).toBe("lengthM");
+    expect(fieldOf(() => massFromLengthKg(10, -0.0017))).toBe(
+      "linearMassKgPerM",
+    );
+  });
+});

@@ -431,3 +431,34 @@ describe("overall diameter", () => {
     ).toBe("insulation");
   });
 });
+
+describe("refusals (issue 19, fix 6)", () => {
+  it("name the field of NaN, negative or infinite input", () => {
+    expect(fieldOf(() => circleAreaMm2(-1))).toBe("diameterMm");
+    expect(fieldOf(() => circleAreaMm2(Number.NaN))).toBe("diameterMm");
+    // Before the fix: a negative section gave a negative mass and resistance.
+    expect(fieldOf(() => linearMassKgPerM("copper", -0.5))).toBe("areaMm2");
+    expect(fieldOf(() => resistancePerMetreOhm("copper", 0))).toBe("areaMm2");
+    expect(fieldOf(() => metresPerKg("copper", 0))).toBe("areaMm2");
+    expect(
+      fieldOf(() => resistancePerMetreOhm("copper", 0.5, Number.NaN)),
+    ).toBe("temperatureC");
+    // Copper's linear R(T) would reach zero at 20 − 1/0.00393 = −234.5 °C; the model is
+    // used from −70 °C to 400 °C.
+    expect(fieldOf(() => resistancePerMetreOhm("copper", 0.5, -300))).toBe(
+      "temperatureC",
+    );
+    expect(
+      fieldOf(() =>
+        wireProperties({
+          conductor: "copper",
+          wire: { standard: "IEC", diameterMm: 0.5 },
+          temperatureC: Number.POSITIVE_INFINITY,
+        }),
+      ),
+    ).toBe("temperatureC");
+    expect(fieldOf(() => resistancePerMetreOhm("gold" as "copper", 0.5))).toBe(
+      "conductor",
+    );
+  });
+});
