@@ -87,19 +87,21 @@ describe("magnet volume", () => {
     expect(
       magnetVolumeMm3({ kind: "block", lengthMm: 10, widthMm: 5, heightMm: 2 }),
     ).toBe(100);
-    // Disc 10 mm × 2 mm: π·5²·2 = 50π mm³.
-    expect(
+    // Hand-worked: disc 10 mm × 2 mm: π·5²·2 = 50π = 157.07963 mm³ (GNU units "50*pi").
+    expectMatchesPrinted(
       magnetVolumeMm3({ kind: "disc", diameterMm: 10, thicknessMm: 2 }),
-    ).toBeCloseTo(50 * Math.PI, 10);
-    // Ring 10/4 × 2 mm: π/4·(100 − 16)·2 = 42π mm³.
-    expect(
+      "157.07963",
+    );
+    // Hand-worked: ring 10/4 × 2 mm: π/4·(100 − 16)·2 = 42π = 131.94689 mm³ (GNU units "42*pi").
+    expectMatchesPrinted(
       magnetVolumeMm3({
         kind: "ring",
         outerDiameterMm: 10,
         innerDiameterMm: 4,
         thicknessMm: 2,
       }),
-    ).toBeCloseTo(42 * Math.PI, 10);
+      "131.94689",
+    );
   });
 
   it("an arc of 360° is a ring, of 90° a quarter of it", () => {
@@ -123,8 +125,11 @@ describe("magnet volume", () => {
       angleDeg: 90,
       axialLengthMm: 30,
     });
-    expect(fullArc).toBeCloseTo(ring, 9);
-    expect(quarterArc).toBeCloseTo(ring / 4, 9);
+    // Hand-worked: π/4 · (60² − 50²) · 30 = 8250π = 25918.139 mm³, a quarter 6479.5348 mm³
+    // (GNU units "pi/4*(60^2-50^2)*30").
+    expectMatchesPrinted(ring, "25918.139");
+    expectMatchesPrinted(fullArc, "25918.139");
+    expectMatchesPrinted(quarterArc, "6479.5348");
   });
 
   it("rejects impossible shapes with the field", () => {
@@ -193,7 +198,8 @@ describe("magnet mass and remanence", () => {
     expect(result.volumeMm3).toBe(100);
     expect(result.volumeM3).toBeCloseTo(1e-7, 20);
     expect(result.massPerPieceKg).toBeCloseTo(0.00075, 15);
-    expect(result.totalMassKg).toBeCloseTo(16 * 0.00075, 15);
+    // 16 pieces × 0.75 g = 12 g.
+    expect(result.totalMassKg).toBeCloseTo(0.012, 15);
     // Ferrite 4.9 g/cm³ (brief).
     const ferrite = estimateMagnet({
       grade: "Y30",

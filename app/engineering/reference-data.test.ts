@@ -242,10 +242,8 @@ describe("insulation", () => {
     expect(row("24", "single")?.maxOverallDiameterIn).toBe(0.0217);
     expect(row("24", "heavy")?.maxOverallDiameterIn).toBe(0.0227);
     expect(row("24", "triple")?.maxOverallDiameterIn).toBe(0.0238);
-    expect(row("18", "heavy")?.maxOverallDiameterMm).toBeCloseTo(
-      0.0437 * 25.4,
-      12,
-    );
+    // 0.0437 in = 1.10998 mm (GNU units "0.0437 in" → mm).
+    expect(row("18", "heavy")?.maxOverallDiameterMm).toBeCloseTo(1.10998, 12);
   });
 });
 

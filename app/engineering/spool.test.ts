@@ -14,12 +14,12 @@ describe("spool weigh-back", () => {
       wire: { standard: "IEC", diameterMm: 0.5 },
     });
     expectMatchesPrinted(maxLengthFromMassM(net, linearMassKgPerM), "2749.9");
-    expect(
-      massFromLengthKg(
-        maxLengthFromMassM(net, linearMassKgPerM),
-        linearMassKgPerM,
-      ),
-    ).toBeCloseTo(net, 12);
+    // Hand-worked: 100 m × 8.89 g/cm³ × π/4 × 0.25 mm² = 174.555 g
+    // (GNU units "100*8.89*pi/4*0.5^2" → 174.55474).
+    expectMatchesPrinted(
+      massFromLengthKg(100, linearMassKgPerM) * 1000,
+      "174.555",
+    );
   });
 
   it("rejects a tare above the gross", () => {

@@ -27,6 +27,12 @@ describe("unit conversions", () => {
     expect(inchesToMm(0.005)).toBeCloseTo(0.127, 15);
   });
 
+  it("agree with GNU units the other way round", () => {
+    // GNU units: "1000 m" → ft 3280.8399; "1 kg" → lb 2.2046226.
+    expect(metresToFeet(1000)).toBeCloseTo(3280.8399, 4);
+    expect(kgToPounds(1)).toBeCloseTo(2.2046226, 7);
+  });
+
   it("go there and back", () => {
     for (const value of [-40, 0, 0.001, 1, 25.4, 1234.5]) {
       expect(mmToInches(inchesToMm(value))).toBeCloseTo(value, 12);

@@ -276,13 +276,11 @@ describe("resistance, mass and length per mass", () => {
     );
   });
 
-  it("gives metres per kg as the inverse of kg per metre", () => {
-    for (const row of IEC_NOMINAL_DIAMETERS) {
-      const area = circleAreaMm2(row.diameterMm);
-      expect(
-        metresPerKg("copper", area) * linearMassKgPerM("copper", area),
-      ).toBeCloseTo(1, 12);
-    }
+  it("gives metres per kg of bare wire", () => {
+    // Hand-worked, 0.50 mm copper: 8.89 g/cm³ × π/4 × 0.25 mm² = 1.74555 g/m, so
+    // 1000 g / 1.74555 g/m = 572.886 m/kg (GNU units "1000/(8.89*pi/4*0.5^2)" → 572.88618;
+    // brief worked check 6: 4.80 kg ↔ 2749.9 m).
+    expectMatchesPrinted(metresPerKg("copper", circleAreaMm2(0.5)), "572.886");
     // Density g/cm³ × area mm² = g/m: 1 mm² of copper weighs 8.89 g/m (IEC 60028 density).
     expect(linearMassKgPerM("copper", 1)).toBeCloseTo(0.00889, 15);
     expect(linearMassKgPerM("aluminium", 1)).toBeCloseTo(0.002703, 15);
@@ -314,12 +312,13 @@ describe("overall diameter", () => {
   it("gives the NEMA MW 1000 rows for AWG 18 and 24 in mm", () => {
     // Brief, NEMA MW 1000: AWG 18 heavy 0.0437 in, AWG 24 triple 0.0238 in.
     const heavy18 = overallDiameter({ standard: "AWG", size: "18" }, "heavy");
-    expect(heavy18.overallDiameterMm).toBeCloseTo(0.0437 * 25.4, 12);
+    // 0.0437 in = 1.10998 mm (GNU units "0.0437 in" → mm).
+    expectMatchesPrinted(heavy18.overallDiameterMm ?? NaN, "1.10998");
     expect(heavy18.overallDiameterIsEstimate).toBe(false);
     expect(
       overallDiameter({ standard: "AWG", size: "24" }, "triple")
         .overallDiameterMm,
-    ).toBeCloseTo(0.0238 * 25.4, 12);
+    ).toBeCloseTo(0.60452, 12); // 0.0238 in = 0.60452 mm (GNU units).
   });
 
   it("estimates other sizes near the published rows, flagged, and gives null further away", () => {
@@ -376,7 +375,7 @@ describe("overall diameter", () => {
     // AWG rows (brief): the two-point fit passes through both.
     const bare18 = findAwgSize("18")?.bareDiameterMm ?? NaN;
     expect(estimateMaxOverallDiameterMm("AWG", bare18, "single")).toBeCloseTo(
-      0.0424 * 25.4,
+      1.07696, // 0.0424 in (GNU units → 1.07696 mm)
       9,
     );
   });
