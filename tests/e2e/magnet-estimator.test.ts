@@ -100,7 +100,7 @@ describe("magnet estimator", () => {
     });
     await temperature.fill("200");
     await expect
-      .poll(() => page.locator("form").textContent())
+      .poll(() => page.getByRole("form", { name: "Magnet" }).textContent())
       .toContain("200 °C is above 150 °C");
     await saveScreenshot(page, "magnet-estimator-out-of-range");
 

@@ -32,11 +32,12 @@ describe("a wire item between the R20/R40 steps", () => {
     const size = page.getByLabel("Nominal diameter (mm)");
     await size.fill("0.3505");
     await page.getByLabel("Insulation").selectOption("grade2");
+    await page.getByLabel("Thermal class").selectOption("180");
+    await page.getByLabel("Enamel").selectOption("polyesterimide");
+    await page.getByRole("button", { name: "Add to catalogue" }).click();
     await page.getByText("Give the nominal diameter to 0.001 mm").waitFor();
 
     await size.fill("0.350");
-    await page.getByLabel("Thermal class").selectOption("180");
-    await page.getByLabel("Enamel").selectOption("polyesterimide");
     // 0.350 mm copper: π/4 × 0.1225 mm² × 8.89 g/cm³ = 0.8553 g/m
     // (GNU units "8.89*pi/4*0.35^2" → 0.85531823).
     await expect
@@ -62,9 +63,27 @@ describe("the magnet grades table", () => {
     await expect(page.locator("main").textContent()).resolves.toContain(
       "HcJ temp. coefficient",
     );
-    await page.getByLabel("HcJ temperature coefficient (%/K)").fill("0.5");
-    await page.getByLabel("Curie temperature (°C)").fill("100");
-    await page.getByLabel("Max. working temperature (°C)").fill("150");
+    // A plausible data sheet (values near N45SH) with a Curie point below its rating and
+    // an HcJ coefficient of the wrong sign for NdFeB.
+    const values: [RegExp, string][] = [
+      [/^Grade name/, `N45E2E${uniqueCode("G").slice(-4)}`],
+      [/^Br, lowest/, "1.32"],
+      [/^Br, highest/, "1.37"],
+      [/^HcB, minimum/, "980"],
+      [/^HcJ, minimum/, "1600"],
+      [/^\(BH\)max, lowest/, "340"],
+      [/^\(BH\)max, highest/, "366"],
+      [/^Recoil permeability/, "1.05"],
+      [/^Max. working temperature/, "150"],
+      [/^Br temperature coefficient/, "-0.11"],
+      [/^HcJ temperature coefficient/, "0.5"],
+      [/^Curie temperature/, "140"],
+      [/^Density/, "7.55"],
+      [/^Source/, "A browser test's invented data sheet"],
+    ];
+    for (const [label, value] of values) {
+      await page.getByLabel(label).fill(value);
+    }
     await page.getByRole("button", { name: "Add grade" }).click();
     await page.getByText("HcJ of NdFeB and SmCo falls as they warm").waitFor();
     await saveScreenshot(page, "magnet-grade-form-temperature-fields");
