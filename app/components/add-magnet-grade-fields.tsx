@@ -179,6 +179,19 @@ export function TemperatureAndMaterialFields({
         allowNegative
       />
       <QuantityField
+        field={fields.hcjTemperatureCoefficientPercentPerK}
+        label="HcJ temperature coefficient"
+        unit="%/K"
+        hint="Optional. NdFeB about −0.6, SmCo −0.3, ferrite +0.27"
+        allowNegative
+      />
+      <QuantityField
+        field={fields.curieTemperatureC}
+        label="Curie temperature"
+        unit="°C"
+        hint="Optional. NdFeB about 310, SmCo 750–825, ferrite 450"
+      />
+      <QuantityField
         field={fields.densityGPerCm3}
         label="Density"
         unit="g/cm³"

@@ -102,6 +102,24 @@ const columns = [
     meta: { numeric: true },
     cell: (info) => nowrap(formatPercentPerKelvin(info.getValue())),
   }),
+  column.accessor("hcjTemperatureCoefficientPerK", {
+    header: "HcJ temp. coefficient",
+    meta: { numeric: true },
+    cell: (info) => {
+      const value = info.getValue();
+      if (value === null) return nowrap("not given");
+      const text = formatPercentPerKelvin(value, 2);
+      return nowrap(value > 0 ? `+${text}` : text);
+    },
+  }),
+  column.accessor("curieTemperatureC", {
+    header: "Curie temp.",
+    meta: { numeric: true },
+    cell: (info) => {
+      const value = info.getValue();
+      return nowrap(value === null ? "not given" : formatQuantity(value, "°C"));
+    },
+  }),
   column.accessor("densityGPerCm3", {
     header: "Density",
     meta: { numeric: true },

@@ -2,6 +2,7 @@ import type { MagnetShape } from "~/engineering/magnet-estimate";
 import {
   CONDUCTOR_MATERIALS,
   ENAMELS,
+  findIecNominalDiameter,
   findInsulationKind,
   THERMAL_CLASSES,
   type MagnetMaterial,
@@ -75,7 +76,11 @@ export function WireAttributeList({
       <Row term="Size">
         {wire.standard === "AWG"
           ? `AWG ${wire.sizeLabel}`
-          : `IEC 60317, ${wire.sizeLabel}\u00a0mm nominal`}
+          : `IEC 60317, ${wire.sizeLabel}\u00a0mm nominal${
+              findIecNominalDiameter(Number(wire.sizeLabel))
+                ? ""
+                : " (between the R20/R40 steps)"
+            }`}
       </Row>
       <Row term="Insulation">{insulation}</Row>
       <Row term="Thermal class">

@@ -1,8 +1,8 @@
-import type { FieldMetadata } from "@conform-to/react";
+import { getInputProps, type FieldMetadata } from "@conform-to/react";
 import {
   ENAMELS,
   findAwgSize,
-  findIecNominalDiameter,
+  findIecDiameter,
   THERMAL_CLASSES,
   type ConductorKey,
 } from "~/engineering/reference-data";
@@ -37,7 +37,7 @@ function WireFigures({
     standard === "AWG"
       ? findAwgSize(size)
       : standard === "IEC"
-        ? findIecNominalDiameter(Number(size))
+        ? findIecDiameter(Number(size))
         : undefined;
   if (!known) return null;
   const figures = wireStockFigures({
@@ -53,6 +53,56 @@ function WireFigures({
       {formatQuantity(figures.maxLengthM, "m", 0)} per kg (the enamel makes it a
       few per cent less)
     </p>
+  );
+}
+
+/**
+ * The IEC nominal diameter: typed, with the R20/R40 steps offered as suggestions. A size
+ * between the steps (0.350 mm is commonly stocked) is accepted from 0.020 to 5.000 mm.
+ */
+function IecDiameterField({
+  field,
+  sizes,
+}: {
+  field: Field;
+  sizes: WireSizeChoices["iec"];
+}) {
+  const { key, ...inputProps } = getInputProps(
+    field as FieldMetadata<string | undefined>,
+    { type: "text", ariaDescribedBy: field.descriptionId },
+  );
+  const listId = `${field.id}-steps`;
+  return (
+    <div>
+      <label htmlFor={field.id} className="field-label">
+        Nominal diameter (mm)
+      </label>
+      <input
+        key={key}
+        {...inputProps}
+        inputMode="decimal"
+        autoComplete="off"
+        list={listId}
+        className="field-input tabular-nums"
+      />
+      <datalist id={listId}>
+        {sizes.map((size) => (
+          <option key={size.label} value={size.label}>
+            {size.series === "r40" ? "R40" : "R20"}
+          </option>
+        ))}
+      </datalist>
+      <p id={field.descriptionId} className="mt-1 text-xs text-graphite-500">
+        An R20/R40 step from the list, or a size between them from 0.020 to
+        5.000 mm such as 0.350; the overall diameter of such a size is an
+        estimate.
+      </p>
+      {field.errors ? (
+        <p id={field.errorId} className="field-error">
+          {field.errors.join(" ")}
+        </p>
+      ) : null}
+    </div>
   );
 }
 
@@ -85,25 +135,22 @@ export function WireItemFields({
         <option value="IEC">IEC 60317 (mm)</option>
         <option value="AWG">AWG</option>
       </SelectField>
-      <SelectField
-        field={fields.size}
-        label={standard === "AWG" ? "AWG size" : "Nominal diameter (mm)"}
-        placeholder="Choose the size"
-        resetKey={standard}
-      >
-        {standard === "AWG"
-          ? sizes.awg.map((size) => (
-              <option key={size.label} value={size.label}>
-                {size.label} ({formatQuantity(size.bareDiameterMm, "mm", 4)})
-              </option>
-            ))
-          : sizes.iec.map((size) => (
-              <option key={size.label} value={size.label}>
-                {size.label}
-                {size.series === "r40" ? " (R40)" : ""}
-              </option>
-            ))}
-      </SelectField>
+      {standard === "AWG" ? (
+        <SelectField
+          field={fields.size}
+          label="AWG size"
+          placeholder="Choose the size"
+          resetKey={standard}
+        >
+          {sizes.awg.map((size) => (
+            <option key={size.label} value={size.label}>
+              {size.label} ({formatQuantity(size.bareDiameterMm, "mm", 4)})
+            </option>
+          ))}
+        </SelectField>
+      ) : (
+        <IecDiameterField field={fields.size} sizes={sizes.iec} />
+      )}
       <SelectField
         field={fields.insulation}
         label="Insulation"

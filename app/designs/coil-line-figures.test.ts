@@ -108,10 +108,9 @@ describe("worked check 5 of the engineering brief: copper loss at 10 A", () => {
     const six = coilLineFigures(checkFourCoil({ coilsPerMotor: 6 }), 10);
     // 6 × 21.95 W = 131.7 W (brief, worked check 5, times six coils).
     expectMatchesPrinted((six.copperLossW ?? NaN) / 6, "21.95");
-    expect(six.copperLossW).toBeCloseTo(
-      6 * 10 * 10 * six.resistancePerCoilOhm,
-      12,
-    );
+    // Hand-worked: 6 × (10 A)² × 6.4 m / (58 S·m/mm² × π/4 × 0.64 mm²) = 131.71 W
+    // (GNU units "600*6.4/(58*pi/4*0.8^2)" → 131.71444).
+    expectMatchesPrinted(six.copperLossW ?? NaN, "131.71");
     expect(coilLineFigures(checkFourCoil()).copperLossW).toBeNull();
   });
 });
@@ -122,10 +121,14 @@ describe("scaling with coils and strands", () => {
     const four = coilLineFigures(
       checkFourCoil({ leadLengthMm: 150, coilsPerMotor: 4 }),
     );
-    expect(four.copperLengthM).toBeCloseTo(4 * one.copperLengthM, 12);
-    expect(four.drawnMassKg).toBeCloseTo(4 * one.drawnMassKg, 12);
+    // Hand-worked from worked check 4 with leads (6.700 m, 29.94 g, 0.22981 Ω per coil):
+    // four coils 26.8 m and 119.76 g (GNU units "4*6.7*8.89*pi/4*0.8^2" → 119.75852 g),
+    // force length 4 × 2 × 40 × 0.05 m = 16 m; one coil's resistance stays 0.22981 Ω.
+    expect(four.copperLengthM).toBeCloseTo(26.8, 12);
+    expectMatchesPrinted(four.drawnMassKg * 1000, "119.76");
+    expectMatchesPrinted(four.resistance20PerCoilOhm, "0.22981");
     expect(four.resistance20PerCoilOhm).toBe(one.resistance20PerCoilOhm);
-    expect(four.forceLengthM).toBeCloseTo(4 * one.forceLengthM, 12);
+    expect(four.forceLengthM).toBeCloseTo(16, 12);
   });
 
   it("R ∝ 1/strands and drawn mass ∝ strands, forceLength unchanged (seeded random lines)", () => {
@@ -164,7 +167,7 @@ describe("input the figures cannot use", () => {
     ["scrapPercent", { scrapPercent: -3 }],
     [
       "wire.diameterMm",
-      { wire: { ...WIRE_080, size: { standard: "IEC", diameterMm: 0.81 } } },
+      { wire: { ...WIRE_080, size: { standard: "IEC", diameterMm: 6.3 } } },
     ],
   ] as const)("refuses a bad %s with a field-named error", (field, change) => {
     expect(fieldOfError(() => coilLineFigures(checkFourCoil(change)))).toBe(

@@ -18,6 +18,7 @@
  * All outputs are plain numbers in the named units, unrounded.
  */
 
+import { assertCoilEstimateInput } from "./coil-estimate-input";
 import {
   coilConductor,
   type CoilWireSpec,
@@ -155,6 +156,7 @@ function scaleQuantities(
 
 /** Estimates a coil's conductor length, mass, resistance and loss (see the module comment). */
 export function estimateCoil(input: CoilEstimateInput): CoilEstimate {
+  assertCoilEstimateInput(input);
   const strands = input.strandsInHand ?? 1;
   const leadLengthMm = input.leadLengthMm ?? 0;
   const coilCount = input.coilCount ?? 1;
@@ -254,6 +256,7 @@ export interface ConductorSplit {
  * up to `perCoil.conductorLengthM` of {@link estimateCoil}.
  */
 export function conductorSplit(input: CoilEstimateInput): ConductorSplit {
+  assertCoilEstimateInput(input);
   const strands = input.strandsInHand ?? 1;
   const perSideM = (lengthMm: number) =>
     (strands * input.turns * 2 * lengthMm) / 1000;

@@ -61,6 +61,14 @@ export function endTurnLengthFromToothMm(input: {
   const overhangFactor = input.overhangFactor ?? BIANCHI_OVERHANG_FACTOR;
   requirePositive(input.slotPitchMm, "slotPitchMm", "Slot pitch");
   requireNonNegative(input.toothWidthMm, "toothWidthMm", "Tooth width");
+  // τ_u = tooth width + slot width at the same radius: a tooth as wide as the pitch
+  // leaves no slot for the coil sides.
+  if (input.toothWidthMm >= input.slotPitchMm) {
+    throw new EngineeringInputError(
+      "toothWidthMm",
+      `A tooth ${input.toothWidthMm} mm wide leaves no slot in a slot pitch of ${input.slotPitchMm} mm: the tooth width must be less than the slot pitch.`,
+    );
+  }
   requireCoilThrow(coilThrow);
   requireNonNegative(overhangFactor, "overhangFactor", "Overhang factor");
   const aroundTooth = (Math.PI / 4) * (input.slotPitchMm + input.toothWidthMm);
@@ -95,6 +103,11 @@ export function endTurnFactor(
       return SINGLE_LAYER_TOOTH_COIL_FACTOR;
     case "double-layer-tooth-coil":
       return DOUBLE_LAYER_TOOTH_COIL_FACTOR;
+    default:
+      throw new EngineeringInputError(
+        "layout",
+        'The winding layout must be "distributed", "single-layer-tooth-coil" or "double-layer-tooth-coil".',
+      );
   }
 }
 

@@ -2,8 +2,11 @@ import { describe, expect, it } from "vitest";
 import {
   EngineeringInputError,
   isEngineeringInputError,
+  requireFinite,
   requireNonNegative,
   requirePositive,
+  requireWholeNumber,
+  requireWithin,
 } from "./errors";
 
 describe("EngineeringInputError", () => {
@@ -33,5 +36,44 @@ describe("EngineeringInputError", () => {
     expect(() =>
       requireNonNegative(0, "leadLengthMm", "Lead length"),
     ).not.toThrow();
+  });
+});
+
+describe("the range checks added for issue 19 (fix 6)", () => {
+  it("requireFinite refuses NaN and infinities", () => {
+    expect(() => requireFinite(Number.NaN, "temperatureC", "T")).toThrow(
+      EngineeringInputError,
+    );
+    expect(() =>
+      requireFinite(Number.NEGATIVE_INFINITY, "temperatureC", "T"),
+    ).toThrow(EngineeringInputError);
+    expect(() => requireFinite(-40, "temperatureC", "T")).not.toThrow();
+  });
+
+  it("requireWholeNumber refuses fractions, NaN and values below the minimum", () => {
+    expect(() => requireWholeNumber(2.5, "turns", "Turns")).toThrow(
+      EngineeringInputError,
+    );
+    expect(() => requireWholeNumber(0, "turns", "Turns")).toThrow(
+      EngineeringInputError,
+    );
+    expect(() => requireWholeNumber(0, "turns", "Turns", 0)).not.toThrow();
+    expect(() => requireWholeNumber(Number.NaN, "turns", "Turns")).toThrow(
+      EngineeringInputError,
+    );
+  });
+
+  it("requireWithin includes both bounds and writes the minus sign", () => {
+    expect(() => requireWithin(-70, "t", "T", -70, 400)).not.toThrow();
+    expect(() => requireWithin(400, "t", "T", -70, 400)).not.toThrow();
+    try {
+      requireWithin(401, "temperatureC", "The temperature", -70, 400, "°C");
+      expect.unreachable();
+    } catch (error) {
+      expect((error as EngineeringInputError).field).toBe("temperatureC");
+      expect((error as Error).message).toBe(
+        "The temperature must be a number from −70 °C to 400 °C.",
+      );
+    }
   });
 });

@@ -56,3 +56,49 @@ export function requireNonNegative(
     );
   }
 }
+
+/** Throws unless `value` is a finite number (not NaN, not ±Infinity). */
+export function requireFinite(
+  value: number,
+  field: string,
+  label: string,
+): void {
+  if (typeof value !== "number" || !Number.isFinite(value)) {
+    throw new EngineeringInputError(field, `${label} must be a number.`);
+  }
+}
+
+/** Throws unless `value` is a whole number of at least `min` (default 1). */
+export function requireWholeNumber(
+  value: number,
+  field: string,
+  label: string,
+  min = 1,
+): void {
+  if (!Number.isInteger(value) || value < min) {
+    throw new EngineeringInputError(
+      field,
+      `${label} must be a whole number, at least ${min}.`,
+    );
+  }
+}
+
+/** Throws unless `value` is a finite number from `min` to `max` inclusive; `unit` follows each bound. */
+export function requireWithin(
+  value: number,
+  field: string,
+  label: string,
+  min: number,
+  max: number,
+  unit = "",
+): void {
+  if (!Number.isFinite(value) || value < min || value > max) {
+    const suffix = unit ? ` ${unit}` : "";
+    const text = (bound: number) =>
+      `${String(bound).replace("-", "−")}${suffix}`;
+    throw new EngineeringInputError(
+      field,
+      `${label} must be a number from ${text(min)} to ${text(max)}.`,
+    );
+  }
+}

@@ -157,12 +157,12 @@ describe("litz AC resistance (strand-level Dowell)", () => {
 });
 
 describe("litz strand sizes", () => {
-  it("refuses a strand size that is not in the tables, naming wire.strandWire.diameterMm", () => {
+  it("refuses a strand size outside IEC 60317-0-1's 0.020–5.000 mm, naming wire.strandWire.diameterMm", () => {
     expect(() =>
       litzWire({
         standard: "litz",
         strands: 10,
-        strandWire: { standard: "IEC", diameterMm: 0.101 },
+        strandWire: { standard: "IEC", diameterMm: 6.3 },
       }),
     ).toThrowError(
       expect.objectContaining({ field: "wire.strandWire.diameterMm" }) as Error,

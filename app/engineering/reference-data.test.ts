@@ -9,9 +9,12 @@ import {
   MAGNET_GRADES,
   PUBLISHED_MAX_OVERALL_DIAMETERS,
   THERMAL_CLASSES,
+  awgFormulaDiameterMm,
   conductorMaterial,
   findAwgSize,
+  findIecDiameter,
   findIecNominalDiameter,
+  iecDiameterProblem,
   findMagnetGrade,
   isWireClassSufficient,
 } from "./reference-data";
@@ -239,10 +242,8 @@ describe("insulation", () => {
     expect(row("24", "single")?.maxOverallDiameterIn).toBe(0.0217);
     expect(row("24", "heavy")?.maxOverallDiameterIn).toBe(0.0227);
     expect(row("24", "triple")?.maxOverallDiameterIn).toBe(0.0238);
-    expect(row("18", "heavy")?.maxOverallDiameterMm).toBeCloseTo(
-      0.0437 * 25.4,
-      12,
-    );
+    // 0.0437 in = 1.10998 mm (GNU units "0.0437 in" → mm).
+    expect(row("18", "heavy")?.maxOverallDiameterMm).toBeCloseTo(1.10998, 12);
   });
 });
 
@@ -420,6 +421,94 @@ describe("magnet grades", () => {
       expect(current.maxWorkingTemperatureC).toBeGreaterThan(
         previous.maxWorkingTemperatureC,
       );
+    }
+  });
+});
+
+describe("lookups refuse nonsense (issue 19, fix 6)", () => {
+  it("find nothing for NaN, non-strings or sizes outside the tables", () => {
+    expect(findIecNominalDiameter(Number.NaN)).toBeUndefined();
+    expect(findAwgSize(20 as unknown as string)).toBeUndefined();
+    expect(findMagnetGrade(undefined as unknown as string)).toBeUndefined();
+    expect(findIecDiameter(Number.POSITIVE_INFINITY)).toBeUndefined();
+  });
+
+  it("refuse an AWG gauge number outside −3 … 46 or a NaN thermal class with the field", () => {
+    const fieldOf = (run: () => unknown) => {
+      try {
+        run();
+      } catch (error) {
+        if (error instanceof EngineeringInputError) return error.field;
+        throw error;
+      }
+      return undefined;
+    };
+    expect(fieldOf(() => awgFormulaDiameterMm(47))).toBe("wire.size");
+    expect(fieldOf(() => awgFormulaDiameterMm(20.5))).toBe("wire.size");
+    expect(fieldOf(() => isWireClassSufficient(Number.NaN, 155))).toBe(
+      "wire.thermalClassC",
+    );
+  });
+});
+
+describe("IEC sizes between the R20/R40 steps (issue 19, fix 8)", () => {
+  it("accept 0.350 mm with its neighbouring steps 0.335 and 0.355 (R40, ISO 3)", () => {
+    // ISO 3 R40 around 3.5: 3.15, 3.35, 3.55 → 0.315, 0.335, 0.355 mm.
+    expect(findIecDiameter(0.35)).toMatchObject({
+      diameterMm: 0.35,
+      series: null,
+      below: 0.335,
+      above: 0.355,
+    });
+    expect(findIecDiameter(1.3)).toMatchObject({ below: 1.25, above: 1.32 });
+    expect(findIecDiameter(0.8)).toMatchObject({ series: "r20" });
+  });
+
+  it("refuse sizes outside 0.020–5.000 mm or finer than 0.001 mm, saying why", () => {
+    expect(findIecDiameter(6)).toBeUndefined();
+    expect(iecDiameterProblem(6)).toContain("0.020 mm to 5.000 mm");
+    expect(findIecDiameter(0.3505)).toBeUndefined();
+    expect(iecDiameterProblem(0.3505)).toContain("0.001 mm");
+    expect(iecDiameterProblem(0.35)).toBeNull();
+  });
+});
+
+describe("magnet temperature data (issue 19, fix 2)", () => {
+  it("every built-in grade has an HcJ coefficient and a Curie temperature, and its rating is below the Curie point", () => {
+    for (const grade of MAGNET_GRADES) {
+      expect(grade.hcjTemperatureCoefficientPerK, grade.name).not.toBeNull();
+      expect(grade.curieTemperatureC, grade.name).not.toBeNull();
+      expect(grade.maxWorkingTemperatureC).toBeLessThan(
+        grade.curieTemperatureC!,
+      );
+    }
+  });
+
+  it("carry the published Curie temperatures and the sign of the HcJ coefficient", () => {
+    // magnetsales.com: NdFeB 310 °C, SmCo 1:5 750 °C, SmCo 2:17 825 °C; Sr-ferrite 450 °C
+    // (vectormagnets.com comparison table).
+    expect(findMagnetGrade("N42")!.curieTemperatureC).toBe(310);
+    expect(findMagnetGrade("SmCo5")!.curieTemperatureC).toBe(750);
+    expect(findMagnetGrade("Sm2Co17")!.curieTemperatureC).toBe(825);
+    expect(findMagnetGrade("Y30")!.curieTemperatureC).toBe(450);
+    // NdFeB −0.5…−0.6 %/K (makers' tables), SmCo5 −0.28 %/K (sdmmagnetic.com),
+    // ferrite +0.27 %/K (hsmagnets.com): HcJ rises with temperature only for ferrite.
+    expect(findMagnetGrade("N42")!.hcjTemperatureCoefficientPerK).toBe(-0.006);
+    expect(findMagnetGrade("N35AH")!.hcjTemperatureCoefficientPerK).toBe(
+      -0.0045,
+    );
+    expect(findMagnetGrade("SmCo5")!.hcjTemperatureCoefficientPerK).toBe(
+      -0.0028,
+    );
+    expect(findMagnetGrade("Y30")!.hcjTemperatureCoefficientPerK).toBe(0.0027);
+    for (const grade of MAGNET_GRADES) {
+      const coefficient = grade.hcjTemperatureCoefficientPerK!;
+      if (grade.material === "hard-ferrite") {
+        expect(coefficient).toBeGreaterThan(0);
+      } else {
+        expect(coefficient, grade.name).toBeGreaterThanOrEqual(-0.006);
+        expect(coefficient, grade.name).toBeLessThan(0);
+      }
     }
   });
 });

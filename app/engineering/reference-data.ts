@@ -10,7 +10,7 @@
  * Pure data and lookups: no framework, no database, no Node-only APIs.
  */
 
-import { EngineeringInputError } from "./errors";
+import { EngineeringInputError, requireFinite } from "./errors";
 import { inchesToMm, mmToInches } from "./units";
 
 // ---------------------------------------------------------------------------
@@ -79,6 +79,12 @@ export const AWG_36_DIAMETER_MM = 0.127;
  * This is the exact formula value, not the table rounded to 0.0001 in.
  */
 export function awgFormulaDiameterMm(gaugeNumber: number): number {
+  if (!Number.isInteger(gaugeNumber) || gaugeNumber < -3 || gaugeNumber > 46) {
+    throw new EngineeringInputError(
+      "wire.size",
+      "The AWG gauge number must be a whole number from −3 (0000) to 46.",
+    );
+  }
   return AWG_36_DIAMETER_MM * Math.pow(92, (36 - gaugeNumber) / 39);
 }
 
@@ -125,6 +131,7 @@ export const AWG_SIZES: readonly AwgSize[] = Array.from(
  * Surrounding spaces and a leading "AWG" are ignored. Undefined when not in 0000–46.
  */
 export function findAwgSize(label: string): AwgSize | undefined {
+  if (typeof label !== "string") return undefined;
   const cleaned = label.trim().replace(/^awg\s*/i, "");
   return AWG_SIZES.find(
     (size) => size.label === cleaned || size.alias === cleaned,
@@ -238,9 +245,75 @@ const IEC_MATCH_TOLERANCE_MM = 1e-6;
 export function findIecNominalDiameter(
   diameterMm: number,
 ): IecNominalDiameter | undefined {
+  if (typeof diameterMm !== "number" || !Number.isFinite(diameterMm))
+    return undefined;
   return IEC_NOMINAL_DIAMETERS.find(
     (row) => Math.abs(row.diameterMm - diameterMm) <= IEC_MATCH_TOLERANCE_MM,
   );
+}
+
+/** The range of IEC 60317-0-1 nominal diameters, mm (brief: 0.020 mm to 5.000 mm). */
+export const IEC_DIAMETER_RANGE_MM = {
+  min: IEC_SMALLEST_DIAMETER_UM / 1000,
+  max: IEC_LARGEST_DIAMETER_UM / 1000,
+} as const;
+
+/**
+ * A diameter between the R20/R40 steps (0.350, 0.550, 0.650, 1.300 mm are commonly
+ * stocked): inside the standard's range, to the 0.001 mm the standard prints, but not a
+ * preferred number. `below` and `above` are the neighbouring nominal diameters.
+ */
+export interface IecIntermediateDiameter {
+  diameterMm: number;
+  series: null;
+  below: number;
+  above: number;
+  source: string;
+}
+
+export type IecDiameter = IecNominalDiameter | IecIntermediateDiameter;
+
+/** Why {@link findIecDiameter} refuses a diameter, in words for the person who typed it. */
+export function iecDiameterProblem(diameterMm: number): string | null {
+  if (typeof diameterMm !== "number" || !Number.isFinite(diameterMm)) {
+    return "The nominal diameter must be a number of mm.";
+  }
+  const { min, max } = IEC_DIAMETER_RANGE_MM;
+  if (
+    diameterMm < min - IEC_MATCH_TOLERANCE_MM ||
+    diameterMm > max + IEC_MATCH_TOLERANCE_MM
+  ) {
+    return `${diameterMm} mm is outside the IEC 60317-0-1 nominal diameters, ${min.toFixed(3)} mm to ${max.toFixed(3)} mm.`;
+  }
+  const micrometres = diameterMm * 1000;
+  if (Math.abs(micrometres - Math.round(micrometres)) > 1e-6) {
+    return `Give the nominal diameter to 0.001 mm, as IEC 60317-0-1 prints it (${diameterMm} mm has more decimals).`;
+  }
+  return null;
+}
+
+/**
+ * Any nominal diameter from 0.020 mm to 5.000 mm given to 0.001 mm: the R20/R40 row when
+ * it is one, else the size between two steps with its neighbours. Undefined when
+ * {@link iecDiameterProblem} has a reason.
+ */
+export function findIecDiameter(diameterMm: number): IecDiameter | undefined {
+  if (iecDiameterProblem(diameterMm) !== null) return undefined;
+  const nominal = findIecNominalDiameter(diameterMm);
+  if (nominal) return nominal;
+  const exact = Math.round(diameterMm * 1000) / 1000;
+  const above = IEC_NOMINAL_DIAMETERS.find((row) => row.diameterMm > exact);
+  const below = [...IEC_NOMINAL_DIAMETERS]
+    .reverse()
+    .find((row) => row.diameterMm < exact);
+  if (!above || !below) return undefined;
+  return {
+    diameterMm: exact,
+    series: null,
+    below: below.diameterMm,
+    above: above.diameterMm,
+    source: `Between the IEC 60317-0-1 nominal diameters ${below.diameterMm.toFixed(3)} mm and ${above.diameterMm.toFixed(3)} mm (not an R20/R40 step; commonly stocked sizes such as 0.350 mm are of this kind)`,
+  };
 }
 
 // ---------------------------------------------------------------------------
@@ -387,6 +460,44 @@ export function findPublishedMaxOverallDiameter(
 }
 
 /**
+ * ESTIMATE of the maximum overall diameter of an IEC wire between two published rows of
+ * the same grade: linear interpolation of the maximum overall diameter in the nominal
+ * diameter, d_o = d_o,lo + (d − d_lo) / (d_hi − d_lo) · (d_o,hi − d_o,lo). Null when `diameterMm`
+ * is not strictly between two published rows of that grade (0.200, 0.500 and 1.000 mm in
+ * the brief), or is a published row itself.
+ */
+export function interpolateIecMaxOverallDiameter(
+  diameterMm: number,
+  insulation: InsulationKey,
+): {
+  maxOverallDiameterMm: number;
+  lower: PublishedOverallDiameter;
+  upper: PublishedOverallDiameter;
+} | null {
+  if (!Number.isFinite(diameterMm)) return null;
+  const rows = PUBLISHED_MAX_OVERALL_DIAMETERS.filter(
+    (row) => row.standard === "IEC" && row.insulation === insulation,
+  ).sort((a, b) => Number(a.size) - Number(b.size));
+  for (let index = 0; index + 1 < rows.length; index += 1) {
+    const lower = rows[index]!;
+    const upper = rows[index + 1]!;
+    const dLow = Number(lower.size);
+    const dHigh = Number(upper.size);
+    if (diameterMm > dLow && diameterMm < dHigh) {
+      const share = (diameterMm - dLow) / (dHigh - dLow);
+      return {
+        maxOverallDiameterMm:
+          lower.maxOverallDiameterMm +
+          share * (upper.maxOverallDiameterMm - lower.maxOverallDiameterMm),
+        lower,
+        upper,
+      };
+    }
+  }
+  return null;
+}
+
+/**
  * ESTIMATE of the maximum overall diameter for sizes the brief does not tabulate.
  *
  * Method: the enamel increment (max overall − nominal bare diameter) is modelled as a
@@ -411,6 +522,7 @@ export function estimateMaxOverallDiameterMm(
   bareDiameterMm: number,
   insulation: InsulationKey,
 ): number | null {
+  if (!Number.isFinite(bareDiameterMm) || bareDiameterMm <= 0) return null;
   const fit = INCREMENT_FITS.find(
     (row) => row.standard === standard && row.insulation === insulation,
   );
@@ -602,6 +714,12 @@ export function isWireClassSufficient(
   wireClassC: number,
   motorClassC: number,
 ): boolean {
+  requireFinite(wireClassC, "wire.thermalClassC", "The wire's thermal class");
+  requireFinite(
+    motorClassC,
+    "insulationClassC",
+    "The motor's insulation class",
+  );
   return wireClassC >= motorClassC;
 }
 
@@ -645,8 +763,108 @@ export interface MagnetGrade {
   recoilPermeability: number;
   /** True when coercivity falls at low temperature (ferrite): the demagnetisation risk is when cold. */
   coercivityFallsWhenCold: boolean;
+  /**
+   * Reversible temperature coefficient of HcJ, 1/K (−0.006 = −0.6 %/K):
+   * HcJ(T) = HcJ20 · (1 + β · (T − 20)). Null when not known (an added grade
+   * without it): the material's typical value is used then.
+   */
+  hcjTemperatureCoefficientPerK: number | null;
+  /** Curie temperature, °C; null when not known (the material's typical value is used then). */
+  curieTemperatureC: number | null;
   source: string;
 }
+
+/**
+ * What limits the temperature models of a magnet material, and the typical HcJ
+ * coefficient and knee for grades that do not give their own.
+ *
+ * - Curie temperature: above it the material is no magnet at all.
+ * - linearBrModelMaxC: the top of the range over which the reversible Br coefficient
+ *   is used. The straight line Br(T) = Br20 · (1 + αBr · (T − 20)) is what makers
+ *   publish over roughly −50…150 °C; nearer the Curie point Br falls faster than the
+ *   line (it reaches zero at the Curie point, not where the line does: N42's line
+ *   reaches zero only at 20 + 1/0.0012 = 853 °C, far above its ≈ 310 °C Curie point).
+ *   The estimate uses the line up to the higher of this limit and the grade's own
+ *   maximum working temperature, and refuses above it (decision 038).
+ * - kneeFactor: H_k ≈ kneeFactor · HcJ(T), the field at which the intrinsic curve
+ *   bends and losses become irreversible.
+ */
+export interface MagnetMaterialLimits {
+  material: MagnetMaterial;
+  /** Name for messages: "sintered NdFeB". */
+  label: string;
+  curieTemperatureC: number;
+  linearBrModelMaxC: number;
+  /** Typical reversible HcJ coefficient, 1/K. */
+  hcjTemperatureCoefficientPerK: number;
+  kneeFactor: number;
+  source: string;
+}
+
+/** The lowest temperature the magnet models take, °C (the API's lowest). */
+export const MAGNET_LOWEST_TEMPERATURE_C = -70;
+
+export const MAGNET_MATERIAL_LIMITS: Readonly<
+  Record<MagnetMaterial, MagnetMaterialLimits>
+> = {
+  "sintered-ndfeb": {
+    material: "sintered-ndfeb",
+    label: "sintered NdFeB",
+    curieTemperatureC: 310,
+    linearBrModelMaxC: 150,
+    hcjTemperatureCoefficientPerK: -0.006,
+    kneeFactor: 0.9,
+    source:
+      "Curie temperature 310 °C (magnetsales.com NdFeB properties table; makers give 310–380 °C, higher with Dy and Co: the lowest is used); " +
+      "Br coefficient −0.08…−0.12 %/K published over −50…150 °C (US patent 4,902,360, background), so the line is used to 150 °C " +
+      "or the grade's rating; HcJ coefficient −0.5…−0.6 %/K (makers' published physical data, e.g. china-magnet.net sintered NdFeB table), " +
+      "by suffix from −0.60 %/K (none) to −0.45 %/K (AH); knee H_k ≈ 0.9 · HcJ (squareness of sintered grades, common practice, from memory)",
+  },
+  smco5: {
+    material: "smco5",
+    label: "SmCo5",
+    curieTemperatureC: 750,
+    linearBrModelMaxC: 250,
+    hcjTemperatureCoefficientPerK: -0.0028,
+    kneeFactor: 0.9,
+    source:
+      "Curie temperature 750 °C and maximum service temperature 250 °C (magnetsales.com SmCo properties table; sdmmagnetic.com SmCo5 table, Tc 750 °C); " +
+      "HcJ coefficient −0.28 %/K (sdmmagnetic.com SmCo5 table); line used to the service temperature (common practice); knee 0.9 · HcJ from memory",
+  },
+  sm2co17: {
+    material: "sm2co17",
+    label: "Sm2Co17",
+    curieTemperatureC: 825,
+    linearBrModelMaxC: 350,
+    hcjTemperatureCoefficientPerK: -0.002,
+    kneeFactor: 0.8,
+    source:
+      "Curie temperature 825 °C (magnetsales.com SmCo properties table); grades rated to 350 °C (same table; brief 300–350 °C); " +
+      "HcJ coefficient −0.20 %/K from memory, inside the −0.15…−0.30 %/K published for Sm-Co (vormagelectronics.com); knee 0.8 · HcJ from memory (2:17 loops are less square)",
+  },
+  "hard-ferrite": {
+    material: "hard-ferrite",
+    label: "hard ferrite",
+    curieTemperatureC: 450,
+    linearBrModelMaxC: 250,
+    hcjTemperatureCoefficientPerK: 0.0027,
+    kneeFactor: 0.9,
+    source:
+      "Curie temperature 450 °C (Sr-ferrite, comparison table of magnet materials, vectormagnets.com); usable to about 250 °C (brief; hsmagnets.com: 250 °C, 300 °C in some cases); " +
+      "HcJ coefficient +0.27 %/K, positive: coercivity rises with temperature (hsmagnets.com ferrite temperature note); knee 0.9 · HcJ from memory",
+  },
+  "bonded-ndfeb": {
+    material: "bonded-ndfeb",
+    label: "bonded NdFeB",
+    curieTemperatureC: 310,
+    linearBrModelMaxC: 150,
+    hcjTemperatureCoefficientPerK: -0.004,
+    kneeFactor: 0.7,
+    source:
+      "Curie temperature 310 °C, the lower end of 310–400 °C (comparison table of magnet materials, vectormagnets.com); " +
+      "line to 150 °C (binder-limited, from memory); HcJ coefficient −0.40 %/K and knee 0.7 · HcJ (isotropic, rounded loop) from memory",
+  },
+};
 
 interface NdfebBaseGrade {
   name: "N35" | "N38" | "N42" | "N45" | "N48" | "N52";
@@ -751,6 +969,28 @@ export const NDFEB_SUFFIXES: readonly {
   { suffix: "AH", hcjMinKAm: 2786, maxWorkingTemperatureC: 220 },
 ];
 
+/**
+ * Reversible HcJ coefficient of sintered NdFeB by suffix, 1/K: makers' tables give
+ * −0.5…−0.6 %/K (e.g. china-magnet.net), the grades with more HcJ at the small end. The
+ * split by suffix is from memory of makers' tables: none −0.60, M −0.58, H −0.55,
+ * SH −0.53, UH −0.50, EH −0.47, AH −0.45 %/K. The line is conservative near the top of
+ * the high grades' range (AH at 220 °C keeps 10 % of its 20 °C HcJ by it; measured
+ * curves keep more), so a knee warning there errs on the safe side.
+ */
+const NDFEB_HCJ_COEFFICIENT_PER_K: Readonly<Record<NdfebSuffix, number>> = {
+  "": -0.006,
+  M: -0.0058,
+  H: -0.0055,
+  SH: -0.0053,
+  UH: -0.005,
+  EH: -0.0047,
+  AH: -0.0045,
+};
+
+function ndfebHcjCoefficientPerK(suffix: NdfebSuffix): number {
+  return NDFEB_HCJ_COEFFICIENT_PER_K[suffix];
+}
+
 /** NdFeB constants common to all sintered grades (brief). */
 const NDFEB_BR_COEFFICIENT_PER_K = -0.0012;
 const NDFEB_DENSITY_G_PER_CM3 = 7.5;
@@ -782,12 +1022,18 @@ function buildNdfebGrades(): MagnetGrade[] {
         densityGPerCm3: NDFEB_DENSITY_G_PER_CM3,
         recoilPermeability: NDFEB_RECOIL_PERMEABILITY,
         coercivityFallsWhenCold: false,
+        hcjTemperatureCoefficientPerK: ndfebHcjCoefficientPerK(
+          suffixRow.suffix,
+        ),
+        curieTemperatureC:
+          MAGNET_MATERIAL_LIMITS["sintered-ndfeb"].curieTemperatureC,
         source:
           `Sintered NdFeB ${name}: Br, (BH)max and HcJ ${noSuffix ? `(${base.name} without suffix)` : `(suffix ${suffixRow.suffix})`}, ` +
           "max working temperature, αBr −0.12 %/K, 7.5 g/cm³, μrec 1.05 from makers' published tables (brief); " +
           `Br and (BH)max of the base grade ${base.name} used for every suffix (common practice); ` +
           "HcB from memory (makers' tables, base grade; suffixed grades list the same or higher); " +
-          "grade/suffix combinations offered: common practice",
+          "grade/suffix combinations offered: common practice; " +
+          `HcJ coefficient ${(ndfebHcjCoefficientPerK(suffixRow.suffix) * 100).toFixed(2)} %/K and Curie temperature 310 °C: see MAGNET_MATERIAL_LIMITS`,
       });
     }
   }
@@ -812,6 +1058,9 @@ const OTHER_MAGNET_GRADES: readonly MagnetGrade[] = [
     densityGPerCm3: 8.3,
     recoilPermeability: 1.05,
     coercivityFallsWhenCold: false,
+    hcjTemperatureCoefficientPerK:
+      MAGNET_MATERIAL_LIMITS["smco5"].hcjTemperatureCoefficientPerK,
+    curieTemperatureC: MAGNET_MATERIAL_LIMITS["smco5"].curieTemperatureC,
     source:
       "SmCo5: Br 0.80–1.00 T, 250 °C, −0.045 %/K, 8.3 g/cm³ (brief); HcB ≥ 600 kA/m, HcJ ≥ 1194 kA/m (15 kOe), " +
       "(BH)max 127–191 kJ/m³ (16–24 MGOe) and μrec 1.05 from memory",
@@ -833,6 +1082,9 @@ const OTHER_MAGNET_GRADES: readonly MagnetGrade[] = [
     densityGPerCm3: 8.4,
     recoilPermeability: 1.05,
     coercivityFallsWhenCold: false,
+    hcjTemperatureCoefficientPerK:
+      MAGNET_MATERIAL_LIMITS["sm2co17"].hcjTemperatureCoefficientPerK,
+    curieTemperatureC: MAGNET_MATERIAL_LIMITS["sm2co17"].curieTemperatureC,
     source:
       "Sm2Co17: Br 1.00–1.16 T, 300–350 °C (the lower bound 300 °C used), −0.03 %/K, 8.4 g/cm³ (brief); " +
       "HcB ≥ 680 kA/m, HcJ ≥ 1433 kA/m (18 kOe, standard coercivity), (BH)max 191–255 kJ/m³ (24–32 MGOe) and μrec 1.05 from memory",
@@ -854,6 +1106,9 @@ const OTHER_MAGNET_GRADES: readonly MagnetGrade[] = [
     densityGPerCm3: 4.9,
     recoilPermeability: 1.1,
     coercivityFallsWhenCold: true,
+    hcjTemperatureCoefficientPerK:
+      MAGNET_MATERIAL_LIMITS["hard-ferrite"].hcjTemperatureCoefficientPerK,
+    curieTemperatureC: MAGNET_MATERIAL_LIMITS["hard-ferrite"].curieTemperatureC,
     source:
       "Hard ferrite C5 ≈ Y30: Br 0.37–0.40 T, −0.20 %/K, 4.9 g/cm³, about 250 °C; coercivity falls when cold (brief); " +
       "HcB ≥ 175 kA/m, HcJ ≥ 180 kA/m, (BH)max 26–30 kJ/m³ and μrec 1.1 from memory",
@@ -875,6 +1130,9 @@ const OTHER_MAGNET_GRADES: readonly MagnetGrade[] = [
     densityGPerCm3: 6.0,
     recoilPermeability: 1.2,
     coercivityFallsWhenCold: false,
+    hcjTemperatureCoefficientPerK:
+      MAGNET_MATERIAL_LIMITS["bonded-ndfeb"].hcjTemperatureCoefficientPerK,
+    curieTemperatureC: MAGNET_MATERIAL_LIMITS["bonded-ndfeb"].curieTemperatureC,
     source:
       "Isotropic compression-bonded NdFeB: all values from memory (Br 0.60–0.70 T, HcB ≥ 380 kA/m, HcJ ≥ 640 kA/m, " +
       "(BH)max 64–80 kJ/m³, 120 °C limited by the binder, −0.13 %/K, 6.0 g/cm³, μrec 1.2)",
@@ -893,6 +1151,7 @@ function normaliseGradeName(name: string): string {
 
 /** The grade named `name` ("N42SH", "n42sh", "SmCo5", "Y30" …), or undefined. */
 export function findMagnetGrade(name: string): MagnetGrade | undefined {
+  if (typeof name !== "string") return undefined;
   const wanted = normaliseGradeName(name);
   return MAGNET_GRADES.find(
     (grade) =>

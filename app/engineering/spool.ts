@@ -43,5 +43,7 @@ export function massFromLengthKg(
   lengthM: number,
   bareLinearMassKgPerM: number,
 ): number {
+  requireNonNegative(lengthM, "lengthM", "Length");
+  requirePositive(bareLinearMassKgPerM, "linearMassKgPerM", "Linear mass");
   return lengthM * bareLinearMassKgPerM;
 }

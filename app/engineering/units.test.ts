@@ -13,6 +13,7 @@ import {
   perThousandFeetToPerKm,
   poundsToKg,
 } from "./units";
+import { EngineeringInputError } from "./errors";
 
 describe("unit conversions", () => {
   it("use the exact defining factors", () => {
@@ -24,6 +25,12 @@ describe("unit conversions", () => {
     expect(inchesToMm(12) / 1000).toBeCloseTo(feetToMetres(1), 15);
     // 0.005 in = 0.127 mm: AWG 36 (ASTM B258).
     expect(inchesToMm(0.005)).toBeCloseTo(0.127, 15);
+  });
+
+  it("agree with GNU units the other way round", () => {
+    // GNU units: "1000 m" → ft 3280.8399; "1 kg" → lb 2.2046226.
+    expect(metresToFeet(1000)).toBeCloseTo(3280.8399, 4);
+    expect(kgToPounds(1)).toBeCloseTo(2.2046226, 7);
   });
 
   it("go there and back", () => {
@@ -56,5 +63,34 @@ describe("unit conversions", () => {
     // Brief: AWG 18 is 6.386 Ω/1000 ft = 20.95 Ω/km; AWG 24 is 25.67 Ω/1000 ft = 84.22 Ω/km.
     expect(perThousandFeetToPerKm(6.386)).toBeCloseTo(20.95, 2);
     expect(perThousandFeetToPerKm(25.67)).toBeCloseTo(84.22, 2);
+  });
+});
+
+describe("refusals (issue 19, fix 6)", () => {
+  const fieldOf = (run: () => unknown) => {
+    try {
+      run();
+    } catch (error) {
+      if (error instanceof EngineeringInputError) return error.field;
+      throw error;
+    }
+    return undefined;
+  };
+
+  it("refuse NaN and infinities, naming the argument", () => {
+    expect(fieldOf(() => inchesToMm(Number.NaN))).toBe("inches");
+    expect(fieldOf(() => mmToInches(Number.POSITIVE_INFINITY))).toBe("mm");
+    expect(fieldOf(() => poundsToKg(Number.NaN))).toBe("pounds");
+    expect(fieldOf(() => perThousandFeetToPerKm(Number.NaN))).toBe(
+      "valuePerThousandFeet",
+    );
+  });
+
+  it("refuse temperatures below absolute zero (0 K = −273.15 °C = −459.67 °F, SI Brochure)", () => {
+    expect(fieldOf(() => celsiusToKelvin(-300))).toBe("celsius");
+    expect(fieldOf(() => kelvinToCelsius(-1))).toBe("kelvin");
+    expect(fieldOf(() => fahrenheitToCelsius(-500))).toBe("fahrenheit");
+    expect(fieldOf(() => celsiusToFahrenheit(-273.2))).toBe("celsius");
+    expect(celsiusToKelvin(-273.15)).toBe(0);
   });
 });

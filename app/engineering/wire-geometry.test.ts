@@ -171,15 +171,70 @@ describe("AWG bare diameter (ASTM B258)", () => {
 });
 
 describe("IEC bare diameter", () => {
-  it("is the nominal diameter, and only a nominal diameter", () => {
+  it("is the nominal diameter, R20/R40 step or not (issue 19, fix 8)", () => {
     expect(bareDiameterMm({ standard: "IEC", diameterMm: 0.8 })).toBe(0.8);
     expect(bareDiameterMm({ standard: "IEC", diameterMm: 1.06 })).toBe(1.06);
+    // Commonly stocked sizes between the steps (issue 19): refused before the fix.
+    for (const diameterMm of [0.35, 0.55, 0.65, 1.3, 0.81]) {
+      expect(bareDiameterMm({ standard: "IEC", diameterMm })).toBe(diameterMm);
+    }
+    // The standard's range is 0.020 mm to 5.000 mm (brief).
+    expect(bareDiameterMm({ standard: "IEC", diameterMm: 0.02 })).toBe(0.02);
+    expect(bareDiameterMm({ standard: "IEC", diameterMm: 5 })).toBe(5);
+    for (const diameterMm of [0.019, 5.001, 6.3, 0, -0.5, Number.NaN]) {
+      expect(
+        fieldOf(() => bareDiameterMm({ standard: "IEC", diameterMm })),
+      ).toBe("wire.diameterMm");
+    }
+    // Nominal diameters are printed to 0.001 mm: 0.3505 mm is not one.
     expect(
-      fieldOf(() => bareDiameterMm({ standard: "IEC", diameterMm: 0.81 })),
+      fieldOf(() => bareDiameterMm({ standard: "IEC", diameterMm: 0.3505 })),
     ).toBe("wire.diameterMm");
-    expect(
-      fieldOf(() => bareDiameterMm({ standard: "IEC", diameterMm: 6.3 })),
-    ).toBe("wire.diameterMm");
+  });
+
+  it("interpolates the overall diameter of 0.350 mm grade 2 between the published rows, flagged", () => {
+    // Hand-worked. The published IEC 60317-0-1 grade 2 rows either side of 0.350 mm are
+    // 0.200 mm → 0.239 mm and 0.500 mm → 0.566 mm (brief, two transcriptions):
+    // 0.239 + (0.350 − 0.200)/(0.500 − 0.200) × (0.566 − 0.239) = 0.239 + 0.5 × 0.327
+    // = 0.4025 mm.
+    const result = overallDiameter(
+      { standard: "IEC", diameterMm: 0.35 },
+      "grade2",
+    );
+    expectMatchesPrinted(result.overallDiameterMm ?? NaN, "0.4025");
+    expect(result.overallDiameterIsEstimate).toBe(true);
+    expect(result.overallDiameterSource).toContain("interpolated");
+    expect(result.overallDiameterSource).toContain("0.200 mm");
+    expect(result.overallDiameterSource).toContain("0.500 mm");
+    // 0.650 mm grade 1 between 0.500 (0.544) and 1.000 (1.062):
+    // 0.544 + 0.3 × 0.518 = 0.6994 mm.
+    expectMatchesPrinted(
+      overallDiameter({ standard: "IEC", diameterMm: 0.65 }, "grade1")
+        .overallDiameterMm ?? NaN,
+      "0.6994",
+    );
+    // It lies between the values for its neighbouring steps 0.335 and 0.355 mm.
+    const below = overallDiameter(
+      { standard: "IEC", diameterMm: 0.335 },
+      "grade2",
+    ).overallDiameterMm!;
+    const above = overallDiameter(
+      { standard: "IEC", diameterMm: 0.355 },
+      "grade2",
+    ).overallDiameterMm!;
+    expect(result.overallDiameterMm!).toBeGreaterThan(below);
+    expect(result.overallDiameterMm!).toBeLessThan(above);
+  });
+
+  it("falls back to the fitted estimate beyond the published rows (1.300 mm), still flagged", () => {
+    const result = overallDiameter(
+      { standard: "IEC", diameterMm: 1.3 },
+      "grade2",
+    );
+    expect(result.overallDiameterIsEstimate).toBe(true);
+    expect(result.overallDiameterSource).toContain("fitted");
+    // Above the bare 1.300 mm and above the published 1.000 mm grade 2 row's 1.093 mm.
+    expect(result.overallDiameterMm!).toBeGreaterThan(1.3);
   });
 });
 
@@ -221,13 +276,11 @@ describe("resistance, mass and length per mass", () => {
     );
   });
 
-  it("gives metres per kg as the inverse of kg per metre", () => {
-    for (const row of IEC_NOMINAL_DIAMETERS) {
-      const area = circleAreaMm2(row.diameterMm);
-      expect(
-        metresPerKg("copper", area) * linearMassKgPerM("copper", area),
-      ).toBeCloseTo(1, 12);
-    }
+  it("gives metres per kg of bare wire", () => {
+    // Hand-worked, 0.50 mm copper: 8.89 g/cm³ × π/4 × 0.25 mm² = 1.74555 g/m, so
+    // 1000 g / 1.74555 g/m = 572.886 m/kg (GNU units "1000/(8.89*pi/4*0.5^2)" → 572.88618;
+    // brief worked check 6: 4.80 kg ↔ 2749.9 m).
+    expectMatchesPrinted(metresPerKg("copper", circleAreaMm2(0.5)), "572.886");
     // Density g/cm³ × area mm² = g/m: 1 mm² of copper weighs 8.89 g/m (IEC 60028 density).
     expect(linearMassKgPerM("copper", 1)).toBeCloseTo(0.00889, 15);
     expect(linearMassKgPerM("aluminium", 1)).toBeCloseTo(0.002703, 15);
@@ -259,12 +312,13 @@ describe("overall diameter", () => {
   it("gives the NEMA MW 1000 rows for AWG 18 and 24 in mm", () => {
     // Brief, NEMA MW 1000: AWG 18 heavy 0.0437 in, AWG 24 triple 0.0238 in.
     const heavy18 = overallDiameter({ standard: "AWG", size: "18" }, "heavy");
-    expect(heavy18.overallDiameterMm).toBeCloseTo(0.0437 * 25.4, 12);
+    // 0.0437 in = 1.10998 mm (GNU units "0.0437 in" → mm).
+    expectMatchesPrinted(heavy18.overallDiameterMm ?? NaN, "1.10998");
     expect(heavy18.overallDiameterIsEstimate).toBe(false);
     expect(
       overallDiameter({ standard: "AWG", size: "24" }, "triple")
         .overallDiameterMm,
-    ).toBeCloseTo(0.0238 * 25.4, 12);
+    ).toBeCloseTo(0.60452, 12); // 0.0238 in = 0.60452 mm (GNU units).
   });
 
   it("estimates other sizes near the published rows, flagged, and gives null further away", () => {
@@ -321,7 +375,7 @@ describe("overall diameter", () => {
     // AWG rows (brief): the two-point fit passes through both.
     const bare18 = findAwgSize("18")?.bareDiameterMm ?? NaN;
     expect(estimateMaxOverallDiameterMm("AWG", bare18, "single")).toBeCloseTo(
-      0.0424 * 25.4,
+      1.07696, // 0.0424 in (GNU units → 1.07696 mm)
       9,
     );
   });
@@ -374,5 +428,36 @@ describe("overall diameter", () => {
     expect(
       fieldOf(() => overallDiameter({ standard: "AWG", size: "18" }, "grade2")),
     ).toBe("insulation");
+  });
+});
+
+describe("refusals (issue 19, fix 6)", () => {
+  it("name the field of NaN, negative or infinite input", () => {
+    expect(fieldOf(() => circleAreaMm2(-1))).toBe("diameterMm");
+    expect(fieldOf(() => circleAreaMm2(Number.NaN))).toBe("diameterMm");
+    // Before the fix: a negative section gave a negative mass and resistance.
+    expect(fieldOf(() => linearMassKgPerM("copper", -0.5))).toBe("areaMm2");
+    expect(fieldOf(() => resistancePerMetreOhm("copper", 0))).toBe("areaMm2");
+    expect(fieldOf(() => metresPerKg("copper", 0))).toBe("areaMm2");
+    expect(
+      fieldOf(() => resistancePerMetreOhm("copper", 0.5, Number.NaN)),
+    ).toBe("temperatureC");
+    // Copper's linear R(T) would reach zero at 20 − 1/0.00393 = −234.5 °C; the model is
+    // used from −70 °C to 400 °C.
+    expect(fieldOf(() => resistancePerMetreOhm("copper", 0.5, -300))).toBe(
+      "temperatureC",
+    );
+    expect(
+      fieldOf(() =>
+        wireProperties({
+          conductor: "copper",
+          wire: { standard: "IEC", diameterMm: 0.5 },
+          temperatureC: Number.POSITIVE_INFINITY,
+        }),
+      ),
+    ).toBe("temperatureC");
+    expect(fieldOf(() => resistancePerMetreOhm("gold" as "copper", 0.5))).toBe(
+      "conductor",
+    );
   });
 });

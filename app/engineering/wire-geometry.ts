@@ -2,27 +2,44 @@
  * Geometry, mass and resistance of one round magnet-wire strand.
  *
  * - AWG bare diameter by the ASTM B258 formula (never the rounded table).
- * - IEC bare diameter is the nominal diameter of IEC 60317-0-1 (must be in the table).
- * - Overall diameter: the published maximum where known, else a labelled estimate,
- *   else null (see `estimateMaxOverallDiameterMm` in reference-data).
+ * - IEC bare diameter is the nominal diameter: any size of IEC 60317-0-1's range
+ *   (0.020–5.000 mm, to 0.001 mm), the R20/R40 steps and the sizes between them.
+ * - Overall diameter: the published maximum where known; for a size between the R20/R40
+ *   steps, interpolated between the neighbouring published rows; else the fitted
+ *   estimate; else null. Every value not printed in the standard is flagged an estimate
+ *   (see `interpolateIecMaxOverallDiameter` and `estimateMaxOverallDiameterMm`).
  * - R(T) = R20 · (1 + α20 · (T − 20)) (brief; IEC 60028 for copper).
  *
  * Errors are {@link EngineeringInputError}s whose `field` is the API's input path:
  * "wire.size", "wire.diameterMm", "insulation", "conductor".
  */
 
-import { EngineeringInputError } from "./errors";
+import {
+  EngineeringInputError,
+  requirePositive,
+  requireWithin,
+} from "./errors";
 import {
   awgFormulaDiameterMm,
   conductorMaterial,
   estimateMaxOverallDiameterMm,
   findAwgSize,
-  findIecNominalDiameter,
+  findIecDiameter,
   findInsulationKind,
   findPublishedMaxOverallDiameter,
+  iecDiameterProblem,
+  interpolateIecMaxOverallDiameter,
   type ConductorKey,
   type InsulationKey,
 } from "./reference-data";
+
+/**
+ * Conductor temperatures the linear model R(T) = R20 · (1 + α20 · (T − 20)) is used for,
+ * °C: the API's plausible range. Copper's linear resistance would reach zero only at
+ * 20 − 1/0.00393 = −234.5 °C, far below; above 400 °C no enamel survives (the highest
+ * thermal class is 220, IEC 60085).
+ */
+export const CONDUCTOR_TEMPERATURE_RANGE_C = { min: -70, max: 400 } as const;
 
 /** A wire size as the API takes it. */
 export type WireSpec =
@@ -30,7 +47,7 @@ export type WireSpec =
 
 /** Bare diameter (mm) of an AWG size label ("20", "0000", "4/0") by the ASTM B258 formula. */
 export function awgBareDiameterMm(size: string): number {
-  const awgSize = findAwgSize(size);
+  const awgSize = findAwgSize(typeof size === "number" ? String(size) : size);
   if (!awgSize) {
     throw new EngineeringInputError(
       "wire.size",
@@ -40,16 +57,20 @@ export function awgBareDiameterMm(size: string): number {
   return awgFormulaDiameterMm(awgSize.gaugeNumber);
 }
 
-/** Bare diameter (mm) of an IEC 60317-0-1 nominal size; throws when it is not in the table. */
+/**
+ * Bare diameter (mm) of an IEC 60317-0-1 nominal size: an R20/R40 step or a size between
+ * the steps (0.350 mm), from 0.020 mm to 5.000 mm, to 0.001 mm. Throws otherwise.
+ */
 export function iecBareDiameterMm(diameterMm: number): number {
-  const nominal = findIecNominalDiameter(diameterMm);
-  if (!nominal) {
+  const diameter = findIecDiameter(diameterMm);
+  if (!diameter) {
     throw new EngineeringInputError(
       "wire.diameterMm",
-      `${diameterMm} mm is not an IEC 60317-0-1 nominal diameter (R20/R40 series from 0.020 mm to 5.000 mm, e.g. 0.800 or 0.850).`,
+      iecDiameterProblem(diameterMm) ??
+        `${diameterMm} mm is not an IEC 60317-0-1 nominal diameter.`,
     );
   }
-  return nominal.diameterMm;
+  return diameter.diameterMm;
 }
 
 /** Bare conductor diameter of one strand, mm. */
@@ -61,6 +82,7 @@ export function bareDiameterMm(wire: WireSpec): number {
 
 /** Area of a circle of diameter `diameterMm`, mm². */
 export function circleAreaMm2(diameterMm: number): number {
+  requirePositive(diameterMm, "diameterMm", "The diameter");
   return (Math.PI / 4) * diameterMm * diameterMm;
 }
 
@@ -135,6 +157,23 @@ export function overallDiameter(
     };
   }
 
+  if (wire.standard === "IEC") {
+    const between = interpolateIecMaxOverallDiameter(bare, insulation);
+    const diameter = findIecDiameter(bare);
+    if (between && diameter && diameter.series === null) {
+      const lower = between.lower;
+      const upper = between.upper;
+      return {
+        overallDiameterMm: between.maxOverallDiameterMm,
+        overallDiameterIsEstimate: true,
+        overallDiameterSource:
+          `ESTIMATE: ${bare.toFixed(3)} mm lies between the R20/R40 steps; maximum overall diameter ` +
+          `interpolated linearly between the IEC 60317-0-1 ${insulation.replace("grade", "grade ")} rows ${lower.size} mm ` +
+          `(${lower.maxOverallDiameterMm.toFixed(3)} mm) and ${upper.size} mm (${upper.maxOverallDiameterMm.toFixed(3)} mm), not a standard value`,
+      };
+    }
+  }
+
   const estimate = estimateMaxOverallDiameterMm(
     wire.standard,
     bare,
@@ -155,6 +194,14 @@ export function resistanceTemperatureFactor(
   conductor: ConductorKey,
   temperatureC: number,
 ): number {
+  requireWithin(
+    temperatureC,
+    "temperatureC",
+    "The conductor temperature",
+    CONDUCTOR_TEMPERATURE_RANGE_C.min,
+    CONDUCTOR_TEMPERATURE_RANGE_C.max,
+    "°C",
+  );
   return (
     1 +
     conductorMaterial(conductor).temperatureCoefficient20PerK *
@@ -179,6 +226,7 @@ export function resistancePerMetreOhm(
   areaMm2: number,
   temperatureC = 20,
 ): number {
+  requirePositive(areaMm2, "areaMm2", "The conductor section");
   return resistivityOhmMm2PerM(conductor, temperatureC) / areaMm2;
 }
 
@@ -191,6 +239,7 @@ export function linearMassKgPerM(
   conductor: ConductorKey,
   areaMm2: number,
 ): number {
+  requirePositive(areaMm2, "areaMm2", "The conductor section");
   return (conductorMaterial(conductor).densityGPerCm3 * areaMm2) / 1000;
 }
 

@@ -305,6 +305,15 @@ export const magnetShapeSchema = z.discriminatedUnion(
   },
 );
 
+/** The magnet materials the engineering modules know (MagnetMaterial in app/engineering/reference-data.ts). */
+export const magnetMaterialKeys = [
+  "sintered-ndfeb",
+  "smco5",
+  "sm2co17",
+  "hard-ferrite",
+  "bonded-ndfeb",
+] as const;
+
 /** Properties of a magnet material not in the grade table (e.g. from a maker's data sheet). */
 export const magnetPropertiesSchema = z.object({
   name: z.string().trim().min(1).max(40).default("Custom"),
@@ -330,6 +339,30 @@ export const magnetPropertiesSchema = z.object({
   maxWorkingTemperatureC: number("the maximum working temperature")
     .min(-70)
     .max(600),
+  /** The material sets the Curie temperature, linear range and knee used when not given; default sintered NdFeB. */
+  material: z
+    .enum(magnetMaterialKeys, {
+      error: `The material must be one of ${magnetMaterialKeys.join(", ")}.`,
+    })
+    .default("sintered-ndfeb"),
+  hcjKAm: number("HcJ at 20 °C")
+    .gt(0, "HcJ must be more than 0 kA/m.")
+    .max(4000, "HcJ must be at most 4,000 kA/m.")
+    .nullish(),
+  hcjTemperatureCoefficientPerK: number("the HcJ temperature coefficient")
+    .min(
+      -0.02,
+      "The HcJ temperature coefficient must be between −0.02 and +0.01 per K.",
+    )
+    .max(
+      0.01,
+      "The HcJ temperature coefficient must be between −0.02 and +0.01 per K.",
+    )
+    .nullish(),
+  curieTemperatureC: number("the Curie temperature")
+    .min(100, "The Curie temperature must be between 100 and 1,000 °C.")
+    .max(1000, "The Curie temperature must be between 100 and 1,000 °C.")
+    .nullish(),
 });
 
 export const magnetEstimateRequestSchema = z
@@ -354,6 +387,10 @@ export const magnetEstimateRequestSchema = z
     airGapMm: number("the air gap")
       .min(0, "The air gap cannot be negative.")
       .max(1_000, "The air gap must be at most 1,000 mm.")
+      .nullish(),
+    demagnetisingFieldKAm: number("the demagnetising field")
+      .min(0, "The demagnetising field cannot be negative.")
+      .max(10_000, "The demagnetising field must be at most 10,000 kA/m.")
       .nullish(),
   })
   .refine((value) => Boolean(value.grade) !== Boolean(value.properties), {

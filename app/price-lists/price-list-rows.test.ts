@@ -133,6 +133,16 @@ describe("good rows", () => {
     });
   });
 
+  it("reads an IEC size between the R20/R40 steps, 0,35 mm (issue 19, fix 8)", () => {
+    // 0.350 mm is commonly stocked but not an R40 number (0.335 and 0.355 are, ISO 3).
+    expect(
+      read(
+        { ...awgWire, standard: "IEC", size: "0,35", insulation: "G2" },
+        { decimalComma: true },
+      ),
+    ).toMatchObject({ ok: true, row: { size: "0.350", insulation: "grade2" } });
+  });
+
   it("reads the aught AWG sizes as the reference tables label them", () => {
     expect(read({ ...awgWire, size: "4/0" })).toMatchObject({
       row: { size: "0000" },
@@ -294,10 +304,13 @@ describe("bad wire and magnet details", () => {
 
   it("refuses an IEC size that is not a nominal diameter", () => {
     expect(
-      messageOf(read({ ...awgWire, standard: "IEC", size: "0.333" })),
+      messageOf(read({ ...awgWire, standard: "IEC", size: "0.3333" })),
     ).toBe(
-      'Line 14: the IEC size "0.333" (column "size") is not an IEC 60317 nominal diameter in mm (0.020 to 5.000, such as 0.500).',
+      'Line 14: the IEC size "0.3333" (column "size") is not an IEC 60317 nominal diameter in mm (0.020 to 5.000, given to 0.001 mm, such as 0.500 or 0.350).',
     );
+    expect(
+      messageOf(read({ ...awgWire, standard: "IEC", size: "6.3" })),
+    ).toContain("is not an IEC 60317 nominal diameter");
   });
 
   it("refuses an unknown magnet grade", () => {

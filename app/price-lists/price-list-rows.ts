@@ -15,7 +15,7 @@
  * Pure: runs in Node and in the browser.
  */
 import {
-  findIecNominalDiameter,
+  findIecDiameter,
   type InsulationKey,
   type ThermalClass,
   type WireStandard,
@@ -373,11 +373,11 @@ function readWire(
   if (standard === "IEC" && sizeCell !== "") {
     const diameterMm = readDiameterMm(sizeCell, context.decimalComma);
     const nominal =
-      diameterMm === undefined ? undefined : findIecNominalDiameter(diameterMm);
+      diameterMm === undefined ? undefined : findIecDiameter(diameterMm);
     size = nominal ? iecSizeLabel(nominal.diameterMm) : undefined;
     if (!size) {
       problems.push(
-        `the IEC size ${cells.ref("size")} is not an IEC 60317 nominal diameter in mm (0.020 to 5.000, such as 0.500)`,
+        `the IEC size ${cells.ref("size")} is not an IEC 60317 nominal diameter in mm (0.020 to 5.000, given to 0.001 mm, such as 0.500 or 0.350)`,
       );
     }
   }

@@ -77,6 +77,11 @@ export async function addMagnetGrade(
       brTemperatureCoefficientPerK: (
         form.brTemperatureCoefficientPercentPerK / 100
       ).toFixed(6),
+      hcjTemperatureCoefficientPerK:
+        form.hcjTemperatureCoefficientPercentPerK === undefined
+          ? null
+          : (form.hcjTemperatureCoefficientPercentPerK / 100).toFixed(6),
+      curieTemperatureC: form.curieTemperatureC ?? null,
       densityGPerCm3: String(form.densityGPerCm3),
       recoilPermeability: String(form.recoilPermeability),
       coercivityFallsWhenCold: form.coercivityFallsWhenCold,

@@ -59,6 +59,52 @@ describe("the add-grade form", () => {
     ]);
   });
 
+  it("takes the HcJ coefficient and Curie temperature as optional fields (issue 19, fix 2)", () => {
+    const without = magnetGradeFormSchema.parse(dataSheet);
+    expect(without.hcjTemperatureCoefficientPercentPerK).toBeUndefined();
+    expect(without.curieTemperatureC).toBeUndefined();
+    const withThem = magnetGradeFormSchema.parse({
+      ...dataSheet,
+      hcjTemperatureCoefficientPercentPerK: -0.55,
+      curieTemperatureC: 330,
+    });
+    expect(withThem).toMatchObject({
+      hcjTemperatureCoefficientPercentPerK: -0.55,
+      curieTemperatureC: 330,
+    });
+  });
+
+  it("refuses a Curie point at or below the working temperature and an HcJ coefficient of the wrong sign", () => {
+    expect(
+      messages({ curieTemperatureC: 150 }).curieTemperatureC?.[0],
+    ).toContain("above the maximum working temperature (150 °C)");
+    expect(messages({ curieTemperatureC: 3100 }).curieTemperatureC).toEqual([
+      "The Curie temperature must be between 100 and 1000 °C.",
+    ]);
+    expect(
+      messages({ curieTemperatureC: 330.5 }).curieTemperatureC,
+    ).toBeDefined();
+    // NdFeB's HcJ falls as it warms (makers' tables −0.5…−0.6 %/K).
+    expect(
+      messages({ hcjTemperatureCoefficientPercentPerK: 0.5 })
+        .hcjTemperatureCoefficientPercentPerK?.[0],
+    ).toContain("negative");
+    // Ferrite's rises (+0.27 %/K, hsmagnets.com).
+    expect(
+      messages({
+        material: "hard-ferrite",
+        temperatureSuffix: undefined,
+        hcjTemperatureCoefficientPercentPerK: -0.27,
+      }).hcjTemperatureCoefficientPercentPerK?.[0],
+    ).toContain("positive");
+    expect(
+      messages({ hcjTemperatureCoefficientPercentPerK: -5 })
+        .hcjTemperatureCoefficientPercentPerK,
+    ).toEqual([
+      "The HcJ temperature coefficient must be between −1 and 1 %/K.",
+    ]);
+  });
+
   it("holds (BH)max under Br²/(4μ0), which every built-in grade respects", () => {
     // Textbook magnetostatics: an ideal magnet with μrec = 1 and Br = 1.37 T reaches 373.4 kJ/m³.
     expect(idealMaxEnergyProductKJm3(1.37)).toBeCloseTo(373.4, 1);

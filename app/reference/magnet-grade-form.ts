@@ -82,6 +82,17 @@ export const magnetGradeFormSchema = z
       -0.5,
       0,
     ),
+    /** Optional: the material's typical value is used without it (reference-data MAGNET_MATERIAL_LIMITS). */
+    hcjTemperatureCoefficientPercentPerK: number(
+      "the HcJ temperature coefficient",
+      "%/K",
+      -1,
+      1,
+    ).optional(),
+    /** Optional: the material's typical value is used without it. */
+    curieTemperatureC: number("the Curie temperature", "°C", 100, 1000)
+      .int("Give the Curie temperature in whole degrees.")
+      .optional(),
     densityGPerCm3: number("the density", "g/cm³", 1, 10),
     recoilPermeability: number("the recoil permeability", "", 1, 2),
     coercivityFallsWhenCold: z.boolean().default(false),
@@ -137,6 +148,37 @@ export const magnetGradeFormSchema = z
         path: ["bhMaxMaxKJm3"],
         message: `With Br at most ${value.brMaxT} T, (BH)max cannot exceed Br²/(4μ0) = ${limit.toFixed(0)} kJ/m³.`,
       });
+    }
+    if (
+      value.curieTemperatureC !== undefined &&
+      value.curieTemperatureC <= value.maxWorkingTemperatureC
+    ) {
+      context.addIssue({
+        code: "custom",
+        path: ["curieTemperatureC"],
+        message: `The Curie temperature must be above the maximum working temperature (${value.maxWorkingTemperatureC} °C): at the Curie point the magnet loses all its magnetisation.`,
+      });
+    }
+    const hcjCoefficient = value.hcjTemperatureCoefficientPercentPerK;
+    if (hcjCoefficient !== undefined) {
+      // Published signs: HcJ falls as NdFeB and SmCo warm (−0.2…−0.6 %/K) and rises as
+      // hard ferrite warms (about +0.27 %/K); see MAGNET_MATERIAL_LIMITS.
+      if (value.material === "hard-ferrite" && hcjCoefficient <= 0) {
+        context.addIssue({
+          code: "custom",
+          path: ["hcjTemperatureCoefficientPercentPerK"],
+          message:
+            "Hard ferrite's HcJ rises as it warms: its coefficient is positive, about +0.2 to +0.4 %/K.",
+        });
+      }
+      if (value.material !== "hard-ferrite" && hcjCoefficient >= 0) {
+        context.addIssue({
+          code: "custom",
+          path: ["hcjTemperatureCoefficientPercentPerK"],
+          message:
+            "HcJ of NdFeB and SmCo falls as they warm: the coefficient is negative, e.g. −0.6 %/K for NdFeB, −0.3 %/K for SmCo.",
+        });
+      }
     }
     if (value.temperatureSuffix && value.material !== "sintered-ndfeb") {
       context.addIssue({

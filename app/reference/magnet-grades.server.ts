@@ -24,6 +24,11 @@ export function magnetGradeFromRow(row: Row): MagnetGrade {
     densityGPerCm3: Number(row.densityGPerCm3),
     recoilPermeability: Number(row.recoilPermeability),
     coercivityFallsWhenCold: row.coercivityFallsWhenCold,
+    hcjTemperatureCoefficientPerK:
+      row.hcjTemperatureCoefficientPerK === null
+        ? null
+        : Number(row.hcjTemperatureCoefficientPerK),
+    curieTemperatureC: row.curieTemperatureC,
     source: row.source,
   };
 }

@@ -176,6 +176,11 @@ export async function syncReferenceData(db: Database): Promise<void> {
             densityGPerCm3: text(row.densityGPerCm3),
             recoilPermeability: text(row.recoilPermeability),
             coercivityFallsWhenCold: row.coercivityFallsWhenCold,
+            hcjTemperatureCoefficientPerK:
+              row.hcjTemperatureCoefficientPerK === null
+                ? null
+                : row.hcjTemperatureCoefficientPerK.toFixed(6),
+            curieTemperatureC: row.curieTemperatureC,
             source: row.source,
             builtIn: true,
           })),
@@ -198,6 +203,8 @@ export async function syncReferenceData(db: Database): Promise<void> {
             "density_g_per_cm3",
             "recoil_permeability",
             "coercivity_falls_when_cold",
+            "hcj_temperature_coefficient_per_k",
+            "curie_temperature_c",
             "source",
             "built_in",
           ]),

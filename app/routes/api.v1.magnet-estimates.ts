@@ -27,26 +27,32 @@ function gradeFromProperties(
     key: "custom",
     name: properties.name,
     aliases: [],
-    material: "sintered-ndfeb",
+    material: properties.material,
     temperatureSuffix: null,
     brMinT: properties.br20T,
     brMaxT: properties.br20T,
     hcbMinKAm: 0,
-    hcjMinKAm: 0,
+    // 0 when not given: the estimate then makes no knee check.
+    hcjMinKAm: properties.hcjKAm ?? 0,
     bhMaxMinKJm3: 0,
     bhMaxMaxKJm3: 0,
     maxWorkingTemperatureC: properties.maxWorkingTemperatureC,
     brTemperatureCoefficientPerK: properties.brTemperatureCoefficientPerK,
     densityGPerCm3: properties.densityGPerCm3,
     recoilPermeability: properties.recoilPermeability,
-    coercivityFallsWhenCold: false,
+    coercivityFallsWhenCold: properties.material === "hard-ferrite",
+    hcjTemperatureCoefficientPerK:
+      properties.hcjTemperatureCoefficientPerK ?? null,
+    curieTemperatureC: properties.curieTemperatureC ?? null,
     source: "typed by the user",
   };
 }
 
 /**
- * POST /api/v1/magnet-estimates: volume, mass, Br at temperature and air-gap flux
- * density of magnets of a grade (from the grade table) or of typed properties.
+ * POST /api/v1/magnet-estimates: volume, mass, Br and HcJ at temperature, air-gap flux
+ * density and the knee check of magnets of a grade (from the grade table) or of typed
+ * properties. A temperature outside the grade's usable range (at or above the Curie
+ * temperature, or past the top of the linear Br model) is a 400 on temperatureC.
  */
 export async function action({ request }: Route.ActionArgs) {
   await requireUser(request);

@@ -11,9 +11,23 @@ import type { EstimatedInput } from "~/components/estimators/magnet-estimate-res
 import { startingMagnetInput } from "~/components/estimators/magnet-estimator-form";
 import { useMagnetEstimate } from "~/components/estimators/use-magnet-estimate";
 import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
-import { estimateMagnet } from "~/engineering/magnet-estimate";
+import {
+  estimateMagnet,
+  magnetTemperatureRange,
+} from "~/engineering/magnet-estimate";
+import type { MagnetGrade } from "~/engineering/reference-data";
 import { listMagnetGrades } from "~/reference/magnet-grades.server";
 import { compareMagnetGrades } from "~/reference/magnet-materials";
+
+/** The temperatures the estimate answers for a grade, for the field's hint. */
+function usableTemperatures(grade: MagnetGrade) {
+  const range = magnetTemperatureRange(grade);
+  return {
+    usableMinC: range.minC,
+    usableMaxC: range.maxC,
+    curieTemperatureC: range.curieTemperatureC,
+  };
+}
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
@@ -26,6 +40,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     : startingMagnetInput;
   return {
     grades: grades.map((grade) => ({
+      ...usableTemperatures(grade),
       name: grade.name,
       material: grade.material,
       brMinT: grade.brMinT,

@@ -9,7 +9,8 @@ import { isDuplicateKey } from "~/db/database-errors";
 import { items, magnetItems, wireItems } from "~/db/schema";
 import {
   findAwgSize,
-  findIecNominalDiameter,
+  findIecDiameter,
+  iecDiameterProblem,
 } from "~/engineering/reference-data";
 import { magnetVolumeMm3 } from "~/engineering/magnet-estimate";
 import { findMagnetGradeByName } from "~/reference/magnet-grades.server";
@@ -82,11 +83,16 @@ export async function createItem(
         );
       sizeLabel = size.label;
     } else {
-      const diameter = findIecNominalDiameter(Number(input.size));
+      // Any nominal diameter of IEC 60317-0-1's range, the R20/R40 steps and the sizes
+      // between them (0.350 mm), to 0.001 mm.
+      const diameterMm =
+        input.size.trim() === "" ? Number.NaN : Number(input.size);
+      const diameter = findIecDiameter(diameterMm);
       if (!diameter)
         throw new DomainError(
           400,
-          `${input.size} mm is not an IEC 60317 nominal diameter.`,
+          iecDiameterProblem(diameterMm) ??
+            `${input.size} mm is not an IEC 60317 nominal diameter.`,
           "size",
         );
       sizeLabel = iecSizeLabel(diameter.diameterMm);

@@ -8,7 +8,7 @@
 import { z } from "zod";
 import { isEngineeringInputError } from "~/engineering/errors";
 import { magnetVolumeMm3 } from "~/engineering/magnet-estimate";
-import { ENAMELS } from "~/engineering/reference-data";
+import { ENAMELS, iecDiameterProblem } from "~/engineering/reference-data";
 import { insulationKeys } from "~/lib/estimate-requests";
 import {
   magnetItemSchema,
@@ -55,6 +55,13 @@ export const newItemFormSchema = z
             message: "Pieces are counted whole: give a whole number.",
           });
         }
+      }
+    }
+    if (value.kind === "wire" && value.standard === "IEC") {
+      const diameterMm = value.size === "" ? Number.NaN : Number(value.size);
+      const problem = iecDiameterProblem(diameterMm);
+      if (problem) {
+        context.addIssue({ code: "custom", path: ["size"], message: problem });
       }
     }
     if (value.kind === "magnet") {

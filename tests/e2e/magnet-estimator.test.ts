@@ -93,14 +93,24 @@ describe("magnet estimator", () => {
     expect(await page.getByRole("list", { name: "Warnings" }).count()).toBe(0);
     await saveScreenshot(page, "magnet-estimator");
 
-    // 200 °C is past N42SH's 150 °C (brief: SH → 150 °C).
-    await page
-      .getByLabel("Magnet temperature (°C)", { exact: true })
-      .fill("200");
+    // 200 °C is past N42SH's 150 °C rating and the 150 °C top of sintered NdFeB's linear
+    // Br model (decision 038): the API refuses it, and the message stands beside the field.
+    const temperature = page.getByLabel("Magnet temperature (°C)", {
+      exact: true,
+    });
+    await temperature.fill("200");
+    await expect
+      .poll(() => page.getByRole("form", { name: "Magnet" }).textContent())
+      .toContain("200 °C is above 150 °C");
+    await saveScreenshot(page, "magnet-estimator-out-of-range");
+
+    // N42 at 140 °C is past its 80 °C rating (brief: no suffix → 80 °C) but inside the model.
+    await page.getByLabel("Grade", { exact: true }).selectOption("N42");
+    await temperature.fill("140");
     const warnings = page.getByRole("list", { name: "Warnings" });
     await warnings.waitFor();
     await expect(warnings.textContent()).resolves.toContain(
-      "above the 150 °C maximum working temperature of N42SH",
+      "above the 80 °C maximum working temperature of N42",
     );
     await saveScreenshot(page, "magnet-estimator-too-hot");
 
@@ -133,6 +143,34 @@ describe("magnet estimator", () => {
       ),
     ).toBe(true);
     expect(new URL(page.url()).pathname).toBe("/tools/magnet-estimator");
+    await page.close();
+  });
+
+  it("shows HcJ at temperature and warns when a thin magnet over a large gap passes its knee", async () => {
+    const page = await signIn(browser, "builder");
+    await openEstimator(page);
+    await page.getByLabel("Grade", { exact: true }).selectOption("N42");
+    await page.getByLabel("Height (mm)", { exact: true }).fill("1");
+    await page
+      .getByLabel("Magnet temperature (°C)", { exact: true })
+      .fill("150");
+    await page
+      .getByLabel("Magnet length along magnetisation (mm)", { exact: true })
+      .fill("1");
+    await page.getByLabel("Air gap (mm)", { exact: true }).fill("5");
+    // Hand-worked (app/engineering/magnet-estimate.test.ts): HcJ 955 × 0.22 = 210 kA/m;
+    // H_m 698 kA/m against a knee of 0.9 × 210.1 = 189 kA/m.
+    await expect
+      .poll(() => resultValue(page, "HcJ at 150 °C"))
+      .toBe("210 kA/m");
+    await expect
+      .poll(() => resultValue(page, "Field in the magnet against its knee"))
+      .toBe("698 kA/m of 189 kA/m");
+    const warnings = page.getByRole("list", { name: "Warnings" });
+    await expect(warnings.textContent()).resolves.toContain(
+      "passes the knee of N42 at 150 °C",
+    );
+    await saveScreenshot(page, "magnet-estimator-past-knee");
     await page.close();
   });
 

@@ -61,11 +61,13 @@ async function chooseSupplierAndFile(
   await page
     .getByLabel("Supplier", { exact: true })
     .selectOption({ label: `${supplier} (${currency})` });
-  await page.getByLabel("Price list (CSV or .xlsx, up to 20 MB)").setInputFiles({
-    name,
-    mimeType: "text/csv",
-    buffer: Buffer.from(`${lines.join("\n")}\n`, "utf-8"),
-  });
+  await page
+    .getByLabel("Price list (CSV or .xlsx, up to 20 MB)")
+    .setInputFiles({
+      name,
+      mimeType: "text/csv",
+      buffer: Buffer.from(`${lines.join("\n")}\n`, "utf-8"),
+    });
   await page.getByText(`${name}:`).waitFor();
 }
 

@@ -171,7 +171,7 @@ describe("stock pages in the browser", () => {
       .fill("Enamelled copper 0.50 mm, grade 2, class 155");
     await page.getByLabel("Conductor").selectOption("copper");
     await page.getByLabel("Sizes").selectOption("IEC");
-    await page.getByLabel("Nominal diameter (mm)").selectOption("0.500");
+    await page.getByLabel("Nominal diameter (mm)").fill("0.500");
     await page.getByLabel("Insulation").selectOption("grade2");
     await page.getByLabel("Thermal class").selectOption("155");
     await page.getByLabel("Enamel").selectOption("polyesterimide");

@@ -95,7 +95,7 @@ describe("POST /api/v1/coil-estimates", () => {
     ["turns", { turns: 100_001 }],
     ["wire", { wire: undefined }],
     ["wire.size", { wire: { standard: "AWG", size: "99" } }],
-    ["wire.diameterMm", { wire: { standard: "IEC", diameterMm: 0.81 } }],
+    ["wire.diameterMm", { wire: { standard: "IEC", diameterMm: 0.8105 } }],
     ["activeLengthMm", { activeLengthMm: 0 }],
     ["activeLengthMm", { activeLengthMm: 100_001 }],
     ["endTurnLengthMm", { endTurnLengthMm: -1 }],

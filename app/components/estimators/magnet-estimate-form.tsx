@@ -6,8 +6,17 @@ import {
   MagnetDimensionInputs,
   MagnetShapePicker,
 } from "~/components/magnet-shape-fields";
-import { MagnetGradeSelect } from "./magnet-grade-select";
+import { MagnetGradeSelect, type GradeChoice } from "./magnet-grade-select";
 import type { MagnetEstimatorFields } from "./use-magnet-estimate";
+
+/** "N42 is estimated from −70 to 150 °C; its Curie point is about 310 °C." */
+function temperatureHint(grade: GradeChoice | undefined): string | undefined {
+  if (!grade) return undefined;
+  return `${grade.name} is estimated from ${grade.usableMinC} to ${grade.usableMaxC} °C; its Curie point is about ${grade.curieTemperatureC} °C`.replace(
+    "-",
+    "−",
+  );
+}
 
 /** The magnet to estimate: grade, shape and size, count, temperature and Br, and the air gap. */
 export function MagnetEstimateForm({
@@ -70,6 +79,9 @@ export function MagnetEstimateForm({
           label="Magnet temperature"
           unit="°C"
           allowNegative
+          hint={temperatureHint(
+            grades.find((grade) => grade.name === fields.grade.value),
+          )}
           extraErrors={apiErrors.temperatureC}
         />
         <QuantityField
@@ -83,7 +95,7 @@ export function MagnetEstimateForm({
 
       <fieldset className="grid gap-4">
         <legend className="mb-2 text-sm font-semibold uppercase tracking-wide text-graphite-500">
-          Air-gap flux density (optional)
+          Air gap and working point (optional)
         </legend>
         <QuantityField
           field={fields.magnetLengthMm}
@@ -98,6 +110,13 @@ export function MagnetEstimateForm({
           unit="mm"
           hint="The mechanical gap plus any non-magnetic sleeve"
           extraErrors={apiErrors.airGapMm}
+        />
+        <QuantityField
+          field={fields.demagnetisingFieldKAm}
+          label="Demagnetising field from the winding"
+          unit="kA/m"
+          hint="At the highest current, against the magnetisation; blank for none"
+          extraErrors={apiErrors.demagnetisingFieldKAm}
         />
       </fieldset>
       <p className="text-xs text-graphite-500">

@@ -16,6 +16,7 @@ const fieldLabels: Record<string, string> = {
   br20T: "Br at 20 °C",
   magnetLengthMm: "magnet length along magnetisation",
   airGapMm: "air gap",
+  demagnetisingFieldKAm: "demagnetising field",
   ...shapeFieldLabels,
 };
 
@@ -108,10 +109,11 @@ export function MagnetEstimatePanel({
       ) : null}
 
       <p className="border-t border-rule pt-3 text-xs text-graphite-500">
-        First-order engineering estimates: published grade values, reversible
-        temperature change only, no leakage or armature reaction. Electrical
-        safety, insulation systems and certification follow local codes and
-        licensed practice.
+        First-order engineering estimates: published grade values, straight-line
+        temperature coefficients within the grade&rsquo;s usable range, no
+        leakage; the winding&rsquo;s field counts only as you give it.
+        Electrical safety, insulation systems and certification follow local
+        codes and licensed practice.
       </p>
     </section>
   );

@@ -5,6 +5,7 @@ import type {
 import { formatQuantity } from "~/lib/format";
 import {
   formatMass,
+  formatPercentPerKelvin,
   formatRange,
   formatSignificant,
 } from "~/reference/quantity-display";
@@ -27,6 +28,7 @@ export type EstimatedInput = {
   br20T: number | null;
   magnetLengthMm: number | null;
   airGapMm: number | null;
+  demagnetisingFieldKAm: number | null;
 };
 
 const mm = (value: number) => formatQuantity(value, "mm", decimalsOf(value));
@@ -115,6 +117,17 @@ export function MagnetEstimateResults({
         value={formatQuantity(estimate.brT, "T", 3)}
         note="Br(T) = Br20 · (1 + αBr · (T − 20 °C)), reversible change only."
       />
+      {estimate.hcjKAm === null ? null : (
+        <Row
+          label={`HcJ at ${formatQuantity(estimate.temperatureC, "°C")}`}
+          value={formatQuantity(estimate.hcjKAm, "kA/m", 0)}
+          note={`HcJ(T) = HcJ20 · (1 + β · (T − 20 °C)), β ${signedPercentPerK(estimate.hcjTemperatureCoefficientPerK ?? 0)}${
+            estimate.hcjCoefficientIsMaterialTypical
+              ? " (the material's typical value: the grade gives none)"
+              : ""
+          }. Estimated from ${formatSignedC(estimate.temperatureRange.minC)} to ${formatSignedC(estimate.temperatureRange.maxC)}; Curie point about ${formatQuantity(estimate.temperatureRange.curieTemperatureC, "°C")}.`}
+        />
+      )}
       {estimate.airGapFluxDensityT === null ? (
         <Row
           label="Air-gap flux density"
@@ -139,7 +152,42 @@ export function MagnetEstimateResults({
           }
         />
       )}
+      <WorkingPointRow estimate={estimate} />
     </dl>
+  );
+}
+
+function signedPercentPerK(perK: number): string {
+  const text = formatPercentPerKelvin(perK, 2);
+  return perK > 0 ? `+${text}` : text;
+}
+
+function formatSignedC(value: number): string {
+  return formatQuantity(value, "°C").replace(/^-/, "−");
+}
+
+/** Where the magnet works against its knee: the field in it beside the knee field. */
+function WorkingPointRow({ estimate }: { estimate: MagnetEstimate }) {
+  const point = estimate.workingPoint;
+  if (!point) return null;
+  return (
+    <Row
+      label="Field in the magnet against its knee"
+      value={`${formatQuantity(point.demagnetisingFieldKAm, "kA/m", 0)} of ${formatQuantity(point.kneeFieldKAm, "kA/m", 0)}`}
+      note={
+        <>
+          {point.pastKnee
+            ? "Past the knee: part of the magnetisation is lost for good."
+            : "Below the knee: the change with temperature and load is reversible."}{" "}
+          H<sub>m</sub> = (B<sub>m</sub> − Br) / (μ0 · μ<sub>rec</sub>) ={" "}
+          {formatQuantity(point.selfFieldKAm, "kA/m", 0).replace(/^-/, "−")}
+          {point.appliedFieldKAm > 0
+            ? `, plus ${formatQuantity(point.appliedFieldKAm, "kA/m", 0)} from the winding`
+            : ""}
+          ; knee ≈ {formatQuantity(point.kneeFactor, "", 1)} × HcJ.
+        </>
+      }
+    />
   );
 }
 
@@ -164,6 +212,12 @@ export function MagnetEstimateInputs({ input }: { input: EstimatedInput }) {
       input.magnetLengthMm ? mm(input.magnetLengthMm) : "not given",
     ],
     ["Air gap", input.airGapMm !== null ? mm(input.airGapMm) : "not given"],
+    [
+      "Demagnetising field from the winding",
+      input.demagnetisingFieldKAm
+        ? formatQuantity(input.demagnetisingFieldKAm, "kA/m", 0)
+        : "none given",
+    ],
   ];
   return (
     <dl
@@ -180,7 +234,7 @@ export function MagnetEstimateInputs({ input }: { input: EstimatedInput }) {
   );
 }
 
-/** The estimate's warnings: past the working temperature (danger), ferrite in the cold (caution). */
+/** The estimate's warnings: past the working temperature or the knee (danger), ferrite in the cold (caution). */
 export function MagnetEstimateWarnings({
   warnings,
 }: {
@@ -193,7 +247,8 @@ export function MagnetEstimateWarnings({
         <li
           key={warning.code}
           className={`rounded-md border px-3 py-2 text-sm ${
-            warning.code === "above-max-working-temperature"
+            warning.code === "above-max-working-temperature" ||
+            warning.code === "past-the-knee"
               ? "border-danger/50 bg-danger/5 text-danger"
               : "border-caution/50 bg-caution/5 text-graphite-800"
           }`}

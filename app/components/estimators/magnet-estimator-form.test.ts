@@ -17,6 +17,7 @@ describe("the magnet estimator's form values", () => {
       br20T: "",
       magnetLengthMm: "4",
       airGapMm: "1",
+      demagnetisingFieldKAm: "",
     });
   });
 
@@ -35,6 +36,7 @@ describe("the magnet estimator's form values", () => {
       br20T: null,
       magnetLengthMm: null,
       airGapMm: null,
+      demagnetisingFieldKAm: null,
     });
   });
 });

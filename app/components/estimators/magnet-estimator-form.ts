@@ -15,6 +15,7 @@ export const startingMagnetInput: EstimatedInput = {
   br20T: null,
   magnetLengthMm: 4,
   airGapMm: 1,
+  demagnetisingFieldKAm: null,
 };
 
 /** The form's starting text for an input: Conform fills inputs from strings. */
@@ -31,6 +32,7 @@ export function magnetFormValues(input: EstimatedInput) {
     br20T: text(input.br20T),
     magnetLengthMm: text(input.magnetLengthMm),
     airGapMm: text(input.airGapMm),
+    demagnetisingFieldKAm: text(input.demagnetisingFieldKAm),
   };
 }
 
@@ -44,6 +46,7 @@ export function magnetRequestOf(value: MagnetEstimateRequest): EstimatedInput {
     br20T: value.br20T ?? null,
     magnetLengthMm: value.magnetLengthMm ?? null,
     airGapMm: value.airGapMm ?? null,
+    demagnetisingFieldKAm: value.demagnetisingFieldKAm ?? null,
   };
 }
 

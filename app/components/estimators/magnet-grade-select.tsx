@@ -17,6 +17,10 @@ export interface GradeChoice {
   maxWorkingTemperatureC: number;
   brTemperatureCoefficientPerK: number;
   densityGPerCm3: number;
+  /** The temperatures the estimate answers for, °C (magnetTemperatureRange). */
+  usableMinC: number;
+  usableMaxC: number;
+  curieTemperatureC: number;
 }
 
 /** The grade list, grouped by material, with the chosen grade's main values beneath. */
