@@ -115,6 +115,34 @@ describe("worked check 5 of the engineering brief: copper loss at 10 A", () => {
   });
 });
 
+describe("current density and AC figures at the electrical frequency", () => {
+  it("19.89 A/mm² at 10 A in 0.80 mm wire; skin depth 9.346 mm at 50 Hz and 4.169 mm at 350 Hz, 120 °C", () => {
+    // GNU units: '10/(pi/4*0.64)' → 19.894368 A/mm².
+    const cold = coilLineFigures(checkFourCoil(), 10, 50);
+    expectMatchesPrinted(cold.currentDensityAPerMm2 ?? NaN, "19.89");
+    // Copper 1/58 Ω·mm²/m (IEC 60028): 'sqrt(1.7241e-8 ohm m/(pi*50 Hz*mu0))' mm → 9.3457973.
+    expectMatchesPrinted(cold.skinDepthMm ?? NaN, "9.346");
+    // 0.80 mm wire is a tenth of the skin depth: one layer's AC ÷ DC is 1 to four places
+    // (Dowell's low-frequency series 1 + Δ⁴/45 for one layer).
+    expectMatchesPrinted(cold.acResistanceRatio ?? NaN, "1.0000");
+    // At 120 °C ρ rises by 1 + 0.00393 × 100 (IEC 60028):
+    // 'sqrt(1.7241e-8 ohm m*(1+0.00393*100)/(pi*350 Hz*mu0))' mm → 4.1691056.
+    const hot = coilLineFigures(
+      checkFourCoil({ operatingTemperatureC: 120 }),
+      10,
+      350,
+    );
+    expectMatchesPrinted(hot.skinDepthMm ?? NaN, "4.169");
+  });
+
+  it("gives no AC figures without a frequency, and no current density without a current", () => {
+    const figures = coilLineFigures(checkFourCoil());
+    expect(figures.currentDensityAPerMm2).toBeNull();
+    expect(figures.skinDepthMm).toBeNull();
+    expect(figures.acResistanceRatio).toBeNull();
+  });
+});
+
 describe("scaling with coils and strands", () => {
   it("coils per motor multiply length and mass, not the resistance of one coil", () => {
     const one = coilLineFigures(checkFourCoil({ leadLengthMm: 150 }));

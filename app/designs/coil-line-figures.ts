@@ -68,6 +68,16 @@ export interface CoilLineFigures {
   copperLossW: number | null;
   /** Conductor length in the field for one motor: 2 × turns × active length × coils, m. */
   forceLengthM: number;
+  /** Current density in each strand at the rated current, A/mm²; null without a current. */
+  currentDensityAPerMm2: number | null;
+  /** Skin depth at the electrical frequency and operating temperature, mm; null without a frequency. */
+  skinDepthMm: number | null;
+  /**
+   * R_ac / R_dc at the electrical frequency by Dowell with ONE layer of turns per coil
+   * (a design does not say how its coils are layered): a lower bound, as more layers add
+   * proximity loss. Null without a frequency.
+   */
+  acResistanceRatio: number | null;
 }
 
 /**
@@ -77,6 +87,7 @@ export interface CoilLineFigures {
 export function coilEstimateInputFor(
   line: CoilLine,
   currentA: number | null = null,
+  frequencyHz: number | null = null,
 ): CoilEstimateInput {
   return {
     conductor: line.wire.conductor,
@@ -90,6 +101,7 @@ export function coilEstimateInputFor(
     temperatureC: line.operatingTemperatureC,
     scrapPercent: line.scrapPercent,
     currentA,
+    frequencyHz,
   };
 }
 
@@ -100,15 +112,17 @@ function exactKg(digits: bigint): ExactDecimal {
 /**
  * Figures of one coil line for one motor. `ratedCurrentA` is the current through each
  * coil at the rated point (coils of a phase in series carry the phase current; with
- * parallel paths, divide by them); null or omitted gives no copper loss.
+ * parallel paths, divide by them); null or omitted gives no copper loss. `frequencyHz`
+ * is the electrical frequency at rated speed; null or omitted gives no AC figures.
  * Throws {@link EngineeringInputError} for a line that cannot be calculated.
  */
 export function coilLineFigures(
   line: CoilLine,
   ratedCurrentA: number | null = null,
+  frequencyHz: number | null = null,
 ): CoilLineFigures {
   assertDesignLine(line);
-  const input = coilEstimateInputFor(line, ratedCurrentA);
+  const input = coilEstimateInputFor(line, ratedCurrentA, frequencyHz);
   const estimate = estimateCoil(input);
   const perCoil = estimate.perCoil;
 
@@ -152,5 +166,8 @@ export function coilLineFigures(
     operatingTemperatureC: line.operatingTemperatureC,
     copperLossW: estimate.copperLossW,
     forceLengthM: estimate.total.forceLengthM,
+    currentDensityAPerMm2: perCoil.currentDensityAPerMm2,
+    skinDepthMm: perCoil.skinDepthMm,
+    acResistanceRatio: perCoil.acResistanceRatio,
   };
 }

@@ -31,6 +31,7 @@ import {
 } from "./design-costing";
 import type { RevisionRow, StoredDesignLine } from "./design-revisions.server";
 import { isEngineeringInputError } from "~/engineering/errors";
+import { electricalFrequencyHz } from "~/engineering/motor-constants";
 import {
   estimateTorque,
   TORQUE_ESTIMATE_LABEL,
@@ -237,6 +238,12 @@ export async function costRevision(input: {
   // The rated current is the RMS phase current; each of a parallel paths carries 1/a of it.
   const ratedCurrentA = Number(revision.ratedCurrentA);
   const coilCurrentA = ratedCurrentA / revision.parallelPaths;
+  const ratedSpeedRpm = optionalNumber(revision.ratedSpeedRpm);
+  // The coils' current alternates at the electrical frequency p · n / 60 at rated speed.
+  const frequencyHz =
+    ratedSpeedRpm === null
+      ? null
+      : electricalFrequencyHz(revision.poles, ratedSpeedRpm);
   const winding: DesignWinding = {
     slots: revision.slots,
     poles: revision.poles,
@@ -251,7 +258,7 @@ export async function costRevision(input: {
           {
             index,
             sku: line.wire.sku,
-            figures: coilLineFigures(line, coilCurrentA),
+            figures: coilLineFigures(line, coilCurrentA, frequencyHz),
             fill: coilSlotFill(line),
           },
         ]
@@ -300,7 +307,7 @@ export async function costRevision(input: {
       winding,
       lines,
       ratedCurrentA,
-      ratedSpeedRpm: optionalNumber(revision.ratedSpeedRpm),
+      ratedSpeedRpm,
       airGapRadiusMm,
       airGapFluxDensityT: fluxDensityT,
       poleCoverage: optionalNumber(revision.poleCoverage),
@@ -317,6 +324,9 @@ export async function costRevision(input: {
       activeShare: figures.activeShare,
       copperLossW: figures.copperLossW,
       forceLengthM: figures.forceLengthM,
+      currentDensityAPerMm2: figures.currentDensityAPerMm2,
+      skinDepthMm: figures.skinDepthMm,
+      acResistanceRatio: figures.acResistanceRatio,
       // Slot fill (null without a slot area): bare copper, and over the enamel with the liner
       // taken off; the limits in `warnings` are judged on the gross fill.
       copperFill: fill?.copperFill ?? null,

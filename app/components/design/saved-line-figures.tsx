@@ -37,7 +37,24 @@ export function SavedLineFigures({
           ? "—"
           : formatQuantity(coil.copperLossW, "W", 2),
       ],
+      [
+        "Current density at rated current",
+        coil.currentDensityAPerMm2 === null
+          ? "—"
+          : formatQuantity(coil.currentDensityAPerMm2, "A/mm²", 2),
+      ],
     );
+    if (coil.skinDepthMm !== null && coil.acResistanceRatio !== null)
+      rows.push(
+        [
+          "Skin depth at rated speed's frequency",
+          formatQuantity(coil.skinDepthMm, "mm", 3),
+        ],
+        [
+          "AC ÷ DC resistance (one layer, at least)",
+          formatQuantity(coil.acResistanceRatio, "", 3),
+        ],
+      );
   }
   if (cost)
     rows.push([
