@@ -24,7 +24,10 @@ import {
   type SlotFillWarningCode,
 } from "~/engineering/slot-fill";
 import { circleAreaMm2 } from "~/engineering/wire-geometry";
-import { currentDensityPractice } from "~/engineering/current-density";
+import {
+  currentDensityAPerMm2,
+  currentDensityPractice,
+} from "~/engineering/current-density";
 
 export { currentDensityPractice };
 import {
@@ -154,12 +157,16 @@ export function coilCurrentDensityAPerMm2(
 ): number | null {
   if (ratedCurrentA === null || !Number.isFinite(ratedCurrentA)) return null;
   if (ratedCurrentA <= 0) return null;
-  const copperMm2 =
-    line.strandsInHand * circleAreaMm2(designWireBareDiameterMm(line.wire));
-  return ratedCurrentA / copperMm2;
+  return currentDensityAPerMm2(
+    ratedCurrentA,
+    line.strandsInHand,
+    circleAreaMm2(designWireBareDiameterMm(line.wire)),
+  );
 }
 
 const densityText = (value: number) => `${value.toFixed(1)} A/mm²`;
+/** A coil current to three significant decimals at most: 6, 2.5, 3.333. */
+const formatCurrent = (value: number) => String(Number(value.toFixed(3)));
 
 /** Warning when the coil's current density is above natural (or fan) cooling practice, else null. */
 export function currentDensityWarning(
@@ -173,7 +180,7 @@ export function currentDensityWarning(
   if (density <= naturalCoolingAPerMm2) return null;
   const strands =
     line.strandsInHand > 1 ? ` in ${line.strandsInHand} strands` : "";
-  const at = `Coil line ${lineIndex + 1} (${line.wire.sku}) carries ${densityText(density)} at the rated ${ratedCurrentA} A${strands}`;
+  const at = `Coil line ${lineIndex + 1} (${line.wire.sku}) carries ${densityText(density)} at ${formatCurrent(ratedCurrentA ?? 0)} A per coil${strands} at the rated point`;
   const practice = `Common practice (from memory): up to about 5–6 A/mm² enclosed with natural cooling, about ${fanCooledAPerMm2} A/mm² fan-cooled, more only with liquid cooling or short duty.`;
   return density > fanCooledAPerMm2
     ? {

@@ -4,6 +4,7 @@
  * forms and as numbers from JSON; both are read here.
  */
 import { z } from "zod";
+import { phaseConnections } from "~/engineering/motor-constants";
 import { windingInfeasibility } from "~/engineering/winding-factor";
 import { formNumber } from "~/lib/number-text";
 
@@ -78,7 +79,7 @@ export const revisionFieldsSchema = z.object({
   phases: whole("phase count", 1, 12).default(3),
   windingLayers: whole("number of winding layers", 1, 2).default(2),
   phaseConnection: z
-    .enum(["star", "delta"], {
+    .enum(phaseConnections, {
       error: "Say whether the phases are joined in star or in delta.",
     })
     .default("star"),

@@ -16,14 +16,14 @@ import {
   uniqueIndex,
   varchar,
 } from "drizzle-orm/mysql-core";
+import { phaseConnections } from "../../engineering/motor-constants";
 import { createdAt, users } from "./accounts";
 import { items } from "./stock";
 
 export const revisionStatuses = ["draft", "released"] as const;
 export const torqueBases = ["measured", "estimated"] as const;
 export const designLineKinds = ["coil", "magnet", "part"] as const;
-/** How the phase windings join: star (wye) or delta. */
-export const phaseConnections = ["star", "delta"] as const;
+export { phaseConnections };
 
 export const designs = mysqlTable(
   "designs",
