@@ -140,7 +140,9 @@ async function substitutesOf(
   return proposeWireSubstitutes({
     line,
     lineUnitCost,
-    ratedCurrentA: Number(found.revision.ratedCurrentA),
+    // The rated current is the RMS phase current; each of the parallel paths carries 1/a.
+    ratedCurrentA:
+      Number(found.revision.ratedCurrentA) / found.revision.parallelPaths,
     insulationClassC: found.revision.insulationClassC,
     tolerance,
     candidates,

@@ -10,11 +10,11 @@
  *
  * The packing limits are limits on round conductors as they are wound, that is over their
  * enamel: square (layer-on-layer) packing π/4 = 0.785 and hexagonal (orthocyclic) packing
- * π/√12 = 0.9069 (brief; the ratio of a circle to its square or hexagonal cell). The
- * 0.35–0.45 usual for random-wound round wire (common practice, brief) is judged on the same
- * gross fill here. So every limit is judged on gross fill; copper fill is shown beside it
- * because it is the figure resistance and cost follow. When the overall diameter is unknown
- * the judgement falls back to copper fill with a note that it understates the fill.
+ * π/√12 = 0.9069 (brief; the ratio of a circle to its square or hexagonal cell). These are
+ * judged on gross fill. The 0.35–0.45 usual for random-wound round wire (common practice) is
+ * a copper fill — the brief gives it beside its net-copper fill factor — so it is judged on
+ * copper fill. When the overall diameter is unknown the packing limits fall back to copper
+ * fill too, with a note that it understates how full the slot is.
  *
  * Errors are {@link EngineeringInputError}s naming the field as the slot-fill API does:
  * "turns", "strands", "coilSidesPerSlot", "slotAreaMm2", "linerAreaMm2",
@@ -129,10 +129,14 @@ const fillText = (fill: number) => fill.toFixed(3);
 const basisText = (basis: SlotFillBasis) =>
   basis === "gross" ? "Gross fill (over the enamel)" : "Copper fill";
 
-/** The most serious limit `fill` passes on `basis`, or null when none applies. */
+/**
+ * The most serious limit passed, or null when none applies: the packing limits on `fill`
+ * (judged on `basis`), the random-wound practice on `copperFill` (default `fill`).
+ */
 export function slotFillWarning(
   fill: number,
   basis: SlotFillBasis = "gross",
+  copperFill: number = fill,
 ): SlotFillWarning | null {
   const what = `${basisText(basis)} ${fillText(fill)}`;
   if (fill > HEXAGONAL_PACKING_FILL_LIMIT) {
@@ -149,11 +153,11 @@ export function slotFillWarning(
       message: `${what} is above π/4 = 0.785, the limit for round conductors stacked in square layers; only perfect hexagonal packing could reach it.`,
     };
   }
-  if (fill > RANDOM_ROUND_WIRE_FILL_LIMIT) {
+  if (copperFill > RANDOM_ROUND_WIRE_FILL_LIMIT) {
     return {
       code: "above-random-round-wire-practice",
       limit: RANDOM_ROUND_WIRE_FILL_LIMIT,
-      message: `${what} is above the 0.35–0.45 usual for random-wound round wire (common practice); it needs linear winding on segmented teeth (0.5–0.65) or hairpins (0.65–0.75).`,
+      message: `Copper fill ${fillText(copperFill)} is above the 0.35–0.45 usual for random-wound round wire (common practice); it needs linear winding on segmented teeth (0.5–0.65) or hairpins (0.65–0.75).`,
     };
   }
   return null;
@@ -188,7 +192,7 @@ export function assessSlotFill(input: SlotFillInput): SlotFill {
     wireAreaMm2,
     judgedOn,
     fits: judged <= HEXAGONAL_PACKING_FILL_LIMIT,
-    warning: slotFillWarning(judged, judgedOn),
+    warning: slotFillWarning(judged, judgedOn, copperFill),
     note: judgedOn === "copper" ? COPPER_BASIS_NOTE : null,
   };
 }
@@ -202,6 +206,6 @@ export function slotFillMessage(fill: SlotFill): string {
   }.`;
   const verdict =
     fill.warning?.message ??
-    `${basisText(fill.judgedOn)} ${fillText(fill.grossFill ?? fill.copperFill)} is at or below 0.45, the upper end of what random-wound round wire usually reaches (common practice).`;
+    `${basisText(fill.judgedOn)} ${fillText(fill.grossFill ?? fill.copperFill)} is within the packing limits of round wire (π/4 = 0.785 in square layers), and copper fill ${fillText(fill.copperFill)} is at or below 0.45, the upper end of what random-wound round wire usually reaches (common practice).`;
   return [figures, verdict, fill.note].filter(Boolean).join(" ");
 }

@@ -33,9 +33,12 @@ describe("slot fill of a catalogue wire size", () => {
     expect(fill.insulationAssumed).toBe(true);
     expect(fill.grossFill).toBeCloseTo(0.52220259, 6);
     expect(fill.copperFill).toBeCloseTo(0.40946062, 6);
-    // Copper 0.41 would pass; over the enamel it is above the 0.45 practice.
-    expect(fill.warning?.code).toBe("above-random-round-wire-practice");
-    expect(fill.limit).toBe(0.45);
+    // Copper 0.41 is within the 0.45 random-wound practice (a copper fill), and 0.52 over
+    // the enamel is below π/4: no limit passed; fits is judged against π/√12 = 0.9069.
+    expect(fill.warning).toBeNull();
+    expect(fill.limitPassed).toBeNull();
+    expect(fill.limit).toBeCloseTo(0.90689968, 7);
+    expect(fill.fits).toBe(true);
   });
 
   it("refuses an insulation of the other standard, naming it", () => {
@@ -47,5 +50,20 @@ describe("slot fill of a catalogue wire size", () => {
         slotAreaMm2: 50,
       }),
     ).toThrow(EngineeringInputError);
+  });
+
+  it("judges the random-wound practice on copper fill: 0.48 copper warns whatever the enamel", () => {
+    // AWG 24 heavy, 118 turns in 50 mm²: copper fill 118/100 × 0.40946062 = 0.48316 (ASTM B258,
+    // units -t '118 * pi/4 * (0.127 mm * 92^((36-24)/39))^2 / (50 mm^2)' → 0.48316353);
+    // gross 118/100 × 0.52220259 = 0.61620 (NEMA MW 1000 0.0227 in), below π/4.
+    const fill = assessWireSlotFill({
+      wire: { standard: "AWG", size: "24" },
+      turns: 118,
+      slotAreaMm2: 50,
+    });
+    expect(fill.copperFill).toBeCloseTo(0.48316353, 6);
+    expect(fill.warning?.code).toBe("above-random-round-wire-practice");
+    expect(fill.limitPassed).toBe(0.45);
+    expect(fill.fits).toBe(true);
   });
 });

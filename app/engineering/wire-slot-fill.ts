@@ -9,7 +9,12 @@
  */
 
 import type { InsulationKey } from "./reference-data";
-import { assessSlotFill, slotFillMessage, type SlotFill } from "./slot-fill";
+import {
+  assessSlotFill,
+  HEXAGONAL_PACKING_FILL_LIMIT,
+  slotFillMessage,
+  type SlotFill,
+} from "./slot-fill";
 import {
   bareDiameterMm,
   overallDiameter,
@@ -37,8 +42,10 @@ export interface WireSlotFill extends SlotFill, OverallDiameter {
   /** True when the insulation was not given and the default was assumed. */
   insulationAssumed: boolean;
   bareDiameterMm: number;
-  /** The most serious limit passed (0.45, π/4 or π/√12), or null. */
-  limit: number | null;
+  /** The limit `fits` is judged against: π/√12, the densest packing of round wire. */
+  limit: number;
+  /** The most serious limit passed (0.45 on copper fill, π/4 or π/√12), or null. */
+  limitPassed: number | null;
   message: string;
 }
 
@@ -62,7 +69,8 @@ export function assessWireSlotFill(input: WireSlotFillInput): WireSlotFill {
     insulation,
     insulationAssumed: !input.insulation,
     bareDiameterMm: bare,
-    limit: fill.warning?.limit ?? null,
+    limit: HEXAGONAL_PACKING_FILL_LIMIT,
+    limitPassed: fill.warning?.limit ?? null,
     message: slotFillMessage(fill),
   };
 }

@@ -15,8 +15,9 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 /**
  * POST /api/v1/slot-fills: copper fill and gross fill (over the enamel, liner taken off) of
- * a winding in a slot, the limits judged on gross fill. Any signed-in role.
- * → { copperFill, grossFill, limit, fits, message, … } (decision 037).
+ * a winding in a slot: the packing limits judged on gross fill, the random-wound practice on
+ * copper fill. Any signed-in role. → { copperFill, grossFill, limit (π/√12, what `fits` is
+ * judged against), fits, message, limitPassed, limitCode, … } (decision 037).
  */
 export async function action({ request }: Route.ActionArgs) {
   await requireUser(request);
@@ -30,6 +31,7 @@ export async function action({ request }: Route.ActionArgs) {
     fits: fill.fits,
     message: fill.message,
     judgedOn: fill.judgedOn,
+    limitPassed: fill.limitPassed,
     limitCode: fill.warning?.code ?? null,
     note: fill.note,
     wireAreaMm2: fill.wireAreaMm2,

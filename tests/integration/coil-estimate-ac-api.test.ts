@@ -184,7 +184,7 @@ describe("POST /api/v1/coil-estimates: current density and AC resistance", () =>
         wire: {
           standard: "litz",
           strands: 10,
-          strandWire: { standard: "IEC", diameterMm: 0.101 },
+          strandWire: { standard: "IEC", diameterMm: 6.3 },
         },
       },
     ],

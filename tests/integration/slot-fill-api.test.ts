@@ -35,6 +35,24 @@ describe("POST /api/v1/slot-fills", () => {
     expect(body.insulationAssumed).toBe(false);
   });
 
+  it("answers a healthy fill with the limit it is judged against and no limit passed", async () => {
+    const response = await post({
+      wire: { standard: "IEC", diameterMm: 1 },
+      insulation: "grade2",
+      turns: 20,
+      coilSidesPerSlot: 2,
+      slotAreaMm2: 100,
+    });
+    const body = await response.json();
+    // IEC 1.000 mm grade 2: max overall 1.093 mm (IEC 60317-0-1, from memory).
+    // units -t '40*pi/4*(1 mm)^2/(100 mm^2)' → 0.31415927; '40*pi/4*(1.093 mm)^2/(100 mm^2)' → 0.37531
+    expect(body.copperFill).toBeCloseTo(0.31415927, 7);
+    expect(body.grossFill).toBeCloseTo(0.37531, 5);
+    expect(body.limit).toBeCloseTo(0.90689968, 7);
+    expect(body.limitPassed).toBeNull();
+    expect(body.fits).toBe(true);
+  });
+
   it("takes the liner off and assumes grade 2 for IEC wire without an insulation", async () => {
     const response = await post({
       ...issueCase,

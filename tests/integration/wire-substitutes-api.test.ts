@@ -258,3 +258,50 @@ describe("POST …/lines/:line/substitutes", () => {
     expect(after.lines).toBe(before.lines);
   });
 });
+
+describe("when nothing in stock fits", () => {
+  it("lists no substitutes and refuses to apply one with 409, writing nothing", async () => {
+    // An aluminium line in a class 250 motor (IEC 60085's highest class here): the only other
+    // aluminium wire in stock is class 200 or lower, so nothing can stand in for it.
+    const aluminiumDesign = await createDesign(
+      [
+        {
+          kind: "coil",
+          itemId: aluminium.id,
+          turns: 40,
+          activeLengthMm: 50,
+          endTurnLengthMm: 30,
+        },
+      ],
+      { name: uniqueCode("Nothing-fits actuator") },
+    );
+    await testDb()
+      .update(designRevisions)
+      .set({ insulationClassC: 250 })
+      .where(eq(designRevisions.id, aluminiumDesign.revisionId));
+    const linePath = `/api/v1/designs/${aluminiumDesign.designId}/revisions/1/lines/1/substitutes?tolerance=0`;
+    const listed = await get(linePath, storekeeper);
+    expect(listed.status).toBe(200);
+    expect((await listed.json()).substitutes).toEqual([]);
+
+    const revisionsBefore = await testDb()
+      .select({ id: designRevisions.id })
+      .from(designRevisions)
+      .where(eq(designRevisions.designId, aluminiumDesign.designId));
+    const refused = await sendJson(
+      "POST",
+      linePath,
+      { sku: twoOf071.sku, strands: 2 },
+      builder,
+    );
+    expect(refused.status).toBe(409);
+    expect((await refused.json()).error.message).toContain(
+      "Nothing in stock can stand in",
+    );
+    const revisionsAfter = await testDb()
+      .select({ id: designRevisions.id })
+      .from(designRevisions)
+      .where(eq(designRevisions.designId, aluminiumDesign.designId));
+    expect(revisionsAfter).toEqual(revisionsBefore);
+  });
+});
