@@ -145,3 +145,12 @@ export function lineIndexOfField(field: string | undefined): number | null {
   const match = /^lines\[(\d+)\]/.exec(field ?? "");
   return match ? Number(match[1]) : null;
 }
+
+/** The line id a form posts: null when none (a new line), "bad" when it is not a positive whole number. */
+export function formLineId(
+  value: FormDataEntryValue | null,
+): number | null | "bad" {
+  if (value === null || value === "") return null;
+  const id = Number(value);
+  return Number.isSafeInteger(id) && id > 0 ? id : "bad";
+}

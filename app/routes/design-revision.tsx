@@ -22,6 +22,7 @@ import {
   applyLineChange,
   costQuerySearch,
   designPageIntentOf,
+  formLineId,
   lineIndexOfField,
   readCostQuery,
   type DesignPageIntent,
@@ -117,12 +118,6 @@ function plainRefusal(intent: DesignPageIntent, error: unknown) {
 const changedMeanwhile =
   "This line was changed or removed meanwhile (another save of this revision). The page now shows the lines as they are: make the change again.";
 
-function lineIdOf(value: FormDataEntryValue | null): number | null | "bad" {
-  if (value === null || value === "") return null;
-  const id = Number(value);
-  return Number.isSafeInteger(id) && id > 0 ? id : "bad";
-}
-
 /**
  * Builders' changes to a draft revision, named by `intent`: the motor fields, one line
  * (save or remove), release, or a new revision. A released revision refuses every change
@@ -187,7 +182,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 
     case "save-line":
     case "remove-line": {
-      const lineId = lineIdOf(formData.get("lineId"));
+      const lineId = formLineId(formData.get("lineId"));
       const submission =
         intent === "save-line"
           ? parseWithZod(formData, { schema: designLineSchema })
