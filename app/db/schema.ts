@@ -11,3 +11,5 @@ export * from "./tables/alerts";
 export * from "./tables/alert-enums";
 export * from "./tables/purchase-orders";
 export * from "./tables/purchase-order-enums";
+export * from "./tables/storeroom";
+export * from "./tables/storeroom-enums";

@@ -44,6 +44,8 @@ export const locations = mysqlTable(
     kind: mysqlEnum("kind", ["store", "bin"]).notNull(),
     parentId: int("parent_id"),
     active: boolean("active").notNull().default(true),
+    /** The day its last stocktake was approved (cycle counting picks the longest uncounted). */
+    lastCountedOn: date("last_counted_on", { mode: "string" }),
   },
   (table) => [uniqueIndex("locations_code_unique").on(table.code)],
 );
@@ -65,6 +67,11 @@ export const items = mysqlTable(
     /** Kept balances for the whole item (all lots and locations). */
     onHand: quantity("on_hand").notNull().default("0"),
     reserved: quantity("reserved").notNull().default("0"),
+    /**
+     * The free part of lots on hold (quality block): Σ (on hand − reserved) over the
+     * balances of held lots. Held stock is on hand but not available.
+     */
+    held: quantity("held").notNull().default("0"),
     /** Still to come on sent purchase orders (ordered − received, until received or closed). */
     onOrder: quantity("on_order").notNull().default("0"),
     /** Moving average cost per unit, updated on receipts. */
@@ -73,7 +80,7 @@ export const items = mysqlTable(
     available: decimal("available", {
       precision: 14,
       scale: 3,
-    }).generatedAlwaysAs(sql`on_hand - reserved`, { mode: "stored" }),
+    }).generatedAlwaysAs(sql`on_hand - reserved - held`, { mode: "stored" }),
     stockValue: decimal("stock_value", {
       precision: 20,
       scale: 4,
@@ -84,7 +91,7 @@ export const items = mysqlTable(
       { mode: "stored" },
     ),
     belowReorder: boolean("below_reorder").generatedAlwaysAs(
-      sql`reorder_point > 0 AND on_hand - reserved < reorder_point`,
+      sql`reorder_point > 0 AND on_hand - reserved - held < reorder_point`,
       { mode: "stored" },
     ),
     createdAt: createdAt(),
@@ -113,6 +120,7 @@ export const items = mysqlTable(
     index("items_on_hand_idx").on(table.active, table.onHand),
     check("items_on_hand_not_negative", sql`${table.onHand} >= 0`),
     check("items_reserved_not_negative", sql`${table.reserved} >= 0`),
+    check("items_held_not_negative", sql`${table.held} >= 0`),
     check("items_on_order_not_negative", sql`${table.onOrder} >= 0`),
   ],
 );
@@ -154,10 +162,23 @@ export const lots = mysqlTable(
     /** Empty spool mass, kg (wire lots). */
     tareKg: quantity("tare_kg"),
     receivedOn: date("received_on", { mode: "string" }),
+    /** Who supplied it, when known (a receipt against an order, or named at receipt). */
+    supplierId: int("supplier_id"),
+    /** The purchase order it was first received against, when there was one. */
+    purchaseOrderId: int("purchase_order_id"),
+    /** The receipt movement that created the lot. */
+    receiptMovementId: bigint("receipt_movement_id", { mode: "number" }),
+    /** Set while the lot is on hold (quality block): why, since when, by whom. Null when free. */
+    holdReason: varchar("hold_reason", { length: 300 }),
+    heldAt: datetime("held_at", { mode: "date", fsp: 3 }),
+    heldBy: varchar("held_by", { length: 40 }),
     createdAt: createdAt(),
   },
   (table) => [
     uniqueIndex("lots_item_number_unique").on(table.itemId, table.lotNumber),
+    index("lots_number_idx").on(table.lotNumber),
+    index("lots_supplier_idx").on(table.supplierId, table.id),
+    index("lots_held_idx").on(table.heldAt),
   ],
 );
 
