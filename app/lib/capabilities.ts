@@ -49,6 +49,16 @@ export const capabilityRoles = {
   readOutbox: ["admin"],
   /** Add a magnet grade to the reference tables. */
   addMagnetGrades: ["admin"],
+  /** Put a lot on hold (quality block) and release it. */
+  holdLots: ["storekeeper"],
+  /** Attach mill and test certificates to a lot. */
+  attachLotDocuments: ["storekeeper", "buyer"],
+  /** Start and cancel stocktakes. */
+  startStocktakes: ["storekeeper", "manager"],
+  /** Enter counts on a stocktake's count sheet. */
+  countStock: ["storekeeper"],
+  /** Review a stocktake's variances, ask for recounts and approve it (posting the differences). */
+  approveStocktakes: ["manager"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Capability = keyof typeof capabilityRoles;
