@@ -54,7 +54,7 @@ export const capabilityRoles = {
   /** Attach mill and test certificates to a lot. */
   attachLotDocuments: ["storekeeper", "buyer"],
   /** Start and cancel stocktakes. */
-  startStocktakes: ["storekeeper", "manager"],
+  startStocktakes: ["storekeeper"],
   /** Enter counts on a stocktake's count sheet. */
   countStock: ["storekeeper"],
   /** Review a stocktake's variances, ask for recounts and approve it (posting the differences). */
