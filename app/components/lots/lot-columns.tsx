@@ -1,15 +1,25 @@
 /** Column definitions for the lot tables (the one DataTable): balances, where used, a build order's lots. */
 import { createColumnHelper } from "@tanstack/react-table";
 import { Link } from "react-router";
-import { formatDateTime } from "~/lib/format";
+import { formatDateTime, formatDay } from "~/lib/format";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 import type { LotDetails } from "~/lots/lot-details.server";
 import type { BuildOrderLot, LotUse } from "~/lots/where-used.server";
 
 const link = "font-medium text-copper-700 underline-offset-2 hover:underline";
-const when = (value: string | null) => (
-  <span className="whitespace-nowrap">{formatDateTime(value)}</span>
-);
+/** The day, with the full time on hover (the CSV and the API give the time). */
+const when = (value: string | null) =>
+  value ? (
+    <time
+      dateTime={value}
+      title={formatDateTime(value)}
+      className="whitespace-nowrap"
+    >
+      {formatDay(value)}
+    </time>
+  ) : (
+    "—"
+  );
 const amount = (value: number, unit: string) => (
   <span className="whitespace-nowrap">{formatStockQuantity(value, unit)}</span>
 );

@@ -77,6 +77,8 @@ export function LotDocumentsPanel({
       )}
       {canAttach ? (
         <Form
+          // A new certificate listed starts the form afresh.
+          key={documents.length}
           method="post"
           encType="multipart/form-data"
           className="space-y-3 border-t border-rule pt-3"
@@ -91,7 +93,11 @@ export function LotDocumentsPanel({
               type="file"
               required
               accept="application/pdf,image/png,image/jpeg,.pdf,.png,.jpg,.jpeg"
-              aria-describedby="certificate-file-hint"
+              aria-describedby={
+                errors?.file
+                  ? "certificate-file-error certificate-file-hint"
+                  : "certificate-file-hint"
+              }
               aria-invalid={errors?.file ? true : undefined}
               className="block w-full text-sm"
             />
@@ -103,7 +109,11 @@ export function LotDocumentsPanel({
               itself.
             </p>
             {errors?.file ? (
-              <p className="field-error" role="alert">
+              <p
+                id="certificate-file-error"
+                className="field-error"
+                role="alert"
+              >
                 {errors.file.join(" ")}
               </p>
             ) : null}
