@@ -52,6 +52,7 @@ export default [
     ...prefix("build-orders", [
       index("routes/build-orders.tsx"),
       route(":orderId", "routes/build-order.tsx"),
+      route(":orderId/lots.csv", "routes/build-order-lots-export.ts"),
     ]),
     route("buying-plan", "routes/buying-plan.tsx"),
     ...prefix("stock", [
@@ -62,6 +63,13 @@ export default [
       route("record", "routes/stock-record.tsx"),
       route("receive", "routes/stock-receive.tsx"),
       route("journal", "routes/stock-journal.tsx"),
+      // Lots: origin, certificates, where used (issue 20).
+      route("lots/:lotId", "routes/stock-lot.tsx"),
+      route(
+        "lots/:lotId/documents/:documentId",
+        "routes/stock-lot-document.ts",
+      ),
+      route("lots/:lotId/where-used.csv", "routes/stock-lot-where-used.ts"),
     ]),
   ]),
 
@@ -119,6 +127,10 @@ export default [
     route("build-orders", "routes/api.v1.build-orders.ts"),
     route("build-orders/:orderId", "routes/api.v1.build-order.ts"),
     route("build-orders/:orderId/:step", "routes/api.v1.build-order-step.ts"),
+    // Lots: where used and certificates, by lot number (?sku= where it is ambiguous).
+    route("lots/:lot/where-used", "routes/api.v1.lot-where-used.ts"),
+    route("lots/:lot/documents", "routes/api.v1.lot-documents.ts"),
+    route("build-orders/:orderId/lots", "routes/api.v1.build-order-lots.ts"),
     route("buying-plan", "routes/api.v1.buying-plan.ts"),
     route("purchase-orders", "routes/api.v1.purchase-orders.ts"),
     route("purchase-orders/:orderId", "routes/api.v1.purchase-order.ts"),

@@ -1,7 +1,7 @@
 /**
  * The demo company's build orders, through the app's build-order code: a
  * finished pilot batch, a batch being built (some stock issued) and a batch
- * with its stock held. Reservations check the low-stock alerts as they would
+ * with its stock held and half its wire issued. Reservations check the low-stock alerts as they would
  * for a builder. Quantities stay within the demo store.
  */
 import { reserveBuildOrderStock } from "~/build-orders/build-order-reservations.server";
@@ -91,7 +91,8 @@ export async function seedDemoBuildOrders(designs: DemoDesigns): Promise<void> {
     skus: ["CU-IEC-0800", "MG-N38UH-A28", ...stator],
   });
 
-  // The next outrunner order: stock held, nothing issued yet.
+  // The next outrunner order: stock held, and the first half of its wire issued, from the
+  // spools the pilot batch was wound from (the oldest first): a lot that fed two builds.
   const next = await createBuildOrder(
     buildOrderCreateSchema.parse({
       designId: designs.outrunner.id,
@@ -101,5 +102,11 @@ export async function seedDemoBuildOrders(designs: DemoDesigns): Promise<void> {
     }),
     builderId,
   );
-  await reserveBuildOrderStock(next.id, builderId, { partial: true });
+  const nextHeld = await reserveBuildOrderStock(next.id, builderId, {
+    partial: true,
+  });
+  await issueHeld(next.id, nextHeld.reserved, storekeeperId, {
+    skus: ["CU-IEC-0500"],
+    partly: { "CU-IEC-0500": 0.5 },
+  });
 }

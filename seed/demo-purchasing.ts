@@ -26,6 +26,7 @@ import {
 import { updateItem } from "~/stock/catalogue.server";
 import { movementRequestSchema } from "~/stock/movement-request";
 import { recordMovement } from "~/stock/stock-movements.server";
+import { attachDemoLotSuppliers } from "./demo-lot-origins";
 import { demoPersonId } from "./demo-person-ids";
 
 const dayMs = 86_400_000;
@@ -560,6 +561,11 @@ export async function seedDemoPurchasing(): Promise<DemoPurchasing> {
       await createSupplier(supplierSchema.parse(supplier)),
     );
 
+  await attachDemoLotSuppliers([
+    ids.get(quillan.name)!,
+    ids.get(fenwright.name)!,
+  ]);
+
   const wires = await catalogueWires();
   await importDemoList(
     quillan.name,
@@ -659,6 +665,7 @@ export async function seedDemoPurchasing(): Promise<DemoPurchasing> {
         unitCost: round2(copperBaseOn(2) + quillanAdder(wire, true)),
         spoolType: "DIN 250",
         supplierBatch: `QB${88410 + index}`,
+        supplierId: ids.get(quillan.name),
         reference: "DN-QDW-55102",
       }),
       storekeeperId,

@@ -109,6 +109,7 @@ export const flashMessageSubjects = {
   "purchase-order-closed": "purchaseOrder",
   "purchase-received": "purchaseReceipt",
   "wire-substitute-applied": "designLine",
+  "lot-document-attached": "none",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -221,6 +222,7 @@ const texts: {
     `Received ${countText(receipt.entries, { one: "spool or lot", other: "spools or lots" })} against ${receipt.reference}. The order is now ${receipt.statusLabel.toLowerCase()}.`,
   "wire-substitute-applied": (line) =>
     `Line ${line.position} of revision ${line.revision} now winds ${line.strands} × ${line.sku} in hand. The revision is a draft: check its figures, then release it.`,
+  "lot-document-attached": () => "Certificate attached to the lot.",
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import {
   designRevisionBodyBytes,
   formAndJsonBodyBytes,
+  lotCertificateBodyCeilingBytes,
   priceListUploadBodyBytes,
   requestBodyLimit,
 } from "./request-body-limits";
@@ -48,6 +49,18 @@ describe("requestBodyLimit", () => {
         "The request is larger than 256 KB, the most Turnledger takes here.",
       );
     }
+  });
+
+  it("lets a lot certificate's upload reach its route, which holds the file to 10 MB", () => {
+    for (const path of ["/stock/lots/12", "/stock/lots/12.data"])
+      expect(requestBodyLimit("POST", path).bytes, path).toBe(
+        lotCertificateBodyCeilingBytes,
+      );
+    // The hold and release forms beside it are small forms.
+    for (const path of ["/stock/lots/12/hold", "/stock/lots/12/release"])
+      expect(requestBodyLimit("POST", path).bytes, path).toBe(
+        formAndJsonBodyBytes,
+      );
   });
 
   it("raises no limit for a path that only resembles a raised one", () => {

@@ -11,6 +11,11 @@
  * - PUT/PATCH /api/v1/designs/:designId/revisions/:revision: a revision's
  *   whole list of lines (up to 200) in one body, about 62 KB at the longest
  *   values and more when indented.
+ * - POST /stock/lots/:lotId: a lot certificate (at most 10 MB). The route
+ *   itself refuses a larger one beside its file field, by Content-Length
+ *   before reading and by its multipart parser while the file arrives
+ *   (app/lots/lot-documents.server.ts), and stores nothing; this ceiling,
+ *   well above it, only stops a body far too large before the route runs.
  *
  * Pure: no framework, no Node; tested beside itself.
  */
@@ -28,6 +33,8 @@ export const formAndJsonBodyBytes = 64 * kilobyte;
 export const designRevisionBodyBytes = 256 * kilobyte;
 /** A price-list upload: the file's limit plus room for its form fields. */
 export const priceListUploadBodyBytes = maxPriceListBytes + megabyte;
+/** The ceiling on a lot certificate's upload (the route's own limit is 10 MB, said beside the field). */
+export const lotCertificateBodyCeilingBytes = 32 * megabyte;
 
 export interface BodyLimit {
   bytes: number;
@@ -71,6 +78,12 @@ const raisedLimits: readonly RaisedLimit[] = [
       field: "file",
       pageMessage: fileTooLargeMessage,
     },
+  },
+  {
+    methods: ["POST"],
+    // The lot page and its data request ("/stock/lots/12.data").
+    path: /^\/stock\/lots\/[^/]+\/?$/,
+    limit: plainLimit(lotCertificateBodyCeilingBytes),
   },
   {
     methods: ["PUT", "PATCH"],

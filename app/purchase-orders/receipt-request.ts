@@ -34,6 +34,13 @@ export const receiptEntrySchema = z
       .optional()
       .transform((value) => (value ? value : undefined)),
     location: text("location", 40),
+    /** The supplier's lot or heat number, kept on a new lot. */
+    supplierBatch: z
+      .string()
+      .trim()
+      .max(60, "Use at most 60 characters.")
+      .optional()
+      .transform((value) => (value ? value : undefined)),
     quantity: quantityField().optional(),
     grossKg: quantityField("gross weight").optional(),
     tareKg: quantityField("tare weight").optional(),

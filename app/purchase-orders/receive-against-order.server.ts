@@ -397,11 +397,15 @@ async function receiveIn(
         reference: number,
         toLocation: undefined,
         spoolType: undefined,
-        supplierBatch: undefined,
+        supplierBatch: entry.supplierBatch,
+        supplierId: undefined,
         note: undefined,
       },
       userId,
-      { at: now },
+      {
+        at: now,
+        origin: { supplierId: order.supplierId, purchaseOrderId: order.id },
+      },
     ).catch((error: unknown) => {
       if (isDomainError(error) && error.field)
         throw new DomainError(

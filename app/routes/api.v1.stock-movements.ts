@@ -41,7 +41,8 @@ export async function loader({ request }: Route.LoaderArgs) {
  * POST /api/v1/stock-movements (storekeeper, admin) → 201 { movement, balance }; 409 when stock would go below zero.
  * An issue with `buildOrderId` goes through the build order's own issue → 201 { movement, balance, buildOrder };
  * 404 for no such order, 409 when the order is not open or does not need the item. A plain issue whose
- * reference names a build order ("BO-12") is refused with 400 on `reference`.
+ * reference names a build order ("BO-12") is refused with 400 on `reference`. A receipt may name its
+ * supplier (`supplierId`, 400 when there is none with that id): a lot it creates keeps it as its origin.
  */
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "recordStock");

@@ -60,11 +60,13 @@ import { NeedsPanel } from "~/components/build-orders/needs-panel";
 import { PlannedStartPanel } from "~/components/build-orders/planned-start-panel";
 import { PlannedAndUsedPanel } from "~/components/build-orders/planned-and-used-panel";
 import { ReservePanel } from "~/components/build-orders/reserve-panel";
+import { BuildOrderLotsPanel } from "~/components/lots/build-order-lots-panel";
 import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { needsRoleMessage, userCan } from "~/lib/capabilities";
 import { isDomainError } from "~/lib/domain-error";
 import { refusalReply } from "~/lib/refusal-reply";
+import { buildOrderLots } from "~/lots/where-used.server";
 
 function orderIdOf(value: string | undefined): number {
   return buildOrderIdFromPath(value, (message) =>
@@ -87,6 +89,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const order = await orderOr404(orderIdOf(params.orderId));
   return {
     order,
+    lots: await buildOrderLots(order.id),
     can: {
       build: userCan(user, "runBuildOrders"),
       issue: userCan(user, "issueToBuildOrders"),
@@ -239,6 +242,13 @@ export default function BuildOrder({
           ) : null}
           {anyIssued ? (
             <IssuedStockPanel reference={order.reference} issues={issues} />
+          ) : null}
+          {anyIssued ? (
+            <BuildOrderLotsPanel
+              orderId={order.id}
+              reference={order.reference}
+              lots={loaderData.lots}
+            />
           ) : null}
         </div>
 

@@ -16,6 +16,7 @@ import {
 import { readSearchLeniently, searchParamsObject } from "~/lib/search-params";
 import { movementJournalQuerySchema } from "~/stock/movement-journal-query";
 import { listMovements } from "~/stock/movement-journal.server";
+import { LotLink } from "~/stock/item-page-columns";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
@@ -63,7 +64,9 @@ const columns = [
   }),
   column.accessor("lot", {
     header: "Lot",
-    cell: (info) => info.getValue() ?? "—",
+    cell: (info) => (
+      <LotLink lotId={info.row.original.lotId} lot={info.getValue()} />
+    ),
   }),
   column.accessor("location", { header: "Location" }),
   column.accessor("quantity", {

@@ -11,7 +11,7 @@ import { MovementTypeNav } from "~/components/stock/movement-type-nav";
 import { RecordMovementForm } from "~/components/stock/record-movement-form";
 import { userCan } from "~/lib/capabilities";
 import { redirectWithFlash } from "~/lib/flash.server";
-import { companyCurrency } from "~/purchasing/suppliers.server";
+import { companyCurrency, listSuppliers } from "~/purchasing/suppliers.server";
 import { findItemBySku, listLocations } from "~/stock/items.server";
 import { formFieldOf, movementFormSchema } from "~/stock/movement-form";
 import {
@@ -30,13 +30,14 @@ export async function loader({ request }: Route.LoaderArgs) {
   const type = chosenMovementType(url.searchParams.get("type"));
   const sku = url.searchParams.get("sku")?.trim() ?? "";
   const item = sku ? await findItemBySku(sku) : null;
-  const [metresPerKg, locations, usualLocation, currency, orders] =
+  const [metresPerKg, locations, usualLocation, currency, orders, suppliers] =
     await Promise.all([
       item?.kind === "wire" ? wireMetresPerKg(item.id) : null,
       listLocations(),
       item && type === "receipt" ? usualLocationOf(item.id) : null,
       companyCurrency(),
       item && type === "issue" ? listOrdersToIssueItem(item.id) : [],
+      item && type === "receipt" ? listSuppliers() : [],
     ]);
   return {
     type,
@@ -48,6 +49,8 @@ export async function loader({ request }: Route.LoaderArgs) {
     usualLocation,
     currency,
     orders,
+    // A receipt may name who supplied it: a new lot keeps it.
+    suppliers: suppliers.map(({ id, name }) => ({ id, name })),
     canReceiveOrders: userCan(user, "receivePurchases"),
   };
 }
@@ -144,6 +147,7 @@ export default function StockRecord({
           usualLocation={loaderData.usualLocation}
           currency={loaderData.currency}
           orders={loaderData.orders}
+          suppliers={loaderData.suppliers}
           metresPerKg={loaderData.metresPerKg}
           lastResult={actionData}
         />

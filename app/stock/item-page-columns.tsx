@@ -4,6 +4,7 @@
  */
 import { createColumnHelper } from "@tanstack/react-table";
 import type { ReactNode } from "react";
+import { Link } from "react-router";
 import type { MovementType } from "~/db/tables/stock-enums";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import {
@@ -13,10 +14,32 @@ import {
   movementTypeLabels,
 } from "./stock-quantity-text";
 
+/** A lot number linked to its page; "—" for stock not kept in lots. */
+export function LotLink({
+  lotId,
+  lot,
+}: {
+  lotId: number | undefined;
+  lot: string | null;
+}) {
+  if (!lot) return "—";
+  if (!lotId) return lot;
+  return (
+    <Link
+      to={`/stock/lots/${lotId}`}
+      className="text-copper-700 underline-offset-2 hover:underline"
+    >
+      {lot}
+    </Link>
+  );
+}
+
 /** One lot (or none) at one location. */
 export interface ItemBalanceRow {
   location: string;
   locationName: string;
+  /** The lot's id (0 when the item is not kept in lots): its page is /stock/lots/:id. */
+  lotId?: number;
   lot: string | null;
   tareKg: number | null;
   onHand: number;
@@ -28,6 +51,7 @@ export interface ItemMovementRow {
   /** ISO time. */
   createdAt: string;
   type: MovementType;
+  lotId?: number;
   lot: string | null;
   location: string;
   quantity: number;
@@ -56,7 +80,9 @@ export function balanceColumns(unit: string, isWire: boolean) {
     }),
     column.accessor("lot", {
       header: "Lot",
-      cell: (info) => info.getValue() ?? "—",
+      cell: (info) => (
+        <LotLink lotId={info.row.original.lotId} lot={info.getValue()} />
+      ),
     }),
     ...(isWire
       ? [
@@ -110,7 +136,9 @@ export function movementColumns(
     }),
     column.accessor("lot", {
       header: "Lot",
-      cell: (info) => info.getValue() ?? "—",
+      cell: (info) => (
+        <LotLink lotId={info.row.original.lotId} lot={info.getValue()} />
+      ),
     }),
     column.accessor("location", { header: "Location" }),
     column.accessor("quantity", {

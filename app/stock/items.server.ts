@@ -187,6 +187,7 @@ export async function findItemBySku(sku: string) {
     id: row.id,
     ...itemSummary(row),
     balances: balances.map((balance) => ({
+      lotId: balance.lotId,
       lot: balance.lot,
       location: balance.location,
       locationName: balance.locationName,

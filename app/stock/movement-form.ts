@@ -13,6 +13,7 @@ const numberFields = [
   "grossKg",
   "tareKg",
   "buildOrderId",
+  "supplierId",
 ] as const;
 
 function formValuesToRequest(values: unknown): unknown {

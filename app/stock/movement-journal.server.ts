@@ -55,6 +55,7 @@ export async function listMovements(
       sku: items.sku,
       itemName: items.name,
       unit: items.unit,
+      lotId: stockMovements.lotId,
       lot: lots.lotNumber,
       location: locations.code,
       quantity: stockMovements.quantity,

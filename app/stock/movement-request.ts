@@ -77,6 +77,13 @@ export const movementRequestSchema = z
     tareKg: quantity("tare weight").optional(),
     spoolType: optionalText(40),
     supplierBatch: optionalText(60),
+    /** A receipt's supplier, by id (optional): a new lot keeps it as its origin. */
+    supplierId: z
+      .number({ error: "supplierId must be a whole number." })
+      .int("supplierId must be a whole number.")
+      .min(1, "supplierId must be at least 1.")
+      .max(2_147_483_647, "supplierId is out of range.")
+      .optional(),
     reference: optionalText(80),
     note: optionalText(500),
     /** An issue to this build order: it takes what the order holds and counts as issued to it. */
@@ -147,6 +154,8 @@ export const movementRequestSchema = z
       else if (value.toLocation === value.location)
         problem("toLocation", "A transfer needs two different locations.");
     }
+    if (value.supplierId !== undefined && value.type !== "receipt")
+      problem("supplierId", "A supplier is named only on a receipt.");
     if (value.type === "adjustment" && !value.note)
       problem("note", "Say why stock is adjusted.");
     refineBuildOrderIssue(value, problem);

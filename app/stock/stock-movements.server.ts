@@ -22,6 +22,7 @@ import {
   lots,
   stockBalances,
   stockMovements,
+  suppliers,
 } from "~/db/schema";
 import {
   formatQuantityText,
@@ -118,6 +119,8 @@ export interface MovementOptions {
   held?: HeldStock;
   /** The after-commit work (low-stock alerts) runs after the movement unless false (the demo seed checks once at the end). */
   checkAlerts?: boolean;
+  /** A receipt against a purchase order: a lot it creates keeps the order and its supplier. */
+  origin?: { supplierId: number; purchaseOrderId: number };
 }
 
 export interface RecordedMovement {
@@ -231,11 +234,35 @@ async function setBalance(
     );
 }
 
+/** A receipt's named supplier must exist (400 on the field otherwise). */
+async function checkSupplier(tx: Transaction, supplierId: number | undefined) {
+  if (supplierId === undefined) return;
+  const [found] = await tx
+    .select({ id: suppliers.id })
+    .from(suppliers)
+    .where(eq(suppliers.id, supplierId))
+    .limit(1);
+  if (!found)
+    throw new DomainError(
+      400,
+      `No supplier with id ${supplierId}.`,
+      "supplierId",
+    );
+}
+
 async function resolveLot(
   tx: Transaction,
   item: { id: number; kind: string },
   request: MovementRequest,
-): Promise<{ id: number; number: string | null; tareKg: bigint | null }> {
+  origin?: MovementOptions["origin"],
+): Promise<{
+  id: number;
+  number: string | null;
+  tareKg: bigint | null;
+  /** True when this receipt created the lot (its origin is then this receipt). */
+  created?: boolean;
+}> {
+  await checkSupplier(tx, request.supplierId);
   if (!request.lot) {
     if (item.kind === "wire") {
       throw new DomainError(
@@ -277,12 +304,15 @@ async function resolveLot(
           ? null
           : formatQuantityText(request.tareKg),
       receivedOn: todayUtc(),
+      supplierId: origin?.supplierId ?? request.supplierId ?? null,
+      purchaseOrderId: origin?.purchaseOrderId ?? null,
     })
     .$returningId();
   return {
     id: created!.id,
     number: request.lot,
     tareKg: request.tareKg ?? null,
+    created: true,
   };
 }
 
@@ -437,7 +467,7 @@ export async function recordMovementIn(
       "toLocation",
     );
   }
-  const lot = await resolveLot(tx, item, request);
+  const lot = await resolveLot(tx, item, request, options.origin);
 
   // Lock balance rows in a fixed order (location id) so two transfers never wait on each other in a circle.
   const locationIds = toLocation
@@ -535,6 +565,11 @@ export async function recordMovementIn(
     })
     .$returningId();
   const movementId = inserted!.id;
+  if (lot.created)
+    await tx
+      .update(lots)
+      .set({ receiptMovementId: movementId })
+      .where(eq(lots.id, lot.id));
   if (toLocation) {
     const to = balances.get(toLocation.id)!;
     await setBalance(tx, item.id, lot.id, toLocation.id, to.onHand - change);

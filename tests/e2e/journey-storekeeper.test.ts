@@ -232,7 +232,7 @@ describe("the storekeeper's journey", () => {
     await typeInto(page, page.getByLabel("Lot (optional)"), magnetLot);
     await typeInto(page, page.getByLabel(/^Quantity/), "120");
     await typeInto(page, page.getByLabel("Unit cost per piece"), "0.85");
-    await typeInto(page, page.getByLabel("Supplier batch"), "B-2291");
+    await typeInto(page, page.getByLabel("Supplier's lot or heat"), "B-2291");
     await press(page, page.getByRole("button", { name: "Receive" }));
     const magnets = statusSaying(`120 pieces of ${magnetSku}`);
     await magnets.waitFor();

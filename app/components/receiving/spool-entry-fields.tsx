@@ -1,5 +1,5 @@
 /**
- * One spool or lot of a delivery: its lot number, where it goes (the item's usual place
+ * One spool or lot of a delivery: its lot number and the supplier's lot or heat, where it goes (the item's usual place
  * first) and its quantity, or for wire the gross and tare weights with the net shown as
  * they are typed. Named `lines[i].…` for the form's one list of entries.
  */
@@ -53,6 +53,13 @@ export function SpoolEntryFields({
         name={name("lot")}
         label={isWire ? "Spool lot number" : "Lot (optional)"}
         errors={fieldErrors("lot")}
+        autoComplete="off"
+      />
+      <MeasureField
+        id={id("supplierBatch")}
+        name={name("supplierBatch")}
+        label="Supplier's lot or heat"
+        errors={fieldErrors("supplierBatch")}
         autoComplete="off"
       />
       <div>

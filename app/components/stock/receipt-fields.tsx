@@ -1,7 +1,8 @@
 /**
  * The receipt fields of the record-movement page: the location (starting at where the
  * item usually is), the spool's gross and tare with the net shown as they are typed, the
- * unit cost in the company currency, the supplier batch and the delivery note.
+ * unit cost in the company currency, the supplier (optional), the supplier's lot or heat
+ * and the delivery note.
  */
 import { useState } from "react";
 import { perUnitWord } from "~/lib/unit-text";
@@ -16,6 +17,7 @@ export function ReceiptFields({
   locations,
   usualLocation,
   currency,
+  suppliers = [],
   errors,
   inputClassName,
 }: {
@@ -26,6 +28,8 @@ export function ReceiptFields({
   usualLocation: string | null;
   /** The company currency the unit cost is in. */
   currency: string;
+  /** The suppliers to choose from; none chosen is allowed. */
+  suppliers?: { id: number; name: string }[];
   errors: Errors;
   inputClassName: string;
 }) {
@@ -130,9 +134,30 @@ export function ReceiptFields({
         errors={errors.unitCost}
         hint={`In ${currency}, the company currency`}
       />
+      <div>
+        <label htmlFor="movement-supplier" className="field-label">
+          Supplier (optional)
+        </label>
+        <select
+          id="movement-supplier"
+          name="supplierId"
+          className={inputClassName}
+          defaultValue=""
+        >
+          <option value="">Not named</option>
+          {suppliers.map((supplier) => (
+            <option key={supplier.id} value={supplier.id}>
+              {supplier.name}
+            </option>
+          ))}
+        </select>
+        {errors.supplierId ? (
+          <p className="field-error">{errors.supplierId.join(" ")}</p>
+        ) : null}
+      </div>
       <Field
         name="supplierBatch"
-        label="Supplier batch"
+        label="Supplier's lot or heat"
         errors={errors.supplierBatch}
         autoComplete="off"
       />

@@ -45,6 +45,7 @@ export function RecordMovementForm({
   usualLocation,
   currency,
   orders,
+  suppliers = [],
   metresPerKg,
   lastResult,
 }: {
@@ -56,6 +57,8 @@ export function RecordMovementForm({
   usualLocation: string | null;
   currency: string;
   orders: PickableOrder[];
+  /** Who may have supplied a receipt (optional to name). */
+  suppliers?: { id: number; name: string }[];
   metresPerKg: number | null;
   lastResult: SubmissionResult<string[]> | undefined;
 }) {
@@ -96,6 +99,7 @@ export function RecordMovementForm({
           locations={locations}
           usualLocation={usualLocation}
           currency={currency}
+          suppliers={suppliers}
           errors={errors}
           inputClassName={movementInputClass}
         />
