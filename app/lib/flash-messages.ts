@@ -74,6 +74,8 @@ export interface FlashSubjects {
     entries: number;
     statusLabel: string;
   };
+  /** A lot after a hold or a release: its number, its item, why it is held (null when free). */
+  lot: { number: string; sku: string; holdReason: string | null };
 }
 
 export type FlashSubjectKind = keyof FlashSubjects;
@@ -109,6 +111,8 @@ export const flashMessageSubjects = {
   "purchase-order-closed": "purchaseOrder",
   "purchase-received": "purchaseReceipt",
   "wire-substitute-applied": "designLine",
+  "lot-held": "lot",
+  "lot-released": "lot",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -129,6 +133,7 @@ const idKinds = {
   purchaseOrder: "number",
   purchaseReceipt: "number",
   designLine: "number",
+  lot: "number",
 } as const satisfies Record<FlashSubjectKind, "none" | "number" | "key">;
 
 type IdOf<Kind extends FlashSubjectKind> = {
@@ -221,6 +226,10 @@ const texts: {
     `Received ${countText(receipt.entries, { one: "spool or lot", other: "spools or lots" })} against ${receipt.reference}. The order is now ${receipt.statusLabel.toLowerCase()}.`,
   "wire-substitute-applied": (line) =>
     `Line ${line.position} of revision ${line.revision} now winds ${line.strands} × ${line.sku} in hand. The revision is a draft: check its figures, then release it.`,
+  "lot-held": (lot) =>
+    `Lot ${lot.number} of ${lot.sku} is on hold${lot.holdReason ? `: ${lot.holdReason}` : ""}. It cannot be issued or reserved until it is released.`,
+  "lot-released": (lot) =>
+    `Lot ${lot.number} of ${lot.sku} is released: it can be issued and reserved again.`,
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

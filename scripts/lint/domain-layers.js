@@ -23,6 +23,7 @@ export const domainLayers = [
   ["designs"],
   ["insight"],
   ["build-orders"],
+  ["lots"],
   ["buying-plan"],
   ["components"],
   ["routes"],
