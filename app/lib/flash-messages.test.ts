@@ -225,7 +225,11 @@ describe("flashText", () => {
   });
 
   it("tells a lot's hold with its reason, and its release", () => {
-    const lot = { number: "S-24-117", sku: "CU-0.71", holdReason: "Enamel cracks on the wrap test" };
+    const lot = {
+      number: "S-24-117",
+      sku: "CU-0.71",
+      holdReason: "Enamel cracks on the wrap test",
+    };
     expect(flashText("lot-held", lot)).toBe(
       "Lot S-24-117 of CU-0.71 is on hold: Enamel cracks on the wrap test. It cannot be issued or reserved until it is released.",
     );

@@ -3,7 +3,11 @@
  * POST /api/v1/lots/:lot/release { reason? }, where :lot is the lot's number and `?sku=`
  * names the item when two items have a lot of that number.
  */
-import { readJsonBody, readOptionalJsonBody, readSearchParams } from "~/lib/api.server";
+import {
+  readJsonBody,
+  readOptionalJsonBody,
+  readSearchParams,
+} from "~/lib/api.server";
 import { answerDomainError } from "~/lib/api-errors.server";
 import {
   holdLotSchema,

@@ -6,13 +6,7 @@
  */
 import { and, eq } from "drizzle-orm";
 import { db, type Transaction } from "~/db/client.server";
-import {
-  items,
-  lotHoldEvents,
-  lots,
-  stockBalances,
-  users,
-} from "~/db/schema";
+import { items, lotHoldEvents, lots, stockBalances, users } from "~/db/schema";
 import { writeTransaction } from "~/db/write-transaction.server";
 import { parseQuantity } from "~/lib/decimal-amounts";
 import { DomainError } from "~/lib/domain-error";

@@ -238,10 +238,9 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
         }
       />
       <p className="text-xs text-graphite-500">
-        Available = on hand − reserved − on hold (lots under a quality
-        block). On order = still to come on sent
-        purchase orders. Value = on hand × moving average cost, in {currency}{" "}
-        (the company currency).
+        Available = on hand − reserved − on hold (lots under a quality block).
+        On order = still to come on sent purchase orders. Value = on hand ×
+        moving average cost, in {currency} (the company currency).
       </p>
     </div>
   );

@@ -72,9 +72,18 @@ describe("where the item is", () => {
 describe("a lot on hold", () => {
   it("is marked on hold with its reason in words and as a tooltip", () => {
     const reason = "Enamel cracks on the mandrel wrap test";
-    const rows = [{ ...spool, holdReason: reason }, { ...spool, lot: "L2" }];
+    const rows = [
+      { ...spool, holdReason: reason },
+      { ...spool, lot: "L2" },
+    ];
     expect(tableText(balanceColumns("kg", true), rows).slice(1)).toEqual([
-      ["MAIN Main store", `L1 On hold${reason}`, "0.600 kg", "4.800 kg", "1.250 kg"],
+      [
+        "MAIN Main store",
+        `L1 On hold${reason}`,
+        "0.600 kg",
+        "4.800 kg",
+        "1.250 kg",
+      ],
       ["MAIN Main store", "L2", "0.600 kg", "4.800 kg", "1.250 kg"],
     ]);
     const html = renderToStaticMarkup(

@@ -448,7 +448,11 @@ export async function recordMovementIn(
     holdReason !== null &&
     (request.type === "issue" || request.type === "transfer")
   )
-    throw new DomainError(409, lotOnHoldMessage(lot.number!, holdReason), "lot");
+    throw new DomainError(
+      409,
+      lotOnHoldMessage(lot.number!, holdReason),
+      "lot",
+    );
 
   // Lock balance rows in a fixed order (location id) so two transfers never wait on each other in a circle.
   const locationIds = toLocation
