@@ -70,6 +70,8 @@ export default [
         "routes/stock-lot-document.ts",
       ),
       route("lots/:lotId/where-used.csv", "routes/stock-lot-where-used.ts"),
+      route("lots/:lotId/hold", "routes/stock-lot-hold.ts"),
+      route("lots/:lotId/release", "routes/stock-lot-release.ts"),
     ]),
   ]),
 
@@ -96,6 +98,8 @@ export default [
     route("items/:sku", "routes/api.v1.item.ts"),
     route("locations", "routes/api.v1.locations.ts"),
     route("stock-movements", "routes/api.v1.stock-movements.ts"),
+    route("lots/:lot/hold", "routes/api.v1.lot-hold.ts"),
+    route("lots/:lot/release", "routes/api.v1.lot-release.ts"),
     route("suppliers", "routes/api.v1.suppliers.ts"),
     route("suppliers/:supplierId", "routes/api.v1.supplier.ts"),
     route("price-lists", "routes/api.v1.price-lists.ts"),

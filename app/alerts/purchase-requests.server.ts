@@ -24,6 +24,7 @@ export async function purchaseRequestsBySupplier(): Promise<
       unit: items.unit,
       onHand: items.onHand,
       reserved: items.reserved,
+      held: items.held,
       reorderPoint: items.reorderPoint,
       reorderQuantity: items.reorderQuantity,
     })
@@ -36,7 +37,10 @@ export async function purchaseRequestsBySupplier(): Promise<
   const today = todayUtc();
   for (const item of open) {
     const quantity = suggestedOrderQuantity({
-      available: parseQuantity(item.onHand) - parseQuantity(item.reserved),
+      available:
+        parseQuantity(item.onHand) -
+        parseQuantity(item.reserved) -
+        parseQuantity(item.held),
       reorderPoint: parseQuantity(item.reorderPoint),
       reorderQuantity: parseQuantity(item.reorderQuantity),
     });

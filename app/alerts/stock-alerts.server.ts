@@ -287,6 +287,7 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
         unit: items.unit,
         onHand: items.onHand,
         reserved: items.reserved,
+        held: items.held,
         reorderPoint: items.reorderPoint,
         reorderQuantity: items.reorderQuantity,
         leadTimeDays: suppliers.leadTimeDays,
@@ -307,7 +308,10 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
         sku: row.sku,
         name: row.name,
         unit: row.unit,
-        available: parseQuantity(row.onHand) - parseQuantity(row.reserved),
+        available:
+          parseQuantity(row.onHand) -
+          parseQuantity(row.reserved) -
+          parseQuantity(row.held),
         reorderPoint: parseQuantity(row.reorderPoint),
         reorderQuantity: parseQuantity(row.reorderQuantity),
       };
@@ -373,6 +377,7 @@ export async function sendAlertDigest(): Promise<{
       unit: items.unit,
       onHand: items.onHand,
       reserved: items.reserved,
+      held: items.held,
       reorderPoint: items.reorderPoint,
       itemId: stockAlerts.itemId,
       coveredByOrderId: stockAlerts.coveredByOrderId,
@@ -391,7 +396,10 @@ export async function sendAlertDigest(): Promise<{
       sku: alert.sku,
       name: alert.name,
       unit: alert.unit,
-      available: parseQuantity(alert.onHand) - parseQuantity(alert.reserved),
+      available:
+        parseQuantity(alert.onHand) -
+        parseQuantity(alert.reserved) -
+        parseQuantity(alert.held),
       reorderPoint: parseQuantity(alert.reorderPoint),
       openedAt: alert.openedAt,
       coveredBy: covers.get(alert.id) ?? null,
@@ -511,6 +519,7 @@ export async function listAlerts(options: {
       unit: items.unit,
       onHand: items.onHand,
       reserved: items.reserved,
+      held: items.held,
       availableAtOpen: stockAlerts.availableAtOpen,
       reorderPoint: stockAlerts.reorderPoint,
       reorderQuantity: stockAlerts.reorderQuantity,
@@ -556,7 +565,9 @@ export async function listAlerts(options: {
       unit: alert.unit,
       status: alert.closedAt ? ("closed" as const) : ("open" as const),
       availableNow: quantityToNumber(
-        parseQuantity(alert.onHand) - parseQuantity(alert.reserved),
+        parseQuantity(alert.onHand) -
+          parseQuantity(alert.reserved) -
+          parseQuantity(alert.held),
       ),
       availableAtOpen: Number(alert.availableAtOpen),
       reorderPoint: Number(alert.reorderPoint),

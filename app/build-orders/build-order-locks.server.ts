@@ -103,6 +103,8 @@ export interface LockedItem {
   unit: string;
   onHand: bigint;
   reserved: bigint;
+  /** The free part of its lots on hold (decision 039): not available to reserve. */
+  held: bigint;
 }
 
 /** Locks item rows one by one in id order. */
@@ -119,6 +121,7 @@ export async function lockItems(
         unit: items.unit,
         onHand: items.onHand,
         reserved: items.reserved,
+        held: items.held,
       })
       .from(items)
       .where(eq(items.id, id))
@@ -128,6 +131,7 @@ export async function lockItems(
         ...row,
         onHand: parseQuantity(row.onHand),
         reserved: parseQuantity(row.reserved),
+        held: parseQuantity(row.held),
       });
   }
   return locked;

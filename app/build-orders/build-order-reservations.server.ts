@@ -39,6 +39,8 @@ import {
   type BuildOrderStatus,
 } from "./build-order-status";
 import { allocateOldestFirst, type Allocation } from "~/stock/stock-allocation";
+import { heldChangeOf, lotOnHoldMessage } from "~/stock/lot-hold";
+import { addToItemHeld, heldLotsAmong } from "~/stock/lot-hold.server";
 
 export interface HeldStock {
   sku: string;
@@ -217,6 +219,12 @@ export async function reserveBuildOrderStock(
     const balancesByItem = new Map<number, LockedBalance[]>();
     for (const itemId of [...lockedItems.keys()])
       balancesByItem.set(itemId, await lockBalances(tx, itemId));
+    // Lots on hold (decision 039) are never chosen; a shortage says which held lots it skipped.
+    const heldLots = await heldLotsAmong(
+      tx,
+      [...balancesByItem.values()].flat().map((balance) => balance.lotId),
+    );
+    const holdNotes = new Set<string>();
 
     const plans: {
       line: LockedLine;
@@ -226,8 +234,11 @@ export async function reserveBuildOrderStock(
     const shortages: Shortage[] = [];
     for (const { line, wanted } of needs) {
       const item = lockedItems.get(line.itemId)!;
-      const itemFree = item.onHand - item.reserved;
-      const balances = balancesByItem.get(line.itemId) ?? [];
+      const itemFree = item.onHand - item.reserved - item.held;
+      const allBalances = balancesByItem.get(line.itemId) ?? [];
+      const balances = allBalances.filter(
+        (balance) => !heldLots.has(balance.lotId),
+      );
       const { allocations, allocated } = allocateOldestFirst(
         balances.map((balance) => ({
           lotId: balance.lotId,
@@ -239,6 +250,11 @@ export async function reserveBuildOrderStock(
       );
       plans.push({ line, allocations, allocated });
       if (allocated < wanted) {
+        for (const balance of allBalances) {
+          const hold = heldLots.get(balance.lotId);
+          if (hold && balance.onHand > balance.reserved)
+            holdNotes.add(lotOnHoldMessage(hold.number, hold.reason));
+        }
         shortages.push({
           sku: item.sku,
           required: quantityToNumber(wanted),
@@ -250,6 +266,8 @@ export async function reserveBuildOrderStock(
     }
 
     const reference = buildOrderReference(order.id);
+    const holdText =
+      holdNotes.size === 0 ? "" : ` ${[...holdNotes].join(". ")}.`;
     if (shortages.length > 0 && !options.partial) {
       throw new BuildOrderError(
         409,
@@ -258,7 +276,7 @@ export async function reserveBuildOrderStock(
             (shortage) =>
               `${shortage.sku} short by ${shortage.short} ${unitWord(shortage.unit, shortage.short)}`,
           )
-          .join("; ")}. Nothing was reserved.`,
+          .join("; ")}.${holdText} Nothing was reserved.`,
         undefined,
         shortages,
       );
@@ -266,7 +284,7 @@ export async function reserveBuildOrderStock(
     if (plans.every((plan) => plan.allocated === 0n)) {
       throw new BuildOrderError(
         409,
-        `Nothing that ${reference} still needs is free to reserve.`,
+        `Nothing that ${reference} still needs is free to reserve.${holdText}`,
         undefined,
         shortages,
       );
@@ -382,12 +400,20 @@ export async function releaseHeldStock(
     for (const balance of await lockBalances(tx, itemId))
       balances.set(balanceKey(balance), balance);
 
+  const heldLots = await heldLotsAmong(
+    tx,
+    held.map((row) => row.lotId),
+  );
   const releasedByItem = new Map<number, bigint>();
   for (const row of held) {
     const balance = balances.get(balanceKey(row));
     if (balance) {
+      const before = { ...balance };
       balance.reserved -= row.quantity;
       await writeBalanceReserved(tx, balance, balance.reserved);
+      // Stock given back on a held lot stays held (decision 039).
+      if (heldLots.has(row.lotId))
+        await addToItemHeld(tx, row.itemId, heldChangeOf(before, balance));
     }
     releasedByItem.set(
       row.itemId,

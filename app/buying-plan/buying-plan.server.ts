@@ -110,6 +110,7 @@ export async function loadBuyingPlan(
             unit: items.unit,
             onHand: items.onHand,
             reserved: items.reserved,
+            held: items.held,
             reorderPoint: items.reorderPoint,
             reorderQuantity: items.reorderQuantity,
           })
@@ -119,6 +120,7 @@ export async function loadBuyingPlan(
     ...row,
     onHand: parseQuantity(row.onHand),
     reserved: parseQuantity(row.reserved),
+    held: parseQuantity(row.held),
     reorderPoint: parseQuantity(row.reorderPoint),
     reorderQuantity: parseQuantity(row.reorderQuantity),
   }));

@@ -13,6 +13,7 @@ const wire = {
   unit: "kg",
   onHand: q("12"),
   reserved: q("3"),
+  held: 0n,
   reorderPoint: q("5"),
   reorderQuantity: q("10"),
 };
@@ -23,6 +24,7 @@ const magnet = {
   unit: "pcs",
   onHand: q("40"),
   reserved: 0n,
+  held: 0n,
   reorderPoint: 0n,
   reorderQuantity: 0n,
 };
@@ -255,6 +257,20 @@ describe("buyingPlan: a small worked example done by hand", () => {
     expect(first.order).toBeNull();
     expect(first.quantity).toBe(q("10"));
     expect(first.orderBy).toBe("2026-12-14");
+  });
+
+  it("does not count the stock of a lot on hold (decision 039)", () => {
+    // 9 kg on hand of which 5 kg on a held spool: 9 − 0 − 5 = 4 kg usable, 1 kg below
+    // the reorder point of 5 kg (worked by hand), the same as 4 kg on hand and no hold.
+    const held = buyingPlan({
+      ...example,
+      items: [{ ...wire, onHand: q("9"), reserved: 0n, held: q("5") }],
+      needs: [],
+      arrivals: [],
+    });
+    expect(held.suggestions[0]!.reason).toBe(
+      `Already low in week of 30 Nov 2026; projected 1.000${nbsp}kg below reorder point 5.000${nbsp}kg`,
+    );
   });
 
   it("says when stock is already low without any build order", () => {

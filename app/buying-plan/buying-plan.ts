@@ -33,6 +33,8 @@ export interface PlanItem {
   unit: string;
   onHand: bigint;
   reserved: bigint;
+  /** The free stock of its lots on hold (decision 039): on hand but not usable. */
+  held: bigint;
   /** 0: the item has no reorder point (then the plan keeps it from going below zero). */
   reorderPoint: bigint;
   reorderQuantity: bigint;
@@ -173,7 +175,7 @@ function planItem(
     weeks,
   );
   const floor = item.reorderPoint > 0n ? item.reorderPoint : 0n;
-  let level = item.onHand - item.reserved;
+  let level = item.onHand - item.reserved - item.held;
   const planned: PlanWeek[] = weeks.map((weekStart, index) => {
     const weekNeeds = needs[index]!;
     const needed = weekNeeds.reduce((sum, need) => sum + need.quantity, 0n);

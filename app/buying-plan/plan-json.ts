@@ -89,7 +89,7 @@ export function buyingPlanJson(
       name: item.name,
       unit: item.unit,
       reorderPoint: quantityToNumber(item.reorderPoint),
-      available: quantityToNumber(item.onHand - item.reserved),
+      available: quantityToNumber(item.onHand - item.reserved - item.held),
       weeks: weeks.map((week) => ({
         weekStart: week.weekStart,
         needed: quantityToNumber(

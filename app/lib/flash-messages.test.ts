@@ -224,6 +224,20 @@ describe("flashText", () => {
     );
   });
 
+  it("tells a lot's hold with its reason, and its release", () => {
+    const lot = {
+      number: "S-24-117",
+      sku: "CU-0.71",
+      holdReason: "Enamel cracks on the wrap test",
+    };
+    expect(flashText("lot-held", lot)).toBe(
+      "Lot S-24-117 of CU-0.71 is on hold: Enamel cracks on the wrap test. It cannot be issued or reserved until it is released.",
+    );
+    expect(flashText("lot-released", { ...lot, holdReason: null })).toBe(
+      "Lot S-24-117 of CU-0.71 is released: it can be issued and reserved again.",
+    );
+  });
+
   it("has a sentence for every code, whatever its subject", () => {
     const order = { reference: "BO-0001", quantity: 2, held: [], short: [] };
     const subjects: Record<FlashSubjectKind, unknown> = {
@@ -244,6 +258,7 @@ describe("flashText", () => {
         statusLabel: "Partly received",
       },
       designLine: { position: 1, sku: "CU-0.71", strands: 2, revision: 3 },
+      lot: { number: "S-24-117", sku: "CU-0.71", holdReason: "Enamel cracks" },
     };
     for (const code of Object.keys(flashMessageSubjects) as FlashCode[]) {
       const subject = subjects[flashMessageSubjects[code]];

@@ -74,6 +74,8 @@ export interface FlashSubjects {
     entries: number;
     statusLabel: string;
   };
+  /** A lot after a hold or a release: its number, its item, why it is held (null when free). */
+  lot: { number: string; sku: string; holdReason: string | null };
 }
 
 export type FlashSubjectKind = keyof FlashSubjects;
@@ -110,6 +112,8 @@ export const flashMessageSubjects = {
   "purchase-received": "purchaseReceipt",
   "wire-substitute-applied": "designLine",
   "lot-document-attached": "none",
+  "lot-held": "lot",
+  "lot-released": "lot",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -130,6 +134,7 @@ const idKinds = {
   purchaseOrder: "number",
   purchaseReceipt: "number",
   designLine: "number",
+  lot: "number",
 } as const satisfies Record<FlashSubjectKind, "none" | "number" | "key">;
 
 type IdOf<Kind extends FlashSubjectKind> = {
@@ -223,6 +228,10 @@ const texts: {
   "wire-substitute-applied": (line) =>
     `Line ${line.position} of revision ${line.revision} now winds ${line.strands} × ${line.sku} in hand. The revision is a draft: check its figures, then release it.`,
   "lot-document-attached": () => "Certificate attached to the lot.",
+  "lot-held": (lot) =>
+    `Lot ${lot.number} of ${lot.sku} is on hold${lot.holdReason ? `: ${lot.holdReason}` : ""}. It cannot be issued or reserved until it is released.`,
+  "lot-released": (lot) =>
+    `Lot ${lot.number} of ${lot.sku} is released: it can be issued and reserved again.`,
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

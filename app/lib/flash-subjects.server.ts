@@ -201,6 +201,21 @@ async function designLine(id: number) {
   return row ? { ...row, strands: row.strands ?? 1 } : null;
 }
 
+/** A lot with its item and hold. */
+async function lot(id: number) {
+  const [row] = await db
+    .select({
+      number: lots.lotNumber,
+      sku: items.sku,
+      holdReason: lots.holdReason,
+    })
+    .from(lots)
+    .innerJoin(items, eq(items.id, lots.itemId))
+    .where(eq(lots.id, id))
+    .limit(1);
+  return row ?? null;
+}
+
 /** The subject of a note's message, or null when it no longer exists. */
 export async function flashSubjectOf(
   note: FlashNote,
@@ -225,5 +240,7 @@ export async function flashSubjectOf(
       return purchaseReceipt(note.id as number);
     case "designLine":
       return designLine(note.id as number);
+    case "lot":
+      return lot(note.id as number);
   }
 }

@@ -55,6 +55,7 @@ export async function listBestPrices(query: BestPriceListQuery) {
         sizeOrGrade: items.sizeOrGrade,
         onHand: items.onHand,
         reserved: items.reserved,
+        held: items.held,
         reorderPoint: items.reorderPoint,
         reorderQuantity: items.reorderQuantity,
       })
@@ -75,7 +76,10 @@ export async function listBestPrices(query: BestPriceListQuery) {
       const quantity =
         query.quantity ??
         quantityToPrice({
-          available: parseQuantity(row.onHand) - parseQuantity(row.reserved),
+          available:
+            parseQuantity(row.onHand) -
+            parseQuantity(row.reserved) -
+            parseQuantity(row.held),
           reorderPoint: parseQuantity(row.reorderPoint),
           reorderQuantity: parseQuantity(row.reorderQuantity),
         });

@@ -112,6 +112,18 @@ function stockColumns(view: StockListView, currency: string) {
       ),
       meta: { numeric: true },
     }),
+    column.accessor("held", {
+      header: "On hold",
+      cell: (info) =>
+        info.getValue() > 0 ? (
+          <span className="whitespace-nowrap text-danger">
+            {formatStockQuantity(info.getValue(), info.row.original.unit)}
+          </span>
+        ) : (
+          <span className="text-graphite-500">—</span>
+        ),
+      meta: { numeric: true },
+    }),
     column.accessor("available", {
       header: sortHeader("Available", "available"),
       cell: (info) => (
@@ -226,9 +238,9 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
         }
       />
       <p className="text-xs text-graphite-500">
-        Available = on hand − reserved. On order = still to come on sent
-        purchase orders. Value = on hand × moving average cost, in {currency}{" "}
-        (the company currency).
+        Available = on hand − reserved − on hold (lots under a quality block).
+        On order = still to come on sent purchase orders. Value = on hand ×
+        moving average cost, in {currency} (the company currency).
       </p>
     </div>
   );

@@ -34,6 +34,7 @@ const spool: ItemBalanceRow = {
   tareKg: 0.6,
   onHand: 4.8,
   reserved: 1.25,
+  holdReason: null,
 };
 
 describe("where the item is", () => {
@@ -65,6 +66,34 @@ describe("where the item is", () => {
       ["Location", "Lot", "On hand", "Reserved"],
       ["MAIN Main store", "L1", "40 pieces", "1 piece"],
     ]);
+  });
+});
+
+describe("a lot on hold", () => {
+  it("is marked on hold with its reason in words and as a tooltip", () => {
+    const reason = "Enamel cracks on the mandrel wrap test";
+    const rows = [
+      { ...spool, holdReason: reason },
+      { ...spool, lot: "L2" },
+    ];
+    expect(tableText(balanceColumns("kg", true), rows).slice(1)).toEqual([
+      [
+        "MAIN Main store",
+        `L1 On hold${reason}`,
+        "0.600 kg",
+        "4.800 kg",
+        "1.250 kg",
+      ],
+      ["MAIN Main store", "L2", "0.600 kg", "4.800 kg", "1.250 kg"],
+    ]);
+    const html = renderToStaticMarkup(
+      createElement(DataTable<ItemBalanceRow>, {
+        caption: "t",
+        columns: balanceColumns("kg", true),
+        rows,
+      }),
+    );
+    expect(html).toContain(`title="${reason}"`);
   });
 });
 

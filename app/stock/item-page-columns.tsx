@@ -44,6 +44,24 @@ export interface ItemBalanceRow {
   tareKg: number | null;
   onHand: number;
   reserved: number;
+  /** Why the lot is on hold (quality block, decision 039); null when it is free. */
+  holdReason: string | null;
+}
+
+/** A lot on hold: the mark, its reason as a tooltip and in words below. */
+function LotOnHold({ lot, reason }: { lot: ReactNode; reason: string }) {
+  return (
+    <>
+      <span className="font-medium">{lot}</span>{" "}
+      <span
+        title={reason}
+        className="whitespace-nowrap rounded border border-danger/40 bg-sheet px-1.5 py-0.5 text-xs font-medium text-danger"
+      >
+        On hold
+      </span>
+      <span className="mt-0.5 block text-xs text-danger">{reason}</span>
+    </>
+  );
 }
 
 /** One movement of the item, with the item's on hand after it. */
@@ -80,9 +98,15 @@ export function balanceColumns(unit: string, isWire: boolean) {
     }),
     column.accessor("lot", {
       header: "Lot",
-      cell: (info) => (
-        <LotLink lotId={info.row.original.lotId} lot={info.getValue()} />
-      ),
+      cell: (info) => {
+        const { lotId, holdReason } = info.row.original;
+        const lot = <LotLink lotId={lotId} lot={info.getValue()} />;
+        return holdReason === null ? (
+          lot
+        ) : (
+          <LotOnHold lot={lot} reason={holdReason} />
+        );
+      },
     }),
     ...(isWire
       ? [

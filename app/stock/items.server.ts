@@ -61,6 +61,7 @@ const summaryColumns = {
   sizeOrGrade: items.sizeOrGrade,
   onHand: items.onHand,
   reserved: items.reserved,
+  held: items.held,
   onOrder: items.onOrder,
   reorderPoint: items.reorderPoint,
   reorderQuantity: items.reorderQuantity,
@@ -125,6 +126,7 @@ function itemSummary(row: {
   sizeOrGrade: string;
   onHand: string;
   reserved: string;
+  held: string;
   onOrder: string;
   reorderPoint: string;
   reorderQuantity: string;
@@ -133,6 +135,9 @@ function itemSummary(row: {
 }) {
   const onHand = parseQuantity(row.onHand);
   const reserved = parseQuantity(row.reserved);
+  // Lots on hold (decision 039): on hand, but neither reserved nor available.
+  const held = parseQuantity(row.held);
+  const available = onHand - reserved - held;
   const reorderPoint = parseQuantity(row.reorderPoint);
   const averageCost = parseUnitCost(row.averageCost);
   return {
@@ -143,12 +148,13 @@ function itemSummary(row: {
     sizeOrGrade: row.sizeOrGrade,
     onHand: quantityToNumber(onHand),
     reserved: quantityToNumber(reserved),
-    available: quantityToNumber(onHand - reserved),
+    held: quantityToNumber(held),
+    available: quantityToNumber(available),
     // Still to come on sent orders: the kept balance (items.on_order), never re-summed here.
     onOrder: quantityToNumber(parseQuantity(row.onOrder)),
     reorderPoint: quantityToNumber(reorderPoint),
     reorderQuantity: quantityToNumber(parseQuantity(row.reorderQuantity)),
-    belowReorder: reorderPoint > 0n && onHand - reserved < reorderPoint,
+    belowReorder: reorderPoint > 0n && available < reorderPoint,
     averageCost: Number(averageCost) / 10_000,
     value: Number(valueOf(onHand, averageCost)) / 10_000,
     active: row.active,
@@ -174,6 +180,7 @@ export async function findItemBySku(sku: string) {
       locationName: locations.name,
       onHand: stockBalances.onHand,
       reserved: stockBalances.reserved,
+      holdReason: lots.holdReason,
     })
     .from(stockBalances)
     .innerJoin(locations, eq(locations.id, stockBalances.locationId))
@@ -194,6 +201,7 @@ export async function findItemBySku(sku: string) {
       tareKg: balance.tareKg === null ? null : Number(balance.tareKg),
       onHand: quantityToNumber(parseQuantity(balance.onHand)),
       reserved: quantityToNumber(parseQuantity(balance.reserved)),
+      holdReason: balance.holdReason,
     })),
   };
 }

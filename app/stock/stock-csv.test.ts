@@ -15,7 +15,9 @@ const wire: StockCsvItem = {
   unit: "kg",
   onHand: 4.8,
   reserved: 1.25,
-  available: 3.55,
+  // One spool of 0.8 kg on hold: 4.8 − 1.25 − 0.8 = 2.75 (worked by hand).
+  held: 0.8,
+  available: 2.75,
   onOrder: 25,
   reorderPoint: 5,
   reorderQuantity: 10,
@@ -38,7 +40,8 @@ describe("stock CSV", () => {
     const cell = (name: string) => row![header!.indexOf(name)];
     expect(cell("unit")).toBe("kg");
     expect(cell("on hand")).toBe("4.8");
-    expect(cell("available")).toBe("3.55");
+    expect(cell("on hold")).toBe("0.8");
+    expect(cell("available")).toBe("2.75");
     expect(cell("on order")).toBe("25");
     expect(cell("below reorder point")).toBe("yes");
     expect(cell("value (company currency)")).toBe("68.16");

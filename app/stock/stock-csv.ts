@@ -18,6 +18,8 @@ export interface StockCsvItem {
   unit: string;
   onHand: number;
   reserved: number;
+  /** The free stock of lots on hold (decision 039). */
+  held: number;
   available: number;
   onOrder: number;
   reorderPoint: number;
@@ -40,6 +42,7 @@ const columns: { header: string; cell: (item: StockCsvItem) => Cell }[] = [
   { header: "unit", cell: (item) => item.unit },
   { header: "on hand", cell: (item) => item.onHand },
   { header: "reserved", cell: (item) => item.reserved },
+  { header: "on hold", cell: (item) => item.held },
   { header: "available", cell: (item) => item.available },
   { header: "on order", cell: (item) => item.onOrder },
   { header: "reorder point", cell: (item) => item.reorderPoint },

@@ -36,6 +36,8 @@ import { DomainError } from "~/lib/domain-error";
 import { unitWord } from "~/lib/unit-text";
 import type { MovementRequest } from "./movement-request";
 import { todayUtc } from "~/lib/calendar-days";
+import { heldChangeOf, lotOnHoldMessage } from "./lot-hold";
+import { addToItemHeld, lotHoldReason } from "./lot-hold.server";
 
 /** An amount of stock in a refusal, as typed into the API: "1.5 kg", "1 piece", "3 pieces". */
 export function amountText(thousandths: bigint, unit: string): string {
@@ -148,6 +150,7 @@ async function lockItem(tx: Transaction, sku: string) {
       active: items.active,
       onHand: items.onHand,
       reserved: items.reserved,
+      held: items.held,
       averageCost: items.averageCost,
     })
     .from(items)
@@ -468,6 +471,18 @@ export async function recordMovementIn(
     );
   }
   const lot = await resolveLot(tx, item, request, options.origin);
+  // A lot on hold (decision 039): nothing leaves it for use; receipts, counts, adjustments
+  // and scrap still work, and keep the item's held stock right below.
+  const holdReason = await lotHoldReason(tx, lot.id);
+  if (
+    holdReason !== null &&
+    (request.type === "issue" || request.type === "transfer")
+  )
+    throw new DomainError(
+      409,
+      lotOnHoldMessage(lot.number!, holdReason),
+      "lot",
+    );
 
   // Lock balance rows in a fixed order (location id) so two transfers never wait on each other in a circle.
   const locationIds = toLocation
@@ -545,6 +560,14 @@ export async function recordMovementIn(
     from.onHand + change,
     held ? from.reserved - reservedTaken : undefined,
   );
+  const heldChange =
+    holdReason === null
+      ? 0n
+      : heldChangeOf(from, {
+          onHand: from.onHand + change,
+          reserved: from.reserved - reservedTaken,
+        });
+  await addToItemHeld(tx, item.id, heldChange);
   const [inserted] = await tx
     .insert(stockMovements)
     .values({
@@ -617,7 +640,9 @@ export async function recordMovementIn(
     balance: {
       onHand: quantityToNumber(itemOnHandAfter),
       reserved: quantityToNumber(reserved),
-      available: quantityToNumber(itemOnHandAfter - reserved),
+      available: quantityToNumber(
+        itemOnHandAfter - reserved - parseQuantity(item.held) - heldChange,
+      ),
     },
   };
 }

@@ -32,6 +32,7 @@ import { receivingRouteRows } from "./route-roles.receiving";
 import { supplierRouteRows } from "./route-roles.suppliers";
 import { onOrderRouteRows } from "./route-roles.on-order";
 import { lotRouteRows } from "./route-roles.lots";
+import { lotHoldRouteRows } from "./route-roles.lot-holds";
 import {
   byCapability,
   expectedStatus,
@@ -53,6 +54,7 @@ const table: Row[] = [
   ...receivingRouteRows,
   ...onOrderRouteRows,
   ...lotRouteRows,
+  ...lotHoldRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",

@@ -13,6 +13,7 @@ export function ItemSummaryFigures({
     unit: string;
     onHand: number;
     reserved: number;
+    held: number;
     available: number;
     onOrder: number;
     reorderPoint: number;
@@ -22,7 +23,9 @@ export function ItemSummaryFigures({
 }) {
   const unit = item.unit;
   return (
-    <dl className="panel grid grid-cols-2 gap-4 sm:grid-cols-3 lg:grid-cols-7">
+    <dl
+      className={`panel grid grid-cols-2 gap-4 sm:grid-cols-3 ${item.held > 0 ? "lg:grid-cols-8" : "lg:grid-cols-7"}`}
+    >
       <SummaryFigure
         label="On hand"
         value={formatStockQuantity(item.onHand, unit)}
@@ -32,6 +35,16 @@ export function ItemSummaryFigures({
         label="Reserved"
         value={formatStockQuantity(item.reserved, unit)}
       />
+      {item.held > 0 ? (
+        <SummaryFigure
+          label="On hold"
+          value={
+            <span className="text-danger">
+              {formatStockQuantity(item.held, unit)}
+            </span>
+          }
+        />
+      ) : null}
       <SummaryFigure
         label="Available"
         value={formatStockQuantity(item.available, unit)}
