@@ -14,7 +14,8 @@ import {
   lotQuerySchema,
   releaseLotSchema,
 } from "./lot-hold-requests";
-import { findLotByNumber, holdLot, releaseLot } from "./lot-holds.server";
+import { lotByNumber } from "./lot-details.server";
+import { holdLot, releaseLot } from "./lot-holds.server";
 
 /** Runs a hold or a release: 200 with the lot, 400 for a bad body, 404 no such lot, 409 ambiguous or in the wrong state. */
 export function answerLotHoldStep(
@@ -27,11 +28,11 @@ export function answerLotHoldStep(
     const { sku } = readSearchParams(request, lotQuerySchema);
     if (step === "hold") {
       const { reason } = await readJsonBody(request, holdLotSchema);
-      const lotId = await findLotByNumber(lotNumber, sku);
+      const { id: lotId } = await lotByNumber(lotNumber, sku ?? null);
       return Response.json(await holdLot(lotId, reason, userId));
     }
     const { reason } = await readOptionalJsonBody(request, releaseLotSchema);
-    const lotId = await findLotByNumber(lotNumber, sku);
+    const { id: lotId } = await lotByNumber(lotNumber, sku ?? null);
     return Response.json(await releaseLot(lotId, reason, userId));
   });
 }

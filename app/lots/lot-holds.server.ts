@@ -56,41 +56,6 @@ export async function findLotHold(
   };
 }
 
-/**
- * The lot a number names. Lot numbers are unique per item only: with `sku` it is that
- * item's lot; without, a number two items share is refused (409) naming their SKUs.
- */
-export async function findLotByNumber(
-  number: string,
-  sku?: string,
-): Promise<number> {
-  const rows = await db
-    .select({ id: lots.id, sku: items.sku })
-    .from(lots)
-    .innerJoin(items, eq(items.id, lots.itemId))
-    .where(
-      sku === undefined
-        ? eq(lots.lotNumber, number)
-        : and(eq(lots.lotNumber, number), eq(items.sku, sku)),
-    )
-    .orderBy(items.sku)
-    .limit(50);
-  if (rows.length === 0)
-    throw new DomainError(
-      404,
-      sku === undefined
-        ? `No lot "${number}".`
-        : `No lot "${number}" of ${sku}.`,
-    );
-  if (rows.length > 1)
-    throw new DomainError(
-      409,
-      `Lot "${number}" is a lot of several items (${rows.map((row) => row.sku).join(", ")}): add ?sku= to say which.`,
-      "sku",
-    );
-  return rows[0]!.id;
-}
-
 /** Locks the lot's item, then the lot; 404 when there is no such lot. */
 async function lockLot(tx: Transaction, lotId: number) {
   const [found] = await tx
