@@ -3,6 +3,8 @@
  * write transaction that locks in the ledger's order: the item row, then the lot, then the
  * lot's balance rows. A hold adds the free part of the lot's balances (on hand − reserved)
  * to `items.held`; a release takes it off again. The history is kept in `lot_hold_events`.
+ * After the commit the ledger's after-commit work runs (a hold can take an item below its
+ * reorder point and open a low-stock alert; a release can close it).
  */
 import { and, eq } from "drizzle-orm";
 import { db, type Transaction } from "~/db/client.server";
@@ -12,6 +14,7 @@ import { parseQuantity } from "~/lib/decimal-amounts";
 import { DomainError } from "~/lib/domain-error";
 import { heldPartOf } from "~/stock/lot-hold";
 import { addToItemHeld } from "~/stock/lot-hold.server";
+import { movementsCommitted } from "~/stock/stock-movements.server";
 
 /** A lot as the hold and release answers show it. */
 export interface LotHoldView {
@@ -109,7 +112,7 @@ export async function holdLot(
   reason: string,
   userId: string,
 ): Promise<LotHoldView> {
-  return writeTransaction(
+  const view = await writeTransaction(
     async (tx) => {
       const lot = await lockLot(tx, lotId);
       if (lot.holdReason !== null)
@@ -135,6 +138,8 @@ export async function holdLot(
     },
     { label: "lot hold" },
   );
+  await movementsCommitted([view.sku]);
+  return view;
 }
 
 /** Releases the lot from its hold, with an optional note; 409 when it is not on hold. */
@@ -143,7 +148,7 @@ export async function releaseLot(
   reason: string | undefined,
   userId: string,
 ): Promise<LotHoldView> {
-  return writeTransaction(
+  const view = await writeTransaction(
     async (tx) => {
       const lot = await lockLot(tx, lotId);
       if (lot.holdReason === null)
@@ -165,4 +170,6 @@ export async function releaseLot(
     },
     { label: "lot release" },
   );
+  await movementsCommitted([view.sku]);
+  return view;
 }

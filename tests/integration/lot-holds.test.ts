@@ -10,7 +10,7 @@
  */
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { lotHoldEvents, lots } from "~/db/schema";
+import { items, lotHoldEvents, lots, stockAlerts } from "~/db/schema";
 import {
   baseUrl,
   flashCookieFrom,
@@ -349,6 +349,59 @@ describe("a lot on hold", () => {
     expect((await reserved.json()).reserved).toEqual([
       expect.objectContaining({ lot: lotA, quantity: 8 }),
     ]);
+  });
+});
+
+describe("a hold and the low-stock alert", () => {
+  it("opens the alert when the hold takes the item below its reorder point, and the release closes it", async () => {
+    const sku = uniqueCode("LOW");
+    const created = await sendJson(
+      "POST",
+      "/api/v1/items",
+      {
+        kind: "part",
+        sku,
+        name: "Shaft circlip",
+        unit: "pcs",
+        reorderPoint: 5,
+        reorderQuantity: 20,
+      },
+      buyer,
+    );
+    expect(created.status).toBe(201);
+    const lot = uniqueCode("LC");
+    await receive(storekeeper, {
+      sku,
+      lot,
+      location: rackA,
+      quantity: 4,
+      unitCost: 1,
+    });
+    await receive(storekeeper, {
+      sku,
+      lot: uniqueCode("LD"),
+      location: rackA,
+      quantity: 4,
+      unitCost: 1,
+    });
+    const [{ id }] = (await testDb()
+      .select({ id: items.id })
+      .from(items)
+      .where(eq(items.sku, sku))) as [{ id: number }];
+    const openAlerts = async () =>
+      (
+        await testDb()
+          .select({ id: stockAlerts.id })
+          .from(stockAlerts)
+          .where(eq(stockAlerts.openItemId, id))
+      ).length;
+    // 8 on hand, reorder point 5: not low.
+    expect(await openAlerts()).toBe(0);
+    // 4 held: 8 − 4 = 4 available, below 5.
+    expect((await hold(lot, { reason: "Wrong temper" })).status).toBe(200);
+    expect(await openAlerts()).toBe(1);
+    expect((await release(lot, {})).status).toBe(200);
+    expect(await openAlerts()).toBe(0);
   });
 });
 
