@@ -3,7 +3,8 @@
  * form that holds a free lot or releases a held one, with the reason (the hold and release
  * routes answer it).
  */
-import { Form } from "react-router";
+import type { SubmissionResult } from "@conform-to/react";
+import { useFetcher } from "react-router";
 import { formatDateTime } from "~/lib/format";
 import type { LotDetails } from "~/lots/lot-details.server";
 
@@ -15,6 +16,11 @@ export function LotQualityBlock({
   canHold: boolean;
 }) {
   const held = lot.hold;
+  // A fetcher, so a refusal (400 field error, 409 lot already held or free) is shown here;
+  // success redirects back to this page with its one-time message.
+  const fetcher = useFetcher<{ step: string; result: SubmissionResult }>();
+  const errors = fetcher.data?.result.error ?? {};
+  const refusal = [...(errors[""] ?? []), ...(errors.reason ?? [])].join(" ");
   return (
     <section
       aria-labelledby="hold-heading"
@@ -34,7 +40,7 @@ export function LotQualityBlock({
         <p>Free: not on hold.</p>
       )}
       {canHold ? (
-        <Form
+        <fetcher.Form
           method="post"
           action={`/stock/lots/${lot.id}/${held ? "release" : "hold"}`}
           className="mt-3 space-y-2"
@@ -47,15 +53,22 @@ export function LotQualityBlock({
               id="hold-reason"
               name="reason"
               className="field-input"
-              required
+              required={!held}
               maxLength={300}
               autoComplete="off"
+              aria-invalid={refusal ? true : undefined}
+              aria-describedby={refusal ? "hold-refusal" : undefined}
             />
+            {refusal ? (
+              <p id="hold-refusal" role="alert" className="field-error">
+                {refusal}
+              </p>
+            ) : null}
           </div>
           <button type="submit" className="button-quiet">
             {held ? "Release the lot" : "Put on hold"}
           </button>
-        </Form>
+        </fetcher.Form>
       ) : null}
     </section>
   );
