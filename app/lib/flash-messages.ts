@@ -109,6 +109,12 @@ export const flashMessageSubjects = {
   "purchase-order-closed": "purchaseOrder",
   "purchase-received": "purchaseReceipt",
   "wire-substitute-applied": "designLine",
+  "stocktake-started": "none",
+  "stocktake-cancelled": "none",
+  "stocktake-approved": "none",
+  "stocktake-recount-asked": "none",
+  "stocktake-count-saved": "none",
+  "stocktake-line-added": "none",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -221,6 +227,15 @@ const texts: {
     `Received ${countText(receipt.entries, { one: "spool or lot", other: "spools or lots" })} against ${receipt.reference}. The order is now ${receipt.statusLabel.toLowerCase()}.`,
   "wire-substitute-applied": (line) =>
     `Line ${line.position} of revision ${line.revision} now winds ${line.strands} × ${line.sku} in hand. The revision is a draft: check its figures, then release it.`,
+  "stocktake-started": () =>
+    "Stocktake started: the book is recorded. Count on the blind sheet.",
+  "stocktake-cancelled": () => "Stocktake cancelled. Nothing was posted.",
+  "stocktake-approved": () =>
+    "Stocktake approved: its differences are posted as count movements.",
+  "stocktake-recount-asked": () =>
+    "Recount asked: the line's count is cleared until it is counted again.",
+  "stocktake-count-saved": () => "Count saved.",
+  "stocktake-line-added": () => "Line added to the sheet: count it now.",
 };
 
 /** The words of a message, from the table and the subject the server looked up. */
