@@ -26,7 +26,11 @@ import { weighedCount } from "./stocktake-figures";
 import type { AddLineInput, CountInput } from "./stocktake-forms";
 import { lockStocktake } from "./stocktakes.server";
 
-/** The on hand of one balance now (a locking read: the latest committed value), 0 when there is none. */
+/**
+ * The on hand of one balance now, 0 when there is none: a locking read (MariaDB 10.11
+ * has no FOR SHARE, so FOR UPDATE), which sees the latest committed value rather than
+ * the transaction's snapshot and waits for a movement being written to that balance.
+ */
 export async function bookNow(
   tx: Transaction,
   line: { itemId: number; lotId: number; locationId: number },
@@ -41,7 +45,7 @@ export async function bookNow(
         eq(stockBalances.locationId, line.locationId),
       ),
     )
-    .for("share");
+    .for("update");
   return row ? parseQuantity(row.onHand) : 0n;
 }
 
