@@ -345,7 +345,7 @@ describe("a stocktake with movements during the count", () => {
     // The review page: variance values at the average cost (2.50 per magnet, 12.00 per kg):
     // −3 × 2.50 = −7.50; −0.145 × 12.00 = −1.74; +0.250 × 12.00 = +3.00; net −6.24.
     const review = await (await get(`/stocktakes/${id}`, manager)).text();
-    for (const value of ["-7.50", "-1.74", "3.00", "-6.24"])
+    for (const value of ["−7.50", "−1.74", "+3.00", "−6.24"])
       expect(review).toContain(value);
 
     // A storekeeper cannot approve.

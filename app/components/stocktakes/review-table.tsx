@@ -8,6 +8,10 @@ import {
 } from "~/stock/stock-quantity-text";
 import type { StocktakeReview } from "~/stocktakes/stocktake-review";
 
+/** Money with its sign, a true minus for less: "+42.50", "−19.74" (the variance column's style). */
+const signedMoney = (value: number, currency = "") =>
+  `${value > 0 ? "+" : value < 0 ? "−" : ""}${moneyText(Math.abs(value), currency)}`;
+
 const quantity = (value: number | null, unit: string) =>
   value === null ? "—" : formatStockQuantity(value, unit);
 
@@ -116,7 +120,7 @@ export function ReviewTable({
                 <td className="text-right whitespace-nowrap">
                   {line.varianceValue === null
                     ? "—"
-                    : moneyText(line.varianceValue, "").trim()}
+                    : signedMoney(line.varianceValue)}
                 </td>
                 <td className="whitespace-nowrap text-xs">
                   {line.countedBy ? (
@@ -155,13 +159,13 @@ export function ReviewTable({
               <th scope="row" colSpan={6} className="text-right">
                 {totals.differences} of {totals.lines} lines differ · found over{" "}
                 {moneyText(totals.gainValue, currency)} · short{" "}
-                {moneyText(totals.lossValue, currency)}
+                {moneyText(Math.abs(totals.lossValue), currency)}
               </th>
               <th scope="col" className="text-right">
                 Net
               </th>
               <td className="text-right font-semibold whitespace-nowrap">
-                {moneyText(totals.netValue, currency)}
+                {signedMoney(totals.netValue, currency)}
               </td>
               <td colSpan={canAskRecount ? 2 : 1} />
             </tr>
