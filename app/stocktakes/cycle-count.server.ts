@@ -1,7 +1,13 @@
 /** The cycle-count plan from the database: each active location's stock value and last count. */
-import { and, eq, sql } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
-import { locations } from "~/db/schema";
+import {
+  items,
+  locations,
+  stockBalances,
+  stocktakeLocations,
+  stocktakes,
+} from "~/db/schema";
 import { todayUtc } from "~/lib/calendar-days";
 import { parseUnitCost } from "~/lib/decimal-amounts";
 import { cycleCountPlan, type PlannedLocation } from "./cycle-count-plan";
@@ -10,24 +16,41 @@ import { cycleCountPlan, type PlannedLocation } from "./cycle-count-plan";
 export async function weeklyCountPlan(
   now = new Date(),
 ): Promise<PlannedLocation[]> {
-  const rows = await db
-    .select({
-      id: locations.id,
-      code: locations.code,
-      lastCountedOn: locations.lastCountedOn,
-      // Σ on hand × the item's average cost, to ten-thousandths of money.
-      value: sql<string>`COALESCE((SELECT ROUND(SUM(b.on_hand * i.average_cost), 4) FROM stock_balances b JOIN items i ON i.id = b.item_id WHERE b.location_id = ${locations.id}), 0)`,
-      inOpenStocktake: sql<number>`EXISTS (SELECT 1 FROM stocktake_locations sl JOIN stocktakes s ON s.id = sl.stocktake_id WHERE sl.location_id = ${locations.id} AND s.status = 'counting')`,
-    })
-    .from(locations)
-    .where(and(eq(locations.active, true)));
+  const [places, values, open] = await Promise.all([
+    db
+      .select({
+        id: locations.id,
+        code: locations.code,
+        lastCountedOn: locations.lastCountedOn,
+      })
+      .from(locations)
+      .where(eq(locations.active, true)),
+    // Σ on hand × the item's average cost per location, to ten-thousandths of money.
+    db
+      .select({
+        locationId: stockBalances.locationId,
+        value: sql<string>`ROUND(SUM(${stockBalances.onHand} * ${items.averageCost}), 4)`,
+      })
+      .from(stockBalances)
+      .innerJoin(items, eq(items.id, stockBalances.itemId))
+      .groupBy(stockBalances.locationId),
+    db
+      .selectDistinct({ locationId: stocktakeLocations.locationId })
+      .from(stocktakeLocations)
+      .innerJoin(stocktakes, eq(stocktakes.id, stocktakeLocations.stocktakeId))
+      .where(eq(stocktakes.status, "counting")),
+  ]);
+  const valueAt = new Map(
+    values.map((row) => [row.locationId, parseUnitCost(String(row.value))]),
+  );
+  const counting = new Set(open.map((row) => row.locationId));
   return cycleCountPlan(
-    rows.map((row) => ({
-      id: row.id,
-      code: row.code,
-      lastCountedOn: row.lastCountedOn,
-      value: parseUnitCost(String(row.value)),
-      inOpenStocktake: Number(row.inOpenStocktake) === 1,
+    places.map((place) => ({
+      id: place.id,
+      code: place.code,
+      lastCountedOn: place.lastCountedOn,
+      value: valueAt.get(place.id) ?? 0n,
+      inOpenStocktake: counting.has(place.id),
     })),
     todayUtc(now),
   );

@@ -450,6 +450,40 @@ describe("a stocktake with movements during the count", () => {
   });
 });
 
+describe("the cycle-count plan on the stocktake list", () => {
+  /** The plan's section of the list page, as HTML. */
+  async function planSection(): Promise<string> {
+    const html = await (await get("/stocktakes", storekeeper)).text();
+    const start = html.indexOf('id="cycle-count-heading"');
+    expect(start).toBeGreaterThan(0);
+    return html.slice(start, html.indexOf("</section>", start));
+  }
+
+  it("puts a valuable, never-counted place first, and leaves it out while it is being counted", async () => {
+    const magnet = await createMagnet();
+    const vault = await createLocation(uniqueCode("VAULT"));
+    // 1,000,000 pieces × 2.50 = 2,500,000.00 of stock: worked by hand, far more than any
+    // other test's location, so class A and first among the never-counted.
+    await move({
+      type: "receipt",
+      sku: magnet,
+      location: vault,
+      quantity: 1_000_000,
+      unitCost: 2.5,
+    });
+    const before = await planSection();
+    expect(before).toContain(vault);
+    expect(before.replace(/\u00a0/g, " ")).toMatch(
+      new RegExp(`${vault}</td><td>A</td><td[^>]*>2,500,000.00 EUR`),
+    );
+    const id = await startedId(await start({ locations: [vault] }));
+    expect(await planSection()).not.toContain(vault);
+    expect((await step(id, { intent: "cancel" }, storekeeper)).status).toBe(
+      302,
+    );
+  });
+});
+
 describe("starting, cancelling and refusing", () => {
   it("starts by items on the lots and locations holding them, and cancels posting nothing", async () => {
     const wire = await createWire();
