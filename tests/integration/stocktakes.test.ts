@@ -450,6 +450,25 @@ describe("a stocktake with movements during the count", () => {
   });
 });
 
+describe("the demo", () => {
+  it("has a stocktake of parts shelving C in progress, two lines counted", async () => {
+    const [demo] = await rows<{
+      status: string;
+      lines: number;
+      counted: number;
+    }>(
+      `SELECT s.status, COUNT(l.id) AS \`lines\`, COUNT(l.counted) AS counted
+         FROM stocktakes s JOIN stocktake_locations sl ON sl.stocktake_id = s.id
+         JOIN locations c ON c.id = sl.location_id AND c.code = 'PARTS-C1'
+         LEFT JOIN stocktake_lines l ON l.stocktake_id = s.id
+        GROUP BY s.id ORDER BY s.id LIMIT 1`,
+      [],
+    );
+    expect(demo).toMatchObject({ status: "counting", counted: 2 });
+    expect(Number(demo!.lines)).toBeGreaterThan(2);
+  });
+});
+
 describe("the cycle-count plan on the stocktake list", () => {
   /** The plan's section of the list page, as HTML. */
   async function planSection(): Promise<string> {
