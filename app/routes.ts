@@ -55,6 +55,12 @@ export default [
       route(":orderId/lots.csv", "routes/build-order-lots-export.ts"),
     ]),
     route("buying-plan", "routes/buying-plan.tsx"),
+    ...prefix("stocktakes", [
+      index("routes/stocktakes.tsx"),
+      route(":stocktakeId", "routes/stocktake.tsx"),
+      route(":stocktakeId/count", "routes/stocktake-count.tsx"),
+      route(":stocktakeId/print", "routes/stocktake-print.tsx"),
+    ]),
     ...prefix("stock", [
       index("routes/stock.tsx"),
       route("export.csv", "routes/stock-export.ts"),

@@ -114,6 +114,12 @@ export const flashMessageSubjects = {
   "lot-document-attached": "none",
   "lot-held": "lot",
   "lot-released": "lot",
+  "stocktake-started": "none",
+  "stocktake-cancelled": "none",
+  "stocktake-approved": "none",
+  "stocktake-recount-asked": "none",
+  "stocktake-count-saved": "none",
+  "stocktake-line-added": "none",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -232,6 +238,15 @@ const texts: {
     `Lot ${lot.number} of ${lot.sku} is on hold${lot.holdReason ? `: ${lot.holdReason}` : ""}. It cannot be issued or reserved until it is released.`,
   "lot-released": (lot) =>
     `Lot ${lot.number} of ${lot.sku} is released: it can be issued and reserved again.`,
+  "stocktake-started": () =>
+    "Stocktake started: the book is recorded. Count on the blind sheet.",
+  "stocktake-cancelled": () => "Stocktake cancelled. Nothing was posted.",
+  "stocktake-approved": () =>
+    "Stocktake approved: its differences are posted as count movements.",
+  "stocktake-recount-asked": () =>
+    "Recount asked: the line's count is cleared until it is counted again.",
+  "stocktake-count-saved": () => "Count saved.",
+  "stocktake-line-added": () => "Line added to the sheet: count it now.",
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

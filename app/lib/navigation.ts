@@ -1,11 +1,11 @@
-import type { Capability } from "./capabilities";
+import { userCan, type Capability } from "./capabilities";
 import type { Role } from "./roles";
 
 export interface NavigationItem {
   to: string;
   label: string;
-  /** Shown to those who have it (app/lib/capabilities.ts); without one, to everyone signed in. */
-  capability?: Capability;
+  /** Shown to those who have it — or any of them, when a list (app/lib/capabilities.ts); without one, to everyone signed in. */
+  capability?: Capability | readonly Capability[];
   /** Lit only on this exact address, not on the pages below it (which have their own items). */
   exact?: boolean;
 }
@@ -16,6 +16,11 @@ export const navigationItems: readonly NavigationItem[] = [
   { to: "/stock", label: "Stock", exact: true },
   { to: "/stock/record", label: "Record movement", capability: "recordStock" },
   { to: "/stock/journal", label: "Journal" },
+  {
+    to: "/stocktakes",
+    label: "Stocktakes",
+    capability: ["startStocktakes", "countStock", "approveStocktakes"],
+  },
   { to: "/suppliers", label: "Suppliers" },
   { to: "/best-prices", label: "Best prices" },
   { to: "/prices", label: "Metal base & rates" },
@@ -31,6 +36,17 @@ export const navigationItems: readonly NavigationItem[] = [
   { to: "/admin/people", label: "People", capability: "managePeople" },
   { to: "/admin/outbox", label: "Outbox", capability: "readOutbox" },
 ];
+
+/** True when the menu item is for this user. */
+export function showsNavigationItem(
+  item: NavigationItem,
+  user: { roles: readonly Role[] } | null | undefined,
+): boolean {
+  if (!item.capability) return true;
+  const needed: readonly Capability[] =
+    typeof item.capability === "string" ? [item.capability] : item.capability;
+  return needed.some((capability) => userCan(user, capability));
+}
 
 /** What each role is trusted with (the product brief's role table), shown on the start page. */
 export const roleDuties: Record<Role, { title: string; duties: string[] }> = {

@@ -11,8 +11,7 @@ import { sessionHeaders } from "~/auth/session-headers.server";
 import { FlashMessage } from "~/components/flash-message";
 import { RouteErrorNotice, RouteErrorPage } from "~/components/route-error";
 import { takeFlash } from "~/lib/flash.server";
-import { navigationItems } from "~/lib/navigation";
-import { userCan } from "~/lib/capabilities";
+import { navigationItems, showsNavigationItem } from "~/lib/navigation";
 import { roleLabels } from "~/lib/roles";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -72,8 +71,8 @@ function ShellFrame({
   flash: ShellData["flash"];
   children: React.ReactNode;
 }) {
-  const items = navigationItems.filter(
-    (item) => !item.capability || userCan(user, item.capability),
+  const items = navigationItems.filter((item) =>
+    showsNavigationItem(item, user),
   );
   return (
     <div className="flex min-h-screen flex-col">

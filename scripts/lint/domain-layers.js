@@ -25,6 +25,7 @@ export const domainLayers = [
   ["build-orders"],
   ["lots"],
   ["buying-plan"],
+  ["stocktakes"],
   ["components"],
   ["routes"],
 ];

@@ -33,6 +33,7 @@ import { supplierRouteRows } from "./route-roles.suppliers";
 import { onOrderRouteRows } from "./route-roles.on-order";
 import { lotRouteRows } from "./route-roles.lots";
 import { lotHoldRouteRows } from "./route-roles.lot-holds";
+import { stocktakeRouteRows } from "./route-roles.stocktakes";
 import {
   byCapability,
   expectedStatus,
@@ -55,6 +56,7 @@ const table: Row[] = [
   ...onOrderRouteRows,
   ...lotRouteRows,
   ...lotHoldRouteRows,
+  ...stocktakeRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",
