@@ -24,6 +24,7 @@ export const domainLayers = [
   ["insight"],
   ["build-orders"],
   ["buying-plan"],
+  ["labels"],
   ["components"],
   ["routes"],
 ];
