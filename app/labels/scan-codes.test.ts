@@ -30,9 +30,7 @@ describe("scanCodeText and scanCodeUrl", () => {
 
   it("refuses what is not a lot id or a location code", () => {
     expect(() => scanCodeText({ kind: "lot", lotId: 0 })).toThrow(RangeError);
-    expect(() => scanCodeText({ kind: "lot", lotId: 1.5 })).toThrow(
-      RangeError,
-    );
+    expect(() => scanCodeText({ kind: "lot", lotId: 1.5 })).toThrow(RangeError);
     expect(() => scanCodeText({ kind: "lot", lotId: 2_147_483_648 })).toThrow(
       RangeError,
     );
@@ -82,9 +80,9 @@ describe("parseScannedText", () => {
       { kind: "location", code: "BENCH" },
     ] as const) {
       expect(parseScannedText(scanCodeText(code))).toEqual(code);
-      expect(
-        parseScannedText(scanCodeUrl(origins[0]!, code), origins),
-      ).toEqual(code);
+      expect(parseScannedText(scanCodeUrl(origins[0]!, code), origins)).toEqual(
+        code,
+      );
     }
   });
 

@@ -26,8 +26,7 @@
  */
 
 export type ScanCode =
-  | { kind: "lot"; lotId: number }
-  | { kind: "location"; code: string };
+  { kind: "lot"; lotId: number } | { kind: "location"; code: string };
 
 export type ScannedText = ScanCode | { kind: "foreign"; reason: string };
 
