@@ -54,6 +54,14 @@ export default [
       route(":orderId", "routes/build-order.tsx"),
     ]),
     route("buying-plan", "routes/buying-plan.tsx"),
+    // Labels and scanning (issue 20): printable labels, and where a label's QR code leads.
+    ...prefix("labels", [
+      route("lots", "routes/labels-lots.tsx"),
+      route("lots/:lotId", "routes/label-lot.tsx"),
+      route("locations", "routes/labels-locations.tsx"),
+      route("locations/:code", "routes/label-location.tsx"),
+    ]),
+    route("scan/:code", "routes/scan.tsx"),
     ...prefix("stock", [
       index("routes/stock.tsx"),
       route("export.csv", "routes/stock-export.ts"),
@@ -87,6 +95,7 @@ export default [
     route("items", "routes/api.v1.items.ts"),
     route("items/:sku", "routes/api.v1.item.ts"),
     route("locations", "routes/api.v1.locations.ts"),
+    route("scan-lookup", "routes/api.v1.scan-lookup.ts"),
     route("stock-movements", "routes/api.v1.stock-movements.ts"),
     route("suppliers", "routes/api.v1.suppliers.ts"),
     route("suppliers/:supplierId", "routes/api.v1.supplier.ts"),

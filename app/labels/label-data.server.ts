@@ -17,39 +17,7 @@ import {
 } from "~/db/schema";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { findMagnetGradeByName } from "~/reference/magnet-grades.server";
-
-export interface LotLabelData {
-  lotId: number;
-  sku: string;
-  itemName: string;
-  sizeOrGrade: string;
-  kind: "wire" | "magnet" | "part";
-  unit: string;
-  lotNumber: string;
-  supplierBatch: string | null;
-  supplierName: string | null;
-  receivedOn: string | null;
-  /** Empty spool mass, kg (wire lots). */
-  tareKg: number | null;
-  /** Net on hand of this lot, all locations together, in the item's unit. */
-  onHand: number;
-  /** Where the lot has stock, by location code (several when it was split). */
-  locations: string[];
-  /** A magnet batch: its grade, shape and coating, and the grade's working limit. */
-  magnet: {
-    grade: string;
-    shape: string;
-    coating: string;
-    magnetisation: string;
-    maxWorkingTemperatureC: number | null;
-  } | null;
-}
-
-export interface LocationLabelData {
-  code: string;
-  name: string;
-  kind: "store" | "bin";
-}
+import type { LocationLabelData, LotLabelData } from "./label-types";
 
 /** The lots' label data, in the order of the ids asked for; ids of no lot are left out. */
 export async function findLotLabels(
@@ -206,4 +174,27 @@ export async function lotIdOfReceiptMovement(
     )
     .limit(1);
   return row && row.lotId > 0 ? row.lotId : null;
+}
+
+/**
+ * The lots a receipt brought in, to offer their labels: a delivery against a purchase order
+ * (its receipt id) or one receipt movement of the record page.
+ */
+export async function receivedLotsToLabel(
+  receipt: { purchaseReceiptId: number } | { movementId: number },
+): Promise<{ lotId: number; lotNumber: string; sku: string }[]> {
+  const lotIds =
+    "purchaseReceiptId" in receipt
+      ? await lotIdsOfPurchaseReceipt(receipt.purchaseReceiptId)
+      : [await lotIdOfReceiptMovement(receipt.movementId)].flatMap(
+          (id) => id ?? [],
+        );
+  if (lotIds.length === 0) return [];
+  const rows = await db
+    .select({ lotId: lots.id, lotNumber: lots.lotNumber, sku: items.sku })
+    .from(lots)
+    .innerJoin(items, eq(items.id, lots.itemId))
+    .where(inArray(lots.id, lotIds));
+  const byId = new Map(rows.map((row) => [row.lotId, row]));
+  return lotIds.flatMap((id) => byId.get(id) ?? []);
 }

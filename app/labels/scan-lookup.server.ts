@@ -4,24 +4,8 @@
  */
 import { appUrl } from "~/lib/app-url.server";
 import { findLocationLabels, findLotLabels } from "./label-data.server";
+import type { ScanLookupAnswer } from "./label-types";
 import { parseScannedText, scanCodeText, type ScanCode } from "./scan-codes";
-
-export type ScanLookupAnswer =
-  | {
-      kind: "lot";
-      code: string;
-      lotId: number;
-      sku: string;
-      name: string;
-      lot: string;
-      unit: string;
-      /** Net on hand of the lot, all locations together. */
-      onHand: number;
-      /** The one location the lot has stock at; null when none or several. */
-      location: string | null;
-      locations: string[];
-    }
-  | { kind: "location"; code: string; name: string };
 
 export type ScanLookup =
   | { status: "found"; answer: ScanLookupAnswer }

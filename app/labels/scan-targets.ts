@@ -32,3 +32,26 @@ export function recordPageAfterScan(
   }
   return `/stock/record?${next}`;
 }
+
+/** What a scan filled, as the scan panel says it. */
+export function scanFillText(
+  scanned:
+    | {
+        kind: "lot";
+        sku: string;
+        name: string;
+        lot: string;
+        location: string | null;
+        locations: string[];
+      }
+    | { kind: "location"; code: string; name: string },
+): string {
+  if (scanned.kind === "location")
+    return `Location ${scanned.code} (${scanned.name}) filled.`;
+  const lot = `Lot ${scanned.lot} of ${scanned.sku} ${scanned.name}`;
+  if (scanned.location)
+    return `${lot} at ${scanned.location}: item, lot and location filled.`;
+  if (scanned.locations.length > 1)
+    return `${lot}: item and lot filled. It is at ${scanned.locations.join(", ")}: choose the location.`;
+  return `${lot}: item and lot filled. It has no stock left in any location.`;
+}

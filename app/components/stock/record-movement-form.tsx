@@ -41,6 +41,7 @@ export function RecordMovementForm({
   type,
   sku,
   item,
+  scanned,
   locations,
   usualLocation,
   currency,
@@ -52,6 +53,8 @@ export function RecordMovementForm({
   /** The SKU searched for (names the form). */
   sku: string;
   item: MovementItem;
+  /** The lot and location of a scanned label, chosen to start with. */
+  scanned: { lot: string | null; location: string | null };
   locations: { code: string; name: string }[];
   usualLocation: string | null;
   currency: string;
@@ -80,6 +83,7 @@ export function RecordMovementForm({
     isWire,
     balances: item.balances,
     orders,
+    scanned,
   });
 
   return (
@@ -91,6 +95,7 @@ export function RecordMovementForm({
 
       {type === "receipt" ? (
         <ReceiptFields
+          scanned={scanned}
           unit={unit}
           isWire={isWire}
           locations={locations}
@@ -101,6 +106,7 @@ export function RecordMovementForm({
         />
       ) : (
         <BalanceMovementFields
+          scanned={scanned}
           type={type}
           unit={unit}
           isWire={isWire}
