@@ -48,10 +48,14 @@ export async function findLotLabels(
     .leftJoin(magnetItems, eq(magnetItems.itemId, items.id))
     .where(inArray(lots.id, [...lotIds]));
   const balances = await lotBalances(rows.map((row) => row.lotId));
-  const grades = new Map<string, number | null>();
+  // The grade's name as the reference table writes it ("N42SH"; the item keeps its key) and its working limit.
+  const grades = new Map<string, { name: string; maxC: number | null }>();
   for (const key of new Set(rows.flatMap((row) => row.gradeKey ?? []))) {
     const grade = await findMagnetGradeByName(key);
-    grades.set(key, grade?.maxWorkingTemperatureC ?? null);
+    grades.set(key, {
+      name: grade?.name ?? key.toUpperCase(),
+      maxC: grade?.maxWorkingTemperatureC ?? null,
+    });
   }
   const byId = new Map(
     rows.map((row) => {
@@ -78,11 +82,11 @@ export async function findLotLabels(
         magnet:
           row.kind === "magnet" && row.gradeKey && row.shape
             ? {
-                grade: row.gradeKey,
+                grade: grades.get(row.gradeKey)?.name ?? row.gradeKey,
                 shape: row.shape,
                 coating: row.coating ?? "",
                 magnetisation: row.magnetisation ?? "",
-                maxWorkingTemperatureC: grades.get(row.gradeKey) ?? null,
+                maxWorkingTemperatureC: grades.get(row.gradeKey)?.maxC ?? null,
               }
             : null,
       };

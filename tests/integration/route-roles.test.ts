@@ -31,6 +31,7 @@ import { purchaseOrderPageRows } from "./route-roles.purchase-order-pages";
 import { receivingRouteRows } from "./route-roles.receiving";
 import { supplierRouteRows } from "./route-roles.suppliers";
 import { onOrderRouteRows } from "./route-roles.on-order";
+import { labelRouteRows } from "./route-roles.labels";
 import {
   byCapability,
   expectedStatus,
@@ -51,6 +52,7 @@ const table: Row[] = [
   ...purchaseOrderPageRows,
   ...receivingRouteRows,
   ...onOrderRouteRows,
+  ...labelRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",
