@@ -123,7 +123,7 @@ export default function StockReceive({
           order is recorded on the{" "}
           <Link
             to="/stock/record?type=receipt"
-            className="text-copper-700 underline-offset-2 hover:underline"
+            className="text-copper-700 underline underline-offset-2"
           >
             record page
           </Link>
@@ -146,7 +146,7 @@ export default function StockReceive({
           <h2 id="order-heading" className="text-lg font-semibold">
             <Link
               to={`/purchase-orders/${order.id}`}
-              className="text-copper-700 underline-offset-2 hover:underline"
+              className="text-copper-700 underline underline-offset-2"
             >
               {order.number}
             </Link>{" "}

@@ -11,8 +11,15 @@ import path from "node:path";
 import { and, count, eq } from "drizzle-orm";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { lots, stockMovements } from "~/db/schema";
-import { baseUrl, sendJson, signInAs } from "../support/app-client";
+import { items, lots, stockMovements } from "~/db/schema";
+import { baseUrl, newPerson, sendJson, signInAs } from "../support/app-client";
+import { createMagnetItem, receive } from "../support/build-order-fixtures";
+import {
+  addRates,
+  createOrder,
+  createOrderSupplier,
+  uniqueCurrency,
+} from "../support/purchase-order-fixtures";
 import { seriousAccessibilityViolations } from "../support/accessibility";
 import {
   launchBrowser,
@@ -33,6 +40,8 @@ let sku = "";
 let bin = "";
 const lot = uniqueCode("SP");
 let lotId = 0;
+let magnetLotId = 0;
+let buyer = "";
 /** Where the notes of this work keep the screenshots looked at (outside the repository). */
 const notesScreens = "/work/notes/screens-r20";
 
@@ -40,6 +49,14 @@ async function screenshot(page: Page, name: string) {
   const file = await saveScreenshot(page, name);
   if (fs.existsSync(notesScreens))
     fs.copyFileSync(file, path.join(notesScreens, `${name}.png`));
+}
+
+async function itemIdOfSku(itemSku: string): Promise<number> {
+  const [row] = await testDb()
+    .select({ id: items.id })
+    .from(items)
+    .where(eq(items.sku, itemSku));
+  return row!.id;
 }
 
 async function movementsOfLot(): Promise<number> {
@@ -54,7 +71,7 @@ beforeAll(async () => {
   browser = await launchBrowser();
   bin = await createLocation(uniqueCode("RACK"), "Wire rack by the door");
   sku = uniqueCode("CU");
-  const buyer = await signInAs("buyer");
+  buyer = await signInAs("buyer");
   const created = await sendJson(
     "POST",
     "/api/v1/items",
@@ -72,7 +89,42 @@ beforeAll(async () => {
     buyer,
   );
   expect(created.status).toBe(201);
+  // A magnet batch beside the spool, for the A4 sheet.
+  const magnet = await createMagnetItem(buyer);
+  const magnetLot = uniqueCode("MB");
+  const storekeeper = await signInAs("storekeeper");
+  await receive(storekeeper, {
+    sku: magnet.sku,
+    lot: magnetLot,
+    location: bin,
+    quantity: 120,
+    unitCost: 0.85,
+    supplierBatch: "MB-2026-118",
+  });
+  const [row] = await testDb()
+    .select({ id: lots.id })
+    .from(lots)
+    .where(eq(lots.lotNumber, magnetLot));
+  magnetLotId = row!.id;
 });
+
+/** The same page at twice the pixels, signed in as the page's person: a legible screenshot of a small label. */
+async function sharpScreenshot(
+  page: Page,
+  name: string,
+  media: "print" | "screen",
+) {
+  const context = await browser.newContext({
+    deviceScaleFactor: 2,
+    viewport: { width: 900, height: 800 },
+    storageState: await page.context().storageState(),
+  });
+  const sharp = await context.newPage();
+  await sharp.goto(page.url());
+  await sharp.emulateMedia({ media });
+  await screenshot(sharp, name);
+  await context.close();
+}
 afterAll(async () => {
   await browser?.close();
   await closeTestDatabase();
@@ -116,9 +168,7 @@ describe("labels and scanning", () => {
       /Net on hand\s*4\.800\s*kg/,
     );
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
-    await page.emulateMedia({ media: "print" });
-    await screenshot(page, "labels-lot-62x100");
-    await page.emulateMedia({ media: "screen" });
+    await sharpScreenshot(page, "labels-lot-62x100", "screen");
 
     const qr = label.getByRole("img", { name: /QR code of lot/ });
     qrText = await readQrCodeIn(qr);
@@ -128,8 +178,25 @@ describe("labels and scanning", () => {
     await page.waitForURL(/size=a4/);
     await label.waitFor();
     expect(await readQrCodeIn(qr)).toBe(qrText);
-    await page.emulateMedia({ media: "print" });
-    await screenshot(page, "labels-lot-a4");
+
+    // An A4 sheet of the spool, a magnet batch (with its caution) and the bin.
+    await page.goto(
+      `${baseUrl()}/labels/lots?ids=${lotId},${magnetLotId}&size=a4`,
+    );
+    await waitForHydration(page);
+    expect(
+      await page
+        .getByRole("article", { name: /Label of lot .* of N42SH/ })
+        .textContent(),
+    ).toContain("Strong magnets: pinch, crush and shatter");
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+    await sharpScreenshot(page, "labels-lots-a4", "screen");
+    await page.goto(`${baseUrl()}/labels/locations/${bin}`);
+    await waitForHydration(page);
+    const binQr = page.getByRole("img", { name: /QR code of location/ });
+    expect(await readQrCodeIn(binQr)).toBe(`${baseUrl()}/scan/B${bin}`);
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+    await sharpScreenshot(page, "labels-location-62x100", "screen");
     await page.close();
   });
 
@@ -201,6 +268,75 @@ describe("labels and scanning", () => {
     await page.close();
   });
 
+  it("fills the receive-against-order form from scans and offers the new spool's label", async () => {
+    const person = await newPerson("storekeeper");
+    const currency = uniqueCurrency();
+    await addRates(currency, [{ validFrom: "2020-01-01", rate: "1.000000" }]);
+    const order = await createOrder({
+      supplierId: await createOrderSupplier(currency),
+      currency,
+      userId: person.id,
+      lines: [{ itemId: await itemIdOfSku(sku), quantity: "20.000" }],
+    });
+    const other = await createLocation(uniqueCode("BAY"), "Receiving bay");
+    const page = await signIn(browser, person);
+    await page.goto(`${baseUrl()}/stock/receive?order=${order.id}`);
+    await waitForHydration(page);
+    // A bin label scanned (typed by the wedge, Enter) sets where the spool goes; nothing is sent.
+    await page.getByLabel("Scanned code").focus();
+    await page.keyboard.type(`${baseUrl()}/scan/B${other}`);
+    await page.keyboard.press("Enter");
+    await page
+      .getByText(
+        `Location ${other} (Receiving bay) filled for spool 1 of line 1.`,
+      )
+      .waitFor();
+    await expect(page.getByLabel("Into location").inputValue()).resolves.toBe(
+      other,
+    );
+    // The existing spool's label: its lot number (and its rack) go into the spool's fields.
+    await page.keyboard.type(`L${lotId}`);
+    await page.keyboard.press("Enter");
+    await page
+      .getByText(`Lot ${lot} of ${sku} filled for spool 1 of line 1 at ${bin}.`)
+      .waitFor();
+    await expect(
+      page.getByLabel("Spool lot number").inputValue(),
+    ).resolves.toBe(lot);
+    await expect(page.getByLabel("Into location").inputValue()).resolves.toBe(
+      bin,
+    );
+    // A magnet batch's label is of an item the order does not have: nothing is filled.
+    await page.keyboard.type(`L${magnetLotId}`);
+    await page.keyboard.press("Enter");
+    await page.getByText(/does not order\. Nothing was filled\./).waitFor();
+    await expect(
+      page.getByLabel("Spool lot number").inputValue(),
+    ).resolves.toBe(lot);
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+
+    const newLot = uniqueCode("SP");
+    await page.getByLabel("Spool lot number").fill(newLot);
+    await page.getByLabel("Gross weight").fill("6.15");
+    await page.getByLabel("Tare weight").fill("0.65");
+    await page.getByRole("button", { name: /Receive against/ }).click();
+    const print = page.getByRole("region", { name: "Print labels" });
+    await print.waitFor();
+    await print
+      .getByRole("link", { name: `Label of lot ${newLot} (${sku})` })
+      .click();
+    await page
+      .getByRole("heading", { name: `Label of lot ${newLot}` })
+      .waitFor();
+    // Worked by hand: 6.15 − 0.65 = 5.50 kg net.
+    expect(
+      await page
+        .getByRole("article", { name: `Label of lot ${newLot} of ${sku}` })
+        .textContent(),
+    ).toMatch(/Net on hand\s*5\.500\s*kg/);
+    await page.close();
+  });
+
   it("reads the QR code through a camera (Chromium's fake camera playing the label)", async () => {
     const video = qrCodeVideoFile(qrText);
     const withCamera = await launchBrowser([
@@ -217,7 +353,19 @@ describe("labels and scanning", () => {
         .getByText(
           `Lot ${lot} of ${sku} Enamelled copper 0.50 mm at ${bin}: item, lot and location filled.`,
         )
-        .waitFor({ timeout: 20_000 });
+        .waitFor({ timeout: 30_000 })
+        .catch(async (error: unknown) => {
+          await screenshot(page, "labels-camera-failed");
+          throw new Error(
+            `The scan panel says: ${await page.locator("#scan-result").textContent()}; the camera view: ${await page
+              .getByLabel("Camera view")
+              .evaluate(
+                (video: HTMLVideoElement) =>
+                  `${video.videoWidth}×${video.videoHeight}, ready state ${video.readyState}, ${video.paused ? "paused" : "playing"}`,
+              )}`,
+            { cause: error },
+          );
+        });
       await expect
         .poll(() =>
           page

@@ -1,6 +1,6 @@
 /**
- * QR codes for the browser tests: read a label's QR code (its SVG drawn on a canvas in the
- * page) with @zxing/library, the package the app's camera reader is built on, and write a
+ * QR codes for the browser tests: read a label's QR code (as the page displays it) with
+ * @zxing/library, the package the app's camera reader is built on, and write a
  * QR code as a Y4M video file that Chromium plays as a fake camera
  * (`--use-file-for-fake-video-capture`).
  */
@@ -14,31 +14,32 @@ import {
   RGBLuminanceSource,
 } from "@zxing/library";
 import type { Locator } from "playwright-core";
-import QRCode from "qrcode";
+import { labelQrSymbol, quietZoneModules } from "~/labels/label-qr.server";
 
-/** The text of the QR code drawn by the SVG inside `qr`, read from the page's own pixels. */
+/**
+ * The text of the QR code shown by `qr`, read from the page as displayed: a screenshot of
+ * the element (PNG), turned into grey pixels by the page's canvas and decoded here.
+ */
 export async function readQrCodeIn(qr: Locator): Promise<string> {
-  const { size, grey } = await qr.evaluate(async (element) => {
-    const svg = element.querySelector("svg")!.outerHTML;
+  const png = (await qr.screenshot({ scale: "device" })).toString("base64");
+  const { width, height, grey } = await qr.page().evaluate(async (data) => {
     const image = new Image();
-    image.src = `data:image/svg+xml;base64,${btoa(svg)}`;
+    image.src = `data:image/png;base64,${data}`;
     await image.decode();
-    const side = 400;
     const canvas = document.createElement("canvas");
-    canvas.width = side;
-    canvas.height = side;
+    canvas.width = image.naturalWidth;
+    canvas.height = image.naturalHeight;
     const context = canvas.getContext("2d")!;
-    context.imageSmoothingEnabled = false;
-    context.drawImage(image, 0, 0, side, side);
-    const rgba = context.getImageData(0, 0, side, side).data;
+    context.drawImage(image, 0, 0);
+    const rgba = context.getImageData(0, 0, canvas.width, canvas.height).data;
     const values: number[] = [];
     for (let i = 0; i < rgba.length; i += 4) values.push(rgba[i + 1]!);
-    return { size: side, grey: values };
-  });
+    return { width: canvas.width, height: canvas.height, grey: values };
+  }, png);
   const source = new RGBLuminanceSource(
     Uint8ClampedArray.from(grey),
-    size,
-    size,
+    width,
+    height,
   );
   return new QRCodeReader()
     .decode(new BinaryBitmap(new HybridBinarizer(source)))
@@ -47,14 +48,15 @@ export async function readQrCodeIn(qr: Locator): Promise<string> {
 
 /**
  * A Y4M file (the YUV4MPEG2 header, then frames of raw I420: the full-size luma plane and
- * the two quarter-size chroma planes) showing the QR code of `text` black on white in the
- * middle of a 640 × 480 picture. Returns its path.
+ * the two quarter-size chroma planes) showing the label's QR code of `text` black on white
+ * (luma 16 and 235, video range) in the middle of a 640 × 480 picture. Returns its path.
  */
 export function qrCodeVideoFile(text: string): string {
   const width = 640;
   const height = 480;
-  const symbol = QRCode.create(text, { errorCorrectionLevel: "M" }).modules;
-  const quiet = 4;
+  // The very symbol a label prints for the text (its mask chosen as the label's is).
+  const symbol = labelQrSymbol(text);
+  const quiet = quietZoneModules;
   const scale = Math.floor(360 / (symbol.size + 2 * quiet));
   const side = (symbol.size + 2 * quiet) * scale;
   const left = Math.floor((width - side) / 2);
@@ -62,7 +64,7 @@ export function qrCodeVideoFile(text: string): string {
   const luma = Buffer.alloc(width * height, 235);
   for (let row = 0; row < symbol.size; row++)
     for (let column = 0; column < symbol.size; column++) {
-      if (!symbol.get(row, column)) continue;
+      if (!symbol.isDark(row, column)) continue;
       for (let dy = 0; dy < scale; dy++) {
         const y = top + (row + quiet) * scale + dy;
         const x = left + (column + quiet) * scale;

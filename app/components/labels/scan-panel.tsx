@@ -122,9 +122,6 @@ export function ScanPanel({
               void read(text);
             }}
           />
-          <p id="scan-code-hint" className="mt-1 text-xs text-graphite-500">
-            {hint}
-          </p>
         </div>
         {cameraOn ? (
           <button
@@ -144,6 +141,9 @@ export function ScanPanel({
           </button>
         )}
       </div>
+      <p id="scan-code-hint" className="text-xs text-graphite-500">
+        {hint}
+      </p>
       <video
         ref={video}
         muted

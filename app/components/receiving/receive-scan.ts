@@ -83,7 +83,6 @@ export function fillReceiveFormFromScan(
       control(form, `lines[${target.index}].location`),
       answer.location,
     );
-  lot?.focus();
   return {
     filled: true,
     text: `Lot ${answer.lot} of ${answer.sku} filled for ${target.name}${located ? ` at ${answer.location}` : ""}.`,
