@@ -61,6 +61,14 @@ export default [
       route(":stocktakeId/count", "routes/stocktake-count.tsx"),
       route(":stocktakeId/print", "routes/stocktake-print.tsx"),
     ]),
+    // Labels and scanning (issue 20): printable labels, and where a label's QR code leads.
+    ...prefix("labels", [
+      route("lots", "routes/labels-lots.tsx"),
+      route("lots/:lotId", "routes/label-lot.tsx"),
+      route("locations", "routes/labels-locations.tsx"),
+      route("locations/:code", "routes/label-location.tsx"),
+    ]),
+    route("scan/:code", "routes/scan.tsx"),
     ...prefix("stock", [
       index("routes/stock.tsx"),
       route("export.csv", "routes/stock-export.ts"),
@@ -103,6 +111,7 @@ export default [
     route("items", "routes/api.v1.items.ts"),
     route("items/:sku", "routes/api.v1.item.ts"),
     route("locations", "routes/api.v1.locations.ts"),
+    route("scan-lookup", "routes/api.v1.scan-lookup.ts"),
     route("stock-movements", "routes/api.v1.stock-movements.ts"),
     route("lots/:lot/hold", "routes/api.v1.lot-hold.ts"),
     route("lots/:lot/release", "routes/api.v1.lot-release.ts"),

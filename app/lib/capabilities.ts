@@ -51,6 +51,8 @@ export const capabilityRoles = {
   addMagnetGrades: ["admin"],
   /** Put a lot on hold (quality block) and release it. */
   holdLots: ["storekeeper"],
+  /** Print labels with scan codes for lots, magnet batches and locations. */
+  printLabels: ["storekeeper"],
   /** Attach mill and test certificates to a lot. */
   attachLotDocuments: ["storekeeper", "buyer"],
   /** Start and cancel stocktakes. */

@@ -43,6 +43,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     can: {
       order: userCan(user, "orderPurchases"),
       receive: userCan(user, "receivePurchases"),
+      printLabels: userCan(user, "printLabels"),
     },
   };
 }
@@ -126,7 +127,7 @@ export default function PurchaseOrder({
           {editing ? (
             <DraftEditForm order={order} lastResult={resultFor("save")} />
           ) : null}
-          <OrderReceiptsPanel order={order} />
+          <OrderReceiptsPanel order={order} canPrintLabels={can.printLabels} />
         </div>
         <div className="space-y-6">
           {editing ? (

@@ -3,8 +3,11 @@ import { data, Link } from "react-router";
 import type { Route } from "./+types/stock-receive";
 import { requireCapability } from "~/auth/guard.server";
 import { useFlash } from "~/components/flash-message";
+import { PrintLabelsLinks } from "~/components/labels/print-labels-links";
 import { OrderChoice } from "~/components/receiving/order-choice";
 import { ReceiveOrderForm } from "~/components/receiving/receive-order-form";
+import { receivedLotsToLabel } from "~/labels/label-data.server";
+import { userCan } from "~/lib/capabilities";
 import { isDomainError } from "~/lib/domain-error";
 import { redirectWithFlash } from "~/lib/flash.server";
 import {
@@ -22,15 +25,22 @@ import {
 } from "~/purchase-orders/receiving-page.server";
 import { listLocations } from "~/stock/items.server";
 import { refusalReply } from "~/lib/refusal-reply";
+import { idFromText } from "~/lib/search-params";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireCapability(request, "receivePurchases");
-  const typed = new URL(request.url).searchParams.get("order")?.trim() ?? "";
+  const user = await requireCapability(request, "receivePurchases");
+  const params = new URL(request.url).searchParams;
+  const typed = params.get("order")?.trim() ?? "";
   const orderId = typed ? purchaseOrderIdFromNumber(typed) : null;
-  const [orders, order, locations] = await Promise.all([
+  // The delivery just received (its id in the address after the redirect): its lots' labels.
+  const receiptId = idFromText(params.get("received"));
+  const [orders, order, locations, receivedLots] = await Promise.all([
     listReceivableOrders(),
     orderId === null ? null : findReceivingOrder(orderId),
     listLocations(),
+    receiptId !== null && userCan(user, "printLabels")
+      ? receivedLotsToLabel({ purchaseReceiptId: receiptId })
+      : [],
   ]);
   const problem = !typed
     ? null
@@ -47,6 +57,10 @@ export async function loader({ request }: Route.LoaderArgs) {
     orders,
     order: order?.receivable ? order : null,
     locations,
+    received:
+      receiptId !== null && receivedLots.length > 0
+        ? { receiptId, lots: receivedLots }
+        : null,
   };
 }
 
@@ -72,10 +86,11 @@ export async function action({ request }: Route.ActionArgs) {
       submission.value,
       user.id,
     );
+    const received = `received=${receipt.id}`;
     throw await redirectWithFlash(
       order.status === "received"
-        ? "/stock/receive"
-        : `/stock/receive?order=${order.number}`,
+        ? `/stock/receive?${received}`
+        : `/stock/receive?order=${order.number}&${received}`,
       { code: "purchase-received", id: receipt.id },
     );
   } catch (error) {
@@ -108,13 +123,19 @@ export default function StockReceive({
           order is recorded on the{" "}
           <Link
             to="/stock/record?type=receipt"
-            className="text-copper-700 underline-offset-2 hover:underline"
+            className="text-copper-700 underline underline-offset-2"
           >
             record page
           </Link>
           .
         </p>
       </div>
+      {loaderData.received ? (
+        <PrintLabelsLinks
+          lots={loaderData.received.lots}
+          sheetHref={`/labels/lots?receipt=${loaderData.received.receiptId}`}
+        />
+      ) : null}
       <OrderChoice
         typed={order?.number ?? loaderData.typed}
         problem={loaderData.problem}
@@ -125,7 +146,7 @@ export default function StockReceive({
           <h2 id="order-heading" className="text-lg font-semibold">
             <Link
               to={`/purchase-orders/${order.id}`}
-              className="text-copper-700 underline-offset-2 hover:underline"
+              className="text-copper-700 underline underline-offset-2"
             >
               {order.number}
             </Link>{" "}

@@ -26,6 +26,7 @@ export const domainLayers = [
   ["lots"],
   ["buying-plan"],
   ["stocktakes"],
+  ["labels"],
   ["components"],
   ["routes"],
 ];

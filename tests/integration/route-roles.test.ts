@@ -34,6 +34,7 @@ import { onOrderRouteRows } from "./route-roles.on-order";
 import { lotRouteRows } from "./route-roles.lots";
 import { lotHoldRouteRows } from "./route-roles.lot-holds";
 import { stocktakeRouteRows } from "./route-roles.stocktakes";
+import { labelRouteRows } from "./route-roles.labels";
 import {
   byCapability,
   expectedStatus,
@@ -57,6 +58,7 @@ const table: Row[] = [
   ...lotRouteRows,
   ...lotHoldRouteRows,
   ...stocktakeRouteRows,
+  ...labelRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",

@@ -65,8 +65,11 @@ function interceptFileChoosers(context: BrowserContext) {
   for (const page of context.pages()) keepIntercepting(page);
 }
 
-export async function launchBrowser(): Promise<Browser> {
-  const browser = await launchChromium();
+/** Debian's Chromium, with `extraArgs` besides the usual ones (a fake camera, say). */
+export async function launchBrowser(
+  extraArgs: string[] = [],
+): Promise<Browser> {
+  const browser = await launchChromium(extraArgs);
   const seen: string[] = [];
   violationsByBrowser.set(browser, seen);
   const newContext = browser.newContext.bind(browser);
@@ -87,7 +90,7 @@ export async function launchBrowser(): Promise<Browser> {
   return browser;
 }
 
-function launchChromium(): Promise<Browser> {
+function launchChromium(extraArgs: string[]): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     args: [
@@ -99,6 +102,7 @@ function launchChromium(): Promise<Browser> {
       "--disable-background-networking",
       "--disable-component-update",
       "--disable-sync",
+      ...extraArgs,
     ],
   });
 }

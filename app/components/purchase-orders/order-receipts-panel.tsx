@@ -5,7 +5,14 @@ import { quantityToNumber } from "~/lib/decimal-amounts";
 import { formatDay } from "~/lib/format";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
-export function OrderReceiptsPanel({ order }: { order: PurchaseOrderView }) {
+export function OrderReceiptsPanel({
+  order,
+  canPrintLabels = false,
+}: {
+  order: PurchaseOrderView;
+  /** Offer each delivery's lot labels (app/routes/labels-lots.tsx). */
+  canPrintLabels?: boolean;
+}) {
   const lineOf = new Map(order.lines.map((line) => [line.id, line]));
   return (
     <section aria-labelledby="order-receipts-heading" className="panel">
@@ -20,6 +27,17 @@ export function OrderReceiptsPanel({ order }: { order: PurchaseOrderView }) {
             <li key={receipt.id} className="text-sm">
               <p className="font-medium">
                 {formatDay(receipt.receivedOn)} · {receipt.person}
+                {canPrintLabels ? (
+                  <>
+                    {" · "}
+                    <Link
+                      to={`/labels/lots?receipt=${receipt.id}`}
+                      className="font-normal text-copper-700 underline underline-offset-2"
+                    >
+                      Print labels
+                    </Link>
+                  </>
+                ) : null}
               </p>
               <ul className="text-graphite-700">
                 {receipt.lines.map((part) => {

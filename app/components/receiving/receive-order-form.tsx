@@ -9,12 +9,14 @@ import {
   type SubmissionResult,
 } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
-import { useState } from "react";
+import { useRef, useState } from "react";
+import { ScanPanel } from "~/components/labels/scan-panel";
 import { Form, useNavigation } from "react-router";
 import { FormMessages } from "~/components/text-field";
 import { receiptFormSchema } from "~/purchase-orders/receipt-request";
 import type { ReceivingOrder } from "~/purchase-orders/receiving-view";
 import { OrderLineSummary } from "./order-line-summary";
+import { fillReceiveFormFromScan } from "./receive-scan";
 import { SpoolEntryFields } from "./spool-entry-fields";
 
 interface Entry {
@@ -38,6 +40,9 @@ export function ReceiveOrderForm({
     lines.map((line, key) => ({ key, lineId: line.id })),
   );
   const [nextKey, setNextKey] = useState(lines.length);
+  const formElement = useRef<HTMLFormElement>(null);
+  /** The entry last worked on (by its position): where a scanned location goes. */
+  const [lastWorkedOn, setLastWorkedOn] = useState<number | null>(null);
   const [form] = useForm({
     id: `receive-${order.id}`,
     lastResult: navigation.state === "idle" ? lastResult : null,
@@ -54,60 +59,104 @@ export function ReceiveOrderForm({
     setEntries((current) => [...current, { key: nextKey, lineId }]);
     setNextKey((key) => key + 1);
   };
-  const remove = (key: number) =>
+  const remove = (key: number) => {
     setEntries((current) => current.filter((entry) => entry.key !== key));
+    setLastWorkedOn(null);
+  };
+  const lineOf = new Map(lines.map((line) => [line.id, line]));
+  const scanTargets = () =>
+    entries.map((entry, index) => {
+      const line = lineOf.get(entry.lineId)!;
+      const position = entries
+        .slice(0, index + 1)
+        .filter((each) => each.lineId === entry.lineId).length;
+      return {
+        index,
+        sku: line.sku,
+        name: `${line.isWire ? "spool" : "lot"} ${position} of line ${line.lineNumber}`,
+      };
+    });
 
   if (lines.length === 0)
     return (
       <p className="panel">Every line of {order.number} is received in full.</p>
     );
   return (
-    <Form method="post" {...getFormProps(form)} className="space-y-5">
-      <FormMessages id={form.errorId} errors={form.errors ?? errors.lines} />
-      <input type="hidden" name="orderId" value={order.id} />
-      {lines.map((line) => (
-        <section
-          key={line.id}
-          className="panel space-y-3"
-          aria-label={`Line ${line.lineNumber}, ${line.sku}`}
-        >
-          <OrderLineSummary line={line} currency={order.companyCurrency} />
-          {entries.map((entry, index) =>
-            entry.lineId === line.id ? (
-              <SpoolEntryFields
-                key={entry.key}
-                index={index}
-                number={
-                  entries
-                    .slice(0, index + 1)
-                    .filter((each) => each.lineId === line.id).length
-                }
-                lineId={line.id}
-                unit={line.unit}
-                isWire={line.isWire}
-                locations={locations}
-                usualLocation={line.usualLocation}
-                errors={errors}
-                onRemove={() => remove(entry.key)}
-              />
-            ) : null,
-          )}
-          <button
-            type="button"
-            className="button-quiet"
-            onClick={() => add(line.id)}
-          >
-            Add a {line.isWire ? "spool" : "lot"} to line {line.lineNumber}
-          </button>
-        </section>
-      ))}
-      <button
-        type="submit"
-        className="button-primary min-h-12 w-full text-lg"
-        disabled={busy || entries.length === 0}
+    <>
+      <ScanPanel
+        hint="Scan a bin label to fill the location of the spool or lot you are on (every one when none yet), or an existing lot's label to fill its lot number. Or type the code under the QR code, then Enter."
+        onFound={(answer) =>
+          formElement.current
+            ? fillReceiveFormFromScan(
+                formElement.current,
+                scanTargets(),
+                lastWorkedOn,
+                answer,
+                order.number,
+              )
+            : {
+                filled: false,
+                text: "The form is not ready yet. Nothing was filled.",
+              }
+        }
+      />
+      <Form
+        method="post"
+        ref={formElement}
+        {...getFormProps(form)}
+        className="space-y-5"
+        onFocus={(event) => {
+          const name = (event.target as { name?: string }).name ?? "";
+          const index = /^lines\[(\d+)\]/.exec(name)?.[1];
+          if (index !== undefined) setLastWorkedOn(Number(index));
+        }}
       >
-        {busy ? "Receiving…" : `Receive against ${order.number}`}
-      </button>
-    </Form>
+        <FormMessages id={form.errorId} errors={form.errors ?? errors.lines} />
+        <input type="hidden" name="orderId" value={order.id} />
+        {lines.map((line) => (
+          <section
+            key={line.id}
+            className="panel space-y-3"
+            aria-label={`Line ${line.lineNumber}, ${line.sku}`}
+          >
+            <OrderLineSummary line={line} currency={order.companyCurrency} />
+            {entries.map((entry, index) =>
+              entry.lineId === line.id ? (
+                <SpoolEntryFields
+                  key={entry.key}
+                  index={index}
+                  number={
+                    entries
+                      .slice(0, index + 1)
+                      .filter((each) => each.lineId === line.id).length
+                  }
+                  lineId={line.id}
+                  unit={line.unit}
+                  isWire={line.isWire}
+                  locations={locations}
+                  usualLocation={line.usualLocation}
+                  errors={errors}
+                  onRemove={() => remove(entry.key)}
+                />
+              ) : null,
+            )}
+            <button
+              type="button"
+              className="button-quiet"
+              onClick={() => add(line.id)}
+            >
+              Add a {line.isWire ? "spool" : "lot"} to line {line.lineNumber}
+            </button>
+          </section>
+        ))}
+        <button
+          type="submit"
+          className="button-primary min-h-12 w-full text-lg"
+          disabled={busy || entries.length === 0}
+        >
+          {busy ? "Receiving…" : `Receive against ${order.number}`}
+        </button>
+      </Form>
+    </>
   );
 }

@@ -15,10 +15,11 @@ import {
 import { CountDifferenceStatus } from "./count-difference-status";
 import { MovementField } from "./movement-field";
 import { ToLocationSelect } from "./to-location-select";
-import type { MovementChoices } from "./use-movement-choices";
+import { scannedBalance, type MovementChoices } from "./use-movement-choices";
 import { WeighBackStatus } from "./weigh-back-status";
 
 export function BalanceMovementFields({
+  scanned,
   type,
   unit,
   isWire,
@@ -29,6 +30,8 @@ export function BalanceMovementFields({
   choices,
   errors,
 }: {
+  /** A scanned label's lot and location (see use-movement-choices.ts). */
+  scanned: { lot: string | null; location: string | null };
   type: Exclude<MovementType, "receipt">;
   unit: string;
   isWire: boolean;
@@ -53,6 +56,14 @@ export function BalanceMovementFields({
           onChange={choices.chooseOrder}
           errors={errors.buildOrderId}
         />
+      ) : null}
+      {(scanned.lot || scanned.location) &&
+      !scannedBalance(balances, scanned) ? (
+        <p role="alert" className="field-error">
+          {scanned.lot ? `Lot ${scanned.lot}` : "This item"} has no stock
+          {scanned.location ? ` at ${scanned.location}` : ""}: choose the lot
+          and location below.
+        </p>
       ) : null}
       <BalanceChoice
         legend={labels.balance}

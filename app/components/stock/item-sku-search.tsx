@@ -9,11 +9,14 @@ import { movementInputClass } from "./movement-field";
 export function ItemSkuSearch({
   type,
   sku,
+  location = null,
   found,
   notFound,
 }: {
   type: MovementType;
   sku: string;
+  /** A scanned location, kept while the item is looked for. */
+  location?: string | null;
   /** An item is shown: the search does not take the focus from its form. */
   found: boolean;
   notFound: boolean;
@@ -21,6 +24,9 @@ export function ItemSkuSearch({
   return (
     <Form method="get" className="panel flex flex-wrap items-end gap-3">
       <input type="hidden" name="type" value={type} />
+      {location ? (
+        <input type="hidden" name="location" value={location} />
+      ) : null}
       <div className="min-w-60 flex-1">
         <label htmlFor="find-sku" className="field-label">
           Item SKU

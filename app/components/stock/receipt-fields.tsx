@@ -12,6 +12,7 @@ import { SpoolNetStatus } from "./spool-net-status";
 type Errors = Record<string, string[] | undefined>;
 
 export function ReceiptFields({
+  scanned,
   unit,
   isWire,
   locations,
@@ -21,6 +22,8 @@ export function ReceiptFields({
   errors,
   inputClassName,
 }: {
+  /** A scanned label's lot and location, filled in to start with. */
+  scanned: { lot: string | null; location: string | null };
   unit: string;
   isWire: boolean;
   locations: { code: string; name: string }[];
@@ -35,6 +38,10 @@ export function ReceiptFields({
 }) {
   const [gross, setGross] = useState("");
   const [tare, setTare] = useState("");
+  const scannedLocation = locations.find(
+    (location) =>
+      location.code.toUpperCase() === scanned.location?.toUpperCase(),
+  )?.code;
   return (
     <div className="grid gap-4 sm:grid-cols-2">
       <div>
@@ -45,9 +52,11 @@ export function ReceiptFields({
           id="movement-location"
           name="location"
           className={inputClassName}
-          defaultValue={usualLocation ?? locations[0]?.code}
+          defaultValue={scannedLocation ?? usualLocation ?? locations[0]?.code}
           aria-describedby={
-            usualLocation ? "movement-location-hint" : undefined
+            usualLocation && !scannedLocation
+              ? "movement-location-hint"
+              : undefined
           }
         >
           {locations.map((location) => (
@@ -56,7 +65,7 @@ export function ReceiptFields({
             </option>
           ))}
         </select>
-        {usualLocation ? (
+        {usualLocation && !scannedLocation ? (
           <p
             id="movement-location-hint"
             className="mt-1 text-xs text-graphite-500"
@@ -71,6 +80,7 @@ export function ReceiptFields({
       <Field
         name="lot"
         label={isWire ? "Spool lot number" : "Lot (optional)"}
+        defaultValue={scanned.lot ?? undefined}
         errors={errors.lot}
         autoComplete="off"
         required={isWire}

@@ -41,6 +41,7 @@ export function RecordMovementForm({
   type,
   sku,
   item,
+  scanned,
   locations,
   usualLocation,
   currency,
@@ -53,6 +54,8 @@ export function RecordMovementForm({
   /** The SKU searched for (names the form). */
   sku: string;
   item: MovementItem;
+  /** The lot and location of a scanned label, chosen to start with. */
+  scanned: { lot: string | null; location: string | null };
   locations: { code: string; name: string }[];
   usualLocation: string | null;
   currency: string;
@@ -83,6 +86,7 @@ export function RecordMovementForm({
     isWire,
     balances: item.balances,
     orders,
+    scanned,
   });
 
   return (
@@ -94,6 +98,7 @@ export function RecordMovementForm({
 
       {type === "receipt" ? (
         <ReceiptFields
+          scanned={scanned}
           unit={unit}
           isWire={isWire}
           locations={locations}
@@ -105,6 +110,7 @@ export function RecordMovementForm({
         />
       ) : (
         <BalanceMovementFields
+          scanned={scanned}
           type={type}
           unit={unit}
           isWire={isWire}

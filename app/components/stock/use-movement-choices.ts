@@ -18,16 +18,20 @@ export function useMovementChoices({
   isWire,
   balances,
   orders,
+  scanned = { lot: null, location: null },
 }: {
   type: MovementType;
   isWire: boolean;
   /** The item's balances, oldest lot first (the server lists them so): where a reservation sits. */
   balances: ChoosableBalance[];
   orders: PickableOrder[];
+  /** A scanned label's lot and location: the balance they name is chosen to start with. */
+  scanned?: { lot: string | null; location: string | null };
 }) {
-  const [balanceKey, setBalanceKey] = useState(() =>
-    balances[0] ? balanceKeyOf(balances[0]) : "",
-  );
+  const [balanceKey, setBalanceKey] = useState(() => {
+    const first = scannedBalance(balances, scanned) ?? balances[0];
+    return first ? balanceKeyOf(first) : "";
+  });
   const [orderId, setOrderId] = useState("");
   const order = orders.find((candidate) => String(candidate.id) === orderId);
   const chooseOrder = (value: string) => {
@@ -70,4 +74,25 @@ export function useMovementChoices({
     weighBack,
     countDifference,
   };
+}
+
+/**
+ * The balance a scan names: its lot at its location, else the lot's first balance (a lot
+ * scanned without a location), else the first balance at the scanned location.
+ */
+export function scannedBalance(
+  balances: ChoosableBalance[],
+  scanned: { lot: string | null; location: string | null },
+): ChoosableBalance | undefined {
+  const same = (a: string | null, b: string | null) =>
+    (a ?? "").toUpperCase() === (b ?? "").toUpperCase();
+  if (scanned.lot)
+    return balances.find(
+      (balance) =>
+        same(balance.lot, scanned.lot) &&
+        (!scanned.location || same(balance.location, scanned.location)),
+    );
+  if (scanned.location)
+    return balances.find((balance) => same(balance.location, scanned.location));
+  return undefined;
 }
