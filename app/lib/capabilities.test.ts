@@ -40,6 +40,8 @@ describe("capabilityRoles", () => {
       startStocktakes: ["storekeeper"],
       countStock: ["storekeeper"],
       approveStocktakes: ["manager"],
+      // The product's role table: storekeepers print labels.
+      printLabels: ["storekeeper"],
     });
   });
 
