@@ -54,6 +54,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     can: {
       hold: userCan(user, "holdLots"),
       attach: userCan(user, "attachLotDocuments"),
+      printLabels: userCan(user, "printLabels"),
     },
   };
 }
@@ -116,6 +117,16 @@ export default function StockLot({
           ) : null}
         </h1>
         <p className="mt-1 text-graphite-700">{lot.item.name}</p>
+        {can.printLabels ? (
+          <p className="mt-2 text-sm">
+            <Link
+              to={`/labels/lots/${lot.id}`}
+              className="font-medium text-copper-700 underline underline-offset-2"
+            >
+              Print its label
+            </Link>
+          </p>
+        ) : null}
       </div>
 
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">

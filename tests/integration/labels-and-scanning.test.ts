@@ -266,7 +266,7 @@ describe("label pages", () => {
     );
     expect(response.status).toBe(200);
     const html = readable(await response.text());
-    expect(html).toMatch(/Grade<\/dt><dd[^>]*>N42SH</);
+    expect(html).toMatch(/Grade, shape<\/dt><dd[^>]*>N42SH, block</);
     expect(html).toMatch(/Pieces<\/dt><dd[^>]*>200 pieces</);
     expect(html).toContain("Strong magnets: pinch, crush and shatter");
     // The SH suffix's working limit: 150 °C (engineering brief, makers' grade tables).

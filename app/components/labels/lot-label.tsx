@@ -32,7 +32,7 @@ export function LotLabel({
       <h2 className="text-[3.6mm] leading-tight font-semibold">
         {lot.itemName}
       </h2>
-      {lot.sizeOrGrade ? (
+      {lot.sizeOrGrade && lot.sizeOrGrade !== lot.itemName ? (
         <p className="text-[3mm] text-graphite-700">{lot.sizeOrGrade}</p>
       ) : null}
       <p className="mt-[1mm] text-[5.2mm] leading-tight font-bold break-all">
@@ -48,8 +48,10 @@ export function LotLabel({
       <dl className="mt-[1mm] text-[2.9mm]">
         {isMagnet ? (
           <>
-            <Row name="Grade" value={lot.magnet!.grade} />
-            <Row name="Shape" value={lot.magnet!.shape} />
+            <Row
+              name="Grade, shape"
+              value={`${lot.magnet!.grade}, ${lot.magnet!.shape}`}
+            />
             <Row
               name="Pieces"
               value={formatStockQuantity(lot.onHand, lot.unit)}
@@ -95,7 +97,7 @@ export function LotLabel({
           ) : null}
           Printed {formatDay(printedOn)}
         </p>
-        <LabelCode scan={lot.scan} sizeMm={isMagnet ? 27 : 32} what={what} />
+        <LabelCode scan={lot.scan} sizeMm={isMagnet ? 25 : 32} what={what} />
       </div>
     </LabelFrame>
   );
