@@ -53,6 +53,7 @@ export async function findBuildOrder(orderId: number) {
       unit: items.unit,
       itemOnHand: items.onHand,
       itemReserved: items.reserved,
+      itemHeld: items.held,
     })
     .from(buildOrderLines)
     .innerJoin(items, eq(items.id, buildOrderLines.itemId))
@@ -103,6 +104,7 @@ export async function findBuildOrder(orderId: number) {
               reserved: stockBalances.reserved,
               lot: lots.lotNumber,
               receivedOn: lots.receivedOn,
+              holdReason: lots.holdReason,
               location: locations.code,
             })
             .from(stockBalances)
@@ -180,8 +182,11 @@ export async function findBuildOrder(orderId: number) {
       ? required - issued - reserved
       : 0n;
     const stillToReserve = toReserve > 0n ? toReserve : 0n;
+    // Held stock (lots on hold, decision 039) is on hand but not free.
     const available =
-      parseQuantity(line.itemOnHand) - parseQuantity(line.itemReserved);
+      parseQuantity(line.itemOnHand) -
+      parseQuantity(line.itemReserved) -
+      parseQuantity(line.itemHeld);
     const short = stillToReserve - (available > 0n ? available : 0n);
     const lineCost = costs.lines[index]!;
     return {
@@ -194,7 +199,7 @@ export async function findBuildOrder(orderId: number) {
       issued: quantityToNumber(issued),
       /** Still to reserve: required − issued − reserved. */
       toReserve: quantityToNumber(stillToReserve),
-      /** Free stock of the item now (on hand − reserved, all orders). */
+      /** Free stock of the item now (on hand − reserved − held, all orders). */
       available: quantityToNumber(available),
       /** How much of what is still to reserve the free stock cannot cover. */
       short: quantityToNumber(short > 0n ? short : 0n),
@@ -227,13 +232,16 @@ export async function findBuildOrder(orderId: number) {
         .map((row) => {
           const onHand = parseQuantity(row.onHand);
           const rowReserved = parseQuantity(row.reserved);
+          const onHold = row.holdReason !== null;
           return {
             lot: row.lot,
             location: row.location,
             receivedOn: row.receivedOn,
             onHand: quantityToNumber(onHand),
             reserved: quantityToNumber(rowReserved),
-            free: quantityToNumber(onHand - rowReserved),
+            /** A held lot's stock is not free: it cannot be reserved or issued. */
+            free: onHold ? 0 : quantityToNumber(onHand - rowReserved),
+            onHold,
           };
         }),
       issues: issueRows

@@ -144,11 +144,17 @@ export type LotDetails = NonNullable<Awaited<ReturnType<typeof findLot>>>;
 /** The lot id in a page's address ("/stock/lots/12"), or null when it is no id. */
 export const lotIdFromPath = idFromText;
 
+/** The longest lot number (lots.lot_number). */
+const lotNumberMaxLength = 40;
+
 /** The lot an API path names by its number (`?sku=` narrows it); 404 when none, 409 when several items have it. */
 export async function lotByNumber(
   number: string,
   sku: string | null,
 ): Promise<{ id: number; number: string; sku: string; unit: string }> {
+  // Longer than a lot number can be: no such lot (never cut, which could name another lot).
+  if (number.length > lotNumberMaxLength)
+    throw new DomainError(404, `No lot "${number.slice(0, 60)}…".`);
   const rows = await db
     .select({
       id: lots.id,

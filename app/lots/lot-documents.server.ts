@@ -150,14 +150,16 @@ export async function storeLotDocument(
       // decoded by the server: the client library would write a Buffer into the statement as
       // hex, twice its size, over MariaDB's default max_allowed_packet of 16 MB.
       const base64 = Buffer.from(certificate.bytes).toString("base64");
+      // The same content stored before is kept as it is; any other failure (a NULL from
+      // FROM_BASE64 under a low max_allowed_packet among them) is an error, not ignored.
       await tx
         .insert(documentContents)
-        .ignore()
         .values({
           sha256: certificate.sha256,
           sizeBytes: certificate.bytes.byteLength,
           content: sql`FROM_BASE64(${base64})`,
-        });
+        })
+        .onDuplicateKeyUpdate({ set: { sha256: sql`sha256` } });
       const [row] = await tx
         .insert(lotDocuments)
         .values({

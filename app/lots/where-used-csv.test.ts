@@ -40,7 +40,7 @@ describe("where-used CSV", () => {
         lastMovementAt: "2026-12-01T08:20:00.000Z",
       },
     ]);
-    expect(csv).toContain(",\"'=HYPERLINK(1)\",");
+    expect(csv).toContain(',"\'=HYPERLINK(1)",');
   });
 
   it("names files with safe characters only", () => {

@@ -102,8 +102,9 @@ export async function lotWhereUsed(
   const orders = await ordersById(totals.map((total) => total.key));
   const uses = totals.flatMap((total) => {
     const order = orders.get(total.key);
-    // A return naming an order that does not exist is not a use of the lot.
-    if (!order) return [];
+    // A return naming an order that does not exist, or one that never drew from this lot,
+    // is not a use of the lot (as in the build order's own list of lots).
+    if (!order || total.issued === 0n) return [];
     return [
       {
         buildOrderId: total.key,

@@ -191,6 +191,7 @@ export async function createOrderFromAlert(
       sku: items.sku,
       onHand: items.onHand,
       reserved: items.reserved,
+      held: items.held,
       onOrder: items.onOrder,
       reorderPoint: items.reorderPoint,
       reorderQuantity: items.reorderQuantity,
@@ -209,7 +210,8 @@ export async function createOrderFromAlert(
   const quantity = suggestedOrderQuantity({
     available:
       parseQuantity(alert.onHand) -
-      parseQuantity(alert.reserved) +
+      parseQuantity(alert.reserved) -
+      parseQuantity(alert.held) +
       parseQuantity(alert.onOrder),
     reorderPoint: parseQuantity(alert.reorderPoint),
     reorderQuantity: parseQuantity(alert.reorderQuantity),

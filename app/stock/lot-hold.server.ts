@@ -19,7 +19,10 @@ export async function lotHoldReason(
     .select({ holdReason: lots.holdReason })
     .from(lots)
     .where(eq(lots.id, lotId))
-    .limit(1);
+    .limit(1)
+    // Locked: a plain read could see the transaction's older snapshot and miss a hold or
+    // release committed since, and items.held would then drift.
+    .for("update");
   return row?.holdReason ?? null;
 }
 
@@ -37,7 +40,8 @@ export async function heldLotsAmong(
       reason: lots.holdReason,
     })
     .from(lots)
-    .where(and(inArray(lots.id, ids), isNotNull(lots.holdReason)));
+    .where(and(inArray(lots.id, ids), isNotNull(lots.holdReason)))
+    .for("update");
   return new Map(
     rows.map((row) => [row.id, { number: row.number, reason: row.reason! }]),
   );

@@ -161,7 +161,9 @@ export async function addFoundLine(
         .select({ id: items.id, kind: items.kind, active: items.active })
         .from(items)
         .where(eq(items.sku, input.sku))
-        .limit(1);
+        .limit(1)
+        // The ledger's order: the item before its balance (bookNow locks the balance).
+        .for("update");
       if (!item || !item.active)
         throw new DomainError(400, `No item with SKU "${input.sku}".`, "sku");
       let lotId = 0;

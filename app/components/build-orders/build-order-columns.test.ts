@@ -58,6 +58,7 @@ const wire: BuildOrderLine = {
       onHand: 2,
       reserved: index === 0 ? 1 : 0,
       free: index === 0 ? 1 : 2,
+      onHold: false,
     })),
     {
       lot: null,
@@ -66,6 +67,7 @@ const wire: BuildOrderLine = {
       onHand: 0,
       reserved: 0,
       free: 0,
+      onHold: false,
     },
   ],
   issues: [

@@ -97,7 +97,10 @@ function StockPlaces({ line }: { line: BuildOrderLine }) {
               {formatStockQuantity(balance.free, line.unit)}
             </span>{" "}
             free
-            {balance.reserved > 0 ? (
+            {balance.onHold ? (
+              <span className="font-medium text-danger"> · lot on hold</span>
+            ) : null}
+            {balance.reserved > 0 || balance.onHold ? (
               <span className="text-graphite-500">
                 {" "}
                 of {formatStockQuantity(balance.onHand, line.unit)}
