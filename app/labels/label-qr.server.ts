@@ -9,13 +9,13 @@
  * encoder picks is one of those, another of the eight masks (ISO/IEC 18004 §7.8) is used:
  * the same content, error correction and size, only the pattern differs.
  */
-import {
-  BinaryBitmap,
-  HybridBinarizer,
-  QRCodeReader,
-  RGBLuminanceSource,
-} from "@zxing/library";
+// @zxing/library is CommonJS whose names Node cannot see from an ES module: the server
+// build imports it whole (named imports work under Vitest but fail in production).
+import zxing from "@zxing/library";
 import QRCode, { type QRCodeMaskPattern } from "qrcode";
+
+const { BinaryBitmap, HybridBinarizer, QRCodeReader, RGBLuminanceSource } =
+  zxing;
 
 /** Level M: about 15 % of the symbol may be damaged or dirty and still read. */
 const errorCorrectionLevel = "M";
