@@ -143,7 +143,7 @@ describe("labels and scanning", () => {
     await page.getByLabel("Gross weight").fill("5.4");
     await page.getByLabel("Tare weight").fill("0.6");
     await page.getByLabel("Unit cost per kg").fill("14.2");
-    await page.getByLabel("Supplier batch").fill("HEAT-4410");
+    await page.getByLabel("Supplier's lot or heat").fill("HEAT-4410");
     await page.getByRole("button", { name: "Receive" }).click();
     await page
       .getByRole("status")
