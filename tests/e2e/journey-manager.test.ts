@@ -94,6 +94,8 @@ const expectedCsvHeader = [
   "unit",
   "on hand",
   "reserved",
+  // Stock of lots on hold (issue 20): on hand, not available.
+  "on hold",
   "available",
   "on order",
   "reorder point",
@@ -207,6 +209,7 @@ describe("the manager's journey", () => {
       unit: "kg",
       "on hand": "2.5",
       reserved: "0",
+      "on hold": "0",
       available: "2.5",
       "below reorder point": "no",
       "average cost per unit (company currency)": "14",

@@ -154,8 +154,9 @@ describe("a message after an action", () => {
       storekeeper,
     );
     expect(recorded.status, await recorded.clone().text()).toBe(302);
-    expect(recorded.headers.get("location")).toBe(
-      `/stock/record?type=receipt&sku=${sku}`,
+    // After a receipt the record page offers the new lot's label (issue 20): `received=` names the movement.
+    expect(recorded.headers.get("location")).toMatch(
+      new RegExp(`^/stock/record\\?type=receipt&sku=${sku}&received=\\d+$`),
     );
     const next = await followRedirect(recorded, storekeeper);
     expect(readable(await next.text())).toContain(
