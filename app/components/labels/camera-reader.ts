@@ -13,7 +13,7 @@ export interface RunningCamera {
 const readEveryMs = 150;
 
 /**
- * Starts the camera (the one facing away from the person when there are two) into `video`
+ * Starts the camera (the one facing away from the person when there are two) into `viewfinder`
  * and calls `onText` once with the first code read, then stops. Rejects with the browser's
  * own error (NotAllowedError, NotFoundError …) when the camera cannot start.
  *
@@ -22,7 +22,7 @@ const readEveryMs = 150;
  * package's QR decoder.
  */
 export async function startCameraReader(
-  video: HTMLVideoElement,
+  viewfinder: HTMLVideoElement,
   onText: (text: string) => void,
 ): Promise<RunningCamera> {
   if (!navigator.mediaDevices?.getUserMedia)
@@ -32,19 +32,19 @@ export async function startCameraReader(
     audio: false,
   });
   // Muted and inline, so browsers let the preview play without a fresh tap (autoplay rules).
-  video.muted = true;
-  video.playsInline = true;
-  video.srcObject = stream;
+  viewfinder.muted = true;
+  viewfinder.playsInline = true;
+  viewfinder.srcObject = stream;
   let stopped = false;
   let timer: ReturnType<typeof setTimeout> | undefined;
   const stop = () => {
     stopped = true;
     clearTimeout(timer);
     for (const track of stream.getTracks()) track.stop();
-    video.srcObject = null;
+    viewfinder.srcObject = null;
   };
   try {
-    await video.play();
+    await viewfinder.play();
   } catch (error) {
     stop();
     throw error;
@@ -56,14 +56,14 @@ export async function startCameraReader(
   let attempt = 0;
   const readFrame = () => {
     if (stopped || !context) return;
-    if (video.videoWidth > 0 && video.videoHeight > 0) {
+    if (viewfinder.videoWidth > 0 && viewfinder.videoHeight > 0) {
       // Every other frame at half size: the decoder finds some symbols only at fewer pixels a module.
       const scale = attempt++ % 2 === 0 ? 1 : 0.5;
-      const width = Math.round(video.videoWidth * scale);
-      const height = Math.round(video.videoHeight * scale);
+      const width = Math.round(viewfinder.videoWidth * scale);
+      const height = Math.round(viewfinder.videoHeight * scale);
       if (canvas.width !== width) canvas.width = width;
       if (canvas.height !== height) canvas.height = height;
-      context.drawImage(video, 0, 0, width, height);
+      context.drawImage(viewfinder, 0, 0, width, height);
       try {
         const text = reader.decodeFromCanvas(canvas).getText();
         stop();

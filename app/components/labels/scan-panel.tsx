@@ -50,7 +50,7 @@ export function ScanPanel({
 }) {
   const [said, setSaid] = useState<Said>(null);
   const [cameraOn, setCameraOn] = useState(false);
-  const video = useRef<HTMLVideoElement>(null);
+  const viewfinder = useRef<HTMLVideoElement>(null);
   const camera = useRef<RunningCamera | null>(null);
 
   useEffect(() => () => camera.current?.stop(), []);
@@ -77,7 +77,7 @@ export function ScanPanel({
     setCameraOn(true);
     try {
       const { startCameraReader } = await import("./camera-reader");
-      camera.current = await startCameraReader(video.current!, (text) => {
+      camera.current = await startCameraReader(viewfinder.current!, (text) => {
         stopCamera();
         void read(text);
       });
@@ -145,7 +145,7 @@ export function ScanPanel({
         {hint}
       </p>
       <video
-        ref={video}
+        ref={viewfinder}
         muted
         playsInline
         aria-label="Camera view"
