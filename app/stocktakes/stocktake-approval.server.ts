@@ -32,6 +32,7 @@ import {
   lineVariance,
   onHandAfterApproval,
 } from "./stocktake-figures";
+import { bookNow } from "./stocktake-counts.server";
 import { lockStocktake } from "./stocktakes.server";
 import { stocktakeReference } from "./stocktake-reference";
 
@@ -87,18 +88,7 @@ async function lockBalanceNow(
     .from(items)
     .where(eq(items.id, line.itemId))
     .for("update");
-  const [row] = await tx
-    .select({ onHand: stockBalances.onHand })
-    .from(stockBalances)
-    .where(
-      and(
-        eq(stockBalances.itemId, line.itemId),
-        eq(stockBalances.lotId, line.lotId),
-        eq(stockBalances.locationId, line.locationId),
-      ),
-    )
-    .for("update");
-  return row ? parseQuantity(row.onHand) : 0n;
+  return bookNow(tx, line);
 }
 
 /** The stocktake's locations where every balance with stock has a line of this stocktake. */
