@@ -48,8 +48,24 @@ export default tseslint.config(
           message:
             "Begin transactions only inside retryWriteConflicts or writeTransaction (app/db/write-transaction.server.ts).",
         },
+        {
+          selector:
+            "ImportDeclaration[source.value='@conform-to/zod/v4'] ImportSpecifier[imported.name='parseWithZod']",
+          message:
+            "Read forms with parseForm (app/lib/parse-form.ts): it reads number fields in the person's locale.",
+        },
+        {
+          selector: "CallExpression[callee.property.name='toLocaleString']",
+          message:
+            "Format numbers and times for people through app/lib/format.ts: it follows the person's locale and time zone.",
+        },
       ],
     },
+  },
+  {
+    // The one place that wraps Conform's parseWithZod (app/lib/parse-form.ts).
+    files: ["app/lib/parse-form.ts"],
+    rules: { "no-restricted-syntax": "off" },
   },
   {
     // Log lines go through the one logger (app/observability/logger.server.ts, decision 024).

@@ -19,7 +19,10 @@ import {
   metricsText,
   observeRequest,
 } from "~/observability/metrics.server";
-import { runWithRequestContext } from "~/observability/request-context.server";
+import {
+  runWithRequestContext,
+  type RequestContext,
+} from "~/observability/request-context.server";
 import { acceptedRequestId, newRequestId } from "~/observability/request-id";
 import { routeIdFor, routeTree } from "~/observability/route-id";
 import { answerDatabaseOutages } from "./database-unavailable";
@@ -335,7 +338,7 @@ export function observeRequests(
   response.locals.requestId = requestId;
   response.setHeader("X-Request-Id", requestId);
   const started = process.hrtime.bigint();
-  const context = { requestId, personId: null as string | null };
+  const context: RequestContext = { requestId, personId: null, display: null };
   const pathname = routedPath(request);
   response.once("close", () => {
     const seconds = Number(process.hrtime.bigint() - started) / 1e9;

@@ -28,7 +28,7 @@ function load(
 ) {
   const loader = build.routes[id]!.module.loader as unknown as Loader;
   return runWithRequestContext(
-    { requestId: "0123456789abcdef", personId: null },
+    { requestId: "0123456789abcdef", personId: null, display: null },
     () => loader({ request }),
   );
 }

@@ -161,5 +161,8 @@ export async function userFromApiToken(
       row.roles === followsOwnerRoles
         ? [...held]
         : parseRoles(row.roles).filter((role) => held.has(role)),
+    // The API answers in machine-neutral form whatever the owner reads pages in.
+    locale: null,
+    timeZone: null,
   };
 }

@@ -7,7 +7,12 @@
 import { data, redirect } from "react-router";
 import { isDatabaseUnavailable } from "~/db/database-errors";
 import { needsRoleMessage, userCan, type Capability } from "~/lib/capabilities";
-import { noteSignedInPerson } from "~/observability/request-context.server";
+import { displaySettingsOf } from "~/lib/display-settings";
+import "~/lib/display-settings.server";
+import {
+  noteDisplaySettings,
+  noteSignedInPerson,
+} from "~/observability/request-context.server";
 import { getSessionState, type SessionUser } from "./session.server";
 
 function isApiRequest(request: Request): boolean {
@@ -33,6 +38,9 @@ export async function getOptionalUser(
     const { user } = await getSessionState(request);
     // The request's log line names who it was for (docs/decisions/024).
     if (user) noteSignedInPerson(user.id);
+    // Pages follow the person's locale and time zone; the API stays machine-neutral.
+    if (user && !isApiRequest(request))
+      noteDisplaySettings(displaySettingsOf(user));
     return user;
   } catch (error) {
     if (isDatabaseUnavailable(error)) databaseUnavailable(request);

@@ -35,6 +35,8 @@ export const lucia = new Lucia(adapter, {
       email: attributes.email,
       name: attributes.name,
       active: attributes.active,
+      locale: attributes.locale,
+      timeZone: attributes.timeZone,
     };
   },
 });
@@ -42,7 +44,13 @@ export const lucia = new Lucia(adapter, {
 declare module "lucia" {
   interface Register {
     Lucia: typeof lucia;
-    DatabaseUserAttributes: { email: string; name: string; active: boolean };
+    DatabaseUserAttributes: {
+      email: string;
+      name: string;
+      active: boolean;
+      locale: string | null;
+      timeZone: string | null;
+    };
     DatabaseSessionAttributes: { startedAt: Date };
   }
 }

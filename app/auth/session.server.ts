@@ -13,6 +13,9 @@ export interface SessionUser {
   email: string;
   name: string;
   roles: Role[];
+  /** The chosen locale and time zone (app/lib/display-settings.ts); null until chosen. */
+  locale: string | null;
+  timeZone: string | null;
 }
 
 interface SessionState {
@@ -103,6 +106,8 @@ async function readSession(request: Request): Promise<SessionState> {
       email: user.email,
       name: user.name,
       roles: roleRows.map((row) => row.role),
+      locale: user.locale,
+      timeZone: user.timeZone,
     },
     // Extended: the same token again, with the new expiry (session.id is its hash).
     setCookie: session.fresh

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { describe, expect, it } from "vitest";
 import {
   buildOrderCreateSchema,
@@ -69,7 +69,7 @@ describe("the API bodies", () => {
 
 describe("the page forms", () => {
   it("reads the chosen revision as design id and revision", () => {
-    const submission = parseWithZod(
+    const submission = parseForm(
       form({ designRevision: "12/3", quantity: "25", note: "" }),
       { schema: createFormSchema, disableAutoCoercion: true },
     );
@@ -81,7 +81,7 @@ describe("the page forms", () => {
         quantity: 25,
         note: undefined,
       });
-    const none = parseWithZod(form({ designRevision: "", quantity: "0" }), {
+    const none = parseForm(form({ designRevision: "", quantity: "0" }), {
       schema: createFormSchema,
       disableAutoCoercion: true,
     });
@@ -93,7 +93,7 @@ describe("the page forms", () => {
   });
 
   it("reads the held stock chosen and a decimal comma", () => {
-    const submission = parseWithZod(
+    const submission = parseForm(
       form({
         intent: "issue",
         spot: "CU-050|SP-1|WIRE-A1",
@@ -110,12 +110,12 @@ describe("the page forms", () => {
         location: "WIRE-A1",
         quantity: 1_250n,
       });
-    const noLot = parseWithZod(
+    const noLot = parseForm(
       form({ intent: "issue", spot: "BRG-1||PARTS", quantity: "2" }),
       { schema: issueFormSchema, disableAutoCoercion: true },
     );
     expect(noLot.status === "success" && noLot.value.lot).toBeUndefined();
-    const nothing = parseWithZod(form({ intent: "issue" }), {
+    const nothing = parseForm(form({ intent: "issue" }), {
       schema: issueFormSchema,
       disableAutoCoercion: true,
     });

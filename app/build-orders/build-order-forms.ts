@@ -3,6 +3,7 @@
  * bodies of the API, and the page forms (text fields, a decimal comma allowed) turned
  * into the same values. Quantities become thousandths of their unit.
  */
+import { formatNumber } from "~/lib/format";
 import { z } from "zod";
 import { formNumber } from "~/lib/number-text";
 import { quantityFromNumber } from "~/lib/decimal-amounts";
@@ -19,7 +20,9 @@ const wholeNumber = (label: string, max: number) =>
     })
     .int(`The ${label} must be a whole number.`)
     .min(1, `The ${label} must be at least 1.`)
-    .max(max, `The ${label} must be at most ${max.toLocaleString("en-GB")}.`);
+    .max(max, {
+      error: () => `The ${label} must be at most ${formatNumber(max)}.`,
+    });
 
 const motors = wholeNumber("number of motors", maxMotorsPerOrder);
 

@@ -10,7 +10,8 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { QuantityField } from "~/components/quantity-field";
 import { TextField } from "~/components/text-field";
 import {
@@ -34,7 +35,7 @@ export function useMagnetGradeForm(
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: magnetGradeFormSchema });
+      return parseForm(formData, { schema: magnetGradeFormSchema });
     },
   });
 }

@@ -3,7 +3,8 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import { QuantityField } from "~/components/quantity-field";
 import { FormMessages, TextField } from "~/components/text-field";
@@ -28,7 +29,7 @@ export function CurrencyRateForm({
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: currencyRateSchema });
+      return parseForm(formData, { schema: currencyRateSchema });
     },
   });
   return (

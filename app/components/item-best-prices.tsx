@@ -1,3 +1,4 @@
+import { formatQuantity } from "~/lib/format";
 import { Form } from "react-router";
 import { countText, perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
@@ -38,7 +39,7 @@ export interface PriceQuantityChoice {
 }
 
 const money = (value: number, currency: string, decimals = 4) =>
-  `${value.toLocaleString("en-GB", { minimumFractionDigits: decimals, maximumFractionDigits: decimals })}\u00a0${currency}`;
+  formatQuantity(value, currency, decimals);
 
 /** "9.0000 EUR/kg at 0.92 EUR/USD": where a base the supplier's currency lacks came from. */
 export function derivedBaseText(

@@ -3,7 +3,8 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
@@ -33,7 +34,7 @@ export function MetalBaseForm({
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: metalBaseSchema });
+      return parseForm(formData, { schema: metalBaseSchema });
     },
   });
   return (

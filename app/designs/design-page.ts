@@ -4,6 +4,7 @@
  * action's intents, and how one line's change becomes the revision's whole
  * list of lines (the data layer replaces the list at once). Pure.
  */
+import { formatNumber } from "~/lib/format";
 import { z } from "zod";
 import type { DesignLineInput } from "./design-schemas";
 
@@ -27,10 +28,10 @@ export const costQuerySchema = z.object({
       .number({ error: "Give the number of motors as a whole number." })
       .int("Give the number of motors as a whole number.")
       .min(1, "A build is at least 1 motor.")
-      .max(
-        maxBuildQuantity,
-        `A build is at most ${maxBuildQuantity.toLocaleString("en-GB")} motors.`,
-      )
+      .max(maxBuildQuantity, {
+        error: () =>
+          `A build is at most ${formatNumber(maxBuildQuantity)} motors.`,
+      })
       .default(1),
   ),
   basis: z.preprocess(

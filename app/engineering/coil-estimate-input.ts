@@ -10,6 +10,7 @@
  * the conductor in reference-data.
  */
 
+import { formatNumber } from "~/lib/format";
 import {
   EngineeringInputError,
   requireNonNegative,
@@ -56,7 +57,7 @@ function requireWholeAtMost(
   if (value > max) {
     throw new EngineeringInputError(
       field,
-      `${label} must be at most ${max.toLocaleString("en-GB")}.`,
+      `${label} must be at most ${formatNumber(max)}.`,
     );
   }
 }

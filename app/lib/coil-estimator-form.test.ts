@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { describe, expect, it } from "vitest";
 import {
   coilEstimatorDefaults,
@@ -21,7 +21,7 @@ function parse(values: Record<string, string>) {
   })) {
     formData.set(name, value);
   }
-  return parseWithZod(formData, { schema: coilEstimatorFormSchema });
+  return parseForm(formData, { schema: coilEstimatorFormSchema });
 }
 
 describe("the coil estimator's form", () => {
@@ -125,7 +125,7 @@ describe("flat wire without the round sizes on the form", () => {
     formData.set("wireForm", "rectangular");
     formData.set("flatThicknessMm", "2");
     formData.set("flatWidthMm", "8");
-    const submission = parseWithZod(formData, {
+    const submission = parseForm(formData, {
       schema: coilEstimatorFormSchema,
     });
     expect(submission.status).toBe("success");

@@ -4,6 +4,7 @@
  * Every bound below is a plausibility limit: values past it are typing
  * mistakes, not coils.
  */
+import { formatNumber } from "~/lib/format";
 import { z } from "zod";
 
 const maxLengthMm = 100_000; // 100 m
@@ -24,10 +25,10 @@ function wholeNumber(label: string, min: number, max: number) {
       min,
       `${label[0]!.toUpperCase()}${label.slice(1)} must be at least ${min}.`,
     )
-    .max(
-      max,
-      `${label[0]!.toUpperCase()}${label.slice(1)} must be at most ${max.toLocaleString("en-GB")}.`,
-    );
+    .max(max, {
+      error: () =>
+        `${label[0]!.toUpperCase()}${label.slice(1)} must be at most ${formatNumber(max)}.`,
+    });
 }
 
 function lengthMm(label: string, { allowZero }: { allowZero: boolean }) {

@@ -103,6 +103,7 @@ export const flashMessageSubjects = {
   "order-quantity-changed-released": "order",
   "order-planned-start-changed": "order",
   "password-changed": "none",
+  "display-settings-saved": "none",
   "purchase-order-created": "purchaseOrder",
   "purchase-order-from-alert": "purchaseOrder",
   "purchase-order-saved": "purchaseOrder",
@@ -217,6 +218,8 @@ const texts: {
     `${order.reference} is now for ${countText(order.quantity, "motor")}. What it held was released: reserve again.`,
   "order-planned-start-changed": (order) =>
     `${order.reference}: planned start saved.`,
+  "display-settings-saved": () =>
+    "Saved: numbers, days and times now show your way.",
   "password-changed": () =>
     "Password changed. You stay signed in here; every other session has ended and your API tokens are revoked.",
   "purchase-order-created": (order) =>

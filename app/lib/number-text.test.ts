@@ -1,4 +1,9 @@
-import { describe, expect, it } from "vitest";
+import { afterEach, describe, expect, it } from "vitest";
+import {
+  defaultDisplaySettings,
+  supportedLocales,
+} from "~/lib/display-settings";
+import { formatNumberForField, setBrowserDisplaySettings } from "~/lib/format";
 import {
   createFormSchema,
   issueFormSchema,
@@ -25,6 +30,7 @@ import { movementFormSchema } from "~/stock/movement-form";
 import {
   formNumber,
   maxNumberTextLength,
+  plainNumberText,
   plainDecimalText,
   typedNumber,
   withoutSuffix,
@@ -42,7 +48,9 @@ describe("a form's number field", () => {
     ["   ", undefined],
     ["1e3", "1e3"],
     ["0x10", "0x10"],
-    ["1,234.5", "1,234.5"],
+    ["1,234.5", 1234.5],
+    ["1.234,5", "1.234,5"],
+    ["1,250", "1,250"],
     ["12 kg", "12 kg"],
     ["Infinity", "Infinity"],
   ])("reads %j as %j", (text, value) => {
@@ -300,5 +308,61 @@ describe("number readers given a megabyte", () => {
         }
       }
     });
+  });
+});
+
+// Decimal marks and thousands separators per locale as CLDR gives them (from memory of
+// CLDR's decimal/group symbols: en "." ",", de "," ".", fr and fi "," and a no-break
+// space), which is also what Intl.NumberFormat writes in Node and Chromium.
+describe("number fields in each person's locale", () => {
+  afterEach(() => setBrowserDisplaySettings(defaultDisplaySettings));
+
+  it.each([
+    // [locale, typed, read]
+    ["en-GB", "1234.5", 1234.5],
+    ["en-GB", "1,234.5", 1234.5],
+    ["en-GB", "1,234,567", 1234567],
+    ["en-GB", "1,25", 1.25],
+    ["en-GB", "0,125", 0.125],
+    ["en-US", "12,345.75", 12345.75],
+    ["de-DE", "1,25", 1.25],
+    ["de-DE", "1.234,5", 1234.5],
+    ["de-DE", "1.234.567", 1234567],
+    ["de-DE", "1.5", 1.5],
+    ["de-DE", "0.125", 0.125],
+    ["fr-FR", "1 234,5", 1234.5],
+    ["fr-FR", "1\u202f234,5", 1234.5],
+    ["fr-FR", "1.25", 1.25],
+    ["fi-FI", "1\u00a0234,5", 1234.5],
+    ["fi-FI", "-3,5", -3.5],
+  ] as const)("%s reads %j as %j", (locale, typed, read) => {
+    setBrowserDisplaySettings({ locale, timeZone: "UTC" });
+    expect(formNumber(typed)).toBe(read);
+  });
+
+  it.each([
+    // One mark before exactly three digits: a decimal in one convention, thousands in the other.
+    ["en-GB", "1,250"],
+    ["en-US", "-2,500"],
+    ["de-DE", "1.250"],
+    // Marks in the wrong places or both marks the wrong way round.
+    ["de-DE", "1,234.5"],
+    ["en-GB", "1.234,5"],
+    ["en-GB", "12,34,567"],
+    ["fr-FR", "1.234,5"],
+    ["fr-FR", "1 23"],
+  ] as const)("%s refuses %j as ambiguous or malformed", (locale, typed) => {
+    setBrowserDisplaySettings({ locale, timeZone: "UTC" });
+    expect(formNumber(typed)).toBe(typed);
+    expect(typeof plainNumberText(typed, locale)).not.toBe("string");
+  });
+
+  it("reads back what formatNumberForField wrote, in every locale", () => {
+    for (const locale of supportedLocales) {
+      setBrowserDisplaySettings({ locale, timeZone: "UTC" });
+      for (const value of [1.25, 1250, 0.125, 1234.5678, -3.5]) {
+        expect(formNumber(formatNumberForField(value))).toBe(value);
+      }
+    }
   });
 });

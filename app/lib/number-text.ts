@@ -5,6 +5,8 @@
  * `\d+\.?\d*` can split "111…1x" at every place and takes the square of its length to
  * refuse it). Pure: runs in Node and in the browser.
  */
+import { numberMarksOf, type SupportedLocale } from "./display-settings";
+import { currentDisplaySettings } from "./format";
 
 /** No number Turnledger reads is longer than this; longer text is refused before it is matched. */
 export const maxNumberTextLength = 40;
@@ -16,26 +18,96 @@ export function isTooLongForNumber(text: string): boolean {
 
 /** "12", "-12.5", "12.", ".5": digits with at most one point. */
 const decimalText = /^-?(?:\d+(?:\.\d*)?|\.\d+)$/;
-/** "12,5": a decimal comma between digits. */
-const commaDecimalText = /^-?\d+,\d+$/;
+
+/** Spaces people and Intl put between thousands: space, no-break space, narrow no-break space. */
+const groupSpaces = /[ \u00a0\u202f]/g;
+/** "1 234", "-12 345,5": thousands set apart by spaces (each alternative starts with its own character, so matching is linear). */
+const spaceGrouped = /^-?\d{1,3}(?:[ \u00a0\u202f]\d{3})+(?:[.,]\d+)?$/;
+/** Thousands grouped by the mark, then perhaps the other mark as decimal: "1,234,567.5", "1.234,5". */
+const groupedText = {
+  ",": /^-?[1-9]\d{0,2}(?:,\d{3})+(?:\.\d*)?$/,
+  ".": /^-?[1-9]\d{0,2}(?:\.\d{3})+(?:,\d*)?$/,
+};
+/** One mark with exactly three digits after it, "1.250": a decimal or a thousands group. */
+const oneGroupText = {
+  ",": /^-?[1-9]\d{0,2},\d{3}$/,
+  ".": /^-?[1-9]\d{0,2}\.\d{3}$/,
+};
+
+/** Text that is a number in the reader's locale written two ways: "1.250" in de-DE is 1250 or 1.25. */
+export const ambiguousNumber = Symbol("ambiguous number");
 
 /**
- * A form's number field as the schema takes it: "1,25" → 1.25, "" → undefined. Text
- * that is no plain decimal number (or longer than {@link maxNumberTextLength}) stays
- * text, so the schema names the field ("The quantity must be a number.").
+ * Number text as a person in `locale` types it, made plain ("1.234,5" → "1234.5"
+ * in de-DE): the locale's decimal mark always; its thousands separator where it
+ * groups digits in threes; the other decimal mark where it cannot be a thousands
+ * group ("1.5" in de-DE, "1,25" in en-GB); spaces between thousands everywhere.
+ * A single separator before exactly three digits that could be either ("1,250" in
+ * en-GB, "1.250" in de-DE) is {@link ambiguousNumber}. Null for text that is no
+ * number at all.
+ */
+export function plainNumberText(
+  text: string,
+  locale: SupportedLocale,
+): string | typeof ambiguousNumber | null {
+  let typed = text.trim();
+  if (typed === "" || isTooLongForNumber(typed)) return null;
+  // Intl writes a minus sign (U+2212) in some locales, fi-FI among them.
+  if (typed.startsWith("\u2212")) typed = `-${typed.slice(1)}`;
+  if (/[ \u00a0\u202f]/.test(typed)) {
+    if (!spaceGrouped.test(typed)) return null;
+    typed = typed.replace(groupSpaces, "");
+  }
+  const { decimal, group } = numberMarksOf(locale);
+  const other = decimal === "." ? "," : ".";
+  const hasDecimal = typed.includes(decimal);
+  const hasOther = typed.includes(other);
+  let plain = typed;
+  if (hasOther && group === other) {
+    // The other mark is this locale's thousands separator.
+    if (
+      groupedText[other].test(typed) &&
+      (hasDecimal || countOf(typed, other) > 1)
+    ) {
+      plain = typed.split(other).join("");
+    } else if (!hasDecimal && oneGroupText[other].test(typed)) {
+      return ambiguousNumber;
+    } else if (hasDecimal || countOf(typed, other) > 1) {
+      return null;
+    } else {
+      // "1,5" in en-GB, "1.5" in de-DE: no thousands group, so a decimal mark.
+      return decimalText.test(typed.replace(other, "."))
+        ? typed.replace(other, ".")
+        : null;
+    }
+  } else if (hasOther) {
+    // fr-FR and fi-FI group with spaces: a point can only be a decimal mark.
+    if (hasDecimal || countOf(typed, other) > 1) return null;
+    plain = typed.replace(other, ".");
+  }
+  if (decimal === ",") plain = plain.replace(",", ".");
+  return decimalText.test(plain) ? plain : null;
+}
+
+function countOf(text: string, mark: string): number {
+  return text.split(mark).length - 1;
+}
+
+/**
+ * A form's number field as the schema takes it, in the reader's locale
+ * (app/lib/format.ts currentDisplaySettings): "1,25" → 1.25, "" → undefined.
+ * Text that is no number (or is ambiguous, or longer than
+ * {@link maxNumberTextLength}) stays text, so the schema names the field
+ * ("The quantity must be a number.").
  */
 export function formNumber(value: unknown): unknown {
   if (typeof value !== "string") return value;
   const trimmed = value.trim();
   if (trimmed === "") return undefined;
-  if (isTooLongForNumber(trimmed)) return trimmed;
-  const normalised = commaDecimalText.test(trimmed)
-    ? trimmed.replace(",", ".")
-    : trimmed;
-  const number = Number(normalised);
-  return decimalText.test(normalised) && Number.isFinite(number)
-    ? number
-    : trimmed;
+  const plain = plainNumberText(trimmed, currentDisplaySettings().locale);
+  if (plain === null || plain === ambiguousNumber) return trimmed;
+  const number = Number(plain);
+  return Number.isFinite(number) ? number : trimmed;
 }
 
 /**

@@ -6,6 +6,7 @@
  * built from these parameters); pages correct it instead (`readSearchLeniently`,
  * `pageFromSearch`, `readPageOrLast`). Pure: no framework, no I/O.
  */
+import { formatNumber } from "./format";
 import { z } from "zod";
 import { isCalendarDate } from "./calendar-days";
 
@@ -25,7 +26,7 @@ export const maxPage = 1_000_000;
 const maxWholeDigits = 15;
 const wholeNumberText = new RegExp(`^\\d{1,${maxWholeDigits}}$`);
 
-const grouped = (value: number) => value.toLocaleString("en-GB");
+const grouped = (value: number) => formatNumber(value);
 
 /**
  * A whole number written in digits, from `min` to `max`. The message names the

@@ -3,6 +3,7 @@
  * strands, turns per coil side, coil sides per slot, the slot area and the liner and
  * separator area. Bounds are plausibility limits, as in estimate-requests.ts.
  */
+import { formatNumber } from "~/lib/format";
 import { z } from "zod";
 import { insulationSchema, wireSpecSchema } from "./estimate-requests";
 
@@ -11,10 +12,10 @@ const whole = (label: string, max: number) =>
     .number({ error: `Give ${label} as a whole number.` })
     .int(`${label[0]!.toUpperCase()}${label.slice(1)} must be a whole number.`)
     .min(1, `${label[0]!.toUpperCase()}${label.slice(1)} must be at least 1.`)
-    .max(
-      max,
-      `${label[0]!.toUpperCase()}${label.slice(1)} must be at most ${max.toLocaleString("en-GB")}.`,
-    );
+    .max(max, {
+      error: () =>
+        `${label[0]!.toUpperCase()}${label.slice(1)} must be at most ${formatNumber(max)}.`,
+    });
 
 const area = (label: string) =>
   z

@@ -5,7 +5,7 @@
  * a lot in the wrong state 409 with the refusal above the form (Conform replies, for a
  * fetcher or a form on the lot page); an unknown lot is the 404 page.
  */
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data } from "react-router";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { isDomainError } from "~/lib/domain-error";
@@ -33,7 +33,7 @@ export async function lotHoldFormAction(
 ): Promise<Response | ReturnType<typeof data>> {
   const lotId = await lotIdOrNotFound(lotIdText);
   const formData = await request.formData();
-  const submission = parseWithZod(formData, {
+  const submission = parseForm(formData, {
     schema: step === "hold" ? holdLotSchema : releaseLotSchema,
   });
   if (submission.status !== "success")

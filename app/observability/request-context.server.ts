@@ -4,12 +4,15 @@
  * an AsyncLocalStorage filled by server/app.ts for each request.
  */
 import { AsyncLocalStorage } from "node:async_hooks";
+import type { DisplaySettings } from "~/lib/display-settings";
 
 export interface RequestContext {
   /** The id in the answer's X-Request-Id header (app/observability/request-id.ts). */
   readonly requestId: string;
   /** The signed-in person's user id, once the guard has resolved them. */
   personId: string | null;
+  /** How the signed-in person reads numbers and times, for the pages they are sent (app/lib/format.ts). */
+  display: DisplaySettings | null;
 }
 
 // One store per process, kept across the dev server's module reloads.
@@ -36,4 +39,10 @@ export function currentRequest(): RequestContext | undefined {
 export function noteSignedInPerson(personId: string): void {
   const context = storage.getStore();
   if (context) context.personId = personId;
+}
+
+/** Records how the signed-in person reads numbers and times, for the page being answered. */
+export function noteDisplaySettings(settings: DisplaySettings): void {
+  const context = storage.getStore();
+  if (context) context.display = settings;
 }

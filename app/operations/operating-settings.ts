@@ -1,3 +1,4 @@
+import { formatNumber } from "~/lib/format";
 /**
  * The settings of readiness and stopping, read from the environment and
  * checked: a wrong value is refused with a message that says what to write,
@@ -64,7 +65,7 @@ export function readOperatingSettings(env: NodeJS.ProcessEnv = process.env): {
       min: 0,
       max: 600_000,
       unit: "milliseconds",
-      hint: `leave it unset for ${defaultShutdownGraceMs.toLocaleString("en")}, and keep it below the time your service manager waits before it kills the process.`,
+      hint: `leave it unset for ${formatNumber(defaultShutdownGraceMs)}, and keep it below the time your service manager waits before it kills the process.`,
     },
   );
   const problems = [outbox, grace].filter(

@@ -5,6 +5,7 @@
  * of the file (the CSV reader, the row reader, the catalogue match) keeps its own list,
  * each filled in file order; {@link mergeLineErrors} makes them one. Pure.
  */
+import { formatNumber } from "~/lib/format";
 import type { LineError } from "./parse-price-list";
 
 /** Lines with errors listed at most; more are counted. Enough to fix a file's pattern of mistakes. */
@@ -52,5 +53,5 @@ export function moreLineErrorsText(
 ): string | null {
   const more = errorCount - listed;
   if (more <= 0) return null;
-  return `… and ${more.toLocaleString("en-GB")} more ${more === 1 ? "line" : "lines"} with errors`;
+  return `… and ${formatNumber(more)} more ${more === 1 ? "line" : "lines"} with errors`;
 }

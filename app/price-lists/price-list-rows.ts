@@ -14,6 +14,7 @@
  *
  * Pure: runs in Node and in the browser.
  */
+import { formatNumber } from "~/lib/format";
 import {
   findIecDiameter,
   type InsulationKey,
@@ -614,7 +615,7 @@ function readLeadTimeDays(
   const days = Number.parseInt(cell, 10);
   if (days > maxLeadTimeDays) {
     problems.push(
-      `${named} is more than ${maxLeadTimeDays.toLocaleString("en-GB")} days; check it`,
+      `${named} is more than ${formatNumber(maxLeadTimeDays)} days; check it`,
     );
     return undefined;
   }

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { describe, expect, it } from "vitest";
 import type { z } from "zod";
 import {
@@ -29,7 +29,7 @@ function parse<Schema extends z.ZodType>(
   schema: Schema,
   fields: Record<string, string>,
 ) {
-  const submission = parseWithZod(formData(fields), {
+  const submission = parseForm(formData(fields), {
     schema,
     disableAutoCoercion: true,
   });

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/account";
@@ -28,12 +28,22 @@ import {
   tokenExpiry,
 } from "~/lib/token-schemas";
 import { checkSignIn } from "~/people/people.server";
+import { DisplaySettingsForm } from "~/components/account/display-settings-form";
+import { displaySettingsOf } from "~/lib/display-settings";
+import { redirectWithFlash } from "~/lib/flash.server";
+import {
+  displaySettingsSchema,
+  timeZoneChoices,
+} from "~/people/display-settings-form";
+import { saveDisplaySettings } from "~/people/display-settings.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
   const hearsAlerts = userCan(user, "hearLowStockAlerts");
   return {
     user,
+    display: displaySettingsOf(user),
+    timeZones: timeZoneChoices(),
     tokens: await listApiTokens(user.id),
     alertMode: hearsAlerts
       ? alertModeOf({
@@ -61,6 +71,23 @@ export async function action({ request, context }: Route.ActionArgs) {
       user,
       clientAddress: context.clientAddress,
     });
+  if (formData.get("intent") === "display-settings") {
+    const submission = parseForm(formData, {
+      schema: displaySettingsSchema,
+    });
+    if (submission.status !== "success")
+      return data(
+        {
+          displayResult: submission.reply(),
+          result: null,
+          newToken: null,
+          notice: null,
+        },
+        { status: 400 },
+      );
+    await saveDisplaySettings(user.id, submission.value);
+    return redirectWithFlash("/account", { code: "display-settings-saved" });
+  }
   if (formData.get("intent") === "alert-mode") {
     // Buyers (and admins, who opt in) choose how they hear about low stock.
     if (!userCan(user, "hearLowStockAlerts"))
@@ -106,7 +133,7 @@ export async function action({ request, context }: Route.ActionArgs) {
       notice: "Token revoked: it no longer works.",
     };
   }
-  const submission = parseWithZod(formData, {
+  const submission = parseForm(formData, {
     schema: createTokenSchema
       .refine(
         (value) =>
@@ -183,7 +210,7 @@ export default function Account({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { user, tokens, alertMode } = loaderData;
+  const { user, tokens, alertMode, display, timeZones } = loaderData;
   const passwordResult =
     actionData && "passwordResult" in actionData
       ? actionData.passwordResult
@@ -201,6 +228,16 @@ export default function Account({
       <ChangePasswordForm
         lastResult={passwordResult}
         liveTokens={tokens.filter((token) => !token.revokedAt).length}
+      />
+
+      <DisplaySettingsForm
+        settings={display}
+        timeZones={timeZones}
+        lastResult={
+          actionData && "displayResult" in actionData
+            ? actionData.displayResult
+            : null
+        }
       />
 
       {alertMode ? <LowStockMailChoice alertMode={alertMode} /> : null}

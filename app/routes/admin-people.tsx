@@ -1,5 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/admin-people";
@@ -32,7 +33,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const admin = await requireCapability(request, "managePeople");
-  const submission = await parseWithZod(await request.formData(), {
+  const submission = await parseForm(await request.formData(), {
     schema: inviteSchema.superRefine(async (value, context) => {
       if (await emailIsTaken(value.email)) {
         context.addIssue({
@@ -126,7 +127,7 @@ export default function AdminPeople({
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: inviteSchema });
+      return parseForm(formData, { schema: inviteSchema });
     },
   });
   return (

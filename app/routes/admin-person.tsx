@@ -1,5 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/admin-person";
 import { createEmailToken } from "~/auth/email-tokens.server";
@@ -28,7 +29,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   const admin = await requireCapability(request, "managePeople");
   const person = await findPerson(params.userId);
   if (!person) throw data({ message: "No such person." }, { status: 404 });
-  const submission = parseWithZod(await request.formData(), {
+  const submission = parseForm(await request.formData(), {
     schema: personUpdateSchema,
   });
   if (submission.status !== "success") {
@@ -110,7 +111,7 @@ export default function AdminPerson({
     constraint: getZodConstraint(personUpdateSchema),
     shouldValidate: "onSubmit",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: personUpdateSchema });
+      return parseForm(formData, { schema: personUpdateSchema });
     },
   });
   return (

@@ -1,3 +1,4 @@
+import { formatNumber } from "~/lib/format";
 import {
   FormDataParseError,
   MaxFileSizeExceededError,
@@ -151,7 +152,7 @@ export async function action({ request }: Route.ActionArgs) {
       case "invalid": {
         // At most 1,000 lines are listed; the count and the flag say when there were more.
         const truncated = outcome.invalidCount > outcome.invalid.length;
-        const count = (lines: number) => lines.toLocaleString("en-GB");
+        const count = (lines: number) => formatNumber(lines);
         return Response.json(
           {
             error: {

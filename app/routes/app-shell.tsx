@@ -10,7 +10,9 @@ import { requireUser } from "~/auth/guard.server";
 import { sessionHeaders } from "~/auth/session-headers.server";
 import { FlashMessage } from "~/components/flash-message";
 import { RouteErrorNotice, RouteErrorPage } from "~/components/route-error";
+import { displaySettingsOf } from "~/lib/display-settings";
 import { takeFlash } from "~/lib/flash.server";
+import { setBrowserDisplaySettings } from "~/lib/format";
 import { navigationItems, showsNavigationItem } from "~/lib/navigation";
 import { roleLabels } from "~/lib/roles";
 
@@ -20,7 +22,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   const { flash, setCookie } = await takeFlash(request);
   const headers = new Headers(await sessionHeaders(request));
   if (setCookie) headers.append("Set-Cookie", setCookie);
-  return data({ user, flash }, { headers });
+  return data({ user, flash, display: displaySettingsOf(user) }, { headers });
 }
 
 /** The estimators' live calculations change nothing on the server: the shell need not reload after them. */
@@ -37,7 +39,11 @@ export const headers: Route.HeadersFunction = ({ loaderHeaders }) =>
 
 export default function AppShell({ loaderData }: Route.ComponentProps) {
   return (
-    <ShellFrame user={loaderData.user} flash={loaderData.flash}>
+    <ShellFrame
+      user={loaderData.user}
+      flash={loaderData.flash}
+      display={loaderData.display}
+    >
       <Outlet />
     </ShellFrame>
   );
@@ -51,7 +57,11 @@ export default function AppShell({ loaderData }: Route.ComponentProps) {
 export function ErrorBoundary({ error, loaderData }: Route.ErrorBoundaryProps) {
   if (!loaderData) return <RouteErrorPage error={error} />;
   return (
-    <ShellFrame user={loaderData.user} flash={loaderData.flash}>
+    <ShellFrame
+      user={loaderData.user}
+      flash={loaderData.flash}
+      display={loaderData.display}
+    >
       <div className="mx-auto max-w-xl py-12">
         <RouteErrorNotice error={error} />
       </div>
@@ -65,12 +75,17 @@ type ShellData = Route.ComponentProps["loaderData"];
 function ShellFrame({
   user,
   flash,
+  display,
   children,
 }: {
   user: ShellData["user"];
   flash: ShellData["flash"];
+  display: ShellData["display"];
   children: React.ReactNode;
 }) {
+  // Before the page below renders: the browser formats in the person's locale and
+  // time zone, as the server did (app/lib/format.ts), so hydration matches.
+  if (typeof document !== "undefined") setBrowserDisplaySettings(display);
   const items = navigationItems.filter((item) =>
     showsNavigationItem(item, user),
   );

@@ -1,3 +1,4 @@
+import { formatNumber, formatQuantity } from "~/lib/format";
 import { createColumnHelper } from "@tanstack/react-table";
 import { Form, Link } from "react-router";
 import type { Route } from "./+types/best-prices";
@@ -37,7 +38,7 @@ export const meta: Route.MetaFunction = () => [
 type Row = Route.ComponentProps["loaderData"]["rows"][number];
 
 const money = (value: number, currency: string, decimals = 4) =>
-  `${value.toLocaleString("en-GB", { minimumFractionDigits: decimals, maximumFractionDigits: decimals })}\u00a0${currency}`;
+  formatQuantity(value, currency, decimals);
 
 function columns(quantityText: string) {
   const column = createColumnHelper<Row>();
@@ -221,8 +222,7 @@ export default function BestPrices({ loaderData }: Route.ComponentProps) {
         ) : null}
       </Form>
       <p className="text-sm text-graphite-500">
-        {total === 1 ? "1 item" : `${total.toLocaleString("en-GB")} items`}{" "}
-        quoted
+        {total === 1 ? "1 item" : `${formatNumber(total)} items`} quoted
         {search ? ` matching “${search}”` : ""}.
       </p>
       <DataTable

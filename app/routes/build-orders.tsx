@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, redirect } from "react-router";
 import type { Route } from "./+types/build-orders";
 import { requireCapability, requireUser } from "~/auth/guard.server";
@@ -57,7 +57,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "createBuildOrders");
-  const submission = parseWithZod(await request.formData(), {
+  const submission = parseForm(await request.formData(), {
     schema: createFormSchema,
     disableAutoCoercion: true,
   });

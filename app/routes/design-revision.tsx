@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import type { Submission } from "@conform-to/react";
 import {
   data,
@@ -146,7 +146,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 
   switch (intent) {
     case "fields": {
-      const submission = parseWithZod(formData, {
+      const submission = parseForm(formData, {
         schema: revisionFormSchema,
       });
       if (submission.status !== "success")
@@ -185,7 +185,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       const lineId = formLineId(formData.get("lineId"));
       const submission =
         intent === "save-line"
-          ? parseWithZod(formData, { schema: designLineSchema })
+          ? parseForm(formData, { schema: designLineSchema })
           : null;
       if (submission && submission.status !== "success")
         return answer({ intent, ok: false, result: submission.reply() }, 400);
@@ -277,7 +277,7 @@ async function applySubstitute(
   formData: FormData,
 ) {
   const intent = "use-substitute";
-  const submission = parseWithZod(formData, { schema: substituteFormSchema });
+  const submission = parseForm(formData, { schema: substituteFormSchema });
   if (submission.status !== "success")
     return answer({ intent, ok: false, result: submission.reply() }, 400);
   const { line, sku, strands, tolerance } = submission.value;

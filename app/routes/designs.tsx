@@ -3,7 +3,8 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/designs";
@@ -47,7 +48,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "editDesigns");
-  const submission = parseWithZod(await request.formData(), {
+  const submission = parseForm(await request.formData(), {
     schema: newDesignFormSchema,
   });
   if (submission.status !== "success") {
@@ -209,7 +210,7 @@ function NewDesignForm({
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: newDesignFormSchema }),
+      parseForm(formData, { schema: newDesignFormSchema }),
   });
   // The schema reads numbers from text, so Conform types them as unknown; the inputs need name, id and errors.
   const number = fields as unknown as Record<

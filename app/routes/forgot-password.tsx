@@ -1,5 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/forgot-password";
 import { getOptionalUser } from "~/auth/guard.server";
@@ -24,7 +25,7 @@ function limitMessage(scope: "account" | "address", retryAfterSeconds: number) {
 
 export async function action({ request, context }: Route.ActionArgs) {
   await getOptionalUser(request);
-  const submission = parseWithZod(await request.formData(), {
+  const submission = parseForm(await request.formData(), {
     schema: forgotPasswordSchema,
   });
   if (submission.status !== "success") {
@@ -68,7 +69,7 @@ export default function ForgotPassword({ actionData }: Route.ComponentProps) {
     constraint: getZodConstraint(forgotPasswordSchema),
     shouldValidate: "onBlur",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: forgotPasswordSchema });
+      return parseForm(formData, { schema: forgotPasswordSchema });
     },
   });
   return (

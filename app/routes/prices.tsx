@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, useLocation } from "react-router";
 import type { Route } from "./+types/prices";
@@ -52,7 +52,7 @@ export async function action({ request }: Route.ActionArgs) {
   const formData = await request.formData();
   const intent = formData.get("intent");
   if (intent === "metal-base") {
-    const submission = parseWithZod(formData, { schema: metalBaseSchema });
+    const submission = parseForm(formData, { schema: metalBaseSchema });
     if (submission.status !== "success") {
       return data({ intent, result: submission.reply() }, { status: 400 });
     }
@@ -60,7 +60,7 @@ export async function action({ request }: Route.ActionArgs) {
     return redirectWithFlash("/prices", { code: "metal-base-saved" });
   }
   if (intent === "currency-rate") {
-    const submission = parseWithZod(formData, { schema: currencyRateSchema });
+    const submission = parseForm(formData, { schema: currencyRateSchema });
     if (submission.status !== "success") {
       return data({ intent, result: submission.reply() }, { status: 400 });
     }

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data } from "react-router";
 import type { Route } from "./+types/purchase-order-new";
 import { requireCapability } from "~/auth/guard.server";
@@ -40,7 +40,7 @@ export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "orderPurchases");
   const formData = await request.formData();
   const fromAlert = formData.get("intent") === "from-alert";
-  const submission = parseWithZod(formData, {
+  const submission = parseForm(formData, {
     schema: fromAlert ? fromAlertFormSchema : newOrderFormSchema,
     disableAutoCoercion: true,
   });

@@ -1,5 +1,5 @@
 import type { SubmissionResult } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data } from "react-router";
 import type { Route } from "./+types/purchase-order";
 import { requireCapability, requireUser } from "~/auth/guard.server";
@@ -69,7 +69,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       },
       { status: 400 },
     );
-  const submission = parseWithZod(formData, {
+  const submission = parseForm(formData, {
     schema: orderPageSchemas[intent],
     disableAutoCoercion: true,
   });

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Link } from "react-router";
 import type { Route } from "./+types/reference";
 import { requireCapability, requireUser } from "~/auth/guard.server";
@@ -74,7 +74,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 /** Adds a magnet grade (admins only); field messages on bad input, 409 when the name is taken. */
 export async function action({ request }: Route.ActionArgs) {
   const admin = await requireCapability(request, "addMagnetGrades");
-  const submission = parseWithZod(await request.formData(), {
+  const submission = parseForm(await request.formData(), {
     schema: magnetGradeFormSchema,
   });
   if (submission.status !== "success") {

@@ -1,5 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/set-password";
 import {
@@ -34,7 +35,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   await getOptionalUser(request);
-  const submission = parseWithZod(await request.formData(), {
+  const submission = parseForm(await request.formData(), {
     schema: newPasswordSchema,
   });
   if (submission.status !== "success") {
@@ -101,7 +102,7 @@ export default function SetPassword({
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: newPasswordSchema });
+      return parseForm(formData, { schema: newPasswordSchema });
     },
   });
   if (!loaderData.usable) {

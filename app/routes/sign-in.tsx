@@ -1,5 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import {
   data,
   Form,
@@ -20,6 +21,8 @@ import {
   wrongCredentialsMessage,
 } from "~/lib/account-schemas";
 import { checkSignIn } from "~/people/people.server";
+import { BrowserDisplayHints } from "~/components/account/browser-display-hints";
+import { adoptBrowserDisplaySettings } from "~/people/display-settings.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await getOptionalUser(request);
@@ -34,7 +37,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 export async function action({ request, context }: Route.ActionArgs) {
   await getOptionalUser(request); // reaches the database first: a 503 when it is down
   const formData = await request.formData();
-  const submission = parseWithZod(formData, { schema: signInSchema });
+  const submission = parseForm(formData, { schema: signInSchema });
   if (submission.status !== "success") {
     return data(submission.reply({ hideFields: ["password"] }), {
       status: 400,
@@ -61,6 +64,10 @@ export async function action({ request, context }: Route.ActionArgs) {
       { status: 401 },
     );
   }
+  await adoptBrowserDisplaySettings(result.userId, {
+    languages: String(formData.get("browserLanguages") ?? ""),
+    timeZone: String(formData.get("browserTimeZone") ?? ""),
+  });
   throw redirect(safeRedirectPath(redirectTo), {
     headers: { "Set-Cookie": await startSession(result.userId) },
   });
@@ -83,7 +90,7 @@ export default function SignIn({ actionData }: Route.ComponentProps) {
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: signInSchema });
+      return parseForm(formData, { schema: signInSchema });
     },
   });
   return (
@@ -95,6 +102,7 @@ export default function SignIn({ actionData }: Route.ComponentProps) {
           name="redirectTo"
           value={searchParams.get("redirectTo") ?? ""}
         />
+        <BrowserDisplayHints />
         <TextField
           field={fields.email}
           label="E-mail"

@@ -1,5 +1,5 @@
 import { getFormProps } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-item-new";
 import { requireCapability } from "~/auth/guard.server";
@@ -46,7 +46,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "keepCatalogue");
-  const submission = parseWithZod(await request.formData(), {
+  const submission = parseForm(await request.formData(), {
     schema: newItemFormSchema,
   });
   if (submission.status !== "success") {

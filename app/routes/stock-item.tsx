@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Link } from "react-router";
 import type { Route } from "./+types/stock-item";
 import {
@@ -129,7 +129,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       "Storekeepers change the reorder point and quantity only; renaming and archiving need the role buyer.",
     );
   if (!(await findItemBySku(params.sku))) notFound(params.sku);
-  const submission = parseWithZod(formData, { schema: itemChangeSchema });
+  const submission = parseForm(formData, { schema: itemChangeSchema });
   if (submission.status !== "success") {
     return data(
       { intent: String(intent ?? ""), result: submission.reply() },

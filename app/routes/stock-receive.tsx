@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Link } from "react-router";
 import type { Route } from "./+types/stock-receive";
 import { requireCapability } from "~/auth/guard.server";
@@ -67,7 +67,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "receivePurchases");
   const formData = await request.formData();
-  const submission = parseWithZod(formData, {
+  const submission = parseForm(formData, {
     schema: receiptFormSchema,
     disableAutoCoercion: true,
   });

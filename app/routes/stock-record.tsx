@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Link, useNavigate, useSearchParams } from "react-router";
 import type { Route } from "./+types/stock-record";
 import { requireCapability } from "~/auth/guard.server";
@@ -81,7 +81,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "recordStock");
   const formData = await request.formData();
-  const submission = parseWithZod(formData, {
+  const submission = parseForm(formData, {
     schema: movementFormSchema,
     disableAutoCoercion: true,
   });

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Link } from "react-router";
 import type { Route } from "./+types/stocktake-count";
 import { requireCapability } from "~/auth/guard.server";
@@ -64,7 +64,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       { status: 400 },
     );
   if (intent === "count") {
-    const submission = parseWithZod(formData, { schema: countFormSchema });
+    const submission = parseForm(formData, { schema: countFormSchema });
     const lineId = Number(formData.get("lineId")) || undefined;
     if (submission.status !== "success")
       return data(
@@ -91,7 +91,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       );
     }
   }
-  const submission = parseWithZod(formData, { schema: addLineFormSchema });
+  const submission = parseForm(formData, { schema: addLineFormSchema });
   if (submission.status !== "success")
     return data({ intent, result: submission.reply() }, { status: 400 });
   try {

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stocktake";
 import { refuseUnless } from "~/auth/guard.server";
@@ -106,7 +106,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       },
       { status: 400 },
     );
-  const submission = parseWithZod(formData, { schema: schemas[intent] });
+  const submission = parseForm(formData, { schema: schemas[intent] });
   if (submission.status !== "success")
     return data({ intent, result: submission.reply() }, { status: 400 });
   const here = `/stocktakes/${stocktake.id}`;

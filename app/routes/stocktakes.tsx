@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data, redirect } from "react-router";
 import type { Route } from "./+types/stocktakes";
 import { requireCapability } from "~/auth/guard.server";
@@ -56,7 +56,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "startStocktakes");
-  const submission = parseWithZod(await request.formData(), {
+  const submission = parseForm(await request.formData(), {
     schema: startFormSchema,
   });
   if (submission.status !== "success")

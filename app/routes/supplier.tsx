@@ -1,5 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/supplier";
@@ -57,7 +58,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   await requireCapability(request, "keepSuppliers");
   const id = idFromText(params.supplierId);
   if (id === null || !(await findSupplier(id))) notFound();
-  const submission = parseWithZod(await request.formData(), {
+  const submission = parseForm(await request.formData(), {
     schema: supplierSchema,
   });
   if (submission.status !== "success") {
@@ -160,7 +161,7 @@ export default function Supplier({
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: supplierSchema }),
+      parseForm(formData, { schema: supplierSchema }),
   });
   return (
     <div className="space-y-6">

@@ -35,7 +35,8 @@ function quantityText(value: number): string {
 function shapeLabel(shape: ItemCreateInput & { kind: "magnet" }): string {
   const s = shape.shape;
   const mm = (value: number) =>
-    value.toLocaleString("en-GB", { maximumFractionDigits: 2 });
+    // Part of the item's stored name: plain digits, whoever adds it.
+    String(Math.round(value * 100) / 100);
   switch (s.kind) {
     case "block":
       return `block ${mm(s.lengthMm)}×${mm(s.widthMm)}×${mm(s.heightMm)}`;

@@ -4,6 +4,7 @@
  * mass of stocked magnets (from the grade's density and the piece's shape).
  * Pure: built on the engineering modules.
  */
+import { formatNumber } from "~/lib/format";
 import {
   estimateMagnet,
   type MagnetShape,
@@ -90,13 +91,12 @@ export function magnetStockFigures(input: {
 
 /** The dimensions of a shape as people read them: "length 20 mm × width 10 mm × height 5 mm". */
 export function magnetDimensionsText(shape: MagnetShape): string {
-  const mm = (value: number) =>
-    `${value.toLocaleString("en-GB", { maximumFractionDigits: 3 })}\u00a0mm`;
+  const mm = (value: number) => `${formatNumber(value, 3)}\u00a0mm`;
   switch (shape.kind) {
     case "block":
       return `length ${mm(shape.lengthMm)} × width ${mm(shape.widthMm)} × height ${mm(shape.heightMm)}`;
     case "arc":
-      return `outer radius ${mm(shape.outerRadiusMm)}, inner radius ${mm(shape.innerRadiusMm)}, angle ${shape.angleDeg.toLocaleString("en-GB")}°, axial length ${mm(shape.axialLengthMm)}`;
+      return `outer radius ${mm(shape.outerRadiusMm)}, inner radius ${mm(shape.innerRadiusMm)}, angle ${formatNumber(shape.angleDeg)}°, axial length ${mm(shape.axialLengthMm)}`;
     case "disc":
       return `diameter ${mm(shape.diameterMm)} × thickness ${mm(shape.thicknessMm)}`;
     case "ring":

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { describe, expect, it } from "vitest";
 import { countFormSchema, skuList, startFormSchema } from "./stocktake-forms";
 
@@ -16,7 +16,7 @@ const form = (entries: [string, string][]) => {
 
 describe("startFormSchema", () => {
   it("takes ticked locations", () => {
-    const submission = parseWithZod(
+    const submission = parseForm(
       form([
         ["intent", "start"],
         ["locations", "A1"],
@@ -33,11 +33,11 @@ describe("startFormSchema", () => {
       });
   });
   it("asks for locations or SKUs, never both", () => {
-    const none = parseWithZod(form([["intent", "start"]]), {
+    const none = parseForm(form([["intent", "start"]]), {
       schema: startFormSchema,
     });
     expect(errorsOf(none)?.locations?.[0]).toContain("at least one location");
-    const both = parseWithZod(
+    const both = parseForm(
       form([
         ["intent", "start"],
         ["locations", "A1"],
@@ -62,7 +62,7 @@ describe("skuList", () => {
 
 describe("countFormSchema", () => {
   const parse = (entries: [string, string][]) =>
-    parseWithZod(form([["intent", "count"], ["lineId", "7"], ...entries]), {
+    parseForm(form([["intent", "count"], ["lineId", "7"], ...entries]), {
       schema: countFormSchema,
     });
   it("reads a quantity with a decimal comma into thousandths", () => {

@@ -73,8 +73,14 @@ export async function launchBrowser(
   const seen: string[] = [];
   violationsByBrowser.set(browser, seen);
   const newContext = browser.newContext.bind(browser);
-  browser.newContext = async (...args) => {
-    const context = await newContext(...args);
+  // Every page reads as a British browser in UTC unless the test says otherwise: a
+  // new person takes their locale and time zone from the browser at first sign-in.
+  browser.newContext = async (options = {}) => {
+    const context = await newContext({
+      locale: "en-GB",
+      timezoneId: "UTC",
+      ...options,
+    });
     interceptFileChoosers(context);
     await watchForCspViolations(context, seen);
     return context;

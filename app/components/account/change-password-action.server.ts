@@ -5,7 +5,7 @@
  * sign-in throttle or the password queue refuses to check; after a change, a
  * redirect to the account page with a new session cookie and a one-time note.
  */
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { data } from "react-router";
 import {
   isPublishedDemoPassword,
@@ -26,7 +26,7 @@ export async function changePasswordAction(input: {
   user: { id: string; email: string };
   clientAddress: string;
 }) {
-  const submission = parseWithZod(input.formData, {
+  const submission = parseForm(input.formData, {
     schema: changePasswordSchema,
   });
   const refuse = (

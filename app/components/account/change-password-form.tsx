@@ -3,7 +3,8 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import { useFlash } from "~/components/flash-message";
 import { FormMessages, TextField } from "~/components/text-field";
@@ -30,7 +31,7 @@ function ChangePasswordPanel({ lastResult, liveTokens }: ChangePasswordProps) {
     constraint: getZodConstraint(changePasswordSchema),
     shouldValidate: "onBlur",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: changePasswordSchema });
+      return parseForm(formData, { schema: changePasswordSchema });
     },
   });
   const submitting =

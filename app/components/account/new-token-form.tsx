@@ -4,7 +4,8 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages, TextField } from "~/components/text-field";
@@ -31,7 +32,7 @@ export function NewTokenForm({
     constraint: getZodConstraint(createTokenSchema),
     shouldValidate: "onBlur",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: createTokenSchema });
+      return parseForm(formData, { schema: createTokenSchema });
     },
   });
   const { key: selectKey, ...selectProps } = getSelectProps(

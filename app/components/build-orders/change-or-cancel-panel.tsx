@@ -4,7 +4,7 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import type { z } from "zod";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
@@ -33,7 +33,7 @@ export function ChangeOrCancelPanel({
     defaultValue: { quantity: String(order.quantity) },
     shouldValidate: "onSubmit",
     onValidate({ formData }) {
-      return parseWithZod(formData, {
+      return parseForm(formData, {
         schema: quantityFormSchema,
         disableAutoCoercion: true,
       });

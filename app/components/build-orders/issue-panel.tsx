@@ -7,7 +7,7 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { useState } from "react";
 import { Form, useNavigation } from "react-router";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
@@ -36,7 +36,7 @@ export function IssuePanel({
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
     onValidate({ formData }) {
-      return parseWithZod(formData, {
+      return parseForm(formData, {
         schema: intentSchemas.issue,
         disableAutoCoercion: true,
       });

@@ -4,7 +4,7 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, Link, useNavigation } from "react-router";
 import type { z } from "zod";
 import { createFormSchema } from "~/build-orders/build-order-forms";
@@ -34,7 +34,7 @@ export function NewBuildOrderForm({
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, {
+      return parseForm(formData, {
         schema: createFormSchema,
         disableAutoCoercion: true,
       });

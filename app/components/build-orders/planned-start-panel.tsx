@@ -4,7 +4,7 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import type { z } from "zod";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
@@ -31,7 +31,7 @@ export function PlannedStartPanel({
     defaultValue: { plannedStart: order.plannedStart ?? "" },
     shouldValidate: "onSubmit",
     onValidate({ formData }) {
-      return parseWithZod(formData, {
+      return parseForm(formData, {
         schema: plannedStartFormSchema,
         disableAutoCoercion: true,
       });

@@ -1,5 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { useState } from "react";
 import { useFetcher } from "react-router";
 import type { DesignPageData } from "~/designs/design-page.server";
@@ -60,7 +61,7 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: revisionFormSchema }),
+      parseForm(formData, { schema: revisionFormSchema }),
     onSubmit: () => setChangedSinceSave(false),
   });
   const busy = fetcher.state !== "idle";

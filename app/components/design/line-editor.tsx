@@ -1,5 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { useEffect, useState } from "react";
 import { useFetcher } from "react-router";
 import type { DesignPageLine } from "~/designs/design-page.server";
@@ -88,7 +89,7 @@ export function DesignLineEditor({
     constraint: getZodConstraint(schema),
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate: ({ formData }) => parseWithZod(formData, { schema }),
+    onValidate: ({ formData }) => parseForm(formData, { schema }),
     onSubmit: () => setChangedSinceSave(false),
   });
   const busy = fetcher.state !== "idle";

@@ -1,3 +1,4 @@
+import { formatNumber } from "~/lib/format";
 /**
  * A coil drawn to scale: the two active sides (in the field, they make force)
  * and the two end turns (outside it, they only add length) in distinct colours
@@ -167,7 +168,7 @@ export function CoilDrawing({
 }
 
 function fmt(value: number): string {
-  return value.toLocaleString("en-GB", { maximumFractionDigits: 1 });
+  return formatNumber(value, 1);
 }
 
 /** A round length (1, 2 or 5 × 10ⁿ mm) not longer than `atMost`. */

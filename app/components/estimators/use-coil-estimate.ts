@@ -1,5 +1,6 @@
 import { useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { useEffect, useRef, useState } from "react";
 import { useFetcher } from "react-router";
 import type { CoilEstimate } from "~/engineering/coil-estimate";
@@ -30,7 +31,7 @@ export function useCoilEstimate(action: string) {
     constraint: getZodConstraint(coilEstimatorFormSchema),
     shouldValidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: coilEstimatorFormSchema });
+      return parseForm(formData, { schema: coilEstimatorFormSchema });
     },
     onSubmit(event) {
       event.preventDefault();
@@ -43,7 +44,7 @@ export function useCoilEstimate(action: string) {
     endTurnLengthMm: Number(coilEstimatorDefaults.endTurnLengthMm),
   });
   function calculate(formElement: HTMLFormElement) {
-    const submission = parseWithZod(new FormData(formElement), {
+    const submission = parseForm(new FormData(formElement), {
       schema: coilEstimatorFormSchema,
     });
     if (submission.status !== "success") return;

@@ -1,5 +1,6 @@
 import { useForm } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { useRef, useState } from "react";
 import { useFetcher } from "react-router";
 import {
@@ -39,7 +40,7 @@ export function useMagnetEstimate(
     constraint: getZodConstraint(magnetEstimateRequestSchema),
     shouldValidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: magnetEstimateRequestSchema });
+      return parseForm(formData, { schema: magnetEstimateRequestSchema });
     },
     onSubmit(event) {
       event.preventDefault();
@@ -50,7 +51,7 @@ export function useMagnetEstimate(
   function estimate() {
     clearTimeout(timer.current);
     if (!formRef.current) return;
-    const submission = parseWithZod(new FormData(formRef.current), {
+    const submission = parseForm(new FormData(formRef.current), {
       schema: magnetEstimateRequestSchema,
     });
     if (submission.status !== "success") {

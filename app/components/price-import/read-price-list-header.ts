@@ -5,6 +5,7 @@
  * .xlsx workbook, told by its first bytes, is read by the server
  * (POST /api/v1/price-lists?layout=1), which also names its sheets.
  */
+import { formatNumber } from "~/lib/format";
 import Papa from "papaparse";
 import {
   checkPriceListSize,
@@ -39,9 +40,7 @@ export type PriceListHeaderReading =
 
 export function fileSizeProblem(size: number): string | null {
   if (!checkPriceListSize(size)) return null;
-  const megabytes = (size / 1024 / 1024).toLocaleString("en-GB", {
-    maximumFractionDigits: 1,
-  });
+  const megabytes = formatNumber(size / 1024 / 1024, 1);
   return `The file is ${megabytes} MB; a price list can be at most ${maxPriceListBytes / 1024 / 1024} MB. Split it into smaller files, or leave out columns that are not needed.`;
 }
 

@@ -2,6 +2,7 @@
  * The progress of a price-list upload, shared between the page's clientAction
  * (which sends the file) and the bar that shows it.
  */
+import { formatNumber } from "~/lib/format";
 import { useSyncExternalStore } from "react";
 import type { UploadProgress } from "./price-list-upload";
 
@@ -28,7 +29,7 @@ export function useUploadProgress(): UploadProgress {
 }
 
 function megabytes(bytes: number): string {
-  return `${(bytes / 1024 / 1024).toLocaleString("en-GB", { maximumFractionDigits: 1 })}\u00a0MB`;
+  return `${formatNumber(bytes / 1024 / 1024, 1)}\u00a0MB`;
 }
 
 /** A bar with the percent sent, then a "checking" line while the server reads the rows. */

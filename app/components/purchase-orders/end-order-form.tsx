@@ -5,7 +5,7 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import {
   cancelFormSchema,
@@ -42,7 +42,7 @@ export function EndOrderForm({
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
     onValidate({ formData }) {
-      return parseWithZod(formData, {
+      return parseForm(formData, {
         schema: look.schema,
         disableAutoCoercion: true,
       });

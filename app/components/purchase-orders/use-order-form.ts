@@ -1,6 +1,6 @@
 /** The Conform form of a new order or a draft's edit, checked in the browser with the schema the server uses. */
 import { useForm, type SubmissionResult } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { useNavigation } from "react-router";
 import type { z } from "zod";
 import type { OrderFormShape } from "./order-lines-editor";
@@ -19,7 +19,7 @@ export function useOrderForm<Schema extends z.ZodType>(
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema, disableAutoCoercion: true });
+      return parseForm(formData, { schema, disableAutoCoercion: true });
     },
   });
   return { form, fields, busy: navigation.state !== "idle" };

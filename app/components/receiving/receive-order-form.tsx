@@ -8,7 +8,7 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { useRef, useState } from "react";
 import { ScanPanel } from "~/components/labels/scan-panel";
 import { Form, useNavigation } from "react-router";
@@ -48,7 +48,7 @@ export function ReceiveOrderForm({
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
     onValidate({ formData }) {
-      return parseWithZod(formData, {
+      return parseForm(formData, {
         schema: receiptFormSchema,
         disableAutoCoercion: true,
       });

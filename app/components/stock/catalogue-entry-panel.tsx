@@ -4,7 +4,8 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import { FormMessages, TextField } from "~/components/text-field";
 import { renameFormSchema } from "~/stock/item-change-form";
@@ -26,7 +27,7 @@ export function CatalogueEntryPanel({
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: renameFormSchema }),
+      parseForm(formData, { schema: renameFormSchema }),
   });
   return (
     <section aria-labelledby="catalogue-heading" className="panel space-y-4">

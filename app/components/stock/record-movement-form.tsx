@@ -9,7 +9,7 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import { FormMessages } from "~/components/text-field";
 import type { MovementType } from "~/db/tables/stock-enums";
@@ -72,7 +72,7 @@ export function RecordMovementForm({
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
     onValidate({ formData }) {
-      return parseWithZod(formData, {
+      return parseForm(formData, {
         schema: movementFormSchema,
         disableAutoCoercion: true,
       });

@@ -7,7 +7,8 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import { QuantityField } from "~/components/quantity-field";
 import { FormMessages } from "~/components/text-field";
@@ -61,7 +62,7 @@ function ReorderPointForm({
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: reorderFormSchema }),
+      parseForm(formData, { schema: reorderFormSchema }),
   });
   return (
     <section aria-labelledby="reorder-heading" className="panel">

@@ -1,6 +1,7 @@
 /** The new-item form's state (Conform), checked in the browser as on the server. */
 import { useForm, type SubmissionResult } from "@conform-to/react";
-import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { getZodConstraint } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { newItemFormSchema } from "~/stock/new-item-form";
 
 export function useNewItemForm(
@@ -23,7 +24,7 @@ export function useNewItemForm(
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
-      parseWithZod(formData, { schema: newItemFormSchema }),
+      parseForm(formData, { schema: newItemFormSchema }),
   });
 }
 

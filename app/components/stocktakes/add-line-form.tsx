@@ -1,6 +1,6 @@
 /** "Found on the shelf": a lot the sheet does not list, at one of the stocktake's locations. */
 import { getFormProps, useForm } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { useFetcher } from "react-router";
 import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
@@ -21,7 +21,7 @@ export function AddLineForm({ locations }: { locations: string[] }) {
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: addLineFormSchema });
+      return parseForm(formData, { schema: addLineFormSchema });
     },
   });
   return (

@@ -8,7 +8,7 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { useEffect, useRef } from "react";
 import { useFetcher } from "react-router";
 import { QuantityField } from "~/components/quantity-field";
@@ -70,7 +70,7 @@ export function CountLineForm({
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: countFormSchema });
+      return parseForm(formData, { schema: countFormSchema });
     },
   });
   const moved = useRef<unknown>(null);

@@ -4,7 +4,7 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import {
   startFormSchema,
@@ -34,7 +34,7 @@ export function StartStocktakeForm({
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      return parseWithZod(formData, { schema: startFormSchema });
+      return parseForm(formData, { schema: startFormSchema });
     },
   });
   const chosen = new Set(

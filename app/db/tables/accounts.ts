@@ -27,6 +27,10 @@ export const users = mysqlTable(
     name: varchar("name", { length: 120 }).notNull(),
     passwordHash: varchar("password_hash", { length: 255 }),
     active: boolean("active").notNull().default(true),
+    /** The locale numbers and days are shown in (app/lib/display-settings.ts); null until chosen. */
+    locale: varchar("locale", { length: 8 }),
+    /** The IANA time zone times are shown in; null until chosen (shown as UTC). */
+    timeZone: varchar("time_zone", { length: 64 }),
     createdAt: createdAt(),
   },
   (table) => [
