@@ -55,6 +55,12 @@ export default tseslint.config(
             "Read forms with parseForm (app/lib/parse-form.ts): it reads number fields in the person's locale.",
         },
         {
+          selector:
+            "NewExpression[callee.object.name='Intl'][callee.property.name=/^(DateTimeFormat|NumberFormat)$/]",
+          message:
+            "Format numbers and times for people through app/lib/format.ts: it follows the person's locale and time zone.",
+        },
+        {
           selector: "CallExpression[callee.property.name='toLocaleString']",
           message:
             "Format numbers and times for people through app/lib/format.ts: it follows the person's locale and time zone.",
@@ -63,8 +69,12 @@ export default tseslint.config(
     },
   },
   {
-    // The one place that wraps Conform's parseWithZod (app/lib/parse-form.ts).
-    files: ["app/lib/parse-form.ts"],
+    // The one place that wraps Conform's parseWithZod, and the one formatter.
+    files: [
+      "app/lib/parse-form.ts",
+      "app/lib/format.ts",
+      "app/lib/display-settings.ts",
+    ],
     rules: { "no-restricted-syntax": "off" },
   },
   {

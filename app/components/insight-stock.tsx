@@ -10,18 +10,12 @@ import { DataTable } from "~/components/data-table";
 import type { DesignInsight } from "~/insight/design-insight.server";
 import { costHistoryChange, costingMoneyText } from "~/insight/design-insight";
 import type { StockValueInsight } from "~/insight/stock-value.server";
-import { formatDay } from "~/lib/format";
+import { formatDay, formatQuantity } from "~/lib/format";
 import { kindParts, palette, Swatch, type FillPart } from "./insight-patterns";
 import { InsightTrendChart } from "./insight/insight-trend-chart";
 import { TrendSample } from "./insight/trend-marker";
 import { InsightValueBars } from "./insight-value-bars";
 import { countText } from "~/lib/unit-text";
-
-const monthHeader = new Intl.DateTimeFormat("en-GB", {
-  month: "short",
-  year: "2-digit",
-  timeZone: "UTC",
-});
 
 function Figure({
   label,
@@ -398,7 +392,7 @@ function changeColumns(currency: string) {
             {change.percent === null ? null : (
               <span className="block text-xs font-normal text-graphite-500">
                 {sign}
-                {Math.abs(change.percent).toFixed(1)} %
+                {formatQuantity(Math.abs(change.percent), "", 1)} %
               </span>
             )}
           </span>
@@ -493,7 +487,7 @@ export function CostHistory({
               id: date,
               header: () => (
                 <span className="whitespace-nowrap" title={formatDay(date)}>
-                  {monthHeader.format(new Date(`${date}T00:00:00Z`))}
+                  {formatDay(date, "monthShortYear")}
                 </span>
               ),
               cell: ({ row }) => {

@@ -1,3 +1,4 @@
+import { formatNumber, formatQuantity } from "~/lib/format";
 /**
  * Warnings shown on a design:
  * - a wire whose thermal class is below the design's insulation class: the wire's class
@@ -164,9 +165,9 @@ export function coilCurrentDensityAPerMm2(
   );
 }
 
-const densityText = (value: number) => `${value.toFixed(1)} A/mm²`;
+const densityText = (value: number) => `${formatQuantity(value, "", 1)} A/mm²`;
 /** A coil current to three significant decimals at most: 6, 2.5, 3.333. */
-const formatCurrent = (value: number) => String(Number(value.toFixed(3)));
+const formatCurrent = (value: number) => formatNumber(value, 3);
 
 /** Warning when the coil's current density is above natural (or fan) cooling practice, else null. */
 export function currentDensityWarning(

@@ -1,3 +1,4 @@
+import { formatNumber } from "~/lib/format";
 /**
  * Substitutes from stock for a design revision's coil line, from the database: the wire
  * items in stock, their moving average cost, whether the line's own wire is short for the
@@ -292,7 +293,7 @@ export async function applyWireSubstitute(
 }
 
 const formatPercent = (fraction: number) =>
-  `${Number((fraction * 100).toFixed(2))} %`;
+  `${formatNumber(fraction * 100, 2)} %`;
 
 /** A wire short for the open build orders: still to hold beyond what is available. */
 export interface WireShortage {

@@ -98,20 +98,37 @@ export function formatDateTime(
   );
 }
 
+/** How much of a day to write: all of it, or the parts a chart axis or column header needs. */
+const dayStyles = {
+  /** "2 Dec 2026", "Dec 2, 2026", "02.12.2026". */
+  medium: { dateStyle: "medium" },
+  /** "2 Dec", "Dec 2", "2. Dez.". */
+  dayMonth: { day: "numeric", month: "short" },
+  /** "Dec 2026", "Dez. 2026". */
+  monthYear: { month: "short", year: "numeric" },
+  /** "Dec 26", "Dez. 26". */
+  monthShortYear: { month: "short", year: "2-digit" },
+} as const satisfies Record<string, Intl.DateTimeFormatOptions>;
+
+export type DayStyle = keyof typeof dayStyles;
+
 /**
  * A calendar day ("2026-12-02") or the day of a moment, as the reader writes days:
  * "2 Dec 2026", "Dec 2, 2026", "02.12.2026". A calendar day is the same day
  * everywhere; a moment falls on its day in the reader's time zone.
  */
-export function formatDay(value: string | Date): string {
+export function formatDay(
+  value: string | Date,
+  style: DayStyle = "medium",
+): string {
   const settings = currentDisplaySettings();
   if (typeof value === "string" && calendarDayPattern.test(value)) {
-    return dateFormat(
-      { dateStyle: "medium" },
-      { locale: settings.locale, timeZone: "UTC" },
-    ).format(new Date(`${value}T00:00:00Z`));
+    return dateFormat(dayStyles[style], {
+      locale: settings.locale,
+      timeZone: "UTC",
+    }).format(new Date(`${value}T00:00:00Z`));
   }
-  return dateFormat({ dateStyle: "medium" }, settings).format(toDate(value));
+  return dateFormat(dayStyles[style], settings).format(toDate(value));
 }
 
 /** The time of day of a moment in the reader's time zone: "14:05", "2:05 PM". */

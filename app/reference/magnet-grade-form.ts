@@ -1,3 +1,4 @@
+import { formatQuantity } from "~/lib/format";
 /**
  * The form admins use to add a magnet grade from a maker's data sheet, shared
  * by the browser (Conform) and the action on /reference. Bounds are
@@ -146,7 +147,7 @@ export const magnetGradeFormSchema = z
       context.addIssue({
         code: "custom",
         path: ["bhMaxMaxKJm3"],
-        message: `With Br at most ${value.brMaxT} T, (BH)max cannot exceed Br²/(4μ0) = ${limit.toFixed(0)} kJ/m³.`,
+        message: `With Br at most ${value.brMaxT} T, (BH)max cannot exceed Br²/(4μ0) = ${formatQuantity(limit, "", 0)} kJ/m³.`,
       });
     }
     if (

@@ -1,4 +1,4 @@
-import { formatNumber } from "~/lib/format";
+import { formatNumber, formatQuantity } from "~/lib/format";
 /**
  * A coil drawn to scale: the two active sides (in the field, they make force)
  * and the two end turns (outside it, they only add length) in distinct colours
@@ -43,7 +43,7 @@ export function CoilDrawing({
       <svg
         viewBox={`0 0 ${viewWidth} ${viewHeight}`}
         role="img"
-        aria-label={`Coil to scale: active sides ${fmt(activeLengthMm)} mm, end turns ${fmt(endTurnLengthMm)} mm each; ${(share * 100).toFixed(1)} % of each turn is in the field.`}
+        aria-label={`Coil to scale: active sides ${fmt(activeLengthMm)} mm, end turns ${fmt(endTurnLengthMm)} mm each; ${formatQuantity(share * 100, "", 1)} % of each turn is in the field.`}
         className="h-72 w-full"
       >
         {/* Active sides: solid, field blue. */}
@@ -95,7 +95,7 @@ export function CoilDrawing({
             y={(top + bottom) / 2 + fontSize * 1.1}
             className="fill-field"
           >
-            in the field: {(share * 100).toFixed(1)} %
+            in the field: {formatQuantity(share * 100, "", 1)} %
           </text>
           <text x={right + pad * 0.6} y={pad + fontSize * 0.4}>
             end turn {fmt(endTurnLengthMm)} mm
@@ -105,7 +105,7 @@ export function CoilDrawing({
             y={pad + fontSize * 1.7}
             className="fill-copper-700"
           >
-            outside it: {((1 - share) * 100).toFixed(1)} %
+            outside it: {formatQuantity((1 - share) * 100, "", 1)} %
           </text>
         </g>
         {/* Scale bar. */}

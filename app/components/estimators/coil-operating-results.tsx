@@ -48,12 +48,13 @@ function WireDetail({ wire }: { wire: CoilEstimate["wire"] }) {
     return (
       <p className="text-sm">
         Litz: {litz.strands} strands of{" "}
-        {formatQuantity(litz.strandBareDiameterMm, "mm", 3)} (
+        {formatQuantity(litz.strandBareDiameterMm, "", 3)} mm (
         {formatQuantity(litz.copperAreaMm2, "mm²", 4)} of copper, as one{" "}
-        {formatQuantity(litz.equalAreaDiameterMm, "mm", 3)} wire); bundle about{" "}
-        {formatQuantity(litz.bundleDiameterMm, "mm", 2)} across (estimate,
+        {formatQuantity(litz.equalAreaDiameterMm, "", 3)} mm wire); bundle about{" "}
+        {formatQuantity(litz.bundleDiameterMm, "", 2)} mm across (estimate,
         packing {litz.packingFactor}); strands{" "}
-        {((litz.takeUpFactor - 1) * 100).toFixed(0)} % longer than the bundle.
+        {formatQuantity((litz.takeUpFactor - 1) * 100, "", 0)} % longer than the
+        bundle.
         {litz.strandInsulationAssumed
           ? ` Strand film taken as ${litz.strandInsulation === "grade1" ? "grade 1" : "single build"}.`
           : ""}
@@ -65,12 +66,12 @@ function WireDetail({ wire }: { wire: CoilEstimate["wire"] }) {
     return (
       <p className="text-sm">
         Flat wire {formatQuantity(flat.thicknessMm, "", 2)} ×{" "}
-        {formatQuantity(flat.widthMm, "mm", 2)}, corner radius{" "}
-        {formatQuantity(flat.cornerRadiusMm, "mm", 2)}
+        {formatQuantity(flat.widthMm, "", 2)} mm, corner radius{" "}
+        {formatQuantity(flat.cornerRadiusMm, "", 2)} mm
         {flat.cornerRadiusFromStandard ? " (IEC 60317-0-2)" : ""}:{" "}
         {formatQuantity(flat.areaMm2, "mm²", 4)} of copper
         {flat.overallThicknessMm !== null && flat.overallWidthMm !== null
-          ? `; at most ${formatQuantity(flat.overallThicknessMm, "", 2)} × ${formatQuantity(flat.overallWidthMm, "mm", 2)} over the enamel`
+          ? `; at most ${formatQuantity(flat.overallThicknessMm, "", 2)} × ${formatQuantity(flat.overallWidthMm, "", 2)} mm over the enamel`
           : ""}
         ; wound {flat.edgewise ? "on edge" : "flat"}.
       </p>

@@ -1,3 +1,4 @@
+import { formatQuantity } from "~/lib/format";
 import { getSelectProps, type FieldMetadata } from "@conform-to/react";
 import { coilEstimatorDefaults } from "~/lib/coil-estimator-form";
 import { NumberField } from "./number-field";
@@ -93,7 +94,7 @@ export function CoilWireFields({
           <select key={awgKey} {...awgProps} className="field-input">
             {awgSizes.map((size) => (
               <option key={size.label} value={size.label}>
-                {size.label} ({size.bareDiameterMm.toFixed(4)} mm)
+                {size.label} ({formatQuantity(size.bareDiameterMm, "", 4)} mm)
               </option>
             ))}
           </select>

@@ -1,3 +1,4 @@
+import { formatQuantity } from "~/lib/format";
 import { useState } from "react";
 import {
   endTurnLengthFromSlotPitchMm,
@@ -152,7 +153,8 @@ export function EndTurnHelper({
           <p className="text-sm" aria-live="polite">
             {result !== null ? (
               <>
-                End turn, each end: <strong>{result.toFixed(1)}&nbsp;mm</strong>
+                End turn, each end:{" "}
+                <strong>{formatQuantity(result, "", 1)}&nbsp;mm</strong>
               </>
             ) : (
               <span className="text-danger">{problem}</span>

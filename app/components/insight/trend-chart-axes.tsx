@@ -3,19 +3,8 @@ import { AxisBottom, AxisLeft } from "@visx/axis";
 import { GridRows } from "@visx/grid";
 import type { scaleLinear, scaleUtc } from "@visx/scale";
 import { axisUnits } from "~/insight/axis-units";
-import { formatQuantity } from "~/lib/format";
+import { formatDay, formatQuantity } from "~/lib/format";
 import { palette } from "../insight-patterns";
-
-const dayMonth = new Intl.DateTimeFormat("en-GB", {
-  day: "numeric",
-  month: "short",
-  timeZone: "UTC",
-});
-const monthYear = new Intl.DateTimeFormat("en-GB", {
-  month: "short",
-  year: "numeric",
-  timeZone: "UTC",
-});
 
 export function TrendChartAxes({
   xScale,
@@ -75,7 +64,11 @@ export function TrendChartAxes({
         stroke={palette.graphite500}
         tickStroke={palette.graphite500}
         tickFormat={(value) =>
-          (monthly ? monthYear : dayMonth).format(value as Date)
+          formatDay(
+            // The axis's days are UTC calendar days: the same day for every reader.
+            (value as Date).toISOString().slice(0, 10),
+            monthly ? "monthYear" : "dayMonth",
+          )
         }
         tickLabelProps={{
           fontSize: 11,
