@@ -14,7 +14,11 @@ import {
 } from "~/components/suppliers/supplier-fields";
 import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
-import { formatDateTime, formatQuantity } from "~/lib/format";
+import {
+  formatDateTime,
+  formatQuantity,
+  formatNumberForField,
+} from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
 import { idFromText } from "~/lib/search-params";
 import {
@@ -154,8 +158,10 @@ export default function Supplier({
       notes: supplier.notes ?? "",
       orderEmail: supplier.orderEmail ?? "",
       metalBaseFixedAt: supplier.metalBaseFixedAt,
-      wireTolerancePercent: String(supplier.wireTolerancePercent),
-      pieceTolerancePercent: String(supplier.pieceTolerancePercent),
+      wireTolerancePercent: formatNumberForField(supplier.wireTolerancePercent),
+      pieceTolerancePercent: formatNumberForField(
+        supplier.pieceTolerancePercent,
+      ),
     },
     constraint: getZodConstraint(supplierSchema),
     shouldValidate: "onBlur",

@@ -13,7 +13,7 @@ import {
   DEFAULT_POLE_COVERAGE,
   DEFAULT_POLE_COVERAGE_SOURCE,
 } from "~/designs/torque-estimate";
-import { formatQuantity } from "~/lib/format";
+import { formatQuantity, formatNumberForField } from "~/lib/format";
 import type { DesignActionAnswer } from "./action-answer";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
@@ -27,7 +27,7 @@ export function insulationClassLabel(classC: number): string {
   return thermalClassName(classC).replace(/^(\d+)/, "$1\u00a0°C");
 }
 
-const text = (value: number | null) => (value === null ? "" : String(value));
+const text = (value: number | null) => formatNumberForField(value);
 
 /** The revision's motor figures, editable while it is a draft; each save goes through a fetcher. */
 export function DesignFieldsForm({ revision }: { revision: Revision }) {
@@ -40,7 +40,7 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
     defaultValue: {
       poles: String(revision.poles),
       slots: String(revision.slots),
-      ratedCurrentA: String(revision.ratedCurrentA),
+      ratedCurrentA: formatNumberForField(revision.ratedCurrentA),
       ratedTorqueNm: text(revision.ratedTorqueNm),
       torqueBasis: revision.torqueBasis,
       insulationClassC: String(revision.insulationClassC),

@@ -1,3 +1,4 @@
+import { formatNumberForField } from "~/lib/format";
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
@@ -44,7 +45,11 @@ function startingValues(kind: LineKind, line: DesignPageLine | null) {
   const values: Record<string, string> = { kind };
   if (line) {
     for (const [name, value] of Object.entries(line.input))
-      if (value !== null && value !== undefined) values[name] = String(value);
+      if (value !== null && value !== undefined)
+        values[name] =
+          typeof value === "number"
+            ? formatNumberForField(value)
+            : String(value);
     return values;
   }
   if (kind === "coil") {

@@ -6,11 +6,13 @@ import {
   type WindingLayout,
 } from "~/engineering/end-turn-length";
 import { isEngineeringInputError } from "~/engineering/errors";
+import { typedNumber } from "~/lib/number-text";
 
 type Model = "tooth" | "slot-pitch";
 
+/** A field's number in the reader's locale ("12,5" in de-DE); NaN while empty or not a number. */
 function parse(value: string): number {
-  return value.trim() === "" ? Number.NaN : Number(value);
+  return typedNumber(value) ?? Number.NaN;
 }
 
 /**

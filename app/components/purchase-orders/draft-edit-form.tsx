@@ -1,3 +1,4 @@
+import { formatNumberForField } from "~/lib/format";
 /** The draft's edit: currency, notes and every line (change, add, remove); saved in one go, only what changed is recorded. */
 import { getFormProps, type SubmissionResult } from "@conform-to/react";
 import { Form } from "react-router";
@@ -26,11 +27,15 @@ export function DraftEditForm({
       lines: order.lines.map((line) => ({
         id: String(line.id),
         sku: line.sku,
-        quantity: plainDecimalText(formatQuantityText(line.quantity)),
+        quantity: formatNumberForField(
+          plainDecimalText(formatQuantityText(line.quantity)),
+        ),
         requestedDate: line.requestedDate ?? "",
         unitPrice:
           line.priceSource === "override"
-            ? plainDecimalText(formatUnitCostText(line.unitPrice))
+            ? formatNumberForField(
+                plainDecimalText(formatUnitCostText(line.unitPrice)),
+              )
             : "",
         overrideReason: line.overrideReason ?? "",
       })),

@@ -1,3 +1,4 @@
+import { formatNumberForField } from "~/lib/format";
 /**
  * The item's reorder point and quantity: a form for those who may set them, else the
  * figures in a sentence.
@@ -55,8 +56,8 @@ function ReorderPointForm({
     id: "reorder",
     lastResult,
     defaultValue: {
-      reorderPoint: String(item.reorderPoint),
-      reorderQuantity: String(item.reorderQuantity),
+      reorderPoint: formatNumberForField(item.reorderPoint),
+      reorderQuantity: formatNumberForField(item.reorderQuantity),
     },
     constraint: getZodConstraint(reorderFormSchema),
     shouldValidate: "onBlur",

@@ -1,3 +1,4 @@
+import { formatNumberForField } from "~/lib/format";
 /**
  * One line of the blind count sheet: item, lot, unit and a field for what was found (for
  * wire also the spool's gross weight and tare). Enter saves the line without leaving the
@@ -64,7 +65,10 @@ export function CountLineForm({
   >({
     id: `count-${line.id}`,
     defaultValue: {
-      tareKg: line.lotTareKg === null ? undefined : String(line.lotTareKg),
+      tareKg:
+        line.lotTareKg === null
+          ? undefined
+          : formatNumberForField(line.lotTareKg),
     },
     lastResult: fetcher.state === "idle" ? answer?.result : null,
     shouldValidate: "onSubmit",
