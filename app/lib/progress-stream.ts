@@ -104,3 +104,35 @@ export class ProgressPacer {
     return send;
   }
 }
+
+/** An event with when it arrived (performance.now(), ms). */
+export type TimedProgressEvent = ProgressEvent & { at: number };
+
+/**
+ * Reads a whole streamed answer with fetch's body reader (scripts, the bench,
+ * tests): every event in order with its arrival time. The page reads the same
+ * lines from XMLHttpRequest instead, which also reports the upload.
+ */
+export async function readProgressStream(
+  response: Response,
+  onEvent: (event: TimedProgressEvent) => void = () => undefined,
+): Promise<TimedProgressEvent[]> {
+  const events: TimedProgressEvent[] = [];
+  const lines = new ProgressLineReader();
+  const decoder = new TextDecoder();
+  const reader = response.body?.getReader();
+  if (!reader) return events;
+  for (;;) {
+    const { done, value } = await reader.read();
+    const text = done
+      ? decoder.decode()
+      : decoder.decode(value, { stream: true });
+    const at = performance.now();
+    for (const event of lines.push(done ? `${text}\n` : text)) {
+      const timed = { ...event, at };
+      events.push(timed);
+      onEvent(timed);
+    }
+    if (done) return events;
+  }
+}
