@@ -33,7 +33,7 @@ export function useUploadProgress(): UploadProgress {
 }
 
 /** How often a screen reader hears the progress, at most. */
-const announceEveryMs = 5_000;
+const announceEveryMs = 3_000;
 
 function megabytes(bytes: number): string {
   return formatQuantity(bytes / 1024 / 1024, "MB", 1);
