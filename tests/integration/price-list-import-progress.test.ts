@@ -10,7 +10,8 @@ import {
   readProgressStream,
   type TimedProgressEvent,
 } from "~/lib/progress-stream";
-import { baseUrl, sendJson, signInAs } from "../support/app-client";
+import { baseUrl, signInAs } from "../support/app-client";
+import { createSupplier } from "../support/price-list-fixtures";
 import {
   closeTestDatabase,
   testDatabase,
@@ -21,13 +22,7 @@ let buyer = "";
 
 async function newSupplier(label: string): Promise<string> {
   const name = `Progress mill ${label} ${uniqueCode("S")}`;
-  const created = await sendJson(
-    "POST",
-    "/api/v1/suppliers",
-    { name, currency: "EUR" },
-    buyer,
-  );
-  expect(created.status, await created.clone().text()).toBe(201);
+  await createSupplier(buyer, name);
   return name;
 }
 
