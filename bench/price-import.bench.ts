@@ -1,11 +1,18 @@
 /**
  * Importing a generated 100,000-row price list (about 8 MB): the dry run and the
  * commit through the API, the server's peak memory growth, and a raw mysql2
- * batched upsert of the same rows for the ratio import ÷ raw.
+ * batched upsert of the same rows for the ratio import ÷ raw. Beside it
+ * (BENCH_ONLY=price-import-progress), the same file with its progress streamed:
+ * the longest wait between two events, and the time beside the plain request's.
  */
 import fs from "node:fs";
 import mysql from "mysql2/promise";
 import { poolOptionsFromUrl } from "~/db/connection-options";
+import {
+  progressStreamType,
+  readProgressStream,
+  type TimedProgressEvent,
+} from "~/lib/progress-stream";
 import type { Figure } from "./coil-estimates.bench";
 
 const rowCount = 100_000;
@@ -32,15 +39,10 @@ function memoryOf(pid: number): { rss: number; peak: number } {
   return { rss: read("VmRSS"), peak: read("VmHWM") };
 }
 
-async function upload(
-  baseUrl: string,
-  cookie: string,
-  csv: string,
-  dryRun: boolean,
-): Promise<{ ms: number; status: number }> {
+function priceListForm(csv: string, supplier: string): FormData {
   const form = new FormData();
   form.set("file", new Blob([csv]), "bench-100k.csv");
-  form.set("supplier", "Bench supplier");
+  form.set("supplier", supplier);
   form.set(
     "mapping",
     JSON.stringify({
@@ -54,6 +56,30 @@ async function upload(
       validFrom: "Valid from",
     }),
   );
+  return form;
+}
+
+async function createSupplier(
+  baseUrl: string,
+  cookie: string,
+  name: string,
+): Promise<void> {
+  const created = await fetch(`${baseUrl}/api/v1/suppliers`, {
+    method: "POST",
+    headers: { "Content-Type": "application/json", Cookie: cookie },
+    body: JSON.stringify({ name, currency: "EUR" }),
+  });
+  if (created.status !== 201) throw new Error(`supplier: ${created.status}`);
+}
+
+async function upload(
+  baseUrl: string,
+  cookie: string,
+  csv: string,
+  dryRun: boolean,
+  supplier = "Bench supplier",
+): Promise<{ ms: number; status: number }> {
+  const form = priceListForm(csv, supplier);
   const started = performance.now();
   const response = await fetch(
     `${baseUrl}/api/v1/price-lists${dryRun ? "?dryRun=1" : ""}`,
@@ -74,12 +100,7 @@ export async function benchPriceImport(input: {
   serverPid: number;
 }): Promise<Figure[]> {
   const csv = generatedPriceList();
-  const created = await fetch(`${input.baseUrl}/api/v1/suppliers`, {
-    method: "POST",
-    headers: { "Content-Type": "application/json", Cookie: input.buyerCookie },
-    body: JSON.stringify({ name: "Bench supplier", currency: "EUR" }),
-  });
-  if (created.status !== 201) throw new Error(`supplier: ${created.status}`);
+  await createSupplier(input.baseUrl, input.buyerCookie, "Bench supplier");
 
   const before = memoryOf(input.serverPid);
   const dryRun = await upload(input.baseUrl, input.buyerCookie, csv, true);
@@ -128,21 +149,6 @@ export async function benchPriceImport(input: {
   } finally {
     await connection.end();
   }
-  const single = (
-    name: string,
-    unit: string,
-    target: string,
-    passed: boolean,
-    value: number,
-  ): Figure => ({
-    name,
-    unit,
-    target,
-    passed,
-    median: value,
-    p95: value,
-    samples: [value],
-  });
   const growth = after.peak - before.rss;
   return [
     single(
@@ -181,4 +187,161 @@ export async function benchPriceImport(input: {
       growth,
     ),
   ];
+}
+
+function single(
+  name: string,
+  unit: string,
+  target: string,
+  passed: boolean,
+  value: number,
+): Figure {
+  return {
+    name,
+    unit,
+    target,
+    passed,
+    median: value,
+    p95: value,
+    samples: [value],
+  };
+}
+
+/** The file sent with `Accept: application/x-ndjson`: every event with when it came. */
+async function streamedUpload(
+  baseUrl: string,
+  cookie: string,
+  csv: string,
+  dryRun: boolean,
+  supplier: string,
+): Promise<{ ms: number; events: TimedProgressEvent[]; started: number }> {
+  const form = priceListForm(csv, supplier);
+  const started = performance.now();
+  const response = await fetch(
+    `${baseUrl}/api/v1/price-lists${dryRun ? "?dryRun=1" : ""}`,
+    {
+      method: "POST",
+      headers: { Cookie: cookie, Accept: progressStreamType },
+      body: form,
+    },
+  );
+  const events = await readProgressStream(response);
+  const ms = performance.now() - started;
+  const result = events.at(-1);
+  if (result?.type !== "result" || result.status >= 300)
+    throw new Error(
+      `streamed import ended with ${JSON.stringify(result).slice(0, 300)}`,
+    );
+  return { ms, events, started };
+}
+
+/** The longest wait between two events, the result included (timed from the answer's first line), and what came before it. */
+function longestGap(events: readonly TimedProgressEvent[]): {
+  ms: number;
+  after: string;
+} {
+  let longest = { ms: 0, after: "" };
+  for (let index = 1; index < events.length; index += 1) {
+    const ms = events[index]!.at - events[index - 1]!.at;
+    const before = events[index - 1]!;
+    if (ms > longest.ms)
+      longest = {
+        ms,
+        after:
+          before.type === "progress"
+            ? `${before.processed} of ${before.total} rows`
+            : "the result",
+      };
+  }
+  return longest;
+}
+
+/**
+ * The 100,000-row file with its progress streamed, as the import page reads it: the
+ * check and the commit, each beside the same request without the stream (to their
+ * own suppliers, so neither commit finds the other's file).
+ */
+export async function benchPriceImportProgress(input: {
+  baseUrl: string;
+  buyerCookie: string;
+}): Promise<Figure[]> {
+  const csv = generatedPriceList();
+  const streamedSupplier = "Bench progress supplier";
+  const plainSupplier = "Bench progress plain supplier";
+  await createSupplier(input.baseUrl, input.buyerCookie, streamedSupplier);
+  await createSupplier(input.baseUrl, input.buyerCookie, plainSupplier);
+
+  const plainCheck = await upload(
+    input.baseUrl,
+    input.buyerCookie,
+    csv,
+    true,
+    plainSupplier,
+  );
+  const check = await streamedUpload(
+    input.baseUrl,
+    input.buyerCookie,
+    csv,
+    true,
+    streamedSupplier,
+  );
+  const plainCommit = await upload(
+    input.baseUrl,
+    input.buyerCookie,
+    csv,
+    false,
+    plainSupplier,
+  );
+  const commit = await streamedUpload(
+    input.baseUrl,
+    input.buyerCookie,
+    csv,
+    false,
+    streamedSupplier,
+  );
+
+  const figures: Figure[] = [];
+  for (const [step, streamed, plain] of [
+    ["check", check, plainCheck],
+    ["commit", commit, plainCommit],
+  ] as const) {
+    const progress = streamed.events.filter(
+      (event) => event.type === "progress",
+    );
+    const { ms: gap, after } = longestGap(streamed.events);
+    console.log(
+      `[bench] streamed ${step}: ${progress.length} progress events, first after ${(streamed.events[0]!.at - streamed.started).toFixed(0)} ms, longest gap ${gap.toFixed(0)} ms (after ${after}), ${streamed.ms.toFixed(0)} ms in all (plain ${plain.ms.toFixed(0)} ms)`,
+    );
+    figures.push(
+      single(
+        `price list 100,000 rows streamed: ${step}, longest gap`,
+        "ms",
+        "≤ 1000 ms",
+        gap <= 1_000,
+        gap,
+      ),
+      single(
+        `price list 100,000 rows streamed: ${step}, total`,
+        "ms",
+        "reported",
+        true,
+        streamed.ms,
+      ),
+      single(
+        `price list 100,000 rows streamed: ${step}, progress events`,
+        "events",
+        "reported",
+        true,
+        progress.length,
+      ),
+      single(
+        `ratio: streamed ÷ plain ${step}`,
+        "times",
+        "≤ 1.25",
+        streamed.ms / plain.ms <= 1.25,
+        streamed.ms / plain.ms,
+      ),
+    );
+  }
+  return figures;
 }

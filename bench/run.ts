@@ -13,14 +13,18 @@ import {
 } from "./coil-estimates.bench";
 import { benchDesignCosting } from "./design-costing.bench";
 import { benchHttpLoad } from "./http-load.bench";
-import { benchPriceImport } from "./price-import.bench";
+import {
+  benchPriceImport,
+  benchPriceImportProgress,
+} from "./price-import.bench";
 import { seedBenchStock } from "./seed-bench-stock";
 import { benchStock } from "./stock.bench";
 
 // The benchmarks get their own database beside the tests'.
 process.env.TEST_DATABASE_NAME ??= "turnledger_test_bench";
 
-// BENCH_ONLY=price-import (or coil, stock) runs one group while working on it.
+// BENCH_ONLY=price-import (or coil, stock, design, load, price-import-progress) runs one group
+// while working on it.
 const only = process.env.BENCH_ONLY;
 const runs = (group: string) => !only || only === group;
 
@@ -126,6 +130,17 @@ try {
         databaseUrl: environment.databaseUrl,
         buyerCookie,
         serverPid: environment.serverPid,
+      })),
+    );
+  }
+  if (runs("price-import-progress")) {
+    console.log(
+      "[bench] a 100,000-row price list with its progress streamed (check and commit, beside the plain requests)…",
+    );
+    figures.push(
+      ...(await benchPriceImportProgress({
+        baseUrl: environment.baseUrl,
+        buyerCookie,
       })),
     );
   }

@@ -17,6 +17,7 @@
  * Pure: runs in Node and in the browser.
  */
 import Papa, { type ParseError } from "papaparse";
+import { countCsvDataRows } from "./count-csv-rows";
 import { emptyFileMessage } from "./decode-csv";
 import { LineErrorList } from "./line-errors";
 
@@ -75,11 +76,18 @@ export interface OpenedPriceListCsv {
   /**
    * The same rows handed over in batches of up to `batchRows` file rows, each
    * awaited before the next is parsed: a large file is never a whole array of rows.
+   * Each batch comes with the bad lines and the data rows (good and bad) read so far.
    */
   forEachBatch(
     batchRows: number,
-    onBatch: (rows: CsvDataRow[], lineErrorsSoFar: number) => Promise<void>,
+    onBatch: (
+      rows: CsvDataRow[],
+      lineErrorsSoFar: number,
+      dataRowsSoFar: number,
+    ) => Promise<void>,
   ): Promise<CsvRowsOutcome>;
+  /** How many data rows the file has (the `dataRowCount` a full reading ends with), counted without reading them. */
+  countDataRows(): number;
 }
 
 export const noDataRowsMessage =
@@ -151,6 +159,8 @@ export function openPriceListCsv(
     forEachRow: (onRow) => readDataRows(normalised, layout, onRow),
     forEachBatch: (batchRows, onBatch) =>
       readDataRowsInBatches(normalised, layout, batchRows, onBatch),
+    countDataRows: () =>
+      countCsvDataRows(normalised, layout.delimiter, layout.headerLine),
   };
 }
 
@@ -290,7 +300,11 @@ async function readDataRowsInBatches(
   text: string,
   layout: CsvLayout,
   batchRows: number,
-  onBatch: (rows: CsvDataRow[], lineErrorsSoFar: number) => Promise<void>,
+  onBatch: (
+    rows: CsvDataRow[],
+    lineErrorsSoFar: number,
+    dataRowsSoFar: number,
+  ) => Promise<void>,
 ): Promise<CsvRowsOutcome> {
   const reader = new DataRowReader(text, layout);
   let offset: number | null = 0;
@@ -304,7 +318,8 @@ async function readDataRowsInBatches(
       (row) => batch.push(row),
       layout.delimiter,
     );
-    if (batch.length > 0) await onBatch(batch, reader.errors.errorCount);
+    if (batch.length > 0)
+      await onBatch(batch, reader.errors.errorCount, reader.dataRowCount);
   }
   return reader.outcome();
 }

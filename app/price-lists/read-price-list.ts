@@ -59,6 +59,7 @@ export interface OpenedPriceListRows<Layout extends RowsLayout = RowsLayout> {
   layout: Layout;
   forEachRow: OpenedPriceListCsv["forEachRow"];
   forEachBatch: OpenedPriceListCsv["forEachBatch"];
+  countDataRows: OpenedPriceListCsv["countDataRows"];
 }
 
 export interface RowsLayout {
@@ -127,6 +128,13 @@ export function readPriceListText(
   };
 }
 
+/** Takes one batch of good rows; awaited before the next batch is read. */
+export type BatchHandler = (
+  rows: PriceListRow[],
+  lineErrorsSoFar: number,
+  dataRowsSoFar: number,
+) => Promise<void>;
+
 /** The end of a reading in batches: the good rows' count and the errors, or file-level problems. */
 export type BatchReading<Layout> =
   | {
@@ -141,14 +149,15 @@ export type BatchReading<Layout> =
 /**
  * Reads an uploaded file and hands its good rows over in batches (each awaited
  * before the next is read), keeping none of them: for imports of large files.
- * Each batch comes with the number of bad lines found so far; the errors come
+ * Each batch comes with the number of bad lines found so far and of the file's
+ * data rows read so far (good and bad: see `countDataRows`); the errors come
  * back at the end, in file order (the first 1,000 lines, and the count of all).
  */
 export async function readPriceListInBatches(
   bytes: Uint8Array,
   options: PriceListReadOptions,
   batchRows: number,
-  onBatch: (rows: PriceListRow[], lineErrorsSoFar: number) => Promise<void>,
+  onBatch: BatchHandler,
 ): Promise<BatchReading<CsvLayout>> {
   const decoded = decodePriceListBytes(bytes);
   if (!decoded.ok) return { ok: false, messages: [decoded.message] };
@@ -165,18 +174,22 @@ export async function readOpenedPriceListInBatches<Layout extends RowsLayout>(
   opened: OpenedPriceListRows<Layout>,
   options: PriceListReadOptions,
   batchRows: number,
-  onBatch: (rows: PriceListRow[], lineErrorsSoFar: number) => Promise<void>,
+  onBatch: BatchHandler,
 ): Promise<BatchReading<Layout>> {
   const started = collectorFor(opened, options);
   if (!started.ok) return started;
   const { collector } = started;
   const outcome = await opened.forEachBatch(
     batchRows,
-    async (batch, csvErrorsSoFar) => {
+    async (batch, csvErrorsSoFar, dataRowsSoFar) => {
       for (const row of batch) collector.add(row);
       const rows = collector.takeRows();
       if (rows.length > 0)
-        await onBatch(rows, csvErrorsSoFar + collector.errorCount);
+        await onBatch(
+          rows,
+          csvErrorsSoFar + collector.errorCount,
+          dataRowsSoFar,
+        );
     },
   );
   if (!outcome.ok) return { ok: false, messages: [outcome.message] };

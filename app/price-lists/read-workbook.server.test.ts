@@ -181,7 +181,9 @@ describe("opening a workbook", () => {
       await workbookBytes({ Prices: rows }),
     );
     if (!opened.ok) throw new Error(opened.message);
+    expect(opened.countDataRows()).toBe(6);
     const batches: number[] = [];
+    const readSoFar: number[] = [];
     const read = await readOpenedPriceListInBatches(
       opened,
       {
@@ -196,11 +198,13 @@ describe("opening a workbook", () => {
         supplierCurrency: "EUR",
       },
       2,
-      async (batch) => {
+      async (batch, _errors, dataRowsSoFar) => {
         batches.push(batch.length);
+        readSoFar.push(dataRowsSoFar);
       },
     );
     expect(batches).toEqual([2, 2, 1]);
+    expect(readSoFar).toEqual([2, 4, 6]);
     expect(read).toMatchObject({
       ok: true,
       goodRows: 5,

@@ -205,6 +205,14 @@ function openSheet(
       const { dataRows } = readRows(headerLine + 1, errors, onRow);
       return outcome(errors, dataRows);
     },
+    countDataRows() {
+      let dataRows = 0;
+      for (let number = headerLine + 1; number <= lastRow; number += 1) {
+        const values = rowValues(number);
+        if (values && !isBlank(values, headers.length)) dataRows += 1;
+      }
+      return dataRows;
+    },
     async forEachBatch(batchRows, onBatch) {
       const errors = new LineErrorList();
       let dataRows = 0;
@@ -219,7 +227,7 @@ function openSheet(
         );
         next = read.next;
         dataRows += read.dataRows;
-        if (batch.length > 0) await onBatch(batch, errors.errorCount);
+        if (batch.length > 0) await onBatch(batch, errors.errorCount, dataRows);
       }
       return outcome(errors, dataRows);
     },

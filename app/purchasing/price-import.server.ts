@@ -287,6 +287,13 @@ export interface PriceListImportInput {
   dryRun: boolean;
   userId: string;
   today?: string;
+  /**
+   * Told the file's data rows read so far out of all of them: (0, total) once the file is
+   * opened, after each batch, and (total, total) when every row is read (and, on commit,
+   * written, before the transaction commits). Awaited; what it throws stops the import
+   * (a commit rolls back). A commit that starts over after a write conflict reports from 0 again.
+   */
+  onProgress?: (processed: number, total: number) => Promise<void>;
 }
 
 export async function importPriceList(
@@ -324,6 +331,10 @@ async function readOrImportPriceList(
   const file = await openPriceList(input.bytes, input.fileName, input.sheet);
   if (!file.ok) return { kind: "refused", messages: [file.message] };
   const opened: OpenedPriceListRows = file.opened;
+  const totalRows = input.onProgress ? opened.countDataRows() : 0;
+  const progress = async (processed: number) =>
+    input.onProgress?.(Math.min(processed, totalRows), totalRows);
+  await progress(0);
   const readOptions: PriceListReadOptions = {
     mapping: input.mapping,
     importDay,
@@ -363,7 +374,7 @@ async function readOrImportPriceList(
       opened,
       readOptions,
       rowsPerBatch,
-      async (rows) => {
+      async (rows, _lineErrorsSoFar, dataRowsSoFar) => {
         await matcher.prepare(rows);
         for (const row of rows) {
           const result = matcher.match(row);
@@ -376,9 +387,11 @@ async function readOrImportPriceList(
           if (result.newItem) newItemSkus.add(result.newItem.sku);
           else matchedRows += 1;
         }
+        await progress(dataRowsSoFar);
       },
     );
     if (!reading.ok) return { kind: "refused", messages: reading.messages };
+    await progress(totalRows);
     const shown = preview.preview(mergeLineErrors(reading, matchErrors));
     return {
       kind: "preview",
@@ -428,7 +441,7 @@ async function readOrImportPriceList(
       opened,
       readOptions,
       rowsPerBatch,
-      async (rows, lineErrorsSoFar) => {
+      async (rows, lineErrorsSoFar, dataRowsSoFar) => {
         await matcher.prepare(rows);
         const matched: MatchedRow[] = [];
         for (const row of rows) {
@@ -446,9 +459,11 @@ async function readOrImportPriceList(
           // Handled: a failure is thrown by the next `await writing`, not reported as unhandled.
           writing.catch(() => undefined);
         }
+        await progress(dataRowsSoFar);
       },
     );
     await writing;
+    if (reading.ok) await progress(totalRows);
     if (!reading.ok) {
       await writer.abandon();
       return { kind: "refused", messages: reading.messages };

@@ -1,4 +1,3 @@
-import { formatNumber } from "~/lib/format";
 import {
   FormDataParseError,
   MaxFileSizeExceededError,
@@ -8,6 +7,7 @@ import {
 } from "@remix-run/form-data-parser";
 import type { Route } from "./+types/api.v1.price-lists";
 import { requireCapability } from "~/auth/guard.server";
+import { formatNumber } from "~/lib/format";
 import { apiError, methodNotAllowed } from "~/lib/api.server";
 import { importPriceList } from "~/purchasing/price-import.server";
 import {
@@ -19,6 +19,11 @@ import {
   maxPriceListBytes,
 } from "~/price-lists/decode-csv";
 import { answerDomainError } from "~/lib/api-errors.server";
+import {
+  progressStreamAnswer,
+  wantsProgressStream,
+  type ReportProgress,
+} from "~/lib/progress-stream.server";
 import {
   layoutAnswerOf,
   openPriceList,
@@ -66,6 +71,12 @@ function uploadedFileName(file: File): string {
  * summary and `warnings`, or 422 with the invalid rows and nothing written. `invalid` lists the first
  * 1,000 lines with errors; `invalidCount` counts them all. `warnings` ({ kind, currency, conductor?,
  * message }) name a missing currency rate or metal base; they never stop an import.
+ *
+ * Progress (opt-in): with `Accept: application/x-ndjson`, a dry run or commit whose fields are in
+ * order answers 200 with a stream of lines: { type: "progress", step: "check" | "import",
+ * processed, total } (data rows read out of the file's, at least every 10,000 rows or 250 ms),
+ * then { type: "result", status, body }: the status and body the request answers without the
+ * stream. Refusals before the work starts (role, size, fields) are answered as always.
  */
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "importPriceLists");
@@ -132,60 +143,67 @@ export async function action({ request }: Route.ActionArgs) {
   const upload = file as File;
 
   const dryRun = new URL(request.url).searchParams.get("dryRun") === "1";
-  return answerDomainError(async () => {
-    const outcome = await importPriceList({
-      supplierName: supplier,
-      fileName: uploadedFileName(upload) || "price-list.csv",
-      bytes: new Uint8Array(await upload.arrayBuffer()),
-      sheet,
-      mapping: columnMappingFromFields(mappingObject as Record<string, string>),
-      dryRun,
-      userId: user.id,
-    });
-    switch (outcome.kind) {
-      case "refused":
-        return apiError(400, outcome.messages.join(" "), {
-          file: outcome.messages,
-        });
-      case "preview":
-        return Response.json(outcome.preview);
-      case "invalid": {
-        // At most 1,000 lines are listed; the count and the flag say when there were more.
-        const truncated = outcome.invalidCount > outcome.invalid.length;
-        const count = (lines: number) => formatNumber(lines);
-        return Response.json(
-          {
-            error: {
-              message: `${count(outcome.invalidCount)} rows are invalid; nothing was imported.${truncated ? ` The first ${count(outcome.invalid.length)} are listed.` : ""}`,
+  const answer = (onProgress?: ReportProgress) =>
+    answerDomainError(async () => {
+      const outcome = await importPriceList({
+        supplierName: supplier,
+        fileName: uploadedFileName(upload) || "price-list.csv",
+        bytes: new Uint8Array(await upload.arrayBuffer()),
+        sheet,
+        mapping: columnMappingFromFields(
+          mappingObject as Record<string, string>,
+        ),
+        dryRun,
+        userId: user.id,
+        onProgress,
+      });
+      switch (outcome.kind) {
+        case "refused":
+          return apiError(400, outcome.messages.join(" "), {
+            file: outcome.messages,
+          });
+        case "preview":
+          return Response.json(outcome.preview);
+        case "invalid": {
+          // At most 1,000 lines are listed; the count and the flag say when there were more.
+          const truncated = outcome.invalidCount > outcome.invalid.length;
+          const count = (lines: number) => formatNumber(lines);
+          return Response.json(
+            {
+              error: {
+                message: `${count(outcome.invalidCount)} rows are invalid; nothing was imported.${truncated ? ` The first ${count(outcome.invalid.length)} are listed.` : ""}`,
+              },
+              valid: outcome.valid,
+              invalid: outcome.invalid,
+              invalidCount: outcome.invalidCount,
+              invalidTruncated: truncated,
             },
-            valid: outcome.valid,
-            invalid: outcome.invalid,
-            invalidCount: outcome.invalidCount,
-            invalidTruncated: truncated,
-          },
-          { status: 422 },
-        );
-      }
-      case "already-imported":
-        return Response.json({
-          importId: outcome.importId,
-          alreadyImported: true,
-          message: "This file was imported before; nothing changed.",
-        });
-      case "imported":
-        return Response.json(
-          {
+            { status: 422 },
+          );
+        }
+        case "already-imported":
+          return Response.json({
             importId: outcome.importId,
-            supplier: outcome.supplier,
-            fileName: outcome.fileName,
-            rows: outcome.rows,
-            newItems: outcome.newItems,
-            warnings: outcome.warnings,
-          },
-          { status: 201 },
-        );
-    }
-  });
+            alreadyImported: true,
+            message: "This file was imported before; nothing changed.",
+          });
+        case "imported":
+          return Response.json(
+            {
+              importId: outcome.importId,
+              supplier: outcome.supplier,
+              fileName: outcome.fileName,
+              rows: outcome.rows,
+              newItems: outcome.newItems,
+              warnings: outcome.warnings,
+            },
+            { status: 201 },
+          );
+      }
+    });
+  return wantsProgressStream(request)
+    ? progressStreamAnswer(request, dryRun ? "check" : "import", answer)
+    : answer();
 }
 
 /** ?layout=1: the file's header row, first data row and (for a workbook) sheets; nothing is written. */

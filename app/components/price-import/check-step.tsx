@@ -51,7 +51,7 @@ export function CheckStep({
             </p>
           </div>
           {checking ? (
-            <UploadProgressBar label={`Sending ${fileName}`} />
+            <UploadProgressBar step="check" fileName={fileName} />
           ) : null}
           {checked && !checked.ok ? (
             <p role="alert" className="field-error">

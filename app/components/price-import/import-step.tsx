@@ -62,7 +62,7 @@ export function ImportStep({
             </p>
           </div>
           {importing ? (
-            <UploadProgressBar label={`Importing ${fileName}`} />
+            <UploadProgressBar step="import" fileName={fileName} />
           ) : null}
           {imported && !imported.ok ? (
             <div role="alert" className="space-y-3">

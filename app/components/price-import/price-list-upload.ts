@@ -1,10 +1,18 @@
 /**
  * Sends a price list to POST /api/v1/price-lists from the browser with
  * XMLHttpRequest, so the page can show upload progress (fetch cannot report
- * it). Every outcome comes back as an answer to show, never as a thrown error;
- * only an abort (a newer request replaced this one) rejects.
+ * it), and reads the rows' progress the server streams back while it checks
+ * or imports them (lib/progress-stream.ts). Every outcome comes back as an
+ * answer to show, never as a thrown error; only an abort (a newer request
+ * replaced this one) rejects.
  */
 import type { ApiAnswer } from "~/lib/api-request";
+import {
+  ProgressLineReader,
+  progressStreamType,
+  type ProgressEvent,
+  type RowProgress,
+} from "~/lib/progress-stream";
 import type { LineError } from "~/price-lists/parse-price-list";
 import type { PreviewRow } from "~/purchasing/price-import-preview";
 import type { PriceImportWarning } from "~/purchasing/price-import-warnings";
@@ -46,7 +54,10 @@ export type PriceListAnswer<T> = ApiAnswer<T> & {
 export type UploadProgress =
   | { phase: "idle" }
   | { phase: "uploading"; loaded: number; total: number }
-  | { phase: "checking" };
+  /** The file is sent; the server is opening it. */
+  | { phase: "checking" }
+  /** The server's count of rows checked (or imported) so far. */
+  | ({ phase: "rows" } & RowProgress);
 
 export interface PriceListUpload {
   file: File;
@@ -75,7 +86,15 @@ export function sendPriceList<T>(
     const abort = () => request.abort();
     upload.signal.addEventListener("abort", abort, { once: true });
     request.open("POST", url);
-    request.setRequestHeader("Accept", "application/json");
+    request.setRequestHeader(
+      "Accept",
+      `${progressStreamType}, application/json;q=0.9`,
+    );
+    const stream = new StreamedAnswer();
+    request.onprogress = () =>
+      stream.read(request, (progress) =>
+        upload.onProgress({ phase: "rows", ...progress }),
+      );
     request.upload.onprogress = (event) =>
       upload.onProgress({
         phase: "uploading",
@@ -93,7 +112,24 @@ export function sendPriceList<T>(
           "Turnledger could not be reached. Check the connection and send the file again.",
         fields: {},
       });
-    request.onload = () => resolve(readAnswer<T>(request));
+    request.onload = () => {
+      if (!stream.streamed(request)) {
+        resolve(answerOf<T>(request.status, parsedJson(request.responseText)));
+        return;
+      }
+      stream.read(request, () => undefined);
+      resolve(
+        stream.result
+          ? answerOf<T>(stream.result.status, stream.result.body)
+          : {
+              ok: false,
+              status: 0,
+              message:
+                "The answer was cut off before the server finished. Send the file again: a file already imported is never stored twice.",
+              fields: {},
+            },
+      );
+    };
     request.onloadend = () => {
       upload.signal.removeEventListener("abort", abort);
       upload.onProgress({ phase: "idle" });
@@ -107,14 +143,40 @@ export function sendPriceList<T>(
   });
 }
 
-function readAnswer<T>(request: XMLHttpRequest): PriceListAnswer<T> {
-  let parsed: unknown = null;
-  try {
-    parsed = JSON.parse(request.responseText);
-  } catch {
-    parsed = null;
+/** The events of a streamed answer, read from the response text as it grows. */
+class StreamedAnswer {
+  private readonly lines = new ProgressLineReader();
+  private readUpTo = 0;
+  result: Extract<ProgressEvent, { type: "result" }> | null = null;
+
+  streamed(request: XMLHttpRequest): boolean {
+    return (request.getResponseHeader("Content-Type") ?? "").startsWith(
+      progressStreamType,
+    );
   }
-  if (request.status >= 200 && request.status < 300 && parsed !== null)
+
+  read(request: XMLHttpRequest, onRows: (progress: RowProgress) => void) {
+    if (!this.streamed(request)) return;
+    const text = request.responseText;
+    const events = this.lines.push(text.slice(this.readUpTo));
+    this.readUpTo = text.length;
+    for (const event of events) {
+      if (event.type === "result") this.result = event;
+      else onRows(event);
+    }
+  }
+}
+
+function parsedJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return null;
+  }
+}
+
+function answerOf<T>(status: number, parsed: unknown): PriceListAnswer<T> {
+  if (status >= 200 && status < 300 && parsed !== null)
     return { ok: true, data: parsed as T };
   const body = (parsed ?? {}) as {
     error?: { message?: string; fields?: Record<string, string[]> };
@@ -123,12 +185,12 @@ function readAnswer<T>(request: XMLHttpRequest): PriceListAnswer<T> {
   };
   return {
     ok: false,
-    status: request.status,
+    status,
     message:
-      request.status === 401
+      status === 401
         ? "Your session has ended: sign in again, then send the file again."
         : (body.error?.message ??
-          `The upload failed (status ${request.status}). Try again in a moment.`),
+          `The upload failed (status ${status}). Try again in a moment.`),
     fields: body.error?.fields ?? {},
     invalid: body.invalid,
     invalidCount: body.invalidCount,

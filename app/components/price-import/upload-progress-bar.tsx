@@ -1,9 +1,13 @@
 /**
- * The progress of a price-list upload, shared between the page's clientAction
- * (which sends the file) and the bar that shows it.
+ * The progress of a price list sent for checking or importing, shared between
+ * the page's clientAction (which sends the file and reads the server's
+ * progress stream) and the bar that shows it: the upload first, then the rows
+ * the server has checked or imported out of the file's total.
  */
-import { formatNumber } from "~/lib/format";
 import { useSyncExternalStore } from "react";
+import { useThrottledText } from "~/components/use-throttled-text";
+import { formatQuantity } from "~/lib/format";
+import type { ProgressStep, RowProgress } from "~/lib/progress-stream";
 import type { UploadProgress } from "./price-list-upload";
 
 const idle: UploadProgress = { phase: "idle" };
@@ -28,54 +32,135 @@ export function useUploadProgress(): UploadProgress {
   );
 }
 
+/** How often a screen reader hears the progress, at most. */
+const announceEveryMs = 3_000;
+
 function megabytes(bytes: number): string {
-  return `${formatNumber(bytes / 1024 / 1024, 1)}\u00a0MB`;
+  return formatQuantity(bytes / 1024 / 1024, "MB", 1);
 }
 
-/** A bar with the percent sent, then a "checking" line while the server reads the rows. */
-export function UploadProgressBar({ label }: { label: string }) {
+/** "12,000 of 100,000 rows checked" (numbers in the person's format); the last step of an import says it is saving. */
+export function rowsProgressText({
+  step,
+  processed,
+  total,
+}: RowProgress): string {
+  const counted = `${formatQuantity(Math.min(processed, total), "")} of ${formatQuantity(total, "")} rows`;
+  if (step === "check") return `${counted} checked`;
+  return processed >= total
+    ? `${counted} imported; saving the import…`
+    : `${counted} imported`;
+}
+
+const fileSentText = "File sent. Turnledger is opening it…";
+
+function percentSent(progress: { loaded: number; total: number }): number {
+  return progress.total > 0
+    ? Math.min(100, Math.round((progress.loaded / progress.total) * 100))
+    : 0;
+}
+
+/** What a screen reader is told, now and then (see announceEveryMs). */
+function announcementOf(progress: UploadProgress, fileName: string): string {
+  switch (progress.phase) {
+    case "idle":
+      return "";
+    case "uploading":
+      return `Sending ${fileName}: ${percentSent(progress)}% sent.`;
+    case "checking":
+      return fileSentText;
+    case "rows":
+      return `${rowsProgressText(progress)}.`;
+  }
+}
+
+/**
+ * A bar with the percent of the file sent, then one with the rows the server
+ * has checked (or imported) out of all of them, as it reports them. The
+ * numbers beside the bar are for the eye; screen readers get the bar's value
+ * text, and a polite status line at most every few seconds.
+ */
+export function UploadProgressBar({
+  step,
+  fileName,
+}: {
+  step: ProgressStep;
+  fileName: string;
+}) {
   const progress = useUploadProgress();
+  const announcement = useThrottledText(
+    announcementOf(progress, fileName),
+    announceEveryMs,
+  );
   if (progress.phase === "idle") return null;
-  if (progress.phase === "checking")
-    return (
-      <p
-        role="status"
-        className="flex items-center gap-2 text-sm text-graphite-700"
-      >
-        <span
-          aria-hidden="true"
-          className="inline-block h-3 w-3 animate-pulse rounded-full bg-copper-500"
-        />
-        File sent. Turnledger is checking every row…
-      </p>
-    );
-  const percent =
-    progress.total > 0
-      ? Math.min(100, Math.round((progress.loaded / progress.total) * 100))
-      : 0;
   return (
     <div className="space-y-1">
-      <div className="flex justify-between text-sm text-graphite-700">
+      {progress.phase === "checking" ? (
+        <p
+          aria-hidden="true"
+          className="flex items-center gap-2 text-sm text-graphite-700"
+        >
+          <span className="inline-block h-3 w-3 animate-pulse rounded-full bg-copper-500" />
+          {fileSentText}
+        </p>
+      ) : progress.phase === "uploading" ? (
+        <ProgressBar
+          label={`${step === "check" ? "Sending" : "Importing"} ${fileName}`}
+          value={percentSent(progress)}
+          max={100}
+          valueText={`${percentSent(progress)}% sent`}
+          shown={`${percentSent(progress)}% · ${megabytes(progress.loaded)} of ${megabytes(progress.total)}`}
+        />
+      ) : (
+        <ProgressBar
+          label={`${step === "check" ? "Checking" : "Importing"} ${fileName}`}
+          value={Math.min(progress.processed, progress.total)}
+          max={progress.total}
+          valueText={rowsProgressText(progress)}
+          shown={rowsProgressText(progress)}
+        />
+      )}
+      <p role="status" className="sr-only">
+        {announcement}
+      </p>
+    </div>
+  );
+}
+
+function ProgressBar({
+  label,
+  value,
+  max,
+  valueText,
+  shown,
+}: {
+  label: string;
+  value: number;
+  max: number;
+  valueText: string;
+  shown: string;
+}) {
+  const width = max > 0 ? Math.min(100, (value / max) * 100) : 0;
+  return (
+    <>
+      <div className="flex flex-wrap justify-between gap-x-4 text-sm text-graphite-700">
         <span id="upload-progress-label">{label}</span>
-        <span aria-hidden="true">
-          {percent}% · {megabytes(progress.loaded)} of{" "}
-          {megabytes(progress.total)}
-        </span>
+        <span aria-hidden="true">{shown}</span>
       </div>
       <div
         role="progressbar"
         aria-labelledby="upload-progress-label"
         aria-valuemin={0}
-        aria-valuemax={100}
-        aria-valuenow={percent}
-        aria-valuetext={`${percent}% sent`}
+        aria-valuemax={max}
+        aria-valuenow={value}
+        aria-valuetext={valueText}
         className="h-2.5 overflow-hidden rounded-full bg-graphite-100"
       >
         <div
           className="h-full rounded-full bg-copper-500 transition-[width]"
-          style={{ width: `${percent}%` }}
+          style={{ width: `${width}%` }}
         />
       </div>
-    </div>
+    </>
   );
 }
