@@ -12,8 +12,9 @@ import {
   type RowData,
   type SortingState,
 } from "@tanstack/react-table";
-import { useEffect, useId, useMemo, useRef, useState } from "react";
+import { useId, useMemo, useState } from "react";
 import { Link } from "react-router";
+import { TableScroll } from "./table-scroll";
 
 declare module "@tanstack/react-table" {
   // eslint-disable-next-line @typescript-eslint/no-unused-vars -- the parameters must match TanStack's own declaration
@@ -116,8 +117,6 @@ export function DataTable<Row>({
     pageCount: pageCount ?? 1,
   });
   const shown = table.getRowModel().rows;
-  const scrollBox = useRef<HTMLDivElement>(null);
-  const scrollsSideways = useScrollsSideways(scrollBox);
   return (
     <div className="space-y-2">
       {filtering ? (
@@ -133,97 +132,92 @@ export function DataTable<Row>({
           totalCount={rows.length}
         />
       ) : null}
-      <div
-        ref={scrollBox}
-        className="panel overflow-x-auto p-0"
-        // A table wider than its panel scrolls: keyboard users reach it with Tab and scroll with the arrow keys.
-        {...(scrollsSideways || widerThanPanel
-          ? { tabIndex: 0, role: "region", "aria-label": caption }
-          : {})}
-      >
-        <table className="data-table">
-          <caption className="sr-only">{caption}</caption>
-          <thead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const direction = header.column.getIsSorted();
-                  const content = header.isPlaceholder
-                    ? null
-                    : flexRender(
-                        header.column.columnDef.header,
-                        header.getContext(),
-                      );
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      className={
-                        header.column.columnDef.meta?.numeric
-                          ? "text-right"
-                          : undefined
-                      }
-                      aria-sort={
-                        direction === "asc"
-                          ? "ascending"
-                          : direction === "desc"
-                            ? "descending"
+      <div className="panel p-0">
+        <TableScroll label={caption} widerThanPanel={widerThanPanel}>
+          <table className="data-table">
+            <caption className="sr-only">{caption}</caption>
+            <thead>
+              {table.getHeaderGroups().map((group) => (
+                <tr key={group.id}>
+                  {group.headers.map((header) => {
+                    const direction = header.column.getIsSorted();
+                    const content = header.isPlaceholder
+                      ? null
+                      : flexRender(
+                          header.column.columnDef.header,
+                          header.getContext(),
+                        );
+                    return (
+                      <th
+                        key={header.id}
+                        scope="col"
+                        className={
+                          header.column.columnDef.meta?.numeric
+                            ? "text-right"
                             : undefined
-                      }
-                    >
-                      {header.column.getCanSort() ? (
-                        <button
-                          type="button"
-                          onClick={header.column.getToggleSortingHandler()}
-                          className="inline-flex items-center gap-1 text-left font-semibold hover:text-copper-700"
-                        >
-                          {content}
-                          <SortMark direction={direction} />
-                        </button>
-                      ) : (
-                        content
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {shown.length === 0 ? (
-              <tr>
-                <td
-                  colSpan={columns.length}
-                  className="py-6 text-center text-graphite-500"
-                >
-                  {filtering && rows.length > 0
-                    ? "No row matches the filter."
-                    : emptyText}
-                </td>
-              </tr>
-            ) : (
-              shown.map((row) => (
-                <tr key={row.id}>
-                  {row.getVisibleCells().map((cell) => (
-                    <td
-                      key={cell.id}
-                      className={
-                        cell.column.columnDef.meta?.numeric
-                          ? "text-right"
-                          : undefined
-                      }
-                    >
-                      {flexRender(
-                        cell.column.columnDef.cell,
-                        cell.getContext(),
-                      )}
-                    </td>
-                  ))}
+                        }
+                        aria-sort={
+                          direction === "asc"
+                            ? "ascending"
+                            : direction === "desc"
+                              ? "descending"
+                              : undefined
+                        }
+                      >
+                        {header.column.getCanSort() ? (
+                          <button
+                            type="button"
+                            onClick={header.column.getToggleSortingHandler()}
+                            className="inline-flex items-center gap-1 text-left font-semibold hover:text-copper-700"
+                          >
+                            {content}
+                            <SortMark direction={direction} />
+                          </button>
+                        ) : (
+                          content
+                        )}
+                      </th>
+                    );
+                  })}
                 </tr>
-              ))
-            )}
-          </tbody>
-        </table>
+              ))}
+            </thead>
+            <tbody>
+              {shown.length === 0 ? (
+                <tr>
+                  <td
+                    colSpan={columns.length}
+                    className="py-6 text-center text-graphite-500"
+                  >
+                    {filtering && rows.length > 0
+                      ? "No row matches the filter."
+                      : emptyText}
+                  </td>
+                </tr>
+              ) : (
+                shown.map((row) => (
+                  <tr key={row.id}>
+                    {row.getVisibleCells().map((cell) => (
+                      <td
+                        key={cell.id}
+                        className={
+                          cell.column.columnDef.meta?.numeric
+                            ? "text-right"
+                            : undefined
+                        }
+                      >
+                        {flexRender(
+                          cell.column.columnDef.cell,
+                          cell.getContext(),
+                        )}
+                      </td>
+                    ))}
+                  </tr>
+                ))
+              )}
+            </tbody>
+          </table>
+        </TableScroll>
         {page && pageCount && pageCount > 1 && pageHref ? (
           <nav
             aria-label="Pages"
@@ -337,20 +331,4 @@ function TableFilters<Row>({
       </p>
     </div>
   );
-}
-
-/** Whether the element is wider inside than it shows (it scrolls sideways), kept up to date as it or its content resizes. */
-function useScrollsSideways(ref: React.RefObject<HTMLElement | null>) {
-  const [scrolls, setScrolls] = useState(false);
-  useEffect(() => {
-    const element = ref.current;
-    if (!element) return;
-    const check = () => setScrolls(element.scrollWidth > element.clientWidth);
-    check();
-    const observer = new ResizeObserver(check);
-    observer.observe(element);
-    if (element.firstElementChild) observer.observe(element.firstElementChild);
-    return () => observer.disconnect();
-  }, [ref]);
-  return scrolls;
 }

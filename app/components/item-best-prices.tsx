@@ -2,6 +2,7 @@ import { formatQuantity } from "~/lib/format";
 import { Form } from "react-router";
 import { countText, perUnitWord } from "~/lib/unit-text";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
+import { TableScroll } from "~/components/table-scroll";
 
 export interface ItemBestPrices {
   quantity: number;
@@ -129,78 +130,82 @@ export function ItemBestPricesPanel({
           prices here.
         </p>
       ) : (
-        <table className="data-table">
-          <caption className="sr-only">Supplier prices, cheapest first</caption>
-          <thead>
-            <tr>
-              <th scope="col">Supplier</th>
-              <th scope="col" className="text-right">
-                Per {perUnitWord(prices.unit)} in {prices.companyCurrency}
-              </th>
-              <th scope="col" className="text-right">
-                Total
-              </th>
-              <th scope="col">As quoted</th>
-            </tr>
-          </thead>
-          <tbody>
-            {prices.prices.map((price) => (
-              <tr key={`${price.supplier}-${price.supplierSku}`}>
-                <td>
-                  {price.supplier}
-                  <span className="block text-xs text-graphite-500">
-                    {price.supplierSku}
-                    {price.leadTimeDays !== null
-                      ? ` · ${countText(price.leadTimeDays, "day")}`
-                      : ""}
-                    {price.packQuantity !== null
-                      ? ` · packs of ${formatStockQuantity(price.packQuantity, prices.unit)}`
-                      : ""}
-                  </span>
-                </td>
-                <td className="text-right font-medium">
-                  {money(price.unitPrice, prices.companyCurrency)}
-                </td>
-                <td className="text-right">
-                  {money(price.total, prices.companyCurrency, 2)}
-                </td>
-                <td className="text-sm text-graphite-700">
-                  {price.adderPerKg !== null && price.metalBasePerKg !== null
-                    ? `${money(price.adderPerKg, price.currency)} adder + ${money(price.metalBasePerKg, price.currency)} metal base`
-                    : money(price.quotedUnitPrice, price.currency)}
-                  {price.rate !== null &&
-                  price.currency !== prices.companyCurrency
-                    ? ` at ${price.rate} ${prices.companyCurrency}/${price.currency}`
-                    : ""}
-                  {price.metalBaseDerivedFrom ? (
-                    <span className="block text-xs text-caution">
-                      {derivedBaseText(
-                        price.metalBaseDerivedFrom,
-                        price.currency,
-                      )}{" "}
-                      (no {price.currency} base kept)
+        <TableScroll label="Supplier prices, cheapest first">
+          <table className="data-table">
+            <caption className="sr-only">
+              Supplier prices, cheapest first
+            </caption>
+            <thead>
+              <tr>
+                <th scope="col">Supplier</th>
+                <th scope="col" className="text-right">
+                  Per {perUnitWord(prices.unit)} in {prices.companyCurrency}
+                </th>
+                <th scope="col" className="text-right">
+                  Total
+                </th>
+                <th scope="col">As quoted</th>
+              </tr>
+            </thead>
+            <tbody>
+              {prices.prices.map((price) => (
+                <tr key={`${price.supplier}-${price.supplierSku}`}>
+                  <td>
+                    {price.supplier}
+                    <span className="block text-xs text-graphite-500">
+                      {price.supplierSku}
+                      {price.leadTimeDays !== null
+                        ? ` · ${countText(price.leadTimeDays, "day")}`
+                        : ""}
+                      {price.packQuantity !== null
+                        ? ` · packs of ${formatStockQuantity(price.packQuantity, prices.unit)}`
+                        : ""}
                     </span>
-                  ) : null}
-                </td>
-              </tr>
-            ))}
-            {prices.cannotPrice.map((offer) => (
-              <tr key={`${offer.supplier}-${offer.supplierSku}-unpriced`}>
-                <td>
-                  {offer.supplier}
-                  <span className="block text-xs text-graphite-500">
-                    {offer.supplierSku}
-                  </span>
-                </td>
-                <td className="text-right text-graphite-500">—</td>
-                <td className="text-right text-graphite-500">—</td>
-                <td>
-                  <UnpricedReasons reasons={offer.reasons} />
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+                  </td>
+                  <td className="text-right font-medium">
+                    {money(price.unitPrice, prices.companyCurrency)}
+                  </td>
+                  <td className="text-right">
+                    {money(price.total, prices.companyCurrency, 2)}
+                  </td>
+                  <td className="text-sm text-graphite-700">
+                    {price.adderPerKg !== null && price.metalBasePerKg !== null
+                      ? `${money(price.adderPerKg, price.currency)} adder + ${money(price.metalBasePerKg, price.currency)} metal base`
+                      : money(price.quotedUnitPrice, price.currency)}
+                    {price.rate !== null &&
+                    price.currency !== prices.companyCurrency
+                      ? ` at ${price.rate} ${prices.companyCurrency}/${price.currency}`
+                      : ""}
+                    {price.metalBaseDerivedFrom ? (
+                      <span className="block text-xs text-caution">
+                        {derivedBaseText(
+                          price.metalBaseDerivedFrom,
+                          price.currency,
+                        )}{" "}
+                        (no {price.currency} base kept)
+                      </span>
+                    ) : null}
+                  </td>
+                </tr>
+              ))}
+              {prices.cannotPrice.map((offer) => (
+                <tr key={`${offer.supplier}-${offer.supplierSku}-unpriced`}>
+                  <td>
+                    {offer.supplier}
+                    <span className="block text-xs text-graphite-500">
+                      {offer.supplierSku}
+                    </span>
+                  </td>
+                  <td className="text-right text-graphite-500">—</td>
+                  <td className="text-right text-graphite-500">—</td>
+                  <td>
+                    <UnpricedReasons reasons={offer.reasons} />
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </TableScroll>
       )}
     </section>
   );

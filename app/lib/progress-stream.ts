@@ -4,7 +4,7 @@
  * processed out of the total while the work runs, then one `result` event
  * with the status and JSON body the same request would have answered without
  * the stream. A client opts in with `Accept: application/x-ndjson`; without
- * it, the route answers as it always did. Decision 0XX-streamed-progress.
+ * it, the route answers as it always did. Decision 041.
  *
  * Pure: the server writes events with it (progress-stream.server.ts), the
  * page and the bench read them.

@@ -1,7 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
-import { data, Form, Link, useNavigation } from "react-router";
+import { data, Form, useNavigation } from "react-router";
 import type { Route } from "./+types/admin-person";
 import { createEmailToken } from "~/auth/email-tokens.server";
 import { requireCapability } from "~/auth/guard.server";
@@ -17,6 +17,7 @@ import {
   setActive,
   setRoles,
 } from "~/people/people.server";
+import { BackLink } from "~/components/back-link";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const admin = await requireCapability(request, "managePeople");
@@ -117,12 +118,7 @@ export default function AdminPerson({
   return (
     <div className="max-w-2xl space-y-6">
       <p className="text-sm">
-        <Link
-          to="/admin/people"
-          className="text-copper-700 underline underline-offset-2"
-        >
-          ← People
-        </Link>
+        <BackLink to="/admin/people">People</BackLink>
       </p>
       <div>
         <h1 className="text-2xl font-semibold">{person.name}</h1>

@@ -1,20 +1,14 @@
-import {
-  data,
-  Form,
-  NavLink,
-  Outlet,
-  type ShouldRevalidateFunctionArgs,
-} from "react-router";
+import { data, Outlet, type ShouldRevalidateFunctionArgs } from "react-router";
 import type { Route } from "./+types/app-shell";
 import { requireUser } from "~/auth/guard.server";
 import { sessionHeaders } from "~/auth/session-headers.server";
 import { FlashMessage } from "~/components/flash-message";
+import { MainMenu } from "~/components/main-menu";
 import { RouteErrorNotice, RouteErrorPage } from "~/components/route-error";
 import { displaySettingsOf } from "~/lib/display-settings";
 import { takeFlash } from "~/lib/flash.server";
 import { setBrowserDisplaySettings } from "~/lib/format";
 import { navigationItems, showsNavigationItem } from "~/lib/navigation";
-import { roleLabels } from "~/lib/roles";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -92,62 +86,9 @@ function ShellFrame({
   return (
     <div className="flex min-h-screen flex-col">
       <header className="border-b border-graphite-800 bg-graphite-900 text-graphite-50 print:hidden">
-        {/* Two rows: the name and the person on top, the menu below with the whole width to itself. */}
-        <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-x-8 gap-y-2 px-4 pt-3 sm:px-6">
-          <a
-            href="/"
-            className="flex items-center gap-2 text-lg font-semibold tracking-tight"
-          >
-            <img src="/favicon.svg" alt="" className="h-7 w-7" />
-            Turnledger
-          </a>
-          <div className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
-            <NavLink
-              to="/account"
-              className="hover:underline"
-              title="Your account and API tokens"
-            >
-              <span className="font-medium">{user.name}</span>
-              <span className="ml-2 text-graphite-300">
-                {user.roles.map((role) => roleLabels[role]).join(" · ")}
-              </span>
-            </NavLink>
-            <Form method="post" action="/sign-out">
-              <button
-                type="submit"
-                className="rounded-md border border-graphite-500 px-3 py-1 text-graphite-100 hover:border-copper-300"
-              >
-                Sign out
-              </button>
-            </Form>
-          </div>
-        </div>
-        <nav
-          aria-label="Main"
-          className="mx-auto max-w-7xl px-2 pt-2 pb-2 sm:px-4"
-        >
-          <ul className="flex flex-wrap gap-0.5">
-            {items.map((item) => (
-              <li key={item.to}>
-                <NavLink
-                  to={item.to}
-                  end={item.exact}
-                  className={({ isActive }) =>
-                    `block rounded-md px-2.5 py-1.5 text-sm font-medium ${
-                      isActive
-                        ? "bg-copper-600 text-white"
-                        : "text-graphite-100 hover:bg-graphite-800"
-                    }`
-                  }
-                >
-                  {item.label}
-                </NavLink>
-              </li>
-            ))}
-          </ul>
-        </nav>
+        <MainMenu user={user} items={items} />
       </header>
-      <main className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">
+      <main className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 sm:px-6 sm:py-8">
         <FlashMessage flash={flash} />
         {children}
       </main>

@@ -122,7 +122,7 @@ export default function PurchaseOrder({
         rows={order.lines}
         emptyText="This order has no lines yet."
       />
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0 space-y-6">
           {editing ? (
             <DraftEditForm order={order} lastResult={resultFor("save")} />

@@ -16,6 +16,7 @@ import { createItem } from "~/stock/catalogue.server";
 import { newItemFormSchema, unitOfNewItem } from "~/stock/new-item-form";
 import { isDomainError } from "~/lib/domain-error";
 import { refusalReply } from "~/lib/refusal-reply";
+import { BackLink } from "~/components/back-link";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "keepCatalogue");
@@ -85,12 +86,7 @@ export default function NewStockItem({
   return (
     <div className="max-w-4xl space-y-6">
       <p className="text-sm">
-        <Link
-          to="/stock"
-          className="text-copper-700 underline underline-offset-2"
-        >
-          ← Stock
-        </Link>
+        <BackLink to="/stock">Stock</BackLink>
       </p>
       <div>
         <h1 className="text-2xl font-semibold">New catalogue item</h1>

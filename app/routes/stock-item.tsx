@@ -1,5 +1,5 @@
 import { parseForm } from "~/lib/parse-form";
-import { data, Link } from "react-router";
+import { data } from "react-router";
 import type { Route } from "./+types/stock-item";
 import {
   refuseUnless,
@@ -49,6 +49,7 @@ import {
   openOrderLinesOfItem,
 } from "~/purchase-orders/open-order-lines.server";
 import { refusalReply } from "~/lib/refusal-reply";
+import { BackLink } from "~/components/back-link";
 
 const movementPageSize = 20;
 
@@ -173,18 +174,13 @@ export default function StockItem({
   return (
     <div className="space-y-6">
       <p className="text-sm">
-        <Link
-          to="/stock"
-          className="text-copper-700 underline underline-offset-2"
-        >
-          ← Stock
-        </Link>
+        <BackLink to="/stock">Stock</BackLink>
       </p>
       <ItemPageHeading item={item} canRecord={can.record} />
       <FormMessages errors={otherErrors ?? undefined} />
       <ItemSummaryFigures item={item} />
 
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="space-y-6">
           {attributes ? (
             <ItemAttributesPanel attributes={attributes} onHand={item.onHand} />

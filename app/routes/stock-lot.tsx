@@ -23,6 +23,7 @@ import {
   type UploadRefusal,
 } from "~/lots/lot-documents.server";
 import { lotWhereUsed } from "~/lots/where-used.server";
+import { BackLink } from "~/components/back-link";
 
 function lotIdOr404(value: string | undefined): number {
   const id = lotIdFromPath(value);
@@ -100,12 +101,9 @@ export default function StockLot({
   return (
     <div className="space-y-6">
       <p className="text-sm">
-        <Link
-          to={`/stock/items/${encodeURIComponent(lot.item.sku)}`}
-          className="text-copper-700 underline underline-offset-2"
-        >
-          ← {lot.item.sku}
-        </Link>
+        <BackLink to={`/stock/items/${encodeURIComponent(lot.item.sku)}`}>
+          {lot.item.sku}
+        </BackLink>
       </p>
       <div>
         <h1 className="text-2xl font-semibold">

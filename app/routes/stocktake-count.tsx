@@ -1,5 +1,5 @@
 import { parseForm } from "~/lib/parse-form";
-import { data, Link } from "react-router";
+import { data } from "react-router";
 import type { Route } from "./+types/stocktake-count";
 import { requireCapability } from "~/auth/guard.server";
 import { AddLineForm } from "~/components/stocktakes/add-line-form";
@@ -21,6 +21,7 @@ import {
   findStocktakeSummary,
   listBlindLines,
 } from "~/stocktakes/stocktakes.server";
+import { BackLink } from "~/components/back-link";
 
 async function stocktakeOr404(value: string | undefined) {
   const id = stocktakeIdFromPath(value, (message) =>
@@ -124,12 +125,9 @@ export default function StocktakeCount({ loaderData }: Route.ComponentProps) {
     <div className="mx-auto max-w-xl space-y-5">
       <div>
         <p className="text-sm">
-          <Link
-            to={`/stocktakes/${stocktake.id}`}
-            className="text-copper-700 underline underline-offset-2"
-          >
-            ← {stocktake.reference}
-          </Link>
+          <BackLink to={`/stocktakes/${stocktake.id}`}>
+            {stocktake.reference}
+          </BackLink>
         </p>
         <h1 className="mt-1 text-2xl font-semibold">
           Count sheet {stocktake.reference}

@@ -30,6 +30,7 @@ import {
   listBlindLines,
   listReviewLines,
 } from "~/stocktakes/stocktakes.server";
+import { BackLink } from "~/components/back-link";
 
 async function stocktakeOr404(value: string | undefined) {
   const id = stocktakeIdFromPath(value, (message) =>
@@ -155,12 +156,7 @@ export default function Stocktake({
       <div className="flex flex-wrap items-start justify-between gap-4">
         <div>
           <p className="text-sm">
-            <Link
-              to="/stocktakes"
-              className="text-copper-700 underline underline-offset-2"
-            >
-              ← Stocktakes
-            </Link>
+            <BackLink to="/stocktakes">Stocktakes</BackLink>
           </p>
           <h1 className="mt-1 flex items-center gap-3 text-2xl font-semibold">
             {stocktake.reference}{" "}

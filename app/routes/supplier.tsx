@@ -33,6 +33,7 @@ import { isDomainError } from "~/lib/domain-error";
 import { todayUtc } from "~/lib/calendar-days";
 import { supplierDeliveryPerformance } from "~/purchase-orders/supplier-deliveries.server";
 import { refusalReply } from "~/lib/refusal-reply";
+import { BackLink } from "~/components/back-link";
 
 function notFound(): never {
   throw data({ message: "No such supplier." }, { status: 404 });
@@ -172,12 +173,7 @@ export default function Supplier({
   return (
     <div className="space-y-6">
       <p className="text-sm">
-        <Link
-          to="/suppliers"
-          className="text-copper-700 underline underline-offset-2"
-        >
-          ← Suppliers
-        </Link>
+        <BackLink to="/suppliers">Suppliers</BackLink>
       </p>
       <header>
         <p className="text-sm font-medium text-graphite-500">Supplier</p>

@@ -5,6 +5,7 @@ import {
   chromium,
   type Browser,
   type BrowserContext,
+  type BrowserContextOptions,
   type Page,
 } from "playwright-core";
 import { inject } from "vitest";
@@ -142,23 +143,27 @@ export function demoPerson(role: Role): { email: string; password: string } {
 /**
  * Opens a new page signed in, on the start page (hydrated): as a fresh person
  * holding `who` when it is a role (newPerson in app-client.ts), else as the
- * person given (one the test made, or demoPerson(role)).
+ * person given (one the test made, or demoPerson(role)). A desktop window
+ * unless `device` says otherwise (phoneContext in touch-targets.ts).
  */
 export async function signIn(
   browser: Browser,
   who: Role | { email: string; password: string },
+  device: BrowserContextOptions = { viewport: { width: 1280, height: 800 } },
 ): Promise<Page> {
   const person = typeof who === "string" ? await newPerson(who) : who;
-  const page = await browser.newPage({
-    viewport: { width: 1280, height: 800 },
-  });
+  const page = await browser.newPage(device);
   await page.goto(`${inject("baseUrl")}/sign-in`);
   await waitForHydration(page);
   await page.getByLabel("E-mail").fill(person.email);
   await page.getByLabel("Password").fill(person.password);
   await page.getByRole("button", { name: "Sign in" }).click();
   await page.waitForURL(`${inject("baseUrl")}/`);
-  await page.getByRole("navigation", { name: "Main" }).waitFor();
+  // The menu itself on a wide window; its button on a phone, where it is folded.
+  await page
+    .getByRole("navigation", { name: "Main" })
+    .or(page.getByRole("button", { name: "Menu" }))
+    .waitFor();
   await page.getByRole("heading", { level: 1 }).waitFor();
   await waitForHydration(page);
   return page;

@@ -2,13 +2,14 @@ import { Form } from "react-router";
 import type { listApiTokens } from "~/auth/api-tokens.server";
 import { formatDateTime } from "~/lib/format";
 import { tokenRolesText } from "./token-roles-text";
+import { TableScroll } from "~/components/table-scroll";
 
 export type ApiTokenRow = Awaited<ReturnType<typeof listApiTokens>>[number];
 
 /** The person's API tokens, newest first; a live one can be revoked, a revoked one is struck through. */
 export function ApiTokenTable({ tokens }: { tokens: ApiTokenRow[] }) {
   return (
-    <div className="panel overflow-x-auto p-0">
+    <TableScroll label="Your API tokens" className="panel p-0">
       <table className="data-table">
         <caption className="sr-only">Your API tokens</caption>
         <thead>
@@ -72,6 +73,6 @@ export function ApiTokenTable({ tokens }: { tokens: ApiTokenRow[] }) {
           )}
         </tbody>
       </table>
-    </div>
+    </TableScroll>
   );
 }

@@ -3,17 +3,13 @@ import { Link } from "react-router";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { BuildOrderStatusBadge } from "./build-order-status-badge";
+import { BackLink } from "~/components/back-link";
 
 export function BuildOrderHeading({ order }: { order: BuildOrderDetails }) {
   return (
     <>
       <p className="text-sm">
-        <Link
-          to="/build-orders"
-          className="text-copper-700 underline underline-offset-2"
-        >
-          ← Build orders
-        </Link>
+        <BackLink to="/build-orders">Build orders</BackLink>
       </p>
 
       <div className="flex flex-wrap items-start justify-between gap-4">

@@ -262,7 +262,7 @@ export function DesignFieldsSummary({ revision }: { revision: Revision }) {
         </Term>
         <Term label="Magnet arc ÷ pole pitch, α_p">
           {revision.poleCoverage === null
-            ? `${DEFAULT_POLE_COVERAGE} (default)`
+            ? `${formatQuantity(DEFAULT_POLE_COVERAGE, "", 1)} (default)`
             : formatQuantity(revision.poleCoverage, "", 3)}
         </Term>
       </dl>

@@ -8,6 +8,7 @@ import {
   ReleaseControl,
   StatusMark,
 } from "./revision-actions";
+import { BackLink } from "~/components/back-link";
 
 /**
  * The head of a design revision: the way back to the list, the design's name, the
@@ -39,12 +40,7 @@ export function RevisionHeader({
   return (
     <>
       <p className="text-sm print:hidden">
-        <Link
-          to="/designs"
-          className="text-copper-700 underline underline-offset-2"
-        >
-          ← Designs
-        </Link>
+        <BackLink to="/designs">Designs</BackLink>
       </p>
       <div className="flex flex-wrap items-start justify-between gap-4">
         <div className="min-w-0">

@@ -9,6 +9,7 @@ import {
   type PriceListField,
   type PriceListFieldInfo,
 } from "~/price-lists/column-mapping";
+import { TableScroll } from "~/components/table-scroll";
 
 export interface MappedColumn {
   header: string;
@@ -70,7 +71,10 @@ export function ColumnMappingEditor({
       : PRICE_LIST_FIELDS.find((info) => info.key === fields[0])?.hint;
   return (
     <div className="space-y-4">
-      <div className="panel overflow-x-auto p-0">
+      <TableScroll
+        label="Columns of the file and the fields they feed"
+        className="panel p-0"
+      >
         <table className="data-table">
           <caption className="sr-only">
             Columns of the file and the fields they feed
@@ -150,7 +154,7 @@ export function ColumnMappingEditor({
             ))}
           </tbody>
         </table>
-      </div>
+      </TableScroll>
       <div role="status" aria-live="polite">
         {messages.length > 0 ? (
           <div className="rounded-md border border-danger/40 bg-danger/5 px-4 py-3">

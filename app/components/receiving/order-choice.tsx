@@ -4,6 +4,7 @@
  */
 import { Form, Link } from "react-router";
 import { formatDay } from "~/lib/format";
+import { TableScroll } from "~/components/table-scroll";
 
 export interface ReceivableOrder {
   id: number;
@@ -56,36 +57,38 @@ export function OrderChoice({
         </button>
       </Form>
       {orders.length > 0 ? (
-        <table className="w-full text-sm">
-          <caption className="sr-only">Orders waiting for deliveries</caption>
-          <thead className="text-left text-graphite-500">
-            <tr>
-              <th className="py-1 font-medium">Order</th>
-              <th className="py-1 font-medium">Supplier</th>
-              <th className="py-1 font-medium">Sent</th>
-              <th className="py-1 font-medium">Status</th>
-            </tr>
-          </thead>
-          <tbody>
-            {orders.map((order) => (
-              <tr key={order.id} className="border-t border-graphite-100">
-                <td className="py-2">
-                  <Link
-                    to={`?order=${order.number}`}
-                    className="font-medium text-copper-700 underline-offset-2 hover:underline"
-                  >
-                    {order.number}
-                  </Link>
-                </td>
-                <td className="py-2">{order.supplier}</td>
-                <td className="py-2 tabular-nums">
-                  {order.orderedOn ? formatDay(order.orderedOn) : "—"}
-                </td>
-                <td className="py-2">{order.statusLabel}</td>
+        <TableScroll label="Orders waiting for deliveries">
+          <table className="w-full text-sm">
+            <caption className="sr-only">Orders waiting for deliveries</caption>
+            <thead className="text-left text-graphite-500">
+              <tr>
+                <th className="py-1 font-medium">Order</th>
+                <th className="py-1 font-medium">Supplier</th>
+                <th className="py-1 font-medium">Sent</th>
+                <th className="py-1 font-medium">Status</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {orders.map((order) => (
+                <tr key={order.id} className="border-t border-graphite-100">
+                  <td className="py-2">
+                    <Link
+                      to={`?order=${order.number}`}
+                      className="font-medium text-copper-700 underline-offset-2 hover:underline"
+                    >
+                      {order.number}
+                    </Link>
+                  </td>
+                  <td className="py-2">{order.supplier}</td>
+                  <td className="py-2 tabular-nums">
+                    {order.orderedOn ? formatDay(order.orderedOn) : "—"}
+                  </td>
+                  <td className="py-2">{order.statusLabel}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </TableScroll>
       ) : (
         <p className="text-graphite-500">
           No order is waiting for a delivery. A receipt without an order is

@@ -25,7 +25,7 @@ export function PriceHistoryFigures({
   const unitWord = perUnitWord(history.unit);
   return (
     <details className="text-sm">
-      <summary className="cursor-pointer font-medium text-graphite-800">
+      <summary className="cursor-pointer font-medium text-graphite-800 touch:py-3">
         Figures of the price history
       </summary>
       <div className="mt-2">

@@ -57,7 +57,7 @@ export function StockListFilter({ view }: { view: StockListView }) {
           <option value="part">Other part</option>
         </select>
       </div>
-      <label className="flex items-center gap-2 pb-2 text-sm">
+      <label className="flex items-center gap-2 pb-2 text-sm touch:min-h-11">
         <input
           type="checkbox"
           name="belowReorder"
@@ -67,7 +67,7 @@ export function StockListFilter({ view }: { view: StockListView }) {
         />
         Below reorder point only
       </label>
-      <label className="flex items-center gap-2 pb-2 text-sm">
+      <label className="flex items-center gap-2 pb-2 text-sm touch:min-h-11">
         <input
           type="checkbox"
           name="archived"

@@ -2,6 +2,7 @@
 import { Form, useNavigation } from "react-router";
 import { formatDay } from "~/lib/format";
 import { moneyText } from "~/lib/unit-text";
+import { TableScroll } from "~/components/table-scroll";
 
 export interface PlannedLocationRow {
   code: string;
@@ -38,7 +39,7 @@ export function CycleCountPanel({
         <p className="text-sm text-graphite-700">Nothing is due this week.</p>
       ) : (
         <>
-          <div className="overflow-x-auto">
+          <TableScroll label="Locations due for a count this week">
             <table className="data-table">
               <caption className="sr-only">
                 Locations due for a count this week
@@ -74,7 +75,7 @@ export function CycleCountPanel({
                 ))}
               </tbody>
             </table>
-          </div>
+          </TableScroll>
           {canStart ? (
             <Form method="post">
               <input type="hidden" name="intent" value="start" />

@@ -7,6 +7,7 @@ import {
   formatStockQuantity,
 } from "~/stock/stock-quantity-text";
 import type { StocktakeReview } from "~/stocktakes/stocktake-review";
+import { TableScroll } from "~/components/table-scroll";
 
 /** Money with its sign, a true minus for less: "+42.50", "−19.74" (the variance column's style). */
 const signedMoney = (value: number, currency = "") =>
@@ -35,11 +36,10 @@ export function ReviewTable({
         during the count are not counted as differences. Values at each item's
         average cost.
       </p>
-      <div
-        className="overflow-x-auto rounded-lg border border-rule bg-sheet"
-        tabIndex={0}
-        role="region"
-        aria-label="Review table, scrolls sideways"
+      <TableScroll
+        label="Review table"
+        className="rounded-lg border border-rule bg-sheet"
+        widerThanPanel
       >
         <table className="data-table">
           <caption className="sr-only">
@@ -171,7 +171,7 @@ export function ReviewTable({
             </tr>
           </tfoot>
         </table>
-      </div>
+      </TableScroll>
     </section>
   );
 }
