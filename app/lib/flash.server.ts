@@ -30,9 +30,21 @@ export async function redirectWithFlash(
   url: string,
   note: FlashNote,
 ): Promise<Response> {
-  return redirect(url, {
-    headers: { "Set-Cookie": await flashCookie.serialize(note) },
-  });
+  return redirect(url, { headers: await flashHeaders(note) });
+}
+
+/**
+ * The header that leaves a one-time message with an answer that is not a
+ * redirect: a fetcher's answer (the count sheet, the design editor), after
+ * which the client router reloads the app shell's data, which takes the
+ * message. A form sent without JavaScript gets its answer rendered in the same
+ * request, before the shell could read the note: such routes keep their
+ * redirects wherever a plain form can reach them.
+ */
+export async function flashHeaders(
+  note: FlashNote,
+): Promise<{ "Set-Cookie": string }> {
+  return { "Set-Cookie": await flashCookie.serialize(note) };
 }
 
 async function textOf(note: FlashNote): Promise<string | null> {

@@ -13,6 +13,7 @@ import { changePasswordAction } from "~/components/account/change-password-actio
 import { ChangePasswordForm } from "~/components/account/change-password-form";
 import { LowStockMailChoice } from "~/components/account/low-stock-mail-choice";
 import { userCan } from "~/lib/capabilities";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { roleLabels } from "~/lib/roles";
 import {
   alertPreferenceOf,
@@ -83,11 +84,7 @@ export async function action({ request, context }: Route.ActionArgs) {
         { status: 400 },
       );
     await setAlertPreference(user.id, parsed.data.mode);
-    return {
-      result: null,
-      newToken: null,
-      notice: "Low-stock e-mail choice saved.",
-    };
+    return redirectWithFlash("/account", { code: "alert-mail-saved" });
   }
   if (formData.get("intent") === "revoke") {
     const parsed = revokeSchema.safeParse({ tokenId: formData.get("tokenId") });
@@ -100,11 +97,7 @@ export async function action({ request, context }: Route.ActionArgs) {
         { status: 404 },
       );
     }
-    return {
-      result: null,
-      newToken: null,
-      notice: "Token revoked: it no longer works.",
-    };
+    return redirectWithFlash("/account", { code: "token-revoked" });
   }
   const submission = parseWithZod(formData, {
     schema: createTokenSchema
