@@ -238,6 +238,32 @@ describe("flashText", () => {
     );
   });
 
+  it("names the person or the revision an admin's or a builder's change was about", () => {
+    const ada = { name: "Ada Winder", email: "ada@shop.example" };
+    expect(flashText("person-deactivated", ada)).toBe(
+      "Ada Winder is deactivated, signed out everywhere, and their API tokens are revoked.",
+    );
+    expect(flashText("person-invited", ada)).toBe(
+      "Invitation sent to ada@shop.example.",
+    );
+    expect(
+      flashText("design-revision-released", {
+        design: "Hub motor 48V",
+        revision: 2,
+      }),
+    ).toBe(
+      "Revision 2 of Hub motor 48V is released: it is read-only from now on.",
+    );
+  });
+
+  it("reads a person's id as text, never as a number", () => {
+    expect(
+      readFlashNote({ code: "person-deactivated", id: "u_7h2k9x" }),
+    ).toEqual({ code: "person-deactivated", id: "u_7h2k9x" });
+    expect(readFlashNote({ code: "person-deactivated", id: 7 })).toBeNull();
+    expect(readFlashNote({ code: "token-revoked", id: 7 })).toBeNull();
+  });
+
   it("has a sentence for every code, whatever its subject", () => {
     const order = { reference: "BO-0001", quantity: 2, held: [], short: [] };
     const subjects: Record<FlashSubjectKind, unknown> = {
@@ -259,6 +285,8 @@ describe("flashText", () => {
       },
       designLine: { position: 1, sku: "CU-0.71", strands: 2, revision: 3 },
       lot: { number: "S-24-117", sku: "CU-0.71", holdReason: "Enamel cracks" },
+      person: { name: "Ada Winder", email: "ada@shop.example" },
+      revision: { design: "Hub motor 48V", revision: 2 },
     };
     for (const code of Object.keys(flashMessageSubjects) as FlashCode[]) {
       const subject = subjects[flashMessageSubjects[code]];

@@ -76,6 +76,10 @@ export interface FlashSubjects {
   };
   /** A lot after a hold or a release: its number, its item, why it is held (null when free). */
   lot: { number: string; sku: string; holdReason: string | null };
+  /** A person's account, as an admin's messages name it. */
+  person: { name: string; email: string };
+  /** A design revision: its design's name and its number. */
+  revision: { design: string; revision: number };
 }
 
 export type FlashSubjectKind = keyof FlashSubjects;
@@ -121,6 +125,22 @@ export const flashMessageSubjects = {
   "stocktake-recount-asked": "none",
   "stocktake-count-saved": "none",
   "stocktake-line-added": "none",
+  "alert-mail-saved": "none",
+  "token-revoked": "none",
+  "password-set": "none",
+  "person-invited": "person",
+  "person-invited-mail-waiting": "person",
+  "person-roles-saved": "person",
+  "person-deactivated": "person",
+  "person-reactivated": "person",
+  "invitation-resent": "person",
+  "invitation-waiting": "person",
+  "design-created": "revision",
+  "design-motor-saved": "none",
+  "design-line-saved": "none",
+  "design-line-removed": "none",
+  "design-revision-released": "revision",
+  "design-revision-started": "revision",
 } as const satisfies Record<string, FlashSubjectKind>;
 
 export type FlashCode = keyof typeof flashMessageSubjects;
@@ -128,8 +148,9 @@ type SubjectOf<Code extends FlashCode> =
   FlashSubjects[(typeof flashMessageSubjects)[Code]];
 
 /**
- * How the note names its subject: a database id (a positive whole number) or a
- * magnet grade's key; messages about nothing in particular carry no id.
+ * How the note names its subject: a database id (a positive whole number), a
+ * magnet grade's key or a person's id (text); messages about nothing in
+ * particular carry no id.
  */
 const idKinds = {
   none: "none",
@@ -142,6 +163,8 @@ const idKinds = {
   purchaseReceipt: "number",
   designLine: "number",
   lot: "number",
+  person: "key",
+  revision: "number",
 } as const satisfies Record<FlashSubjectKind, "none" | "number" | "key">;
 
 type IdOf<Kind extends FlashSubjectKind> = {
@@ -250,6 +273,31 @@ const texts: {
     "Recount asked: the line's count is cleared until it is counted again.",
   "stocktake-count-saved": () => "Count saved.",
   "stocktake-line-added": () => "Line added to the sheet: count it now.",
+  "alert-mail-saved": () => "Low-stock e-mail choice saved.",
+  "token-revoked": () => "Token revoked: it no longer works.",
+  "password-set": () => "Password saved: you are signed in.",
+  "person-invited": (person) => `Invitation sent to ${person.email}.`,
+  "person-invited-mail-waiting": (person) =>
+    `Account created for ${person.email}; the e-mail could not be sent yet and waits in the outbox.`,
+  "person-roles-saved": (person) =>
+    `Roles saved. ${person.name} is signed out everywhere and their API tokens are revoked.`,
+  "person-deactivated": (person) =>
+    `${person.name} is deactivated, signed out everywhere, and their API tokens are revoked.`,
+  "person-reactivated": (person) => `${person.name} can sign in again.`,
+  "invitation-resent": (person) =>
+    `A new link is on its way to ${person.email}; earlier links no longer work.`,
+  "invitation-waiting": (person) =>
+    `The new link for ${person.email} waits in the outbox: SMTP did not accept it.`,
+  "design-created": (revision) =>
+    `${revision.design} created: revision ${revision.revision} is a draft, add its lines.`,
+  "design-motor-saved": () => "Motor figures saved.",
+  "design-line-saved": () => "Line saved.",
+  "design-line-removed": () =>
+    "Line removed: the lines after it moved up one place.",
+  "design-revision-released": (revision) =>
+    `Revision ${revision.revision} of ${revision.design} is released: it is read-only from now on.`,
+  "design-revision-started": (revision) =>
+    `Revision ${revision.revision} of ${revision.design} started as a draft.`,
 };
 
 /** The words of a message, from the table and the subject the server looked up. */

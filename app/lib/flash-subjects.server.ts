@@ -12,6 +12,7 @@ import {
   buildOrderLines,
   designLines,
   designRevisions,
+  designs,
   items,
   locations,
   lots,
@@ -21,6 +22,7 @@ import {
   purchaseReceipts,
   stockMovements,
   suppliers,
+  users,
 } from "~/db/schema";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import {
@@ -216,6 +218,27 @@ async function lot(id: number) {
   return row ?? null;
 }
 
+/** A person by their id. */
+async function person(id: string) {
+  const [row] = await db
+    .select({ name: users.name, email: users.email })
+    .from(users)
+    .where(eq(users.id, id))
+    .limit(1);
+  return row ?? null;
+}
+
+/** A design revision with its design's name. */
+async function revision(id: number) {
+  const [row] = await db
+    .select({ design: designs.name, revision: designRevisions.revision })
+    .from(designRevisions)
+    .innerJoin(designs, eq(designs.id, designRevisions.designId))
+    .where(eq(designRevisions.id, id))
+    .limit(1);
+  return row ?? null;
+}
+
 /** The subject of a note's message, or null when it no longer exists. */
 export async function flashSubjectOf(
   note: FlashNote,
@@ -242,5 +265,9 @@ export async function flashSubjectOf(
       return designLine(note.id as number);
     case "lot":
       return lot(note.id as number);
+    case "person":
+      return person(note.id as string);
+    case "revision":
+      return revision(note.id as number);
   }
 }

@@ -7,6 +7,8 @@
 import { randomUUID } from "node:crypto";
 import { createCookie, redirect } from "react-router";
 import { cookieIsSecure } from "~/auth/lucia.server";
+import { userCan } from "./capabilities";
+import type { Role } from "./roles";
 import {
   flashText,
   readFlashNote,
@@ -30,12 +32,31 @@ export async function redirectWithFlash(
   url: string,
   note: FlashNote,
 ): Promise<Response> {
-  return redirect(url, {
-    headers: { "Set-Cookie": await flashCookie.serialize(note) },
-  });
+  return redirect(url, { headers: await flashHeaders(note) });
 }
 
-async function textOf(note: FlashNote): Promise<string | null> {
+/**
+ * The header that leaves a one-time message with an answer that is not a
+ * redirect: a fetcher's answer (the count sheet, the design editor), after
+ * which the client router reloads the app shell's data, which takes the
+ * message. A form sent without JavaScript gets its answer rendered in the same
+ * request, before the shell could read the note: such routes keep their
+ * redirects wherever a plain form can reach them.
+ */
+export async function flashHeaders(
+  note: FlashNote,
+): Promise<{ "Set-Cookie": string }> {
+  return { "Set-Cookie": await flashCookie.serialize(note) };
+}
+
+async function textOf(
+  note: FlashNote,
+  reader: { roles: readonly Role[] },
+): Promise<string | null> {
+  // A person's name and e-mail are for those who keep people: a note made by
+  // hand about someone shows nothing to anyone else.
+  if (subjectKindOf(note) === "person" && !userCan(reader, "managePeople"))
+    return null;
   if (subjectKindOf(note) === "none")
     return flashText(note.code, null as never);
   const subject = await flashSubjectOf(note);
@@ -49,11 +70,12 @@ async function textOf(note: FlashNote): Promise<string | null> {
  */
 export async function takeFlash(
   request: Request,
+  reader: { roles: readonly Role[] },
 ): Promise<{ flash: ShownFlash | null; setCookie: string | null }> {
   const value: unknown = await flashCookie.parse(request.headers.get("Cookie"));
   if (value === null) return { flash: null, setCookie: null };
   const setCookie = await flashCookie.serialize("", { maxAge: 0 });
   const note = readFlashNote(value);
-  const text = note ? await textOf(note) : null;
+  const text = note ? await textOf(note, reader) : null;
   return { flash: text ? { text, key: randomUUID() } : null, setCookie };
 }

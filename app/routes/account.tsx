@@ -13,6 +13,7 @@ import { changePasswordAction } from "~/components/account/change-password-actio
 import { ChangePasswordForm } from "~/components/account/change-password-form";
 import { LowStockMailChoice } from "~/components/account/low-stock-mail-choice";
 import { userCan } from "~/lib/capabilities";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { roleLabels } from "~/lib/roles";
 import {
   alertPreferenceOf,
@@ -30,7 +31,6 @@ import {
 import { checkSignIn } from "~/people/people.server";
 import { DisplaySettingsForm } from "~/components/account/display-settings-form";
 import { displaySettingsOf } from "~/lib/display-settings";
-import { redirectWithFlash } from "~/lib/flash.server";
 import {
   displaySettingsSchema,
   timeZoneChoices,
@@ -110,11 +110,7 @@ export async function action({ request, context }: Route.ActionArgs) {
         { status: 400 },
       );
     await setAlertPreference(user.id, parsed.data.mode);
-    return {
-      result: null,
-      newToken: null,
-      notice: "Low-stock e-mail choice saved.",
-    };
+    return redirectWithFlash("/account", { code: "alert-mail-saved" });
   }
   if (formData.get("intent") === "revoke") {
     const parsed = revokeSchema.safeParse({ tokenId: formData.get("tokenId") });
@@ -127,11 +123,7 @@ export async function action({ request, context }: Route.ActionArgs) {
         { status: 404 },
       );
     }
-    return {
-      result: null,
-      newToken: null,
-      notice: "Token revoked: it no longer works.",
-    };
+    return redirectWithFlash("/account", { code: "token-revoked" });
   }
   const submission = parseForm(formData, {
     schema: createTokenSchema

@@ -1,4 +1,8 @@
-import { getFormProps, useForm } from "@conform-to/react";
+import {
+  getFormProps,
+  useForm,
+  type SubmissionResult,
+} from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
 import { createColumnHelper } from "@tanstack/react-table";
@@ -7,9 +11,11 @@ import type { Route } from "./+types/admin-people";
 import { requireCapability } from "~/auth/guard.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import { DataTable } from "~/components/data-table";
+import { useFlash } from "~/components/flash-message";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages, TextField } from "~/components/text-field";
 import { appUrl } from "~/lib/app-url.server";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime } from "~/lib/format";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
 import { inviteSchema } from "~/lib/people-schemas";
@@ -46,15 +52,15 @@ export async function action({ request }: Route.ActionArgs) {
     async: true,
   });
   if (submission.status !== "success") {
-    return data({ result: submission.reply(), invited: null }, { status: 400 });
+    return data({ result: submission.reply() }, { status: 400 });
   }
-  let mailSent: boolean;
+  let invited: { userId: string; mailSent: boolean };
   try {
-    ({ mailSent } = await invitePerson({
+    invited = await invitePerson({
       ...submission.value,
       invitedBy: admin.name,
       appUrl: appUrl(),
-    }));
+    });
   } catch (error) {
     if (!isDuplicateKey(error)) throw error;
     const result = submission.reply({
@@ -62,12 +68,12 @@ export async function action({ request }: Route.ActionArgs) {
         email: ["Someone already has an account with this e-mail."],
       },
     });
-    return data({ result, invited: null }, { status: 409 });
+    return data({ result }, { status: 409 });
   }
-  return {
-    result: submission.reply({ resetForm: true }),
-    invited: { email: submission.value.email, mailSent },
-  };
+  return redirectWithFlash("/admin/people", {
+    code: invited.mailSent ? "person-invited" : "person-invited-mail-waiting",
+    id: invited.userId,
+  });
 }
 
 export const meta: Route.MetaFunction = () => [
@@ -119,17 +125,8 @@ export default function AdminPeople({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const navigation = useNavigation();
-  const [form, fields] = useForm({
-    id: "invite",
-    lastResult: actionData?.result,
-    constraint: getZodConstraint(inviteSchema),
-    shouldValidate: "onBlur",
-    shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: inviteSchema });
-    },
-  });
+  // A new key after each invitation (its message) empties the form.
+  const invited = useFlash()?.key ?? "new";
   return (
     <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
       <section aria-labelledby="people-heading">
@@ -145,39 +142,50 @@ export default function AdminPeople({
           pageHref={(page) => `?page=${page}`}
         />
       </section>
-      <section aria-labelledby="invite-heading" className="panel h-fit">
-        <h2 id="invite-heading" className="mb-3 text-lg font-semibold">
-          Invite someone
-        </h2>
-        {actionData?.invited ? (
-          <p
-            role="status"
-            className="mb-3 rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
-          >
-            {actionData.invited.mailSent
-              ? `Invitation sent to ${actionData.invited.email}.`
-              : `Account created for ${actionData.invited.email}; the e-mail could not be sent yet and waits in the outbox.`}
-          </p>
-        ) : null}
-        <Form method="post" {...getFormProps(form)} className="space-y-4">
-          <FormMessages id={form.errorId} errors={form.errors} />
-          <TextField field={fields.name} label="Name" autoComplete="off" />
-          <TextField
-            field={fields.email}
-            label="E-mail"
-            type="email"
-            autoComplete="off"
-          />
-          <RoleCheckboxes field={fields.roles} />
-          <button
-            type="submit"
-            className="button-primary w-full"
-            disabled={navigation.state !== "idle"}
-          >
-            Send invitation
-          </button>
-        </Form>
-      </section>
+      <InviteForm key={invited} lastResult={actionData?.result} />
     </div>
+  );
+}
+
+function InviteForm({
+  lastResult,
+}: {
+  lastResult: SubmissionResult<string[]> | undefined;
+}) {
+  const navigation = useNavigation();
+  const [form, fields] = useForm({
+    id: "invite",
+    lastResult,
+    constraint: getZodConstraint(inviteSchema),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+    onValidate({ formData }) {
+      return parseForm(formData, { schema: inviteSchema });
+    },
+  });
+  return (
+    <section aria-labelledby="invite-heading" className="panel h-fit">
+      <h2 id="invite-heading" className="mb-3 text-lg font-semibold">
+        Invite someone
+      </h2>
+      <Form method="post" {...getFormProps(form)} className="space-y-4">
+        <FormMessages id={form.errorId} errors={form.errors} />
+        <TextField field={fields.name} label="Name" autoComplete="off" />
+        <TextField
+          field={fields.email}
+          label="E-mail"
+          type="email"
+          autoComplete="off"
+        />
+        <RoleCheckboxes field={fields.roles} />
+        <button
+          type="submit"
+          className="button-primary w-full"
+          disabled={navigation.state !== "idle"}
+        >
+          Send invitation
+        </button>
+      </Form>
+    </section>
   );
 }

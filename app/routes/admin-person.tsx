@@ -5,9 +5,11 @@ import { data, Form, useNavigation } from "react-router";
 import type { Route } from "./+types/admin-person";
 import { createEmailToken } from "~/auth/email-tokens.server";
 import { requireCapability } from "~/auth/guard.server";
+import { ConfirmButton } from "~/components/confirm-button";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages } from "~/components/text-field";
 import { appUrl } from "~/lib/app-url.server";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { personUpdateSchema } from "~/lib/people-schemas";
 import { invitationMessage } from "~/mail/account-messages";
 import { sendMail } from "~/mail/mailer.server";
@@ -34,11 +36,11 @@ export async function action({ request, params }: Route.ActionArgs) {
     schema: personUpdateSchema,
   });
   if (submission.status !== "success") {
-    return data({ result: submission.reply(), done: null }, { status: 400 });
+    return data({ result: submission.reply() }, { status: 400 });
   }
   const refuse = (message: string) =>
     data(
-      { result: submission.reply({ formErrors: [message] }), done: null },
+      { result: submission.reply({ formErrors: [message] }) },
       { status: 409 },
     );
   const change = submission.value;
@@ -56,25 +58,26 @@ export async function action({ request, params }: Route.ActionArgs) {
     return refuse("You cannot deactivate yourself.");
   }
 
+  const here = `/admin/people/${encodeURIComponent(person.id)}`;
   switch (change.intent) {
     case "save-roles":
       await setRoles(person.id, change.roles);
-      return {
-        result: submission.reply(),
-        done: `Roles saved. ${person.name} is signed out everywhere and their API tokens are revoked.`,
-      };
+      return redirectWithFlash(here, {
+        code: "person-roles-saved",
+        id: person.id,
+      });
     case "deactivate":
       await setActive(person.id, false);
-      return {
-        result: submission.reply(),
-        done: `${person.name} is deactivated, signed out everywhere, and their API tokens are revoked.`,
-      };
+      return redirectWithFlash(here, {
+        code: "person-deactivated",
+        id: person.id,
+      });
     case "reactivate":
       await setActive(person.id, true);
-      return {
-        result: submission.reply(),
-        done: `${person.name} can sign in again.`,
-      };
+      return redirectWithFlash(here, {
+        code: "person-reactivated",
+        id: person.id,
+      });
     case "resend-invitation": {
       const token = await createEmailToken(person.id, "invitation");
       const sent = await sendMail({
@@ -85,12 +88,10 @@ export async function action({ request, params }: Route.ActionArgs) {
           link: `${appUrl()}/set-password?token=${token}`,
         }),
       });
-      return {
-        result: submission.reply(),
-        done: sent
-          ? "A new link is on its way; earlier links no longer work."
-          : "The e-mail waits in the outbox: SMTP did not accept it.",
-      };
+      return redirectWithFlash(here, {
+        code: sent ? "invitation-resent" : "invitation-waiting",
+        id: person.id,
+      });
     }
   }
 }
@@ -126,14 +127,6 @@ export default function AdminPerson({
           {person.email} · {person.active ? "active" : "deactivated"}
         </p>
       </div>
-      {actionData?.done ? (
-        <p
-          role="status"
-          className="rounded-md bg-ok/10 px-3 py-2 text-sm text-ok"
-        >
-          {actionData.done}
-        </p>
-      ) : null}
       <FormMessages id={form.errorId} errors={form.errors} />
       <Form method="post" {...getFormProps(form)} className="panel space-y-4">
         <RoleCheckboxes field={fields.roles} legend="Roles" />
@@ -159,15 +152,27 @@ export default function AdminPerson({
               {isSelf ? "your" : "their"} API tokens at once; the history they
               made stays.
             </p>
-            <button
-              type="submit"
+            <ConfirmButton
               name="intent"
               value="deactivate"
               className="button-quiet text-danger"
               disabled={isSelf}
+              question={{
+                title: `Deactivate ${person.name}?`,
+                consequence: (
+                  <p>
+                    {person.name} is signed out everywhere at once, their API
+                    tokens are revoked for good and they can no longer sign in.
+                    What they recorded stays. An admin can reactivate them
+                    later, but the tokens stay revoked.
+                  </p>
+                ),
+                confirmLabel: `Deactivate ${person.name}`,
+                keepLabel: "Keep them active",
+              }}
             >
               Deactivate
-            </button>
+            </ConfirmButton>
           </>
         ) : (
           <>

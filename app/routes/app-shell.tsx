@@ -13,7 +13,7 @@ import { navigationItems, showsNavigationItem } from "~/lib/navigation";
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
   // The one-time message after an action: taken here, for whichever page comes next.
-  const { flash, setCookie } = await takeFlash(request);
+  const { flash, setCookie } = await takeFlash(request, user);
   const headers = new Headers(await sessionHeaders(request));
   if (setCookie) headers.append("Set-Cookie", setCookie);
   return data({ user, flash, display: displaySettingsOf(user) }, { headers });

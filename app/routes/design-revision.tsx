@@ -38,7 +38,8 @@ import {
 } from "~/designs/designs.server";
 import { userCan } from "~/lib/capabilities";
 import { isDomainError } from "~/lib/domain-error";
-import { redirectWithFlash } from "~/lib/flash.server";
+import { flashHeaders, redirectWithFlash } from "~/lib/flash.server";
+import type { FlashNote } from "~/lib/flash-messages";
 import { WireSubstitutesPanel } from "~/components/design/wire-substitutes-panel";
 import {
   readSubstituteQuery,
@@ -78,6 +79,15 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 type Answer = DesignActionAnswer;
 const answer = (body: Answer, status = 200) => data(body, { status });
+/** A change made: the answer for the fetcher, and the one-time message the shell then shows. */
+const doneAnswer = async (body: Answer, note: FlashNote) =>
+  data(body, { headers: await flashHeaders(note) });
+
+/** The row id of a revision, which messages about it name. */
+async function revisionRowId(designId: number, revision: number) {
+  const found = await findRevision(designId, revision);
+  return found?.revision.id ?? null;
+}
 
 /** A refusal of the data layer (released, unknown item …) as the form shows it; other errors go on. */
 function refusal(
@@ -177,7 +187,10 @@ export async function action({ request, params }: Route.ActionArgs) {
       } catch (error) {
         return refusal(intent, submission, error);
       }
-      return answer({ intent, ok: true, result: submission.reply() });
+      return doneAnswer(
+        { intent, ok: true, result: submission.reply() },
+        { code: "design-motor-saved" },
+      );
     }
 
     case "save-line":
@@ -235,12 +248,20 @@ export async function action({ request, params }: Route.ActionArgs) {
           },
           409,
         );
-      return answer({
-        intent,
-        ok: true,
-        result: submission?.reply(),
-        position: change.index >= 0 ? change.index + 1 : undefined,
-      });
+      return doneAnswer(
+        {
+          intent,
+          ok: true,
+          result: submission?.reply(),
+          position: change.index >= 0 ? change.index + 1 : undefined,
+        },
+        {
+          code:
+            intent === "remove-line"
+              ? "design-line-removed"
+              : "design-line-saved",
+        },
+      );
     }
 
     case "release": {
@@ -249,11 +270,15 @@ export async function action({ request, params }: Route.ActionArgs) {
       } catch (error) {
         return plainRefusal(intent, error);
       }
-      return answer({
+      const body: Answer = {
         intent,
         ok: true,
         message: `Revision ${ids.revision} is released: it is read-only from now on.`,
-      });
+      };
+      const rowId = await revisionRowId(ids.designId, ids.revision);
+      return rowId === null
+        ? answer(body)
+        : doneAnswer(body, { code: "design-revision-released", id: rowId });
     }
 
     case "use-substitute":
@@ -266,7 +291,14 @@ export async function action({ request, params }: Route.ActionArgs) {
       } catch (error) {
         return plainRefusal(intent, error);
       }
-      return redirect(`/designs/${ids.designId}/revisions/${next.revision}`);
+      const page = `/designs/${ids.designId}/revisions/${next.revision}`;
+      const rowId = await revisionRowId(ids.designId, next.revision);
+      return rowId === null
+        ? redirect(page)
+        : redirectWithFlash(page, {
+            code: "design-revision-started",
+            id: rowId,
+          });
     }
   }
 }

@@ -19,7 +19,9 @@ import {
   insulationClasses,
   newDesignFormSchema,
 } from "~/designs/design-schemas";
+import { findRevision } from "~/designs/design-revisions.server";
 import { createDesign, listDesigns } from "~/designs/designs.server";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
 import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
@@ -62,7 +64,11 @@ export async function action({ request }: Route.ActionArgs) {
     const result = refusalReply(submission, error.field, error.message);
     return data({ result }, { status: error.status });
   }
-  return redirect(`/designs/${created.id}/revisions/${created.revision}`);
+  const page = `/designs/${created.id}/revisions/${created.revision}`;
+  const made = await findRevision(created.id, created.revision);
+  return made
+    ? redirectWithFlash(page, { code: "design-created", id: made.revision.id })
+    : redirect(page);
 }
 
 export const meta: Route.MetaFunction = () => [

@@ -139,6 +139,7 @@ export default function PurchaseOrder({
           ) : null}
           {can.order ? (
             <EndOrderPanel
+              orderNumber={order.number}
               status={order.status}
               cancelResult={resultFor("cancel")}
               closeResult={resultFor("close")}

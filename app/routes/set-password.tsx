@@ -17,6 +17,7 @@ import {
   passwordMinimum,
   passwordWorkBusyMessage,
 } from "~/lib/account-schemas";
+import { flashHeaders } from "~/lib/flash.server";
 import { setPasswordWithToken } from "~/people/people.server";
 
 const unusableLinkMessage =
@@ -78,9 +79,9 @@ export async function action({ request }: Route.ActionArgs) {
       { status: 410 },
     );
   }
-  throw redirect("/", {
-    headers: { "Set-Cookie": await startSession(result.userId) },
-  });
+  const headers = new Headers(await flashHeaders({ code: "password-set" }));
+  headers.append("Set-Cookie", await startSession(result.userId));
+  throw redirect("/", { headers });
 }
 
 /** Sends the action's Retry-After (when busy) with the page. */

@@ -5,6 +5,7 @@ import { requireCapability } from "~/auth/guard.server";
 import { AddLineForm } from "~/components/stocktakes/add-line-form";
 import { CountLineForm } from "~/components/stocktakes/count-line-form";
 import { isDomainError } from "~/lib/domain-error";
+import { flashHeaders } from "~/lib/flash.server";
 import { refusalReply } from "~/lib/refusal-reply";
 import { countSheet, nextLineId } from "~/stocktakes/count-sheet";
 import {
@@ -74,12 +75,15 @@ export async function action({ request, params }: Route.ActionArgs) {
       );
     try {
       await recordCount(stocktake.id, submission.value, user.id);
-      return {
-        intent,
-        lineId,
-        saved: true,
-        result: submission.reply({ resetForm: true }),
-      };
+      return data(
+        {
+          intent,
+          lineId,
+          saved: true,
+          result: submission.reply({ resetForm: true }),
+        },
+        { headers: await flashHeaders({ code: "stocktake-count-saved" }) },
+      );
     } catch (error) {
       if (!isDomainError(error)) throw error;
       return data(
@@ -97,12 +101,15 @@ export async function action({ request, params }: Route.ActionArgs) {
     return data({ intent, result: submission.reply() }, { status: 400 });
   try {
     const added = await addFoundLine(stocktake.id, submission.value);
-    return {
-      intent,
-      lineId: added.lineId,
-      saved: true,
-      result: submission.reply({ resetForm: true }),
-    };
+    return data(
+      {
+        intent,
+        lineId: added.lineId,
+        saved: true,
+        result: submission.reply({ resetForm: true }),
+      },
+      { headers: await flashHeaders({ code: "stocktake-line-added" }) },
+    );
   } catch (error) {
     if (!isDomainError(error)) throw error;
     return data(

@@ -2,6 +2,7 @@ import { parseForm } from "~/lib/parse-form";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stocktake";
 import { refuseUnless } from "~/auth/guard.server";
+import { ConfirmButton } from "~/components/confirm-button";
 import { ReviewTable } from "~/components/stocktakes/review-table";
 import { StocktakeStatusBadge } from "~/components/stocktakes/stocktake-status-badge";
 import { FormMessages } from "~/components/text-field";
@@ -248,13 +249,24 @@ export default function Stocktake({
           {can.cancel ? (
             <Form method="post">
               <input type="hidden" name="intent" value="cancel" />
-              <button
-                type="submit"
+              <ConfirmButton
                 className="button-quiet"
                 disabled={navigation.state !== "idle"}
+                question={{
+                  title: `Cancel ${stocktake.reference}?`,
+                  consequence: (
+                    <p>
+                      Its counts are set aside and nothing is posted to the
+                      books. A cancelled stocktake cannot be reopened: start a
+                      new one to count again.
+                    </p>
+                  ),
+                  confirmLabel: `Cancel ${stocktake.reference}`,
+                  keepLabel: "Keep counting",
+                }}
               >
                 Cancel this stocktake
-              </button>
+              </ConfirmButton>
             </Form>
           ) : null}
         </section>

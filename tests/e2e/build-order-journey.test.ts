@@ -196,6 +196,11 @@ describe("a build order from the builder to the store", () => {
     expect(await shortRow.textContent()).toContain("76\u00a0pieces");
     await saveScreenshot(page, "build-order-short");
     await page.getByRole("button", { name: "Cancel build order" }).click();
+    // The shared confirmation dialog asks once before the order is cancelled.
+    await page
+      .getByRole("dialog", { name: /^Cancel BO-\d+\?$/ })
+      .getByRole("button", { name: /^Cancel BO-\d+$/ })
+      .click();
     await page.getByRole("status").filter({ hasText: "cancelled" }).waitFor();
     expect(await page.getByText("Cancelled").first().isVisible()).toBe(true);
     const cancelledId = new URL(page.url()).pathname.split("/").pop();

@@ -10,6 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sendJson, signInAs } from "../support/app-client";
 import path from "node:path";
 import {
+  flashAfter,
   launchBrowser,
   saveScreenshot,
   screenshotFolder,
@@ -189,8 +190,9 @@ describe("design editor", () => {
   it("saves the motor figures and shows the first-order torque estimate, labelled as such", async () => {
     await page.getByLabel("Air-gap radius").fill("30");
     await page.getByLabel("Air-gap flux density").fill("0.9");
-    await page.getByRole("button", { name: "Save motor figures" }).click();
-    await page.getByText("Saved. The figures below are up to date.").waitFor();
+    await flashAfter(page, "Motor figures saved.", () =>
+      page.getByRole("button", { name: "Save motor figures" }).click(),
+    );
     // T = Kt · I = 3 · √2 · k_w1 · N_ph · B̂₁ · r · L · I: 12 slots / 14 poles double layer,
     // k_w1 0.9330 (Libert & Soulard's table, from memory), N_ph = 12 × 40 ÷ 3 = 160,
     // B̂₁ = (4/π) · 0.9 T · sin(0.8 · 90°) = 1.0898 T, r 30 mm, L 50 mm, 10 A RMS per phase
@@ -240,8 +242,9 @@ describe("design editor", () => {
       .waitFor();
     await page.getByLabel("Slots", { exact: true }).fill("12");
     await page.getByLabel("Rated speed (rpm)", { exact: true }).fill("3000");
-    await page.getByRole("button", { name: "Save motor figures" }).click();
-    await page.getByText("Saved. The figures below are up to date.").waitFor();
+    await flashAfter(page, "Motor figures saved.", () =>
+      page.getByRole("button", { name: "Save motor figures" }).click(),
+    );
     // 7 pole pairs × 3000 rpm ÷ 60 = 350 Hz.
     await waitForText(
       page,

@@ -5,8 +5,12 @@
  */
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { baseUrl } from "../support/app-client";
+import { scanPage } from "../support/accessibility";
+import { baseUrl, signInAs, uniqueEmail } from "../support/app-client";
 import { launchBrowser, signIn, waitForHydration } from "../support/browser";
+import { createWireItem } from "../support/build-order-fixtures";
+import { createDesign } from "../support/design-fixtures";
+import { chooseRadio, press, toggle, typeInto } from "../support/keyboard";
 import { closeTestDatabase, testDatabase } from "../support/test-database";
 
 let browser: Browser;
@@ -94,5 +98,97 @@ describe("one-time messages in the browser", () => {
       expect(body, path).not.toContain("Metal base saved.");
     }
     await page.close();
+  });
+
+  it("on several pages come through the one polite live region, once, and the page stays axe-clean", async () => {
+    /**
+     * The message shows in the shell's status region (a polite live region, so a
+     * screen reader announces it), the page with it passes axe, and a reload
+     * shows it no more.
+     */
+    async function shownOnce(page: Page, text: string, found: string[]) {
+      const message = page.getByRole("status").filter({ hasText: text });
+      await message.waitFor();
+      expect(await message.count()).toBe(1);
+      expect(await message.getAttribute("aria-live")).toBe("polite");
+      await scanPage(page, found);
+      await page.reload();
+      await waitForHydration(page);
+      expect(await page.getByText(text).count()).toBe(0);
+    }
+    const found: string[] = [];
+
+    // A buyer's choice on the account page (once answered with text in the form).
+    const buyerPage = await signIn(browser, "buyer");
+    await buyerPage.goto(`${baseUrl()}/account`);
+    await waitForHydration(buyerPage);
+    await chooseRadio(
+      buyerPage,
+      buyerPage.getByRole("radio", { name: /once a day, in a digest/ }),
+    );
+    await press(buyerPage, buyerPage.getByRole("button", { name: "Save" }));
+    await shownOnce(buyerPage, "Low-stock e-mail choice saved.", found);
+    expect(
+      await buyerPage
+        .getByRole("radio", { name: /once a day, in a digest/ })
+        .isChecked(),
+    ).toBe(true);
+    await buyerPage.close();
+
+    // An admin's invitation (once a line of its own above the form).
+    const adminPage = await signIn(browser, "admin");
+    await adminPage.goto(`${baseUrl()}/admin/people`);
+    await waitForHydration(adminPage);
+    const email = uniqueEmail("flash-invite");
+    const invite = adminPage.getByRole("region", { name: "Invite someone" });
+    await typeInto(adminPage, invite.getByLabel("Name"), "Flash Newcomer");
+    await typeInto(adminPage, invite.getByLabel("E-mail"), email);
+    await toggle(adminPage, invite.getByRole("checkbox", { name: "Builder" }));
+    await press(
+      adminPage,
+      invite.getByRole("button", { name: "Send invitation" }),
+    );
+    await adminPage
+      .getByRole("status")
+      .filter({ hasText: `Invitation sent to ${email}.` })
+      .waitFor();
+    // The form starts afresh for the next person.
+    expect(await invite.getByLabel("E-mail").inputValue()).toBe("");
+    await shownOnce(adminPage, `Invitation sent to ${email}.`, found);
+    await adminPage.close();
+
+    // A builder's save through a fetcher (the page does not move; the shell reloads its data).
+    const wire = await createWireItem(await signInAs("buyer"));
+    const design = await createDesign(
+      [
+        {
+          kind: "coil",
+          itemId: wire.id,
+          turns: 20,
+          activeLengthMm: 30,
+          endTurnLengthMm: 20,
+        },
+      ],
+      { status: "draft" },
+    );
+    const builderPage = await signIn(browser, "builder");
+    await builderPage.goto(
+      `${baseUrl()}/designs/${design.designId}/revisions/${design.revision}`,
+    );
+    await waitForHydration(builderPage);
+    const before = builderPage.url();
+    await press(
+      builderPage,
+      builderPage.getByRole("button", { name: "Save motor figures" }),
+    );
+    await builderPage
+      .getByRole("status")
+      .filter({ hasText: "Motor figures saved." })
+      .waitFor();
+    expect(builderPage.url()).toBe(before);
+    await shownOnce(builderPage, "Motor figures saved.", found);
+    await builderPage.close();
+
+    expect(found).toEqual([]);
   });
 });

@@ -105,7 +105,8 @@ describe("the admin's journey", () => {
     await toggle(admin, invite.getByRole("checkbox", { name: "Builder" }));
     await toggle(admin, invite.getByRole("checkbox", { name: "Manager" }));
     await press(admin, invite.getByRole("button", { name: "Send invitation" }));
-    await invite
+    // Told at the top of the page, in the shell's status line.
+    await admin
       .getByRole("status")
       .getByText(`Invitation sent to ${newcomer.email}.`)
       .waitFor();

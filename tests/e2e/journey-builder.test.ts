@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { formatQuantity } from "~/lib/format";
 import { scanPage } from "../support/accessibility";
 import { signInAs } from "../support/app-client";
-import { launchBrowser, saveScreenshot } from "../support/browser";
+import { flashAfter, launchBrowser, saveScreenshot } from "../support/browser";
 import {
   createMagnetItem,
   createWireItem,
@@ -104,16 +104,11 @@ const costPerMotor = () =>
     .locator("dd")
     .first()
     .innerText();
-const savedNote = () =>
-  page
-    .getByRole("status")
-    .filter({ hasText: "Saved: the figures are up to date." });
-
-/** Presses the editor's save button and waits until the page shows the saved line's figures. */
+/** Presses the editor's save button and waits until the page shows the saved line's figures (its message). */
 async function saveLine(button: "Add line" | "Save line") {
-  expect(await savedNote().count()).toBe(0);
-  await press(page, page.getByRole("button", { name: button }));
-  await savedNote().waitFor();
+  await flashAfter(page, "Line saved.", () =>
+    press(page, page.getByRole("button", { name: button })),
+  );
 }
 
 /** The cost per motor on the page is the costing API's, to the cent; returns the API's. */

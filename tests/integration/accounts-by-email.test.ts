@@ -1,5 +1,6 @@
 import { afterAll, describe, expect, it } from "vitest";
 import {
+  followRedirect,
   get,
   postForm,
   sessionCookieFrom,
@@ -175,8 +176,9 @@ describe("invitation", () => {
       { name: "New Comer", email, roles: ["builder", "manager"] },
       adminCookie,
     );
-    expect(invite.status).toBe(200);
-    expect(await invite.text()).toContain(`Invitation sent to ${email}`);
+    expect(invite.status).toBe(302);
+    const invited = await followRedirect(invite, adminCookie);
+    expect(await invited.text()).toContain(`Invitation sent to ${email}`);
 
     const message = await waitForMessage(email, /invited to Turnledger/);
     const token = new URL(linkIn(message)).searchParams.get("token")!;

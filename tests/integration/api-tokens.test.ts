@@ -125,7 +125,9 @@ describe("personal API tokens", () => {
       { intent: "revoke", tokenId: String(tokenId) },
       cookie,
     );
-    expect(revoke.status).toBe(200);
+    // Done: back to the account page, with the one-time message.
+    expect(revoke.status).toBe(302);
+    expect(revoke.headers.get("location")).toBe("/account");
     expect((await withToken("/api/v1/me", token)).status).toBe(401);
   });
 
@@ -323,7 +325,7 @@ describe("a person's tokens", () => {
           admin,
         )
       ).status,
-    ).toBe(200);
+    ).toBe(302);
     expect((await withToken("/api/v1/me", token)).status).toBe(401);
     expect(
       (
@@ -333,7 +335,7 @@ describe("a person's tokens", () => {
           admin,
         )
       ).status,
-    ).toBe(200);
+    ).toBe(302);
     expect((await withToken("/api/v1/me", token)).status).toBe(401);
     expect(await storedTokens(userId)).toEqual([
       { revoked: true, lifetimeDays: 90 },
@@ -348,7 +350,7 @@ describe("a person's tokens", () => {
       { intent: "save-roles", roles: ["buyer", "storekeeper"] },
       admin,
     );
-    expect(saved.status).toBe(200);
+    expect(saved.status).toBe(302);
     expect((await withToken("/api/v1/me", token)).status).toBe(401);
     expect((await get("/api/v1/me", cookie)).status).toBe(401);
     expect(await storedTokens(userId)).toEqual([

@@ -10,10 +10,12 @@ import {
   flashCookieFrom,
   followRedirect,
   get,
+  newPerson,
   postForm,
   sendJson,
   signInAs,
 } from "../support/app-client";
+import { createDesign } from "../support/design-fixtures";
 import {
   closeTestDatabase,
   createLocation,
@@ -244,5 +246,69 @@ describe("a crafted link or cookie", () => {
     const elsewhere = await get("/stock", `${buyer}; ${flash}`);
     expect(readable(await elsewhere.text())).toContain("Metal base saved.");
     expect(flashSetCookie(elsewhere)).toMatch(/^turnledger_flash=;/);
+  });
+
+  it("names the person an admin's change was about, from the database, on the person's page", async () => {
+    const admin = await signInAs("admin");
+    const person = await newPerson(
+      "storekeeper",
+      `Flash Person ${uniqueCode("P")}`,
+    );
+    const response = await postForm(
+      `/admin/people/${person.id}`,
+      { intent: "deactivate" },
+      admin,
+    );
+    expect(response.status).toBe(302);
+    expect(response.headers.get("location")).toBe(`/admin/people/${person.id}`);
+    expect(decodeURIComponent(flashSetCookie(response)!)).not.toContain(
+      "Flash Person",
+    );
+    // The same note in anyone else's browser names nobody.
+    const note = flashCookieFrom(response);
+    const elsewhere = await get("/stock", `${storekeeper}; ${note}`);
+    const elsewhereText = readable(await elsewhere.text());
+    expect(elsewhereText).not.toContain(person.name);
+    expect(elsewhereText).not.toContain(person.email);
+    expect(elsewhereText).not.toContain("is deactivated");
+
+    const next = await followRedirect(response, admin);
+    expect(readable(await next.text())).toContain(
+      `${person.name} is deactivated, signed out everywhere, and their API tokens are revoked.`,
+    );
+  });
+
+  it("comes with a fetcher's answer too (no redirect), for the shell's next load to show once", async () => {
+    const builder = await signInAs("builder");
+    const design = await createDesign([], { status: "draft" });
+    const path = `/designs/${design.designId}/revisions/${design.revision}`;
+    const saved = await postForm(
+      path,
+      {
+        intent: "fields",
+        poles: "14",
+        slots: "12",
+        ratedCurrentA: "10",
+        torqueBasis: "estimated",
+        insulationClassC: "155",
+      },
+      builder,
+    );
+    expect(saved.status).toBe(200);
+    const flash = flashCookieFrom(saved);
+    expect(flash).toMatch(/^turnledger_flash=/);
+    const next = await get(path, `${builder}; ${flash}`);
+    expect(readable(await next.text())).toContain("Motor figures saved.");
+    expect(flashSetCookie(next)).toMatch(/^turnledger_flash=;/);
+    expect(await pageText(path, builder)).not.toContain("Motor figures saved.");
+
+    // A refused change leaves no message.
+    const refused = await postForm(
+      path,
+      { intent: "fields", poles: "", slots: "12" },
+      builder,
+    );
+    expect(refused.status).toBe(400);
+    expect(flashCookieFrom(refused)).toBeNull();
   });
 });

@@ -209,7 +209,8 @@ describe("a write with the app's own Origin", () => {
       { intent: "alert-mode", mode: "none" },
       await signIn(email, "origin-password"),
     );
-    expect(page.status).toBe(200);
+    // Accepted: the choice is saved and the page is shown again with its message.
+    expect(page.status).toBe(302);
   });
 });
 

@@ -344,7 +344,7 @@ describe("deactivated person", () => {
       { intent: "deactivate" },
       adminCookie,
     );
-    expect(deactivate.status).toBe(200);
+    expect(deactivate.status).toBe(302);
 
     expect((await get("/api/v1/me", cookie)).status).toBe(401);
     expect((await get("/", cookie)).status).toBe(302);

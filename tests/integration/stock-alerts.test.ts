@@ -153,7 +153,7 @@ describe("low-stock alerts", () => {
       body: new URLSearchParams({ intent: "alert-mode", mode: "none" }),
       redirect: "manual",
     });
-    expect(chose.status).toBe(200);
+    expect(chose.status).toBe(302);
     const sku = await newPart(5, 5);
     await move({ type: "receipt", sku, quantity: 4, unitCost: 1 });
     expect(await queuedAlertMails(sku, listener)).toHaveLength(1);

@@ -178,3 +178,26 @@ export async function saveScreenshot(
   await page.screenshot({ path: file, fullPage: true });
   return file;
 }
+
+/**
+ * Runs `act` and waits until the app shell's status region shows a one-time
+ * message with `text` that arrived after it: a message already on the page
+ * (the previous save's) does not count, so a second save of the same kind
+ * waits for its own message.
+ */
+export async function flashAfter(
+  page: Page,
+  text: string | RegExp,
+  act: () => Promise<void>,
+): Promise<void> {
+  await page.evaluate(() => {
+    for (const shown of document.querySelectorAll('[role="status"] > p'))
+      shown.setAttribute("data-shown-before", "");
+  });
+  await act();
+  await page
+    .getByRole("status")
+    .locator("p:not([data-shown-before])")
+    .filter({ hasText: text })
+    .waitFor();
+}

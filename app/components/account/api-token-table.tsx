@@ -1,5 +1,6 @@
 import { Form } from "react-router";
 import type { listApiTokens } from "~/auth/api-tokens.server";
+import { ConfirmButton } from "~/components/confirm-button";
 import { formatDateTime } from "~/lib/format";
 import { tokenRolesText } from "./token-roles-text";
 import { TableScroll } from "~/components/table-scroll";
@@ -56,15 +57,27 @@ export function ApiTokenTable({ tokens }: { tokens: ApiTokenRow[] }) {
                   ) : (
                     <Form method="post">
                       <input type="hidden" name="tokenId" value={token.id} />
-                      <button
-                        type="submit"
+                      <ConfirmButton
                         name="intent"
                         value="revoke"
                         className="button-quiet"
                         aria-label={`Revoke ${token.name}`}
+                        question={{
+                          title: `Revoke the token ${token.name}?`,
+                          consequence: (
+                            <p>
+                              Scripts that use the token starting with{" "}
+                              <code>{token.tokenPrefix}…</code> are refused from
+                              now on. A revoked token cannot be brought back:
+                              make a new one if you need it again.
+                            </p>
+                          ),
+                          confirmLabel: "Revoke the token",
+                          keepLabel: "Keep it",
+                        }}
                       >
                         Revoke
-                      </button>
+                      </ConfirmButton>
                     </Form>
                   )}
                 </td>

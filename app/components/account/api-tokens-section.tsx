@@ -17,7 +17,7 @@ export function ApiTokensSection({
   lastResult: SubmissionResult<string[]> | null | undefined;
   /** A token just made, shown this once. */
   newToken: string | null | undefined;
-  /** What the last change of a token or a choice did. */
+  /** Why the last change of a token or a choice was refused (what went well is a flash message). */
   notice: string | null | undefined;
 }) {
   return (
@@ -44,7 +44,7 @@ export function ApiTokensSection({
         </div>
       ) : null}
       {notice ? (
-        <p role="status" className="text-sm text-graphite-700">
+        <p role="alert" className="text-sm text-danger">
           {notice}
         </p>
       ) : null}

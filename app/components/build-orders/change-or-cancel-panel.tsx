@@ -10,6 +10,7 @@ import type { z } from "zod";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
 import { quantityFormSchema } from "~/build-orders/build-order-forms";
 import { canChangeQuantity } from "~/build-orders/build-order-status";
+import { ConfirmButton } from "~/components/confirm-button";
 import { QuantityField } from "~/components/quantity-field";
 import { FormMessages } from "~/components/text-field";
 
@@ -86,13 +87,28 @@ export function ChangeOrCancelPanel({
             ? " Stock already issued stays issued: return what is unused."
             : null}
         </p>
-        <button
-          type="submit"
+        <ConfirmButton
           className="button-quiet w-full border-danger/50 text-danger hover:border-danger"
           disabled={busy}
+          question={{
+            title: `Cancel ${order.reference}?`,
+            consequence: (
+              <p>
+                {holds
+                  ? "Whatever it holds is released back to the free stock."
+                  : "Nothing is held for it."}
+                {order.status === "in_progress"
+                  ? " Stock already issued stays issued."
+                  : null}{" "}
+                A cancelled order cannot be reopened.
+              </p>
+            ),
+            confirmLabel: `Cancel ${order.reference}`,
+            keepLabel: "Keep the order",
+          }}
         >
           Cancel build order
-        </button>
+        </ConfirmButton>
       </Form>
     </section>
   );

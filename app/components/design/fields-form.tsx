@@ -1,7 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
-import { useState } from "react";
 import { useFetcher } from "react-router";
 import type { DesignPageData } from "~/designs/design-page.server";
 import { thermalClassName } from "~/designs/design-checks";
@@ -32,8 +31,6 @@ const text = (value: number | null) => formatNumberForField(value);
 /** The revision's motor figures, editable while it is a draft; each save goes through a fetcher. */
 export function DesignFieldsForm({ revision }: { revision: Revision }) {
   const fetcher = useFetcher<DesignActionAnswer>();
-  // A change after a save is not saved yet: the "Saved" note goes until the next save.
-  const [changedSinceSave, setChangedSinceSave] = useState(false);
   const [form, fields] = useForm({
     id: `design-fields-${revision.designId}-${revision.revision}`,
     lastResult: fetcher.data?.result,
@@ -62,7 +59,6 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) =>
       parseForm(formData, { schema: revisionFormSchema }),
-    onSubmit: () => setChangedSinceSave(false),
   });
   const busy = fetcher.state !== "idle";
   // The schema reads numbers from text (z.preprocess), so Conform types these fields as unknown;
@@ -71,19 +67,13 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
     keyof typeof fields,
     Parameters<typeof QuantityField>[0]["field"]
   >;
-  const saved = !busy && fetcher.data?.ok === true && !changedSinceSave;
 
   return (
     <section aria-labelledby="motor-heading" className="panel">
       <h2 id="motor-heading" className="mb-3 text-lg font-semibold">
         Motor
       </h2>
-      <fetcher.Form
-        method="post"
-        {...getFormProps(form)}
-        className="space-y-4"
-        onChange={() => setChangedSinceSave(true)}
-      >
+      <fetcher.Form method="post" {...getFormProps(form)} className="space-y-4">
         <input type="hidden" name="intent" value="fields" />
         <FormMessages id={form.errorId} errors={form.errors} />
         <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
@@ -178,9 +168,6 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
           <button type="submit" className="button-quiet" disabled={busy}>
             {busy ? "Saving…" : "Save motor figures"}
           </button>
-          <p role="status" className="text-sm text-ok">
-            {saved ? "Saved. The figures below are up to date." : ""}
-          </p>
         </div>
       </fetcher.Form>
     </section>

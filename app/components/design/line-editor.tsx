@@ -2,7 +2,7 @@ import { formatNumberForField } from "~/lib/format";
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
-import { useEffect, useState } from "react";
+import { useEffect } from "react";
 import { useFetcher } from "react-router";
 import type { DesignPageLine } from "~/designs/design-page.server";
 import {
@@ -85,8 +85,6 @@ export function DesignLineEditor({
 }) {
   const fetcher = useFetcher<DesignActionAnswer>();
   const schema = schemas[kind];
-  // A change after a save is not saved yet: the "Saved" note goes until the next save.
-  const [changedSinceSave, setChangedSinceSave] = useState(false);
   const [form, fields] = useForm({
     id: formId,
     lastResult: fetcher.data?.result,
@@ -95,7 +93,6 @@ export function DesignLineEditor({
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) => parseForm(formData, { schema }),
-    onSubmit: () => setChangedSinceSave(false),
   });
   const busy = fetcher.state !== "idle";
   const answer = fetcher.state === "idle" ? fetcher.data : undefined;
@@ -138,7 +135,6 @@ export function DesignLineEditor({
           {...getFormProps(form)}
           aria-labelledby={headingId}
           className="space-y-4"
-          onChange={() => setChangedSinceSave(true)}
         >
           <input type="hidden" name="intent" value="save-line" />
           <input type="hidden" name="kind" value={kind} />
@@ -164,11 +160,6 @@ export function DesignLineEditor({
             <button type="submit" className="button-primary" disabled={busy}>
               {busy ? "Saving…" : line ? "Save line" : "Add line"}
             </button>
-            <p role="status" className="text-sm text-ok">
-              {answer?.ok && line && !changedSinceSave
-                ? "Saved: the figures are up to date."
-                : ""}
-            </p>
           </div>
         </fetcher.Form>
         {figures || kind === "coil" ? (
@@ -196,7 +187,6 @@ export function DesignLineEditor({
                 name: field.endTurnLengthMm!.name,
                 value: String(lengthMm),
               });
-              setChangedSinceSave(true);
             }}
           />
         </div>

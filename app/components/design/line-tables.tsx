@@ -9,6 +9,7 @@ import { formatQuantity } from "~/lib/format";
 import { countText, quantityText } from "~/lib/unit-text";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
 import type { DesignActionAnswer } from "./action-answer";
+import { ConfirmButton } from "~/components/confirm-button";
 import { DataTable } from "~/components/data-table";
 
 type Costing = DesignPageData["costing"];
@@ -120,14 +121,24 @@ function RemoveLineButton({
     <fetcher.Form method="post" onSubmit={onRemove}>
       <input type="hidden" name="intent" value="remove-line" />
       <input type="hidden" name="lineId" value={line.id} />
-      <button
-        type="submit"
+      <ConfirmButton
         className="button-quiet"
         disabled={fetcher.state !== "idle"}
         aria-label={`Remove line ${line.position} (${line.input.sku})`}
+        question={{
+          title: `Remove line ${line.position} (${line.input.sku})?`,
+          consequence: (
+            <p>
+              The line leaves this draft revision and the lines after it move up
+              one place. To have it back, add it again.
+            </p>
+          ),
+          confirmLabel: `Remove line ${line.position}`,
+          keepLabel: "Keep the line",
+        }}
       >
         Remove
-      </button>
+      </ConfirmButton>
       {refused ? (
         <p role="alert" className="field-error">
           {refused}

@@ -1,14 +1,14 @@
 /**
- * The actions at the head of a design revision: release (in two steps, listing the checks
+ * The actions at the head of a design revision: release (asked once, listing the checks
  * still open before the builder confirms), start the next revision, and, on a released
  * revision, create a build order of it. The build order is made by the build-order list's
  * own form action (`POST /build-orders`): one way to create one, whichever page starts it.
  */
-import { useState } from "react";
 import { Form, useFetcher } from "react-router";
 import type { DesignPageData } from "~/designs/design-page.server";
 import { designCheckNames } from "~/designs/design-checks";
 import { maxMotorsPerOrder } from "~/build-orders/build-order-requirements";
+import { ConfirmButton } from "~/components/confirm-button";
 import type { DesignActionAnswer } from "./action-answer";
 
 type Warning = DesignPageData["costing"]["warnings"][number];
@@ -61,7 +61,10 @@ function OpenChecks({ warnings }: { warnings: Warning[] }) {
   );
 }
 
-/** Release in two steps: it cannot be undone. Goes through a fetcher: the page turns read-only in place. */
+/**
+ * Release, asked once in the shared confirmation dialog, which lists the checks still
+ * open: it cannot be undone. Goes through a fetcher: the page turns read-only in place.
+ */
 export function ReleaseControl({
   revision,
   warnings,
@@ -70,51 +73,38 @@ export function ReleaseControl({
   warnings: Warning[];
 }) {
   const fetcher = useFetcher<DesignActionAnswer>();
-  const [asking, setAsking] = useState(false);
   const refused =
     fetcher.state === "idle" && fetcher.data && !fetcher.data.ok
       ? fetcher.data.message
       : null;
   return (
     <div className="space-y-2">
-      {asking ? (
-        <fetcher.Form
-          method="post"
-          aria-label={`Release revision ${revision}`}
-          className="max-w-md space-y-2 rounded-md border border-graphite-300 bg-sheet px-3 py-2"
-        >
-          <input type="hidden" name="intent" value="release" />
-          <p className="text-sm">
-            Lock revision {revision} for good? Build orders use released
-            revisions only.
-          </p>
-          <OpenChecks warnings={warnings} />
-          <div className="flex flex-wrap gap-2">
-            <button
-              type="submit"
-              className="button-quiet border-graphite-800 font-semibold"
-              disabled={fetcher.state !== "idle"}
-            >
-              {fetcher.state !== "idle" ? "Releasing…" : "Release for good"}
-            </button>
-            <button
-              type="button"
-              className="button-quiet"
-              onClick={() => setAsking(false)}
-            >
-              Keep editing
-            </button>
-          </div>
-        </fetcher.Form>
-      ) : (
-        <button
-          type="button"
+      <fetcher.Form method="post" aria-label={`Release revision ${revision}`}>
+        <input type="hidden" name="intent" value="release" />
+        <ConfirmButton
           className="button-quiet"
-          onClick={() => setAsking(true)}
+          disabled={fetcher.state !== "idle"}
+          question={{
+            title: `Release revision ${revision} for good?`,
+            consequence: (
+              <div className="space-y-2">
+                <p>
+                  Revision {revision} is locked: nobody can change it again,
+                  later changes go into a new revision. Build orders use
+                  released revisions only.
+                </p>
+                <OpenChecks warnings={warnings} />
+              </div>
+            ),
+            confirmLabel: "Release for good",
+            keepLabel: "Keep editing",
+          }}
         >
-          {`Release revision ${revision}…`}
-        </button>
-      )}
+          {fetcher.state !== "idle"
+            ? "Releasing…"
+            : `Release revision ${revision}…`}
+        </ConfirmButton>
+      </fetcher.Form>
       {refused ? (
         <p role="alert" className="max-w-md text-sm text-danger">
           {refused}

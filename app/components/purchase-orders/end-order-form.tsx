@@ -11,6 +11,7 @@ import {
   cancelFormSchema,
   closeFormSchema,
 } from "~/purchase-orders/purchase-order-page-forms";
+import { ConfirmButton } from "~/components/confirm-button";
 import { FormMessages } from "~/components/text-field";
 
 const looks = {
@@ -19,20 +20,33 @@ const looks = {
     label: "Why cancel it",
     button: "Cancel order",
     note: "Nothing has arrived against it; a sent order's quantities leave the stock on order.",
+    title: (number: string) => `Cancel ${number}?`,
+    consequence:
+      "Its quantities leave the stock on order and it can no longer be sent, changed or received against. If it was sent, tell the supplier: Turnledger sends them nothing.",
+    confirm: (number: string) => `Cancel ${number}`,
+    keep: "Keep the order",
   },
   close: {
     schema: closeFormSchema,
     label: "Why close it short",
     button: "Close short",
     note: "Nothing more will come: what is still open leaves the stock on order, what arrived stays booked.",
+    title: (number: string) => `Close ${number} short?`,
+    consequence:
+      "What is still open leaves the stock on order and nothing more can be received against it; what arrived stays booked. It cannot be reopened.",
+    confirm: (number: string) => `Close ${number} short`,
+    keep: "Keep it open",
   },
 } as const;
 
 export function EndOrderForm({
   step,
+  orderNumber,
   lastResult,
 }: {
   step: "cancel" | "close";
+  /** The order's number, as the question names it ("PO-00012"). */
+  orderNumber: string;
   lastResult?: SubmissionResult<string[]>;
 }) {
   const look = looks[step];
@@ -74,13 +88,18 @@ export function EndOrderForm({
         </p>
       ) : null}
       <p className="text-xs text-graphite-500">{look.note}</p>
-      <button
-        type="submit"
+      <ConfirmButton
         className="button-quiet w-full border-danger/50 text-danger hover:border-danger"
         disabled={navigation.state !== "idle"}
+        question={{
+          title: look.title(orderNumber),
+          consequence: <p>{look.consequence}</p>,
+          confirmLabel: look.confirm(orderNumber),
+          keepLabel: look.keep,
+        }}
       >
         {look.button}
-      </button>
+      </ConfirmButton>
     </Form>
   );
 }

@@ -8,10 +8,12 @@ import {
 import { EndOrderForm } from "./end-order-form";
 
 export function EndOrderPanel({
+  orderNumber,
   status,
   cancelResult,
   closeResult,
 }: {
+  orderNumber: string;
   status: PurchaseOrderStatus;
   cancelResult?: SubmissionResult<string[]>;
   closeResult?: SubmissionResult<string[]>;
@@ -23,10 +25,18 @@ export function EndOrderPanel({
         End the order
       </h2>
       {canCancel(status) ? (
-        <EndOrderForm step="cancel" lastResult={cancelResult} />
+        <EndOrderForm
+          step="cancel"
+          orderNumber={orderNumber}
+          lastResult={cancelResult}
+        />
       ) : null}
       {canCloseShort(status) ? (
-        <EndOrderForm step="close" lastResult={closeResult} />
+        <EndOrderForm
+          step="close"
+          orderNumber={orderNumber}
+          lastResult={closeResult}
+        />
       ) : null}
     </section>
   );

@@ -7,6 +7,7 @@ import {
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
+import { ConfirmButton } from "~/components/confirm-button";
 import { FormMessages, TextField } from "~/components/text-field";
 import { renameFormSchema } from "~/stock/item-change-form";
 
@@ -14,7 +15,7 @@ export function CatalogueEntryPanel({
   item,
   lastResult,
 }: {
-  item: { name: string; active: boolean };
+  item: { sku: string; name: string; active: boolean };
   /** The answer to the last rename form sent, if that was the form sent. */
   lastResult: SubmissionResult<string[]> | undefined;
 }) {
@@ -48,15 +49,38 @@ export function CatalogueEntryPanel({
             ? "Archiving hides the item from the stock list; its history stays."
             : "This item is archived: it shows in the stock list only with archived items included."}
         </p>
-        <button
-          type="submit"
-          name="intent"
-          value={item.active ? "archive" : "restore"}
-          className="button-quiet"
-          disabled={busy}
-        >
-          {item.active ? "Archive item" : "Restore item"}
-        </button>
+        {item.active ? (
+          <ConfirmButton
+            name="intent"
+            value="archive"
+            className="button-quiet"
+            disabled={busy}
+            question={{
+              title: `Archive ${item.sku}?`,
+              consequence: (
+                <p>
+                  {item.sku} no longer shows in the stock list unless archived
+                  items are included; its stock, lots and history stay as they
+                  are. Restore it here to bring it back.
+                </p>
+              ),
+              confirmLabel: `Archive ${item.sku}`,
+              keepLabel: "Keep it listed",
+            }}
+          >
+            Archive item
+          </ConfirmButton>
+        ) : (
+          <button
+            type="submit"
+            name="intent"
+            value="restore"
+            className="button-quiet"
+            disabled={busy}
+          >
+            Restore item
+          </button>
+        )}
       </Form>
     </section>
   );
