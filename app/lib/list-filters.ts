@@ -6,7 +6,11 @@
  * {@link listHref}. Pure: no framework, no I/O.
  */
 import { z } from "zod";
-import { readSearchLeniently, searchParamsObject } from "./search-params";
+import {
+  pageParam,
+  readSearchLeniently,
+  searchParamsObject,
+} from "./search-params";
 
 /** The longest search text a list takes. */
 export const searchMaxLength = 80;
@@ -17,6 +21,12 @@ export const searchTextParam = z
   .trim()
   .max(searchMaxLength, `Search for at most ${searchMaxLength} characters.`)
   .optional();
+
+/** The address of a list with a search and pages and no other filter; a list with more extends it. */
+export const searchPageSchema = z.object({
+  search: searchTextParam,
+  page: pageParam,
+});
 
 /**
  * A list's filters from the address, read with its schema. Values the schema refuses are
