@@ -141,10 +141,7 @@ export async function listPeople(
         )
       : undefined,
   );
-  const [total] = await db
-    .select({ people: count() })
-    .from(users)
-    .where(where);
+  const [total] = await db.select({ people: count() }).from(users).where(where);
   const rows = await db
     .select({
       id: users.id,

@@ -1,14 +1,5 @@
 /** Past price-list imports and the price lines each one wrote, a page at a time. */
-import {
-  asc,
-  count,
-  desc,
-  eq,
-  inArray,
-  like,
-  or,
-  type SQL,
-} from "drizzle-orm";
+import { asc, count, desc, eq, inArray, like, or, type SQL } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { items, priceImports, priceLines, suppliers, users } from "~/db/schema";
 import { containsPattern } from "~/lib/list-filters";

@@ -163,7 +163,10 @@ export default function AdminPeople({
           <ListSearchForm
             path="/admin/people"
             label="Search the people"
-            search={{ value: loaderData.filter.search, placeholder: "Name or e-mail" }}
+            search={{
+              value: loaderData.filter.search,
+              placeholder: "Name or e-mail",
+            }}
             filtered={isFiltered(loaderData.filter)}
           >
             <FilterChoice

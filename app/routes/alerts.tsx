@@ -179,7 +179,10 @@ export default function Alerts({ loaderData }: Route.ComponentProps) {
   const alertsHref = (changes: { status?: string; page?: number }) =>
     listHref("/alerts", {
       search,
-      status: (changes.status ?? status) === "open" ? undefined : (changes.status ?? status),
+      status:
+        (changes.status ?? status) === "open"
+          ? undefined
+          : (changes.status ?? status),
       page: changes.page,
     });
   return (

@@ -182,7 +182,9 @@ export default function Suppliers({
           rows={suppliers}
           page={page}
           pageCount={pageCount}
-          pageHref={(target) => listHref("/suppliers", { search, page: target })}
+          pageHref={(target) =>
+            listHref("/suppliers", { search, page: target })
+          }
           emptyText={
             <ListEmptyText
               filtered={Boolean(search)}

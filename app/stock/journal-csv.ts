@@ -36,7 +36,10 @@ const columns: {
   cell: (movement: JournalCsvMovement) => CsvCell;
 }[] = [
   { header: "movement", cell: (movement) => movement.id },
-  { header: "time (UTC)", cell: (movement) => movement.createdAt.toISOString() },
+  {
+    header: "time (UTC)",
+    cell: (movement) => movement.createdAt.toISOString(),
+  },
   { header: "type", cell: (movement) => movement.type },
   { header: "sku", cell: (movement) => movement.sku },
   { header: "item", cell: (movement) => movement.itemName },

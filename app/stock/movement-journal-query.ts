@@ -20,7 +20,11 @@ export const movementJournalFilterSchema = z.object({
     .max(80, "reference is at most 80 characters.")
     .optional(),
   /** The person who recorded it: their e-mail exactly, or part of their name. */
-  user: z.string().trim().max(254, "user is at most 254 characters.").optional(),
+  user: z
+    .string()
+    .trim()
+    .max(254, "user is at most 254 characters.")
+    .optional(),
   from: dayParam("from").optional(),
   to: dayParam("to").optional(),
 });
@@ -30,5 +34,7 @@ export const movementJournalQuerySchema = movementJournalFilterSchema.extend({
   pageSize: pageSizeParam("pageSize", 500, 50),
 });
 
-export type MovementJournalFilter = z.output<typeof movementJournalFilterSchema>;
+export type MovementJournalFilter = z.output<
+  typeof movementJournalFilterSchema
+>;
 export type MovementJournalQuery = z.output<typeof movementJournalQuerySchema>;
