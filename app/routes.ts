@@ -51,6 +51,8 @@ export default [
     route("purchase-orders/late", "routes/purchase-orders-late.tsx"),
     ...prefix("build-orders", [
       index("routes/build-orders.tsx"),
+      // Before ":orderId", so "export.csv" is never taken for an order id.
+      route("export.csv", "routes/build-orders-export.ts"),
       route(":orderId", "routes/build-order.tsx"),
       route(":orderId/lots.csv", "routes/build-order-lots-export.ts"),
     ]),
@@ -77,6 +79,7 @@ export default [
       route("record", "routes/stock-record.tsx"),
       route("receive", "routes/stock-receive.tsx"),
       route("journal", "routes/stock-journal.tsx"),
+      route("journal.csv", "routes/stock-journal-export.ts"),
       // Lots: origin, certificates, where used (issue 20).
       route("lots/:lotId", "routes/stock-lot.tsx"),
       route(

@@ -13,6 +13,7 @@ import {
   inArray,
   isNotNull,
   isNull,
+  like,
   sql,
 } from "drizzle-orm";
 import { db, type Transaction } from "~/db/client.server";
@@ -38,6 +39,7 @@ import {
 import { coverDueDays, openOrderLinesOf } from "./open-order-lines.server";
 import { deliverLater, queueMail, writeToOutbox } from "~/mail/mailer.server";
 import { todayUtc } from "~/lib/calendar-days";
+import { containsPattern } from "~/lib/list-filters";
 import { bestPricesOf, loadItemPricing } from "~/purchasing/item-prices.server";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { quantityToPrice } from "~/stock/reorder-quantities";
@@ -499,14 +501,31 @@ export async function listAlerts(options: {
   status: "open" | "closed" | "all";
   page: number;
   perPage?: number;
+  /** Part of the item's SKU, name or size (the stock list's search). */
+  search?: string;
 }) {
   const perPage = options.perPage ?? alertsPageSize;
-  const where =
+  const where = and(
     options.status === "open"
       ? isNull(stockAlerts.closedAt)
       : options.status === "closed"
         ? isNotNull(stockAlerts.closedAt)
-        : undefined;
+        : undefined,
+    options.search
+      ? inArray(
+          stockAlerts.itemId,
+          db
+            .select({ id: items.id })
+            .from(items)
+            .where(
+              like(
+                items.searchText,
+                containsPattern(options.search.toLowerCase()),
+              ),
+            ),
+        )
+      : undefined,
+  );
   const [{ total }] = (await db
     .select({ total: sql<number>`COUNT(*)` })
     .from(stockAlerts)

@@ -1,10 +1,9 @@
 /** What the build-order API routes share: refusals as JSON, the list query, the order id from the path. */
-import { z } from "zod";
-import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 import { apiError } from "~/lib/api.server";
 import { pageParam, pageSizeParam } from "~/lib/search-params";
 import { answerDomainError } from "~/lib/api-errors.server";
 import { isBuildOrderError } from "./build-order-errors";
+import { buildOrderListFilterSchema } from "./build-order-list-address";
 import { buildOrderIdFromPath } from "./build-order-path";
 
 /**
@@ -40,12 +39,7 @@ export function orderIdFrom(value: string | undefined): number {
   return buildOrderIdFromPath(value, (message) => apiError(404, message));
 }
 
-export const buildOrderListQuerySchema = z.object({
-  status: z
-    .enum(buildOrderStatuses, {
-      error: `status must be one of ${buildOrderStatuses.join(", ")}.`,
-    })
-    .optional(),
+export const buildOrderListQuerySchema = buildOrderListFilterSchema.extend({
   page: pageParam,
   pageSize: pageSizeParam("pageSize", 200, 50),
 });

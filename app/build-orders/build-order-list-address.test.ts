@@ -14,21 +14,33 @@ describe("buildOrderStatusFrom", () => {
     for (const value of [null, "", "Draft", "built", "in progress"])
       expect(buildOrderStatusFrom(value)).toBeUndefined();
   });
+
+  it("keeps a search beside the status", () => {
+    expect(buildOrderListHref({ search: "BO-1 stator", status: "draft" })).toBe(
+      "/build-orders?search=BO-1+stator&status=draft",
+    );
+  });
 });
 
 describe("buildOrderListHref", () => {
   it("leaves out the defaults", () => {
-    expect(buildOrderListHref(null)).toBe("/build-orders");
-    expect(buildOrderListHref(null, 1)).toBe("/build-orders");
+    expect(buildOrderListHref({})).toBe("/build-orders");
+    expect(buildOrderListHref({}, 1)).toBe("/build-orders");
   });
 
   it("keeps the status and a later page", () => {
-    expect(buildOrderListHref("reserved")).toBe(
+    expect(buildOrderListHref({ status: "reserved" })).toBe(
       "/build-orders?status=reserved",
     );
-    expect(buildOrderListHref(null, 3)).toBe("/build-orders?page=3");
-    expect(buildOrderListHref("complete", 2)).toBe(
+    expect(buildOrderListHref({}, 3)).toBe("/build-orders?page=3");
+    expect(buildOrderListHref({ status: "complete" }, 2)).toBe(
       "/build-orders?status=complete&page=2",
+    );
+  });
+
+  it("keeps a search beside the status", () => {
+    expect(buildOrderListHref({ search: "BO-1 stator", status: "draft" })).toBe(
+      "/build-orders?search=BO-1+stator&status=draft",
     );
   });
 });

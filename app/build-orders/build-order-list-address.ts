@@ -1,6 +1,21 @@
-/** The build-order list's address: the status it is filtered by and the page. Pure. */
+/** The build-order list's address: the search and status it is filtered by and the page. Pure. */
+import { z } from "zod";
 import { buildOrderStatuses } from "~/db/tables/build-order-enums";
+import { listHref, searchTextParam } from "~/lib/list-filters";
 import type { BuildOrderStatus } from "./build-order-status";
+
+/** The list's filters (page, API and CSV export share them). */
+export const buildOrderListFilterSchema = z.object({
+  /** An order's reference ("BO-12", "12") or part of its design's name. */
+  search: searchTextParam,
+  status: z
+    .enum(buildOrderStatuses, {
+      error: `status must be one of ${buildOrderStatuses.join(", ")}.`,
+    })
+    .optional(),
+});
+
+export type BuildOrderListFilter = z.output<typeof buildOrderListFilterSchema>;
 
 /** The status a `?status=` value names, or undefined for any other text. */
 export function buildOrderStatusFrom(
@@ -11,14 +26,10 @@ export function buildOrderStatusFrom(
     : undefined;
 }
 
-/** "/build-orders?status=reserved&page=2", leaving out what is the default (all, page 1). */
+/** "/build-orders?search=stator&status=reserved&page=2", leaving out what is the default (all, page 1). */
 export function buildOrderListHref(
-  status: string | null | undefined,
+  filter: BuildOrderListFilter,
   page = 1,
 ): string {
-  const params = new URLSearchParams();
-  if (status) params.set("status", status);
-  if (page > 1) params.set("page", String(page));
-  const query = params.toString();
-  return `/build-orders${query ? `?${query}` : ""}`;
+  return listHref("/build-orders", { ...filter, page });
 }

@@ -2,7 +2,19 @@
  * Build orders: creating one for N motors of a released design revision, the paged list,
  * and the released revisions a builder can choose from.
  */
-import { asc, count, desc, eq, inArray } from "drizzle-orm";
+import {
+  and,
+  asc,
+  count,
+  desc,
+  eq,
+  inArray,
+  like,
+  lt,
+  or,
+  sql,
+  type SQL,
+} from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { writeTransaction } from "~/db/write-transaction.server";
 import {
@@ -24,10 +36,15 @@ import {
   formatUnitCostText,
   parseUnitCost,
 } from "~/lib/decimal-amounts";
+import { containsPattern } from "~/lib/list-filters";
 import { BuildOrderError } from "./build-order-errors";
+import type { BuildOrderListFilter } from "./build-order-list-address";
 import type { BuildOrderCreateInput } from "./build-order-forms";
 import { itemRequirements } from "./build-order-requirements";
-import type { BuildOrderStatus } from "./build-order-status";
+import {
+  buildOrderIdInReference,
+  type BuildOrderStatus,
+} from "./build-order-status";
 
 /**
  * What N motors of a revision need, one entry per item; refuses (409) a revision whose
@@ -158,8 +175,7 @@ export async function createBuildOrder(
   });
 }
 
-export interface BuildOrderListQuery {
-  status?: BuildOrderStatus;
+export interface BuildOrderListQuery extends BuildOrderListFilter {
   page: number;
   pageSize: number;
 }
@@ -186,9 +202,44 @@ export function selectBuildOrderSummaries() {
     .innerJoin(users, eq(users.id, buildOrders.userId));
 }
 
+/**
+ * The list's filters as one condition. A search naming an order ("BO-12", "12") finds that
+ * order; other text finds the orders of the designs whose name holds it, through their
+ * revisions (the revision index), since designs are few and orders many.
+ */
+async function buildOrderConditions(
+  filter: BuildOrderListFilter,
+): Promise<SQL | undefined> {
+  const conditions: SQL[] = [];
+  if (filter.status) conditions.push(eq(buildOrders.status, filter.status));
+  const search = filter.search?.trim();
+  if (search) {
+    const orderId = /^\d{1,10}$/.test(search)
+      ? Number(search)
+      : buildOrderIdInReference(search);
+    const revisions = await db
+      .select({ id: designRevisions.id })
+      .from(designRevisions)
+      .innerJoin(designs, eq(designs.id, designRevisions.designId))
+      .where(like(designs.name, containsPattern(search)));
+    const revisionIds = revisions.map((revision) => revision.id);
+    conditions.push(
+      or(
+        orderId !== null ? eq(buildOrders.id, orderId) : undefined,
+        revisionIds.length > 0
+          ? inArray(buildOrders.revisionId, revisionIds)
+          : undefined,
+        // Nothing named: no order matches.
+        sql`FALSE`,
+      )!,
+    );
+  }
+  return conditions.length > 0 ? and(...conditions) : undefined;
+}
+
 /** A page of build orders, newest first (on the status index when filtered). */
 export async function listBuildOrders(query: BuildOrderListQuery) {
-  const where = query.status ? eq(buildOrders.status, query.status) : undefined;
+  const where = await buildOrderConditions(query);
   const [counted] = await db
     .select({ total: count() })
     .from(buildOrders)
@@ -200,19 +251,48 @@ export async function listBuildOrders(query: BuildOrderListQuery) {
     .offset((query.page - 1) * query.pageSize);
   return {
     total: counted?.total ?? 0,
-    buildOrders: rows.map((row) => ({
-      id: row.id,
-      status: row.status,
-      design: { id: row.designId, name: row.designName },
-      revision: row.revision,
-      quantity: row.quantity,
-      note: row.note,
-      plannedStart: row.plannedStart,
-      createdBy: row.createdBy,
-      createdAt: row.createdAt.toISOString(),
-      updatedAt: row.updatedAt.toISOString(),
-    })),
+    buildOrders: rows.map(buildOrderListRow),
   };
+}
+
+function buildOrderListRow(
+  row: Awaited<ReturnType<typeof selectBuildOrderSummaries>>[number],
+) {
+  return {
+    id: row.id,
+    status: row.status,
+    design: { id: row.designId, name: row.designName },
+    revision: row.revision,
+    quantity: row.quantity,
+    note: row.note,
+    plannedStart: row.plannedStart,
+    createdBy: row.createdBy,
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
+
+/** Every build order matching the filters, newest first, a batch at a time (after the last id read). */
+export async function* buildOrdersInBatches(
+  filter: BuildOrderListFilter,
+  batchSize = 1000,
+) {
+  const where = await buildOrderConditions(filter);
+  let afterId: number | undefined;
+  for (;;) {
+    const rows = await selectBuildOrderSummaries()
+      .where(
+        and(
+          where,
+          afterId !== undefined ? lt(buildOrders.id, afterId) : undefined,
+        ),
+      )
+      .orderBy(desc(buildOrders.id))
+      .limit(batchSize);
+    if (rows.length > 0) yield rows.map(buildOrderListRow);
+    if (rows.length < batchSize) return;
+    afterId = rows[rows.length - 1]!.id;
+  }
 }
 
 /** Released revisions a build can be made of, by design name, newest revision first. */

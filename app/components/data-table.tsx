@@ -68,7 +68,7 @@ export function DataTable<Row>({
   page?: number;
   pageCount?: number;
   pageHref?: (page: number) => string;
-  emptyText?: string;
+  emptyText?: React.ReactNode;
   sortable?: boolean;
   initialSorting?: SortingState;
   search?: TableSearch;

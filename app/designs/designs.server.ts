@@ -4,7 +4,7 @@
  * good; a new revision starts as a copy of the latest one. Every change locks
  * the revision row first, so a release and an edit never cross.
  */
-import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, like, or, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { writeTransaction } from "~/db/write-transaction.server";
 import {
@@ -16,6 +16,7 @@ import {
   wireItems,
 } from "~/db/schema";
 import { DomainError } from "~/lib/domain-error";
+import { containsPattern } from "~/lib/list-filters";
 import {
   windingFieldIssue,
   slotLinerTooLargeMessage,
@@ -99,7 +100,18 @@ function checkChangedWinding(
 }
 
 /** Designs by name, each with its revisions (newest first), a page at a time. */
-export async function listDesigns(options: { page: number; perPage: number }) {
+export async function listDesigns(options: {
+  page: number;
+  perPage: number;
+  search?: string;
+}) {
+  // Part of the name or the motor type; designs are few (hundreds), so the name index is scanned.
+  const where = options.search
+    ? or(
+        like(designs.name, containsPattern(options.search)),
+        like(designs.motorType, containsPattern(options.search)),
+      )
+    : undefined;
   const page = await db
     .select({
       id: designs.id,
@@ -108,12 +120,14 @@ export async function listDesigns(options: { page: number; perPage: number }) {
       description: designs.description,
     })
     .from(designs)
+    .where(where)
     .orderBy(asc(designs.name))
     .limit(options.perPage)
     .offset((options.page - 1) * options.perPage);
   const [{ total }] = (await db
     .select({ total: sql<number>`COUNT(*)` })
-    .from(designs)) as [{ total: number }];
+    .from(designs)
+    .where(where)) as [{ total: number }];
   const revisions =
     page.length === 0
       ? []

@@ -122,3 +122,18 @@ export function latestOnOrBefore<T>(
   }
   return latest;
 }
+
+/**
+ * The moments a range of calendar days covers, for a filter: from the start of `from`
+ * (inclusive) to the start of the day after `to` (exclusive); either end may be open.
+ * Days are UTC today; this is the one place a person's time zone will come in.
+ */
+export function dayRangeBounds(range: {
+  from?: CalendarDate;
+  to?: CalendarDate;
+}): { start?: Date; end?: Date } {
+  return {
+    start: range.from ? startOfDay(range.from) : undefined,
+    end: range.to ? startOfDay(dayAfter(range.to)) : undefined,
+  };
+}

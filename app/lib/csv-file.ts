@@ -23,9 +23,23 @@ export function csvFile(
   fields: readonly string[],
   rows: readonly (readonly CsvCell[])[],
 ): string {
+  return `${csvFileStart(fields)}${csvLines(rows)}`;
+}
+
+/**
+ * The start of a file written a part at a time (a long export streamed to the browser):
+ * the byte-order mark and the header row. `csvLines` writes the rows after it.
+ */
+export function csvFileStart(fields: readonly string[]): string {
+  return `\uFEFF${csvLines([fields])}`;
+}
+
+/** Rows of a file, each ended by CRLF; "" for none. */
+export function csvLines(rows: readonly (readonly CsvCell[])[]): string {
+  if (rows.length === 0) return "";
   const text = Papa.unparse(
-    { fields: [...fields], data: rows.map((row) => [...row]) },
+    rows.map((row) => [...row]),
     { newline: "\r\n", escapeFormulae: formulaStart },
   );
-  return `\uFEFF${text}\r\n`;
+  return `${text}\r\n`;
 }

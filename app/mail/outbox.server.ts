@@ -1,6 +1,17 @@
-import { asc, count, desc, inArray } from "drizzle-orm";
+import {
+  and,
+  asc,
+  count,
+  desc,
+  inArray,
+  isNotNull,
+  isNull,
+  like,
+  or,
+} from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { mailAttachments, mailOutbox } from "~/db/schema";
+import { containsPattern } from "~/lib/list-filters";
 import { textForOutbox } from "./one-time-link";
 
 export const outboxPageSize = 50;
@@ -10,8 +21,25 @@ export const outboxPageSize = 50;
  * all, each with the names, types and sizes of its attachments (never their
  * bytes). One-time links are never read: admins see a note in their place.
  */
-export async function listOutbox(page: number, pageSize = outboxPageSize) {
-  const [total] = await db.select({ messages: count() }).from(mailOutbox);
+export async function listOutbox(
+  page: number,
+  pageSize = outboxPageSize,
+  filter: { search?: string; state?: "sent" | "unsent" } = {},
+) {
+  const where = and(
+    filter.search
+      ? or(
+          like(mailOutbox.toAddress, containsPattern(filter.search)),
+          like(mailOutbox.subject, containsPattern(filter.search)),
+        )
+      : undefined,
+    filter.state === "unsent" ? isNull(mailOutbox.sentAt) : undefined,
+    filter.state === "sent" ? isNotNull(mailOutbox.sentAt) : undefined,
+  );
+  const [total] = await db
+    .select({ messages: count() })
+    .from(mailOutbox)
+    .where(where);
   const messages = await db
     .select({
       id: mailOutbox.id,
@@ -24,6 +52,7 @@ export async function listOutbox(page: number, pageSize = outboxPageSize) {
       lastError: mailOutbox.lastError,
     })
     .from(mailOutbox)
+    .where(where)
     .orderBy(desc(mailOutbox.createdAt), desc(mailOutbox.id))
     .limit(pageSize)
     .offset((page - 1) * pageSize);

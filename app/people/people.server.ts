@@ -1,7 +1,18 @@
 /** People and their accounts: sign-in, invitations, roles, deactivation, passwords. */
 import { randomBytes } from "node:crypto";
-import { and, asc, count, eq, isNull, sql } from "drizzle-orm";
+import {
+  and,
+  asc,
+  count,
+  eq,
+  inArray,
+  isNull,
+  like,
+  or,
+  sql,
+} from "drizzle-orm";
 import { db } from "~/db/client.server";
+import { containsPattern } from "~/lib/list-filters";
 import { writeTransaction } from "~/db/write-transaction.server";
 import { emailTokens, userRoles, users } from "~/db/schema";
 import { revokeAllApiTokens } from "~/auth/api-tokens.server";
@@ -108,8 +119,29 @@ export async function checkSignIn(
 export const peoplePageSize = 50;
 
 /** One page of people, by name, with their roles; and how many there are in all. */
-export async function listPeople(page: number) {
-  const [total] = await db.select({ people: count() }).from(users);
+/** One page of people by name; with a search, those whose name or e-mail holds it; with a role, those holding it. */
+export async function listPeople(
+  page: number,
+  filter: { search?: string; role?: Role } = {},
+) {
+  const where = and(
+    filter.search
+      ? or(
+          like(users.name, containsPattern(filter.search)),
+          like(users.email, containsPattern(filter.search)),
+        )
+      : undefined,
+    filter.role
+      ? inArray(
+          users.id,
+          db
+            .select({ id: userRoles.userId })
+            .from(userRoles)
+            .where(eq(userRoles.role, filter.role)),
+        )
+      : undefined,
+  );
+  const [total] = await db.select({ people: count() }).from(users).where(where);
   const rows = await db
     .select({
       id: users.id,
@@ -124,6 +156,7 @@ export async function listPeople(page: number) {
     })
     .from(users)
     .leftJoin(userRoles, eq(userRoles.userId, users.id))
+    .where(where)
     .groupBy(users.id)
     .orderBy(asc(users.name), asc(users.id))
     .limit(peoplePageSize)

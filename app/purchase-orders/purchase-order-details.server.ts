@@ -4,7 +4,19 @@
  * index), and the same order as the API's JSON (`purchaseOrderJson`: quantities and
  * prices as numbers in the item's unit and the order's currency).
  */
-import { and, asc, count, desc, eq, inArray, sql, type SQL } from "drizzle-orm";
+import {
+  and,
+  asc,
+  count,
+  desc,
+  eq,
+  inArray,
+  like,
+  or,
+  sql,
+  type SQL,
+} from "drizzle-orm";
+import { containsPattern } from "~/lib/list-filters";
 import { db, type Database, type Transaction } from "~/db/client.server";
 import {
   items,
@@ -25,6 +37,7 @@ import { orderDateOf } from "./order-line-pricing";
 import { lineTotalCents } from "./purchase-order-document";
 import type { PurchaseOrderListQuery } from "./purchase-order-forms";
 import {
+  purchaseOrderIdFromNumber,
   purchaseOrderNumber,
   purchaseOrderStatusLabels,
 } from "./purchase-order-status";
@@ -265,6 +278,26 @@ export async function listPurchaseOrders(query: PurchaseOrderListQuery) {
   if (query.status) conditions.push(eq(purchaseOrders.status, query.status));
   if (query.supplierId)
     conditions.push(eq(purchaseOrders.supplierId, query.supplierId));
+  if (query.search) {
+    // An order number names one order; other text the orders of suppliers whose name holds it.
+    const orderId = purchaseOrderIdFromNumber(query.search);
+    const named = await db
+      .select({ id: suppliers.id })
+      .from(suppliers)
+      .where(like(suppliers.name, containsPattern(query.search)));
+    conditions.push(
+      or(
+        orderId !== null ? eq(purchaseOrders.id, orderId) : undefined,
+        named.length > 0
+          ? inArray(
+              purchaseOrders.supplierId,
+              named.map((supplier) => supplier.id),
+            )
+          : undefined,
+        sql`FALSE`,
+      )!,
+    );
+  }
   const where = conditions.length ? and(...conditions) : undefined;
   const [counted] = await db
     .select({ total: count() })

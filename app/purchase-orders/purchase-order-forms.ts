@@ -4,6 +4,7 @@
  * ten-thousandths, days are YYYY-MM-DD. The inputs the write functions take are the
  * schemas' output types.
  */
+import { searchTextParam } from "~/lib/list-filters";
 import { z } from "zod";
 import { purchaseOrderStatuses } from "~/db/tables/purchase-order-enums";
 import { quantityFromNumber, unitCostFromNumber } from "~/lib/decimal-amounts";
@@ -186,6 +187,8 @@ export const endOrderSchema = z.object({
 
 /** GET /api/v1/purchase-orders?status=&supplierId=&page=&pageSize= */
 export const purchaseOrderListQuerySchema = z.object({
+  /** An order number or part of the supplier's name. */
+  search: searchTextParam,
   status: z
     .enum(purchaseOrderStatuses, {
       error: `status must be one of ${purchaseOrderStatuses.join(", ")}.`,

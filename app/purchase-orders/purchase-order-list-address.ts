@@ -3,9 +3,12 @@ import {
   purchaseOrderStatuses,
   type PurchaseOrderStatus,
 } from "~/db/tables/purchase-order-enums";
+import { listHref, searchMaxLength } from "~/lib/list-filters";
 import { idFromText, pageFromSearch } from "~/lib/search-params";
 
 export interface PurchaseOrderListFilter {
+  /** An order number ("PO-000123", "123") or part of the supplier's name. */
+  search?: string;
   status?: PurchaseOrderStatus;
   supplierId?: number;
 }
@@ -17,8 +20,10 @@ export function purchaseOrderListQueryFrom(params: URLSearchParams): {
 } {
   const status = params.get("status") ?? "";
   const supplierId = idFromText(params.get("supplier"));
+  const search = params.get("search")?.trim().slice(0, searchMaxLength);
   return {
     filter: {
+      search: search || undefined,
       status: (purchaseOrderStatuses as readonly string[]).includes(status)
         ? (status as PurchaseOrderStatus)
         : undefined,
@@ -33,10 +38,10 @@ export function purchaseOrderListHref(
   filter: PurchaseOrderListFilter,
   page = 1,
 ): string {
-  const params = new URLSearchParams();
-  if (filter.status) params.set("status", filter.status);
-  if (filter.supplierId) params.set("supplier", String(filter.supplierId));
-  if (page > 1) params.set("page", String(page));
-  const query = params.toString();
-  return `/purchase-orders${query ? `?${query}` : ""}`;
+  return listHref("/purchase-orders", {
+    search: filter.search,
+    status: filter.status,
+    supplier: filter.supplierId,
+    page,
+  });
 }

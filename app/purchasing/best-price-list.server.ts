@@ -3,6 +3,7 @@
  * with its cheapest offer for a quantity (the one asked for, else each item's own
  * `quantityToPrice`, the rule its page and its low-stock e-mail use).
  */
+import { containsPattern } from "~/lib/list-filters";
 import { and, asc, count, eq, exists, like, sql, type SQL } from "drizzle-orm";
 import { quantityToPrice } from "~/stock/reorder-quantities";
 import { db } from "~/db/client.server";
@@ -34,10 +35,9 @@ function listFilters(search: string): SQL {
   const text = search.trim();
   if (text) {
     // search_text is SKU, name and size in lower case (the stock list's search).
-    const escaped = text
-      .toLowerCase()
-      .replace(/[\\%_]/g, (character) => `\\${character}`);
-    conditions.push(like(items.searchText, `%${escaped}%`));
+    conditions.push(
+      like(items.searchText, containsPattern(text.toLowerCase())),
+    );
   }
   return and(...conditions)!;
 }

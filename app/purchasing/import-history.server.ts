@@ -1,12 +1,31 @@
 /** Past price-list imports and the price lines each one wrote, a page at a time. */
-import { asc, count, desc, eq } from "drizzle-orm";
+import { asc, count, desc, eq, inArray, like, or, type SQL } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { items, priceImports, priceLines, suppliers, users } from "~/db/schema";
+import { containsPattern } from "~/lib/list-filters";
 
 export const importPageSize = 25;
 export const importLinePageSize = 50;
 
-export async function listPriceImports(page: number) {
+/** One page of committed imports, newest first; with a search, those whose file or supplier name holds it. */
+export async function listPriceImports(page: number, search?: string) {
+  let where: SQL | undefined;
+  if (search) {
+    // Suppliers are few: their ids first, then the imports by time.
+    const named = await db
+      .select({ id: suppliers.id })
+      .from(suppliers)
+      .where(like(suppliers.name, containsPattern(search)));
+    where = or(
+      like(priceImports.fileName, containsPattern(search)),
+      named.length > 0
+        ? inArray(
+            priceImports.supplierId,
+            named.map((supplier) => supplier.id),
+          )
+        : undefined,
+    );
+  }
   const [rows, [total]] = await Promise.all([
     db
       .select({
@@ -21,10 +40,11 @@ export async function listPriceImports(page: number) {
       .from(priceImports)
       .innerJoin(suppliers, eq(suppliers.id, priceImports.supplierId))
       .innerJoin(users, eq(users.id, priceImports.userId))
+      .where(where)
       .orderBy(desc(priceImports.createdAt), desc(priceImports.id))
       .limit(importPageSize)
       .offset((page - 1) * importPageSize),
-    db.select({ total: count() }).from(priceImports),
+    db.select({ total: count() }).from(priceImports).where(where),
   ]);
   return { imports: rows, total: total?.total ?? 0 };
 }

@@ -1,26 +1,30 @@
 /** The suppliers page: each supplier with how many price lines it has and its last import. */
-import { asc, count, eq, max } from "drizzle-orm";
+import { asc, count, inArray, like, max, or } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import { priceImports, priceLines, suppliers } from "~/db/schema";
+import { containsPattern } from "~/lib/list-filters";
 
-export async function listSupplierOverview() {
-  const lineCounts = db
-    .select({
-      supplierId: priceLines.supplierId,
-      lines: count().as("lines"),
-    })
-    .from(priceLines)
-    .groupBy(priceLines.supplierId)
-    .as("line_counts");
-  const lastImports = db
-    .select({
-      supplierId: priceImports.supplierId,
-      lastImportAt: max(priceImports.createdAt).as("last_import_at"),
-    })
-    .from(priceImports)
-    .groupBy(priceImports.supplierId)
-    .as("last_imports");
-  const rows = await db
+/**
+ * One page of suppliers by name, those whose name or e-mail holds `search`, each with its
+ * price lines and last import counted for that page only (on the supplier-first indexes
+ * of price lines and imports).
+ */
+export async function listSupplierOverview(query: {
+  search?: string;
+  page: number;
+  pageSize: number;
+}) {
+  const where = query.search
+    ? or(
+        like(suppliers.name, containsPattern(query.search)),
+        like(suppliers.email, containsPattern(query.search)),
+      )
+    : undefined;
+  const [counted] = await db
+    .select({ total: count() })
+    .from(suppliers)
+    .where(where);
+  const page = await db
     .select({
       id: suppliers.id,
       name: suppliers.name,
@@ -28,19 +32,44 @@ export async function listSupplierOverview() {
       currency: suppliers.currency,
       leadTimeDays: suppliers.leadTimeDays,
       notes: suppliers.notes,
-      priceLines: lineCounts.lines,
-      lastImportAt: lastImports.lastImportAt,
     })
     .from(suppliers)
-    .leftJoin(lineCounts, eq(lineCounts.supplierId, suppliers.id))
-    .leftJoin(lastImports, eq(lastImports.supplierId, suppliers.id))
+    .where(where)
     .orderBy(asc(suppliers.name))
-    .limit(1000);
-  return rows.map((row) => ({
-    ...row,
-    priceLines: Number(row.priceLines ?? 0),
-    lastImportAt: utcDate(row.lastImportAt),
-  }));
+    .limit(query.pageSize)
+    .offset((query.page - 1) * query.pageSize);
+  const ids = page.map((supplier) => supplier.id);
+  const [lineCounts, lastImports] =
+    ids.length === 0
+      ? [[], []]
+      : await Promise.all([
+          db
+            .select({ supplierId: priceLines.supplierId, lines: count() })
+            .from(priceLines)
+            .where(inArray(priceLines.supplierId, ids))
+            .groupBy(priceLines.supplierId),
+          db
+            .select({
+              supplierId: priceImports.supplierId,
+              lastImportAt: max(priceImports.createdAt),
+            })
+            .from(priceImports)
+            .where(inArray(priceImports.supplierId, ids))
+            .groupBy(priceImports.supplierId),
+        ]);
+  return {
+    total: counted?.total ?? 0,
+    suppliers: page.map((row) => ({
+      ...row,
+      priceLines: Number(
+        lineCounts.find((entry) => entry.supplierId === row.id)?.lines ?? 0,
+      ),
+      lastImportAt: utcDate(
+        lastImports.find((entry) => entry.supplierId === row.id)
+          ?.lastImportAt ?? null,
+      ),
+    })),
+  };
 }
 
 /** MariaDB DATETIME values are UTC; through a subquery they may arrive as text. */

@@ -1,19 +1,43 @@
 import { createColumnHelper } from "@tanstack/react-table";
+import { z } from "zod";
 import type { Route } from "./+types/admin-outbox";
 import { requireCapability } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import {
+  FilterChoice,
+  IgnoredFilters,
+  ListEmptyText,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
 import { formatDateTime, formatQuantity } from "~/lib/format";
-import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
+import { readPageOrLast } from "~/lib/search-params";
+import {
+  isFiltered,
+  listHref,
+  readListFilters,
+  searchPageSchema,
+} from "~/lib/list-filters";
 import { listOutbox, outboxPageSize } from "~/mail/outbox.server";
+
+const outboxListSchema = searchPageSchema.extend({
+  state: z
+    .enum(["sent", "unsent"], { error: "state must be sent or unsent." })
+    .optional(),
+});
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "readOutbox");
-  const { total, messages, page, pageCount } = await readPageOrLast(
-    pageFromSearch(new URL(request.url).searchParams.get("page")),
-    outboxPageSize,
-    (page) => listOutbox(page),
+  const { query, ignored } = readListFilters(
+    outboxListSchema,
+    new URL(request.url).searchParams,
   );
-  return { messages, page, pageCount, total };
+  const { page: asked, ...filter } = query;
+  const { total, messages, page, pageCount } = await readPageOrLast(
+    asked,
+    outboxPageSize,
+    (page) => listOutbox(page, outboxPageSize, filter),
+  );
+  return { messages, page, pageCount, total, filter, ignored };
 }
 
 export const meta: Route.MetaFunction = () => [
@@ -84,24 +108,52 @@ const columns = [
 
 export default function AdminOutbox({ loaderData }: Route.ComponentProps) {
   return (
-    <section aria-labelledby="outbox-heading">
+    <section aria-labelledby="outbox-heading" className="space-y-4">
       <h1 id="outbox-heading" className="text-2xl font-semibold">
         Outbox
       </h1>
-      <p className="mb-4 mt-1 text-graphite-500">
+      <p className="mt-1 text-graphite-500">
         Every e-mail Turnledger has written, newest first ({loaderData.total} in
         all). Unsent ones go out with <code>npm run mail:retry</code>.
         Invitation and password links reach their recipient only: they are never
         shown here and are removed once a message is sent.
       </p>
+      <ListSearchForm
+        path="/admin/outbox"
+        label="Search the outbox"
+        search={{
+          value: loaderData.filter.search,
+          placeholder: "Recipient or subject",
+        }}
+        filtered={isFiltered(loaderData.filter)}
+      >
+        <FilterChoice
+          name="state"
+          label="State"
+          value={loaderData.filter.state}
+          options={[
+            { value: "unsent", label: "Not sent yet" },
+            { value: "sent", label: "Sent" },
+          ]}
+        />
+      </ListSearchForm>
+      <IgnoredFilters names={loaderData.ignored} />
       <DataTable
         caption="E-mail sent by Turnledger"
         columns={columns}
         rows={loaderData.messages}
         page={loaderData.page}
         pageCount={loaderData.pageCount}
-        pageHref={(page) => `?page=${page}`}
-        emptyText="No e-mail yet."
+        pageHref={(page) =>
+          listHref("/admin/outbox", { ...loaderData.filter, page })
+        }
+        emptyText={
+          <ListEmptyText
+            filtered={isFiltered(loaderData.filter)}
+            clearHref="/admin/outbox"
+            emptyText="No e-mail yet."
+          />
+        }
       />
     </section>
   );

@@ -7,19 +7,32 @@ import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, useNavigation } from "react-router";
+import { z } from "zod";
 import type { Route } from "./+types/admin-people";
 import { requireCapability } from "~/auth/guard.server";
 import { isDuplicateKey } from "~/db/database-errors";
 import { DataTable } from "~/components/data-table";
 import { useFlash } from "~/components/flash-message";
+import {
+  FilterChoice,
+  IgnoredFilters,
+  ListEmptyText,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages, TextField } from "~/components/text-field";
 import { appUrl } from "~/lib/app-url.server";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatDateTime } from "~/lib/format";
-import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
+import { readPageOrLast } from "~/lib/search-params";
+import {
+  isFiltered,
+  listHref,
+  readListFilters,
+  searchPageSchema,
+} from "~/lib/list-filters";
 import { inviteSchema } from "~/lib/people-schemas";
-import { roleLabels } from "~/lib/roles";
+import { roleLabels, roles } from "~/lib/roles";
 import {
   emailIsTaken,
   invitePerson,
@@ -27,14 +40,25 @@ import {
   peoplePageSize,
 } from "~/people/people.server";
 
+const peopleListSchema = searchPageSchema.extend({
+  role: z
+    .enum(roles, { error: `role must be one of ${roles.join(", ")}.` })
+    .optional(),
+});
+
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "managePeople");
-  const { people, page, pageCount } = await readPageOrLast(
-    pageFromSearch(new URL(request.url).searchParams.get("page")),
-    peoplePageSize,
-    (page) => listPeople(page),
+  const { query, ignored } = readListFilters(
+    peopleListSchema,
+    new URL(request.url).searchParams,
   );
-  return { people, page, pageCount };
+  const { page: asked, ...filter } = query;
+  const { people, page, pageCount } = await readPageOrLast(
+    asked,
+    peoplePageSize,
+    (page) => listPeople(page, filter),
+  );
+  return { people, page, pageCount, filter, ignored };
 }
 
 export async function action({ request }: Route.ActionArgs) {
@@ -133,13 +157,45 @@ export default function AdminPeople({
         <h1 id="people-heading" className="mb-4 text-2xl font-semibold">
           People
         </h1>
+        <div className="mb-4 space-y-3">
+          <ListSearchForm
+            path="/admin/people"
+            label="Search the people"
+            search={{
+              value: loaderData.filter.search,
+              placeholder: "Name or e-mail",
+            }}
+            filtered={isFiltered(loaderData.filter)}
+          >
+            <FilterChoice
+              name="role"
+              label="Role"
+              value={loaderData.filter.role}
+              allLabel="Any role"
+              options={roles.map((role) => ({
+                value: role,
+                label: roleLabels[role],
+              }))}
+            />
+          </ListSearchForm>
+          <IgnoredFilters names={loaderData.ignored} />
+        </div>
         <DataTable
           caption="People with an account"
           columns={columns}
           rows={loaderData.people}
           page={loaderData.page}
           pageCount={loaderData.pageCount}
-          pageHref={(page) => `?page=${page}`}
+          pageHref={(page) =>
+            listHref("/admin/people", { ...loaderData.filter, page })
+          }
+          emptyText={
+            <ListEmptyText
+              filtered={isFiltered(loaderData.filter)}
+              clearHref="/admin/people"
+              emptyText="Nobody has an account yet."
+            />
+          }
         />
       </section>
       <InviteForm key={invited} lastResult={actionData?.result} />

@@ -1,31 +1,47 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import { Link } from "react-router";
+import { z } from "zod";
 import type { Route } from "./+types/alerts";
 import { purchaseRequestsBySupplier } from "~/alerts/purchase-requests.server";
 import { alertsPageSize, listAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
 import { AlertState } from "~/components/alerts/alert-state";
 import { DataTable } from "~/components/data-table";
+import {
+  IgnoredFilters,
+  ListEmptyText,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
 import { OrderFromAlertButton } from "~/components/purchase-orders/order-from-alert-button";
 import { formatDateTime } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
-import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
+import { readPageOrLast } from "~/lib/search-params";
+import {
+  listHref,
+  readListFilters,
+  searchPageSchema,
+} from "~/lib/list-filters";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 const statuses = ["open", "closed", "all"] as const;
-type Status = (typeof statuses)[number];
+
+const alertListSchema = searchPageSchema.extend({
+  status: z
+    .enum(statuses, { error: "status must be open, closed or all." })
+    .default("open"),
+});
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  const search = new URL(request.url).searchParams;
-  const asked = search.get("status");
-  const status: Status = (statuses as readonly string[]).includes(asked ?? "")
-    ? (asked as Status)
-    : "open";
+  const { query, ignored } = readListFilters(
+    alertListSchema,
+    new URL(request.url).searchParams,
+  );
+  const { status, search } = query;
   const { alerts, total, page, pageCount } = await readPageOrLast(
-    pageFromSearch(search.get("page")),
+    query.page,
     alertsPageSize,
-    (page) => listAlerts({ status, page }),
+    (page) => listAlerts({ status, search, page }),
   );
   const canBuy = userCan(user, "draftPurchaseRequests");
   const requests = canBuy
@@ -36,6 +52,8 @@ export async function loader({ request }: Route.LoaderArgs) {
     : [];
   return {
     status,
+    search,
+    ignored,
     canOrder: userCan(user, "orderPurchases"),
     alerts,
     page,
@@ -145,8 +163,28 @@ const orderColumn = column.display({
 });
 
 export default function Alerts({ loaderData }: Route.ComponentProps) {
-  const { status, alerts, page, pageCount, total, canBuy, canOrder, requests } =
-    loaderData;
+  const {
+    status,
+    search,
+    ignored,
+    alerts,
+    page,
+    pageCount,
+    total,
+    canBuy,
+    canOrder,
+    requests,
+  } = loaderData;
+  /** The list's address; the open alerts are the default and stay out of it. */
+  const alertsHref = (changes: { status?: string; page?: number }) =>
+    listHref("/alerts", {
+      search,
+      status:
+        (changes.status ?? status) === "open"
+          ? undefined
+          : (changes.status ?? status),
+      page: changes.page,
+    });
   return (
     <div>
       <div className="mb-4 flex flex-wrap items-baseline justify-between gap-3">
@@ -155,7 +193,7 @@ export default function Alerts({ loaderData }: Route.ComponentProps) {
           {statuses.map((choice) => (
             <Link
               key={choice}
-              to={`?status=${choice}`}
+              to={alertsHref({ status: choice })}
               aria-current={choice === status ? "page" : undefined}
               className={
                 choice === status
@@ -209,17 +247,33 @@ export default function Alerts({ loaderData }: Route.ComponentProps) {
           )}
         </section>
       ) : null}
+      <div className="mb-4 space-y-3">
+        <ListSearchForm
+          path="/alerts"
+          label="Search the alerts"
+          search={{ value: search, placeholder: "SKU, name or size" }}
+          filtered={Boolean(search)}
+          keep={{ status: status === "open" ? undefined : status }}
+        />
+        <IgnoredFilters names={ignored} />
+      </div>
       <DataTable
         caption={`${total} ${status === "all" ? "" : `${status} `}alert${total === 1 ? "" : "s"}, newest first`}
         columns={canOrder ? [...columns, orderColumn] : columns}
         rows={alerts}
         page={page}
         pageCount={pageCount}
-        pageHref={(next) => `?status=${status}&page=${next}`}
+        pageHref={(next) => alertsHref({ page: next })}
         emptyText={
-          status === "open"
-            ? "No item is below its reorder point."
-            : "No alerts here."
+          <ListEmptyText
+            filtered={Boolean(search)}
+            clearHref="/alerts"
+            emptyText={
+              status === "open"
+                ? "No item is below its reorder point."
+                : "No alerts here."
+            }
+          />
         }
       />
     </div>

@@ -1,5 +1,5 @@
 import { parseForm } from "~/lib/parse-form";
-import { data, redirect } from "react-router";
+import { data } from "react-router";
 import type { Route } from "./+types/build-orders";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { isBuildOrderError } from "~/build-orders/build-order-errors";
@@ -8,8 +8,8 @@ import {
   createFormSchema,
 } from "~/build-orders/build-order-forms";
 import {
+  buildOrderListFilterSchema,
   buildOrderListHref,
-  buildOrderStatusFrom,
 } from "~/build-orders/build-order-list-address";
 import { buildOrderStatusLabels } from "~/build-orders/build-order-status";
 import {
@@ -21,32 +21,45 @@ import { buildOrderListColumns } from "~/components/build-orders/build-order-lis
 import { BuildOrderStatusFilter } from "~/components/build-orders/build-order-status-filter";
 import { NewBuildOrderForm } from "~/components/build-orders/new-build-order-form";
 import { DataTable } from "~/components/data-table";
+import {
+  IgnoredFilters,
+  ListEmptyText,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
 import { redirectWithFlash } from "~/lib/flash.server";
-import { pageFromSearch } from "~/lib/search-params";
+import { pageParam, readPageOrLast } from "~/lib/search-params";
+import { isFiltered, listHref, readListFilters } from "~/lib/list-filters";
 import { userCan } from "~/lib/capabilities";
 import { countText } from "~/lib/unit-text";
 import { refusalReply } from "~/lib/refusal-reply";
 
 const pageSize = 25;
 
+const buildOrderListPageSchema = buildOrderListFilterSchema.extend({
+  page: pageParam,
+});
+
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  const url = new URL(request.url);
-  const status = buildOrderStatusFrom(url.searchParams.get("status"));
-  const page = pageFromSearch(url.searchParams.get("page"));
+  const { query, ignored } = readListFilters(
+    buildOrderListPageSchema,
+    new URL(request.url).searchParams,
+  );
+  const { page, ...filter } = query;
   const canCreate = userCan(user, "createBuildOrders");
-  const [{ total, buildOrders }, revisions] = await Promise.all([
-    listBuildOrders({ status, page, pageSize }),
+  const [list, revisions] = await Promise.all([
+    readPageOrLast(page, pageSize, (asked) =>
+      listBuildOrders({ ...filter, page: asked, pageSize }),
+    ),
     canCreate ? listReleasedRevisions() : Promise.resolve([]),
   ]);
-  const pageCount = Math.max(1, Math.ceil(total / pageSize));
-  if (page > pageCount) throw redirect(buildOrderListHref(status, pageCount));
   return {
-    buildOrders,
-    total,
-    page,
-    pageCount,
-    status: status ?? null,
+    buildOrders: list.buildOrders,
+    total: list.total,
+    page: list.page,
+    pageCount: list.pageCount,
+    filter,
+    ignored,
     canCreate,
     revisions: revisions.map((revision) => ({
       value: `${revision.designId}/${revision.revision}`,
@@ -88,8 +101,17 @@ export default function BuildOrders({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { buildOrders, total, page, pageCount, status, canCreate, revisions } =
-    loaderData;
+  const {
+    buildOrders,
+    total,
+    page,
+    pageCount,
+    filter,
+    ignored,
+    canCreate,
+    revisions,
+  } = loaderData;
+  const filtered = isFiltered(filter);
   return (
     <div
       className={
@@ -97,27 +119,50 @@ export default function BuildOrders({
       }
     >
       <section aria-labelledby="build-orders-heading" className="space-y-4">
-        <div>
-          <h1 id="build-orders-heading" className="text-2xl font-semibold">
-            Build orders
-          </h1>
-          <p className="mt-1 text-graphite-500">
-            Motors to build from released designs: what each needs, what the
-            store holds for it and what has gone to the bench.
-          </p>
+        <div className="flex flex-wrap items-end justify-between gap-4">
+          <div>
+            <h1 id="build-orders-heading" className="text-2xl font-semibold">
+              Build orders
+            </h1>
+            <p className="mt-1 text-graphite-500">
+              Motors to build from released designs: what each needs, what the
+              store holds for it and what has gone to the bench.
+            </p>
+          </div>
+          <a
+            href={listHref("/build-orders/export.csv", filter)}
+            download
+            className="button-quiet"
+          >
+            Download CSV
+          </a>
         </div>
-        <BuildOrderStatusFilter status={status} />
+        <ListSearchForm
+          path="/build-orders"
+          label="Search the build orders"
+          search={{ value: filter.search, placeholder: "BO-12 or design name" }}
+          filtered={Boolean(filter.search)}
+          keep={{ status: filter.status }}
+        />
+        <BuildOrderStatusFilter filter={filter} />
+        <IgnoredFilters names={ignored} />
         <DataTable
           caption="Build orders, newest first"
           columns={buildOrderListColumns}
           rows={buildOrders}
           page={page}
           pageCount={pageCount}
-          pageHref={(target) => buildOrderListHref(status, target)}
+          pageHref={(target) => buildOrderListHref(filter, target)}
           emptyText={
-            status
-              ? `No build order is ${buildOrderStatusLabels[status].toLowerCase()}.`
-              : "No build orders yet."
+            filter.status && !filter.search ? (
+              `No build order is ${buildOrderStatusLabels[filter.status].toLowerCase()}.`
+            ) : (
+              <ListEmptyText
+                filtered={filtered}
+                clearHref="/build-orders"
+                emptyText="No build orders yet."
+              />
+            )
           }
         />
         {total > 0 ? (

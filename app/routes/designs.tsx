@@ -10,6 +10,11 @@ import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/designs";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import {
+  IgnoredFilters,
+  ListEmptyText,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
 import { insulationClassLabel } from "~/components/design/fields-form";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
@@ -24,7 +29,12 @@ import { createDesign, listDesigns } from "~/designs/designs.server";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
-import { pageFromSearch, readPageOrLast } from "~/lib/search-params";
+import { readPageOrLast } from "~/lib/search-params";
+import {
+  listHref,
+  readListFilters,
+  searchPageSchema,
+} from "~/lib/list-filters";
 import { isDomainError } from "~/lib/domain-error";
 import { countText } from "~/lib/unit-text";
 import { refusalReply } from "~/lib/refusal-reply";
@@ -34,12 +44,16 @@ const designsPerPage = 25;
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
   // A page past the end (designs were removed, or a typed address) shows the last one.
-  const listed = await readPageOrLast(
-    pageFromSearch(new URL(request.url).searchParams.get("page")),
-    designsPerPage,
-    (page) => listDesigns({ page, perPage: designsPerPage }),
+  const { query, ignored } = readListFilters(
+    searchPageSchema,
+    new URL(request.url).searchParams,
+  );
+  const listed = await readPageOrLast(query.page, designsPerPage, (page) =>
+    listDesigns({ page, perPage: designsPerPage, search: query.search }),
   );
   return {
+    search: query.search,
+    ignored,
     designs: listed.designs,
     total: listed.total,
     page: listed.page,
@@ -159,7 +173,8 @@ export default function Designs({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { designs, total, page, pageCount, canCreate } = loaderData;
+  const { designs, total, page, pageCount, canCreate, search, ignored } =
+    loaderData;
   return (
     <div
       className={canCreate ? "grid gap-8 lg:grid-cols-[1fr_24rem]" : undefined}
@@ -175,9 +190,20 @@ export default function Designs({
             next revision.
           </p>
         </div>
+        <div className="mb-4 space-y-3">
+          <ListSearchForm
+            path="/designs"
+            label="Search the designs"
+            search={{ value: search, placeholder: "Name or motor type" }}
+            filtered={Boolean(search)}
+          />
+          <IgnoredFilters names={ignored} />
+        </div>
         <p className="mb-2 text-sm text-graphite-500">
           {total === 0
-            ? "No designs yet."
+            ? search
+              ? "No design matches."
+              : "No designs yet."
             : `${countText(total, "design")}, by name`}
         </p>
         <DataTable
@@ -186,11 +212,17 @@ export default function Designs({
           rows={designs}
           page={page}
           pageCount={pageCount}
-          pageHref={(target) => `/designs?page=${target}`}
+          pageHref={(target) => listHref("/designs", { search, page: target })}
           emptyText={
-            canCreate
-              ? "No designs yet: start one with the form."
-              : "No designs yet."
+            <ListEmptyText
+              filtered={Boolean(search)}
+              clearHref="/designs"
+              emptyText={
+                canCreate
+                  ? "No designs yet: start one with the form."
+                  : "No designs yet."
+              }
+            />
           }
         />
       </section>

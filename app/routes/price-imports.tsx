@@ -3,6 +3,16 @@ import { data, Link } from "react-router";
 import type { Route } from "./+types/price-imports";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import {
+  IgnoredFilters,
+  ListEmptyText,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
+import {
+  listHref,
+  readListFilters,
+  searchPageSchema,
+} from "~/lib/list-filters";
 import { PriceImportDetail } from "~/components/price-import-detail";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
@@ -53,14 +63,21 @@ export async function loader({ request }: Route.LoaderArgs) {
       canImport: userCan(user, "importPriceLists"),
     };
   }
+  const { query, ignored } = readListFilters(searchPageSchema, search);
   const { imports, ...paging } = await readPageOrLast(
-    page,
+    query.page,
     importPageSize,
-    listPriceImports,
+    (asked) => listPriceImports(asked, query.search),
   );
   return {
     opened: null,
-    list: { imports, page: paging.page, pageCount: paging.pageCount },
+    list: {
+      imports,
+      page: paging.page,
+      pageCount: paging.pageCount,
+      search: query.search,
+      ignored,
+    },
     canImport: userCan(user, "importPriceLists"),
   };
 }
@@ -114,7 +131,7 @@ const columns = [
 export default function PriceImports({ loaderData }: Route.ComponentProps) {
   const { opened, list, canImport } = loaderData;
   return (
-    <div>
+    <div className="space-y-4">
       <div className="mb-4 flex flex-wrap items-baseline justify-between gap-3">
         <h1 className="text-2xl font-semibold">
           {opened ? `Import of ${opened.fileName}` : "Past imports"}
@@ -146,15 +163,32 @@ export default function PriceImports({ loaderData }: Route.ComponentProps) {
       </div>
       {opened ? <PriceImportDetail opened={opened} /> : null}
       {list ? (
-        <DataTable
-          caption="Committed price-list files, newest first"
-          columns={columns}
-          rows={list.imports}
-          page={list.page}
-          pageCount={list.pageCount}
-          pageHref={(page) => `?page=${page}`}
-          emptyText="No price list has been imported yet."
-        />
+        <>
+          <ListSearchForm
+            path="/suppliers/imports"
+            label="Search the past imports"
+            search={{ value: list.search, placeholder: "File or supplier" }}
+            filtered={Boolean(list.search)}
+          />
+          <IgnoredFilters names={list.ignored} />
+          <DataTable
+            caption="Committed price-list files, newest first"
+            columns={columns}
+            rows={list.imports}
+            page={list.page}
+            pageCount={list.pageCount}
+            pageHref={(page) =>
+              listHref("/suppliers/imports", { search: list.search, page })
+            }
+            emptyText={
+              <ListEmptyText
+                filtered={Boolean(list.search)}
+                clearHref="/suppliers/imports"
+                emptyText="No price list has been imported yet."
+              />
+            }
+          />
+        </>
       ) : null}
     </div>
   );

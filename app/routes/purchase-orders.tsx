@@ -2,6 +2,8 @@ import { Link } from "react-router";
 import type { Route } from "./+types/purchase-orders";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import { ListEmptyText } from "~/components/lists/list-search-form";
+import { isFiltered } from "~/lib/list-filters";
 import { PurchaseOrderFilters } from "~/components/purchase-orders/purchase-order-filters";
 import { purchaseOrderListColumns } from "~/components/purchase-orders/purchase-order-list-columns";
 import { userCan } from "~/lib/capabilities";
@@ -77,9 +79,15 @@ export default function PurchaseOrders({ loaderData }: Route.ComponentProps) {
         pageCount={pageCount}
         pageHref={(target) => purchaseOrderListHref(filter, target)}
         emptyText={
-          filter.status
-            ? `No order is ${purchaseOrderStatusLabels[filter.status].toLowerCase()}.`
-            : "No purchase orders yet."
+          filter.status && !filter.search && !filter.supplierId ? (
+            `No order is ${purchaseOrderStatusLabels[filter.status].toLowerCase()}.`
+          ) : (
+            <ListEmptyText
+              filtered={isFiltered({ ...filter })}
+              clearHref="/purchase-orders"
+              emptyText="No purchase orders yet."
+            />
+          )
         }
       />
       {total > 0 ? (

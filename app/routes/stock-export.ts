@@ -1,6 +1,7 @@
 import type { Route } from "./+types/stock-export";
 import { searchParamsObject } from "~/lib/search-params";
 import { requireUser } from "~/auth/guard.server";
+import { csvDownload, csvFilterRefusal } from "~/lib/csv-download.server";
 import { itemListQuerySchema } from "~/stock/item-list-query";
 import { listItems } from "~/stock/items.server";
 import {
@@ -21,27 +22,11 @@ export async function loader({ request }: Route.LoaderArgs) {
   delete values.page;
   delete values.pageSize;
   const parsed = itemListQuerySchema.safeParse(values);
-  if (!parsed.success) {
-    const problems = parsed.error.issues.map(
-      (issue) => `${issue.path.join(".")}: ${issue.message}`,
-    );
-    return new Response(
-      `The export's filters are wrong.\n${problems.join("\n")}\n`,
-      {
-        status: 400,
-        headers: { "Content-Type": "text/plain; charset=utf-8" },
-      },
-    );
-  }
+  if (!parsed.success) return csvFilterRefusal(parsed.error);
   const { total, items } = await listItems(
     itemListQueryOf(viewOf(parsed.data), stockCsvRowLimit),
   );
-  return new Response(stockCsv(items), {
-    headers: {
-      "Content-Type": "text/csv; charset=utf-8",
-      "Content-Disposition": `attachment; filename="${stockCsvFilename(new Date())}"`,
-      "Cache-Control": "no-store",
-      "X-Total-Count": String(total),
-    },
+  return csvDownload(stockCsv(items), stockCsvFilename(new Date()), {
+    "X-Total-Count": String(total),
   });
 }

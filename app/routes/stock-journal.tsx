@@ -1,8 +1,15 @@
 import { createColumnHelper } from "@tanstack/react-table";
-import { Form, Link, useSearchParams } from "react-router";
+import { Link } from "react-router";
 import type { Route } from "./+types/stock-journal";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import {
+  FilterChoice,
+  FilterText,
+  IgnoredFilters,
+  ListEmptyText,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
 import {
   ReceiptOrderLink,
   referenceBesides,
@@ -13,25 +20,29 @@ import {
   formatStockQuantity,
   formatUnitCost,
 } from "~/stock/stock-quantity-text";
-import { readSearchLeniently, searchParamsObject } from "~/lib/search-params";
-import { movementJournalQuerySchema } from "~/stock/movement-journal-query";
+import { isFiltered, listHref, readListFilters } from "~/lib/list-filters";
+import {
+  movementJournalFilterSchema,
+  movementJournalQuerySchema,
+} from "~/stock/movement-journal-query";
 import { listMovements } from "~/stock/movement-journal.server";
 import { LotLink } from "~/stock/item-page-columns";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
   // Filters the page cannot use are left out and named; a page that is no page is corrected.
-  const { query, errors } = readSearchLeniently(
+  const { query, ignored } = readListFilters(
     movementJournalQuerySchema,
-    searchParamsObject(new URL(request.url).searchParams),
+    new URL(request.url).searchParams,
   );
   const { hasMore, movements } = await listMovements(query);
   return {
     movements,
     hasMore,
     page: query.page,
-    filters: query,
-    ignored: Object.values(errors).flat(),
+    // The filters alone (no page), for the form, the page links and the CSV link.
+    filters: movementJournalFilterSchema.parse(query),
+    ignored,
   };
 }
 
@@ -130,99 +141,71 @@ const columns = [
 
 export default function StockJournal({ loaderData }: Route.ComponentProps) {
   const { movements, hasMore, page, filters, ignored } = loaderData;
-  const [searchParams] = useSearchParams();
-  const pageLink = (target: number) => {
-    const next = new URLSearchParams(searchParams);
-    next.set("page", String(target));
-    return `?${next}`;
-  };
+  const filtered = isFiltered(filters);
+  const pageLink = (target: number) =>
+    listHref("/stock/journal", { ...filters, page: target });
   return (
     <div className="space-y-5">
-      <div>
-        <h1 className="text-2xl font-semibold">Movement journal</h1>
-        <p className="mt-1 text-graphite-500">
-          Every stock movement, newest first. Movements are never edited; a
-          correction is a new movement.
-        </p>
-      </div>
-      <Form
-        method="get"
-        className="panel grid gap-3 sm:grid-cols-3 lg:grid-cols-6"
-        aria-label="Filter the journal"
-      >
-        <label className="block">
-          <span className="field-label">Type</span>
-          <select
-            name="type"
-            defaultValue={filters.type ?? ""}
-            className="field-input"
-          >
-            <option value="">all</option>
-            {movementTypes.map((type) => (
-              <option key={type} value={type}>
-                {type}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="block">
-          <span className="field-label">Item SKU</span>
-          <input
-            name="sku"
-            defaultValue={filters.sku ?? ""}
-            className="field-input"
-          />
-        </label>
-        <label className="block">
-          <span className="field-label">Person (e-mail)</span>
-          <input
-            name="user"
-            type="email"
-            defaultValue={filters.user ?? ""}
-            className="field-input"
-          />
-        </label>
-        <label className="block">
-          <span className="field-label">From</span>
-          <input
-            name="from"
-            type="date"
-            defaultValue={filters.from ?? ""}
-            className="field-input"
-          />
-        </label>
-        <label className="block">
-          <span className="field-label">To</span>
-          <input
-            name="to"
-            type="date"
-            defaultValue={filters.to ?? ""}
-            className="field-input"
-          />
-        </label>
-        <div className="flex items-end gap-2">
-          <button type="submit" className="button-primary">
-            Filter
-          </button>
-          <Link to="/stock/journal" className="button-quiet">
-            Clear
-          </Link>
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <div>
+          <h1 className="text-2xl font-semibold">Movement journal</h1>
+          <p className="mt-1 text-graphite-500">
+            Every stock movement, newest first. Movements are never edited; a
+            correction is a new movement.
+          </p>
         </div>
-      </Form>
-      {ignored.length > 0 ? (
-        <p
-          role="alert"
-          className="rounded-md border border-caution/40 bg-caution/5 px-3 py-2 text-sm text-graphite-800"
+        <a
+          href={listHref("/stock/journal.csv", filters)}
+          download
+          className="button-quiet"
         >
-          Left out of the filter because their values in the address were not
-          understood: {ignored.join(" ")}
-        </p>
-      ) : null}
+          Download CSV
+        </a>
+      </div>
+      <ListSearchForm
+        path="/stock/journal"
+        label="Filter the journal"
+        search={{
+          name: "sku",
+          label: "Item SKU",
+          value: filters.sku,
+          placeholder: "WIRE-CU-0.50",
+        }}
+        filtered={filtered}
+      >
+        <FilterText name="lot" label="Lot" value={filters.lot} />
+        <FilterText
+          name="reference"
+          label="Reference"
+          value={filters.reference}
+        />
+        <FilterText
+          name="user"
+          label="Person (name or e-mail)"
+          value={filters.user}
+          maxLength={254}
+        />
+        <FilterChoice
+          name="type"
+          label="Type"
+          value={filters.type}
+          options={movementTypes.map((type) => ({ value: type, label: type }))}
+        />
+        <FilterText name="from" label="From" type="date" value={filters.from} />
+        <FilterText name="to" label="To" type="date" value={filters.to} />
+      </ListSearchForm>
+      <IgnoredFilters names={ignored} />
       <DataTable
         caption="Stock movements"
         columns={columns}
         rows={movements}
-        emptyText="No movements match."
+        emptyText={
+          <ListEmptyText
+            filtered={filtered}
+            clearHref="/stock/journal"
+            emptyText="No movements yet: receipts, issues and counts appear here as they are recorded."
+          />
+        }
       />
       <nav
         aria-label="Journal pages"

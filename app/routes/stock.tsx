@@ -5,6 +5,10 @@ import type { Route } from "./+types/stock";
 import { requireUser } from "~/auth/guard.server";
 import { BelowReorderMark } from "~/components/below-reorder-mark";
 import { DataTable } from "~/components/data-table";
+import {
+  IgnoredFilters,
+  ListEmptyText,
+} from "~/components/lists/list-search-form";
 import { SortHeaderLink } from "~/components/sort-header-link";
 import { StockListFilter } from "~/components/stock/stock-list-filter";
 import { formatQuantity, formatAmount } from "~/lib/format";
@@ -205,15 +209,7 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
 
       <StockListFilter view={view} />
 
-      {ignored.length > 0 ? (
-        <p
-          role="alert"
-          className="rounded-md border border-caution/40 bg-caution/5 px-3 py-2 text-sm text-graphite-800"
-        >
-          Left out of the view because their values in the address were not
-          understood: {ignored.join(", ")}.
-        </p>
-      ) : null}
+      <IgnoredFilters names={ignored} />
 
       <p role="status" className="text-sm text-graphite-700">
         {total === 0
@@ -232,9 +228,14 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
         pageCount={pageCount}
         pageHref={(page) => `/stock${stockListSearch(view, { page })}`}
         emptyText={
-          view.search || view.kind || view.belowReorder
-            ? "No item matches these filters."
-            : "The catalogue is empty: add the first item."
+          <ListEmptyText
+            filtered={
+              stockListSearch(view, { page: 1, sort: "sku", order: "asc" }) !==
+              ""
+            }
+            clearHref="/stock"
+            emptyText="The catalogue is empty: add the first item."
+          />
         }
       />
       <p className="text-xs text-graphite-500">

@@ -1,8 +1,15 @@
 import { parseForm } from "~/lib/parse-form";
-import { data, redirect } from "react-router";
+import { data } from "react-router";
+import { z } from "zod";
 import type { Route } from "./+types/stocktakes";
 import { requireCapability } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import {
+  FilterChoice,
+  IgnoredFilters,
+  ListEmptyText,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
 import { CycleCountPanel } from "~/components/stocktakes/cycle-count-panel";
 import { StartStocktakeForm } from "~/components/stocktakes/start-stocktake-form";
 import { stocktakeListColumns } from "~/components/stocktakes/stocktake-list-columns";
@@ -10,7 +17,15 @@ import { userCan } from "~/lib/capabilities";
 import { isDomainError } from "~/lib/domain-error";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { refusalReply } from "~/lib/refusal-reply";
-import { pageCountOf, pageFromSearch } from "~/lib/search-params";
+import { readPageOrLast } from "~/lib/search-params";
+import {
+  isFiltered,
+  listHref,
+  readListFilters,
+  searchPageSchema,
+} from "~/lib/list-filters";
+import { stocktakeStatuses } from "~/db/tables/storeroom-enums";
+import { stocktakeStatusLabels } from "~/stocktakes/stocktake-reference";
 import { countText } from "~/lib/unit-text";
 import { companyCurrency } from "~/purchasing/suppliers.server";
 import { weeklyCountPlan } from "~/stocktakes/cycle-count.server";
@@ -24,23 +39,37 @@ import {
 
 const pageSize = 25;
 
+const stocktakeListSchema = searchPageSchema.extend({
+  status: z
+    .enum(stocktakeStatuses, {
+      error: `status must be one of ${stocktakeStatuses.join(", ")}.`,
+    })
+    .optional(),
+});
+
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireStocktakeReader(request);
-  const page = pageFromSearch(new URL(request.url).searchParams.get("page"));
+  const { query, ignored } = readListFilters(
+    stocktakeListSchema,
+    new URL(request.url).searchParams,
+  );
+  const { page: asked, ...filter } = query;
   const canStart = userCan(user, "startStocktakes");
-  const [{ total, stocktakes }, locations, plan, currency] = await Promise.all([
-    listStocktakes({ page, pageSize }),
+  const [list, locations, plan, currency] = await Promise.all([
+    readPageOrLast(asked, pageSize, (page) =>
+      listStocktakes({ ...filter, page, pageSize }),
+    ),
     canStart ? listLocationChoices() : Promise.resolve([]),
     weeklyCountPlan(),
     companyCurrency(),
   ]);
-  const pageCount = pageCountOf(total, pageSize);
-  if (page > pageCount) throw redirect(`/stocktakes?page=${pageCount}`);
   return {
-    stocktakes,
-    total,
-    page,
-    pageCount,
+    stocktakes: list.stocktakes,
+    total: list.total,
+    page: list.page,
+    pageCount: list.pageCount,
+    filter,
+    ignored,
     canStart,
     locations,
     currency,
@@ -88,6 +117,8 @@ export default function Stocktakes({
     total,
     page,
     pageCount,
+    filter,
+    ignored,
     canStart,
     locations,
     plan,
@@ -110,14 +141,39 @@ export default function Stocktakes({
               approves the differences.
             </p>
           </div>
+          <ListSearchForm
+            path="/stocktakes"
+            label="Search the stocktakes"
+            search={{ value: filter.search, placeholder: "ST-12 or note" }}
+            filtered={isFiltered(filter)}
+          >
+            <FilterChoice
+              name="status"
+              label="Status"
+              value={filter.status}
+              options={stocktakeStatuses.map((status) => ({
+                value: status,
+                label: stocktakeStatusLabels[status],
+              }))}
+            />
+          </ListSearchForm>
+          <IgnoredFilters names={ignored} />
           <DataTable
             caption="Stocktakes, newest first"
             columns={stocktakeListColumns}
             rows={stocktakes}
             page={page}
             pageCount={pageCount}
-            pageHref={(target) => `/stocktakes?page=${target}`}
-            emptyText="No stocktakes yet."
+            pageHref={(target) =>
+              listHref("/stocktakes", { ...filter, page: target })
+            }
+            emptyText={
+              <ListEmptyText
+                filtered={isFiltered(filter)}
+                clearHref="/stocktakes"
+                emptyText="No stocktakes yet."
+              />
+            }
           />
           {total > 0 ? (
             <p className="text-sm text-graphite-500">

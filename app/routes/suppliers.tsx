@@ -10,6 +10,11 @@ import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/suppliers";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import {
+  IgnoredFilters,
+  ListEmptyText,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
 import { SupplierFields } from "~/components/suppliers/supplier-fields";
 import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
@@ -24,15 +29,34 @@ import {
 import { listSupplierOverview } from "~/purchasing/supplier-overview.server";
 import { createSupplier } from "~/purchasing/suppliers.server";
 import { isDomainError } from "~/lib/domain-error";
+import {
+  listHref,
+  readListFilters,
+  searchPageSchema,
+} from "~/lib/list-filters";
+import { readPageOrLast } from "~/lib/search-params";
+
+const pageSize = 50;
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  const [suppliers, coverage] = await Promise.all([
-    listSupplierOverview(),
+  const { query, ignored } = readListFilters(
+    searchPageSchema,
+    new URL(request.url).searchParams,
+  );
+  const [list, coverage] = await Promise.all([
+    readPageOrLast(query.page, pageSize, (page) =>
+      listSupplierOverview({ search: query.search, page, pageSize }),
+    ),
     currencyCoverage(),
   ]);
   return {
-    suppliers,
+    suppliers: list.suppliers,
+    total: list.total,
+    page: list.page,
+    pageCount: list.pageCount,
+    search: query.search,
+    ignored,
     coverage,
     canKeep: userCan(user, "keepSuppliers"),
   };
@@ -117,7 +141,7 @@ export default function Suppliers({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { suppliers, canKeep } = loaderData;
+  const { suppliers, canKeep, search, ignored, page, pageCount } = loaderData;
   return (
     <div
       className={canKeep ? "grid gap-8 lg:grid-cols-[1fr_22rem]" : undefined}
@@ -144,12 +168,31 @@ export default function Suppliers({
             </Link>
           </nav>
         </div>
+        <div className="mb-4 space-y-3">
+          <ListSearchForm
+            path="/suppliers"
+            label="Search the suppliers"
+            search={{ value: search, placeholder: "Name or e-mail" }}
+            filtered={Boolean(search)}
+          />
+          <IgnoredFilters names={ignored} />
+        </div>
         <DataTable
           caption="Suppliers, their price lines and last price-list import"
           columns={columns}
           rows={suppliers}
-          sortable
-          emptyText="No suppliers yet."
+          page={page}
+          pageCount={pageCount}
+          pageHref={(target) =>
+            listHref("/suppliers", { search, page: target })
+          }
+          emptyText={
+            <ListEmptyText
+              filtered={Boolean(search)}
+              clearHref="/suppliers"
+              emptyText="No suppliers yet."
+            />
+          }
         />
       </section>
       {canKeep ? (

@@ -1,4 +1,5 @@
 /** Reading the catalogue with its kept balances: lists (paged on the server) and one item. */
+import { containsPattern } from "~/lib/list-filters";
 import {
   and,
   asc,
@@ -44,10 +45,9 @@ function itemFilters(query: ItemListQuery): SQL | undefined {
   const search = query.search?.trim();
   if (search) {
     // search_text is SKU, name and size in lower case with a binary collation: one fast LIKE.
-    const escaped = search
-      .toLowerCase()
-      .replace(/[\\%_]/g, (character) => `\\${character}`);
-    conditions.push(like(items.searchText, `%${escaped}%`));
+    conditions.push(
+      like(items.searchText, containsPattern(search.toLowerCase())),
+    );
   }
   return conditions.length > 0 ? and(...conditions) : undefined;
 }

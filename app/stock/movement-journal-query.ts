@@ -1,20 +1,40 @@
-/** The movement journal's filters and page, from a query string (page and API share it). */
+/** The movement journal's filters and page, from a query string (page, CSV export and API share it). */
 import { z } from "zod";
 import { movementTypes } from "~/db/tables/stock-enums";
 import { dayParam, pageParam, pageSizeParam } from "~/lib/search-params";
 
-export const movementJournalQuerySchema = z.object({
+export const movementJournalFilterSchema = z.object({
   type: z
     .enum(movementTypes, {
       error: `type must be one of ${movementTypes.join(", ")}.`,
     })
     .optional(),
-  sku: z.string().trim().max(40).optional(),
-  user: z.string().trim().max(254).optional(),
+  /** The item's SKU, exactly (letter case aside). */
+  sku: z.string().trim().max(40, "sku is at most 40 characters.").optional(),
+  /** A lot number, exactly; with `sku`, that item's lot only. */
+  lot: z.string().trim().max(40, "lot is at most 40 characters.").optional(),
+  /** A movement's reference ("BO-12", "PO-7"), exactly. */
+  reference: z
+    .string()
+    .trim()
+    .max(80, "reference is at most 80 characters.")
+    .optional(),
+  /** The person who recorded it: their e-mail exactly, or part of their name. */
+  user: z
+    .string()
+    .trim()
+    .max(254, "user is at most 254 characters.")
+    .optional(),
   from: dayParam("from").optional(),
   to: dayParam("to").optional(),
+});
+
+export const movementJournalQuerySchema = movementJournalFilterSchema.extend({
   page: pageParam,
   pageSize: pageSizeParam("pageSize", 500, 50),
 });
 
+export type MovementJournalFilter = z.output<
+  typeof movementJournalFilterSchema
+>;
 export type MovementJournalQuery = z.output<typeof movementJournalQuerySchema>;

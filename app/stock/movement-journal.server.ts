@@ -1,5 +1,15 @@
 /** Reading the movement journal, newest first, a page at a time. */
-import { and, desc, eq, gte, lt, type SQL } from "drizzle-orm";
+import {
+  and,
+  desc,
+  eq,
+  gte,
+  inArray,
+  like,
+  lt,
+  or,
+  type SQL,
+} from "drizzle-orm";
 import { db } from "~/db/client.server";
 import {
   items,
@@ -11,44 +21,88 @@ import {
   users,
 } from "~/db/schema";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
-import { dayAfter, startOfDay } from "~/lib/calendar-days";
-import type { MovementJournalQuery } from "./movement-journal-query";
+import { dayRangeBounds } from "~/lib/calendar-days";
+import { containsPattern } from "~/lib/list-filters";
+import type {
+  MovementJournalFilter,
+  MovementJournalQuery,
+} from "./movement-journal-query";
+
+/** No row has this id: a filter naming something that does not exist matches nothing. */
+const noRow = -1;
 
 /**
- * One page of movements matching the filters. Returns `hasMore` rather than a
- * total: counting a million-row journal for every page would cost more than the page.
+ * The journal's filters as conditions. A SKU, lot number or person is first turned into
+ * ids through their own indexes, so the journal is read by its (item, time), (lot),
+ * (reference), (user, time) and (time) indexes.
  */
-export async function listMovements(
-  query: MovementJournalQuery & { itemId?: number },
-) {
+async function journalConditions(
+  filter: MovementJournalFilter & { itemId?: number },
+): Promise<SQL[]> {
   const conditions: SQL[] = [];
-  if (query.type) conditions.push(eq(stockMovements.type, query.type));
-  if (query.itemId !== undefined)
-    conditions.push(eq(stockMovements.itemId, query.itemId));
-  if (query.sku) {
+  if (filter.type) conditions.push(eq(stockMovements.type, filter.type));
+  let itemId = filter.itemId;
+  if (filter.sku) {
     const [item] = await db
       .select({ id: items.id })
       .from(items)
-      .where(eq(items.sku, query.sku))
+      .where(eq(items.sku, filter.sku))
       .limit(1);
-    conditions.push(eq(stockMovements.itemId, item?.id ?? -1));
+    itemId = item?.id ?? noRow;
   }
-  if (query.user) {
-    const [user] = await db
+  if (itemId !== undefined) conditions.push(eq(stockMovements.itemId, itemId));
+  if (filter.lot) {
+    const found = await db
+      .select({ id: lots.id })
+      .from(lots)
+      .where(
+        and(
+          eq(lots.lotNumber, filter.lot),
+          itemId !== undefined ? eq(lots.itemId, itemId) : undefined,
+        ),
+      )
+      .limit(matchedIdLimit);
+    conditions.push(
+      inArray(stockMovements.lotId, idsOrNone(found.map((lot) => lot.id))),
+    );
+  }
+  if (filter.reference)
+    conditions.push(eq(stockMovements.reference, filter.reference));
+  if (filter.user) {
+    const text = filter.user;
+    const people = await db
       .select({ id: users.id })
       .from(users)
-      .where(eq(users.email, query.user.toLowerCase()))
-      .limit(1);
-    conditions.push(eq(stockMovements.userId, user?.id ?? ""));
-  }
-  if (query.from)
-    conditions.push(gte(stockMovements.createdAt, startOfDay(query.from)));
-  if (query.to)
+      .where(
+        or(
+          eq(users.email, text.toLowerCase()),
+          like(users.name, containsPattern(text)),
+        ),
+      )
+      .limit(matchedIdLimit);
     conditions.push(
-      lt(stockMovements.createdAt, startOfDay(dayAfter(query.to))),
+      inArray(
+        stockMovements.userId,
+        people.length > 0 ? people.map((person) => person.id) : [""],
+      ),
     );
+  }
+  const { start, end } = dayRangeBounds(filter);
+  if (start) conditions.push(gte(stockMovements.createdAt, start));
+  if (end) conditions.push(lt(stockMovements.createdAt, end));
+  return conditions;
+}
 
-  const rows = await db
+/** At most this many lots or people one filter text stands for. */
+const matchedIdLimit = 200;
+
+function idsOrNone(ids: number[]): number[] {
+  return ids.length > 0 ? ids : [noRow];
+}
+
+/** The columns of a journal row, on the page and in the CSV file. */
+function selectJournalRows() {
+  return db
     .select({
       id: stockMovements.id,
       type: stockMovements.type,
@@ -83,7 +137,18 @@ export async function listMovements(
     .leftJoin(
       purchaseReceipts,
       eq(purchaseReceipts.id, purchaseReceiptLines.receiptId),
-    )
+    );
+}
+
+/**
+ * One page of movements matching the filters. Returns `hasMore` rather than a
+ * total: counting a million-row journal for every page would cost more than the page.
+ */
+export async function listMovements(
+  query: MovementJournalQuery & { itemId?: number },
+) {
+  const conditions = await journalConditions(query);
+  const rows = await selectJournalRows()
     .where(conditions.length > 0 ? and(...conditions) : undefined)
     .orderBy(desc(stockMovements.createdAt), desc(stockMovements.id))
     .limit(query.pageSize + 1)
@@ -103,4 +168,40 @@ export async function listMovements(
       createdAt: row.createdAt.toISOString(),
     })),
   };
+}
+
+/**
+ * Every movement matching the filters, newest first, a batch at a time: each batch is
+ * read after the last row of the one before (by time and id, the journal's order and
+ * index), so a long journal is never held whole in memory nor skipped through by offset.
+ */
+export async function* journalInBatches(
+  filter: MovementJournalFilter,
+  batchSize = 1000,
+) {
+  const conditions = await journalConditions(filter);
+  let after: { createdAt: Date; id: number } | undefined;
+  for (;;) {
+    const rows = await selectJournalRows()
+      .where(
+        and(
+          ...conditions,
+          after
+            ? or(
+                lt(stockMovements.createdAt, after.createdAt),
+                and(
+                  eq(stockMovements.createdAt, after.createdAt),
+                  lt(stockMovements.id, after.id),
+                ),
+              )
+            : undefined,
+        ),
+      )
+      .orderBy(desc(stockMovements.createdAt), desc(stockMovements.id))
+      .limit(batchSize);
+    if (rows.length > 0) yield rows;
+    if (rows.length < batchSize) return;
+    const last = rows[rows.length - 1]!;
+    after = { createdAt: last.createdAt, id: last.id };
+  }
 }

@@ -8,7 +8,18 @@
  * Lock order of every stocktake transaction: the stocktake row, then (starting) the
  * chosen locations by id, then stock rows (items before balances, as the ledger does).
  */
-import { and, asc, count, desc, eq, inArray, ne, sql } from "drizzle-orm";
+import {
+  and,
+  asc,
+  count,
+  desc,
+  eq,
+  inArray,
+  like,
+  ne,
+  or,
+  sql,
+} from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
 import { db, type Transaction } from "~/db/client.server";
 import {
@@ -25,7 +36,11 @@ import { writeTransaction } from "~/db/write-transaction.server";
 import { DomainError } from "~/lib/domain-error";
 import type { StocktakeStatus } from "~/db/tables/storeroom-enums";
 import type { StartStocktakeInput } from "./stocktake-forms";
-import { stocktakeReference } from "./stocktake-reference";
+import { containsPattern } from "~/lib/list-filters";
+import {
+  stocktakeIdFromReference,
+  stocktakeReference,
+} from "./stocktake-reference";
 
 /** Locks the stocktake row; 404 when there is none, 409 when it is closed and `open` is asked. */
 export async function lockStocktake(
@@ -285,9 +300,26 @@ function toSummary(
 export async function listStocktakes(query: {
   page: number;
   pageSize: number;
+  /** A reference ("ST-12") or part of the note. */
+  search?: string;
+  status?: StocktakeStatus;
 }) {
-  const [counted] = await db.select({ total: count() }).from(stocktakes);
+  const id = query.search ? stocktakeIdFromReference(query.search) : null;
+  const where = and(
+    query.status ? eq(stocktakes.status, query.status) : undefined,
+    query.search
+      ? or(
+          id !== null ? eq(stocktakes.id, id) : undefined,
+          like(stocktakes.note, containsPattern(query.search)),
+        )
+      : undefined,
+  );
+  const [counted] = await db
+    .select({ total: count() })
+    .from(stocktakes)
+    .where(where);
   const rows = await summaryQuery()
+    .where(where)
     .orderBy(desc(stocktakes.id))
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);

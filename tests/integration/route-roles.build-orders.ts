@@ -19,6 +19,12 @@ export const buildOrderRouteRows: RouteRoleRow[] = [
     expect: { anonymous: 302, ...byCapability("createBuildOrders", 400) },
   },
   {
+    file: "routes/build-orders-export.ts",
+    method: "GET",
+    path: "/build-orders/export.csv",
+    expect: { anonymous: 302, signedIn: 200 },
+  },
+  {
     file: "routes/build-order.tsx",
     method: "GET",
     path: noOrder,

@@ -434,6 +434,12 @@ const table: Row[] = [
     path: "/stock/journal",
     expect: { anonymous: 302, signedIn: 200 },
   },
+  {
+    file: "routes/stock-journal-export.ts",
+    method: "GET",
+    path: "/stock/journal.csv",
+    expect: { anonymous: 302, signedIn: 200 },
+  },
   // The stock API: everyone reads; buyers create items; storekeepers record movements.
   {
     file: "routes/api.v1.items.ts",

@@ -1,6 +1,9 @@
-/** The build-order list's filter: all orders, or the orders of one status. */
+/** The build-order list's status filter: all orders, or the orders of one status (the search is kept). */
 import { Link } from "react-router";
-import { buildOrderListHref } from "~/build-orders/build-order-list-address";
+import {
+  buildOrderListHref,
+  type BuildOrderListFilter,
+} from "~/build-orders/build-order-list-address";
 import {
   buildOrderStatusLabels,
   type BuildOrderStatus,
@@ -8,17 +11,21 @@ import {
 import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 
 export function BuildOrderStatusFilter({
-  status,
+  filter,
 }: {
-  status: BuildOrderStatus | null;
+  filter: BuildOrderListFilter;
 }) {
+  const status: BuildOrderStatus | null = filter.status ?? null;
   return (
     <nav aria-label="Filter by status">
       <ul className="flex flex-wrap gap-2 text-sm">
         {[null, ...buildOrderStatuses].map((candidate) => (
           <li key={candidate ?? "all"}>
             <Link
-              to={buildOrderListHref(candidate)}
+              to={buildOrderListHref({
+                ...filter,
+                status: candidate ?? undefined,
+              })}
               aria-current={candidate === status ? "page" : undefined}
               className={`inline-flex min-h-9 items-center rounded-md border px-3 font-medium ${
                 candidate === status

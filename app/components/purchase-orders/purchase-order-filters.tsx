@@ -1,6 +1,11 @@
-/** The purchase-order list's filters: one status (or all) as links, one supplier (or all) as a choice. */
-import { Form, Link } from "react-router";
+/** The purchase-order list's filters: one status (or all) as links, then the shared search box with the supplier. */
+import { Link } from "react-router";
+import {
+  FilterChoice,
+  ListSearchForm,
+} from "~/components/lists/list-search-form";
 import { purchaseOrderStatuses } from "~/db/tables/purchase-order-enums";
+import { isFiltered } from "~/lib/list-filters";
 import {
   purchaseOrderListHref,
   type PurchaseOrderListFilter,
@@ -15,7 +20,7 @@ export function PurchaseOrderFilters({
   suppliers: { id: number; name: string }[];
 }) {
   return (
-    <div className="flex flex-wrap items-end justify-between gap-3">
+    <div className="space-y-3">
       <nav aria-label="Filter by status">
         <ul className="flex flex-wrap gap-2 text-sm">
           {[undefined, ...purchaseOrderStatuses].map((status) => {
@@ -38,36 +43,27 @@ export function PurchaseOrderFilters({
           })}
         </ul>
       </nav>
-      <Form
-        method="get"
-        aria-label="Filter by supplier"
-        className="flex items-end gap-2"
+      <ListSearchForm
+        path="/purchase-orders"
+        label="Search the purchase orders"
+        search={{ value: filter.search, placeholder: "PO-000123 or supplier" }}
+        filtered={isFiltered({
+          search: filter.search,
+          supplier: filter.supplierId,
+        })}
+        keep={{ status: filter.status }}
       >
-        {filter.status ? (
-          <input type="hidden" name="status" value={filter.status} />
-        ) : null}
-        <div>
-          <label htmlFor="order-supplier-filter" className="field-label">
-            Supplier
-          </label>
-          <select
-            id="order-supplier-filter"
-            name="supplier"
-            defaultValue={filter.supplierId ?? ""}
-            className="field-input min-w-56"
-          >
-            <option value="">All suppliers</option>
-            {suppliers.map((supplier) => (
-              <option key={supplier.id} value={supplier.id}>
-                {supplier.name}
-              </option>
-            ))}
-          </select>
-        </div>
-        <button type="submit" className="button-quiet min-h-10">
-          Show
-        </button>
-      </Form>
+        <FilterChoice
+          name="supplier"
+          label="Supplier"
+          value={filter.supplierId ? String(filter.supplierId) : undefined}
+          allLabel="All suppliers"
+          options={suppliers.map((supplier) => ({
+            value: String(supplier.id),
+            label: supplier.name,
+          }))}
+        />
+      </ListSearchForm>
     </div>
   );
 }

@@ -1,46 +1,24 @@
 /**
  * The stock list's filters: a search, the kind, below the reorder point only, archived
- * items too; the sort chosen is kept. Sent with JavaScript, empty fields stay out of the
- * address.
+ * items too; the sort chosen is kept. The list's search box is the shared one.
  */
-import { Form, Link, useNavigate } from "react-router";
+import { ListSearchForm } from "~/components/lists/list-search-form";
 import { stockListSearch, type StockListView } from "~/stock/stock-list-view";
 
 export function StockListFilter({ view }: { view: StockListView }) {
-  const navigate = useNavigate();
-  /** Without JavaScript the browser sends the form as it is; with it, empty fields stay out of the address. */
-  function showFiltered(event: React.FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const params = new URLSearchParams();
-    for (const [name, value] of new FormData(event.currentTarget)) {
-      if (typeof value === "string" && value.trim() !== "")
-        params.append(name, value.trim());
-    }
-    const query = params.toString();
-    void navigate(`/stock${query ? `?${query}` : ""}`);
-  }
   return (
-    <Form
-      method="get"
-      action="/stock"
-      onSubmit={showFiltered}
-      className="panel flex flex-wrap items-end gap-4 py-4"
-      aria-label="Filter the stock list"
+    <ListSearchForm
+      path="/stock"
+      label="Filter the stock list"
+      search={{ value: view.search, placeholder: "SKU, name, size or grade" }}
+      filtered={
+        stockListSearch(view, { page: 1, sort: "sku", order: "asc" }) !== ""
+      }
+      keep={{
+        sort: view.sort !== "sku" ? view.sort : undefined,
+        order: view.order !== "asc" ? view.order : undefined,
+      }}
     >
-      <div className="w-64">
-        <label htmlFor="stock-search" className="field-label">
-          Search
-        </label>
-        <input
-          id="stock-search"
-          type="search"
-          name="search"
-          defaultValue={view.search ?? ""}
-          maxLength={80}
-          placeholder="SKU, name, size or grade"
-          className="field-input"
-        />
-      </div>
       <div className="w-40">
         <label htmlFor="stock-kind" className="field-label">
           Kind
@@ -77,22 +55,6 @@ export function StockListFilter({ view }: { view: StockListView }) {
         />
         Include archived items
       </label>
-      {view.sort !== "sku" ? (
-        <input type="hidden" name="sort" value={view.sort} />
-      ) : null}
-      {view.order !== "asc" ? (
-        <input type="hidden" name="order" value={view.order} />
-      ) : null}
-      <div className="flex gap-2 pb-px">
-        <button type="submit" className="button-quiet">
-          Show
-        </button>
-        {stockListSearch(view, { page: 1, sort: "sku", order: "asc" }) ? (
-          <Link to="/stock" className="button-quiet">
-            Clear
-          </Link>
-        ) : null}
-      </div>
-    </Form>
+    </ListSearchForm>
   );
 }
