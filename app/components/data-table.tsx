@@ -67,7 +67,8 @@ export function DataTable<Row>({
   page?: number;
   pageCount?: number;
   pageHref?: (page: number) => string;
-  emptyText?: string;
+  /** What an empty list says: a sentence, or an `EmptyState` with the next step. */
+  emptyText?: React.ReactNode;
   sortable?: boolean;
   initialSorting?: SortingState;
   search?: TableSearch;

@@ -6,6 +6,7 @@ import { alertsPageSize, listAlerts } from "~/alerts/stock-alerts.server";
 import { requireUser } from "~/auth/guard.server";
 import { AlertState } from "~/components/alerts/alert-state";
 import { DataTable } from "~/components/data-table";
+import { EmptyState } from "~/components/empty-state";
 import { OrderFromAlertButton } from "~/components/purchase-orders/order-from-alert-button";
 import { formatDateTime } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
@@ -217,9 +218,14 @@ export default function Alerts({ loaderData }: Route.ComponentProps) {
         pageCount={pageCount}
         pageHref={(next) => `?status=${status}&page=${next}`}
         emptyText={
-          status === "open"
-            ? "No item is below its reorder point."
-            : "No alerts here."
+          status === "open" ? (
+            <EmptyState
+              tone="good"
+              message="No item is below its reorder point: nothing needs ordering."
+            />
+          ) : (
+            <EmptyState message="No alerts here." />
+          )
         }
       />
     </div>

@@ -21,6 +21,7 @@ import { buildOrderListColumns } from "~/components/build-orders/build-order-lis
 import { BuildOrderStatusFilter } from "~/components/build-orders/build-order-status-filter";
 import { NewBuildOrderForm } from "~/components/build-orders/new-build-order-form";
 import { DataTable } from "~/components/data-table";
+import { EmptyState } from "~/components/empty-state";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { pageFromSearch } from "~/lib/search-params";
 import { userCan } from "~/lib/capabilities";
@@ -115,9 +116,22 @@ export default function BuildOrders({
           pageCount={pageCount}
           pageHref={(target) => buildOrderListHref(status, target)}
           emptyText={
-            status
-              ? `No build order is ${buildOrderStatusLabels[status].toLowerCase()}.`
-              : "No build orders yet."
+            status ? (
+              <EmptyState
+                message={`No build order is ${buildOrderStatusLabels[status].toLowerCase()}.`}
+                clear={{ to: "/build-orders", label: "Show every build order" }}
+              />
+            ) : (
+              <EmptyState
+                message="No build orders yet."
+                next={{
+                  capability: "createBuildOrders",
+                  to: "#new-build-order",
+                  label: "Start a build order",
+                  does: "start build orders",
+                }}
+              />
+            )
           }
         />
         {total > 0 ? (

@@ -9,6 +9,7 @@ import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/designs";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import { EmptyState } from "~/components/empty-state";
 import { insulationClassLabel } from "~/components/design/fields-form";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
@@ -168,11 +169,11 @@ export default function Designs({
             next revision.
           </p>
         </div>
-        <p className="mb-2 text-sm text-graphite-500">
-          {total === 0
-            ? "No designs yet."
-            : `${countText(total, "design")}, by name`}
-        </p>
+        {total > 0 ? (
+          <p className="mb-2 text-sm text-graphite-500">
+            {`${countText(total, "design")}, by name`}
+          </p>
+        ) : null}
         <DataTable
           caption="Designs with their revisions"
           columns={columns}
@@ -181,9 +182,15 @@ export default function Designs({
           pageCount={pageCount}
           pageHref={(target) => `/designs?page=${target}`}
           emptyText={
-            canCreate
-              ? "No designs yet: start one with the form."
-              : "No designs yet."
+            <EmptyState
+              message="No designs yet."
+              next={{
+                capability: "editDesigns",
+                to: "#new-design",
+                label: "Create a design",
+                does: "create designs",
+              }}
+            />
           }
         />
       </section>

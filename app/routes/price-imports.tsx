@@ -3,6 +3,7 @@ import { data, Link } from "react-router";
 import type { Route } from "./+types/price-imports";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import { EmptyState } from "~/components/empty-state";
 import { PriceImportDetail } from "~/components/price-import-detail";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
@@ -153,7 +154,17 @@ export default function PriceImports({ loaderData }: Route.ComponentProps) {
           page={list.page}
           pageCount={list.pageCount}
           pageHref={(page) => `?page=${page}`}
-          emptyText="No price list has been imported yet."
+          emptyText={
+            <EmptyState
+              message="No price list has been imported yet."
+              next={{
+                capability: "importPriceLists",
+                to: "/suppliers/import",
+                label: "Import a price list",
+                does: "import price lists",
+              }}
+            />
+          }
         />
       ) : null}
     </div>

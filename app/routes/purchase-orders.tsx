@@ -2,6 +2,7 @@ import { Link } from "react-router";
 import type { Route } from "./+types/purchase-orders";
 import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import { EmptyState } from "~/components/empty-state";
 import { PurchaseOrderFilters } from "~/components/purchase-orders/purchase-order-filters";
 import { purchaseOrderListColumns } from "~/components/purchase-orders/purchase-order-list-columns";
 import { userCan } from "~/lib/capabilities";
@@ -77,9 +78,22 @@ export default function PurchaseOrders({ loaderData }: Route.ComponentProps) {
         pageCount={pageCount}
         pageHref={(target) => purchaseOrderListHref(filter, target)}
         emptyText={
-          filter.status
-            ? `No order is ${purchaseOrderStatusLabels[filter.status].toLowerCase()}.`
-            : "No purchase orders yet."
+          filter.status ? (
+            <EmptyState
+              message={`No order is ${purchaseOrderStatusLabels[filter.status].toLowerCase()}.`}
+              clear={{ to: "/purchase-orders", label: "Show every order" }}
+            />
+          ) : (
+            <EmptyState
+              message="No purchase orders yet."
+              next={{
+                capability: "orderPurchases",
+                to: "/purchase-orders/new",
+                label: "Write a purchase order",
+                does: "write purchase orders",
+              }}
+            />
+          )
         }
       />
       {total > 0 ? (

@@ -5,6 +5,7 @@ import type { Route } from "./+types/stock";
 import { requireUser } from "~/auth/guard.server";
 import { BelowReorderMark } from "~/components/below-reorder-mark";
 import { DataTable } from "~/components/data-table";
+import { EmptyState } from "~/components/empty-state";
 import { SortHeaderLink } from "~/components/sort-header-link";
 import { StockListFilter } from "~/components/stock/stock-list-filter";
 import { formatQuantity, formatAmount } from "~/lib/format";
@@ -232,9 +233,22 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
         pageCount={pageCount}
         pageHref={(page) => `/stock${stockListSearch(view, { page })}`}
         emptyText={
-          view.search || view.kind || view.belowReorder
-            ? "No item matches these filters."
-            : "The catalogue is empty: add the first item."
+          view.search || view.kind || view.belowReorder ? (
+            <EmptyState
+              message="No item matches these filters."
+              clear={{ to: "/stock" }}
+            />
+          ) : (
+            <EmptyState
+              message="The catalogue is empty."
+              next={{
+                capability: "keepCatalogue",
+                to: "/stock/items/new",
+                label: "Add the first item",
+                does: "add items to the catalogue",
+              }}
+            />
+          )
         }
       />
       <p className="text-xs text-graphite-500">

@@ -3,6 +3,7 @@ import { data, redirect } from "react-router";
 import type { Route } from "./+types/stocktakes";
 import { requireCapability } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import { EmptyState } from "~/components/empty-state";
 import { CycleCountPanel } from "~/components/stocktakes/cycle-count-panel";
 import { StartStocktakeForm } from "~/components/stocktakes/start-stocktake-form";
 import { stocktakeListColumns } from "~/components/stocktakes/stocktake-list-columns";
@@ -117,7 +118,17 @@ export default function Stocktakes({
             page={page}
             pageCount={pageCount}
             pageHref={(target) => `/stocktakes?page=${target}`}
-            emptyText="No stocktakes yet."
+            emptyText={
+              <EmptyState
+                message="No stocktakes yet."
+                next={{
+                  capability: "startStocktakes",
+                  to: "#start-stocktake",
+                  label: "Start a stocktake",
+                  does: "start stocktakes",
+                }}
+              />
+            }
           />
           {total > 0 ? (
             <p className="text-sm text-graphite-500">

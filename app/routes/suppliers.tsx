@@ -9,6 +9,7 @@ import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/suppliers";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import { EmptyState } from "~/components/empty-state";
 import { SupplierFields } from "~/components/suppliers/supplier-fields";
 import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
@@ -148,7 +149,17 @@ export default function Suppliers({
           columns={columns}
           rows={suppliers}
           sortable
-          emptyText="No suppliers yet."
+          emptyText={
+            <EmptyState
+              message="No suppliers yet."
+              next={{
+                capability: "keepSuppliers",
+                to: "#new-supplier",
+                label: "Add a supplier",
+                does: "add suppliers",
+              }}
+            />
+          }
         />
       </section>
       {canKeep ? (
