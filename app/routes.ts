@@ -53,6 +53,7 @@ export default [
       index("routes/build-orders.tsx"),
       route(":orderId", "routes/build-order.tsx"),
       route(":orderId/lots.csv", "routes/build-order-lots-export.ts"),
+      route(":orderId/pick-list", "routes/build-order-pick-list.tsx"),
     ]),
     route("buying-plan", "routes/buying-plan.tsx"),
     ...prefix("stocktakes", [
@@ -77,6 +78,7 @@ export default [
       route("record", "routes/stock-record.tsx"),
       route("receive", "routes/stock-receive.tsx"),
       route("journal", "routes/stock-journal.tsx"),
+      route("locations/:code/count-sheet", "routes/location-count-sheet.tsx"),
       // Lots: origin, certificates, where used (issue 20).
       route("lots/:lotId", "routes/stock-lot.tsx"),
       route(

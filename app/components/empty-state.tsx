@@ -7,7 +7,7 @@
  */
 import { Link, useRouteLoaderData } from "react-router";
 import { type Capability, userCan, whoCanText } from "~/lib/capabilities";
-import type { loader as appShellLoader } from "~/routes/app-shell";
+import type { Role } from "~/lib/roles";
 
 export interface EmptyNextStep {
   /** What the step needs. */
@@ -51,9 +51,12 @@ export function EmptyState({
   /** "good": nothing here is good news (no alerts). */
   tone?: "plain" | "good";
 }) {
-  const user = useRouteLoaderData<typeof appShellLoader>(
-    "routes/app-shell",
-  )?.user;
+  // The signed-in person the app shell loaded (its loader's type sits in routes/, which
+  // components may not import: only the roles are read).
+  const shell = useRouteLoaderData("routes/app-shell") as
+    | { user?: { roles: readonly Role[] } }
+    | undefined;
+  const user = shell?.user;
   return (
     <div
       className="empty-state space-y-1 py-2 text-center text-sm"
