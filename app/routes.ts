@@ -21,6 +21,10 @@ export default [
       index("routes/suppliers.tsx"),
       route("import", "routes/price-import.tsx"),
       route("imports", "routes/price-imports.tsx"),
+      route(
+        "imports/:importId/lines.csv",
+        "routes/price-import-lines-export.ts",
+      ),
       route(":supplierId", "routes/supplier.tsx"),
     ]),
     route("prices", "routes/prices.tsx"),
@@ -38,6 +42,7 @@ export default [
       ),
     ]),
     route("insight", "routes/insight.tsx"),
+    route("insight/csv/:table", "routes/insight-export.ts"),
     ...prefix("purchase-orders", [
       index("routes/purchase-orders.tsx"),
       route("new", "routes/purchase-order-new.tsx"),
