@@ -169,15 +169,11 @@ describe("the cost insight tables as CSV", () => {
     const api = (await (
       await get("/api/v1/insight/designs?quantity=5&perPage=50", manager)
     ).json()) as {
-      designs: {
-        designId: number;
-        costPerMotor: number;
-        costPerNm: number | null;
-      }[];
-    };
-    const figures = api.designs.find(
-      (each) => each.designId === design.designId,
-    )!;
+      designId: number;
+      costPerMotor: number;
+      costPerNm: number | null;
+    }[];
+    const figures = api.find((each) => each.designId === design.designId)!;
     expect(Number(row.cost_per_motor)).toBe(figures.costPerMotor);
     expect(Number(row.cost_per_nm)).toBe(figures.costPerNm);
     expect(row).toMatchObject({
