@@ -21,6 +21,10 @@ export default [
       index("routes/suppliers.tsx"),
       route("import", "routes/price-import.tsx"),
       route("imports", "routes/price-imports.tsx"),
+      route(
+        "imports/:importId/lines.csv",
+        "routes/price-import-lines-export.ts",
+      ),
       route(":supplierId", "routes/supplier.tsx"),
     ]),
     route("prices", "routes/prices.tsx"),
@@ -38,6 +42,7 @@ export default [
       ),
     ]),
     route("insight", "routes/insight.tsx"),
+    route("insight/csv/:table", "routes/insight-export.ts"),
     ...prefix("purchase-orders", [
       index("routes/purchase-orders.tsx"),
       route("new", "routes/purchase-order-new.tsx"),
@@ -55,6 +60,7 @@ export default [
       route("export.csv", "routes/build-orders-export.ts"),
       route(":orderId", "routes/build-order.tsx"),
       route(":orderId/lots.csv", "routes/build-order-lots-export.ts"),
+      route(":orderId/pick-list", "routes/build-order-pick-list.tsx"),
     ]),
     route("buying-plan", "routes/buying-plan.tsx"),
     ...prefix("stocktakes", [
@@ -80,6 +86,7 @@ export default [
       route("receive", "routes/stock-receive.tsx"),
       route("journal", "routes/stock-journal.tsx"),
       route("journal.csv", "routes/stock-journal-export.ts"),
+      route("locations/:code/count-sheet", "routes/location-count-sheet.tsx"),
       // Lots: origin, certificates, where used (issue 20).
       route("lots/:lotId", "routes/stock-lot.tsx"),
       route(

@@ -68,6 +68,7 @@ export function DataTable<Row>({
   page?: number;
   pageCount?: number;
   pageHref?: (page: number) => string;
+  /** What an empty list says: a sentence, or an `EmptyState` with the next step. */
   emptyText?: React.ReactNode;
   sortable?: boolean;
   initialSorting?: SortingState;

@@ -6,6 +6,7 @@
  */
 import { createColumnHelper } from "@tanstack/react-table";
 import { Link } from "react-router";
+import { InsightCsvLink } from "~/components/insight/insight-csv-link";
 import { DataTable } from "~/components/data-table";
 import type { DesignInsight } from "~/insight/design-insight.server";
 import { costHistoryChange, costingMoneyText } from "~/insight/design-insight";
@@ -173,6 +174,10 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
               }),
             ]}
           />
+          <InsightCsvLink
+            table="stock-by-kind"
+            what="stock value by kind of item"
+          />
           <p className="text-sm">
             Total{" "}
             <span className="font-semibold">
@@ -229,6 +234,10 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
                     meta: { numeric: true },
                   }),
                 ]}
+              />
+              <InsightCsvLink
+                table="stock-by-location"
+                what="stock value by location"
               />
               <p className="text-xs text-graphite-500">
                 Each balance at its item's average cost, to 0.0001 before adding
@@ -323,6 +332,7 @@ export function StockTrend({
           ]}
         />
       </div>
+      <InsightCsvLink table="stock-by-week" what="stock value by week" />
     </div>
   );
 }
@@ -458,11 +468,17 @@ export function CostHistory({
             }))}
           />
         </div>
-        <DataTable
-          caption={`Change in cost per motor over the year, in ${currency}`}
-          rows={withHistory}
-          columns={changeColumns(currency)}
-        />
+        <div className="space-y-2">
+          <DataTable
+            caption={`Change in cost per motor over the year, in ${currency}`}
+            rows={withHistory}
+            columns={changeColumns(currency)}
+          />
+          <InsightCsvLink
+            table="cost-change"
+            what="change in cost per motor over the year"
+          />
+        </div>
       </div>
       <DataTable
         widerThanPanel
@@ -505,6 +521,7 @@ export function CostHistory({
           ),
         ]}
       />
+      <InsightCsvLink table="cost-by-month" what="cost per motor by month" />
       <p className="text-xs text-graphite-500">
         In {currency} per motor; beside each design, the dash and marker of its
         line in the chart.

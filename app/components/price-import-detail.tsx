@@ -1,4 +1,5 @@
 import { createColumnHelper } from "@tanstack/react-table";
+import { CsvDownloadLink } from "~/components/csv-download-link";
 import { DataTable } from "~/components/data-table";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { perUnitWord } from "~/lib/unit-text";
@@ -158,6 +159,10 @@ export function PriceImportDetail({ opened }: { opened: OpenedImport }) {
         pageCount={opened.pageCount}
         pageHref={(page) => `?import=${opened.id}&page=${page}`}
         emptyText="This import wrote no price lines."
+      />
+      <CsvDownloadLink
+        href={`/suppliers/imports/${opened.id}/lines.csv`}
+        table={`every price line of ${opened.fileName}`}
       />
     </div>
   );

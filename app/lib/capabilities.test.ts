@@ -6,6 +6,7 @@ import {
   needsRoleMessage,
   rolesWith,
   userCan,
+  whoCanText,
   type Capability,
 } from "./capabilities";
 import { roles, type Role } from "./roles";
@@ -117,5 +118,15 @@ describe("where access is decided", () => {
       .filter((path) => !own.has(path))
       .filter((path) => /\buserHasRole\b/.test(readFileSync(path, "utf8")));
     expect(asking).toEqual([]);
+  });
+});
+
+describe("whoCanText", () => {
+  it("names the roles with their article, admins last and once", () => {
+    expect(whoCanText("keepSuppliers")).toBe("A buyer or an admin");
+    expect(whoCanText("takeBuildOrderSteps")).toBe(
+      "A builder, a storekeeper or an admin",
+    );
+    expect(whoCanText("managePeople")).toBe("An admin");
   });
 });

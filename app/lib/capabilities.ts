@@ -85,3 +85,21 @@ export function needsRoleMessage(
 ): string {
   return `${what} needs the role ${rolesWith(capability).join(" or ")}.`;
 }
+
+const article = (role: Role) => (/^[aeiou]/.test(role) ? "an" : "a");
+
+/**
+ * Who may do it, as the start of a sentence: "A buyer or an admin" (admins last, as
+ * they may do anything). For a page that cannot offer the step itself.
+ */
+export function whoCanText(capability: Capability): string {
+  const named = [...rolesWith(capability), "admin" as const].filter(
+    (role, index, all) => all.indexOf(role) === index,
+  );
+  const words = named.map((role) => `${article(role)} ${role}`);
+  const text =
+    words.length === 1
+      ? words[0]!
+      : `${words.slice(0, -1).join(", ")} or ${words.at(-1)!}`;
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}

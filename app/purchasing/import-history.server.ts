@@ -122,3 +122,30 @@ export async function listImportLines(importId: number, page: number) {
     total: total?.total ?? 0,
   };
 }
+
+/** The most lines one price-lines file holds: a price list of 100,000 rows fits. */
+export const priceLinesCsvRowLimit = 200_000;
+
+/** Every price line an import wrote, in the file's order, as stored (exact decimal text). */
+export async function listAllImportLines(importId: number) {
+  return db
+    .select({
+      line: priceLines.line,
+      supplierSku: priceLines.supplierSku,
+      itemSku: items.sku,
+      unit: items.unit,
+      minQuantity: priceLines.minQuantity,
+      packQuantity: priceLines.packQuantity,
+      currency: priceLines.currency,
+      unitPrice: priceLines.unitPrice,
+      adderPerKg: priceLines.adderPerKg,
+      conductor: priceLines.conductor,
+      validFrom: priceLines.validFrom,
+      leadTimeDays: priceLines.leadTimeDays,
+    })
+    .from(priceLines)
+    .innerJoin(items, eq(items.id, priceLines.itemId))
+    .where(eq(priceLines.importId, importId))
+    .orderBy(asc(priceLines.line), asc(priceLines.id))
+    .limit(priceLinesCsvRowLimit);
+}

@@ -12,6 +12,7 @@ import {
   ListEmptyText,
   ListSearchForm,
 } from "~/components/lists/list-search-form";
+import { EmptyState } from "~/components/empty-state";
 import { OrderFromAlertButton } from "~/components/purchase-orders/order-from-alert-button";
 import { formatDateTime } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
@@ -269,9 +270,14 @@ export default function Alerts({ loaderData }: Route.ComponentProps) {
             filtered={Boolean(search)}
             clearHref="/alerts"
             emptyText={
-              status === "open"
-                ? "No item is below its reorder point."
-                : "No alerts here."
+              status === "open" ? (
+                <EmptyState
+                  tone="good"
+                  message="No item is below its reorder point: nothing needs ordering."
+                />
+              ) : (
+                <EmptyState message="No alerts here." />
+              )
             }
           />
         }

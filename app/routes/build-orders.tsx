@@ -26,6 +26,7 @@ import {
   ListEmptyText,
   ListSearchForm,
 } from "~/components/lists/list-search-form";
+import { EmptyState } from "~/components/empty-state";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { pageParam, readPageOrLast } from "~/lib/search-params";
 import { isFiltered, listHref, readListFilters } from "~/lib/list-filters";
@@ -155,12 +156,25 @@ export default function BuildOrders({
           pageHref={(target) => buildOrderListHref(filter, target)}
           emptyText={
             filter.status && !filter.search ? (
-              `No build order is ${buildOrderStatusLabels[filter.status].toLowerCase()}.`
+              <EmptyState
+                message={`No build order is ${buildOrderStatusLabels[filter.status].toLowerCase()}.`}
+                clear={{ to: "/build-orders", label: "Show every build order" }}
+              />
             ) : (
               <ListEmptyText
                 filtered={filtered}
                 clearHref="/build-orders"
-                emptyText="No build orders yet."
+                emptyText={
+                  <EmptyState
+                    message="No build orders yet."
+                    next={{
+                      capability: "createBuildOrders",
+                      to: "#new-build-order",
+                      label: "Start a build order",
+                      does: "start build orders",
+                    }}
+                  />
+                }
               />
             )
           }

@@ -1,7 +1,8 @@
 import { createColumnHelper } from "@tanstack/react-table";
-import { data, Link } from "react-router";
+import { data } from "react-router";
 import type { Route } from "./+types/design-bom-print";
 import { requireUser } from "~/auth/guard.server";
+import { PrintBar } from "~/components/print-page";
 import { DataTable } from "~/components/data-table";
 import {
   CostQueryForm,
@@ -237,21 +238,7 @@ export default function DesignBomPrint({ loaderData }: Route.ComponentProps) {
 
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-center justify-between gap-3 print:hidden">
-        <Link
-          to={`${base}${query}`}
-          className="text-sm text-copper-700 underline underline-offset-2"
-        >
-          ← Back to the design
-        </Link>
-        <button
-          type="button"
-          className="button-primary"
-          onClick={() => window.print()}
-        >
-          Print
-        </button>
-      </div>
+      <PrintBar back={{ to: `${base}${query}`, text: "Back to the design" }} />
       <div className="print:hidden">
         <CostQueryForm query={costQuery} />
       </div>

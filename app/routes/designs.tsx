@@ -15,6 +15,7 @@ import {
   ListEmptyText,
   ListSearchForm,
 } from "~/components/lists/list-search-form";
+import { EmptyState } from "~/components/empty-state";
 import { insulationClassLabel } from "~/components/design/fields-form";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
@@ -199,13 +200,11 @@ export default function Designs({
           />
           <IgnoredFilters names={ignored} />
         </div>
-        <p className="mb-2 text-sm text-graphite-500">
-          {total === 0
-            ? search
-              ? "No design matches."
-              : "No designs yet."
-            : `${countText(total, "design")}, by name`}
-        </p>
+        {total > 0 ? (
+          <p className="mb-2 text-sm text-graphite-500">
+            {`${countText(total, "design")}, by name`}
+          </p>
+        ) : null}
         <DataTable
           caption="Designs with their revisions"
           columns={columns}
@@ -218,9 +217,15 @@ export default function Designs({
               filtered={Boolean(search)}
               clearHref="/designs"
               emptyText={
-                canCreate
-                  ? "No designs yet: start one with the form."
-                  : "No designs yet."
+                <EmptyState
+                  message="No designs yet."
+                  next={{
+                    capability: "editDesigns",
+                    to: "#new-design",
+                    label: "Create a design",
+                    does: "create designs",
+                  }}
+                />
               }
             />
           }

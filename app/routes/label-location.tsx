@@ -30,6 +30,10 @@ export default function LocationLabelPage({
       title={`Label of location ${location.code}`}
       size={size}
       back={null}
+      related={{
+        to: `/stock/locations/${encodeURIComponent(location.code)}/count-sheet`,
+        text: `Count sheet of ${location.code}`,
+      }}
       sizeHref={(each) =>
         `/labels/locations/${encodeURIComponent(location.code)}?size=${each}`
       }

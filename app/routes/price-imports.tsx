@@ -13,6 +13,7 @@ import {
   readListFilters,
   searchPageSchema,
 } from "~/lib/list-filters";
+import { EmptyState } from "~/components/empty-state";
 import { PriceImportDetail } from "~/components/price-import-detail";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
@@ -184,7 +185,17 @@ export default function PriceImports({ loaderData }: Route.ComponentProps) {
               <ListEmptyText
                 filtered={Boolean(list.search)}
                 clearHref="/suppliers/imports"
-                emptyText="No price list has been imported yet."
+                emptyText={
+                  <EmptyState
+                    message="No price list has been imported yet."
+                    next={{
+                      capability: "importPriceLists",
+                      to: "/suppliers/import",
+                      label: "Import a price list",
+                      does: "import price lists",
+                    }}
+                  />
+                }
               />
             }
           />

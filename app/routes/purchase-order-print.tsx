@@ -1,6 +1,7 @@
-import { data, Link } from "react-router";
+import { data } from "react-router";
 import type { Route } from "./+types/purchase-order-print";
 import { requireUser } from "~/auth/guard.server";
+import { PrintBar } from "~/components/print-page";
 import { PurchaseOrderSheet } from "~/components/purchase-orders/purchase-order-sheet";
 import { db } from "~/db/client.server";
 import { idFromText } from "~/lib/search-params";
@@ -39,21 +40,9 @@ export default function PurchaseOrderPrint({
   const { id, document } = loaderData;
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-center justify-between gap-3 print:hidden">
-        <Link
-          to={`/purchase-orders/${id}`}
-          className="text-sm text-copper-700 underline underline-offset-2"
-        >
-          ← Back to the order
-        </Link>
-        <button
-          type="button"
-          className="button-primary"
-          onClick={() => window.print()}
-        >
-          Print
-        </button>
-      </div>
+      <PrintBar
+        back={{ to: `/purchase-orders/${id}`, text: "Back to the order" }}
+      />
       <PurchaseOrderSheet document={document} />
     </div>
   );

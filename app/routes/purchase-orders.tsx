@@ -4,6 +4,7 @@ import { requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
 import { ListEmptyText } from "~/components/lists/list-search-form";
 import { isFiltered } from "~/lib/list-filters";
+import { EmptyState } from "~/components/empty-state";
 import { PurchaseOrderFilters } from "~/components/purchase-orders/purchase-order-filters";
 import { purchaseOrderListColumns } from "~/components/purchase-orders/purchase-order-list-columns";
 import { userCan } from "~/lib/capabilities";
@@ -80,12 +81,25 @@ export default function PurchaseOrders({ loaderData }: Route.ComponentProps) {
         pageHref={(target) => purchaseOrderListHref(filter, target)}
         emptyText={
           filter.status && !filter.search && !filter.supplierId ? (
-            `No order is ${purchaseOrderStatusLabels[filter.status].toLowerCase()}.`
+            <EmptyState
+              message={`No order is ${purchaseOrderStatusLabels[filter.status].toLowerCase()}.`}
+              clear={{ to: "/purchase-orders", label: "Show every order" }}
+            />
           ) : (
             <ListEmptyText
               filtered={isFiltered({ ...filter })}
               clearHref="/purchase-orders"
-              emptyText="No purchase orders yet."
+              emptyText={
+                <EmptyState
+                  message="No purchase orders yet."
+                  next={{
+                    capability: "orderPurchases",
+                    to: "/purchase-orders/new",
+                    label: "Write a purchase order",
+                    does: "write purchase orders",
+                  }}
+                />
+              }
             />
           )
         }

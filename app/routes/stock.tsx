@@ -9,6 +9,7 @@ import {
   IgnoredFilters,
   ListEmptyText,
 } from "~/components/lists/list-search-form";
+import { EmptyState } from "~/components/empty-state";
 import { SortHeaderLink } from "~/components/sort-header-link";
 import { StockListFilter } from "~/components/stock/stock-list-filter";
 import { formatQuantity, formatAmount } from "~/lib/format";
@@ -234,7 +235,17 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
               ""
             }
             clearHref="/stock"
-            emptyText="The catalogue is empty: add the first item."
+            emptyText={
+              <EmptyState
+                message="The catalogue is empty."
+                next={{
+                  capability: "keepCatalogue",
+                  to: "/stock/items/new",
+                  label: "Add the first item",
+                  does: "add items to the catalogue",
+                }}
+              />
+            }
           />
         }
       />

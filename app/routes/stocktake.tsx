@@ -164,8 +164,26 @@ export default function Stocktake({
             <StocktakeStatusBadge status={stocktake.status} />
           </h1>
           <p className="mt-1 text-graphite-500">
-            {stocktake.locations.join(", ") || "No locations"} · started by{" "}
-            {stocktake.startedBy}, {formatDateTime(stocktake.startedAt)}
+            {stocktake.locations.length === 0
+              ? "No locations"
+              : stocktake.locations.map((code, index) => (
+                  <span key={code}>
+                    {index > 0 ? ", " : ""}
+                    {can.count ? (
+                      <Link
+                        to={`/stock/locations/${encodeURIComponent(code)}/count-sheet`}
+                        className="text-copper-700 underline underline-offset-2"
+                        aria-label={`Count sheet of ${code}`}
+                      >
+                        {code}
+                      </Link>
+                    ) : (
+                      code
+                    )}
+                  </span>
+                ))}{" "}
+            · started by {stocktake.startedBy},{" "}
+            {formatDateTime(stocktake.startedAt)}
             {stocktake.approvedBy
               ? ` · approved by ${stocktake.approvedBy}, ${formatDateTime(stocktake.approvedAt)}`
               : ""}

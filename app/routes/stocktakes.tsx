@@ -10,6 +10,7 @@ import {
   ListEmptyText,
   ListSearchForm,
 } from "~/components/lists/list-search-form";
+import { EmptyState } from "~/components/empty-state";
 import { CycleCountPanel } from "~/components/stocktakes/cycle-count-panel";
 import { StartStocktakeForm } from "~/components/stocktakes/start-stocktake-form";
 import { stocktakeListColumns } from "~/components/stocktakes/stocktake-list-columns";
@@ -171,7 +172,17 @@ export default function Stocktakes({
               <ListEmptyText
                 filtered={isFiltered(filter)}
                 clearHref="/stocktakes"
-                emptyText="No stocktakes yet."
+                emptyText={
+                  <EmptyState
+                    message="No stocktakes yet."
+                    next={{
+                      capability: "startStocktakes",
+                      to: "#start-stocktake",
+                      label: "Start a stocktake",
+                      does: "start stocktakes",
+                    }}
+                  />
+                }
               />
             }
           />

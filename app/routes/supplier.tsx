@@ -6,6 +6,7 @@ import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/supplier";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { DataTable } from "~/components/data-table";
+import { EmptyState } from "~/components/empty-state";
 import { SupplierDeliveryPanel } from "~/components/suppliers/supplier-delivery-panel";
 import { SupplierSummaryFigures } from "~/components/suppliers/supplier-summary-figures";
 import {
@@ -223,7 +224,17 @@ export default function Supplier({
             caption={`Price lists imported for ${supplier.name}, newest first`}
             columns={importColumns}
             rows={imports}
-            emptyText="No price list imported for this supplier yet."
+            emptyText={
+              <EmptyState
+                message="No price list imported for this supplier yet."
+                next={{
+                  capability: "importPriceLists",
+                  to: "/suppliers/import",
+                  label: "Import a price list",
+                  does: "import price lists",
+                }}
+              />
+            }
           />
         </section>
 

@@ -15,6 +15,7 @@ import {
   ListEmptyText,
   ListSearchForm,
 } from "~/components/lists/list-search-form";
+import { EmptyState } from "~/components/empty-state";
 import { SupplierFields } from "~/components/suppliers/supplier-fields";
 import { FormMessages } from "~/components/text-field";
 import { redirectWithFlash } from "~/lib/flash.server";
@@ -190,7 +191,17 @@ export default function Suppliers({
             <ListEmptyText
               filtered={Boolean(search)}
               clearHref="/suppliers"
-              emptyText="No suppliers yet."
+              emptyText={
+                <EmptyState
+                  message="No suppliers yet."
+                  next={{
+                    capability: "keepSuppliers",
+                    to: "#new-supplier",
+                    label: "Add a supplier",
+                    does: "add suppliers",
+                  }}
+                />
+              }
             />
           }
         />

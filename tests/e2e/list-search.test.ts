@@ -303,7 +303,7 @@ describe("search on every list, by keyboard alone", () => {
       },
       found,
     );
-    await page.getByRole("link", { name: "clear the filters" }).press("Enter");
+    await page.getByRole("link", { name: "Clear the search and filters" }).press("Enter");
     await page.waitForURL(
       (url) => url.pathname === "/designs" && url.search === "",
     );

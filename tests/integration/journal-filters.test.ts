@@ -228,7 +228,7 @@ describe("the journal's filters", () => {
       await get(`/stock/journal?lot=NOPE-${shared}`, manager)
     ).text();
     expect(none).toContain("No results for this search");
-    expect(none).toContain("clear the filters");
+    expect(none).toContain("Clear the search and filters");
   });
 });
 

@@ -35,6 +35,7 @@ import { lotRouteRows } from "./route-roles.lots";
 import { lotHoldRouteRows } from "./route-roles.lot-holds";
 import { stocktakeRouteRows } from "./route-roles.stocktakes";
 import { labelRouteRows } from "./route-roles.labels";
+import { exportRouteRows } from "./route-roles.exports";
 import {
   byCapability,
   expectedStatus,
@@ -59,6 +60,7 @@ const table: Row[] = [
   ...lotHoldRouteRows,
   ...stocktakeRouteRows,
   ...labelRouteRows,
+  ...exportRouteRows,
   {
     file: "routes/alerts.tsx",
     method: "GET",

@@ -1,6 +1,7 @@
 /** The top of the order page: back to the list, the order's reference, status, what it builds and who made it. */
 import { Link } from "react-router";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
+import { canReserve } from "~/build-orders/build-order-status";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import { BuildOrderStatusBadge } from "./build-order-status-badge";
 import { BackLink } from "~/components/back-link";
@@ -30,12 +31,22 @@ export function BuildOrderHeading({ order }: { order: BuildOrderDetails }) {
             {order.note ? ` · ${order.note}` : ""}
           </p>
         </div>
-        <Link
-          to={`/designs/${order.design.id}/revisions/${order.revision}`}
-          className="button-quiet"
-        >
-          The design
-        </Link>
+        <div className="flex flex-wrap gap-2">
+          {canReserve(order.status) ? (
+            <Link
+              to={`/build-orders/${order.id}/pick-list`}
+              className="button-quiet"
+            >
+              Print pick list
+            </Link>
+          ) : null}
+          <Link
+            to={`/designs/${order.design.id}/revisions/${order.revision}`}
+            className="button-quiet"
+          >
+            The design
+          </Link>
+        </div>
       </div>
     </>
   );

@@ -2,6 +2,7 @@
  * Where the money per N·m goes: the stacked chart of the ranked designs, cheapest first,
  * with the designs it leaves out under it, and beside it the chart's figures as a table.
  */
+import { InsightCsvLink } from "./insight-csv-link";
 import { DataTable } from "~/components/data-table";
 import type { DesignInsight } from "~/insight/design-insight.server";
 import { costBasisText } from "../design/price-basis-note";
@@ -51,6 +52,7 @@ export function DesignCostSplit({
             ...ranking.withoutTorque,
           ]}
         />
+        <InsightCsvLink table="cost-per-nm" what="cost per N·m by part" />
         <p className="mt-1 text-xs text-graphite-500">
           In {currency} per N·m of rated torque; the five parts add up to the
           total exactly.

@@ -6,6 +6,7 @@
  * per N·m with each design's end-turn factor.
  */
 import { Link } from "react-router";
+import { InsightCsvLink } from "./insight-csv-link";
 import { DataTable } from "~/components/data-table";
 import { rankByCostPerNm } from "~/insight/design-insight";
 import { formatDay } from "~/lib/format";
@@ -114,6 +115,10 @@ export function InsightDesigns({
             page={data.designs.page}
             pageCount={pageCount}
             pageHref={(page) => designsPageHref(data.fields, page)}
+          />
+          <InsightCsvLink
+            table="designs"
+            what="released designs with their costs"
           />
         </>
       )}

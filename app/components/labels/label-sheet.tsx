@@ -35,6 +35,7 @@ export function LabelSheet({
   size,
   back,
   sizeHref,
+  related,
   children,
 }: {
   title: string;
@@ -42,6 +43,8 @@ export function LabelSheet({
   back: { to: string; text: string } | null;
   /** The same page in another size. */
   sizeHref: (size: LabelSize) => string;
+  /** Another printout of the same thing (a location's count sheet), beside Print. */
+  related?: { to: string; text: string };
   children: React.ReactNode;
 }) {
   return (
@@ -86,6 +89,14 @@ export function LabelSheet({
               ),
             )}
           </nav>
+          {related ? (
+            <Link
+              to={related.to}
+              className="text-sm font-medium text-copper-700 underline underline-offset-2"
+            >
+              {related.text}
+            </Link>
+          ) : null}
         </div>
         <p className="text-sm text-graphite-600">
           Print at 100 % (no &ldquo;fit to page&rdquo;) so the QR codes keep

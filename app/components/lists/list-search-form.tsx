@@ -5,6 +5,7 @@
  * anything narrows the list, "Clear". `/` anywhere on the page (not while typing) moves
  * the focus to the search field.
  */
+import { EmptyState } from "~/components/empty-state";
 import { useEffect, useRef, type ReactNode } from "react";
 import { Form, Link, useNavigate } from "react-router";
 import { searchMaxLength } from "~/lib/list-filters";
@@ -139,15 +140,10 @@ export function ListEmptyText({
 }) {
   if (!filtered) return <>{emptyText}</>;
   return (
-    <>
-      No results for this search —{" "}
-      <Link
-        to={clearHref}
-        className="font-medium text-copper-700 underline underline-offset-2"
-      >
-        clear the filters
-      </Link>
-    </>
+    <EmptyState
+      message="No results for this search."
+      clear={{ to: clearHref, label: "Clear the search and filters" }}
+    />
   );
 }
 
