@@ -126,7 +126,12 @@ describe("one-time messages in the browser", () => {
       buyerPage,
       buyerPage.getByRole("radio", { name: /once a day, in a digest/ }),
     );
-    await press(buyerPage, buyerPage.getByRole("button", { name: "Save" }));
+    await press(
+      buyerPage,
+      buyerPage
+        .getByRole("region", { name: "Low-stock e-mails" })
+        .getByRole("button", { name: "Save" }),
+    );
     await shownOnce(buyerPage, "Low-stock e-mail choice saved.", found);
     expect(
       await buyerPage

@@ -104,7 +104,9 @@ describe("a person's locale and time zone", () => {
     await chooseOption(page, panel.getByLabel("Time zone"), "Europe/Helsinki");
     await press(page, panel.getByRole("button", { name: "Save" }));
     await expect
-      .poll(async () => readable(await page.getByRole("status").textContent()))
+      .poll(async () =>
+        readable((await page.getByRole("status").allTextContents()).join(" ")),
+      )
       .toContain("numbers, days and times now show your way");
     // The panel's own example: money and 2 Dec 2026 14:05 UTC, in German and Helsinki time.
     expect(await pageText(page)).toContain("1.234,50");
@@ -126,7 +128,9 @@ describe("a person's locale and time zone", () => {
     await typeInto(page, reorder.getByLabel(/Reorder quantity/), "25");
     await press(page, reorder.getByRole("button", { name: /Save/ }));
     await expect
-      .poll(async () => readable(await page.getByRole("status").textContent()))
+      .poll(async () =>
+        readable((await page.getByRole("status").allTextContents()).join(" ")),
+      )
       .toContain("Reorder point and quantity saved.");
     await expect
       .poll(() => reorder.getByLabel(/Reorder point/).inputValue())

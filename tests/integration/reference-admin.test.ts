@@ -163,7 +163,8 @@ describe("adding a magnet grade on /reference", () => {
     ["densityGPerCm3", { densityGPerCm3: "" }, "Give the density."],
     [
       "densityGPerCm3",
-      { densityGPerCm3: "7,55" },
+      // "7,55" now reads as 7.55 (a decimal comma that cannot be a thousands group).
+      { densityGPerCm3: "7.5.5" },
       "The density must be a number.",
     ],
     [

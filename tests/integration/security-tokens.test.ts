@@ -189,7 +189,8 @@ describe("invitation links", () => {
       { name: "Invited Person", email, roles: ["builder"] },
       admin,
     );
-    expect(response.status).toBe(200);
+    // Sent: back to the people page, with the flash message.
+    expect(response.status).toBe(302);
     const message = await waitForMessage(email, /invited to Turnledger/);
     const token = new URL(linkIn(message)).searchParams.get("token")!;
     return { email, token };
