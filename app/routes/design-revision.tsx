@@ -1,5 +1,4 @@
 import { parseForm } from "~/lib/parse-form";
-import type { Submission } from "@conform-to/react";
 import {
   data,
   redirect,
@@ -7,7 +6,15 @@ import {
 } from "react-router";
 import type { Route } from "./+types/design-revision";
 import { requireCapability, requireUser } from "~/auth/guard.server";
-import type { DesignActionAnswer } from "~/components/design/action-answer";
+import {
+  answer,
+  changedMeanwhile,
+  doneAnswer,
+  plainRefusal,
+  refusal,
+  revisionRowId,
+  type DesignActionAnswer,
+} from "~/components/design/action-replies.server";
 import { BillOfMaterials } from "~/components/design/bill-of-materials";
 import { DesignCostPanel } from "~/components/design/cost-panel";
 import {
@@ -23,9 +30,7 @@ import {
   costQuerySearch,
   designPageIntentOf,
   formLineId,
-  lineIndexOfField,
   readCostQuery,
-  type DesignPageIntent,
 } from "~/designs/design-page";
 import { loadDesignPage, storedLineInputs } from "~/designs/design-page.server";
 import { designParams } from "~/designs/design-params";
@@ -37,9 +42,7 @@ import {
   updateDraftRevision,
 } from "~/designs/designs.server";
 import { userCan } from "~/lib/capabilities";
-import { isDomainError } from "~/lib/domain-error";
-import { flashHeaders, redirectWithFlash } from "~/lib/flash.server";
-import type { FlashNote } from "~/lib/flash-messages";
+import { redirectWithFlash } from "~/lib/flash.server";
 import { WireSubstitutesPanel } from "~/components/design/wire-substitutes-panel";
 import {
   readSubstituteQuery,
@@ -76,57 +79,6 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     canCreateBuildOrder: userCan(user, "createBuildOrders"),
   };
 }
-
-type Answer = DesignActionAnswer;
-const answer = (body: Answer, status = 200) => data(body, { status });
-/** A change made: the answer for the fetcher, and the one-time message the shell then shows. */
-const doneAnswer = async (body: Answer, note: FlashNote) =>
-  data(body, { headers: await flashHeaders(note) });
-
-/** The row id of a revision, which messages about it name. */
-async function revisionRowId(designId: number, revision: number) {
-  const found = await findRevision(designId, revision);
-  return found?.revision.id ?? null;
-}
-
-/** A refusal of the data layer (released, unknown item …) as the form shows it; other errors go on. */
-function refusal(
-  intent: DesignPageIntent,
-  submission: Submission<unknown>,
-  error: unknown,
-  lineIndex: number | null = null,
-) {
-  if (!isDomainError(error)) throw error;
-  const index = lineIndexOfField(error.field);
-  const field =
-    index !== null
-      ? index === lineIndex
-        ? error.field?.replace(/^lines\[\d+\]\./, "")
-        : undefined
-      : error.field;
-  return answer(
-    {
-      intent,
-      ok: false,
-      message: error.message,
-      result: submission.reply(
-        field
-          ? { fieldErrors: { [field]: [error.message] } }
-          : { formErrors: [error.message] },
-      ),
-    },
-    error.status,
-  );
-}
-
-/** A message for a change the page could not make at all (no form to show it beside). */
-function plainRefusal(intent: DesignPageIntent, error: unknown) {
-  if (!isDomainError(error)) throw error;
-  return answer({ intent, ok: false, message: error.message }, error.status);
-}
-
-const changedMeanwhile =
-  "This line was changed or removed meanwhile (another save of this revision). The page now shows the lines as they are: make the change again.";
 
 /**
  * Builders' changes to a draft revision, named by `intent`: the motor fields, one line
@@ -270,7 +222,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       } catch (error) {
         return plainRefusal(intent, error);
       }
-      const body: Answer = {
+      const body: DesignActionAnswer = {
         intent,
         ok: true,
         message: `Revision ${ids.revision} is released: it is read-only from now on.`,

@@ -338,11 +338,11 @@ describe("labels and scanning", () => {
   });
 
   it("reads the QR code through a camera (Chromium's fake camera playing the label)", async () => {
-    const video = qrCodeVideoFile(qrText);
+    const cameraFile = qrCodeVideoFile(qrText);
     const withCamera = await launchBrowser([
       "--use-fake-ui-for-media-stream",
       "--use-fake-device-for-media-stream",
-      `--use-file-for-fake-video-capture=${video}`,
+      `--use-file-for-fake-video-capture=${cameraFile}`,
     ]);
     try {
       const page = await signIn(withCamera, "storekeeper");
@@ -360,8 +360,8 @@ describe("labels and scanning", () => {
             `The scan panel says: ${await page.locator("#scan-result").textContent()}; the camera view: ${await page
               .getByLabel("Camera view")
               .evaluate(
-                (video: HTMLVideoElement) =>
-                  `${video.videoWidth}×${video.videoHeight}, ready state ${video.readyState}, ${video.paused ? "paused" : "playing"}`,
+                (viewfinder: HTMLVideoElement) =>
+                  `${viewfinder.videoWidth}×${viewfinder.videoHeight}, ready state ${viewfinder.readyState}, ${viewfinder.paused ? "paused" : "playing"}`,
               )}`,
             { cause: error },
           );
