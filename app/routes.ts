@@ -109,6 +109,7 @@ export default [
   route("healthz", "routes/healthz.ts"),
   route("readyz", "routes/readyz.ts"),
   ...prefix("api/v1", [
+    route("openapi.json", "routes/api.v1.openapi.ts"),
     route("sessions", "routes/api.v1.sessions.ts"),
     route("me", "routes/api.v1.me.ts"),
     route("outbox", "routes/api.v1.outbox.ts"),

@@ -287,6 +287,18 @@ const table: Row[] = [
     expect: { anonymous: 401, ...byCapability("readOutbox", 405) },
   },
   {
+    file: "routes/api.v1.openapi.ts",
+    method: "GET",
+    path: "/api/v1/openapi.json",
+    expect: { anonymous: 401, signedIn: 200 },
+  },
+  {
+    file: "routes/api.v1.openapi.ts",
+    method: "POST",
+    path: "/api/v1/openapi.json",
+    expect: { anonymous: 401, signedIn: 405 },
+  },
+  {
     file: "routes/api.v1.me.ts",
     method: "GET",
     path: "/api/v1/me",
