@@ -3,7 +3,7 @@ import { refuseUnless, requireUser } from "~/auth/guard.server";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
 import { updateItem } from "~/stock/catalogue.server";
 import { itemPatchSchema } from "~/stock/item-schemas";
-import { findItemBySku } from "~/stock/items.server";
+import { findItemBySku, withoutId } from "~/stock/items.server";
 import { answerDomainError } from "~/lib/api-errors.server";
 
 /** GET /api/v1/items/:sku → the item with its balances by lot and location. */
@@ -36,11 +36,4 @@ export async function action({ request, params }: Route.ActionArgs) {
     await updateItem(params.sku, change);
     return Response.json(withoutId((await findItemBySku(params.sku))!));
   });
-}
-
-/** The item as the API shows it: the database id stays inside. */
-function withoutId<T extends { id: number }>(item: T): Omit<T, "id"> {
-  const visible: Partial<T> = { ...item };
-  delete visible.id;
-  return visible as Omit<T, "id">;
 }

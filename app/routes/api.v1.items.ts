@@ -8,7 +8,7 @@ import {
 import { createItem } from "~/stock/catalogue.server";
 import { itemCreateSchema } from "~/stock/item-schemas";
 import { itemListQuerySchema } from "~/stock/item-list-query";
-import { findItemBySku, listItems } from "~/stock/items.server";
+import { findItemBySku, listItems, withoutId } from "~/stock/items.server";
 import { answerDomainError } from "~/lib/api-errors.server";
 
 /** GET /api/v1/items?search=&kind=&belowReorder=1&sort=&order=&page=&pageSize= → a page of items. */
@@ -40,6 +40,8 @@ export async function action({ request }: Route.ActionArgs) {
   const input = await readJsonBody(request, itemCreateSchema);
   return answerDomainError(async () => {
     const sku = await createItem(input, user.id);
-    return Response.json(await findItemBySku(sku), { status: 201 });
+    return Response.json(withoutId((await findItemBySku(sku))!), {
+      status: 201,
+    });
   });
 }

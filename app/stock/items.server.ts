@@ -206,6 +206,13 @@ export async function findItemBySku(sku: string) {
   };
 }
 
+/** The item as the API shows it: the database id stays inside. */
+export function withoutId<T extends { id: number }>(item: T): Omit<T, "id"> {
+  const visible: Partial<T> = { ...item };
+  delete visible.id;
+  return visible as Omit<T, "id">;
+}
+
 export async function listLocations() {
   return db
     .select({

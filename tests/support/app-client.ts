@@ -1,8 +1,8 @@
 /** Talking to the running test app over HTTP, as a browser or script would. */
-import { randomBytes } from "node:crypto";
+import { createHash, randomBytes } from "node:crypto";
 import { inject } from "vitest";
 import type { Role } from "~/lib/roles";
-import { alertPreferences } from "~/db/schema";
+import { alertPreferences, apiTokens } from "~/db/schema";
 import { createPerson, testDb } from "./test-database";
 
 export const baseUrl = () => inject("baseUrl");
@@ -137,4 +137,43 @@ export function followRedirect(
   const flash = flashCookieFrom(response);
   const cookies = [cookie, flash].filter(Boolean).join("; ");
   return get(location, cookies || undefined);
+}
+
+/**
+ * A fresh person holding `role` and a personal API token of theirs that follows their
+ * roles, stored as the account page stores one (hashed): the Authorization header's value.
+ */
+export async function bearerTokenAs(role: Role): Promise<string> {
+  const person = await newPerson(role);
+  const token = `tl_${randomBytes(32).toString("base64url")}`;
+  await testDb()
+    .insert(apiTokens)
+    .values({
+      userId: person.id,
+      name: `Test token of a ${role}`,
+      // As app/auth/email-tokens.server.ts hashes it (that module opens the app's pool).
+      tokenHash: createHash("sha256").update(token).digest("hex"),
+      tokenPrefix: token.slice(0, 10),
+      roles: "*",
+      expiresAt: null,
+    });
+  return `Bearer ${token}`;
+}
+
+/** Sends a JSON request with a bearer token (no cookie, no Origin: as a script would). */
+export function sendWithToken(
+  method: string,
+  path: string,
+  authorization: string,
+  payload?: unknown,
+): Promise<Response> {
+  return fetch(`${baseUrl()}${path}`, {
+    method,
+    redirect: "manual",
+    headers: {
+      Authorization: authorization,
+      ...(payload === undefined ? {} : { "Content-Type": "application/json" }),
+    },
+    body: payload === undefined ? undefined : JSON.stringify(payload),
+  });
 }
