@@ -12,6 +12,7 @@ import { buildOrderPaths } from "./paths/build-orders";
 import { designPaths } from "./paths/designs";
 import { engineeringPaths } from "./paths/engineering";
 import { itemPaths } from "./paths/items";
+import { pricePaths } from "./paths/prices";
 import { purchasingPaths } from "./paths/purchasing";
 import { stockPaths } from "./paths/stock";
 
@@ -97,6 +98,7 @@ export function apiDocument(): oas31.OpenAPIObject {
       ...designPaths,
       ...buildOrderPaths,
       ...purchasingPaths,
+      ...pricePaths,
     },
   });
   return built;
