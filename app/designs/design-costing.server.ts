@@ -38,7 +38,6 @@ import {
   type DesignWinding,
 } from "./torque-estimate";
 import { designWindingFigures } from "./winding-figures";
-
 import type { CostingBasis } from "./design-queries";
 
 /** A stock quantity (thousandths) as it reads in a price source: "2 pieces", "0.031 kg". */
