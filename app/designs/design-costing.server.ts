@@ -38,9 +38,7 @@ import {
   type DesignWinding,
 } from "./torque-estimate";
 import { designWindingFigures } from "./winding-figures";
-
-export const costingBases = ["best-price", "stock-average"] as const;
-export type CostingBasis = (typeof costingBases)[number];
+import type { CostingBasis } from "./design-queries";
 
 /** A stock quantity (thousandths) as it reads in a price source: "2 pieces", "0.031 kg". */
 function stockQuantityText(quantity: bigint, unit: string): string {

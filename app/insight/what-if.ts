@@ -69,34 +69,37 @@ const endTurnScale = z.coerce
     "The end-turn factor has at most 3 decimals.",
   );
 
+/** The fields of the insight query, once the flat `endTurn.<id>` keys are gathered into `endTurn`. */
+export const insightQueryFieldsSchema = z.object({
+  quantity: wholeNumberParam("quantity", {
+    min: 1,
+    max: 1_000_000,
+    message: "The quantity is a whole number of motors from 1 to 1,000,000.",
+  }).default(1),
+  date: dayParam("date", "The date is a day in YYYY-MM-DD form.").optional(),
+  basis: z
+    .enum(Object.keys(costBasisLabels) as [CostBasis, ...CostBasis[]], {
+      error:
+        "The price basis is best-price (best supplier price) or stock-average (moving average cost of stock).",
+    })
+    .default("best-price"),
+  copperBase: moneyText.optional(),
+  aluminiumBase: moneyText.optional(),
+  endTurn: z
+    .record(
+      z.string().regex(/^[1-9]\d{0,9}$/, "A design id is a whole number."),
+      endTurnScale,
+    )
+    .default({}),
+  page: pageParam,
+  perPage: pageSizeParam("perPage", maxDesignsPerPage, 20),
+  history: z.enum(["0", "1"]).optional(),
+});
+
 /** The query of the insight page and API, after the flat `endTurn.<id>` keys are gathered. */
 export const insightQuerySchema = z.preprocess(
   gatherEndTurnKeys,
-  z.object({
-    quantity: wholeNumberParam("quantity", {
-      min: 1,
-      max: 1_000_000,
-      message: "The quantity is a whole number of motors from 1 to 1,000,000.",
-    }).default(1),
-    date: dayParam("date", "The date is a day in YYYY-MM-DD form.").optional(),
-    basis: z
-      .enum(Object.keys(costBasisLabels) as [CostBasis, ...CostBasis[]], {
-        error:
-          "The price basis is best-price (best supplier price) or stock-average (moving average cost of stock).",
-      })
-      .default("best-price"),
-    copperBase: moneyText.optional(),
-    aluminiumBase: moneyText.optional(),
-    endTurn: z
-      .record(
-        z.string().regex(/^[1-9]\d{0,9}$/, "A design id is a whole number."),
-        endTurnScale,
-      )
-      .default({}),
-    page: pageParam,
-    perPage: pageSizeParam("perPage", maxDesignsPerPage, 20),
-    history: z.enum(["0", "1"]).optional(),
-  }),
+  insightQueryFieldsSchema,
 );
 
 export type InsightQuery = z.infer<typeof insightQuerySchema>;

@@ -1,25 +1,19 @@
 import type { Route } from "./+types/api.v1.designs";
 import { requireCapability, requireUser } from "~/auth/guard.server";
 import { newDesignSchema } from "~/designs/design-schemas";
+import { designListQuerySchema } from "~/designs/design-queries";
 import { createDesign, listDesigns } from "~/designs/designs.server";
 import {
   methodNotAllowed,
   readJsonBody,
   readSearchParams,
 } from "~/lib/api.server";
-import { pageParam, pageSizeParam } from "~/lib/search-params";
 import { answerDomainError } from "~/lib/api-errors.server";
-import { z } from "zod";
-
-const listQuery = z.object({
-  page: pageParam,
-  perPage: pageSizeParam("perPage", 200, 50),
-});
 
 /** GET /api/v1/designs → [{ id, name, revisions: [{ revision, status, ratedTorqueNm }] }], paged (X-Total-Count). */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  const query = readSearchParams(request, listQuery);
+  const query = readSearchParams(request, designListQuerySchema);
   const { total, designs } = await listDesigns(query);
   return Response.json(
     designs.map(({ id, name, motorType, revisions }) => ({
