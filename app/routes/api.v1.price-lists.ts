@@ -8,7 +8,7 @@ import {
 import type { Route } from "./+types/api.v1.price-lists";
 import { requireCapability } from "~/auth/guard.server";
 import { formatNumber } from "~/lib/format";
-import { apiError, methodNotAllowed } from "~/lib/api.server";
+import { apiError, methodNotAllowed, readSearchParams } from "~/lib/api.server";
 import { importPriceList } from "~/purchasing/price-import.server";
 import {
   columnMappingFromFields,
@@ -28,6 +28,10 @@ import {
   layoutAnswerOf,
   openPriceList,
 } from "~/price-lists/open-price-list.server";
+import {
+  priceListUploadMode,
+  priceListUploadQuerySchema,
+} from "~/price-lists/upload-query";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "importPriceLists");
@@ -81,6 +85,9 @@ function uploadedFileName(file: File): string {
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireCapability(request, "importPriceLists");
   if (request.method !== "POST") return methodNotAllowed(["POST"]);
+  const mode = priceListUploadMode(
+    readSearchParams(request, priceListUploadQuerySchema),
+  );
   // The body's size as a whole is bounded before this runs (server/request-size-limits.ts).
   let form: FormData;
   try {
@@ -105,8 +112,7 @@ export async function action({ request }: Route.ActionArgs) {
   }
   const file = form.get("file");
   const sheet = String(form.get("sheet") ?? "").trim() || null;
-  if (new URL(request.url).searchParams.get("layout") === "1")
-    return answerLayout(file, sheet);
+  if (mode === "layout") return answerLayout(file, sheet);
   const supplier = String(form.get("supplier") ?? "").trim();
   const fields: Record<string, string[]> = {};
   if (!(file instanceof File))
@@ -142,7 +148,7 @@ export async function action({ request }: Route.ActionArgs) {
     return apiError(400, "Some fields are missing or wrong.", fields);
   const upload = file as File;
 
-  const dryRun = new URL(request.url).searchParams.get("dryRun") === "1";
+  const dryRun = mode === "check";
   const answer = (onProgress?: ReportProgress) =>
     answerDomainError(async () => {
       const outcome = await importPriceList({

@@ -11,7 +11,11 @@ import {
   type TimedProgressEvent,
 } from "~/lib/progress-stream";
 import { baseUrl, signInAs } from "../support/app-client";
-import { createSupplier } from "../support/price-list-fixtures";
+import {
+  createSupplier,
+  partPriceList as priceList,
+  partPriceListMapping as mapping,
+} from "../support/price-list-fixtures";
 import {
   closeTestDatabase,
   testDatabase,
@@ -30,32 +34,6 @@ beforeAll(async () => {
   buyer = await signInAs("buyer");
 });
 afterAll(closeTestDatabase);
-
-const mapping = {
-  supplierSku: "Art. no",
-  description: "Description",
-  kind: "Kind",
-  unit: "Unit",
-  price: "Price",
-  currency: "Currency",
-  minQuantity: "Min qty",
-  validFrom: "Valid from",
-};
-
-/** `rows` part rows, four quantity breaks a SKU; `bad` lines (1-based data rows) get a negative price. */
-function priceList(rows: number, bad: number[] = []): string {
-  const prefix = uniqueCode("P");
-  const lines = [
-    "Art. no,Description,Kind,Unit,Price,Currency,Min qty,Valid from",
-  ];
-  for (let index = 0; index < rows; index += 1) {
-    const price = bad.includes(index + 1) ? "-1.00" : "2.50";
-    lines.push(
-      `${prefix}-${Math.floor(index / 4)},Insulation sleeve ${index},part,pcs,${price},EUR,${[1, 10, 100, 1000][index % 4]},2026-11-01`,
-    );
-  }
-  return `${lines.join("\n")}\n`;
-}
 
 function upload(
   csv: string,

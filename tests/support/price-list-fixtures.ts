@@ -4,7 +4,7 @@ import { baseUrl, sendJson } from "./app-client";
 import { eq } from "drizzle-orm";
 import { supplierItems, suppliers } from "~/db/schema";
 import { itemIdOf } from "./build-order-fixtures";
-import { testDb } from "./test-database";
+import { testDb, uniqueCode } from "./test-database";
 
 /** Adds a supplier as the buyer whose session cookie is given; returns its id. */
 export async function createSupplier(
@@ -105,4 +105,31 @@ export async function quoteDesignItems(
       validFrom: "Valid from",
     },
   });
+}
+
+/** The column mapping of {@link partPriceList}'s files. */
+export const partPriceListMapping = {
+  supplierSku: "Art. no",
+  description: "Description",
+  kind: "Kind",
+  unit: "Unit",
+  price: "Price",
+  currency: "Currency",
+  minQuantity: "Min qty",
+  validFrom: "Valid from",
+};
+
+/** A CSV of `rows` part rows, four quantity breaks a SKU; `bad` lines (1-based data rows) get a negative price. */
+export function partPriceList(rows: number, bad: number[] = []): string {
+  const prefix = uniqueCode("P");
+  const lines = [
+    "Art. no,Description,Kind,Unit,Price,Currency,Min qty,Valid from",
+  ];
+  for (let index = 0; index < rows; index += 1) {
+    const price = bad.includes(index + 1) ? "-1.00" : "2.50";
+    lines.push(
+      `${prefix}-${Math.floor(index / 4)},Insulation sleeve ${index},part,pcs,${price},EUR,${[1, 10, 100, 1000][index % 4]},2026-11-01`,
+    );
+  }
+  return `${lines.join("\n")}\n`;
 }
