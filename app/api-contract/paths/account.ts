@@ -109,7 +109,7 @@ export const accountPaths: ZodOpenApiPathsObject = {
           headers: z.object({
             "Set-Cookie": z.string().meta({
               description:
-                "The session cookie `turnledger_session` (HttpOnly, SameSite=Lax), to send with later requests.",
+                "The session cookie `turnledger_session` (HttpOnly, SameSite=Lax, Secure when the app is served over HTTPS), to send with later requests.",
               example: "turnledger_session=…; Path=/; HttpOnly; SameSite=Lax",
             }),
           }),
