@@ -14,6 +14,15 @@ export const signInSchema = z.object({
   redirectTo: z.string().optional(),
 });
 
+/** The body of POST /api/v1/sessions: signing in from a script. */
+export const sessionCredentialsSchema = z.object({
+  email: emailField,
+  password: z
+    .string({ error: "Enter your password." })
+    .min(1, "Enter your password.")
+    .max(1000),
+});
+
 export const passwordMinimum = 10;
 
 /** A new password and its confirmation: the one rule for every way of choosing one. */

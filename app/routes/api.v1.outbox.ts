@@ -1,16 +1,13 @@
-import { z } from "zod";
 import type { Route } from "./+types/api.v1.outbox";
 import { requireCapability } from "~/auth/guard.server";
 import { methodNotAllowed, readSearchParams } from "~/lib/api.server";
-import { pageSizeParam } from "~/lib/search-params";
 import { listOutbox } from "~/mail/outbox.server";
-
-const outboxQuery = z.object({ limit: pageSizeParam("limit", 500, 100) });
+import { outboxQuerySchema } from "~/mail/outbox-query";
 
 /** GET /api/v1/outbox?limit=100 → [{ to, subject, text, sentAt, attachments: [{ fileName, contentType, byteSize }] }], newest first. Admins only. */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireCapability(request, "readOutbox");
-  const { limit } = readSearchParams(request, outboxQuery);
+  const { limit } = readSearchParams(request, outboxQuerySchema);
   const { messages } = await listOutbox(1, limit);
   return Response.json(
     messages.map((message) => ({

@@ -1,7 +1,8 @@
 import type { Route } from "./+types/api.v1.scan-lookup";
 import { requireUser } from "~/auth/guard.server";
 import { lookUpScannedText, ownOrigins } from "~/labels/scan-lookup.server";
-import { apiError, methodNotAllowed } from "~/lib/api.server";
+import { scanLookupQuerySchema } from "~/labels/scan-lookup-query";
+import { apiError, methodNotAllowed, readSearchParams } from "~/lib/api.server";
 
 /**
  * GET /api/v1/scan-lookup?code=L123 → what a scanned label stands for:
@@ -12,8 +13,8 @@ import { apiError, methodNotAllowed } from "~/lib/api.server";
  */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  const code = new URL(request.url).searchParams.get("code") ?? "";
-  const found = await lookUpScannedText(code, ownOrigins(request));
+  const { code } = readSearchParams(request, scanLookupQuerySchema);
+  const found = await lookUpScannedText(code ?? "", ownOrigins(request));
   if (found.status === "foreign") return apiError(400, found.message);
   if (found.status === "unknown") return apiError(404, found.message);
   return Response.json(found.answer);

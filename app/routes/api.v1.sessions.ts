@@ -1,22 +1,13 @@
-import { z } from "zod";
 import type { Route } from "./+types/api.v1.sessions";
 import { getOptionalUser } from "~/auth/guard.server";
 import { endSession, startSession } from "~/auth/session.server";
 import {
-  emailField,
+  sessionCredentialsSchema,
   signInRefusal,
   wrongCredentialsMessage,
 } from "~/lib/account-schemas";
 import { apiError, methodNotAllowed, readJsonBody } from "~/lib/api.server";
 import { findPerson, checkSignIn } from "~/people/people.server";
-
-const credentialsSchema = z.object({
-  email: emailField,
-  password: z
-    .string({ error: "Enter your password." })
-    .min(1, "Enter your password.")
-    .max(1000),
-});
 
 export async function loader({ request }: Route.LoaderArgs) {
   await getOptionalUser(request);
@@ -34,7 +25,10 @@ export async function action({ request, context }: Route.ActionArgs) {
   }
   if (request.method !== "POST") return methodNotAllowed(["POST", "DELETE"]);
 
-  const { email, password } = await readJsonBody(request, credentialsSchema);
+  const { email, password } = await readJsonBody(
+    request,
+    sessionCredentialsSchema,
+  );
   const result = await checkSignIn(email, password, context.clientAddress);
   if (result.kind === "paused" || result.kind === "busy") {
     const refusal = signInRefusal(result);
