@@ -54,9 +54,20 @@ export const signedInSecurity: Record<string, string[]>[] = [
   { bearerToken: [] },
 ];
 
-function errorAnswer(description: string): ZodOpenApiResponseObject {
+const retryAfter = {
+  "Retry-After": {
+    description: "Seconds to wait before trying again.",
+    schema: { type: "integer" as const, minimum: 1 },
+  },
+};
+
+function errorAnswer(
+  status: string,
+  description: string,
+): ZodOpenApiResponseObject {
   return {
     description,
+    ...(status === "503" || status === "429" ? { headers: retryAfter } : {}),
     content: { "application/json": { schema: errorBodySchema } },
   };
 }
@@ -70,6 +81,8 @@ export const sharedErrors = {
   405: "This method is not served here (the `Allow` header lists those that are).",
   409: "The request conflicts with the current state; nothing was changed.",
   413: "The body is larger than this operation takes.",
+  422: "The request was read but cannot be carried out as it stands; nothing was changed.",
+  429: "Too many attempts: wait the seconds in `Retry-After`.",
   503: "The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`.",
 } as const;
 
@@ -127,7 +140,7 @@ export function apiOperation(spec: OperationSpec): ZodOpenApiOperationObject {
     ...spec.answers,
   };
   for (const [status, description] of Object.entries(errors))
-    responses[status] = errorAnswer(description);
+    responses[status] = errorAnswer(status, description);
 
   const requestParams: ZodOpenApiOperationObject["requestParams"] = {};
   if (spec.query) requestParams.query = spec.query as never;
