@@ -13,11 +13,9 @@ export const itemPricesQuerySchema = z.object({
   })
     .default(1)
     .meta({ description: "The quantity to price, in the item's unit." }),
-  date: dayParam("date", "date must be YYYY-MM-DD.")
-    .optional()
-    .meta({
-      description: "The day to price, YYYY-MM-DD; today when not given.",
-    }),
+  date: dayParam("date", "date must be YYYY-MM-DD.").optional().meta({
+    description: "The day to price, YYYY-MM-DD; today when not given.",
+  }),
   history: z
     .enum(["1", "0"], { error: "history must be 1 or 0." })
     .optional()

@@ -153,13 +153,10 @@ export const itemPricesSchema = z
               description:
                 "Set when no base is kept in the supplier's currency: the company base and the rate it was converted with.",
             }),
-          rate: z
-            .number()
-            .nullable()
-            .meta({
-              description:
-                "The exchange rate used; null when quoted in the company currency.",
-            }),
+          rate: z.number().nullable().meta({
+            description:
+              "The exchange rate used; null when quoted in the company currency.",
+          }),
           unitPrice: money(
             "Per unit in the company currency: what the list is sorted by.",
           ),
@@ -170,11 +167,9 @@ export const itemPricesSchema = z
             .meta({ description: "Null: any quantity." }),
           source: z
             .object({
-              importId: z
-                .string()
-                .meta({
-                  description: "The price-list import the line came from.",
-                }),
+              importId: z.string().meta({
+                description: "The price-list import the line came from.",
+              }),
               line: z
                 .number()
                 .int()
@@ -205,12 +200,9 @@ export const itemPricesSchema = z
         companyCurrency: currency,
         from: day,
         to: day,
-        lineCount: z
-          .number()
-          .int()
-          .meta({
-            description: "Price lines stored for the item, charted or not.",
-          }),
+        lineCount: z.number().int().meta({
+          description: "Price lines stored for the item, charted or not.",
+        }),
         series: z.array(
           z.object({
             supplier: z.string(),
@@ -220,13 +212,10 @@ export const itemPricesSchema = z
               .array(
                 z.object({
                   date: day,
-                  unitPrice: z
-                    .number()
-                    .nullable()
-                    .meta({
-                      description:
-                        "In the company currency; null: no price from this day, see `problems`.",
-                    }),
+                  unitPrice: z.number().nullable().meta({
+                    description:
+                      "In the company currency; null: no price from this day, see `problems`.",
+                  }),
                   quotedUnitPrice: z.number().nullable(),
                   problems: z.array(z.string()),
                 }),
