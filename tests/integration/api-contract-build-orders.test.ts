@@ -11,6 +11,7 @@ import {
   signInAs,
 } from "../support/app-client";
 import { expectConforming } from "../support/api-contract";
+import { expectAnswersConforming } from "../support/api-contract-answers";
 import {
   createPartItem,
   createWireItem,
@@ -205,7 +206,7 @@ describe("the build-order operations against the contract", () => {
 
   it("refuses as documented: bad bodies and queries, roles, missing orders and steps, the order's state", async () => {
     const id = await createOrder(1);
-    const refusals: [Response, string, string, number][] = [
+    await expectAnswersConforming([
       // Creating
       [
         await sendWithToken("POST", list, builder, {
@@ -313,14 +314,7 @@ describe("the build-order operations against the contract", () => {
         404,
       ],
       [await fetch(`${baseUrl()}${list}/${id}/lots`), "GET", lots, 401],
-    ];
-    for (const [response, method, path, status] of refusals) {
-      expect(
-        response.status,
-        `${method} ${response.url}: ${await response.clone().text()}`,
-      ).toBe(status);
-      await expectConforming(response, method, path);
-    }
+    ]);
 
     await takeStep(id, "cancel", builder);
     const closed = await sendWithToken("PATCH", `${list}/${id}`, builder, {

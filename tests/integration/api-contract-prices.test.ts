@@ -11,6 +11,7 @@ import {
   signInAs,
 } from "../support/app-client";
 import { expectConforming } from "../support/api-contract";
+import { expectAnswersConforming } from "../support/api-contract-answers";
 import {
   createBuyingPlanFixture,
   type BuyingPlanFixture,
@@ -151,7 +152,7 @@ describe("the price operations against the contract", () => {
   });
 
   it("refuses as documented: bad bodies and queries, roles, the company currency, a missing item, no sign-in", async () => {
-    const refusals: [Response, string, string, number][] = [
+    await expectAnswersConforming([
       [
         await sendWithToken("PUT", metalBase, buyer, {
           conductor: "silver",
@@ -229,13 +230,6 @@ describe("the price operations against the contract", () => {
         400,
       ],
       [await fetch(`${baseUrl()}${plan}`), "GET", plan, 401],
-    ];
-    for (const [response, method, path, status] of refusals) {
-      expect(
-        response.status,
-        `${method} ${response.url}: ${await response.clone().text()}`,
-      ).toBe(status);
-      await expectConforming(response, method, path);
-    }
+    ]);
   });
 });
