@@ -1,9 +1,7 @@
-/** What the build-order API routes share: refusals as JSON, the list query, the order id from the path. */
+/** What the build-order API routes share: refusals as JSON, the order id from the path. */
 import { apiError } from "~/lib/api.server";
-import { pageParam, pageSizeParam } from "~/lib/search-params";
 import { answerDomainError } from "~/lib/api-errors.server";
 import { isBuildOrderError } from "./build-order-errors";
-import { buildOrderListFilterSchema } from "./build-order-list-address";
 import { buildOrderIdFromPath } from "./build-order-path";
 
 /**
@@ -38,11 +36,6 @@ export async function answerBuildOrderError(
 export function orderIdFrom(value: string | undefined): number {
   return buildOrderIdFromPath(value, (message) => apiError(404, message));
 }
-
-export const buildOrderListQuerySchema = buildOrderListFilterSchema.extend({
-  page: pageParam,
-  pageSize: pageSizeParam("pageSize", 200, 50),
-});
 
 /** Kept here for the build-order routes; it lives with the other body readers. */
 export { readOptionalJsonBody } from "~/lib/api.server";

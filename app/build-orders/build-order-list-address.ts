@@ -2,6 +2,7 @@
 import { z } from "zod";
 import { buildOrderStatuses } from "~/db/tables/build-order-enums";
 import { listHref, searchTextParam } from "~/lib/list-filters";
+import { pageParam, pageSizeParam } from "~/lib/search-params";
 import type { BuildOrderStatus } from "./build-order-status";
 
 /** The list's filters (page, API and CSV export share them). */
@@ -16,6 +17,12 @@ export const buildOrderListFilterSchema = z.object({
 });
 
 export type BuildOrderListFilter = z.output<typeof buildOrderListFilterSchema>;
+
+/** GET /api/v1/build-orders: the filters and the page (at most 200 a page, 50 when not given). */
+export const buildOrderListQuerySchema = buildOrderListFilterSchema.extend({
+  page: pageParam,
+  pageSize: pageSizeParam("pageSize", 200, 50),
+});
 
 /** The status a `?status=` value names, or undefined for any other text. */
 export function buildOrderStatusFrom(

@@ -1,9 +1,7 @@
 import type { Route } from "./+types/api.v1.build-orders";
 import { requireCapability, requireUser } from "~/auth/guard.server";
-import {
-  answerBuildOrderError,
-  buildOrderListQuerySchema,
-} from "~/build-orders/build-order-api.server";
+import { answerBuildOrderError } from "~/build-orders/build-order-api.server";
+import { buildOrderListQuerySchema } from "~/build-orders/build-order-list-address";
 import { buildOrderCreateSchema } from "~/build-orders/build-order-forms";
 import {
   createBuildOrder,

@@ -1,28 +1,14 @@
-import { z } from "zod";
 import type { Route } from "./+types/api.v1.item-prices";
 import { requireUser } from "~/auth/guard.server";
 import { apiError, methodNotAllowed, readSearchParams } from "~/lib/api.server";
-import { dayParam, positiveDecimalParam } from "~/lib/search-params";
 import {
   bestPricesOf,
   loadItemPricing,
   priceHistoryOf,
 } from "~/purchasing/item-prices.server";
 import { quantityFromNumber } from "~/lib/decimal-amounts";
-import { maxStockQuantity } from "~/stock/movement-request";
 import { todayUtc } from "~/lib/calendar-days";
-
-const itemPricesQuerySchema = z.object({
-  quantity: positiveDecimalParam("quantity", {
-    max: maxStockQuantity,
-    decimals: 3,
-  }).default(1),
-  date: dayParam("date", "date must be YYYY-MM-DD.").optional(),
-  history: z
-    .enum(["1", "0"], { error: "history must be 1 or 0." })
-    .optional()
-    .transform((value) => value === "1"),
-});
+import { itemPricesQuerySchema } from "~/purchasing/item-prices-query";
 
 /**
  * GET /api/v1/items/:sku/prices?quantity=&date=&history=1 → the prices of every supplier for
