@@ -131,7 +131,11 @@ function requests(
       example === undefined
         ? fromSchema
         : fc.oneof(fc.constant(example), fromSchema);
-    if (parameter.in === "path") pathValues[parameter.name] = value;
+    // A path segment is never empty, "." or "..": those address another route altogether.
+    if (parameter.in === "path")
+      pathValues[parameter.name] = value.filter(
+        (segment) => !["", ".", ".."].includes(String(segment)),
+      );
     if (parameter.in === "query") {
       queryValues[parameter.name] = value;
       if (parameter.required) requiredQuery.push(parameter.name);
