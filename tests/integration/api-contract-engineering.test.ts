@@ -176,7 +176,7 @@ describe("the engineering operations against the contract", () => {
         grade: "N42SH",
         shape: { kind: "block", lengthMm: 30, widthMm: 12, heightMm: 4 },
         count: 14,
-        temperatureC: 160,
+        temperatureC: 150,
         magnetLengthMm: 4,
         airGapMm: 0.8,
         demagnetisingFieldKAm: 900,
