@@ -6,6 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiDocument } from "~/api-contract/document";
+import { kestrelToothCoil } from "~/api-contract/schemas/engineering";
 import { baseUrl, bearerTokenAs, sendWithToken } from "../support/app-client";
 import { contractProblems, expectConforming } from "../support/api-contract";
 import { closeTestDatabase } from "../support/test-database";
@@ -19,18 +20,8 @@ beforeAll(async () => {
 });
 afterAll(closeTestDatabase);
 
-/** The Kestrel 60-30 outrunner's tooth coil (seed/demo-designs.ts). */
-const kestrelCoil = {
-  conductor: "copper",
-  wire: { standard: "IEC", diameterMm: 0.5 },
-  insulation: "grade2",
-  turns: 18,
-  strandsInHand: 2,
-  activeLengthMm: 31,
-  endTurnLengthMm: 11,
-  leadLengthMm: 80,
-  coilCount: 12,
-};
+/** The Kestrel 60-30 outrunner's tooth coil (seed/demo-designs.ts), without a current. */
+const kestrelCoil = { ...kestrelToothCoil, currentA: null };
 
 async function answerOf(
   method: "GET" | "POST",

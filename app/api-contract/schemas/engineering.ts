@@ -129,7 +129,8 @@ const coilOperatingPointSchema = z
     description: "Temperature and loss found together from the thermal input.",
   });
 
-const demoCoil = {
+/** The Kestrel 60-30 outrunner's tooth coil at its rated 6 A, 120 °C (seed/demo-designs.ts). */
+export const kestrelToothCoil = {
   conductor: "copper",
   wire: { standard: "IEC", diameterMm: 0.5 },
   insulation: "grade2",
@@ -189,7 +190,7 @@ export const coilEstimateSchema = z
     id: "CoilEstimate",
     description:
       "A coil's conductor length, mass, resistance and loss, split into active sides and end turns. First-order engineering estimates.",
-    example: estimateCoil(demoCoil),
+    example: estimateCoil(kestrelToothCoil),
   });
 
 const magnetWorkingPointSchema = z
