@@ -5,7 +5,10 @@
  */
 import fs from "node:fs";
 import { contractFile, contractText } from "~/api-contract/contract-file";
+import { apiTypesFile, apiTypesText } from "./lib/api-types";
 
 fs.mkdirSync(new URL("../docs/api/", import.meta.url), { recursive: true });
 fs.writeFileSync(contractFile, contractText());
 console.log(`[turnledger] wrote ${contractFile}`);
+fs.writeFileSync(apiTypesFile, await apiTypesText());
+console.log(`[turnledger] wrote ${apiTypesFile}`);

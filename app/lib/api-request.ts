@@ -1,8 +1,8 @@
 /**
- * The browser's calls to our JSON API from a page's clientAction. Every
- * outcome comes back as an answer to show (the data, or a refusal with field
- * messages), never as a thrown error: a thrown 400 would replace the page
- * with the error page.
+ * The browser's calls to our JSON API from a page's clientAction, made with the typed
+ * client (~/api-client/client). Every outcome comes back as an answer to show (the data,
+ * or a refusal with field messages), never as a thrown error: a thrown 400 would replace
+ * the page with the error page.
  */
 export type ApiAnswer<T> =
   | { ok: true; data: T }
@@ -13,22 +13,29 @@ export type ApiAnswer<T> =
       fields: Record<string, string[]>;
     };
 
-export async function postJson<T>(
-  path: string,
+/** What a typed client call resolves to: the answer's data, or its error body. */
+interface ClientResult<T> {
+  data?: T;
+  error?: unknown;
+  response: Response;
+}
+
+function errorOf(
   body: unknown,
+): { message?: string; fields?: Record<string, string[]> } | undefined {
+  return body && typeof body === "object" && "error" in body
+    ? (body.error as { message?: string; fields?: Record<string, string[]> })
+    : undefined;
+}
+
+/** Awaits a typed client call (`apiClient.POST(…, { signal })`) and makes its outcome an answer. */
+export async function apiAnswer<T>(
+  call: Promise<ClientResult<T>>,
   signal: AbortSignal,
 ): Promise<ApiAnswer<T>> {
-  let response: Response;
+  let result: ClientResult<T>;
   try {
-    response = await fetch(path, {
-      method: "POST",
-      headers: {
-        "Content-Type": "application/json",
-        Accept: "application/json",
-      },
-      body: JSON.stringify(body),
-      signal,
-    });
+    result = await call;
   } catch (error) {
     if (signal.aborted) throw error; // a newer request replaced this one
     return {
@@ -39,15 +46,10 @@ export async function postJson<T>(
       fields: {},
     };
   }
-  const parsed = (await response.json().catch(() => null)) as
-    | T
-    | { error?: { message?: string; fields?: Record<string, string[]> } }
-    | null;
-  if (response.ok && parsed !== null) return { ok: true, data: parsed as T };
-  const error =
-    parsed && typeof parsed === "object" && "error" in parsed
-      ? parsed.error
-      : undefined;
+  const { response } = result;
+  if (response.ok && result.data !== undefined)
+    return { ok: true, data: result.data };
+  const error = errorOf(result.error);
   return {
     ok: false,
     status: response.status,

@@ -6,6 +6,7 @@ import {
   methodNotAllowed,
   readJsonBody,
 } from "~/lib/api.server";
+import { slotFillAnswer } from "~/engineering/wire-slot-fill-answer";
 import { slotFillRequestSchema } from "~/lib/slot-fill-request";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -24,22 +25,5 @@ export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return methodNotAllowed(["POST"]);
   const input = await readJsonBody(request, slotFillRequestSchema);
   const fill = calculateOr400(() => assessWireSlotFill(input));
-  return Response.json({
-    copperFill: fill.copperFill,
-    grossFill: fill.grossFill,
-    limit: fill.limit,
-    fits: fill.fits,
-    message: fill.message,
-    judgedOn: fill.judgedOn,
-    limitPassed: fill.limitPassed,
-    limitCode: fill.warning?.code ?? null,
-    note: fill.note,
-    wireAreaMm2: fill.wireAreaMm2,
-    insulation: fill.insulation,
-    insulationAssumed: fill.insulationAssumed,
-    bareDiameterMm: fill.bareDiameterMm,
-    overallDiameterMm: fill.overallDiameterMm,
-    overallDiameterIsEstimate: fill.overallDiameterIsEstimate,
-    overallDiameterSource: fill.overallDiameterSource,
-  });
+  return Response.json(slotFillAnswer(fill));
 }

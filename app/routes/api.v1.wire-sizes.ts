@@ -1,16 +1,13 @@
 import type { Route } from "./+types/api.v1.wire-sizes";
 import { requireUser } from "~/auth/guard.server";
-import { apiError, methodNotAllowed } from "~/lib/api.server";
+import { methodNotAllowed, readSearchParams } from "~/lib/api.server";
+import { wireSizeQuerySchema } from "~/reference/wire-size-query";
 import { listWireSizes } from "~/reference/wire-sizes.server";
 
 /** GET /api/v1/wire-sizes?standard=AWG|IEC → the sizes with bare diameter, area and published overall diameters. */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  const standard = new URL(request.url).searchParams.get("standard") ?? "";
-  if (standard !== "AWG" && standard !== "IEC") {
-    const message = "standard must be AWG or IEC.";
-    return apiError(400, message, { standard: [message] });
-  }
+  const { standard } = readSearchParams(request, wireSizeQuerySchema);
   return Response.json(await listWireSizes(standard));
 }
 

@@ -1,6 +1,7 @@
 import { getFormProps } from "@conform-to/react";
 import { Form, type ShouldRevalidateFunctionArgs, data } from "react-router";
-import { postJson } from "~/lib/api-request";
+import { apiClient } from "~/api-client/client";
+import { apiAnswer } from "~/lib/api-request";
 import type { CoilEstimateRequest } from "~/lib/estimate-requests";
 import type { Route } from "./+types/coil-estimator";
 import { requireUser } from "~/auth/guard.server";
@@ -15,7 +16,6 @@ import {
   useCoilEstimate,
   type CoilEstimateAnswer,
 } from "~/components/estimators/use-coil-estimate";
-import type { CoilEstimate } from "~/engineering/coil-estimate";
 import { listWireSizes } from "~/reference/wire-sizes.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -43,9 +43,11 @@ export async function clientAction({
 }: Route.ClientActionArgs): Promise<CoilEstimateAnswer> {
   const input = (await request.json()) as CoilEstimateRequest;
   return {
-    ...(await postJson<CoilEstimate>(
-      "/api/v1/coil-estimates",
-      input,
+    ...(await apiAnswer(
+      apiClient.POST("/api/v1/coil-estimates", {
+        body: input,
+        signal: request.signal,
+      }),
       request.signal,
     )),
     input,

@@ -1,6 +1,7 @@
-/** The browser's call to POST /api/v1/magnet-estimates (see app/lib/api-request.ts). */
+/** The browser's call to POST /api/v1/magnet-estimates with the typed client (see app/lib/api-request.ts). */
 import type { MagnetEstimate } from "~/engineering/magnet-estimate";
-import { postJson } from "~/lib/api-request";
+import { apiClient } from "~/api-client/client";
+import { apiAnswer } from "~/lib/api-request";
 import type { EstimatedInput } from "./magnet-estimate-results";
 
 export type EstimateAnswer =
@@ -16,9 +17,8 @@ export async function requestMagnetEstimate(
   input: EstimatedInput,
   signal: AbortSignal,
 ): Promise<EstimateAnswer> {
-  const answer = await postJson<MagnetEstimate>(
-    "/api/v1/magnet-estimates",
-    input,
+  const answer = await apiAnswer(
+    apiClient.POST("/api/v1/magnet-estimates", { body: input, signal }),
     signal,
   );
   return answer.ok ? { ok: true, estimate: answer.data, input } : answer;
