@@ -27,6 +27,76 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/sessions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Sign in with e-mail and password
+         * @description Starts a session and sets its cookie. For scripts a personal API token (account page) is simpler: it needs no cookie and no `Origin`. Repeated wrong passwords pause sign-in to the account or from the address for some minutes.
+         *
+         *     **Who may call:** Anyone, signed in or not.
+         */
+        post: operations["signIn"];
+        /**
+         * Sign out
+         * @description Ends the session of the cookie sent, if any, and clears the cookie. Answers 204 also when no one was signed in.
+         *
+         *     **Who may call:** Anyone, signed in or not.
+         */
+        delete: operations["signOut"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/me": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Who is signed in
+         * @description **Who may call:** Any signed-in person.
+         */
+        get: operations["getSignedInPerson"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/outbox": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The newest e-mails the app wrote
+         * @description Newest first, sent or not: for checking what the app tells people (and for tests).
+         *
+         *     **Who may call:** Roles: admin.
+         */
+        get: operations["listOutboxMessages"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/items": {
         parameters: {
             query?: never;
@@ -77,6 +147,188 @@ export interface paths {
          *     **Who may call:** Roles: admin, buyer, storekeeper.
          */
         patch: operations["changeItem"];
+        trace?: never;
+    };
+    "/api/v1/locations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Every store and bin
+         * @description **Who may call:** Any signed-in person.
+         */
+        get: operations["listLocations"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/scan-lookup": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * What a scanned label stands for
+         * @description Reads a label's code as a scanner or a person gives it and answers the lot (its item, number and where it is) or the location it names.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["lookUpScannedCode"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/stock-movements": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * A page of the movement journal
+         * @description Newest first, filtered by type, item, lot, reference, person and days (`from` and `to` inclusive, UTC).
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listStockMovements"];
+        put?: never;
+        /**
+         * Record a receipt, issue, return, transfer, count or adjustment
+         * @description The ledger is append-only: a correction is a new movement. A wire spool may be received or weighed back by `grossKg` (and `tareKg`) instead of `quantity`.
+         *
+         *     An issue with `buildOrderId` goes through that build order: it takes what the order holds and counts as issued to it (the answer then has `buildOrder`). A plain issue whose reference names a build order (`BO-12`) is refused on `reference`.
+         *
+         *     A receipt may name its supplier (`supplierId`): a lot it creates keeps it as its origin.
+         *
+         *     **Who may call:** Roles: admin, storekeeper.
+         */
+        post: operations["recordStockMovement"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/lots/{lot}/hold": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Put a lot on quality hold
+         * @description While held, the lot's free stock (on hand less reserved) counts as held, not available, and the lot cannot be issued or transferred.
+         *
+         *     **Who may call:** Roles: admin, storekeeper.
+         */
+        post: operations["holdLot"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/lots/{lot}/release": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Release a lot from quality hold
+         * @description The body may be left out, or give a note on why.
+         *
+         *     **Who may call:** Roles: admin, storekeeper.
+         */
+        post: operations["releaseLot"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/lots/{lot}/where-used": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Where a lot went
+         * @description Every build order that drew from the lot, read from the journal, and the issues of it made to no order.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["getLotWhereUsed"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/lots/{lot}/documents": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * A lot's certificates
+         * @description The certificates kept with the lot, newest first; `url` downloads each (signed in).
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listLotDocuments"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/alerts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Low-stock alerts, newest first
+         * @description **Who may call:** Any signed-in person.
+         */
+        get: operations["listStockAlerts"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
         trace?: never;
     };
     "/api/v1/coil-estimates": {
@@ -211,10 +463,748 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/designs": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * A page of designs
+         * @description Designs by name, each with its revisions (newest first). The total is in `X-Total-Count`.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listDesigns"];
+        put?: never;
+        /**
+         * Add a design
+         * @description Makes the design with revision 1 as a draft, without lines; add them with `PUT …/revisions/1`.
+         *
+         *     **Who may call:** Roles: admin, builder.
+         */
+        post: operations["createDesign"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/designs/{designId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * One design with its revisions
+         * @description **Who may call:** Any signed-in person.
+         */
+        get: operations["getDesign"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/designs/{designId}/revisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Start the next revision
+         * @description The next revision, a draft copy of the latest one (its fields and lines).
+         *
+         *     **Who may call:** Roles: admin, builder.
+         */
+        post: operations["startDesignRevision"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/designs/{designId}/revisions/{revision}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * One revision with its lines
+         * @description **Who may call:** Any signed-in person.
+         */
+        get: operations["getDesignRevision"];
+        /**
+         * Change a draft revision
+         * @description Changes the fields the body names (the others stay as they are) and, when `lines` is given, replaces the whole list of lines. A line names its item by SKU; an unknown or archived item, or one of the wrong kind, is refused with 400 beside `lines[i].sku`.
+         *
+         *     **Who may call:** Roles: admin, builder.
+         */
+        put: operations["changeDesignRevision"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/designs/{designId}/revisions/{revision}/release": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Release a draft revision
+         * @description Locks the draft for good: from then on it can be built and never changes.
+         *
+         *     **Who may call:** Roles: admin, builder.
+         */
+        post: operations["releaseDesignRevision"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/designs/{designId}/revisions/{revision}/costing": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The costing of a revision
+         * @description Every line priced for the number of motors (quantity breaks) at the best supplier price on the day, or at the moving average cost of stock; the split, cost per N·m, coil figures, the first-order torque estimate and the design's checks.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["getDesignCosting"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/designs/{designId}/revisions/{revision}/lines/{line}/substitutes": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Wire in stock that can stand in for a coil line's wire
+         * @description Active wire items of the same conductor with stock on hand, in strand counts whose copper area is within `tolerance` % of the line's, rated for the design's insulation class and fitting the slot no worse than the line does.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listWireSubstitutes"];
+        put?: never;
+        /**
+         * Use a substitute on a coil line
+         * @description On a draft the line changes in place (200). On a released revision a new draft revision is made, a copy with that line changed (201). Both answer the revision that changed.
+         *
+         *     **Who may call:** Roles: admin, builder.
+         */
+        post: operations["applyWireSubstitute"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/insight/designs": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Cost per motor and per N·m of the released designs
+         * @description The latest released revision of each design, newest design first, costed for `quantity` motors on `date` at the price `basis`. A read-only what-if (nothing is saved): `copperBase` / `aluminiumBase` per kg stand in for the stored metal bases in the company currency, and `endTurn.<designId>` (0 to 5, at most 3 decimals, e.g. `endTurn.1=1.2`) scales that design's end-turn lengths; each design then also carries `asStored`. `history=1` adds `costHistory`. The total is in `X-Total-Count`.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listDesignInsight"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/insight/stock-value": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * What the store is worth
+         * @description On hand × moving average cost, by kind and by location, the reserved value, items below their reorder point, open alerts, and the value at the end of each of the last 26 weeks (Monday-started, UTC).
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["getStockValue"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/build-orders": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * A page of build orders
+         * @description Newest first; `search` finds an order by its reference (BO-12, 12) or by part of its design's name.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listBuildOrders"];
+        put?: never;
+        /**
+         * Start a build order for motors of a released revision
+         * @description Works out what the motors need from the revision's lines; the order is a draft until stock is reserved for it.
+         *
+         *     **Who may call:** Roles: admin, builder.
+         */
+        post: operations["createBuildOrder"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/build-orders/{orderId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * One build order with its lines, costs and history
+         * @description **Who may call:** Any signed-in person.
+         */
+        get: operations["getBuildOrder"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /**
+         * Change an order's number of motors or planned start
+         * @description A new number of motors is taken while nothing has been issued to the order: what it held is released and it is a draft again. A new planned start (null clears it) is taken while the order is open. The number of motors is changed first, so a refusal leaves nothing half-written.
+         *
+         *     **Who may call:** Roles: admin, builder.
+         */
+        patch: operations["changeBuildOrder"];
+        trace?: never;
+    };
+    "/api/v1/build-orders/{orderId}/{step}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Reserve, issue to, cancel or complete a build order
+         * @description One step of the order, named in the path. Each answers differently:
+         *
+         *     - `reserve` → 200 BuildOrderReservation. The first reservation makes a draft `reserved`. When stock is short and `partial` is not set, 409 with `error.shortages` and nothing reserved.
+         *     - `issue` → 201 BuildOrderIssue, through the stock ledger; the first issue makes the order `in_progress`.
+         *     - `cancel` → 200 BuildOrderCancelled: what the order held is released; stock already issued stays issued (return it with a return movement).
+         *     - `complete` → 200 BuildOrderCompleted: the order with planned versus actual; what it still held is released.
+         *
+         *     **Who may call:** each step its own roles: reserve: admin, builder; issue: admin, storekeeper; cancel: admin, builder; complete: admin, builder.
+         */
+        post: operations["takeBuildOrderStep"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/build-orders/{orderId}/lots": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The lots issued to a build order
+         * @description For tracing: every lot issued to the order, issues net of the returns that name it.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listBuildOrderLots"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/suppliers": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Every supplier
+         * @description By name, at most 1,000.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listSuppliers"];
+        put?: never;
+        /**
+         * Add a supplier
+         * @description Ordering settings left out take their defaults: metal base fixed at order, wire tolerance 10 %, pieces 0 %.
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        post: operations["createSupplier"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/suppliers/{supplierId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * One supplier
+         * @description **Who may call:** Any signed-in person.
+         */
+        get: operations["getSupplier"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /**
+         * Change a supplier
+         * @description Only the fields sent change; null clears email, leadTimeDays, notes or orderEmail. Price lines keep their own currency: a new quoting currency applies to the next import.
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        patch: operations["changeSupplier"];
+        trace?: never;
+    };
+    "/api/v1/price-lists": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Read, check or import a supplier's price list
+         * @description A multipart upload with three modes: `?layout=1` reads the file's header row and first row
+         *     (what a mapping needs), `?dryRun=1` checks every row and answers a preview, and without either the
+         *     list is imported in one transaction: all rows or none. The same file imported again for the same
+         *     supplier changes nothing.
+         *
+         *     **Progress (opt-in).** With `Accept: application/x-ndjson`, a check or commit whose form is in
+         *     order answers 200 `application/x-ndjson`: one JSON event a line, `progress` events (data rows
+         *     read out of the file's) while it works, then one `result` event with the status and body the
+         *     request answers without the stream. Refusals before the work starts (role, size, form fields)
+         *     keep their own status and JSON body.
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        post: operations["uploadPriceList"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/purchase-orders": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * A page of purchase orders
+         * @description Newest first, filtered by status, supplier or search text.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listPurchaseOrders"];
+        put?: never;
+        /**
+         * Start a draft purchase order
+         * @description Each line is priced from the supplier's price list on the day unless a unit price is given (with an optional reason). Quantities are in the item's unit, prices in the order's currency (the supplier's by default).
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        post: operations["createPurchaseOrder"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/purchase-orders/{orderId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * One purchase order
+         * @description **Who may call:** Any signed-in person.
+         */
+        get: operations["getPurchaseOrder"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /**
+         * Change a draft purchase order
+         * @description Currency, notes and lines. Each entry of `lines` without an id adds a line; with an id it changes that line (unitPrice null: back to the price list) or removes it (`remove: true`). Lines not named stay as they are.
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        patch: operations["changePurchaseOrder"];
+        trace?: never;
+    };
+    "/api/v1/purchase-orders/{orderId}/send": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Send a draft to its supplier
+         * @description E-mails the order (PDF and CSV attached) to the supplier's order address, else its general one; lines priced on the metal base fixed at order are priced again on the sending day, and the lines count as stock on order.
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        post: operations["sendPurchaseOrder"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/purchase-orders/{orderId}/cancel": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Cancel an order
+         * @description A draft, or a sent order nothing has arrived for. The optional reason is kept in its history.
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        post: operations["cancelPurchaseOrder"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/purchase-orders/{orderId}/close": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Close an order short
+         * @description A sent or partly received order that will not be delivered in full: what is still open no longer counts as on order. The optional reason is kept in its history.
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        post: operations["closePurchaseOrder"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/purchase-orders/{orderId}/receipts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Receive a delivery against an order
+         * @description One entry a spool or lot: the order line it fills, its lot, its location and its quantity, or for wire the spool's gross and tare weights. The unit cost comes from the order line. All entries are booked or none.
+         *
+         *     **Who may call:** Roles: admin, storekeeper.
+         */
+        post: operations["receivePurchaseOrder"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/metal-base": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The copper and aluminium base prices
+         * @description Wire quoted as an adder per kg is priced on the base valid on the day.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["listMetalBase"];
+        /**
+         * Set a conductor's base price from a day
+         * @description The same conductor, currency and day again replaces the price.
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        put: operations["setMetalBase"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/currency-rates": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The exchange rates to the company currency
+         * @description **Who may call:** Any signed-in person.
+         */
+        get: operations["listCurrencyRates"];
+        /**
+         * Set a currency's rate from a day
+         * @description `rate` is units of the company currency per one unit of `currency`; the same currency and day again replaces the rate.
+         *
+         *     **Who may call:** Roles: admin, buyer.
+         */
+        put: operations["setCurrencyRate"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/items/{sku}/prices": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * An item's prices from every supplier
+         * @description For a quantity on a day (today when not given), cheapest first in the company currency, each with its currency, rate, metal base and source line; offers that cannot be priced are listed with the reasons.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["getItemPrices"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/buying-plan": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * What to buy and when
+         * @description Open build orders' needs (by their planned start) against stock, sent purchase orders and reorder points, week by week, with a suggestion per item and week of shortfall.
+         *
+         *     **Who may call:** Any signed-in person.
+         */
+        get: operations["getBuyingPlan"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
     schemas: {
+        /**
+         * @description `reserve`: what the lines still need, oldest lot first. All or nothing unless `partial` is true (then what is free is reserved and the rest listed as shortages). May be left out.
+         * @example {
+         *       "partial": false
+         *     }
+         */
+        BuildOrderReserveRequest: {
+            /** @default false */
+            partial: boolean;
+        };
+        /**
+         * @description `issue`: stock the order holds, from one lot and location, by `quantity` or by weighing the spool back (`grossKg`, the spool's gross weight now): exactly one of the two.
+         * @example {
+         *       "sku": "CU-IEC-0500",
+         *       "lot": "Q-25-11873",
+         *       "location": "WIRE-A1",
+         *       "quantity": 1.84
+         *     }
+         */
+        BuildOrderIssueRequest: {
+            sku: string;
+            lot?: string;
+            location: string;
+            quantity?: number;
+            grossKg?: number;
+            note?: string;
+        };
+        /**
+         * @description `cancel` and `complete`: an optional note for the order's history. May be left out.
+         * @example {
+         *       "note": "All six passed the hi-pot and back-EMF checks."
+         *     }
+         */
+        BuildOrderCloseRequest: {
+            note?: string;
+        };
+        PriceListUploadForm: {
+            /**
+             * Format: binary
+             * @description The price list: a CSV file (UTF-8, UTF-16 or Windows-1252; comma, semicolon or tab separated) or an .xlsx workbook, told apart by its content. At most 20 MB.
+             */
+            file: string;
+            /** @description For a workbook: the sheet to read, by name. Default: its first visible sheet. */
+            sheet?: string;
+            /**
+             * @description The supplier's name, as stored. Needed except with ?layout=1.
+             * @example Quillan Drawn Wire GmbH
+             */
+            supplier?: string;
+            /**
+             * @description JSON object: our field → the file's column header. Fields: supplierSku, itemSku, description, kind, standard, size, grade, insulation, thermalClass, unit, price, adderPerKg, currency, minQuantity, validFrom, leadTimeDays, packQuantity. supplierSku and itemSku may name the same header. Needed except with ?layout=1.
+             * @example {"supplierSku":"Artikel-Nr.","description":"Bezeichnung","standard":"Norm","size":"Nenn-Ø mm","adderPerKg":"Zuschlag je kg","minQuantity":"ab Menge kg","validFrom":"gültig ab"}
+             */
+            mapping?: string;
+        };
+        /**
+         * @description Who is signed in, with their roles.
+         * @example {
+         *       "user": {
+         *         "email": "storekeeper@turnledger.test",
+         *         "name": "Piet Varga",
+         *         "roles": [
+         *           "storekeeper"
+         *         ]
+         *       }
+         *     }
+         */
+        SignedInPerson: {
+            user: {
+                email: string;
+                name: string;
+                /** @description The person's roles; an admin may do everything. */
+                roles: ("admin" | "buyer" | "builder" | "storekeeper" | "manager")[];
+            };
+        };
+        /**
+         * @description An e-mail the app wrote, with its attachments' names and sizes (never their bytes).
+         * @example {
+         *       "to": "buyer@turnledger.test",
+         *       "subject": "Low stock: MG-N42SH-B20105",
+         *       "text": "NdFeB block N42SH 20 × 10 × 5 mm is down to 380 pcs available (reorder point 400 pcs).",
+         *       "sentAt": "2026-11-28T07:45:12.000Z",
+         *       "attachments": []
+         *     }
+         */
+        OutboxMessage: {
+            to: string;
+            subject: string;
+            /** @description The plain-text body; a one-time link (invitation, password reset) is never shown, a note stands in its place. */
+            text: string;
+            /** @description When it was sent (ISO 8601, UTC); null while unsent. */
+            sentAt: string | null;
+            attachments: {
+                fileName: string;
+                contentType: string;
+                byteSize: number;
+            }[];
+        };
         /** @description A page of items. */
         ItemPage: {
             items: components["schemas"]["ItemSummary"][];
@@ -314,6 +1304,433 @@ export interface components {
                 reserved: number;
                 /** @description Set while the lot is on quality hold. */
                 holdReason: string | null;
+            }[];
+        };
+        /**
+         * @description A store or bin.
+         * @example {
+         *       "code": "WIRE-A2",
+         *       "name": "Wire rack A, shelf 2 (medium gauges)"
+         *     }
+         */
+        Location: {
+            /** @description The short code on labels. */
+            code: string;
+            name: string;
+        };
+        /** @description What a scanned label stands for: a lot or a location. */
+        ScanLookup: components["schemas"]["ScannedLot"] | components["schemas"]["ScannedLocation"];
+        /**
+         * @example {
+         *       "kind": "lot",
+         *       "code": "L123",
+         *       "lotId": 123,
+         *       "sku": "CU-IEC-0500",
+         *       "name": "Enamelled copper 0.500 mm",
+         *       "lot": "S24143",
+         *       "unit": "kg",
+         *       "onHand": 4.62,
+         *       "location": "WIRE-A2",
+         *       "locations": [
+         *         "WIRE-A2"
+         *       ]
+         *     }
+         */
+        ScannedLot: {
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "lot";
+            /** @description The bare code, `L` and the lot's id. */
+            code: string;
+            lotId: number;
+            sku: string;
+            /** @description The item's name. */
+            name: string;
+            /** @description The lot's number. */
+            lot: string;
+            unit: string;
+            /** @description Net on hand of the lot, all locations together, in the item's unit. */
+            onHand: number;
+            /** @description The one location the lot has stock at; null when none or several. */
+            location: string | null;
+            /** @description Every location the lot has stock at. */
+            locations: string[];
+        };
+        /**
+         * @example {
+         *       "kind": "location",
+         *       "code": "WIRE-A2",
+         *       "name": "Wire rack A, shelf 2 (medium gauges)"
+         *     }
+         */
+        ScannedLocation: {
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "location";
+            code: string;
+            name: string;
+        };
+        /** @description A page of the movement journal, newest first. */
+        MovementJournalPage: {
+            movements: components["schemas"]["JournalMovement"][];
+            page: number;
+            pageSize: number;
+            /** @description Whether a next page has rows (the journal is not counted: a total would cost more than the page). */
+            hasMore: boolean;
+        };
+        /**
+         * @description One row of the movement journal.
+         * @example {
+         *       "id": 5120,
+         *       "type": "issue",
+         *       "sku": "CU-IEC-0500",
+         *       "itemName": "Enamelled copper 0.500 mm",
+         *       "unit": "kg",
+         *       "lotId": 123,
+         *       "lot": "S24143",
+         *       "location": "WIRE-A2",
+         *       "quantity": -0.42,
+         *       "unitCost": null,
+         *       "countedQuantity": null,
+         *       "grossKg": null,
+         *       "itemOnHandAfter": 4.2,
+         *       "transferId": null,
+         *       "reference": null,
+         *       "note": null,
+         *       "user": "Piet Varga",
+         *       "createdAt": "2026-11-24T09:12:44.120Z",
+         *       "purchaseOrderId": null,
+         *       "purchaseOrder": null
+         *     }
+         */
+        JournalMovement: {
+            id: number;
+            /** @enum {string} */
+            type: "receipt" | "issue" | "return" | "transfer" | "adjustment" | "count" | "scrap";
+            sku: string;
+            itemName: string;
+            unit: string;
+            /** @description The lot's id; 0 when the item is not kept in lots. */
+            lotId: number;
+            /** @description The lot's number. */
+            lot: string | null;
+            /** @description The location's code. */
+            location: string;
+            /** @description Signed: + into the location, − out of it, in the item's unit. */
+            quantity: number;
+            /** @description EUR per unit, for receipts. */
+            unitCost: number | null;
+            /** @description For a count: what was found; `quantity` is the difference. */
+            countedQuantity: number | null;
+            /** @description A weighed spool's gross mass, kg. */
+            grossKg: number | null;
+            /** @description The item's stock on hand after this movement, in the item's unit. */
+            itemOnHandAfter: number;
+            /** @description Both rows of one transfer carry the same id. */
+            transferId: number | null;
+            reference: string | null;
+            note: string | null;
+            /** @description Who recorded it (their name). */
+            user: string;
+            /**
+             * Format: date-time
+             * @description When it was recorded (ISO 8601, UTC).
+             */
+            createdAt: string;
+            /** @description The purchase order a receipt was booked against. */
+            purchaseOrderId: number | null;
+            /** @description That order's number; null for every other movement. */
+            purchaseOrder: string | null;
+        };
+        /**
+         * @description The movement as recorded and the item's balance after it.
+         * @example {
+         *       "movement": {
+         *         "id": 5121,
+         *         "type": "receipt",
+         *         "sku": "CU-IEC-0500",
+         *         "lot": "S24188",
+         *         "location": "WIRE-A2",
+         *         "toLocation": null,
+         *         "quantity": 5,
+         *         "unit": "kg",
+         *         "createdAt": "2026-12-01T10:02:13.511Z"
+         *       },
+         *       "balance": {
+         *         "onHand": 9.2,
+         *         "reserved": 0.8,
+         *         "available": 8.4
+         *       }
+         *     }
+         */
+        RecordedMovement: {
+            movement: {
+                id: number;
+                /** @enum {string} */
+                type: "receipt" | "issue" | "return" | "transfer" | "adjustment" | "count" | "scrap";
+                sku: string;
+                lot: string | null;
+                location: string;
+                /** @description For a transfer: where the stock went. */
+                toLocation: string | null;
+                /** @description Signed change at `location`, in the item's unit. */
+                quantity: number;
+                unit: string;
+                /**
+                 * Format: date-time
+                 * @description When it was recorded (ISO 8601, UTC).
+                 */
+                createdAt: string;
+            };
+            /** @description The item's totals after the movement, in its unit. */
+            balance: {
+                onHand: number;
+                reserved: number;
+                available: number;
+            };
+            /** @description Only for an issue with `buildOrderId`: the order and its line for the item after the issue. */
+            buildOrder?: {
+                id: number;
+                /** @example BO-12 */
+                reference: string;
+                /** @enum {string} */
+                status: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+                line: {
+                    sku: string;
+                    required: number;
+                    reserved: number;
+                    issued: number;
+                    unit: string;
+                };
+            };
+        };
+        /**
+         * @description A lot's quality hold: while held, it cannot be issued or transferred.
+         * @example {
+         *       "id": 123,
+         *       "number": "S24143",
+         *       "sku": "CU-IEC-0500",
+         *       "held": true,
+         *       "holdReason": "Enamel cracks on the outer turns; waiting for the supplier's report.",
+         *       "heldAt": "2026-12-02T14:30:00.000Z",
+         *       "heldBy": "Piet Varga"
+         *     }
+         */
+        LotHold: {
+            id: number;
+            number: string;
+            sku: string;
+            held: boolean;
+            holdReason: string | null;
+            heldAt: string | null;
+            /** @description The name of who put it on hold. */
+            heldBy: string | null;
+        };
+        /**
+         * @description Every build order that drew from the lot, issues net of the returns that name it, in the item's unit.
+         * @example {
+         *       "lot": {
+         *         "id": 123,
+         *         "number": "S24143",
+         *         "sku": "CU-IEC-0500",
+         *         "supplier": {
+         *           "id": 1,
+         *           "name": "Quillan Drawn Wire GmbH"
+         *         },
+         *         "supplierBatch": null
+         *       },
+         *       "uses": [
+         *         {
+         *           "buildOrderId": 12,
+         *           "reference": "BO-12",
+         *           "design": "Kestrel 60-30 outrunner",
+         *           "revision": 2,
+         *           "motorQuantity": 10,
+         *           "issued": 1.8,
+         *           "returned": 0.2,
+         *           "net": 1.6,
+         *           "unit": "kg",
+         *           "firstIssuedAt": "2026-11-20T08:15:00.000Z",
+         *           "lastMovementAt": "2026-11-21T16:40:00.000Z"
+         *         }
+         *       ],
+         *       "otherIssues": {
+         *         "count": 0,
+         *         "quantity": 0
+         *       }
+         *     }
+         */
+        LotWhereUsed: {
+            lot: components["schemas"]["LotReference"];
+            uses: {
+                buildOrderId: number;
+                reference: string;
+                design: string;
+                revision: number;
+                /** @description Motors the order builds. */
+                motorQuantity: number;
+                issued: number;
+                returned: number;
+                net: number;
+                unit: string;
+                firstIssuedAt: string | null;
+                /**
+                 * Format: date-time
+                 * @description The last issue or return (ISO 8601, UTC).
+                 */
+                lastMovementAt: string;
+            }[];
+            /** @description Issues of the lot made to no build order. */
+            otherIssues: {
+                count: number;
+                quantity: number;
+            };
+        };
+        /**
+         * @description A lot: its number, its item and its origin.
+         * @example {
+         *       "id": 123,
+         *       "number": "S24143",
+         *       "sku": "CU-IEC-0500",
+         *       "supplier": {
+         *         "id": 1,
+         *         "name": "Quillan Drawn Wire GmbH"
+         *       },
+         *       "supplierBatch": null
+         *     }
+         */
+        LotReference: {
+            id: number;
+            number: string;
+            sku: string;
+            /** @description Where the lot came from, when known. */
+            supplier: {
+                id: number;
+                name: string;
+            } | null;
+            supplierBatch: string | null;
+        };
+        /**
+         * @description A lot's certificates, newest first.
+         * @example {
+         *       "lot": {
+         *         "id": 123,
+         *         "number": "S24143",
+         *         "sku": "CU-IEC-0500",
+         *         "supplier": {
+         *           "id": 1,
+         *           "name": "Quillan Drawn Wire GmbH"
+         *         },
+         *         "supplierBatch": null
+         *       },
+         *       "documents": [
+         *         {
+         *           "id": 7,
+         *           "fileName": "S24143-test-certificate.pdf",
+         *           "title": "Mill test certificate",
+         *           "contentType": "application/pdf",
+         *           "sizeBytes": 48213,
+         *           "sha256": "9f2c6a1d0e3b4c5d6e7f8091a2b3c4d5e6f708192a3b4c5d6e7f8091a2b3c4d5",
+         *           "addedBy": "Piet Varga",
+         *           "addedAt": "2026-11-18T11:05:00.000Z",
+         *           "url": "/stock/lots/123/documents/7"
+         *         }
+         *       ]
+         *     }
+         */
+        LotDocuments: {
+            lot: components["schemas"]["LotReference"];
+            documents: {
+                id: number;
+                fileName: string;
+                /** @description Empty when none was given. */
+                title: string;
+                contentType: string;
+                sizeBytes: number;
+                /** @description The file's SHA-256, hex. */
+                sha256: string;
+                /** @description Who added it (their name). */
+                addedBy: string;
+                /**
+                 * Format: date-time
+                 * @description When it was added (ISO 8601, UTC).
+                 */
+                addedAt: string;
+                /** @description Where to download the file (signed in). */
+                url: string;
+            }[];
+        };
+        /**
+         * @description A low-stock alert: an item whose available stock fell to its reorder point.
+         * @example {
+         *       "id": 31,
+         *       "sku": "MG-N42SH-B20105",
+         *       "name": "NdFeB block N42SH 20 × 10 × 5 mm",
+         *       "unit": "pcs",
+         *       "status": "open",
+         *       "availableNow": 340,
+         *       "availableAtOpen": 380,
+         *       "reorderPoint": 400,
+         *       "reorderQuantity": 2000,
+         *       "openedAt": "2026-11-28T07:45:10.000Z",
+         *       "closedAt": null,
+         *       "availableAtClose": null,
+         *       "coveredBy": null,
+         *       "told": [
+         *         {
+         *           "kind": "alert",
+         *           "name": "Tobias Reyne",
+         *           "email": "buyer@turnledger.test",
+         *           "at": "2026-11-28T07:45:11.000Z"
+         *         }
+         *       ]
+         *     }
+         */
+        StockAlert: {
+            id: number;
+            sku: string;
+            name: string;
+            unit: string;
+            /** @enum {string} */
+            status: "open" | "closed";
+            /** @description Available now (on hand − reserved − held), in the item's unit. */
+            availableNow: number;
+            /** @description Available when the alert opened, in the item's unit. */
+            availableAtOpen: number;
+            reorderPoint: number;
+            reorderQuantity: number;
+            /**
+             * Format: date-time
+             * @description When the alert opened (ISO 8601, UTC).
+             */
+            openedAt: string;
+            closedAt: string | null;
+            availableAtClose: number | null;
+            /** @description A sent purchase order that covers the shortfall. */
+            coveredBy: {
+                orderId: number;
+                /** @description The purchase order's number. */
+                order: string;
+                /** @description When it is due (YYYY-MM-DD). */
+                due: string | null;
+                /** @description The same in words, as the pages show it. */
+                text: string;
+            } | null;
+            /** @description Who was told, by an alert e-mail or the daily digest. */
+            told: {
+                /** @enum {string} */
+                kind: "alert" | "digest";
+                name: string;
+                email: string;
+                /**
+                 * Format: date-time
+                 * @description When they were told (ISO 8601, UTC).
+                 */
+                at: string;
             }[];
         };
         /**
@@ -742,6 +2159,2980 @@ export interface components {
             builtIn: boolean;
         };
         /**
+         * @description Designs by name.
+         * @example [
+         *       {
+         *         "id": 1,
+         *         "name": "Kestrel 60-30 outrunner",
+         *         "motorType": "Outrunner, 12 slots / 14 poles",
+         *         "revisions": [
+         *           {
+         *             "revision": 2,
+         *             "status": "draft",
+         *             "ratedTorqueNm": 1.32,
+         *             "torqueBasis": "estimated"
+         *           },
+         *           {
+         *             "revision": 1,
+         *             "status": "released",
+         *             "ratedTorqueNm": 1.25,
+         *             "torqueBasis": "measured"
+         *           }
+         *         ]
+         *       }
+         *     ]
+         */
+        DesignList: components["schemas"]["DesignSummary"][];
+        /**
+         * @description A design with its revisions, as the list gives it.
+         * @example {
+         *       "id": 1,
+         *       "name": "Kestrel 60-30 outrunner",
+         *       "motorType": "Outrunner, 12 slots / 14 poles",
+         *       "revisions": [
+         *         {
+         *           "revision": 2,
+         *           "status": "draft",
+         *           "ratedTorqueNm": 1.32,
+         *           "torqueBasis": "estimated"
+         *         },
+         *         {
+         *           "revision": 1,
+         *           "status": "released",
+         *           "ratedTorqueNm": 1.25,
+         *           "torqueBasis": "measured"
+         *         }
+         *       ]
+         *     }
+         */
+        DesignSummary: {
+            /** @description The design's number. */
+            id: number;
+            name: string;
+            motorType: string;
+            /** @description Newest first. */
+            revisions: {
+                revision: number;
+                /**
+                 * @description A draft is changed freely; a released revision is locked for good and can be built.
+                 * @enum {string}
+                 */
+                status: "draft" | "released";
+                ratedTorqueNm: number | null;
+                /**
+                 * @description Whether the rated torque was measured or estimated.
+                 * @enum {string}
+                 */
+                torqueBasis: "measured" | "estimated";
+            }[];
+        };
+        /**
+         * @description The design made, with its first revision as a draft (no lines yet).
+         * @example {
+         *       "id": 4,
+         *       "revision": 1
+         *     }
+         */
+        CreatedDesign: {
+            /** @description The new design's number. */
+            id: number;
+            /**
+             * @description Revision 1, a draft.
+             * @constant
+             */
+            revision: 1;
+        };
+        /**
+         * @description A design with all its revisions.
+         * @example {
+         *       "id": 1,
+         *       "name": "Kestrel 60-30 outrunner",
+         *       "description": "Small external-rotor motor for light traction drives (carts, conveyors): 14 N42SH blocks bonded in a steel bell, concentrated tooth coils wound two in hand.",
+         *       "motorType": "Outrunner, 12 slots / 14 poles",
+         *       "revisions": [
+         *         {
+         *           "revision": 2,
+         *           "status": "draft",
+         *           "ratedTorqueNm": 1.32,
+         *           "torqueBasis": "estimated",
+         *           "releasedAt": null
+         *         },
+         *         {
+         *           "revision": 1,
+         *           "status": "released",
+         *           "ratedTorqueNm": 1.25,
+         *           "torqueBasis": "measured",
+         *           "releasedAt": "2026-12-03T23:04:50.995Z"
+         *         }
+         *       ]
+         *     }
+         */
+        Design: {
+            id: number;
+            name: string;
+            description: string;
+            motorType: string;
+            /** @description Newest first. */
+            revisions: {
+                revision: number;
+                /**
+                 * @description A draft is changed freely; a released revision is locked for good and can be built.
+                 * @enum {string}
+                 */
+                status: "draft" | "released";
+                ratedTorqueNm: number | null;
+                /**
+                 * @description Whether the rated torque was measured or estimated.
+                 * @enum {string}
+                 */
+                torqueBasis: "measured" | "estimated";
+                releasedAt: string | null;
+            }[];
+        };
+        /**
+         * @description The number of the new draft revision.
+         * @example {
+         *       "revision": 3
+         *     }
+         */
+        StartedRevision: {
+            revision: number;
+        };
+        /**
+         * @description A revision's fields and its lines (the BOM of one motor).
+         * @example {
+         *       "designId": 1,
+         *       "name": "Kestrel 60-30 outrunner",
+         *       "description": "Small external-rotor motor for light traction drives (carts, conveyors): 14 N42SH blocks bonded in a steel bell, concentrated tooth coils wound two in hand.",
+         *       "motorType": "Outrunner, 12 slots / 14 poles",
+         *       "revision": 1,
+         *       "status": "released",
+         *       "poles": 14,
+         *       "slots": 12,
+         *       "ratedCurrentA": 6,
+         *       "ratedTorqueNm": 1.25,
+         *       "torqueBasis": "measured",
+         *       "insulationClassC": 155,
+         *       "slotAreaMm2": 38,
+         *       "slotLinerAreaMm2": null,
+         *       "coilSidesPerSlot": 2,
+         *       "phases": 3,
+         *       "windingLayers": 2,
+         *       "phaseConnection": "star",
+         *       "parallelPaths": 1,
+         *       "ratedSpeedRpm": 1500,
+         *       "airGapRadiusMm": 30.4,
+         *       "airGapFluxDensityT": 0.82,
+         *       "poleCoverage": 0.83,
+         *       "notes": "Rated torque from the dynamometer run on prototype P3 at 6 A RMS per phase (sinusoidal drive), winding at 120 °C.",
+         *       "releasedAt": "2026-12-03T23:04:50.995Z",
+         *       "lines": [
+         *         {
+         *           "kind": "coil",
+         *           "sku": "CU-IEC-0500",
+         *           "itemName": "Enamelled copper 0.500 mm",
+         *           "turns": 18,
+         *           "strandsInHand": 2,
+         *           "activeLengthMm": 31,
+         *           "endTurnLengthMm": 11,
+         *           "leadLengthMm": 80,
+         *           "coilsPerMotor": 12,
+         *           "scrapPercent": 3,
+         *           "operatingTemperatureC": 120
+         *         },
+         *         {
+         *           "kind": "magnet",
+         *           "sku": "MG-N42SH-B30124",
+         *           "itemName": "NdFeB block N42SH 30 × 12 × 4 mm",
+         *           "piecesPerMotor": 14,
+         *           "operatingTemperatureC": 100
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-LAM-12S60",
+         *           "itemName": "Stator lamination stack 12 slots, Ø60 × 30 mm",
+         *           "unit": "pcs",
+         *           "quantityPerMotor": 1
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-BRG-6001",
+         *           "itemName": "Deep-groove ball bearing 6001-2RS",
+         *           "unit": "pcs",
+         *           "quantityPerMotor": 2
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-SHAFT-8",
+         *           "itemName": "Rotor shaft Ø8 × 95 mm",
+         *           "unit": "pcs",
+         *           "quantityPerMotor": 1
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-SLV-PTFE",
+         *           "itemName": "PTFE sleeving 1.5 mm",
+         *           "unit": "m",
+         *           "quantityPerMotor": 0.3
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-VARNISH",
+         *           "itemName": "Impregnating varnish, class 180",
+         *           "unit": "kg",
+         *           "quantityPerMotor": 0.04
+         *         }
+         *       ]
+         *     }
+         */
+        DesignRevision: {
+            designId: number;
+            name: string;
+            description: string;
+            motorType: string;
+            revision: number;
+            /**
+             * @description A draft is changed freely; a released revision is locked for good and can be built.
+             * @enum {string}
+             */
+            status: "draft" | "released";
+            poles: number;
+            slots: number;
+            /** @description RMS phase current of a sinusoidal drive, A. */
+            ratedCurrentA: number;
+            ratedTorqueNm: number | null;
+            /**
+             * @description Whether the rated torque was measured or estimated.
+             * @enum {string}
+             */
+            torqueBasis: "measured" | "estimated";
+            insulationClassC: number;
+            slotAreaMm2: number | null;
+            slotLinerAreaMm2: number | null;
+            coilSidesPerSlot: number;
+            phases: number;
+            windingLayers: number;
+            /** @enum {string} */
+            phaseConnection: "star" | "delta";
+            parallelPaths: number;
+            ratedSpeedRpm: number | null;
+            airGapRadiusMm: number | null;
+            airGapFluxDensityT: number | null;
+            poleCoverage: number | null;
+            notes: string;
+            releasedAt: string | null;
+            /** @description In their order. */
+            lines: (components["schemas"]["CoilLine"] | components["schemas"]["MagnetLine"] | components["schemas"]["PartLine"])[];
+        };
+        /** @description Coils wound from a magnet wire item. */
+        CoilLine: {
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "coil";
+            sku: string;
+            /** @description The catalogue item's name. */
+            itemName: string;
+            turns: number;
+            strandsInHand: number;
+            activeLengthMm: number;
+            endTurnLengthMm: number;
+            leadLengthMm: number;
+            coilsPerMotor: number;
+            scrapPercent: number;
+            operatingTemperatureC: number;
+        };
+        /** @description Magnet pieces per motor. */
+        MagnetLine: {
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "magnet";
+            sku: string;
+            /** @description The catalogue item's name. */
+            itemName: string;
+            piecesPerMotor: number;
+            operatingTemperatureC: number | null;
+        };
+        /** @description Any other part, in its unit. */
+        PartLine: {
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "part";
+            sku: string;
+            /** @description The catalogue item's name. */
+            itemName: string;
+            unit: string;
+            quantityPerMotor: number;
+        };
+        /**
+         * @example {
+         *       "revision": 2,
+         *       "status": "released"
+         *     }
+         */
+        ReleasedRevision: {
+            revision: number;
+            /** @constant */
+            status: "released";
+        };
+        /**
+         * @description The costing of a revision for a number of motors, with its coil figures, the torque estimate and the design's checks.
+         * @example {
+         *       "quantity": 50,
+         *       "currency": "EUR",
+         *       "costPerMotor": 38.6858,
+         *       "ratedTorqueNm": 1.25,
+         *       "perNmTorque": {
+         *         "torqueNm": 1.25,
+         *         "source": "rated"
+         *       },
+         *       "costPerNm": 30.9486,
+         *       "split": {
+         *         "activeCopper": 0.7023,
+         *         "endTurnCopper": 0.2492,
+         *         "leadsAndScrap": 0.1323,
+         *         "magnets": 18.9,
+         *         "parts": 18.702
+         *       },
+         *       "lines": [
+         *         {
+         *           "kind": "coil",
+         *           "sku": "CU-IEC-0500",
+         *           "perMotorQuantity": 0.0721467,
+         *           "unit": "kg",
+         *           "unitPrice": 15.0215,
+         *           "priceSource": "moving average cost of stock",
+         *           "cost": 1.0838,
+         *           "massBasis": "bare"
+         *         },
+         *         {
+         *           "kind": "magnet",
+         *           "sku": "MG-N42SH-B30124",
+         *           "perMotorQuantity": 14,
+         *           "unit": "pcs",
+         *           "unitPrice": 1.35,
+         *           "priceSource": "moving average cost of stock",
+         *           "cost": 18.9,
+         *           "massBasis": null
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-LAM-12S60",
+         *           "perMotorQuantity": 1,
+         *           "unit": "pcs",
+         *           "unitPrice": 11.5,
+         *           "priceSource": "moving average cost of stock",
+         *           "cost": 11.5,
+         *           "massBasis": null
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-BRG-6001",
+         *           "perMotorQuantity": 2,
+         *           "unit": "pcs",
+         *           "unitPrice": 1.6,
+         *           "priceSource": "moving average cost of stock",
+         *           "cost": 3.2,
+         *           "massBasis": null
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-SHAFT-8",
+         *           "perMotorQuantity": 1,
+         *           "unit": "pcs",
+         *           "unitPrice": 3.2,
+         *           "priceSource": "moving average cost of stock",
+         *           "cost": 3.2,
+         *           "massBasis": null
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-SLV-PTFE",
+         *           "perMotorQuantity": 0.3,
+         *           "unit": "m",
+         *           "unitPrice": 0.42,
+         *           "priceSource": "moving average cost of stock",
+         *           "cost": 0.126,
+         *           "massBasis": null
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "sku": "PT-VARNISH",
+         *           "perMotorQuantity": 0.04,
+         *           "unit": "kg",
+         *           "unitPrice": 16.9,
+         *           "priceSource": "moving average cost of stock",
+         *           "cost": 0.676,
+         *           "massBasis": null
+         *         }
+         *       ],
+         *       "complete": true,
+         *       "unpriced": [],
+         *       "basis": "stock-average",
+         *       "torqueBasis": "measured",
+         *       "copperLossW": 44.17568139502411,
+         *       "copperLossPerNm": 35.340545116019285,
+         *       "torqueEstimate": {
+         *         "basis": "first-order",
+         *         "label": "First-order estimate: T = Kt · I with I the RMS phase current of a sinusoidal drive, Kt from the winding factor and the fundamental of the air-gap field. Not a measured torque.",
+         *         "currentBasis": "Currents are RMS phase currents of a sinusoidal drive; Kt and Ke from the fundamental of the air-gap field (first-order estimate).",
+         *         "torqueNm": 1.6229116939565968,
+         *         "fluxDensityT": 0.82,
+         *         "fundamentalFluxDensityT": 1.0070523716454671,
+         *         "windingFactor": 0.933012701892219,
+         *         "constants": {
+         *           "coilsPerPhase": 4,
+         *           "seriesTurnsPerPhase": 72,
+         *           "ktNmPerA": 0.2704852823260995,
+         *           "ktLineNmPerA": 0.2704852823260995,
+         *           "kePhaseRmsVsPerRad": 0.09016176077536649,
+         *           "keLineToLineRmsVsPerRad": 0.15616475056280543,
+         *           "keLineToLinePeakVsPerRad": 0.2208503082105309
+         *         },
+         *         "forceLengthM": 13.392,
+         *         "poleCoverage": 0.83,
+         *         "poleCoverageSource": "given"
+         *       },
+         *       "winding": {
+         *         "currentBasis": "Currents are RMS phase currents of a sinusoidal drive; Kt and Ke from the fundamental of the air-gap field (first-order estimate).",
+         *         "winding": {
+         *           "slots": 12,
+         *           "poles": 14,
+         *           "layers": 2,
+         *           "phases": 3,
+         *           "connection": "star",
+         *           "parallelPaths": 1
+         *         },
+         *         "windingFactor": {
+         *           "value": {
+         *             "fundamental": 0.933012701892219,
+         *             "coilPitch": 1,
+         *             "kind": "concentrated",
+         *             "harmonics": [
+         *               {
+         *                 "order": 1,
+         *                 "factor": 0.933012701892219
+         *               },
+         *               {
+         *                 "order": 5,
+         *                 "factor": 0.06698729810778171
+         *               },
+         *               {
+         *                 "order": 7,
+         *                 "factor": 0.06698729810778035
+         *               },
+         *               {
+         *                 "order": 11,
+         *                 "factor": 0.9330127018922237
+         *               },
+         *               {
+         *                 "order": 13,
+         *                 "factor": 0.9330127018922212
+         *               },
+         *               {
+         *                 "order": 17,
+         *                 "factor": 0.06698729810778464
+         *               },
+         *               {
+         *                 "order": 19,
+         *                 "factor": 0.06698729810778678
+         *               }
+         *             ]
+         *           }
+         *         },
+         *         "coilCountNote": null,
+         *         "constants": {
+         *           "value": {
+         *             "coilsPerPhase": 4,
+         *             "seriesTurnsPerPhase": 72,
+         *             "ktNmPerA": 0.2704852823260995,
+         *             "ktLineNmPerA": 0.2704852823260995,
+         *             "kePhaseRmsVsPerRad": 0.09016176077536649,
+         *             "keLineToLineRmsVsPerRad": 0.15616475056280543,
+         *             "keLineToLinePeakVsPerRad": 0.2208503082105309
+         *           }
+         *         },
+         *         "resistance": {
+         *           "value": {
+         *             "lineToLine20Ohm": 0.587270763806122,
+         *             "lineToLineHotOhm": 0.8180681739819279,
+         *             "phase20Ohm": 0.293635381903061,
+         *             "phaseHotOhm": 0.40903408699096394,
+         *             "operatingTemperaturesC": [
+         *               120
+         *             ]
+         *           }
+         *         },
+         *         "electricalFrequency": {
+         *           "value": 175
+         *         }
+         *       },
+         *       "coils": [
+         *         {
+         *           "line": 1,
+         *           "sku": "CU-IEC-0500",
+         *           "copperLengthM": 40.128,
+         *           "drawnMassKg": 0.07214668659942315,
+         *           "massBasis": "bare",
+         *           "resistance20PerCoilOhm": 0.07340884547576525,
+         *           "resistancePerCoilOhm": 0.10225852174774099,
+         *           "operatingTemperatureC": 120,
+         *           "activeShare": 0.7380952380952381,
+         *           "copperLossW": 44.17568139502411,
+         *           "forceLengthM": 13.392000000000001,
+         *           "currentDensityAPerMm2": 15.278874536821952,
+         *           "skinDepthMm": 5.89607051272947,
+         *           "acResistanceRatio": 1.0000022271324729,
+         *           "copperFill": 0.37203070897773866,
+         *           "grossFill": 0.4767290792210897
+         *         }
+         *       ],
+         *       "warnings": [
+         *         {
+         *           "code": "current-density-above-fan-cooling",
+         *           "line": 1,
+         *           "sku": "CU-IEC-0500",
+         *           "message": "Coil line 1 (CU-IEC-0500) carries 15.3 A/mm² at 6 A per coil in 2 strands at the rated point: above what even fan cooling carries. Use thicker wire or more strands in hand, or plan liquid cooling or short duty. Common practice (from memory): up to about 5–6 A/mm² enclosed with natural cooling, about 10 A/mm² fan-cooled, more only with liquid cooling or short duty."
+         *         }
+         *       ],
+         *       "itemsNeeded": [
+         *         {
+         *           "sku": "CU-IEC-0500",
+         *           "quantity": 3.608
+         *         },
+         *         {
+         *           "sku": "MG-N42SH-B30124",
+         *           "quantity": 700
+         *         },
+         *         {
+         *           "sku": "PT-LAM-12S60",
+         *           "quantity": 50
+         *         },
+         *         {
+         *           "sku": "PT-BRG-6001",
+         *           "quantity": 100
+         *         },
+         *         {
+         *           "sku": "PT-SHAFT-8",
+         *           "quantity": 50
+         *         },
+         *         {
+         *           "sku": "PT-SLV-PTFE",
+         *           "quantity": 15
+         *         },
+         *         {
+         *           "sku": "PT-VARNISH",
+         *           "quantity": 2
+         *         }
+         *       ]
+         *     }
+         */
+        DesignCosting: {
+            quantity: number;
+            currency: string;
+            /** @description Σ of the priced lines' costs for one motor, company currency. */
+            costPerMotor: number;
+            ratedTorqueNm: number | null;
+            /** @description The torque figures per N·m are taken over; null when there is neither. */
+            perNmTorque: {
+                torqueNm: number;
+                /**
+                 * @description `rated`: the revision's rated torque; `estimated`: the first-order estimate, used when no rated torque is given.
+                 * @enum {string}
+                 */
+                source: "rated" | "estimated";
+            } | null;
+            /** @description Cost per motor ÷ the torque; null without one, company currency. */
+            costPerNm: number | null;
+            split: components["schemas"]["CostSplit"];
+            lines: {
+                /** @enum {string} */
+                kind: "coil" | "magnet" | "part";
+                sku: string;
+                /** @description Per motor in `unit`: wire kg drawn from stock (scrap included), magnet pieces, parts as given. */
+                perMotorQuantity: number;
+                unit: string;
+                /** @description Price per unit; null when the item has no price, company currency. */
+                unitPrice: number | null;
+                priceSource: string | null;
+                /** @description Cost per motor; null when unpriced, company currency. */
+                cost: number | null;
+                massBasis: ("enamelled" | "bare") | null;
+            }[];
+            /** @description False when a line has no price. */
+            complete: boolean;
+            unpriced: {
+                /** @enum {string} */
+                kind: "coil" | "magnet" | "part";
+                sku: string;
+            }[];
+            /**
+             * @description The prices used: `best-price` (best current supplier price for the quantity) or `stock-average` (moving average cost of stock).
+             * @enum {string}
+             */
+            basis: "best-price" | "stock-average";
+            /**
+             * @description Whether the rated torque was measured or estimated.
+             * @enum {string}
+             */
+            torqueBasis: "measured" | "estimated";
+            copperLossW: number;
+            copperLossPerNm: number | null;
+            torqueEstimate: components["schemas"]["TorqueEstimate"];
+            winding: components["schemas"]["WindingFigures"];
+            coils: {
+                /** @description The line's position, from 1. */
+                line: number;
+                sku: string;
+                copperLengthM: number;
+                drawnMassKg: number;
+                /**
+                 * @description Whether the wire's kg are of enamelled wire, or of bare conductor only (a lower bound, when the wire's linear mass is not known).
+                 * @enum {string}
+                 */
+                massBasis: "enamelled" | "bare";
+                resistance20PerCoilOhm: number;
+                resistancePerCoilOhm: number;
+                operatingTemperatureC: number;
+                activeShare: number;
+                copperLossW: number | null;
+                forceLengthM: number;
+                currentDensityAPerMm2: number | null;
+                skinDepthMm: number | null;
+                acResistanceRatio: number | null;
+                copperFill: number | null;
+                grossFill: number | null;
+            }[];
+            warnings: {
+                /** @enum {string} */
+                code: "wire-class-below-insulation-class" | "above-random-round-wire-practice" | "above-square-packing-limit" | "above-hexagonal-packing-limit" | "magnet-above-max-working-temperature" | "current-density-above-natural-cooling" | "current-density-above-fan-cooling";
+                line: number;
+                sku: string;
+                message: string;
+            }[];
+            /** @description Stock needed for the whole quantity, per item, in its unit (rounded up to 0.001). */
+            itemsNeeded: {
+                sku: string;
+                quantity: number;
+            }[];
+        };
+        /**
+         * @description Where the cost of one motor goes; the five add up exactly to the whole.
+         * @example {
+         *       "activeCopper": 0.7023,
+         *       "endTurnCopper": 0.2492,
+         *       "leadsAndScrap": 0.1323,
+         *       "magnets": 18.9,
+         *       "parts": 18.702
+         *     }
+         */
+        CostSplit: {
+            /** @description Wire in the slots, company currency. */
+            activeCopper: number;
+            /** @description Wire in the end turns, company currency. */
+            endTurnCopper: number;
+            /** @description Wire in the leads and the scrap allowance, company currency. */
+            leadsAndScrap: number;
+            /** @description Magnets, company currency. */
+            magnets: number;
+            /** @description Other parts, company currency. */
+            parts: number;
+        };
+        /**
+         * @description The first-order torque estimate (never a measured torque), or why there is none.
+         * @example {
+         *       "basis": "first-order",
+         *       "label": "First-order estimate: T = Kt · I with I the RMS phase current of a sinusoidal drive, Kt from the winding factor and the fundamental of the air-gap field. Not a measured torque.",
+         *       "currentBasis": "Currents are RMS phase currents of a sinusoidal drive; Kt and Ke from the fundamental of the air-gap field (first-order estimate).",
+         *       "torqueNm": 1.6229116939565968,
+         *       "fluxDensityT": 0.82,
+         *       "fundamentalFluxDensityT": 1.0070523716454671,
+         *       "windingFactor": 0.933012701892219,
+         *       "constants": {
+         *         "coilsPerPhase": 4,
+         *         "seriesTurnsPerPhase": 72,
+         *         "ktNmPerA": 0.2704852823260995,
+         *         "ktLineNmPerA": 0.2704852823260995,
+         *         "kePhaseRmsVsPerRad": 0.09016176077536649,
+         *         "keLineToLineRmsVsPerRad": 0.15616475056280543,
+         *         "keLineToLinePeakVsPerRad": 0.2208503082105309
+         *       },
+         *       "forceLengthM": 13.392,
+         *       "poleCoverage": 0.83,
+         *       "poleCoverageSource": "given"
+         *     }
+         */
+        TorqueEstimate: {
+            /** @constant */
+            basis: "first-order";
+            label: string;
+            currentBasis: string;
+            torqueNm: number;
+            fluxDensityT: number;
+            fundamentalFluxDensityT: number;
+            windingFactor: number;
+            constants: components["schemas"]["MotorConstants"];
+            forceLengthM: number;
+            poleCoverage: number;
+            poleCoverageSource: string;
+        } | {
+            label: string;
+            /** @description What is missing, or why the winding refuses it. */
+            missing: string;
+        };
+        /**
+         * @description First-order Kt and Ke of the winding.
+         * @example {
+         *       "coilsPerPhase": 4,
+         *       "seriesTurnsPerPhase": 72,
+         *       "ktNmPerA": 0.2704852823260995,
+         *       "ktLineNmPerA": 0.2704852823260995,
+         *       "kePhaseRmsVsPerRad": 0.09016176077536649,
+         *       "keLineToLineRmsVsPerRad": 0.15616475056280543,
+         *       "keLineToLinePeakVsPerRad": 0.2208503082105309
+         *     }
+         */
+        MotorConstants: {
+            coilsPerPhase: number;
+            seriesTurnsPerPhase: number;
+            /** @description N·m per A of RMS phase current. */
+            ktNmPerA: number;
+            /** @description N·m per A of RMS line current. */
+            ktLineNmPerA: number;
+            kePhaseRmsVsPerRad: number;
+            keLineToLineRmsVsPerRad: number;
+            keLineToLinePeakVsPerRad: number;
+        };
+        /**
+         * @description The winding's figures, each with what is missing instead when it cannot be worked out.
+         * @example {
+         *       "currentBasis": "Currents are RMS phase currents of a sinusoidal drive; Kt and Ke from the fundamental of the air-gap field (first-order estimate).",
+         *       "winding": {
+         *         "slots": 12,
+         *         "poles": 14,
+         *         "layers": 2,
+         *         "phases": 3,
+         *         "connection": "star",
+         *         "parallelPaths": 1
+         *       },
+         *       "windingFactor": {
+         *         "value": {
+         *           "fundamental": 0.933012701892219,
+         *           "coilPitch": 1,
+         *           "kind": "concentrated",
+         *           "harmonics": [
+         *             {
+         *               "order": 1,
+         *               "factor": 0.933012701892219
+         *             },
+         *             {
+         *               "order": 5,
+         *               "factor": 0.06698729810778171
+         *             },
+         *             {
+         *               "order": 7,
+         *               "factor": 0.06698729810778035
+         *             },
+         *             {
+         *               "order": 11,
+         *               "factor": 0.9330127018922237
+         *             },
+         *             {
+         *               "order": 13,
+         *               "factor": 0.9330127018922212
+         *             },
+         *             {
+         *               "order": 17,
+         *               "factor": 0.06698729810778464
+         *             },
+         *             {
+         *               "order": 19,
+         *               "factor": 0.06698729810778678
+         *             }
+         *           ]
+         *         }
+         *       },
+         *       "coilCountNote": null,
+         *       "constants": {
+         *         "value": {
+         *           "coilsPerPhase": 4,
+         *           "seriesTurnsPerPhase": 72,
+         *           "ktNmPerA": 0.2704852823260995,
+         *           "ktLineNmPerA": 0.2704852823260995,
+         *           "kePhaseRmsVsPerRad": 0.09016176077536649,
+         *           "keLineToLineRmsVsPerRad": 0.15616475056280543,
+         *           "keLineToLinePeakVsPerRad": 0.2208503082105309
+         *         }
+         *       },
+         *       "resistance": {
+         *         "value": {
+         *           "lineToLine20Ohm": 0.587270763806122,
+         *           "lineToLineHotOhm": 0.8180681739819279,
+         *           "phase20Ohm": 0.293635381903061,
+         *           "phaseHotOhm": 0.40903408699096394,
+         *           "operatingTemperaturesC": [
+         *             120
+         *           ]
+         *         }
+         *       },
+         *       "electricalFrequency": {
+         *         "value": 175
+         *       }
+         *     }
+         */
+        WindingFigures: {
+            currentBasis: string;
+            winding: {
+                slots: number;
+                poles: number;
+                layers: number;
+                phases: number;
+                /** @enum {string} */
+                connection: "star" | "delta";
+                parallelPaths: number;
+            };
+            /** @description The winding factors, fundamental first. */
+            windingFactor: {
+                value: {
+                    fundamental: number;
+                    coilPitch: number;
+                    /** @enum {string} */
+                    kind: "concentrated" | "distributed";
+                    harmonics: {
+                        order: number;
+                        factor: number;
+                    }[];
+                };
+            } | {
+                /** @description What is missing, or why it cannot be worked out. */
+                unavailable: string;
+            };
+            /** @description Set when the coil lines give another number of coils than the winding has. */
+            coilCountNote: string | null;
+            /** @description Kt and Ke. */
+            constants: {
+                value: components["schemas"]["MotorConstants"];
+            } | {
+                /** @description What is missing, or why it cannot be worked out. */
+                unavailable: string;
+            };
+            /** @description Resistance at 20 °C and at the coils' operating temperature. */
+            resistance: {
+                value: {
+                    lineToLine20Ohm: number;
+                    lineToLineHotOhm: number;
+                    phase20Ohm: number;
+                    phaseHotOhm: number;
+                    operatingTemperaturesC: number[];
+                };
+            } | {
+                /** @description What is missing, or why it cannot be worked out. */
+                unavailable: string;
+            };
+            /** @description Electrical frequency at the rated speed, Hz. */
+            electricalFrequency: {
+                value: number;
+            } | {
+                /** @description What is missing, or why it cannot be worked out. */
+                unavailable: string;
+            };
+        };
+        /**
+         * @description Wire in stock that can stand in for a coil line's wire within the copper-area tolerance, fitting the slot.
+         * @example {
+         *       "line": {
+         *         "position": 1,
+         *         "sku": "CU-IEC-0500",
+         *         "strands": 2
+         *       },
+         *       "tolerancePercent": 5,
+         *       "substitutes": [
+         *         {
+         *           "sku": "CU-IEC-0250",
+         *           "itemId": 2,
+         *           "name": "Enamelled copper 0.250 mm",
+         *           "strands": 8,
+         *           "bareDiameterMm": 0.25,
+         *           "areaChangePercent": 0,
+         *           "resistanceChangePercent": 0,
+         *           "copperLossChangeW": 0,
+         *           "massChangeKg": 0,
+         *           "massPerMotorKg": 0.07214668659942315,
+         *           "copperFill": 0.37203070897773866,
+         *           "grossFill": 0.5159336281930892,
+         *           "costPerMotorChange": 0.1286,
+         *           "onHandKg": 2.495
+         *         },
+         *         {
+         *           "sku": "CU-IEC-0315",
+         *           "itemId": 3,
+         *           "name": "Enamelled copper 0.315 mm",
+         *           "strands": 5,
+         *           "bareDiameterMm": 0.315,
+         *           "areaChangePercent": -0.7750000000000035,
+         *           "resistanceChangePercent": 0.7810531620055405,
+         *           "copperLossChangeW": 0.3450355563733325,
+         *           "massChangeKg": -0.0005591368211455283,
+         *           "massPerMotorKg": 0.07158754977827762,
+         *           "copperFill": 0.36914747098316125,
+         *           "grossFill": 0.4965334075475332,
+         *           "costPerMotorChange": 0.0773,
+         *           "onHandKg": 3.076
+         *         },
+         *         {
+         *           "sku": "CU-IEC-0710",
+         *           "itemId": 10,
+         *           "name": "Enamelled copper 0.710 mm",
+         *           "strands": 1,
+         *           "bareDiameterMm": 0.71,
+         *           "areaChangePercent": 0.8199999999999763,
+         *           "resistanceChangePercent": -0.8133306883554736,
+         *           "copperLossChangeW": -0.3592943735758709,
+         *           "massChangeKg": 0.0005916028301152648,
+         *           "massPerMotorKg": 0.07273828942953842,
+         *           "copperFill": 0.3750813607913561,
+         *           "grossFill": 0.4622184050745435,
+         *           "costPerMotorChange": -0.0553,
+         *           "onHandKg": 1.954
+         *         }
+         *       ]
+         *     }
+         */
+        WireSubstitutes: {
+            line: {
+                position: number;
+                sku: string;
+                strands: number;
+            };
+            tolerancePercent: number;
+            /** @description Closest copper area first. */
+            substitutes: {
+                sku: string;
+                /** @description The wire item's internal number (other operations name items by SKU). */
+                itemId: number;
+                name: string;
+                strands: number;
+                bareDiameterMm: number;
+                areaChangePercent: number;
+                resistanceChangePercent: number;
+                copperLossChangeW: number | null;
+                massChangeKg: number;
+                massPerMotorKg: number;
+                copperFill: number | null;
+                grossFill: number | null;
+                /** @description Change of the wire's cost per motor at moving average cost; null when a cost is unknown, company currency. */
+                costPerMotorChange: number | null;
+                onHandKg: number;
+            }[];
+        };
+        /**
+         * @description Newest design first.
+         * @example [
+         *       {
+         *         "designId": 2,
+         *         "name": "Harrier 90 servo",
+         *         "motorType": "Inner rotor servo, 12 slots / 10 poles",
+         *         "revision": 1,
+         *         "releasedAt": "2026-12-03T23:04:51.077Z",
+         *         "ratedTorqueNm": 2.2,
+         *         "torqueBasis": "estimated",
+         *         "perNmTorque": {
+         *           "torqueNm": 2.2,
+         *           "source": "rated"
+         *         },
+         *         "basis": "best-price",
+         *         "ratedCurrentA": 5.5,
+         *         "quantity": 1,
+         *         "currency": "EUR",
+         *         "costPerMotor": 86.3791,
+         *         "costPerNm": 39.2632,
+         *         "split": {
+         *           "activeCopper": 1.5232,
+         *           "endTurnCopper": 0.9748,
+         *           "leadsAndScrap": 0.2731,
+         *           "magnets": 23.31,
+         *           "parts": 60.298
+         *         },
+         *         "splitPerNm": {
+         *           "activeCopper": 0.6924,
+         *           "endTurnCopper": 0.4431,
+         *           "leadsAndScrap": 0.1241,
+         *           "magnets": 10.5954,
+         *           "parts": 27.4082
+         *         },
+         *         "copperLossW": 58.207888396992274,
+         *         "copperLossPerNm": 26.45813108954194,
+         *         "complete": true,
+         *         "unpriced": [],
+         *         "endTurnScale": 1,
+         *         "asStored": {
+         *           "costPerMotor": 86.2809,
+         *           "costPerNm": 39.2186,
+         *           "copperLossPerNm": 26.45813108954194,
+         *           "complete": true
+         *         },
+         *         "costHistory": [
+         *           {
+         *             "date": "2026-10-03",
+         *             "costPerMotor": 25.9896,
+         *             "costPerNm": 11.8135,
+         *             "complete": false
+         *           },
+         *           {
+         *             "date": "2026-11-03",
+         *             "costPerMotor": 86.1195,
+         *             "costPerNm": 39.1452,
+         *             "complete": true
+         *           },
+         *           {
+         *             "date": "2026-12-03",
+         *             "costPerMotor": 86.2809,
+         *             "costPerNm": 39.2186,
+         *             "complete": true
+         *           }
+         *         ]
+         *       }
+         *     ]
+         */
+        DesignInsightList: components["schemas"]["DesignInsight"][];
+        /**
+         * @description The latest released revision of a design, costed (with the what-if when given).
+         * @example {
+         *       "designId": 2,
+         *       "name": "Harrier 90 servo",
+         *       "motorType": "Inner rotor servo, 12 slots / 10 poles",
+         *       "revision": 1,
+         *       "releasedAt": "2026-12-03T23:04:51.077Z",
+         *       "ratedTorqueNm": 2.2,
+         *       "torqueBasis": "estimated",
+         *       "perNmTorque": {
+         *         "torqueNm": 2.2,
+         *         "source": "rated"
+         *       },
+         *       "basis": "best-price",
+         *       "ratedCurrentA": 5.5,
+         *       "quantity": 1,
+         *       "currency": "EUR",
+         *       "costPerMotor": 86.3791,
+         *       "costPerNm": 39.2632,
+         *       "split": {
+         *         "activeCopper": 1.5232,
+         *         "endTurnCopper": 0.9748,
+         *         "leadsAndScrap": 0.2731,
+         *         "magnets": 23.31,
+         *         "parts": 60.298
+         *       },
+         *       "splitPerNm": {
+         *         "activeCopper": 0.6924,
+         *         "endTurnCopper": 0.4431,
+         *         "leadsAndScrap": 0.1241,
+         *         "magnets": 10.5954,
+         *         "parts": 27.4082
+         *       },
+         *       "copperLossW": 58.207888396992274,
+         *       "copperLossPerNm": 26.45813108954194,
+         *       "complete": true,
+         *       "unpriced": [],
+         *       "endTurnScale": 1,
+         *       "asStored": {
+         *         "costPerMotor": 86.2809,
+         *         "costPerNm": 39.2186,
+         *         "copperLossPerNm": 26.45813108954194,
+         *         "complete": true
+         *       },
+         *       "costHistory": [
+         *         {
+         *           "date": "2026-10-03",
+         *           "costPerMotor": 25.9896,
+         *           "costPerNm": 11.8135,
+         *           "complete": false
+         *         },
+         *         {
+         *           "date": "2026-11-03",
+         *           "costPerMotor": 86.1195,
+         *           "costPerNm": 39.1452,
+         *           "complete": true
+         *         },
+         *         {
+         *           "date": "2026-12-03",
+         *           "costPerMotor": 86.2809,
+         *           "costPerNm": 39.2186,
+         *           "complete": true
+         *         }
+         *       ]
+         *     }
+         */
+        DesignInsight: {
+            designId: number;
+            name: string;
+            motorType: string;
+            revision: number;
+            releasedAt: string | null;
+            ratedTorqueNm: number | null;
+            /**
+             * @description Whether the rated torque was measured or estimated.
+             * @enum {string}
+             */
+            torqueBasis: "measured" | "estimated";
+            /** @description The torque figures per N·m are taken over; null when there is neither. */
+            perNmTorque: {
+                torqueNm: number;
+                /**
+                 * @description `rated`: the revision's rated torque; `estimated`: the first-order estimate, used when no rated torque is given.
+                 * @enum {string}
+                 */
+                source: "rated" | "estimated";
+            } | null;
+            /**
+             * @description The prices used: `best-price` (best current supplier price for the quantity) or `stock-average` (moving average cost of stock).
+             * @enum {string}
+             */
+            basis: "best-price" | "stock-average";
+            ratedCurrentA: number;
+            quantity: number;
+            currency: string;
+            /** @description Cost of one motor, company currency. */
+            costPerMotor: number;
+            /** @description Cost per N·m, company currency. */
+            costPerNm: number | null;
+            split: components["schemas"]["CostSplit"];
+            splitPerNm: components["schemas"]["CostSplit"] | null;
+            copperLossW: number;
+            copperLossPerNm: number | null;
+            complete: boolean;
+            unpriced: {
+                /** @enum {string} */
+                kind: "coil" | "magnet" | "part";
+                sku: string;
+            }[];
+            /** @description The what-if's end-turn factor (1 = as designed). */
+            endTurnScale: number;
+            /** @description The same figures without the what-if; null when no what-if applies to this design. */
+            asStored: {
+                costPerMotor: number;
+                costPerNm: number | null;
+                copperLossPerNm: number | null;
+                complete: boolean;
+            } | null;
+            /** @description With `history=1`: the cost per motor a month apart over the last year, at the best supplier price of each day. */
+            costHistory?: {
+                /**
+                 * Format: date
+                 * @description YYYY-MM-DD.
+                 */
+                date: string;
+                costPerMotor: number;
+                costPerNm: number | null;
+                complete: boolean;
+            }[];
+        };
+        /**
+         * @description What the store is worth now, by kind and location, and week by week.
+         * @example {
+         *       "currency": "EUR",
+         *       "total": 12188.4844,
+         *       "byKind": [
+         *         {
+         *           "kind": "wire",
+         *           "value": 2169.357,
+         *           "items": 28
+         *         },
+         *         {
+         *           "kind": "magnet",
+         *           "value": 7278.7538,
+         *           "items": 8
+         *         },
+         *         {
+         *           "kind": "part",
+         *           "value": 2740.3736,
+         *           "items": 15
+         *         }
+         *       ],
+         *       "byLocation": [
+         *         {
+         *           "locationId": 5,
+         *           "code": "MAG-B1",
+         *           "name": "Magnet cabinet B, drawer 1 (spacers fitted)",
+         *           "value": 3787.28,
+         *           "items": 3
+         *         },
+         *         {
+         *           "locationId": 6,
+         *           "code": "MAG-B2",
+         *           "name": "Magnet cabinet B, drawer 2 (spacers fitted)",
+         *           "value": 3444.2648,
+         *           "items": 5
+         *         },
+         *         {
+         *           "locationId": 7,
+         *           "code": "PARTS-C1",
+         *           "name": "Parts shelving C",
+         *           "value": 2787.5826,
+         *           "items": 17
+         *         },
+         *         {
+         *           "locationId": 3,
+         *           "code": "WIRE-A2",
+         *           "name": "Wire rack A, shelf 2 (medium gauges)",
+         *           "value": 1104.6051,
+         *           "items": 14
+         *         },
+         *         {
+         *           "locationId": 4,
+         *           "code": "WIRE-A3",
+         *           "name": "Wire rack A, shelf 3 (heavy gauges)",
+         *           "value": 622.6125,
+         *           "items": 5
+         *         },
+         *         {
+         *           "locationId": 2,
+         *           "code": "WIRE-A1",
+         *           "name": "Wire rack A, shelf 1 (fine gauges)",
+         *           "value": 442.1394,
+         *           "items": 9
+         *         }
+         *       ],
+         *       "otherLocations": null,
+         *       "reservedValue": 534.0748,
+         *       "belowReorderPoint": 12,
+         *       "openAlerts": 12,
+         *       "trend": [
+         *         {
+         *           "week": "2026-11-16",
+         *           "value": 11343.9787,
+         *           "complete": true
+         *         },
+         *         {
+         *           "week": "2026-11-23",
+         *           "value": 10959.6483,
+         *           "complete": true
+         *         },
+         *         {
+         *           "week": "2026-11-30",
+         *           "value": 12188.4844,
+         *           "complete": false
+         *         }
+         *       ]
+         *     }
+         */
+        StockValue: {
+            currency: string;
+            /** @description On hand × moving average cost of every item, company currency. */
+            total: number;
+            byKind: {
+                /** @enum {string} */
+                kind: "wire" | "magnet" | "part";
+                value: number;
+                /** @description Items of the kind with a value. */
+                items: number;
+            }[];
+            /** @description The 50 locations of most value, most first. */
+            byLocation: {
+                /** @description The location's internal number. */
+                locationId: number;
+                code: string;
+                name: string;
+                value: number;
+                items: number;
+            }[];
+            /** @description The locations beyond the first 50, summed. */
+            otherLocations: {
+                locations: number;
+                value: number;
+            } | null;
+            /** @description Held for build orders, company currency. */
+            reservedValue: number;
+            belowReorderPoint: number;
+            openAlerts: number;
+            /** @description The last 26 weeks, oldest first. */
+            trend: {
+                /**
+                 * Format: date
+                 * @description The Monday the week starts.
+                 */
+                week: string;
+                value: number;
+                /** @description False for the running week, valued now. */
+                complete: boolean;
+            }[];
+        };
+        /** @description A page of buildOrders. */
+        BuildOrderPage: {
+            buildOrders: components["schemas"]["BuildOrderSummary"][];
+            page: number;
+            pageSize: number;
+            /** @description Rows matching, on every page. */
+            total: number;
+        };
+        /**
+         * @description A build order as the list shows it.
+         * @example {
+         *       "id": 3,
+         *       "status": "reserved",
+         *       "design": {
+         *         "id": 1,
+         *         "name": "Kestrel 60-30 outrunner"
+         *       },
+         *       "revision": 2,
+         *       "quantity": 6,
+         *       "note": "Second batch for the cart drives.",
+         *       "plannedStart": "2026-12-14",
+         *       "createdBy": "Ines Calloway",
+         *       "createdAt": "2026-12-01T08:12:40.000Z",
+         *       "updatedAt": "2026-12-01T08:15:02.000Z"
+         *     }
+         */
+        BuildOrderSummary: {
+            /** @description The order's number: BO-12 is 12. */
+            id: number;
+            /** @enum {string} */
+            status: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+            design: {
+                id: number;
+                name: string;
+            };
+            revision: number;
+            /** @description Motors to build. */
+            quantity: number;
+            note: string;
+            /** @description When building starts; null when not planned. */
+            plannedStart: string | null;
+            /** @description The name of who created it. */
+            createdBy: string;
+            /**
+             * Format: date-time
+             * @description ISO 8601, UTC.
+             */
+            createdAt: string;
+            /**
+             * Format: date-time
+             * @description ISO 8601, UTC.
+             */
+            updatedAt: string;
+        };
+        /**
+         * @description The new order: a draft until stock is reserved for it.
+         * @example {
+         *       "id": 4,
+         *       "status": "draft"
+         *     }
+         */
+        BuildOrderCreated: {
+            id: number;
+            /** @constant */
+            status: "draft";
+        };
+        /**
+         * @description A build order with its lines (what each needs, holds, has been issued, and where the stock is), planned versus actual cost and its history.
+         * @example {
+         *       "id": 3,
+         *       "status": "reserved",
+         *       "design": {
+         *         "id": 1,
+         *         "name": "Kestrel 60-30 outrunner"
+         *       },
+         *       "revision": 2,
+         *       "quantity": 6,
+         *       "note": "Second batch for the cart drives.",
+         *       "plannedStart": "2026-12-14",
+         *       "createdBy": "Ines Calloway",
+         *       "createdAt": "2026-12-01T08:12:40.000Z",
+         *       "updatedAt": "2026-12-01T08:15:02.000Z",
+         *       "reference": "BO-3",
+         *       "currency": "EUR",
+         *       "lines": [
+         *         {
+         *           "sku": "CU-IEC-0500",
+         *           "name": "Enamelled copper 0.50 mm",
+         *           "kind": "wire",
+         *           "unit": "kg",
+         *           "required": 1.84,
+         *           "reserved": 1.84,
+         *           "issued": 0,
+         *           "toReserve": 0,
+         *           "available": 19.46,
+         *           "short": 0,
+         *           "difference": -1.84,
+         *           "plannedUnitCost": 14.85,
+         *           "plannedCost": 27.32,
+         *           "actualCost": 0,
+         *           "held": [
+         *             {
+         *               "lot": "Q-25-11873",
+         *               "location": "WIRE-A1",
+         *               "receivedOn": "2026-11-26",
+         *               "quantity": 1.84,
+         *               "onHand": 5.02,
+         *               "tareKg": 0.62
+         *             }
+         *           ],
+         *           "stock": [
+         *             {
+         *               "lot": "Q-25-11873",
+         *               "location": "WIRE-A1",
+         *               "receivedOn": "2026-11-26",
+         *               "onHand": 5.02,
+         *               "reserved": 1.84,
+         *               "free": 3.18,
+         *               "onHold": false
+         *             }
+         *           ],
+         *           "issues": []
+         *         }
+         *       ],
+         *       "costs": {
+         *         "plannedTotal": 27.32,
+         *         "actualTotal": 0,
+         *         "plannedPerMotor": 4.55,
+         *         "actualPerMotor": 0,
+         *         "plannedComplete": true
+         *       },
+         *       "events": [
+         *         {
+         *           "fromStatus": "draft",
+         *           "toStatus": "reserved",
+         *           "note": "",
+         *           "at": "2026-12-01T08:15:02.000Z",
+         *           "by": "Ines Calloway"
+         *         },
+         *         {
+         *           "fromStatus": null,
+         *           "toStatus": "draft",
+         *           "note": "6 × Kestrel 60-30 outrunner revision 2.",
+         *           "at": "2026-12-01T08:12:40.000Z",
+         *           "by": "Ines Calloway"
+         *         }
+         *       ]
+         *     }
+         */
+        BuildOrder: {
+            /** @description The order's number: BO-12 is 12. */
+            id: number;
+            /** @enum {string} */
+            status: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+            design: {
+                id: number;
+                name: string;
+            };
+            revision: number;
+            /** @description Motors to build. */
+            quantity: number;
+            note: string;
+            /** @description When building starts; null when not planned. */
+            plannedStart: string | null;
+            /** @description The name of who created it. */
+            createdBy: string;
+            /**
+             * Format: date-time
+             * @description ISO 8601, UTC.
+             */
+            createdAt: string;
+            /**
+             * Format: date-time
+             * @description ISO 8601, UTC.
+             */
+            updatedAt: string;
+            /** @description BO-12 for order 12. */
+            reference: string;
+            /** @description The company currency. */
+            currency: string;
+            /** @description By item kind, then SKU. */
+            lines: {
+                sku: string;
+                name: string;
+                /** @enum {string} */
+                kind: "wire" | "magnet" | "part";
+                unit: string;
+                /** @description Needed for all the motors, in the item's unit. */
+                required: number;
+                /** @description Held for this order now, in the item's unit. */
+                reserved: number;
+                /** @description Issued to this order, in the item's unit. */
+                issued: number;
+                /** @description Still to reserve: required − issued − reserved, in the item's unit. */
+                toReserve: number;
+                /** @description Free stock of the item now (on hand − reserved − held, all orders), in the item's unit. */
+                available: number;
+                /** @description What the free stock cannot cover of toReserve, in the item's unit. */
+                short: number;
+                /** @description Issued − required (positive: used more than planned), in the item's unit. */
+                difference: number;
+                /** @description Null when the item had no cost yet. */
+                plannedUnitCost: number | null;
+                plannedCost: number | null;
+                /** @description What the issues cost, in the company currency. */
+                actualCost: number;
+                /** @description What this order holds, oldest lot first. */
+                held: {
+                    lot: string | null;
+                    location: string;
+                    receivedOn: string | null;
+                    /** @description Held for this order, in the item's unit. */
+                    quantity: number;
+                    /** @description On hand on that lot and location, in the item's unit. */
+                    onHand: number;
+                    /** @description The empty spool's mass, for wire lots. */
+                    tareKg: number | null;
+                }[];
+                /** @description Where the item is, oldest lot first. */
+                stock: {
+                    lot: string | null;
+                    location: string;
+                    receivedOn: string | null;
+                    onHand: number;
+                    /** @description Reserved by all orders, in the item's unit. */
+                    reserved: number;
+                    /** @description On hand − reserved; 0 on a lot on hold, in the item's unit. */
+                    free: number;
+                    onHold: boolean;
+                }[];
+                issues: {
+                    movementId: number;
+                    /**
+                     * Format: date-time
+                     * @description ISO 8601, UTC.
+                     */
+                    at: string;
+                    lot: string | null;
+                    location: string;
+                    quantity: number;
+                    /** @description The spool's weight when issued by weighing. */
+                    grossKg: number | null;
+                    /** @description Cost per unit of the issue, in the company currency. */
+                    unitCost: number;
+                    by: string;
+                }[];
+            }[];
+            costs: {
+                plannedTotal: number;
+                actualTotal: number;
+                plannedPerMotor: number;
+                actualPerMotor: number;
+                /** @description False when some line has no planned cost (counted as 0). */
+                plannedComplete: boolean;
+            };
+            /** @description The order's history, newest first. */
+            events: {
+                fromStatus: ("draft" | "reserved" | "in_progress" | "complete" | "cancelled") | null;
+                /** @enum {string} */
+                toStatus: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+                note: string;
+                /**
+                 * Format: date-time
+                 * @description ISO 8601, UTC.
+                 */
+                at: string;
+                by: string;
+            }[];
+        };
+        /**
+         * @example {
+         *       "id": 3,
+         *       "status": "draft",
+         *       "released": [
+         *         {
+         *           "sku": "CU-IEC-0500",
+         *           "lot": "Q-25-11873",
+         *           "location": "WIRE-A1",
+         *           "quantity": 1.84,
+         *           "unit": "kg"
+         *         }
+         *       ],
+         *       "plannedStart": "2026-12-21"
+         *     }
+         */
+        BuildOrderChanged: {
+            id: number;
+            /** @enum {string} */
+            status: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+            /** @description What the order held and gave back (a new number of motors releases it all). */
+            released: components["schemas"]["BuildOrderHeldStock"][];
+            plannedStart: string | null;
+        };
+        /**
+         * @description Stock on one lot and location, in the item's unit.
+         * @example {
+         *       "sku": "CU-IEC-0500",
+         *       "lot": "Q-25-11873",
+         *       "location": "WIRE-A1",
+         *       "quantity": 1.84,
+         *       "unit": "kg"
+         *     }
+         */
+        BuildOrderHeldStock: {
+            sku: string;
+            /** @description Null for items not kept in lots. */
+            lot: string | null;
+            location: string;
+            quantity: number;
+            unit: string;
+        };
+        /**
+         * @description The answer to `reserve`.
+         * @example {
+         *       "id": 3,
+         *       "status": "reserved",
+         *       "reserved": [
+         *         {
+         *           "sku": "CU-IEC-0500",
+         *           "lot": "Q-25-11873",
+         *           "location": "WIRE-A1",
+         *           "quantity": 1.84,
+         *           "unit": "kg"
+         *         }
+         *       ],
+         *       "shortages": []
+         *     }
+         */
+        BuildOrderReservation: {
+            id: number;
+            /** @enum {string} */
+            status: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+            /** @description What this request reserved, by lot and location. */
+            reserved: components["schemas"]["BuildOrderHeldStock"][];
+            /** @description What is still short after a partial reservation; empty when every line is covered. */
+            shortages: components["schemas"]["BuildOrderShortage"][];
+        };
+        /**
+         * @description An item a reservation could not cover.
+         * @example {
+         *       "sku": "MG-N42SH-B20105",
+         *       "required": 168,
+         *       "available": 120,
+         *       "short": 48,
+         *       "unit": "pcs"
+         *     }
+         */
+        BuildOrderShortage: {
+            sku: string;
+            /** @description Still to reserve for the line, in the item's unit. */
+            required: number;
+            /** @description Free to reserve now, in the item's unit. */
+            available: number;
+            /** @description What the free stock cannot cover, in the item's unit. */
+            short: number;
+            unit: string;
+        };
+        /**
+         * @description The answer to `cancel`: what the order held and gave back.
+         * @example {
+         *       "id": 3,
+         *       "status": "cancelled",
+         *       "released": [
+         *         {
+         *           "sku": "CU-IEC-0500",
+         *           "lot": "Q-25-11873",
+         *           "location": "WIRE-A1",
+         *           "quantity": 1.84,
+         *           "unit": "kg"
+         *         }
+         *       ]
+         *     }
+         */
+        BuildOrderCancelled: {
+            id: number;
+            /** @enum {string} */
+            status: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+            released: components["schemas"]["BuildOrderHeldStock"][];
+        };
+        /**
+         * @description The answer to `complete`: the order with planned versus actual, and what it gave back.
+         * @example {
+         *       "id": 3,
+         *       "status": "complete",
+         *       "design": {
+         *         "id": 1,
+         *         "name": "Kestrel 60-30 outrunner"
+         *       },
+         *       "revision": 2,
+         *       "quantity": 6,
+         *       "note": "Second batch for the cart drives.",
+         *       "plannedStart": "2026-12-14",
+         *       "createdBy": "Ines Calloway",
+         *       "createdAt": "2026-12-01T08:12:40.000Z",
+         *       "updatedAt": "2026-12-01T08:15:02.000Z",
+         *       "reference": "BO-3",
+         *       "currency": "EUR",
+         *       "lines": [
+         *         {
+         *           "sku": "CU-IEC-0500",
+         *           "name": "Enamelled copper 0.50 mm",
+         *           "kind": "wire",
+         *           "unit": "kg",
+         *           "required": 1.84,
+         *           "reserved": 1.84,
+         *           "issued": 0,
+         *           "toReserve": 0,
+         *           "available": 19.46,
+         *           "short": 0,
+         *           "difference": -1.84,
+         *           "plannedUnitCost": 14.85,
+         *           "plannedCost": 27.32,
+         *           "actualCost": 0,
+         *           "held": [
+         *             {
+         *               "lot": "Q-25-11873",
+         *               "location": "WIRE-A1",
+         *               "receivedOn": "2026-11-26",
+         *               "quantity": 1.84,
+         *               "onHand": 5.02,
+         *               "tareKg": 0.62
+         *             }
+         *           ],
+         *           "stock": [
+         *             {
+         *               "lot": "Q-25-11873",
+         *               "location": "WIRE-A1",
+         *               "receivedOn": "2026-11-26",
+         *               "onHand": 5.02,
+         *               "reserved": 1.84,
+         *               "free": 3.18,
+         *               "onHold": false
+         *             }
+         *           ],
+         *           "issues": []
+         *         }
+         *       ],
+         *       "costs": {
+         *         "plannedTotal": 27.32,
+         *         "actualTotal": 0,
+         *         "plannedPerMotor": 4.55,
+         *         "actualPerMotor": 0,
+         *         "plannedComplete": true
+         *       },
+         *       "events": [
+         *         {
+         *           "fromStatus": "draft",
+         *           "toStatus": "reserved",
+         *           "note": "",
+         *           "at": "2026-12-01T08:15:02.000Z",
+         *           "by": "Ines Calloway"
+         *         },
+         *         {
+         *           "fromStatus": null,
+         *           "toStatus": "draft",
+         *           "note": "6 × Kestrel 60-30 outrunner revision 2.",
+         *           "at": "2026-12-01T08:12:40.000Z",
+         *           "by": "Ines Calloway"
+         *         }
+         *       ],
+         *       "released": []
+         *     }
+         */
+        BuildOrderCompleted: {
+            /** @description The order's number: BO-12 is 12. */
+            id: number;
+            /** @enum {string} */
+            status: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+            design: {
+                id: number;
+                name: string;
+            };
+            revision: number;
+            /** @description Motors to build. */
+            quantity: number;
+            note: string;
+            /** @description When building starts; null when not planned. */
+            plannedStart: string | null;
+            /** @description The name of who created it. */
+            createdBy: string;
+            /**
+             * Format: date-time
+             * @description ISO 8601, UTC.
+             */
+            createdAt: string;
+            /**
+             * Format: date-time
+             * @description ISO 8601, UTC.
+             */
+            updatedAt: string;
+            /** @description BO-12 for order 12. */
+            reference: string;
+            /** @description The company currency. */
+            currency: string;
+            /** @description By item kind, then SKU. */
+            lines: {
+                sku: string;
+                name: string;
+                /** @enum {string} */
+                kind: "wire" | "magnet" | "part";
+                unit: string;
+                /** @description Needed for all the motors, in the item's unit. */
+                required: number;
+                /** @description Held for this order now, in the item's unit. */
+                reserved: number;
+                /** @description Issued to this order, in the item's unit. */
+                issued: number;
+                /** @description Still to reserve: required − issued − reserved, in the item's unit. */
+                toReserve: number;
+                /** @description Free stock of the item now (on hand − reserved − held, all orders), in the item's unit. */
+                available: number;
+                /** @description What the free stock cannot cover of toReserve, in the item's unit. */
+                short: number;
+                /** @description Issued − required (positive: used more than planned), in the item's unit. */
+                difference: number;
+                /** @description Null when the item had no cost yet. */
+                plannedUnitCost: number | null;
+                plannedCost: number | null;
+                /** @description What the issues cost, in the company currency. */
+                actualCost: number;
+                /** @description What this order holds, oldest lot first. */
+                held: {
+                    lot: string | null;
+                    location: string;
+                    receivedOn: string | null;
+                    /** @description Held for this order, in the item's unit. */
+                    quantity: number;
+                    /** @description On hand on that lot and location, in the item's unit. */
+                    onHand: number;
+                    /** @description The empty spool's mass, for wire lots. */
+                    tareKg: number | null;
+                }[];
+                /** @description Where the item is, oldest lot first. */
+                stock: {
+                    lot: string | null;
+                    location: string;
+                    receivedOn: string | null;
+                    onHand: number;
+                    /** @description Reserved by all orders, in the item's unit. */
+                    reserved: number;
+                    /** @description On hand − reserved; 0 on a lot on hold, in the item's unit. */
+                    free: number;
+                    onHold: boolean;
+                }[];
+                issues: {
+                    movementId: number;
+                    /**
+                     * Format: date-time
+                     * @description ISO 8601, UTC.
+                     */
+                    at: string;
+                    lot: string | null;
+                    location: string;
+                    quantity: number;
+                    /** @description The spool's weight when issued by weighing. */
+                    grossKg: number | null;
+                    /** @description Cost per unit of the issue, in the company currency. */
+                    unitCost: number;
+                    by: string;
+                }[];
+            }[];
+            costs: {
+                plannedTotal: number;
+                actualTotal: number;
+                plannedPerMotor: number;
+                actualPerMotor: number;
+                /** @description False when some line has no planned cost (counted as 0). */
+                plannedComplete: boolean;
+            };
+            /** @description The order's history, newest first. */
+            events: {
+                fromStatus: ("draft" | "reserved" | "in_progress" | "complete" | "cancelled") | null;
+                /** @enum {string} */
+                toStatus: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+                note: string;
+                /**
+                 * Format: date-time
+                 * @description ISO 8601, UTC.
+                 */
+                at: string;
+                by: string;
+            }[];
+            /** @description What the order still held and gave back. */
+            released: components["schemas"]["BuildOrderHeldStock"][];
+        };
+        /**
+         * @description The answer to `issue`: the stock movement the ledger recorded, the item's balance and the order's line.
+         * @example {
+         *       "movement": {
+         *         "id": 812,
+         *         "type": "issue",
+         *         "sku": "CU-IEC-0500",
+         *         "lot": "Q-25-11873",
+         *         "location": "WIRE-A1",
+         *         "toLocation": null,
+         *         "quantity": 1.84,
+         *         "unit": "kg",
+         *         "createdAt": "2026-12-02T09:40:11.000Z"
+         *       },
+         *       "balance": {
+         *         "onHand": 21.56,
+         *         "reserved": 0.26,
+         *         "available": 21.3
+         *       },
+         *       "id": 3,
+         *       "status": "in_progress",
+         *       "line": {
+         *         "sku": "CU-IEC-0500",
+         *         "required": 1.84,
+         *         "reserved": 0,
+         *         "issued": 1.84,
+         *         "unit": "kg"
+         *       }
+         *     }
+         */
+        BuildOrderIssue: {
+            movement: {
+                id: number;
+                /** @constant */
+                type: "issue";
+                sku: string;
+                lot: string | null;
+                location: string;
+                toLocation: null;
+                quantity: number;
+                unit: string;
+                /**
+                 * Format: date-time
+                 * @description ISO 8601, UTC.
+                 */
+                createdAt: string;
+            };
+            /** @description The item's figures after the issue. */
+            balance: {
+                onHand: number;
+                reserved: number;
+                available: number;
+            };
+            /** @description The build order. */
+            id: number;
+            /** @enum {string} */
+            status: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+            /** @description The order's line for the item, after the issue. */
+            line: {
+                sku: string;
+                required: number;
+                reserved: number;
+                issued: number;
+                unit: string;
+            };
+        };
+        /**
+         * @description A step the order's state or the stock forbids: the error shape, with the shortages when a reservation could not be covered.
+         * @example {
+         *       "error": {
+         *         "message": "Not enough stock to reserve BO-3 in full: MG-N42SH-B20105 short by 48 pcs. Nothing was reserved.",
+         *         "shortages": [
+         *           {
+         *             "sku": "MG-N42SH-B20105",
+         *             "required": 168,
+         *             "available": 120,
+         *             "short": 48,
+         *             "unit": "pcs"
+         *           }
+         *         ]
+         *       }
+         *     }
+         */
+        BuildOrderRefusal: {
+            error: {
+                message: string;
+                fields?: {
+                    [key: string]: string[];
+                };
+                /** @description For a reservation: every item the free stock cannot cover. */
+                shortages?: components["schemas"]["BuildOrderShortage"][];
+            };
+        };
+        /**
+         * @description Every lot issued to the order, net of returns, in the order of the first issue. Items not kept in lots are not listed.
+         * @example {
+         *       "buildOrderId": 1,
+         *       "reference": "BO-1",
+         *       "lots": [
+         *         {
+         *           "lotId": 7,
+         *           "lot": "Q-25-11873",
+         *           "sku": "CU-IEC-0500",
+         *           "itemName": "Enamelled copper 0.50 mm",
+         *           "supplier": {
+         *             "id": 1,
+         *             "name": "Quillan Drawn Wire GmbH"
+         *           },
+         *           "supplierBatch": "Q-25-11873",
+         *           "onHold": false,
+         *           "issued": 1.78,
+         *           "returned": 0,
+         *           "net": 1.78,
+         *           "unit": "kg",
+         *           "firstIssuedAt": "2026-11-27T10:02:13.000Z",
+         *           "lastMovementAt": "2026-11-27T10:02:13.000Z"
+         *         }
+         *       ]
+         *     }
+         */
+        BuildOrderLots: {
+            buildOrderId: number;
+            reference: string;
+            lots: {
+                lotId: number;
+                lot: string;
+                sku: string;
+                itemName: string;
+                supplier: {
+                    id: number;
+                    name: string;
+                } | null;
+                supplierBatch: string | null;
+                onHold: boolean;
+                issued: number;
+                /** @description Returns that name this order. */
+                returned: number;
+                /** @description issued − returned. */
+                net: number;
+                unit: string;
+                firstIssuedAt: string | null;
+                /**
+                 * Format: date-time
+                 * @description ISO 8601, UTC.
+                 */
+                lastMovementAt: string;
+            }[];
+        };
+        /** @description Every supplier by name (at most 1,000). */
+        SupplierList: components["schemas"]["Supplier"][];
+        /**
+         * @example {
+         *       "id": 1,
+         *       "name": "Quillan Drawn Wire GmbH",
+         *       "email": "verkauf@quillan-wire.example.test",
+         *       "currency": "EUR",
+         *       "leadTimeDays": 21,
+         *       "notes": "Enamelled copper wire in IEC sizes, priced on the copper base plus an adder per kg.",
+         *       "orderEmail": null,
+         *       "metalBaseFixedAt": "order",
+         *       "wireTolerancePercent": 10,
+         *       "pieceTolerancePercent": 0
+         *     }
+         */
+        Supplier: {
+            /** @description The supplier's id, for /api/v1/suppliers/{supplierId}. */
+            id: number;
+            name: string;
+            /** @description General address. */
+            email: string | null;
+            /**
+             * @description The currency the supplier quotes in (ISO 4217).
+             * @example EUR
+             */
+            currency: string;
+            /** @description Days from order to delivery, unless a price line says otherwise. */
+            leadTimeDays: number | null;
+            notes: string | null;
+            /** @description Where purchase orders are e-mailed; the general address when null. */
+            orderEmail: string | null;
+            /**
+             * @description When the metal base of a wire price is fixed: when the order is sent, or on the delivery day.
+             * @enum {string}
+             */
+            metalBaseFixedAt: "order" | "delivery";
+            /** @description How far past the ordered weight a wire delivery may go, percent. */
+            wireTolerancePercent: number;
+            /** @description How far past the ordered count a delivery in pieces may go, percent. */
+            pieceTolerancePercent: number;
+        };
+        /** @description ?layout=1: the file's header row, first data row and (a workbook) its sheets, what a mapping needs. Nothing is written. */
+        PriceListLayout: {
+            /** @constant */
+            format: "csv";
+            headers: string[];
+            sampleRow: string[];
+            /** @example utf-8 */
+            encoding: string;
+            headerLine: number;
+        } | {
+            /** @constant */
+            format: "xlsx";
+            headers: string[];
+            sampleRow: string[];
+            sheets: {
+                name: string;
+                hidden: boolean;
+            }[];
+            /** @description The sheet read. */
+            sheet: string;
+            headerLine: number;
+        };
+        /** @description ?dryRun=1: what a commit would do; nothing is written. */
+        PriceListPreview: {
+            /** @description The first 20 good rows. */
+            rows: components["schemas"]["PriceListPreviewRow"][];
+            /** @description Rows that would be imported. */
+            valid: number;
+            /** @description The first 1,000 lines with errors, in file order. */
+            invalid: components["schemas"]["PriceListLineError"][];
+            /** @description Every line with an error. */
+            invalidCount: number;
+            invalidTruncated: boolean;
+            /** @description Rows that price an existing item. */
+            matched: number;
+            /** @description Items the import would create. */
+            newItems: number;
+            warnings: components["schemas"]["PriceImportWarning"][];
+        };
+        PriceListPreviewRow: {
+            /** @description The line the row starts on. */
+            line: number;
+            supplierSku: string;
+            /** @description Our SKU when the file names it, else null. */
+            itemSku: string | null;
+            description: string;
+            price: string | null;
+            adderPerKg: string | null;
+            /**
+             * @description ISO 4217 code.
+             * @example EUR
+             */
+            currency: string;
+            /** @description The quantity the price starts at, 3 places, decimal text. */
+            minQuantity: string;
+            /**
+             * Format: date
+             * @description The day the price starts (YYYY-MM-DD).
+             */
+            validFrom: string;
+            leadTimeDays: number | null;
+            packQuantity: string | null;
+            /** @description The catalogue item the row prices, or the one it creates. */
+            match: {
+                sku: string;
+                name: string;
+                /** @enum {string} */
+                kind: "wire" | "magnet" | "part";
+                /** @description True when the import creates the item. */
+                newItem: boolean;
+                /** @enum {string} */
+                by: "our-sku" | "supplier-sku" | "wire-size" | "magnet-grade" | "new-item";
+            };
+            /** @constant */
+            kind: "wire";
+            /** @constant */
+            unit: "kg";
+            /** @enum {string} */
+            standard: "AWG" | "IEC";
+            /** @description "20", "0000" (AWG) or "0.500" (IEC, mm). */
+            size: string;
+            insulation: ("grade1" | "grade2" | "grade3" | "single" | "heavy" | "triple") | null;
+            thermalClass: (130 | 155 | 180 | 200 | 220) | null;
+        } | {
+            /** @description The line the row starts on. */
+            line: number;
+            supplierSku: string;
+            /** @description Our SKU when the file names it, else null. */
+            itemSku: string | null;
+            description: string;
+            price: string | null;
+            adderPerKg: string | null;
+            /**
+             * @description ISO 4217 code.
+             * @example EUR
+             */
+            currency: string;
+            /** @description The quantity the price starts at, 3 places, decimal text. */
+            minQuantity: string;
+            /**
+             * Format: date
+             * @description The day the price starts (YYYY-MM-DD).
+             */
+            validFrom: string;
+            leadTimeDays: number | null;
+            packQuantity: string | null;
+            /** @description The catalogue item the row prices, or the one it creates. */
+            match: {
+                sku: string;
+                name: string;
+                /** @enum {string} */
+                kind: "wire" | "magnet" | "part";
+                /** @description True when the import creates the item. */
+                newItem: boolean;
+                /** @enum {string} */
+                by: "our-sku" | "supplier-sku" | "wire-size" | "magnet-grade" | "new-item";
+            };
+            /** @constant */
+            kind: "magnet";
+            /** @constant */
+            unit: "pcs";
+            grade: string;
+            /** @description The known grade it matched, lower case. */
+            gradeMatch: string;
+        } | {
+            /** @description The line the row starts on. */
+            line: number;
+            supplierSku: string;
+            /** @description Our SKU when the file names it, else null. */
+            itemSku: string | null;
+            description: string;
+            price: string | null;
+            adderPerKg: string | null;
+            /**
+             * @description ISO 4217 code.
+             * @example EUR
+             */
+            currency: string;
+            /** @description The quantity the price starts at, 3 places, decimal text. */
+            minQuantity: string;
+            /**
+             * Format: date
+             * @description The day the price starts (YYYY-MM-DD).
+             */
+            validFrom: string;
+            leadTimeDays: number | null;
+            packQuantity: string | null;
+            /** @description The catalogue item the row prices, or the one it creates. */
+            match: {
+                sku: string;
+                name: string;
+                /** @enum {string} */
+                kind: "wire" | "magnet" | "part";
+                /** @description True when the import creates the item. */
+                newItem: boolean;
+                /** @enum {string} */
+                by: "our-sku" | "supplier-sku" | "wire-size" | "magnet-grade" | "new-item";
+            };
+            /** @constant */
+            kind: "part";
+            /** @enum {string} */
+            unit: "kg" | "pcs" | "m";
+        };
+        PriceListLineError: {
+            /** @description The line in the file. */
+            line: number;
+            message: string;
+        };
+        /** @description A missing currency rate or metal base: never stops an import. */
+        PriceImportWarning: {
+            /** @enum {string} */
+            kind: "no-exchange-rate" | "metal-base-derived" | "no-metal-base";
+            currency: string;
+            /** @enum {string} */
+            conductor?: "copper" | "aluminium";
+            message: string;
+        };
+        /** @description The same file was imported for this supplier before; nothing changed. */
+        PriceListAlreadyImported: {
+            importId: number;
+            /** @constant */
+            alreadyImported: true;
+            message: string;
+        };
+        /** @description One line of the `application/x-ndjson` stream: progress events (at least every 10,000 rows or 250 ms), then one result event. */
+        PriceListProgressEvent: {
+            /** @constant */
+            type: "progress";
+            /** @enum {string} */
+            step: "check" | "import";
+            /** @description Data rows read so far. */
+            processed: number;
+            /** @description The file's data rows. */
+            total: number;
+        } | {
+            /** @constant */
+            type: "result";
+            /** @description The status the request answers without the stream. */
+            status: number;
+            /** @description The body the request answers without the stream (an error body, with `reference` for a 500). */
+            body: components["schemas"]["PriceListPreview"] | components["schemas"]["PriceListImported"] | components["schemas"]["PriceListAlreadyImported"] | components["schemas"]["PriceListInvalid"] | {
+                error: {
+                    message: string;
+                    fields?: {
+                        [key: string]: string[];
+                    };
+                };
+                reference?: string | null;
+            };
+        };
+        /**
+         * @example {
+         *       "importId": 4,
+         *       "supplier": "Quillan Drawn Wire GmbH",
+         *       "fileName": "quillan-2026-11.csv",
+         *       "rows": 42,
+         *       "newItems": 0,
+         *       "warnings": []
+         *     }
+         */
+        PriceListImported: {
+            importId: number;
+            supplier: string;
+            fileName: string;
+            /** @description Price lines written. */
+            rows: number;
+            /** @description Catalogue items created. */
+            newItems: number;
+            warnings: components["schemas"]["PriceImportWarning"][];
+        };
+        /** @description Rows with errors: nothing was imported. */
+        PriceListInvalid: {
+            error: {
+                message: string;
+            };
+            /** @description Rows that would be imported. */
+            valid: number;
+            /** @description The first 1,000 lines with errors, in file order. */
+            invalid: components["schemas"]["PriceListLineError"][];
+            /** @description Every line with an error. */
+            invalidCount: number;
+            invalidTruncated: boolean;
+        };
+        /** @description A page of orders. */
+        PurchaseOrderPage: {
+            orders: components["schemas"]["PurchaseOrderSummary"][];
+            page: number;
+            pageSize: number;
+            /** @description Rows matching, on every page. */
+            total: number;
+        };
+        /**
+         * @example {
+         *       "id": 3,
+         *       "number": "PO-000003",
+         *       "status": "partly_received",
+         *       "statusLabel": "Partly received",
+         *       "supplier": {
+         *         "id": 1,
+         *         "name": "Quillan Drawn Wire GmbH"
+         *       },
+         *       "currency": "EUR",
+         *       "orderedOn": "2026-11-12",
+         *       "createdAt": "2026-11-12T09:30:00.000Z",
+         *       "lineCount": 2,
+         *       "total": 512.4,
+         *       "nextExpectedDate": "2026-12-03"
+         *     }
+         */
+        PurchaseOrderSummary: {
+            id: number;
+            number: string;
+            /**
+             * @description draft → sent → partly_received → received; cancelled (nothing arrived) or closed_short (nothing more will come).
+             * @enum {string}
+             */
+            status: "draft" | "sent" | "partly_received" | "received" | "cancelled" | "closed_short";
+            /** @example Partly received */
+            statusLabel: string;
+            supplier: {
+                id: number;
+                name: string;
+            };
+            /**
+             * @description ISO 4217 code.
+             * @example EUR
+             */
+            currency: string;
+            orderedOn: string | null;
+            /**
+             * Format: date-time
+             * @description Created (ISO 8601, UTC).
+             */
+            createdAt: string;
+            lineCount: number;
+            /** @description The lines' totals, in the order's currency. */
+            total: number;
+            nextExpectedDate: string | null;
+        };
+        /** @description An order with its supplier, lines, history and receipts. */
+        PurchaseOrder: {
+            id: number;
+            /** @example PO-000003 */
+            number: string;
+            /**
+             * @description draft → sent → partly_received → received; cancelled (nothing arrived) or closed_short (nothing more will come).
+             * @enum {string}
+             */
+            status: "draft" | "sent" | "partly_received" | "received" | "cancelled" | "closed_short";
+            /**
+             * @description ISO 4217 code.
+             * @example EUR
+             */
+            currency: string;
+            notes: string;
+            /**
+             * Format: date
+             * @description The day lead times count from: the sending day, else the creation day (YYYY-MM-DD).
+             */
+            orderDate: string;
+            orderedOn: string | null;
+            sentAt: string | null;
+            /** @description Why it was cancelled or closed short. */
+            endReason: string | null;
+            /**
+             * Format: date-time
+             * @description Created (ISO 8601, UTC).
+             */
+            createdAt: string;
+            /**
+             * Format: date-time
+             * @description Last changed (ISO 8601, UTC).
+             */
+            updatedAt: string;
+            /** @description The person's name. */
+            createdBy: string;
+            supplier: {
+                id: number;
+                name: string;
+                email: string | null;
+                orderEmail: string | null;
+                currency: string;
+                /**
+                 * @description When the metal base of a wire price is fixed: when the order is sent, or on the delivery day.
+                 * @enum {string}
+                 */
+                metalBaseFixedAt: "order" | "delivery";
+            };
+            /** @description The lines' totals, in the order's currency. */
+            total: number;
+            lines: components["schemas"]["PurchaseOrderLine"][];
+            events: {
+                /** @description created, edited, line-added, line-changed, line-removed, price-overridden, sent, received, cancelled, closed_short … */
+                kind: string;
+                detail: string;
+                /**
+                 * Format: date-time
+                 * @description When (ISO 8601, UTC).
+                 */
+                at: string;
+                person: string;
+            }[];
+            receipts: {
+                id: number;
+                /**
+                 * Format: date
+                 * @description The delivery day (YYYY-MM-DD).
+                 */
+                receivedOn: string;
+                person: string;
+                /**
+                 * Format: date-time
+                 * @description Booked (ISO 8601, UTC).
+                 */
+                createdAt: string;
+                lines: {
+                    orderLineId: number;
+                    /** @description The stock movement the receipt booked. */
+                    movementId: number;
+                    /** @description Received, in the item's unit. */
+                    quantity: number;
+                    /** @description Price per unit, in the order's currency. */
+                    unitPrice: number;
+                }[];
+            }[];
+        };
+        PurchaseOrderLine: {
+            /** @description The line's id, for changes and receipts. */
+            id: number;
+            lineNumber: number;
+            sku: string;
+            name: string;
+            /** @enum {string} */
+            unit: "kg" | "pcs" | "m";
+            /** @description "" when the supplier has none. */
+            supplierSku: string;
+            /** @description Ordered, in the item's unit. */
+            quantity: number;
+            /** @description Received so far, in the item's unit. */
+            received: number;
+            /** @description Still to come (never below 0), in the item's unit. */
+            open: number;
+            /** @description Price per unit, in the order's currency. */
+            unitPrice: number;
+            /** @description Quantity × price, to the cent, in the order's currency. */
+            lineTotal: number;
+            /** @enum {string} */
+            priceSource: "price_list" | "override";
+            overrideReason: string | null;
+            metalBasePerKg: number | null;
+            adderPerKg: number | null;
+            metalBaseFixedAt: ("order" | "delivery") | null;
+            requestedDate: string | null;
+            leadTimeDays: number;
+            /**
+             * Format: date
+             * @description The day the line is expected (YYYY-MM-DD).
+             */
+            expectedDate: string;
+        };
+        /** @description The receipt booked (one stock movement a spool or lot) and the order after it. */
+        PurchaseReceipt: {
+            receipt: {
+                id: number;
+                /**
+                 * Format: date
+                 * @description The delivery day (YYYY-MM-DD).
+                 */
+                receivedOn: string;
+                lines: {
+                    lineId: number;
+                    movementId: number;
+                    sku: string;
+                    lot: string | null;
+                    location: string;
+                    /** @description Received, in the item's unit. */
+                    quantity: number;
+                    /** @enum {string} */
+                    unit: "kg" | "pcs" | "m";
+                    /** @description Cost per unit in the company currency (EUR). */
+                    unitCost: number;
+                }[];
+            };
+            order: {
+                id: number;
+                number: string;
+                /**
+                 * @description draft → sent → partly_received → received; cancelled (nothing arrived) or closed_short (nothing more will come).
+                 * @enum {string}
+                 */
+                status: "draft" | "sent" | "partly_received" | "received" | "cancelled" | "closed_short";
+                lines: {
+                    id: number;
+                    sku: string;
+                    /** @enum {string} */
+                    unit: "kg" | "pcs" | "m";
+                    /** @description Ordered, in the item's unit. */
+                    quantity: number;
+                    /** @description Received so far, in the item's unit. */
+                    received: number;
+                    /** @description Still to come, in the item's unit. */
+                    open: number;
+                }[];
+            };
+        };
+        /**
+         * @description The newest 100 base prices, newest first, then by conductor.
+         * @example [
+         *       {
+         *         "conductor": "copper",
+         *         "currency": "EUR",
+         *         "pricePerKg": 9.02,
+         *         "validFrom": "2026-10-31"
+         *       },
+         *       {
+         *         "conductor": "aluminium",
+         *         "currency": "EUR",
+         *         "pricePerKg": 2.44,
+         *         "validFrom": "2026-10-31"
+         *       }
+         *     ]
+         */
+        MetalBaseList: components["schemas"]["MetalBasePrice"][];
+        /**
+         * @description A conductor's base price per kg in one currency.
+         * @example {
+         *       "conductor": "copper",
+         *       "currency": "EUR",
+         *       "pricePerKg": 9.02,
+         *       "validFrom": "2026-10-31"
+         *     }
+         */
+        MetalBasePrice: {
+            /** @enum {string} */
+            conductor: "copper" | "aluminium";
+            /**
+             * @description ISO 4217 code.
+             * @example EUR
+             */
+            currency: string;
+            pricePerKg: number;
+            /**
+             * Format: date
+             * @description The first day the price applies; it stands until a later one.
+             */
+            validFrom: string;
+        };
+        /**
+         * @example {
+         *       "companyCurrency": "EUR",
+         *       "rates": [
+         *         {
+         *           "currency": "USD",
+         *           "rate": 0.9096,
+         *           "validFrom": "2026-10-31"
+         *         }
+         *       ]
+         *     }
+         */
+        CurrencyRates: {
+            /**
+             * @description ISO 4217 code.
+             * @example EUR
+             */
+            companyCurrency: string;
+            /** @description The newest 200 rates, newest first, then by currency. */
+            rates: {
+                /**
+                 * @description ISO 4217 code.
+                 * @example EUR
+                 */
+                currency: string;
+                /** @description Units of the company currency per one unit of `currency`. */
+                rate: number;
+                /**
+                 * Format: date
+                 * @description A calendar day, YYYY-MM-DD.
+                 */
+                validFrom: string;
+            }[];
+        };
+        /**
+         * @description An item's prices from every supplier for a quantity on a day.
+         * @example {
+         *       "sku": "CU-IEC-0500",
+         *       "unit": "kg",
+         *       "quantity": 10,
+         *       "date": "2026-12-03",
+         *       "companyCurrency": "EUR",
+         *       "prices": [
+         *         {
+         *           "supplier": "Quillan Drawn Wire GmbH",
+         *           "supplierSku": "QD-CU-0500-G2",
+         *           "currency": "EUR",
+         *           "minQuantity": 5,
+         *           "quotedUnitPrice": 13.52,
+         *           "adderPerKg": 4.5,
+         *           "metalBasePerKg": 9.02,
+         *           "metalBaseDerivedFrom": null,
+         *           "rate": null,
+         *           "unitPrice": 13.52,
+         *           "total": 135.2,
+         *           "leadTimeDays": 10,
+         *           "packQuantity": 5,
+         *           "source": {
+         *             "importId": "4",
+         *             "line": 12
+         *           }
+         *         }
+         *       ],
+         *       "cannotPrice": [],
+         *       "history": {
+         *         "unit": "kg",
+         *         "quantity": 10,
+         *         "companyCurrency": "EUR",
+         *         "from": "2025-12-03",
+         *         "to": "2026-12-03",
+         *         "lineCount": 3,
+         *         "series": [
+         *           {
+         *             "supplier": "Quillan Drawn Wire GmbH",
+         *             "supplierSku": "QD-CU-0500-G2",
+         *             "currency": "EUR",
+         *             "points": [
+         *               {
+         *                 "date": "2026-08-07",
+         *                 "unitPrice": 13.24,
+         *                 "quotedUnitPrice": 13.24,
+         *                 "problems": []
+         *               }
+         *             ]
+         *           }
+         *         ]
+         *       }
+         *     }
+         */
+        ItemPrices: {
+            sku: string;
+            unit: string;
+            /** @description The quantity priced, in the item's unit. */
+            quantity: number;
+            /**
+             * Format: date
+             * @description The day priced.
+             */
+            date: string;
+            /**
+             * @description ISO 4217 code.
+             * @example EUR
+             */
+            companyCurrency: string;
+            /** @description Every offer priced for the quantity, cheapest first. */
+            prices: {
+                supplier: string;
+                supplierSku: string;
+                /**
+                 * @description The supplier's quoting currency.
+                 * @example EUR
+                 */
+                currency: string;
+                /** @description The quantity break that applies, in the item's unit. */
+                minQuantity: number;
+                /** @description Per unit as quoted, in `currency` (wire on a metal base: base + adder). */
+                quotedUnitPrice: number;
+                adderPerKg: number | null;
+                metalBasePerKg: number | null;
+                /** @description Set when no base is kept in the supplier's currency: the company base and the rate it was converted with. */
+                metalBaseDerivedFrom: {
+                    pricePerKg: number;
+                    /**
+                     * @description ISO 4217 code.
+                     * @example EUR
+                     */
+                    currency: string;
+                    /**
+                     * Format: date
+                     * @description A calendar day, YYYY-MM-DD.
+                     */
+                    validFrom: string;
+                    rate: number;
+                    /**
+                     * Format: date
+                     * @description A calendar day, YYYY-MM-DD.
+                     */
+                    rateFrom: string;
+                } | null;
+                /** @description The exchange rate used; null when quoted in the company currency. */
+                rate: number | null;
+                /** @description Per unit in the company currency: what the list is sorted by. */
+                unitPrice: number;
+                /** @description unitPrice × quantity in the company currency. */
+                total: number;
+                leadTimeDays: number | null;
+                /** @description Null: any quantity. */
+                packQuantity: number | null;
+                /** @description Where the price line came from. */
+                source: {
+                    /** @description The price-list import the line came from. */
+                    importId: string;
+                    /** @description Its line in the imported file. */
+                    line: number;
+                };
+            }[];
+            /** @description Offers with a line on the day but no price for the quantity (no rate, no base, below the smallest break), by supplier and SKU. */
+            cannotPrice: {
+                supplier: string;
+                supplierSku: string;
+                reasons: string[];
+            }[];
+            /** @description With `history=1`: the unit price of the quantity over the 365 days up to `date`, one series per offer. */
+            history?: {
+                unit: string;
+                quantity: number;
+                /**
+                 * @description ISO 4217 code.
+                 * @example EUR
+                 */
+                companyCurrency: string;
+                /**
+                 * Format: date
+                 * @description A calendar day, YYYY-MM-DD.
+                 */
+                from: string;
+                /**
+                 * Format: date
+                 * @description A calendar day, YYYY-MM-DD.
+                 */
+                to: string;
+                /** @description Price lines stored for the item, charted or not. */
+                lineCount: number;
+                series: {
+                    supplier: string;
+                    supplierSku: string;
+                    /**
+                     * @description ISO 4217 code.
+                     * @example EUR
+                     */
+                    currency: string;
+                    /** @description Each point stands until the next. */
+                    points: {
+                        /**
+                         * Format: date
+                         * @description A calendar day, YYYY-MM-DD.
+                         */
+                        date: string;
+                        /** @description In the company currency; null: no price from this day, see `problems`. */
+                        unitPrice: number | null;
+                        quotedUnitPrice: number | null;
+                        problems: string[];
+                    }[];
+                }[];
+            };
+        };
+        /**
+         * @description What to buy and when: open build orders' needs against stock, sent purchase orders and reorder points.
+         * @example {
+         *       "today": "2026-12-03",
+         *       "weeks": [
+         *         "2026-11-30",
+         *         "2026-12-07",
+         *         "2026-12-14"
+         *       ],
+         *       "companyCurrency": "EUR",
+         *       "suggestions": [
+         *         {
+         *           "key": "CU-IEC-0800@2026-12-14",
+         *           "sku": "CU-IEC-0800",
+         *           "name": "Enamelled copper 0.80 mm",
+         *           "unit": "kg",
+         *           "supplierId": 1,
+         *           "supplier": "Quillan Drawn Wire GmbH",
+         *           "supplierSku": "QD-CU-0800-G2",
+         *           "quantity": 10,
+         *           "shortfall": 3.2,
+         *           "unitPrice": 13.31,
+         *           "currency": "EUR",
+         *           "total": 133.1,
+         *           "totalInCompanyCurrency": 133.1,
+         *           "packQuantity": 5,
+         *           "raisedToBreak": false,
+         *           "leadTimeDays": 10,
+         *           "needBy": "2026-12-14",
+         *           "orderBy": "2026-12-04",
+         *           "late": false,
+         *           "reason": "BO-3 needs 4.200 kg in week of 14 Dec 2026; projected 3.200 kg below reorder point 5.000 kg",
+         *           "draftOrders": [],
+         *           "needs": [
+         *             {
+         *               "buildOrderId": 3,
+         *               "reference": "BO-3",
+         *               "quantity": 4.2
+         *             }
+         *           ]
+         *         }
+         *       ],
+         *       "items": [
+         *         {
+         *           "sku": "CU-IEC-0800",
+         *           "name": "Enamelled copper 0.80 mm",
+         *           "unit": "kg",
+         *           "reorderPoint": 5,
+         *           "available": 6,
+         *           "weeks": [
+         *             {
+         *               "weekStart": "2026-12-14",
+         *               "needed": 4.2,
+         *               "arriving": 0,
+         *               "suggested": 10,
+         *               "projected": 1.8,
+         *               "projectedWithSuggestion": 11.8
+         *             }
+         *           ]
+         *         }
+         *       ]
+         *     }
+         */
+        BuyingPlan: {
+            /**
+             * Format: date
+             * @description A calendar day, YYYY-MM-DD.
+             */
+            today: string;
+            /** @description The Mondays of the weeks planned; the first is the week of `today`. */
+            weeks: string[];
+            /**
+             * @description ISO 4217 code.
+             * @example EUR
+             */
+            companyCurrency: string;
+            suggestions: components["schemas"]["BuyingSuggestion"][];
+            /** @description The week-by-week projection of every item planned. */
+            items: {
+                sku: string;
+                name: string;
+                unit: string;
+                reorderPoint: number;
+                /** @description On hand − reserved − held, now, in the item's unit. */
+                available: number;
+                weeks: {
+                    /**
+                     * Format: date
+                     * @description A calendar day, YYYY-MM-DD.
+                     */
+                    weekStart: string;
+                    /** @description Build orders' needs in the week, in the item's unit. */
+                    needed: number;
+                    /** @description Due on sent purchase orders in the week, in the item's unit. */
+                    arriving: number;
+                    /** @description Suggested to arrive in the week, in the item's unit. */
+                    suggested: number;
+                    /** @description At the week's end, before this week's suggestion, in the item's unit. */
+                    projected: number;
+                    projectedWithSuggestion: number;
+                }[];
+            }[];
+        };
+        /**
+         * @description What to buy, from whom and by when, for one item and week.
+         * @example {
+         *       "key": "CU-IEC-0800@2026-12-14",
+         *       "sku": "CU-IEC-0800",
+         *       "name": "Enamelled copper 0.80 mm",
+         *       "unit": "kg",
+         *       "supplierId": 1,
+         *       "supplier": "Quillan Drawn Wire GmbH",
+         *       "supplierSku": "QD-CU-0800-G2",
+         *       "quantity": 10,
+         *       "shortfall": 3.2,
+         *       "unitPrice": 13.31,
+         *       "currency": "EUR",
+         *       "total": 133.1,
+         *       "totalInCompanyCurrency": 133.1,
+         *       "packQuantity": 5,
+         *       "raisedToBreak": false,
+         *       "leadTimeDays": 10,
+         *       "needBy": "2026-12-14",
+         *       "orderBy": "2026-12-04",
+         *       "late": false,
+         *       "reason": "BO-3 needs 4.200 kg in week of 14 Dec 2026; projected 3.200 kg below reorder point 5.000 kg",
+         *       "draftOrders": [],
+         *       "needs": [
+         *         {
+         *           "buildOrderId": 3,
+         *           "reference": "BO-3",
+         *           "quantity": 4.2
+         *         }
+         *       ]
+         *     }
+         */
+        BuyingSuggestion: {
+            /** @description The item and the week of its shortfall. */
+            key: string;
+            sku: string;
+            name: string;
+            unit: string;
+            /** @description The offer chosen; null (and the price fields too) when no supplier can price the item. */
+            supplierId: number | null;
+            supplier: string | null;
+            supplierSku: string | null;
+            /** @description To order: at least the shortfall and the reorder quantity, rounded to packs and breaks, in the item's unit. */
+            quantity: number;
+            /** @description How far below the reorder point the week falls, in the item's unit. */
+            shortfall: number;
+            unitPrice: number | null;
+            currency: string | null;
+            total: number | null;
+            totalInCompanyCurrency: number | null;
+            packQuantity: number | null;
+            /** @description True when the quantity was raised to a cheaper quantity break. */
+            raisedToBreak: boolean;
+            leadTimeDays: number | null;
+            /**
+             * Format: date
+             * @description The Monday of the week of the shortfall.
+             */
+            needBy: string;
+            /**
+             * Format: date
+             * @description needBy less the lead time.
+             */
+            orderBy: string;
+            /** @description True when orderBy has passed. */
+            late: boolean;
+            /** @description Why, in words. */
+            reason: string;
+            /** @description Draft purchase orders already holding the item (not on order until sent). */
+            draftOrders: {
+                id: number;
+                number: string;
+            }[];
+            needs: {
+                buildOrderId: number;
+                reference: string;
+                quantity: number;
+            }[];
+        };
+        /**
          * @description Every refusal and error of /api/v1 has this shape.
          * @example {
          *       "error": {
@@ -816,6 +5207,235 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    signIn: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    email: string;
+                    password: string;
+                };
+            };
+        };
+        responses: {
+            /** @description Signed in: the person, and the session cookie. */
+            200: {
+                headers: {
+                    /** @description The session cookie `turnledger_session` (HttpOnly, SameSite=Lax, Secure when the app is served over HTTPS), to send with later requests. */
+                    "Set-Cookie": string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SignedInPerson"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The e-mail or the password is wrong (which one is not said). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Sent with the session cookie from another site (its `Origin` is not Turnledger's own), or without `Origin` or `Referer`. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Too many wrong passwords for this account or from this address: sign-in is paused. Nothing was checked. */
+            429: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After": string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The server is busy checking other passwords, or the database cannot be reached. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    signOut: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Signed out; the cookie is cleared. */
+            204: {
+                headers: {
+                    /** @description Clears `turnledger_session`. */
+                    "Set-Cookie": string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Sent with the session cookie from another site (its `Origin` is not Turnledger's own), or without `Origin` or `Referer`. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getSignedInPerson: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The signed-in person. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SignedInPerson"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listOutboxMessages: {
+        parameters: {
+            query?: {
+                limit?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The messages. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["OutboxMessage"][];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -872,6 +5492,8 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -1017,6 +5639,8 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -1076,6 +5700,8 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -1162,6 +5788,667 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listLocations: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The locations. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Location"][];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    lookUpScannedCode: {
+        parameters: {
+            query?: {
+                /** @description What was scanned or typed: a bare code (`L123` for a lot, `BMAIN-A3` for a location), the path `/scan/L123`, or the whole address a label's QR code holds. */
+                code?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The lot or location. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ScanLookup"];
+                };
+            };
+            /** @description Not a Turnledger code: nothing scanned, another company's barcode, a GS1 code or an address of another site. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description A Turnledger code that names no lot or location. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listStockMovements: {
+        parameters: {
+            query?: {
+                type?: "receipt" | "issue" | "return" | "transfer" | "adjustment" | "count" | "scrap";
+                sku?: string;
+                lot?: string;
+                reference?: string;
+                user?: string;
+                from?: string;
+                to?: string;
+                page?: string;
+                pageSize?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A page of movements. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MovementJournalPage"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    recordStockMovement: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    /** @enum {string} */
+                    type: "receipt" | "issue" | "return" | "transfer" | "adjustment" | "count" | "scrap";
+                    sku: string;
+                    lot?: string;
+                    location: string;
+                    toLocation?: string;
+                    quantity?: number;
+                    /** @enum {string} */
+                    unit?: "kg" | "pcs" | "m";
+                    unitCost?: number;
+                    grossKg?: number;
+                    tareKg?: number;
+                    spoolType?: string;
+                    supplierBatch?: string;
+                    supplierId?: number;
+                    reference?: string;
+                    note?: string;
+                    buildOrderId?: number;
+                };
+            };
+        };
+        responses: {
+            /** @description The movement and the item's balance after it. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["RecordedMovement"];
+                };
+            };
+            /** @description The body was refused (`error.fields` names each field), or it names no such item, location, lot or supplier, a unit other than the item's, or a part of a piece. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No build order with that `buildOrderId`. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The stock would go below zero or take what build orders hold, the item is archived, the lot is on quality hold, or the build order is not open or needs no such item. Nothing was recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    holdLot: {
+        parameters: {
+            query?: {
+                sku?: string;
+            };
+            header?: never;
+            path: {
+                /** @description The lot's number. Lot numbers are unique per item only: when several items have a lot of this number, add `?sku=`. */
+                lot: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    reason: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The lot, now held. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LotHold"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No lot of that number (of that item, with `sku`). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The lot is on hold already, or lots of several items have that number and no `sku` says which. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    releaseLot: {
+        parameters: {
+            query?: {
+                sku?: string;
+            };
+            header?: never;
+            path: {
+                /** @description The lot's number. Lot numbers are unique per item only: when several items have a lot of this number, add `?sku=`. */
+                lot: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: {
+            content: {
+                "application/json": {
+                    reason?: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The lot, now free. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LotHold"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No lot of that number (of that item, with `sku`). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The lot is not on hold, or lots of several items have that number and no `sku` says which. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getLotWhereUsed: {
+        parameters: {
+            query?: {
+                sku?: string;
+            };
+            header?: never;
+            path: {
+                /** @description The lot's number. Lot numbers are unique per item only: when several items have a lot of this number, add `?sku=`. */
+                lot: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The lot's uses. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LotWhereUsed"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No lot of that number (of that item, with `sku`). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Lots of several items have that number and no `sku` says which: the message lists their SKUs. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listLotDocuments: {
+        parameters: {
+            query?: {
+                sku?: string;
+            };
+            header?: never;
+            path: {
+                /** @description The lot's number. Lot numbers are unique per item only: when several items have a lot of this number, add `?sku=`. */
+                lot: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The lot's certificates. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LotDocuments"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No lot of that number (of that item, with `sku`). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Lots of several items have that number and no `sku` says which: the message lists their SKUs. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listStockAlerts: {
+        parameters: {
+            query?: {
+                status?: "open" | "closed" | "all";
+                page?: string;
+                perPage?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A page of alerts; `X-Total-Count` gives how many match. */
+            200: {
+                headers: {
+                    /** @description Alerts matching, on every page. */
+                    "X-Total-Count": string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["StockAlert"][];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -1285,6 +6572,8 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -1398,6 +6687,8 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -1464,6 +6755,8 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -1542,6 +6835,8 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -1591,6 +6886,8 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
@@ -1629,6 +6926,2890 @@ export interface operations {
             /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
             503: {
                 headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listDesigns: {
+        parameters: {
+            query?: {
+                page?: string;
+                perPage?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A page of designs. */
+            200: {
+                headers: {
+                    /** @description Rows matching, on every page. */
+                    "X-Total-Count"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DesignList"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    createDesign: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    poles?: number;
+                    slots?: number;
+                    ratedCurrentA?: number;
+                    ratedTorqueNm?: number;
+                    /** @enum {string} */
+                    torqueBasis: "measured" | "estimated";
+                    insulationClassC?: number;
+                    slotAreaMm2?: number;
+                    slotLinerAreaMm2?: number;
+                    coilSidesPerSlot?: number;
+                    phases?: number;
+                    windingLayers?: number;
+                    /**
+                     * @default star
+                     * @enum {string}
+                     */
+                    phaseConnection?: "star" | "delta";
+                    parallelPaths?: number;
+                    ratedSpeedRpm?: number;
+                    airGapRadiusMm?: number;
+                    airGapFluxDensityT?: number;
+                    poleCoverage?: number;
+                    /** @default  */
+                    notes?: string;
+                    name: string;
+                    /** @default  */
+                    description?: string;
+                    /** @default  */
+                    motorType?: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The new design. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CreatedDesign"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description A design with that name already exists. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getDesign: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The design's number. */
+                designId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The design. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Design"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No design with that number. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    startDesignRevision: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The design's number. */
+                designId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The new draft. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["StartedRevision"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No design with that number. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The latest revision is still a draft: change or release it first. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getDesignRevision: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The design's number. */
+                designId: number;
+                /** @description The revision's number (1, 2, 3 …). */
+                revision: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The revision. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DesignRevision"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No such design or revision. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    changeDesignRevision: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The design's number. */
+                designId: number;
+                /** @description The revision's number (1, 2, 3 …). */
+                revision: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    poles?: number;
+                    slots?: number;
+                    ratedCurrentA?: number;
+                    ratedTorqueNm?: number;
+                    /** @enum {string} */
+                    torqueBasis?: "measured" | "estimated";
+                    insulationClassC?: number;
+                    slotAreaMm2?: number;
+                    slotLinerAreaMm2?: number;
+                    coilSidesPerSlot?: number;
+                    phases?: number;
+                    windingLayers?: number;
+                    /**
+                     * @default star
+                     * @enum {string}
+                     */
+                    phaseConnection?: "star" | "delta";
+                    parallelPaths?: number;
+                    ratedSpeedRpm?: number;
+                    airGapRadiusMm?: number;
+                    airGapFluxDensityT?: number;
+                    poleCoverage?: number;
+                    /** @default  */
+                    notes?: string;
+                    lines?: ({
+                        /** @constant */
+                        kind: "coil";
+                        sku: string;
+                        turns?: number;
+                        strandsInHand?: number;
+                        activeLengthMm?: number;
+                        endTurnLengthMm?: number;
+                        leadLengthMm?: number;
+                        coilsPerMotor?: number;
+                        scrapPercent?: number;
+                        operatingTemperatureC?: number;
+                    } | {
+                        /** @constant */
+                        kind: "magnet";
+                        sku: string;
+                        piecesPerMotor?: number;
+                        operatingTemperatureC?: number;
+                    } | {
+                        /** @constant */
+                        kind: "part";
+                        sku: string;
+                        quantityPerMotor?: number;
+                    })[];
+                };
+            };
+        };
+        responses: {
+            /** @description The changed revision. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DesignRevision"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No such design or revision. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The revision is released and cannot be changed: start a new revision. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    releaseDesignRevision: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The design's number. */
+                designId: number;
+                /** @description The revision's number (1, 2, 3 …). */
+                revision: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The revision, now released. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReleasedRevision"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No such design or revision. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The revision is released already, or has no lines. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getDesignCosting: {
+        parameters: {
+            query?: {
+                quantity?: string;
+                basis?: "best-price" | "stock-average";
+                date?: string;
+            };
+            header?: never;
+            path: {
+                /** @description The design's number. */
+                designId: number;
+                /** @description The revision's number (1, 2, 3 …). */
+                revision: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The costing. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DesignCosting"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No such design or revision. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listWireSubstitutes: {
+        parameters: {
+            query?: {
+                tolerance?: number;
+            };
+            header?: never;
+            path: {
+                /** @description The design's number. */
+                designId: number;
+                /** @description The revision's number (1, 2, 3 …). */
+                revision: number;
+                /** @description The line's position in the revision, from 1. */
+                line: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The substitutes. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WireSubstitutes"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No such design, revision or line. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The line is not a coil line: only coil lines have substitutes. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    applyWireSubstitute: {
+        parameters: {
+            query?: {
+                tolerance?: number;
+            };
+            header?: never;
+            path: {
+                /** @description The design's number. */
+                designId: number;
+                /** @description The revision's number (1, 2, 3 …). */
+                revision: number;
+                /** @description The line's position in the revision, from 1. */
+                line: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    sku: string;
+                    strands: number;
+                };
+            };
+        };
+        responses: {
+            /** @description The draft, changed. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DesignRevision"];
+                };
+            };
+            /** @description The new draft revision. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DesignRevision"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No such design, revision or line. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Nothing was written: the design has a draft already, the choice is not among the current substitutes, the line is not a coil line, or it changed meanwhile. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listDesignInsight: {
+        parameters: {
+            query?: {
+                quantity?: string;
+                date?: string;
+                basis?: "best-price" | "stock-average";
+                copperBase?: string;
+                aluminiumBase?: string;
+                page?: string;
+                perPage?: string;
+                history?: "0" | "1";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A page of costed designs. */
+            200: {
+                headers: {
+                    /** @description Rows matching, on every page. */
+                    "X-Total-Count"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DesignInsightList"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getStockValue: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The stock value. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["StockValue"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listBuildOrders: {
+        parameters: {
+            query?: {
+                search?: string;
+                status?: "draft" | "reserved" | "in_progress" | "complete" | "cancelled";
+                page?: string;
+                pageSize?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A page of build orders. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildOrderPage"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    createBuildOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    designId: number;
+                    revision: number;
+                    quantity: number;
+                    note?: string;
+                    plannedStart?: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The new draft order. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildOrderCreated"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The design has no such revision. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The revision is a draft, has no lines, a line cannot be worked out, or an item is gone or stocked in another unit. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getBuildOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order's number (BO-12 is 12). Anything but a whole number answers 404. */
+                orderId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The order. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildOrder"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No build order with that number. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    changeBuildOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order's number (BO-12 is 12). Anything but a whole number answers 404. */
+                orderId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    quantity?: number;
+                    plannedStart?: string | null;
+                };
+            };
+        };
+        responses: {
+            /** @description The order after the change. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildOrderChanged"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No build order with that number. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The order's state forbids the change (stock already issued, or the order is closed), or the revision cannot be worked out for the new number. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    takeBuildOrderStep: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order's number (BO-12 is 12). Anything but a whole number answers 404. */
+                orderId: string;
+                /** @description reserve, issue, cancel or complete; any other step answers 404. */
+                step: "reserve" | "issue" | "cancel" | "complete";
+            };
+            cookie?: never;
+        };
+        requestBody?: {
+            content: {
+                "application/json": components["schemas"]["BuildOrderReserveRequest"] | components["schemas"]["BuildOrderIssueRequest"] | components["schemas"]["BuildOrderCloseRequest"];
+            };
+        };
+        responses: {
+            /** @description `reserve`, `cancel` or `complete` done. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildOrderReservation"] | components["schemas"]["BuildOrderCancelled"] | components["schemas"]["BuildOrderCompleted"];
+                };
+            };
+            /** @description `issue` done: the movement recorded. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildOrderIssue"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this step needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No build order with that number, or no such step. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The order's state forbids the step (for example issuing to a draft, or completing a cancelled order), the order needs no such item, the lot is on hold, or a reservation could not be covered (with `shortages`); nothing was changed. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildOrderRefusal"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listBuildOrderLots: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order's number (BO-12 is 12). Anything but a whole number answers 404. */
+                orderId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The order's lots. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuildOrderLots"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No build order with that number. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listSuppliers: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The suppliers. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SupplierList"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    createSupplier: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    name: string;
+                    /** Format: email */
+                    email?: string;
+                    currency: string;
+                    leadTimeDays?: number;
+                    notes?: string;
+                    /** Format: email */
+                    orderEmail?: string;
+                    /**
+                     * @default order
+                     * @enum {string}
+                     */
+                    metalBaseFixedAt?: "order" | "delivery";
+                    /** @default 10 */
+                    wireTolerancePercent?: number;
+                    /** @default 0 */
+                    pieceTolerancePercent?: number;
+                };
+            };
+        };
+        responses: {
+            /** @description The new supplier. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Supplier"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Another supplier has that name. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getSupplier: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The supplier's id (a whole number). */
+                supplierId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The supplier. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Supplier"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No supplier with that id. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    changeSupplier: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The supplier's id (a whole number). */
+                supplierId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    name?: string;
+                    email?: string | null;
+                    currency?: string;
+                    leadTimeDays?: number | null;
+                    notes?: string | null;
+                    orderEmail?: string | null;
+                    /** @enum {string} */
+                    metalBaseFixedAt?: "order" | "delivery";
+                    wireTolerancePercent?: number;
+                    pieceTolerancePercent?: number;
+                };
+            };
+        };
+        responses: {
+            /** @description The changed supplier. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Supplier"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No supplier with that id. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Another supplier has that name. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    uploadPriceList: {
+        parameters: {
+            query?: {
+                /** @description "1": read only the file's header row, first data row and sheets (the form needs only file and sheet); nothing is written. */
+                layout?: string;
+                /** @description "1": check every row and answer a preview; nothing is written. Without it (or with any other value) the upload commits. */
+                dryRun?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": components["schemas"]["PriceListUploadForm"];
+            };
+        };
+        responses: {
+            /** @description ?layout=1: the file's layout. ?dryRun=1: the preview. A commit of a file imported before: nothing changed. With `Accept: application/x-ndjson`: the progress stream. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PriceListLayout"] | components["schemas"]["PriceListPreview"] | components["schemas"]["PriceListAlreadyImported"];
+                    /**
+                     * @example {
+                     *       "type": "progress",
+                     *       "step": "check",
+                     *       "processed": 10000,
+                     *       "total": 42000
+                     *     }
+                     */
+                    "application/x-ndjson": components["schemas"]["PriceListProgressEvent"];
+                };
+            };
+            /** @description The list was imported. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PriceListImported"];
+                };
+            };
+            /** @description The form was refused (`error.fields` names file, supplier or mapping), no supplier has that name, or the file cannot be read as a price list. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The file is larger than 20 MB. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Some rows are invalid; nothing was imported. `invalid` lists the first 1,000 lines with errors. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PriceListInvalid"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listPurchaseOrders: {
+        parameters: {
+            query?: {
+                search?: string;
+                status?: "draft" | "sent" | "partly_received" | "received" | "cancelled" | "closed_short";
+                supplierId?: number;
+                page?: string;
+                pageSize?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A page of orders. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PurchaseOrderPage"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    createPurchaseOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    supplierId: number;
+                    currency?: string;
+                    notes?: string;
+                    lines: {
+                        sku: string;
+                        quantity: number;
+                        unitPrice?: number;
+                        overrideReason?: string;
+                        requestedDate?: string;
+                    }[];
+                };
+            };
+        };
+        responses: {
+            /** @description The draft order. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PurchaseOrder"];
+                };
+            };
+            /** @description The body was refused, or a quantity is not whole for an item counted in pieces. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No supplier has that id, no item has a SKU, an item is archived, or no price or exchange rate prices a line. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getPurchaseOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order's id, a whole number (PO-000003 is 3). */
+                orderId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The order. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PurchaseOrder"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No purchase order with that id. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    changePurchaseOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order's id, a whole number (PO-000003 is 3). */
+                orderId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    currency?: string;
+                    notes?: string;
+                    lines?: ({
+                        id: number;
+                        /** @constant */
+                        remove?: true;
+                        quantity?: number;
+                        unitPrice?: number | null;
+                        overrideReason?: string;
+                        requestedDate?: string | null;
+                    } | {
+                        sku: string;
+                        quantity: number;
+                        unitPrice?: number;
+                        overrideReason?: string;
+                        requestedDate?: string;
+                    })[];
+                };
+            };
+        };
+        responses: {
+            /** @description The changed order. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PurchaseOrder"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No purchase order with that id. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The order is no longer a draft. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The order has no line with an id given, no item has a SKU, an item is archived, or no price or exchange rate prices a line. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    sendPurchaseOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order's id, a whole number (PO-000003 is 3). */
+                orderId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The order after the step. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PurchaseOrder"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No purchase order with that id. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The order is not a draft, or has no lines. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The supplier has no e-mail address, or no price or exchange rate prices a line on the day. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    cancelPurchaseOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order's id, a whole number (PO-000003 is 3). */
+                orderId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: {
+            content: {
+                "application/json": {
+                    reason?: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The order after the step. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PurchaseOrder"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No purchase order with that id. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The order is past cancelling: something has arrived (close it short instead), or it has ended. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    closePurchaseOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order's id, a whole number (PO-000003 is 3). */
+                orderId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: {
+            content: {
+                "application/json": {
+                    reason?: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The order after the step. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PurchaseOrder"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No purchase order with that id. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The order is not sent or partly received. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    receivePurchaseOrder: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The order: its id or its number as people write it ("3", "PO-000003", "po 3"). */
+                orderId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    lines: {
+                        lineId: number;
+                        lot?: string;
+                        location: string;
+                        supplierBatch?: string;
+                        quantity?: number;
+                        grossKg?: number;
+                        tareKg?: number;
+                    }[];
+                };
+            };
+        };
+        responses: {
+            /** @description The receipt and the order after it. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PurchaseReceipt"];
+                };
+            };
+            /** @description The body was refused, or an entry does not fit its item (weights for an item that is not wire, no tare, an unknown location). */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No purchase order by that id or number. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description A line would go past its delivery tolerance, no rate or metal base prices it on the day, or the stock ledger refuses an entry. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description A line is not on the order, or the order is not sent (a draft, or cancelled, closed or received). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listMetalBase: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The base prices. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MetalBaseList"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    setMetalBase: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    /** @enum {string} */
+                    conductor: "copper" | "aluminium";
+                    currency: string;
+                    pricePerKg: number;
+                    validFrom: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The base prices, with the new one. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MetalBaseList"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    listCurrencyRates: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The rates. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CurrencyRates"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    setCurrencyRate: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    currency: string;
+                    rate: number;
+                    validFrom: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The rates, with the new one. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CurrencyRates"];
+                };
+            };
+            /** @description The body was refused (`error.fields` names each field), or it names the company currency itself, which needs no rate. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Signed in, but without a role this operation needs. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The body is larger than this operation takes. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getItemPrices: {
+        parameters: {
+            query?: {
+                /** @description The quantity to price, in the item's unit. */
+                quantity?: string;
+                /** @description The day to price, YYYY-MM-DD; today when not given. */
+                date?: string;
+                /** @description 1 adds the year's price history. */
+                history?: "0" | "1";
+            };
+            header?: never;
+            path: {
+                /** @description The item's SKU. */
+                sku: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The item's prices. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ItemPrices"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description No item with that SKU. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+        };
+    };
+    getBuyingPlan: {
+        parameters: {
+            query?: {
+                weeks?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The plan. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BuyingPlan"];
+                };
+            };
+            /** @description The query or body was refused: `error.fields` names each field. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description Not signed in: send the session cookie or a bearer token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorBody"];
+                };
+            };
+            /** @description The database cannot be reached; nothing was changed. Retry after the seconds in `Retry-After`. */
+            503: {
+                headers: {
+                    /** @description Seconds to wait before trying again. */
+                    "Retry-After"?: number;
                     [name: string]: unknown;
                 };
                 content: {
