@@ -1,0 +1,25 @@
+import { lazy, Suspense, useEffect, useState } from "react";
+
+/** Swagger UI and its styles: a chunk of their own, fetched when the /api page runs. */
+const SwaggerView = lazy(() => import("./swagger-view"));
+
+/**
+ * The rendered API document. The server sends only a note that it is on its
+ * way: the viewer runs in the browser alone, loaded after the page hydrates.
+ */
+export function ApiReferenceViewer({ documentUrl }: { documentUrl: string }) {
+  const [inBrowser, setInBrowser] = useState(false);
+  useEffect(() => setInBrowser(true), []);
+  const loading = (
+    <p role="status" className="text-sm text-graphite-500">
+      Loading the operations…
+    </p>
+  );
+  return inBrowser ? (
+    <Suspense fallback={loading}>
+      <SwaggerView documentUrl={documentUrl} />
+    </Suspense>
+  ) : (
+    loading
+  );
+}
