@@ -1,4 +1,4 @@
-import { lazy, Suspense, useEffect, useState } from "react";
+import { lazy, Suspense, useSyncExternalStore } from "react";
 
 /** Swagger UI and its styles: a chunk of their own, fetched when the /api page runs. */
 const SwaggerView = lazy(() => import("./swagger-view"));
@@ -8,8 +8,12 @@ const SwaggerView = lazy(() => import("./swagger-view"));
  * way: the viewer runs in the browser alone, loaded after the page hydrates.
  */
 export function ApiReferenceViewer({ documentUrl }: { documentUrl: string }) {
-  const [inBrowser, setInBrowser] = useState(false);
-  useEffect(() => setInBrowser(true), []);
+  // False in the server's render and while hydrating, true in the browser after.
+  const inBrowser = useSyncExternalStore(
+    neverChanges,
+    () => true,
+    () => false,
+  );
   const loading = (
     <p role="status" className="text-sm text-graphite-500">
       Loading the operations…
@@ -22,4 +26,8 @@ export function ApiReferenceViewer({ documentUrl }: { documentUrl: string }) {
   ) : (
     loading
   );
+}
+
+function neverChanges(): () => void {
+  return () => undefined;
 }
