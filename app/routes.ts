@@ -14,6 +14,8 @@ export default [
     route("admin/people/:userId", "routes/admin-person.tsx"),
     route("admin/outbox", "routes/admin-outbox.tsx"),
     route("account", "routes/account.tsx"),
+    // The API's reference (its contract rendered); every other path under /api is the API's.
+    route("api", "routes/api-reference.tsx"),
     route("tools/coil-estimator", "routes/coil-estimator.tsx"),
     route("tools/magnet-estimator", "routes/magnet-estimator.tsx"),
     route("reference", "routes/reference.tsx"),
@@ -184,7 +186,7 @@ export default [
     route("*", "routes/api.v1.not-found.ts"),
   ]),
 
-  // /api, /api/ and other versions than v1: the API's 404 too, never the HTML page.
+  // Other paths under /api (other versions than v1): the API's 404 too, never the HTML page.
   route("api/*", "routes/api.v1.not-found.ts", { id: "api-not-found" }),
 
   route("*", "routes/not-found.tsx"),

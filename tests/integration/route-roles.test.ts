@@ -135,6 +135,13 @@ const table: Row[] = [
     path: "/account",
     expect: { anonymous: 302, signedIn: 400 },
   },
+  // The API reference page: anyone signed in; /api/<anything else> stays the API's JSON 404.
+  {
+    file: "routes/api-reference.tsx",
+    method: "GET",
+    path: "/api",
+    expect: { anonymous: 302, signedIn: 200 },
+  },
   {
     file: "routes/sign-in.tsx",
     method: "GET",

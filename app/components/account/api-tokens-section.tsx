@@ -1,4 +1,5 @@
 import type { SubmissionResult } from "@conform-to/react";
+import { Link } from "react-router";
 import type { Role } from "~/lib/roles";
 import { ApiTokenTable, type ApiTokenRow } from "./api-token-table";
 import { NewTokenForm } from "./new-token-form";
@@ -28,7 +29,14 @@ export function ApiTokensSection({
       <p className="text-sm text-graphite-700">
         Scripts and other tools call <code>/api/v1</code> with{" "}
         <code>Authorization: Bearer &lt;token&gt;</code>. A token acts with the
-        roles you give it, and never with more than you hold.
+        roles you give it, and never with more than you hold.{" "}
+        <Link
+          to="/api"
+          className="font-medium text-copper-700 underline underline-offset-2 hover:text-copper-800"
+        >
+          The API reference
+        </Link>{" "}
+        lists every operation and lets you try them as yourself.
       </p>
       {newToken ? (
         <div
