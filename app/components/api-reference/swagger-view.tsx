@@ -3,7 +3,7 @@
  * app). Loaded only by the /api page, and only in the browser
  * (api-reference-viewer.tsx), so no other page's JavaScript carries it.
  * "Try it out" sends same-origin requests: the browser adds the person's own
- * session cookie, and the app's Origin on writes (docs/decisions/0XX).
+ * session cookie, and the app's Origin on writes (docs/decisions/047).
  */
 import { useEffect, useRef } from "react";
 import SwaggerUI from "swagger-ui-react";
