@@ -27,6 +27,8 @@ export const domainLayers = [
   ["buying-plan"],
   ["stocktakes"],
   ["labels"],
+  // The API's contract describes every domain's schemas; the typed client reads only its types.
+  ["api-contract", "api-client"],
   ["components"],
   ["routes"],
 ];
