@@ -166,8 +166,11 @@ describe("the pick list of a build order", () => {
     await page.waitForURL(`**/build-orders/${orderId}/pick-list`);
     await waitForHydration(page);
 
+    // The address changes a moment before the new page is drawn: wait for its heading.
     const heading = page.getByRole("heading", { level: 1 });
-    expect(await heading.innerText()).toBe(`Pick list BO-${orderId}`);
+    await expect
+      .poll(() => heading.innerText())
+      .toBe(`Pick list BO-${orderId}`);
     const facts = (await page.locator("article header dl").innerText()).replace(
       /\u00a0/g,
       " ",
@@ -221,9 +224,10 @@ describe("the count sheet of a location", () => {
     );
     await page.waitForURL(`**/stock/locations/${bins.c}/count-sheet`);
     await waitForHydration(page);
-    expect(await page.getByRole("heading", { level: 1 }).innerText()).toBe(
-      `Count sheet ${bins.c}`,
-    );
+    // The address changes a moment before the new page is drawn: wait for its heading.
+    await expect
+      .poll(() => page.getByRole("heading", { level: 1 }).innerText())
+      .toBe(`Count sheet ${bins.c}`);
     const facts = await page.locator("article header dl").innerText();
     expect(facts).toContain(`B${bins.c}`);
     expect(facts).toContain("Printed");
