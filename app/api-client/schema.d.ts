@@ -6418,8 +6418,8 @@ export interface operations {
             /** @description A page of alerts; `X-Total-Count` gives how many match. */
             200: {
                 headers: {
-                    /** @description Alerts matching, on every page. */
-                    "X-Total-Count": string;
+                    /** @description Rows matching, on every page. */
+                    "X-Total-Count"?: number;
                     [name: string]: unknown;
                 };
                 content: {

@@ -110,6 +110,22 @@ export interface OperationSpec {
   extra?: Partial<ZodOpenApiOperationObject>;
 }
 
+/** A JSON array answer with the number of matching rows in its X-Total-Count header. */
+export function countedAnswer(
+  description: string,
+  schema: z.ZodType,
+): ZodOpenApiResponseObject {
+  return {
+    ...jsonAnswer(description, schema),
+    headers: {
+      "X-Total-Count": {
+        description: "Rows matching, on every page.",
+        schema: { type: "integer", minimum: 0 },
+      },
+    },
+  };
+}
+
 /** A success answer with a JSON body. */
 export function jsonAnswer(
   description: string,

@@ -1,8 +1,8 @@
 /**
  * QR codes for the browser tests: read a label's QR code (as the page displays it) with
  * @zxing/library, the package the app's camera reader is built on, and write a
- * QR code as a Y4M video file that Chromium plays as a fake camera
- * (`--use-file-for-fake-video-capture`).
+ * QR code as a Y4M file of camera frames that Chromium plays as its fake camera
+ * (a command-line flag; see the camera test in tests/e2e/labels-and-scanning.test.ts).
  */
 import fs from "node:fs";
 import os from "node:os";

@@ -18,7 +18,7 @@ import {
   substituteQuerySchema,
 } from "~/designs/wire-substitute-schemas";
 import { insightQueryFieldsSchema } from "~/insight/what-if";
-import { apiOperation, jsonAnswer } from "../operation";
+import { apiOperation, countedAnswer, jsonAnswer } from "../operation";
 import {
   createdDesignSchema,
   designCostingSchema,
@@ -33,18 +33,6 @@ import {
 } from "../schemas/designs";
 
 const tag = "Designs";
-
-const totalCountHeader = {
-  "X-Total-Count": {
-    description: "Rows matching, on every page.",
-    schema: { type: "integer" as const, minimum: 0 },
-  },
-};
-
-/** A JSON array answer with its total in X-Total-Count. */
-function countedAnswer(description: string, schema: z.ZodType) {
-  return { ...jsonAnswer(description, schema), headers: totalCountHeader };
-}
 
 const designId = z
   .number()

@@ -82,7 +82,8 @@ export const itemSchema = itemSummarySchema
       "An item with its balances by lot and location, oldest lot first.",
   });
 
-const skuPath = z.object({
+/** The SKU in an item's address. */
+export const skuPath = z.object({
   sku: z
     .string()
     .meta({ description: "The item's SKU.", example: "CU-IEC-0500" }),

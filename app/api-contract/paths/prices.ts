@@ -1,5 +1,4 @@
 /** Prices in the contract: metal base, currency rates, an item's prices, and the buying plan. */
-import { z } from "zod";
 import type { ZodOpenApiPathsObject } from "zod-openapi";
 import { buyingPlanQuerySchema } from "~/buying-plan/plan-query";
 import { itemPricesQuerySchema } from "~/purchasing/item-prices-query";
@@ -8,6 +7,7 @@ import {
   metalBaseSchema,
 } from "~/purchasing/supplier-schemas";
 import { apiOperation, jsonAnswer } from "../operation";
+import { skuPath } from "./items";
 import {
   buyingPlanSchema,
   currencyRatesSchema,
@@ -77,11 +77,7 @@ export const pricePaths: ZodOpenApiPathsObject = {
       tag,
       caller: "signedIn",
       query: itemPricesQuerySchema,
-      path: z.object({
-        sku: z
-          .string()
-          .meta({ description: "The item's SKU.", example: "CU-IEC-0500" }),
-      }),
+      path: skuPath,
       answers: { 200: jsonAnswer("The item's prices.", itemPricesSchema) },
       refusals: { 404: "No item with that SKU." },
     }),

@@ -10,7 +10,7 @@ import {
 } from "~/lots/lot-hold-requests";
 import { movementJournalQuerySchema } from "~/stock/movement-journal-query";
 import { movementRequestSchema } from "~/stock/movement-request";
-import { apiOperation, jsonAnswer } from "../operation";
+import { apiOperation, countedAnswer, jsonAnswer } from "../operation";
 import {
   locationSchema,
   lotDocumentsSchema,
@@ -178,19 +178,10 @@ export const stockPaths: ZodOpenApiPathsObject = {
       caller: "signedIn",
       query: alertListQuerySchema,
       answers: {
-        200: {
-          description:
-            "A page of alerts; `X-Total-Count` gives how many match.",
-          headers: z.object({
-            "X-Total-Count": z
-              .string()
-              .regex(/^\d+$/)
-              .meta({ description: "Alerts matching, on every page." }),
-          }),
-          content: {
-            "application/json": { schema: z.array(stockAlertSchema) },
-          },
-        },
+        200: countedAnswer(
+          "A page of alerts; `X-Total-Count` gives how many match.",
+          z.array(stockAlertSchema),
+        ),
       },
     }),
   },
