@@ -280,6 +280,12 @@ async function rawImportOfTheSameRows(
     );
     await connection.commit();
     const ms = performance.now() - started;
+    // As many items as the file has supplier SKUs, as the app's commit creates.
+    const skus = new Set(cells.map((row) => row[0]));
+    if (itemIds.size !== skus.size)
+      throw new Error(
+        `raw import made ${itemIds.size} items for ${skus.size} SKUs`,
+      );
 
     await connection.query("DELETE FROM price_lines WHERE import_id = ?", [
       importId,
