@@ -97,6 +97,8 @@ interface RowMatcher {
   match(row: PriceListRow): MatchedRow | LineError;
   /** Conductor of each catalogue wire item, for adder lines. */
   conductorOf: Map<number, string>;
+  /** Every magnet grade name and alias, lower case: what the rows are read against. */
+  knownGrades: ReadonlySet<string>;
 }
 
 /**
@@ -132,11 +134,6 @@ async function loadRowMatcher(
       and(eq(items.id, wireItems.itemId), eq(items.active, true)),
     )
     .orderBy(items.id);
-  const wiresBySize = new Map<string, typeof wires>();
-  for (const wire of wires) {
-    const key = `${wire.standard} ${wire.size}`;
-    wiresBySize.set(key, [...(wiresBySize.get(key) ?? []), wire]);
-  }
   const gradeKeys = new Map<string, string>();
   for (const grade of await db
     .select({
@@ -148,6 +145,14 @@ async function loadRowMatcher(
     for (const name of [grade.key, grade.name, ...grade.aliases.split(",")])
       if (name) gradeKeys.set(name.toLowerCase(), grade.key);
   }
+  // Appended in place: a size or grade shared by thousands of catalogue items stays linear.
+  const wiresBySize = new Map<string, typeof wires>();
+  for (const wire of wires) {
+    const key = `${wire.standard} ${wire.size}`;
+    const same = wiresBySize.get(key);
+    if (same) same.push(wire);
+    else wiresBySize.set(key, [wire]);
+  }
   const magnetsByGrade = new Map<string, number[]>();
   for (const magnet of await db
     .select({ id: items.id, gradeKey: magnetItems.gradeKey })
@@ -156,10 +161,9 @@ async function loadRowMatcher(
       items,
       and(eq(items.id, magnetItems.itemId), eq(items.active, true)),
     )) {
-    magnetsByGrade.set(magnet.gradeKey, [
-      ...(magnetsByGrade.get(magnet.gradeKey) ?? []),
-      magnet.id,
-    ]);
+    const same = magnetsByGrade.get(magnet.gradeKey);
+    if (same) same.push(magnet.id);
+    else magnetsByGrade.set(magnet.gradeKey, [magnet.id]);
   }
 
   // A SKU's breaks usually follow each other: its new item is worked out once.
@@ -267,6 +271,7 @@ async function loadRowMatcher(
     prepare,
     match,
     conductorOf: new Map(wires.map((wire) => [wire.id, wire.conductor])),
+    knownGrades: new Set(gradeKeys.keys()),
   };
 }
 
@@ -338,21 +343,8 @@ async function readOrImportPriceList(
   const readOptions: PriceListReadOptions = {
     mapping: input.mapping,
     importDay,
-    knownGrades: new Set(
-      (
-        await db
-          .select({
-            key: magnetGrades.key,
-            name: magnetGrades.name,
-            aliases: magnetGrades.aliases,
-          })
-          .from(magnetGrades)
-      ).flatMap((grade) =>
-        [grade.key, grade.name, ...grade.aliases.split(",")]
-          .filter(Boolean)
-          .map((name) => name.toLowerCase()),
-      ),
-    ),
+    // The grades the matcher read: one query, one list for reading and matching.
+    knownGrades: matcher.knownGrades,
     supplierCurrency: supplier.currency as never,
   };
   // Rows that read well but match no catalogue item: listed up to 1,000, all counted.
