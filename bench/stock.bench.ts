@@ -193,7 +193,11 @@ export async function benchStock(input: {
       figure("POST /api/v1/stock-movements", "ms per request", 20, record),
     );
 
-    // The raw SQL of one movement: lock the item, lock/create the balance, write, commit.
+    // The raw SQL of one movement, statement for statement what the app's transaction runs
+    // (app/stock/stock-movements.server.ts) for a receipt of stock kept without lots: lock
+    // the item row (read with the columns the checks use), find the location, lock the
+    // existing balance row, write the balance, append the movement, write the item's kept
+    // on hand and average cost, commit. The app writes no other rows (no audit table).
     const [rows] = await connection.query(
       "SELECT id FROM items WHERE sku = ?",
       [parts[0]],
@@ -211,15 +215,12 @@ export async function benchStock(input: {
       const started = performance.now();
       await connection.beginTransaction();
       await connection.query(
-        "SELECT on_hand, reserved, average_cost FROM items WHERE sku = ? FOR UPDATE",
+        "SELECT id, sku, kind, unit, active, on_hand, reserved, held, average_cost FROM items WHERE sku = ? LIMIT 1 FOR UPDATE",
         [parts[0]],
       );
-      await connection.query("SELECT id FROM locations WHERE code = ?", [
-        input.locationCode,
-      ]);
       await connection.query(
-        "INSERT INTO stock_balances (item_id, lot_id, location_id, on_hand, reserved, updated_at) VALUES (?, 0, ?, 0, 0, NOW(3)) ON DUPLICATE KEY UPDATE item_id = item_id",
-        [itemId, locationId],
+        "SELECT id, code, active FROM locations WHERE code = ? LIMIT 1",
+        [input.locationCode],
       );
       await connection.query(
         "SELECT on_hand, reserved FROM stock_balances WHERE item_id = ? AND lot_id = 0 AND location_id = ? FOR UPDATE",
@@ -234,7 +235,7 @@ export async function benchStock(input: {
         [itemId, locationId, userId],
       );
       await connection.query(
-        "UPDATE items SET on_hand = on_hand + 1, updated_at = NOW(3) WHERE id = ?",
+        "UPDATE items SET on_hand = on_hand + 1, average_cost = 10, updated_at = NOW(3) WHERE id = ?",
         [itemId],
       );
       await connection.commit();
