@@ -10,6 +10,7 @@ import autocannon from "autocannon";
 import mysql from "mysql2/promise";
 import { poolOptionsFromUrl } from "~/db/connection-options";
 import type { Figure } from "./coil-estimates.bench";
+import { rawItemList } from "./stock.bench";
 
 const connections = 20;
 const durationSeconds = 10;
@@ -133,16 +134,10 @@ export async function benchHttpLoad(input: {
 }): Promise<Figure[]> {
   const figures: Figure[] = [];
 
-  // The stock list API, first page by SKU, beside the same page read raw.
-  const stockRaw = await rawServer(input.databaseUrl, async (pool) => {
-    const [rows] = await pool.query(
-      "SELECT sku, name, kind, unit, size_or_grade, on_hand, reserved, reorder_point, reorder_quantity, average_cost, active FROM items WHERE active = 1 ORDER BY sku LIMIT 50",
-    );
-    const [[{ total }]] = (await pool.query(
-      "SELECT COUNT(*) AS total FROM items WHERE active = 1",
-    )) as unknown as [[{ total: number }]];
-    return { items: rows, total };
-  });
+  // The stock list API, first page by SKU, beside the same count and page read raw.
+  const stockRaw = await rawServer(input.databaseUrl, (pool) =>
+    rawItemList(pool, new URLSearchParams("page=1&pageSize=50")),
+  );
   try {
     const app = await load(`${input.baseUrl}/api/v1/items?page=1`, {
       Cookie: input.cookie,

@@ -60,6 +60,44 @@ const listQueries = (index: number) => {
   return variants[index % variants.length]!;
 };
 
+/**
+ * The raw SQL the stock list and the items API wrap, as the app runs it
+ * (app/stock/items.server.ts `listItems`): the count of the matching items, then the page
+ * found on indexes first (ids only) and its rows read by a join: the same filters,
+ * index hint, order and the same 13 columns. Used by the HTTP load bench too.
+ */
+export async function rawItemList(
+  connection: Pick<mysql.Connection, "query">,
+  params: URLSearchParams,
+) {
+  const page = Number(params.get("page") ?? 1);
+  const pageSize = Number(params.get("pageSize") ?? 50);
+  const where = ["active = 1"];
+  const values: unknown[] = [];
+  if (params.get("kind")) {
+    where.push("kind = ?");
+    values.push(params.get("kind"));
+  }
+  if (params.get("belowReorder")) where.push("below_reorder = 1");
+  if (params.get("search")) {
+    where.push("search_text LIKE ?");
+    const search = params.get("search")!;
+    values.push(`%${search.toLowerCase()}%`);
+  }
+  const order =
+    params.get("sort") === "value" ? "stock_value DESC, id DESC" : "sku";
+  const hint = params.get("search") ? "FORCE INDEX (items_search_idx)" : "";
+  const [[{ total }]] = (await connection.query(
+    `SELECT COUNT(*) AS total FROM items ${hint} WHERE ${where.join(" AND ")}`,
+    values,
+  )) as unknown as [[{ total: number }]];
+  const [rows] = await connection.query(
+    `SELECT sku, name, kind, unit, size_or_grade, on_hand, reserved, held, on_order, reorder_point, reorder_quantity, average_cost, active FROM items JOIN (SELECT id FROM items ${hint} WHERE ${where.join(" AND ")} ORDER BY ${order} LIMIT ? OFFSET ?) page_ids USING (id) ORDER BY ${order}`,
+    [...values, pageSize, (page - 1) * pageSize],
+  );
+  return { items: rows, total };
+}
+
 export async function benchStock(input: {
   baseUrl: string;
   databaseUrl: string;
@@ -117,31 +155,10 @@ export async function benchStock(input: {
   const rawList: number[] = [];
   try {
     for (const index of indexes) {
-      const params = new URLSearchParams(listQueries(index));
-      const page = Number(params.get("page") ?? 1);
-      const where = ["active = 1"];
-      const values: unknown[] = [];
-      if (params.get("kind")) {
-        where.push("kind = ?");
-        values.push(params.get("kind"));
-      }
-      if (params.get("belowReorder")) where.push("below_reorder = 1");
-      if (params.get("search")) {
-        where.push("search_text LIKE ?");
-        const search = params.get("search")!;
-        values.push(`%${search.toLowerCase()}%`);
-      }
-      const order =
-        params.get("sort") === "value" ? "stock_value DESC, id DESC" : "sku";
-      const hint = params.get("search") ? "FORCE INDEX (items_search_idx)" : "";
       const started = performance.now();
-      await connection.query(
-        `SELECT COUNT(*) FROM items ${hint} WHERE ${where.join(" AND ")}`,
-        values,
-      );
-      await connection.query(
-        `SELECT sku, name, kind, unit, size_or_grade, on_hand, reserved, reorder_point, reorder_quantity, average_cost, active FROM items JOIN (SELECT id FROM items ${hint} WHERE ${where.join(" AND ")} ORDER BY ${order} LIMIT 50 OFFSET ?) page_ids USING (id) ORDER BY ${order}`,
-        [...values, (page - 1) * 50],
+      await rawItemList(
+        connection,
+        new URLSearchParams(`pageSize=50&${listQueries(index)}`),
       );
       if (index >= 20) rawList.push(performance.now() - started);
     }
@@ -176,7 +193,11 @@ export async function benchStock(input: {
       figure("POST /api/v1/stock-movements", "ms per request", 20, record),
     );
 
-    // The raw SQL of one movement: lock the item, lock/create the balance, write, commit.
+    // The raw SQL of one movement, statement for statement what the app's transaction runs
+    // (app/stock/stock-movements.server.ts) for a receipt of stock kept without lots: lock
+    // the item row (read with the columns the checks use), find the location, lock the
+    // existing balance row, write the balance, append the movement, write the item's kept
+    // on hand and average cost, commit. The app writes no other rows (no audit table).
     const [rows] = await connection.query(
       "SELECT id FROM items WHERE sku = ?",
       [parts[0]],
@@ -194,15 +215,12 @@ export async function benchStock(input: {
       const started = performance.now();
       await connection.beginTransaction();
       await connection.query(
-        "SELECT on_hand, reserved, average_cost FROM items WHERE sku = ? FOR UPDATE",
+        "SELECT id, sku, kind, unit, active, on_hand, reserved, held, average_cost FROM items WHERE sku = ? LIMIT 1 FOR UPDATE",
         [parts[0]],
       );
-      await connection.query("SELECT id FROM locations WHERE code = ?", [
-        input.locationCode,
-      ]);
       await connection.query(
-        "INSERT INTO stock_balances (item_id, lot_id, location_id, on_hand, reserved, updated_at) VALUES (?, 0, ?, 0, 0, NOW(3)) ON DUPLICATE KEY UPDATE item_id = item_id",
-        [itemId, locationId],
+        "SELECT id, code, active FROM locations WHERE code = ? LIMIT 1",
+        [input.locationCode],
       );
       await connection.query(
         "SELECT on_hand, reserved FROM stock_balances WHERE item_id = ? AND lot_id = 0 AND location_id = ? FOR UPDATE",
@@ -217,7 +235,7 @@ export async function benchStock(input: {
         [itemId, locationId, userId],
       );
       await connection.query(
-        "UPDATE items SET on_hand = on_hand + 1, updated_at = NOW(3) WHERE id = ?",
+        "UPDATE items SET on_hand = on_hand + 1, average_cost = 10, updated_at = NOW(3) WHERE id = ?",
         [itemId],
       );
       await connection.commit();

@@ -4,6 +4,7 @@ import { createRequestHandler } from "@react-router/express";
 import compression from "compression";
 import express, {
   type NextFunction,
+  type RequestHandler,
   type Request as ExpressRequest,
   type Response as ExpressResponse,
 } from "express";
@@ -24,7 +25,7 @@ import {
   type RequestContext,
 } from "~/observability/request-context.server";
 import { acceptedRequestId, newRequestId } from "~/observability/request-id";
-import { routeIdFor, routeTree } from "~/observability/route-id";
+import { routeIdMatcher, routeTree } from "~/observability/route-id";
 import { answerDatabaseOutages } from "./database-unavailable";
 import { routedPath } from "./routed-path";
 import { limitRequestBodies } from "./request-size-limits";
@@ -291,17 +292,17 @@ export function noStoreByDefault(
 const serverBuild = () =>
   import("virtual:react-router/server-build") as Promise<ServerBuild>;
 
-const routeTrees = new WeakMap<object, ReturnType<typeof routeTree>>();
+const routeMatchers = new WeakMap<object, (pathname: string) => string>();
 
 /** The route id of a request React Router answered (app/observability/route-id.ts). */
 async function routeIdOf(pathname: string): Promise<string> {
   const build = await serverBuild();
-  let tree = routeTrees.get(build.routes);
-  if (!tree) {
-    tree = routeTree(build.routes);
-    routeTrees.set(build.routes, tree);
+  let matcher = routeMatchers.get(build.routes);
+  if (!matcher) {
+    matcher = routeIdMatcher(routeTree(build.routes));
+    routeMatchers.set(build.routes, matcher);
   }
-  return routeIdFor(tree, pathname);
+  return matcher(pathname);
 }
 
 const httpLog = areaLogger("http");
@@ -433,6 +434,41 @@ export function answerUnexpectedErrors(
     .send(unexpectedErrorText(response.locals.requestId as string | undefined));
 }
 
+/** The app's server build as it is served: loaders and actions answer outages and unexpected errors. */
+function appBuild(): Promise<ServerBuild> {
+  return serverBuild()
+    .then(answerDatabaseOutages)
+    .then(referenceUnexpectedErrors);
+}
+
+function loadContext(request: ExpressRequest, response: ExpressResponse) {
+  return {
+    clientAddress: request.ip ?? request.socket.remoteAddress ?? "unknown",
+    cspNonce: String(response.locals.cspNonce),
+  };
+}
+
+/**
+ * React Router's request handler. Given the build as a function, React Router derives
+ * its route tables from it again on every request (flattening and ranking every route),
+ * which Vite's dev server needs as files change; a built app never changes, so it gets
+ * the build itself and React Router derives them once.
+ */
+function reactRouterHandler(): RequestHandler {
+  if (servedByViteDevServer)
+    return createRequestHandler({
+      build: appBuild,
+      getLoadContext: loadContext,
+    });
+  let handler: Promise<RequestHandler> | undefined;
+  return (request, response, next) => {
+    handler ??= appBuild().then((build) =>
+      createRequestHandler({ build, getLoadContext: loadContext }),
+    );
+    handler.then((handle) => handle(request, response, next), next);
+  };
+}
+
 export const app = express();
 
 app.disable("x-powered-by");
@@ -466,16 +502,5 @@ app.use((_request, response, next) => {
   response.locals.routeLabel = routedByReactRouter;
   next();
 });
-app.use(
-  createRequestHandler({
-    build: () =>
-      serverBuild().then(answerDatabaseOutages).then(referenceUnexpectedErrors),
-    getLoadContext(request, response) {
-      return {
-        clientAddress: request.ip ?? request.socket.remoteAddress ?? "unknown",
-        cspNonce: String(response.locals.cspNonce),
-      };
-    },
-  }),
-);
+app.use(reactRouterHandler());
 app.use(answerUnexpectedErrors);

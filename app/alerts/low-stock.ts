@@ -26,13 +26,21 @@ import { purchaseOrderNumber } from "~/purchase-orders/purchase-order-status";
 
 export type AlertChange = "open" | "close" | "none";
 
+/** Whether the item is low: a reorder point above zero, and less than that available. */
+export function isLow(input: {
+  available: bigint;
+  reorderPoint: bigint;
+}): boolean {
+  return input.reorderPoint > 0n && input.available < input.reorderPoint;
+}
+
 /** What happens to an item's alert after its available stock changed. */
 export function alertChange(input: {
   available: bigint;
   reorderPoint: bigint;
   alertOpen: boolean;
 }): AlertChange {
-  const low = input.reorderPoint > 0n && input.available < input.reorderPoint;
+  const low = isLow(input);
   if (low && !input.alertOpen) return "open";
   if (!low && input.alertOpen) return "close";
   return "none";

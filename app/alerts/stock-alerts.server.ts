@@ -15,6 +15,7 @@ import {
   isNull,
   like,
   sql,
+  type SQL,
 } from "drizzle-orm";
 import { db, type Transaction } from "~/db/client.server";
 import {
@@ -50,6 +51,7 @@ import {
   alertModeOf,
   coveredText,
   digestMail,
+  isLow,
   orderCoverage,
   type AlertMailFacts,
   type AlertPerson,
@@ -275,11 +277,10 @@ async function recoverAlert(
  * Checks the items after their stock changed: opens, keeps or closes each
  * one's alert, and whether sent orders cover it. Call it after the stock (or
  * purchase-order) transaction has committed. Errors are logged, never thrown:
- * the stock work has already been done.
+ * the stock work has already been done. `touched` picks the items (by id or
+ * by SKU), read in the same query as their alerts.
  */
-export async function checkStockAlerts(itemIds: readonly number[]) {
-  const ids = [...new Set(itemIds)];
-  if (ids.length === 0) return;
+async function checkStockAlertsWhere(touched: SQL) {
   try {
     const rows = await db
       .select({
@@ -299,13 +300,10 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
       .from(items)
       .leftJoin(stockAlerts, eq(stockAlerts.openItemId, items.id))
       .leftJoin(suppliers, eq(suppliers.id, items.preferredSupplierId))
-      .where(inArray(items.id, ids));
-    const lowIds = rows
-      .filter((row) => parseQuantity(row.reorderPoint) > 0n)
-      .map((row) => row.id);
-    const openLines = await openOrderLinesOf(lowIds);
-    for (const row of rows) {
-      const item = {
+      .where(touched);
+    const checked = rows.map((row) => ({
+      row,
+      item: {
         id: row.id,
         sku: row.sku,
         name: row.name,
@@ -316,7 +314,15 @@ export async function checkStockAlerts(itemIds: readonly number[]) {
           parseQuantity(row.held),
         reorderPoint: parseQuantity(row.reorderPoint),
         reorderQuantity: parseQuantity(row.reorderQuantity),
-      };
+      },
+    }));
+    // Only a low item's alert looks at what sent orders bring (its cover): the orders
+    // are read for those alone, and not at all when none is low (most movements).
+    const lowIds = checked
+      .filter(({ item }) => isLow(item))
+      .map(({ item }) => item.id);
+    const openLines = await openOrderLinesOf(lowIds);
+    for (const { row, item } of checked) {
       const change = alertChange({
         available: item.available,
         reorderPoint: item.reorderPoint,
@@ -621,18 +627,16 @@ export async function checkStockAlertsOfOrder(orderId: number) {
   }
 }
 
-/** Checks the items with these SKUs (after a movement). */
+/** Checks the items with these ids (after their stock changed); see checkStockAlertsWhere. */
+export async function checkStockAlerts(itemIds: readonly number[]) {
+  if (itemIds.length > 0)
+    await checkStockAlertsWhere(inArray(items.id, [...new Set(itemIds)]));
+}
+
+/** Checks the items with these SKUs (after a movement), found in the same query as their alerts. */
 export async function checkStockAlertsOfSkus(skus: readonly string[]) {
-  try {
-    if (skus.length === 0) return;
-    const found = await db
-      .select({ id: items.id })
-      .from(items)
-      .where(inArray(items.sku, [...skus]));
-    await checkStockAlerts(found.map((item) => item.id));
-  } catch (error) {
-    alertsLog.error({ err: error }, "low-stock check failed");
-  }
+  if (skus.length > 0)
+    await checkStockAlertsWhere(inArray(items.sku, [...new Set(skus)]));
 }
 
 // Every movement the ledger commits is checked against the reorder points, once, after

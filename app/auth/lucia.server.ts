@@ -1,9 +1,9 @@
-import { DrizzleMySQLAdapter } from "@lucia-auth/adapter-drizzle";
 import { Lucia, TimeSpan } from "lucia";
 import { db } from "~/db/client.server";
-import { sessions, users } from "~/db/schema";
+import type { Role } from "~/lib/roles";
+import { SessionAdapter } from "./session-adapter.server";
 
-const adapter = new DrizzleMySQLAdapter(db, sessions, users);
+const adapter = new SessionAdapter(db);
 
 /** Session cookies are Secure in production and behind an https:// APP_URL, unless COOKIE_SECURE=0 (plain-HTTP test rigs). */
 export function cookieIsSecure(): boolean {
@@ -37,6 +37,7 @@ export const lucia = new Lucia(adapter, {
       active: attributes.active,
       locale: attributes.locale,
       timeZone: attributes.timeZone,
+      roles: attributes.roles,
     };
   },
 });
@@ -50,6 +51,8 @@ declare module "lucia" {
       active: boolean;
       locale: string | null;
       timeZone: string | null;
+      /** Read with the session in the same query (./session-adapter.server.ts). */
+      roles: Role[];
     };
     DatabaseSessionAttributes: { startedAt: Date };
   }

@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { generateIdFromEntropySize } from "lucia";
 import { db } from "~/db/client.server";
 import { retryWriteConflicts } from "~/db/write-transaction.server";
-import { sessions, userRoles } from "~/db/schema";
+import { sessions } from "~/db/schema";
 import type { Role } from "~/lib/roles";
 import { userFromApiToken } from "./api-tokens.server";
 import { hashToken } from "./email-tokens.server";
@@ -96,16 +96,12 @@ async function readSession(request: Request): Promise<SessionState> {
       setCookie: lucia.createBlankSessionCookie().serialize(),
     };
   }
-  const roleRows = await db
-    .select({ role: userRoles.role })
-    .from(userRoles)
-    .where(eq(userRoles.userId, user.id));
   return {
     user: {
       id: user.id,
       email: user.email,
       name: user.name,
-      roles: roleRows.map((row) => row.role),
+      roles: user.roles,
       locale: user.locale,
       timeZone: user.timeZone,
     },

@@ -1,5 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { noRouteLabel, pagePathOf, routeIdFor, routeTree } from "./route-id";
+import {
+  noRouteLabel,
+  pagePathOf,
+  routeIdFor,
+  routeIdMatcher,
+  routeTree,
+} from "./route-id";
 
 // The shape of this app's server build (app/routes.ts): a root, a signed-in
 // layout with an index page and nested pages, resource routes, splats.
@@ -69,5 +75,36 @@ describe("routeIdFor", () => {
       noRouteLabel,
     );
     expect(routeIdFor(withoutSplat, "/healthz")).toBe("routes/healthz");
+  });
+});
+
+describe("routeIdMatcher", () => {
+  const paths = [
+    "/build-orders/42",
+    "/build-orders/43.data",
+    "/build-orders",
+    "/",
+    "/_root.data",
+    "/api/v1/items",
+    "/api/v2/whatever",
+    "/no/such/page",
+    `/build-orders/${"7".repeat(300)}`,
+  ];
+
+  it("answers as routeIdFor does, the first time and again from memory", () => {
+    const matcher = routeIdMatcher(tree);
+    for (const round of [1, 2])
+      for (const path of paths)
+        expect(matcher(path), `${path}, round ${round}`).toBe(
+          routeIdFor(tree, path),
+        );
+  });
+
+  it("keeps answering right past its capacity", () => {
+    const matcher = routeIdMatcher(tree, 3);
+    for (let order = 0; order < 40; order += 1)
+      expect(matcher(`/build-orders/${order % 7}`)).toBe("routes/build-order");
+    expect(matcher("/build-orders")).toBe("routes/build-orders");
+    expect(matcher("/set-password")).toBe("routes/set-password");
   });
 });

@@ -58,3 +58,30 @@ export function routeIdFor(tree: RouteObject[], pathname: string): string {
   const matches = matchRoutes(tree, pagePathOf(pathname));
   return matches?.at(-1)?.route.id ?? noRouteLabel;
 }
+
+/** Paths longer than this are matched afresh every time, never remembered. */
+const rememberedPathLength = 200;
+
+/**
+ * {@link routeIdFor} over one tree, remembering its answers by path (at most `capacity`,
+ * forgotten all at once when full). `matchRoutes` flattens and ranks the whole tree on
+ * every call, which under load cost more than the stock list's own queries; a path's
+ * route never changes for the tree, so a remembered answer is never stale (a new build
+ * is a new tree and a new matcher).
+ */
+export function routeIdMatcher(
+  tree: RouteObject[],
+  capacity = 1000,
+): (pathname: string) => string {
+  const known = new Map<string, string>();
+  return (pathname) => {
+    const remembered = known.get(pathname);
+    if (remembered !== undefined) return remembered;
+    const id = routeIdFor(tree, pathname);
+    if (pathname.length <= rememberedPathLength) {
+      if (known.size >= capacity) known.clear();
+      known.set(pathname, id);
+    }
+    return id;
+  };
+}

@@ -176,24 +176,13 @@ async function findLocation(tx: Transaction, code: string, field: string) {
   return location;
 }
 
-/** Locks (creating when missing) one balance row and returns its on hand and reserved, in thousandths. */
-async function lockBalance(
+/** Locks one balance row and returns its on hand and reserved (as stored), or undefined when there is none. */
+async function lockBalanceRow(
   tx: Transaction,
   itemId: number,
   lotId: number,
   locationId: number,
 ) {
-  await tx
-    .insert(stockBalances)
-    .values({
-      itemId,
-      lotId,
-      locationId,
-      onHand: "0",
-      reserved: "0",
-      updatedAt: new Date(),
-    })
-    .onDuplicateKeyUpdate({ set: { itemId: sql`item_id` } });
   const [row] = await tx
     .select({ onHand: stockBalances.onHand, reserved: stockBalances.reserved })
     .from(stockBalances)
@@ -205,6 +194,36 @@ async function lockBalance(
       ),
     )
     .for("update");
+  return row;
+}
+
+/**
+ * Locks (creating when missing) one balance row and returns its on hand and reserved, in
+ * thousandths. A balance that exists (nearly every movement's) costs one locking read; a
+ * missing one is created, then read locked. The caller holds the item's row lock, which
+ * every writer of the item's balances takes first, so none is created in between.
+ */
+async function lockBalance(
+  tx: Transaction,
+  itemId: number,
+  lotId: number,
+  locationId: number,
+) {
+  let row = await lockBalanceRow(tx, itemId, lotId, locationId);
+  if (!row) {
+    await tx
+      .insert(stockBalances)
+      .values({
+        itemId,
+        lotId,
+        locationId,
+        onHand: "0",
+        reserved: "0",
+        updatedAt: new Date(),
+      })
+      .onDuplicateKeyUpdate({ set: { itemId: sql`item_id` } });
+    row = await lockBalanceRow(tx, itemId, lotId, locationId);
+  }
   return {
     onHand: parseQuantity(row!.onHand),
     reserved: parseQuantity(row!.reserved),

@@ -8,6 +8,8 @@
  *   item row and its balance row in opposite order; InnoDB rolls the app's (lighter)
  *   transaction back, the app runs it again and commits it once, and the low-stock
  *   alert it causes is opened and e-mailed once;
+ * - a rollback: a movement whose last statement fails rolls back whole, and the alert it
+ *   would have caused is never opened nor e-mailed (the check runs after the commit);
  * - retries running out: the test holds the balance row locked while the server waits
  *   at most 1 s for a lock (innodb_lock_wait_timeout); the API answers 503 JSON, the
  *   record form the 503 page, and nothing is written;
@@ -185,9 +187,9 @@ describe("a deadlock between a stock movement and another transaction", () => {
         report.indexOf("TRANSACTIONS\n------------"),
       );
       // InnoDB's report numbers the two transactions and names the one it rolled back:
-      // the app's, the one that was writing its balance row.
+      // the app's, the one that was locking its balance row.
       const appsNumber =
-        /\*\*\* \((\d)\) TRANSACTION:[^*]*insert into `stock_balances`/.exec(
+        /\*\*\* \((\d)\) TRANSACTION:[^*]*from `stock_balances`/.exec(
           deadlock,
         )?.[1];
       expect(appsNumber, deadlock).toBeDefined();
@@ -224,6 +226,60 @@ describe("a deadlock between a stock movement and another transaction", () => {
         [`Low stock: ${sku} %`],
       ),
     ).toBe(1);
+  });
+});
+
+describe("a stock movement whose transaction rolls back", () => {
+  it("opens no alert and e-mails nobody; the same movement committed does both", async () => {
+    const { sku, id: itemId } = await newPart(http, 10);
+    await receive(http, sku, 15);
+    const before = await ledgerOf(itemId);
+    const lowStockMails = () =>
+      database.count(
+        "SELECT COUNT(*) AS n FROM mail_outbox WHERE subject LIKE ?",
+        [`Low stock: ${sku} %`],
+      );
+    const issue = () =>
+      http.send(
+        "POST",
+        "/api/v1/stock-movements",
+        { type: "issue", sku, location, quantity: 6 },
+        storekeeper,
+      );
+
+    // The movement's last statement (the item's kept on hand) fails once its balance
+    // and journal rows are written: the whole transaction rolls back. 15 − 6 = 9 would
+    // be below the reorder point of 10.
+    const root = await database.root();
+    const trigger = `\`${database.databaseName}\`.refuse_item_${itemId}`;
+    try {
+      await root.query(
+        `CREATE TRIGGER ${trigger} BEFORE UPDATE ON \`${database.databaseName}\`.items FOR EACH ROW BEGIN IF NEW.id = ${itemId} THEN SIGNAL SQLSTATE '45000' SET MESSAGE_TEXT = 'refused by the test'; END IF; END`,
+      );
+      const refused = await issue();
+      expect(refused.status, await refused.clone().text()).toBe(500);
+    } finally {
+      await root.query(`DROP TRIGGER IF EXISTS ${trigger}`);
+      await root.end();
+    }
+    expect(await ledgerOf(itemId)).toEqual(before);
+    expect(before.alerts).toBe(0);
+    expect(await lowStockMails()).toBe(0);
+
+    // The same issue committed opens the alert and e-mails it: the checks above could fail.
+    const committed = await issue();
+    expect(committed.status, await committed.clone().text()).toBe(201);
+    expect(await ledgerOf(itemId)).toEqual({
+      movements: 2,
+      onHand: 9,
+      balance: 9,
+      alerts: 1,
+    });
+    await waitForMessage(
+      "buyer@turnledger.test",
+      new RegExp(`Low stock: ${sku} `),
+    );
+    expect(await lowStockMails()).toBeGreaterThan(0);
   });
 });
 
