@@ -1,5 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { noRouteLabel, pagePathOf, routeIdFor, routeTree } from "./route-id";
+import {
+  noRouteLabel,
+  pagePathOf,
+  routeIdFor,
+  routeIdMatcher,
+  routeTree,
+} from "./route-id";
 
 // The shape of this app's server build (app/routes.ts): a root, a signed-in
 // layout with an index page and nested pages, resource routes, splats.
@@ -69,5 +75,21 @@ describe("routeIdFor", () => {
       noRouteLabel,
     );
     expect(routeIdFor(withoutSplat, "/healthz")).toBe("routes/healthz");
+  });
+});
+
+describe("routeIdMatcher", () => {
+  it("answers as routeIdFor does, asked again or after forgetting", () => {
+    const match = routeIdMatcher(tree, 2);
+    const paths = [
+      "/build-orders/42",
+      "/build-orders/42",
+      "/api/v1/items",
+      "/no/such/page",
+      "/build-orders/42",
+      "/_root.data",
+      "/build-orders/7.data",
+    ];
+    for (const path of paths) expect(match(path)).toBe(routeIdFor(tree, path));
   });
 });

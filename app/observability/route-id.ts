@@ -58,3 +58,27 @@ export function routeIdFor(tree: RouteObject[], pathname: string): string {
   const matches = matchRoutes(tree, pagePathOf(pathname));
   return matches?.at(-1)?.route.id ?? noRouteLabel;
 }
+
+/** `routeIdFor` over one tree, remembering the answers for the latest paths asked. */
+export type RouteIdMatcher = (pathname: string) => string;
+
+/**
+ * `matchRoutes` flattens and ranks the whole tree on every call: a matcher keeps the
+ * route ids of the last `remembered` paths (a request's path is asked once per answer,
+ * and under load the same paths come again), forgetting the oldest first.
+ */
+export function routeIdMatcher(
+  tree: RouteObject[],
+  remembered = 1_000,
+): RouteIdMatcher {
+  const known = new Map<string, string>();
+  return (pathname) => {
+    const found = known.get(pathname);
+    if (found !== undefined) return found;
+    const id = routeIdFor(tree, pathname);
+    if (known.size >= remembered)
+      known.delete(known.keys().next().value as string);
+    known.set(pathname, id);
+    return id;
+  };
+}
