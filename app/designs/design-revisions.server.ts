@@ -3,7 +3,7 @@
  * them: the revision's figures and its lines (coil, magnet, part) joined to
  * their catalogue items.
  */
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import {
   designLines,
@@ -37,27 +37,64 @@ export type StoredDesignLine = DesignLine & {
   itemName: string;
 };
 
+// The two reads every costing and design page makes, built once (Drizzle prepares the
+// SQL text a single time; each call only fills in the ids).
+const revisionByNumber = db
+  .select({
+    design: {
+      id: designs.id,
+      name: designs.name,
+      description: designs.description,
+      motorType: designs.motorType,
+    },
+    revision: designRevisions,
+  })
+  .from(designRevisions)
+  .innerJoin(designs, eq(designs.id, designRevisions.designId))
+  .where(
+    and(
+      eq(designRevisions.designId, sql.placeholder("designId")),
+      eq(designRevisions.revision, sql.placeholder("revision")),
+    ),
+  )
+  .limit(1)
+  .prepare();
+
+/** The lines with their items and, for magnets, their grade: one query. */
+const linesOfRevision = db
+  .select({
+    line: designLines,
+    item: {
+      sku: items.sku,
+      name: items.name,
+      unit: items.unit,
+    },
+    wire: {
+      conductor: wireItems.conductor,
+      standard: wireItems.standard,
+      sizeLabel: wireItems.sizeLabel,
+      thermalClass: wireItems.thermalClass,
+      insulation: wireItems.insulation,
+    },
+    magnet: {
+      gradeKey: magnetItems.gradeKey,
+      shape: magnetItems.shape,
+      dimensionsMm: magnetItems.dimensionsMm,
+    },
+    grade: magnetGrades,
+  })
+  .from(designLines)
+  .innerJoin(items, eq(items.id, designLines.itemId))
+  .leftJoin(wireItems, eq(wireItems.itemId, designLines.itemId))
+  .leftJoin(magnetItems, eq(magnetItems.itemId, designLines.itemId))
+  .leftJoin(magnetGrades, eq(magnetGrades.key, magnetItems.gradeKey))
+  .where(eq(designLines.revisionId, sql.placeholder("revisionId")))
+  .orderBy(asc(designLines.position))
+  .prepare();
+
 /** The revision of a design by its number, with the design's name; null when either is missing. */
 export async function findRevision(designId: number, revision: number) {
-  const [found] = await db
-    .select({
-      design: {
-        id: designs.id,
-        name: designs.name,
-        description: designs.description,
-        motorType: designs.motorType,
-      },
-      revision: designRevisions,
-    })
-    .from(designRevisions)
-    .innerJoin(designs, eq(designs.id, designRevisions.designId))
-    .where(
-      and(
-        eq(designRevisions.designId, designId),
-        eq(designRevisions.revision, revision),
-      ),
-    )
-    .limit(1);
+  const [found] = await revisionByNumber.execute({ designId, revision });
   return found ?? null;
 }
 
@@ -94,26 +131,7 @@ export async function loadRevisionLines(
         .where(eq(designRevisions.id, revisionId))
         .limit(1);
   if (!revision) return [];
-  // The lines with their items and, for magnets, their grade: one query.
-  const rows = await db
-    .select({
-      line: designLines,
-      item: {
-        sku: items.sku,
-        name: items.name,
-        unit: items.unit,
-      },
-      wire: wireItems,
-      magnet: magnetItems,
-      grade: magnetGrades,
-    })
-    .from(designLines)
-    .innerJoin(items, eq(items.id, designLines.itemId))
-    .leftJoin(wireItems, eq(wireItems.itemId, designLines.itemId))
-    .leftJoin(magnetItems, eq(magnetItems.itemId, designLines.itemId))
-    .leftJoin(magnetGrades, eq(magnetGrades.key, magnetItems.gradeKey))
-    .where(eq(designLines.revisionId, revisionId))
-    .orderBy(asc(designLines.position));
+  const rows = await linesOfRevision.execute({ revisionId });
   const slotArea = optionalNumber(revision.slotAreaMm2);
   const slotLinerArea = optionalNumber(revision.slotLinerAreaMm2);
 
