@@ -18,6 +18,8 @@ export interface Figure {
   median: number;
   p95: number;
   samples: number[];
+  /** What the figure (or its raw baseline) measures, when the name does not say it all. */
+  note?: string;
 }
 
 function coilInputs(count: number): CoilEstimateInput[] {

@@ -4,6 +4,7 @@
  * `node:http` handler that answers the raw mysql2 query of the same data.
  * The ratio app ÷ raw of requests per second shows what the app costs.
  */
+import { createHash } from "node:crypto";
 import http from "node:http";
 import type { AddressInfo } from "node:net";
 import autocannon from "autocannon";
@@ -53,14 +54,14 @@ function load(
 /** A bare node:http server answering one raw query as JSON, on a free loopback port. */
 async function rawServer(
   databaseUrl: string,
-  answer: (pool: mysql.Pool) => Promise<unknown>,
+  answer: (pool: mysql.Pool, request: http.IncomingMessage) => Promise<unknown>,
 ): Promise<{ url: string; close(): Promise<void> }> {
   const pool = mysql.createPool({
     ...poolOptionsFromUrl(databaseUrl),
     connectionLimit: 10,
   });
-  const server = http.createServer((_request, response) => {
-    answer(pool)
+  const server = http.createServer((request, response) => {
+    answer(pool, request)
       .then((body) => {
         response.writeHead(200, { "Content-Type": "application/json" });
         response.end(JSON.stringify(body));
@@ -149,30 +150,92 @@ export async function benchHttpLoad(input: {
   }
 
   // The design costing API beside the raw reads of the same revision, lines and prices.
-  const costingRaw = await rawServer(input.databaseUrl, async (pool) => {
-    const [revision] = await pool.query(
-      "SELECT * FROM design_revisions WHERE id = ?",
-      [input.revisionId],
-    );
-    const [lines] = await pool.query(
-      "SELECT l.*, i.sku, i.unit FROM design_lines l JOIN items i ON i.id = l.item_id WHERE l.revision_id = ? ORDER BY l.position",
-      [input.revisionId],
-    );
-    const [prices] = await pool.query(
-      "SELECT p.* FROM price_lines p JOIN design_lines l ON l.item_id = p.item_id WHERE l.revision_id = ?",
-      [input.revisionId],
-    );
-    const [bases] = await pool.query("SELECT * FROM metal_base_prices");
-    return { revision, lines, prices, bases };
-  });
+  const costingRaw = await rawServer(input.databaseUrl, (pool, request) =>
+    rawCostingReads(pool, request, {
+      id: input.revisionId,
+      ...revisionOfPath(input.costingPath),
+    }),
+  );
   try {
     const app = await load(`${input.baseUrl}${input.costingPath}`, {
       Cookie: input.cookie,
     });
-    const raw = await load(costingRaw.url);
-    figures.push(...loadFigures("design costing API under load", app, raw));
+    // The same session cookie: the raw handler reads the session as the app must.
+    const raw = await load(costingRaw.url, { Cookie: input.cookie });
+    figures.push(
+      ...loadFigures("design costing API under load", app, raw).map(
+        (figure) => ({ ...figure, note: rawCostingNote }),
+      ),
+    );
   } finally {
     await costingRaw.close();
   }
   return figures;
+}
+
+/** What the raw costing handler reads, for the figures' note. */
+const rawCostingNote =
+  "raw: the statements a costing request sends, bare: the session and its person (sessions ⋈ users by the cookie's SHA-256), the person's roles, the revision ⋈ design, its lines ⋈ items ⋈ wire_items ⋈ magnet_items ⋈ magnet_grades, then side by side the lines' price lines ⋈ items ⋈ suppliers and the metal bases, currency rates and company currency (one statement); answered as JSON, no costing arithmetic";
+
+const rowsAsArray = (pool: mysql.Pool, sql: string, values: unknown[]) =>
+  pool.query({ sql, rowsAsArray: true }, values);
+
+/**
+ * The database work of GET /api/v1/designs/:id/revisions/:n/costing, bare: every table the
+ * app reads for one costing (best price), the same rows, the same statements in the same
+ * order (each waits for what it needs; the price lines and the reference go side by side),
+ * with mysql2 and no framework. See `rawCostingNote`.
+ */
+async function rawCostingReads(
+  pool: mysql.Pool,
+  request: http.IncomingMessage,
+  revision: { id: number; designId: number; revision: number },
+): Promise<unknown> {
+  const token = /turnledger_session=([^;]+)/.exec(
+    request.headers.cookie ?? "",
+  )?.[1];
+  const sessionId = createHash("sha256")
+    .update(token ?? "")
+    .digest("hex");
+  const [[session]] = (await rowsAsArray(
+    pool,
+    "SELECT u.id, u.email, u.name, u.password_hash, u.active, u.locale, u.time_zone, u.created_at, s.id, s.user_id, s.expires_at, s.started_at FROM sessions s INNER JOIN users u ON u.id = s.user_id WHERE s.id = ?",
+    [sessionId],
+  )) as unknown as [unknown[][]];
+  if (!session) throw new Error("raw costing: no session for the cookie");
+  const [roles] = await pool.query(
+    "SELECT role FROM user_roles WHERE user_id = ?",
+    [session[0]],
+  );
+  const [[revisionRow]] = (await rowsAsArray(
+    pool,
+    "SELECT d.id, d.name, d.description, d.motor_type, r.* FROM design_revisions r INNER JOIN designs d ON d.id = r.design_id WHERE r.design_id = ? AND r.revision = ? LIMIT 1",
+    [revision.designId, revision.revision],
+  )) as unknown as [unknown[][]];
+  const [lines] = (await rowsAsArray(
+    pool,
+    "SELECT l.*, i.sku, i.name, i.unit, w.*, m.*, g.* FROM design_lines l INNER JOIN items i ON i.id = l.item_id LEFT JOIN wire_items w ON w.item_id = l.item_id LEFT JOIN magnet_items m ON m.item_id = l.item_id LEFT JOIN magnet_grades g ON g.grade_key = m.grade_key WHERE l.revision_id = ? ORDER BY l.position",
+    [revision.id],
+  )) as unknown as [unknown[][]];
+  const itemIds = [...new Set(lines.map((line) => line[4]))];
+  const [[prices], [reference]] = await Promise.all([
+    rowsAsArray(
+      pool,
+      "SELECT p.item_id, p.supplier_id, p.lead_time_days, p.pack_quantity, p.supplier_sku, p.currency, p.unit_price, p.adder_per_kg, p.conductor, p.min_quantity, p.valid_from, p.import_id, p.line, s.name, s.lead_time_days, i.sku, i.unit FROM price_lines p INNER JOIN items i ON i.id = p.item_id INNER JOIN suppliers s ON s.id = p.supplier_id WHERE p.item_id IN (?) LIMIT ?",
+      [itemIds, 5_000 * itemIds.length],
+    ),
+    pool.query(
+      `SELECT 'base' AS kind, conductor AS a, currency AS b, CAST(price_per_kg AS CHAR) AS c, CAST(valid_from AS CHAR) AS d FROM metal_base_prices
+       UNION ALL SELECT 'rate', currency, NULL, CAST(rate AS CHAR), CAST(valid_from AS CHAR) FROM currency_rates
+       UNION ALL SELECT 'currency', value, NULL, NULL, NULL FROM settings WHERE setting_key = 'company_currency'`,
+    ),
+  ]);
+  return { session, roles, revision: revisionRow, lines, prices, reference };
+}
+
+/** The design id and revision number of a costing path (/api/v1/designs/7/revisions/1/costing…). */
+function revisionOfPath(path: string): { designId: number; revision: number } {
+  const match = /\/designs\/(\d+)\/revisions\/(\d+)\//.exec(path);
+  if (!match) throw new Error(`not a costing path: ${path}`);
+  return { designId: Number(match[1]), revision: Number(match[2]) };
 }

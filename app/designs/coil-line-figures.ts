@@ -121,6 +121,26 @@ export function coilLineFigures(
   ratedCurrentA: number | null = null,
   frequencyHz: number | null = null,
 ): CoilLineFigures {
+  // A costing asks for the same line's figures several times (quantities, cost split,
+  // winding figures): worked out once per line object and current, then remembered
+  // while the line object lives. Lines are values, never changed in place.
+  const key = `${ratedCurrentA}|${frequencyHz}`;
+  let known = figuresByLine.get(line);
+  const found = known?.get(key);
+  if (found) return found;
+  const figures = workOutCoilLineFigures(line, ratedCurrentA, frequencyHz);
+  if (!known) figuresByLine.set(line, (known = new Map()));
+  known.set(key, figures);
+  return figures;
+}
+
+const figuresByLine = new WeakMap<CoilLine, Map<string, CoilLineFigures>>();
+
+function workOutCoilLineFigures(
+  line: CoilLine,
+  ratedCurrentA: number | null,
+  frequencyHz: number | null,
+): CoilLineFigures {
   assertDesignLine(line);
   const input = coilEstimateInputFor(line, ratedCurrentA, frequencyHz);
   const estimate = estimateCoil(input);

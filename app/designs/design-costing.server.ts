@@ -15,7 +15,7 @@ import {
   type CostingWhatIf,
 } from "~/insight/what-if";
 import {
-  loadItemsPricing,
+  loadPricingOfItems,
   type ItemPricing,
 } from "~/purchasing/item-prices.server";
 import { companyCurrency } from "~/purchasing/suppliers.server";
@@ -118,20 +118,31 @@ function bestPriceFor(
 
 /**
  * The best price of every needed item, all items' price lines read at once; with a
- * what-if metal base standing in for the stored bases in the company currency.
+ * what-if metal base standing in for the stored bases in the company currency. Without
+ * a `loadPricing` of the caller's, the items' lines and the pricing reference are read
+ * here, and the company currency comes with them.
  */
 async function bestPricesFor(
   needed: Map<number, { sku: string; quantity: bigint }>,
   motors: number,
   date: string,
   options: {
-    loadPricing: (skus: readonly string[]) => Promise<Map<string, ItemPricing>>;
+    loadPricing?: (
+      skus: readonly string[],
+    ) => Promise<Map<string, ItemPricing>>;
+    currency?: string;
     metalBasePerKg: CostingWhatIf["metalBasePerKg"];
   },
-): Promise<Map<number, ItemUnitPrice>> {
-  const pricings = await options.loadPricing(
-    [...needed.values()].map((entry) => entry.sku),
-  );
+): Promise<{ prices: Map<number, ItemUnitPrice>; currency: string }> {
+  const [pricings, currency] = options.loadPricing
+    ? await Promise.all([
+        options.loadPricing([...needed.values()].map((entry) => entry.sku)),
+        options.currency ?? companyCurrency(),
+      ])
+    : await loadPricingOfItems([...needed.keys()]).then(
+        ({ pricings, reference }) =>
+          [pricings, options.currency ?? reference.companyCurrency] as const,
+      );
   const prices = new Map<number, ItemUnitPrice>();
   for (const [itemId, { sku, quantity }] of needed) {
     const stored = pricings.get(sku);
@@ -151,7 +162,7 @@ async function bestPricesFor(
       : null;
     if (price) prices.set(itemId, price);
   }
-  return prices;
+  return { prices, currency };
 }
 
 async function stockAveragePrices(
@@ -204,7 +215,8 @@ function firstOrderTorque(
  * and scales the end-turn length of every coil line (see `~/insight/what-if`); without it
  * the costing is the stored design at stored prices. `loadPricing` and `currency` let a
  * caller costing many revisions or days read each item's prices and the company currency
- * once (by default they are read here).
+ * once (by default they are read here: the needed items' price lines and the pricing
+ * reference, which carries the company currency).
  */
 export async function costRevision(input: {
   revision: RevisionRow;
@@ -223,15 +235,17 @@ export async function costRevision(input: {
       ? input.lines
       : scaleEndTurns(input.lines, whatIf.endTurnScale);
   const needed = quantitiesPerItem(lines, input.quantity);
-  const [prices, currency] = await Promise.all([
+  const { prices, currency } =
     input.basis === "stock-average"
-      ? stockAveragePrices([...needed.keys()])
-      : bestPricesFor(needed, input.quantity, input.date, {
-          loadPricing: input.loadPricing ?? loadItemsPricing,
+      ? await Promise.all([
+          stockAveragePrices([...needed.keys()]),
+          input.currency ?? companyCurrency(),
+        ]).then(([prices, currency]) => ({ prices, currency }))
+      : await bestPricesFor(needed, input.quantity, input.date, {
+          loadPricing: input.loadPricing,
+          currency: input.currency,
           metalBasePerKg: whatIf?.metalBasePerKg,
-        }),
-    input.currency ?? companyCurrency(),
-  ]);
+        });
   const ratedTorqueNm = optionalNumber(revision.ratedTorqueNm);
   // The rated current is the RMS phase current; each of a parallel paths carries 1/a of it.
   const ratedCurrentA = Number(revision.ratedCurrentA);

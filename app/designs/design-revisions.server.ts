@@ -3,7 +3,7 @@
  * them: the revision's figures and its lines (coil, magnet, part) joined to
  * their catalogue items.
  */
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "~/db/client.server";
 import {
   designLines,
@@ -37,27 +37,64 @@ export type StoredDesignLine = DesignLine & {
   itemName: string;
 };
 
+// The two reads every costing and design page makes, built once (Drizzle prepares the
+// SQL text a single time; each call only fills in the ids).
+const revisionByNumber = db
+  .select({
+    design: {
+      id: designs.id,
+      name: designs.name,
+      description: designs.description,
+      motorType: designs.motorType,
+    },
+    revision: designRevisions,
+  })
+  .from(designRevisions)
+  .innerJoin(designs, eq(designs.id, designRevisions.designId))
+  .where(
+    and(
+      eq(designRevisions.designId, sql.placeholder("designId")),
+      eq(designRevisions.revision, sql.placeholder("revision")),
+    ),
+  )
+  .limit(1)
+  .prepare();
+
+/** The lines with their items and, for magnets, their grade: one query. */
+const linesOfRevision = db
+  .select({
+    line: designLines,
+    item: {
+      sku: items.sku,
+      name: items.name,
+      unit: items.unit,
+    },
+    wire: {
+      conductor: wireItems.conductor,
+      standard: wireItems.standard,
+      sizeLabel: wireItems.sizeLabel,
+      thermalClass: wireItems.thermalClass,
+      insulation: wireItems.insulation,
+    },
+    magnet: {
+      gradeKey: magnetItems.gradeKey,
+      shape: magnetItems.shape,
+      dimensionsMm: magnetItems.dimensionsMm,
+    },
+    grade: magnetGrades,
+  })
+  .from(designLines)
+  .innerJoin(items, eq(items.id, designLines.itemId))
+  .leftJoin(wireItems, eq(wireItems.itemId, designLines.itemId))
+  .leftJoin(magnetItems, eq(magnetItems.itemId, designLines.itemId))
+  .leftJoin(magnetGrades, eq(magnetGrades.key, magnetItems.gradeKey))
+  .where(eq(designLines.revisionId, sql.placeholder("revisionId")))
+  .orderBy(asc(designLines.position))
+  .prepare();
+
 /** The revision of a design by its number, with the design's name; null when either is missing. */
 export async function findRevision(designId: number, revision: number) {
-  const [found] = await db
-    .select({
-      design: {
-        id: designs.id,
-        name: designs.name,
-        description: designs.description,
-        motorType: designs.motorType,
-      },
-      revision: designRevisions,
-    })
-    .from(designRevisions)
-    .innerJoin(designs, eq(designs.id, designRevisions.designId))
-    .where(
-      and(
-        eq(designRevisions.designId, designId),
-        eq(designRevisions.revision, revision),
-      ),
-    )
-    .limit(1);
+  const [found] = await revisionByNumber.execute({ designId, revision });
   return found ?? null;
 }
 
@@ -94,97 +131,80 @@ export async function loadRevisionLines(
         .where(eq(designRevisions.id, revisionId))
         .limit(1);
   if (!revision) return [];
-  // The lines and every magnet grade at once (a few dozen grades): two queries side by side.
-  const [rows, gradeRows] = await Promise.all([
-    db
-      .select({
-        line: designLines,
-        item: {
-          sku: items.sku,
-          name: items.name,
-          unit: items.unit,
-        },
-        wire: wireItems,
-        magnet: magnetItems,
-      })
-      .from(designLines)
-      .innerJoin(items, eq(items.id, designLines.itemId))
-      .leftJoin(wireItems, eq(wireItems.itemId, designLines.itemId))
-      .leftJoin(magnetItems, eq(magnetItems.itemId, designLines.itemId))
-      .where(eq(designLines.revisionId, revisionId))
-      .orderBy(asc(designLines.position)),
-    db.select().from(magnetGrades),
-  ]);
-  const grades = new Map(
-    gradeRows.map((row) => [row.key, magnetGradeFromRow(row)]),
-  );
+  const rows = await linesOfRevision.execute({ revisionId });
   const slotArea = optionalNumber(revision.slotAreaMm2);
   const slotLinerArea = optionalNumber(revision.slotLinerAreaMm2);
 
-  return rows.map(({ line, item, wire, magnet }): StoredDesignLine => {
-    const common = {
-      id: line.id,
-      position: line.position,
-      itemName: item.name,
-    };
-    const ref = { itemId: line.itemId, sku: item.sku };
-    if (line.kind === "coil" && wire) {
+  return rows.map(
+    ({ line, item, wire, magnet, grade: gradeRow }): StoredDesignLine => {
+      const common = {
+        id: line.id,
+        position: line.position,
+        itemName: item.name,
+      };
+      const ref = { itemId: line.itemId, sku: item.sku };
+      if (line.kind === "coil" && wire) {
+        return {
+          ...common,
+          kind: "coil",
+          wire: {
+            ...ref,
+            conductor: wire.conductor as ConductorKey,
+            size: wireSpecOf(wire.standard, wire.sizeLabel),
+            enamelledLinearMassKgPerM: null,
+            thermalClassC: wire.thermalClass,
+            insulation: insulationOf(wire.standard, wire.insulation),
+          },
+          turns: line.turns!,
+          strandsInHand: line.strandsInHand!,
+          activeLengthMm: Number(line.activeLengthMm),
+          endTurnLengthMm: Number(line.endTurnLengthMm),
+          leadLengthMm: Number(line.leadLengthMm),
+          coilsPerMotor: line.coilsPerMotor!,
+          scrapPercent: Number(line.scrapPercent),
+          operatingTemperatureC: Number(line.operatingTemperatureC),
+          slot:
+            slotArea === null
+              ? null
+              : {
+                  areaMm2: slotArea,
+                  linerAreaMm2: slotLinerArea,
+                  coilSidesPerSlot: revision.coilSidesPerSlot,
+                },
+        };
+      }
+      if (line.kind === "magnet" && magnet) {
+        // The database matches keys ignoring case; the grade is the item's only when spelt alike.
+        const grade =
+          gradeRow && gradeRow.key === magnet.gradeKey
+            ? magnetGradeFromRow(gradeRow)
+            : undefined;
+        const shape = magnetShapeOf(magnet.shape, magnet.dimensionsMm);
+        const massPerPieceKg =
+          grade && shape
+            ? magnetStockFigures({ grade, shape, pieces: 1 }).massPerPieceKg
+            : 0;
+        return {
+          ...common,
+          kind: "magnet",
+          magnet: {
+            ...ref,
+            gradeName: grade?.name ?? magnet.gradeKey,
+            massPerPieceKg,
+            maxWorkingTemperatureC: grade?.maxWorkingTemperatureC ?? Infinity,
+          },
+          piecesPerMotor: line.piecesPerMotor!,
+          operatingTemperatureC: optionalNumber(line.operatingTemperatureC),
+        };
+      }
       return {
         ...common,
-        kind: "coil",
-        wire: {
-          ...ref,
-          conductor: wire.conductor as ConductorKey,
-          size: wireSpecOf(wire.standard, wire.sizeLabel),
-          enamelledLinearMassKgPerM: null,
-          thermalClassC: wire.thermalClass,
-          insulation: insulationOf(wire.standard, wire.insulation),
-        },
-        turns: line.turns!,
-        strandsInHand: line.strandsInHand!,
-        activeLengthMm: Number(line.activeLengthMm),
-        endTurnLengthMm: Number(line.endTurnLengthMm),
-        leadLengthMm: Number(line.leadLengthMm),
-        coilsPerMotor: line.coilsPerMotor!,
-        scrapPercent: Number(line.scrapPercent),
-        operatingTemperatureC: Number(line.operatingTemperatureC),
-        slot:
-          slotArea === null
-            ? null
-            : {
-                areaMm2: slotArea,
-                linerAreaMm2: slotLinerArea,
-                coilSidesPerSlot: revision.coilSidesPerSlot,
-              },
+        kind: "part",
+        part: { ...ref, unit: item.unit },
+        quantityPerMotor: parseExactDecimal(line.quantityPerMotor ?? "0"),
       };
-    }
-    if (line.kind === "magnet" && magnet) {
-      const grade = grades.get(magnet.gradeKey);
-      const shape = magnetShapeOf(magnet.shape, magnet.dimensionsMm);
-      const massPerPieceKg =
-        grade && shape
-          ? magnetStockFigures({ grade, shape, pieces: 1 }).massPerPieceKg
-          : 0;
-      return {
-        ...common,
-        kind: "magnet",
-        magnet: {
-          ...ref,
-          gradeName: grade?.name ?? magnet.gradeKey,
-          massPerPieceKg,
-          maxWorkingTemperatureC: grade?.maxWorkingTemperatureC ?? Infinity,
-        },
-        piecesPerMotor: line.piecesPerMotor!,
-        operatingTemperatureC: optionalNumber(line.operatingTemperatureC),
-      };
-    }
-    return {
-      ...common,
-      kind: "part",
-      part: { ...ref, unit: item.unit },
-      quantityPerMotor: parseExactDecimal(line.quantityPerMotor ?? "0"),
-    };
-  });
+    },
+  );
 }
 
 /** A stored line as the API and the editor show it (the same fields the line schemas take). */

@@ -3,15 +3,9 @@
  * and the price history for the same quantity (app/pricing does the sums). Both read the
  * same inputs, loaded once by `loadItemPricing`.
  */
-import { eq, inArray } from "drizzle-orm";
+import { eq, inArray, sql } from "drizzle-orm";
 import { db, type Database, type Transaction } from "~/db/client.server";
-import {
-  currencyRates,
-  items,
-  metalBasePrices,
-  priceLines,
-  suppliers,
-} from "~/db/schema";
+import { items, priceLines, suppliers } from "~/db/schema";
 import type { ConductorKey } from "~/engineering/reference-data";
 import { bestPrices } from "~/pricing/best-price";
 import { isDerivedMetalBase } from "~/pricing/derived-metal-base";
@@ -22,7 +16,7 @@ import { parseMoney, parseRate, type CurrencyCode } from "~/pricing/money";
 import { priceHistory } from "~/pricing/price-history";
 import type { PriceLine } from "~/pricing/price-line";
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
-import { companyCurrency } from "./suppliers.server";
+import { defaultCompanyCurrency } from "./suppliers.server";
 
 const money = (amount: bigint) => Number(amount) / 10_000;
 
@@ -129,43 +123,90 @@ export function priceLinesByItem(
 /** Every metal base and currency rate, and the company currency: what every price depends on besides its lines. */
 export async function loadPricingReference(
   reader: Database | Transaction = db,
-): Promise<{
+): Promise<PricingReference> {
+  // One round trip for the three: every base and rate row, and the setting, as text (the
+  // DECIMALs exactly as stored, the days as YYYY-MM-DD).
+  const [rows] = (await reader.execute(sql`
+    SELECT 'base' AS kind, conductor AS a, currency AS b, CAST(price_per_kg AS CHAR) AS c, CAST(valid_from AS CHAR) AS d FROM metal_base_prices
+    UNION ALL SELECT 'rate', currency, NULL, CAST(rate AS CHAR), CAST(valid_from AS CHAR) FROM currency_rates
+    UNION ALL SELECT 'currency', value, NULL, NULL, NULL FROM settings WHERE setting_key = 'company_currency'
+  `)) as unknown as [ReferenceRow[]];
+  const bases: MetalBasePrice[] = [];
+  const rates: ExchangeRateEntry[] = [];
+  let currency: CurrencyCode = defaultCompanyCurrency;
+  for (const row of rows) {
+    if (row.kind === "base")
+      bases.push({
+        conductor: row.a as ConductorKey,
+        currency: row.b!,
+        pricePerKg: parseMoney(row.c!),
+        validFrom: row.d!,
+      });
+    else if (row.kind === "rate")
+      rates.push({ currency: row.a, date: row.d!, rate: parseRate(row.c!) });
+    else currency = row.a;
+  }
+  return { bases, rates, companyCurrency: currency };
+}
+
+/** What every price depends on besides its lines. */
+export interface PricingReference {
   bases: MetalBasePrice[];
   rates: ExchangeRateEntry[];
   companyCurrency: CurrencyCode;
+}
+
+/** A row of `loadPricingReference`'s statement. */
+interface ReferenceRow {
+  kind: "base" | "rate" | "currency";
+  a: string;
+  b: string | null;
+  c: string | null;
+  d: string | null;
+}
+
+/**
+ * The pricing of the items a design needs, by our item id: their price lines (with the
+ * item's stored SKU and unit) and the pricing reference, in two queries side by side.
+ * `pricings` is keyed by the stored SKU and leaves out items without a price line
+ * (nothing can price them); `reference` comes whatever the items.
+ */
+export async function loadPricingOfItems(itemIds: readonly number[]): Promise<{
+  pricings: Map<string, ItemPricing>;
+  reference: PricingReference;
 }> {
-  const [baseRows, rateRows, currency] = await Promise.all([
-    reader
-      .select({
-        conductor: metalBasePrices.conductor,
-        currency: metalBasePrices.currency,
-        pricePerKg: metalBasePrices.pricePerKg,
-        validFrom: metalBasePrices.validFrom,
-      })
-      .from(metalBasePrices),
-    reader
-      .select({
-        currency: currencyRates.currency,
-        rate: currencyRates.rate,
-        validFrom: currencyRates.validFrom,
-      })
-      .from(currencyRates),
-    companyCurrency(),
+  const wanted = [...new Set(itemIds)];
+  const [rows, reference] = await Promise.all([
+    wanted.length === 0
+      ? []
+      : db
+          .select({
+            ...priceLineColumns,
+            supplier: suppliers.name,
+            leadTimeDays: suppliers.leadTimeDays,
+            sku: items.sku,
+            unit: items.unit,
+          })
+          .from(priceLines)
+          .innerJoin(items, eq(items.id, priceLines.itemId))
+          .innerJoin(suppliers, eq(suppliers.id, priceLines.supplierId))
+          .where(inArray(priceLines.itemId, wanted))
+          .limit(5_000 * wanted.length),
+    loadPricingReference(),
   ]);
-  return {
-    bases: baseRows.map((base) => ({
-      conductor: base.conductor as ConductorKey,
-      currency: base.currency,
-      pricePerKg: parseMoney(base.pricePerKg),
-      validFrom: base.validFrom,
-    })),
-    rates: rateRows.map((rate) => ({
-      currency: rate.currency,
-      date: rate.validFrom,
-      rate: parseRate(rate.rate),
-    })),
-    companyCurrency: currency,
-  };
+  const linesByItem = priceLinesByItem(rows);
+  const pricings = new Map<string, ItemPricing>();
+  for (const row of rows) {
+    if (pricings.has(row.sku)) continue;
+    pricings.set(row.sku, {
+      sku: row.sku,
+      itemId: row.itemId,
+      unit: row.unit,
+      lines: linesByItem.get(row.itemId) ?? [],
+      ...reference,
+    });
+  }
+  return { pricings, reference };
 }
 
 /**
