@@ -136,14 +136,19 @@ export async function benchHttpLoad(input: {
   const figures: Figure[] = [];
 
   // The stock list API, first page by SKU, beside the same count and page read raw.
-  const stockRaw = await rawServer(input.databaseUrl, (pool) =>
-    rawItemList(pool, new URLSearchParams("page=1&pageSize=50")),
+  const stockRaw = await rawServer(
+    input.databaseUrl,
+    async (pool, request) => ({
+      session: await rawSessionRead(pool, request),
+      ...(await rawItemList(pool, new URLSearchParams("page=1&pageSize=50"))),
+    }),
   );
   try {
     const app = await load(`${input.baseUrl}/api/v1/items?page=1`, {
       Cookie: input.cookie,
     });
-    const raw = await load(stockRaw.url);
+    // The same session cookie: the raw handler reads the session as the app must.
+    const raw = await load(stockRaw.url, { Cookie: input.cookie });
     figures.push(...loadFigures("stock list API under load", app, raw));
   } finally {
     await stockRaw.close();
@@ -175,7 +180,31 @@ export async function benchHttpLoad(input: {
 
 /** What the raw costing handler reads, for the figures' note. */
 const rawCostingNote =
-  "raw: the statements a costing request sends, bare: the session and its person (sessions ⋈ users by the cookie's SHA-256), the person's roles, the revision ⋈ design, its lines ⋈ items ⋈ wire_items ⋈ magnet_items ⋈ magnet_grades, then side by side the lines' price lines ⋈ items ⋈ suppliers and the metal bases, currency rates and company currency (one statement); answered as JSON, no costing arithmetic";
+  "raw: the statements a costing request sends, bare: the session with its person and roles (one statement, sessions ⋈ users ⟕ user_roles by the cookie's SHA-256), the revision ⋈ design, its lines ⋈ items ⋈ wire_items ⋈ magnet_items ⋈ magnet_grades, then side by side the lines' price lines ⋈ items ⋈ suppliers and the metal bases, currency rates and company currency (one statement); answered as JSON, no costing arithmetic";
+
+/**
+ * The session check every signed-in request makes, bare: the statement the app's session
+ * adapter sends (app/auth/session-adapter.server.ts), the session with its person and the
+ * person's roles, found by the SHA-256 of the cookie's token.
+ */
+async function rawSessionRead(
+  pool: mysql.Pool,
+  request: http.IncomingMessage,
+): Promise<unknown[][]> {
+  const token = /turnledger_session=([^;]+)/.exec(
+    request.headers.cookie ?? "",
+  )?.[1];
+  const sessionId = createHash("sha256")
+    .update(token ?? "")
+    .digest("hex");
+  const [rows] = (await rowsAsArray(
+    pool,
+    "SELECT s.expires_at, s.started_at, u.id, u.email, u.name, u.active, u.locale, u.time_zone, r.role FROM sessions s INNER JOIN users u ON u.id = s.user_id LEFT JOIN user_roles r ON r.user_id = u.id WHERE s.id = ?",
+    [sessionId],
+  )) as unknown as [unknown[][]];
+  if (rows.length === 0) throw new Error("raw: no session for the cookie");
+  return rows;
+}
 
 const rowsAsArray = (pool: mysql.Pool, sql: string, values: unknown[]) =>
   pool.query({ sql, rowsAsArray: true }, values);
@@ -191,22 +220,7 @@ async function rawCostingReads(
   request: http.IncomingMessage,
   revision: { id: number; designId: number; revision: number },
 ): Promise<unknown> {
-  const token = /turnledger_session=([^;]+)/.exec(
-    request.headers.cookie ?? "",
-  )?.[1];
-  const sessionId = createHash("sha256")
-    .update(token ?? "")
-    .digest("hex");
-  const [[session]] = (await rowsAsArray(
-    pool,
-    "SELECT u.id, u.email, u.name, u.password_hash, u.active, u.locale, u.time_zone, u.created_at, s.id, s.user_id, s.expires_at, s.started_at FROM sessions s INNER JOIN users u ON u.id = s.user_id WHERE s.id = ?",
-    [sessionId],
-  )) as unknown as [unknown[][]];
-  if (!session) throw new Error("raw costing: no session for the cookie");
-  const [roles] = await pool.query(
-    "SELECT role FROM user_roles WHERE user_id = ?",
-    [session[0]],
-  );
+  const session = await rawSessionRead(pool, request);
   const [[revisionRow]] = (await rowsAsArray(
     pool,
     "SELECT d.id, d.name, d.description, d.motor_type, r.* FROM design_revisions r INNER JOIN designs d ON d.id = r.design_id WHERE r.design_id = ? AND r.revision = ? LIMIT 1",
@@ -230,7 +244,7 @@ async function rawCostingReads(
        UNION ALL SELECT 'currency', value, NULL, NULL, NULL FROM settings WHERE setting_key = 'company_currency'`,
     ),
   ]);
-  return { session, roles, revision: revisionRow, lines, prices, reference };
+  return { session, revision: revisionRow, lines, prices, reference };
 }
 
 /** The design id and revision number of a costing path (/api/v1/designs/7/revisions/1/costing…). */
