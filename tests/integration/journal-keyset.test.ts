@@ -137,7 +137,7 @@ describe("the journal page by cursor", () => {
       new RegExp(`^/stock/journal\\?sku=${sku}&page=2&after=\\d+-\\d+$`),
     );
     const second = await journalHtml(first.older!);
-    expect(second.html).toContain("Page 2");
+    expect(second.html).toMatch(/Page (<!-- -->)?2</);
     expect(second.older).toBeUndefined(); // 57 movements: two pages of 50
     expect(second.table).toEqual(
       (await journalHtml(`/stock/journal?sku=${sku}&page=2`)).table,
