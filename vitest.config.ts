@@ -13,6 +13,7 @@ export default defineConfig({
             "scripts/**/*.test.ts",
             "seed/**/*.test.ts",
             "server/**/*.test.ts",
+            "bench/**/*.test.ts",
           ],
           // Checks against GNU units have their own project (below), so the
           // unit tests need nothing but `npm ci`.

@@ -4,7 +4,10 @@
  */
 import fs from "node:fs";
 import path from "node:path";
-import { startTestEnvironment } from "../scripts/lib/test-environment";
+import {
+  startAppServer,
+  startTestEnvironment,
+} from "../scripts/lib/test-environment";
 import { demoPassword, demoStorekeeperId } from "../seed/demo-people";
 import {
   benchCoilEstimateApi,
@@ -17,31 +20,41 @@ import {
   benchPriceImport,
   benchPriceImportProgress,
 } from "./price-import.bench";
-import { seedBenchStock } from "./seed-bench-stock";
+import { benchOneSize, largeBenchDatabase, sizeRatios } from "./scale.bench";
+import {
+  largeBenchSize,
+  normalBenchSize,
+  seedBenchStock,
+} from "./seed-bench-stock";
 import { benchStock } from "./stock.bench";
+import { comparisonOf, formatSummary } from "./summary";
 
 // The benchmarks get their own database beside the tests'.
 process.env.TEST_DATABASE_NAME ??= "turnledger_test_bench";
 
-// BENCH_ONLY=price-import (or coil, stock, design, load, price-import-progress) runs one group
-// while working on it.
+// BENCH_ONLY=price-import (or coil, stock, scale, design, load, price-import-progress) runs one
+// group while working on it.
 const only = process.env.BENCH_ONLY;
 const runs = (group: string) => !only || only === group;
 
 const figures: Figure[] = [];
+/** Lines the summary ends with (how the large store was had). */
+const notes: string[] = [];
 if (runs("coil")) figures.push(benchPureCoilEstimates());
 
 const environment = await startTestEnvironment();
 // The app refuses cookie-signed writes without its own Origin (decision 012), as a browser
 // sends it; the benchmarks' requests say where they come from the same way.
+// The large store's server (scale group) joins this list while it runs.
+const appOrigins = [environment.baseUrl];
 const plainFetch = globalThis.fetch;
 globalThis.fetch = (input, init = {}) => {
   const url = String(input instanceof Request ? input.url : input);
   const method = (init.method ?? "GET").toUpperCase();
-  if (method === "GET" || !url.startsWith(environment.baseUrl))
-    return plainFetch(input, init);
+  const origin = appOrigins.find((base) => url.startsWith(base));
+  if (method === "GET" || !origin) return plainFetch(input, init);
   const headers = new Headers(init.headers);
-  headers.set("Origin", environment.baseUrl);
+  headers.set("Origin", origin);
   return plainFetch(input, { ...init, headers });
 };
 try {
@@ -57,35 +70,91 @@ try {
   if (runs("coil"))
     figures.push(await benchCoilEstimateApi(environment.baseUrl, cookie));
 
-  if (runs("stock")) {
-    console.log("[bench] loading 20,000 items and 1,000,000 movements…");
+  const signInAs = async (email: string, baseUrl = environment.baseUrl) => {
+    const answer = await fetch(`${baseUrl}/api/v1/sessions`, {
+      method: "POST",
+      headers: { "Content-Type": "application/json" },
+      body: JSON.stringify({ email, password: demoPassword() }),
+    });
+    return answer.headers.getSetCookie()[0]?.split(";")[0] ?? "";
+  };
+  if (runs("stock") || runs("scale")) {
+    console.log(
+      "[bench] generating 20,000 items and 1,000,000 movements (SQL)…",
+    );
     const loadStarted = performance.now();
-    const { skus, locationCode } = await seedBenchStock(
+    const stock = await seedBenchStock(
       environment.databaseUrl,
       demoStorekeeperId,
+      normalBenchSize,
     );
     console.log(
       `[bench] loaded in ${((performance.now() - loadStarted) / 1000).toFixed(1)} s`,
     );
-    const storekeeper = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
-      method: "POST",
-      headers: { "Content-Type": "application/json" },
-      body: JSON.stringify({
-        email: "storekeeper@turnledger.test",
-        password: demoPassword(),
-      }),
-    });
-    const storekeeperCookie =
-      storekeeper.headers.getSetCookie()[0]?.split(";")[0] ?? "";
-    figures.push(
-      ...(await benchStock({
+    const storekeeperCookie = await signInAs("storekeeper@turnledger.test");
+    if (runs("stock"))
+      figures.push(
+        ...(await benchStock({
+          baseUrl: environment.baseUrl,
+          databaseUrl: environment.databaseUrl,
+          storekeeperCookie,
+          skus: stock.skus,
+          locationCode: stock.locationCode,
+        })),
+      );
+    if (runs("scale")) {
+      console.log("[bench] the same requests at 1 M and at 10 M movements…");
+      const normal = await benchOneSize({
+        size: normalBenchSize,
         baseUrl: environment.baseUrl,
         databaseUrl: environment.databaseUrl,
         storekeeperCookie,
-        skus,
-        locationCode,
-      })),
-    );
+        stock,
+      });
+      const started = performance.now();
+      const large = await largeBenchDatabase({
+        size: largeBenchSize,
+        userId: demoStorekeeperId,
+        log: (line) => console.log(`[bench] large store: ${line}`),
+      });
+      const seconds = ((performance.now() - started) / 1000).toFixed(0);
+      const how = large.reused
+        ? `reused from an earlier run (checked in ${seconds} s)`
+        : `generated in ${seconds} s`;
+      console.log(`[bench] large store ${how}`);
+      notes.push(
+        `The 10 M store (${largeBenchSize.items.toLocaleString("en")} items) was ${how}; it is kept for the next run`,
+        "(drop the database <bench database>_large to make it again).",
+      );
+      const largeServer = await startAppServer({
+        port: Number(process.env.TEST_PORT ?? 3100) + 8,
+        databaseUrl: large.databaseUrl,
+        smtpUrl: environment.smtpUrl,
+      });
+      appOrigins.push(largeServer.baseUrl);
+      try {
+        const largeFigures = await benchOneSize({
+          size: largeBenchSize,
+          baseUrl: largeServer.baseUrl,
+          databaseUrl: large.databaseUrl,
+          storekeeperCookie: await signInAs(
+            "storekeeper@turnledger.test",
+            largeServer.baseUrl,
+          ),
+          stock: large.stock,
+        });
+        figures.push(
+          ...normal,
+          ...largeFigures,
+          ...sizeRatios(normal, largeFigures, {
+            normal: normalBenchSize,
+            large: largeBenchSize,
+          }),
+        );
+      } finally {
+        await largeServer.stop();
+      }
+    }
   }
   const buyer = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
     method: "POST",
@@ -162,58 +231,6 @@ try {
   await environment.stop();
 }
 
-/**
- * Which raw baseline each app figure wraps (the bare SQL or mysql2 handler of
- * the same work, timed in the same run), by the start of the figures' names.
- * Throughput is compared the other way round (raw ÷ app), so that for every
- * ratio higher means the app costs more.
- */
-const baselines: { figure: string; raw: string; throughput?: boolean }[] = [
-  { figure: "GET /stock.data", raw: "raw SQL of the list" },
-  { figure: "GET /api/v1/items", raw: "raw SQL of the list" },
-  { figure: "POST /api/v1/stock-movements", raw: "raw SQL of one movement" },
-  {
-    figure: "price list 100,000 rows: commit",
-    raw: "raw batched upsert of the same rows",
-  },
-  {
-    figure: "stock list API under load: requests per second (app)",
-    raw: "stock list API under load: requests per second (raw mysql2)",
-    throughput: true,
-  },
-  {
-    figure: "design costing API under load: requests per second (app)",
-    raw: "design costing API under load: requests per second (raw mysql2)",
-    throughput: true,
-  },
-];
-
-interface Comparison {
-  raw: string;
-  rawMedian: number;
-  rawP95: number;
-  ratioMedian: number;
-  ratioP95: number;
-}
-
-function comparisonOf(figure: Figure): Comparison | null {
-  const pairing = baselines.find((entry) =>
-    figure.name.startsWith(entry.figure),
-  );
-  const raw =
-    pairing && figures.find((entry) => entry.name.startsWith(pairing.raw));
-  if (!pairing || !raw) return null;
-  const ratio = (app: number, bare: number) =>
-    pairing.throughput ? bare / app : app / bare;
-  return {
-    raw: raw.name,
-    rawMedian: raw.median,
-    rawP95: raw.p95,
-    ratioMedian: ratio(figure.median, raw.median),
-    ratioP95: ratio(figure.p95, raw.p95),
-  };
-}
-
 const report = {
   at: new Date().toISOString(),
   machine: {
@@ -223,30 +240,14 @@ const report = {
   },
   figures: figures.map((figure) => ({
     ...figure,
-    baseline: comparisonOf(figure),
+    baseline: comparisonOf(figure, figures),
   })),
 };
 fs.writeFileSync(
   path.join(import.meta.dirname, only ? `report-${only}.json` : "report.json"),
   JSON.stringify(report, null, 2),
 );
-const verdict = (figure: Figure) =>
-  figure.target === "reported" ? "" : figure.passed ? "met" : "MISSED";
-const summary = [
-  `Turnledger benchmarks, ${report.at}: Node ${report.machine.node}, ${report.machine.cpus} cores.`,
-  "",
-  `${"benchmark".padEnd(58)}${"median".padStart(11)}${"p95".padStart(11)}${"raw p95".padStart(11)}${"ratio p95".padStart(11)}   target`,
-  ...figures.map((figure) => {
-    const comparison = comparisonOf(figure);
-    const raw = comparison ? comparison.rawP95.toFixed(3) : "";
-    const ratio = comparison ? `${comparison.ratioP95.toFixed(2)}×` : "";
-    return `${figure.name.padEnd(58)}${figure.median.toFixed(3).padStart(11)}${figure.p95.toFixed(3).padStart(11)}${raw.padStart(11)}${ratio.padStart(11)}   ${figure.target.padEnd(16)} ${verdict(figure).padEnd(6)} (${figure.unit})`;
-  }),
-  "",
-  'Raw samples in bench/report.json. "raw p95" is the bare SQL or mysql2 handler of the same',
-  "work timed in the same run (report.json names it for each figure); the ratio is app ÷ raw,",
-  "or raw ÷ app for requests per second, so higher always means the app adds more.",
-];
+const summary = formatSummary({ ...report, figures, notes });
 fs.writeFileSync(
   path.join(import.meta.dirname, only ? `summary-${only}.txt` : "summary.txt"),
   `${summary.join("\n")}\n`,

@@ -8,7 +8,7 @@ import { poolOptionsFromUrl } from "~/db/connection-options";
 import type { Figure } from "./coil-estimates.bench";
 import { summarise } from "./statistics";
 
-async function serverTimes(
+export async function serverTimes(
   urls: string[],
   cookie: string,
   init: (index: number) => RequestInit = () => ({}),
@@ -49,7 +49,7 @@ function figure(
   };
 }
 
-const listQueries = (index: number) => {
+export const listQueries = (index: number) => {
   const page = 1 + ((index * 37) % 400);
   const variants = [
     `page=${page}`,

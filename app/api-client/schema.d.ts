@@ -1381,6 +1381,16 @@ export interface components {
             pageSize: number;
             /** @description Whether a next page has rows (the journal is not counted: a total would cost more than the page). */
             hasMore: boolean;
+            /**
+             * @description Pass as `after` (with `page` one higher, if you keep count) for the next, older page; null on the last page. Read from the index at that place, it costs what the first page does.
+             * @example 1764806400123-98765
+             */
+            nextCursor: string | null;
+            /**
+             * @description Pass as `before` for the previous, newer page; null on the first page.
+             * @example 1764806400456-98815
+             */
+            previousCursor: string | null;
         };
         /**
          * @description One row of the movement journal.
@@ -5911,6 +5921,8 @@ export interface operations {
                 to?: string;
                 page?: string;
                 pageSize?: string;
+                after?: string;
+                before?: string;
             };
             header?: never;
             path?: never;

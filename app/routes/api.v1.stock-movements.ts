@@ -15,14 +15,16 @@ import { answerDomainError } from "~/lib/api-errors.server";
 import { recordMovement } from "~/stock/stock-movements.server";
 
 /**
- * GET /api/v1/stock-movements?type=&sku=&user=&from=&to=&page=&pageSize= → the journal, newest first.
+ * GET /api/v1/stock-movements?type=&sku=&user=&from=&to=&page=&pageSize=&after=&before= → the journal,
+ * newest first; `nextCursor` (for `after`) and `previousCursor` (for `before`) page through it by keyset.
  * A receipt booked against a purchase order carries its number (`purchaseOrder: "PO-000123"`,
  * `purchaseOrderId`); every other movement null.
  */
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
   const query = readSearchParams(request, movementJournalQuerySchema);
-  const { hasMore, movements } = await listMovements(query);
+  const { hasMore, movements, nextCursor, previousCursor } =
+    await listMovements(query);
   return Response.json({
     movements: movements.map((movement) => ({
       ...movement,
@@ -34,6 +36,8 @@ export async function loader({ request }: Route.LoaderArgs) {
     page: query.page,
     pageSize: query.pageSize,
     hasMore,
+    nextCursor,
+    previousCursor,
   });
 }
 

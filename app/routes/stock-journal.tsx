@@ -35,10 +35,13 @@ export async function loader({ request }: Route.LoaderArgs) {
     movementJournalQuerySchema,
     new URL(request.url).searchParams,
   );
-  const { hasMore, movements } = await listMovements(query);
+  const { hasMore, movements, nextCursor, previousCursor } =
+    await listMovements(query);
   return {
     movements,
     hasMore,
+    nextCursor,
+    previousCursor,
     page: query.page,
     // The filters alone (no page), for the form, the page links and the CSV link.
     filters: movementJournalFilterSchema.parse(query),
@@ -140,10 +143,25 @@ const columns = [
 ];
 
 export default function StockJournal({ loaderData }: Route.ComponentProps) {
-  const { movements, hasMore, page, filters, ignored } = loaderData;
+  const { movements, hasMore, nextCursor, previousCursor, page, filters } =
+    loaderData;
+  const { ignored } = loaderData;
   const filtered = isFiltered(filters);
-  const pageLink = (target: number) =>
-    listHref("/stock/journal", { ...filters, page: target });
+  // The links carry where this page starts and ends, so the next page is read from the
+  // journal's index at that place (keyset) however deep it is; the first page needs none.
+  const newerLink =
+    page - 1 <= 1 || !previousCursor
+      ? listHref("/stock/journal", filters)
+      : listHref("/stock/journal", {
+          ...filters,
+          page: page - 1,
+          before: previousCursor,
+        });
+  const olderLink = listHref("/stock/journal", {
+    ...filters,
+    page: page + 1,
+    after: nextCursor,
+  });
   return (
     <div className="space-y-5">
       <div className="flex flex-wrap items-end justify-between gap-4">
@@ -214,12 +232,12 @@ export default function StockJournal({ loaderData }: Route.ComponentProps) {
         <span className="text-graphite-500">Page {page}</span>
         <span className="flex gap-2">
           {page > 1 ? (
-            <Link className="button-quiet" to={pageLink(page - 1)}>
+            <Link className="button-quiet" to={newerLink}>
               Newer
             </Link>
           ) : null}
           {hasMore ? (
-            <Link className="button-quiet" to={pageLink(page + 1)}>
+            <Link className="button-quiet" to={olderLink}>
               Older
             </Link>
           ) : null}

@@ -1,6 +1,7 @@
 /** The movement journal's filters and page, from a query string (page, CSV export and API share it). */
 import { z } from "zod";
 import { movementTypes } from "~/db/tables/stock-enums";
+import { keysetCursorParam } from "~/lib/keyset-cursor";
 import { dayParam, pageParam, pageSizeParam } from "~/lib/search-params";
 
 export const movementJournalFilterSchema = z.object({
@@ -30,8 +31,17 @@ export const movementJournalFilterSchema = z.object({
 });
 
 export const movementJournalQuerySchema = movementJournalFilterSchema.extend({
+  /** With `after` or `before`, only the page number the answer reports; alone, how many pages to skip. */
   page: pageParam,
   pageSize: pageSizeParam("pageSize", 500, 50),
+  after: keysetCursorParam(
+    "after",
+    "The page of older movements after this cursor (an earlier answer's `nextCursor`), read from the journal's index at that place: a deep page costs what the first does. `page` is then only the number the answer reports.",
+  ).optional(),
+  before: keysetCursorParam(
+    "before",
+    "The page of newer movements before this cursor (an earlier answer's `previousCursor`). `page` is then only the number the answer reports.",
+  ).optional(),
 });
 
 export type MovementJournalFilter = z.output<

@@ -1,8 +1,10 @@
 /** Reading the movement journal, newest first, a page at a time. */
 import {
   and,
+  asc,
   desc,
   eq,
+  gt,
   gte,
   inArray,
   like,
@@ -23,6 +25,7 @@ import {
 import { parseQuantity, quantityToNumber } from "~/lib/decimal-amounts";
 import { dayRangeBounds } from "~/lib/calendar-days";
 import { containsPattern } from "~/lib/list-filters";
+import { formatKeysetCursor, type KeysetCursor } from "~/lib/keyset-cursor";
 import type {
   MovementJournalFilter,
   MovementJournalQuery,
@@ -140,25 +143,90 @@ function selectJournalRows() {
     );
 }
 
+/** Rows older than the cursor in the journal's order (time, then id, newest first). */
+function olderThan(cursor: KeysetCursor): SQL {
+  return or(
+    lt(stockMovements.createdAt, cursor.at),
+    and(
+      eq(stockMovements.createdAt, cursor.at),
+      lt(stockMovements.id, cursor.id),
+    ),
+  )!;
+}
+
+/** Rows newer than the cursor in the journal's order. */
+function newerThan(cursor: KeysetCursor): SQL {
+  return or(
+    gt(stockMovements.createdAt, cursor.at),
+    and(
+      eq(stockMovements.createdAt, cursor.at),
+      gt(stockMovements.id, cursor.id),
+    ),
+  )!;
+}
+
+const newestFirst = [desc(stockMovements.createdAt), desc(stockMovements.id)];
+const oldestFirst = [asc(stockMovements.createdAt), asc(stockMovements.id)];
+
+const cursorOf = (row: { createdAt: Date; id: number }) =>
+  formatKeysetCursor({ at: row.createdAt, id: row.id });
+
 /**
  * One page of movements matching the filters. Returns `hasMore` rather than a
  * total: counting a million-row journal for every page would cost more than the page.
+ *
+ * After a cursor (`after`, older) or before one (`before`, newer) the page is read from
+ * the (item, time), (time) … indexes at the cursor's place (keyset); `page` alone still
+ * skips `page − 1` pages (offset), which grows with depth, so the journal's own links and
+ * the API's `nextCursor`/`previousCursor` carry cursors.
  */
 export async function listMovements(
   query: MovementJournalQuery & { itemId?: number },
 ) {
   const conditions = await journalConditions(query);
-  const rows = await selectJournalRows()
-    .where(conditions.length > 0 ? and(...conditions) : undefined)
-    .orderBy(desc(stockMovements.createdAt), desc(stockMovements.id))
-    .limit(query.pageSize + 1)
-    .offset((query.page - 1) * query.pageSize);
+  const where = (...more: SQL[]) => and(...conditions, ...more);
+  let rows: Awaited<ReturnType<typeof readPage>>;
+  let hasMore: boolean;
+  let hasNewer: boolean;
+  function readPage(condition: SQL | undefined, order: SQL[], offset = 0) {
+    return selectJournalRows()
+      .where(condition)
+      .orderBy(...order)
+      .limit(query.pageSize + 1)
+      .offset(offset);
+  }
+  if (query.before) {
+    // The newer page, read upwards from the cursor and turned round.
+    const newer = await readPage(where(newerThan(query.before)), oldestFirst);
+    hasNewer = newer.length > query.pageSize;
+    rows = newer.slice(0, query.pageSize).reverse();
+    const older = await selectJournalRows()
+      .where(where(olderThan(rows.at(-1) ? keyOf(rows.at(-1)!) : query.before)))
+      .orderBy(...newestFirst)
+      .limit(1);
+    hasMore = older.length > 0;
+  } else {
+    const found = query.after
+      ? await readPage(where(olderThan(query.after)), newestFirst)
+      : await readPage(
+          conditions.length > 0 ? and(...conditions) : undefined,
+          newestFirst,
+          (query.page - 1) * query.pageSize,
+        );
+    hasMore = found.length > query.pageSize;
+    rows = found.slice(0, query.pageSize);
+    hasNewer = query.after !== undefined || query.page > 1;
+  }
 
   const quantity = (text: string | null) =>
     text === null ? null : quantityToNumber(parseQuantity(text));
   return {
-    hasMore: rows.length > query.pageSize,
-    movements: rows.slice(0, query.pageSize).map((row) => ({
+    hasMore,
+    /** Where the next (older) page starts; null on the last page. */
+    nextCursor: hasMore && rows.length > 0 ? cursorOf(rows.at(-1)!) : null,
+    /** Where the previous (newer) page ends; null on the first page. */
+    previousCursor: hasNewer && rows.length > 0 ? cursorOf(rows[0]!) : null,
+    movements: rows.map((row) => ({
       ...row,
       quantity: quantity(row.quantity)!,
       unitCost: row.unitCost === null ? null : Number(row.unitCost),
@@ -170,6 +238,11 @@ export async function listMovements(
   };
 }
 
+const keyOf = (row: { createdAt: Date; id: number }): KeysetCursor => ({
+  at: row.createdAt,
+  id: row.id,
+});
+
 /**
  * Every movement matching the filters, newest first, a batch at a time: each batch is
  * read after the last row of the one before (by time and id, the journal's order and
@@ -180,28 +253,14 @@ export async function* journalInBatches(
   batchSize = 1000,
 ) {
   const conditions = await journalConditions(filter);
-  let after: { createdAt: Date; id: number } | undefined;
+  let after: KeysetCursor | undefined;
   for (;;) {
     const rows = await selectJournalRows()
-      .where(
-        and(
-          ...conditions,
-          after
-            ? or(
-                lt(stockMovements.createdAt, after.createdAt),
-                and(
-                  eq(stockMovements.createdAt, after.createdAt),
-                  lt(stockMovements.id, after.id),
-                ),
-              )
-            : undefined,
-        ),
-      )
-      .orderBy(desc(stockMovements.createdAt), desc(stockMovements.id))
+      .where(and(...conditions, after ? olderThan(after) : undefined))
+      .orderBy(...newestFirst)
       .limit(batchSize);
     if (rows.length > 0) yield rows;
     if (rows.length < batchSize) return;
-    const last = rows[rows.length - 1]!;
-    after = { createdAt: last.createdAt, id: last.id };
+    after = keyOf(rows[rows.length - 1]!);
   }
 }

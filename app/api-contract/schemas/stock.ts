@@ -158,6 +158,16 @@ export const movementJournalPageSchema = z
       description:
         "Whether a next page has rows (the journal is not counted: a total would cost more than the page).",
     }),
+    nextCursor: z.string().nullable().meta({
+      description:
+        "Pass as `after` (with `page` one higher, if you keep count) for the next, older page; null on the last page. Read from the index at that place, it costs what the first page does.",
+      example: "1764806400123-98765",
+    }),
+    previousCursor: z.string().nullable().meta({
+      description:
+        "Pass as `before` for the previous, newer page; null on the first page.",
+      example: "1764806400456-98815",
+    }),
   })
   .meta({
     id: "MovementJournalPage",
