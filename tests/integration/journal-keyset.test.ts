@@ -68,8 +68,9 @@ beforeAll(async () => {
     .from(stockMovements)
     .where(eq(stockMovements.itemId, item.id))
     .orderBy(stockMovements.id);
-  // Three movements share each millisecond, so pages end inside a tie: the id decides.
-  const start = Date.parse("2032-05-01T10:00:00.000Z");
+  // Three movements share each millisecond, so pages end inside a tie: the id decides. In the
+  // past, so they neither top other tests' newest-first journals nor fall in their future dates.
+  const start = Date.parse("2021-05-01T10:00:00.000Z");
   for (const [index, row] of rows.entries())
     await testDb()
       .update(stockMovements)
