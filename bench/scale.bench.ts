@@ -6,10 +6,11 @@
  * The large store lives in its own database (`<bench database>_large`), made
  * once (several minutes) and reused by later runs while it is complete.
  */
+import { execFileSync } from "node:child_process";
 import mysql from "mysql2/promise";
 import { poolOptionsFromUrl } from "~/db/connection-options";
 import { formatKeysetCursor } from "~/lib/keyset-cursor";
-import { migrateDatabase, seedWhenEmpty } from "../scripts/lib/database-tasks";
+import { migrateDatabase } from "../scripts/lib/database-tasks";
 import {
   ensureLocalMariadb,
   recreateDatabase,
@@ -52,7 +53,12 @@ export async function largeBenchDatabase(input: {
   }
   if (!process.env.TEST_DATABASE_URL) await recreateDatabase(name);
   await migrateDatabase(databaseUrl, { log: () => {} });
-  await seedWhenEmpty(databaseUrl, { quiet: true });
+  // In its own process: this one's app database client (imported by the demo seed) already
+  // served the normal store and was closed after it, and a module is imported once.
+  execFileSync("npx", ["tsx", "scripts/db-seed.ts", "--demo"], {
+    env: { ...process.env, DATABASE_URL: databaseUrl },
+    stdio: ["ignore", "ignore", "inherit"],
+  });
   await seedBenchStock(databaseUrl, input.userId, input.size, input.log);
   await checkBenchLedger(databaseUrl, stock);
   return { databaseUrl, stock, reused: false };

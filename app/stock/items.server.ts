@@ -11,6 +11,7 @@ import {
   sql,
   type SQL,
 } from "drizzle-orm";
+import { keptItemCount } from "./item-counts.server";
 import { compareOldestFirst } from "./stock-allocation";
 import { db } from "~/db/client.server";
 import { items, locations, lots, stockBalances } from "~/db/schema";
@@ -98,10 +99,7 @@ export async function listItems(query: ItemListQuery) {
   const hint = query.search?.trim()
     ? { forceIndex: "items_search_idx" }
     : undefined;
-  const [counted] = await db
-    .select({ total: count() })
-    .from(items, hint)
-    .where(where);
+  const total = await countItems(query, where, hint);
   const pageIds = db
     .select({ id: items.id })
     .from(items, hint)
@@ -115,7 +113,24 @@ export async function listItems(query: ItemListQuery) {
     .from(items)
     .innerJoin(pageIds, eq(items.id, pageIds.id))
     .orderBy(...order);
-  return { total: counted?.total ?? 0, items: rows.map(itemSummary) };
+  return { total, items: rows.map(itemSummary) };
+}
+
+/**
+ * The number of items the list matches. Without a search it is read from the kept counts
+ * (a few rows, whatever the catalogue's size); a search counts its matches on the search index.
+ */
+async function countItems(
+  query: ItemListQuery,
+  where: SQL | undefined,
+  hint: { forceIndex: string } | undefined,
+): Promise<number> {
+  if (!query.search?.trim()) return keptItemCount(query);
+  const [counted] = await db
+    .select({ total: count() })
+    .from(items, hint)
+    .where(where);
+  return counted?.total ?? 0;
 }
 
 function itemSummary(row: {

@@ -125,6 +125,27 @@ export const items = mysqlTable(
   ],
 );
 
+/**
+ * How many items there are by active, kind and below-reorder: the stock list's total without
+ * counting the catalogue. Kept by triggers on items (migration 0020, decision 0XX), in the same
+ * transaction as the item's own change; touched only when one of the three columns changes.
+ */
+export const itemCounts = mysqlTable(
+  "item_counts",
+  {
+    active: boolean("active").notNull(),
+    kind: mysqlEnum("kind", itemKinds).notNull(),
+    belowReorder: boolean("below_reorder").notNull(),
+    items: int("items").notNull().default(0),
+  },
+  (table) => [
+    primaryKey({
+      name: "item_counts_pk",
+      columns: [table.active, table.kind, table.belowReorder],
+    }),
+  ],
+);
+
 export const wireItems = mysqlTable("wire_items", {
   itemId: int("item_id")
     .primaryKey()
