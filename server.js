@@ -4,6 +4,7 @@
 // connections, requests in flight finish within SHUTDOWN_GRACE_MS, then the
 // database pool closes and the process exits 0. A second signal, a moment
 // after the first, exits at once.
+import fs from "node:fs";
 import http from "node:http";
 import express from "express";
 
@@ -76,7 +77,23 @@ if (developing) {
       maxAge: "1y",
     }),
   );
-  app.use(express.static(`${buildDirectory}/client`, { maxAge: "1h" }));
+  // The build's other files (the favicon) are served by name: a request for
+  // any other path (every page and API request) goes on to the app without
+  // a look at the disk. The list is read once: a build never changes.
+  const topLevelFiles = new Set(
+    fs
+      .readdirSync(`${buildDirectory}/client`, { withFileTypes: true })
+      .filter((entry) => entry.isFile())
+      .map((entry) => `/${entry.name}`),
+  );
+  const topLevelFile = express.static(`${buildDirectory}/client`, {
+    maxAge: "1h",
+  });
+  app.use((request, response, next) =>
+    topLevelFiles.has(request.path)
+      ? topLevelFile(request, response, next)
+      : next(),
+  );
   app.use(built.app);
 }
 

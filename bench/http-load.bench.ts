@@ -1,17 +1,14 @@
 /**
  * HTTP load on loopback with autocannon (20 connections, 10 s each, bounded):
  * the stock list API and the design costing API, each beside a bare
- * `node:http` handler that answers the raw mysql2 query of the same data.
+ * `node:http` handler that answers the raw mysql2 query of the same data, in a
+ * process of its own (bench/raw-load-server.ts) as the app server is.
  * The ratio app ÷ raw of requests per second shows what the app costs.
  */
-import { createHash } from "node:crypto";
-import http from "node:http";
-import type { AddressInfo } from "node:net";
+import { spawn } from "node:child_process";
+import path from "node:path";
 import autocannon from "autocannon";
-import mysql from "mysql2/promise";
-import { poolOptionsFromUrl } from "~/db/connection-options";
 import type { Figure } from "./coil-estimates.bench";
-import { rawItemList } from "./stock.bench";
 
 const connections = 20;
 const durationSeconds = 10;
@@ -51,35 +48,49 @@ function load(
   });
 }
 
-/** A bare node:http server answering one raw query as JSON, on a free loopback port. */
+/**
+ * A raw baseline (bench/raw-load-server.ts) in a process of its own, as the app
+ * server is, so that it does not share the bench process's one thread with
+ * autocannon. Resolves once it listens.
+ */
 async function rawServer(
   databaseUrl: string,
-  answer: (pool: mysql.Pool, request: http.IncomingMessage) => Promise<unknown>,
+  answer: "stock" | "costing",
+  revision?: { id: number; designId: number; revision: number },
 ): Promise<{ url: string; close(): Promise<void> }> {
-  const pool = mysql.createPool({
-    ...poolOptionsFromUrl(databaseUrl),
-    connectionLimit: 10,
-  });
-  const server = http.createServer((request, response) => {
-    answer(pool, request)
-      .then((body) => {
-        response.writeHead(200, { "Content-Type": "application/json" });
-        response.end(JSON.stringify(body));
-      })
-      .catch((error: Error) => {
-        response.writeHead(500);
-        response.end(error.message);
-      });
-  });
-  await new Promise<void>((resolve) =>
-    server.listen(0, "127.0.0.1", () => resolve()),
+  const child = spawn(
+    process.execPath,
+    ["--import", "tsx", path.join(import.meta.dirname, "raw-load-server.ts")],
+    {
+      stdio: ["ignore", "pipe", "inherit"],
+      env: {
+        ...process.env,
+        DATABASE_URL: databaseUrl,
+        RAW_LOAD_ANSWER: answer,
+        RAW_LOAD_REVISION: JSON.stringify(revision ?? null),
+      },
+    },
   );
-  const { port } = server.address() as AddressInfo;
+  const exited = new Promise<void>((resolve) =>
+    child.once("exit", () => resolve()),
+  );
+  const port = await new Promise<number>((resolve, reject) => {
+    let output = "";
+    child.stdout.on("data", (chunk: Buffer) => {
+      output += chunk.toString();
+      const end = output.indexOf("\n");
+      if (end >= 0)
+        resolve((JSON.parse(output.slice(0, end)) as { port: number }).port);
+    });
+    child.once("exit", (code) =>
+      reject(new Error(`the raw load server exited with ${code}`)),
+    );
+  });
   return {
     url: `http://127.0.0.1:${port}/`,
     close: async () => {
-      await new Promise<void>((resolve) => server.close(() => resolve()));
-      await pool.end();
+      child.kill("SIGTERM");
+      await exited;
     },
   };
 }
@@ -136,13 +147,7 @@ export async function benchHttpLoad(input: {
   const figures: Figure[] = [];
 
   // The stock list API, first page by SKU, beside the same count and page read raw.
-  const stockRaw = await rawServer(
-    input.databaseUrl,
-    async (pool, request) => ({
-      session: await rawSessionRead(pool, request),
-      ...(await rawItemList(pool, new URLSearchParams("page=1&pageSize=50"))),
-    }),
-  );
+  const stockRaw = await rawServer(input.databaseUrl, "stock");
   try {
     const app = await load(`${input.baseUrl}/api/v1/items?page=1`, {
       Cookie: input.cookie,
@@ -155,12 +160,10 @@ export async function benchHttpLoad(input: {
   }
 
   // The design costing API beside the raw reads of the same revision, lines and prices.
-  const costingRaw = await rawServer(input.databaseUrl, (pool, request) =>
-    rawCostingReads(pool, request, {
-      id: input.revisionId,
-      ...revisionOfPath(input.costingPath),
-    }),
-  );
+  const costingRaw = await rawServer(input.databaseUrl, "costing", {
+    id: input.revisionId,
+    ...revisionOfPath(input.costingPath),
+  });
   try {
     const app = await load(`${input.baseUrl}${input.costingPath}`, {
       Cookie: input.cookie,
@@ -181,71 +184,6 @@ export async function benchHttpLoad(input: {
 /** What the raw costing handler reads, for the figures' note. */
 const rawCostingNote =
   "raw: the statements a costing request sends, bare: the session with its person and roles (one statement, sessions ⋈ users ⟕ user_roles by the cookie's SHA-256), the revision ⋈ design, its lines ⋈ items ⋈ wire_items ⋈ magnet_items ⋈ magnet_grades, then side by side the lines' price lines ⋈ items ⋈ suppliers and the metal bases, currency rates and company currency (one statement); answered as JSON, no costing arithmetic";
-
-/**
- * The session check every signed-in request makes, bare: the statement the app's session
- * adapter sends (app/auth/session-adapter.server.ts), the session with its person and the
- * person's roles, found by the SHA-256 of the cookie's token.
- */
-async function rawSessionRead(
-  pool: mysql.Pool,
-  request: http.IncomingMessage,
-): Promise<unknown[][]> {
-  const token = /turnledger_session=([^;]+)/.exec(
-    request.headers.cookie ?? "",
-  )?.[1];
-  const sessionId = createHash("sha256")
-    .update(token ?? "")
-    .digest("hex");
-  const [rows] = (await rowsAsArray(
-    pool,
-    "SELECT s.expires_at, s.started_at, u.id, u.email, u.name, u.active, u.locale, u.time_zone, r.role FROM sessions s INNER JOIN users u ON u.id = s.user_id LEFT JOIN user_roles r ON r.user_id = u.id WHERE s.id = ?",
-    [sessionId],
-  )) as unknown as [unknown[][]];
-  if (rows.length === 0) throw new Error("raw: no session for the cookie");
-  return rows;
-}
-
-const rowsAsArray = (pool: mysql.Pool, sql: string, values: unknown[]) =>
-  pool.query({ sql, rowsAsArray: true }, values);
-
-/**
- * The database work of GET /api/v1/designs/:id/revisions/:n/costing, bare: every table the
- * app reads for one costing (best price), the same rows, the same statements in the same
- * order (each waits for what it needs; the price lines and the reference go side by side),
- * with mysql2 and no framework. See `rawCostingNote`.
- */
-async function rawCostingReads(
-  pool: mysql.Pool,
-  request: http.IncomingMessage,
-  revision: { id: number; designId: number; revision: number },
-): Promise<unknown> {
-  const session = await rawSessionRead(pool, request);
-  const [[revisionRow]] = (await rowsAsArray(
-    pool,
-    "SELECT d.id, d.name, d.description, d.motor_type, r.* FROM design_revisions r INNER JOIN designs d ON d.id = r.design_id WHERE r.design_id = ? AND r.revision = ? LIMIT 1",
-    [revision.designId, revision.revision],
-  )) as unknown as [unknown[][]];
-  const [lines] = (await rowsAsArray(
-    pool,
-    "SELECT l.*, i.sku, i.name, i.unit, w.*, m.*, g.* FROM design_lines l INNER JOIN items i ON i.id = l.item_id LEFT JOIN wire_items w ON w.item_id = l.item_id LEFT JOIN magnet_items m ON m.item_id = l.item_id LEFT JOIN magnet_grades g ON g.grade_key = m.grade_key WHERE l.revision_id = ? ORDER BY l.position",
-    [revision.id],
-  )) as unknown as [unknown[][]];
-  const itemIds = [...new Set(lines.map((line) => line[4]))];
-  const [[prices], [reference]] = await Promise.all([
-    rowsAsArray(
-      pool,
-      "SELECT p.item_id, p.supplier_id, p.lead_time_days, p.pack_quantity, p.supplier_sku, p.currency, p.unit_price, p.adder_per_kg, p.conductor, p.min_quantity, p.valid_from, p.import_id, p.line, s.name, s.lead_time_days, i.sku, i.unit FROM price_lines p INNER JOIN items i ON i.id = p.item_id INNER JOIN suppliers s ON s.id = p.supplier_id WHERE p.item_id IN (?) LIMIT ?",
-      [itemIds, 5_000 * itemIds.length],
-    ),
-    pool.query(
-      `SELECT 'base' AS kind, conductor AS a, currency AS b, CAST(price_per_kg AS CHAR) AS c, CAST(valid_from AS CHAR) AS d FROM metal_base_prices
-       UNION ALL SELECT 'rate', currency, NULL, CAST(rate AS CHAR), CAST(valid_from AS CHAR) FROM currency_rates
-       UNION ALL SELECT 'currency', value, NULL, NULL, NULL FROM settings WHERE setting_key = 'company_currency'`,
-    ),
-  ]);
-  return { session, revision: revisionRow, lines, prices, reference };
-}
 
 /** The design id and revision number of a costing path (/api/v1/designs/7/revisions/1/costing…). */
 function revisionOfPath(path: string): { designId: number; revision: number } {

@@ -38,19 +38,30 @@ export interface ItemListQuery {
   pageSize: number;
 }
 
-function itemFilters(query: ItemListQuery): SQL | undefined {
+/**
+ * The conditions of a list query. Its values are placeholders (`kind`, `pattern`), filled
+ * in by {@link listItems}: the statements of one shape of query are built once.
+ */
+function itemFilters(shape: ItemListShape): SQL | undefined {
   const conditions: SQL[] = [];
-  if (!query.includeArchived) conditions.push(eq(items.active, true));
-  if (query.kind) conditions.push(eq(items.kind, query.kind));
-  if (query.belowReorder) conditions.push(eq(items.belowReorder, true));
-  const search = query.search?.trim();
-  if (search) {
+  if (!shape.includeArchived) conditions.push(eq(items.active, true));
+  if (shape.kind) conditions.push(eq(items.kind, sql.placeholder("kind")));
+  if (shape.belowReorder) conditions.push(eq(items.belowReorder, true));
+  if (shape.search) {
     // search_text is SKU, name and size in lower case with a binary collation: one fast LIKE.
-    conditions.push(
-      like(items.searchText, containsPattern(search.toLowerCase())),
-    );
+    conditions.push(like(items.searchText, sql.placeholder("pattern")));
   }
   return conditions.length > 0 ? and(...conditions) : undefined;
+}
+
+/** What decides a list query's SQL text (its values aside). */
+interface ItemListShape {
+  includeArchived: boolean;
+  kind: boolean;
+  belowReorder: boolean;
+  search: boolean;
+  sort: ItemSortKey;
+  descending: boolean;
 }
 
 /** The columns an item summary (list row, API answer) is made from. */
@@ -85,52 +96,83 @@ const sortColumns: Record<ItemSortKey, SQL | typeof items.sku> = {
  * not drag thousands of skipped rows through the server (a "deferred join").
  */
 export async function listItems(query: ItemListQuery) {
-  const where = itemFilters(query);
-  const sortColumn = sortColumns[query.sort ?? "sku"];
+  const search = query.search?.trim();
+  const statements = listStatements({
+    includeArchived: !!query.includeArchived,
+    kind: !!query.kind,
+    belowReorder: !!query.belowReorder,
+    search: !!search,
+    sort: query.sort ?? "sku",
+    descending: !!query.descending,
+  });
+  const values = {
+    kind: query.kind,
+    pattern: search ? containsPattern(search.toLowerCase()) : undefined,
+  };
+  // Without a search the total is read from the kept counts (a few rows, whatever the
+  // catalogue's size; decision 050); a search counts its matches on the search index.
+  const total = statements.searchTotal
+    ? ((await statements.searchTotal.execute(values))[0]?.total ?? 0)
+    : await keptItemCount(query);
+  const rows = await statements.page.execute({
+    ...values,
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+  });
+  return { total, items: rows.map(itemSummary) };
+}
+
+/**
+ * The two statements of each shape of list query, built once (every stock list and items
+ * API request would otherwise have Drizzle build the same SQL text again). At most
+ * 2⁴ × 6 sorts × 2 directions = 192 shapes.
+ */
+const listStatementsByShape = new Map<
+  string,
+  ReturnType<typeof buildListStatements>
+>();
+
+function listStatements(shape: ItemListShape) {
+  const key = JSON.stringify(shape);
+  let statements = listStatementsByShape.get(key);
+  if (!statements) {
+    statements = buildListStatements(shape);
+    listStatementsByShape.set(key, statements);
+  }
+  return statements;
+}
+
+function buildListStatements(shape: ItemListShape) {
+  const where = itemFilters(shape);
+  const sortColumn = sortColumns[shape.sort];
   // Ties break on the id in the same direction: every index ends with the id, so the
   // page is read in index order without sorting (the SKU is unique, so it needs no tie-break).
-  const direction = query.descending ? desc : asc;
+  const direction = shape.descending ? desc : asc;
   const order =
-    query.sort === undefined || query.sort === "sku"
+    shape.sort === "sku"
       ? [direction(items.sku)]
       : [direction(sortColumn), direction(items.id)];
   // A search reads the small covering search index from end to end (a substring LIKE uses no
   // index range); left to itself the optimizer walks the SKU order and reads every row.
-  const hint = query.search?.trim()
-    ? { forceIndex: "items_search_idx" }
+  const hint = shape.search ? { forceIndex: "items_search_idx" } : undefined;
+  const searchTotal = shape.search
+    ? db.select({ total: count() }).from(items, hint).where(where).prepare()
     : undefined;
-  const total = await countItems(query, where, hint);
   const pageIds = db
     .select({ id: items.id })
     .from(items, hint)
     .where(where)
     .orderBy(...order)
-    .limit(query.pageSize)
-    .offset((query.page - 1) * query.pageSize)
+    .limit(sql.placeholder("limit"))
+    .offset(sql.placeholder("offset"))
     .as("page_ids");
-  const rows = await db
+  const page = db
     .select(summaryColumns)
     .from(items)
     .innerJoin(pageIds, eq(items.id, pageIds.id))
-    .orderBy(...order);
-  return { total, items: rows.map(itemSummary) };
-}
-
-/**
- * The number of items the list matches. Without a search it is read from the kept counts
- * (a few rows, whatever the catalogue's size); a search counts its matches on the search index.
- */
-async function countItems(
-  query: ItemListQuery,
-  where: SQL | undefined,
-  hint: { forceIndex: string } | undefined,
-): Promise<number> {
-  if (!query.search?.trim()) return keptItemCount(query);
-  const [counted] = await db
-    .select({ total: count() })
-    .from(items, hint)
-    .where(where);
-  return counted?.total ?? 0;
+    .orderBy(...order)
+    .prepare();
+  return { searchTotal, page };
 }
 
 function itemSummary(row: {
