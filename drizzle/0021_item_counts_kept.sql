@@ -1,4 +1,4 @@
--- item_counts is kept by these triggers (decision 0XX-kept-item-counts): in the same transaction
+-- item_counts is kept by these triggers (decision 050-kept-item-counts): in the same transaction
 -- as the item's own change, and only when active, kind or below_reorder change. Two rows change
 -- in key order, so two transactions moving items across the same keys never wait on each other
 -- in opposite orders.

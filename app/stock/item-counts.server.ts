@@ -1,6 +1,6 @@
 /**
  * The number of items by active, kind and below-reorder, kept by triggers on items
- * (item_counts, decision 0XX-kept-item-counts): the stock list's total without counting
+ * (item_counts, decision 050-kept-item-counts): the stock list's total without counting
  * the catalogue. A handful of rows, whatever the catalogue's size.
  */
 import { and, eq, sql, type SQL } from "drizzle-orm";

@@ -320,7 +320,7 @@ export const appUserPrivileges = [
   "ALTER",
   "INDEX",
   "REFERENCES",
-  // The triggers that keep item_counts (decision 0XX-kept-item-counts) are made by a migration.
+  // The triggers that keep item_counts (decision 050-kept-item-counts) are made by a migration.
   "TRIGGER",
 ];
 

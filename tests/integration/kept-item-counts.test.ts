@@ -1,6 +1,6 @@
 /**
  * The stock list's total without a search comes from item_counts, kept by
- * triggers on items (decision 0XX-kept-item-counts). After every kind of change
+ * triggers on items (decision 050-kept-item-counts). After every kind of change
  * to an item — created, archived, restored, moved across its reorder point by
  * movements, its reorder point changed, its kind changed by hand in SQL, deleted —
  * the list's totals (items API and the page's loader) equal COUNT(*) over items,

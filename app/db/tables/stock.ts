@@ -127,7 +127,7 @@ export const items = mysqlTable(
 
 /**
  * How many items there are by active, kind and below-reorder: the stock list's total without
- * counting the catalogue. Kept by triggers on items (migration 0020, decision 0XX), in the same
+ * counting the catalogue. Kept by triggers on items (migration 0020, decision 050), in the same
  * transaction as the item's own change; touched only when one of the three columns changes.
  */
 export const itemCounts = mysqlTable(
