@@ -13,6 +13,7 @@ import {
 } from "./coil-estimates.bench";
 import { benchDesignCosting } from "./design-costing.bench";
 import { benchHttpLoad } from "./http-load.bench";
+import { benchLighthouse } from "./lighthouse.bench";
 import {
   benchPriceImport,
   benchPriceImportProgress,
@@ -23,7 +24,7 @@ import { benchStock } from "./stock.bench";
 // The benchmarks get their own database beside the tests'.
 process.env.TEST_DATABASE_NAME ??= "turnledger_test_bench";
 
-// BENCH_ONLY=price-import (or coil, stock, design, load, price-import-progress) runs one group
+// BENCH_ONLY=price-import (or coil, stock, design, load, price-import-progress, lighthouse) runs one group
 // while working on it.
 const only = process.env.BENCH_ONLY;
 const runs = (group: string) => !only || only === group;
@@ -141,6 +142,18 @@ try {
       ...(await benchPriceImportProgress({
         baseUrl: environment.baseUrl,
         buyerCookie,
+      })),
+    );
+  }
+  if (runs("lighthouse")) {
+    console.log(
+      "[bench] Lighthouse, mobile preset, 3 runs each: stock list, record page, design page, insight…",
+    );
+    figures.push(
+      ...(await benchLighthouse({
+        baseUrl: environment.baseUrl,
+        storekeeperEmail: "storekeeper@turnledger.test",
+        password: demoPassword(),
       })),
     );
   }
