@@ -30,7 +30,8 @@ const chromiumFlags = [
   "--disable-sync",
 ];
 
-const runsPerPage = 3;
+/** Three, Lighthouse's advice; BENCH_LIGHTHOUSE_RUNS=1 for a quick look while working on a page. */
+const runsPerPage = Number(process.env.BENCH_LIGHTHOUSE_RUNS ?? 3);
 
 /** The figures read from each Lighthouse run. */
 const scores = ["performance", "accessibility", "best-practices"] as const;
