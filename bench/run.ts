@@ -18,13 +18,14 @@ import {
   benchPriceImport,
   benchPriceImportProgress,
 } from "./price-import.bench";
+import { benchPageWeight } from "./page-weight.bench";
 import { seedBenchStock } from "./seed-bench-stock";
 import { benchStock } from "./stock.bench";
 
 // The benchmarks get their own database beside the tests'.
 process.env.TEST_DATABASE_NAME ??= "turnledger_test_bench";
 
-// BENCH_ONLY=price-import (or coil, stock, design, load, price-import-progress, lighthouse) runs one group
+// BENCH_ONLY=price-import (or coil, stock, design, load, price-import-progress, pages, lighthouse) runs one group
 // while working on it.
 const only = process.env.BENCH_ONLY;
 const runs = (group: string) => !only || only === group;
@@ -33,6 +34,9 @@ const figures: Figure[] = [];
 if (runs("coil")) figures.push(benchPureCoilEstimates());
 
 const environment = await startTestEnvironment();
+// Each page's first-load JavaScript, from the build the environment serves.
+if (runs("pages"))
+  figures.push(...benchPageWeight(process.env.BUILD_DIRECTORY ?? "build"));
 // The app refuses cookie-signed writes without its own Origin (decision 012), as a browser
 // sends it; the benchmarks' requests say where they come from the same way.
 const plainFetch = globalThis.fetch;
