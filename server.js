@@ -7,6 +7,7 @@
 import fs from "node:fs";
 import http from "node:http";
 import express from "express";
+import expressStaticGzip from "express-static-gzip";
 
 const developing = process.env.NODE_ENV === "development";
 const port = Number.parseInt(process.env.PORT || "3000", 10);
@@ -70,9 +71,19 @@ if (developing) {
   // the security headers (docs/decisions/012) go on the static files too.
   app.use(built.observeRequests);
   app.use(built.securityHeaders);
+  // The build's brotli or gzip copy of a file (server/precompressed-assets.ts),
+  // as the request's Accept-Encoding allows (brotli first), with Vary:
+  // Accept-Encoding; the file itself otherwise. Hashed names under /assets
+  // never change: cached for a year.
+  const precompressed = (folder, serveStatic) =>
+    expressStaticGzip(folder, {
+      enableBrotli: true,
+      orderPreference: ["br", "gzip"],
+      serveStatic,
+    });
   app.use(
     "/assets",
-    express.static(`${buildDirectory}/client/assets`, {
+    precompressed(`${buildDirectory}/client/assets`, {
       immutable: true,
       maxAge: "1y",
     }),
@@ -86,7 +97,7 @@ if (developing) {
       .filter((entry) => entry.isFile())
       .map((entry) => `/${entry.name}`),
   );
-  const topLevelFile = express.static(`${buildDirectory}/client`, {
+  const topLevelFile = precompressed(`${buildDirectory}/client`, {
     maxAge: "1h",
   });
   app.use((request, response, next) =>

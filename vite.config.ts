@@ -1,6 +1,8 @@
 import { reactRouter } from "@react-router/dev/vite";
 import tailwindcss from "@tailwindcss/vite";
 import { createLogger, defineConfig } from "vite";
+import reactRouterConfig from "./react-router.config.js";
+import { precompressClientBuild } from "./server/precompressed-assets.js";
 
 /**
  * Vite's logger without one warning we cannot act on: @react-router/dev 7.18
@@ -41,5 +43,12 @@ export default defineConfig(({ isSsrBuild }) => ({
       "zod",
     ],
   },
-  plugins: [tailwindcss(), reactRouter()],
+  plugins: [
+    tailwindcss(),
+    reactRouter(),
+    // Brotli and gzip copies beside the browser's files (server/precompressed-assets.ts).
+    isSsrBuild
+      ? precompressClientBuild(`${reactRouterConfig.buildDirectory}/client`)
+      : [],
+  ],
 }));

@@ -16,10 +16,12 @@ import {
 } from "./coil-estimates.bench";
 import { benchDesignCosting } from "./design-costing.bench";
 import { benchHttpLoad } from "./http-load.bench";
+import { benchLighthouse } from "./lighthouse.bench";
 import {
   benchPriceImport,
   benchPriceImportProgress,
 } from "./price-import.bench";
+import { benchPageWeight } from "./page-weight.bench";
 import { benchOneSize, largeBenchDatabase, sizeRatios } from "./scale.bench";
 import {
   largeBenchSize,
@@ -32,8 +34,8 @@ import { comparisonOf, formatSummary } from "./summary";
 // The benchmarks get their own database beside the tests'.
 process.env.TEST_DATABASE_NAME ??= "turnledger_test_bench";
 
-// BENCH_ONLY=price-import (or coil, stock, scale, design, load, price-import-progress) runs one
-// group while working on it.
+// BENCH_ONLY=price-import (or coil, stock, scale, design, load, price-import-progress, pages,
+// lighthouse) runs one group while working on it.
 const only = process.env.BENCH_ONLY;
 const runs = (group: string) => !only || only === group;
 
@@ -43,6 +45,9 @@ const notes: string[] = [];
 if (runs("coil")) figures.push(benchPureCoilEstimates());
 
 const environment = await startTestEnvironment();
+// Each page's first-load JavaScript, from the build the environment serves.
+if (runs("pages"))
+  figures.push(...benchPageWeight(process.env.BUILD_DIRECTORY ?? "build"));
 // The app refuses cookie-signed writes without its own Origin (decision 012), as a browser
 // sends it; the benchmarks' requests say where they come from the same way.
 // The large store's server (scale group) joins this list while it runs.
@@ -210,6 +215,18 @@ try {
       ...(await benchPriceImportProgress({
         baseUrl: environment.baseUrl,
         buyerCookie,
+      })),
+    );
+  }
+  if (runs("lighthouse")) {
+    console.log(
+      "[bench] Lighthouse, mobile preset, 3 runs each: stock list, record page, design page, insight…",
+    );
+    figures.push(
+      ...(await benchLighthouse({
+        baseUrl: environment.baseUrl,
+        storekeeperEmail: "storekeeper@turnledger.test",
+        password: demoPassword(),
       })),
     );
   }

@@ -9,6 +9,8 @@ export interface RawAnswer {
   status: number;
   headers: http.IncomingHttpHeaders;
   body: string;
+  /** The body's bytes as they came, never decompressed. */
+  bytes: Buffer;
 }
 
 export function rawRequest(options: {
@@ -38,13 +40,15 @@ export function rawRequest(options: {
       (response) => {
         const chunks: Buffer[] = [];
         response.on("data", (chunk: Buffer) => chunks.push(chunk));
-        response.on("end", () =>
+        response.on("end", () => {
+          const bytes = Buffer.concat(chunks);
           resolve({
             status: response.statusCode ?? 0,
             headers: response.headers,
-            body: Buffer.concat(chunks).toString("utf8"),
-          }),
-        );
+            body: bytes.toString("utf8"),
+            bytes,
+          });
+        });
         response.on("error", reject);
       },
     );
