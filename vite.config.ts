@@ -3,6 +3,7 @@ import tailwindcss from "@tailwindcss/vite";
 import { createLogger, defineConfig } from "vite";
 import reactRouterConfig from "./react-router.config.js";
 import { precompressClientBuild } from "./server/precompressed-assets.js";
+import { sideEffectFreeAppModules } from "./server/side-effect-free-app-modules.js";
 
 /**
  * Vite's logger without one warning we cannot act on: @react-router/dev 7.18
@@ -46,6 +47,8 @@ export default defineConfig(({ isSsrBuild }) => ({
   plugins: [
     tailwindcss(),
     reactRouter(),
+    // The browser's pages leave out app modules they use nothing of (server/side-effect-free-app-modules.ts).
+    isSsrBuild ? [] : sideEffectFreeAppModules("app"),
     // Brotli and gzip copies beside the browser's files (server/precompressed-assets.ts).
     isSsrBuild
       ? precompressClientBuild(`${reactRouterConfig.buildDirectory}/client`)
