@@ -1,3 +1,4 @@
+import path from "node:path";
 import { reactRouter } from "@react-router/dev/vite";
 import tailwindcss from "@tailwindcss/vite";
 import { createLogger, defineConfig } from "vite";
@@ -29,7 +30,18 @@ export default defineConfig(({ isSsrBuild }) => ({
   build: {
     rollupOptions: isSsrBuild ? { input: "./server/app.ts" } : undefined,
   },
-  resolve: { tsconfigPaths: true },
+  resolve: {
+    tsconfigPaths: true,
+    // In the browser, Zod comes configured for the Content-Security-Policy (app/lib/zod-in-browser.ts).
+    alias: isSsrBuild
+      ? []
+      : [
+          {
+            find: /^zod$/,
+            replacement: path.resolve("app/lib/zod-in-browser.ts"),
+          },
+        ],
+  },
   // Pre-bundle the browser's libraries up front, so the dev server never finds one
   // mid-session and reloads with a second copy of React.
   optimizeDeps: {

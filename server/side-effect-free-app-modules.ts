@@ -5,14 +5,14 @@
  * the libraries it calls at its top level. Without it, a page that imports one
  * constant or helper from a module that also builds a Zod schema at its top level
  * (`z.object(...)` is a call the bundler must assume has effects) loads all of Zod.
- * root.tsx is the exception: it configures Zod in the browser when it loads. A module
+ * lib/zod-in-browser.ts is the exception: it configures Zod when it loads. A module
  * of the app that must run for its effects in the browser belongs beside it here.
  * See docs/decisions/0XX-precompressed-assets-and-page-weight.md.
  */
 import path from "node:path";
 import type { Plugin } from "vite";
 
-const runsForItsEffects = new Set(["root.tsx"]);
+const runsForItsEffects = new Set(["lib/zod-in-browser.ts"]);
 
 export function sideEffectFreeAppModules(appFolder: string): Plugin {
   const folder = path.resolve(appFolder);
