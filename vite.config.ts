@@ -1,8 +1,10 @@
+import path from "node:path";
 import { reactRouter } from "@react-router/dev/vite";
 import tailwindcss from "@tailwindcss/vite";
 import { createLogger, defineConfig } from "vite";
 import reactRouterConfig from "./react-router.config.js";
 import { precompressClientBuild } from "./server/precompressed-assets.js";
+import { sideEffectFreeAppModules } from "./server/side-effect-free-app-modules.js";
 
 /**
  * Vite's logger without one warning we cannot act on: @react-router/dev 7.18
@@ -28,7 +30,18 @@ export default defineConfig(({ isSsrBuild }) => ({
   build: {
     rollupOptions: isSsrBuild ? { input: "./server/app.ts" } : undefined,
   },
-  resolve: { tsconfigPaths: true },
+  resolve: {
+    tsconfigPaths: true,
+    // In the browser, Zod comes configured for the Content-Security-Policy (app/lib/zod-in-browser.ts).
+    alias: isSsrBuild
+      ? []
+      : [
+          {
+            find: /^zod$/,
+            replacement: path.resolve("app/lib/zod-in-browser.ts"),
+          },
+        ],
+  },
   // Pre-bundle the browser's libraries up front, so the dev server never finds one
   // mid-session and reloads with a second copy of React.
   optimizeDeps: {
@@ -46,6 +59,8 @@ export default defineConfig(({ isSsrBuild }) => ({
   plugins: [
     tailwindcss(),
     reactRouter(),
+    // The browser's pages leave out app modules they use nothing of (server/side-effect-free-app-modules.ts).
+    isSsrBuild ? [] : sideEffectFreeAppModules("app"),
     // Brotli and gzip copies beside the browser's files (server/precompressed-assets.ts).
     isSsrBuild
       ? precompressClientBuild(`${reactRouterConfig.buildDirectory}/client`)

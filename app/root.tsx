@@ -1,13 +1,7 @@
 import { Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
-import { z } from "zod";
 import { RouteErrorPage } from "./components/route-error";
 import type { Route } from "./+types/root";
 import "./app.css";
-
-// Under the Content-Security-Policy (no 'unsafe-eval', docs/decisions/012) Zod's
-// probe for `new Function` is reported by browsers as a violation although Zod
-// catches it. Routes are imported after this module, so their schemas never probe.
-if (typeof document !== "undefined") z.config({ jitless: true });
 
 export function Layout({ children }: { children: React.ReactNode }) {
   return (

@@ -13,10 +13,26 @@ import { costHistoryChange, costingMoneyText } from "~/insight/design-insight";
 import type { StockValueInsight } from "~/insight/stock-value.server";
 import { formatDay, formatQuantity } from "~/lib/format";
 import { kindParts, palette, Swatch, type FillPart } from "./insight-patterns";
-import { InsightTrendChart } from "./insight/insight-trend-chart";
-import { TrendSample } from "./insight/trend-marker";
-import { InsightValueBars } from "./insight-value-bars";
+import { lazyFigure } from "./lazy-figure";
 import { countText } from "~/lib/unit-text";
+
+// The charts and the legend's samples load after the page (lazy-figure.tsx).
+const InsightTrendChart = lazyFigure(
+  () =>
+    import("./insight/insight-trend-chart").then(
+      (module) => module.InsightTrendChart,
+    ),
+  { aspectRatio: "720 / 300" },
+);
+const InsightValueBars = lazyFigure(
+  () =>
+    import("./insight-value-bars").then((module) => module.InsightValueBars),
+  { aspectRatio: "720 / 200" },
+);
+const TrendSample = lazyFigure(
+  () => import("./insight/trend-marker").then((module) => module.TrendSample),
+  { width: 36, height: 14 },
+);
 
 function Figure({
   label,

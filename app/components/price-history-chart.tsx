@@ -2,10 +2,8 @@ import { useId } from "react";
 import { Link } from "react-router";
 import { PriceHistoryFigures } from "~/components/stock/price-history-figures";
 import { PriceHistoryLegend } from "~/components/stock/price-history-legend";
-import {
-  PriceHistoryPlot,
-  priceHistoryLayout,
-} from "~/components/stock/price-history-plot";
+import { lazyFigure } from "~/components/lazy-figure";
+import { priceHistoryLayout } from "~/components/stock/price-history-layout";
 import { perUnitWord } from "~/lib/unit-text";
 import {
   offerName,
@@ -17,6 +15,14 @@ import { formatDay } from "~/lib/format";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export type { PriceHistoryView };
+
+const PriceHistoryPlot = lazyFigure(
+  () =>
+    import("~/components/stock/price-history-plot").then(
+      (module) => module.PriceHistoryPlot,
+    ),
+  { aspectRatio: "760 / 290" },
+);
 
 /**
  * The item's unit price for one quantity over the last year, one step line per supplier

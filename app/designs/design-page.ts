@@ -8,12 +8,9 @@ import { formatNumber } from "~/lib/format";
 import { z } from "zod";
 import type { DesignLineInput } from "./design-schemas";
 
-/** The price bases of a costing (as the costing API takes them), with their names on the page. */
-export const costBasisLabels = {
-  "best-price": "Best current supplier price",
-  "stock-average": "Moving average cost of stock",
-} as const;
-export type CostBasis = keyof typeof costBasisLabels;
+import { costBasisLabels, type CostBasis } from "./cost-basis";
+
+export { costBasisLabels, type CostBasis } from "./cost-basis";
 
 export const maxBuildQuantity = 1_000_000;
 

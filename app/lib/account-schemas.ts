@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { passwordMinimum } from "./password-minimum";
 
 /** Form and API schemas for accounts, shared by browser and server. */
 
@@ -23,7 +24,7 @@ export const sessionCredentialsSchema = z.object({
     .max(1000),
 });
 
-export const passwordMinimum = 10;
+export { passwordMinimum } from "./password-minimum";
 
 /** A new password and its confirmation: the one rule for every way of choosing one. */
 const chosenPasswordFields = {

@@ -3,7 +3,8 @@
  * query string (so a filtered list can be bookmarked and shared), the loader reads them
  * with the list's Zod schema through {@link readListFilters}, the query filters and pages
  * on the server, and links (pages, sort headers, "Download CSV") are written with
- * {@link listHref}. Pure: no framework, no I/O.
+ * {@link listHref} (list-address.ts, without Zod, so a page's links do not load it).
+ * Pure: no framework, no I/O.
  */
 import { z } from "zod";
 import {
@@ -12,8 +13,15 @@ import {
   searchParamsObject,
 } from "./search-params";
 
-/** The longest search text a list takes. */
-export const searchMaxLength = 80;
+import { searchMaxLength } from "./list-address";
+
+export {
+  containsPattern,
+  isFiltered,
+  listHref,
+  searchMaxLength,
+  type ListAddressValue,
+} from "./list-address";
 
 /** The `search` of a list: trimmed, at most {@link searchMaxLength} characters, left out when empty. */
 export const searchTextParam = z
@@ -41,45 +49,4 @@ export function readListFilters<Schema extends z.ZodType>(
     searchParamsObject(searchParams),
   );
   return { query, ignored: Object.keys(errors) };
-}
-
-export type ListAddressValue = string | number | boolean | null | undefined;
-
-/**
- * "/designs?search=stator&page=2": the path with the values that are set. Empty text,
- * `false`, null, undefined and page 1 are left out, so the plain list has the plain path.
- */
-export function listHref(
-  path: string,
-  values: Record<string, ListAddressValue>,
-): string {
-  const params = new URLSearchParams();
-  for (const [name, value] of Object.entries(values)) {
-    if (value === undefined || value === null || value === false) continue;
-    if (name === "page" && Number(value) <= 1) continue;
-    const text = value === true ? "1" : String(value).trim();
-    if (text !== "") params.set(name, text);
-  }
-  const query = params.toString();
-  return query ? `${path}?${query}` : path;
-}
-
-/** Parameters that arrange a list rather than narrow it. */
-const arranging = new Set(["page", "pageSize", "sort", "order"]);
-
-/** True when any value narrows the list (a search or a filter; page and sort do not). */
-export function isFiltered(values: Record<string, ListAddressValue>): boolean {
-  return Object.entries(values).some(
-    ([name, value]) =>
-      !arranging.has(name) &&
-      value !== undefined &&
-      value !== null &&
-      value !== false &&
-      String(value).trim() !== "",
-  );
-}
-
-/** A LIKE pattern for rows containing `text`: its %, _ and \ match themselves. */
-export function containsPattern(text: string): string {
-  return `%${text.replace(/[\\%_]/g, (character) => `\\${character}`)}%`;
 }

@@ -1,6 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/forgot-password";
 import { getOptionalUser } from "~/auth/guard.server";
@@ -12,7 +13,7 @@ import { requestPasswordReset } from "~/people/people.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await getOptionalUser(request);
-  return null;
+  return { constraint: getZodConstraint(forgotPasswordSchema) };
 }
 
 /** Why a request for a link was refused (the same whether or not the address has an account). */
@@ -62,15 +63,21 @@ export const meta: Route.MetaFunction = () => [
   { title: "Forgotten password · Turnledger" },
 ];
 
-export default function ForgotPassword({ actionData }: Route.ComponentProps) {
+export default function ForgotPassword({
+  loaderData,
+  actionData,
+}: Route.ComponentProps) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/lib/account-schemas").then(
+      (module) => module.forgotPasswordSchema,
+    ),
+  );
   const [form, fields] = useForm({
     lastResult: actionData?.result,
-    constraint: getZodConstraint(forgotPasswordSchema),
+    constraint: loaderData.constraint,
     shouldValidate: "onBlur",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: forgotPasswordSchema });
-    },
+    onValidate: validate,
   });
   return (
     <AccountCard title="Forgotten password">

@@ -1,6 +1,8 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
+import { passwordMinimum } from "~/lib/password-minimum";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/set-password";
 import {
@@ -14,7 +16,6 @@ import { AccountCard } from "~/components/account-card";
 import { FormMessages, TextField } from "~/components/text-field";
 import {
   newPasswordSchema,
-  passwordMinimum,
   passwordWorkBusyMessage,
 } from "~/lib/account-schemas";
 import { flashHeaders } from "~/lib/flash.server";
@@ -31,6 +32,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     token,
     usable: row !== null,
     invitation: row?.purpose === "invitation",
+    constraint: getZodConstraint(newPasswordSchema),
   };
 }
 
@@ -97,14 +99,15 @@ export default function SetPassword({
   actionData,
 }: Route.ComponentProps) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/lib/account-schemas").then((module) => module.newPasswordSchema),
+  );
   const [form, fields] = useForm({
     lastResult: actionData,
-    constraint: getZodConstraint(newPasswordSchema),
+    constraint: loaderData.constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: newPasswordSchema });
-    },
+    onValidate: validate,
   });
   if (!loaderData.usable) {
     return (

@@ -1,6 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import {
   data,
   Form,
@@ -31,7 +32,7 @@ export async function loader({ request }: Route.LoaderArgs) {
       safeRedirectPath(new URL(request.url).searchParams.get("redirectTo")),
     );
   }
-  return null;
+  return { constraint: getZodConstraint(signInSchema) };
 }
 
 export async function action({ request, context }: Route.ActionArgs) {
@@ -81,17 +82,21 @@ export const meta: Route.MetaFunction = () => [
   { title: "Sign in · Turnledger" },
 ];
 
-export default function SignIn({ actionData }: Route.ComponentProps) {
+export default function SignIn({
+  loaderData,
+  actionData,
+}: Route.ComponentProps) {
   const [searchParams] = useSearchParams();
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/lib/account-schemas").then((module) => module.signInSchema),
+  );
   const [form, fields] = useForm({
     lastResult: actionData,
-    constraint: getZodConstraint(signInSchema),
+    constraint: loaderData.constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: signInSchema });
-    },
+    onValidate: validate,
   });
   return (
     <AccountCard title="Sign in">

@@ -16,7 +16,7 @@ import { formatQuantity, formatAmount } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
 import { companyCurrency } from "~/purchasing/suppliers.server";
 import { listItems, type ItemSortKey } from "~/stock/items.server";
-import { stockCsvRowLimit } from "~/stock/stock-csv";
+import { stockCsvRowLimit } from "~/stock/stock-csv-row-limit";
 import {
   exportSearch,
   itemListQueryOf,

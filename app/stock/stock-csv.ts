@@ -6,8 +6,7 @@
 import { csvFile } from "~/lib/csv-file";
 import { roundedAmountText } from "~/lib/decimal-amounts";
 
-/** The most rows one export holds; the stock page says so when a view matches more. */
-export const stockCsvRowLimit = 50_000;
+export { stockCsvRowLimit } from "./stock-csv-row-limit";
 
 /** What the export needs of each item (the stock list's rows). */
 export interface StockCsvItem {

@@ -3,7 +3,7 @@
  * (the design at today's best supplier price, its build order at the stock average when
  * the order was made) say why they differ.
  */
-import { costBasisLabels, type CostBasis } from "~/designs/design-page";
+import { costBasisLabels, type CostBasis } from "~/designs/cost-basis";
 
 /** "best current supplier price", "moving average cost of stock". */
 export function costBasisText(basis: CostBasis): string {

@@ -9,7 +9,13 @@ import { costBasisText } from "../design/price-basis-note";
 import { splitColumns } from "./design-columns";
 import { costChartRows, type InsightDesignsData } from "./design-insight-text";
 import { DesignsNotRanked } from "./designs-not-ranked";
-import { InsightCostChart } from "./insight-cost-chart";
+import { lazyFigure } from "../lazy-figure";
+
+const InsightCostChart = lazyFigure(
+  () =>
+    import("./insight-cost-chart").then((module) => module.InsightCostChart),
+  { aspectRatio: "720 / 300" },
+);
 
 type Ranking = Record<
   "ranked" | "incomplete" | "withoutTorque",

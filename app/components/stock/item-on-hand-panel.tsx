@@ -1,6 +1,12 @@
 /** The item's on hand over time, as a chart. */
-import { OnHandChart } from "~/components/on-hand-chart";
+import { lazyFigure } from "~/components/lazy-figure";
 import type { OnHandPoint } from "~/stock/on-hand-history-chart";
+
+const OnHandChart = lazyFigure(
+  () =>
+    import("~/components/on-hand-chart").then((module) => module.OnHandChart),
+  { aspectRatio: "720 / 250" },
+);
 
 export function ItemOnHandPanel(props: {
   points: OnHandPoint[];

@@ -5,7 +5,12 @@
  */
 import type { PriceHistoryChartLayout } from "~/pricing/price-history-chart";
 import { offerName, type PriceHistoryView } from "~/stock/price-history-texts";
-import { OfferLineSample } from "./price-offer-marker";
+import { lazyFigure } from "~/components/lazy-figure";
+
+const OfferLineSample = lazyFigure(
+  () => import("./price-offer-marker").then((module) => module.OfferLineSample),
+  { width: 36, height: 12 },
+);
 
 export function PriceHistoryLegend({
   history,

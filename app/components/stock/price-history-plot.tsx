@@ -13,8 +13,6 @@ import { Line, LinePath } from "@visx/shape";
 import { formatQuantity } from "~/lib/format";
 import { perUnitWord } from "~/lib/unit-text";
 import {
-  priceHistoryChart,
-  type ChartFrame,
   type ChartPoint,
   type PriceHistoryChartLayout,
 } from "~/pricing/price-history-chart";
@@ -26,24 +24,10 @@ import {
 } from "~/stock/price-history-texts";
 import { formatDay } from "~/lib/format";
 import { OfferMarker, offerStrokeClass } from "./price-offer-marker";
+import { priceHistoryFrame as frame } from "./price-history-layout";
 
-const frame: ChartFrame = {
-  width: 760,
-  height: 290,
-  left: 62,
-  right: 196,
-  top: 14,
-  bottom: 46,
-};
 const plotRight = frame.width - frame.right;
 const plotBottom = frame.height - frame.bottom;
-
-/** The layout of the history in this plot's frame; null when no article has a price on any day. */
-export function priceHistoryLayout(
-  history: PriceHistoryView,
-): PriceHistoryChartLayout | null {
-  return priceHistoryChart(history.series, history.to, frame);
-}
 
 /**
  * The offer's prices as a step line: each price holds until the next point, a day
