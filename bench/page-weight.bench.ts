@@ -16,7 +16,7 @@ export function benchPageWeight(buildDirectory: string): Figure[] {
   return pageWeights(path.join(buildDirectory, "client")).map((page) => {
     const kb = kilobytes(page.gzipBytes);
     return {
-      name: `first-load JS gz ${page.path}`,
+      name: `first-load JavaScript (gzip) ${page.path}`,
       unit: "KB gzip",
       target: `< ${firstLoadBudgetKb} KB`,
       passed: kb < firstLoadBudgetKb,

@@ -89,7 +89,7 @@ export async function rawItemList(
     params.get("sort") === "value" ? "stock_value DESC, id DESC" : "sku";
   const hint = params.get("search") ? "FORCE INDEX (items_search_idx)" : "";
   // The total as the app reads it: a search counts its matches; the other filters read the
-  // counts kept by triggers on items (item_counts, decision 0XX-kept-item-counts).
+  // counts kept by triggers on items (item_counts, decision 050-kept-item-counts).
   const [[{ total }]] = (await connection.query(
     params.get("search")
       ? `SELECT COUNT(*) AS total FROM items ${hint} WHERE ${where.join(" AND ")}`

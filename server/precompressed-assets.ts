@@ -3,7 +3,7 @@
  * text file of the client build a brotli copy (name.js.br) and a gzip copy
  * (name.js.gz), which server.js sends as they are to a browser that accepts
  * them (express-static-gzip). No request compresses an asset again.
- * See docs/decisions/0XX-precompressed-assets-and-page-weight.md.
+ * See docs/decisions/051-precompressed-assets-and-page-weight.md.
  */
 import fs from "node:fs/promises";
 import path from "node:path";

@@ -7,7 +7,7 @@
  * (`z.object(...)` is a call the bundler must assume has effects) loads all of Zod.
  * lib/zod-in-browser.ts is the exception: it configures Zod when it loads. A module
  * of the app that must run for its effects in the browser belongs beside it here.
- * See docs/decisions/0XX-precompressed-assets-and-page-weight.md.
+ * See docs/decisions/051-precompressed-assets-and-page-weight.md.
  */
 import path from "node:path";
 import type { Plugin } from "vite";

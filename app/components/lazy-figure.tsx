@@ -5,7 +5,7 @@
  * drawing in place until the chunk has come (a lazy component inside Suspense), so
  * the page neither waits for it nor moves. After a navigation in the browser the
  * placeholder holds the drawing's room until it arrives. Keeps the libraries out of
- * the page's first-load JavaScript (docs/decisions/0XX-precompressed-assets-and-page-weight.md).
+ * the page's first-load JavaScript (docs/decisions/051-precompressed-assets-and-page-weight.md).
  */
 import { lazy, Suspense, type ComponentType, type CSSProperties } from "react";
 

@@ -4,7 +4,7 @@
  * made. Under the Content-Security-Policy (no 'unsafe-eval', docs/decisions/012) Zod's
  * probe for `new Function` is reported by browsers as a violation although Zod catches
  * it, so Zod runs without it. Doing this here rather than in root.tsx keeps Zod out of
- * the pages that use none (docs/decisions/0XX-precompressed-assets-and-page-weight.md).
+ * the pages that use none (docs/decisions/051-precompressed-assets-and-page-weight.md).
  */
 import { z } from "zod/v4";
 

@@ -8,7 +8,7 @@
  * modulepreload links do). Chunks imported dynamically (import()) load later
  * and are not counted. Sizes are gzip at level 9, as the build's .gz copies
  * (server/precompressed-assets.ts). See
- * docs/decisions/0XX-precompressed-assets-and-page-weight.md.
+ * docs/decisions/051-precompressed-assets-and-page-weight.md.
  */
 import fs from "node:fs";
 import path from "node:path";

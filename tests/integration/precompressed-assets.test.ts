@@ -4,7 +4,7 @@
  * request accepts it, gzip when only that, the file itself otherwise, always
  * with Vary: Accept-Encoding and the year-long immutable caching of /assets.
  * Pages and data answers are still compressed on the fly. See
- * docs/decisions/0XX-precompressed-assets-and-page-weight.md.
+ * docs/decisions/051-precompressed-assets-and-page-weight.md.
  */
 import fs from "node:fs";
 import path from "node:path";

@@ -1,7 +1,7 @@
 /**
  * A form's checks in the browser, loaded with import() once the page runs: the
  * form's Zod schema and Conform's Zod adapter (parseForm) are not first-load
- * JavaScript (docs/decisions/0XX-precompressed-assets-and-page-weight.md). Until
+ * JavaScript (docs/decisions/051-precompressed-assets-and-page-weight.md). Until
  * they have come (moments after hydration) a form is checked by the server's
  * action, as without JavaScript, and shows the same field messages from its
  * lastResult. The field constraints (required, lengths) come from the loader
