@@ -189,6 +189,9 @@ export function galeraNodeOptions(
     "binlog_format=ROW",
     "default_storage_engine=InnoDB",
     "innodb_autoinc_lock_mode=2",
+    // The migrations create triggers (item_counts, decision 050) as the app's user, which
+    // has TRIGGER but not SUPER; with Galera's binary log on, MariaDB asks for this too.
+    "log_bin_trust_function_creators=1",
     ...serverSettings,
     "",
     "[sst]",
