@@ -25,7 +25,7 @@ import {
   type BenchStockSize,
 } from "./seed-bench-stock";
 import { summarise } from "./statistics";
-import { listQueries, serverTimes } from "./stock.bench";
+import { listQueries, movementBodies, serverTimes } from "./stock.bench";
 import { sizeRatioPrefix } from "./summary";
 
 /** The most a figure's p95 may grow from the normal size to the large one. */
@@ -205,21 +205,7 @@ export async function benchOneSize(input: {
   );
 
   // Receipts and issues of a piece, as in the stock group: an issue always finds its receipt.
-  const parts = stock.skus.filter((_, index) => index % 3 !== 0);
-  const bodyFor = (index: number) => {
-    const sku = parts[(Math.floor(index / 2) * 131) % parts.length];
-    return JSON.stringify(
-      index % 2 === 0
-        ? {
-            type: "receipt",
-            sku,
-            location: stock.locationCode,
-            quantity: 1,
-            unitCost: 10,
-          }
-        : { type: "issue", sku, location: stock.locationCode, quantity: 1 },
-    );
-  };
+  const bodyFor = movementBodies(stock.skus, stock.locationCode);
   add(
     "record a movement, POST /api/v1/stock-movements",
     perRequest,

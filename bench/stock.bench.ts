@@ -103,6 +103,31 @@ export async function rawItemList(
   return { items: rows, total };
 }
 
+/**
+ * The bodies of the benches' movement requests, by request number: even requests receive
+ * one piece of a bench part, odd ones issue it again, so an issue always finds stock.
+ */
+export function movementBodies(
+  skus: readonly string[],
+  locationCode: string,
+): (index: number) => string {
+  const parts = skus.filter((_, index) => index % 3 !== 0);
+  return (index) => {
+    const sku = parts[(Math.floor(index / 2) * 131) % parts.length];
+    return JSON.stringify(
+      index % 2 === 0
+        ? {
+            type: "receipt",
+            sku,
+            location: locationCode,
+            quantity: 1,
+            unitCost: 10,
+          }
+        : { type: "issue", sku, location: locationCode, quantity: 1 },
+    );
+  };
+}
+
 export async function benchStock(input: {
   baseUrl: string;
   databaseUrl: string;
@@ -169,22 +194,7 @@ export async function benchStock(input: {
     }
 
     // Recording a movement: receipts and issues of a piece on bench items.
-    const parts = input.skus.filter((_, index) => index % 3 !== 0);
-    // Even requests receive one piece; odd ones issue it again, so an issue always finds stock.
-    const bodyFor = (index: number) => {
-      const sku = parts[(Math.floor(index / 2) * 131) % parts.length];
-      return JSON.stringify(
-        index % 2 === 0
-          ? {
-              type: "receipt",
-              sku,
-              location: input.locationCode,
-              quantity: 1,
-              unitCost: 10,
-            }
-          : { type: "issue", sku, location: input.locationCode, quantity: 1 },
-      );
-    };
+    const bodyFor = movementBodies(input.skus, input.locationCode);
     const record = await serverTimes(
       indexes.map(() => `${input.baseUrl}/api/v1/stock-movements`),
       input.storekeeperCookie,
@@ -203,9 +213,11 @@ export async function benchStock(input: {
     // the item row (read with the columns the checks use), find the location, lock the
     // existing balance row, write the balance, append the movement, write the item's kept
     // on hand and average cost, commit. The app writes no other rows (no audit table).
+    // The first bench part movementBodies uses (it skips every third SKU, the first included).
+    const part = input.skus[1]!;
     const [rows] = await connection.query(
       "SELECT id FROM items WHERE sku = ?",
-      [parts[0]],
+      [part],
     );
     const itemId = (rows as { id: number }[])[0]!.id;
     const [locationRows] = await connection.query(
@@ -221,7 +233,7 @@ export async function benchStock(input: {
       await connection.beginTransaction();
       await connection.query(
         "SELECT id, sku, kind, unit, active, on_hand, reserved, held, average_cost FROM items WHERE sku = ? LIMIT 1 FOR UPDATE",
-        [parts[0]],
+        [part],
       );
       await connection.query(
         "SELECT id, code, active FROM locations WHERE code = ? LIMIT 1",
