@@ -27,7 +27,11 @@ import type { PriceListField } from "~/price-lists/column-mapping";
 import { readPriceListRow } from "~/price-lists/price-list-rows";
 import { parseQuantity, parseUnitCost } from "~/lib/decimal-amounts";
 import { movementFormSchema } from "~/stock/movement-form";
+import { countFormSchema } from "~/stocktakes/stocktake-forms";
+import { parseForm } from "~/lib/parse-form";
+import { z } from "zod";
 import {
+  ambiguousNumberMessage,
   formNumber,
   maxNumberTextLength,
   plainNumberText,
@@ -364,5 +368,155 @@ describe("number fields in each person's locale", () => {
         expect(formNumber(formatNumberForField(value))).toBe(value);
       }
     }
+  });
+});
+
+describe("a number that could be read two ways", () => {
+  afterEach(() => setBrowserDisplaySettings(defaultDisplaySettings));
+
+  it.each([
+    // [locale, typed, the message]
+    [
+      "en-GB",
+      "1,250",
+      "“1,250” could mean 1250 or 1.25: write 1250, or 1.25 for the decimal.",
+    ],
+    [
+      "en-US",
+      "-2,500",
+      "“-2,500” could mean -2500 or -2.5: write -2500, or -2.5 for the decimal.",
+    ],
+    [
+      "de-DE",
+      "1.250",
+      "“1.250” could mean 1250 or 1,25: write 1250, or 1,25 for the decimal.",
+    ],
+    [
+      "de-DE",
+      " 4.000 ",
+      "“4.000” could mean 4000 or 4: write 4000, or 4 for the decimal.",
+    ],
+  ] as const)("%s says why %j is refused", (locale, typed, message) => {
+    setBrowserDisplaySettings({ locale, timeZone: "UTC" });
+    expect(ambiguousNumberMessage(typed)).toBe(message);
+  });
+
+  it("says nothing about text that is a number, or no number at all, in every locale", () => {
+    for (const locale of supportedLocales) {
+      setBrowserDisplaySettings({ locale, timeZone: "UTC" });
+      for (const typed of ["1250", "1,25", "1.234,5x", "", "abc", "1,234,567"])
+        expect(ambiguousNumberMessage(typed)).toBeNull();
+      expect(ambiguousNumberMessage(undefined)).toBeNull();
+      expect(ambiguousNumberMessage(12)).toBeNull();
+    }
+  });
+
+  it("is never ambiguous in fr-FR or fi-FI, which group with spaces: a single mark is the decimal", () => {
+    for (const locale of ["fr-FR", "fi-FI"] as const) {
+      setBrowserDisplaySettings({ locale, timeZone: "UTC" });
+      for (const [typed, read] of [
+        ["1.250", 1.25],
+        ["1,250", 1.25],
+      ] as const) {
+        expect(ambiguousNumberMessage(typed)).toBeNull();
+        expect(formNumber(typed)).toBe(read);
+      }
+    }
+  });
+
+  const orderForm = z.object({
+    note: z.string().optional(),
+    lines: z.array(
+      z.object({
+        quantity: z
+          .number({ error: "The quantity must be a number." })
+          .min(1, "The quantity must be at least 1."),
+      }),
+    ),
+  });
+
+  function formOf(entries: [string, string][]): FormData {
+    const form = new FormData();
+    for (const [name, value] of entries) form.append(name, value);
+    return form;
+  }
+
+  it("gives a form's number field its own message through parseForm, in every locale", () => {
+    const cases: Record<string, { typed: string; message: string }[]> = {
+      "en-GB": [
+        {
+          typed: "1,250",
+          message:
+            "“1,250” could mean 1250 or 1.25: write 1250, or 1.25 for the decimal.",
+        },
+      ],
+      "en-US": [
+        {
+          typed: "1,250",
+          message:
+            "“1,250” could mean 1250 or 1.25: write 1250, or 1.25 for the decimal.",
+        },
+      ],
+      "de-DE": [
+        {
+          typed: "1.250",
+          message:
+            "“1.250” could mean 1250 or 1,25: write 1250, or 1,25 for the decimal.",
+        },
+      ],
+      "fr-FR": [],
+      "fi-FI": [],
+    };
+    for (const locale of supportedLocales) {
+      setBrowserDisplaySettings({ locale, timeZone: "UTC" });
+      for (const { typed, message } of cases[locale]) {
+        const submission = parseForm(
+          formOf([
+            ["lines[0].quantity", "3"],
+            ["lines[1].quantity", typed],
+          ]),
+          { schema: orderForm },
+        );
+        expect(submission.status).toBe("error");
+        expect(submission.error).toEqual({ "lines[1].quantity": [message] });
+        // What the page shows after the action replies: the same message.
+        expect(submission.reply().error).toEqual({
+          "lines[1].quantity": [message],
+        });
+      }
+      // Text that is no number keeps the field's own message.
+      const wrong = parseForm(formOf([["lines[0].quantity", "three"]]), {
+        schema: orderForm,
+      });
+      expect(wrong.error).toEqual({
+        "lines[0].quantity": ["The quantity must be a number."],
+      });
+      // And a number read in the locale passes.
+      const fine = parseForm(
+        formOf([["lines[0].quantity", formatNumberForField(1250)]]),
+        { schema: orderForm },
+      );
+      expect(fine.status).toBe("success");
+      expect(fine.status === "success" && fine.value.lines[0].quantity).toBe(
+        1250,
+      );
+    }
+  });
+
+  it("reaches number fields read before the schema, as the stocktake's count form does", () => {
+    setBrowserDisplaySettings({ locale: "de-DE", timeZone: "UTC" });
+    const submission = parseForm(
+      formOf([
+        ["intent", "count"],
+        ["lineId", "4"],
+        ["quantity", "2.500"],
+      ]),
+      { schema: countFormSchema },
+    );
+    expect(submission.error).toEqual({
+      quantity: [
+        "“2.500” could mean 2500 or 2,5: write 2500, or 2,5 for the decimal.",
+      ],
+    });
   });
 });

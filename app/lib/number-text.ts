@@ -6,7 +6,7 @@
  * refuse it). Pure: runs in Node and in the browser.
  */
 import { numberMarksOf, type SupportedLocale } from "./display-settings";
-import { currentDisplaySettings } from "./format";
+import { currentDisplaySettings, formatNumberForField } from "./format";
 
 /** No number Turnledger reads is longer than this; longer text is refused before it is matched. */
 export const maxNumberTextLength = 40;
@@ -108,6 +108,26 @@ export function formNumber(value: unknown): unknown {
   if (plain === null || plain === ambiguousNumber) return trimmed;
   const number = Number(plain);
   return Number.isFinite(number) ? number : trimmed;
+}
+
+/**
+ * Why `text` is refused as a number when it is ambiguous in the reader's locale, in
+ * words and in that locale's marks: in de-DE "1.250" → "“1.250” could mean 1250 or
+ * 1,25: write 1250, or 1,25 for the decimal."; in en-GB "1,250" the same with "1.25".
+ * Null for any other text (a number, or no number at all). fr-FR and fi-FI group
+ * thousands with spaces, so a single point or comma there is always a decimal mark.
+ */
+export function ambiguousNumberMessage(text: unknown): string | null {
+  if (typeof text !== "string") return null;
+  const typed = text.trim();
+  const { locale } = currentDisplaySettings();
+  if (plainNumberText(typed, locale) !== ambiguousNumber) return null;
+  const { decimal } = numberMarksOf(locale);
+  const mark = decimal === "." ? "," : ".";
+  const plain = typed.replace("\u2212", "-");
+  const whole = formatNumberForField(plain.replace(mark, ""));
+  const fraction = formatNumberForField(plain.replace(mark, "."));
+  return `“${typed}” could mean ${whole} or ${fraction}: write ${whole}, or ${fraction} for the decimal.`;
 }
 
 /**
