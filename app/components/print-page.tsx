@@ -5,18 +5,15 @@
  * reader needs on paper (reference, what, when printed) above the page's tables. The
  * app's header is never printed (the shell marks it so); its footer keeps the cautions.
  */
-import { Link } from "react-router";
+import { BackLink } from "./back-link";
 
 /** The bar above a printable page: back to where it came from, and Print. Not printed. */
 export function PrintBar({ back }: { back: { to: string; text: string } }) {
   return (
     <div className="flex flex-wrap items-center justify-between gap-3 print:hidden">
-      <Link
-        to={back.to}
-        className="text-sm text-copper-700 underline underline-offset-2"
-      >
-        ← {back.text}
-      </Link>
+      <span className="text-sm">
+        <BackLink to={back.to}>{back.text}</BackLink>
+      </span>
       <button
         type="button"
         className="button-primary"

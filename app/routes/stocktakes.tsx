@@ -128,7 +128,9 @@ export default function Stocktakes({
   return (
     <div
       className={
-        canStart ? "grid gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]" : undefined
+        canStart
+          ? "grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]"
+          : undefined
       }
     >
       <div className="space-y-6">

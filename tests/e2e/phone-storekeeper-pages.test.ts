@@ -1,7 +1,8 @@
 /**
  * The storekeeper's pages on a phone (390 px wide, touch, three device pixels per
  * CSS pixel): the record page (recording a count there), receiving against a
- * purchase order, the stocktake's count sheet and the item page. On each: the page
+ * purchase order, the stocktake's count sheet, the stocktakes page (with its start
+ * form), the purchase orders and an order, and the item page. On each: the page
  * never scrolls sideways, every control is big enough to touch, the folded main
  * menu opens and is used by keyboard alone, and axe-core finds nothing serious.
  * Then a wide table scrolled inside its own region with its first column pinned,
@@ -46,6 +47,7 @@ let person: Awaited<ReturnType<typeof newPerson>>;
 let wire: { sku: string; id: number };
 let magnet: { sku: string; id: number };
 let orderNumber = "";
+let orderId = 0;
 let stocktakeId = 0;
 
 const shotsFolder = "/work/notes/shots";
@@ -106,6 +108,7 @@ beforeAll(async () => {
       { itemId: magnet.id, quantity: "200", unitPrice: "2.4000" },
     ],
   });
+  orderId = order.id;
   orderNumber = `PO-${String(order.id).padStart(6, "0")}`;
   const started = await postForm(
     "/stocktakes",
@@ -214,6 +217,51 @@ describe("the storekeeper's pages on a phone", () => {
     await open(page, `/stocktakes/${stocktakeId}/count`);
     await expectPhoneReady(page);
     await expectMenuByKeyboard(page);
+    await page.close();
+  });
+
+  it("starts a stocktake from the stocktakes page, which fits the phone", async () => {
+    const page = await phonePage();
+    await open(page, "/stocktakes");
+    // The start form sits under the list, as wide as the phone.
+    const form = page.getByRole("region", { name: "Start a stocktake" });
+    await form.waitFor();
+    await expectPhoneReady(page);
+    expect(
+      await page.evaluate(() => document.documentElement.scrollWidth),
+    ).toBeLessThanOrEqual(390);
+    const formBox = (await form.boundingBox())!;
+    expect(formBox.x + formBox.width).toBeLessThanOrEqual(390);
+    await expectMenuByKeyboard(page);
+    await page.close();
+  });
+
+  it("shows the purchase orders and an order, with touch-sized status links", async () => {
+    const page = await phonePage();
+    await open(page, "/purchase-orders");
+    const statuses = page
+      .getByRole("navigation", { name: "Filter by status" })
+      .getByRole("link");
+    expect(await statuses.count()).toBeGreaterThan(1);
+    for (const link of await statuses.all()) {
+      const box = (await link.boundingBox())!;
+      expect(box.height).toBeGreaterThanOrEqual(44);
+      expect(box.width).toBeGreaterThanOrEqual(44);
+    }
+    await expectPhoneReady(page);
+
+    await open(page, `/purchase-orders/${orderId}`);
+    await expectPhoneReady(page);
+    expect(
+      await page.evaluate(() => document.documentElement.scrollWidth),
+    ).toBeLessThanOrEqual(390);
+
+    // The printable order: its lines scroll in their own region, reached by Tab.
+    await open(page, `/purchase-orders/${orderId}/print`);
+    const lines = page.getByRole("region", { name: `Lines of ${orderNumber}` });
+    await lines.waitFor();
+    await expectPhoneReady(page);
+    await tabTo(page, lines);
     await page.close();
   });
 

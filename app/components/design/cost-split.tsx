@@ -1,4 +1,5 @@
 import { formatQuantity } from "~/lib/format";
+import { TableScroll } from "~/components/table-scroll";
 
 export interface DesignCostSplitValues {
   activeCopper: number;
@@ -86,63 +87,68 @@ export function DesignCostSplit({
           No priced line yet: the split appears once a line has a price.
         </p>
       )}
-      <table className="data-table max-w-xl">
-        <caption className="sr-only">
-          Cost of one motor by part, in {currency}
-        </caption>
-        <thead>
-          <tr>
-            <th scope="col">Part</th>
-            <th scope="col" className="text-right">
-              Per motor
-            </th>
-            <th scope="col" className="text-right">
-              Share
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {parts.map((part) => (
-            <tr key={part.key}>
-              <th scope="row" className="font-normal">
-                <span className="inline-flex items-start gap-2">
-                  <span
-                    aria-hidden="true"
-                    className={`mt-0.5 inline-block h-4 w-6 shrink-0 rounded-sm border border-graphite-300 ${part.className} print:[print-color-adjust:exact]`}
-                  />
-                  <span>
-                    <span className="font-medium">{part.label}</span>
-                    {part.detail ? (
-                      <span className="block text-xs text-graphite-500">
-                        {part.detail}
-                      </span>
-                    ) : null}
-                  </span>
-                </span>
+      <TableScroll
+        label={`Cost of one motor by part, in ${currency}`}
+        className="max-w-xl"
+      >
+        <table className="data-table">
+          <caption className="sr-only">
+            Cost of one motor by part, in {currency}
+          </caption>
+          <thead>
+            <tr>
+              <th scope="col">Part</th>
+              <th scope="col" className="text-right">
+                Per motor
               </th>
-              <td className="text-right">
-                {formatQuantity(split[part.key], currency, 2)}
-              </td>
-              <td className="text-right">
-                {total > 0
-                  ? formatQuantity((split[part.key] / total) * 100, "%", 1)
-                  : "—"}
-              </td>
+              <th scope="col" className="text-right">
+                Share
+              </th>
             </tr>
-          ))}
-        </tbody>
-        <tfoot>
-          <tr>
-            <th scope="row" className="text-left">
-              Cost per motor
-            </th>
-            <td className="text-right font-semibold">
-              {formatQuantity(total, currency, 2)}
-            </td>
-            <td />
-          </tr>
-        </tfoot>
-      </table>
+          </thead>
+          <tbody>
+            {parts.map((part) => (
+              <tr key={part.key}>
+                <th scope="row" className="font-normal">
+                  <span className="inline-flex items-start gap-2">
+                    <span
+                      aria-hidden="true"
+                      className={`mt-0.5 inline-block h-4 w-6 shrink-0 rounded-sm border border-graphite-300 ${part.className} print:[print-color-adjust:exact]`}
+                    />
+                    <span>
+                      <span className="font-medium">{part.label}</span>
+                      {part.detail ? (
+                        <span className="block text-xs text-graphite-500">
+                          {part.detail}
+                        </span>
+                      ) : null}
+                    </span>
+                  </span>
+                </th>
+                <td className="text-right">
+                  {formatQuantity(split[part.key], currency, 2)}
+                </td>
+                <td className="text-right">
+                  {total > 0
+                    ? formatQuantity((split[part.key] / total) * 100, "%", 1)
+                    : "—"}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+          <tfoot>
+            <tr>
+              <th scope="row" className="text-left">
+                Cost per motor
+              </th>
+              <td className="text-right font-semibold">
+                {formatQuantity(total, currency, 2)}
+              </td>
+              <td />
+            </tr>
+          </tfoot>
+        </table>
+      </TableScroll>
     </figure>
   );
 }

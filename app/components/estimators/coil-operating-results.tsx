@@ -5,6 +5,7 @@ import {
   type CoolingPractice,
 } from "~/engineering/current-density";
 import { formatQuantity } from "~/lib/format";
+import { TableScroll } from "~/components/table-scroll";
 
 const ohms = (value: number) => formatQuantity(value, "Ω", value < 1 ? 5 : 3);
 const watts = (value: number) => formatQuantity(value, "W", 2);
@@ -154,59 +155,66 @@ export function CoilOperatingResults({
       </dl>
 
       {acLoss ? (
-        <table className="data-table panel p-0">
-          <caption className="sr-only">
-            Loss at the fundamental and harmonics
-          </caption>
-          <thead>
-            <tr>
-              <th scope="col">Frequency</th>
-              <th scope="col" className="text-right">
-                Current (RMS)
-              </th>
-              <th scope="col" className="text-right">
-                R_ac per coil
-              </th>
-              <th scope="col" className="text-right">
-                Loss per coil
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {acLoss.harmonics.map((harmonic) => (
-              <tr key={harmonic.order}>
-                <th scope="row" className="font-normal">
-                  {harmonic.order === 1
-                    ? "Fundamental"
-                    : `Harmonic ${harmonic.order}`}{" "}
-                  ({hertz(harmonic.frequencyHz)})
+        <TableScroll
+          label="Loss at the fundamental and harmonics"
+          className="panel p-0"
+        >
+          <table className="data-table">
+            <caption className="sr-only">
+              Loss at the fundamental and harmonics
+            </caption>
+            <thead>
+              <tr>
+                <th scope="col">Frequency</th>
+                <th scope="col" className="text-right">
+                  Current (RMS)
                 </th>
-                <td className="text-right">
-                  {formatQuantity(harmonic.currentA, "A", 2)}
-                </td>
-                <td className="text-right">{ohms(harmonic.acResistanceOhm)}</td>
-                <td className="text-right">{watts(harmonic.lossW)}</td>
+                <th scope="col" className="text-right">
+                  R_ac per coil
+                </th>
+                <th scope="col" className="text-right">
+                  Loss per coil
+                </th>
               </tr>
-            ))}
-            <tr>
-              <th scope="row" colSpan={3}>
-                AC copper loss per coil at {temperatureC} °C
-              </th>
-              <td className="text-right font-semibold">
-                {watts(acLoss.lossPerCoilW)}
-              </td>
-            </tr>
-            <tr>
-              <th scope="row" colSpan={3}>
-                AC copper loss of all {coilCount}{" "}
-                {coilCount === 1 ? "coil" : "coils"}
-              </th>
-              <td className="text-right font-semibold">
-                {watts(acLoss.totalLossW)}
-              </td>
-            </tr>
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {acLoss.harmonics.map((harmonic) => (
+                <tr key={harmonic.order}>
+                  <th scope="row" className="font-normal">
+                    {harmonic.order === 1
+                      ? "Fundamental"
+                      : `Harmonic ${harmonic.order}`}{" "}
+                    ({hertz(harmonic.frequencyHz)})
+                  </th>
+                  <td className="text-right">
+                    {formatQuantity(harmonic.currentA, "A", 2)}
+                  </td>
+                  <td className="text-right">
+                    {ohms(harmonic.acResistanceOhm)}
+                  </td>
+                  <td className="text-right">{watts(harmonic.lossW)}</td>
+                </tr>
+              ))}
+              <tr>
+                <th scope="row" colSpan={3}>
+                  AC copper loss per coil at {temperatureC} °C
+                </th>
+                <td className="text-right font-semibold">
+                  {watts(acLoss.lossPerCoilW)}
+                </td>
+              </tr>
+              <tr>
+                <th scope="row" colSpan={3}>
+                  AC copper loss of all {coilCount}{" "}
+                  {coilCount === 1 ? "coil" : "coils"}
+                </th>
+                <td className="text-right font-semibold">
+                  {watts(acLoss.totalLossW)}
+                </td>
+              </tr>
+            </tbody>
+          </table>
+        </TableScroll>
       ) : null}
 
       {operatingPoint ? (

@@ -2,6 +2,7 @@ import { useState } from "react";
 import type { CoilEstimate, CoilQuantities } from "~/engineering/coil-estimate";
 import { kgToPounds, metresToFeet, mmToInches } from "~/engineering/units";
 import { formatQuantity } from "~/lib/format";
+import { TableScroll } from "~/components/table-scroll";
 
 type UnitSystem = "metric" | "imperial";
 
@@ -133,55 +134,60 @@ export function CoilResults({
           </dd>
         </div>
       </dl>
-      <table className="data-table panel p-0">
-        <caption className="sr-only">
-          Coil estimate per coil and for all coils
-        </caption>
-        <thead>
-          <tr>
-            <th scope="col">Quantity</th>
-            <th scope="col" className="text-right">
-              Per coil
-            </th>
-            <th scope="col" className="text-right">
-              All {coilCount} {coilCount === 1 ? "coil" : "coils"}
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {quantityRows.map((row) => (
-            <tr key={row.label}>
+      <TableScroll
+        label="Coil estimate per coil and for all coils"
+        className="panel p-0"
+      >
+        <table className="data-table">
+          <caption className="sr-only">
+            Coil estimate per coil and for all coils
+          </caption>
+          <thead>
+            <tr>
+              <th scope="col">Quantity</th>
+              <th scope="col" className="text-right">
+                Per coil
+              </th>
+              <th scope="col" className="text-right">
+                All {coilCount} {coilCount === 1 ? "coil" : "coils"}
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {quantityRows.map((row) => (
+              <tr key={row.label}>
+                <th scope="row" className="font-normal">
+                  {row.label.replace(
+                    "operating temperature",
+                    `${temperatureC} °C`,
+                  )}
+                </th>
+                <td className="text-right">
+                  {row.render(estimate.perCoil, units)}
+                </td>
+                <td className="text-right">
+                  {row.render(estimate.total, units)}
+                </td>
+              </tr>
+            ))}
+            <tr>
               <th scope="row" className="font-normal">
-                {row.label.replace(
-                  "operating temperature",
-                  `${temperatureC} °C`,
-                )}
+                Copper loss I²R at {temperatureC} °C
               </th>
               <td className="text-right">
-                {row.render(estimate.perCoil, units)}
+                {estimate.copperLossW === null
+                  ? "—"
+                  : formatQuantity(estimate.copperLossW / coilCount, "W", 2)}
               </td>
               <td className="text-right">
-                {row.render(estimate.total, units)}
+                {estimate.copperLossW === null
+                  ? "give a current"
+                  : formatQuantity(estimate.copperLossW, "W", 2)}
               </td>
             </tr>
-          ))}
-          <tr>
-            <th scope="row" className="font-normal">
-              Copper loss I²R at {temperatureC} °C
-            </th>
-            <td className="text-right">
-              {estimate.copperLossW === null
-                ? "—"
-                : formatQuantity(estimate.copperLossW / coilCount, "W", 2)}
-            </td>
-            <td className="text-right">
-              {estimate.copperLossW === null
-                ? "give a current"
-                : formatQuantity(estimate.copperLossW, "W", 2)}
-            </td>
-          </tr>
-        </tbody>
-      </table>
+          </tbody>
+        </table>
+      </TableScroll>
       <p className="text-xs text-graphite-500">
         Totals assume the coils in series. Masses are bare conductor; enamel
         adds about 2 % at 1.0 mm and 5 % at 0.2 mm. First-order estimates:

@@ -4,6 +4,7 @@ import type { PurchaseOrderView } from "~/purchase-orders/purchase-order-details
 import { formatDateTime, formatDay } from "~/lib/format";
 import { formatMoney } from "~/pricing/money";
 import { PurchaseOrderStatusBadge } from "./purchase-order-status-badge";
+import { BackLink } from "~/components/back-link";
 
 export function OrderHeading({
   order,
@@ -16,12 +17,7 @@ export function OrderHeading({
   return (
     <header className="space-y-2">
       <p className="text-sm">
-        <Link
-          to="/purchase-orders"
-          className="text-copper-700 underline-offset-2 hover:underline"
-        >
-          ← Purchase orders
-        </Link>
+        <BackLink to="/purchase-orders">Purchase orders</BackLink>
       </p>
       <div className="flex flex-wrap items-start justify-between gap-3">
         <h1 className="flex flex-wrap items-center gap-3 text-2xl font-semibold">

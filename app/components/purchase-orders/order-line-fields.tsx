@@ -72,7 +72,7 @@ export function OrderLineFields({
         </p>
       ) : null}
       <details open={overriding} className="mt-3">
-        <summary className="cursor-pointer text-sm font-medium text-copper-700">
+        <summary className="cursor-pointer text-sm font-medium text-copper-700 touch:py-3">
           Price of your own
         </summary>
         <div className="mt-2 grid gap-3 sm:grid-cols-[minmax(0,1fr)_minmax(0,2fr)]">

@@ -30,7 +30,7 @@ export function PurchaseOrderFilters({
                 <Link
                   to={purchaseOrderListHref({ ...filter, status })}
                   aria-current={current ? "page" : undefined}
-                  className={`inline-flex min-h-9 items-center rounded-md border px-3 font-medium ${
+                  className={`inline-flex min-h-9 items-center rounded-md border px-3 font-medium touch:min-h-11 touch:min-w-11 touch:justify-center ${
                     current
                       ? "border-graphite-800 bg-graphite-800 text-white"
                       : "border-graphite-300 bg-sheet text-graphite-800 hover:border-graphite-500"

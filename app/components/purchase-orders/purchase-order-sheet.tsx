@@ -1,6 +1,7 @@
 /** The printable order from its document: the company and number, the facts, the lines, the total and the notes. */
 import type { PurchaseOrderDocument } from "~/purchase-orders/purchase-order-document";
 import { purchaseOrderColumns } from "~/purchase-orders/purchase-order-document";
+import { TableScroll } from "~/components/table-scroll";
 
 const numericKeys = new Set(["line", "quantity", "unitPrice", "lineTotal"]);
 
@@ -25,56 +26,58 @@ export function PurchaseOrderSheet({
           ))}
         </dl>
       </header>
-      <table className="data-table">
-        <caption className="sr-only">Lines of {document.number}</caption>
-        <thead>
-          <tr>
-            {purchaseOrderColumns.map((column) => (
-              <th
-                key={column.key}
-                scope="col"
-                className={numericKeys.has(column.key) ? "text-right" : ""}
-              >
-                {column.label}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {document.rows.map((row) => (
-            <tr key={row.line} className="break-inside-avoid">
+      <TableScroll label={`Lines of ${document.number}`}>
+        <table className="data-table">
+          <caption className="sr-only">Lines of {document.number}</caption>
+          <thead>
+            <tr>
               {purchaseOrderColumns.map((column) => (
-                <td
+                <th
                   key={column.key}
-                  className={
-                    numericKeys.has(column.key)
-                      ? "text-right whitespace-nowrap"
-                      : ""
-                  }
+                  scope="col"
+                  className={numericKeys.has(column.key) ? "text-right" : ""}
                 >
-                  {row[column.key]}
-                  {column.key === "description" && row.priceNote ? (
-                    <span className="block text-xs text-graphite-500">
-                      {row.priceNote}
-                    </span>
-                  ) : null}
-                </td>
+                  {column.label}
+                </th>
               ))}
             </tr>
-          ))}
-        </tbody>
-        <tfoot>
-          <tr>
-            <th scope="row" colSpan={6} className="text-right">
-              Total
-            </th>
-            <td className="text-right font-semibold whitespace-nowrap">
-              {document.totalText}
-            </td>
-            <td colSpan={2} />
-          </tr>
-        </tfoot>
-      </table>
+          </thead>
+          <tbody>
+            {document.rows.map((row) => (
+              <tr key={row.line} className="break-inside-avoid">
+                {purchaseOrderColumns.map((column) => (
+                  <td
+                    key={column.key}
+                    className={
+                      numericKeys.has(column.key)
+                        ? "text-right whitespace-nowrap"
+                        : ""
+                    }
+                  >
+                    {row[column.key]}
+                    {column.key === "description" && row.priceNote ? (
+                      <span className="block text-xs text-graphite-500">
+                        {row.priceNote}
+                      </span>
+                    ) : null}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+          <tfoot>
+            <tr>
+              <th scope="row" colSpan={6} className="text-right">
+                Total
+              </th>
+              <td className="text-right font-semibold whitespace-nowrap">
+                {document.totalText}
+              </td>
+              <td colSpan={2} />
+            </tr>
+          </tfoot>
+        </table>
+      </TableScroll>
       {document.notes ? (
         <section className="text-sm">
           <h2 className="font-semibold">Notes</h2>

@@ -6,6 +6,7 @@
  */
 import type { CountSheetLocation } from "~/stocktakes/count-sheet";
 import { printCell, writeInCell } from "../print-page";
+import { TableScroll } from "~/components/table-scroll";
 
 const headings = [
   { text: "Item", width: "" },
@@ -28,51 +29,53 @@ export function CountSheetTable({
   caption: string;
 }) {
   return (
-    <table className="w-full border-collapse border border-graphite-700">
-      <caption className="sr-only">{caption}</caption>
-      <thead>
-        <tr className="bg-graphite-50 text-left">
-          {headings.map((heading) => (
-            <th
-              key={heading.text}
-              scope="col"
-              className={`${printCell} ${heading.width}`}
-            >
-              {heading.text}
-            </th>
-          ))}
-        </tr>
-      </thead>
-      <tbody>
-        {location.lines.map((line) => (
-          <tr key={line.id} className="break-inside-avoid">
-            <td className={printCell}>
-              <span className="font-medium">{line.sku}</span> {line.name}
-            </td>
-            <td className={printCell}>{line.lot ?? "—"}</td>
-            <td className={printCell}>{line.unit}</td>
-            <td className={writeInCell} />
-            <td
-              className={`${writeInCell} ${line.weighable ? "" : "bg-graphite-100"}`}
-            />
-            <td
-              className={`${writeInCell} px-2 text-xs text-graphite-500 ${line.weighable ? "" : "bg-graphite-100"}`}
-            >
-              {line.weighable && line.lotTareKg !== null
-                ? `(${line.lotTareKg})`
-                : ""}
-            </td>
-            <td className={writeInCell} />
-          </tr>
-        ))}
-        {Array.from({ length: blankRows }, (_, blank) => (
-          <tr key={`blank-${blank}`}>
+    <TableScroll label={caption}>
+      <table className="print-table w-full border-collapse border border-graphite-700">
+        <caption className="sr-only">{caption}</caption>
+        <thead>
+          <tr className="bg-graphite-50 text-left">
             {headings.map((heading) => (
-              <td key={heading.text} className={writeInCell} />
+              <th
+                key={heading.text}
+                scope="col"
+                className={`${printCell} ${heading.width}`}
+              >
+                {heading.text}
+              </th>
             ))}
           </tr>
-        ))}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          {location.lines.map((line) => (
+            <tr key={line.id} className="break-inside-avoid">
+              <td className={printCell}>
+                <span className="font-medium">{line.sku}</span> {line.name}
+              </td>
+              <td className={printCell}>{line.lot ?? "—"}</td>
+              <td className={printCell}>{line.unit}</td>
+              <td className={writeInCell} />
+              <td
+                className={`${writeInCell} ${line.weighable ? "" : "bg-graphite-100"}`}
+              />
+              <td
+                className={`${writeInCell} px-2 text-xs text-graphite-500 ${line.weighable ? "" : "bg-graphite-100"}`}
+              >
+                {line.weighable && line.lotTareKg !== null
+                  ? `(${line.lotTareKg})`
+                  : ""}
+              </td>
+              <td className={writeInCell} />
+            </tr>
+          ))}
+          {Array.from({ length: blankRows }, (_, blank) => (
+            <tr key={`blank-${blank}`}>
+              {headings.map((heading) => (
+                <td key={heading.text} className={writeInCell} />
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </TableScroll>
   );
 }

@@ -65,7 +65,7 @@ export function StartStocktakeForm({
             {locations.map((location) => (
               <label
                 key={location.code}
-                className="flex items-center gap-2 text-sm"
+                className="flex items-center gap-2 text-sm touch:min-h-11"
               >
                 <input
                   type="checkbox"
