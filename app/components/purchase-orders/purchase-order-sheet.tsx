@@ -11,7 +11,7 @@ export function PurchaseOrderSheet({
   document: PurchaseOrderDocument;
 }) {
   return (
-    <article className="space-y-6 rounded-lg border border-rule bg-sheet p-8 print:border-0 print:p-0">
+    <article className="space-y-6 rounded-lg border border-rule bg-sheet p-4 sm:p-8 print:border-0 print:p-0">
       <header className="flex flex-wrap items-start justify-between gap-4 border-b border-rule pb-4">
         <div>
           <p className="text-sm text-graphite-500">{document.company}</p>

@@ -73,7 +73,9 @@ export function StartStocktakeForm({
                   value={location.code}
                   defaultChecked={chosen.has(location.code)}
                 />
-                <span className="font-medium">{location.code}</span>
+                <span className="font-medium whitespace-nowrap">
+                  {location.code}
+                </span>
                 <span className="text-graphite-500">{location.name}</span>
               </label>
             ))}
