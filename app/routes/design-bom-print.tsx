@@ -15,11 +15,8 @@ import { DesignInsulationCaution } from "~/components/design/insulation-caution"
 import { DesignWarningList } from "~/components/design/line-tables";
 import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
 import { buildQuantity } from "~/designs/bom-csv";
-import {
-  costBasisLabels,
-  costQuerySearch,
-  readCostQuery,
-} from "~/designs/design-page";
+import { costBasisLabels, costQuerySearch } from "~/designs/cost-basis";
+import { readCostQuery } from "~/designs/design-page";
 import { costingDay, loadDesignPage } from "~/designs/design-page.server";
 import { designParams } from "~/designs/design-params";
 import { formatDateTime, formatQuantity } from "~/lib/format";

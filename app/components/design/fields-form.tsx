@@ -1,13 +1,14 @@
 import { getFormProps, useForm } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
 import { useFetcher } from "react-router";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import type { DesignPageData } from "~/designs/design-page.server";
-import { thermalClassName } from "~/designs/design-checks";
 import {
   insulationClasses,
-  revisionFormSchema,
-} from "~/designs/design-schemas";
+  insulationClassLabel,
+} from "~/designs/insulation-classes";
 import {
   DEFAULT_POLE_COVERAGE,
   DEFAULT_POLE_COVERAGE_SOURCE,
@@ -21,16 +22,25 @@ import { FormMessages } from "~/components/text-field";
 
 type Revision = DesignPageData["revision"];
 
-/** "155 °C (F)": an IEC 60085 class with its letter when it has one. */
-export function insulationClassLabel(classC: number): string {
-  return thermalClassName(classC).replace(/^(\d+)/, "$1\u00a0°C");
-}
-
 const text = (value: number | null) => formatNumberForField(value);
 
-/** The revision's motor figures, editable while it is a draft; each save goes through a fetcher. */
-export function DesignFieldsForm({ revision }: { revision: Revision }) {
+/**
+ * The revision's motor figures, editable while it is a draft; each save goes through a
+ * fetcher. The constraints come from the loader, the schema loads after hydration.
+ */
+export function DesignFieldsForm({
+  revision,
+  constraint,
+}: {
+  revision: Revision;
+  constraint: FieldConstraints;
+}) {
   const fetcher = useFetcher<DesignActionAnswer>();
+  const validate = useBrowserValidation(() =>
+    import("~/designs/design-schemas").then(
+      (module) => module.revisionFormSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: `design-fields-${revision.designId}-${revision.revision}`,
     lastResult: fetcher.data?.result,
@@ -54,11 +64,10 @@ export function DesignFieldsForm({ revision }: { revision: Revision }) {
       poleCoverage: text(revision.poleCoverage),
       notes: revision.notes,
     },
-    constraint: getZodConstraint(revisionFormSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate: ({ formData }) =>
-      parseForm(formData, { schema: revisionFormSchema }),
+    onValidate: validate,
   });
   const busy = fetcher.state !== "idle";
   // The schema reads numbers from text (z.preprocess), so Conform types these fields as unknown;
