@@ -10,7 +10,7 @@ import {
   perMotorText,
 } from "~/components/design/cost-panel";
 import { DesignCostSplit } from "~/components/design/cost-split";
-import { DesignFieldsSummary } from "~/components/design/fields-form";
+import { DesignFieldsSummary } from "~/components/design/fields-summary";
 import { DesignInsulationCaution } from "~/components/design/insulation-caution";
 import { DesignWarningList } from "~/components/design/line-tables";
 import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";

@@ -18,10 +18,8 @@ import {
 } from "~/components/design/action-replies.server";
 import { BillOfMaterials } from "~/components/design/bill-of-materials";
 import { DesignCostPanel } from "~/components/design/cost-panel";
-import {
-  DesignFieldsForm,
-  DesignFieldsSummary,
-} from "~/components/design/fields-form";
+import { DesignFieldsForm } from "~/components/design/fields-form";
+import { DesignFieldsSummary } from "~/components/design/fields-summary";
 import { PostedAnswer } from "~/components/design/posted-answer";
 import { RevisionHeader } from "~/components/design/revision-header";
 import { RevisionNav } from "~/components/design/revision-nav";
