@@ -57,7 +57,7 @@ describe("first-load JavaScript of every page", () => {
   });
 });
 
-/** The pages within the first-load budget on 2026-12-04 (26 of 50). */
+/** The pages within the first-load budget on 2026-12-04 (31 of 50). */
 const pagesWithinBudget = [
   "/",
   "/insight",
@@ -65,6 +65,11 @@ const pagesWithinBudget = [
   "/stock/journal",
   "/stock/lots/:lotId",
   "/stock/locations/:code/count-sheet",
+  "/stock/record",
+  "/stock/receive",
+  "/stock/items/new",
+  "/tools/coil-estimator",
+  "/tools/magnet-estimator",
   "/alerts",
   "/purchase-orders",
   "/purchase-orders/late",
