@@ -10,33 +10,39 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import { QuantityField } from "~/components/quantity-field";
 import { TextField } from "~/components/text-field";
-import {
-  gradeSuffixChoices,
-  magnetGradeFormSchema,
-} from "~/reference/magnet-grade-form";
+import { gradeSuffixChoices } from "~/reference/magnet-grade-suffixes";
 import {
   magnetMaterialLabels,
   magnetMaterialOrder,
 } from "~/reference/magnet-materials";
 
-/** The form's state, checked in the browser as on the server. */
+/**
+ * The form's state, checked in the browser as on the server: the schema loads after
+ * hydration (useBrowserValidation), the constraints come from the loader.
+ */
 export function useMagnetGradeForm(
   lastResult: SubmissionResult<string[]> | null | undefined,
+  constraint: FieldConstraints,
 ) {
+  const validate = useBrowserValidation(() =>
+    import("~/reference/magnet-grade-form").then(
+      (module) => module.magnetGradeFormSchema,
+    ),
+  );
   return useForm({
     id: "add-magnet-grade",
     lastResult,
-    constraint: getZodConstraint(magnetGradeFormSchema),
+    constraint,
     defaultValue: { material: "sintered-ndfeb" },
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: magnetGradeFormSchema });
-    },
+    onValidate: validate,
   });
 }
 

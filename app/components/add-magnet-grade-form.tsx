@@ -1,5 +1,6 @@
 import { getFormProps, type SubmissionResult } from "@conform-to/react";
 import { Form, useNavigation } from "react-router";
+import type { FieldConstraints } from "~/components/forms/use-browser-validation";
 import { FormMessages } from "~/components/text-field";
 import {
   GradeNameFields,
@@ -11,12 +12,15 @@ import {
 
 /** The admins' form on the magnet grades table: one grade from a maker's data sheet. */
 export function AddMagnetGradeForm({
+  constraint,
   lastResult,
 }: {
+  /** The form's constraints, from the loader (getZodConstraint). */
+  constraint: FieldConstraints;
   lastResult?: SubmissionResult<string[]> | null;
 }) {
   const navigation = useNavigation();
-  const [form, fields] = useMagnetGradeForm(lastResult);
+  const [form, fields] = useMagnetGradeForm(lastResult, constraint);
   const submitting =
     navigation.state !== "idle" && navigation.formMethod === "POST";
   return (

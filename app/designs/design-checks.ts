@@ -15,15 +15,13 @@ import { formatNumber, formatQuantity } from "~/lib/format";
  *   liquid cooling or short duty). No published source was checked for these ranges.
  */
 
-import {
-  THERMAL_CLASSES,
-  isWireClassSufficient,
-} from "~/engineering/reference-data";
+import { isWireClassSufficient } from "~/engineering/reference-data";
 import {
   assessSlotFill,
   type SlotFill,
   type SlotFillWarningCode,
 } from "~/engineering/slot-fill";
+import { THERMAL_CLASS_LETTERS } from "~/engineering/thermal-class-letters";
 import { circleAreaMm2 } from "~/engineering/wire-geometry";
 import {
   currentDensityAPerMm2,
@@ -69,8 +67,8 @@ export interface DesignWarning {
 
 /** "155 (F)" for a class whose IEC 60085 letter the reference data holds, else "155". */
 export function thermalClassName(classC: number): string {
-  const row = THERMAL_CLASSES.find((entry) => entry.classC === classC);
-  return row ? `${classC} (${row.letter})` : String(classC);
+  const row = THERMAL_CLASS_LETTERS.find(([entryC]) => entryC === classC);
+  return row ? `${classC} (${row[1]})` : String(classC);
 }
 
 /** Warning when the coil line's wire class is below the design's insulation class, else null. */

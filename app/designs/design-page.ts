@@ -10,7 +10,11 @@ import type { DesignLineInput } from "./design-schemas";
 
 import { costBasisLabels, type CostBasis } from "./cost-basis";
 
-export { costBasisLabels, type CostBasis } from "./cost-basis";
+export {
+  costBasisLabels,
+  costQuerySearch,
+  type CostBasis,
+} from "./cost-basis";
 
 export const maxBuildQuantity = 1_000_000;
 
@@ -67,18 +71,6 @@ export function readCostQuery(search: URLSearchParams): CostQuery {
     typed,
     errors,
   };
-}
-
-/** The query string a design page keeps for its costing ("" for the defaults). */
-export function costQuerySearch(query: {
-  quantity: number;
-  basis: CostBasis;
-}): string {
-  const params = new URLSearchParams();
-  if (query.quantity !== 1) params.set("quantity", String(query.quantity));
-  if (query.basis !== "best-price") params.set("basis", query.basis);
-  const text = params.toString();
-  return text ? `?${text}` : "";
 }
 
 /** What the design page's action does, named by the form's `intent` field. */

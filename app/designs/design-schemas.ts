@@ -7,6 +7,7 @@ import { z } from "zod";
 import { phaseConnections } from "~/engineering/motor-constants";
 import { windingInfeasibility } from "~/engineering/winding-factor";
 import { formNumber } from "~/lib/number-text";
+import { insulationClasses } from "./insulation-classes";
 
 const number = (label: string) =>
   z.preprocess(
@@ -41,8 +42,7 @@ const positive = (label: string, max: number, unit: string) =>
       .max(max, `The ${label} must be at most ${max} ${unit}.`),
   );
 
-/** IEC 60085 thermal classes a motor's insulation system is rated in, °C. */
-export const insulationClasses = [105, 120, 130, 155, 180, 200, 220] as const;
+export { insulationClasses };
 
 export const revisionFieldsSchema = z.object({
   poles: whole("pole count", 2, 500).refine(

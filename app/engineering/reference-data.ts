@@ -11,6 +11,7 @@
  */
 
 import { EngineeringInputError, requireFinite } from "./errors";
+import { THERMAL_CLASS_LETTERS } from "./thermal-class-letters";
 import { inchesToMm, mmToInches } from "./units";
 
 // ---------------------------------------------------------------------------
@@ -694,20 +695,13 @@ function enamelsForClass(classC: ThermalClass): EnamelKey[] {
   ).map((enamel) => enamel.key);
 }
 
-export const THERMAL_CLASSES: readonly ThermalClassRow[] = (
-  [
-    [130, "B"],
-    [155, "F"],
-    [180, "H"],
-    [200, "N"],
-    [220, "R"],
-  ] as const
-).map(([classC, letter]) => ({
-  classC,
-  letter,
-  typicalEnamels: enamelsForClass(classC),
-  source: "IEC 60085 thermal classes; typical enamels (brief)",
-}));
+export const THERMAL_CLASSES: readonly ThermalClassRow[] =
+  THERMAL_CLASS_LETTERS.map(([classC, letter]) => ({
+    classC,
+    letter,
+    typicalEnamels: enamelsForClass(classC),
+    source: "IEC 60085 thermal classes; typical enamels (brief)",
+  }));
 
 /** The wire's thermal class must be at least the motor's insulation class (brief). */
 export function isWireClassSufficient(

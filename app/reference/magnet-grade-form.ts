@@ -6,7 +6,8 @@ import { formatQuantity } from "~/lib/format";
  * typing mistake (a unit slip, a decimal in the wrong place), not a magnet.
  */
 import { z } from "zod";
-import type { MagnetMaterial, NdfebSuffix } from "~/engineering/reference-data";
+import type { MagnetMaterial } from "~/engineering/reference-data";
+import { gradeSuffixChoices } from "./magnet-grade-suffixes";
 import { magnetMaterialOrder } from "./magnet-materials";
 
 /** μ0, T·m/A (4π × 10⁻⁷; the SI value differs in the tenth figure). */
@@ -21,14 +22,7 @@ export function idealMaxEnergyProductKJm3(brT: number): number {
   return (brT * brT) / (4 * MU_0) / 1000;
 }
 
-export const gradeSuffixChoices = [
-  "M",
-  "H",
-  "SH",
-  "UH",
-  "EH",
-  "AH",
-] as const satisfies readonly NdfebSuffix[];
+export { gradeSuffixChoices };
 
 function number(label: string, unit: string, min: number, max: number) {
   const capital = `${label[0]!.toUpperCase()}${label.slice(1)}`;

@@ -1,7 +1,6 @@
 import { getFormProps } from "@conform-to/react";
+import { getZodConstraint } from "@conform-to/zod/v4";
 import { Form, type ShouldRevalidateFunctionArgs, data } from "react-router";
-import { apiClient } from "~/api-client/client";
-import { apiAnswer } from "~/lib/api-request";
 import type { CoilEstimateRequest } from "~/lib/estimate-requests";
 import type { Route } from "./+types/coil-estimator";
 import { requireUser } from "~/auth/guard.server";
@@ -16,6 +15,7 @@ import {
   useCoilEstimate,
   type CoilEstimateAnswer,
 } from "~/components/estimators/use-coil-estimate";
+import { coilEstimatorFormSchema } from "~/lib/coil-estimator-form";
 import { listWireSizes } from "~/reference/wire-sizes.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -25,6 +25,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     listWireSizes("IEC"),
   ]);
   return {
+    constraint: getZodConstraint(coilEstimatorFormSchema),
     awgSizes: awg.map((size) => ({
       label: size.size,
       bareDiameterMm: size.bareDiameterMm,
@@ -37,11 +38,19 @@ export const meta: Route.MetaFunction = () => [
   { title: "Coil estimator · Turnledger" },
 ];
 
-/** Asks POST /api/v1/coil-estimates in the browser; refusals come back as answers to show beside the fields. */
+/**
+ * Asks POST /api/v1/coil-estimates in the browser; refusals come back as answers to show
+ * beside the fields. The API client is loaded with import() once the page runs (it is
+ * not first-load JavaScript; decision 051).
+ */
 export async function clientAction({
   request,
 }: Route.ClientActionArgs): Promise<CoilEstimateAnswer> {
-  const input = (await request.json()) as CoilEstimateRequest;
+  const [input, { apiClient }, { apiAnswer }] = await Promise.all([
+    request.json() as Promise<CoilEstimateRequest>,
+    import("~/api-client/client"),
+    import("~/lib/api-request"),
+  ]);
   return {
     ...(await apiAnswer(
       apiClient.POST("/api/v1/coil-estimates", {
@@ -88,7 +97,10 @@ export default function CoilEstimator({ loaderData }: Route.ComponentProps) {
     lastGood,
     apiFieldErrors,
     pending,
-  } = useCoilEstimate("/tools/coil-estimator");
+  } = useCoilEstimate(
+    "/tools/coil-estimator",
+    loaderData.constraint,
+  );
 
   return (
     <div className="space-y-6">

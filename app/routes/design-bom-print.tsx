@@ -10,16 +10,13 @@ import {
   perMotorText,
 } from "~/components/design/cost-panel";
 import { DesignCostSplit } from "~/components/design/cost-split";
-import { DesignFieldsSummary } from "~/components/design/fields-form";
+import { DesignFieldsSummary } from "~/components/design/fields-summary";
 import { DesignInsulationCaution } from "~/components/design/insulation-caution";
 import { DesignWarningList } from "~/components/design/line-tables";
 import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
 import { buildQuantity } from "~/designs/bom-csv";
-import {
-  costBasisLabels,
-  costQuerySearch,
-  readCostQuery,
-} from "~/designs/design-page";
+import { costBasisLabels, costQuerySearch } from "~/designs/cost-basis";
+import { readCostQuery } from "~/designs/design-page";
 import { costingDay, loadDesignPage } from "~/designs/design-page.server";
 import { designParams } from "~/designs/design-params";
 import { formatDateTime, formatQuantity } from "~/lib/format";

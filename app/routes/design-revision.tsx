@@ -1,3 +1,4 @@
+import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
 import {
   data,
@@ -17,17 +18,15 @@ import {
 } from "~/components/design/action-replies.server";
 import { BillOfMaterials } from "~/components/design/bill-of-materials";
 import { DesignCostPanel } from "~/components/design/cost-panel";
-import {
-  DesignFieldsForm,
-  DesignFieldsSummary,
-} from "~/components/design/fields-form";
+import { DesignFieldsForm } from "~/components/design/fields-form";
+import { DesignFieldsSummary } from "~/components/design/fields-summary";
 import { PostedAnswer } from "~/components/design/posted-answer";
 import { RevisionHeader } from "~/components/design/revision-header";
 import { RevisionNav } from "~/components/design/revision-nav";
 import { WindingPanel } from "~/components/design/winding-panel";
+import { costQuerySearch } from "~/designs/cost-basis";
 import {
   applyLineChange,
-  costQuerySearch,
   designPageIntentOf,
   formLineId,
   readCostQuery,
@@ -75,6 +74,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
       substituteQuery.tolerancePercent / 100,
     ),
     canEdit: userCan(user, "editDesigns"),
+    // The motor form's constraints for its first render; its check loads after hydration.
+    fieldsConstraint: getZodConstraint(revisionFormSchema),
     // The build-order list's creation rule (its loader and action).
     canCreateBuildOrder: userCan(user, "createBuildOrders"),
   };
@@ -348,7 +349,10 @@ export default function DesignRevisionPage({
       </div>
 
       {canEdit && draft ? (
-        <DesignFieldsForm revision={revision} />
+        <DesignFieldsForm
+          revision={revision}
+          constraint={loaderData.fieldsConstraint}
+        />
       ) : (
         <DesignFieldsSummary revision={revision} />
       )}

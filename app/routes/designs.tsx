@@ -5,6 +5,10 @@ import {
 } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import { createColumnHelper } from "@tanstack/react-table";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/designs";
@@ -16,15 +20,15 @@ import {
   ListSearchForm,
 } from "~/components/lists/list-search-form";
 import { EmptyState } from "~/components/empty-state";
-import { insulationClassLabel } from "~/components/design/fields-form";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
 import { TextAreaField } from "~/components/text-area-field";
 import { FormMessages, TextField } from "~/components/text-field";
+import { newDesignFormSchema } from "~/designs/design-schemas";
 import {
   insulationClasses,
-  newDesignFormSchema,
-} from "~/designs/design-schemas";
+  insulationClassLabel,
+} from "~/designs/insulation-classes";
 import { findRevision } from "~/designs/design-revisions.server";
 import { createDesign, listDesigns } from "~/designs/designs.server";
 import { redirectWithFlash } from "~/lib/flash.server";
@@ -60,6 +64,8 @@ export async function loader({ request }: Route.LoaderArgs) {
     page: listed.page,
     pageCount: listed.pageCount,
     canCreate: userCan(user, "editDesigns"),
+    // The new-design form's constraints for its first render; its check loads after hydration.
+    constraint: getZodConstraint(newDesignFormSchema),
   };
 }
 
@@ -231,17 +237,29 @@ export default function Designs({
           }
         />
       </section>
-      {canCreate ? <NewDesignForm lastResult={actionData?.result} /> : null}
+      {canCreate ? (
+        <NewDesignForm
+          constraint={loaderData.constraint}
+          lastResult={actionData?.result}
+        />
+      ) : null}
     </div>
   );
 }
 
 function NewDesignForm({
+  constraint,
   lastResult,
 }: {
+  constraint: FieldConstraints;
   lastResult?: SubmissionResult<string[]>;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/designs/design-schemas").then(
+      (module) => module.newDesignFormSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: "new-design",
     lastResult,
@@ -249,11 +267,10 @@ function NewDesignForm({
       torqueBasis: "estimated",
       insulationClassC: "155",
     },
-    constraint: getZodConstraint(newDesignFormSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate: ({ formData }) =>
-      parseForm(formData, { schema: newDesignFormSchema }),
+    onValidate: validate,
   });
   // The schema reads numbers from text, so Conform types them as unknown; the inputs need name, id and errors.
   const number = fields as unknown as Record<

@@ -1,3 +1,4 @@
+import { getZodConstraint } from "@conform-to/zod/v4";
 import { type ShouldRevalidateFunctionArgs, data } from "react-router";
 import type { Route } from "./+types/magnet-estimator";
 import { requireUser } from "~/auth/guard.server";
@@ -16,6 +17,7 @@ import {
   magnetTemperatureRange,
 } from "~/engineering/magnet-estimate";
 import type { MagnetGrade } from "~/engineering/reference-data";
+import { magnetEstimateRequestSchema } from "~/lib/estimate-requests";
 import { listMagnetGrades } from "~/reference/magnet-grades.server";
 import { compareMagnetGrades } from "~/reference/magnet-materials";
 
@@ -39,6 +41,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     ? { ...startingMagnetInput, grade: startingGrade.name }
     : startingMagnetInput;
   return {
+    constraint: getZodConstraint(magnetEstimateRequestSchema),
     grades: grades.map((grade) => ({
       ...usableTemperatures(grade),
       name: grade.name,
@@ -103,7 +106,7 @@ export const meta: Route.MetaFunction = () => [
 ];
 
 export default function MagnetEstimator({ loaderData }: Route.ComponentProps) {
-  const { grades, startingAnswer } = loaderData;
+  const { grades, startingAnswer, constraint } = loaderData;
   const {
     form,
     fields,
@@ -114,7 +117,11 @@ export default function MagnetEstimator({ loaderData }: Route.ComponentProps) {
     apiErrors,
     waitingFor,
     updating,
-  } = useMagnetEstimate("/tools/magnet-estimator", startingAnswer);
+  } = useMagnetEstimate(
+    "/tools/magnet-estimator",
+    startingAnswer,
+    constraint,
+  );
 
   return (
     <div className="space-y-6">

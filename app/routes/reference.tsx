@@ -1,3 +1,4 @@
+import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
 import { data, Link } from "react-router";
 import type { Route } from "./+types/reference";
@@ -68,6 +69,8 @@ export async function loader({ request }: Route.LoaderArgs) {
   return {
     section: await rowsOf(table),
     canAddGrade: userCan(user, "addMagnetGrades"),
+    // The add-a-grade form's constraints for its first render; its check loads after hydration.
+    gradeConstraint: getZodConstraint(magnetGradeFormSchema),
   };
 }
 
@@ -184,7 +187,11 @@ export default function Reference({
         <Section key={section.table} section={section} />
       </section>
       {section.table === "magnet-grades" && canAddGrade ? (
-        <AddMagnetGradeForm key={added} lastResult={actionData?.result} />
+        <AddMagnetGradeForm
+          key={added}
+          constraint={loaderData.gradeConstraint}
+          lastResult={actionData?.result}
+        />
       ) : null}
     </div>
   );

@@ -1,4 +1,5 @@
 import { getFormProps } from "@conform-to/react";
+import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/stock-item-new";
@@ -13,7 +14,8 @@ import { redirectWithFlash } from "~/lib/flash.server";
 import { listMagnetGrades } from "~/reference/magnet-grades.server";
 import { listWireSizes } from "~/reference/wire-sizes.server";
 import { createItem } from "~/stock/catalogue.server";
-import { newItemFormSchema, unitOfNewItem } from "~/stock/new-item-form";
+import { newItemFormSchema } from "~/stock/new-item-form";
+import { unitOfNewItem } from "~/stock/new-item-unit";
 import { isDomainError } from "~/lib/domain-error";
 import { refusalReply } from "~/lib/refusal-reply";
 import { BackLink } from "~/components/back-link";
@@ -27,6 +29,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   ]);
   const kind = new URL(request.url).searchParams.get("kind");
   return {
+    constraint: getZodConstraint(newItemFormSchema),
     startKind: (itemKinds as readonly string[]).includes(kind ?? "")
       ? kind!
       : "wire",
@@ -74,9 +77,13 @@ export default function NewStockItem({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { startKind, sizes, grades } = loaderData;
+  const { startKind, sizes, grades, constraint } = loaderData;
   const navigation = useNavigation();
-  const [form, fields] = useNewItemForm(actionData?.result, startKind);
+  const [form, fields] = useNewItemForm(
+    actionData?.result,
+    startKind,
+    constraint,
+  );
   const kind = fields.kind.value ?? startKind;
   const unit = unitOfNewItem(
     kind,

@@ -1,3 +1,4 @@
+import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
 import { data } from "react-router";
 import type { Route } from "./+types/stock-item";
@@ -26,6 +27,8 @@ import {
   changesCatalogue,
   itemChangeSchema,
   itemPatchOf,
+  renameFormSchema,
+  reorderFormSchema,
 } from "~/stock/item-change-form";
 import {
   countItemMovements,
@@ -109,6 +112,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     page,
     pageCount,
     movementCount,
+    // The forms' constraints for their first render; their checks load after hydration.
+    constraints: {
+      reorder: getZodConstraint(reorderFormSchema),
+      rename: getZodConstraint(renameFormSchema),
+    },
     can: {
       reorder: userCan(user, "keepReorderLevels"),
       catalogue: userCan(user, "keepCatalogue"),
@@ -228,6 +236,7 @@ export default function StockItem({
           <ReorderPointPanel
             item={item}
             canSet={can.reorder}
+            constraint={loaderData.constraints.reorder}
             lastResult={
               actionData?.intent === "reorder" ? actionData.result : undefined
             }
@@ -235,6 +244,7 @@ export default function StockItem({
           {can.catalogue ? (
             <CatalogueEntryPanel
               item={item}
+              constraint={loaderData.constraints.rename}
               lastResult={
                 actionData?.intent === "rename" ? actionData.result : undefined
               }

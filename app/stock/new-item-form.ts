@@ -81,11 +81,4 @@ export const newItemFormSchema = z
 export type NewItemForm = z.output<typeof newItemFormSchema>;
 
 /** The unit an item of the form's kind is kept in. */
-export function unitOfNewItem(
-  kind: string | undefined,
-  partUnit: string | undefined,
-): string {
-  if (kind === "wire") return "kg";
-  if (kind === "magnet") return "pcs";
-  return partUnit || "pcs";
-}
+export { unitOfNewItem } from "./new-item-unit";

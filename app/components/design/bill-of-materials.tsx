@@ -1,8 +1,9 @@
+import { lazy, Suspense, useEffect } from "react";
 import { useFetchers } from "react-router";
 import type { DesignPageData } from "~/designs/design-page.server";
 import { MagnetHandlingCaution } from "~/components/magnet-handling-caution";
 import { DesignInsulationCaution } from "./insulation-caution";
-import { DesignLineEditor, type LineKind } from "./line-editor";
+import type { LineKind } from "./line-editor";
 import {
   CoilLinesTable,
   DesignWarningList,
@@ -11,6 +12,17 @@ import {
 } from "./line-tables";
 import { SavedLineFigures } from "./saved-line-figures";
 import { useLineEditing } from "./use-line-editing";
+
+/**
+ * The line editor (its schemas, the item picker, the coil drawing) opens only when a
+ * builder asks for it: loaded with import(), not with the page, and fetched as soon as
+ * an editable page has run so it is there by the first click
+ * (docs/decisions/051-precompressed-assets-and-page-weight.md).
+ */
+const loadLineEditor = () => import("./line-editor");
+const DesignLineEditor = lazy(() =>
+  loadLineEditor().then((module) => ({ default: module.DesignLineEditor })),
+);
 
 /**
  * The revision's bill of materials per motor: coils, magnets and other parts, each
@@ -36,6 +48,9 @@ export function BillOfMaterials({
     close,
     actions,
   } = useLineEditing(lines, editable);
+  useEffect(() => {
+    if (editable) void loadLineEditor();
+  }, [editable]);
 
   const busy = useFetchers().some((fetcher) => fetcher.state !== "idle");
   const coils = lines.filter((line) => line.kind === "coil");
@@ -48,22 +63,30 @@ export function BillOfMaterials({
 
   const editor = (kind: LineKind) =>
     editorOpen && editing?.kind === kind ? (
-      <DesignLineEditor
+      <Suspense
         key={editing.session}
-        formId={`design-line-${editing.session}`}
-        kind={kind}
-        line={editingLine}
-        figures={
-          editingLine ? (
-            <SavedLineFigures
-              costing={costing}
-              position={editingLine.position}
-            />
-          ) : null
+        fallback={
+          <p role="status" className="text-sm text-graphite-500">
+            Opening the editor…
+          </p>
         }
-        onAdded={onAdded}
-        onClose={close}
-      />
+      >
+        <DesignLineEditor
+          formId={`design-line-${editing.session}`}
+          kind={kind}
+          line={editingLine}
+          figures={
+            editingLine ? (
+              <SavedLineFigures
+                costing={costing}
+                position={editingLine.position}
+              />
+            ) : null
+          }
+          onAdded={onAdded}
+          onClose={close}
+        />
+      </Suspense>
     ) : null;
   const addButton = (kind: LineKind, label: string) =>
     editable &&

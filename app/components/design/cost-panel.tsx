@@ -6,7 +6,8 @@ import type {
   DesignPageLine,
 } from "~/designs/design-page.server";
 import { ESTIMATED_TORQUE_PER_NM_LABEL } from "~/designs/design-costing";
-import { costBasisLabels, type CostQuery } from "~/designs/design-page";
+import { costBasisLabels } from "~/designs/cost-basis";
+import type { CostQuery } from "~/designs/design-page";
 import { formatQuantity } from "~/lib/format";
 import { countText, moneyText, quantityText } from "~/lib/unit-text";
 import { formatMass } from "~/reference/quantity-display";

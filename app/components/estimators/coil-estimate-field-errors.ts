@@ -1,5 +1,5 @@
 import type { ApiAnswer } from "~/lib/api-request";
-import { formFieldOfApiField } from "~/lib/coil-estimator-form";
+import { formFieldOfApiField } from "~/lib/coil-estimator-fields";
 
 /**
  * The API's field messages of a refused coil estimate, by the form field they belong

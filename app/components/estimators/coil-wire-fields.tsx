@@ -1,6 +1,6 @@
 import { formatQuantity } from "~/lib/format";
 import { getSelectProps, type FieldMetadata } from "@conform-to/react";
-import { coilEstimatorDefaults } from "~/lib/coil-estimator-form";
+import { coilEstimatorDefaults } from "~/lib/coil-estimator-fields";
 import { NumberField } from "./number-field";
 import type { CoilEstimatorFields } from "./use-coil-estimate";
 

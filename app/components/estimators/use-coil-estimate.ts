@@ -1,15 +1,13 @@
 import { useForm } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
 import { useEffect, useRef, useState } from "react";
 import { useFetcher } from "react-router";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import type { CoilEstimate } from "~/engineering/coil-estimate";
 import type { ApiAnswer } from "~/lib/api-request";
-import {
-  coilEstimatorDefaults,
-  coilEstimatorFormSchema,
-  coilRequestFromForm,
-} from "~/lib/coil-estimator-form";
+import { coilEstimatorDefaults } from "~/lib/coil-estimator-fields";
 import type { CoilEstimateRequest } from "~/lib/estimate-requests";
 import { coilFormFieldErrors } from "./coil-estimate-field-errors";
 
@@ -18,24 +16,29 @@ export type CoilEstimateAnswer = ApiAnswer<CoilEstimate> & {
   input: CoilEstimateRequest;
 };
 
+/** The form's schema (with zod), loaded with import(): not first-load JavaScript. */
+const loadCoilForm = () => import("~/lib/coil-estimator-form");
+
 /**
  * The coil estimator's form and its estimates: each change redraws the coil at once and
  * asks for a new estimate a moment later (through the page's clientAction at `action`);
- * the last good estimate stays while a field is being fixed.
+ * the last good estimate stays while a field is being fixed. The form's schema is
+ * loaded after hydration (useBrowserValidation); the constraints come from the loader.
  */
-export function useCoilEstimate(action: string) {
+export function useCoilEstimate(action: string, constraint: FieldConstraints) {
   const fetcher = useFetcher<CoilEstimateAnswer>();
+  const validate = useBrowserValidation(() =>
+    loadCoilForm().then((module) => module.coilEstimatorFormSchema),
+  );
   const [form, fields] = useForm({
     id: "coil-estimator",
     defaultValue: coilEstimatorDefaults,
-    constraint: getZodConstraint(coilEstimatorFormSchema),
+    constraint,
     shouldValidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: coilEstimatorFormSchema });
-    },
+    onValidate: validate,
     onSubmit(event) {
       event.preventDefault();
-      calculate(event.currentTarget);
+      void calculate(event.currentTarget);
     },
   });
   const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
@@ -43,10 +46,12 @@ export function useCoilEstimate(action: string) {
     activeLengthMm: Number(coilEstimatorDefaults.activeLengthMm),
     endTurnLengthMm: Number(coilEstimatorDefaults.endTurnLengthMm),
   });
-  function calculate(formElement: HTMLFormElement) {
-    const submission = parseForm(new FormData(formElement), {
-      schema: coilEstimatorFormSchema,
-    });
+  async function calculate(formElement: HTMLFormElement) {
+    const formData = new FormData(formElement);
+    // Loaded once the page has run (the same import()s useBrowserValidation makes).
+    const [{ parseForm }, { coilEstimatorFormSchema, coilRequestFromForm }] =
+      await Promise.all([import("~/lib/parse-form"), loadCoilForm()]);
+    const submission = parseForm(formData, { schema: coilEstimatorFormSchema });
     if (submission.status !== "success") return;
     void fetcher.submit(
       JSON.parse(JSON.stringify(coilRequestFromForm(submission.value))),
@@ -62,13 +67,13 @@ export function useCoilEstimate(action: string) {
       endTurnLengthMm: Number(data.get("endTurnLengthMm") || Number.NaN),
     });
     clearTimeout(timer.current);
-    timer.current = setTimeout(() => calculate(formElement), 300);
+    timer.current = setTimeout(() => void calculate(formElement), 300);
   }
 
   // The first estimate, for the starting values.
   const formRef = useRef<HTMLFormElement>(null);
   useEffect(() => {
-    if (formRef.current) calculate(formRef.current);
+    if (formRef.current) void calculate(formRef.current);
     return () => clearTimeout(timer.current);
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);
@@ -82,7 +87,7 @@ export function useCoilEstimate(action: string) {
     setDrawing((current) => ({ ...current, endTurnLengthMm: lengthMm }));
     clearTimeout(timer.current);
     timer.current = setTimeout(
-      () => formRef.current && calculate(formRef.current),
+      () => formRef.current && void calculate(formRef.current),
       50,
     );
   }

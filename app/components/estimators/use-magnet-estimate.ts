@@ -1,12 +1,11 @@
 import { useForm } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
 import { useRef, useState } from "react";
 import { useFetcher } from "react-router";
 import {
-  magnetEstimateRequestSchema,
-  type MagnetEstimateRequest,
-} from "~/lib/estimate-requests";
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
+import type { MagnetEstimateRequest } from "~/lib/estimate-requests";
 import type { EstimateAnswer } from "./magnet-estimate-api";
 import {
   magnetFormValues,
@@ -14,16 +13,26 @@ import {
   startingMagnetInput,
 } from "./magnet-estimator-form";
 
+/** The request's schema and parseForm, loaded with import() (not first-load JavaScript). */
+const loadMagnetSchema = () =>
+  import("~/lib/estimate-requests").then(
+    (module) => module.magnetEstimateRequestSchema,
+  );
+
 /**
  * The magnet estimator's form and its estimates: each change asks for a new estimate a
  * moment later (through the page's clientAction at `action`); until then, and while
- * fields are refused, the last estimate stays (the first came with the page).
+ * fields are refused, the last estimate stays (the first came with the page). The
+ * request's schema is loaded after hydration (useBrowserValidation); the constraints
+ * come from the loader.
  */
 export function useMagnetEstimate(
   action: string,
   /** The estimate that came with the page, for its starting input. */
   startingAnswer: Extract<EstimateAnswer, { ok: true }> | null,
+  constraint: FieldConstraints,
 ) {
+  const validate = useBrowserValidation(loadMagnetSchema);
   const fetcher = useFetcher<EstimateAnswer>();
   const formRef = useRef<HTMLFormElement>(null);
   const timer = useRef<ReturnType<typeof setTimeout>>(undefined);
@@ -37,23 +46,25 @@ export function useMagnetEstimate(
     defaultValue: magnetFormValues(
       startingAnswer?.input ?? startingMagnetInput,
     ),
-    constraint: getZodConstraint(magnetEstimateRequestSchema),
+    constraint,
     shouldValidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: magnetEstimateRequestSchema });
-    },
+    onValidate: validate,
     onSubmit(event) {
       event.preventDefault();
-      estimate();
+      void estimate();
     },
   });
 
-  function estimate() {
+  async function estimate() {
     clearTimeout(timer.current);
     if (!formRef.current) return;
-    const submission = parseForm(new FormData(formRef.current), {
-      schema: magnetEstimateRequestSchema,
-    });
+    const formData = new FormData(formRef.current);
+    // Loaded once the page has run (the same import()s useBrowserValidation makes).
+    const [{ parseForm }, schema] = await Promise.all([
+      import("~/lib/parse-form"),
+      loadMagnetSchema(),
+    ]);
+    const submission = parseForm(formData, { schema });
     if (submission.status !== "success") {
       setWaitingFor(
         Object.keys(submission.error ?? {}).filter(
@@ -74,7 +85,7 @@ export function useMagnetEstimate(
   function onFormChange() {
     setTypedSinceAnswer(true);
     clearTimeout(timer.current);
-    timer.current = setTimeout(estimate, 300);
+    timer.current = setTimeout(() => void estimate(), 300);
   }
 
   const answer = fetcher.data ?? startingAnswer;

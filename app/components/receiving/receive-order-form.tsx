@@ -1,6 +1,6 @@
 /**
  * The delivery against one order: each open line with its spools or lots (one to start
- * with, more added per line), validated in the browser with the schema the server uses.
+ * with, more added per line), validated in the browser with the schema the server uses (loaded after hydration).
  * Field errors show at their entry; what was typed stays after a refusal.
  */
 import {
@@ -8,12 +8,11 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
 import { useRef, useState } from "react";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { ScanPanel } from "~/components/labels/scan-panel";
 import { Form, useNavigation } from "react-router";
 import { FormMessages } from "~/components/text-field";
-import { receiptFormSchema } from "~/purchase-orders/receipt-request";
 import type { ReceivingOrder } from "~/purchase-orders/receiving-view";
 import { OrderLineSummary } from "./order-line-summary";
 import { fillReceiveFormFromScan } from "./receive-scan";
@@ -43,16 +42,18 @@ export function ReceiveOrderForm({
   const formElement = useRef<HTMLFormElement>(null);
   /** The entry last worked on (by its position): where a scanned location goes. */
   const [lastWorkedOn, setLastWorkedOn] = useState<number | null>(null);
+  const validate = useBrowserValidation(
+    () =>
+      import("~/purchase-orders/receipt-request").then(
+        (module) => module.receiptFormSchema,
+      ),
+    { disableAutoCoercion: true },
+  );
   const [form] = useForm({
     id: `receive-${order.id}`,
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
-    onValidate({ formData }) {
-      return parseForm(formData, {
-        schema: receiptFormSchema,
-        disableAutoCoercion: true,
-      });
-    },
+    onValidate: validate,
   });
   const errors = (form.allErrors ?? {}) as Record<string, string[] | undefined>;
   const add = (lineId: number) => {

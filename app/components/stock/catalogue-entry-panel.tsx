@@ -4,31 +4,39 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
 import { ConfirmButton } from "~/components/confirm-button";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import { FormMessages, TextField } from "~/components/text-field";
-import { renameFormSchema } from "~/stock/item-change-form";
 
 export function CatalogueEntryPanel({
   item,
+  constraint,
   lastResult,
 }: {
   item: { sku: string; name: string; active: boolean };
+  /** The rename form's constraints, from the loader (getZodConstraint). */
+  constraint: FieldConstraints;
   /** The answer to the last rename form sent, if that was the form sent. */
   lastResult: SubmissionResult<string[]> | undefined;
 }) {
   const busy = useNavigation().state !== "idle";
+  const validate = useBrowserValidation(() =>
+    import("~/stock/item-change-form").then(
+      (module) => module.renameFormSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: "rename",
     lastResult,
     defaultValue: { name: item.name },
-    constraint: getZodConstraint(renameFormSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate: ({ formData }) =>
-      parseForm(formData, { schema: renameFormSchema }),
+    onValidate: validate,
   });
   return (
     <section aria-labelledby="catalogue-heading" className="panel space-y-4">

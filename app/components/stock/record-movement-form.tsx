@@ -2,18 +2,17 @@
  * The record-movement form for one item and one kind of movement: the item, the
  * receipt's fields or the fields of a movement from a balance, a note (the reason of
  * an adjustment) and the one button, which says what will be recorded. Validated in the
- * browser with the same schema the server uses.
+ * browser with the same schema the server uses, loaded after hydration (useBrowserValidation).
  */
 import {
   getFormProps,
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { FormMessages } from "~/components/text-field";
 import type { MovementType } from "~/db/tables/stock-enums";
-import { movementFormSchema } from "~/stock/movement-form";
 import {
   movementFieldLabels,
   recordButtonText,
@@ -67,16 +66,18 @@ export function RecordMovementForm({
 }) {
   const navigation = useNavigation();
   const busy = navigation.state !== "idle";
+  const validate = useBrowserValidation(
+    () =>
+      import("~/stock/movement-form").then(
+        (module) => module.movementFormSchema,
+      ),
+    { disableAutoCoercion: true },
+  );
   const [form] = useForm({
     id: `movement-${type}-${sku}`,
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
-    onValidate({ formData }) {
-      return parseForm(formData, {
-        schema: movementFormSchema,
-        disableAutoCoercion: true,
-      });
-    },
+    onValidate: validate,
   });
   const errors = (form.allErrors ?? {}) as Record<string, string[] | undefined>;
   const unit = item.unit;

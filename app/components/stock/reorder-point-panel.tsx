@@ -8,21 +8,25 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import { QuantityField } from "~/components/quantity-field";
 import { FormMessages } from "~/components/text-field";
-import { reorderFormSchema } from "~/stock/item-change-form";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 
 export function ReorderPointPanel({
   item,
   canSet,
+  constraint,
   lastResult,
 }: {
   item: { unit: string; reorderPoint: number; reorderQuantity: number };
   canSet: boolean;
+  /** The reorder form's constraints, from the loader (getZodConstraint). */
+  constraint: FieldConstraints;
   /** The answer to the last reorder form sent, if that was the form sent. */
   lastResult: SubmissionResult<string[]> | undefined;
 }) {
@@ -41,17 +45,30 @@ export function ReorderPointPanel({
       </section>
     );
   }
-  return <ReorderPointForm item={item} lastResult={lastResult} />;
+  return (
+    <ReorderPointForm
+      item={item}
+      constraint={constraint}
+      lastResult={lastResult}
+    />
+  );
 }
 
 function ReorderPointForm({
   item,
+  constraint,
   lastResult,
 }: {
   item: { unit: string; reorderPoint: number; reorderQuantity: number };
+  constraint: FieldConstraints;
   lastResult: SubmissionResult<string[]> | undefined;
 }) {
   const busy = useNavigation().state !== "idle";
+  const validate = useBrowserValidation(() =>
+    import("~/stock/item-change-form").then(
+      (module) => module.reorderFormSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: "reorder",
     lastResult,
@@ -59,11 +76,10 @@ function ReorderPointForm({
       reorderPoint: formatNumberForField(item.reorderPoint),
       reorderQuantity: formatNumberForField(item.reorderQuantity),
     },
-    constraint: getZodConstraint(reorderFormSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate: ({ formData }) =>
-      parseForm(formData, { schema: reorderFormSchema }),
+    onValidate: validate,
   });
   return (
     <section aria-labelledby="reorder-heading" className="panel">

@@ -1,13 +1,22 @@
-/** The new-item form's state (Conform), checked in the browser as on the server. */
+/**
+ * The new-item form's state (Conform), checked in the browser as on the server: the
+ * schema is loaded after hydration (useBrowserValidation), the constraints come from
+ * the loader.
+ */
 import { useForm, type SubmissionResult } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
-import { newItemFormSchema } from "~/stock/new-item-form";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 
 export function useNewItemForm(
   lastResult: SubmissionResult<string[]> | null | undefined,
   startKind: string,
+  constraint: FieldConstraints,
 ) {
+  const validate = useBrowserValidation(() =>
+    import("~/stock/new-item-form").then((module) => module.newItemFormSchema),
+  );
   return useForm({
     id: "new-item",
     lastResult,
@@ -20,11 +29,10 @@ export function useNewItemForm(
       reorderPoint: "0",
       reorderQuantity: "0",
     },
-    constraint: getZodConstraint(newItemFormSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate: ({ formData }) =>
-      parseForm(formData, { schema: newItemFormSchema }),
+    onValidate: validate,
   });
 }
 
