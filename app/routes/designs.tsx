@@ -5,7 +5,7 @@ import {
 } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/designs";
 import { requireCapability, requireUser } from "~/auth/guard.server";

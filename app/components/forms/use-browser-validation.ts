@@ -10,10 +10,17 @@
  *   const validate = useBrowserValidation(() =>
  *     import("~/lib/account-schemas").then((module) => module.signInSchema));
  *   useForm({ …, onValidate: validate });
+ *
+ * `options` are parseForm's other options (e.g. `{ disableAutoCoercion: true }`),
+ * the same the action parses with.
  */
 import type { Submission } from "@conform-to/react";
+import type { getZodConstraint } from "@conform-to/zod/v4";
 import { useEffect, useRef, useState } from "react";
 import type { z } from "zod";
+
+/** A form's field constraints as the loader gives them: `getZodConstraint(schema)`. */
+export type FormConstraint = ReturnType<typeof getZodConstraint>;
 
 type Validate<Schema extends z.ZodType> = (context: {
   formData: FormData;
@@ -21,8 +28,10 @@ type Validate<Schema extends z.ZodType> = (context: {
 
 export function useBrowserValidation<Schema extends z.ZodType>(
   loadSchema: () => Promise<Schema>,
+  options: { disableAutoCoercion?: boolean } = {},
 ): Validate<Schema> | undefined {
   const load = useRef(loadSchema);
+  const { disableAutoCoercion } = options;
   const [validate, setValidate] = useState<Validate<Schema>>();
   useEffect(() => {
     let current = true;
@@ -32,13 +41,13 @@ export function useBrowserValidation<Schema extends z.ZodType>(
         setValidate(
           () =>
             ({ formData }: { formData: FormData }) =>
-              parseForm(formData, { schema }),
+              parseForm(formData, { schema, disableAutoCoercion }),
         );
       },
     );
     return () => {
       current = false;
     };
-  }, []);
+  }, [disableAutoCoercion]);
   return validate;
 }
