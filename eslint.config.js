@@ -56,6 +56,12 @@ export default tseslint.config(
         },
         {
           selector:
+            "ImportDeclaration[source.value='@tanstack/react-table'][importKind!='type'] ImportSpecifier[imported.name='createColumnHelper']",
+          message:
+            "Make columns with createColumnHelper of app/lib/table-columns.ts: the library's would load all of TanStack Table with the page.",
+        },
+        {
+          selector:
             "NewExpression[callee.object.name='Intl'][callee.property.name=/^(DateTimeFormat|NumberFormat)$/]",
           message:
             "Format numbers and times for people through app/lib/format.ts: it follows the person's locale and time zone.",

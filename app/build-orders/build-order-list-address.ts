@@ -1,9 +1,12 @@
 /** The build-order list's address: the search and status it is filtered by and the page. Pure. */
 import { z } from "zod";
 import { buildOrderStatuses } from "~/db/tables/build-order-enums";
-import { listHref, searchTextParam } from "~/lib/list-filters";
+import { searchTextParam } from "~/lib/list-filters";
 import { pageParam, pageSizeParam } from "~/lib/search-params";
 import type { BuildOrderStatus } from "./build-order-status";
+
+// The list's links, without Zod (a page's links do not load it).
+export { buildOrderListHref } from "./build-order-list-href";
 
 /** The list's filters (page, API and CSV export share them). */
 export const buildOrderListFilterSchema = z.object({
@@ -31,12 +34,4 @@ export function buildOrderStatusFrom(
   return (buildOrderStatuses as readonly string[]).includes(value ?? "")
     ? (value as BuildOrderStatus)
     : undefined;
-}
-
-/** "/build-orders?search=stator&status=reserved&page=2", leaving out what is the default (all, page 1). */
-export function buildOrderListHref(
-  filter: BuildOrderListFilter,
-  page = 1,
-): string {
-  return listHref("/build-orders", { ...filter, page });
 }

@@ -1,6 +1,6 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { useMemo } from "react";
-import { DataTable } from "~/components/data-table";
+import { DataTableView } from "~/components/data-table-view";
 import {
   numberSources,
   SourceList,
@@ -78,7 +78,7 @@ export function ConductorMaterialTable({
         Resistance at another temperature: R(T) = R20 · (1 + α20 · (T − 20 °C)).
         Conductivity in % IACS is 1/58 Ω·mm²/m divided by the resistivity.
       </p>
-      <DataTable
+      <DataTableView
         caption="Conductor materials"
         columns={columns}
         rows={rows}

@@ -3,34 +3,41 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import { Form, useNavigation } from "react-router";
 import { QuantityField } from "~/components/quantity-field";
 import { FormMessages, TextField } from "~/components/text-field";
-import { currencyRateSchema } from "~/purchasing/supplier-schemas";
 
 /** Sets how much one unit of a currency is worth in the company currency (intent "currency-rate"). */
 export function CurrencyRateForm({
   lastResult,
   companyCurrency,
   today,
+  constraint,
 }: {
   lastResult?: SubmissionResult<string[]>;
   companyCurrency: string;
   today: string;
+  /** The fields' constraints (required, lengths), from the loader: getZodConstraint(schema). */
+  constraint: FieldConstraints;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/purchasing/supplier-schemas").then(
+      (module) => module.currencyRateSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: "currency-rate",
     lastResult,
     defaultValue: { validFrom: today },
-    constraint: getZodConstraint(currencyRateSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: currencyRateSchema });
-    },
+    onValidate: validate,
   });
   return (
     <section

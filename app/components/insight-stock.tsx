@@ -4,7 +4,7 @@
  * the cost per motor of each design month by month. Every chart has its figures in a
  * table beside it.
  */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import { InsightCsvLink } from "~/components/insight/insight-csv-link";
 import { DataTable } from "~/components/data-table";

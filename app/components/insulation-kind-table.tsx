@@ -1,6 +1,6 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { useMemo } from "react";
-import { DataTable, type TableFacet } from "~/components/data-table";
+import { DataTableView, type TableFacet } from "~/components/data-table-view";
 import {
   numberSources,
   SourceList,
@@ -66,7 +66,7 @@ export function InsulationKindTable({ rows }: { rows: InsulationKindRow[] }) {
         takes in the slot; published maximum overall diameters are in the wire
         sizes table.
       </p>
-      <DataTable
+      <DataTableView
         caption="Insulation kinds"
         columns={columns}
         rows={rows}

@@ -1,9 +1,9 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import {
-  DataTable,
+  DataTableView,
   type TableFacet,
   type TableSearch,
-} from "~/components/data-table";
+} from "~/components/data-table-view";
 import type { MagnetMaterial } from "~/engineering/reference-data";
 import { formatQuantity } from "~/lib/format";
 import {
@@ -170,7 +170,7 @@ export function MagnetGradeTable({ rows }: { rows: MagnetGradeRow[] }) {
         temperature by its coefficient, and for good once the working
         temperature is passed.
       </p>
-      <DataTable
+      <DataTableView
         caption="Magnet grades"
         columns={columns}
         rows={rows}

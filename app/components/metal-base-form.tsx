@@ -3,25 +3,34 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import { Form, useNavigation } from "react-router";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
-import { metalBaseSchema } from "~/purchasing/supplier-schemas";
 
 /** Sets the copper or aluminium base per kg from a day (intent "metal-base"). */
 export function MetalBaseForm({
   lastResult,
   companyCurrency,
   today,
+  constraint,
 }: {
   lastResult?: SubmissionResult<string[]>;
   companyCurrency: string;
   today: string;
+  /** The fields' constraints (required, lengths), from the loader: getZodConstraint(schema). */
+  constraint: FieldConstraints;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/purchasing/supplier-schemas").then(
+      (module) => module.metalBaseSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: "metal-base",
     lastResult,
@@ -30,12 +39,10 @@ export function MetalBaseForm({
       currency: companyCurrency,
       validFrom: today,
     },
-    constraint: getZodConstraint(metalBaseSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: metalBaseSchema });
-    },
+    onValidate: validate,
   });
   return (
     <section aria-labelledby="metal-base-form-heading" className="panel h-fit">

@@ -1,4 +1,4 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { CsvDownloadLink } from "~/components/csv-download-link";
 import { DataTable } from "~/components/data-table";
 import { formatDateTime, formatQuantity } from "~/lib/format";

@@ -1,6 +1,6 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { useMemo } from "react";
-import { DataTable, type TableSearch } from "~/components/data-table";
+import { DataTableView, type TableSearch } from "~/components/data-table-view";
 import {
   numberSources,
   SourceList,
@@ -86,7 +86,7 @@ export function ThermalClassTable({ rows }: { rows: ThermalClassRow[] }) {
         The wire&rsquo;s thermal class must be at least the motor&rsquo;s
         insulation class.
       </p>
-      <DataTable
+      <DataTableView
         caption="Thermal classes"
         columns={columns}
         rows={rows}

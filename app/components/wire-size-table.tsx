@@ -1,10 +1,10 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { useMemo } from "react";
 import {
-  DataTable,
+  DataTableView,
   type TableFacet,
   type TableSearch,
-} from "~/components/data-table";
+} from "~/components/data-table-view";
 import {
   numberSources,
   SourceList,
@@ -146,7 +146,7 @@ export function WireSizeTable({ rows }: { rows: WireSizeRow[] }) {
         series with R40 sizes between. Areas are of the bare conductor. Maximum
         overall diameters are given only where a published value is known.
       </p>
-      <DataTable
+      <DataTableView
         caption="Wire sizes"
         columns={columns}
         rows={rows}

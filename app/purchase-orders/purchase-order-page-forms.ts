@@ -13,8 +13,9 @@ import { idFromText } from "~/lib/search-params";
 import { isoCurrency } from "~/purchasing/supplier-schemas";
 import type { DraftOrderPatch } from "./purchase-order-forms";
 
-/** Most lines one order takes on a page. */
-export const maxOrderLines = 200;
+import { maxOrderLines } from "./max-order-lines";
+
+export { maxOrderLines };
 
 const formObject = (values: unknown): Record<string, unknown> =>
   values && typeof values === "object" && !Array.isArray(values)

@@ -5,6 +5,9 @@ import {
   currencyCodeFromText,
 } from "~/price-lists/currencies";
 import { metalBaseFixings } from "~/db/tables/purchase-order-enums";
+import { supplierOrderingDefaults } from "./supplier-ordering-defaults";
+
+export { supplierOrderingDefaults };
 
 const currencyHint = "Give the currency as a 3-letter ISO 4217 code, e.g. EUR.";
 
@@ -68,13 +71,6 @@ const orderingFields = {
   wireTolerancePercent: tolerancePercent("wire"),
   pieceTolerancePercent: tolerancePercent("piece"),
 };
-
-/** What the database starts a supplier with (common practice, no source): wire ±10 % by weight, pieces exact. */
-export const supplierOrderingDefaults = {
-  metalBaseFixedAt: "order",
-  wireTolerancePercent: 10,
-  pieceTolerancePercent: 0,
-} as const;
 
 export const supplierSchema = z.object({
   name: z

@@ -1,3 +1,4 @@
+import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
 import { data } from "react-router";
 import { z } from "zod";
@@ -21,7 +22,7 @@ import {
 } from "~/alerts/alert-preferences.server";
 import { alertModeOf } from "~/alerts/low-stock";
 import { alertMailModes } from "~/db/tables/alert-enums";
-import { signInRefusal } from "~/lib/account-schemas";
+import { changePasswordSchema, signInRefusal } from "~/lib/account-schemas";
 import {
   createTokenSchema,
   lifetimeAllowed,
@@ -51,6 +52,12 @@ export async function loader({ request }: Route.LoaderArgs) {
           mode: await alertPreferenceOf(user.id),
         })
       : null,
+    // The forms' field constraints; their checks load after hydration (useBrowserValidation).
+    constraints: {
+      password: getZodConstraint(changePasswordSchema),
+      display: getZodConstraint(displaySettingsSchema),
+      token: getZodConstraint(createTokenSchema),
+    },
   };
 }
 
@@ -202,7 +209,8 @@ export default function Account({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { user, tokens, alertMode, display, timeZones } = loaderData;
+  const { user, tokens, alertMode, display, timeZones, constraints } =
+    loaderData;
   const passwordResult =
     actionData && "passwordResult" in actionData
       ? actionData.passwordResult
@@ -220,11 +228,13 @@ export default function Account({
       <ChangePasswordForm
         lastResult={passwordResult}
         liveTokens={tokens.filter((token) => !token.revokedAt).length}
+        constraint={constraints.password}
       />
 
       <DisplaySettingsForm
         settings={display}
         timeZones={timeZones}
+        constraint={constraints.display}
         lastResult={
           actionData && "displayResult" in actionData
             ? actionData.displayResult
@@ -240,6 +250,7 @@ export default function Account({
         lastResult={actionData?.result}
         newToken={actionData?.newToken}
         notice={actionData?.notice}
+        tokenConstraint={constraints.token}
       />
     </div>
   );

@@ -1,4 +1,4 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { z } from "zod";
 import type { Route } from "./+types/admin-outbox";
 import { requireCapability } from "~/auth/guard.server";

@@ -5,7 +5,7 @@ import {
 } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { data, Form, Link, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/admin-people";
@@ -32,6 +32,7 @@ import {
   searchPageSchema,
 } from "~/lib/list-filters";
 import { inviteSchema } from "~/lib/people-schemas";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { roleLabels, roles } from "~/lib/roles";
 import {
   emailIsTaken,
@@ -58,7 +59,14 @@ export async function loader({ request }: Route.LoaderArgs) {
     peoplePageSize,
     (page) => listPeople(page, filter),
   );
-  return { people, page, pageCount, filter, ignored };
+  return {
+    people,
+    page,
+    pageCount,
+    filter,
+    ignored,
+    constraint: getZodConstraint(inviteSchema),
+  };
 }
 
 export async function action({ request }: Route.ActionArgs) {
@@ -198,26 +206,34 @@ export default function AdminPeople({
           }
         />
       </section>
-      <InviteForm key={invited} lastResult={actionData?.result} />
+      <InviteForm
+        key={invited}
+        lastResult={actionData?.result}
+        constraint={loaderData.constraint}
+      />
     </div>
   );
 }
 
 function InviteForm({
   lastResult,
+  constraint,
 }: {
   lastResult: SubmissionResult<string[]> | undefined;
+  /** The fields' constraints (required, lengths), from the loader. */
+  constraint: Route.ComponentProps["loaderData"]["constraint"];
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/lib/people-schemas").then((module) => module.inviteSchema),
+  );
   const [form, fields] = useForm({
     id: "invite",
     lastResult,
-    constraint: getZodConstraint(inviteSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: inviteSchema });
-    },
+    onValidate: validate,
   });
   return (
     <section aria-labelledby="invite-heading" className="panel h-fit">

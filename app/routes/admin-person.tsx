@@ -11,6 +11,7 @@ import { FormMessages } from "~/components/text-field";
 import { appUrl } from "~/lib/app-url.server";
 import { redirectWithFlash } from "~/lib/flash.server";
 import { personUpdateSchema } from "~/lib/people-schemas";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { invitationMessage } from "~/mail/account-messages";
 import { sendMail } from "~/mail/mailer.server";
 import {
@@ -25,7 +26,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const admin = await requireCapability(request, "managePeople");
   const person = await findPerson(params.userId);
   if (!person) throw data({ message: "No such person." }, { status: 404 });
-  return { person, isSelf: person.id === admin.id };
+  return {
+    person,
+    isSelf: person.id === admin.id,
+    constraint: getZodConstraint(personUpdateSchema),
+  };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -104,17 +109,18 @@ export default function AdminPerson({
   loaderData,
   actionData,
 }: Route.ComponentProps) {
-  const { person, isSelf } = loaderData;
+  const { person, isSelf, constraint } = loaderData;
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/lib/people-schemas").then((module) => module.personUpdateSchema),
+  );
   const [form, fields] = useForm({
     id: `roles-${person.id}`,
     lastResult: actionData?.result,
     defaultValue: { intent: "save-roles", roles: person.roles },
-    constraint: getZodConstraint(personUpdateSchema),
+    constraint,
     shouldValidate: "onSubmit",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: personUpdateSchema });
-    },
+    onValidate: validate,
   });
   return (
     <div className="max-w-2xl space-y-6">

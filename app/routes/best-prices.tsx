@@ -1,5 +1,5 @@
 import { formatNumber, formatQuantity } from "~/lib/format";
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Form, Link } from "react-router";
 import type { Route } from "./+types/best-prices";
 import { requireUser } from "~/auth/guard.server";

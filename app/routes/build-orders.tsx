@@ -7,10 +7,8 @@ import {
   createFormFieldOf,
   createFormSchema,
 } from "~/build-orders/build-order-forms";
-import {
-  buildOrderListFilterSchema,
-  buildOrderListHref,
-} from "~/build-orders/build-order-list-address";
+import { buildOrderListFilterSchema } from "~/build-orders/build-order-list-address";
+import { buildOrderListHref } from "~/build-orders/build-order-list-href";
 import { buildOrderStatusLabels } from "~/build-orders/build-order-status";
 import {
   createBuildOrder,

@@ -1,4 +1,4 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { data } from "react-router";
 import type { Route } from "./+types/design-bom-print";
 import { requireUser } from "~/auth/guard.server";

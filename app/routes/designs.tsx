@@ -9,7 +9,7 @@ import {
   useBrowserValidation,
   type FieldConstraints,
 } from "~/components/forms/use-browser-validation";
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/designs";
 import { requireCapability, requireUser } from "~/auth/guard.server";

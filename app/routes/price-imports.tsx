@@ -1,4 +1,4 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { data, Link } from "react-router";
 import type { Route } from "./+types/price-imports";
 import { requireUser } from "~/auth/guard.server";

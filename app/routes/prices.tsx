@@ -1,5 +1,6 @@
+import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { data, useLocation } from "react-router";
 import type { Route } from "./+types/prices";
 import { requireCapability, requireUser } from "~/auth/guard.server";
@@ -44,6 +45,11 @@ export async function loader({ request }: Route.LoaderArgs) {
     rates,
     currentRates: entriesInForce(rates, (entry) => entry.currency, today),
     canKeep: userCan(user, "keepPrices"),
+    // The forms' field constraints; their checks load after hydration (useBrowserValidation).
+    constraints: {
+      metalBase: getZodConstraint(metalBaseSchema),
+      currencyRate: getZodConstraint(currencyRateSchema),
+    },
   };
 }
 
@@ -208,6 +214,7 @@ export default function Prices({
           {canKeep ? (
             <MetalBaseForm
               key={visit}
+              constraint={loaderData.constraints.metalBase}
               lastResult={
                 actionData?.intent === "metal-base"
                   ? actionData.result
@@ -245,6 +252,7 @@ export default function Prices({
           {canKeep ? (
             <CurrencyRateForm
               key={visit}
+              constraint={loaderData.constraints.currencyRate}
               lastResult={
                 actionData?.intent === "currency-rate"
                   ? actionData.result

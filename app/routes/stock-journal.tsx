@@ -1,4 +1,4 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import type { Route } from "./+types/stock-journal";
 import { requireUser } from "~/auth/guard.server";

@@ -1,4 +1,4 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { useMemo } from "react";
 import { Link, redirect } from "react-router";
 import type { Route } from "./+types/stock";

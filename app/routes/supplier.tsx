@@ -1,7 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/supplier";
 import { requireCapability, requireUser } from "~/auth/guard.server";
@@ -30,6 +30,7 @@ import {
   updateSupplier,
 } from "~/purchasing/supplier-details.server";
 import { supplierSchema } from "~/purchasing/supplier-schemas";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { isDomainError } from "~/lib/domain-error";
 import { todayUtc } from "~/lib/calendar-days";
 import { supplierDeliveryPerformance } from "~/purchase-orders/supplier-deliveries.server";
@@ -57,6 +58,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     importLimit: supplierImportLimit,
     coverage,
     canKeep: userCan(user, "keepSuppliers"),
+    constraint: getZodConstraint(supplierSchema),
   };
 }
 
@@ -146,8 +148,14 @@ export default function Supplier({
     coverage,
     canKeep,
     performance,
+    constraint,
   } = loaderData;
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/purchasing/supplier-schemas").then(
+      (module) => module.supplierSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: `supplier-${supplier.id}`,
     lastResult: actionData?.result,
@@ -165,11 +173,10 @@ export default function Supplier({
         supplier.pieceTolerancePercent,
       ),
     },
-    constraint: getZodConstraint(supplierSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate: ({ formData }) =>
-      parseForm(formData, { schema: supplierSchema }),
+    onValidate: validate,
   });
   return (
     <div className="space-y-6">

@@ -5,7 +5,7 @@ import {
 } from "@conform-to/react";
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/suppliers";
 import { requireCapability, requireUser } from "~/auth/guard.server";
@@ -23,10 +23,9 @@ import { formatDateTime, formatQuantity } from "~/lib/format";
 import { userCan } from "~/lib/capabilities";
 import type { CurrencyCoverage } from "~/purchasing/supplier-currency-warnings";
 import { currencyCoverage } from "~/purchasing/supplier-details.server";
-import {
-  supplierOrderingDefaults,
-  supplierSchema,
-} from "~/purchasing/supplier-schemas";
+import { supplierSchema } from "~/purchasing/supplier-schemas";
+import { supplierOrderingDefaults } from "~/purchasing/supplier-ordering-defaults";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { listSupplierOverview } from "~/purchasing/supplier-overview.server";
 import { createSupplier } from "~/purchasing/suppliers.server";
 import { isDomainError } from "~/lib/domain-error";
@@ -60,6 +59,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     ignored,
     coverage,
     canKeep: userCan(user, "keepSuppliers"),
+    constraint: getZodConstraint(supplierSchema),
   };
 }
 
@@ -210,6 +210,7 @@ export default function Suppliers({
         <NewSupplierForm
           lastResult={actionData?.result}
           coverage={loaderData.coverage}
+          constraint={loaderData.constraint}
         />
       ) : null}
     </div>
@@ -219,11 +220,19 @@ export default function Suppliers({
 function NewSupplierForm({
   lastResult,
   coverage,
+  constraint,
 }: {
   lastResult?: SubmissionResult<string[]>;
   coverage: CurrencyCoverage;
+  /** The fields' constraints (required, lengths), from the loader. */
+  constraint: Route.ComponentProps["loaderData"]["constraint"];
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/purchasing/supplier-schemas").then(
+      (module) => module.supplierSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: "new-supplier",
     lastResult,
@@ -237,12 +246,10 @@ function NewSupplierForm({
         supplierOrderingDefaults.pieceTolerancePercent,
       ),
     },
-    constraint: getZodConstraint(supplierSchema),
+    constraint,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: supplierSchema });
-    },
+    onValidate: validate,
   });
   return (
     <section aria-labelledby="new-supplier-heading" className="panel h-fit">

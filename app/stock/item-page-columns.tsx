@@ -2,7 +2,7 @@
  * The item page's two tables: where the stock is (by location and lot, a wire spool's
  * tare too) and the item's movements. Column definitions for the one DataTable.
  */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import type { ReactNode } from "react";
 import { Link } from "react-router";
 import type { MovementType } from "~/db/tables/stock-enums";

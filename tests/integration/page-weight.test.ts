@@ -57,7 +57,7 @@ describe("first-load JavaScript of every page", () => {
   });
 });
 
-/** The pages within the first-load budget on 2026-12-04 (32 of 50). */
+/** The pages within the first-load budget on 2026-12-04 (44 of 50). */
 const pagesWithinBudget = [
   "/",
   "/insight",
@@ -91,4 +91,16 @@ const pagesWithinBudget = [
   "/scan/:code",
   "/api",
   "/*",
+  "/purchase-orders/:orderId",
+  "/purchase-orders/new",
+  "/build-orders",
+  "/build-orders/:orderId",
+  "/suppliers",
+  "/suppliers/:supplierId",
+  "/stocktakes",
+  "/stocktakes/:stocktakeId/count",
+  "/prices",
+  "/admin/people",
+  "/admin/people/:userId",
+  "/account",
 ];

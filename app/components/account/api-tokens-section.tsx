@@ -3,6 +3,7 @@ import { Link } from "react-router";
 import type { Role } from "~/lib/roles";
 import { ApiTokenTable, type ApiTokenRow } from "./api-token-table";
 import { NewTokenForm } from "./new-token-form";
+import type { FieldConstraints } from "~/components/forms/use-browser-validation";
 
 /** The account page's API tokens: how scripts use one, a new token shown once, the form, the list. */
 export function ApiTokensSection({
@@ -11,6 +12,7 @@ export function ApiTokensSection({
   lastResult,
   newToken,
   notice,
+  tokenConstraint,
 }: {
   tokens: ApiTokenRow[];
   roles: Role[];
@@ -20,6 +22,8 @@ export function ApiTokensSection({
   newToken: string | null | undefined;
   /** Why the last change of a token or a choice was refused (what went well is a flash message). */
   notice: string | null | undefined;
+  /** The token form's field constraints, from the loader. */
+  tokenConstraint: FieldConstraints;
 }) {
   return (
     <section aria-labelledby="tokens-heading" className="space-y-4">
@@ -56,7 +60,11 @@ export function ApiTokensSection({
           {notice}
         </p>
       ) : null}
-      <NewTokenForm lastResult={lastResult} roles={roles} />
+      <NewTokenForm
+        lastResult={lastResult}
+        roles={roles}
+        constraint={tokenConstraint}
+      />
       <ApiTokenTable tokens={tokens} />
     </section>
   );

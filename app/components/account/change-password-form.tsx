@@ -3,17 +3,21 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import { Form, useNavigation } from "react-router";
 import { useFlash } from "~/components/flash-message";
 import { FormMessages, TextField } from "~/components/text-field";
-import { changePasswordSchema, passwordMinimum } from "~/lib/account-schemas";
+import { passwordMinimum } from "~/lib/password-minimum";
 
 interface ChangePasswordProps {
   lastResult: SubmissionResult<string[]> | null;
   /** How many of the person's API tokens still work (they are revoked by a change). */
   liveTokens: number;
+  /** The fields' constraints (required, lengths), from the loader: getZodConstraint(schema). */
+  constraint: FieldConstraints;
 }
 
 /** The account page's panel for choosing a new password (the current one asked first). */
@@ -23,16 +27,23 @@ export function ChangePasswordForm(props: ChangePasswordProps) {
   return <ChangePasswordPanel key={changed} {...props} />;
 }
 
-function ChangePasswordPanel({ lastResult, liveTokens }: ChangePasswordProps) {
+function ChangePasswordPanel({
+  lastResult,
+  liveTokens,
+  constraint,
+}: ChangePasswordProps) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/lib/account-schemas").then(
+      (module) => module.changePasswordSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: "change-password",
     lastResult,
-    constraint: getZodConstraint(changePasswordSchema),
+    constraint,
     shouldValidate: "onBlur",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: changePasswordSchema });
-    },
+    onValidate: validate,
   });
   const submitting =
     navigation.state !== "idle" &&

@@ -3,8 +3,10 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import { Form, useNavigation } from "react-router";
 import { SelectField } from "~/components/select-field";
 import { FormMessages } from "~/components/text-field";
@@ -14,7 +16,6 @@ import {
   type DisplaySettings,
 } from "~/lib/display-settings";
 import { formatAmount, formatDateTime } from "~/lib/format";
-import { displaySettingsSchema } from "~/people/display-settings-form";
 
 /**
  * The account page's panel for how numbers, money, days and times are shown:
@@ -24,21 +25,27 @@ export function DisplaySettingsForm({
   settings,
   timeZones,
   lastResult,
+  constraint,
 }: {
   settings: DisplaySettings;
   timeZones: string[];
   lastResult: SubmissionResult<string[]> | null;
+  /** The fields' constraints (required, lengths), from the loader: getZodConstraint(schema). */
+  constraint: FieldConstraints;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/people/display-settings-form").then(
+      (module) => module.displaySettingsSchema,
+    ),
+  );
   const [form, fields] = useForm({
     id: "display-settings",
     lastResult,
     defaultValue: settings,
-    constraint: getZodConstraint(displaySettingsSchema),
+    constraint,
     shouldValidate: "onBlur",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: displaySettingsSchema });
-    },
+    onValidate: validate,
   });
   const saving =
     navigation.state !== "idle" &&

@@ -4,13 +4,14 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { getZodConstraint } from "@conform-to/zod/v4";
-import { parseForm } from "~/lib/parse-form";
+import {
+  useBrowserValidation,
+  type FieldConstraints,
+} from "~/components/forms/use-browser-validation";
 import { Form, useNavigation } from "react-router";
 import { RoleCheckboxes } from "~/components/role-checkboxes";
 import { FormMessages, TextField } from "~/components/text-field";
 import type { Role } from "~/lib/roles";
-import { createTokenSchema } from "~/lib/token-schemas";
 
 /**
  * Makes an API token: its name, how long it lives (an admin may choose "until
@@ -19,21 +20,25 @@ import { createTokenSchema } from "~/lib/token-schemas";
 export function NewTokenForm({
   lastResult,
   roles,
+  constraint,
 }: {
   lastResult: SubmissionResult<string[]> | null | undefined;
   /** The person's own roles: a token never has more. */
   roles: Role[];
+  /** The fields' constraints (required, lengths), from the loader: getZodConstraint(schema). */
+  constraint: FieldConstraints;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/lib/token-schemas").then((module) => module.createTokenSchema),
+  );
   const [form, fields] = useForm({
     id: "new-token",
     lastResult,
     defaultValue: { scope: "all", roles, lifetimeDays: "90" },
-    constraint: getZodConstraint(createTokenSchema),
+    constraint,
     shouldValidate: "onBlur",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: createTokenSchema });
-    },
+    onValidate: validate,
   });
   const { key: selectKey, ...selectProps } = getSelectProps(
     fields.lifetimeDays,

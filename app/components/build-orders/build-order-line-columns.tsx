@@ -1,5 +1,5 @@
 /** The columns of the order page's "What the build needs" table: per item, needed, held, issued and where the stock is. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
 import { stockPlaceText } from "~/build-orders/build-order-view";

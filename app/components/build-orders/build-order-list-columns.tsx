@@ -1,5 +1,5 @@
 /** The columns of the build-order list: reference, design, motors, status, who made it and when, note. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import type { listBuildOrders } from "~/build-orders/build-orders.server";
 import { buildOrderReference } from "~/build-orders/build-order-status";

@@ -1,9 +1,7 @@
 /** The build-order list's status filter: all orders, or the orders of one status (the search is kept). */
 import { Link } from "react-router";
-import {
-  buildOrderListHref,
-  type BuildOrderListFilter,
-} from "~/build-orders/build-order-list-address";
+import type { BuildOrderListFilter } from "~/build-orders/build-order-list-address";
+import { buildOrderListHref } from "~/build-orders/build-order-list-href";
 import {
   buildOrderStatusLabels,
   type BuildOrderStatus,

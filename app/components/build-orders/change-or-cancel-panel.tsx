@@ -4,11 +4,11 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { Form, useNavigation } from "react-router";
 import type { z } from "zod";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
-import { quantityFormSchema } from "~/build-orders/build-order-forms";
+import type { quantityFormSchema } from "~/build-orders/build-order-forms";
 import { canChangeQuantity } from "~/build-orders/build-order-status";
 import { ConfirmButton } from "~/components/confirm-button";
 import { QuantityField } from "~/components/quantity-field";
@@ -24,6 +24,13 @@ export function ChangeOrCancelPanel({
   cancelResult?: SubmissionResult<string[]>;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(
+    () =>
+      import("~/build-orders/build-order-forms").then(
+        (module) => module.quantityFormSchema,
+      ),
+    { disableAutoCoercion: true },
+  );
   const busy = navigation.state !== "idle";
   const [quantityForm, quantityFields] = useForm<
     { intent: string; quantity: string },
@@ -33,12 +40,7 @@ export function ChangeOrCancelPanel({
     lastResult: navigation.state === "idle" ? quantityResult : null,
     defaultValue: { quantity: String(order.quantity) },
     shouldValidate: "onSubmit",
-    onValidate({ formData }) {
-      return parseForm(formData, {
-        schema: quantityFormSchema,
-        disableAutoCoercion: true,
-      });
-    },
+    onValidate: validate,
   });
   const [cancelForm] = useForm({
     id: "cancel",

@@ -7,11 +7,10 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { useState } from "react";
 import { Form, useNavigation } from "react-router";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
-import { intentSchemas } from "~/build-orders/build-order-forms";
 import { heldSpots, weighBackPreview } from "~/build-orders/build-order-view";
 import { MeasureField } from "~/components/measure-field";
 import { FormMessages } from "~/components/text-field";
@@ -29,18 +28,20 @@ export function IssuePanel({
   lastResult?: SubmissionResult<string[]>;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(
+    () =>
+      import("~/build-orders/build-order-forms").then(
+        (module) => module.intentSchemas.issue,
+      ),
+    { disableAutoCoercion: true },
+  );
   const busy = navigation.state !== "idle";
   const spots = heldSpots(order.lines);
   const [form] = useForm({
     id: `issue-${order.id}`,
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
-    onValidate({ formData }) {
-      return parseForm(formData, {
-        schema: intentSchemas.issue,
-        disableAutoCoercion: true,
-      });
-    },
+    onValidate: validate,
   });
   const errors = (form.allErrors ?? {}) as Record<string, string[] | undefined>;
   // The oldest lot of the first item still held is suggested.

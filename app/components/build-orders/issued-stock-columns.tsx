@@ -1,5 +1,5 @@
 /** The columns of the order page's "Issued to the build" table: one row per issue, newest first. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { stockPlaceText } from "~/build-orders/build-order-view";
 import { formatDateTime, formatQuantity } from "~/lib/format";
 import {

@@ -4,10 +4,10 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { Form, Link, useNavigation } from "react-router";
 import type { z } from "zod";
-import { createFormSchema } from "~/build-orders/build-order-forms";
+import type { createFormSchema } from "~/build-orders/build-order-forms";
 import { QuantityField } from "~/components/quantity-field";
 import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
@@ -20,6 +20,13 @@ export function NewBuildOrderForm({
   lastResult?: SubmissionResult<string[]>;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(
+    () =>
+      import("~/build-orders/build-order-forms").then(
+        (module) => module.createFormSchema,
+      ),
+    { disableAutoCoercion: true },
+  );
   const [form, fields] = useForm<
     {
       designRevision: string;
@@ -33,12 +40,7 @@ export function NewBuildOrderForm({
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, {
-        schema: createFormSchema,
-        disableAutoCoercion: true,
-      });
-    },
+    onValidate: validate,
   });
   return (
     <section aria-labelledby="new-build-order-heading" className="panel h-fit">

@@ -1,6 +1,6 @@
 import { formatAmount } from "~/lib/format";
 /** The columns of the order page's "Planned and used" table: per item, planned against issued quantity and cost. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { formatSignedStockQuantity } from "~/stock/stock-quantity-text";
 import {
   lineQuantityCell,

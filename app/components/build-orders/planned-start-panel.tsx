@@ -4,11 +4,11 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { Form, useNavigation } from "react-router";
 import type { z } from "zod";
 import type { BuildOrderDetails } from "~/build-orders/build-order-details.server";
-import { plannedStartFormSchema } from "~/build-orders/build-order-forms";
+import type { plannedStartFormSchema } from "~/build-orders/build-order-forms";
 import { FormMessages, TextField } from "~/components/text-field";
 import { formatDay } from "~/lib/format";
 
@@ -22,6 +22,13 @@ export function PlannedStartPanel({
   lastResult?: SubmissionResult<string[]>;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(
+    () =>
+      import("~/build-orders/build-order-forms").then(
+        (module) => module.plannedStartFormSchema,
+      ),
+    { disableAutoCoercion: true },
+  );
   const [form, fields] = useForm<
     { intent: string; plannedStart: string },
     z.output<typeof plannedStartFormSchema>
@@ -30,12 +37,7 @@ export function PlannedStartPanel({
     lastResult: navigation.state === "idle" ? lastResult : null,
     defaultValue: { plannedStart: order.plannedStart ?? "" },
     shouldValidate: "onSubmit",
-    onValidate({ formData }) {
-      return parseForm(formData, {
-        schema: plannedStartFormSchema,
-        disableAutoCoercion: true,
-      });
-    },
+    onValidate: validate,
   });
   const shown = order.plannedStart
     ? formatDay(order.plannedStart)

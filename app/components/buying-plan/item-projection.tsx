@@ -1,5 +1,5 @@
 /** One item's projected stock: the chart, a choice of item, and every week's figures in a table. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import type { BuyingPlanJson } from "~/buying-plan/plan-json";
 import { DataTable } from "~/components/data-table";

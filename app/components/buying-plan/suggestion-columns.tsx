@@ -1,5 +1,5 @@
 /** The columns of the buying plan's suggestions: choice, item, quantity, supplier, price, need-by and order-by days, why. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import type { SuggestionJson } from "~/buying-plan/plan-json";
 import { formatDay, formatPriceText, formatQuantity } from "~/lib/format";

@@ -1,4 +1,4 @@
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { useMemo } from "react";
 import { Form } from "react-router";
 import type {
@@ -11,7 +11,7 @@ import type { CostQuery } from "~/designs/design-page";
 import { formatQuantity } from "~/lib/format";
 import { countText, moneyText, quantityText } from "~/lib/unit-text";
 import { formatMass } from "~/reference/quantity-display";
-import { DataTable } from "~/components/data-table";
+import { DataTableView } from "~/components/data-table-view";
 import { costBasisText, PriceBasisNote } from "./price-basis-note";
 import { DesignCostSplit } from "./cost-split";
 
@@ -126,7 +126,7 @@ export function DesignPriceTable({
     [currency],
   );
   return (
-    <DataTable
+    <DataTableView
       caption={`Each line's price per motor at the ${costBasisText(costing.basis)}, and where the price comes from`}
       columns={columns}
       rows={rows}

@@ -1,4 +1,5 @@
-import { createColumnHelper, type ColumnDef } from "@tanstack/react-table";
+import type { ColumnDef } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { useMemo } from "react";
 import { useFetcher } from "react-router";
 import type {
@@ -10,7 +11,7 @@ import { countText, quantityText } from "~/lib/unit-text";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
 import type { DesignActionAnswer } from "./action-answer";
 import { ConfirmButton } from "~/components/confirm-button";
-import { DataTable } from "~/components/data-table";
+import { DataTableView } from "~/components/data-table-view";
 
 type Costing = DesignPageData["costing"];
 export type CoilFigures = Costing["coils"][number];
@@ -394,7 +395,7 @@ export function CoilLinesTable({
     return list;
   }, [showFill, actions]);
   return (
-    <DataTable
+    <DataTableView
       caption="Coil lines with their copper figures per motor"
       columns={columns}
       rows={rows}
@@ -508,7 +509,7 @@ export function MagnetLinesTable({
     [actions],
   );
   return (
-    <DataTable
+    <DataTableView
       caption="Magnet lines with their mass per motor"
       columns={columns}
       rows={rows}
@@ -568,7 +569,7 @@ export function PartLinesTable({
     [actions],
   );
   return (
-    <DataTable
+    <DataTableView
       caption="Other parts with their quantity per motor"
       columns={columns}
       rows={rows}

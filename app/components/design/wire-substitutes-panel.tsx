@@ -1,4 +1,5 @@
-import { createColumnHelper, type ColumnDef } from "@tanstack/react-table";
+import type { ColumnDef } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { useMemo } from "react";
 import { Form, useFetcher } from "react-router";
 import type { SubstituteQuery } from "~/designs/wire-substitute-schemas";
@@ -6,7 +7,7 @@ import type { SubstitutePanel } from "~/designs/wire-substitutes.server";
 import { formatQuantity } from "~/lib/format";
 import { moneyText } from "~/lib/unit-text";
 import { formatMass } from "~/reference/quantity-display";
-import { DataTable } from "~/components/data-table";
+import { DataTableView } from "~/components/data-table-view";
 import type { DesignActionAnswer } from "./action-answer";
 
 type Substitute = SubstitutePanel["substitutes"][number];
@@ -198,7 +199,7 @@ function LineSubstitutes({
             wires in stock could stand in for it.
           </p>
         ) : null}
-        <DataTable
+        <DataTableView
           caption={`Wire in stock that could stand in for ${panel.strands} × ${panel.sku}`}
           columns={columns}
           rows={panel.substitutes}

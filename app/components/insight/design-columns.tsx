@@ -3,7 +3,7 @@
  * chart's figures) and the released designs with cost per motor, cost per N·m, the stored
  * figure beside a what-if, copper loss per N·m and the end-turn factor input.
  */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import type { DesignInsight } from "~/insight/design-insight.server";
 import {

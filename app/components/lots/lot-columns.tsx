@@ -1,5 +1,5 @@
 /** Column definitions for the lot tables (the one DataTable): balances, where used, a build order's lots. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import { formatDateTime, formatDay } from "~/lib/format";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";

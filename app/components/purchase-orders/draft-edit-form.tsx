@@ -5,7 +5,6 @@ import { Form } from "react-router";
 import { FormMessages, TextField } from "~/components/text-field";
 import { TextAreaField } from "~/components/text-area-field";
 import type { PurchaseOrderView } from "~/purchase-orders/purchase-order-details.server";
-import { draftFormSchema } from "~/purchase-orders/purchase-order-page-forms";
 import { formatQuantityText, formatUnitCostText } from "~/lib/decimal-amounts";
 import { plainDecimalText } from "~/lib/number-text";
 import { OrderLinesEditor } from "./order-lines-editor";
@@ -20,7 +19,10 @@ export function DraftEditForm({
 }) {
   const { form, fields, busy } = useOrderForm(
     `edit-${order.id}-${order.updatedAt.valueOf()}`,
-    draftFormSchema,
+    () =>
+      import("~/purchase-orders/purchase-order-page-forms").then(
+        (module) => module.draftFormSchema,
+      ),
     {
       currency: order.currency,
       notes: order.notes,

@@ -5,18 +5,13 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
 import { Form, useNavigation } from "react-router";
-import {
-  cancelFormSchema,
-  closeFormSchema,
-} from "~/purchase-orders/purchase-order-page-forms";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { ConfirmButton } from "~/components/confirm-button";
 import { FormMessages } from "~/components/text-field";
 
 const looks = {
   cancel: {
-    schema: cancelFormSchema,
     label: "Why cancel it",
     button: "Cancel order",
     note: "Nothing has arrived against it; a sent order's quantities leave the stock on order.",
@@ -27,7 +22,6 @@ const looks = {
     keep: "Keep the order",
   },
   close: {
-    schema: closeFormSchema,
     label: "Why close it short",
     button: "Close short",
     note: "Nothing more will come: what is still open leaves the stock on order, what arrived stays booked.",
@@ -51,16 +45,18 @@ export function EndOrderForm({
 }) {
   const look = looks[step];
   const navigation = useNavigation();
+  const validate = useBrowserValidation(
+    () =>
+      import("~/purchase-orders/purchase-order-page-forms").then((module) =>
+        step === "cancel" ? module.cancelFormSchema : module.closeFormSchema,
+      ),
+    { disableAutoCoercion: true },
+  );
   const [form, fields] = useForm<{ intent: string; reason: string }>({
     id: `order-${step}`,
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
-    onValidate({ formData }) {
-      return parseForm(formData, {
-        schema: look.schema,
-        disableAutoCoercion: true,
-      });
-    },
+    onValidate: validate,
   });
   const { key, ...reasonProps } = getTextareaProps(fields.reason);
   return (

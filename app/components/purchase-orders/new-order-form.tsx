@@ -4,7 +4,6 @@ import { Form } from "react-router";
 import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
 import { TextAreaField } from "~/components/text-area-field";
-import { newOrderFormSchema } from "~/purchase-orders/purchase-order-page-forms";
 import { OrderLinesEditor } from "./order-lines-editor";
 import { useOrderForm } from "./use-order-form";
 
@@ -26,7 +25,10 @@ export function NewOrderForm({
 }) {
   const { form, fields, busy } = useOrderForm(
     "new-purchase-order",
-    newOrderFormSchema,
+    () =>
+      import("~/purchase-orders/purchase-order-page-forms").then(
+        (module) => module.newOrderFormSchema,
+      ),
     { supplierId: supplierId ? String(supplierId) : "", lines: [{}] },
     lastResult,
   );

@@ -3,7 +3,7 @@
  * what is still to come, when it is expected and how late. Used by the item page's
  * "On order" panel and the late lines page.
  */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import { formatDay } from "~/lib/format";
 import { daysLateText } from "~/purchase-orders/order-line-dates";

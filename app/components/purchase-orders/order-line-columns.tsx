@@ -1,5 +1,5 @@
 /** The columns of an order's lines: item (ours and the supplier's SKU), quantity, price and its source, total, expected and wanted dates, received and open. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import type { PurchaseOrderView } from "~/purchase-orders/purchase-order-details.server";
 import { quantityToNumber } from "~/lib/decimal-amounts";

@@ -1,6 +1,6 @@
 /** The lines of an order being written or edited: one fieldset each, a button to add one and one to remove each. */
 import type { FieldMetadata, FormMetadata } from "@conform-to/react";
-import { maxOrderLines } from "~/purchase-orders/purchase-order-page-forms";
+import { maxOrderLines } from "~/purchase-orders/max-order-lines";
 import { OrderLineFields } from "./order-line-fields";
 
 /** A line as its fields hold it (text), before the schema reads it. */

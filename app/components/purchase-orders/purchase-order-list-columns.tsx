@@ -1,5 +1,5 @@
 /** The columns of the purchase-order list: number, supplier, status, lines, total, ordered on, next expected. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import type { listPurchaseOrders } from "~/purchase-orders/purchase-order-details.server";
 import { formatDay } from "~/lib/format";

@@ -2,7 +2,7 @@
  * The price history's figures, folded away: every price of every supplier article from
  * its day, in the company currency and as quoted, and why a day has no price.
  */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { DataTable } from "~/components/data-table";
 import { perUnitWord } from "~/lib/unit-text";
 import {

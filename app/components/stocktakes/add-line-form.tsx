@@ -1,17 +1,19 @@
 /** "Found on the shelf": a lot the sheet does not list, at one of the stocktake's locations. */
 import { getFormProps, useForm } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { useFetcher } from "react-router";
 import { SelectField } from "~/components/select-field";
 import { FormMessages, TextField } from "~/components/text-field";
-import {
-  addLineFormSchema,
-  type AddLineInput,
-} from "~/stocktakes/stocktake-forms";
+import type { AddLineInput } from "~/stocktakes/stocktake-forms";
 import type { CountAnswer } from "./count-line-form";
 
 export function AddLineForm({ locations }: { locations: string[] }) {
   const fetcher = useFetcher<CountAnswer>({ key: "add-line" });
+  const validate = useBrowserValidation(() =>
+    import("~/stocktakes/stocktake-forms").then(
+      (module) => module.addLineFormSchema,
+    ),
+  );
   const [form, fields] = useForm<
     { intent: string; sku: string; lot: string; location: string },
     AddLineInput
@@ -20,9 +22,7 @@ export function AddLineForm({ locations }: { locations: string[] }) {
     lastResult: fetcher.state === "idle" ? fetcher.data?.result : null,
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: addLineFormSchema });
-    },
+    onValidate: validate,
   });
   return (
     <section aria-labelledby="add-line-heading" className="panel space-y-2">

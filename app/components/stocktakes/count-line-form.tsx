@@ -9,14 +9,14 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { useEffect, useRef } from "react";
 import { useFetcher } from "react-router";
 import { QuantityField } from "~/components/quantity-field";
 import { FormMessages } from "~/components/text-field";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
 import type { CountSheetLine } from "~/stocktakes/count-sheet";
-import { countFormSchema, type CountInput } from "~/stocktakes/stocktake-forms";
+import type { CountInput } from "~/stocktakes/stocktake-forms";
 
 export interface CountAnswer {
   intent: "count" | "add";
@@ -53,6 +53,11 @@ export function CountLineForm({
 }) {
   const fetcher = useFetcher<CountAnswer>({ key: `count-${line.id}` });
   const answer = fetcher.data?.lineId === line.id ? fetcher.data : undefined;
+  const validate = useBrowserValidation(() =>
+    import("~/stocktakes/stocktake-forms").then(
+      (module) => module.countFormSchema,
+    ),
+  );
   const [form, fields] = useForm<
     {
       intent: string;
@@ -73,9 +78,7 @@ export function CountLineForm({
     lastResult: fetcher.state === "idle" ? answer?.result : null,
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: countFormSchema });
-    },
+    onValidate: validate,
   });
   const moved = useRef<unknown>(null);
   useEffect(() => {

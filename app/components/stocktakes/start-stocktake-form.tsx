@@ -4,12 +4,9 @@ import {
   useForm,
   type SubmissionResult,
 } from "@conform-to/react";
-import { parseForm } from "~/lib/parse-form";
+import { useBrowserValidation } from "~/components/forms/use-browser-validation";
 import { Form, useNavigation } from "react-router";
-import {
-  startFormSchema,
-  type StartStocktakeInput,
-} from "~/stocktakes/stocktake-forms";
+import type { StartStocktakeInput } from "~/stocktakes/stocktake-forms";
 import { FormMessages, TextField } from "~/components/text-field";
 
 export function StartStocktakeForm({
@@ -20,6 +17,11 @@ export function StartStocktakeForm({
   lastResult?: SubmissionResult<string[]> | null;
 }) {
   const navigation = useNavigation();
+  const validate = useBrowserValidation(() =>
+    import("~/stocktakes/stocktake-forms").then(
+      (module) => module.startFormSchema,
+    ),
+  );
   const [form, fields] = useForm<
     {
       intent: string;
@@ -33,9 +35,7 @@ export function StartStocktakeForm({
     lastResult: navigation.state === "idle" ? lastResult : null,
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
-    onValidate({ formData }) {
-      return parseForm(formData, { schema: startFormSchema });
-    },
+    onValidate: validate,
   });
   const chosen = new Set(
     ([] as unknown[]).concat(fields.locations.initialValue ?? []),

@@ -1,5 +1,5 @@
 /** The columns of the stocktake list: reference, status, locations, progress, who started it and when. */
-import { createColumnHelper } from "@tanstack/react-table";
+import { createColumnHelper } from "~/lib/table-columns";
 import { Link } from "react-router";
 import { formatDateTime } from "~/lib/format";
 import type { StocktakeSummary } from "~/stocktakes/stocktakes.server";
