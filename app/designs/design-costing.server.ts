@@ -26,6 +26,7 @@ import { coilSlotFill, designWarnings } from "./design-checks";
 import {
   costDesign,
   designCostingJson,
+  perMotorQuantities,
   requiredStockQuantity,
   type ItemUnitPrice,
 } from "./design-costing";
@@ -57,13 +58,7 @@ function quantitiesPerItem(
   lines: readonly StoredDesignLine[],
   motors: number,
 ): Map<number, { sku: string; quantity: bigint }> {
-  const perMotor = costDesign({
-    lines,
-    quantity: 1,
-    currency: "",
-    prices: new Map(),
-    ratedTorqueNm: null,
-  }).lines;
+  const perMotor = perMotorQuantities(lines);
   const needed = new Map<number, { sku: string; quantity: bigint }>();
   for (const line of perMotor) {
     const entry = needed.get(line.itemId) ?? { sku: line.sku, quantity: 0n };

@@ -232,6 +232,25 @@ function addToSplit(
   }
 }
 
+/**
+ * What each line takes per motor, in line order, as `costDesign` counts it (its
+ * `perMotorQuantity`), without pricing anything: what a build needs before its prices
+ * are looked up.
+ */
+export function perMotorQuantities(
+  lines: readonly DesignLine[],
+): { itemId: number; sku: string; perMotorQuantity: ExactDecimal }[] {
+  return lines.map((line) => {
+    assertDesignLine(line);
+    const item = lineItem(line);
+    return {
+      itemId: item.itemId,
+      sku: item.sku,
+      perMotorQuantity: lineQuantity(line).perMotorQuantity,
+    };
+  });
+}
+
 /** Cost per motor of a design (see the module comment for the rounding). */
 export function costDesign(input: DesignCostingInput): DesignCosting {
   if (!Number.isInteger(input.quantity) || input.quantity < 1) {

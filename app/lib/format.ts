@@ -41,11 +41,16 @@ const formatterCache = new Map<
   Intl.NumberFormat | Intl.DateTimeFormat
 >();
 
+/**
+ * The number formatter for `options`, which `name` stands for (each caller's own short
+ * name: the options are not serialised on every call, as this runs for every number shown).
+ */
 function numberFormat(
+  name: string,
   options: Intl.NumberFormatOptions,
   locale = currentDisplaySettings().locale,
 ): Intl.NumberFormat {
-  const key = `n|${locale}|${JSON.stringify(options)}`;
+  const key = `n|${locale}|${name}`;
   let format = formatterCache.get(key) as Intl.NumberFormat | undefined;
   if (!format) {
     format = new Intl.NumberFormat(locale, options);
@@ -158,7 +163,7 @@ export function formatAmount(value: number): string {
  * places, the rest only where they count, no grouping.
  */
 export function formatPriceText(decimal: string): string {
-  return numberFormat({
+  return numberFormat("price", {
     minimumFractionDigits: 2,
     maximumFractionDigits: 4,
     useGrouping: false,
@@ -171,7 +176,7 @@ export function formatQuantity(
   unit: string,
   decimals = 0,
 ): string {
-  const number = numberFormat({
+  const number = numberFormat(`fixed ${decimals}`, {
     minimumFractionDigits: decimals,
     maximumFractionDigits: decimals,
   }).format(value);
@@ -180,7 +185,9 @@ export function formatQuantity(
 
 /** A number with up to `maxDecimals` places, only those that count: 2.5 → "2.5", 1234 → "1,234". */
 export function formatNumber(value: number, maxDecimals = 3): string {
-  return numberFormat({ maximumFractionDigits: maxDecimals }).format(value);
+  return numberFormat(`up to ${maxDecimals}`, {
+    maximumFractionDigits: maxDecimals,
+  }).format(value);
 }
 
 /**
@@ -194,7 +201,7 @@ export function formatNumberForField(
   if (value === null || value === undefined || value === "") return "";
   const number = typeof value === "number" ? value : Number(value);
   if (!Number.isFinite(number)) return String(value);
-  return numberFormat({
+  return numberFormat("field", {
     maximumFractionDigits: 20,
     useGrouping: false,
   }).format(number);
