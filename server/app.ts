@@ -28,6 +28,7 @@ import { acceptedRequestId, newRequestId } from "~/observability/request-id";
 import { routeIdMatcher, routeTree } from "~/observability/route-id";
 import { answerDatabaseOutages } from "./database-unavailable";
 import { routedPath } from "./routed-path";
+import { sizeJsonAnswers } from "./sized-json-answers";
 import { limitRequestBodies } from "./request-size-limits";
 import { referenceUnexpectedErrors } from "./unexpected-errors";
 
@@ -434,11 +435,15 @@ export function answerUnexpectedErrors(
     .send(unexpectedErrorText(response.locals.requestId as string | undefined));
 }
 
-/** The app's server build as it is served: loaders and actions answer outages and unexpected errors. */
+/**
+ * The app's server build as it is served: loaders and actions answer outages and
+ * unexpected errors, and the API's JSON answers carry their length.
+ */
 function appBuild(): Promise<ServerBuild> {
   return serverBuild()
     .then(answerDatabaseOutages)
-    .then(referenceUnexpectedErrors);
+    .then(referenceUnexpectedErrors)
+    .then(sizeJsonAnswers);
 }
 
 function loadContext(request: ExpressRequest, response: ExpressResponse) {

@@ -8,6 +8,22 @@ import type { Request as ExpressRequest } from "express";
  * and the route that answers always see the same page.
  */
 export function routedPath(request: ExpressRequest): string {
+  let path = routedPaths.get(request);
+  if (path === undefined) {
+    path = resolvedPath(request);
+    routedPaths.set(request, path);
+  }
+  return path;
+}
+
+/**
+ * Each request's path, resolved once: the checks in front of the routes (the log line,
+ * the host, metrics, body limits, API or page) each ask for it, and a request's target
+ * never changes while it is answered.
+ */
+const routedPaths = new WeakMap<ExpressRequest, string>();
+
+function resolvedPath(request: ExpressRequest): string {
   try {
     return new URL(`http://localhost${request.originalUrl}`).pathname;
   } catch {

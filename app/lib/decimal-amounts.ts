@@ -22,19 +22,29 @@ export function parseUnitCost(text: string): bigint {
   return parseScaled(text, 4);
 }
 
+/** The parts of a decimal number: sign, whole digits, fraction digits (as {@link decimalNumberPattern}). */
+const decimalParts = /^(-?)(\d+)(?:\.(\d+))?$/;
+
+/**
+ * Every list and page parses each DECIMAL column of each row here (50 rows × 7 columns
+ * for a page of items): one match and one BigInt per value.
+ */
 function parseScaled(text: string, decimals: number): bigint {
   const trimmed = text.trim();
-  if (isTooLongForNumber(trimmed) || !decimalNumberPattern.test(trimmed))
+  const parts = isTooLongForNumber(trimmed) ? null : decimalParts.exec(trimmed);
+  if (!parts)
     throw new RangeError(`"${text.slice(0, 40)}" is not a decimal number`);
-  const negative = trimmed.startsWith("-");
-  const [whole, fraction = ""] = trimmed.replace("-", "").split(".");
+  const [, sign, whole, fraction = ""] = parts;
   if (fraction.length > decimals && /[1-9]/.test(fraction.slice(decimals))) {
     throw new RangeError(`"${text}" has more than ${decimals} decimals`);
   }
-  const scaled =
-    BigInt(whole!) * 10n ** BigInt(decimals) +
-    BigInt((fraction + "0".repeat(decimals)).slice(0, decimals) || "0");
-  return negative ? -scaled : scaled;
+  const scaled = BigInt(
+    whole! +
+      (fraction.length >= decimals
+        ? fraction.slice(0, decimals)
+        : fraction.padEnd(decimals, "0")),
+  );
+  return sign ? -scaled : scaled;
 }
 
 /** A JSON number from the API as thousandths; null when it has more than 3 decimals. */

@@ -18,13 +18,46 @@ export interface CountedItemFilters {
 export async function keptItemCount(
   filters: CountedItemFilters,
 ): Promise<number> {
+  const [row] = await countStatement(
+    !filters.includeArchived,
+    !!filters.kind,
+    !!filters.belowReorder,
+  ).execute({ kind: filters.kind });
+  return Number(row?.total ?? 0);
+}
+
+/**
+ * The count's statement for each shape of filters (2³ shapes), built once: the stock
+ * list and the items API read the total on every request.
+ */
+const countStatements = new Map<string, ReturnType<typeof buildCount>>();
+
+function countStatement(
+  activeOnly: boolean,
+  byKind: boolean,
+  belowReorder: boolean,
+) {
+  const key = `${activeOnly}/${byKind}/${belowReorder}`;
+  let statement = countStatements.get(key);
+  if (!statement) {
+    statement = buildCount(activeOnly, byKind, belowReorder);
+    countStatements.set(key, statement);
+  }
+  return statement;
+}
+
+function buildCount(
+  activeOnly: boolean,
+  byKind: boolean,
+  belowReorder: boolean,
+) {
   const conditions: SQL[] = [];
-  if (!filters.includeArchived) conditions.push(eq(itemCounts.active, true));
-  if (filters.kind) conditions.push(eq(itemCounts.kind, filters.kind));
-  if (filters.belowReorder) conditions.push(eq(itemCounts.belowReorder, true));
-  const [row] = await db
+  if (activeOnly) conditions.push(eq(itemCounts.active, true));
+  if (byKind) conditions.push(eq(itemCounts.kind, sql.placeholder("kind")));
+  if (belowReorder) conditions.push(eq(itemCounts.belowReorder, true));
+  return db
     .select({ total: sql<string | null>`SUM(${itemCounts.items})` })
     .from(itemCounts)
-    .where(conditions.length > 0 ? and(...conditions) : undefined);
-  return Number(row?.total ?? 0);
+    .where(conditions.length > 0 ? and(...conditions) : undefined)
+    .prepare();
 }
