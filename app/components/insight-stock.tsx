@@ -467,7 +467,7 @@ function changeColumns(currency: string) {
   ];
 }
 
-function monthColumns(withHistory: DesignInsight[], currency: string) {
+function monthColumns(withHistory: DesignInsight[]) {
   const column = createColumnHelper<DesignInsight>();
   const dates = withHistory[0]?.costHistory?.map((point) => point.date) ?? [];
   return [
@@ -524,8 +524,8 @@ export function CostHistory({
   );
   const changeColumnList = useMemo(() => changeColumns(currency), [currency]);
   const monthColumnList = useMemo(
-    () => monthColumns(withHistory, currency),
-    [withHistory, currency],
+    () => monthColumns(withHistory),
+    [withHistory],
   );
   if (withHistory.length === 0) return null;
   return (
