@@ -5,6 +5,7 @@
  * table beside it.
  */
 import { createColumnHelper } from "~/lib/table-columns";
+import { useMemo } from "react";
 import { Link } from "react-router";
 import { InsightCsvLink } from "~/components/insight/insight-csv-link";
 import { DataTable } from "~/components/data-table";
@@ -14,24 +15,35 @@ import type { StockValueInsight } from "~/insight/stock-value.server";
 import { formatDay, formatQuantity } from "~/lib/format";
 import { kindParts, palette, Swatch, type FillPart } from "./insight-patterns";
 import { lazyFigure } from "./lazy-figure";
+import { keepServerDrawing } from "./server-drawing";
 import { countText } from "~/lib/unit-text";
 
-// The charts and the legend's samples load after the page (lazy-figure.tsx).
-const InsightTrendChart = lazyFigure(
-  () =>
-    import("./insight/insight-trend-chart").then(
-      (module) => module.InsightTrendChart,
-    ),
-  { aspectRatio: "720 / 300" },
+// The charts and the legend's samples load after the page (lazy-figure.tsx), and
+// not at all when the page came with them drawn (server-drawing.tsx).
+const InsightTrendChart = keepServerDrawing(
+  lazyFigure(
+    () =>
+      import("./insight/insight-trend-chart").then(
+        (module) => module.InsightTrendChart,
+      ),
+    { aspectRatio: "720 / 300" },
+  ),
+  "block",
 );
-const InsightValueBars = lazyFigure(
-  () =>
-    import("./insight-value-bars").then((module) => module.InsightValueBars),
-  { aspectRatio: "720 / 200" },
+const InsightValueBars = keepServerDrawing(
+  lazyFigure(
+    () =>
+      import("./insight-value-bars").then((module) => module.InsightValueBars),
+    { aspectRatio: "720 / 200" },
+  ),
+  "block",
 );
-const TrendSample = lazyFigure(
-  () => import("./insight/trend-marker").then((module) => module.TrendSample),
-  { width: 36, height: 14 },
+const TrendSample = keepServerDrawing(
+  lazyFigure(
+    () => import("./insight/trend-marker").then((module) => module.TrendSample),
+    { width: 36, height: 14 },
+  ),
+  "inline",
 );
 
 function Figure({
@@ -120,6 +132,78 @@ const locationPart: FillPart<string> = {
   style: { kind: "solid", color: palette.graphite500 },
 };
 
+type KindRow = {
+  part: (typeof kindParts)[number];
+  row: StockValueInsight["byKind"][number];
+};
+
+function kindColumns(currency: string) {
+  const kindColumn = createColumnHelper<KindRow>();
+  return [
+    kindColumn.display({
+      id: "kind",
+      header: "Kind",
+      cell: ({ row }) => (
+        <span className="inline-flex items-center gap-2">
+          <Swatch part={row.original.part} />
+          {row.original.part.label}
+          <span className="text-xs text-graphite-500">
+            ({row.original.part.patternName})
+          </span>
+        </span>
+      ),
+    }),
+    kindColumn.display({
+      id: "items",
+      header: "Items valued",
+      cell: ({ row }) => row.original.row.items,
+      meta: { numeric: true },
+    }),
+    kindColumn.display({
+      id: "value",
+      header: "Value",
+      cell: ({ row }) => (
+        <span className="whitespace-nowrap">
+          {costingMoneyText(row.original.row.value, currency)}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
+  ];
+}
+
+function locationColumns(currency: string) {
+  const locationColumn = createColumnHelper<LocationRow>();
+  return [
+    locationColumn.display({
+      id: "location",
+      header: "Location",
+      cell: ({ row }) => (
+        <span>
+          <span className="font-medium">{row.original.code}</span>
+          <span className="block text-xs text-graphite-500">
+            {row.original.name}
+          </span>
+        </span>
+      ),
+    }),
+    locationColumn.accessor("items", {
+      header: "Items",
+      meta: { numeric: true },
+    }),
+    locationColumn.display({
+      id: "value",
+      header: "Value",
+      cell: ({ row }) => (
+        <span className="whitespace-nowrap">
+          {costingMoneyText(row.original.value, currency)}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
+  ];
+}
+
 /** Value by kind of item and by location, each as bars with a table beside. */
 export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
   const currency = stock.currency;
@@ -131,8 +215,13 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
       items: 0,
     },
   }));
-  const kindColumn = createColumnHelper<(typeof kinds)[number]>();
-  const locationColumn = createColumnHelper<LocationRow>();
+  // The same columns on every render: a new cell function would be a new component
+  // type to React, and every cell would be built again (after hydration too).
+  const kindColumnList = useMemo(() => kindColumns(currency), [currency]);
+  const locationColumnList = useMemo(
+    () => locationColumns(currency),
+    [currency],
+  );
   const shownLocations = stock.byLocation.slice(0, 10);
   return (
     <section aria-labelledby="stock-breakdown-heading" className="space-y-4">
@@ -158,37 +247,7 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
           <DataTable
             caption={`Stock value by kind of item, in ${currency}`}
             rows={kinds}
-            columns={[
-              kindColumn.display({
-                id: "kind",
-                header: "Kind",
-                cell: ({ row }) => (
-                  <span className="inline-flex items-center gap-2">
-                    <Swatch part={row.original.part} />
-                    {row.original.part.label}
-                    <span className="text-xs text-graphite-500">
-                      ({row.original.part.patternName})
-                    </span>
-                  </span>
-                ),
-              }),
-              kindColumn.display({
-                id: "items",
-                header: "Items valued",
-                cell: ({ row }) => row.original.row.items,
-                meta: { numeric: true },
-              }),
-              kindColumn.display({
-                id: "value",
-                header: "Value",
-                cell: ({ row }) => (
-                  <span className="whitespace-nowrap">
-                    {costingMoneyText(row.original.row.value, currency)}
-                  </span>
-                ),
-                meta: { numeric: true },
-              }),
-            ]}
+            columns={kindColumnList}
           />
           <InsightCsvLink
             table="stock-by-kind"
@@ -222,34 +281,7 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
               <DataTable
                 caption={`Stock value by location, in ${currency}`}
                 rows={stock.byLocation}
-                columns={[
-                  locationColumn.display({
-                    id: "location",
-                    header: "Location",
-                    cell: ({ row }) => (
-                      <span>
-                        <span className="font-medium">{row.original.code}</span>
-                        <span className="block text-xs text-graphite-500">
-                          {row.original.name}
-                        </span>
-                      </span>
-                    ),
-                  }),
-                  locationColumn.accessor("items", {
-                    header: "Items",
-                    meta: { numeric: true },
-                  }),
-                  locationColumn.display({
-                    id: "value",
-                    header: "Value",
-                    cell: ({ row }) => (
-                      <span className="whitespace-nowrap">
-                        {costingMoneyText(row.original.value, currency)}
-                      </span>
-                    ),
-                    meta: { numeric: true },
-                  }),
-                ]}
+                columns={locationColumnList}
               />
               <InsightCsvLink
                 table="stock-by-location"
@@ -276,6 +308,30 @@ export function StockBreakdown({ stock }: { stock: StockValueInsight }) {
 
 type TrendPoint = { week: string; value: number; complete: boolean };
 
+function trendColumns(currency: string) {
+  const column = createColumnHelper<TrendPoint>();
+  return [
+    column.accessor("week", {
+      header: "Week of",
+      cell: (info) => (
+        <span className="whitespace-nowrap">
+          {formatDay(info.getValue())}
+          {info.row.original.complete ? "" : " (so far)"}
+        </span>
+      ),
+    }),
+    column.accessor("value", {
+      header: "Value at its end",
+      cell: (info) => (
+        <span className="whitespace-nowrap">
+          {costingMoneyText(info.getValue(), currency)}
+        </span>
+      ),
+      meta: { numeric: true },
+    }),
+  ];
+}
+
 /** The stock value at the end of each of the last 26 weeks. */
 export function StockTrend({
   trend,
@@ -284,7 +340,8 @@ export function StockTrend({
   trend: TrendPoint[];
   currency: string;
 }) {
-  const column = createColumnHelper<TrendPoint>();
+  const trendColumnList = useMemo(() => trendColumns(currency), [currency]);
+  const newestFirst = useMemo(() => [...trend].reverse(), [trend]);
   const first = trend[0];
   const last = trend.at(-1);
   return (
@@ -325,27 +382,8 @@ export function StockTrend({
       >
         <DataTable
           caption={`Stock value at the end of each week, in ${currency}`}
-          rows={[...trend].reverse()}
-          columns={[
-            column.accessor("week", {
-              header: "Week of",
-              cell: (info) => (
-                <span className="whitespace-nowrap">
-                  {formatDay(info.getValue())}
-                  {info.row.original.complete ? "" : " (so far)"}
-                </span>
-              ),
-            }),
-            column.accessor("value", {
-              header: "Value at its end",
-              cell: (info) => (
-                <span className="whitespace-nowrap">
-                  {costingMoneyText(info.getValue(), currency)}
-                </span>
-              ),
-              meta: { numeric: true },
-            }),
-          ]}
+          rows={newestFirst}
+          columns={trendColumnList}
         />
       </div>
       <InsightCsvLink table="stock-by-week" what="stock value by week" />
@@ -429,6 +467,47 @@ function changeColumns(currency: string) {
   ];
 }
 
+function monthColumns(withHistory: DesignInsight[]) {
+  const column = createColumnHelper<DesignInsight>();
+  const dates = withHistory[0]?.costHistory?.map((point) => point.date) ?? [];
+  return [
+    column.display({
+      id: "design",
+      header: "Design",
+      cell: ({ row }) => (
+        <span className="inline-flex items-center gap-2 whitespace-nowrap">
+          <TrendSample index={withHistory.indexOf(row.original)} />
+          {row.original.name}
+          <span className="text-xs text-graphite-500">
+            rev {row.original.revision}
+          </span>
+        </span>
+      ),
+    }),
+    ...dates.map((date, index) =>
+      column.display({
+        id: date,
+        header: () => (
+          <span className="whitespace-nowrap" title={formatDay(date)}>
+            {formatDay(date, "monthShortYear")}
+          </span>
+        ),
+        cell: ({ row }) => {
+          const point = row.original.costHistory?.[index];
+          return point && point.complete ? (
+            <span className="whitespace-nowrap">
+              {costingMoneyText(point.costPerMotor)}
+            </span>
+          ) : (
+            "—"
+          );
+        },
+        meta: { numeric: true },
+      }),
+    ),
+  ];
+}
+
 /** Cost per motor of each design a month apart over the last year. */
 export function CostHistory({
   designs,
@@ -439,9 +518,15 @@ export function CostHistory({
   currency: string;
   quantity: number;
 }) {
-  const withHistory = designs.filter((design) => design.costHistory);
-  const dates = withHistory[0]?.costHistory?.map((point) => point.date) ?? [];
-  const column = createColumnHelper<DesignInsight>();
+  const withHistory = useMemo(
+    () => designs.filter((design) => design.costHistory),
+    [designs],
+  );
+  const changeColumnList = useMemo(() => changeColumns(currency), [currency]);
+  const monthColumnList = useMemo(
+    () => monthColumns(withHistory),
+    [withHistory],
+  );
   if (withHistory.length === 0) return null;
   return (
     <section aria-labelledby="cost-history-heading" className="space-y-3">
@@ -488,7 +573,7 @@ export function CostHistory({
           <DataTable
             caption={`Change in cost per motor over the year, in ${currency}`}
             rows={withHistory}
-            columns={changeColumns(currency)}
+            columns={changeColumnList}
           />
           <InsightCsvLink
             table="cost-change"
@@ -500,42 +585,7 @@ export function CostHistory({
         widerThanPanel
         caption={`Cost per motor by month, in ${currency}; — where a line had no price`}
         rows={withHistory}
-        columns={[
-          column.display({
-            id: "design",
-            header: "Design",
-            cell: ({ row }) => (
-              <span className="inline-flex items-center gap-2 whitespace-nowrap">
-                <TrendSample index={withHistory.indexOf(row.original)} />
-                {row.original.name}
-                <span className="text-xs text-graphite-500">
-                  rev {row.original.revision}
-                </span>
-              </span>
-            ),
-          }),
-          ...dates.map((date, index) =>
-            column.display({
-              id: date,
-              header: () => (
-                <span className="whitespace-nowrap" title={formatDay(date)}>
-                  {formatDay(date, "monthShortYear")}
-                </span>
-              ),
-              cell: ({ row }) => {
-                const point = row.original.costHistory?.[index];
-                return point && point.complete ? (
-                  <span className="whitespace-nowrap">
-                    {costingMoneyText(point.costPerMotor)}
-                  </span>
-                ) : (
-                  "—"
-                );
-              },
-              meta: { numeric: true },
-            }),
-          ),
-        ]}
+        columns={monthColumnList}
       />
       <InsightCsvLink table="cost-by-month" what="cost per motor by month" />
       <p className="text-xs text-graphite-500">

@@ -55,6 +55,13 @@ describe("the manager's cost insight", () => {
     await page.waitForURL(/copperBase=9/);
     await expect.poll(() => designRowText(page)).toContain("11.75 EUR/N·m");
     await expect.poll(() => designRowText(page)).toContain("5.87 EUR");
+    // The chart came drawn by the server and was kept through hydration; with new
+    // figures it is drawn again, never left at the old ones.
+    await expect
+      .poll(() =>
+        page.getByRole("img", { name: /Cost per N·m by design/ }).textContent(),
+      )
+      .toContain("11.75");
 
     // Copper at 10.00/kg: the coil's 29.94 g cost 0.0300 more → 5.9042, 11.8084 per N·m.
     await page.getByLabel("Copper base (EUR/kg)").fill("10");

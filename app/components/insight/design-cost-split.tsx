@@ -2,6 +2,7 @@
  * Where the money per N·m goes: the stacked chart of the ranked designs, cheapest first,
  * with the designs it leaves out under it, and beside it the chart's figures as a table.
  */
+import { useMemo } from "react";
 import { InsightCsvLink } from "./insight-csv-link";
 import { DataTable } from "~/components/data-table";
 import type { DesignInsight } from "~/insight/design-insight.server";
@@ -10,11 +11,15 @@ import { splitColumns } from "./design-columns";
 import { costChartRows, type InsightDesignsData } from "./design-insight-text";
 import { DesignsNotRanked } from "./designs-not-ranked";
 import { lazyFigure } from "../lazy-figure";
+import { keepServerDrawing } from "../server-drawing";
 
-const InsightCostChart = lazyFigure(
-  () =>
-    import("./insight-cost-chart").then((module) => module.InsightCostChart),
-  { aspectRatio: "720 / 300" },
+const InsightCostChart = keepServerDrawing(
+  lazyFigure(
+    () =>
+      import("./insight-cost-chart").then((module) => module.InsightCostChart),
+    { aspectRatio: "720 / 300" },
+  ),
+  "block",
 );
 
 type Ranking = Record<
@@ -31,6 +36,9 @@ export function DesignCostSplit({
   currency: string;
   basis: InsightDesignsData["basis"];
 }) {
+  // One column list for every render: new cell functions would make React build
+  // every cell again.
+  const columns = useMemo(() => splitColumns(), []);
   return (
     <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
       <div className="panel break-inside-avoid">
@@ -51,7 +59,7 @@ export function DesignCostSplit({
       <div className="break-inside-avoid">
         <DataTable
           caption={`Cost per N·m by part, ${currency} per N·m at the ${costBasisText(basis)} (the chart's figures)`}
-          columns={splitColumns()}
+          columns={columns}
           rows={[
             ...ranking.ranked,
             ...ranking.incomplete,

@@ -5,6 +5,7 @@
  * its figures beside it, and the table of cost per motor, cost per N·m and copper loss
  * per N·m with each design's end-turn factor.
  */
+import { useMemo } from "react";
 import { Link } from "react-router";
 import { InsightCsvLink } from "./insight-csv-link";
 import { DataTable } from "~/components/data-table";
@@ -78,6 +79,10 @@ export function InsightDesigns({
   const currency = data.bases.currency;
   const designs = data.designs.designs;
   const sentence = whatIfSentence(data);
+  // The same columns and ranking while the data is the same: new cell functions
+  // would make React build every cell again (after hydration too).
+  const columns = useMemo(() => designColumns(data), [data]);
+  const ranking = useMemo(() => rankByCostPerNm(designs), [designs]);
   const pageCount = Math.max(
     1,
     Math.ceil(data.designs.total / data.designs.perPage),
@@ -104,13 +109,13 @@ export function InsightDesigns({
       ) : (
         <>
           <DesignCostSplit
-            ranking={rankByCostPerNm(designs)}
+            ranking={ranking}
             currency={currency}
             basis={data.basis}
           />
           <DataTable
             caption={`Released designs: cost per motor and per N·m in ${currency}, copper loss per N·m at rated current`}
-            columns={designColumns(data)}
+            columns={columns}
             rows={designs}
             page={data.designs.page}
             pageCount={pageCount}
