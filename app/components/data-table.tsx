@@ -1,7 +1,7 @@
 /**
  * The table a page shows its list in: `DataTableView` (TanStack Table, about 14 KB
  * gzipped) whose code loads with import() instead of with the page, so it is not
- * first-load JavaScript (docs/decisions/0XX-data-table-after-hydration.md).
+ * first-load JavaScript (docs/decisions/054-data-table-after-hydration.md).
  *
  * The server renders the table whole. In the browser the chunk starts loading as
  * soon as this module runs (before React hydrates the page), and until it has come

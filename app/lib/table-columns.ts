@@ -4,7 +4,7 @@
  * page that imported the helper from it loaded all of TanStack Table with the page,
  * although the table itself loads after the page runs (components/data-table.tsx). Column
  * definitions are made with this one; the ESLint config refuses the library's.
- * See docs/decisions/0XX-data-table-after-hydration.md.
+ * See docs/decisions/054-data-table-after-hydration.md.
  */
 import type { ColumnHelper, RowData } from "@tanstack/react-table";
 
