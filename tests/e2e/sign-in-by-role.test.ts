@@ -123,6 +123,12 @@ describe("admin pages", () => {
       .getByRole("link", { name: "People" })
       .click();
     await page.getByRole("heading", { name: "People" }).waitFor();
+    // After a navigation in the browser the table's code arrives just after the page.
+    await page
+      .getByRole("table", { name: "People with an account" })
+      .getByRole("row")
+      .nth(1)
+      .waitFor();
     expect(
       await page
         .getByRole("table", { name: "People with an account" })

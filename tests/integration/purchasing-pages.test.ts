@@ -385,7 +385,12 @@ describe("/suppliers/imports", () => {
     const suppliersPage = await (
       await get("/suppliers", cookies.manager)
     ).text();
-    const supplierRow = suppliersPage.slice(suppliersPage.indexOf(supplier));
+    // The supplier's row in the table (the name is also in the loader's data, which the
+    // page may stream before the table).
+    const suppliersTable = suppliersPage.slice(
+      suppliersPage.indexOf('<table class="data-table"'),
+    );
+    const supplierRow = suppliersTable.slice(suppliersTable.indexOf(supplier));
     expect(supplierRow.slice(0, supplierRow.indexOf("</tr>"))).toMatch(
       />2<\/td>/,
     );

@@ -5,7 +5,20 @@ import type { BuyingPlanJson } from "~/buying-plan/plan-json";
 import { DataTable } from "~/components/data-table";
 import { formatDay } from "~/lib/format";
 import { formatStockQuantity } from "~/stock/stock-quantity-text";
-import { ProjectedStockChart } from "./projected-stock-chart";
+import { lazyFigure } from "~/components/lazy-figure";
+import { keepServerDrawing } from "~/components/server-drawing";
+
+/** The chart's code (visx) loads after the page; the server's drawing stays meanwhile. */
+const ProjectedStockChart = keepServerDrawing(
+  lazyFigure(
+    () =>
+      import("./projected-stock-chart").then(
+        (module) => module.ProjectedStockChart,
+      ),
+    { aspectRatio: "720 / 260" },
+  ),
+  "block",
+);
 
 type ItemJson = BuyingPlanJson["items"][number];
 type WeekRow = ItemJson["weeks"][number];
