@@ -69,6 +69,11 @@ export default function handleRequest(
       <ServerRouter context={routerContext} url={request.url} nonce={nonce} />,
       {
         nonce,
+        // Every finished part of the page stays in place in the HTML. By default React
+        // moves a Suspense boundary bigger than 12,800 bytes (a long table, a chart) to
+        // the end of the stream, hidden until an inline script reveals it: without
+        // JavaScript it would never show, and with it, it shows a frame later.
+        progressiveChunkSize: Number.POSITIVE_INFINITY,
         [readyOption]() {
           const body = new PassThrough({
             final(callback) {
