@@ -232,6 +232,10 @@ describe("reference tables", () => {
       .getByRole("navigation", { name: "Main" })
       .getByRole("link", { name: "Magnet estimator" })
       .click();
+    // On the estimator itself before choosing: the navigation has finished.
+    await page
+      .getByRole("heading", { name: "Magnet estimator", level: 1 })
+      .waitFor();
     await page.getByLabel("Grade", { exact: true }).selectOption(name);
     await page.getByLabel("Height (mm)", { exact: true }).fill("5");
     await expect
