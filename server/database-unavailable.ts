@@ -26,7 +26,8 @@
  * Hook (server/app.ts):
  *   build: () => import("virtual:react-router/server-build").then(answerDatabaseOutages),
  */
-import { data, type ServerBuild } from "react-router";
+import { data } from "react-router";
+import { wrapRouteHandlers, type RouteHandler } from "./route-handler-wrapping";
 import {
   databaseUnavailableMessage,
   isDatabaseUnavailable,
@@ -41,9 +42,7 @@ import {
 
 const dbLog = areaLogger("db");
 
-type RouteEntry = ServerBuild["routes"][string];
-type RouteModule = NonNullable<RouteEntry>["module"];
-type Handler = NonNullable<RouteModule["loader"]>;
+type Handler = RouteHandler;
 
 const headers = { "Retry-After": "5", "Cache-Control": "no-store" };
 
@@ -115,25 +114,7 @@ function answering503(handler: Handler, resourceRoute: boolean): Handler {
   };
 }
 
-const wrapped = new WeakMap<ServerBuild, ServerBuild>();
-
 /** The server build with every loader and action answering 503 when the database is lost. */
-export function answerDatabaseOutages(build: ServerBuild): ServerBuild {
-  const known = wrapped.get(build);
-  if (known) return known;
-  const routes: ServerBuild["routes"] = {};
-  for (const [id, route] of Object.entries(build.routes)) {
-    if (!route) continue;
-    const resourceRoute =
-      route.module.default == null && route.module.ErrorBoundary == null;
-    const module: RouteModule = { ...route.module };
-    if (module.loader)
-      module.loader = answering503(module.loader, resourceRoute);
-    if (module.action)
-      module.action = answering503(module.action, resourceRoute);
-    routes[id] = { ...route, module };
-  }
-  const answering: ServerBuild = { ...build, routes };
-  wrapped.set(build, answering);
-  return answering;
-}
+export const answerDatabaseOutages = wrapRouteHandlers(
+  (handler, { resourceRoute }) => answering503(handler, resourceRoute),
+);

@@ -14,11 +14,10 @@
  * Hook (server/app.ts): the last of the wrappers of the server build, so the answers of
  * the others (a 503 of server/database-unavailable.ts) are sized too.
  */
-import type { ServerBuild } from "react-router";
-
-type RouteEntry = ServerBuild["routes"][string];
-type RouteModule = NonNullable<RouteEntry>["module"];
-type Handler = NonNullable<RouteModule["loader"]>;
+import {
+  wrapRouteHandlers,
+  type RouteHandler as Handler,
+} from "./route-handler-wrapping";
 
 /** Whether an answer is a JSON body of unknown length that may be read whole. */
 function unsizedJson(answer: unknown): answer is Response {
@@ -58,23 +57,7 @@ function sizing(handler: Handler): Handler {
   };
 }
 
-const wrapped = new WeakMap<ServerBuild, ServerBuild>();
-
 /** The build with every resource route's loader and action answering sized JSON. */
-export function sizeJsonAnswers(build: ServerBuild): ServerBuild {
-  const known = wrapped.get(build);
-  if (known) return known;
-  const routes: ServerBuild["routes"] = {};
-  for (const [id, route] of Object.entries(build.routes)) {
-    if (!route) continue;
-    const resourceRoute =
-      route.module.default == null && route.module.ErrorBoundary == null;
-    const module: RouteModule = { ...route.module };
-    if (resourceRoute && module.loader) module.loader = sizing(module.loader);
-    if (resourceRoute && module.action) module.action = sizing(module.action);
-    routes[id] = { ...route, module };
-  }
-  const sized: ServerBuild = { ...build, routes };
-  wrapped.set(build, sized);
-  return sized;
-}
+export const sizeJsonAnswers = wrapRouteHandlers(
+  (handler, { resourceRoute }) => (resourceRoute ? sizing(handler) : handler),
+);

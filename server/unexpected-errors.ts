@@ -18,10 +18,9 @@ import { data, isRouteErrorResponse, type ServerBuild } from "react-router";
 import { unexpectedErrorMessage } from "~/observability/error-reference";
 import { logServerError } from "~/observability/logger.server";
 import { currentRequest } from "~/observability/request-context.server";
+import { wrapRouteHandlers, type RouteHandler } from "./route-handler-wrapping";
 
-type RouteEntry = ServerBuild["routes"][string];
-type RouteModule = NonNullable<RouteEntry>["module"];
-type Handler = NonNullable<RouteModule["loader"]>;
+type Handler = RouteHandler;
 
 function isExpectedAnswer(error: unknown): boolean {
   return (
@@ -51,26 +50,13 @@ function referencing(handler: Handler, what: string): Handler {
   };
 }
 
-const wrapped = new WeakMap<ServerBuild, ServerBuild>();
+const referencingPages = wrapRouteHandlers(
+  (handler, { routeId, kind, resourceRoute }) =>
+    resourceRoute ? handler : referencing(handler, `${routeId} ${kind}`),
+);
 
 /** The server build with every page's loader and action answering a referenced 500 for an unexpected error. */
 export function referenceUnexpectedErrors(build: ServerBuild): ServerBuild {
   if (process.env.NODE_ENV === "development") return build;
-  const known = wrapped.get(build);
-  if (known) return known;
-  const routes: ServerBuild["routes"] = {};
-  for (const [id, route] of Object.entries(build.routes)) {
-    if (!route) continue;
-    const page =
-      route.module.default != null || route.module.ErrorBoundary != null;
-    const module: RouteModule = { ...route.module };
-    if (page && module.loader)
-      module.loader = referencing(module.loader, `${id} loader`);
-    if (page && module.action)
-      module.action = referencing(module.action, `${id} action`);
-    routes[id] = { ...route, module };
-  }
-  const answering: ServerBuild = { ...build, routes };
-  wrapped.set(build, answering);
-  return answering;
+  return referencingPages(build);
 }
