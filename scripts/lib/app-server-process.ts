@@ -23,10 +23,18 @@ function heapCeilingMb(setting: string | undefined): number {
   return megabytes;
 }
 
-/** Node's arguments for the app server process. */
+/**
+ * Node's arguments for the app server process. With APP_CPU_PROFILE_DIR set, the
+ * server writes a V8 CPU profile there when it stops (`--cpu-prof`, which Node
+ * refuses in NODE_OPTIONS): how the bench's figures are looked into.
+ */
 export function appServerArguments(): string[] {
+  const profileDirectory = process.env.APP_CPU_PROFILE_DIR?.trim();
   return [
     `--max-old-space-size=${appServerHeapMb}`,
+    ...(profileDirectory
+      ? ["--cpu-prof", `--cpu-prof-dir=${path.resolve(profileDirectory)}`]
+      : []),
     path.join(projectRoot, "server.js"),
   ];
 }
