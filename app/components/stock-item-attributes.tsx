@@ -1,20 +1,12 @@
 import type { MagnetShape } from "~/engineering/magnet-estimate";
-import {
-  CONDUCTOR_MATERIALS,
-  ENAMELS,
-  findIecNominalDiameter,
-  findInsulationKind,
-  THERMAL_CLASSES,
-  type MagnetMaterial,
-} from "~/engineering/reference-data";
+import type { MagnetMaterial } from "~/engineering/reference-data";
+import { THERMAL_CLASS_LETTERS } from "~/engineering/thermal-class-letters";
 import { formatQuantity } from "~/lib/format";
 import { quantityText } from "~/lib/unit-text";
 import { formatMass, formatSignificant } from "~/reference/quantity-display";
 import { magnetMaterialLabels } from "~/reference/magnet-materials";
-import {
-  magnetDimensionsText,
-  type WireStockFigures,
-} from "~/stock/stocked-item-figures";
+import { magnetDimensionsText } from "~/stock/magnet-dimensions-text";
+import type { WireStockFigures } from "~/stock/stocked-item-figures";
 
 export interface WireAttributes {
   kind: "wire";
@@ -25,6 +17,13 @@ export interface WireAttributes {
   thermalClass: number;
   enamel: string;
   figures: WireStockFigures | null;
+  /** The keys' names from the reference data, looked up by the loader. */
+  names: {
+    conductor: string;
+    insulation: string | null;
+    enamel: string;
+    betweenIecSteps: boolean;
+  };
 }
 
 export interface MagnetAttributes {
@@ -59,39 +58,30 @@ export function WireAttributeList({
   wire: WireAttributes;
   onHandKg: number;
 }) {
-  const conductor =
-    CONDUCTOR_MATERIALS.find((material) => material.key === wire.conductor)
-      ?.name ?? wire.conductor;
-  const thermal = THERMAL_CLASSES.find(
-    (row) => row.classC === wire.thermalClass,
-  );
-  const enamel =
-    ENAMELS.find((row) => row.key === wire.enamel)?.name ?? wire.enamel;
-  const insulation = wire.insulation
-    ? (findInsulationKind(wire.insulation)?.name ?? wire.insulation)
-    : "not given";
+  const { names } = wire;
+  const thermalLetter = THERMAL_CLASS_LETTERS.find(
+    ([classC]) => classC === wire.thermalClass,
+  )?.[1];
   return (
     <dl className="text-sm">
-      <Row term="Conductor">{conductor}</Row>
+      <Row term="Conductor">{names.conductor}</Row>
       <Row term="Size">
         {wire.standard === "AWG"
           ? `AWG ${wire.sizeLabel}`
           : `IEC 60317, ${wire.sizeLabel}\u00a0mm nominal${
-              findIecNominalDiameter(Number(wire.sizeLabel))
-                ? ""
-                : " (between the R20/R40 steps)"
+              names.betweenIecSteps ? " (between the R20/R40 steps)" : ""
             }`}
       </Row>
-      <Row term="Insulation">{insulation}</Row>
+      <Row term="Insulation">{names.insulation ?? "not given"}</Row>
       <Row term="Thermal class">
         {formatQuantity(wire.thermalClass, "°C")}
-        {thermal ? ` (class ${thermal.letter})` : ""}
+        {thermalLetter ? ` (class ${thermalLetter})` : ""}
         <p className="text-xs text-graphite-500">
           The wire&rsquo;s thermal class must be at least the motor&rsquo;s
           insulation class.
         </p>
       </Row>
-      <Row term="Enamel">{enamel}</Row>
+      <Row term="Enamel">{names.enamel}</Row>
       {wire.figures ? (
         <>
           <Row term="Bare diameter">

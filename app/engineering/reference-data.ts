@@ -11,6 +11,7 @@
  */
 
 import { EngineeringInputError, requireFinite } from "./errors";
+import { NDFEB_SUFFIXES, type NdfebSuffix } from "./ndfeb-suffixes";
 import { THERMAL_CLASS_LETTERS } from "./thermal-class-letters";
 import { inchesToMm, mmToInches } from "./units";
 
@@ -724,8 +725,7 @@ export function isWireClassSufficient(
 export type MagnetMaterial =
   "sintered-ndfeb" | "smco5" | "sm2co17" | "hard-ferrite" | "bonded-ndfeb";
 
-/** Temperature suffix of a sintered NdFeB grade; "" for none. */
-export type NdfebSuffix = "" | "M" | "H" | "SH" | "UH" | "EH" | "AH";
+export { NDFEB_SUFFIXES, type NdfebSuffix } from "./ndfeb-suffixes";
 
 export interface MagnetGrade {
   /** Lookup key, lower case: "n42sh", "smco5", "ferrite-c5". */
@@ -946,21 +946,6 @@ const NDFEB_BASE_GRADES: readonly NdfebBaseGrade[] = [
     hcbMinKAm: 835,
     highestSuffix: "H",
   },
-];
-
-/** Temperature suffixes in rising order with HcJ minimum (kA/m) and max working temperature (°C) (brief). */
-export const NDFEB_SUFFIXES: readonly {
-  suffix: NdfebSuffix;
-  hcjMinKAm: number;
-  maxWorkingTemperatureC: number;
-}[] = [
-  { suffix: "", hcjMinKAm: 955, maxWorkingTemperatureC: 80 },
-  { suffix: "M", hcjMinKAm: 1114, maxWorkingTemperatureC: 100 },
-  { suffix: "H", hcjMinKAm: 1353, maxWorkingTemperatureC: 120 },
-  { suffix: "SH", hcjMinKAm: 1592, maxWorkingTemperatureC: 150 },
-  { suffix: "UH", hcjMinKAm: 1990, maxWorkingTemperatureC: 180 },
-  { suffix: "EH", hcjMinKAm: 2388, maxWorkingTemperatureC: 200 },
-  { suffix: "AH", hcjMinKAm: 2786, maxWorkingTemperatureC: 220 },
 ];
 
 /**

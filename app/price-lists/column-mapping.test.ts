@@ -3,7 +3,6 @@ import {
   PRICE_LIST_FIELDS,
   checkColumnMapping,
   columnMappingFromFields,
-  columnMappingSchema,
   columnMappingToFields,
   normaliseHeader,
   priceListFieldKeys,
@@ -11,6 +10,7 @@ import {
   type ColumnMapping,
   type PriceListField,
 } from "./column-mapping";
+import { columnMappingSchema } from "./column-mapping-schema";
 
 const headers = ["Art. no", "Description", "Unit price", "Currency", "Min qty"];
 

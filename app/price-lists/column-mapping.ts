@@ -6,9 +6,9 @@
  * mapping are ignored. The mapping a buyer confirms is saved per supplier, so
  * the next file from that supplier maps itself (see {@link suggestMapping}).
  *
- * Pure: runs in Node and in the browser.
+ * Pure: runs in Node and in the browser. Its Zod schema is column-mapping-schema.ts
+ * (the import page checks mappings without loading Zod).
  */
-import { z } from "zod";
 
 export const priceListFieldKeys = [
   "supplierSku",
@@ -175,16 +175,6 @@ export interface ColumnMappingEntry {
 }
 
 export type ColumnMapping = readonly ColumnMappingEntry[];
-
-/** The mapping as the API and the saved supplier settings take it. */
-export const columnMappingSchema = z
-  .array(
-    z.object({
-      header: z.string().max(200),
-      field: z.enum(priceListFieldKeys),
-    }),
-  )
-  .max(priceListFieldKeys.length);
 
 /** The same mapping keyed by field, as it may be stored: `{ price: "Unit price", … }`. */
 export type ColumnMappingByField = Partial<Record<PriceListField, string>>;

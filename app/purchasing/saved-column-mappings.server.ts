@@ -1,10 +1,8 @@
 /** The column mapping each supplier's last import confirmed, for the import page to start from. */
 import { db } from "~/db/client.server";
 import { supplierMappings } from "~/db/schema";
-import {
-  columnMappingSchema,
-  type ColumnMappingEntry,
-} from "~/price-lists/column-mapping";
+import type { ColumnMappingEntry } from "~/price-lists/column-mapping";
+import { columnMappingSchema } from "~/price-lists/column-mapping-schema";
 
 /** Saved mappings by supplier id; a stored mapping that no longer reads is left out. */
 export async function listSavedColumnMappings(): Promise<

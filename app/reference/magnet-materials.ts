@@ -2,10 +2,8 @@
  * How magnet materials and grades are named and ordered on the pages. Pure:
  * the estimator's grade list and the reference table share it.
  */
-import {
-  NDFEB_SUFFIXES,
-  type MagnetMaterial,
-} from "~/engineering/reference-data";
+import { NDFEB_SUFFIXES } from "~/engineering/ndfeb-suffixes";
+import type { MagnetMaterial } from "~/engineering/reference-data";
 
 /** Materials in the order people look for them: strongest family first. */
 export const magnetMaterialOrder: readonly MagnetMaterial[] = [

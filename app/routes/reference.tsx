@@ -1,9 +1,9 @@
 import { getZodConstraint } from "@conform-to/zod/v4";
 import { parseForm } from "~/lib/parse-form";
+import { lazy, Suspense, useEffect } from "react";
 import { data, Link } from "react-router";
 import type { Route } from "./+types/reference";
 import { requireCapability, requireUser } from "~/auth/guard.server";
-import { AddMagnetGradeForm } from "~/components/add-magnet-grade-form";
 import { ConductorMaterialTable } from "~/components/conductor-material-table";
 import { useFlash } from "~/components/flash-message";
 import { InsulationKindTable } from "~/components/insulation-kind-table";
@@ -24,6 +24,18 @@ import {
   listThermalClasses,
   listWireSizeRows,
 } from "~/reference/reference-tables.server";
+
+/**
+ * The admins' add-a-grade form (Conform, its fields) loads with import(), not with the
+ * page, and is fetched as soon as an admin's page has run: the server renders it
+ * whole, React keeps that form in place until its code has come, and until then it is
+ * sent and checked by the action as without JavaScript
+ * (docs/decisions/051-precompressed-assets-and-page-weight.md).
+ */
+const loadGradeForm = () => import("~/components/add-magnet-grade-form");
+const AddMagnetGradeForm = lazy(() =>
+  loadGradeForm().then((module) => ({ default: module.AddMagnetGradeForm })),
+);
 
 /** The tables of the page, in the order of the switch; `?table=` picks one. */
 const tables = [
@@ -161,6 +173,10 @@ export default function Reference({
   // A new key after each added grade (its message) empties the form.
   const added = useFlash()?.key ?? "new";
   const title = tables.find((table) => table.id === section.table)!.title;
+  const showGradeForm = section.table === "magnet-grades" && canAddGrade;
+  useEffect(() => {
+    if (canAddGrade) void loadGradeForm();
+  }, [canAddGrade]);
   return (
     <div className="space-y-6">
       <div>
@@ -178,7 +194,7 @@ export default function Reference({
           <h2 id="table-heading" className="text-xl font-semibold">
             {title}
           </h2>
-          {section.table === "magnet-grades" && canAddGrade ? (
+          {showGradeForm ? (
             <a href="#add-grade-heading" className="button-quiet print:hidden">
               Add a grade from a data sheet
             </a>
@@ -186,12 +202,20 @@ export default function Reference({
         </div>
         <Section key={section.table} section={section} />
       </section>
-      {section.table === "magnet-grades" && canAddGrade ? (
-        <AddMagnetGradeForm
-          key={added}
-          constraint={loaderData.gradeConstraint}
-          lastResult={actionData?.result}
-        />
+      {showGradeForm ? (
+        <Suspense
+          fallback={
+            <p role="status" className="text-sm text-graphite-500">
+              Opening the form to add a grade…
+            </p>
+          }
+        >
+          <AddMagnetGradeForm
+            key={added}
+            constraint={loaderData.gradeConstraint}
+            lastResult={actionData?.result}
+          />
+        </Suspense>
       ) : null}
     </div>
   );

@@ -4,7 +4,13 @@
  * engineering estimates refuse (a size or grade they no longer know) are left out, the
  * attributes shown without them. Null for other parts.
  */
-import type { ConductorKey } from "~/engineering/reference-data";
+import {
+  CONDUCTOR_MATERIALS,
+  ENAMELS,
+  findIecNominalDiameter,
+  findInsulationKind,
+  type ConductorKey,
+} from "~/engineering/reference-data";
 import { findItemAttributes } from "./item-details.server";
 import {
   magnetShapeOf,
@@ -30,7 +36,7 @@ export async function itemPageAttributes(item: {
     } catch {
       // A size or conductor the engineering tables no longer know: show the attributes without figures.
     }
-    return { ...found, figures };
+    return { ...found, figures, names: wireNames(found) };
   }
   if (found?.kind === "magnet") {
     const shape = magnetShapeOf(found.shape, found.dimensionsMm);
@@ -68,4 +74,30 @@ export async function itemPageAttributes(item: {
     };
   }
   return null;
+}
+
+/**
+ * The names of a wire's stored keys, looked up here so the page does not load the
+ * reference data (docs/decisions/051-precompressed-assets-and-page-weight.md).
+ */
+function wireNames(wire: {
+  conductor: string;
+  standard: "AWG" | "IEC";
+  sizeLabel: string;
+  insulation: string | null;
+  enamel: string;
+}) {
+  return {
+    conductor:
+      CONDUCTOR_MATERIALS.find((material) => material.key === wire.conductor)
+        ?.name ?? wire.conductor,
+    insulation: wire.insulation
+      ? (findInsulationKind(wire.insulation)?.name ?? wire.insulation)
+      : null,
+    enamel: ENAMELS.find((row) => row.key === wire.enamel)?.name ?? wire.enamel,
+    /** An IEC size between the R20/R40 steps (always false for AWG). */
+    betweenIecSteps:
+      wire.standard === "IEC" &&
+      !findIecNominalDiameter(Number(wire.sizeLabel)),
+  };
 }

@@ -4,7 +4,6 @@
  * mass of stocked magnets (from the grade's density and the piece's shape).
  * Pure: built on the engineering modules.
  */
-import { formatNumber } from "~/lib/format";
 import {
   estimateMagnet,
   type MagnetShape,
@@ -13,6 +12,8 @@ import type { ConductorKey, MagnetGrade } from "~/engineering/reference-data";
 import { maxLengthFromMassM } from "~/engineering/spool";
 import { wireProperties, type WireSpec } from "~/engineering/wire-geometry";
 import { magnetShapes } from "~/db/tables/stock-enums";
+
+export { magnetDimensionsText } from "./magnet-dimensions-text";
 
 export interface WireStockFigures {
   bareDiameterMm: number;
@@ -87,19 +88,4 @@ export function magnetStockFigures(input: {
     massPerPieceKg: estimate.massPerPieceKg,
     totalMassKg: estimate.massPerPieceKg * Math.max(0, input.pieces),
   };
-}
-
-/** The dimensions of a shape as people read them: "length 20 mm × width 10 mm × height 5 mm". */
-export function magnetDimensionsText(shape: MagnetShape): string {
-  const mm = (value: number) => `${formatNumber(value, 3)}\u00a0mm`;
-  switch (shape.kind) {
-    case "block":
-      return `length ${mm(shape.lengthMm)} × width ${mm(shape.widthMm)} × height ${mm(shape.heightMm)}`;
-    case "arc":
-      return `outer radius ${mm(shape.outerRadiusMm)}, inner radius ${mm(shape.innerRadiusMm)}, angle ${formatNumber(shape.angleDeg)}°, axial length ${mm(shape.axialLengthMm)}`;
-    case "disc":
-      return `diameter ${mm(shape.diameterMm)} × thickness ${mm(shape.thicknessMm)}`;
-    case "ring":
-      return `outer diameter ${mm(shape.outerDiameterMm)}, inner diameter ${mm(shape.innerDiameterMm)} × thickness ${mm(shape.thicknessMm)}`;
-  }
 }

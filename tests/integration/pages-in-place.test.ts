@@ -6,13 +6,16 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { get, signInAs } from "../support/app-client";
+import { createWireItem } from "../support/build-order-fixtures";
 import { closeTestDatabase } from "../support/test-database";
 
 let manager = "";
 let admin = "";
+let buyer = "";
 beforeAll(async () => {
   manager = await signInAs("manager");
   admin = await signInAs("admin");
+  buyer = await signInAs("buyer");
 });
 afterAll(closeTestDatabase);
 
@@ -44,4 +47,29 @@ describe("long tables and charts stay in place in the page's HTML", () => {
       );
     },
   );
+});
+
+describe("forms whose code loads after the page are in place in its HTML", () => {
+  // The item page's reorder and rename forms and the add-a-grade form are lazy
+  // components (decision 051): the server still writes them where they belong, so
+  // they work before their code has come and without JavaScript.
+  it.each([
+    ["item page", ["reorder", "rename"]],
+    ["magnet grades table", ["add-magnet-grade"]],
+  ] as const)("the %s has its forms in place", async (page, formIds) => {
+    const html =
+      page === "item page"
+        ? await pageHtml(
+            `/stock/items/${(await createWireItem(buyer)).sku}`,
+            buyer,
+          )
+        : await pageHtml("/reference?table=magnet-grades", admin);
+    expect(html).not.toMatch(/<div hidden id="S:\d+">/);
+    const dataHandOver = html.indexOf("__reactRouterContext.streamController");
+    for (const id of formIds) {
+      const form = html.search(new RegExp(`<form[^>]* id="${id}"`));
+      expect(form, `the form ${id}`).toBeGreaterThan(0);
+      expect(form, `the form ${id}`).toBeLessThan(dataHandOver);
+    }
+  });
 });

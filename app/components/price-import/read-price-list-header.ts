@@ -4,14 +4,13 @@
  * does, so the headers the buyer maps are the headers the server finds); an
  * .xlsx workbook, told by its first bytes, is read by the server
  * (POST /api/v1/price-lists?layout=1), which also names its sheets.
+ *
+ * The import page loads this module (and papaparse with it) with import() when a
+ * file is chosen: see docs/decisions/051-precompressed-assets-and-page-weight.md.
  */
-import { formatNumber } from "~/lib/format";
 import Papa from "papaparse";
-import {
-  checkPriceListSize,
-  decodePriceListBytes,
-  maxPriceListBytes,
-} from "~/price-lists/decode-csv";
+import { decodePriceListBytes } from "~/price-lists/decode-csv";
+import { fileSizeProblem } from "./price-list-file-size";
 import { openPriceListCsv } from "~/price-lists/parse-price-list";
 import { startsLikeZip } from "~/price-lists/zip-contents";
 
@@ -37,12 +36,6 @@ export type PriceListHeaderReading =
       sheet: string;
     }
   | { ok: false; message: string };
-
-export function fileSizeProblem(size: number): string | null {
-  if (!checkPriceListSize(size)) return null;
-  const megabytes = formatNumber(size / 1024 / 1024, 1);
-  return `The file is ${megabytes} MB; a price list can be at most ${maxPriceListBytes / 1024 / 1024} MB. Split it into smaller files, or leave out columns that are not needed.`;
-}
 
 /** Reads the header of `file`; for a workbook, of its sheet `sheet` (else its first visible sheet). */
 export async function readPriceListHeader(

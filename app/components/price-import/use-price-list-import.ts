@@ -12,11 +12,8 @@ import type {
   PriceListCheck,
   PriceListImport,
 } from "./price-list-upload";
-import {
-  fileSizeProblem,
-  readPriceListHeader,
-  type PriceListHeaderReading,
-} from "./read-price-list-header";
+import { fileSizeProblem } from "./price-list-file-size";
+import type { PriceListHeaderReading } from "./read-price-list-header";
 
 export type PriceImportIntent = "check" | "import";
 
@@ -88,6 +85,8 @@ export function usePriceListImport(
     if (tooLarge)
       return setReading({ state: "failed", file, message: tooLarge });
     setReading({ state: "reading", file });
+    // papaparse and the CSV reading load only now that a file is chosen.
+    const { readPriceListHeader } = await import("./read-price-list-header");
     const result = await readPriceListHeader(file, sheet);
     if (token !== readToken.current) return; // a newer file was chosen meanwhile
     if (!result.ok) {

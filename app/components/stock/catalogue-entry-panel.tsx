@@ -1,16 +1,10 @@
 /** The item's catalogue entry for a buyer: rename it, archive it or restore it. */
-import {
-  getFormProps,
-  useForm,
-  type SubmissionResult,
-} from "@conform-to/react";
+import type { SubmissionResult } from "@conform-to/react";
+import { Suspense } from "react";
 import { Form, useNavigation } from "react-router";
 import { ConfirmButton } from "~/components/confirm-button";
-import {
-  useBrowserValidation,
-  type FieldConstraints,
-} from "~/components/forms/use-browser-validation";
-import { FormMessages, TextField } from "~/components/text-field";
+import type { FieldConstraints } from "~/components/forms/use-browser-validation";
+import { RenameItemForm } from "./item-change-forms-lazy";
 
 export function CatalogueEntryPanel({
   item,
@@ -24,33 +18,24 @@ export function CatalogueEntryPanel({
   lastResult: SubmissionResult<string[]> | undefined;
 }) {
   const busy = useNavigation().state !== "idle";
-  const validate = useBrowserValidation(() =>
-    import("~/stock/item-change-form").then(
-      (module) => module.renameFormSchema,
-    ),
-  );
-  const [form, fields] = useForm({
-    id: "rename",
-    lastResult,
-    defaultValue: { name: item.name },
-    constraint,
-    shouldValidate: "onBlur",
-    shouldRevalidate: "onInput",
-    onValidate: validate,
-  });
   return (
     <section aria-labelledby="catalogue-heading" className="panel space-y-4">
       <h2 id="catalogue-heading" className="text-lg font-semibold">
         Catalogue entry
       </h2>
-      <Form method="post" {...getFormProps(form)} className="space-y-3">
-        <input type="hidden" name="intent" value="rename" />
-        <FormMessages id={form.errorId} errors={form.errors} />
-        <TextField field={fields.name} label="Name" autoComplete="off" />
-        <button type="submit" className="button-quiet" disabled={busy}>
-          Save name
-        </button>
-      </Form>
+      <Suspense
+        fallback={
+          <p role="status" className="text-sm text-graphite-500">
+            Opening the form…
+          </p>
+        }
+      >
+        <RenameItemForm
+          name={item.name}
+          constraint={constraint}
+          lastResult={lastResult}
+        />
+      </Suspense>
       <Form method="post" className="border-t border-rule pt-4">
         <p className="mb-2 text-sm text-graphite-700">
           {item.active
