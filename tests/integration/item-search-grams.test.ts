@@ -146,7 +146,7 @@ describe("postings kept by triggers", () => {
 
     const receipt = await sendJson(
       "POST",
-      "/api/v1/movements",
+      "/api/v1/stock-movements",
       {
         type: "receipt",
         sku: recased,
