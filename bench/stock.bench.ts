@@ -7,6 +7,16 @@ import mysql from "mysql2/promise";
 import { poolOptionsFromUrl } from "~/db/connection-options";
 import type { Figure } from "./coil-estimates.bench";
 import { summarise } from "./statistics";
+import { containsPattern } from "~/lib/list-filters";
+import {
+  cappedTotal,
+  gramPostingsCap,
+  gramsToCount,
+  rarestGram,
+  searchCountLimit,
+  shortestGramSearch,
+  termGrams,
+} from "~/stock/search-grams";
 
 export async function serverTimes(
   urls: string[],
@@ -62,10 +72,17 @@ export const listQueries = (index: number) => {
 
 /**
  * The raw SQL the stock list and the items API wrap, as the app runs it
- * (app/stock/items.server.ts `listItems`): the number of matching items (kept counts, or a
- * search's own count), then the page
- * found on indexes first (ids only) and its rows read by a join: the same filters,
- * index hint, order and the same 13 columns. Used by the HTTP load bench too.
+ * (app/stock/items.server.ts `listItems`), statement for statement, with bare mysql2:
+ * - the total: without a search, the counts kept by triggers on items (item_counts,
+ *   decision 050-kept-item-counts); with one, its matches counted up to 1,000 past the
+ *   page's first row (decision 0XX-trigram-search);
+ * - a search of three characters or more first counts the postings of each of its grams
+ *   (up to 8, each up to 2,001, in one UNION ALL statement) and takes the rarest; its count,
+ *   and its page when sorted by SKU, walk that gram's postings (item_search_grams) in SKU
+ *   order, joined to items and checked with the same LIKE;
+ * - otherwise the page is found on indexes first (ids only) and its rows read by a join.
+ * The same filters, index hints, order, limits and 13 columns; the arithmetic of grams and
+ * caps is the app's own pure module. Used by the HTTP load bench too.
  */
 export async function rawItemList(
   connection: Pick<mysql.Connection, "query">,
@@ -73,6 +90,7 @@ export async function rawItemList(
 ) {
   const page = Number(params.get("page") ?? 1);
   const pageSize = Number(params.get("pageSize") ?? 50);
+  const offset = (page - 1) * pageSize;
   const where = ["active = 1"];
   const values: unknown[] = [];
   if (params.get("kind")) {
@@ -80,27 +98,74 @@ export async function rawItemList(
     values.push(params.get("kind"));
   }
   if (params.get("belowReorder")) where.push("below_reorder = 1");
-  if (params.get("search")) {
+  const term = params.get("search")?.trim().toLowerCase();
+  const pattern = term ? containsPattern(term) : undefined;
+  if (pattern) {
     where.push("search_text LIKE ?");
-    const search = params.get("search")!;
-    values.push(`%${search.toLowerCase()}%`);
+    values.push(pattern);
   }
-  const order =
-    params.get("sort") === "value" ? "stock_value DESC, id DESC" : "sku";
-  const hint = params.get("search") ? "FORCE INDEX (items_search_idx)" : "";
-  // The total as the app reads it: a search counts its matches; the other filters read the
-  // counts kept by triggers on items (item_counts, decision 050-kept-item-counts).
-  const [[{ total }]] = (await connection.query(
-    params.get("search")
-      ? `SELECT COUNT(*) AS total FROM items ${hint} WHERE ${where.join(" AND ")}`
-      : `SELECT COALESCE(SUM(items), 0) AS total FROM item_counts WHERE ${where.join(" AND ")}`,
-    values,
-  )) as unknown as [[{ total: number }]];
-  const [rows] = await connection.query(
-    `SELECT sku, name, kind, unit, size_or_grade, on_hand, reserved, held, on_order, reorder_point, reorder_quantity, average_cost, active FROM items JOIN (SELECT id FROM items ${hint} WHERE ${where.join(" AND ")} ORDER BY ${order} LIMIT ? OFFSET ?) page_ids USING (id) ORDER BY ${order}`,
-    [...values, pageSize, (page - 1) * pageSize],
-  );
-  return { items: rows, total };
+  const sortedBySku = params.get("sort") !== "value";
+  const order = sortedBySku ? "sku" : "stock_value DESC, id DESC";
+  const columns =
+    "sku, name, kind, unit, size_or_grade, on_hand, reserved, held, on_order, reorder_point, reorder_quantity, average_cost, active";
+  if (!term) {
+    const [[{ total }]] = (await connection.query(
+      `SELECT COALESCE(SUM(items), 0) AS total FROM item_counts WHERE ${where.join(" AND ")}`,
+      values,
+    )) as unknown as [[{ total: number }]];
+    return { items: await rawPage(), total: Number(total), totalExact: true };
+  }
+  let gram: string | undefined;
+  if (Array.from(term).length >= shortestGramSearch) {
+    const grams = gramsToCount(termGrams(term));
+    const [counts] = (await connection.query(
+      grams
+        .map(
+          (_, position) =>
+            `SELECT ${position} AS position, COUNT(*) AS postings FROM (SELECT 1 FROM item_search_grams WHERE gram = ? LIMIT ${gramPostingsCap + 1}) AS g${position}`,
+        )
+        .join(" UNION ALL "),
+      grams,
+    )) as unknown as [{ position: number; postings: number }[]];
+    const postings = new Map(
+      counts.map((row) => [Number(row.position), Number(row.postings)]),
+    );
+    const rarest = rarestGram(
+      grams.map((gram, position) => ({
+        gram,
+        postings: postings.get(position) ?? 0,
+      })),
+    );
+    if (rarest === null) return { items: [], total: 0, totalExact: true };
+    gram = rarest;
+  }
+  // The walk: one gram's postings in primary-key order (gram, sku), the list's filters on the item.
+  const walked = `item_search_grams g FORCE INDEX (PRIMARY) JOIN items ON items.id = g.item_id
+    WHERE g.gram = ? AND g.active = 1 AND ${where.slice(1).join(" AND ")}`;
+  const [[{ counted }]] = (await connection.query(
+    gram
+      ? `SELECT COUNT(*) AS counted FROM (SELECT 1 FROM ${walked} LIMIT ?) AS matches`
+      : `SELECT COUNT(*) AS counted FROM (SELECT 1 FROM items FORCE INDEX (items_search_idx) WHERE ${where.join(" AND ")} LIMIT ?) AS matches`,
+    [...(gram ? [gram] : []), ...values, searchCountLimit(offset)],
+  )) as unknown as [[{ counted: number }]];
+  const items =
+    gram && sortedBySku
+      ? (
+          await connection.query(
+            `SELECT ${columns.replace(/(^|, )/g, "$1items.")} FROM ${walked} ORDER BY g.sku LIMIT ? OFFSET ?`,
+            [gram, ...values, pageSize, offset],
+          )
+        )[0]
+      : await rawPage("FORCE INDEX (items_search_idx)");
+  return { items, ...cappedTotal(Number(counted), offset) };
+
+  async function rawPage(hint = "") {
+    const [rows] = await connection.query(
+      `SELECT ${columns} FROM items JOIN (SELECT id FROM items ${hint} WHERE ${where.join(" AND ")} ORDER BY ${order} LIMIT ? OFFSET ?) page_ids USING (id) ORDER BY ${order}`,
+      [...values, pageSize, offset],
+    );
+    return rows;
+  }
 }
 
 /**

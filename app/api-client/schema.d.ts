@@ -1210,8 +1210,10 @@ export interface components {
             items: components["schemas"]["ItemSummary"][];
             page: number;
             pageSize: number;
-            /** @description Rows matching, on every page. */
+            /** @description Items matching. Exact without a search; with one, counted only up to 1,000 past the page's first row: when `totalExact` is false, more than `total` items match. */
             total: number;
+            /** @description False when a search's count stopped at its reach (more than `total` items match, and the next page is worth asking for); always true without a search. */
+            totalExact: boolean;
         };
         /**
          * @example {

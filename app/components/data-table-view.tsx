@@ -47,6 +47,8 @@ export interface DataTableProps<Row> {
   rows: Row[];
   page?: number;
   pageCount?: number;
+  /** False when the list counted its rows only so far: there are at least `pageCount` pages. */
+  pageCountExact?: boolean;
   pageHref?: (page: number) => string;
   /** What an empty list says: a sentence, or an `EmptyState` with the next step. */
   emptyText?: React.ReactNode;
@@ -75,6 +77,7 @@ export function DataTableView<Row>({
   rows,
   page,
   pageCount,
+  pageCountExact = true,
   pageHref,
   emptyText = "Nothing here yet.",
   sortable = false,
@@ -231,7 +234,15 @@ export function DataTableView<Row>({
             className="flex items-center justify-between border-t border-rule px-3 py-2 text-sm"
           >
             <span className="text-graphite-500">
-              Page {page} of {pageCount}
+              {pageCountExact ? (
+                <>
+                  Page {page} of {pageCount}
+                </>
+              ) : (
+                <>
+                  Page {page} of at least {pageCount}
+                </>
+              )}
             </span>
             <span className="flex gap-2">
               {page > 1 ? (

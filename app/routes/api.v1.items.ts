@@ -15,7 +15,7 @@ import { answerDomainError } from "~/lib/api-errors.server";
 export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
   const query = readSearchParams(request, itemListQuerySchema);
-  const { total, items } = await listItems({
+  const { total, totalExact, items } = await listItems({
     search: query.search,
     kind: query.kind,
     belowReorder: query.belowReorder,
@@ -30,6 +30,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     page: query.page,
     pageSize: query.pageSize,
     total,
+    totalExact,
   });
 }
 

@@ -23,8 +23,10 @@ export async function loader({ request }: Route.LoaderArgs) {
   delete values.pageSize;
   const parsed = itemListQuerySchema.safeParse(values);
   if (!parsed.success) return csvFilterRefusal(parsed.error);
+  // Every match is counted: the export says how many matched beside its own row limit.
   const { total, items } = await listItems(
     itemListQueryOf(viewOf(parsed.data), stockCsvRowLimit),
+    { exactTotal: true },
   );
   return csvDownload(stockCsv(items), stockCsvFilename(new Date()), {
     "X-Total-Count": String(total),

@@ -36,17 +36,23 @@ export async function loader({ request }: Route.LoaderArgs) {
   const { view, ignored } = readStockListView(
     new URL(request.url).searchParams,
   );
-  const [{ total, items }, currency] = await Promise.all([
+  const [{ total, totalExact, items }, currency] = await Promise.all([
     listItems(itemListQueryOf(view)),
     companyCurrency(),
   ]);
-  const pageCount = Math.max(1, Math.ceil(total / stockListPageSize));
-  // A page past the end (the list shrank since the link was made) shows the last one.
-  if (view.page > pageCount)
+  // A search counted only so far (more than `total` match) has at least one more page.
+  const pageCount = Math.max(
+    1,
+    Math.ceil((totalExact ? total : total + 1) / stockListPageSize),
+  );
+  // A page past the end (the list shrank since the link was made) shows the last one. A
+  // count that stopped short is never past the end: it stopped beyond this page.
+  if (totalExact && view.page > pageCount)
     throw redirect(`/stock${stockListSearch(view, { page: pageCount })}`);
   return {
     items,
     total,
+    totalExact,
     pageCount,
     view,
     ignored,
@@ -178,8 +184,16 @@ function stockColumns(view: StockListView, currency: string) {
 }
 
 export default function Stock({ loaderData }: Route.ComponentProps) {
-  const { items, total, pageCount, view, ignored, currency, canCreate } =
-    loaderData;
+  const {
+    items,
+    total,
+    totalExact,
+    pageCount,
+    view,
+    ignored,
+    currency,
+    canCreate,
+  } = loaderData;
   const columns = useMemo(() => stockColumns(view, currency), [view, currency]);
   const first = (view.page - 1) * stockListPageSize + 1;
   return (
@@ -215,7 +229,7 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
       <p role="status" className="text-sm text-graphite-700">
         {total === 0
           ? "No item matches."
-          : `${formatQuantity(total, total === 1 ? "item" : "items")} · showing ${formatQuantity(first, "")}–${formatQuantity(first + items.length - 1, "")}`}
+          : `${totalExact ? "" : "More than "}${formatQuantity(total, total === 1 ? "item" : "items")} · showing ${formatQuantity(first, "")}–${formatQuantity(first + items.length - 1, "")}`}
         {total > stockCsvRowLimit
           ? ` · the CSV export holds the first ${formatQuantity(stockCsvRowLimit, "")} rows of this view`
           : ""}
@@ -227,6 +241,7 @@ export default function Stock({ loaderData }: Route.ComponentProps) {
         rows={items}
         page={view.page}
         pageCount={pageCount}
+        pageCountExact={totalExact}
         pageHref={(page) => `/stock${stockListSearch(view, { page })}`}
         emptyText={
           <ListEmptyText

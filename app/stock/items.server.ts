@@ -12,9 +12,21 @@ import {
   type SQL,
 } from "drizzle-orm";
 import { keptItemCount } from "./item-counts.server";
+import { gramToWalk } from "./item-search-grams.server";
+import {
+  cappedTotal,
+  searchCountLimit,
+  shortestGramSearch,
+} from "./search-grams";
 import { compareOldestFirst } from "./stock-allocation";
 import { db } from "~/db/client.server";
-import { items, locations, lots, stockBalances } from "~/db/schema";
+import {
+  items,
+  itemSearchGrams,
+  locations,
+  lots,
+  stockBalances,
+} from "~/db/schema";
 import type { ItemKind } from "~/db/tables/stock-enums";
 import {
   parseQuantity,
@@ -90,40 +102,96 @@ const sortColumns: Record<ItemSortKey, SQL | typeof items.sku> = {
   value: sql`${items.stockValue}`,
 };
 
+/** How a list's total is read: exact, or (a search) counted up to a reach past the page. */
+export interface ListItemsOptions {
+  /** Count every match of a search (the CSV export, which says how many matched). */
+  exactTotal?: boolean;
+}
+
 /**
  * One page of items and the number matching, for the stock list, its CSV export and the API.
  * The page is found on indexes first (ids only), then its rows are read: a deep page does
  * not drag thousands of skipped rows through the server (a "deferred join").
+ *
+ * A search of three characters or more walks the postings of its rarest gram
+ * (item_search_grams, decision 0XX-trigram-search) in SKU order and checks the same LIKE on
+ * each item, so it finds exactly the rows the LIKE finds; a shorter one, or a list sorted
+ * by another column, reads the search index as before. A search counts its matches only up
+ * to `searchCountReach` (search-grams.ts) past the page's first row: `totalExact` is false when the
+ * count stopped there (more than `total` match), and always true without a search.
  */
-export async function listItems(query: ItemListQuery) {
+export async function listItems(
+  query: ItemListQuery,
+  options: ListItemsOptions = {},
+) {
   const search = query.search?.trim();
+  const term = search ? search.toLowerCase() : undefined;
+  const gram =
+    term && Array.from(term).length >= shortestGramSearch
+      ? await gramToWalk(term)
+      : undefined;
+  // A gram of the term that no item has: nothing can match.
+  if (gram === null) return { total: 0, totalExact: true, items: [] };
   const statements = listStatements({
     includeArchived: !!query.includeArchived,
     kind: !!query.kind,
     belowReorder: !!query.belowReorder,
-    search: !!search,
+    search: !!term,
     sort: query.sort ?? "sku",
     descending: !!query.descending,
   });
+  const offset = (query.page - 1) * query.pageSize;
   const values = {
     kind: query.kind,
-    pattern: search ? containsPattern(search.toLowerCase()) : undefined,
+    pattern: term ? containsPattern(term) : undefined,
+    gram,
+    countLimit: searchCountLimit(offset),
   };
-  // Without a search the total is read from the kept counts (a few rows, whatever the
-  // catalogue's size; decision 050); a search counts its matches on the search index.
-  const total = statements.searchTotal
-    ? ((await statements.searchTotal.execute(values))[0]?.total ?? 0)
-    : await keptItemCount(query);
-  const rows = await statements.page.execute({
+  const { total, totalExact } = await listTotal(
+    statements,
+    values,
+    offset,
+    query,
+    options,
+  );
+  const page =
+    gram && statements.gramPage ? statements.gramPage : statements.page;
+  const rows = await page.execute({
     ...values,
     limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
+    offset,
   });
-  return { total, items: rows.map(itemSummary) };
+  return { total, totalExact, items: rows.map(itemSummary) };
 }
 
 /**
- * The two statements of each shape of list query, built once (every stock list and items
+ * Without a search the total is read from the kept counts (a few rows, whatever the
+ * catalogue's size; decision 050). A search counts its matches, on its gram's postings
+ * when it has one, else on the search index; up to a reach past the page unless the caller
+ * asks for every match.
+ */
+async function listTotal(
+  statements: ReturnType<typeof buildListStatements>,
+  values: { gram: string | undefined } & Record<string, unknown>,
+  offset: number,
+  filters: ItemListQuery,
+  options: ListItemsOptions,
+): Promise<{ total: number; totalExact: boolean }> {
+  if (!statements.search)
+    return { total: await keptItemCount(filters), totalExact: true };
+  if (options.exactTotal) {
+    const [row] = await statements.search.exactCount.execute(values);
+    return { total: Number(row?.total ?? 0), totalExact: true };
+  }
+  const capped = values.gram
+    ? statements.search.gramCount
+    : statements.search.cappedCount;
+  const [row] = await capped.execute(values);
+  return cappedTotal(Number(row?.total ?? 0), offset);
+}
+
+/**
+ * The statements of each shape of list query, built once (every stock list and items
  * API request would otherwise have Drizzle build the same SQL text again). At most
  * 2⁴ × 6 sorts × 2 directions = 192 shapes.
  */
@@ -155,9 +223,6 @@ function buildListStatements(shape: ItemListShape) {
   // A search reads the small covering search index from end to end (a substring LIKE uses no
   // index range); left to itself the optimizer walks the SKU order and reads every row.
   const hint = shape.search ? { forceIndex: "items_search_idx" } : undefined;
-  const searchTotal = shape.search
-    ? db.select({ total: count() }).from(items, hint).where(where).prepare()
-    : undefined;
   const pageIds = db
     .select({ id: items.id })
     .from(items, hint)
@@ -172,7 +237,64 @@ function buildListStatements(shape: ItemListShape) {
     .innerJoin(pageIds, eq(items.id, pageIds.id))
     .orderBy(...order)
     .prepare();
-  return { searchTotal, page };
+  const search = shape.search ? buildSearchStatements(shape, where) : undefined;
+  return {
+    page,
+    search,
+    gramPage: shape.sort === "sku" ? search?.gramPage : undefined,
+  };
+}
+
+/**
+ * A search's statements: its count on the search index (every match, or up to a limit), and
+ * its count and SKU-ordered page on one gram's postings. The walk reads the gram's postings
+ * in primary-key order (gram, sku), so the page needs no sort and stops when full; each
+ * posting's item is read by its id and checked with the list's own filters, the LIKE among
+ * them, so the rows are exactly those of the search index's statements.
+ */
+function buildSearchStatements(shape: ItemListShape, where: SQL | undefined) {
+  const hint = { forceIndex: "items_search_idx" };
+  const exactCount = db
+    .select({ total: count() })
+    .from(items, hint)
+    .where(where)
+    .prepare();
+  const cappedMatches = db
+    .select({ one: sql`1` })
+    .from(items, hint)
+    .where(where)
+    .limit(sql.placeholder("countLimit"))
+    .as("matches");
+  const cappedCount = db
+    .select({ total: count() })
+    .from(cappedMatches)
+    .prepare();
+  const walked = and(
+    eq(itemSearchGrams.gram, sql.placeholder("gram")),
+    // The posting carries active, so archived items are skipped before their row is read.
+    shape.includeArchived ? undefined : eq(itemSearchGrams.active, true),
+    itemFilters({ ...shape, includeArchived: true }),
+  );
+  const gramMatches = db
+    .select({ one: sql`1` })
+    .from(itemSearchGrams, { forceIndex: "PRIMARY" })
+    .innerJoin(items, eq(items.id, itemSearchGrams.itemId))
+    .where(walked)
+    .limit(sql.placeholder("countLimit"))
+    .as("matches");
+  const gramCount = db.select({ total: count() }).from(gramMatches).prepare();
+  const gramPage = db
+    .select(summaryColumns)
+    .from(itemSearchGrams, { forceIndex: "PRIMARY" })
+    .innerJoin(items, eq(items.id, itemSearchGrams.itemId))
+    .where(walked)
+    .orderBy(
+      shape.descending ? desc(itemSearchGrams.sku) : asc(itemSearchGrams.sku),
+    )
+    .limit(sql.placeholder("limit"))
+    .offset(sql.placeholder("offset"))
+    .prepare();
+  return { exactCount, cappedCount, gramCount, gramPage };
 }
 
 function itemSummary(row: {

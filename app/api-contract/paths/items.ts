@@ -82,6 +82,23 @@ export const itemSchema = itemSummarySchema
       "An item with its balances by lot and location, oldest lot first.",
   });
 
+/**
+ * A page of items: a search counts its matches only up to 1,000 past the page's first row
+ * (decision 0XX-trigram-search), so its total may be a lower bound.
+ */
+const itemPageSchema = pageOf("ItemPage", "items", itemSummarySchema)
+  .extend({
+    total: z.number().int().min(0).meta({
+      description:
+        "Items matching. Exact without a search; with one, counted only up to 1,000 past the page's first row: when `totalExact` is false, more than `total` items match.",
+    }),
+    totalExact: z.boolean().meta({
+      description:
+        "False when a search's count stopped at its reach (more than `total` items match, and the next page is worth asking for); always true without a search.",
+    }),
+  })
+  .meta({ id: "ItemPage", description: "A page of items." });
+
 /** The SKU in an item's address. */
 export const skuPath = z.object({
   sku: z
@@ -99,10 +116,7 @@ export const itemPaths: ZodOpenApiPathsObject = {
       caller: "signedIn",
       query: itemListQuerySchema,
       answers: {
-        200: jsonAnswer(
-          "A page of items.",
-          pageOf("ItemPage", "items", itemSummarySchema),
-        ),
+        200: jsonAnswer("A page of items.", itemPageSchema),
       },
     }),
     post: apiOperation({

@@ -146,6 +146,30 @@ export const itemCounts = mysqlTable(
   ],
 );
 
+/**
+ * The stock list's search postings: one row per distinct three-character piece ("gram") of
+ * an item's search_text, so a substring search walks the postings of one of its term's
+ * grams in SKU order instead of reading the whole search index. Kept by triggers on items
+ * (migration 0022, decision 0XX-trigram-search) in the same transaction as the item's own
+ * change; `gram` has a binary collation (edited by hand in the migration, as search_text).
+ */
+export const itemSearchGrams = mysqlTable(
+  "item_search_grams",
+  {
+    gram: varchar("gram", { length: 3 }).notNull(),
+    sku: varchar("sku", { length: 40 }).notNull(),
+    itemId: int("item_id").notNull(),
+    active: boolean("active").notNull(),
+  },
+  (table) => [
+    primaryKey({
+      name: "item_search_grams_pk",
+      columns: [table.gram, table.sku],
+    }),
+    index("item_search_grams_item_idx").on(table.itemId),
+  ],
+);
+
 export const wireItems = mysqlTable("wire_items", {
   itemId: int("item_id")
     .primaryKey()
