@@ -75,7 +75,7 @@ export const listQueries = (index: number) => {
  * (app/stock/items.server.ts `listItems`), statement for statement, with bare mysql2:
  * - the total: without a search, the counts kept by triggers on items (item_counts,
  *   decision 050-kept-item-counts); with one, its matches counted up to 1,000 past the
- *   page's first row (decision 0XX-trigram-search);
+ *   page's first row (decision 057-trigram-search);
  * - a search of three characters or more first counts the postings of each of its grams
  *   (up to 8, each up to 2,001, in one UNION ALL statement) and takes the rarest; its count,
  *   and its page when sorted by SKU, walk that gram's postings (item_search_grams) in SKU

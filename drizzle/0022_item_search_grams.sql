@@ -10,7 +10,7 @@ CREATE TABLE `item_search_grams` (
 --> statement-breakpoint
 CREATE INDEX `item_search_grams_item_idx` ON `item_search_grams` (`item_id`);
 --> statement-breakpoint
--- item_search_grams is kept by these triggers (decision 0XX-trigram-search): in the same
+-- item_search_grams is kept by these triggers (decision 057-trigram-search): in the same
 -- transaction as the item's own change. An item has one posting per distinct three-character
 -- piece of its search_text (characters, not bytes: SUBSTRING counts characters). A change of
 -- search_text or sku writes the item's postings anew; a change of active only marks them;

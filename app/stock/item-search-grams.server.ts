@@ -1,5 +1,5 @@
 /**
- * Which gram a stock list search walks (decision 0XX-trigram-search): the postings of each
+ * Which gram a stock list search walks (decision 057-trigram-search): the postings of each
  * of the term's grams counted up to a cap, in one statement, and the rarest picked. The
  * postings (item_search_grams) are kept by triggers on items (migration 0022).
  */

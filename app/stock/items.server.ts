@@ -114,7 +114,7 @@ export interface ListItemsOptions {
  * not drag thousands of skipped rows through the server (a "deferred join").
  *
  * A search of three characters or more walks the postings of its rarest gram
- * (item_search_grams, decision 0XX-trigram-search) in SKU order and checks the same LIKE on
+ * (item_search_grams, decision 057-trigram-search) in SKU order and checks the same LIKE on
  * each item, so it finds exactly the rows the LIKE finds; a shorter one, or a list sorted
  * by another column, reads the search index as before. A search counts its matches only up
  * to `searchCountReach` (search-grams.ts) past the page's first row: `totalExact` is false when the

@@ -1,5 +1,5 @@
 /**
- * The arithmetic of the stock list's trigram search (decision 0XX-trigram-search): the
+ * The arithmetic of the stock list's trigram search (decision 057-trigram-search): the
  * three-character pieces ("grams") of a search term, which of them to count, which one to
  * walk, and what a capped count of matches says. Pure: no framework, no I/O.
  *

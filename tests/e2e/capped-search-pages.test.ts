@@ -1,6 +1,6 @@
 /**
  * A stock list search with more than 1,000 matches counts only so far (decision
- * 0XX-trigram-search): the page says "More than 1,000 items", its pager "Page 1 of at least
+ * 057-trigram-search): the page says "More than 1,000 items", its pager "Page 1 of at least
  * 21", and Next, reached by keyboard alone, goes on to the next full page. Clean for axe-core.
  */
 import type { Browser, Page } from "playwright-core";

@@ -1,5 +1,5 @@
 /**
- * The stock list's trigram search (decision 0XX-trigram-search). The postings in
+ * The stock list's trigram search (decision 057-trigram-search). The postings in
  * item_search_grams are kept by triggers on items: after every kind of change — created
  * through the API, renamed (name through the API; SKU and size in SQL), archived and
  * restored, stock moved, deleted in SQL — they equal the postings made afresh from items.

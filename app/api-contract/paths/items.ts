@@ -84,7 +84,7 @@ export const itemSchema = itemSummarySchema
 
 /**
  * A page of items: a search counts its matches only up to 1,000 past the page's first row
- * (decision 0XX-trigram-search), so its total may be a lower bound.
+ * (decision 057-trigram-search), so its total may be a lower bound.
  */
 const itemPageSchema = pageOf("ItemPage", "items", itemSummarySchema)
   .extend({

@@ -150,7 +150,7 @@ export const itemCounts = mysqlTable(
  * The stock list's search postings: one row per distinct three-character piece ("gram") of
  * an item's search_text, so a substring search walks the postings of one of its term's
  * grams in SKU order instead of reading the whole search index. Kept by triggers on items
- * (migration 0022, decision 0XX-trigram-search) in the same transaction as the item's own
+ * (migration 0022, decision 057-trigram-search) in the same transaction as the item's own
  * change; `gram` has a binary collation (edited by hand in the migration, as search_text).
  */
 export const itemSearchGrams = mysqlTable(
