@@ -2,7 +2,13 @@ import path from "node:path";
 import { reactRouter } from "@react-router/dev/vite";
 import tailwindcss from "@tailwindcss/vite";
 import { createLogger, defineConfig } from "vite";
+import routes from "./app/routes.js";
 import reactRouterConfig from "./react-router.config.js";
+import {
+  allowEntryExtension,
+  appModuleChunkName,
+  layoutRoutes,
+} from "./server/app-module-chunks.js";
 import { precompressClientBuild } from "./server/precompressed-assets.js";
 import { sideEffectFreeAppModules } from "./server/side-effect-free-app-modules.js";
 
@@ -28,7 +34,21 @@ export default defineConfig(({ isSsrBuild }) => ({
   customLogger: viteLogger(),
   // The server build starts from our Express app, which wraps React Router.
   build: {
-    rollupOptions: isSsrBuild ? { input: "./server/app.ts" } : undefined,
+    rollupOptions: isSsrBuild
+      ? { input: "./server/app.ts" }
+      : {
+          output: {
+            // The modules only root or a layout loads, in one chunk beside it (server/app-module-chunks.ts).
+            codeSplitting: {
+              groups: [
+                {
+                  name: appModuleChunkName("app", layoutRoutes(routes)),
+                  includeDependenciesRecursively: false,
+                },
+              ],
+            },
+          },
+        },
   },
   resolve: {
     tsconfigPaths: true,
@@ -58,6 +78,7 @@ export default defineConfig(({ isSsrBuild }) => ({
   },
   plugins: [
     tailwindcss(),
+    isSsrBuild ? [] : allowEntryExtension(),
     reactRouter(),
     // The browser's pages leave out app modules they use nothing of (server/side-effect-free-app-modules.ts).
     isSsrBuild ? [] : sideEffectFreeAppModules("app"),

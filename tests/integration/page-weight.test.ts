@@ -43,69 +43,12 @@ describe("first-load JavaScript of every page", () => {
     expect(deferred).toEqual([]);
   });
 
-  it(`keeps the pages that are within ${firstLoadBudgetKb} KB gzipped within it`, () => {
-    // Issue 23 asks every page to be within the budget; the pages listed here are (the
-    // rest are still over, and `npm run bench` reports each one as MISSED). A page that
-    // comes within the budget joins this list, so it can never drift back over.
+  it(`keeps every page within ${firstLoadBudgetKb} KB gzipped`, () => {
+    // Issue 23's budget for every page's first load; a new page is held to it too.
     const over = pages
-      .filter((page) => pagesWithinBudget.includes(page.path))
       .filter((page) => kilobytes(page.gzipBytes) >= firstLoadBudgetKb)
       .map((page) => `${page.path}: ${kilobytes(page.gzipBytes)} KB`);
     expect(over).toEqual([]);
-    const measured = new Set(pages.map((page) => page.path));
-    expect(pagesWithinBudget.filter((path) => !measured.has(path))).toEqual([]);
+    expect(pages.length).toBeGreaterThanOrEqual(50);
   });
 });
-
-/** The pages within the first-load budget on 2026-12-04 (49 of 50). */
-const pagesWithinBudget = [
-  "/",
-  "/insight",
-  "/stock",
-  "/stock/journal",
-  "/stock/lots/:lotId",
-  "/stock/locations/:code/count-sheet",
-  "/stock/record",
-  "/stock/receive",
-  "/stock/items/new",
-  "/tools/coil-estimator",
-  "/tools/magnet-estimator",
-  "/alerts",
-  "/purchase-orders",
-  "/purchase-orders/late",
-  "/purchase-orders/:orderId/print",
-  "/suppliers/imports",
-  "/best-prices",
-  "/admin/outbox",
-  "/sign-in",
-  "/set-password",
-  "/forgot-password",
-  "/stocktakes/:stocktakeId",
-  "/stocktakes/:stocktakeId/print",
-  "/designs/:designId/revisions/:revision/print",
-  "/labels/lots",
-  "/labels/lots/:lotId",
-  "/labels/locations",
-  "/labels/locations/:code",
-  "/build-orders/:orderId/pick-list",
-  "/scan/:code",
-  "/api",
-  "/*",
-  "/purchase-orders/:orderId",
-  "/purchase-orders/new",
-  "/build-orders",
-  "/build-orders/:orderId",
-  "/suppliers",
-  "/suppliers/:supplierId",
-  "/stocktakes",
-  "/stocktakes/:stocktakeId/count",
-  "/prices",
-  "/admin/people",
-  "/admin/people/:userId",
-  "/account",
-  "/designs",
-  "/buying-plan",
-  "/suppliers/import",
-  "/reference",
-  "/stock/items/:sku",
-];
