@@ -22,6 +22,7 @@ import {
   benchPriceImportProgress,
 } from "./price-import.bench";
 import { benchPageWeight } from "./page-weight.bench";
+import { scaleBufferPoolBytes, withBufferPool } from "./buffer-pool";
 import { benchOneSize, largeBenchDatabase, sizeRatios } from "./scale.bench";
 import {
   largeBenchSize,
@@ -109,13 +110,6 @@ try {
       );
     if (runs("scale")) {
       console.log("[bench] the same requests at 1 M and at 10 M movements…");
-      const normal = await benchOneSize({
-        size: normalBenchSize,
-        baseUrl: environment.baseUrl,
-        databaseUrl: environment.databaseUrl,
-        storekeeperCookie,
-        stock,
-      });
       const started = performance.now();
       const large = await largeBenchDatabase({
         size: largeBenchSize,
@@ -131,34 +125,52 @@ try {
         `The 10 M store (${largeBenchSize.items.toLocaleString("en")} items) was ${how}; it is kept for the next run`,
         "(drop the database <bench database>_large to make it again).",
       );
-      const largeServer = await startAppServer({
-        port: Number(process.env.TEST_PORT ?? 3100) + 8,
-        databaseUrl: large.databaseUrl,
-        smtpUrl: environment.smtpUrl,
-      });
-      appOrigins.push(largeServer.baseUrl);
-      try {
-        const largeFigures = await benchOneSize({
-          size: largeBenchSize,
-          baseUrl: largeServer.baseUrl,
-          databaseUrl: large.databaseUrl,
-          storekeeperCookie: await signInAs(
-            "storekeeper@turnledger.test",
-            largeServer.baseUrl,
-          ),
-          stock: large.stock,
-        });
-        figures.push(
-          ...normal,
-          ...largeFigures,
-          ...sizeRatios(normal, largeFigures, {
-            normal: normalBenchSize,
-            large: largeBenchSize,
-          }),
-        );
-      } finally {
-        await largeServer.stop();
-      }
+      // Both sizes with the same buffer pool, one that holds the large store (bench/buffer-pool.ts).
+      const { poolBytes } = await withBufferPool(
+        scaleBufferPoolBytes(),
+        async () => {
+          const normal = await benchOneSize({
+            size: normalBenchSize,
+            baseUrl: environment.baseUrl,
+            databaseUrl: environment.databaseUrl,
+            storekeeperCookie,
+            stock,
+          });
+          const largeServer = await startAppServer({
+            port: Number(process.env.TEST_PORT ?? 3100) + 8,
+            databaseUrl: large.databaseUrl,
+            smtpUrl: environment.smtpUrl,
+          });
+          appOrigins.push(largeServer.baseUrl);
+          try {
+            const largeFigures = await benchOneSize({
+              size: largeBenchSize,
+              baseUrl: largeServer.baseUrl,
+              databaseUrl: large.databaseUrl,
+              storekeeperCookie: await signInAs(
+                "storekeeper@turnledger.test",
+                largeServer.baseUrl,
+              ),
+              stock: large.stock,
+            });
+            figures.push(
+              ...normal,
+              ...largeFigures,
+              ...sizeRatios(normal, largeFigures, {
+                normal: normalBenchSize,
+                large: largeBenchSize,
+              }),
+            );
+          } finally {
+            await largeServer.stop();
+          }
+        },
+      );
+      notes.push(
+        poolBytes === null
+          ? "Both sizes ran on TEST_DATABASE_URL's server with its own buffer pool."
+          : `Both sizes ran with a ${Math.round(poolBytes / 1024 / 1024)} MB InnoDB buffer pool, raised for the scale group and put back after it (bench/buffer-pool.ts).`,
+      );
     }
   }
   const buyer = await fetch(`${environment.baseUrl}/api/v1/sessions`, {
