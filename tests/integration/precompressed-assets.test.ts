@@ -32,12 +32,18 @@ function request(pathname: string, acceptEncoding?: string, cookie?: string) {
   });
 }
 
-/** The script and style addresses the sign-in page loads, as a browser finds them. */
+/**
+ * The script and style addresses the sign-in page loads, as a browser finds them. A
+ * fragment is not part of the address: React Router writes a style sheet that a lazily
+ * loaded chunk also uses as "….css#", and the browser asks for "….css".
+ */
 async function assetsOfSignInPage(): Promise<string[]> {
   const page = await request("/sign-in", "identity");
   expect(page.status).toBe(200);
   const addresses = [
-    ...page.body.matchAll(/(?:href|src)="(\/assets\/[^"]+\.(?:js|css))"/g),
+    ...page.body.matchAll(
+      /(?:href|src)="(\/assets\/[^"#]+\.(?:js|css))(?:#[^"]*)?"/g,
+    ),
   ].map((match) => match[1] ?? "");
   return [...new Set(addresses)];
 }
