@@ -17,8 +17,11 @@ import {
   type DesignActionAnswer,
 } from "~/components/design/action-replies.server";
 import { BillOfMaterials } from "~/components/design/bill-of-materials";
-import type { DesignCostPanel as CostPanel } from "~/components/design/cost-panel";
 import { DraftFields } from "~/components/design/draft-fields";
+import {
+  DesignCostPanel,
+  WireSubstitutesPanel,
+} from "~/components/design/later-panels";
 import { DesignFieldsSummary } from "~/components/design/fields-summary";
 import { PostedAnswer } from "~/components/design/posted-answer";
 import { RevisionHeader } from "~/components/design/revision-header";
@@ -42,8 +45,6 @@ import {
 } from "~/designs/designs.server";
 import { userCan } from "~/lib/capabilities";
 import { redirectWithFlash } from "~/lib/flash.server";
-import type { WireSubstitutesPanel as SubstitutesPanel } from "~/components/design/wire-substitutes-panel";
-import { lazyPanel } from "~/components/lazy-panel";
 import {
   readSubstituteQuery,
   substituteFormSchema,
@@ -52,24 +53,6 @@ import {
   applyWireSubstitute,
   loadSubstitutePanels,
 } from "~/designs/wire-substitutes.server";
-
-/** The costs at the foot of the page: their code loads after the page (lazyPanel). */
-const DesignCostPanel = lazyPanel<Parameters<typeof CostPanel>[0]>(
-  () =>
-    import("~/components/design/cost-panel").then(
-      (module) => module.DesignCostPanel,
-    ),
-  null,
-);
-
-/** Proposals from stock, below the fold: their code loads after the page (lazyPanel). */
-const WireSubstitutesPanel = lazyPanel<Parameters<typeof SubstitutesPanel>[0]>(
-  () =>
-    import("~/components/design/wire-substitutes-panel").then(
-      (module) => module.WireSubstitutesPanel,
-    ),
-  null,
-);
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
